@@ -1,0 +1,175 @@
+package beam
+
+import (
+	"errors"
+	"math"
+	"testing"
+)
+
+// eiTest is E*I of a 2x10 Douglas Fir-Larch No.2 joist: E = 1,600,000 psi
+// times I = 98.93 in^4 (NDS 2018 Supplement Table 4A and Table 1B,
+// from memory: verify). Any positive EI would do: the checks below scale
+// with it.
+const eiTest = 1.6e6 * 98.93
+
+// near reports whether got is within tol (relative to max(|want|, scale))
+// of want, and fails t otherwise, naming what and its source.
+func near(t *testing.T, what string, got, want, tol, scale float64, source string) {
+	t.Helper()
+	ref := math.Max(math.Abs(want), scale)
+	if ref == 0 {
+		ref = 1
+	}
+	if math.Abs(got-want) > tol*ref || math.IsNaN(got) {
+		t.Errorf("%s = %.10g, want %.10g (tol %g) [%s]", what, got, want, tol, source)
+	}
+}
+
+func mustSolve(t *testing.T, b Beam, w ...float64) *Response {
+	t.Helper()
+	r, err := b.Solve(w)
+	if err != nil {
+		t.Fatalf("Solve(%+v, %v): %v", b, w, err)
+	}
+	return r
+}
+
+// Closed-form tolerance: the analysis is exact up to rounding, so 1e-9
+// relative is ample and still catches any wrong coefficient.
+const tolExact = 1e-9
+
+func TestSimpleSpanUniform(t *testing.T) {
+	const src = "AISC Steel Construction Manual, Beam Diagrams and Formulas, simple beam - uniformly distributed load (Case 1, from memory: verify); any mechanics of materials text, closed form"
+	L, w := 192.0, 8.5 // 16 ft span, 102 plf
+	b := Beam{LengthIn: L, SupportsAtIn: []float64{0, L}, EILbIn2: eiTest}
+	r := mustSolve(t, b, w)
+	R := r.Reactions()
+	near(t, "R left", R[0], w*L/2, tolExact, 0, src)
+	near(t, "R right", R[1], w*L/2, tolExact, 0, src)
+	near(t, "M mid", r.Moment(L/2), w*L*L/8, tolExact, 0, src)
+	near(t, "defl mid", r.Deflection(L/2), 5*w*L*L*L*L/(384*eiTest), tolExact, 0, src)
+	mp, xp, mn, xn := r.MomentExtremes(0, L)
+	near(t, "M max", mp, w*L*L/8, tolExact, 0, src)
+	near(t, "x of M max", xp, L/2, tolExact, 0, src)
+	if mn != 0 || xn != 0 {
+		t.Errorf("MomentExtremes negative = %g at %g, want 0 at from=0 (simple span has no hogging) [%s]", mn, xn, src)
+	}
+	d, xd := r.MaxDeflection(0, L)
+	near(t, "max defl", d, 5*w*L*L*L*L/(384*eiTest), tolExact, 0, src)
+	near(t, "x of max defl", xd, L/2, 1e-6, 0, src)
+	vl, vr := r.ShearEachSide(0)
+	near(t, "V right of left support", vr, w*L/2, tolExact, 0, src)
+	if vl != 0 {
+		t.Errorf("V left of the beam end = %g, want 0", vl)
+	}
+	vl, vr = r.ShearEachSide(L / 4)
+	near(t, "V at L/4 (left)", vl, w*L/4, tolExact, 0, src)
+	near(t, "V at L/4 (right)", vr, w*L/4, tolExact, 0, src)
+	if sc := r.MomentSignChanges(); sc != nil {
+		t.Errorf("MomentSignChanges = %v, want none for a simple span [%s]", sc, src)
+	}
+	// End slope wL^3/24EI, same source.
+	near(t, "slope at 0", r.Slope(0), w*L*L*L/(24*eiTest), tolExact, 0, src)
+}
+
+func TestTwoEqualSpans(t *testing.T) {
+	const src = "AISC Steel Construction Manual, Beam Diagrams and Formulas, continuous beam - two equal spans - uniformly distributed load (from memory: verify); three-moment equation by hand: 4 M L = -2 wL^3/4"
+	L, w := 144.0, 6.0
+	b := Beam{LengthIn: 2 * L, SupportsAtIn: []float64{0, L, 2 * L}, EILbIn2: eiTest}
+	r := mustSolve(t, b, w, w)
+	R := r.Reactions()
+	near(t, "R end", R[0], 0.375*w*L, tolExact, 0, src)
+	near(t, "R interior", R[1], 1.25*w*L, tolExact, 0, src)
+	near(t, "R other end", R[2], 0.375*w*L, tolExact, 0, src)
+	near(t, "M interior support", r.Moment(L), -w*L*L/8, tolExact, 0, src)
+	mp, xp, mn, xn := r.MomentExtremes(0, 2*L)
+	near(t, "M max positive (9wL^2/128)", mp, 9*w*L*L/128, tolExact, 0, src)
+	near(t, "x of M max positive (3L/8)", xp, 3*L/8, tolExact, 0, src)
+	near(t, "M max negative", mn, -w*L*L/8, tolExact, 0, src)
+	near(t, "x of M max negative", xn, L, tolExact, 0, src)
+	vl, vr := r.ShearEachSide(L)
+	near(t, "V left of interior support (-5wL/8)", vl, -0.625*w*L, tolExact, 0, src)
+	near(t, "V right of interior support (+5wL/8)", vr, 0.625*w*L, tolExact, 0, src)
+	// Zero moment at 0.75 L from each end support: M = 3wLx/8 - wx^2/2 = 0.
+	sc := r.MomentSignChanges()
+	if len(sc) != 2 {
+		t.Fatalf("MomentSignChanges = %v, want 2 points [%s]", sc, src)
+	}
+	near(t, "inflection 1", sc[0], 0.75*L, tolExact, 0, src)
+	near(t, "inflection 2", sc[1], 2*L-0.75*L, tolExact, 0, src)
+	// Max deflection of each span: the elastic curve of a span is
+	// y = w x (L^3 - 3 L x^2 + 2 x^3) / (48 EI) (same diagram, from memory:
+	// verify); y' = 0 gives 8u^3 - 9u^2 + 1 = 0, u = x/L = (1+sqrt(33))/16
+	// = 0.4215 L, and the tables round y to wL^4/(185 EI).
+	u := (1 + math.Sqrt(33)) / 16
+	d, xd := r.MaxDeflection(0, L)
+	near(t, "max defl", d, w*L*L*L*L/(48*eiTest)*(u-3*u*u*u+2*u*u*u*u), tolExact, 0, src)
+	near(t, "max defl (wL^4/185EI, table rounding)", d, w*L*L*L*L/(185*eiTest), 0.005, 0, src)
+	near(t, "x of max defl", xd, u*L, 1e-8, 0, src)
+	near(t, "x of max defl (0.4215 L)", xd/L, 0.4215, 1e-3, 0, src)
+}
+
+func TestThreeEqualSpans(t *testing.T) {
+	const src = "continuous beam - three equal spans - uniformly distributed load, coefficients 0.4/1.1/-0.1/0.08/0.025 (from memory: verify); three-moment equation by hand: 4M1 + M2 = -wL^2/2, symmetric -> M = -wL^2/10"
+	L, w := 120.0, 3.5
+	b := Beam{LengthIn: 3 * L, SupportsAtIn: []float64{0, L, 2 * L, 3 * L}, EILbIn2: eiTest}
+	r := mustSolve(t, b, w, w, w)
+	R := r.Reactions()
+	want := []float64{0.4, 1.1, 1.1, 0.4}
+	for i := range R {
+		near(t, "reaction", R[i], want[i]*w*L, tolExact, 0, src)
+	}
+	near(t, "M support 1", r.Moment(L), -0.1*w*L*L, tolExact, 0, src)
+	near(t, "M support 2", r.Moment(2*L), -0.1*w*L*L, tolExact, 0, src)
+	mp, _, _, _ := r.MomentExtremes(0, L)
+	near(t, "M+ end span", mp, 0.08*w*L*L, tolExact, 0, src)
+	mp, xp, _, _ := r.MomentExtremes(L, 2*L)
+	near(t, "M+ centre span", mp, 0.025*w*L*L, tolExact, 0, src)
+	near(t, "x of M+ centre span", xp, 1.5*L, tolExact, 0, src)
+}
+
+func TestValidate(t *testing.T) {
+	nan, inf := math.NaN(), math.Inf(1)
+	cases := []struct {
+		name string
+		b    Beam
+	}{
+		{"zero length", Beam{0, []float64{0, 0}, 1}},
+		{"negative length", Beam{-10, []float64{0, 10}, 1}},
+		{"NaN length", Beam{nan, []float64{0, 10}, 1}},
+		{"Inf length", Beam{inf, []float64{0, 10}, 1}},
+		{"zero EI", Beam{10, []float64{0, 10}, 0}},
+		{"negative EI", Beam{10, []float64{0, 10}, -5}},
+		{"NaN EI", Beam{10, []float64{0, 10}, nan}},
+		{"no supports", Beam{10, nil, 1}},
+		{"one support", Beam{10, []float64{5}, 1}},
+		{"support NaN", Beam{10, []float64{0, nan}, 1}},
+		{"support Inf", Beam{10, []float64{0, inf}, 1}},
+		{"support below 0", Beam{10, []float64{-1, 10}, 1}},
+		{"support past end", Beam{10, []float64{0, 10.5}, 1}},
+		{"unsorted", Beam{10, []float64{0, 8, 4}, 1}},
+		{"coincident", Beam{10, []float64{0, 5, 5, 10}, 1}},
+	}
+	for _, c := range cases {
+		err := c.b.Validate()
+		if !errors.Is(err, ErrBadBeam) {
+			t.Errorf("%s: Validate() = %v, want an error wrapping ErrBadBeam", c.name, err)
+			continue
+		}
+		if _, err2 := c.b.Solve([]float64{1, 1, 1}); !errors.Is(err2, ErrBadBeam) {
+			t.Errorf("%s: Solve error = %v, want ErrBadBeam", c.name, err2)
+		}
+		if c.b.Segments() == nil && len(c.b.SupportsAtIn) >= 2 {
+			t.Errorf("%s: Segments() = nil with %d supports", c.name, len(c.b.SupportsAtIn))
+		}
+	}
+	ok := Beam{120, []float64{0, 120}, 1e8}
+	if err := ok.Validate(); err != nil {
+		t.Errorf("valid beam: %v", err)
+	}
+	for _, w := range [][]float64{nil, {1, 2}, {nan}, {inf}} {
+		if _, err := ok.Solve(w); !errors.Is(err, ErrBadLoad) {
+			t.Errorf("Solve(%v) = %v, want ErrBadLoad", w, err)
+		}
+	}
+}

@@ -1,0 +1,401 @@
+package beam
+
+import "math"
+
+// inlineSegs is the number of segments a Response holds without a
+// separate allocation (a 6-span member with both cantilevers).
+const inlineSegs = 8
+
+// seg is one analysed segment. With t = x - a the local coordinate
+// (0 <= t <= l), the exact responses are
+//
+//	V(t)  = v0 - w t                                  (shear, = dM/dx)
+//	M(t)  = ma (1 - t/l) + mb t/l + w t (l - t) / 2   (= ma + v0 t - w t^2/2)
+//	y'(t) = th0 - (ma t + v0 t^2/2 - w t^3/6) / EI
+//	y(t)  = y0 + th0 t - (ma t^2/2 + v0 t^3/6 - w t^4/24) / EI
+//
+// from EI d2y/dx2 = -M with y positive downward.
+type seg struct {
+	a, b, l float64 // ends and length, in
+	w       float64 // line load, lb/in, positive down
+	ma, mb  float64 // end moments, lb*in, sagging positive
+	v0      float64 // shear just right of a, lb
+	y0, th0 float64 // deflection (in, down) and slope at a
+	cant    bool
+}
+
+// moment returns M at local t; exact (bit for bit) at t = 0 and t = l.
+func (s *seg) moment(t float64) float64 {
+	u := t / s.l
+	return s.ma*(1-u) + s.mb*u + s.w*t*(s.l-t)/2
+}
+
+func (s *seg) shear(t float64) float64 { return s.v0 - s.w*t }
+
+func (s *seg) slope(t, invEI float64) float64 {
+	return s.th0 - t*(s.ma+t*(s.v0/2-s.w*t/6))*invEI
+}
+
+func (s *seg) defl(t, invEI float64) float64 {
+	return s.y0 + t*(s.th0-t*(s.ma/2+t*(s.v0/6-s.w*t/24))*invEI)
+}
+
+// Response is the solved state of a Beam under one set of segment loads:
+// exact piecewise shear (linear), moment (quadratic) and deflection
+// (quartic). Its methods take x in inches from the left end of the beam;
+// x outside [0, LengthIn] is clamped to the nearest end. A Response is
+// read-only after Solve and safe for concurrent readers.
+type Response struct {
+	lengthIn     float64
+	invEI        float64
+	segs         []seg
+	supportsAtIn []float64
+	supportM     []float64
+	reactions    []float64
+
+	segBuf [inlineSegs]seg
+	supBuf [inlineSegs + 1]float64
+	mBuf   [inlineSegs + 1]float64
+	rBuf   [inlineSegs + 1]float64
+}
+
+// reset sizes r for m segments and n supports, zeroing every value.
+func (r *Response) reset(m, n int) {
+	r.lengthIn, r.invEI = 0, 0
+	if m <= inlineSegs {
+		r.segs = r.segBuf[:m]
+	} else if cap(r.segs) >= m {
+		r.segs = r.segs[:m]
+	} else {
+		r.segs = make([]seg, m)
+	}
+	clear(r.segs)
+	if n <= inlineSegs+1 {
+		r.supportsAtIn, r.supportM, r.reactions = r.supBuf[:n], r.mBuf[:n], r.rBuf[:n]
+	} else if cap(r.reactions) >= n {
+		r.supportsAtIn, r.supportM, r.reactions = r.supportsAtIn[:n], r.supportM[:n], r.reactions[:n]
+	} else {
+		r.supportsAtIn, r.supportM, r.reactions = make([]float64, n), make([]float64, n), make([]float64, n)
+	}
+	clear(r.supportM)
+	clear(r.reactions)
+}
+
+// Reactions returns the support reactions, lb, upward positive, one per
+// support in the order of Beam.SupportsAtIn. The slice belongs to r: do
+// not modify it, and copy it to keep it past a later SolveInto on r.
+func (r *Response) Reactions() []float64 { return r.reactions }
+
+// SupportMoments returns the bending moment at each support, lb*in,
+// sagging positive (so negative over interior supports of a continuous
+// beam under gravity). The slice belongs to r, as for Reactions.
+func (r *Response) SupportMoments() []float64 { return r.supportM }
+
+// LengthIn returns the length of the solved beam, in.
+func (r *Response) LengthIn() float64 { return r.lengthIn }
+
+// clamp limits x to [0, L].
+func (r *Response) clamp(x float64) float64 {
+	if x < 0 || math.IsNaN(x) {
+		return 0
+	}
+	if x > r.lengthIn {
+		return r.lengthIn
+	}
+	return x
+}
+
+// find returns the index of the segment holding x (already clamped); at a
+// key point shared by two segments it returns the left one.
+func (r *Response) find(x float64) int {
+	segs := r.segs
+	for i := range segs {
+		if x <= segs[i].b {
+			return i
+		}
+	}
+	return len(segs) - 1
+}
+
+// Moment returns the bending moment at x, lb*in, positive = sagging (top
+// edge in compression).
+func (r *Response) Moment(xIn float64) float64 {
+	if len(r.segs) == 0 {
+		return 0
+	}
+	x := r.clamp(xIn)
+	s := &r.segs[r.find(x)]
+	return s.moment(x - s.a)
+}
+
+// ShearEachSide returns the shear just left and just right of x, lb,
+// with shear = dM/dx = the sum of the upward forces left of the section
+// (so +wL/2 at the left support of a simple span). Left of x = 0 and
+// right of x = LengthIn the shear is 0; across a support the two differ
+// by the reaction.
+func (r *Response) ShearEachSide(xIn float64) (left, right float64) {
+	if len(r.segs) == 0 || xIn < 0 || xIn > r.lengthIn || math.IsNaN(xIn) {
+		return 0, 0
+	}
+	x := xIn
+	segs := r.segs
+	for i := range segs {
+		s := &segs[i]
+		if x > s.a && x <= s.b {
+			left = s.shear(x - s.a)
+		}
+		if x >= s.a && x < s.b {
+			right = s.shear(x - s.a)
+		}
+	}
+	return left, right
+}
+
+// Slope returns dy/dx at x (radians, small-angle), with y positive
+// downward: positive where the beam goes down towards +x.
+func (r *Response) Slope(xIn float64) float64 {
+	if len(r.segs) == 0 {
+		return 0
+	}
+	x := r.clamp(xIn)
+	s := &r.segs[r.find(x)]
+	return s.slope(x-s.a, r.invEI)
+}
+
+// Deflection returns the deflection at x, in, positive = downward.
+func (r *Response) Deflection(xIn float64) float64 {
+	if len(r.segs) == 0 {
+		return 0
+	}
+	x := r.clamp(xIn)
+	s := &r.segs[r.find(x)]
+	return s.defl(x-s.a, r.invEI)
+}
+
+// overlap returns the local interval [t1, t2] of segment s inside
+// [from, to], and false when they do not meet.
+func overlap(s *seg, from, to float64) (t1, t2 float64, ok bool) {
+	if to < s.a || from > s.b {
+		return 0, 0, false
+	}
+	t1, t2 = 0, s.l
+	if from > s.a {
+		t1 = from - s.a
+	}
+	if to < s.b {
+		t2 = to - s.a
+	}
+	return t1, t2, true
+}
+
+// span returns the ordered, clamped interval [from, to].
+func (r *Response) span(fromIn, toIn float64) (float64, float64) {
+	if fromIn > toIn {
+		fromIn, toIn = toIn, fromIn
+	}
+	return r.clamp(fromIn), r.clamp(toIn)
+}
+
+// MomentExtremes returns the largest positive and the most negative
+// moment on [from, to] (exact: moment is piecewise quadratic), with where
+// they occur; 0 and from when none.
+func (r *Response) MomentExtremes(fromIn, toIn float64) (maxPos, xPos, maxNeg, xNeg float64) {
+	from, to := r.span(fromIn, toIn)
+	xPos, xNeg = from, from
+	for i := range r.segs {
+		s := &r.segs[i]
+		t1, t2, ok := overlap(s, from, to)
+		if !ok {
+			continue
+		}
+		ts := [3]float64{t1, t2, -1}
+		if s.w != 0 {
+			if tv := s.v0 / s.w; tv > t1 && tv < t2 {
+				ts[2] = tv
+			}
+		}
+		for _, t := range ts {
+			if t < 0 {
+				continue
+			}
+			m := s.moment(t)
+			if m > maxPos {
+				maxPos, xPos = m, s.a+t
+			}
+			if m < maxNeg {
+				maxNeg, xNeg = m, s.a+t
+			}
+		}
+	}
+	return maxPos, xPos, maxNeg, xNeg
+}
+
+// momentRoots returns the zeros of the moment of s strictly inside
+// (tol, l - tol), sorted, as (t1, t2, count).
+func (s *seg) momentRoots(tol float64) (float64, float64, int) {
+	// M(t) = -w/2 t^2 + v0 t + ma
+	var r [2]float64
+	k := 0
+	add := func(t float64) {
+		if t > tol && t < s.l-tol {
+			r[k] = t
+			k++
+		}
+	}
+	if s.w == 0 {
+		if s.v0 != 0 {
+			add(-s.ma / s.v0)
+		}
+	} else {
+		d := s.v0*s.v0 + 2*s.w*s.ma
+		if d > 0 {
+			q := s.v0 + math.Copysign(math.Sqrt(d), s.v0)
+			if q != 0 {
+				t1, t2 := q/s.w, -2*s.ma/q
+				if t1 > t2 {
+					t1, t2 = t2, t1
+				}
+				add(t1)
+				add(t2)
+			}
+		}
+	}
+	return r[0], r[1], k
+}
+
+// MomentSignChanges returns the x where the moment changes sign, sorted
+// (exact roots per segment). The beam is cut into stretches where the
+// moment is positive, negative or identically zero (an unloaded
+// overhang); the points returned are the boundaries between neighbouring
+// stretches of different sign, so each piece between two consecutive
+// points (and the beam ends) has one sign, which the moment at its
+// midpoint shows. A moment that only touches zero (at a simple end
+// support, say) is not a change. Moments within 1e-9 of the largest
+// moment on the beam count as zero. Returns nil when there is none.
+func (r *Response) MomentSignChanges() []float64 {
+	scale := 0.0
+	for i := range r.segs {
+		s := &r.segs[i]
+		scale = math.Max(scale, math.Max(math.Abs(s.ma), math.Abs(s.mb)))
+		if s.w != 0 {
+			if tv := s.v0 / s.w; tv > 0 && tv < s.l {
+				scale = math.Max(scale, math.Abs(s.moment(tv)))
+			}
+		}
+	}
+	if scale == 0 {
+		return nil
+	}
+	eps := 1e-9 * scale
+	sign := func(m float64) int {
+		switch {
+		case m > eps:
+			return 1
+		case m < -eps:
+			return -1
+		}
+		return 0
+	}
+	var out []float64
+	prev, have := 0, false
+	for i := range r.segs {
+		s := &r.segs[i]
+		tol := 1e-9 * s.l
+		t1, t2, k := s.momentRoots(tol)
+		pts := [4]float64{0, t1, t2, s.l}
+		cuts := append(pts[:1:4], pts[1:1+k]...)
+		cuts = append(cuts, s.l)
+		for j := 0; j+1 < len(cuts); j++ {
+			p, q := cuts[j], cuts[j+1]
+			if q-p <= tol {
+				continue
+			}
+			sg := sign(s.moment((p + q) / 2))
+			if !have {
+				prev, have = sg, true
+				continue
+			}
+			if sg != prev {
+				out = append(out, s.a+p)
+				prev = sg
+			}
+		}
+	}
+	return out
+}
+
+// MaxDeflection returns the deflection of largest magnitude on [from,
+// to] (signed, in, positive down) and its x. Within each segment the
+// extremes are at the interval ends or where the slope is zero; the slope
+// is monotone between the zeros of the moment, so each such root is
+// bracketed and found by safeguarded Newton iteration.
+func (r *Response) MaxDeflection(fromIn, toIn float64) (deflIn, xIn float64) {
+	from, to := r.span(fromIn, toIn)
+	xIn = from
+	best := -1.0
+	consider := func(s *seg, t float64) {
+		y := s.defl(t, r.invEI)
+		if math.Abs(y) > best {
+			best, deflIn, xIn = math.Abs(y), y, s.a+t
+		}
+	}
+	for i := range r.segs {
+		s := &r.segs[i]
+		t1, t2, ok := overlap(s, from, to)
+		if !ok {
+			continue
+		}
+		consider(s, t1)
+		consider(s, t2)
+		m1, m2, k := s.momentRoots(0)
+		cuts := [4]float64{t1, t2, t2, t2}
+		n := 1
+		roots := [2]float64{m1, m2}
+		for _, m := range roots[:k] {
+			if m > t1 && m < t2 {
+				cuts[n] = m
+				n++
+			}
+		}
+		cuts[n] = t2
+		for j := 0; j < n; j++ {
+			if t, ok := s.slopeRoot(cuts[j], cuts[j+1], r.invEI); ok {
+				consider(s, t)
+			}
+		}
+	}
+	return deflIn, xIn
+}
+
+// slopeRoot finds the zero of the slope of s in (p, q), where the slope
+// is monotone, if the slope changes sign there.
+func (s *seg) slopeRoot(p, q, invEI float64) (float64, bool) {
+	fp, fq := s.slope(p, invEI), s.slope(q, invEI)
+	if fp == 0 || fq == 0 || (fp > 0) == (fq > 0) {
+		return 0, false
+	}
+	t := (p + q) / 2
+	for it := 0; it < 100; it++ {
+		f := s.slope(t, invEI)
+		if f == 0 {
+			return t, true
+		}
+		if (f > 0) == (fp > 0) {
+			p = t
+		} else {
+			q = t
+		}
+		if q-p <= 1e-12*s.l {
+			break
+		}
+		// Newton step on y' with y'' = -M/EI; fall back to bisection
+		// when it leaves the bracket.
+		d := -s.moment(t) * invEI
+		tn := t - f/d
+		if d == 0 || !(tn > p && tn < q) {
+			tn = (p + q) / 2
+		}
+		t = tn
+	}
+	return t, true
+}
