@@ -1,0 +1,76 @@
+package check
+
+import (
+	"fmt"
+	"strconv"
+	"strings"
+)
+
+// Section is a rectangular sawn-lumber cross-section: its nominal size and
+// its dressed (actual) dimensions, with the properties computed from them.
+type Section struct {
+	Name       string  // "2x10"
+	NominalBIn float64 // nominal thickness, 2, 3 or 4
+	NominalDIn float64 // nominal width (depth as a joist), 4 to 16
+	BIn        float64 // dressed thickness b
+	DIn        float64 // dressed width d
+	AreaIn2    float64 // A = b d
+	SIn3       float64 // Sxx = b d^2 / 6
+	IIn4       float64 // Ixx = b d^3 / 12
+}
+
+// dressedThicknessIn gives the dressed thickness of each nominal thickness,
+// and dressedWidthIn the dressed width of each nominal width, for dry
+// dimension lumber (NDS 2018 Supplement Table 1A, standard dressed sizes S4S,
+// the dimensions Table 1B is computed from). Nominal widths of 5 in and
+// less dress 1/2 in smaller, wider ones 3/4 in smaller.
+var (
+	dressedThicknessIn = map[int]float64{2: 1.5, 3: 2.5, 4: 3.5}
+	dressedWidthIn     = map[int]float64{4: 3.5, 5: 4.5, 6: 5.5, 8: 7.25, 10: 9.25, 12: 11.25, 14: 13.25, 16: 15.25}
+)
+
+// NewSection returns the Section of nominal size bNom x dNom (2, 3 or 4 by
+// 4, 5, 6, 8, 10, 12, 14 or 16), with A, S and I computed from the dressed
+// dimensions as NDS 2018 Supplement Table 1B does.
+func NewSection(bNom, dNom int) (Section, error) {
+	b, okB := dressedThicknessIn[bNom]
+	d, okD := dressedWidthIn[dNom]
+	if !okB || !okD {
+		return Section{}, fmt.Errorf("size %dx%d: want a nominal 2x, 3x or 4x from 4 to 16 in deep (4, 5, 6, 8, 10, 12, 14, 16)", bNom, dNom)
+	}
+	return Section{
+		Name:       fmt.Sprintf("%dx%d", bNom, dNom),
+		NominalBIn: float64(bNom),
+		NominalDIn: float64(dNom),
+		BIn:        b,
+		DIn:        d,
+		AreaIn2:    b * d,
+		SIn3:       b * d * d / 6,
+		IIn4:       b * d * d * d / 12,
+	}, nil
+}
+
+// ParseSize reads a nominal size such as "2x10", "2X10", "2 x 12" or
+// "3x12" and returns its Section (NDS 2018 Supplement Table 1B).
+func ParseSize(s string) (Section, error) {
+	t := strings.ToLower(strings.Join(strings.Fields(s), ""))
+	t = strings.ReplaceAll(t, "×", "x")
+	parts := strings.Split(t, "x")
+	if len(parts) != 2 {
+		return Section{}, fmt.Errorf("size %q: want nominal thickness x depth, such as 2x10", s)
+	}
+	b, errB := strconv.Atoi(parts[0])
+	d, errD := strconv.Atoi(parts[1])
+	if errB != nil || errD != nil {
+		return Section{}, fmt.Errorf("size %q: want nominal thickness x depth in whole inches, such as 2x10", s)
+	}
+	sec, err := NewSection(b, d)
+	if err != nil {
+		return Section{}, fmt.Errorf("size %q: %w", s, err)
+	}
+	return sec, nil
+}
+
+// BoardFeetPerFt is the board measure of one foot of the nominal section:
+// nominal b x nominal d / 12.
+func (s Section) BoardFeetPerFt() float64 { return s.NominalBIn * s.NominalDIn / 12 }
