@@ -124,44 +124,63 @@ func (b Beam) Segments() []Segment {
 // Solve analyses the beam with a uniform line load wPli[k] (lb/in,
 // positive = downward, gravity; negative = upward, uplift) on segment k
 // (len(wPli) == len(b.Segments())). Errors wrap ErrBadBeam or ErrBadLoad.
+// It makes one allocation, sized to the beam; SolveInto makes none.
 func (b Beam) Solve(wPli []float64) (*Response, error) {
-	r := new(Response)
-	if err := b.SolveInto(r, wPli); err != nil {
+	m, err := b.checkLoads(wPli)
+	if err != nil {
 		return nil, err
 	}
+	r := newResponse(m, len(b.SupportsAtIn))
+	b.fill(r, wPli)
 	return r, nil
 }
 
-// SolveInto is Solve writing into r, reusing r's storage: with beams of
-// up to inlineSegs segments it allocates nothing. On error r is left
+// SolveInto is Solve writing into r, reusing r's storage: once r has held
+// a beam with as many segments it allocates nothing. On error r is left
 // empty (every query returns 0).
 func (b Beam) SolveInto(r *Response, wPli []float64) error {
 	r.reset(0, 0)
-	if err := b.Validate(); err != nil {
+	m, err := b.checkLoads(wPli)
+	if err != nil {
 		return err
+	}
+	r.reset(m, len(b.SupportsAtIn))
+	b.fill(r, wPli)
+	return nil
+}
+
+// checkLoads validates b and wPli and returns the number of segments.
+func (b Beam) checkLoads(wPli []float64) (int, error) {
+	if err := b.Validate(); err != nil {
+		return 0, err
 	}
 	m := b.NumSegments()
 	if len(wPli) != m {
-		return fmt.Errorf("%w: %d line loads for %d segments: want one per segment", ErrBadLoad, len(wPli), m)
+		return 0, fmt.Errorf("%w: %d line loads for %d segments: want one per segment", ErrBadLoad, len(wPli), m)
 	}
 	for k, w := range wPli {
 		if !finite(w) {
-			return fmt.Errorf("%w: load on segment %d is %v lb/in: want a finite value", ErrBadLoad, k, w)
+			return 0, fmt.Errorf("%w: load on segment %d is %v lb/in: want a finite value", ErrBadLoad, k, w)
 		}
 	}
+	return m, nil
+}
+
+// fill solves the valid beam b under wPli into r, already sized for it
+// and zeroed.
+func (b Beam) fill(r *Response, wPli []float64) {
 	sup := b.SupportsAtIn
 	n := len(sup)
-	r.reset(m, n)
+	m := len(r.segs)
 	r.lengthIn = b.LengthIn
 	r.invEI = 1 / b.EILbIn2
-	copy(r.supportsAtIn, sup)
 	left, right := b.hasCantilevers()
 
 	// Geometry and loads of each segment.
 	segs := r.segs
 	k := 0
 	if left {
-		segs[0] = seg{a: 0, b: sup[0], w: wPli[0], cant: true}
+		segs[0] = seg{a: 0, b: sup[0], w: wPli[0]}
 		k = 1
 	}
 	first := k // index of the first span between supports
@@ -170,7 +189,7 @@ func (b Beam) SolveInto(r *Response, wPli []float64) error {
 		k++
 	}
 	if right {
-		segs[k] = seg{a: sup[n-1], b: b.LengthIn, w: wPli[k], cant: true}
+		segs[k] = seg{a: sup[n-1], b: b.LengthIn, w: wPli[k]}
 	}
 	for i := range segs {
 		segs[i].l = segs[i].b - segs[i].a
@@ -194,9 +213,9 @@ func (b Beam) SolveInto(r *Response, wPli []float64) error {
 	for i := range segs {
 		s := &segs[i]
 		switch {
-		case s.cant && i == 0:
+		case left && i == 0:
 			s.ma, s.mb, s.v0 = 0, ms[0], 0
-		case s.cant:
+		case right && i == m-1:
 			s.ma, s.mb, s.v0 = ms[n-1], 0, s.w*s.l
 		default:
 			j := i - first
@@ -241,7 +260,6 @@ func (b Beam) SolveInto(r *Response, wPli []float64) error {
 		c.y0 = 0
 		c.th0 = segs[m-2].slope(segs[m-2].l, ie)
 	}
-	return nil
 }
 
 // threeMoment fills the interior support moments ms[1:len(ms)-1] from the
@@ -259,7 +277,7 @@ func threeMoment(ms []float64, spans []seg) {
 	if n <= 2 {
 		return
 	}
-	var cBuf, dBuf [inlineSegs + 1]float64
+	var cBuf, dBuf [16]float64
 	cp, dp := cBuf[:], dBuf[:]
 	if n > len(cBuf) {
 		cp, dp = make([]float64, n), make([]float64, n)

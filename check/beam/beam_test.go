@@ -173,3 +173,128 @@ func TestValidate(t *testing.T) {
 		}
 	}
 }
+
+func TestOverhangLoadOnOverhangOnly(t *testing.T) {
+	const src = "AISC Steel Construction Manual, Beam Diagrams and Formulas, beam overhanging one support - uniformly distributed load on overhang (from memory: verify); superposition by hand: tip = wa^4/8EI + a * (wa^2/2) l/(3EI)"
+	l, a, w := 168.0, 36.0, 9.0
+	b := Beam{LengthIn: l + a, SupportsAtIn: []float64{0, l}, EILbIn2: eiTest}
+	for _, sgn := range []float64{1, -1} { // -1: uplift, the mirror image
+		r := mustSolve(t, b, 0, sgn*w)
+		R := r.Reactions()
+		near(t, "R1 (held down)", R[0], sgn*-w*a*a/(2*l), tolExact, 0, src)
+		near(t, "R2", R[1], sgn*w*a*(2*l+a)/(2*l), tolExact, 0, src)
+		near(t, "M at R2", r.Moment(l), sgn*-w*a*a/2, tolExact, 0, src)
+		near(t, "tip deflection", r.Deflection(l+a), sgn*w*a*a*a*(4*l+3*a)/(24*eiTest), tolExact, 0, src)
+		// Back span lifts by wa^2 l^2/(18 sqrt3 EI) = 0.03208 wa^2l^2/EI at l/sqrt3.
+		d, x := r.MaxDeflection(0, l)
+		near(t, "back-span uplift", d, -sgn*w*a*a*l*l/(18*math.Sqrt(3)*eiTest), tolExact, 0, src)
+		near(t, "x of back-span uplift", x, l/math.Sqrt(3), 1e-8, 0, src)
+		d, x = r.MaxDeflection(0, l+a)
+		near(t, "largest deflection is the tip", d, sgn*w*a*a*a*(4*l+3*a)/(24*eiTest), tolExact, 0, src)
+		near(t, "x of largest deflection", x, l+a, tolExact, 0, src)
+		mp, _, mn, xn := r.MomentExtremes(0, l+a)
+		if sgn > 0 {
+			near(t, "M- at support", mn, -w*a*a/2, tolExact, 0, src)
+			near(t, "x of M-", xn, l, tolExact, 0, src)
+			if mp != 0 {
+				t.Errorf("gravity on overhang only: M+ = %g, want 0 [%s]", mp, src)
+			}
+		} else {
+			near(t, "uplift M+ at support", mp, w*a*a/2, tolExact, 0, src)
+			if mn != 0 {
+				t.Errorf("uplift on overhang only: M- = %g, want 0 [%s]", mn, src)
+			}
+		}
+		if sc := r.MomentSignChanges(); sc != nil {
+			t.Errorf("MomentSignChanges = %v, want none (one sign throughout) [%s]", sc, src)
+		}
+	}
+}
+
+func TestOverhangUniformEverywhere(t *testing.T) {
+	const src = "AISC Steel Construction Manual, Beam Diagrams and Formulas, beam overhanging one support - uniformly distributed load (from memory: verify); superposition by hand of the simple span and the overhang case"
+	l, a, w := 180.0, 48.0, 5.0
+	b := Beam{LengthIn: l + a, SupportsAtIn: []float64{0, l}, EILbIn2: eiTest}
+	r := mustSolve(t, b, w, w)
+	R := r.Reactions()
+	near(t, "R1", R[0], w*(l*l-a*a)/(2*l), tolExact, 0, src)
+	near(t, "R2", R[1], w*(l+a)*(l+a)/(2*l), tolExact, 0, src)
+	near(t, "M at R2 (-wa^2/2)", r.Moment(l), -w*a*a/2, tolExact, 0, src)
+	mp, xp, _, _ := r.MomentExtremes(0, l+a)
+	near(t, "M+ max", mp, w*(l+a)*(l+a)*(l-a)*(l-a)/(8*l*l), tolExact, 0, src)
+	near(t, "x of M+ max", xp, (l*l-a*a)/(2*l), tolExact, 0, src)
+	near(t, "tip deflection", r.Deflection(l+a), w*a*(4*a*a*l-l*l*l+3*a*a*a)/(24*eiTest), tolExact, 0, src)
+	// Zero moment where R1 x - w x^2/2 = 0: x = 2 R1 / w = (l^2-a^2)/l.
+	sc := r.MomentSignChanges()
+	if len(sc) != 1 {
+		t.Fatalf("MomentSignChanges = %v, want one point [%s]", sc, src)
+	}
+	near(t, "inflection", sc[0], (l*l-a*a)/l, tolExact, 0, src)
+}
+
+func TestLeftOverhangMirrorsRight(t *testing.T) {
+	// Mirror symmetry (common practice, no source): the same beam turned
+	// end for end gives the same reactions reversed and the responses at
+	// L - x; shear changes sign.
+	l, a, w := 150.0, 30.0, 7.0
+	right := mustSolve(t, Beam{LengthIn: l + a, SupportsAtIn: []float64{0, l}, EILbIn2: eiTest}, 2*w, w)
+	left := mustSolve(t, Beam{LengthIn: l + a, SupportsAtIn: []float64{a, l + a}, EILbIn2: eiTest}, w, 2*w)
+	near(t, "R mirror 0", left.Reactions()[0], right.Reactions()[1], tolExact, 0, "symmetry")
+	near(t, "R mirror 1", left.Reactions()[1], right.Reactions()[0], tolExact, 0, "symmetry")
+	for _, x := range []float64{0, 10, a, 70, l, l + a} {
+		near(t, "M mirror", left.Moment(x), right.Moment(l+a-x), tolExact, w*l*l, "symmetry")
+		near(t, "defl mirror", left.Deflection(x), right.Deflection(l+a-x), 1e-8, 1e-3, "symmetry")
+		ll, lr := left.ShearEachSide(x)
+		rl, rr := right.ShearEachSide(l + a - x)
+		near(t, "V mirror (left side)", ll, -rr, tolExact, w*l, "symmetry")
+		near(t, "V mirror (right side)", lr, -rl, tolExact, w*l, "symmetry")
+	}
+	// Left-cantilever tip, overhang load only: wa^3(4l+3a)/24EI as above.
+	r := mustSolve(t, Beam{LengthIn: l + a, SupportsAtIn: []float64{a, l + a}, EILbIn2: eiTest}, w, 0)
+	near(t, "left tip deflection", r.Deflection(0), w*a*a*a*(4*l+3*a)/(24*eiTest), tolExact, 0,
+		"AISC Beam Diagrams and Formulas, beam overhanging one support - load on overhang (from memory: verify)")
+}
+
+func TestTwoUnequalSpans(t *testing.T) {
+	// Independent hand derivation (compatibility): with M the moment over
+	// the interior support, the rotation there of the left span taken
+	// alone is w1 L1^3/24EI + M L1/3EI and of the right span
+	// w2 L2^3/24EI + M L2/3EI (simple-span end rotations, any mechanics of
+	// materials text); continuity makes their sum zero:
+	//   M = -(w1 L1^3 + w2 L2^3) / (8 (L1 + L2)).
+	// Statics per span: R0 = w1 L1/2 + M/L1, R2 = w2 L2/2 + M/L2.
+	const src = "compatibility at the interior support, derived by hand in the comment"
+	L1, L2, w1, w2 := 120.0, 204.0, 4.0, 6.5
+	b := Beam{LengthIn: L1 + L2, SupportsAtIn: []float64{0, L1, L1 + L2}, EILbIn2: eiTest}
+	r := mustSolve(t, b, w1, w2)
+	M := -(w1*L1*L1*L1 + w2*L2*L2*L2) / (8 * (L1 + L2))
+	R := r.Reactions()
+	near(t, "M interior", r.Moment(L1), M, tolExact, 0, src)
+	near(t, "R0", R[0], w1*L1/2+M/L1, tolExact, 0, src)
+	near(t, "R2", R[2], w2*L2/2+M/L2, tolExact, 0, src)
+	near(t, "R1", R[1], w1*L1+w2*L2-(w1*L1/2+M/L1)-(w2*L2/2+M/L2), tolExact, 0, src)
+	// The slope is continuous over the interior support.
+	s := &r.segs[0]
+	near(t, "slope continuity", s.slope(s.l, r.invEI), r.segs[1].th0, tolExact, 0, src)
+}
+
+func TestTwoEqualSpansOneLoaded(t *testing.T) {
+	const src = "AISC Steel Construction Manual, Beam Diagrams and Formulas, continuous beam - two equal spans - uniform load on one span: R1 = 7wl/16, R2 = 5wl/8, R3 = -wl/16, M over support = -wl^2/16, M max = 49wl^2/512 at 7l/16 (from memory: verify)"
+	l, w := 132.0, 10.0
+	b := Beam{LengthIn: 2 * l, SupportsAtIn: []float64{0, l, 2 * l}, EILbIn2: eiTest}
+	r := mustSolve(t, b, w, 0)
+	R := r.Reactions()
+	near(t, "R1", R[0], 7*w*l/16, tolExact, 0, src)
+	near(t, "R2", R[1], 5*w*l/8, tolExact, 0, src)
+	near(t, "R3", R[2], -w*l/16, tolExact, 0, src)
+	mp, xp, mn, xn := r.MomentExtremes(0, 2*l)
+	near(t, "M+", mp, 49*w*l*l/512, tolExact, 0, src)
+	near(t, "x of M+", xp, 7*l/16, tolExact, 0, src)
+	near(t, "M-", mn, -w*l*l/16, tolExact, 0, src)
+	near(t, "x of M-", xn, l, tolExact, 0, src)
+	sc := r.MomentSignChanges()
+	if len(sc) != 1 {
+		t.Fatalf("MomentSignChanges = %v, want one point [%s]", sc, src)
+	}
+	near(t, "inflection (2 R1/w = 7l/8)", sc[0], 7*l/8, tolExact, 0, src)
+}

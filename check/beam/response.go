@@ -2,10 +2,6 @@ package beam
 
 import "math"
 
-// inlineSegs is the number of segments a Response holds without a
-// separate allocation (a 6-span member with both cantilevers).
-const inlineSegs = 8
-
 // seg is one analysed segment. With t = x - a the local coordinate
 // (0 <= t <= l), the exact responses are
 //
@@ -21,7 +17,6 @@ type seg struct {
 	ma, mb  float64 // end moments, lb*in, sagging positive
 	v0      float64 // shear just right of a, lb
 	y0, th0 float64 // deflection (in, down) and slope at a
-	cant    bool
 }
 
 // moment returns M at local t; exact (bit for bit) at t = 0 and t = l.
@@ -46,39 +41,74 @@ func (s *seg) defl(t, invEI float64) float64 {
 // x outside [0, LengthIn] is clamped to the nearest end. A Response is
 // read-only after Solve and safe for concurrent readers.
 type Response struct {
-	lengthIn     float64
-	invEI        float64
-	segs         []seg
-	supportsAtIn []float64
-	supportM     []float64
-	reactions    []float64
-
-	segBuf [inlineSegs]seg
-	supBuf [inlineSegs + 1]float64
-	mBuf   [inlineSegs + 1]float64
-	rBuf   [inlineSegs + 1]float64
+	lengthIn  float64
+	invEI     float64
+	segs      []seg
+	supportM  []float64
+	reactions []float64
+	buf       []float64 // backing store of supportM and reactions
 }
 
-// reset sizes r for m segments and n supports, zeroing every value.
+// newResponse returns a zeroed Response for m segments and n supports in
+// one allocation sized to the beam (the common 1 to 6 segment members),
+// so that Solve stays cheap.
+func newResponse(m, n int) *Response {
+	switch {
+	case m <= 1 && n <= 2:
+		p := new(struct {
+			r Response
+			s [1]seg
+			f [4]float64
+		})
+		p.r.attach(p.s[:m], p.f[:2*n])
+		return &p.r
+	case m <= 3 && n <= 4:
+		p := new(struct {
+			r Response
+			s [3]seg
+			f [8]float64
+		})
+		p.r.attach(p.s[:m], p.f[:2*n])
+		return &p.r
+	case m <= 6 && n <= 7:
+		p := new(struct {
+			r Response
+			s [6]seg
+			f [14]float64
+		})
+		p.r.attach(p.s[:m], p.f[:2*n])
+		return &p.r
+	}
+	r := new(Response)
+	r.reset(m, n)
+	return r
+}
+
+// attach points r at zeroed storage: segs for the segments, f (2n long)
+// for the support moments and reactions.
+func (r *Response) attach(segs []seg, f []float64) {
+	n := len(f) / 2
+	r.segs, r.buf = segs, f
+	r.supportM, r.reactions = f[:n:n], f[n:]
+}
+
+// reset sizes r for m segments and n supports, reusing its storage when
+// large enough, and zeroes every value.
 func (r *Response) reset(m, n int) {
 	r.lengthIn, r.invEI = 0, 0
-	if m <= inlineSegs {
-		r.segs = r.segBuf[:m]
-	} else if cap(r.segs) >= m {
-		r.segs = r.segs[:m]
-	} else {
-		r.segs = make([]seg, m)
+	segs := r.segs[:0]
+	if cap(segs) < m {
+		segs = make([]seg, m)
 	}
-	clear(r.segs)
-	if n <= inlineSegs+1 {
-		r.supportsAtIn, r.supportM, r.reactions = r.supBuf[:n], r.mBuf[:n], r.rBuf[:n]
-	} else if cap(r.reactions) >= n {
-		r.supportsAtIn, r.supportM, r.reactions = r.supportsAtIn[:n], r.supportM[:n], r.reactions[:n]
-	} else {
-		r.supportsAtIn, r.supportM, r.reactions = make([]float64, n), make([]float64, n), make([]float64, n)
+	segs = segs[:m]
+	clear(segs)
+	f := r.buf[:0]
+	if cap(f) < 2*n {
+		f = make([]float64, 2*n)
 	}
-	clear(r.supportM)
-	clear(r.reactions)
+	f = f[:2*n]
+	clear(f)
+	r.attach(segs, f)
 }
 
 // Reactions returns the support reactions, lb, upward positive, one per
@@ -188,6 +218,9 @@ func overlap(s *seg, from, to float64) (t1, t2 float64, ok bool) {
 	return t1, t2, true
 }
 
+// clampTo limits x to [lo, hi] (x = a + (from - a) may round past from).
+func clampTo(x, lo, hi float64) float64 { return math.Min(math.Max(x, lo), hi) }
+
 // span returns the ordered, clamped interval [from, to].
 func (r *Response) span(fromIn, toIn float64) (float64, float64) {
 	if fromIn > toIn {
@@ -218,12 +251,12 @@ func (r *Response) MomentExtremes(fromIn, toIn float64) (maxPos, xPos, maxNeg, x
 			if t < 0 {
 				continue
 			}
-			m := s.moment(t)
+			m, x := s.moment(t), clampTo(s.a+t, from, to)
 			if m > maxPos {
-				maxPos, xPos = m, s.a+t
+				maxPos, xPos = m, x
 			}
 			if m < maxNeg {
-				maxNeg, xNeg = m, s.a+t
+				maxNeg, xNeg = m, x
 			}
 		}
 	}
@@ -336,7 +369,7 @@ func (r *Response) MaxDeflection(fromIn, toIn float64) (deflIn, xIn float64) {
 	consider := func(s *seg, t float64) {
 		y := s.defl(t, r.invEI)
 		if math.Abs(y) > best {
-			best, deflIn, xIn = math.Abs(y), y, s.a+t
+			best, deflIn, xIn = math.Abs(y), y, clampTo(s.a+t, from, to)
 		}
 	}
 	for i := range r.segs {
