@@ -1,0 +1,209 @@
+// Framecheck checks the wood floor and roof joists of a DXF framing plan
+// under NDS 2018 (ASD), ASCE 7-16 load combinations and IBC 2018
+// deflection limits, works out the blocking rows the joists need, and
+// writes a results JSON, an XLSX schedule with a lumber takeoff and an
+// annotated copy of the plan.
+//
+// It assists a qualified designer; it does not replace engineering
+// judgement or a licensed professional's review. Check its design values
+// and code editions against those your jurisdiction has adopted.
+//
+// Usage:
+//
+//	framecheck <command> [arguments]
+//
+// Every command takes --help. Flags may come before or after the file
+// arguments; "--" ends the flags. Errors go to standard error, prefixed
+// "framecheck: ". Colour is used only when standard output is a terminal
+// and the NO_COLOR environment variable is unset.
+//
+// Exit status: 0 when every member passes (or the command succeeded), 1
+// when any member fails or is in error, 2 for unusable input (a bad
+// project file or drawing) or a usage error.
+//
+// # check
+//
+//	framecheck check PLAN.dxf [-p PROJECT.toml] [-o OUTDIR] [--units U] [--size] [--overlay]
+//
+// Reads the plan, finds the joists and their supports, checks every joist
+// and writes results.json, schedule.xlsx and the annotated DXF into
+// OUTDIR, then prints a summary table: members, pass or fail, blocking
+// rows and takeoff totals, and the project-file defaults that applied.
+//
+//	-p PROJECT.toml  project file (see "framecheck init"); without it, the
+//	                 built-in defaults, which suit a plan drawn on JOIST*
+//	                 and WALL* layers
+//	-o OUTDIR        output folder; default: a folder beside the plan,
+//	                 named after it
+//	--units U        unit of the drawing: in, ft, mm, cm or m; overrides
+//	                 the project file and the DXF header ($INSUNITS)
+//	--size           choose the smallest passing size from the project
+//	                 file's [sizing] candidates instead of checking the
+//	                 sizes given
+//	--overlay        write the annotations alone, to lay over the original
+//	                 drawing, instead of an annotated copy of the plan
+//
+// # demo
+//
+//	framecheck demo [-o OUTDIR]
+//
+// Runs check on the demo plan and project file built into the program, so
+// it works from any folder with no files at hand. OUTDIR defaults to
+// ./framecheck-demo.
+//
+// # layers
+//
+//	framecheck layers PLAN.dxf [-p PROJECT.toml] [--units U]
+//
+// Lists every layer of the plan with its entity counts by type and the
+// role the project file gives it (joists, blocking, zones, labels, or a
+// support kind), or none: the quick way to map a new drawing to a project
+// file.
+//
+// # member
+//
+//	framecheck member --size 2x10 --span 14ft [flags]
+//
+// Checks one joist described by flags and prints the calculation trace:
+// loads, combinations, adjustment factors, stresses, deflections and
+// ratios, each with its NDS, ASCE 7 or IBC reference.
+//
+//	--size S          nominal size, e.g. 2x10
+//	--species NAME    species group (default Douglas Fir-Larch)
+//	--grade G         grade (default No.2)
+//	--span L          span, centre to centre of bearings; repeat the flag
+//	                  or give a comma list for a continuous joist
+//	--overhang L      cantilever past the last bearing
+//	--spacing L       joist spacing (tributary width), default 16
+//	--dead, --live, --roof-live, --snow, --wind-down, --wind-up PSF
+//	                  area loads in psf
+//	--use floor|roof  member use, for the deflection limits
+//	--ceiling C       plaster, non-plaster or none
+//	--bottom-braced   a ceiling fastened to the joist braces its bottom edge
+//	--blocking N      rows of blocking in each span
+//
+// Lengths are inches unless they carry a unit (14ft, 3.5in, 4.2m).
+//
+// # materials
+//
+//	framecheck materials [SPECIES]
+//
+// Prints the reference design values in use (Fb, Ft, Fv, Fc_perp, Fc, E,
+// Emin by grade) with their source tables, for one species or all.
+//
+// # init
+//
+//	framecheck init [-o FILE] [--force]
+//
+// Writes a commented starter project file with every key at its default.
+//
+//	-o FILE   where to write it (default framecheck.toml; "-" for
+//	          standard output)
+//	--force   overwrite FILE if it exists
+//
+// # Example
+//
+//	$ framecheck init
+//	wrote framecheck.toml
+//	$ framecheck check plan.dxf -p framecheck.toml
+package main
+
+import (
+	"fmt"
+	"io"
+	"log"
+	"os"
+	"strings"
+)
+
+func main() {
+	log.SetFlags(0)
+	log.SetPrefix("framecheck: ")
+	os.Exit(run(os.Args[1:], os.Stdout, os.Stderr))
+}
+
+// Exit codes.
+const (
+	exitOK    = 0 // every member passes, or the command did its job
+	exitFail  = 1 // a member fails or is in error
+	exitUsage = 2 // unusable input or usage
+)
+
+// command is one subcommand of framecheck.
+type command struct {
+	name    string
+	summary string
+	run     func(args []string, stdout, stderr io.Writer) int
+}
+
+// commands lists the subcommands that are available, in the order the
+// usage message shows them.
+var commands = []command{
+	{"init", "write a commented starter project file", runInit},
+}
+
+// run is the whole program: it dispatches args to a subcommand and
+// returns the exit code.
+func run(args []string, stdout, stderr io.Writer) int {
+	if len(args) == 0 {
+		usage(stderr)
+		return exitUsage
+	}
+	name := args[0]
+	switch name {
+	case "-h", "-help", "--help", "help":
+		if len(args) > 1 && name == "help" {
+			if c := lookup(args[1]); c != nil {
+				return c.run([]string{"--help"}, stdout, stderr)
+			}
+			return unknownCommand(args[1], stderr)
+		}
+		usage(stdout)
+		return exitOK
+	}
+	if c := lookup(name); c != nil {
+		return c.run(args[1:], stdout, stderr)
+	}
+	return unknownCommand(name, stderr)
+}
+
+func lookup(name string) *command {
+	for i := range commands {
+		if commands[i].name == name {
+			return &commands[i]
+		}
+	}
+	return nil
+}
+
+func unknownCommand(name string, stderr io.Writer) int {
+	msg := fmt.Sprintf("framecheck: unknown command %q", name)
+	best, bestD := "", 3
+	for _, c := range commands {
+		if d := editDistance(strings.ToLower(name), c.name); d < bestD {
+			best, bestD = c.name, d
+		}
+	}
+	if best != "" {
+		msg += fmt.Sprintf("; did you mean %q?", best)
+	}
+	fmt.Fprintln(stderr, msg)
+	fmt.Fprintln(stderr, "run 'framecheck help' for the list of commands")
+	return exitUsage
+}
+
+// usage prints the list of commands.
+func usage(w io.Writer) {
+	fmt.Fprintln(w, "framecheck checks the wood joists of a DXF framing plan (NDS 2018 ASD,")
+	fmt.Fprintln(w, "ASCE 7-16 combinations, IBC 2018 deflection limits).")
+	fmt.Fprintln(w)
+	fmt.Fprintln(w, "usage: framecheck <command> [arguments]")
+	fmt.Fprintln(w)
+	fmt.Fprintln(w, "commands:")
+	for _, c := range commands {
+		fmt.Fprintf(w, "  %-10s %s\n", c.name, c.summary)
+	}
+	fmt.Fprintln(w)
+	fmt.Fprintln(w, "Run 'framecheck <command> --help' for a command's flags.")
+	fmt.Fprintln(w, "Exit status: 0 all pass, 1 a member fails, 2 bad input or usage.")
+}

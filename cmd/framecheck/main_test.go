@@ -1,0 +1,143 @@
+package main
+
+import (
+	"bytes"
+	"os"
+	"path/filepath"
+	"reflect"
+	"strings"
+	"testing"
+)
+
+// runCmd runs the command in-process and returns its exit code and output.
+func runCmd(args ...string) (int, string, string) {
+	var out, errb bytes.Buffer
+	code := run(args, &out, &errb)
+	return code, out.String(), errb.String()
+}
+
+func TestUsageAndExitCodes(t *testing.T) {
+	cases := []struct {
+		args   []string
+		code   int
+		stdout string // substring expected on stdout ("" = must be empty)
+		stderr string // substring expected on stderr ("" = must be empty)
+	}{
+		{nil, 2, "", "usage: framecheck <command>"},
+		{[]string{"help"}, 0, "usage: framecheck <command>", ""},
+		{[]string{"--help"}, 0, "init ", ""},
+		{[]string{"-h"}, 0, "Exit status", ""},
+		{[]string{"help", "init"}, 0, "usage: framecheck init [-o FILE] [--force]", ""},
+		{[]string{"help", "nope"}, 2, "", `framecheck: unknown command "nope"`},
+		{[]string{"int"}, 2, "", `did you mean "init"?`},
+		{[]string{"init", "--help"}, 0, "-force", ""},
+		{[]string{"init", "-h"}, 0, "overwrite FILE", ""},
+		{[]string{"init", "--bogus"}, 2, "", "framecheck: init: flag provided but not defined: -bogus"},
+		{[]string{"init", "extra.toml"}, 2, "", `framecheck: init: unexpected argument "extra.toml"`},
+		{[]string{"init", "-o"}, 2, "", "flag needs an argument: -o"},
+	}
+	for _, c := range cases {
+		code, out, errs := runCmd(c.args...)
+		if code != c.code {
+			t.Errorf("%q: exit %d, want %d (stderr %q)", c.args, code, c.code, errs)
+		}
+		check := func(name, got, want string) {
+			if want == "" && got != "" || !strings.Contains(got, want) {
+				t.Errorf("%q: %s %q, want it to contain %q", c.args, name, got, want)
+			}
+		}
+		check("stdout", out, c.stdout)
+		check("stderr", errs, c.stderr)
+	}
+}
+
+// TestInitRoundTrip writes the starter file and loads it back: it must
+// give exactly the built-in defaults.
+func TestInitRoundTrip(t *testing.T) {
+	path := filepath.Join(t.TempDir(), "framecheck.toml")
+	code, out, errs := runCmd("init", "-o", path)
+	if code != 0 || errs != "" || !strings.Contains(out, "wrote "+path) {
+		t.Fatalf("init: exit %d, stdout %q, stderr %q", code, out, errs)
+	}
+	p, err := LoadProject(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	def := DefaultProject()
+	p.File, p.given, p.defaults = "", nil, nil
+	def.given, def.defaults = nil, nil
+	if !reflect.DeepEqual(p, def) {
+		t.Errorf("starter file loads as\n%+v\nwant the defaults\n%+v", p, def)
+	}
+}
+
+func TestInitRefusesOverwrite(t *testing.T) {
+	path := filepath.Join(t.TempDir(), "p.toml")
+	if err := os.WriteFile(path, []byte("# mine\n"), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	code, _, errs := runCmd("init", "-o", path)
+	if code != 2 || !strings.Contains(errs, "already exists; use --force") {
+		t.Errorf("exit %d, stderr %q", code, errs)
+	}
+	if b, _ := os.ReadFile(path); string(b) != "# mine\n" {
+		t.Errorf("file changed without --force: %q", b)
+	}
+	code, _, errs = runCmd("init", "--force", "-o", path)
+	if b, _ := os.ReadFile(path); code != 0 || string(b) != starterProject {
+		t.Errorf("--force: exit %d, stderr %q, file not replaced", code, errs)
+	}
+}
+
+func TestInitStdout(t *testing.T) {
+	code, out, _ := runCmd("init", "-o", "-")
+	if code != 0 || out != starterProject {
+		t.Errorf("init -o -: exit %d, %d bytes", code, len(out))
+	}
+}
+
+func TestInitUnwritable(t *testing.T) {
+	path := filepath.Join(t.TempDir(), "no-such-dir", "p.toml")
+	code, _, errs := runCmd("init", "-o", path)
+	if code != 2 || !strings.HasPrefix(errs, "framecheck: ") {
+		t.Errorf("exit %d, stderr %q", code, errs)
+	}
+}
+
+// TestParseInterspersed: flags may follow the file arguments; "--" ends
+// the flags.
+func TestParseInterspersed(t *testing.T) {
+	for _, c := range []struct {
+		args []string
+		pos  []string
+		o    string
+	}{
+		{[]string{"plan.dxf", "-o", "out", "b"}, []string{"plan.dxf", "b"}, "out"},
+		{[]string{"-o", "out", "plan.dxf"}, []string{"plan.dxf"}, "out"},
+		{[]string{"plan.dxf", "--", "-o", "x"}, []string{"plan.dxf", "-o", "x"}, ""},
+		{nil, nil, ""},
+	} {
+		f := newFlags("t", "t", "t")
+		o := f.String("o", "", "")
+		pos, code := f.parse(c.args, &bytes.Buffer{}, &bytes.Buffer{})
+		if code != -1 || !reflect.DeepEqual(pos, c.pos) || *o != c.o {
+			t.Errorf("%q: pos %q o %q code %d", c.args, pos, *o, code)
+		}
+	}
+}
+
+func TestColour(t *testing.T) {
+	if useColour(&bytes.Buffer{}) {
+		t.Error("colour on a buffer")
+	}
+	t.Setenv("NO_COLOR", "1")
+	if useColour(os.Stdout) {
+		t.Error("colour with NO_COLOR set")
+	}
+	if got := paint(false, colourRed, "FAIL"); got != "FAIL" {
+		t.Errorf("paint off: %q", got)
+	}
+	if got := paint(true, colourRed, "FAIL"); got != "\x1b[31mFAIL\x1b[0m" {
+		t.Errorf("paint on: %q", got)
+	}
+}

@@ -1,0 +1,335 @@
+package main
+
+import (
+	"fmt"
+	"strings"
+
+	"framecheck/dxfimport"
+)
+
+// Project is the designer's input for one plan, read from a project file
+// (framecheck.toml). The keys and their defaults are those of the project
+// file reference (PROJECT-FILE.md); lengths are inches and area loads psf.
+// Use LoadProject or ParseProject to build one, DefaultProject for a plan
+// without a project file.
+type Project struct {
+	// File is the path the project was read from; "" for the built-in
+	// defaults.
+	File string
+
+	Drawing  DrawingSettings // [drawing]
+	Layers   LayerRoles      // [layers]
+	Supports []Support       // [[support]]
+	Lumber   Lumber          // [lumber] and [[lumber.by_layer]]
+	Design   Design          // [design]
+	Loads    Loads           // [loads]
+	Zones    []Zone          // [[zone]]
+	Sizing   Sizing          // [sizing]
+
+	// given holds the internal key paths ("zone[0].dead_psf") that the
+	// file sets explicitly.
+	given map[string]bool
+	// defaults lists, in file order, each default that applied.
+	defaults []string
+}
+
+// DrawingSettings is the [drawing] table.
+type DrawingSettings struct {
+	// Units is the unit of drawing coordinates: "in", "ft", "mm", "cm" or
+	// "m"; "" takes the unit from the DXF header ($INSUNITS).
+	Units              string
+	SnapToleranceIn    float64 // a joist end this close to a support bears on it (> 0)
+	MaxWallThicknessIn float64 // parallel support lines closer than this, both crossed: one wall (> 0)
+	EdgeDistanceIn     float64 // added to the tributary width of a run's outermost joists (>= 0)
+}
+
+// LayerRoles is the [layers] table: case-insensitive glob patterns
+// (dxfimport.MatchLayer), one list per role.
+type LayerRoles struct {
+	Joists   []string // joist lines
+	Blocking []string // blocking rows already drawn
+	Zones    []string // closed load-zone outlines with the zone name inside
+	Labels   []string // size callouts and their span lines
+}
+
+// Support is one [[support]] table: the layers of one kind of support.
+type Support struct {
+	Layers []string // layer patterns; a pattern belongs to one table only
+	// Kind is "bearing-wall", "dropped-beam", "flush-beam" or "ledger".
+	// Joist ends at a flush beam hang in hangers.
+	Kind string
+	// BearingIn is the bearing length on a single-line support; a
+	// double-line wall uses its thickness instead.
+	BearingIn float64
+}
+
+// Lumber is the [lumber] table: the project default for every joist and
+// the per-layer overrides.
+type Lumber struct {
+	Species string // e.g. "Douglas Fir-Larch"
+	Grade   string // e.g. "No.2"
+	Size    string // nominal, e.g. "2x10"
+	// ByLayer holds the [[lumber.by_layer]] overrides, first match wins.
+	ByLayer []LumberOverride
+}
+
+// LumberOverride is one [[lumber.by_layer]] table. Empty fields keep the
+// project default.
+type LumberOverride struct {
+	Layers  []string
+	Species string
+	Grade   string
+	Size    string
+}
+
+// Design is the [design] table.
+type Design struct {
+	TopEdgeBraced bool // sheathing holds the top edge continuously
+	ShearAtD      bool // loads within d of the bearing face are left out of V
+	WetService    bool // CM applies
+	// Temperature is "normal" (up to 100 F), "warm" (100-125 F) or "hot"
+	// (125-150 F): the Ct column of NDS 2018 Table 2.3.3.
+	Temperature string
+	Incised     bool // Ci applies
+	// Kcr is the creep factor of NDS 2018 §3.5.2. Left out, it is 1.5, or
+	// 2.0 when wet_service is true.
+	Kcr float64
+	// AddSelfWeight adds the joist's own weight to D. Left out (false), D
+	// is taken to include it. (A key added beyond the reference file.)
+	AddSelfWeight bool
+	// Combinations is the set of load combinations to check.
+	Combinations Combinations
+	// PatternLiveLoads applies live-type loads span by span on continuous
+	// and cantilevered members.
+	PatternLiveLoads bool
+}
+
+// Combinations is the value of design.combinations: either a named
+// standard set or an explicit list.
+type Combinations struct {
+	// Standard is "ASCE 7-16" for the ASD combinations of ASCE 7-16
+	// §2.4.1, or "" when List is given.
+	Standard string
+	// List holds the explicit combinations, in file order.
+	List []LoadCombination
+}
+
+// StandardASCE716 names the ASD load combinations of ASCE 7-16 §2.4.1.
+const StandardASCE716 = "ASCE 7-16"
+
+// LoadCombination is one explicit combination such as "D+0.75L+0.75S".
+type LoadCombination struct {
+	Text  string     // as written in the project file
+	Terms []LoadTerm // in the order written
+}
+
+// LoadTerm is one factored load of a combination.
+type LoadTerm struct {
+	Factor float64 // e.g. 0.75
+	Load   string  // "D", "L", "Lr", "S" or "W"
+}
+
+// Loads is the [loads] table.
+type Loads struct {
+	// DefaultZone is the zone of members outside every drawn outline.
+	DefaultZone string
+}
+
+// Zone is one [[zone]] table: area loads in psf and the deflection limits
+// of the members in it.
+type Zone struct {
+	Name        string
+	Use         string  // "floor" or "roof"
+	DeadPsf     float64 // D, including self-weight
+	LivePsf     float64 // L, floor live
+	RoofLivePsf float64 // Lr
+	SnowPsf     float64 // S
+	WindDownPsf float64 // W toward the member, strength level
+	WindUpPsf   float64 // W away from the member (uplift), strength level
+	// Ceiling is "plaster", "non-plaster" or "none".
+	Ceiling             string
+	CeilingBracesBottom bool // a ceiling fastened to the joists braces the bottom edge
+	// LiveDeflectionLimit is the n of L/n for live-type loads; 0 means not
+	// checked.
+	LiveDeflectionLimit float64
+	// TotalDeflectionLimit is the n of L/n for the total deflection; 0
+	// means not checked.
+	TotalDeflectionLimit float64
+}
+
+// Sizing is the [sizing] table, used by `framecheck check --size`.
+type Sizing struct {
+	Candidates []string // nominal sizes to try, smallest first
+	// BlockingPieceWeightBf is the cost of one blocking piece expressed in
+	// board feet of joist.
+	BlockingPieceWeightBf float64
+}
+
+// Allowed values of the project file's enumerated keys.
+var (
+	unitsValues       = []string{"in", "ft", "mm", "cm", "m"}
+	supportKinds      = []string{"bearing-wall", "dropped-beam", "flush-beam", "ledger"}
+	temperatureValues = []string{"normal", "warm", "hot"}
+	useValues         = []string{"floor", "roof"}
+	ceilingValues     = []string{"plaster", "non-plaster", "none"}
+	loadSymbols       = []string{"D", "L", "Lr", "S", "W"}
+)
+
+// defaultBearingIn is the bearing length a [[support]] table gets when it
+// leaves bearing_in out, by kind: the 3.5 in of a 2x4 plate or a two-ply
+// beam for walls and dropped beams, the 1.5 in seat of a face-mount hanger
+// for flush beams and ledgers. Common practice, no source.
+var defaultBearingIn = map[string]float64{
+	"bearing-wall": 3.5,
+	"dropped-beam": 3.5,
+	"flush-beam":   1.5,
+	"ledger":       1.5,
+}
+
+// defaultSupports are the support tables of a file without [[support]].
+func defaultSupports() []Support {
+	return []Support{
+		{Layers: []string{"WALL*"}, Kind: "bearing-wall", BearingIn: 3.5},
+		{Layers: []string{"BEAM-FLUSH*"}, Kind: "flush-beam", BearingIn: 1.5},
+	}
+}
+
+// defaultZone is the zone of a file without [[zone]].
+func defaultZone() Zone {
+	return Zone{
+		Name: "FLOOR", Use: "floor", DeadPsf: 12, LivePsf: 40,
+		Ceiling: "non-plaster", LiveDeflectionLimit: 360, TotalDeflectionLimit: 240,
+	}
+}
+
+// roofLiveDefaultPsf is roof_live_psf for a roof zone that leaves it out:
+// ordinary flat, pitched and curved roofs, ASCE 7-16 Table 4.3-1 (from
+// memory: verify against ASCE 7-16 Table 4.3-1). A floor zone gets 0.
+const roofLiveDefaultPsf = 20.0
+
+// floorLiveDefaultPsf is live_psf for a floor zone that leaves it out, as
+// the project file reference shows; a roof zone gets 0 (floor live load
+// does not act on a roof).
+const floorLiveDefaultPsf = 40.0
+
+// DeflectionLimits returns the n of L/n for live-type loads and for the
+// total load of a member by use and ceiling, from IBC 2018 Table 1604.3:
+// floor members L/360 and L/240; roof members supporting a plaster or
+// stucco ceiling L/360 and L/240, a non-plaster ceiling L/240 and L/180,
+// no ceiling L/180 and L/120.
+func DeflectionLimits(use, ceiling string) (live, total float64) {
+	if use != "roof" {
+		return 360, 240
+	}
+	switch ceiling {
+	case "plaster":
+		return 360, 240
+	case "none":
+		return 180, 120
+	default:
+		return 240, 180
+	}
+}
+
+// DefaultProject returns the project used for a plan without a project
+// file: every key at its default, the two default support tables and the
+// FLOOR zone.
+func DefaultProject() *Project {
+	p, err := ParseProject("", nil)
+	if err != nil {
+		panic("framecheck: built-in defaults do not load: " + err.Error())
+	}
+	return p
+}
+
+// DefaultsUsed lists, in file order, each default that applied, as
+// "section.key = value (why)", for the run summary.
+func (p *Project) DefaultsUsed() []string {
+	return append([]string(nil), p.defaults...)
+}
+
+// Given reports whether the project file set the key explicitly. Key is a
+// dotted path; elements of array tables carry a 0-based index, as in
+// "zone[1].dead_psf" or "lumber.by_layer[0].size".
+func (p *Project) Given(key string) bool { return p.given[key] }
+
+// Zone returns the zone of that name (case-insensitive), or nil.
+func (p *Project) Zone(name string) *Zone {
+	for i := range p.Zones {
+		if strings.EqualFold(p.Zones[i].Name, name) {
+			return &p.Zones[i]
+		}
+	}
+	return nil
+}
+
+// Layer roles returned by LayerRole.
+const (
+	RoleJoists   = "joists"
+	RoleBlocking = "blocking"
+	RoleZones    = "zones"
+	RoleLabels   = "labels"
+	// Support layers report "support:" followed by the kind.
+	rolePrefixSupport = "support:"
+)
+
+// LayerRole returns the role the project gives a layer: "joists",
+// "blocking", "zones", "labels", "support:<kind>", or "" for none. Roles
+// are tried in that order, supports last.
+func (p *Project) LayerRole(layer string) string {
+	roles := []struct {
+		name     string
+		patterns []string
+	}{
+		{RoleJoists, p.Layers.Joists},
+		{RoleBlocking, p.Layers.Blocking},
+		{RoleZones, p.Layers.Zones},
+		{RoleLabels, p.Layers.Labels},
+	}
+	for _, r := range roles {
+		if dxfimport.MatchLayer(r.patterns, layer) {
+			return r.name
+		}
+	}
+	for _, s := range p.Supports {
+		if dxfimport.MatchLayer(s.Layers, layer) {
+			return rolePrefixSupport + s.Kind
+		}
+	}
+	return ""
+}
+
+// LumberFor returns the species, grade and size of a joist on that layer:
+// the first [[lumber.by_layer]] override whose patterns match, with the
+// fields it leaves empty taken from [lumber].
+func (p *Project) LumberFor(layer string) (species, grade, size string) {
+	species, grade, size = p.Lumber.Species, p.Lumber.Grade, p.Lumber.Size
+	for _, o := range p.Lumber.ByLayer {
+		if !dxfimport.MatchLayer(o.Layers, layer) {
+			continue
+		}
+		if o.Species != "" {
+			species = o.Species
+		}
+		if o.Grade != "" {
+			grade = o.Grade
+		}
+		if o.Size != "" {
+			size = o.Size
+		}
+		break
+	}
+	return species, grade, size
+}
+
+// String formats a combination list as the project file would write it.
+func (c Combinations) String() string {
+	if c.Standard != "" {
+		return fmt.Sprintf("%q", c.Standard)
+	}
+	s := make([]string, len(c.List))
+	for i, lc := range c.List {
+		s[i] = fmt.Sprintf("%q", lc.Text)
+	}
+	return "[" + strings.Join(s, ", ") + "]"
+}

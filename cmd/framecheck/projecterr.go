@@ -1,0 +1,231 @@
+package main
+
+import (
+	"fmt"
+	"math"
+	"sort"
+	"strconv"
+	"strings"
+)
+
+// A ProjectError is one problem in a project file. Line is 1-based; 0 when
+// the problem belongs to no single line.
+type ProjectError struct {
+	File string // project file name as given
+	Line int    // line of the key, or of the syntax error
+	Key  string // dotted key as the file writes it ("zone.dead_psf"); "" for syntax errors
+	Msg  string // what is wrong and what is allowed
+}
+
+// Error formats e as "framecheck.toml:12: zone.dead_psf: must be 0 or
+// more (psf), got -5".
+func (e *ProjectError) Error() string {
+	var b strings.Builder
+	b.WriteString(e.File)
+	if e.Line > 0 {
+		fmt.Fprintf(&b, ":%d", e.Line)
+	}
+	b.WriteString(": ")
+	if e.Key != "" {
+		b.WriteString(e.Key + ": ")
+	}
+	b.WriteString(e.Msg)
+	return b.String()
+}
+
+// ProjectErrors is every problem found in one project file, sorted by
+// line. Error prints one per line.
+type ProjectErrors []*ProjectError
+
+// Error joins the problems, one per line.
+func (l ProjectErrors) Error() string {
+	s := make([]string, len(l))
+	for i, e := range l {
+		s[i] = e.Error()
+	}
+	return strings.Join(s, "\n")
+}
+
+func (l ProjectErrors) sort() {
+	sort.SliceStable(l, func(i, j int) bool { return l[i].Line < l[j].Line })
+}
+
+// knownKey is a key valid in some table, as looked up (name) and as
+// suggested to the user (show: "kcr", "[design]", "[[zone]]").
+type knownKey struct{ name, show string }
+
+// schema lists the tables of the project file and their keys, for the
+// advice on an unknown key that belongs in another table. The loader's
+// getters decide what is valid; TestSchemaMatchesLoader keeps the two
+// lists the same.
+var schema = []struct {
+	show string
+	keys []string
+}{
+	{"the top level", []string{"drawing", "layers", "support", "lumber", "design", "loads", "zone", "sizing"}},
+	{"[drawing]", []string{"units", "snap_tolerance_in", "max_wall_thickness_in", "edge_distance_in"}},
+	{"[layers]", []string{"joists", "blocking", "zones", "labels"}},
+	{"[[support]]", []string{"layers", "kind", "bearing_in"}},
+	{"[lumber]", []string{"species", "grade", "size", "by_layer"}},
+	{"[[lumber.by_layer]]", []string{"layers", "species", "grade", "size"}},
+	{"[design]", []string{"top_edge_braced", "shear_at_d", "wet_service", "temperature", "incised", "kcr",
+		"add_self_weight", "combinations", "pattern_live_loads"}},
+	{"[loads]", []string{"default_zone"}},
+	{"[[zone]]", []string{"name", "use", "dead_psf", "live_psf", "roof_live_psf", "snow_psf", "wind_down_psf",
+		"wind_up_psf", "ceiling", "ceiling_braces_bottom", "live_deflection_limit", "total_deflection_limit"}},
+	{"[sizing]", []string{"candidates", "blocking_piece_weight_bf"}},
+}
+
+// keyHome maps each key name to the first table of schema that has it.
+var keyHome = func() map[string]string {
+	m := map[string]string{}
+	for _, t := range schema {
+		for _, k := range t.keys {
+			if _, ok := m[k]; !ok {
+				m[k] = t.show
+			}
+		}
+	}
+	return m
+}()
+
+// tomlType names the TOML type of a decoded value for messages.
+func tomlType(v any) string {
+	switch v.(type) {
+	case string:
+		return "string"
+	case int64:
+		return "integer"
+	case float64:
+		return "float"
+	case bool:
+		return "boolean"
+	case map[string]any:
+		return "table"
+	case []map[string]any, []any:
+		return "array"
+	default:
+		return "date/time"
+	}
+}
+
+// describe formats a decoded value for a message: `string "abc"`,
+// `integer 3`, `array`.
+func describe(v any) string {
+	switch x := v.(type) {
+	case string:
+		return fmt.Sprintf("string %q", x)
+	case int64, float64, bool:
+		return fmt.Sprintf("%s %v", tomlType(v), x)
+	default:
+		return tomlType(v)
+	}
+}
+
+// fmtNum formats a number for messages and the defaults list.
+func fmtNum(x float64) string { return strconv.FormatFloat(x, 'g', -1, 64) }
+
+// fmtList formats a string list as TOML.
+func fmtList(l []string) string {
+	s := make([]string, len(l))
+	for i, x := range l {
+		s[i] = strconv.Quote(x)
+	}
+	return "[" + strings.Join(s, ", ") + "]"
+}
+
+// Range checks for numeric keys: each returns "" when x is allowed, else
+// the allowed range.
+func positive(x float64) string {
+	if x > 0 && !math.IsInf(x, 1) {
+		return ""
+	}
+	return "must be greater than 0"
+}
+
+func nonNegative(x float64) string {
+	if x >= 0 && !math.IsInf(x, 1) {
+		return ""
+	}
+	return "must be 0 or more"
+}
+
+func atLeastOne(x float64) string {
+	if x >= 1 && !math.IsInf(x, 1) {
+		return ""
+	}
+	return "must be at least 1"
+}
+
+func deflectionLimit(x float64) string {
+	if x == 0 || x >= 1 && !math.IsInf(x, 1) {
+		return ""
+	}
+	return "must be 0 (not checked) or at least 1 (the n of L/n)"
+}
+
+// validSize reports whether s is a nominal dimension-lumber size "BxD"
+// with B of 2, 3 or 4 and D of 2 to 16 in.
+func validSize(s string) bool {
+	b, d, ok := strings.Cut(s, "x")
+	if !ok {
+		return false
+	}
+	switch b {
+	case "2", "3", "4":
+	default:
+		return false
+	}
+	switch d {
+	case "2", "3", "4", "5", "6", "8", "10", "12", "14", "16":
+		return true
+	}
+	return false
+}
+
+const sizeRule = `a nominal size such as "2x10" (2x, 3x or 4x; depth 2 to 16)`
+
+// parseCombination reads one load combination such as "D+0.75L+0.75S" or
+// "0.6D + 0.6W": terms joined by '+', each an optional positive factor and
+// one of the load symbols D, L, Lr, S, W, each symbol at most once.
+func parseCombination(s string) (LoadCombination, string) {
+	lc := LoadCombination{Text: s}
+	compact := strings.ReplaceAll(s, " ", "")
+	if compact == "" {
+		return lc, "is empty"
+	}
+	seen := map[string]bool{}
+	for _, term := range strings.Split(compact, "+") {
+		i := 0
+		for i < len(term) && (term[i] >= '0' && term[i] <= '9' || term[i] == '.') {
+			i++
+		}
+		f := 1.0
+		if i > 0 {
+			v, err := strconv.ParseFloat(term[:i], 64)
+			if err != nil || !(v > 0) {
+				return lc, fmt.Sprintf("factor %q in %q is not a positive number", term[:i], s)
+			}
+			f = v
+		}
+		sym := strings.TrimPrefix(term[i:], "*")
+		if !contains(loadSymbols, sym) {
+			return lc, fmt.Sprintf("term %q in %q: expected a factor and one of %s", term, s, strings.Join(loadSymbols, ", "))
+		}
+		if seen[sym] {
+			return lc, fmt.Sprintf("load %s appears twice in %q", sym, s)
+		}
+		seen[sym] = true
+		lc.Terms = append(lc.Terms, LoadTerm{Factor: f, Load: sym})
+	}
+	return lc, ""
+}
+
+func contains(list []string, s string) bool {
+	for _, x := range list {
+		if x == s {
+			return true
+		}
+	}
+	return false
+}

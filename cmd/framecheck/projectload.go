@@ -1,0 +1,289 @@
+package main
+
+import (
+	"errors"
+	"fmt"
+	"os"
+	"sort"
+	"strings"
+
+	"github.com/BurntSushi/toml"
+)
+
+// LoadProject reads and checks a project file. Problems in the file come
+// back as ProjectErrors, each naming the file, line and key.
+func LoadProject(path string) (*Project, error) {
+	data, err := os.ReadFile(path)
+	if err != nil {
+		return nil, err
+	}
+	return ParseProject(path, data)
+}
+
+// ParseProject checks project-file text; name is used in messages. Every
+// problem found is reported, sorted by line, as ProjectErrors: TOML syntax
+// (first error only), unknown keys with the closest valid one, wrong types
+// and values out of range with what is allowed.
+func ParseProject(name string, data []byte) (*Project, error) {
+	var raw map[string]any
+	if _, err := toml.Decode(string(data), &raw); err != nil {
+		var pe toml.ParseError
+		if errors.As(err, &pe) {
+			return nil, ProjectErrors{{File: name, Line: pe.Position.Line, Msg: "TOML syntax: " + pe.Message}}
+		}
+		return nil, ProjectErrors{{File: name, Msg: err.Error()}}
+	}
+	p := &Project{File: name, given: map[string]bool{}}
+	ld := &loader{file: name, lines: keyLines(string(data)), p: p}
+	ld.project(ld.table(raw, "", "the top level", ""))
+	for _, t := range ld.tables {
+		ld.unknownKeys(t)
+	}
+	if len(ld.errs) > 0 {
+		ld.errs.sort()
+		return nil, ld.errs
+	}
+	return p, nil
+}
+
+// loader walks the decoded TOML, filling a Project and gathering problems.
+type loader struct {
+	file   string
+	lines  map[string]int
+	p      *Project
+	errs   ProjectErrors
+	tables []*table
+}
+
+// table is one TOML table being read.
+type table struct {
+	m     map[string]any
+	path  string // internal path: "", "drawing", "zone[1]"
+	show  string // as the user knows it: "[drawing]", "[[zone]]"
+	label string // prefix in the defaults list: "drawing.", "[[zone]] ROOF: "
+	known []knownKey
+}
+
+func (ld *loader) table(m map[string]any, path, show, label string) *table {
+	t := &table{m: m, path: path, show: show, label: label}
+	ld.tables = append(ld.tables, t)
+	return t
+}
+
+func (ld *loader) errorf(path, format string, args ...any) {
+	ld.errs = append(ld.errs, &ProjectError{File: ld.file, Line: lineOf(ld.lines, path),
+		Key: displayKey(path), Msg: fmt.Sprintf(format, args...)})
+}
+
+func (ld *loader) defaulted(t *table, key, format string, args ...any) {
+	ld.p.defaults = append(ld.p.defaults, t.label+key+" = "+fmt.Sprintf(format, args...))
+}
+
+// get returns the value of key in t, marking the key valid and, when
+// present, given.
+func (ld *loader) get(t *table, key, show string) (any, string, bool) {
+	if show == "" {
+		show = key
+	}
+	t.known = append(t.known, knownKey{key, show})
+	path := joinPath(t.path, key)
+	v, ok := t.m[key]
+	if ok {
+		ld.p.given[path] = true
+	}
+	return v, path, ok
+}
+
+// num reads a number (integer or float) checked by rule; unit goes into
+// messages.
+func (ld *loader) num(t *table, key, unit string, dst *float64, rule func(float64) string) {
+	v, path, ok := ld.get(t, key, "")
+	if !ok {
+		ld.defaulted(t, key, "%s", fmtNum(*dst))
+		return
+	}
+	var x float64
+	switch n := v.(type) {
+	case int64:
+		x = float64(n)
+	case float64:
+		x = n
+	default:
+		ld.errorf(path, "expected a number (%s, %s), got %s", unit, rule(-1), describe(v))
+		return
+	}
+	if msg := rule(x); msg != "" {
+		ld.errorf(path, "%s (%s), got %s", msg, unit, fmtNum(x))
+		return
+	}
+	*dst = x
+}
+
+// enum reads a string that must be one of allowed (case-insensitive).
+func (ld *loader) enum(t *table, key string, dst *string, allowed []string) {
+	v, path, ok := ld.get(t, key, "")
+	if !ok {
+		ld.defaulted(t, key, "%q", *dst)
+		return
+	}
+	s, isStr := v.(string)
+	for _, a := range allowed {
+		if isStr && strings.EqualFold(s, a) {
+			*dst = a
+			return
+		}
+	}
+	ld.errorf(path, "expected one of %s, got %s", strings.Join(quoteAll(allowed), " | "), describe(v))
+}
+
+// text reads a non-empty string; check, when not nil, returns "" or the
+// rule the string breaks.
+func (ld *loader) text(t *table, key string, dst *string, check func(string) string) {
+	v, path, ok := ld.get(t, key, "")
+	if !ok {
+		if *dst != "" {
+			ld.defaulted(t, key, "%q", *dst)
+		}
+		return
+	}
+	s, isStr := v.(string)
+	switch {
+	case !isStr:
+		ld.errorf(path, "expected a string, got %s", describe(v))
+	case strings.TrimSpace(s) == "":
+		ld.errorf(path, "must not be empty")
+	case check != nil && check(s) != "":
+		ld.errorf(path, "expected %s, got %q", check(s), s)
+	default:
+		*dst = strings.TrimSpace(s)
+	}
+}
+
+func (ld *loader) boolean(t *table, key string, dst *bool) {
+	v, path, ok := ld.get(t, key, "")
+	if !ok {
+		ld.defaulted(t, key, "%t", *dst)
+		return
+	}
+	b, isBool := v.(bool)
+	if !isBool {
+		ld.errorf(path, "expected true or false, got %s", describe(v))
+		return
+	}
+	*dst = b
+}
+
+// list reads a non-empty array of non-empty strings; check as for text.
+func (ld *loader) list(t *table, key string, dst *[]string, check func(string) string) {
+	v, path, ok := ld.get(t, key, "")
+	if !ok {
+		if *dst != nil {
+			ld.defaulted(t, key, "%s", fmtList(*dst))
+		}
+		return
+	}
+	out, msg := stringList(v, check)
+	if msg != "" {
+		ld.errorf(path, "%s", msg)
+		return
+	}
+	*dst = out
+}
+
+func stringList(v any, check func(string) string) ([]string, string) {
+	a, ok := v.([]any)
+	if !ok {
+		return nil, fmt.Sprintf("expected an array of strings such as [\"A*\", \"B*\"], got %s", describe(v))
+	}
+	if len(a) == 0 {
+		return nil, "must list at least one entry"
+	}
+	out := make([]string, 0, len(a))
+	for i, e := range a {
+		s, isStr := e.(string)
+		switch {
+		case !isStr:
+			return nil, fmt.Sprintf("entry %d: expected a string, got %s", i+1, describe(e))
+		case strings.TrimSpace(s) == "":
+			return nil, fmt.Sprintf("entry %d is empty", i+1)
+		case check != nil && check(s) != "":
+			return nil, fmt.Sprintf("entry %d: expected %s, got %q", i+1, check(s), s)
+		}
+		out = append(out, strings.TrimSpace(s))
+	}
+	return out, ""
+}
+
+// sub returns the table under key, or an empty one when it is absent.
+func (ld *loader) sub(t *table, key string) *table {
+	show := "[" + joinPath(displayKey(t.path), key) + "]"
+	v, path, ok := ld.get(t, key, show)
+	m, isMap := v.(map[string]any)
+	if ok && !isMap {
+		ld.errorf(path, "expected a table %s, got %s", show, describe(v))
+	}
+	if m == nil {
+		m = map[string]any{}
+	}
+	return ld.table(m, path, show, displayKey(path)+".")
+}
+
+// arrayTables returns the elements of the array of tables under key; ok is
+// false when the key is absent.
+func (ld *loader) arrayTables(t *table, key string) (elems []*table, ok bool) {
+	show := "[[" + joinPath(displayKey(t.path), key) + "]]"
+	v, path, ok := ld.get(t, key, show)
+	if !ok {
+		return nil, false
+	}
+	var maps []map[string]any
+	switch a := v.(type) {
+	case []map[string]any:
+		maps = a
+	case []any:
+		for _, e := range a {
+			m, isMap := e.(map[string]any)
+			if !isMap {
+				maps = nil
+				break
+			}
+			maps = append(maps, m)
+		}
+	}
+	if maps == nil {
+		ld.errorf(path, "expected one or more %s tables, got %s", show, describe(v))
+		return nil, true
+	}
+	for i, m := range maps {
+		p := fmt.Sprintf("%s[%d]", path, i)
+		elems = append(elems, ld.table(m, p, show, fmt.Sprintf("%s %d: ", show, i+1)))
+	}
+	return elems, true
+}
+
+// unknownKeys reports every key of t that no getter asked for.
+func (ld *loader) unknownKeys(t *table) {
+	keys := make([]string, 0, len(t.m))
+	for k := range t.m {
+		keys = append(keys, k)
+	}
+	sort.Strings(keys)
+	for _, k := range keys {
+		valid := false
+		for _, kk := range t.known {
+			valid = valid || kk.name == k
+		}
+		if !valid {
+			path := joinPath(t.path, k)
+			ld.errorf(path, "unknown key in %s; %s", t.show, suggest(k, t.known, t.show))
+		}
+	}
+}
+
+func quoteAll(l []string) []string {
+	out := make([]string, len(l))
+	for i, s := range l {
+		out[i] = fmt.Sprintf("%q", s)
+	}
+	return out
+}

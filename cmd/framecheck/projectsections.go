@@ -1,0 +1,304 @@
+package main
+
+import (
+	"fmt"
+	"strings"
+)
+
+// project reads the top-level tables in the order the reference file
+// lists them.
+func (ld *loader) project(root *table) {
+	ld.drawing(ld.sub(root, "drawing"))
+	ld.layers(ld.sub(root, "layers"))
+	ld.supports(root)
+	ld.lumber(ld.sub(root, "lumber"))
+	ld.design(ld.sub(root, "design"))
+	loads := ld.sub(root, "loads")
+	ld.zones(root)
+	ld.loads(loads)
+	ld.sizing(ld.sub(root, "sizing"))
+	ld.patternOwners()
+}
+
+func (ld *loader) drawing(t *table) {
+	d := &ld.p.Drawing
+	*d = DrawingSettings{SnapToleranceIn: 1.5, MaxWallThicknessIn: 12}
+	if has(t, "units") {
+		ld.enum(t, "units", &d.Units, unitsValues)
+	} else {
+		ld.get(t, "units", "")
+		ld.p.defaults = append(ld.p.defaults, "drawing.units: from the DXF header ($INSUNITS)")
+	}
+	ld.num(t, "snap_tolerance_in", "in", &d.SnapToleranceIn, positive)
+	ld.num(t, "max_wall_thickness_in", "in", &d.MaxWallThicknessIn, positive)
+	ld.num(t, "edge_distance_in", "in", &d.EdgeDistanceIn, nonNegative)
+}
+
+func (ld *loader) layers(t *table) {
+	l := &ld.p.Layers
+	*l = LayerRoles{
+		Joists: []string{"JOIST*"}, Blocking: []string{"BLOCKING*"},
+		Zones: []string{"LOAD-ZONE*"}, Labels: []string{"FRAMING-NOTE*"},
+	}
+	ld.list(t, "joists", &l.Joists, nil)
+	ld.list(t, "blocking", &l.Blocking, nil)
+	ld.list(t, "zones", &l.Zones, nil)
+	ld.list(t, "labels", &l.Labels, nil)
+}
+
+func (ld *loader) supports(root *table) {
+	elems, ok := ld.arrayTables(root, "support")
+	if !ok {
+		ld.p.Supports = defaultSupports()
+		var s []string
+		for _, sp := range ld.p.Supports {
+			s = append(s, fmt.Sprintf("%s %s (bearing %s in)", fmtList(sp.Layers), sp.Kind, fmtNum(sp.BearingIn)))
+		}
+		ld.p.defaults = append(ld.p.defaults, "[[support]]: none given; "+strings.Join(s, "; "))
+		return
+	}
+	for _, t := range elems {
+		s := Support{Kind: "bearing-wall"}
+		ld.required(t, "layers")
+		ld.list(t, "layers", &s.Layers, nil)
+		ld.enum(t, "kind", &s.Kind, supportKinds)
+		s.BearingIn = defaultBearingIn[s.Kind]
+		ld.num(t, "bearing_in", "in", &s.BearingIn, positive)
+		ld.p.Supports = append(ld.p.Supports, s)
+	}
+}
+
+// has reports whether t gives key, without marking it valid.
+func has(t *table, key string) bool {
+	_, ok := t.m[key]
+	return ok
+}
+
+// required reports a key an array-table element must give.
+func (ld *loader) required(t *table, key string) {
+	if _, ok := t.m[key]; !ok {
+		ld.errs = append(ld.errs, &ProjectError{File: ld.file, Line: lineOf(ld.lines, t.path),
+			Key: displayKey(joinPath(t.path, key)), Msg: "missing: every " + t.show + " table needs it"})
+	}
+}
+
+func (ld *loader) lumber(t *table) {
+	lu := &ld.p.Lumber
+	*lu = Lumber{Species: "Douglas Fir-Larch", Grade: "No.2", Size: "2x10"}
+	ld.text(t, "species", &lu.Species, nil)
+	ld.text(t, "grade", &lu.Grade, nil)
+	ld.text(t, "size", &lu.Size, sizeCheck)
+	elems, _ := ld.arrayTables(t, "by_layer")
+	for _, e := range elems {
+		var o LumberOverride
+		ld.required(e, "layers")
+		ld.list(e, "layers", &o.Layers, nil)
+		ld.text(e, "species", &o.Species, nil)
+		ld.text(e, "grade", &o.Grade, nil)
+		ld.text(e, "size", &o.Size, sizeCheck)
+		if !has(e, "species") && !has(e, "grade") && !has(e, "size") {
+			ld.errorf(e.path, "gives none of species, grade, size; an override needs at least one")
+		}
+		lu.ByLayer = append(lu.ByLayer, o)
+	}
+}
+
+func sizeCheck(s string) string {
+	if validSize(strings.TrimSpace(s)) {
+		return ""
+	}
+	return sizeRule
+}
+
+func (ld *loader) design(t *table) {
+	d := &ld.p.Design
+	*d = Design{TopEdgeBraced: true, Temperature: "normal", Kcr: 1.5,
+		Combinations: Combinations{Standard: StandardASCE716}, PatternLiveLoads: true}
+	ld.boolean(t, "top_edge_braced", &d.TopEdgeBraced)
+	ld.boolean(t, "shear_at_d", &d.ShearAtD)
+	ld.boolean(t, "wet_service", &d.WetService)
+	ld.enum(t, "temperature", &d.Temperature, temperatureValues)
+	ld.boolean(t, "incised", &d.Incised)
+	if !has(t, "kcr") && d.WetService {
+		ld.get(t, "kcr", "")
+		d.Kcr = 2.0
+		ld.p.defaults = append(ld.p.defaults, "design.kcr = 2 (wet service, NDS 2018 §3.5.2)")
+	} else {
+		ld.num(t, "kcr", "creep factor", &d.Kcr, atLeastOne)
+	}
+	ld.boolean(t, "add_self_weight", &d.AddSelfWeight)
+	ld.combinations(t, &d.Combinations)
+	ld.boolean(t, "pattern_live_loads", &d.PatternLiveLoads)
+}
+
+func (ld *loader) combinations(t *table, dst *Combinations) {
+	v, path, ok := ld.get(t, "combinations", "")
+	if !ok {
+		ld.defaulted(t, "combinations", "%q", dst.Standard)
+		return
+	}
+	switch x := v.(type) {
+	case string:
+		if strings.EqualFold(strings.ReplaceAll(x, " ", ""), strings.ReplaceAll(StandardASCE716, " ", "")) {
+			*dst = Combinations{Standard: StandardASCE716}
+			return
+		}
+		ld.errorf(path, "expected %q or a list such as [\"D\", \"D+L\", \"0.6D+0.6W\"], got %q", StandardASCE716, x)
+	case []any:
+		list, msg := stringList(v, nil)
+		if msg != "" {
+			ld.errorf(path, "%s", msg)
+			return
+		}
+		var c Combinations
+		for _, s := range list {
+			lc, msg := parseCombination(s)
+			if msg != "" {
+				ld.errorf(path, "%s", msg)
+				return
+			}
+			c.List = append(c.List, lc)
+		}
+		*dst = c
+	default:
+		ld.errorf(path, "expected %q or an array of strings, got %s", StandardASCE716, describe(v))
+	}
+}
+
+func (ld *loader) zones(root *table) {
+	elems, ok := ld.arrayTables(root, "zone")
+	if !ok {
+		z := defaultZone()
+		ld.p.Zones = []Zone{z}
+		ld.p.defaults = append(ld.p.defaults, fmt.Sprintf(
+			"[[zone]]: none given; one zone %s: %s, D %s psf, L %s psf, ceiling %s, L/%s live, L/%s total",
+			z.Name, z.Use, fmtNum(z.DeadPsf), fmtNum(z.LivePsf), z.Ceiling,
+			fmtNum(z.LiveDeflectionLimit), fmtNum(z.TotalDeflectionLimit)))
+		return
+	}
+	seen := map[string]string{}
+	for i, t := range elems {
+		z := Zone{Use: "floor", Ceiling: "non-plaster"}
+		ld.required(t, "name")
+		ld.text(t, "name", &z.Name, nil)
+		if z.Name != "" {
+			t.label = fmt.Sprintf("[[zone]] %s: ", z.Name)
+			key := strings.ToUpper(z.Name)
+			if prev, dup := seen[key]; dup {
+				ld.errorf(t.path+".name", "zone %q is already defined (line %d); zone names must differ",
+					z.Name, lineOf(ld.lines, prev))
+			}
+			seen[key] = t.path + ".name"
+		} else {
+			t.label = fmt.Sprintf("[[zone]] %d: ", i+1)
+		}
+		ld.enum(t, "use", &z.Use, useValues)
+		if z.Use == "roof" {
+			z.RoofLivePsf = roofLiveDefaultPsf
+		} else {
+			z.LivePsf = floorLiveDefaultPsf
+		}
+		ld.num(t, "dead_psf", "psf", &z.DeadPsf, nonNegative)
+		ld.num(t, "live_psf", "psf", &z.LivePsf, nonNegative)
+		ld.num(t, "roof_live_psf", "psf", &z.RoofLivePsf, nonNegative)
+		ld.num(t, "snow_psf", "psf", &z.SnowPsf, nonNegative)
+		ld.num(t, "wind_down_psf", "psf", &z.WindDownPsf, nonNegative)
+		ld.num(t, "wind_up_psf", "psf", &z.WindUpPsf, nonNegative)
+		ld.enum(t, "ceiling", &z.Ceiling, ceilingValues)
+		ld.boolean(t, "ceiling_braces_bottom", &z.CeilingBracesBottom)
+		z.LiveDeflectionLimit, z.TotalDeflectionLimit = DeflectionLimits(z.Use, z.Ceiling)
+		ld.limit(t, "live_deflection_limit", &z.LiveDeflectionLimit, z)
+		ld.limit(t, "total_deflection_limit", &z.TotalDeflectionLimit, z)
+		ld.p.Zones = append(ld.p.Zones, z)
+	}
+}
+
+// limit reads a deflection limit whose default comes from use and ceiling.
+func (ld *loader) limit(t *table, key string, dst *float64, z Zone) {
+	if has(t, key) {
+		ld.num(t, key, "the n of L/n", dst, deflectionLimit)
+		return
+	}
+	ld.get(t, key, "")
+	why := z.Use
+	if z.Use == "roof" {
+		why = "roof, ceiling " + z.Ceiling
+	}
+	ld.defaulted(t, key, "%s (IBC 2018 Table 1604.3, %s)", fmtNum(*dst), why)
+}
+
+// loads reads [loads] after the zones, so default_zone can be checked.
+func (ld *loader) loads(t *table) {
+	l := &ld.p.Loads
+	names := make([]string, 0, len(ld.p.Zones))
+	for _, z := range ld.p.Zones {
+		if z.Name != "" {
+			names = append(names, fmt.Sprintf("%q", z.Name))
+		}
+	}
+	v, ok := t.m["default_zone"]
+	switch {
+	case ok:
+		ld.text(t, "default_zone", &l.DefaultZone, nil)
+		if _, isStr := v.(string); isStr && l.DefaultZone != "" && ld.p.Zone(l.DefaultZone) == nil && len(names) > 0 {
+			ld.errorf(joinPath(t.path, "default_zone"), "no zone is named %q; expected one of %s", l.DefaultZone, strings.Join(names, ", "))
+		}
+	case len(ld.p.Zones) == 1:
+		ld.get(t, "default_zone", "")
+		l.DefaultZone = ld.p.Zones[0].Name
+		ld.defaulted(t, "default_zone", "%q (the only zone)", l.DefaultZone)
+	case ld.p.Zone("FLOOR") != nil:
+		ld.get(t, "default_zone", "")
+		l.DefaultZone = ld.p.Zone("FLOOR").Name
+		ld.defaulted(t, "default_zone", "%q", l.DefaultZone)
+	case len(names) > 0:
+		ld.get(t, "default_zone", "")
+		ld.errs = append(ld.errs, &ProjectError{File: ld.file, Line: lineOf(ld.lines, t.path),
+			Key: "loads.default_zone", Msg: "missing: with several zones and none named \"FLOOR\", name the zone of " +
+				"members outside every outline; expected one of " + strings.Join(names, ", ")})
+	}
+}
+
+func (ld *loader) sizing(t *table) {
+	s := &ld.p.Sizing
+	*s = Sizing{Candidates: []string{"2x6", "2x8", "2x10", "2x12", "2x14"}, BlockingPieceWeightBf: 2}
+	ld.list(t, "candidates", &s.Candidates, sizeCheck)
+	ld.num(t, "blocking_piece_weight_bf", "board feet", &s.BlockingPieceWeightBf, nonNegative)
+}
+
+// patternOwners reports a layer pattern that belongs to two roles: two
+// [[support]] tables, or a support table and a [layers] role, or two
+// [layers] roles. Patterns compare case-insensitively.
+func (ld *loader) patternOwners() {
+	type owner struct{ role, path string }
+	seen := map[string]owner{}
+	add := func(role, path string, patterns []string) {
+		for _, pat := range patterns {
+			k := strings.ToUpper(pat)
+			if prev, dup := seen[k]; dup {
+				if prev.role == role {
+					continue
+				}
+				at, other := owner{role, path}, prev
+				if !ld.p.given[path] && ld.p.given[prev.path] {
+					at, other = prev, at // report it where the file writes it
+				}
+				where := " (a default)"
+				if ld.p.given[other.path] {
+					where = fmt.Sprintf(" (line %d)", lineOf(ld.lines, other.path))
+				}
+				ld.errorf(at.path, "layer pattern %q is also in %s%s; a pattern belongs to one role", pat, other.role, where)
+				continue
+			}
+			seen[k] = owner{role, path}
+		}
+	}
+	add("layers.joists", "layers.joists", ld.p.Layers.Joists)
+	add("layers.blocking", "layers.blocking", ld.p.Layers.Blocking)
+	add("layers.zones", "layers.zones", ld.p.Layers.Zones)
+	add("layers.labels", "layers.labels", ld.p.Layers.Labels)
+	for i, s := range ld.p.Supports {
+		path := fmt.Sprintf("support[%d].layers", i)
+		add(fmt.Sprintf("[[support]] %d (%s)", i+1, s.Kind), path, s.Layers)
+	}
+}

@@ -1,0 +1,91 @@
+package main
+
+// starterProject is the commented project file `framecheck init` writes.
+// Loaded back it gives exactly DefaultProject(); TestInitRoundTrip keeps
+// it so. Keys that are best left to their computed default (units,
+// deflection limits) and the example override are commented out.
+const starterProject = `# framecheck project file: the designer's inputs for one framing plan.
+#
+# Lengths are inches unless a key says otherwise; area loads are psf.
+# Every plain key may be left out and then takes the value written here.
+# A misspelled or unknown key is an error, never ignored.
+# Check with: framecheck check PLAN.dxf -p framecheck.toml
+
+[drawing]
+# Unit of the drawing's coordinates: in | ft | mm | cm | m.
+# Left out, it comes from the DXF header ($INSUNITS).
+# units = "in"
+snap_tolerance_in = 1.5       # a joist end within this distance of a support bears on it
+max_wall_thickness_in = 12.0  # two parallel support lines closer than this, both crossed: one double-line wall
+edge_distance_in = 0.0        # extra width added to the tributary width of the first and last joist of a run
+
+[layers]
+# Which drawing layers play which part. Patterns ignore case; * matches
+# any run of characters and ? a single one.
+joists = ["JOIST*"]
+blocking = ["BLOCKING*"]      # blocking rows already drawn; they brace the joists they cross
+zones = ["LOAD-ZONE*"]        # closed outlines with the load zone's name written inside
+labels = ["FRAMING-NOTE*"]    # size callouts such as "2x10 @ 16 o.c." and the span lines under them
+
+# One [[support]] table per kind of support. A layer pattern may belong
+# to one table only. Without any [[support]] table, the two below apply.
+[[support]]
+layers = ["WALL*"]
+kind = "bearing-wall"         # bearing-wall | dropped-beam | flush-beam | ledger
+bearing_in = 3.5              # bearing on a single-line support; a double-line wall bears over its thickness
+
+[[support]]
+layers = ["BEAM-FLUSH*"]
+kind = "flush-beam"           # joists framing in here hang in hangers, counted in the takeoff
+bearing_in = 1.5
+
+[lumber]
+# Species, grade and nominal size of every joist unless overridden below.
+species = "Douglas Fir-Larch"
+grade = "No.2"
+size = "2x10"
+
+# Overrides by joist layer: the first table whose patterns match wins and
+# replaces any of species, grade and size it gives. For example:
+# [[lumber.by_layer]]
+# layers = ["JOIST-ROOF*"]
+# size = "2x12"
+
+[design]
+top_edge_braced = true        # the sheathing holds the top edge along its length
+shear_at_d = false            # true: load within d of a bearing face is left out of the design shear
+wet_service = false           # true: wet service factors CM apply
+temperature = "normal"        # normal (to 100 F) | warm (100 to 125 F) | hot (125 to 150 F)
+incised = false               # true: incising factor Ci applies
+kcr = 1.5                     # creep factor for long-term deflection; 2.0 for wet or unseasoned lumber
+add_self_weight = false       # true: add the joist's own weight to D (otherwise dead_psf includes it)
+combinations = "ASCE 7-16"    # the ASD set of ASCE 7-16 2.4.1, or a list: ["D", "D+L", "D+0.75L+0.75S", "0.6D+0.6W"]
+pattern_live_loads = true     # also load live-type loads span by span on continuous and cantilevered joists
+
+[loads]
+default_zone = "FLOOR"        # zone of joists outside every drawn outline (with a single zone, that zone)
+
+# One [[zone]] table per load zone. Without any, the FLOOR zone below
+# applies. Wind loads are strength level; snow as ASCE 7-16 gives it.
+[[zone]]
+name = "FLOOR"
+use = "floor"                 # floor | roof
+dead_psf = 12.0               # D, self-weight included
+live_psf = 40.0               # L, floor live load (a roof zone that leaves it out gets 0)
+roof_live_psf = 0.0           # Lr (a roof zone that leaves it out gets 20)
+snow_psf = 0.0                # S
+wind_down_psf = 0.0           # wind pressure toward the joists
+wind_up_psf = 0.0             # wind suction away from the joists (uplift)
+ceiling = "non-plaster"       # plaster | non-plaster | none
+ceiling_braces_bottom = false # true: a ceiling fastened to the joists braces their bottom edge
+# Deflection limits, the n of L/n; 0 = not checked. Left out, they follow
+# IBC 2018 Table 1604.3 by use and ceiling: floor 360 live / 240 total;
+# roof with plaster ceiling 360/240, other ceiling 240/180, none 180/120.
+# live_deflection_limit = 360
+# total_deflection_limit = 240
+
+[sizing]
+# Used by "framecheck check --size": the sizes tried, smallest first.
+candidates = ["2x6", "2x8", "2x10", "2x12", "2x14"]
+blocking_piece_weight_bf = 2.0  # one blocking piece costs as much as this many board feet of joist
+`
