@@ -105,7 +105,7 @@ func TestEquilibriumRandom(t *testing.T) {
 // (trapezoidal rule twice on a fine grid, independent of the analysis)
 // and checks that the deflected shape through the first two supports also
 // passes through every other support, and that it matches Deflection.
-// Common practice, no source: EI y” = -M and y = 0 at each support.
+// Common practice, no source: EI d2y/dx2 = -M and y = 0 at each support.
 func TestCompatibilityRandom(t *testing.T) {
 	rng := newRand(3, 4)
 	const n = 20000

@@ -39,7 +39,9 @@ func (s *seg) defl(t, invEI float64) float64 {
 // exact piecewise shear (linear), moment (quadratic) and deflection
 // (quartic). Its methods take x in inches from the left end of the beam;
 // x outside [0, LengthIn] is clamped to the nearest end. A Response is
-// read-only after Solve and safe for concurrent readers.
+// read-only after Solve and safe for concurrent readers. The zero
+// Response is an empty one, ready for Beam.SolveInto. A Response may be
+// copied, but copies share storage: SolveInto on one changes the other.
 type Response struct {
 	lengthIn  float64
 	invEI     float64
@@ -80,8 +82,34 @@ func newResponse(m, n int) *Response {
 		return &p.r
 	}
 	r := new(Response)
-	r.reset(m, n)
+	r.attach(newStorage(m, n))
 	return r
+}
+
+// newStorage returns zeroed storage for m segments and n supports, in one
+// allocation for up to 6 segments.
+func newStorage(m, n int) ([]seg, []float64) {
+	switch {
+	case m <= 1 && n <= 2:
+		p := new(struct {
+			s [1]seg
+			f [4]float64
+		})
+		return p.s[:m], p.f[:2*n]
+	case m <= 3 && n <= 4:
+		p := new(struct {
+			s [3]seg
+			f [8]float64
+		})
+		return p.s[:m], p.f[:2*n]
+	case m <= 6 && n <= 7:
+		p := new(struct {
+			s [6]seg
+			f [14]float64
+		})
+		return p.s[:m], p.f[:2*n]
+	}
+	return make([]seg, m), make([]float64, 2*n)
 }
 
 // attach points r at zeroed storage: segs for the segments, f (2n long)
@@ -96,17 +124,12 @@ func (r *Response) attach(segs []seg, f []float64) {
 // large enough, and zeroes every value.
 func (r *Response) reset(m, n int) {
 	r.lengthIn, r.invEI = 0, 0
-	segs := r.segs[:0]
-	if cap(segs) < m {
-		segs = make([]seg, m)
+	if cap(r.segs) < m || cap(r.buf) < 2*n {
+		r.attach(newStorage(m, n))
+		return
 	}
-	segs = segs[:m]
+	segs, f := r.segs[:m], r.buf[:2*n]
 	clear(segs)
-	f := r.buf[:0]
-	if cap(f) < 2*n {
-		f = make([]float64, 2*n)
-	}
-	f = f[:2*n]
 	clear(f)
 	r.attach(segs, f)
 }
@@ -407,8 +430,11 @@ func (s *seg) slopeRoot(p, q, invEI float64) (float64, bool) {
 	if fp == 0 || fq == 0 || (fp > 0) == (fq > 0) {
 		return 0, false
 	}
-	t := (p + q) / 2
-	for it := 0; it < 100; it++ {
+	// Start from the secant (regula falsi) point, then Newton on y' with
+	// y'' = -M/EI, falling back to bisection whenever a step leaves the
+	// bracket; stop when the step is below 1e-13 of the segment.
+	t := p + (q-p)*fp/(fp-fq)
+	for it := 0; it < 60; it++ {
 		f := s.slope(t, invEI)
 		if f == 0 {
 			return t, true
@@ -418,15 +444,13 @@ func (s *seg) slopeRoot(p, q, invEI float64) (float64, bool) {
 		} else {
 			q = t
 		}
-		if q-p <= 1e-12*s.l {
-			break
-		}
-		// Newton step on y' with y'' = -M/EI; fall back to bisection
-		// when it leaves the bracket.
 		d := -s.moment(t) * invEI
 		tn := t - f/d
 		if d == 0 || !(tn > p && tn < q) {
 			tn = (p + q) / 2
+		}
+		if math.Abs(tn-t) <= 1e-13*s.l {
+			return tn, true
 		}
 		t = tn
 	}
