@@ -92,6 +92,14 @@ type Entity struct {
 	RadiusIn float64
 	StartDeg float64
 	EndDeg   float64
+	// RotationDeg is the TEXT/MTEXT baseline direction, degrees
+	// counter-clockwise from world +X.
+	RotationDeg float64
+	// From is the position of the model-space INSERT this entity was
+	// expanded from (the outermost one for nested blocks); the zero Pos
+	// for an entity drawn in model space. Pos then refers to the entity's
+	// definition inside the block.
+	From Pos
 }
 
 // Layer is an entry of the LAYER table.

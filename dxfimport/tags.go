@@ -1,0 +1,237 @@
+package dxfimport
+
+import (
+	"bufio"
+	"bytes"
+	"errors"
+	"io"
+	"math"
+	"strconv"
+)
+
+// Tag is one DXF group: a group code and its value. Line is 1-based, the
+// line of the group code; the value is on Line+1.
+type Tag struct {
+	Code  int
+	Value string
+	Line  int
+}
+
+// binarySentinel starts every binary DXF file.
+const binarySentinel = "AutoCAD Binary DXF"
+
+// TagReader reads ASCII DXF group code / value pairs from a stream. It
+// accepts LF and CRLF line ends and group codes padded with spaces. It
+// keeps the 1-based line number of each pair. It does not buffer the
+// input beyond one bufio block.
+type TagReader struct {
+	br     *bufio.Reader
+	name   string
+	line   int // lines consumed so far
+	value  []byte
+	code   int
+	start  int // line of the last code
+	long   []byte
+	begun  bool
+	sawAny bool
+}
+
+// NewTagReader returns a TagReader reading from r; name is used in errors.
+func NewTagReader(r io.Reader, name string) *TagReader {
+	return &TagReader{br: bufio.NewReaderSize(r, 64<<10), name: name}
+}
+
+// Next returns the next pair, or io.EOF after the last one. Any other
+// error is a *ParseError.
+func (t *TagReader) Next() (Tag, error) {
+	if err := t.next(); err != nil {
+		return Tag{}, err
+	}
+	return Tag{Code: t.code, Value: string(t.value), Line: t.start}, nil
+}
+
+// errAt returns a ParseError at line with code.
+func (t *TagReader) errAt(line, code int, err error) *ParseError {
+	if line < 1 {
+		line = 1
+	}
+	return &ParseError{File: t.name, Line: line, Code: code, Err: err}
+}
+
+// readLine returns the next line without its line end. The slice is valid
+// until the next call. At end of input it returns io.EOF.
+func (t *TagReader) readLine() ([]byte, error) {
+	b, err := t.br.ReadSlice('\n')
+	if err == bufio.ErrBufferFull {
+		t.long = append(t.long[:0], b...)
+		for err == bufio.ErrBufferFull {
+			if len(t.long) > MaxLineBytes {
+				return nil, t.errAt(t.line+1, -1, wrapf(ErrLineTooLong, "more than %d bytes", MaxLineBytes))
+			}
+			b, err = t.br.ReadSlice('\n')
+			t.long = append(t.long, b...)
+		}
+		b = t.long
+	}
+	if err != nil && err != io.EOF {
+		return nil, err
+	}
+	if len(b) == 0 && err == io.EOF {
+		return nil, io.EOF
+	}
+	t.line++
+	if n := len(b); n > 0 && b[n-1] == '\n' {
+		b = b[:n-1]
+	}
+	if n := len(b); n > 0 && b[n-1] == '\r' {
+		b = b[:n-1]
+	}
+	return b, nil
+}
+
+// sniff refuses binary DXF, DWG and empty input before the first pair.
+func (t *TagReader) sniff() error {
+	head, _ := t.br.Peek(len(binarySentinel))
+	if bytes.HasPrefix(head, []byte(binarySentinel)) {
+		return t.errAt(1, -1, ErrBinary)
+	}
+	if len(head) >= 6 && bytes.HasPrefix(head, []byte("AC10")) && isDigit(head[4]) && isDigit(head[5]) {
+		return t.errAt(1, -1, wrapf(ErrDWG, "file starts with %q", head[:6]))
+	}
+	return nil
+}
+
+func isDigit(c byte) bool { return c >= '0' && c <= '9' }
+
+// next reads one pair into t.code, t.value (bytes, valid until the next
+// call) and t.start.
+func (t *TagReader) next() error {
+	if !t.begun {
+		t.begun = true
+		if err := t.sniff(); err != nil {
+			return err
+		}
+	}
+	var cl []byte
+	var err error
+	for {
+		cl, err = t.readLine()
+		if err == io.EOF {
+			if !t.sawAny {
+				return t.errAt(1, -1, ErrEmpty)
+			}
+			return io.EOF
+		}
+		if err != nil {
+			return err
+		}
+		// Blank lines at the very end of a file (after EOF) are common;
+		// a blank code line elsewhere is an error, found below.
+		if t.sawAny || len(bytes.TrimSpace(cl)) > 0 {
+			break
+		}
+	}
+	t.start = t.line
+	code, ok := parseCode(cl)
+	if !ok {
+		if len(bytes.TrimSpace(cl)) == 0 {
+			// Trailing white space after the last pair is harmless.
+			if t.restIsBlank() {
+				return io.EOF
+			}
+		}
+		return t.errAt(t.start, -1, wrapf(ErrBadCode, "want an integer group code, got %q", clip(cl)))
+	}
+	t.sawAny = true
+	t.code = code
+	v, err := t.readLine()
+	if err == io.EOF {
+		return t.errAt(t.start, code, wrapf(ErrTruncated, "group code %d has no value line", code))
+	}
+	if err != nil {
+		return err
+	}
+	t.value = v
+	return nil
+}
+
+// restIsBlank consumes the rest of the input and reports whether it is
+// only white space.
+func (t *TagReader) restIsBlank() bool {
+	for {
+		l, err := t.readLine()
+		if err != nil {
+			return errors.Is(err, io.EOF)
+		}
+		if len(bytes.TrimSpace(l)) > 0 {
+			return false
+		}
+	}
+}
+
+// parseCode parses a group-code line: an integer in -5..1071 with optional
+// surrounding spaces.
+func parseCode(b []byte) (int, bool) {
+	i, j := 0, len(b)
+	for i < j && (b[i] == ' ' || b[i] == '\t') {
+		i++
+	}
+	for j > i && (b[j-1] == ' ' || b[j-1] == '\t') {
+		j--
+	}
+	if i == j || j-i > 5 {
+		return 0, false
+	}
+	neg := false
+	if b[i] == '-' {
+		neg = true
+		i++
+		if i == j {
+			return 0, false
+		}
+	}
+	n := 0
+	for ; i < j; i++ {
+		c := b[i]
+		if !isDigit(c) {
+			return 0, false
+		}
+		n = n*10 + int(c-'0')
+	}
+	if neg {
+		n = -n
+	}
+	if n < -5 || n > 1071 {
+		return 0, false
+	}
+	return n, true
+}
+
+// clip shortens b for an error message.
+func clip(b []byte) string {
+	if len(b) > 40 {
+		return string(b[:40]) + "..."
+	}
+	return string(b)
+}
+
+// parseFloat parses a finite numeric value, allowing surrounding spaces.
+func parseFloat(b []byte) (float64, bool) {
+	b = bytes.TrimSpace(b)
+	f, err := strconv.ParseFloat(string(b), 64)
+	if err != nil || math.IsNaN(f) || math.IsInf(f, 0) {
+		return 0, false
+	}
+	return f, true
+}
+
+// parseInt parses an integer value, allowing surrounding spaces. Some
+// writers put a float such as "1.0" in an integer group; that is refused.
+func parseInt(b []byte) (int, bool) {
+	b = bytes.TrimSpace(b)
+	n, err := strconv.ParseInt(string(b), 10, 64)
+	if err != nil || n > 1<<31-1 || n < -(1<<31) {
+		return 0, false
+	}
+	return int(n), true
+}
