@@ -1,0 +1,304 @@
+package framing
+
+import (
+	"fmt"
+	"math"
+	"sort"
+
+	"framecheck/dxfimport"
+)
+
+// minBearingAngleDeg: a support line within this angle of a joist's
+// direction runs along the joist rather than under it and is not a bearing
+// (common practice, no source).
+const minBearingAngleDeg = 10
+
+// sameLineIn: two support lines met closer than this along a joist are one
+// line drawn twice or in pieces, not a double-line wall.
+const sameLineIn = 0.5
+
+type hit struct {
+	t      float64 // along the member from Start
+	sup    int
+	sin    float64 // sine of the joist-support angle
+	direct bool    // crossed, or reached within the snap tolerance
+}
+
+// findBearings finds each member's supports through a grid over the
+// support lines, merges double-line walls and sets spans, overhangs,
+// hangers and errors.
+func (g *grouper) findBearings() {
+	p := g.plan
+	if len(g.sups) > 0 {
+		lo, hi, typ := bounds(g.sups)
+		g.supIdx = newSegIndex(lo, hi, len(g.sups), typ)
+		for i, s := range g.sups {
+			g.supIdx.insert(i, s.a, s.b, 0)
+		}
+	}
+	merged := map[[2]int]bool{}
+	minSin := math.Sin(minBearingAngleDeg * math.Pi / 180)
+	var hits []hit
+	for k := range p.Members {
+		m := &p.Members[k]
+		hits = g.supportHits(k, minSin, hits[:0])
+		m.Bearings, g.bdirs[k] = g.bearingsFrom(hits, merged)
+		g.finishBearings(k)
+	}
+	g.buildSupports(merged)
+}
+
+// bounds returns the bounding box and mean length of segments.
+func bounds(segs []segItem) (lo, hi Point, meanLen float64) {
+	lo = Point{X: math.Inf(1), Y: math.Inf(1)}
+	hi = Point{X: math.Inf(-1), Y: math.Inf(-1)}
+	for _, s := range segs {
+		for _, q := range []Point{s.a, s.b} {
+			lo.X, lo.Y = math.Min(lo.X, q.X), math.Min(lo.Y, q.Y)
+			hi.X, hi.Y = math.Max(hi.X, q.X), math.Max(hi.Y, q.Y)
+		}
+		meanLen += dist(s.a, s.b)
+	}
+	return lo, hi, meanLen / float64(max(len(segs), 1))
+}
+
+// supportHits lists the support lines member k crosses or reaches, plus
+// the "outer" lines just past an end that may be the far face of a
+// double-line wall the end stops inside.
+func (g *grouper) supportHits(k int, minSin float64, hits []hit) []hit {
+	if g.supIdx == nil {
+		return hits
+	}
+	m := &g.plan.Members[k]
+	u := g.plan.dirs[k]
+	tol, wall := g.opt.SnapToleranceIn, g.opt.MaxWallThicknessIn
+	L := m.LengthIn
+	g.supIdx.query(m.Start, m.End, tol+wall, func(s int) {
+		sg := &g.sups[s]
+		t, _, sin, ok := segParams(m.Start, u, sg.a, sg.b)
+		if !ok || sin < minSin {
+			return
+		}
+		if distPointSeg(lerp(m.Start, u, t), sg.a, sg.b) > tol {
+			return // passes beyond the support's drawn end
+		}
+		de := 0.0
+		switch {
+		case t < 0:
+			de = distPointSeg(m.Start, sg.a, sg.b)
+		case t > L:
+			de = distPointSeg(m.End, sg.a, sg.b)
+		}
+		if de > tol+wall {
+			return
+		}
+		hits = append(hits, hit{t: t, sup: s, sin: sin, direct: de <= tol})
+	})
+	sort.Slice(hits, func(i, j int) bool {
+		if hits[i].t != hits[j].t {
+			return hits[i].t < hits[j].t
+		}
+		return hits[i].sup < hits[j].sup
+	})
+	return hits
+}
+
+func (g *grouper) parallelSupports(a, b int) bool {
+	sa, sb := &g.sups[a], &g.sups[b]
+	if g.opt.Supports[sa.spec].Kind != g.opt.Supports[sb.spec].Kind {
+		return false
+	}
+	c := math.Abs(cross(unit(sub(sa.b, sa.a)), unit(sub(sb.b, sb.a))))
+	return c <= math.Sin(g.opt.AngleTolDeg*math.Pi/180)+1e-12
+}
+
+// bearingsFrom turns sorted hits into bearings, merging double-line walls,
+// and returns each bearing's support direction for run matching.
+func (g *grouper) bearingsFrom(hits []hit, merged map[[2]int]bool) ([]Bearing, []Point) {
+	var direct, outer []hit
+	for _, h := range hits {
+		if h.direct {
+			if n := len(direct); n > 0 && (h.t-direct[n-1].t)*h.sin < sameLineIn {
+				continue // same line drawn twice or in pieces
+			}
+			direct = append(direct, h)
+		} else {
+			outer = append(outer, h)
+		}
+	}
+	if len(direct) == 0 {
+		return nil, nil
+	}
+	wall := g.opt.MaxWallThicknessIn
+	pair := func(a, b hit) bool {
+		sep := math.Abs(b.t-a.t) * a.sin
+		return sep >= sameLineIn && sep <= wall+1e-9 && g.parallelSupports(a.sup, b.sup)
+	}
+	var bs []Bearing
+	var dirs []Point
+	single := func(h hit) {
+		sp := g.opt.Supports[g.sups[h.sup].spec]
+		bs = append(bs, Bearing{AtIn: h.t, LengthIn: sp.BearingIn, Kind: sp.Kind, Pos: g.sups[h.sup].pos})
+		dirs = append(dirs, unit(sub(g.sups[h.sup].b, g.sups[h.sup].a)))
+	}
+	double := func(a, b hit) {
+		if a.t > b.t {
+			a, b = b, a
+		}
+		sp := g.opt.Supports[g.sups[a.sup].spec]
+		bs = append(bs, Bearing{AtIn: (a.t + b.t) / 2, LengthIn: (b.t - a.t) * a.sin, Kind: sp.Kind, Pos: g.sups[a.sup].pos})
+		lo, hi := min(a.sup, b.sup), max(a.sup, b.sup)
+		merged[[2]int{lo, hi}] = true
+		dirs = append(dirs, unit(sub(g.sups[a.sup].b, g.sups[a.sup].a)))
+	}
+	// an end stopping inside a double-line wall: pair the outermost direct
+	// line with the nearest outer line beyond that end
+	var startOuter, endOuter *hit
+	for i := range outer {
+		h := &outer[i]
+		if h.t < 0 && pair(*h, direct[0]) {
+			startOuter = h // last one wins: nearest the start
+		}
+		if h.t > 0 && endOuter == nil && pair(direct[len(direct)-1], *h) {
+			endOuter = h
+		}
+	}
+	for i := 0; i < len(direct); i++ {
+		switch {
+		case i == 0 && startOuter != nil:
+			double(*startOuter, direct[0])
+		case i == len(direct)-1 && endOuter != nil && !(i == 0 && startOuter != nil):
+			double(direct[i], *endOuter)
+		case i+1 < len(direct) && pair(direct[i], direct[i+1]):
+			double(direct[i], direct[i+1])
+			i++
+		default:
+			single(direct[i])
+		}
+	}
+	return bs, dirs
+}
+
+// finishBearings sets overhangs, hangers and the no-support error.
+func (g *grouper) finishBearings(k int) {
+	m := &g.plan.Members[k]
+	tol := g.opt.SnapToleranceIn
+	bs := m.Bearings
+	if len(bs) < 2 {
+		g.noSupport(k)
+		return
+	}
+	first, last := bs[0], bs[len(bs)-1]
+	if first.AtIn > first.LengthIn/2+tol {
+		m.OverhangStartIn = first.AtIn
+	} else if first.Kind == KindFlushBeam {
+		m.HangersStart = true
+	}
+	if rest := m.LengthIn - last.AtIn; rest > last.LengthIn/2+tol {
+		m.OverhangEndIn = rest
+	} else if last.Kind == KindFlushBeam {
+		m.HangersEnd = true
+	}
+}
+
+// noSupport marks member k as an error, naming the end with no support
+// and how far the nearest support line is from it.
+func (g *grouper) noSupport(k int) {
+	m := &g.plan.Members[k]
+	m.Error = true
+	own := map[string]bool{}
+	for _, b := range m.Bearings {
+		own[b.Pos.Handle+"|"+fmt.Sprint(b.Pos.Line)] = true
+	}
+	var ends []string
+	switch {
+	case len(m.Bearings) == 0:
+		ends = []string{"start", "end"}
+	case m.Bearings[0].AtIn > m.LengthIn/2:
+		ends = []string{"start"}
+	default:
+		ends = []string{"end"}
+	}
+	for _, e := range ends {
+		p := m.Start
+		if e == "end" {
+			p = m.End
+		}
+		msg := fmt.Sprintf("%s %s (%.2f, %.2f) reaches no support", m.ID, e, p.X, p.Y)
+		if d, s, ok := g.nearestSupport(p, own); ok {
+			msg += fmt.Sprintf("; nearest support is %.1f in away (%s)", d, s.pos)
+		} else {
+			msg += fmt.Sprintf("; no support within %.0f ft", nearestSearchIn/12)
+		}
+		m.Messages = append(m.Messages, msg)
+		g.plan.Issues.Add(m.Pos, CodeNoSupport, dxfimport.SevError, "%s", msg)
+	}
+}
+
+// nearestSearchIn bounds the search for the nearest support in messages.
+const nearestSearchIn = 1536.0
+
+func (g *grouper) nearestSupport(p Point, skip map[string]bool) (float64, *segItem, bool) {
+	if g.supIdx == nil {
+		return 0, nil, false
+	}
+	for r := 24.0; r <= nearestSearchIn; r *= 4 {
+		best, bi := math.Inf(1), -1
+		g.supIdx.query(p, p, r, func(s int) {
+			sg := &g.sups[s]
+			if skip[sg.pos.Handle+"|"+fmt.Sprint(sg.pos.Line)] {
+				return
+			}
+			if d := distPointSeg(p, sg.a, sg.b); d < best {
+				best, bi = d, s
+			}
+		})
+		if bi >= 0 && best <= r {
+			return best, &g.sups[bi], true
+		}
+	}
+	return 0, nil, false
+}
+
+// buildSupports lists the support lines for the outputs: each merged pair
+// once on its mid-line over the length both lines share, every other line
+// as drawn.
+func (g *grouper) buildSupports(merged map[[2]int]bool) {
+	used := make([]bool, len(g.sups))
+	pairs := make([][2]int, 0, len(merged))
+	for pr := range merged {
+		pairs = append(pairs, pr)
+		used[pr[0]], used[pr[1]] = true, true
+	}
+	sort.Slice(pairs, func(i, j int) bool {
+		if pairs[i][0] != pairs[j][0] {
+			return pairs[i][0] < pairs[j][0]
+		}
+		return pairs[i][1] < pairs[j][1]
+	})
+	p := g.plan
+	for i, s := range g.sups {
+		if used[i] {
+			continue
+		}
+		sp := g.opt.Supports[s.spec]
+		p.Supports = append(p.Supports, Support{Kind: sp.Kind, A: s.a, B: s.b, BearingIn: sp.BearingIn, Pos: s.pos})
+	}
+	for _, pr := range pairs {
+		s1, s2 := g.sups[pr[0]], g.sups[pr[1]]
+		u := unit(sub(s1.b, s1.a))
+		nrm := rot90(u)
+		off := dot(sub(s2.a, s1.a), nrm)
+		base := add(s1.a, scale(nrm, off/2))
+		t1, t2 := dot(sub(s2.a, s1.a), u), dot(sub(s2.b, s1.a), u)
+		lo, hi := math.Max(0, math.Min(t1, t2)), math.Min(dist(s1.a, s1.b), math.Max(t1, t2))
+		if lo > hi {
+			lo, hi = math.Min(0, math.Min(t1, t2)), math.Max(dist(s1.a, s1.b), math.Max(t1, t2))
+		}
+		th := math.Abs(off)
+		p.Supports = append(p.Supports, Support{
+			Kind: g.opt.Supports[s1.spec].Kind, A: lerp(base, u, lo), B: lerp(base, u, hi),
+			BearingIn: th, Double: true, ThicknessIn: th, Pos: s1.pos, PosB: s2.pos,
+		})
+	}
+}

@@ -1,0 +1,211 @@
+package framing
+
+import (
+	"errors"
+	"fmt"
+	"math"
+	"regexp"
+	"sort"
+	"strconv"
+	"strings"
+
+	"framecheck/dxfimport"
+)
+
+// calloutRE matches a size callout: nominal size, then optionally "@" or
+// "at", a spacing, an inch mark and "o.c." in any of the usual spellings.
+var calloutRE = regexp.MustCompile(`(?i)^(\d+)\s*[x×]\s*(\d+)(?:\s*(?:joists?|rafters?))?` +
+	`(?:\s*(?:@|at)\s*(\d+(?:\.\d+)?|\.\d+)\s*(?:"|''|in\.?|inch(?:es)?)?\s*(?:o\.?\s*c\.?)?)?$`)
+
+// ErrBadCallout is the cause of every ParseCallout error.
+var ErrBadCallout = errors.New("not a size callout")
+
+// ParseCallout reads a size callout such as `2x10 @ 16" o.c.`, `2X12@12`
+// or `2x8 at 19.2 in. oc` and returns the nominal size ("2x10") and the
+// spacing in inches (0 when the callout gives only a size). Nominal
+// thickness must be 2, 3 or 4 in and depth 2 to 16 in, no less than the
+// thickness; spacing must be above 0 and at most 48 in.
+func ParseCallout(s string) (size string, spacingIn float64, err error) {
+	t := strings.Join(strings.Fields(s), " ")
+	t = strings.NewReplacer("”", `"`, "″", `"`, "“", `"`, "\u00a0", " ").Replace(t)
+	sm := calloutRE.FindStringSubmatch(t)
+	if sm == nil {
+		return "", 0, fmt.Errorf("%w: %q (want a form like 2x10 @ 16\" o.c.)", ErrBadCallout, s)
+	}
+	b, _ := strconv.Atoi(sm[1])
+	d, _ := strconv.Atoi(sm[2])
+	if b < 2 || b > 4 || d < 2 || d > 16 || d < b {
+		return "", 0, fmt.Errorf("%w: %q: nominal size %dx%d is not dimension lumber (2-4 x 2-16 in)", ErrBadCallout, s, b, d)
+	}
+	if sm[3] != "" {
+		spacingIn, _ = strconv.ParseFloat(sm[3], 64)
+		if spacingIn <= 0 || spacingIn > 48 {
+			return "", 0, fmt.Errorf("%w: %q: spacing %g in is outside 0-48 in", ErrBadCallout, s, spacingIn)
+		}
+	}
+	return fmt.Sprintf("%dx%d", b, d), spacingIn, nil
+}
+
+type callout struct {
+	size      string
+	spacingIn float64
+	text      string
+	pos       dxfimport.Pos
+}
+
+// assignLumber gives each member its by-layer or default lumber, then
+// applies the size callouts.
+func (g *grouper) assignLumber() {
+	p := g.plan
+	for k := range p.Members {
+		m := &p.Members[k]
+		m.Species, m.Grade, m.Size = g.opt.lumberFor(m.Layer)
+	}
+	if len(g.labelTexts) == 0 {
+		return
+	}
+	got := make(map[int][]callout)
+	for _, t := range g.labelTexts {
+		size, sp, err := ParseCallout(t.text)
+		if err != nil {
+			g.warn(t.pos, CodeBadCallout, "label text is not a size callout: %v", err)
+			continue
+		}
+		c := callout{size, sp, strings.TrimSpace(t.text), t.pos}
+		ms := g.calloutMembers(t)
+		if len(ms) == 0 {
+			g.warn(t.pos, CodeCalloutUnused, "callout %q reaches no joist: no span line under it and no joist near it", c.text)
+		}
+		for _, k := range ms {
+			got[k] = append(got[k], c)
+		}
+	}
+	ks := make([]int, 0, len(got))
+	for k := range got {
+		ks = append(ks, k)
+	}
+	sort.Ints(ks)
+	for _, k := range ks {
+		g.applyCallouts(k, got[k])
+	}
+}
+
+// calloutReachIn is how far a callout text may sit from its span line:
+// three text heights, at least 12 in (common practice, no source).
+func calloutReachIn(t textItem) float64 { return math.Max(12, 3*t.heightIn) }
+
+// calloutMembers returns the joists a callout applies to: those crossed by
+// the nearest label line within reach, else the run of the joist the text
+// lies over (within 24 in).
+func (g *grouper) calloutMembers(t textItem) []int {
+	best, bi := calloutReachIn(t), -1
+	for i, l := range g.labelLines {
+		if d := distPointSeg(t.p, l.a, l.b); d <= best {
+			best, bi = d, i
+		}
+	}
+	idx := g.memberIndex()
+	if idx == nil {
+		return nil
+	}
+	p := g.plan
+	var out []int
+	if bi >= 0 {
+		l := g.labelLines[bi]
+		idx.query(l.a, l.b, g.opt.SnapToleranceIn, func(k int) {
+			if _, ok := g.crossAt(k, l.a, l.b); ok {
+				out = append(out, k)
+			}
+		})
+		sort.Ints(out)
+		return out
+	}
+	nearest, nk := 24.0, -1
+	idx.query(t.p, t.p, nearest, func(k int) {
+		m := &p.Members[k]
+		if d := distPointSeg(t.p, m.Start, m.End); d <= nearest {
+			nearest, nk = d, k
+		}
+	})
+	if nk < 0 {
+		return nil
+	}
+	return append(out, p.Runs[p.Members[nk].Run].Members...)
+}
+
+// crossAt returns where segment ab crosses member k, along the member from
+// Start, when it does (within the snap tolerance of either's ends and at
+// least minBearingAngleDeg from parallel).
+func (g *grouper) crossAt(k int, a, b Point) (float64, bool) {
+	m := &g.plan.Members[k]
+	u := g.plan.dirs[k]
+	t, _, sin, ok := segParams(m.Start, u, a, b)
+	tol := g.opt.SnapToleranceIn
+	if !ok || sin < math.Sin(minBearingAngleDeg*math.Pi/180) || t < -tol || t > m.LengthIn+tol {
+		return 0, false
+	}
+	if distPointSeg(lerp(m.Start, u, t), a, b) > tol {
+		return 0, false
+	}
+	return t, true
+}
+
+func (g *grouper) memberIndex() *segIndex {
+	p := g.plan
+	if g.memIdx == nil && len(p.Members) > 0 {
+		segs := make([]segItem, len(p.Members))
+		for k, m := range p.Members {
+			segs[k] = segItem{a: m.Start, b: m.End}
+		}
+		lo, hi, typ := bounds(segs)
+		g.memIdx = newSegIndex(lo, hi, len(segs), typ)
+		for k, s := range segs {
+			g.memIdx.insert(k, s.a, s.b, 0)
+		}
+	}
+	return g.memIdx
+}
+
+func (g *grouper) applyCallouts(k int, cs []callout) {
+	m := &g.plan.Members[k]
+	c0 := cs[0]
+	for _, c := range cs[1:] {
+		if c.size != c0.size || c.spacingIn != c0.spacingIn {
+			m.Error = true
+			msg := fmt.Sprintf("%s has conflicting size callouts %q (%s) and %q (%s); resolve the drawing",
+				m.ID, c0.text, c0.pos, c.text, c.pos)
+			m.Messages = append(m.Messages, msg)
+			g.plan.Issues.Add(m.Pos, CodeCalloutConflict, dxfimport.SevError, "%s", msg)
+			return
+		}
+	}
+	m.Size, m.CalloutSpacingIn = c0.size, c0.spacingIn
+	if c0.spacingIn > 0 && m.SpacingIn > 0 && math.Abs(m.SpacingIn-c0.spacingIn) > 1 {
+		msg := fmt.Sprintf("%s: callout %q says %g in o.c. but the drawing measures %.2f in",
+			m.ID, c0.text, c0.spacingIn, m.SpacingIn)
+		m.Messages = append(m.Messages, msg)
+		g.warn(m.Pos, CodeCalloutSpacing, "%s", msg)
+	}
+}
+
+// existingBlocking records where drawn blocking lines cross each member.
+func (g *grouper) existingBlocking() {
+	if len(g.blocking) == 0 {
+		return
+	}
+	idx := g.memberIndex()
+	if idx == nil {
+		return
+	}
+	p := g.plan
+	for _, b := range g.blocking {
+		idx.query(b.a, b.b, g.opt.SnapToleranceIn, func(k int) {
+			if t, ok := g.crossAt(k, b.a, b.b); ok {
+				p.Members[k].ExistingBlockingAtIn = append(p.Members[k].ExistingBlockingAtIn, t)
+			}
+		})
+	}
+	for k := range p.Members {
+		sort.Float64s(p.Members[k].ExistingBlockingAtIn)
+	}
+}

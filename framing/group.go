@@ -1,0 +1,409 @@
+package framing
+
+import (
+	"fmt"
+	"math"
+	"sort"
+
+	"framecheck/dxfimport"
+)
+
+// Issue codes framing reports (FRM2xx, geometry). See doc.go.
+const (
+	CodeBentJoist       = "FRM201" // joist polyline bent or with arcs: skipped
+	CodeZeroLength      = "FRM202" // zero-length joist: skipped
+	CodeDuplicateJoist  = "FRM203" // joist drawn twice: kept once
+	CodeNoSupport       = "FRM204" // an end reaches no support: error member
+	CodeNoZone          = "FRM205" // member outside every zone, no default zone
+	CodeZoneEnvelope    = "FRM206" // member crosses zone edges: envelope of zones
+	CodeZoneName        = "FRM207" // zone outline without a name, or with two
+	CodeBadCallout      = "FRM208" // label text that is not a size callout
+	CodeCalloutConflict = "FRM209" // two callouts disagree on one joist
+	CodeCalloutSpacing  = "FRM210" // callout spacing differs from measured by > 1 in
+	CodeCalloutUnused   = "FRM211" // callout that reaches no joist
+	CodeNoNeighbour     = "FRM212" // joist with no parallel neighbour
+	CodeArcSegment      = "FRM213" // arc segment on a support, blocking or label layer: skipped
+)
+
+type segItem struct {
+	a, b Point
+	spec int // SupportSpec index, supports only
+	pos  dxfimport.Pos
+}
+
+type textItem struct {
+	p        Point
+	text     string
+	heightIn float64
+	pos      dxfimport.Pos
+}
+
+type polyItem struct {
+	pts []Point
+	pos dxfimport.Pos
+}
+
+// grouper holds the working state of one Group call.
+type grouper struct {
+	opt  Options
+	plan *Plan
+
+	joists     []segItem
+	sups       []segItem
+	blocking   []segItem
+	labelLines []segItem
+	labelTexts []textItem
+	zoneTexts  []textItem
+	zonePolys  []polyItem
+
+	// per member, parallel to plan.Members
+	grp    []int
+	a0, a1 []float64 // extent along the group direction
+	bdirs  [][]Point // per bearing: unit direction of its support line (runs compare them)
+	lo, hi []int     // neighbour at smaller / larger across offset, -1 when none
+	groups []dirGroup
+
+	supIdx *segIndex
+	memIdx *segIndex
+}
+
+type dirGroup struct {
+	u, n Point // direction and across-normal (n.X > 0, or n.Y > 0 when n.X == 0)
+}
+
+// Group turns an imported drawing into members. It never fails: problems
+// are in Plan.Issues and on the members (Error, Messages).
+func Group(d *dxfimport.Drawing, opt Options) *Plan {
+	g := &grouper{opt: opt, plan: &Plan{Ignored: map[string]int{}}}
+	g.classify(d)
+	g.makeMembers()
+	g.findBearings()
+	g.neighbours()
+	g.makeRuns()
+	g.assignZones()
+	g.assignLumber()
+	g.existingBlocking()
+	return g.plan
+}
+
+func (g *grouper) warn(pos dxfimport.Pos, code string, format string, args ...any) {
+	g.plan.Issues.Add(pos, code, dxfimport.SevWarning, format, args...)
+}
+
+// classify sorts the entities by the role of their layer.
+func (g *grouper) classify(d *dxfimport.Drawing) {
+	roles := map[string][2]int{}
+	for _, e := range d.Entities {
+		layer := e.Pos.Layer
+		rs, ok := roles[layer]
+		if !ok {
+			r, spec := g.opt.layerRole(layer)
+			rs = [2]int{int(r), spec}
+			roles[layer] = rs
+		}
+		r, spec := role(rs[0]), rs[1]
+		used := true
+		switch r {
+		case roleNone:
+			g.plan.Ignored[layer]++
+			continue
+		case roleJoist:
+			used = g.addJoist(e)
+		case roleSupport:
+			used = g.addSegments(e, spec, &g.sups)
+		case roleBlocking:
+			used = g.addSegments(e, -1, &g.blocking)
+		case roleLabel:
+			if isText(e) {
+				g.labelTexts = append(g.labelTexts, textItem{e.Points[0], e.Text, e.HeightIn, e.Pos})
+			} else {
+				used = g.addSegments(e, -1, &g.labelLines)
+			}
+		case roleZone:
+			used = g.addZone(e)
+		}
+		if !used {
+			g.plan.Ignored[fmt.Sprintf("%s (%s)", layer, e.Kind)]++
+		}
+	}
+}
+
+func isText(e dxfimport.Entity) bool {
+	return (e.Kind == dxfimport.KindText || e.Kind == dxfimport.KindMText) && len(e.Points) > 0
+}
+
+func isPoly(e dxfimport.Entity) bool {
+	return e.Kind == dxfimport.KindLWPolyline || e.Kind == dxfimport.KindPolyline
+}
+
+// collinearTolIn is how far a polyline vertex may sit off the line through
+// its extreme vertices and still count as straight (drafting noise).
+const collinearTolIn = 0.1
+
+func (g *grouper) addJoist(e dxfimport.Entity) bool {
+	var a, b Point
+	switch {
+	case e.Kind == dxfimport.KindLine && len(e.Points) == 2:
+		a, b = e.Points[0], e.Points[1]
+	case isPoly(e) && len(e.Points) >= 2:
+		for _, bu := range e.Bulges {
+			if bu != 0 {
+				g.warn(e.Pos, CodeBentJoist, "joist polyline has an arc segment; skipped")
+				return true
+			}
+		}
+		var ok bool
+		a, b, ok = straightPolyline(e.Points, e.Closed)
+		if !ok {
+			g.warn(e.Pos, CodeBentJoist, "joist polyline with %d vertices is not straight; skipped", len(e.Points))
+			return true
+		}
+	default:
+		return false
+	}
+	if dist(a, b) < 1e-6 {
+		g.warn(e.Pos, CodeZeroLength, "zero-length joist at (%.2f, %.2f); skipped", a.X, a.Y)
+		return true
+	}
+	g.joists = append(g.joists, segItem{a: a, b: b, pos: e.Pos})
+	return true
+}
+
+// straightPolyline returns the extreme vertices of a polyline whose
+// vertices all lie on one line, going one way; ok is false otherwise.
+func straightPolyline(pts []Point, closed bool) (a, b Point, ok bool) {
+	a = pts[0]
+	far := 0.0
+	for _, p := range pts {
+		if d := dist(a, p); d > far {
+			far, b = d, p
+		}
+	}
+	if far == 0 {
+		return a, a, true
+	}
+	u := unit(sub(b, a))
+	last := -1.0
+	for _, p := range pts {
+		w := sub(p, a)
+		if math.Abs(cross(u, w)) > collinearTolIn {
+			return a, b, false
+		}
+		t := dot(u, w)
+		if t < last-collinearTolIn { // doubles back
+			return a, b, false
+		}
+		last = t
+	}
+	if closed && len(pts) > 2 {
+		return a, b, false
+	}
+	return a, b, true
+}
+
+// addSegments appends the straight segments of a LINE or polyline.
+func (g *grouper) addSegments(e dxfimport.Entity, spec int, dst *[]segItem) bool {
+	switch {
+	case e.Kind == dxfimport.KindLine && len(e.Points) == 2:
+		*dst = append(*dst, segItem{e.Points[0], e.Points[1], spec, e.Pos})
+	case isPoly(e) && len(e.Points) >= 2:
+		n := len(e.Points)
+		segs := n - 1
+		if e.Closed {
+			segs = n
+		}
+		for i := 0; i < segs; i++ {
+			a, b := e.Points[i], e.Points[(i+1)%n]
+			if i < len(e.Bulges) && e.Bulges[i] != 0 {
+				g.warn(e.Pos, CodeArcSegment, "arc segment %d of the polyline skipped: only straight segments are used", i+1)
+				continue
+			}
+			if dist(a, b) > 1e-6 {
+				*dst = append(*dst, segItem{a, b, spec, e.Pos})
+			}
+		}
+	default:
+		return false
+	}
+	return true
+}
+
+func (g *grouper) addZone(e dxfimport.Entity) bool {
+	switch {
+	case isText(e):
+		g.zoneTexts = append(g.zoneTexts, textItem{e.Points[0], e.Text, e.HeightIn, e.Pos})
+	case isPoly(e) && len(e.Points) >= 3:
+		pts := append([]Point(nil), e.Points...)
+		if !e.Closed {
+			if dist(pts[0], pts[len(pts)-1]) > g.opt.SnapToleranceIn {
+				g.warn(e.Pos, CodeZoneName, "zone polyline is not closed; skipped")
+				return true
+			}
+		}
+		if dist(pts[0], pts[len(pts)-1]) < 1e-6 {
+			pts = pts[:len(pts)-1]
+		}
+		g.zonePolys = append(g.zonePolys, polyItem{pts, e.Pos})
+	default:
+		return false
+	}
+	return true
+}
+
+// makeMembers clusters joists by direction, orients them, drops
+// duplicates and numbers the rest by midpoint (y, then x).
+func (g *grouper) makeMembers() {
+	js := g.joists
+	grpOf, groups := directionGroups(js, g.opt.AngleTolDeg)
+	g.groups = groups
+	for i := range js {
+		if dot(sub(js[i].b, js[i].a), groups[grpOf[i]].u) < 0 {
+			js[i].a, js[i].b = js[i].b, js[i].a
+		}
+	}
+	keep := g.dropDuplicates(js, grpOf)
+
+	order := make([]int, 0, len(js))
+	for i := range js {
+		if keep[i] {
+			order = append(order, i)
+		}
+	}
+	rnd := func(v float64) float64 { return math.Round(v*1000) / 1000 }
+	sort.SliceStable(order, func(x, y int) bool {
+		ma, mb := mid(js[order[x]].a, js[order[x]].b), mid(js[order[y]].a, js[order[y]].b)
+		if ya, yb := rnd(ma.Y), rnd(mb.Y); ya != yb {
+			return ya < yb
+		}
+		return rnd(ma.X) < rnd(mb.X)
+	})
+	n := len(order)
+	p := g.plan
+	p.Members = make([]Member, n)
+	p.across = make([]float64, n)
+	p.dirs = make([]Point, n)
+	g.grp = make([]int, n)
+	g.a0 = make([]float64, n)
+	g.a1 = make([]float64, n)
+	g.bdirs = make([][]Point, n)
+	for k, i := range order {
+		j := js[i]
+		gr := groups[grpOf[i]]
+		p.Members[k] = Member{
+			ID: fmt.Sprintf("M%d", k+1), Pos: j.pos, Layer: j.pos.Layer,
+			Start: j.a, End: j.b, LengthIn: dist(j.a, j.b),
+		}
+		p.dirs[k] = unit(sub(j.b, j.a))
+		p.across[k] = dot(mid(j.a, j.b), gr.n)
+		g.grp[k] = grpOf[i]
+		g.a0[k], g.a1[k] = dot(j.a, gr.u), dot(j.b, gr.u)
+	}
+}
+
+// directionGroups clusters joists whose directions (mod 180 degrees) chain
+// within tolDeg, and returns each joist's group and the groups.
+func directionGroups(js []segItem, tolDeg float64) ([]int, []dirGroup) {
+	n := len(js)
+	ang := make([]float64, n)
+	idx := make([]int, n)
+	for i, j := range js {
+		d := sub(j.b, j.a)
+		a := math.Atan2(d.Y, d.X) * 180 / math.Pi
+		a = math.Mod(a+360, 180)
+		if a >= 180-1e-9 {
+			a = 0
+		}
+		ang[i], idx[i] = a, i
+	}
+	sort.Slice(idx, func(x, y int) bool { return ang[idx[x]] < ang[idx[y]] })
+	grp := make([]int, n)
+	ng := 0
+	for k, i := range idx {
+		if k > 0 && ang[i]-ang[idx[k-1]] > tolDeg {
+			ng++
+		}
+		grp[i] = ng
+	}
+	if n > 0 {
+		ng++
+		// wrap: directions near 180 join those near 0
+		if ng > 1 && ang[idx[0]]+180-ang[idx[n-1]] <= tolDeg {
+			last := grp[idx[n-1]]
+			for _, i := range idx {
+				if grp[i] == last {
+					grp[i] = 0
+				}
+			}
+			ng--
+		}
+	}
+	// mean direction per group on doubled angles (mod-180 safe)
+	sc := make([][2]float64, ng)
+	for i := range js {
+		r := 2 * ang[i] * math.Pi / 180
+		sc[grp[i]][0] += math.Cos(r)
+		sc[grp[i]][1] += math.Sin(r)
+	}
+	groups := make([]dirGroup, ng)
+	for k := range groups {
+		th := math.Atan2(sc[k][1], sc[k][0]) / 2 * 180 / math.Pi // (-90, 90]
+		if th <= -90+1e-9 {
+			th += 180
+		}
+		r := th * math.Pi / 180
+		u := Point{X: math.Cos(r), Y: math.Sin(r)}
+		switch { // exact axes keep across offsets free of rounding
+		case math.Abs(th) < 1e-9:
+			u = Point{X: 1}
+		case math.Abs(th-90) < 1e-9:
+			u = Point{Y: 1}
+		}
+		nn := rot90(u)
+		if nn.X < -1e-12 || (math.Abs(nn.X) <= 1e-12 && nn.Y < 0) {
+			nn = scale(nn, -1)
+		}
+		groups[k] = dirGroup{u: u, n: nn}
+	}
+	return grp, groups
+}
+
+// dropDuplicates keeps one of each set of joists drawn over each other
+// (both ends within the snap tolerance) and warns naming both handles.
+func (g *grouper) dropDuplicates(js []segItem, grpOf []int) []bool {
+	tol := g.opt.SnapToleranceIn
+	keep := make([]bool, len(js))
+	type key struct {
+		i    int
+		c, a float64
+	}
+	ks := make([]key, len(js))
+	for i, j := range js {
+		gr := g.groups[grpOf[i]]
+		ks[i] = key{i, dot(mid(j.a, j.b), gr.n), dot(j.a, gr.u)}
+		keep[i] = true
+	}
+	sort.Slice(ks, func(x, y int) bool {
+		if grpOf[ks[x].i] != grpOf[ks[y].i] {
+			return grpOf[ks[x].i] < grpOf[ks[y].i]
+		}
+		if ks[x].c != ks[y].c {
+			return ks[x].c < ks[y].c
+		}
+		return ks[x].i < ks[y].i
+	})
+	for x := range ks {
+		i := ks[x].i
+		if !keep[i] {
+			continue
+		}
+		for y := x + 1; y < len(ks) && grpOf[ks[y].i] == grpOf[i] && ks[y].c-ks[x].c <= tol; y++ {
+			j := ks[y].i
+			if keep[j] && dist(js[i].a, js[j].a) <= tol && dist(js[i].b, js[j].b) <= tol {
+				keep[j] = false
+				g.warn(js[j].pos, CodeDuplicateJoist, "joist drawn twice: handle %s duplicates handle %s; kept once",
+					js[j].pos.Handle, js[i].pos.Handle)
+			}
+		}
+	}
+	return keep
+}

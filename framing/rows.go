@@ -1,0 +1,64 @@
+package framing
+
+import (
+	"fmt"
+	"math"
+)
+
+// BlockingRow is one row of full-depth blocking across a run: a line at
+// the same position along every member of the run, cut into one piece per
+// bay between adjacent joists.
+type BlockingRow struct {
+	ID      string // "<run>-B<n>", e.g. "R2-B1", numbered along the member
+	Run     string // Run.ID
+	AtIn    float64
+	From    Point     // on the run's first member (ordered across)
+	To      Point     // on its last member
+	Pieces  int       // bays crossed = members - 1
+	ClearIn []float64 // clear length of each piece: gap between joists less the joist thickness
+	Size    string    // the run's joist size (first member's)
+}
+
+// PlaceRows lays blocking rows across run at the positions atIn, measured
+// along the run's first member from its Start. Each other member takes
+// the row at the same distance from its own first bearing, so members
+// whose drawn starts differ a little still line up. Members without
+// bearings take atIn from their own Start.
+func (p *Plan) PlaceRows(run int, atIn []float64) []BlockingRow {
+	if run < 0 || run >= len(p.Runs) || len(p.Runs[run].Members) == 0 {
+		return nil
+	}
+	r := p.Runs[run]
+	ref := &p.Members[r.Members[0]]
+	refB := 0.0
+	if len(ref.Bearings) > 0 {
+		refB = ref.Bearings[0].AtIn
+	}
+	size := ref.Size
+	bIn, _, err := DressedSize(size)
+	if err != nil {
+		bIn = 0
+	}
+	rows := make([]BlockingRow, 0, len(atIn))
+	for n, at := range atIn {
+		row := BlockingRow{ID: fmt.Sprintf("%s-B%d", r.ID, n+1), Run: r.ID, AtIn: at, Size: size}
+		for i, k := range r.Members {
+			m := &p.Members[k]
+			t := at
+			if len(m.Bearings) > 0 {
+				t = at - refB + m.Bearings[0].AtIn
+			}
+			q := lerp(m.Start, p.dirs[k], t)
+			if i == 0 {
+				row.From = q
+			} else {
+				gap := math.Abs(p.across[k] - p.across[r.Members[i-1]])
+				row.ClearIn = append(row.ClearIn, math.Max(0, gap-bIn))
+			}
+			row.To = q
+		}
+		row.Pieces = len(row.ClearIn)
+		rows = append(rows, row)
+	}
+	return rows
+}

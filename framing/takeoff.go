@@ -1,0 +1,140 @@
+package framing
+
+import (
+	"math"
+	"sort"
+)
+
+// Takeoff rules (DOMAIN.md "Takeoff"): joists are ordered in even-foot
+// lengths, at least 8 ft, and lengths over 24 ft are special-order or
+// spliced (common practice, no source). Board feet = nominal thickness
+// (in) x nominal depth (in) x length (ft) / 12.
+const (
+	minOrderFt     = 8
+	specialOrderFt = 24
+)
+
+// JoistLine is one line of the joist takeoff.
+type JoistLine struct {
+	Size, Species, Grade string
+	OrderLengthFt        int // member length rounded up to the next even foot, at least 8
+	Count                int
+	BoardFeet            float64
+	SpecialOrder         bool // longer than 24 ft: special order or spliced
+}
+
+// BlockingLine is the blocking of one size.
+type BlockingLine struct {
+	Size          string
+	Pieces        int
+	TotalLengthIn float64 // sum of the pieces' clear lengths
+	BoardFeet     float64
+}
+
+// HangerLine counts joist hangers of one joist size.
+type HangerLine struct {
+	Size  string
+	Count int
+}
+
+// Takeoff is the material list of a plan.
+type Takeoff struct {
+	Joists   []JoistLine    // by size, species, grade, order length
+	Blocking []BlockingLine // by size
+	Hangers  []HangerLine   // by joist size
+	// Totals
+	JoistCount, BlockingPieces, HangerCount           int
+	JoistBoardFeet, BlockingBoardFeet, TotalBoardFeet float64
+}
+
+// OrderLengthFt returns the order length of a member of lengthIn: rounded
+// up to the next even foot, at least 8 ft.
+func OrderLengthFt(lengthIn float64) int {
+	ft := int(math.Ceil(lengthIn/12 - 1e-9))
+	if ft%2 == 1 {
+		ft++
+	}
+	return max(ft, minOrderFt)
+}
+
+// boardFeet returns nominal b x d x length(ft) / 12, 0 for a bad size.
+func boardFeet(size string, lengthFt float64) float64 {
+	b, d, err := NominalSize(size)
+	if err != nil {
+		return 0
+	}
+	return float64(b*d) * lengthFt / 12
+}
+
+// BuildTakeoff counts every member (error members included: the lumber is
+// in the drawing), the blocking pieces of rows and the hangers.
+func BuildTakeoff(p *Plan, rows []BlockingRow) Takeoff {
+	var t Takeoff
+	type jk struct {
+		size, species, grade string
+		ft                   int
+	}
+	joists := map[jk]*JoistLine{}
+	hangers := map[string]int{}
+	for k := range p.Members {
+		m := &p.Members[k]
+		key := jk{m.Size, m.Species, m.Grade, OrderLengthFt(m.LengthIn)}
+		l := joists[key]
+		if l == nil {
+			l = &JoistLine{Size: m.Size, Species: m.Species, Grade: m.Grade, OrderLengthFt: key.ft,
+				SpecialOrder: key.ft > specialOrderFt}
+			joists[key] = l
+		}
+		l.Count++
+		l.BoardFeet += boardFeet(m.Size, float64(key.ft))
+		for _, h := range []bool{m.HangersStart, m.HangersEnd} {
+			if h {
+				hangers[m.Size]++
+			}
+		}
+	}
+	for _, l := range joists {
+		t.Joists = append(t.Joists, *l)
+		t.JoistCount += l.Count
+		t.JoistBoardFeet += l.BoardFeet
+	}
+	sort.Slice(t.Joists, func(i, j int) bool {
+		a, b := t.Joists[i], t.Joists[j]
+		if a.Size != b.Size {
+			return a.Size < b.Size
+		}
+		if a.Species != b.Species {
+			return a.Species < b.Species
+		}
+		if a.Grade != b.Grade {
+			return a.Grade < b.Grade
+		}
+		return a.OrderLengthFt < b.OrderLengthFt
+	})
+	blocks := map[string]*BlockingLine{}
+	for _, r := range rows {
+		l := blocks[r.Size]
+		if l == nil {
+			l = &BlockingLine{Size: r.Size}
+			blocks[r.Size] = l
+		}
+		for _, c := range r.ClearIn {
+			l.Pieces++
+			l.TotalLengthIn += c
+			l.BoardFeet += boardFeet(r.Size, c/12)
+		}
+	}
+	for _, l := range blocks {
+		t.Blocking = append(t.Blocking, *l)
+		t.BlockingPieces += l.Pieces
+		t.BlockingBoardFeet += l.BoardFeet
+	}
+	sort.Slice(t.Blocking, func(i, j int) bool { return t.Blocking[i].Size < t.Blocking[j].Size })
+	for s, n := range hangers {
+		t.Hangers = append(t.Hangers, HangerLine{Size: s, Count: n})
+		t.HangerCount += n
+	}
+	sort.Slice(t.Hangers, func(i, j int) bool { return t.Hangers[i].Size < t.Hangers[j].Size })
+	t.TotalBoardFeet = t.JoistBoardFeet + t.BlockingBoardFeet
+	return t
+}

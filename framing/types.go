@@ -1,0 +1,101 @@
+package framing
+
+import "framecheck/dxfimport"
+
+// Plan is what Group returns: the members of a framing plan and what was
+// found about the drawing on the way.
+type Plan struct {
+	Members  []Member      // sorted by midpoint y, then x; Member.ID is "M" + 1-based index
+	Runs     []Run         // adjacent parallel joists sharing their bearings
+	Supports []Support     // support lines after double-wall merging
+	Zones    []ZoneOutline // load-zone outlines with their names
+	Issues   dxfimport.IssueList
+	// Ignored counts entities framing did not use, by layer: every entity
+	// on a layer with no role, and entities of a kind the layer's role has
+	// no use for (key "LAYER (TEXT)").
+	Ignored map[string]int
+
+	// internal state kept for PlaceRows
+	across []float64 // per member: offset across its direction group, in
+	dirs   []Point   // per member: unit vector Start->End
+}
+
+// Bearing is one support of a member.
+type Bearing struct {
+	AtIn     float64       // centre-line, along the member from Start (may be slightly < 0 or > LengthIn when the end stops short)
+	LengthIn float64       // bearing length: the support's bearing_in, or a double-line wall's thickness
+	Kind     string        // support kind: bearing-wall, dropped-beam, flush-beam, ledger
+	Pos      dxfimport.Pos // the support line (the first of a double-line wall's two)
+}
+
+// Member is one joist ready for design.
+type Member struct {
+	ID         string
+	Pos        dxfimport.Pos // the joist line as drawn
+	Layer      string
+	Start, End Point // oriented along the member's direction group (see doc.go)
+	LengthIn   float64
+
+	Bearings []Bearing // sorted along the member
+	// Cantilever lengths past the first/last bearing centre; 0 when the
+	// end stops within lb/2 + snap tolerance of the bearing centre-line.
+	OverhangStartIn, OverhangEndIn float64
+
+	TribIn           float64 // tributary width = TribLeftIn + TribRightIn
+	TribLeftIn       float64 // left of Start->End: half the gap to the neighbour, or the edge distance
+	TribRightIn      float64
+	SpacingIn        float64 // trib width of an interior joist, the one gap of an edge joist, 0 alone
+	CalloutSpacingIn float64 // nominal spacing of the size callout, 0 when none
+
+	Size, Species, Grade string   // callout > by_layer > project default
+	Zones                []string // one zone, or several (envelope, with a message)
+
+	ExistingBlockingAtIn []float64 // drawn blocking rows crossing the member, along it from Start
+	Run                  int       // index into Plan.Runs
+	HangersStart         bool      // Start frames into a flush beam
+	HangersEnd           bool
+	Mark                 string // set by AssignMarks
+
+	// Error marks an unusable member (an end with no support, conflicting
+	// callouts, no zone); it still counts as a neighbour for tribs.
+	Error    bool
+	Messages []string
+}
+
+// Spans returns the centre-to-centre distances between consecutive
+// bearings, in.
+func (m *Member) Spans() []float64 {
+	var s []float64
+	for i := 1; i < len(m.Bearings); i++ {
+		s = append(s, m.Bearings[i].AtIn-m.Bearings[i-1].AtIn)
+	}
+	return s
+}
+
+// Run is a set of adjacent parallel joists sharing the same supports,
+// ordered across (see doc.go for the direction).
+type Run struct {
+	ID      string // "R1", "R2", ... in order of the run's first member
+	Members []int  // indices into Plan.Members
+}
+
+// Support is one support line after double-wall merging. A double-line
+// wall appears once, on its mid-line, with Double set and ThicknessIn the
+// distance between its lines.
+type Support struct {
+	Kind        string
+	A, B        Point
+	BearingIn   float64 // the spec's bearing length, or the wall thickness when Double
+	Double      bool
+	ThicknessIn float64
+	Pos         dxfimport.Pos // first line
+	PosB        dxfimport.Pos // second line of a double-line wall
+}
+
+// ZoneOutline is a load-zone outline and the name written inside it.
+type ZoneOutline struct {
+	Name    string
+	Points  []Point // closed; last vertex not repeated
+	AreaIn2 float64
+	Pos     dxfimport.Pos
+}

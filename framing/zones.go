@@ -1,0 +1,151 @@
+package framing
+
+import (
+	"fmt"
+	"math"
+	"sort"
+	"strings"
+
+	"framecheck/dxfimport"
+)
+
+type zoneGeom struct {
+	ZoneOutline
+	lo, hi Point
+}
+
+// assignZones names the zone outlines by the text inside each (the
+// smallest outline holding the text's insertion point) and gives every
+// member its zone or zones.
+func (g *grouper) assignZones() {
+	p := g.plan
+	names := make([][]textItem, len(g.zonePolys))
+	areas := make([]float64, len(g.zonePolys))
+	for i, z := range g.zonePolys {
+		areas[i] = polygonArea(z.pts)
+	}
+	for _, t := range g.zoneTexts {
+		best := -1
+		for i, z := range g.zonePolys {
+			if pointInPolygon(t.p, z.pts) && (best < 0 || areas[i] < areas[best]) {
+				best = i
+			}
+		}
+		name := strings.TrimSpace(t.text)
+		if best < 0 {
+			g.warn(t.pos, CodeZoneName, "zone name %q is outside every zone outline; ignored", name)
+			continue
+		}
+		names[best] = append(names[best], textItem{p: t.p, text: name, pos: t.pos})
+	}
+	var zs []zoneGeom
+	for i, z := range g.zonePolys {
+		if len(names[i]) == 0 {
+			g.warn(z.pos, CodeZoneName, "zone outline has no name text inside; ignored")
+			continue
+		}
+		for _, o := range names[i][1:] {
+			if o.text != names[i][0].text {
+				g.warn(o.pos, CodeZoneName, "zone outline holds two names, %q and %q; using %q",
+					names[i][0].text, o.text, names[i][0].text)
+			}
+		}
+		zg := zoneGeom{ZoneOutline: ZoneOutline{Name: names[i][0].text, Points: z.pts, AreaIn2: areas[i], Pos: z.pos}}
+		zg.lo, zg.hi = Point{X: math.Inf(1), Y: math.Inf(1)}, Point{X: math.Inf(-1), Y: math.Inf(-1)}
+		for _, q := range z.pts {
+			zg.lo.X, zg.lo.Y = math.Min(zg.lo.X, q.X), math.Min(zg.lo.Y, q.Y)
+			zg.hi.X, zg.hi.Y = math.Max(zg.hi.X, q.X), math.Max(zg.hi.Y, q.Y)
+		}
+		zs = append(zs, zg)
+		p.Zones = append(p.Zones, zg.ZoneOutline)
+	}
+	for k := range p.Members {
+		g.memberZones(k, zs)
+	}
+}
+
+// memberZones cuts member k where it crosses zone edges, takes the
+// innermost zone of each piece, and keeps each zone holding more than
+// MaxWallThicknessIn of the member (so an end running into the wall on a
+// zone edge does not count); with none that long, the zone at the
+// midpoint. Pieces outside every outline belong to DefaultZone.
+func (g *grouper) memberZones(k int, zs []zoneGeom) {
+	m := &g.plan.Members[k]
+	a, b := m.Start, m.End
+	var cand []int
+	for i := range zs {
+		z := &zs[i]
+		if math.Max(a.X, b.X) >= z.lo.X && math.Min(a.X, b.X) <= z.hi.X &&
+			math.Max(a.Y, b.Y) >= z.lo.Y && math.Min(a.Y, b.Y) <= z.hi.Y {
+			cand = append(cand, i)
+		}
+	}
+	ts := []float64{0, 1}
+	d := sub(b, a)
+	for _, i := range cand {
+		pts := zs[i].Points
+		for e := range pts {
+			q0, q1 := pts[e], pts[(e+1)%len(pts)]
+			t, s, _, ok := segParams(a, d, q0, q1)
+			if ok && t > 0 && t < 1 && s >= 0 && s <= 1 {
+				ts = append(ts, t)
+			}
+		}
+	}
+	sort.Float64s(ts)
+	innermost := func(q Point) string {
+		best := -1
+		for _, i := range cand {
+			if pointInPolygon(q, zs[i].Points) && (best < 0 || zs[i].AreaIn2 < zs[best].AreaIn2) {
+				best = i
+			}
+		}
+		if best < 0 {
+			return ""
+		}
+		return zs[best].Name
+	}
+	lengths := map[string]float64{}
+	for i := 1; i < len(ts); i++ {
+		if ts[i]-ts[i-1] <= 0 {
+			continue
+		}
+		z := innermost(lerp(a, d, (ts[i]+ts[i-1])/2))
+		lengths[z] += (ts[i] - ts[i-1]) * m.LengthIn
+	}
+	var got []string
+	for z, l := range lengths {
+		if l > g.opt.MaxWallThicknessIn {
+			got = append(got, z)
+		}
+	}
+	if len(got) == 0 {
+		got = []string{innermost(mid(a, b))}
+	}
+	seen := map[string]bool{}
+	var out []string
+	outside := false
+	for _, z := range got {
+		if z == "" {
+			outside = true
+			z = g.opt.DefaultZone
+		}
+		if z != "" && !seen[z] {
+			seen[z] = true
+			out = append(out, z)
+		}
+	}
+	sort.Strings(out)
+	m.Zones = out
+	if outside && g.opt.DefaultZone == "" {
+		m.Error = true
+		msg := fmt.Sprintf("%s lies (partly) outside every load-zone outline and there is no default zone", m.ID)
+		m.Messages = append(m.Messages, msg)
+		g.plan.Issues.Add(m.Pos, CodeNoZone, dxfimport.SevError, "%s", msg)
+	}
+	if len(out) > 1 {
+		msg := fmt.Sprintf("%s crosses zone edges: designed for the envelope of zones %s", m.ID, strings.Join(out, ", "))
+		m.Messages = append(m.Messages, msg)
+		g.warn(m.Pos, CodeZoneEnvelope, "%s", msg)
+	}
+}
