@@ -20,7 +20,9 @@ inches); a drawing without $INSUNITS (or 0) is dumped with factor 1.
 
 The output is deterministic: ezdxf writes fixed dates and GUIDs when
 ezdxf.options.write_fixed_meta_data_for_testing is set, handles are
-sequential, and the JSON is written with sorted keys and rounded floats.
+sequential, the script re-runs itself with PYTHONHASHSEED=0 (ezdxf writes
+the CLASSES section in set order), and the JSON is written with sorted keys
+and rounded floats.
 """
 import json
 import math
@@ -225,6 +227,11 @@ FIXTURES = [
 
 
 def main():
+    # ezdxf writes the CLASSES section from a set, whose order follows
+    # Python's string hash; fix the hash seed so the DXF is reproducible.
+    if os.environ.get("PYTHONHASHSEED") != "0":
+        env = dict(os.environ, PYTHONHASHSEED="0")
+        os.execve(sys.executable, [sys.executable] + sys.argv, env)
     out = sys.argv[1] if len(sys.argv) > 1 else os.path.dirname(os.path.abspath(__file__))
     os.makedirs(out, exist_ok=True)
     for name, ver, ins in FIXTURES:
