@@ -1,0 +1,252 @@
+"""Independent checks of framecheck's export outputs.
+
+    export_check.py dxf  OUTDIR   # annotated DXFs and overlay, with ezdxf
+    export_check.py xlsx OUTDIR   # schedule.xlsx, with openpyxl
+
+OUTDIR holds what `go run ./export/internal/cifiles` wrote, with
+expect.json saying what should be there. Exit status 1 on any failure.
+"""
+
+import json
+import os
+import sys
+from collections import Counter
+
+OUR_LAYERS = ("FC-FAIL", "FC-BLOCKING-ADD", "FC-LABEL")
+failures = []
+
+
+def fail(msg):
+    failures.append(msg)
+    print("FAIL:", msg)
+
+
+def r(v):
+    return round(float(v), 6)
+
+
+def pt(p):
+    return (r(p[0]), r(p[1]))
+
+
+def signature(e):
+    """Type, layer and geometry of an entity, rounded to 1e-6 drawing units."""
+    t = e.dxftype()
+    layer = e.dxf.layer.upper()
+    if t == "LINE":
+        geo = (pt(e.dxf.start), pt(e.dxf.end))
+    elif t == "LWPOLYLINE":
+        geo = tuple(pt(p) for p in e.get_points("xy")) + (bool(e.closed),)
+    elif t == "POLYLINE":
+        geo = tuple(pt(v.dxf.location) for v in e.vertices) + (bool(e.is_closed),)
+    elif t in ("TEXT",):
+        geo = (pt(e.dxf.insert), e.dxf.text, r(e.dxf.height))
+    elif t == "CIRCLE":
+        geo = (pt(e.dxf.center), r(e.dxf.radius))
+    elif t == "INSERT":
+        geo = (e.dxf.name, pt(e.dxf.insert))
+    else:
+        geo = ()
+    return (t, layer, geo)
+
+
+def raw_pairs(path):
+    with open(path, "rb") as f:
+        lines = f.read().decode("latin-1").splitlines()
+    return [(int(lines[i].strip()), lines[i + 1].strip()) for i in range(0, len(lines) - 1, 2)]
+
+
+def raw_checks(path, modern):
+    """Handles unique and below $HANDSEED; LAYER count covers the records."""
+    pairs = raw_pairs(path)
+    section = table = record = None
+    seed = None
+    handles = []
+    layer_count = None
+    layer_records = 0
+    want_sect = want_table = False
+    var = None
+    for code, value in pairs:
+        if code == 0:
+            v = value.upper()
+            if v == "SECTION":
+                want_sect, section = True, None
+            elif v == "ENDSEC":
+                section = table = record = None
+            elif v == "TABLE":
+                want_table, record = True, "TABLE"
+            elif v == "ENDTAB":
+                table = record = None
+            else:
+                record = v
+                if table == "LAYER" and v == "LAYER":
+                    layer_records += 1
+            continue
+        if code == 2 and want_sect:
+            section, want_sect = value.upper(), False
+            continue
+        if code == 2 and want_table:
+            table, want_table = value.upper(), False
+            continue
+        if section == "HEADER":
+            if code == 9:
+                var = value
+            elif var == "$HANDSEED" and code == 5:
+                seed = int(value, 16)
+            continue
+        if table == "LAYER" and record == "TABLE" and code == 70:
+            layer_count = int(value)
+        if code == 105 or (code == 5 and not (table == "DIMSTYLE" and record == "DIMSTYLE")):
+            handles.append(int(value, 16))
+    dup = [h for h, n in Counter(handles).items() if n > 1]
+    if dup:
+        fail("%s: duplicate handles %s" % (path, [hex(h) for h in dup]))
+    if handles and seed is not None and max(handles) >= seed:
+        fail("%s: $HANDSEED %x not above the largest handle %x" % (path, seed, max(handles)))
+    if modern and seed is None:
+        fail("%s: no $HANDSEED" % path)
+    if layer_count is not None and layer_count < layer_records:
+        fail("%s: LAYER table count %d < %d records" % (path, layer_count, layer_records))
+    print("  %s: %d handles, $HANDSEED %s, LAYER count %s for %d records" % (
+        os.path.basename(path), len(handles), hex(seed) if seed is not None else "-", layer_count, layer_records))
+
+
+def audit(doc, path):
+    auditor = doc.audit()
+    for e in auditor.errors:
+        fail("%s: audit error %s: %s" % (path, e.code, e.message))
+    if auditor.fixes:
+        print("  %s: audit applied %d fixes (not errors)" % (os.path.basename(path), len(auditor.fixes)))
+
+
+def check_dxf(out):
+    import ezdxf
+
+    exp = json.load(open(os.path.join(out, "expect.json")))
+    for plan in exp["plans"]:
+        src, dst = plan["input"], plan["output"]
+        print("-", src, "->", dst)
+        din = ezdxf.readfile(src)
+        dout = ezdxf.readfile(dst)
+        audit(dout, dst)
+        if dout.dxfversion != din.dxfversion:
+            fail("%s: version %s, input %s" % (dst, dout.dxfversion, din.dxfversion))
+        before = Counter(signature(e) for e in din.modelspace())
+        after_all = [signature(e) for e in dout.modelspace()]
+        after = Counter(s for s in after_all if s[1] not in OUR_LAYERS)
+        if before != after:
+            fail("%s: original entities changed: missing %s, extra %s" % (
+                dst, list((before - after).items())[:5], list((after - before).items())[:5]))
+        ours = Counter(s[1] for s in after_all if s[1] in OUR_LAYERS)
+        for layer, n in exp["layers"].items():
+            if ours.get(layer, 0) != n:
+                fail("%s: layer %s holds %d entities, want %d" % (dst, layer, ours.get(layer, 0), n))
+            if layer not in dout.layers:
+                fail("%s: layer %s not in the LAYER table" % (dst, layer))
+        kinds = Counter((s[0], s[1]) for s in after_all if s[1] in OUR_LAYERS)
+        for (t, layer), n in kinds.items():
+            want = "TEXT" if layer == "FC-LABEL" else "LINE"
+            if t != want:
+                fail("%s: %d %s on %s, want %s" % (dst, n, t, layer, want))
+        # The highlight of a failing member lies on a drawn joist (checks the
+        # inch factor: the R2000 plan is in feet).
+        joists = {s[2] for s in before if s[0] == "LINE" and s[1].startswith("JOIST")}
+        for s in after_all:
+            if s[1] == "FC-FAIL" and s[2] not in joists:
+                fail("%s: highlight %s is not over a drawn joist" % (dst, s[2]))
+        for layer in din.layers:
+            if layer.dxf.name not in dout.layers:
+                fail("%s: layer %s lost" % (dst, layer.dxf.name))
+        raw_checks(dst, dout.dxfversion > "AC1009")
+        print("  %d original entities kept, ours %s" % (sum(before.values()), dict(ours)))
+
+    ov = exp["overlay"]
+    print("-", ov)
+    doc = ezdxf.readfile(ov)
+    audit(doc, ov)
+    if doc.dxfversion != "AC1009":
+        fail("%s: version %s, want AC1009" % (ov, doc.dxfversion))
+    got = Counter(e.dxf.layer for e in doc.modelspace())
+    for layer, n in exp["layers"].items():
+        if got.get(layer, 0) != n:
+            fail("%s: layer %s holds %d entities, want %d" % (ov, layer, got.get(layer, 0), n))
+    if sum(got.values()) != sum(exp["layers"].values()):
+        fail("%s: %d entities, want %d" % (ov, sum(got.values()), sum(exp["layers"].values())))
+    print("  overlay entities", dict(got))
+
+
+def check_xlsx(out):
+    import openpyxl
+
+    exp = json.load(open(os.path.join(out, "expect.json")))
+    res = json.load(open(exp["json"]))
+    wb = openpyxl.load_workbook(exp["xlsx"])
+    want = ["Members", "Marks", "Blocking", "Takeoff", "Inputs", "Notes"]
+    if wb.sheetnames != want:
+        fail("sheet names %s, want %s" % (wb.sheetnames, want))
+        return
+    t = res["takeoff"]
+    rows = {
+        "Members": exp["members"] + 1,
+        "Marks": exp["marks"] + 1,
+        "Blocking": exp["blocking_rows"] + 1,
+        "Takeoff": 1 + len(t["joists"]) + len(t["blocking"]) + len(t["hangers"]) + 4,
+    }
+    for name, n in rows.items():
+        if wb[name].max_row != n:
+            fail("%s: %d rows, want %d" % (name, wb[name].max_row, n))
+    for ws in wb.worksheets:
+        if ws.freeze_panes != "A2":
+            fail("%s: frozen panes %s, want A2" % (ws.title, ws.freeze_panes))
+        # excelize writes the range absolute ($A$1:$Y$5); both forms are valid.
+        if not (ws.auto_filter.ref or "").replace("$", "").startswith("A1:"):
+            fail("%s: no autofilter (%r)" % (ws.title, ws.auto_filter.ref))
+    ms = wb["Members"]
+    head = [c.value for c in ms[1]]
+    col = {h: i for i, h in enumerate(head)}
+    for h in ("ID", "Mark", "Spans (ft-in)", "Max ratio", "Status", "Governing", "Combination"):
+        if h not in col:
+            fail("Members: no column %r" % h)
+            return
+    by_id = {row[col["ID"]].value: row for row in ms.iter_rows(min_row=2)}
+    for m in res["members"]:
+        row = by_id.get(m["id"])
+        if row is None:
+            fail("Members: no row for %s" % m["id"])
+            continue
+        ratio = row[col["Max ratio"]]
+        if abs(ratio.value - m["max_ratio"]) > 1e-9 or ratio.number_format != "0.00":
+            fail("Members %s: max ratio %r (%s), want %r as 0.00" % (m["id"], ratio.value, ratio.number_format, m["max_ratio"]))
+        if row[col["Status"]].value != m["status"]:
+            fail("Members %s: status %r" % (m["id"], row[col["Status"]].value))
+        shaded = row[col["ID"]].fill.fgColor.rgb not in (None, "00000000")
+        if shaded != (m["status"] != "pass"):
+            fail("Members %s: shading %s for status %s" % (m["id"], shaded, m["status"]))
+        if m["max_ratio"] > 1 and not ratio.font.b:
+            fail("Members %s: ratio over 1.00 not bold" % m["id"])
+    first = res["members"][0]
+    # 144 in = 12'-0" (12 in to the foot).
+    if by_id[first["id"]][col["Spans (ft-in)"]].value != "12'-0\"":
+        fail("Members %s: span text %r, want 12'-0\"" % (first["id"], by_id[first["id"]][col["Spans (ft-in)"]].value))
+    tk = wb["Takeoff"]
+    j = t["joists"][0]
+    r2 = [c.value for c in tk[2]]
+    if r2[0] != "Joists" or r2[1] != j["size"] or r2[4] != j["count"] or abs(r2[5] - j["board_feet"]) > 1e-9:
+        fail("Takeoff row 2 %s, want joists %s" % (r2, j))
+    notes = " ".join(str(c.value) for row in wb["Notes"].iter_rows() for c in row)
+    if "does not replace engineering judgement" not in notes:
+        fail("Notes: the caution is missing")
+    print("  sheets", wb.sheetnames, {ws.title: ws.max_row for ws in wb.worksheets})
+
+
+def main():
+    mode, out = sys.argv[1], sys.argv[2]
+    {"dxf": check_dxf, "xlsx": check_xlsx}[mode](out)
+    if failures:
+        print("%d failure(s)" % len(failures))
+        sys.exit(1)
+    print("ok")
+
+
+if __name__ == "__main__":
+    main()

@@ -1,0 +1,340 @@
+package export
+
+import (
+	"bufio"
+	"errors"
+	"fmt"
+	"io"
+	"os"
+	"strconv"
+	"strings"
+)
+
+// dxfFacts is what the first pass over a drawing learns.
+type dxfFacts struct {
+	Version      string // $ACADVER, "" when absent
+	HandSeed     string // $HANDSEED as read, "" when absent
+	MaxHandle    uint64 // largest entity/record handle (group 5 or 105)
+	HasHeader    bool
+	HasTables    bool
+	HasLayerTab  bool
+	HasEntities  bool
+	HasEOF       bool
+	Layers       map[string]bool // upper-case layer names in the LAYER table
+	LayerTable   string          // handle of the LAYER table head
+	Layer0LType  string          // linetype of layer "0"
+	Layer0Plot   string          // group 390 of layer "0" (R2000+)
+	ModelSpace   string          // handle of the *Model_Space block record
+	EOL          string          // line ending of the first line
+	FirstSection string          // name of the section that follows HEADER/CLASSES
+}
+
+// modern reports R13 or later: subclass markers and owner handles.
+func (f *dxfFacts) modern() bool { return f.Version > "AC1009" }
+
+// handles reports whether new records and entities need handles.
+func (f *dxfFacts) handles() bool { return f.modern() || f.HandSeed != "" }
+
+// scanDXF reads path once and gathers dxfFacts.
+func scanDXF(path string) (*dxfFacts, error) {
+	in, err := os.Open(path)
+	if err != nil {
+		return nil, err
+	}
+	defer in.Close()
+	facts := &dxfFacts{Layers: map[string]bool{}, EOL: "\n"}
+	pr := newPairReader(in, path)
+	var ctx dxfContext
+	var headerVar, recHandle, recName string
+	first := true
+	for {
+		p, err := pr.next()
+		if err == io.EOF {
+			break
+		}
+		if err != nil {
+			return nil, err
+		}
+		if first {
+			if strings.HasSuffix(p.RawCode, "\r\n") {
+				facts.EOL = "\r\n"
+			}
+			first = false
+		}
+		wasSect := ctx.wantSect
+		ctx.step(p)
+		if wasSect && !ctx.wantSect {
+			switch ctx.Section {
+			case "HEADER":
+				facts.HasHeader = true
+			case "TABLES":
+				facts.HasTables = true
+			case "ENTITIES":
+				facts.HasEntities = true
+			}
+		}
+		if p.Code == 0 && strings.EqualFold(p.Value, "EOF") {
+			facts.HasEOF = true
+			break
+		}
+		if p.Code == 0 {
+			recHandle, recName = "", ""
+		}
+		switch {
+		case ctx.Section == "HEADER" && p.Code == 9:
+			headerVar = strings.ToUpper(p.Value)
+			continue
+		case ctx.Section == "HEADER":
+			switch headerVar {
+			case "$ACADVER":
+				facts.Version = strings.ToUpper(p.Value)
+			case "$HANDSEED":
+				facts.HandSeed = p.Value
+			}
+			continue
+		}
+		// Group 5 is a handle everywhere except in an R12 DIMSTYLE record,
+		// where it names the arrow block (DIMBLK) and 105 is the handle.
+		isHandle := p.Code == 105 || (p.Code == 5 && !(ctx.Table == "DIMSTYLE" && ctx.Record == "DIMSTYLE"))
+		if isHandle {
+			h, err := strconv.ParseUint(p.Value, 16, 64)
+			if err != nil {
+				return nil, &DXFError{File: path, Line: p.Line, Err: fmt.Errorf("code %d: handle %q is not hexadecimal", p.Code, p.Value)}
+			}
+			facts.MaxHandle = max(facts.MaxHandle, h)
+			recHandle = p.Value
+		}
+		if ctx.Section != "TABLES" {
+			continue
+		}
+		if ctx.Table == "LAYER" {
+			facts.HasLayerTab = true
+			if ctx.TableHead && p.Code == 5 {
+				facts.LayerTable = p.Value
+			}
+			if ctx.Record == "LAYER" {
+				switch p.Code {
+				case 2:
+					recName = p.Value
+					facts.Layers[strings.ToUpper(p.Value)] = true
+				case 6:
+					if recName == "0" {
+						facts.Layer0LType = p.Value
+					}
+				case 390:
+					if recName == "0" {
+						facts.Layer0Plot = p.Value
+					}
+				}
+			}
+		}
+		if ctx.Table == "BLOCK_RECORD" && ctx.Record == "BLOCK_RECORD" && p.Code == 2 &&
+			strings.EqualFold(p.Value, "*Model_Space") {
+			facts.ModelSpace = recHandle
+		}
+	}
+	if !facts.HasEOF {
+		return nil, &DXFError{File: path, Line: pr.line, Err: ErrNoEOF}
+	}
+	if facts.modern() && !facts.HasTables {
+		return nil, &DXFError{File: path, Err: errors.New("R13+ drawing without a TABLES section: cannot add layers")}
+	}
+	return facts, nil
+}
+
+// Annotate copies the drawing inputPath to outputPath and adds the markup m
+// on layers of our own (LayerFail, LayerBlocking, LayerLabel). The copy is
+// made pair by pair: every original line is written back byte for byte
+// except the two values that must change, $HANDSEED and the LAYER table's
+// entry count (group 70). Our layer records go at the end of the
+// LAYER table (a TABLES section or LAYER table is created in an R12 file that
+// has none); our entities go at the end of ENTITIES (created before EOF when
+// absent). Drawings that use handles (R13+, or R12 with $HANDSEED) get
+// new handles above both $HANDSEED and every handle in the file, and
+// $HANDSEED is moved past them. The output is written atomically; outputPath
+// naming the input file is refused with ErrSameFile, and a binary or
+// truncated input with a *DXFError.
+func Annotate(inputPath, outputPath string, m Markup) error {
+	if sameFile(inputPath, outputPath) {
+		return fmt.Errorf("export: %s: %w", outputPath, ErrSameFile)
+	}
+	if err := m.validate(); err != nil {
+		return fmt.Errorf("export: %s: %w", outputPath, err)
+	}
+	facts, err := scanDXF(inputPath)
+	if err != nil {
+		return fmt.Errorf("export: %w", err)
+	}
+	in, err := os.Open(inputPath)
+	if err != nil {
+		return fmt.Errorf("export: %w", err)
+	}
+	defer in.Close()
+	return writeAtomic(outputPath, func(w *bufio.Writer) error {
+		return copyAnnotated(newPairReader(in, inputPath), w, facts, &m)
+	})
+}
+
+// annotator holds the second pass's state.
+type annotator struct {
+	facts     *dxfFacts
+	m         *Markup
+	em        *dxfEmitter
+	newLayers []int // indexes into markupLayers not yet in the drawing
+	newSeed   uint64
+}
+
+func copyAnnotated(pr *pairReader, w *bufio.Writer, facts *dxfFacts, m *Markup) error {
+	a := &annotator{facts: facts, m: m}
+	for i, l := range markupLayers {
+		if !facts.Layers[strings.ToUpper(l.Name)] {
+			a.newLayers = append(a.newLayers, i)
+		}
+	}
+	start := facts.MaxHandle + 1
+	if s, err := strconv.ParseUint(facts.HandSeed, 16, 64); err == nil && s > start {
+		start = s
+	}
+	count := uint64(len(a.newLayers) + markupEntityCount(m))
+	if !facts.HasLayerTab {
+		count++ // the LAYER table head
+	}
+	a.newSeed = start + count
+	a.em = &dxfEmitter{w: w, eol: facts.EOL, handles: facts.handles(), subclass: facts.modern(),
+		next: start, owner: facts.ModelSpace}
+
+	var ctx dxfContext
+	var headerVar string
+	seededHeader, layerCountDone := false, false
+	raw := func(p pair) {
+		w.WriteString(p.RawCode)
+		w.WriteString(p.RawValue)
+	}
+	for {
+		p, err := pr.next()
+		if err != nil {
+			if err == io.EOF {
+				return &DXFError{File: pr.file, Line: pr.line, Err: ErrNoEOF}
+			}
+			return err
+		}
+		// Decisions that come before the pair is written.
+		if p.Code == 0 {
+			switch strings.ToUpper(p.Value) {
+			case "ENDSEC":
+				switch ctx.Section {
+				case "HEADER":
+					if a.em.handles && !seededHeader {
+						a.em.pair(9, "$HANDSEED")
+						a.em.pair(5, strconv.FormatUint(a.newSeed, 16))
+					}
+				case "TABLES":
+					if !facts.HasLayerTab {
+						a.layerTable()
+					}
+				case "ENTITIES":
+					a.em.markup(m)
+				}
+			case "ENDTAB":
+				if ctx.Table == "LAYER" {
+					a.layers()
+				}
+			case "SECTION":
+				// Look ahead at the section name: a drawing without TABLES
+				// gets one before its BLOCKS or ENTITIES section.
+				name, err := pr.next()
+				if err != nil {
+					if err == io.EOF {
+						return &DXFError{File: pr.file, Line: pr.line, Err: ErrNoEOF}
+					}
+					return err
+				}
+				up := strings.ToUpper(name.Value)
+				if !facts.HasTables && (up == "BLOCKS" || up == "ENTITIES") {
+					a.tablesSection()
+					facts.HasTables, facts.HasLayerTab = true, true
+				}
+				raw(p)
+				raw(name)
+				ctx.step(p)
+				ctx.step(name)
+				continue
+			case "EOF":
+				if !facts.HasTables {
+					a.tablesSection()
+				}
+				if !facts.HasEntities {
+					a.em.pair(0, "SECTION")
+					a.em.pair(2, "ENTITIES")
+					a.em.markup(m)
+					a.em.pair(0, "ENDSEC")
+				}
+				raw(p)
+				// Whatever follows EOF is copied as it is.
+				_, err := io.Copy(w, pr.r)
+				return err
+			}
+		}
+		// Values that change.
+		switch {
+		case ctx.Section == "HEADER" && p.Code == 9:
+			headerVar = strings.ToUpper(p.Value)
+		case ctx.Section == "HEADER" && headerVar == "$HANDSEED" && p.Code == 5 && a.em.handles:
+			w.WriteString(p.RawCode)
+			w.WriteString(strconv.FormatUint(a.newSeed, 16) + facts.EOL)
+			seededHeader = true
+			ctx.step(p)
+			continue
+		case ctx.Table == "LAYER" && ctx.TableHead && p.Code == 70 && !layerCountDone:
+			n, err := strconv.Atoi(p.Value)
+			if err != nil {
+				return &DXFError{File: pr.file, Line: p.Line, Err: fmt.Errorf("LAYER table count %q: want an integer", p.Value)}
+			}
+			w.WriteString(p.RawCode)
+			w.WriteString(strconv.Itoa(n+len(a.newLayers)) + facts.EOL)
+			layerCountDone = true
+			ctx.step(p)
+			continue
+		}
+		raw(p)
+		ctx.step(p)
+	}
+}
+
+// layers writes our new LAYER records.
+func (a *annotator) layers() {
+	ltype := a.facts.Layer0LType
+	if ltype == "" {
+		ltype = "CONTINUOUS"
+	}
+	for _, i := range a.newLayers {
+		l := markupLayers[i]
+		a.em.layer(l.Name, l.Color, l.LineWeight, ltype, a.facts.LayerTable, a.facts.Layer0Plot)
+	}
+}
+
+// layerTable writes a whole LAYER table holding our layers (for a TABLES
+// section that has none).
+func (a *annotator) layerTable() {
+	a.em.pair(0, "TABLE")
+	a.em.pair(2, "LAYER")
+	if a.em.handles {
+		a.facts.LayerTable = strconv.FormatUint(a.em.next, 16)
+	}
+	a.em.handle()
+	if a.em.subclass {
+		a.em.pair(330, "0")
+		a.em.pair(100, "AcDbSymbolTable")
+	}
+	a.em.pair(70, strconv.Itoa(len(a.newLayers)))
+	a.layers()
+	a.em.pair(0, "ENDTAB")
+}
+
+// tablesSection writes a TABLES section with our LAYER table.
+func (a *annotator) tablesSection() {
+	a.em.pair(0, "SECTION")
+	a.em.pair(2, "TABLES")
+	a.layerTable()
+	a.em.pair(0, "ENDSEC")
+}

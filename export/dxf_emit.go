@@ -1,0 +1,145 @@
+package export
+
+import (
+	"bufio"
+	"strconv"
+	"strings"
+)
+
+// dxfEmitter writes our own pairs: layer records and markup entities, in
+// the drawing's units and line ending, with handles when the drawing uses
+// them.
+type dxfEmitter struct {
+	w        *bufio.Writer
+	eol      string
+	handles  bool   // give every record and entity a handle (group 5)
+	subclass bool   // R13+: subclass markers (100) and owner (330)
+	next     uint64 // next free handle
+	owner    string // model space block record handle for entities (R13+)
+}
+
+func (e *dxfEmitter) pair(code int, value string) {
+	c := strconv.Itoa(code)
+	for len(c) < 3 {
+		c = " " + c
+	}
+	e.w.WriteString(c)
+	e.w.WriteString(e.eol)
+	e.w.WriteString(value)
+	e.w.WriteString(e.eol)
+}
+
+func (e *dxfEmitter) num(code int, v float64) {
+	e.pair(code, strconv.FormatFloat(v, 'f', -1, 64))
+}
+
+// handle writes group 5 with the next free handle, when handles are used.
+func (e *dxfEmitter) handle() {
+	if !e.handles {
+		return
+	}
+	e.pair(5, strconv.FormatUint(e.next, 16))
+	e.next++
+}
+
+// entityHead writes the pairs every entity starts with.
+func (e *dxfEmitter) entityHead(kind, layer, subclass string) {
+	e.pair(0, kind)
+	e.handle()
+	if e.subclass {
+		if e.owner != "" {
+			e.pair(330, e.owner)
+		}
+		e.pair(100, "AcDbEntity")
+	}
+	e.pair(8, layer)
+	if e.subclass {
+		e.pair(100, subclass)
+	}
+}
+
+// line writes a LINE from a to b (drawing units).
+func (e *dxfEmitter) line(layer string, a, b [2]float64) {
+	e.entityHead("LINE", layer, "AcDbLine")
+	e.num(10, a[0])
+	e.num(20, a[1])
+	e.num(30, 0)
+	e.num(11, b[0])
+	e.num(21, b[1])
+	e.num(31, 0)
+}
+
+// text writes a TEXT centred on at (drawing units), height h, rotated deg.
+func (e *dxfEmitter) text(layer string, at [2]float64, h, deg float64, s string) {
+	e.entityHead("TEXT", layer, "AcDbText")
+	e.num(10, at[0])
+	e.num(20, at[1])
+	e.num(30, 0)
+	e.num(40, h)
+	e.pair(1, cleanText(s))
+	if deg != 0 {
+		e.num(50, deg)
+	}
+	e.pair(72, "1") // centre
+	e.num(11, at[0])
+	e.num(21, at[1])
+	e.num(31, 0)
+	if e.subclass {
+		e.pair(100, "AcDbText")
+	}
+	e.pair(73, "2") // middle
+}
+
+// cleanText keeps a label on one line: control characters become spaces.
+func cleanText(s string) string {
+	return strings.Map(func(r rune) rune {
+		if r < 0x20 || r == 0x7f {
+			return ' '
+		}
+		return r
+	}, s)
+}
+
+// layer writes one LAYER table record.
+func (e *dxfEmitter) layer(name string, color, lineWeight int, ltype, tableHandle, plotStyle string) {
+	e.pair(0, "LAYER")
+	e.handle()
+	if e.subclass {
+		if tableHandle != "" {
+			e.pair(330, tableHandle)
+		}
+		e.pair(100, "AcDbSymbolTableRecord")
+		e.pair(100, "AcDbLayerTableRecord")
+	}
+	e.pair(2, name)
+	e.pair(70, "0")
+	e.pair(62, strconv.Itoa(color))
+	e.pair(6, ltype)
+	if e.subclass {
+		e.pair(370, strconv.Itoa(lineWeight))
+		if plotStyle != "" {
+			e.pair(390, plotStyle)
+		}
+	}
+}
+
+// markupEntityCount is the number of entities markup writes for m.
+func markupEntityCount(m *Markup) int {
+	return len(m.Highlights) + len(m.BlockingAdds) + len(m.Labels)
+}
+
+// markup writes every markup entity of m, converted to drawing units.
+func (e *dxfEmitter) markup(m *Markup) {
+	k := 1 / m.ToInch
+	du := func(p [2]float64) [2]float64 { return [2]float64{p[0] * k, p[1] * k} }
+	for _, s := range m.Highlights {
+		e.line(LayerFail, du(s.A), du(s.B))
+	}
+	for _, s := range m.BlockingAdds {
+		e.line(LayerBlocking, du(s.A), du(s.B))
+	}
+	h := m.textHeight() * k
+	for _, l := range m.Labels {
+		e.text(LayerLabel, du(l.At), h, l.AngleDeg, l.Text)
+	}
+}

@@ -1,0 +1,69 @@
+package export
+
+import (
+	"fmt"
+	"math"
+	"strconv"
+	"strings"
+)
+
+// FtIn formats a length in inches as feet and inches to the nearest 1/16
+// in, the way framing plans write it: 150.5 -> 12'-6 1/2", 8 -> 0'-8",
+// 144 -> 12'-0". A non-finite length gives "n/a".
+func FtIn(in float64) string {
+	if math.IsNaN(in) || math.IsInf(in, 0) {
+		return "n/a"
+	}
+	sign := ""
+	if in < 0 {
+		sign = "-"
+		in = -in
+	}
+	sixteenths := int64(math.Round(in * 16))
+	ft := sixteenths / (12 * 16)
+	rem := sixteenths % (12 * 16)
+	whole := rem / 16
+	frac := rem % 16
+	s := fmt.Sprintf("%s%d'-%d", sign, ft, whole)
+	if frac != 0 {
+		num, den := frac, int64(16)
+		for num%2 == 0 {
+			num /= 2
+			den /= 2
+		}
+		s += fmt.Sprintf(" %d/%d", num, den)
+	}
+	return s + `"`
+}
+
+// ftInList formats lengths as "12'-0\" + 10'-6\"".
+func ftInList(ins []float64) string {
+	parts := make([]string, len(ins))
+	for i, v := range ins {
+		parts[i] = FtIn(v)
+	}
+	return strings.Join(parts, " + ")
+}
+
+// intList formats []int as "1, 2".
+func intList(ns []int) string {
+	parts := make([]string, len(ns))
+	for i, n := range ns {
+		parts[i] = strconv.Itoa(n)
+	}
+	return strings.Join(parts, ", ")
+}
+
+// numList formats lengths in inches to 0.01 as "14.5, 14.5".
+func numList(vs []float64) string {
+	parts := make([]string, len(vs))
+	for i, v := range vs {
+		parts[i] = strconv.FormatFloat(v, 'f', -1, 64)
+		if math.Abs(v*100-math.Round(v*100)) > 1e-9 {
+			parts[i] = strconv.FormatFloat(v, 'f', 2, 64)
+		}
+	}
+	return strings.Join(parts, ", ")
+}
+
+func finite(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }

@@ -1,0 +1,142 @@
+package export
+
+import (
+	"fmt"
+	"math"
+)
+
+// Markup is what the annotated DXF and the overlay draw, in inches (world
+// coordinates of the plan after unit conversion). ToInch is the drawing's
+// inch factor (inches per drawing unit: 1 for in, 12 for ft, 1/25.4 for mm);
+// the writers divide by it to place the markup in the drawing's own units.
+type Markup struct {
+	ToInch       float64   // inches per drawing unit; must be > 0
+	TextHeightIn float64   // label height; 0 = LabelHeightIn of the markup's extent
+	Highlights   []Segment // failing members, on LayerFail
+	BlockingAdds []Segment // blocking rows to add, on LayerBlocking
+	Labels       []Label   // mark and max ratio at member midpoints, on LayerLabel
+}
+
+// Segment is a straight line in inches; Ref names what it marks (member or
+// blocking row id) for messages.
+type Segment struct {
+	A, B [2]float64
+	Ref  string
+}
+
+// Label is a text centred on At (inches), rotated AngleDeg counter-clockwise.
+type Label struct {
+	At       [2]float64
+	AngleDeg float64
+	Text     string
+}
+
+// MarkupFromResults builds the markup for r: a highlight over each member
+// whose status is not pass, a line for each blocking row that is not already
+// drawn, and a label "mark ratio" (or "id ERROR") at each member's midpoint,
+// rotated along the member and kept readable (angle in (-90, 90]). Inch
+// coordinates are taken from StartIn/EndIn when set, else from Start/End
+// times toInch. The text height is LabelHeightIn of the members' extent,
+// capped at 0.6 of the smallest positive spacing or trib width so that
+// labels stay between neighbouring joists.
+func MarkupFromResults(r *Results, toInch float64) Markup {
+	m := Markup{ToInch: toInch}
+	minGap := math.Inf(1)
+	for i := range r.Members {
+		mb := &r.Members[i]
+		a, b := inches(mb.Start, mb.End, mb.StartIn, mb.EndIn, toInch)
+		if mb.Status != StatusPass {
+			m.Highlights = append(m.Highlights, Segment{A: a, B: b, Ref: mb.ID})
+		}
+		text := mb.Mark
+		if text == "" {
+			text = mb.ID
+		}
+		if mb.Status == StatusError {
+			text += " ERROR"
+		} else {
+			text += fmt.Sprintf(" %.2f", mb.MaxRatio)
+		}
+		ang := math.Atan2(b[1]-a[1], b[0]-a[0]) * 180 / math.Pi
+		for ang > 90 {
+			ang -= 180
+		}
+		for ang <= -90 {
+			ang += 180
+		}
+		m.Labels = append(m.Labels, Label{At: [2]float64{(a[0] + b[0]) / 2, (a[1] + b[1]) / 2}, AngleDeg: ang, Text: text})
+		for _, g := range []float64{mb.SpacingIn, mb.TribIn} {
+			if g > 0 && g < minGap {
+				minGap = g
+			}
+		}
+	}
+	for i := range r.BlockingRows {
+		br := &r.BlockingRows[i]
+		if br.Existing {
+			continue
+		}
+		a, b := inches(br.Start, br.End, br.StartIn, br.EndIn, toInch)
+		m.BlockingAdds = append(m.BlockingAdds, Segment{A: a, B: b, Ref: br.ID})
+	}
+	h := LabelHeightIn(m.extent())
+	if !math.IsInf(minGap, 1) && h > 0.6*minGap {
+		h = 0.6 * minGap
+	}
+	m.TextHeightIn = h
+	return m
+}
+
+func inches(start, end, startIn, endIn [2]float64, toInch float64) ([2]float64, [2]float64) {
+	if startIn != ([2]float64{}) || endIn != ([2]float64{}) {
+		return startIn, endIn
+	}
+	return [2]float64{start[0] * toInch, start[1] * toInch}, [2]float64{end[0] * toInch, end[1] * toInch}
+}
+
+// LabelHeightIn returns the label text height for a plan whose larger
+// extent is extentIn inches: extent/120, at least 1 in and at most 24 in.
+// A 40 ft plan gets 4 in text, which plots at about 3/32 in at 1/4" = 1'-0"
+// (common practice, no source: readable, and fits between joists at 16 in).
+func LabelHeightIn(extentIn float64) float64 {
+	h := extentIn / 120
+	return math.Min(math.Max(h, 1), 24)
+}
+
+// extent returns the larger side of the bounding box of every point of m.
+func (m *Markup) extent() float64 {
+	lo, hi := m.bounds()
+	return math.Max(hi[0]-lo[0], hi[1]-lo[1])
+}
+
+// validate checks that m can be written: a positive finite ToInch and
+// finite coordinates.
+func (m *Markup) validate() error {
+	if !(m.ToInch > 0) || !finite(m.ToInch) {
+		return fmt.Errorf("markup: inch factor %v: want a positive number of inches per drawing unit", m.ToInch)
+	}
+	if !finite(m.TextHeightIn) || m.TextHeightIn < 0 {
+		return fmt.Errorf("markup: text height %v in: want a finite height >= 0", m.TextHeightIn)
+	}
+	for _, group := range [][]Segment{m.Highlights, m.BlockingAdds} {
+		for _, s := range group {
+			if !finite(s.A[0]) || !finite(s.A[1]) || !finite(s.B[0]) || !finite(s.B[1]) {
+				return fmt.Errorf("markup: %s: non-finite coordinate %v %v", s.Ref, s.A, s.B)
+			}
+		}
+	}
+	for _, l := range m.Labels {
+		if !finite(l.At[0]) || !finite(l.At[1]) || !finite(l.AngleDeg) {
+			return fmt.Errorf("markup: label %q: non-finite position or angle", l.Text)
+		}
+	}
+	return nil
+}
+
+// textHeight returns the label height in inches.
+func (m *Markup) textHeight() float64 {
+	if m.TextHeightIn > 0 {
+		return m.TextHeightIn
+	}
+	return LabelHeightIn(m.extent())
+}

@@ -1,0 +1,224 @@
+package export
+
+// Schema is the value of results.json's "schema" key. Bump the number when
+// a key is renamed or removed; adding keys keeps it.
+const Schema = "framecheck-results/1"
+
+// Check kinds, the values of Check.Kind.
+const (
+	KindBendingTop      = "bending-top"
+	KindBendingBottom   = "bending-bottom"
+	KindShear           = "shear"
+	KindDeflectionLive  = "deflection-live"
+	KindDeflectionTotal = "deflection-total"
+	KindBearing         = "bearing"
+)
+
+// CheckKinds lists the check kinds in the order the schedule shows them.
+var CheckKinds = []string{
+	KindBendingTop, KindBendingBottom, KindShear,
+	KindDeflectionLive, KindDeflectionTotal, KindBearing,
+}
+
+// Member statuses, the values of Member.Status and Mark.Status.
+const (
+	StatusPass  = "pass"
+	StatusFail  = "fail"
+	StatusError = "error"
+)
+
+// Results is the whole of results.json. JSON names are the contract of
+// issue 5; keep them.
+type Results struct {
+	Schema       string        `json:"schema"`        // Schema; WriteJSON fills it when empty
+	Plan         string        `json:"plan"`          // input file name
+	DrawingUnits string        `json:"drawing_units"` // in | ft | mm | cm | m
+	Members      []Member      `json:"members"`
+	Marks        []Mark        `json:"marks"`
+	BlockingRows []BlockingRow `json:"blocking_rows"`
+	Takeoff      Takeoff       `json:"takeoff"`
+	Summary      Summary       `json:"summary"`
+	Assumptions  Assumptions   `json:"assumptions"`
+}
+
+// Member is one joist with its geometry, checks and outcome.
+type Member struct {
+	ID     string `json:"id"`
+	Mark   string `json:"mark"`
+	Layer  string `json:"layer"`
+	Handle string `json:"handle"`
+	// Source names the drawn line, e.g. "plan.dxf:4410 (handle 2F1, layer JOISTS)".
+	Source string `json:"source,omitempty"`
+	// Start and End are in drawing units, as drawn.
+	Start [2]float64 `json:"start"`
+	End   [2]float64 `json:"end"`
+	// StartIn and EndIn are Start and End in inches (world), for the DXF
+	// markup; not part of the JSON. Zero values mean "derive from Start/End".
+	StartIn [2]float64 `json:"-"`
+	EndIn   [2]float64 `json:"-"`
+
+	LengthIn     float64    `json:"length_in"`
+	BearingsAtIn []float64  `json:"bearings_at_in"` // along the member from Start
+	SpansIn      []float64  `json:"spans_in"`       // centre-to-centre of bearings
+	OverhangsIn  [2]float64 `json:"overhangs_in"`   // [at start, at end]
+	TribIn       float64    `json:"trib_in"`        // tributary width
+	SpacingIn    float64    `json:"spacing_in"`     // on-centre spacing reported (0 if unknown)
+
+	Size    string `json:"size"` // nominal, e.g. "2x10"
+	Species string `json:"species"`
+	Grade   string `json:"grade"`
+	Zone    string `json:"zone"`
+
+	Checks    []Check `json:"checks"`
+	Governing string  `json:"governing"` // Kind of the check with the largest ratio
+	MaxRatio  float64 `json:"max_ratio"`
+
+	BlockingRowsPerSpan []int     `json:"blocking_rows_per_span"`
+	BlockingAtIn        []float64 `json:"blocking_at_in"` // along the member from Start
+
+	Status   string   `json:"status"` // pass | fail | error
+	Messages []string `json:"messages"`
+}
+
+// Check is one design check of a member under one load combination.
+type Check struct {
+	Kind      string      `json:"kind"`  // one of CheckKinds
+	Combo     string      `json:"combo"` // e.g. "D+L"
+	Actual    float64     `json:"actual"`
+	Allowable float64     `json:"allowable"`
+	Unit      string      `json:"unit"` // psi, in, lbf ...
+	Ratio     float64     `json:"ratio"`
+	Trace     []TraceItem `json:"trace"`
+}
+
+// TraceItem is one intermediate value of a check (CD, CL, RB, M, ...).
+type TraceItem struct {
+	Name   string  `json:"name"`
+	Value  float64 `json:"value"`
+	Unit   string  `json:"unit"`
+	Source string  `json:"source,omitempty"` // clause, table or equation
+}
+
+// Mark is one line of the framing schedule: members identical for design.
+type Mark struct {
+	Mark                string    `json:"mark"`
+	Size                string    `json:"size"`
+	Species             string    `json:"species"`
+	Grade               string    `json:"grade"`
+	Zone                string    `json:"zone"`
+	SpacingIn           float64   `json:"spacing_in"`
+	SpansIn             []float64 `json:"spans_in"`
+	Count               int       `json:"count"`
+	BlockingRowsPerSpan []int     `json:"blocking_rows_per_span"`
+	MaxRatio            float64   `json:"max_ratio"`
+	Status              string    `json:"status"`
+}
+
+// BlockingRow is one line of blocking across a run of adjacent parallel
+// joists at one position along the span.
+type BlockingRow struct {
+	ID         string    `json:"id"`          // e.g. "B1"
+	Run        string    `json:"run"`         // run id, e.g. "R2"
+	SpanIndex  int       `json:"span_index"`  // 0-based span of the run's members
+	PositionIn float64   `json:"position_in"` // along the span from its first bearing
+	Pieces     int       `json:"pieces"`      // joist-to-joist bays crossed
+	ClearIn    []float64 `json:"clear_in"`    // clear length of each piece
+	Size       string    `json:"size"`        // blocking size = joist size
+	Existing   bool      `json:"existing"`    // already drawn on a blocking layer
+	Members    []string  `json:"members"`     // ids of the members it crosses
+	// Start and End of the row's line across the run, drawing units.
+	Start [2]float64 `json:"start"`
+	End   [2]float64 `json:"end"`
+	// StartIn and EndIn in inches for the DXF markup; zero = derive.
+	StartIn [2]float64 `json:"-"`
+	EndIn   [2]float64 `json:"-"`
+}
+
+// Takeoff is the lumber and hardware list.
+type Takeoff struct {
+	Joists   []TakeoffLine `json:"joists"`
+	Blocking []TakeoffLine `json:"blocking"`
+	Hangers  []TakeoffLine `json:"hangers"`
+	Totals   TakeoffTotals `json:"totals"`
+}
+
+// TakeoffLine is one line of the takeoff: a size (and for joists an order
+// length) with its count and board feet.
+type TakeoffLine struct {
+	Size          string  `json:"size"`
+	OrderLengthFt float64 `json:"order_length_ft"` // joists only; 0 otherwise
+	Count         int     `json:"count"`           // pieces or hangers
+	BoardFeet     float64 `json:"board_feet"`      // 0 for hangers
+	Note          string  `json:"note,omitempty"`  // e.g. "special order or spliced length"
+}
+
+// TakeoffTotals sums the takeoff.
+type TakeoffTotals struct {
+	JoistCount        int     `json:"joist_count"`
+	JoistBoardFeet    float64 `json:"joist_board_feet"`
+	BlockingPieces    int     `json:"blocking_pieces"`
+	BlockingBoardFeet float64 `json:"blocking_board_feet"`
+	Hangers           int     `json:"hangers"`
+	BoardFeet         float64 `json:"board_feet"`
+}
+
+// Summary counts members by status.
+type Summary struct {
+	Members int `json:"members"`
+	Pass    int `json:"pass"`
+	Fail    int `json:"fail"`
+	Error   int `json:"error"`
+}
+
+// Assumptions records the basis of the run: code editions, combinations,
+// switches, zones, the design values used and any notes.
+type Assumptions struct {
+	CodeEditions []string      `json:"code_editions"` // e.g. "NDS 2018 (ASD)"
+	Combinations []string      `json:"combinations"`  // e.g. "D+0.75L+0.75(Lr or S)"
+	Switches     []Setting     `json:"switches"`      // project settings, in file order
+	Zones        []Zone        `json:"zones"`
+	DesignValues []DesignValue `json:"design_values"`
+	Notes        []string      `json:"notes"` // assumptions in words
+}
+
+// Setting is one project setting as used (after defaults).
+type Setting struct {
+	Name   string `json:"name"` // project-file key, e.g. "design.kcr"
+	Value  string `json:"value"`
+	Unit   string `json:"unit,omitempty"`
+	Source string `json:"source,omitempty"` // "project file line 12", "default"
+}
+
+// Zone is one load zone with its area loads.
+type Zone struct {
+	Name                 string  `json:"name"`
+	Use                  string  `json:"use"` // floor | roof
+	DeadPsf              float64 `json:"dead_psf"`
+	LivePsf              float64 `json:"live_psf"`
+	RoofLivePsf          float64 `json:"roof_live_psf"`
+	SnowPsf              float64 `json:"snow_psf"`
+	WindDownPsf          float64 `json:"wind_down_psf"`
+	WindUpPsf            float64 `json:"wind_up_psf"`
+	Ceiling              string  `json:"ceiling"`
+	LiveDeflectionLimit  float64 `json:"live_deflection_limit"`  // L/n; 0 = not checked
+	TotalDeflectionLimit float64 `json:"total_deflection_limit"` // L/n; 0 = not checked
+}
+
+// DesignValue is one reference design value or factor used, with its source.
+type DesignValue struct {
+	Species string  `json:"species"`
+	Grade   string  `json:"grade"`
+	Size    string  `json:"size"`
+	Name    string  `json:"name"` // NDS symbol: Fb, Fv, Fc_perp, E, Emin, CF ...
+	Value   float64 `json:"value"`
+	Unit    string  `json:"unit"`   // psi, or "" for a factor
+	Source  string  `json:"source"` // e.g. "NDS 2018 Supplement Table 4A"
+}
+
+// Cautions are shown on the Notes sheet (and in the report): the tool
+// assists a qualified designer; see DOMAIN.md "Cautions".
+var Cautions = []string{
+	"framecheck assists a qualified designer; it does not replace engineering judgement or a licensed professional's review.",
+	"Design values and code editions must be checked against those the local jurisdiction has adopted.",
+	"Results for members outside the stated scope (notched, tapered, point-loaded, wet service without the wet_service switch) are not valid.",
+}

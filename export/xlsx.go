@@ -1,0 +1,227 @@
+package export
+
+import (
+	"bufio"
+	"fmt"
+
+	"github.com/xuri/excelize/v2"
+)
+
+// Sheet names of schedule.xlsx, in workbook order.
+const (
+	SheetMembers  = "Members"
+	SheetMarks    = "Marks"
+	SheetBlocking = "Blocking"
+	SheetTakeoff  = "Takeoff"
+	SheetInputs   = "Inputs"
+	SheetNotes    = "Notes"
+)
+
+// SheetNames lists the sheets of schedule.xlsx in order.
+var SheetNames = []string{SheetMembers, SheetMarks, SheetBlocking, SheetTakeoff, SheetInputs, SheetNotes}
+
+// WriteXLSX writes the member schedule with takeoff to path, atomically,
+// with excelize's streaming writer so that 100,000 members stay fast and
+// small. Each sheet has a frozen header row, an autofilter over its table and
+// set column widths; ratios show as 0.00, lengths as ft-in text (with the
+// inches as a number beside them where sorting needs it); failing and
+// erroring members' rows are shaded and ratios over 1.00 are bold red. A
+// non-finite number is written as the text "n/a". A path ending in .dxf is
+// refused.
+func WriteXLSX(path string, r *Results) error {
+	if err := refuseDrawing(path); err != nil {
+		return err
+	}
+	f := excelize.NewFile()
+	defer f.Close()
+	st, err := newStyles(f)
+	if err != nil {
+		return fmt.Errorf("export: %s: %w", path, err)
+	}
+	writers := []func(*excelize.File, *styles, *Results) error{
+		writeMembers, writeMarks, writeBlocking, writeTakeoff, writeInputs, writeNotes,
+	}
+	for _, w := range writers {
+		if err := w(f, st, r); err != nil {
+			return fmt.Errorf("export: %s: %w", path, err)
+		}
+	}
+	f.SetActiveSheet(0)
+	return writeAtomic(path, func(w *bufio.Writer) error {
+		return f.Write(w)
+	})
+}
+
+// cellKind picks a number format.
+type cellKind int
+
+const (
+	cText  cellKind = iota
+	cNum1           // 0.0
+	cRatio          // 0.00
+	cInt            // 0
+	nKinds
+)
+
+// styles holds the style ids: plain, in a failing row, and a ratio over 1.
+type styles struct {
+	header int
+	plain  [nKinds]int
+	fail   [nKinds]int
+	high   int // ratio > 1.00
+	highOK int // ratio > 1.00 in a row not otherwise marked (should not happen)
+}
+
+func newStyles(f *excelize.File) (*styles, error) {
+	var st styles
+	var err error
+	st.header, err = f.NewStyle(&excelize.Style{
+		Font:      &excelize.Font{Bold: true},
+		Fill:      excelize.Fill{Type: "pattern", Pattern: 1, Color: []string{"D9D9D9"}},
+		Border:    []excelize.Border{{Type: "bottom", Color: "000000", Style: 1}},
+		Alignment: &excelize.Alignment{WrapText: true, Vertical: "top"},
+	})
+	if err != nil {
+		return nil, err
+	}
+	formats := [nKinds]string{cText: "@", cNum1: "0.0", cRatio: "0.00", cInt: "0"}
+	failFill := excelize.Fill{Type: "pattern", Pattern: 1, Color: []string{"F8CBAD"}}
+	for k := cellKind(0); k < nKinds; k++ {
+		fm := formats[k]
+		if st.plain[k], err = f.NewStyle(&excelize.Style{CustomNumFmt: &fm}); err != nil {
+			return nil, err
+		}
+		if st.fail[k], err = f.NewStyle(&excelize.Style{CustomNumFmt: &fm, Fill: failFill}); err != nil {
+			return nil, err
+		}
+	}
+	ratio := formats[cRatio]
+	red := &excelize.Font{Bold: true, Color: "C00000"}
+	if st.high, err = f.NewStyle(&excelize.Style{CustomNumFmt: &ratio, Fill: failFill, Font: red}); err != nil {
+		return nil, err
+	}
+	if st.highOK, err = f.NewStyle(&excelize.Style{CustomNumFmt: &ratio, Font: red}); err != nil {
+		return nil, err
+	}
+	return &st, nil
+}
+
+// sheet is one streamed worksheet with a header row.
+type sheet struct {
+	f     *excelize.File
+	sw    *excelize.StreamWriter
+	st    *styles
+	name  string
+	ncols int
+	row   int
+	fail  bool // current row is a failing row
+	cells []any
+}
+
+// column is a header cell and its width in characters.
+type column struct {
+	Head  string
+	Width float64
+}
+
+func newSheet(f *excelize.File, st *styles, name string, cols []column) (*sheet, error) {
+	if name == SheetMembers {
+		if err := f.SetSheetName("Sheet1", name); err != nil {
+			return nil, err
+		}
+	} else if _, err := f.NewSheet(name); err != nil {
+		return nil, err
+	}
+	sw, err := f.NewStreamWriter(name)
+	if err != nil {
+		return nil, err
+	}
+	for i, c := range cols {
+		if err := sw.SetColWidth(i+1, i+1, c.Width); err != nil {
+			return nil, err
+		}
+	}
+	if err := sw.SetPanes(&excelize.Panes{Freeze: true, YSplit: 1, TopLeftCell: "A2", ActivePane: "bottomLeft"}); err != nil {
+		return nil, err
+	}
+	s := &sheet{f: f, sw: sw, st: st, name: name, ncols: len(cols)}
+	head := make([]any, len(cols))
+	for i, c := range cols {
+		head[i] = excelize.Cell{StyleID: st.header, Value: c.Head}
+	}
+	s.row = 1
+	if err := sw.SetRow("A1", head, excelize.RowOpts{Height: 30}); err != nil {
+		return nil, err
+	}
+	return s, nil
+}
+
+// begin starts a row; fail shades it.
+func (s *sheet) begin(fail bool) {
+	s.fail = fail
+	s.cells = s.cells[:0]
+}
+
+func (s *sheet) style(k cellKind) int {
+	if s.fail {
+		return s.st.fail[k]
+	}
+	return s.st.plain[k]
+}
+
+// text adds a text cell.
+func (s *sheet) text(v string) {
+	s.cells = append(s.cells, excelize.Cell{StyleID: s.style(cText), Value: v})
+}
+
+// num adds a number cell with format k; non-finite numbers become "n/a".
+func (s *sheet) num(v float64, k cellKind) {
+	if !finite(v) {
+		s.cells = append(s.cells, excelize.Cell{StyleID: s.style(cText), Value: "n/a"})
+		return
+	}
+	s.cells = append(s.cells, excelize.Cell{StyleID: s.style(k), Value: v})
+}
+
+// integer adds an integer cell.
+func (s *sheet) integer(v int) {
+	s.cells = append(s.cells, excelize.Cell{StyleID: s.style(cInt), Value: v})
+}
+
+// ratio adds a ratio cell, bold red over 1.00; ok=false leaves it blank.
+func (s *sheet) ratio(v float64, ok bool) {
+	switch {
+	case !ok:
+		s.cells = append(s.cells, excelize.Cell{StyleID: s.style(cText)})
+	case finite(v) && v > 1.0:
+		id := s.st.highOK
+		if s.fail {
+			id = s.st.high
+		}
+		s.cells = append(s.cells, excelize.Cell{StyleID: id, Value: v})
+	default:
+		s.num(v, cRatio)
+	}
+}
+
+// end writes the row.
+func (s *sheet) end() error {
+	s.row++
+	cell, err := excelize.CoordinatesToCellName(1, s.row)
+	if err != nil {
+		return err
+	}
+	return s.sw.SetRow(cell, s.cells)
+}
+
+// close sets the autofilter over the table and flushes the sheet.
+func (s *sheet) close() error {
+	last, err := excelize.CoordinatesToCellName(s.ncols, max(s.row, 2))
+	if err != nil {
+		return err
+	}
+	if err := s.f.AutoFilter(s.name, "A1:"+last, nil); err != nil {
+		return err
+	}
+	return s.sw.Flush()
+}
