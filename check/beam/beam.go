@@ -139,9 +139,9 @@ func (b Beam) Solve(wPli []float64) (*Response, error) {
 // a beam with as many segments it allocates nothing. On error r is left
 // empty (every query returns 0).
 func (b Beam) SolveInto(r *Response, wPli []float64) error {
-	r.reset(0, 0)
 	m, err := b.checkLoads(wPli)
 	if err != nil {
+		r.reset(0, 0)
 		return err
 	}
 	r.reset(m, len(b.SupportsAtIn))
