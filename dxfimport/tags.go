@@ -64,12 +64,12 @@ func (t *TagReader) readLine() ([]byte, error) {
 	b, err := t.br.ReadSlice('\n')
 	if err == bufio.ErrBufferFull {
 		t.long = append(t.long[:0], b...)
-		for err == bufio.ErrBufferFull {
-			if len(t.long) > MaxLineBytes {
-				return nil, t.errAt(t.line+1, -1, wrapf(ErrLineTooLong, "more than %d bytes", MaxLineBytes))
-			}
+		for err == bufio.ErrBufferFull && len(t.long) <= MaxLineBytes {
 			b, err = t.br.ReadSlice('\n')
 			t.long = append(t.long, b...)
+		}
+		if len(t.long) > MaxLineBytes {
+			return nil, t.errAt(t.line+1, -1, wrapf(ErrLineTooLong, "more than %d bytes", MaxLineBytes))
 		}
 		b = t.long
 	}

@@ -1,0 +1,97 @@
+package dxfimport
+
+import (
+	"errors"
+	"strings"
+	"testing"
+)
+
+// marked strips the position marker: a line that starts with "∑" is where
+// the error must be reported (as encoding/csv's tests mark positions). It
+// returns the input and the 1-based marked line (0 when none).
+func marked(s string) (string, int) {
+	lines := strings.Split(s, "\n")
+	at := 0
+	for i, l := range lines {
+		if strings.HasPrefix(l, "∑") {
+			lines[i] = strings.TrimPrefix(l, "∑")
+			at = i + 1
+		}
+	}
+	return strings.Join(lines, "\n"), at
+}
+
+// Refusals: each input is malformed in one way (DXF pair structure per the
+// Autodesk DXF Reference, "DXF Format"; common practice, no source for the
+// wording). Line is the marked line unless the case gives one.
+func TestRefusals(t *testing.T) {
+	cases := []struct {
+		name string
+		in   string
+		err  error
+		code int
+		line int // used when the input has no marker
+		msg  string
+	}{
+		{name: "binary DXF", in: "∑AutoCAD Binary DXF\r\n\x1a\x00\x00\x00SECTION\x00", err: ErrBinary, code: -1,
+			msg: "bin.dxf:1: binary DXF is not supported: save the drawing as ASCII DXF"},
+		{name: "DWG R2013", in: "∑AC1027\x00\x00\x00\x00\x00\x07\x01\x1f", err: ErrDWG, code: -1},
+		{name: "DWG R2000", in: "∑AC1015\x00\x00", err: ErrDWG, code: -1},
+		{name: "empty", in: "", err: ErrEmpty, code: -1, line: 1},
+		{name: "only blank lines", in: "\n  \r\n\n", err: ErrEmpty, code: -1, line: 1},
+		{name: "odd line count", in: "0\nSECTION\n2\nENTITIES\n0\nLINE\n8\n0\n∑10", err: ErrTruncated, code: 10,
+			msg: "bin.dxf:9: code 10: truncated file: group code 10 has no value line"},
+		{name: "odd line count with newline", in: "0\nSECTION\n2\nENTITIES\n∑0\n", err: ErrTruncated, code: 0},
+		{name: "ends inside entity", in: "0\nSECTION\n2\nENTITIES\n0\nLINE\n8\nA\n∑10\n1.0\n", err: ErrTruncated, code: -1},
+		{name: "ends inside header", in: "0\nSECTION\n2\nHEADER\n9\n$ACADVER\n∑1\nAC1009\n", err: ErrTruncated, code: -1},
+		{name: "ends after SECTION", in: "∑0\nSECTION\n", err: ErrTruncated, code: -1},
+		{name: "bad code", in: "0\nSECTION\n∑X2\nHEADER\n0\nENDSEC\n0\nEOF\n", err: ErrBadCode, code: -1,
+			msg: `bin.dxf:3: bad group code: want an integer group code, got "X2"`},
+		{name: "code out of range", in: "0\nSECTION\n2\nENTITIES\n∑2000\nx\n", err: ErrBadCode, code: -1},
+		{name: "float group code", in: "0\nSECTION\n2\nENTITIES\n∑10.0\nx\n", err: ErrBadCode, code: -1},
+		{name: "blank code line mid-file", in: "0\nSECTION\n∑\nHEADER\n0\nENDSEC\n", err: ErrBadCode, code: -1},
+		{name: "bad number", in: "0\nSECTION\n2\nENTITIES\n0\nLINE\n5\n2F\n8\nJOIST\n∑ 20\n1,5\n0\nENDSEC\n0\nEOF\n",
+			err: ErrBadNumber, code: 20,
+			msg: `bin.dxf:11 (handle 2F): code 20: bad number: want a number in LINE, got "1,5"`},
+		{name: "nan", in: "0\nSECTION\n2\nENTITIES\n0\nCIRCLE\n∑40\nnan\n0\nENDSEC\n0\nEOF\n", err: ErrBadNumber, code: 40},
+		{name: "inf", in: "0\nSECTION\n2\nENTITIES\n0\nPOINT\n∑10\n1e999\n0\nENDSEC\n0\nEOF\n", err: ErrBadNumber, code: 10},
+		{name: "bad $INSUNITS", in: "0\nSECTION\n2\nHEADER\n9\n$INSUNITS\n∑70\nmm\n0\nENDSEC\n0\nEOF\n", err: ErrBadNumber, code: 70},
+		{name: "bad layer colour", in: "0\nSECTION\n2\nTABLES\n0\nTABLE\n2\nLAYER\n0\nLAYER\n2\nA\n∑62\nred\n0\nENDTAB\n0\nENDSEC\n0\nEOF\n",
+			err: ErrBadNumber, code: 62},
+		{name: "bad MINSERT count", in: "0\nSECTION\n2\nENTITIES\n0\nINSERT\n2\nB\n∑70\n2.5\n0\nENDSEC\n0\nEOF\n", err: ErrBadNumber, code: 70},
+		{name: "not a section", in: "∑0\nLINE\n0\nEOF\n", err: ErrStructure, code: 0},
+		{name: "section without name", in: "0\nSECTION\n∑8\nHEADER\n", err: ErrStructure, code: 8},
+		{name: "pair outside entity", in: "0\nSECTION\n2\nENTITIES\n∑8\nA\n", err: ErrStructure, code: 8},
+		{name: "vertex y before x", in: "0\nSECTION\n2\nENTITIES\n0\nLWPOLYLINE\n∑20\n1\n0\nENDSEC\n0\nEOF\n", err: ErrStructure, code: 20},
+		{name: "line too long", in: "0\nSECTION\n2\nHEADER\n9\n∑" + strings.Repeat("x", MaxLineBytes+10) + "\n", err: ErrLineTooLong, code: -1},
+	}
+	for _, c := range cases {
+		t.Run(c.name, func(t *testing.T) {
+			in, line := marked(c.in)
+			if line == 0 {
+				line = c.line
+			}
+			d, err := Read(strings.NewReader(in), "bin.dxf", Options{})
+			if err == nil {
+				t.Fatalf("no error; read %d entities", len(d.Entities))
+			}
+			var pe *ParseError
+			if !errors.As(err, &pe) {
+				t.Fatalf("error %v is %T, want *ParseError", err, err)
+			}
+			if !errors.Is(err, c.err) || pe.Line != line || pe.Code != c.code || pe.File != "bin.dxf" {
+				t.Errorf("got %v (line %d, code %d), want %v at line %d, code %d", err, pe.Line, pe.Code, c.err, line, c.code)
+			}
+			if c.msg != "" && err.Error() != c.msg {
+				t.Errorf("message\n got %s\nwant %s", err, c.msg)
+			}
+		})
+	}
+}
+
+func TestBadUnitsOption(t *testing.T) {
+	_, err := Read(strings.NewReader("0\nEOF\n"), "u.dxf", Options{Units: "yd"})
+	if !errors.Is(err, ErrUnits) {
+		t.Errorf("got %v, want ErrUnits", err)
+	}
+}
