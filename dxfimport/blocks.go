@@ -37,7 +37,19 @@ func (r *reader) emit(l local) {
 	}
 	k := r.d.ToInch
 	r.placeWarn(&l.e, &l.e, affine{A: k, E: k})
-	r.d.Entities = append(r.d.Entities, l.e)
+	r.add(l.e)
+}
+
+// add appends a placed entity unless a coordinate overflowed.
+func (r *reader) add(e Entity) {
+	for _, p := range e.Points {
+		if math.IsInf(p.X, 0) || math.IsInf(p.Y, 0) || math.IsNaN(p.X) || math.IsNaN(p.Y) {
+			r.warnOnce("overflow", e.Pos, "DXF112", SevError,
+				"%s coordinates overflow when converted to inches; left out", e.Kind)
+			return
+		}
+	}
+	r.d.Entities = append(r.d.Entities, e)
 }
 
 // hitLimit reports the entity limit once.
@@ -181,7 +193,7 @@ func (r *reader) expand(in *insertRef, pos, from Pos, m affine, parentLayer stri
 					e.Pos.Layer = layer
 				}
 				e.From = from
-				r.d.Entities = append(r.d.Entities, e)
+				r.add(e)
 			}
 		}
 	}
@@ -207,7 +219,7 @@ func place(src, dst *Entity, m affine) bool {
 	det := m.det()
 	if src.Bulges != nil {
 		for i, b := range src.Bulges {
-			if det < 0 {
+			if det < 0 && b != 0 {
 				b = -b
 			}
 			dst.Bulges[i] = b

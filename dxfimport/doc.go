@@ -40,6 +40,7 @@
 //	DXF109 info     Options.Units differs from $INSUNITS
 //	DXF110 warning  extrusion not along Z: projected onto XY
 //	DXF111 warning  POLYLINE without SEQEND
+//	DXF112 error    coordinates overflow when converted to inches
 //
 // Text: $DWGCODEPAGE ANSI_1252 files before AC1021 are decoded from code
 // page 1252, later files are UTF-8; \U+XXXX escapes are decoded; TEXT %%

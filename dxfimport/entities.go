@@ -292,8 +292,11 @@ func (r *reader) lwpolyline(g *group, l *local, c common) error {
 			if n == 0 {
 				return r.gErr(g, t, ErrStructure, "bulge (code 42) before the first vertex (code 10)")
 			}
-			bulges[n-1], err = r.gFloat(g, t)
-			anyBulge = anyBulge || bulges[n-1] != 0
+			var b float64
+			b, err = r.gFloat(g, t)
+			if b != 0 {
+				bulges[n-1], anyBulge = b, true
+			}
 		case 38:
 			elev, err = r.gFloat(g, t)
 		case 70:
@@ -367,6 +370,9 @@ func (r *reader) vertex(g *group) error {
 		if err != nil {
 			return err
 		}
+	}
+	if bulge == 0 {
+		bulge = 0 // no negative zero
 	}
 	if flags&16 != 0 {
 		return nil
