@@ -101,7 +101,7 @@ func BuildTakeoff(p *Plan, rows []BlockingRow) Takeoff {
 	sort.Slice(t.Joists, func(i, j int) bool {
 		a, b := t.Joists[i], t.Joists[j]
 		if a.Size != b.Size {
-			return a.Size < b.Size
+			return sizeLess(a.Size, b.Size)
 		}
 		if a.Species != b.Species {
 			return a.Species < b.Species
@@ -129,12 +129,29 @@ func BuildTakeoff(p *Plan, rows []BlockingRow) Takeoff {
 		t.BlockingPieces += l.Pieces
 		t.BlockingBoardFeet += l.BoardFeet
 	}
-	sort.Slice(t.Blocking, func(i, j int) bool { return t.Blocking[i].Size < t.Blocking[j].Size })
+	sort.Slice(t.Blocking, func(i, j int) bool { return sizeLess(t.Blocking[i].Size, t.Blocking[j].Size) })
 	for s, n := range hangers {
 		t.Hangers = append(t.Hangers, HangerLine{Size: s, Count: n})
 		t.HangerCount += n
 	}
-	sort.Slice(t.Hangers, func(i, j int) bool { return t.Hangers[i].Size < t.Hangers[j].Size })
+	sort.Slice(t.Hangers, func(i, j int) bool { return sizeLess(t.Hangers[i].Size, t.Hangers[j].Size) })
 	t.TotalBoardFeet = t.JoistBoardFeet + t.BlockingBoardFeet
 	return t
+}
+
+// sizeLess orders nominal sizes by thickness, then depth ("2x8" before
+// "2x10"); unparsable sizes sort after, by text.
+func sizeLess(a, b string) bool {
+	ab, ad, ea := NominalSize(a)
+	bb, bd, eb := NominalSize(b)
+	switch {
+	case ea != nil || eb != nil:
+		if (ea == nil) != (eb == nil) {
+			return ea == nil
+		}
+		return a < b
+	case ab != bb:
+		return ab < bb
+	}
+	return ad < bd
 }
