@@ -131,7 +131,9 @@ func (b Beam) Solve(wPli []float64) (*Response, error) {
 		return nil, err
 	}
 	r := newResponse(m, len(b.SupportsAtIn))
-	b.fill(r, wPli)
+	if err := b.fill(r, wPli); err != nil {
+		return nil, err
+	}
 	return r, nil
 }
 
@@ -145,7 +147,10 @@ func (b Beam) SolveInto(r *Response, wPli []float64) error {
 		return err
 	}
 	r.reset(m, len(b.SupportsAtIn))
-	b.fill(r, wPli)
+	if err := b.fill(r, wPli); err != nil {
+		r.reset(0, 0)
+		return err
+	}
 	return nil
 }
 
@@ -167,8 +172,9 @@ func (b Beam) checkLoads(wPli []float64) (int, error) {
 }
 
 // fill solves the valid beam b under wPli into r, already sized for it
-// and zeroed.
-func (b Beam) fill(r *Response, wPli []float64) {
+// and zeroed. Its only error is an overflow (loads or lengths near the
+// float64 range), which wraps ErrBadLoad.
+func (b Beam) fill(r *Response, wPli []float64) error {
 	sup := b.SupportsAtIn
 	n := len(sup)
 	m := len(r.segs)
@@ -260,6 +266,20 @@ func (b Beam) fill(r *Response, wPli []float64) {
 		c.y0 = 0
 		c.th0 = segs[m-2].slope(segs[m-2].l, ie)
 	}
+
+	// Overflow shows in the reactions or the end deflections/slopes.
+	check := 0.0
+	for _, v := range r.buf {
+		check += v
+	}
+	for i := range segs {
+		check += segs[i].y0 + segs[i].th0 + segs[i].v0
+	}
+	if !finite(check) {
+		return fmt.Errorf("%w: results overflow: loads %v lb/in on a %g in beam with EI %g lb*in^2 are out of range",
+			ErrBadLoad, wPli, b.LengthIn, b.EILbIn2)
+	}
+	return nil
 }
 
 // threeMoment fills the interior support moments ms[1:len(ms)-1] from the
