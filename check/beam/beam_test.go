@@ -3,6 +3,7 @@ package beam
 import (
 	"errors"
 	"math"
+	"strings"
 	"testing"
 )
 
@@ -133,22 +134,23 @@ func TestValidate(t *testing.T) {
 	cases := []struct {
 		name string
 		b    Beam
+		want string // the message names the problem
 	}{
-		{"zero length", Beam{0, []float64{0, 0}, 1}},
-		{"negative length", Beam{-10, []float64{0, 10}, 1}},
-		{"NaN length", Beam{nan, []float64{0, 10}, 1}},
-		{"Inf length", Beam{inf, []float64{0, 10}, 1}},
-		{"zero EI", Beam{10, []float64{0, 10}, 0}},
-		{"negative EI", Beam{10, []float64{0, 10}, -5}},
-		{"NaN EI", Beam{10, []float64{0, 10}, nan}},
-		{"no supports", Beam{10, nil, 1}},
-		{"one support", Beam{10, []float64{5}, 1}},
-		{"support NaN", Beam{10, []float64{0, nan}, 1}},
-		{"support Inf", Beam{10, []float64{0, inf}, 1}},
-		{"support below 0", Beam{10, []float64{-1, 10}, 1}},
-		{"support past end", Beam{10, []float64{0, 10.5}, 1}},
-		{"unsorted", Beam{10, []float64{0, 8, 4}, 1}},
-		{"coincident", Beam{10, []float64{0, 5, 5, 10}, 1}},
+		{"zero length", Beam{0, []float64{0, 0}, 1}, "length 0 in"},
+		{"negative length", Beam{-10, []float64{0, 10}, 1}, "length -10 in"},
+		{"NaN length", Beam{nan, []float64{0, 10}, 1}, "length NaN in"},
+		{"Inf length", Beam{inf, []float64{0, 10}, 1}, "length +Inf in"},
+		{"zero EI", Beam{10, []float64{0, 10}, 0}, "EI 0 lb*in^2"},
+		{"negative EI", Beam{10, []float64{0, 10}, -5}, "EI -5 lb*in^2"},
+		{"NaN EI", Beam{10, []float64{0, 10}, nan}, "EI NaN"},
+		{"no supports", Beam{10, nil, 1}, "0 support(s): want at least 2"},
+		{"one support", Beam{10, []float64{5}, 1}, "1 support(s): want at least 2"},
+		{"support NaN", Beam{10, []float64{0, nan}, 1}, "support[1] at NaN in"},
+		{"support Inf", Beam{10, []float64{0, inf}, 1}, "support[1] at +Inf in"},
+		{"support below 0", Beam{10, []float64{-1, 10}, 1}, "support[0] at -1 in lies outside the beam [0, 10] in"},
+		{"support past end", Beam{10, []float64{0, 10.5}, 1}, "support[1] at 10.5 in lies outside"},
+		{"unsorted", Beam{10, []float64{0, 8, 4}, 1}, "support[2] at 4 in comes before support[1] at 8 in"},
+		{"coincident", Beam{10, []float64{0, 5, 5, 10}, 1}, "support[1] and support[2] coincide at 5 in"},
 	}
 	for _, c := range cases {
 		err := c.b.Validate()
@@ -156,12 +158,13 @@ func TestValidate(t *testing.T) {
 			t.Errorf("%s: Validate() = %v, want an error wrapping ErrBadBeam", c.name, err)
 			continue
 		}
+		if !strings.Contains(err.Error(), c.want) {
+			t.Errorf("%s: Validate() = %q, want it to contain %q", c.name, err, c.want)
+		}
 		if _, err2 := c.b.Solve([]float64{1, 1, 1}); !errors.Is(err2, ErrBadBeam) {
 			t.Errorf("%s: Solve error = %v, want ErrBadBeam", c.name, err2)
 		}
-		if c.b.Segments() == nil && len(c.b.SupportsAtIn) >= 2 {
-			t.Errorf("%s: Segments() = nil with %d supports", c.name, len(c.b.SupportsAtIn))
-		}
+		_ = c.b.Segments() // must not panic
 	}
 	ok := Beam{120, []float64{0, 120}, 1e8}
 	if err := ok.Validate(); err != nil {
@@ -297,4 +300,36 @@ func TestTwoEqualSpansOneLoaded(t *testing.T) {
 		t.Fatalf("MomentSignChanges = %v, want one point [%s]", sc, src)
 	}
 	near(t, "inflection (2 R1/w = 7l/8)", sc[0], 7*l/8, tolExact, 0, src)
+}
+
+func TestSegments(t *testing.T) {
+	// Key points of a member with both overhangs (definition of Segment).
+	b := Beam{LengthIn: 300, SupportsAtIn: []float64{20, 140, 280}, EILbIn2: 1}
+	want := []Segment{{0, 20, true}, {20, 140, false}, {140, 280, false}, {280, 300, true}}
+	got := b.Segments()
+	if len(got) != len(want) || b.NumSegments() != len(want) {
+		t.Fatalf("Segments() = %v (NumSegments %d), want %v", got, b.NumSegments(), want)
+	}
+	for i := range want {
+		if got[i] != want[i] {
+			t.Errorf("segment %d = %+v, want %+v", i, got[i], want[i])
+		}
+	}
+	// Supports at both ends: spans only.
+	b = Beam{LengthIn: 300, SupportsAtIn: []float64{0, 300}, EILbIn2: 1}
+	if got := b.Segments(); len(got) != 1 || got[0] != (Segment{0, 300, false}) {
+		t.Errorf("Segments() = %v, want one span [0, 300]", got)
+	}
+	_, err := b.Solve([]float64{1, 2})
+	if !errors.Is(err, ErrBadLoad) || !strings.Contains(err.Error(), "2 line loads for 1 segments") {
+		t.Errorf("Solve with 2 loads on 1 segment: %v", err)
+	}
+	_, err = b.Solve([]float64{math.NaN()})
+	if !errors.Is(err, ErrBadLoad) || !strings.Contains(err.Error(), "load on segment 0 is NaN lb/in") {
+		t.Errorf("Solve with a NaN load: %v", err)
+	}
+	_, err = Beam{LengthIn: 1e300, SupportsAtIn: []float64{0, 1e300}, EILbIn2: 1}.Solve([]float64{1e300})
+	if !errors.Is(err, ErrBadLoad) || !strings.Contains(err.Error(), "overflow") {
+		t.Errorf("Solve with overflowing results: %v", err)
+	}
 }
