@@ -31,7 +31,7 @@ func (r *reader) emit(l local) {
 		r.emitInsert(l)
 		return
 	}
-	if len(r.d.Entities) >= r.opt.MaxEntities {
+	if r.ents.n >= r.opt.MaxEntities {
 		r.hitLimit(l.e.Pos, 1)
 		return
 	}
@@ -49,7 +49,7 @@ func (r *reader) add(e Entity) {
 			return
 		}
 	}
-	r.d.Entities = append(r.d.Entities, e)
+	r.ents.add(e)
 }
 
 // hitLimit reports the entity limit once.
@@ -57,6 +57,10 @@ func (r *reader) hitLimit(pos Pos, n int) {
 	r.warnOnce("limit", pos, "DXF105", SevError,
 		"the drawing would hold more than %d entities (this one adds %d); the rest is left out", r.opt.MaxEntities, n)
 }
+
+// workBudget is how many block copies expand may place in one Read: room
+// for every entity allowed plus as many empty or cut copies again.
+func workBudget(maxEntities int) int { return 2*maxEntities + 1_000_000 }
 
 // grid returns the MINSERT columns and rows, as ezdxf yields them: at
 // least one of each, and one only when its spacing is zero (the copies
@@ -85,8 +89,10 @@ func satMul(a, b int) int {
 
 func satAdd(a, b int) int { return min(a+b, HardMaxEntities+1) }
 
-// count returns how many entities one insert of b expands to (an upper
-// bound: a self-insert counts as nothing, depth limits are ignored).
+// count returns how many entities and nested inserts one insert of b
+// expands to: an estimate of the work, exact for acyclic blocks (a
+// self-insert counts as one, depth limits are ignored). The work budget
+// in expand bounds the rest.
 func (r *reader) count(b *block) int {
 	switch b.cntState {
 	case 1:
@@ -102,6 +108,7 @@ func (r *reader) count(b *block) int {
 			n = satAdd(n, 1)
 			continue
 		}
+		n = satAdd(n, 1)
 		if c := r.blocks[strings.ToUpper(in.name)]; c != nil {
 			cols, rows := grid(in)
 			n = satAdd(n, satMul(satMul(cols, rows), r.count(c)))
@@ -118,7 +125,7 @@ func (r *reader) emitInsert(l local) {
 	if b != nil {
 		cols, rows := grid(in)
 		n := satMul(satMul(cols, rows), r.count(b))
-		if len(r.d.Entities)+n > r.opt.MaxEntities {
+		if r.ents.n+n > r.opt.MaxEntities {
 			r.hitLimit(l.e.Pos, n)
 			return
 		}
@@ -151,6 +158,9 @@ func (r *reader) expand(in *insertRef, pos, from Pos, m affine, parentLayer stri
 			"blocks nested more than %d deep (at block %q); the deeper inserts are left out", r.opt.MaxInsertDepth, in.name)
 		return
 	}
+	if len(b.ents) == 0 || r.stop {
+		return
+	}
 	layer := pos.Layer
 	if layer == "0" {
 		layer = parentLayer
@@ -161,6 +171,15 @@ func (r *reader) expand(in *insertRef, pos, from Pos, m affine, parentLayer stri
 	cols, rows := grid(in)
 	for row := 0; row < rows; row++ {
 		for col := 0; col < cols; col++ {
+			// Every placed copy costs work even if nothing in it is
+			// kept (a cycle cut, an undefined block): bound it.
+			if r.work++; r.work > workBudget(r.opt.MaxEntities) {
+				r.hitLimit(from, cols*rows)
+				r.stop = true
+			}
+			if r.stop {
+				return
+			}
 			// MINSERT offsets are rotated with the insert but not
 			// scaled (ezdxf Insert.multi_insert; DXF Reference, INSERT).
 			ox, oy := float64(col)*in.dc, float64(row)*in.dr
@@ -179,8 +198,9 @@ func (r *reader) expand(in *insertRef, pos, from Pos, m affine, parentLayer stri
 					r.expand(src.ins, src.e.Pos, from, mm, layer, depth+1, stack)
 					continue
 				}
-				if len(r.d.Entities) >= r.opt.MaxEntities {
+				if r.ents.n >= r.opt.MaxEntities {
 					r.hitLimit(from, 1)
+					r.stop = true
 					return
 				}
 				e := src.e
@@ -248,3 +268,45 @@ func place(src, dst *Entity, m affine) bool {
 
 // atan2Deg is atan2 in degrees.
 func atan2Deg(y, x float64) float64 { return math.Atan2(y, x) * 180 / math.Pi }
+
+// entityStore collects entities in chunks and makes the final slice once,
+// so a large drawing costs one copy of the Entity structs instead of the
+// repeated copies of a growing slice: peak memory stays under twice the
+// entities' own size.
+type entityStore struct {
+	chunks [][]Entity
+	n      int
+}
+
+func (s *entityStore) add(e Entity) {
+	k := len(s.chunks) - 1
+	if k < 0 || len(s.chunks[k]) == cap(s.chunks[k]) {
+		size := 16
+		if k >= 0 {
+			size = min(2*cap(s.chunks[k]), 4096)
+		}
+		s.chunks = append(s.chunks, make([]Entity, 0, size))
+		k++
+	}
+	s.chunks[k] = append(s.chunks[k], e)
+	s.n++
+}
+
+// slice returns all entities in order and empties the store.
+func (s *entityStore) slice() []Entity {
+	if s.n == 0 {
+		return nil
+	}
+	if len(s.chunks) == 1 {
+		out := s.chunks[0]
+		s.chunks = nil
+		return out
+	}
+	out := make([]Entity, 0, s.n)
+	for i, c := range s.chunks {
+		out = append(out, c...)
+		s.chunks[i] = nil
+	}
+	s.chunks = nil
+	return out
+}

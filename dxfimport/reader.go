@@ -99,6 +99,9 @@ type reader struct {
 	polySkip  bool    // skipping a POLYLINE's VERTEX/SEQEND
 	deferred  []local // model-space inserts of blocks not yet defined
 	finishing bool
+	ents      entityStore
+	work      int  // block copies placed so far
+	stop      bool // the entity limit was hit: expand no more
 	warned    map[string]bool
 }
 
@@ -387,6 +390,7 @@ func (r *reader) finish() {
 		r.emitInsert(l)
 	}
 	r.deferred = nil
+	d.Entities = r.ents.slice()
 	d.ExtMin = Point{d.ExtMin.X * d.ToInch, d.ExtMin.Y * d.ToInch}
 	d.ExtMax = Point{d.ExtMax.X * d.ToInch, d.ExtMax.Y * d.ToInch}
 	if len(d.Skipped) > 0 {

@@ -191,6 +191,22 @@ func TestInsertProblems(t *testing.T) {
 			t.Errorf("no DXF105 without MaxEntities")
 		}
 	})
+	t.Run("huge grids of empty and cyclic blocks end quickly", func(t *testing.T) {
+		// Found by FuzzRead: a MINSERT of a block whose only entity is
+		// skipped used to loop rows x columns times.
+		in := section("BLOCKS",
+			blockDef("EMPTY", 0, 0, dxf(0, "ATTDEF", 8, "0")),
+			blockDef("P", 0, 0, dxf(0, "INSERT", 2, "Q", 70, 1000, 71, 1000, 44, 1, 45, 1)),
+			blockDef("Q", 0, 0, dxf(0, "INSERT", 2, "P", 70, 1000, 71, 1000, 44, 1, 45, 1), dxf(0, "INSERT", 2, "NONE", 70, 1000, 71, 1000, 44, 1, 45, 1))) +
+			section("ENTITIES",
+				dxf(0, "INSERT", 8, "L", 2, "EMPTY", 70, 30000, 71, 30000, 44, 1, 45, 1),
+				dxf(0, "INSERT", 8, "L", 2, "Q"),
+				dxf(0, "INSERT", 8, "L", 2, "P", 70, 1000, 71, 1000, 44, 1, 45, 1)) + dxf(0, "EOF")
+		d := read(t, in, Options{Units: "in", MaxEntities: 100})
+		if len(d.Entities) != 0 || d.Issues.Err() == nil {
+			t.Errorf("got %d entities, issues %v", len(d.Entities), d.Issues)
+		}
+	})
 	t.Run("blocks after entities", func(t *testing.T) {
 		in := section("ENTITIES", dxf(0, "INSERT", 8, "L", 2, "A3", 10, 10, 20, 0)) + blocks + dxf(0, "EOF")
 		d := read(t, in, Options{Units: "in"})
