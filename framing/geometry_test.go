@@ -266,3 +266,24 @@ func TestFlushBeamHangers(t *testing.T) {
 	}
 	checkNear(t, "flush-beam bearing length", m.Bearings[1].LengthIn, 1.5, 0)
 }
+
+func TestWallDrawnAsRectangle(t *testing.T) {
+	// a 2x4 wall drawn as a closed outline 3.5 in wide: its long sides are
+	// one double-line wall, its short ends run along the joists
+	p := newPlan().poly("WALL", true, rect(-10, -3.5, 100, 0)...).walls(-10, 100, 144)
+	p.joists(-3.5, 144, 0, 16)
+	p.joists(-3.5, 144, 120) // beyond the wall's drawn end (x = 100): no bearing there
+	pl := p.group(DefaultOptions())
+	m := member(t, pl, 0, 70.25)
+	if len(m.Bearings) != 2 || m.Error {
+		t.Fatalf("bearings %+v %v", m.Bearings, m.Messages)
+	}
+	checkNear(t, "span from the wall mid-line y=-1.75", m.Spans()[0], 145.75, 1e-9)
+	checkNear(t, "bearing length", m.Bearings[0].LengthIn, 3.5, 1e-9)
+	if m := member(t, pl, 120, 70.25); !m.Error {
+		t.Errorf("joist past the wall's end: error = false, bearings %+v", m.Bearings)
+	}
+	if Group(nil, DefaultOptions()) == nil {
+		t.Error("Group(nil) = nil, want an empty plan")
+	}
+}

@@ -75,6 +75,9 @@ type dirGroup struct {
 // are in Plan.Issues and on the members (Error, Messages).
 func Group(d *dxfimport.Drawing, opt Options) *Plan {
 	g := &grouper{opt: opt, plan: &Plan{Ignored: map[string]int{}}}
+	if d == nil {
+		return g.plan
+	}
 	g.classify(d)
 	g.makeMembers()
 	g.findBearings()
@@ -93,6 +96,7 @@ func (g *grouper) warn(pos dxfimport.Pos, code string, format string, args ...an
 // classify sorts the entities by the role of their layer.
 func (g *grouper) classify(d *dxfimport.Drawing) {
 	roles := map[string][2]int{}
+	g.joists = make([]segItem, 0, len(d.Entities))
 	for _, e := range d.Entities {
 		layer := e.Pos.Layer
 		rs, ok := roles[layer]

@@ -31,7 +31,7 @@ func (g *grouper) assignZones() {
 				best = i
 			}
 		}
-		name := strings.TrimSpace(t.text)
+		name := zoneName(t.text)
 		if best < 0 {
 			g.warn(t.pos, CodeZoneName, "zone name %q is outside every zone outline; ignored", name)
 			continue
@@ -58,6 +58,14 @@ func (g *grouper) assignZones() {
 		}
 		zs = append(zs, zg)
 		p.Zones = append(p.Zones, zg.ZoneOutline)
+	}
+	if len(zs) == 0 && g.opt.DefaultZone != "" {
+		all := make([]string, len(p.Members)) // one allocation, no aliasing
+		for k := range p.Members {
+			all[k] = g.opt.DefaultZone
+			p.Members[k].Zones = all[k : k+1 : k+1]
+		}
+		return
 	}
 	for k := range p.Members {
 		g.memberZones(k, zs)
@@ -148,4 +156,15 @@ func (g *grouper) memberZones(k int, zs []zoneGeom) {
 		m.Messages = append(m.Messages, msg)
 		g.warn(m.Pos, CodeZoneEnvelope, "%s", msg)
 	}
+}
+
+// zoneName is the first non-blank line of a zone's name text, trimmed: an
+// MTEXT may carry the loads on the lines below the name.
+func zoneName(text string) string {
+	for _, l := range strings.Split(text, "\n") {
+		if l = strings.TrimSpace(l); l != "" {
+			return l
+		}
+	}
+	return ""
 }

@@ -15,7 +15,7 @@ func TestZones(t *testing.T) {
 	p.joists(0, 288, 100)      // 144 in ROOF, 144 in CORRIDOR: envelope
 	p.joists(144, 288, 0, 16)  // outside both: default zone
 	p.joists(0, 144, 200, 216) // inside the nested BALCONY (innermost wins)
-	p.poly("LOAD-ZONE", true, rect(-20, -20, 250, 144)...).text("LOAD-ZONE", "ROOF", 5, 5, 4)
+	p.poly("LOAD-ZONE", true, rect(-20, -20, 250, 144)...).text("LOAD-ZONE", "ROOF\nD=15 psf", 5, 5, 4)
 	p.poly("LOAD-ZONE", true, rect(90, 144, 110, 300)...).text("LOAD-ZONE", "CORRIDOR", 95, 250, 4)
 	p.poly("LOAD-ZONE", true, rect(190, -10, 240, 140)...).text("LOAD-ZONE", "BALCONY", 195, 5, 4)
 	p.poly("LOAD-ZONE", true, rect(500, 500, 600, 600)...) // no name
