@@ -333,3 +333,26 @@ func TestSegments(t *testing.T) {
 		t.Errorf("Solve with overflowing results: %v", err)
 	}
 }
+
+func TestSignChangesZeroStretch(t *testing.T) {
+	// Documented behaviour of MomentSignChanges (no external source): an
+	// unloaded overhang carries no moment at all, a stretch of its own, so
+	// its bearing bounds the sagging span; a load on the overhang alone
+	// makes the whole member hog, with no change.
+	b := Beam{LengthIn: 200, SupportsAtIn: []float64{0, 160}, EILbIn2: eiTest}
+	r := mustSolve(t, b, 5, 0)
+	if sc := r.MomentSignChanges(); len(sc) != 1 || sc[0] != 160 {
+		t.Errorf("span loaded, overhang not: MomentSignChanges = %v, want [160]", sc)
+	}
+	r = mustSolve(t, b, 0, 5)
+	if sc := r.MomentSignChanges(); sc != nil {
+		t.Errorf("overhang loaded alone: MomentSignChanges = %v, want none", sc)
+	}
+	r = mustSolve(t, b, 0, 0)
+	if sc := r.MomentSignChanges(); sc != nil {
+		t.Errorf("no load: MomentSignChanges = %v, want none", sc)
+	}
+	if mp, xp, mn, xn := r.MomentExtremes(50, 10); mp != 0 || mn != 0 || xp != 10 || xn != 10 {
+		t.Errorf("no load: MomentExtremes(50, 10) = %g@%g, %g@%g, want zeros at from (10, the smaller end)", mp, xp, mn, xn)
+	}
+}

@@ -31,7 +31,9 @@ func (r *Response) span(fromIn, toIn float64) (float64, float64) {
 
 // MomentExtremes returns the largest positive and the most negative
 // moment on [from, to] (exact: moment is piecewise quadratic), with where
-// they occur; 0 and from when none.
+// they occur; 0 and from when none. The range may be given either way
+// round (from is then the smaller end) and is clamped to the beam; on a
+// tie the leftmost point is returned.
 func (r *Response) MomentExtremes(fromIn, toIn float64) (maxPos, xPos, maxNeg, xNeg float64) {
 	from, to := r.span(fromIn, toIn)
 	xPos, xNeg = from, from
@@ -158,7 +160,8 @@ func (r *Response) MomentSignChanges() []float64 {
 }
 
 // MaxDeflection returns the deflection of largest magnitude on [from,
-// to] (signed, in, positive down) and its x. Within each segment the
+// to] (signed, in, positive down) and its x; the range is taken as for
+// MomentExtremes. Within each segment the
 // extremes are at the interval ends or where the slope is zero; the slope
 // is monotone between the zeros of the moment, so each such root is
 // bracketed and found by safeguarded Newton iteration.
