@@ -43,10 +43,10 @@ func (r *Response) MomentExtremes(fromIn, toIn float64) (maxPos, xPos, maxNeg, x
 		if !ok {
 			continue
 		}
-		ts := [3]float64{t1, t2, -1}
+		ts := [3]float64{t1, -1, t2} // left to right: ties go to the leftmost
 		if s.w != 0 {
 			if tv := s.v0 / s.w; tv > t1 && tv < t2 {
-				ts[2] = tv
+				ts[1] = tv
 			}
 		}
 		for _, t := range ts {
@@ -182,7 +182,6 @@ func (r *Response) MaxDeflection(fromIn, toIn float64) (deflIn, xIn float64) {
 			continue
 		}
 		consider(s, t1)
-		consider(s, t2)
 		m1, m2, k := s.momentRoots(0)
 		cuts := [4]float64{t1, t2, t2, t2}
 		n := 1
@@ -199,6 +198,7 @@ func (r *Response) MaxDeflection(fromIn, toIn float64) (deflIn, xIn float64) {
 				consider(s, t)
 			}
 		}
+		consider(s, t2) // last: ties go to the leftmost point
 	}
 	return deflIn, xIn
 }
