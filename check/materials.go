@@ -10,6 +10,7 @@ import (
 	"sort"
 	"strconv"
 	"strings"
+	"sync"
 )
 
 // Size-factor rules a material row can carry in its size_factor column.
@@ -49,7 +50,19 @@ type materialRow struct {
 // Materials is a set of design-value tables searched by species, grade and
 // size. Rows loaded later take precedence over the built-in ones (Merge).
 type Materials struct {
-	rows []materialRow
+	rows  []materialRow
+	mu    sync.RWMutex
+	cache map[lookupKey]lookupVal // Lookup results by the names as given
+}
+
+type lookupKey struct {
+	species, grade string
+	width          float64
+}
+
+type lookupVal struct {
+	dv  DesignValues
+	err error
 }
 
 // table4aCSV holds the reference design values of NDS 2018 Supplement Table
@@ -201,6 +214,27 @@ func (m *Materials) Lookup(species, grade, size string) (DesignValues, error) {
 	if err != nil {
 		return DesignValues{}, err
 	}
+	k := lookupKey{species, grade, sec.NominalDIn}
+	m.mu.RLock()
+	v, ok := m.cache[k]
+	m.mu.RUnlock()
+	if ok {
+		return v.dv, v.err
+	}
+	dv, err := m.lookup(species, grade, sec)
+	m.mu.Lock()
+	if m.cache == nil {
+		m.cache = map[lookupKey]lookupVal{}
+	}
+	if len(m.cache) < 4096 {
+		m.cache[k] = lookupVal{dv, err}
+	}
+	m.mu.Unlock()
+	return dv, err
+}
+
+func (m *Materials) lookup(species, grade string, sec Section) (DesignValues, error) {
+	var err error
 	sp, err := m.resolveSpecies(species)
 	if err != nil {
 		return DesignValues{}, err

@@ -1,0 +1,204 @@
+package check
+
+import (
+	"math"
+	"sort"
+)
+
+// interval is a stretch of one edge between two bracing points (or a
+// bracing point and a free cantilever end), with its NDS 2018 3.3.3
+// stability quantities.
+type interval struct {
+	a, b      float64 // ends, analysis coordinates
+	braced    bool    // held continuously: CL = 1
+	kind      string  // LeSimple, LeCantilever or LeGeneral
+	luIn      float64
+	leIn      float64
+	leFormula string
+	rb        float64
+	fbEPsi    float64
+}
+
+// edgeEval is an edge's governing bending result.
+type edgeEval struct {
+	found    bool    // the edge is in compression somewhere
+	ratio    float64 // largest fb/Fb'
+	ci       int     // governing case
+	iv       interval
+	mLbIn    float64
+	fbStar   float64
+	cl       float64
+	maxRB    float64 // largest RB of any stretch of this edge in compression
+	maxRBLu  float64
+	maxRBInt interval
+}
+
+// braces returns the bracing points of an edge in analysis coordinates:
+// the bearings plus the blocking rows (member positions) that fall inside
+// the model, sorted and without duplicates.
+func (e *engine) braces(rowsIn []float64) []float64 {
+	pts := make([]float64, 0, len(e.bm.SupportsAtIn)+len(rowsIn)+len(e.m.BlockingAtIn))
+	pts = append(pts, e.bm.SupportsAtIn...)
+	for _, set := range [][]float64{e.m.BlockingAtIn, rowsIn} {
+		for _, x := range set {
+			if xa := x - e.x0; xa > 0 && xa < e.bm.LengthIn {
+				pts = append(pts, xa)
+			}
+		}
+	}
+	sort.Float64s(pts)
+	out := pts[:1]
+	for _, p := range pts[1:] {
+		if p-out[len(out)-1] > 0.01 {
+			out = append(out, p)
+		}
+	}
+	return out
+}
+
+// intervals cuts the model into the unbraced stretches of an edge braced
+// at pts (continuous true: one stretch held along its whole length).
+func (e *engine) intervals(continuous bool, pts []float64) []interval {
+	L := e.bm.LengthIn
+	if continuous {
+		return []interval{{a: 0, b: L, braced: true, kind: "braced"}}
+	}
+	d, bw := e.sec.DIn, e.sec.BIn
+	mk := func(a, b float64, kind string) interval {
+		iv := interval{a: a, b: b, kind: kind, luIn: b - a}
+		iv.leIn, iv.leFormula = EffectiveLength(kind, iv.luIn, d)
+		iv.rb = SlendernessRatio(iv.leIn, d, bw)
+		iv.fbEPsi = CriticalBucklingValue(e.eminAdj, iv.rb)
+		return iv
+	}
+	inner := LeSimple
+	if len(e.spanSegs) > 1 {
+		inner = LeGeneral
+	}
+	out := make([]interval, 0, len(pts)+1)
+	if pts[0] > 0 {
+		out = append(out, mk(0, pts[0], LeCantilever))
+	}
+	for i := 0; i+1 < len(pts); i++ {
+		out = append(out, mk(pts[i], pts[i+1], inner))
+	}
+	if last := pts[len(pts)-1]; last < L {
+		out = append(out, mk(last, L, LeCantilever))
+	}
+	return out
+}
+
+// evalEdge finds the governing bending ratio of the top edge (compression
+// under positive moment) or the bottom edge (negative moment) over the
+// stretches ivs, across every strength case. Fb' = Fb* CL Cfu with Fb* =
+// Fb CD CM Ct CF Ci Cr (NDS 2018 Table 4.3.1; Cfu = 1, strong-axis bending)
+// and CL from equation 3.3-6 for each stretch.
+func (e *engine) evalEdge(top bool, ivs []interval) edgeEval {
+	ev := edgeEval{ci: -1}
+	tol := 1e-6*e.mMax + 1e-9
+	for i := range ivs {
+		iv := &ivs[i]
+		inCompression := false
+		for ci := range e.cases {
+			c := &e.cases[ci]
+			pos, _, neg, _ := c.r.MomentExtremes(iv.a, iv.b)
+			m := pos
+			if !top {
+				m = -neg
+			}
+			if m <= tol {
+				continue
+			}
+			inCompression = true
+			fbStar := e.fbNoCD * c.cd
+			cl := 1.0
+			if !iv.braced {
+				cl = BeamStabilityFactor(iv.fbEPsi, fbStar)
+			}
+			ratio := m / e.sec.SIn3 / (fbStar * cl)
+			if !ev.found || ratio > ev.ratio {
+				ev.found, ev.ratio, ev.ci, ev.iv, ev.mLbIn, ev.fbStar, ev.cl = true, ratio, ci, *iv, m, fbStar, cl
+			}
+		}
+		if inCompression && !iv.braced && iv.rb > ev.maxRB {
+			ev.maxRB, ev.maxRBInt = iv.rb, *iv
+		}
+	}
+	return ev
+}
+
+// passes reports whether an edge result is within NDS limits: ratio at most
+// 1 and RB at most 50 (NDS 2018 3.3.3.7).
+func (ev edgeEval) passes() bool {
+	return !ev.found || (ev.ratio <= 1+ratioTol && ev.maxRB <= 50)
+}
+
+// ratioTol absorbs rounding in "ratio <= 1.000".
+const ratioTol = 1e-9
+
+// bendingResult writes an edge's governing result as a CheckResult with
+// its trace.
+func (e *engine) bendingResult(kind string, ev edgeEval) CheckResult {
+	c := &e.cases[ev.ci]
+	fb := ev.mLbIn / e.sec.SIn3
+	fbAdj := ev.fbStar * ev.cl
+	t := e.arena.tracer(16)
+	t.add("M", ev.mLbIn, "lb-in", "largest moment compressing this edge", "", "analysis ("+e.caseLabel(c)+")")
+	t.add("S", e.sec.SIn3, "in^3", "b d^2 / 6", t.f("%s(%s)^2 / 6", e.sec.BIn, e.sec.DIn), "NDS 2018 Supplement Table 1B")
+	t.add("fb", fb, "psi", "M / S", t.f("%s / %s", ev.mLbIn, e.sec.SIn3), "NDS 2018 3.3.2")
+	t.add("Fb*", ev.fbStar, "psi", "Fb CD CM Ct CF Ci Cr",
+		t.f("%s(%s)(%s)(%s)(%s)(%s)(%s)", e.dv.FbPsi, c.cd, e.cm.Fb, e.ct.Fb, e.cf.Fb, e.ci.Fb, e.cr), "NDS 2018 3.3.3.8, Table 4.3.1")
+	if ev.iv.braced {
+		t.add("CL", 1, "", "edge braced continuously", "", "NDS 2018 3.3.3.3")
+	} else {
+		iv := ev.iv
+		t.add("lu", iv.luIn, "in", "distance between bracing points", t.f("%s - %s", iv.b+e.x0, iv.a+e.x0), "NDS 2018 3.3.3.4")
+		t.add("lu/d", iv.luIn/e.sec.DIn, "", "lu / d", t.f("%s / %s", iv.luIn, e.sec.DIn), "NDS 2018 Table 3.3.3")
+		t.add("le", iv.leIn, "in", iv.leFormula, leSubst(&t, iv.leFormula, iv.luIn, e.sec.DIn), "NDS 2018 Table 3.3.3 ("+iv.kind+")")
+		t.add("RB", iv.rb, "", "sqrt(le d / b^2)", t.f("sqrt(%s(%s) / %s^2)", iv.leIn, e.sec.DIn, e.sec.BIn), "NDS 2018 Eq. 3.3-5")
+		t.add("Emin'", e.eminAdj, "psi", "Emin CM Ct Ci", t.f("%s(%s)(%s)(%s)", e.dv.EminPsi, e.cm.E, e.ct.E, e.ci.E), "NDS 2018 Table 4.3.1")
+		t.add("FbE", iv.fbEPsi, "psi", "1.20 Emin' / RB^2", t.f("1.20(%s) / %s^2", e.eminAdj, iv.rb), "NDS 2018 3.3.3.8")
+		a := iv.fbEPsi / ev.fbStar
+		t.add("CL", ev.cl, "", "(1 + FbE/Fb*)/1.9 - sqrt(((1 + FbE/Fb*)/1.9)^2 - (FbE/Fb*)/0.95)",
+			t.f("(1 + %s)/1.9 - sqrt(((1 + %s)/1.9)^2 - %s/0.95)", a, a, a), "NDS 2018 Eq. 3.3-6")
+	}
+	t.add("Fb'", fbAdj, "psi", "Fb* CL Cfu", t.f("%s(%s)(1.0)", ev.fbStar, ev.cl), "NDS 2018 Table 4.3.1")
+	t.add("fb/Fb'", fb/fbAdj, "", "fb / Fb'", t.f("%s / %s", fb, fbAdj), "NDS 2018 3.3.1")
+	return CheckResult{Kind: kind, Combo: e.caseLabel(c), Actual: fb, Allowable: fbAdj, Unit: "psi", Ratio: fb / fbAdj, Trace: t.items}
+}
+
+// leSubst writes the numbers into an effective-length formula.
+func leSubst(t *tracer, formula string, lu, d float64) string {
+	switch formula {
+	case "2.06 lu":
+		return t.f("2.06(%s)", lu)
+	case "1.33 lu":
+		return t.f("1.33(%s)", lu)
+	case "1.84 lu":
+		return t.f("1.84(%s)", lu)
+	case "1.63 lu + 3 d":
+		return t.f("1.63(%s) + 3(%s)", lu, d)
+	case "0.90 lu + 3 d":
+		return t.f("0.90(%s) + 3(%s)", lu, d)
+	}
+	return ""
+}
+
+// spanRows returns the positions (member coordinates) of n evenly spaced
+// blocking rows in every span, and the largest row spacing.
+func (e *engine) spanRows(n int) (rows []float64, maxLuIn float64) {
+	if n <= 0 {
+		return nil, 0
+	}
+	rows = make([]float64, 0, n*len(e.spanSegs))
+	for _, k := range e.spanSegs {
+		sg := e.segs[k]
+		l := sg.ToIn - sg.FromIn
+		step := l / float64(n+1)
+		maxLuIn = math.Max(maxLuIn, step)
+		for j := 1; j <= n; j++ {
+			rows = append(rows, sg.FromIn+float64(j)*step+e.x0)
+		}
+	}
+	return rows, maxLuIn
+}

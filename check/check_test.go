@@ -1,0 +1,260 @@
+package check
+
+import (
+	"math"
+	"strings"
+	"testing"
+)
+
+// floorJoist is a DF-L No.2 floor joist on two bearings with the loads of
+// IRC 2018 Table R502.3.1(2): 40 psf live, 10 psf dead, L/360.
+func floorJoist(size string, spanIn, spacingIn float64) Member {
+	return Member{ID: "J1", Size: size, Species: "Douglas Fir-Larch", Grade: "No.2", LengthIn: spanIn,
+		Bearings: []Bearing{{0, 1.5}, {spanIn, 1.5}}, SpacingIn: spacingIn, TribIn: spacingIn, Use: "floor",
+		Loads: AreaLoads{DeadPsf: 10, LivePsf: 40}, LiveLimit: 360, Repetitive: true}
+}
+
+func find(t *testing.T, r Result, kind string) CheckResult {
+	t.Helper()
+	for _, c := range r.Checks {
+		if c.Kind == kind {
+			return c
+		}
+	}
+	t.Fatalf("%s: no %s check in %+v (messages %v)", r.ID, kind, r.Checks, r.Messages)
+	return CheckResult{}
+}
+
+func traceValue(t *testing.T, c CheckResult, sym string) float64 {
+	t.Helper()
+	for _, ti := range c.Trace {
+		if ti.Symbol == sym {
+			return ti.Value
+		}
+	}
+	t.Fatalf("%s: no %s in the trace", c.Kind, sym)
+	return 0
+}
+
+// TestSimpleSpan_ClosedForm checks the simple-span formulas of any
+// mechanics-of-materials text: M = w L^2 / 8, V = R = w L / 2 and
+// deflection 5 w L^4 / (384 E I).
+func TestSimpleSpan_ClosedForm(t *testing.T) {
+	m := floorJoist("2x10", 168, 16)
+	m.TotalLimit = 240
+	r := CheckMember(m, DefaultSettings())
+	if r.Status != StatusPass {
+		t.Fatalf("status %s: %v", r.Status, r.Messages)
+	}
+	wL, wT := 40*16/144.0, 50*16/144.0
+	L := 168.0
+	expectNear(t, "M", traceValue(t, find(t, r, KindBendingTop), "M"), wT*L*L/8, 1e-6, 0, "w L^2 / 8")
+	expectNear(t, "V", traceValue(t, find(t, r, KindShear), "V"), wT*L/2, 1e-6, 0, "w L / 2")
+	expectNear(t, "R", traceValue(t, find(t, r, KindBearing), "R"), wT*L/2, 1e-6, 0, "w L / 2")
+	ei := 1.6e6 * 1.5 * 9.25 * 9.25 * 9.25 / 12
+	expectNear(t, "live deflection", find(t, r, KindDeflectionLive).Actual, 5*wL*math.Pow(L, 4)/(384*ei), 1e-9, 1e-9, "5 w L^4 / 384 E I")
+	// Total: Kcr = 1.5 on D (NDS 2018 3.5.2) plus L.
+	expectNear(t, "total deflection", find(t, r, KindDeflectionTotal).Actual, 5*(1.5*10*16/144.0+wL)*math.Pow(L, 4)/(384*ei), 1e-9, 1e-9, "5 w L^4 / 384 E I")
+	// fb = M/S against Fb' = Fb CD CF Cr = 900 (1.0)(1.1)(1.15), NDS 2018 Table 4.3.1.
+	expectNear(t, "Fb'", find(t, r, KindBendingTop).Allowable, 900*1.1*1.15, 1e-9, 0, "NDS 2018 Table 4.3.1")
+}
+
+// TestTwoEqualSpans_ClosedForm checks the two-span continuous beam under
+// uniform load (beam diagrams of any steel or wood design manual):
+// interior reaction 1.25 w L, support moment w L^2 / 8 (bottom edge in
+// compression over the interior bearing).
+func TestTwoEqualSpans_ClosedForm(t *testing.T) {
+	L := 144.0
+	m := floorJoist("2x10", 2*L, 16)
+	m.Bearings = []Bearing{{0, 1.5}, {L, 1.5}, {2 * L, 1.5}}
+	m.Loads = AreaLoads{DeadPsf: 30} // dead only: one case, nothing patterned
+	r := CheckMember(m, DefaultSettings())
+	w := 30 * 16 / 144.0
+	bot := find(t, r, KindBendingBottom)
+	expectNear(t, "support moment", traceValue(t, bot, "M"), w*L*L/8, 1e-6, 1e-9, "w L^2 / 8")
+	expectNear(t, "interior reaction", traceValue(t, find(t, r, KindBearing), "R"), 1.25*w*L, 1e-6, 1e-9, "1.25 w L")
+	// The bottom edge between the interior bearing and the inflection
+	// points is braced only at the bearings: lu = L, general row of Table 3.3.3.
+	expectNear(t, "lu", traceValue(t, bot, "lu"), L, 1e-9, 0, "bracing at bearings only")
+	if len(r.SpansIn) != 2 || r.SpansIn[0] != L {
+		t.Errorf("spans %v", r.SpansIn)
+	}
+}
+
+// TestOverhang_ClosedForm checks the cantilever moment w a^2 / 2 at the
+// bearing of an overhang (statics).
+func TestOverhang_ClosedForm(t *testing.T) {
+	a := 36.0
+	m := floorJoist("2x10", 120+a, 16)
+	m.Bearings = []Bearing{{0, 1.5}, {120, 3.5}}
+	m.OverhangEndIn = a
+	m.Loads = AreaLoads{DeadPsf: 30}
+	r := CheckMember(m, DefaultSettings())
+	w := 30 * 16 / 144.0
+	expectNear(t, "cantilever moment", traceValue(t, find(t, r, KindBendingBottom), "M"), w*a*a/2, 1e-6, 1e-9, "w a^2 / 2")
+	if r.OverhangsIn != [2]float64{0, a} {
+		t.Errorf("overhangs %v", r.OverhangsIn)
+	}
+}
+
+// TestSpanTable_IRC2018_R502_3_1_2 finds the longest span that passes for
+// DF-L No.2 floor joists, 40 psf live, 10 psf dead, L/360, and compares it
+// with IRC 2018 Table R502.3.1(2). Span values from memory: verify against
+// IRC 2018 Table R502.3.1(2). Those values match Fb = 875 psi for DF-L
+// No.2 (the earlier Supplement value the span tables were computed with,
+// from memory: verify), so the test runs the engine with a user material
+// holding that Fb; with the NDS 2018 value (900 psi) the bending-governed
+// spans grow by sqrt(900/875) = 1.4%, up to 3.5 in, which the second loop
+// checks.
+func TestSpanTable_IRC2018_R502_3_1_2(t *testing.T) {
+	ft := func(f, in float64) float64 { return 12*f + in }
+	rows := []struct {
+		size    string
+		spacing float64
+		spanIn  float64
+	}{
+		{"2x8", 12, ft(14, 2)}, {"2x8", 16, ft(12, 7)}, {"2x8", 24, ft(10, 3)},
+		{"2x10", 12, ft(17, 9)}, {"2x10", 16, ft(15, 5)}, {"2x10", 24, ft(12, 7)},
+		{"2x12", 12, ft(20, 7)}, {"2x12", 16, ft(17, 10)}, {"2x12", 24, ft(14, 7)},
+	}
+	old, err := LoadMaterialsCSV(strings.NewReader(
+		strings.Join(materialColumns, ",")+"\nDouglas Fir-Larch,No.2,2,0,875,575,180,625,1350,1600000,580000,4A,span-table basis\n"), "fb875.csv")
+	if err != nil {
+		t.Fatal(err)
+	}
+	s875 := DefaultSettings()
+	s875.Materials = BuiltinMaterials().Merge(old)
+	for _, r := range rows {
+		got := maxSpan(r.size, r.spacing, s875)
+		if math.Abs(got-r.spanIn) > 2 {
+			t.Errorf("%s @ %v in, Fb 875: longest span %.1f in, table %.0f in: more than 2 in apart (IRC 2018 Table R502.3.1(2), from memory: verify)",
+				r.size, r.spacing, got, r.spanIn)
+		}
+		got900 := maxSpan(r.size, r.spacing, DefaultSettings())
+		if got900 < r.spanIn-2 || got900 > r.spanIn*math.Sqrt(900.0/875)+2 {
+			t.Errorf("%s @ %v in, NDS 2018 values: longest span %.1f in, table %.0f in (IRC 2018 Table R502.3.1(2), from memory: verify)",
+				r.size, r.spacing, got900, r.spanIn)
+		}
+	}
+}
+
+// maxSpan bisects for the longest passing span to 0.05 in.
+func maxSpan(size string, spacing float64, s Settings) float64 {
+	lo, hi := 48.0, 480.0
+	for hi-lo > 0.05 {
+		mid := (lo + hi) / 2
+		if CheckMember(floorJoist(size, mid, spacing), s).Status == StatusPass {
+			lo = mid
+		} else {
+			hi = mid
+		}
+	}
+	return lo
+}
+
+// upliftRafter is a roof joist on two bearings, 18 ft span at 24 in, with
+// 8 psf dead, 20 psf roof live and 50 psf wind suction, so that 0.6D +
+// 0.6W is a net uplift and puts the bottom edge in compression (ASCE 7-16
+// 2.4.1 combination 7). Common practice, no source: the loads are chosen
+// for the test.
+func upliftRafter(size string) Member {
+	return Member{ID: "R1", Size: size, Species: "DF-L", Grade: "No.2", LengthIn: 216,
+		Bearings: []Bearing{{0, 1.5}, {216, 1.5}}, SpacingIn: 24, TribIn: 24, Use: "roof",
+		Loads: AreaLoads{DeadPsf: 8, RoofLivePsf: 20, WindUpPsf: 50}, LiveLimit: 180, TotalLimit: 120, Repetitive: true}
+}
+
+func TestUplift_BlockingRows(t *testing.T) {
+	s := DefaultSettings()
+	m := upliftRafter("2x10")
+	if r := CheckWithRows(m, s, 0); r.Status != StatusFail || find(t, r, KindBendingBottom).Ratio <= 1 {
+		t.Fatalf("2x10 with the bottom edge unbraced: status %s, want a bottom-edge failure", r.Status)
+	}
+	r := CheckMember(m, s)
+	n := r.RowsPerSpan()
+	if r.Status != StatusPass || n < 1 {
+		t.Fatalf("2x10 with the solver's rows: status %s, rows %d; messages %v", r.Status, n, r.Messages)
+	}
+	if len(r.BlockingAtIn) != n || !near(r.BlockingAtIn[0], 216/float64(n+1), 1e-9, 0) {
+		t.Errorf("row positions %v for %d rows in a 216 in span; want evenly spaced", r.BlockingAtIn, n)
+	}
+	// Fewest: one row fewer fails the bottom edge.
+	if f := CheckWithRows(m, s, n-1); find(t, f, KindBendingBottom).Ratio <= 1 {
+		t.Errorf("%d rows also pass the bottom edge; the solver should return the fewest", n-1)
+	}
+	if len(r.BlockingSteps) != n+1 || r.BlockingSteps[n].Ratio > 1 || r.BlockingSteps[n-1].Ratio <= 1 {
+		t.Errorf("steps %+v", r.BlockingSteps)
+	}
+	up := CheckMember(upliftRafter("2x12"), s)
+	if up.Status != StatusPass || up.RowsPerSpan() >= n {
+		t.Errorf("2x12: status %s, %d rows; want a pass with fewer rows than the 2x10's %d", up.Status, up.RowsPerSpan(), n)
+	}
+	// A ceiling fastened to the joists braces the bottom edge: no rows.
+	m.BottomBracedContinuous = true
+	if c := CheckMember(m, s); c.RowsPerSpan() != 0 || find(t, c, KindBendingBottom).Ratio > 1 {
+		t.Errorf("ceiling-braced: rows %d", c.RowsPerSpan())
+	}
+	// Rows drawn in the plan count: drawn at the solver's positions, no more are added.
+	m.BottomBracedContinuous = false
+	m.BlockingAtIn = r.BlockingAtIn
+	if c := CheckMember(m, s); c.RowsPerSpan() != 0 || c.Status != StatusPass {
+		t.Errorf("with the rows drawn: %d rows added, status %s", c.RowsPerSpan(), c.Status)
+	}
+}
+
+func TestBadInput_IsAnError(t *testing.T) {
+	good := floorJoist("2x10", 168, 16)
+	nan := math.NaN()
+	rows := []struct {
+		name string
+		edit func(m *Member)
+		want string
+	}{
+		{"species", func(m *Member) { m.Species = "Oak-ish" }, "unknown species"},
+		{"grade", func(m *Member) { m.Grade = "No.9" }, "unknown grade"},
+		{"size", func(m *Member) { m.Size = "2x9" }, "size"},
+		{"zero span", func(m *Member) { m.Bearings[1].AtIn = 0 }, "span"},
+		{"negative length", func(m *Member) { m.LengthIn = -5 }, "length"},
+		{"one bearing", func(m *Member) { m.Bearings = m.Bearings[:1] }, "at least 2"},
+		{"NaN load", func(m *Member) { m.Loads.LivePsf = nan }, "live load"},
+		{"negative load", func(m *Member) { m.Loads.DeadPsf = -10 }, "dead load"},
+		{"NaN trib", func(m *Member) { m.TribIn = nan }, "tributary"},
+		{"use", func(m *Member) { m.Use = "deck" }, "use"},
+		{"overhang", func(m *Member) { m.OverhangEndIn = 50 }, "end overhang"},
+		{"bearing length", func(m *Member) { m.Bearings[0].LengthIn = 0 }, "bearing length"},
+	}
+	for _, r := range rows {
+		m := good
+		m.Bearings = append([]Bearing(nil), good.Bearings...)
+		r.edit(&m)
+		res := CheckMember(m, DefaultSettings())
+		if res.Status != StatusError || len(res.Messages) == 0 || !strings.Contains(res.Messages[0], r.want) {
+			t.Errorf("%s: status %s, messages %v; want an error containing %q", r.name, res.Status, res.Messages, r.want)
+		}
+		if res.ID != "J1" {
+			t.Errorf("%s: error result lost the member ID", r.name)
+		}
+	}
+	s := DefaultSettings()
+	s.Temperature = "boiling"
+	if res := CheckMember(good, s); res.Status != StatusError {
+		t.Errorf("bad temperature: status %s", res.Status)
+	}
+	if res := CheckWithRows(good, DefaultSettings(), -1); res.Status != StatusError {
+		t.Errorf("negative rows: status %s", res.Status)
+	}
+}
+
+func TestRBOver50_Fails(t *testing.T) {
+	// A 2x14 with an unbraced top edge over a 24 ft span: le = 1.63(288) +
+	// 3(13.25) = 509 in, RB = sqrt(509 (13.25) / 1.5^2) = 54.8 > 50 (NDS
+	// 2018 3.3.3.7: not permitted).
+	m := floorJoist("2x14", 288, 16)
+	m.Loads = AreaLoads{DeadPsf: 1, LivePsf: 1}
+	s := DefaultSettings()
+	s.TopEdgeBraced = false
+	r := CheckMember(m, s)
+	expectNear(t, "RB", r.RB, 54.8, 0.05, 0, "hand calculation in the comment")
+	if r.Status != StatusFail || !strings.Contains(strings.Join(r.Messages, ";"), "RB") {
+		t.Errorf("status %s, messages %v; want a failure naming RB", r.Status, r.Messages)
+	}
+}

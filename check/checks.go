@@ -1,0 +1,231 @@
+package check
+
+import (
+	"fmt"
+	"math"
+
+	"framecheck/check/beam"
+)
+
+// segAround returns the indices of the model segments left and right of
+// support j (-1 where there is none).
+func (e *engine) segAround(j int) (left, right int) {
+	first := 0
+	if len(e.segs) > 0 && e.segs[0].Cantilever {
+		first = 1
+	}
+	left, right = first+j-1, first+j
+	if right >= len(e.segs) {
+		right = -1
+	}
+	return left, right
+}
+
+// shearCheck returns the shear check: fv = 1.5 V / A (NDS 2018 Eq. 3.4-2)
+// with V the largest shear at a bearing centre-line, or at a distance d
+// from the bearing face when Settings.ShearAtD (NDS 2018 3.4.3.1(a)), over
+// every strength case; Fv' = Fv CD CM Ct Ci (NDS 2018 Table 4.3.1).
+func (e *engine) shearCheck() CheckResult {
+	best, bestV, bestCI, bestJ := -1.0, 0.0, 0, 0
+	bestFv := 0.0
+	d := e.sec.DIn
+	for ci := range e.cases {
+		c := &e.cases[ci]
+		fvAdj := e.dv.FvPsi * c.cd * e.cm.Fv * e.ct.Fv * e.ci.Fv
+		for j, x := range e.bm.SupportsAtIn {
+			vl, vr := c.r.ShearEachSide(x)
+			if e.s.ShearAtD {
+				off := e.m.Bearings[j].LengthIn/2 + d
+				l, r := e.segAround(j)
+				if l >= 0 {
+					vl += c.w[l] * math.Min(off, e.segs[l].ToIn-e.segs[l].FromIn)
+				}
+				if r >= 0 {
+					vr -= c.w[r] * math.Min(off, e.segs[r].ToIn-e.segs[r].FromIn)
+				}
+			}
+			v := math.Max(math.Abs(vl), math.Abs(vr))
+			if ratio := 1.5 * v / e.sec.AreaIn2 / fvAdj; ratio > best {
+				best, bestV, bestCI, bestJ, bestFv = ratio, v, ci, j, fvAdj
+			}
+		}
+	}
+	c := &e.cases[bestCI]
+	fv := 1.5 * bestV / e.sec.AreaIn2
+	t := e.arena.tracer(16)
+	where := "at the centre-line of bearing " + fmt.Sprint(bestJ+1)
+	if e.s.ShearAtD {
+		where = "at d from the face of bearing " + fmt.Sprint(bestJ+1)
+	}
+	t.add("V", bestV, "lb", "largest shear "+where, "", "analysis ("+e.caseLabel(c)+")")
+	t.add("A", e.sec.AreaIn2, "in^2", "b d", t.f("%s(%s)", e.sec.BIn, e.sec.DIn), "NDS 2018 Supplement Table 1B")
+	t.add("fv", fv, "psi", "1.5 V / A", t.f("1.5(%s) / %s", bestV, e.sec.AreaIn2), "NDS 2018 Eq. 3.4-2")
+	t.add("Fv'", bestFv, "psi", "Fv CD CM Ct Ci", t.f("%s(%s)(%s)(%s)(%s)", e.dv.FvPsi, c.cd, e.cm.Fv, e.ct.Fv, e.ci.Fv), "NDS 2018 Table 4.3.1")
+	t.add("fv/Fv'", fv/bestFv, "", "fv / Fv'", t.f("%s / %s", fv, bestFv), "NDS 2018 3.4.1")
+	return CheckResult{Kind: KindShear, Combo: e.caseLabel(c), Actual: fv, Allowable: bestFv, Unit: "psi", Ratio: fv / bestFv, Trace: t.items}
+}
+
+// bearingCheck returns the bearing check: fc_perp = R / (b lb) at each
+// bearing against Fc_perp' = Fc_perp CM Ct Ci Cb (NDS 2018 3.10.2, Table
+// 4.3.1; no CD), with the largest downward reaction of any strength case.
+// Uplift reactions are returned as information.
+func (e *engine) bearingCheck() (CheckResult, []string) {
+	var info []string
+	best, bestJ, bestCI := -1.0, 0, 0
+	var bestR, bestCb, bestFc float64
+	for j, b := range e.m.Bearings {
+		rMax, rMin, ciMax, ciMin := 0.0, 0.0, 0, 0
+		for ci := range e.cases {
+			r := e.cases[ci].r.Reactions()[j]
+			if r > rMax {
+				rMax, ciMax = r, ci
+			}
+			if r < rMin {
+				rMin, ciMin = r, ci
+			}
+		}
+		if rMin < 0 {
+			info = append(info, fmt.Sprintf("bearing %d at %s in: net uplift reaction %s lb under %s; hold it down",
+				j+1, num(b.AtIn), num(-rMin), e.caseLabel(&e.cases[ciMin])))
+		}
+		edge := math.Min(b.AtIn-b.LengthIn/2, e.m.LengthIn-(b.AtIn+b.LengthIn/2))
+		cb := BearingAreaFactor(b.LengthIn, edge)
+		fcAdj := e.dv.FcPerpPsi * e.cm.FcPerp * e.ct.FcPerp * e.ci.FcPerp * cb
+		if ratio := rMax / (e.sec.BIn * b.LengthIn) / fcAdj; ratio > best {
+			best, bestJ, bestCI, bestR, bestCb, bestFc = ratio, j, ciMax, rMax, cb, fcAdj
+		}
+	}
+	b := e.m.Bearings[bestJ]
+	fc := bestR / (e.sec.BIn * b.LengthIn)
+	t := e.arena.tracer(16)
+	t.add("R", bestR, "lb", fmt.Sprintf("largest reaction at bearing %d", bestJ+1), "", "analysis ("+e.caseLabel(&e.cases[bestCI])+")")
+	t.add("lb", b.LengthIn, "in", "bearing length", "", "")
+	t.add("fc_perp", fc, "psi", "R / (b lb)", t.f("%s / (%s(%s))", bestR, e.sec.BIn, b.LengthIn), "NDS 2018 3.10.2")
+	if bestCb != 1 {
+		t.add("Cb", bestCb, "", "(lb + 0.375) / lb", t.f("(%s + 0.375) / %s", b.LengthIn, b.LengthIn), "NDS 2018 3.10.4")
+	} else {
+		t.add("Cb", 1, "", "bearing at a member end, or lb >= 6 in", "", "NDS 2018 3.10.4")
+	}
+	t.add("Fc_perp'", bestFc, "psi", "Fc_perp CM Ct Ci Cb",
+		t.f("%s(%s)(%s)(%s)(%s)", e.dv.FcPerpPsi, e.cm.FcPerp, e.ct.FcPerp, e.ci.FcPerp, bestCb), "NDS 2018 Table 4.3.1")
+	t.add("fc_perp/Fc_perp'", fc/bestFc, "", "fc_perp / Fc_perp'", t.f("%s / %s", fc, bestFc), "NDS 2018 3.10.2")
+	return CheckResult{Kind: KindBearing, Combo: e.caseLabel(&e.cases[bestCI]), Actual: fc, Allowable: bestFc,
+		Unit: "psi", Ratio: fc / bestFc, Trace: t.items}, info
+}
+
+// deflWorst is the governing deflection of one service case.
+type deflWorst struct {
+	ratio, deflIn, allowIn, spanIn, limit float64
+	seg                                   int
+	name                                  string
+	cant                                  bool
+}
+
+// deflectionChecks returns the live and total deflection checks (IBC 2018
+// Table 1604.3 with its footnotes). Live: each live-type load alone at 1.0
+// (wind at 0.42 W, footnote f), pattern-loaded like the strength cases,
+// against span/LiveLimit. Total: Kcr times the dead-load deflection (NDS
+// 2018 3.5.2) plus each live-type case, against span/TotalLimit. Spans use
+// the largest deflection between their bearings; a cantilever its tip
+// deflection (back-span rotation included) against 2 x overhang / limit
+// (footnote h). A limit of 0 skips that check.
+func (e *engine) deflectionChecks() []CheckResult {
+	type lt struct {
+		name string
+		w    float64
+	}
+	lives := make([]lt, 0, 5)
+	for _, l := range []lt{{"L", e.wPli[LoadL]}, {"Lr", e.wPli[LoadLr]}, {"S", e.wPli[LoadS]},
+		{"0.42W(down)", 0.42 * e.wPli[LoadW]}, {"0.42W(up)", -0.42 * e.wUpPli}} {
+		if l.w != 0 {
+			lives = append(lives, l)
+		}
+	}
+	pats := e.patterns()
+	var r beam.Response
+	w := make([]float64, len(e.segs))
+	liveW := deflWorst{ratio: -1}
+	totW := deflWorst{ratio: -1}
+	wD := e.kcr * e.wPli[LoadD]
+	kcrName := num(e.kcr) + "D"
+	eval := func(name string, limit float64, worst *deflWorst) {
+		if err := e.bm.SolveInto(&r, w); err != nil {
+			return
+		}
+		for k, sg := range e.segs {
+			l := sg.ToIn - sg.FromIn
+			var y, allow float64
+			if sg.Cantilever {
+				tip := sg.FromIn
+				if k > 0 {
+					tip = sg.ToIn
+				}
+				y, allow = r.Deflection(tip), 2*l/limit
+			} else {
+				y, _ = r.MaxDeflection(sg.FromIn, sg.ToIn)
+				allow = l / limit
+			}
+			if ratio := math.Abs(y) / allow; ratio > worst.ratio {
+				*worst = deflWorst{ratio: ratio, deflIn: math.Abs(y), allowIn: allow, spanIn: l, limit: limit, seg: k, name: name, cant: sg.Cantilever}
+			}
+		}
+	}
+	for _, lv := range lives {
+		p := pats
+		for _, pat := range p {
+			label := lv.name
+			if pl := e.patternLabel(pat); pl != "" {
+				label += " (" + pl + ")"
+			}
+			if e.m.LiveLimit > 0 {
+				for k := range w {
+					w[k] = 0
+					if pat&(1<<k) != 0 {
+						w[k] = lv.w
+					}
+				}
+				eval(label, e.m.LiveLimit, &liveW)
+			}
+			if e.m.TotalLimit > 0 && lv.w > 0 {
+				for k := range w {
+					w[k] = wD
+					if pat&(1<<k) != 0 {
+						w[k] += lv.w
+					}
+				}
+				eval(kcrName+"+"+label, e.m.TotalLimit, &totW)
+			}
+		}
+	}
+	if e.m.TotalLimit > 0 && len(lives) == 0 && wD > 0 {
+		for k := range w {
+			w[k] = wD
+		}
+		eval(kcrName, e.m.TotalLimit, &totW)
+	}
+	var out []CheckResult
+	if liveW.ratio >= 0 {
+		out = append(out, e.deflResult(KindDeflectionLive, liveW))
+	}
+	if totW.ratio >= 0 {
+		out = append(out, e.deflResult(KindDeflectionTotal, totW))
+	}
+	return out
+}
+
+func (e *engine) deflResult(kind string, d deflWorst) CheckResult {
+	t := e.arena.tracer(16)
+	where := e.segLabel(d.seg)
+	t.add("delta", d.deflIn, "in", "largest deflection of "+where, "", "analysis, E' I ("+d.name+")")
+	t.add("E'", e.eAdj, "psi", "E CM Ct Ci", t.f("%s(%s)(%s)(%s)", e.dv.EPsi, e.cm.E, e.ct.E, e.ci.E), "NDS 2018 Table 4.3.1")
+	if kind == KindDeflectionTotal {
+		t.add("Kcr", e.kcr, "", "creep factor on D", "", "NDS 2018 3.5.2")
+	}
+	if d.cant {
+		t.add("delta_allow", d.allowIn, "in", "2 Lc / limit", t.f("2(%s) / %s", d.spanIn, d.limit), "IBC 2018 Table 1604.3 note h")
+	} else {
+		t.add("delta_allow", d.allowIn, "in", "L / limit", t.f("%s / %s", d.spanIn, d.limit), "IBC 2018 Table 1604.3")
+	}
+	t.add("ratio", d.ratio, "", "delta / delta_allow", t.f("%s / %s", d.deflIn, d.allowIn), "")
+	return CheckResult{Kind: kind, Combo: d.name + ", " + where, Actual: d.deflIn, Allowable: d.allowIn, Unit: "in", Ratio: d.ratio, Trace: t.items}
+}

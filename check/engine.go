@@ -1,0 +1,346 @@
+package check
+
+import (
+	"fmt"
+	"math"
+	"strconv"
+	"strings"
+
+	"framecheck/check/beam"
+)
+
+// engine holds everything known about one member once its inputs are
+// validated: section, design values, factors, the analysis model and the
+// solved strength load cases. The blocking solver re-runs only the
+// bottom-edge bending check on it, since bracing does not change the
+// analysis.
+type engine struct {
+	m   Member
+	s   Settings
+	sec Section
+	dv  DesignValues
+
+	cf  SizeFactors
+	cm  WetServiceFactors
+	ct  TemperatureFactors
+	ci  IncisingFactors
+	cr  float64
+	kcr float64
+
+	fbNoCD  float64 // Fb CM Ct CF Ci Cr: Fb* / CD
+	eAdj    float64 // E'
+	eminAdj float64 // Emin'
+
+	x0       float64 // member position of the analysis origin (start of the beam model)
+	bm       beam.Beam
+	segs     []beam.Segment
+	spanSegs []int // index in segs of each span between bearings
+	wPli     [numLoadTypes]float64
+	wUpPli   float64 // wind suction magnitude, lb/in
+
+	cases []strengthCase
+	mMax  float64
+	arena traceArena // largest |M| of any case, for "is this edge in compression" tolerances
+}
+
+// strengthCase is one combination case (one alternative, one wind
+// direction, one live-load pattern) with its solved response.
+type strengthCase struct {
+	name    string
+	cd      float64
+	pattern uint32 // segments carrying the patterned live-type loads; all ones = not patterned
+	w       []float64
+	r       beam.Response
+}
+
+var defaultCombos = DefaultCombos()
+
+// newEngine validates m and s, looks up the material and builds the
+// analysis. On error the returned engine holds what was found so far (nil
+// when nothing).
+func newEngine(m Member, s Settings) (*engine, error) {
+	e := &engine{m: m, s: s}
+	if err := s.validate(); err != nil {
+		return e, err
+	}
+	sec, err := ParseSize(m.Size)
+	if err != nil {
+		return e, err
+	}
+	e.sec = sec
+	mats := s.Materials
+	if mats == nil {
+		mats = BuiltinMaterials()
+	}
+	dv, err := mats.Lookup(m.Species, m.Grade, m.Size)
+	if err != nil {
+		return e, err
+	}
+	e.dv = dv
+	if err := e.m.validate(); err != nil {
+		return e, err
+	}
+	e.factors()
+	e.model()
+	if err := e.solveStrength(); err != nil {
+		return e, err
+	}
+	return e, nil
+}
+
+// factors sets the adjustment factors that do not depend on the load
+// case (NDS 2018 Table 4.3.1).
+func (e *engine) factors() {
+	e.cf = SizeFactor(e.dv, e.sec)
+	cfFb, cfFc := e.cf.Fb, e.cf.Fc
+	if e.dv.SizeFactor == SizeFactor4B {
+		cfFb, cfFc = 1, 1 // Table 4B values already include the size effect
+	}
+	e.cm = WetServiceFactor(e.s.WetService, e.dv, cfFb, cfFc)
+	e.ct, _ = TemperatureFactor(e.s.Temperature, e.s.WetService)
+	e.ci = IncisingFactor(e.s.Incised)
+	e.cr = RepetitiveMemberFactor(e.m.SpacingIn, e.m.Repetitive)
+	e.fbNoCD = e.dv.FbPsi * e.cm.Fb * e.ct.Fb * e.cf.Fb * e.ci.Fb * e.cr
+	e.eAdj = e.dv.EPsi * e.cm.E * e.ct.E * e.ci.E
+	e.eminAdj = e.dv.EminPsi * e.cm.E * e.ct.E * e.ci.E
+	e.kcr = e.s.Kcr
+	if e.kcr == 0 {
+		e.kcr = 1.5 // NDS 2018 3.5.2: seasoned lumber, dry service
+		if e.s.WetService {
+			e.kcr = 2.0
+		}
+	}
+}
+
+// model builds the beam: from the start overhang's tip to the end
+// overhang's tip, supports at the bearing centre-lines.
+func (e *engine) model() {
+	bs := e.m.Bearings
+	e.x0 = bs[0].AtIn - e.m.OverhangStartIn
+	sup := make([]float64, len(bs))
+	for i, b := range bs {
+		sup[i] = b.AtIn - e.x0
+	}
+	length := bs[len(bs)-1].AtIn + e.m.OverhangEndIn - e.x0
+	e.bm = beam.Beam{LengthIn: length, SupportsAtIn: sup, EILbIn2: e.eAdj * e.sec.IIn4}
+	e.segs = e.bm.Segments()
+	for i, sg := range e.segs {
+		if !sg.Cantilever {
+			e.spanSegs = append(e.spanSegs, i)
+		}
+	}
+	l := e.m.Loads
+	t := e.m.TribIn / 144 // psf x in / (144 in^2/ft^2) = lb/in
+	e.wPli = [numLoadTypes]float64{l.DeadPsf * t, l.LivePsf * t, l.RoofLivePsf * t, l.SnowPsf * t, l.WindDownPsf * t}
+	e.wUpPli = l.WindUpPsf * t
+}
+
+// patterns returns the masks of segments loaded by the live-type loads:
+// all segments, and, when patterning applies (PatternLive and more than
+// one segment), every non-empty subset for up to 5 segments, else each
+// single segment, alternate segments and adjacent pairs.
+func (e *engine) patterns() []uint32 {
+	n := len(e.segs)
+	all := uint32(1)<<n - 1
+	if !e.s.PatternLive || n == 1 {
+		return []uint32{all}
+	}
+	if n <= 5 {
+		out := make([]uint32, 0, all)
+		out = append(out, all)
+		for p := uint32(1); p < all; p++ {
+			out = append(out, p)
+		}
+		return out
+	}
+	out := []uint32{all}
+	var odd, even uint32
+	for k := 0; k < n; k++ {
+		out = append(out, 1<<k)
+		if k+1 < n {
+			out = append(out, 3<<k)
+		}
+		if k%2 == 0 {
+			even |= 1 << k
+		} else {
+			odd |= 1 << k
+		}
+	}
+	return append(out, even, odd)
+}
+
+// caseSpec is one combination case before patterning: the load on every
+// segment (full) and the live-type load added on patterned segments.
+type caseSpec struct {
+	name            string
+	cd              float64
+	full, patterned float64
+}
+
+// solveStrength expands the combinations into load cases and solves each.
+func (e *engine) solveStrength() error {
+	combos := e.s.Combos
+	if combos == nil {
+		combos = defaultCombos
+	}
+	pats := e.patterns()
+	var specBuf [16]caseSpec
+	specs := specBuf[:0]
+	for _, c := range combos {
+		for _, f := range c.Cases {
+			dirs := [2]float64{0, 0}
+			nd := 1
+			if f[LoadW] > 0 {
+				nd = 0
+				if e.wPli[LoadW] > 0 {
+					dirs[nd], nd = 1, nd+1
+				}
+				if e.wUpPli > 0 {
+					dirs[nd], nd = -1, nd+1
+				}
+			}
+			for _, dir := range dirs[:nd] {
+				if sp, ok := e.caseSpec(f, dir); ok {
+					specs = append(specs, sp)
+				}
+			}
+		}
+	}
+	n := 0
+	for _, sp := range specs {
+		if sp.patterned == 0 {
+			n++
+		} else {
+			n += len(pats)
+		}
+	}
+	e.cases = make([]strengthCase, n)
+	wAll := make([]float64, n*len(e.segs))
+	i := 0
+	for _, sp := range specs {
+		ps := pats
+		if sp.patterned == 0 {
+			ps = pats[:1]
+		}
+		for _, p := range ps {
+			c := &e.cases[i]
+			c.name, c.cd, c.pattern = sp.name, sp.cd, p
+			c.w = wAll[i*len(e.segs) : (i+1)*len(e.segs)]
+			for k := range c.w {
+				c.w[k] = sp.full
+				if p&(1<<k) != 0 {
+					c.w[k] += sp.patterned
+				}
+			}
+			if err := e.bm.SolveInto(&c.r, c.w); err != nil {
+				return err
+			}
+			pos, _, neg, _ := c.r.MomentExtremes(0, e.bm.LengthIn)
+			e.mMax = math.Max(e.mMax, math.Max(pos, -neg))
+			i++
+		}
+	}
+	return nil
+}
+
+// caseSpec builds the case of one factor set and wind direction (+1
+// toward the member, -1 away, 0 none); ok is false for a case whose
+// variable loads are all zero, unless it is a dead-load-only combination.
+func (e *engine) caseSpec(f factorSet, dir float64) (caseSpec, bool) {
+	var present [numLoadTypes]bool
+	hasVar, varPresent := false, false
+	wW := 0.0
+	if dir > 0 {
+		wW = e.wPli[LoadW]
+	} else if dir < 0 {
+		wW = -e.wUpPli
+	}
+	for t := LoadL; t < numLoadTypes; t++ {
+		mag := e.wPli[t]
+		if t == LoadW {
+			mag = math.Abs(wW)
+		}
+		present[t] = mag > 0
+		if f[t] > 0 {
+			hasVar = true
+			varPresent = varPresent || present[t]
+		}
+	}
+	present[LoadD] = true
+	if hasVar && !varPresent {
+		return caseSpec{}, false
+	}
+	return caseSpec{
+		name:      caseName(f, dir, present),
+		cd:        ComboDurationFactor(f, present),
+		full:      f[LoadD]*e.wPli[LoadD] + f[LoadW]*wW,
+		patterned: f[LoadL]*e.wPli[LoadL] + f[LoadLr]*e.wPli[LoadLr] + f[LoadS]*e.wPli[LoadS],
+	}, true
+}
+
+// caseName writes a factor set as "D+0.75L+0.75S" or "0.6D+0.6W(up)",
+// leaving out loads that are zero.
+func caseName(f factorSet, dir float64, present [numLoadTypes]bool) string {
+	var b strings.Builder
+	for t := LoadType(0); t < numLoadTypes; t++ {
+		if f[t] == 0 || !present[t] {
+			continue
+		}
+		if b.Len() > 0 {
+			b.WriteByte('+')
+		}
+		if f[t] != 1 {
+			b.WriteString(num(f[t]))
+		}
+		b.WriteString(t.String())
+		if t == LoadW {
+			if dir < 0 {
+				b.WriteString("(up)")
+			} else {
+				b.WriteString("(down)")
+			}
+		}
+	}
+	return b.String()
+}
+
+// segLabel names segment k of the model for messages: "span 2", "start
+// overhang", "end overhang".
+func (e *engine) segLabel(k int) string {
+	if e.segs[k].Cantilever {
+		if k == 0 {
+			return "start overhang"
+		}
+		return "end overhang"
+	}
+	for i, s := range e.spanSegs {
+		if s == k {
+			return "span " + strconv.Itoa(i+1)
+		}
+	}
+	return fmt.Sprintf("segment %d", k+1)
+}
+
+// patternLabel describes a live-load pattern, "" when every segment is
+// loaded.
+func (e *engine) patternLabel(p uint32) string {
+	all := uint32(1)<<len(e.segs) - 1
+	if p == all {
+		return ""
+	}
+	var parts []string
+	for k := range e.segs {
+		if p&(1<<k) != 0 {
+			parts = append(parts, e.segLabel(k))
+		}
+	}
+	return "live-type loads on " + strings.Join(parts, ", ")
+}
+
+// caseLabel is a case's name with its pattern, for CheckResult.Combo.
+func (e *engine) caseLabel(c *strengthCase) string {
+	if l := e.patternLabel(c.pattern); l != "" {
+		return c.name + " (" + l + ")"
+	}
+	return c.name
+}

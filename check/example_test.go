@@ -1,0 +1,34 @@
+package check_test
+
+import (
+	"fmt"
+
+	"framecheck/check"
+)
+
+// A DF-L No.2 2x10 floor joist at 16 in on centre, 14 ft centre to centre
+// of 3.5 in bearings, 10 psf dead and 40 psf live.
+func ExampleCheckMember() {
+	m := check.Member{
+		ID: "J1", Size: "2x10", Species: "DF-L", Grade: "No.2",
+		LengthIn:  14*12 + 3.5,
+		Bearings:  []check.Bearing{{AtIn: 1.75, LengthIn: 3.5}, {AtIn: 14*12 + 1.75, LengthIn: 3.5}},
+		SpacingIn: 16, TribIn: 16, Use: "floor",
+		Loads:     check.AreaLoads{DeadPsf: 10, LivePsf: 40},
+		LiveLimit: 360, TotalLimit: 240, Repetitive: true,
+	}
+	r := check.CheckMember(m, check.DefaultSettings())
+	fmt.Println(r.ID, r.Size, r.Species, r.Grade, r.Status)
+	for _, c := range r.Checks {
+		fmt.Printf("%-16s %-14s %8.3f %8.3f %-3s %.3f\n", c.Kind, c.Combo, c.Actual, c.Allowable, c.Unit, c.Ratio)
+	}
+	fmt.Printf("governing %s %.3f\n", r.Governing, r.MaxRatio)
+	// Output:
+	// J1 2x10 Douglas Fir-Larch No.2 pass
+	// bending-top      D+L             916.289 1138.500 psi 0.805
+	// shear            D+L              50.450  180.000 psi 0.280
+	// deflection-live  L, span 1         0.291    0.467 in  0.624
+	// deflection-total 1.5D+L, span 1    0.400    0.700 in  0.572
+	// bearing          D+L              88.889  625.000 psi 0.142
+	// governing bending-top 0.805
+}

@@ -1,0 +1,78 @@
+package check
+
+// TraceItem is one step of a calculation as a report prints it, such as
+// le = 113.0 in, "1.63 lu + 3 d", "1.63(56.0) + 3(7.25)", "NDS 2018 Table
+// 3.3.3".
+type TraceItem struct {
+	Symbol  string  // le
+	Value   float64 // 113.0
+	Unit    string  // in
+	Formula string  // 1.63 lu + 3 d
+	Subst   string  // 1.63(56.0) + 3(7.25)
+	Ref     string  // NDS 2018 Table 3.3.3
+}
+
+// Check kinds.
+const (
+	KindBendingTop      = "bending-top"
+	KindBendingBottom   = "bending-bottom"
+	KindShear           = "shear"
+	KindDeflectionLive  = "deflection-live"
+	KindDeflectionTotal = "deflection-total"
+	KindBearing         = "bearing"
+)
+
+// CheckResult is one check at its governing load case.
+type CheckResult struct {
+	Kind      string  // one of the Kind constants
+	Combo     string  // governing combination or service case, "D+L", "L (span 2)"
+	Actual    float64 // fb, fv, deflection or fc_perp
+	Allowable float64 // Fb', Fv', allowed deflection or Fc_perp'
+	Unit      string  // psi or in
+	Ratio     float64 // Actual / Allowable
+	Trace     []TraceItem
+}
+
+// BlockingStep is one iteration of the blocking-row solver: rows per span,
+// the bottom edge's governing unbraced length, CL and ratio.
+type BlockingStep struct {
+	RowsPerSpan int
+	LuIn, CL    float64
+	Ratio       float64
+}
+
+// Status values of a Result.
+const (
+	StatusPass  = "pass"
+	StatusFail  = "fail"
+	StatusError = "error"
+)
+
+// Result is the outcome of checking one member.
+type Result struct {
+	ID                   string
+	Size, Species, Grade string // canonical names where known, else as given
+	SpansIn              []float64
+	OverhangsIn          [2]float64 // start, end
+	Checks               []CheckResult
+	Governing            string    // kind of the check with the largest ratio
+	MaxRatio             float64   // its ratio
+	RB                   float64   // largest slenderness ratio of an edge in compression
+	BlockingRowsPerSpan  []int     // rows added, per span
+	BlockingAtIn         []float64 // positions of the added rows along the member
+	BlockingSteps        []BlockingStep
+	Values               DesignValues // reference values used, with their source
+	Factors              []TraceItem  // CD per combination, CM, Ct, CF, Cfu, Ci, Cr, ...
+	Status               string       // StatusPass, StatusFail or StatusError
+	Messages             []string     // why it failed or errored
+	Info                 []string     // NDS 4.4.1.2 rule, uplift at a bearing, ...
+}
+
+// RowsPerSpan returns the number of blocking rows the result added in each
+// span (the same in every span), or 0.
+func (r *Result) RowsPerSpan() int {
+	if len(r.BlockingRowsPerSpan) == 0 {
+		return 0
+	}
+	return r.BlockingRowsPerSpan[0]
+}

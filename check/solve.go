@@ -1,0 +1,219 @@
+package check
+
+import (
+	"fmt"
+	"math"
+)
+
+// CheckMember checks m under s, adding blocking rows where the bottom
+// edge needs them: when bottom-edge bending fails with the bracing present
+// (bearings, drawn rows, ceiling switch), it tries n = 1, 2, 3, ... rows
+// evenly spaced in every span (the same n in each) until that check passes
+// or the row spacing would fall below 24 in; then the member passes or
+// fails on every check with those rows. Bad input gives Status "error"
+// with a message, never a panic.
+func CheckMember(m Member, s Settings) Result {
+	e, err := newEngine(m, s)
+	if err != nil {
+		return errorResult(m, e, err)
+	}
+	n, steps := e.solveBlocking()
+	r := e.result(n)
+	r.BlockingSteps = steps
+	return r
+}
+
+// CheckWithRows checks m under s with rowsPerSpan blocking rows added in
+// every span (evenly spaced, on top of m.BlockingAtIn): the rows its run
+// gets.
+func CheckWithRows(m Member, s Settings, rowsPerSpan int) Result {
+	e, err := newEngine(m, s)
+	if err != nil {
+		return errorResult(m, e, err)
+	}
+	if rowsPerSpan < 0 {
+		return errorResult(m, e, fmt.Errorf("rows per span %d: want >= 0", rowsPerSpan))
+	}
+	return e.result(rowsPerSpan)
+}
+
+// bottomEdge evaluates bottom-edge bending with n added rows per span.
+func (e *engine) bottomEdge(n int) (edgeEval, float64) {
+	rows, luRows := e.spanRows(n)
+	return e.evalEdge(false, e.intervals(e.m.BottomBracedContinuous, e.braces(rows))), luRows
+}
+
+// solveBlocking returns the rows per span the bottom edge needs and the
+// solver's steps (nil when no rows were needed or could help).
+func (e *engine) solveBlocking() (int, []BlockingStep) {
+	if e.m.BottomBracedContinuous {
+		return 0, nil
+	}
+	ev, _ := e.bottomEdge(0)
+	if ev.passes() {
+		return 0, nil
+	}
+	steps := []BlockingStep{{RowsPerSpan: 0, LuIn: ev.iv.luIn, CL: ev.cl, Ratio: ev.ratio}}
+	// Rows cannot help when the edge fails even fully braced.
+	if ev.mLbIn/e.sec.SIn3 > e.cases[ev.ci].cd*e.fbNoCD*(1+ratioTol) {
+		return 0, steps
+	}
+	maxSpan := 0.0
+	for _, k := range e.spanSegs {
+		maxSpan = math.Max(maxSpan, e.segs[k].ToIn-e.segs[k].FromIn)
+	}
+	for n := 1; maxSpan/float64(n+1) >= minBlockingLuIn; n++ {
+		ev, _ = e.bottomEdge(n)
+		steps = append(steps, BlockingStep{RowsPerSpan: n, LuIn: ev.iv.luIn, CL: ev.cl, Ratio: ev.ratio})
+		if ev.passes() {
+			return n, steps
+		}
+	}
+	return 0, steps
+}
+
+// result runs every check with n added rows per span.
+func (e *engine) result(n int) Result {
+	r := e.baseResult()
+	rows, _ := e.spanRows(n)
+	if n > 0 {
+		r.BlockingAtIn = rows
+		r.BlockingRowsPerSpan = make([]int, len(e.spanSegs))
+		for i := range r.BlockingRowsPerSpan {
+			r.BlockingRowsPerSpan[i] = n
+		}
+	}
+	pts := e.braces(rows)
+	top := e.evalEdge(true, e.intervals(e.s.TopEdgeBraced, pts))
+	bot := e.evalEdge(false, e.intervals(e.m.BottomBracedContinuous, pts))
+	if len(e.cases) == 0 || e.mMax == 0 {
+		r.Info = append(r.Info, "no load on the member: nothing to check")
+	}
+	if top.found {
+		r.Checks = append(r.Checks, e.bendingResult(KindBendingTop, top))
+	}
+	if bot.found {
+		r.Checks = append(r.Checks, e.bendingResult(KindBendingBottom, bot))
+	} else if len(e.cases) > 0 {
+		r.Info = append(r.Info, "bottom edge is not in compression under any combination")
+	}
+	if len(e.cases) > 0 {
+		r.Checks = append(r.Checks, e.shearCheck())
+	}
+	r.Checks = append(r.Checks, e.deflectionChecks()...)
+	if len(e.cases) > 0 {
+		b, info := e.bearingCheck()
+		r.Checks = append(r.Checks, b)
+		r.Info = append(r.Info, info...)
+	}
+	r.RB = math.Max(top.maxRB, bot.maxRB)
+	r.Status = StatusPass
+	for _, c := range r.Checks {
+		if c.Ratio > r.MaxRatio || r.Governing == "" {
+			r.MaxRatio, r.Governing = c.Ratio, c.Kind
+		}
+		if c.Ratio > 1+ratioTol {
+			r.Status = StatusFail
+			r.Messages = append(r.Messages, fmt.Sprintf("%s: ratio %.3f > 1.000 (%s)", c.Kind, c.Ratio, c.Combo))
+		}
+	}
+	if r.RB > 50 {
+		r.Status = StatusFail
+		r.Messages = append(r.Messages, fmt.Sprintf("RB = %.1f > 50: not permitted (NDS 2018 3.3.3.7)", r.RB))
+	}
+	if !bot.passes() && !e.m.BottomBracedContinuous {
+		r.Messages = append(r.Messages, "bottom edge fails with the rows tried; size up or brace the bottom edge")
+	}
+	r.Info = append(r.Info, e.lateralSupportRule())
+	return r
+}
+
+// baseResult fills what is known before the checks.
+func (e *engine) baseResult() Result {
+	r := Result{ID: e.m.ID, Size: e.sec.Name, Species: e.dv.Species, Grade: e.dv.Grade, Values: e.dv}
+	for _, k := range e.spanSegs {
+		r.SpansIn = append(r.SpansIn, e.segs[k].ToIn-e.segs[k].FromIn)
+	}
+	r.OverhangsIn = [2]float64{e.m.OverhangStartIn, e.m.OverhangEndIn}
+	r.Factors = e.factorTrace()
+	if e.dv.Note != "" {
+		r.Info = append(r.Info, e.dv.Note)
+	}
+	return r
+}
+
+// factorTrace lists the adjustment factors used.
+func (e *engine) factorTrace() []TraceItem {
+	t := tracer{items: make([]TraceItem, 0, 12+len(e.cases))}
+	for i := range e.cases {
+		c := &e.cases[i]
+		if i > 0 && c.name == e.cases[i-1].name {
+			continue // the same combination under another live-load pattern
+		}
+		t.add("CD", c.cd, "", c.name, "shortest-duration load of the combination", "NDS 2018 2.3.2, Table 2.3.2")
+	}
+	t.add("CM(Fb)", e.cm.Fb, "", "wet service", "", "NDS 2018 Supplement Table 4A/4B")
+	t.add("CM(Fv)", e.cm.Fv, "", "wet service", "", "NDS 2018 Supplement Table 4A/4B")
+	t.add("CM(Fc_perp)", e.cm.FcPerp, "", "wet service", "", "NDS 2018 Supplement Table 4A/4B")
+	t.add("CM(E)", e.cm.E, "", "wet service", "", "NDS 2018 Supplement Table 4A/4B")
+	t.add("Ct(Fb, Fv, Fc_perp)", e.ct.Fb, "", "temperature "+tempName(e.s.Temperature), "", "NDS 2018 Table 2.3.3")
+	t.add("Ct(E)", e.ct.E, "", "temperature "+tempName(e.s.Temperature), "", "NDS 2018 Table 2.3.3")
+	t.add("CF(Fb)", e.cf.Fb, "", "size factor, "+e.sec.Name, "", "NDS 2018 Supplement Table "+e.dv.SizeFactor)
+	t.add("Cfu", 1, "", "bending about the strong axis", "", "NDS 2018 4.3.7")
+	t.add("Ci(Fb, Fv)", e.ci.Fb, "", "incising", "", "NDS 2018 Table 4.3.8")
+	t.add("Ci(E)", e.ci.E, "", "incising", "", "NDS 2018 Table 4.3.8")
+	t.add("Cr", e.cr, "", "repetitive member", "", "NDS 2018 4.3.9")
+	return t.items
+}
+
+func tempName(s string) string {
+	if s == "" {
+		return "normal"
+	}
+	return s
+}
+
+// lateralSupportRule states the NDS 2018 4.4.1.2 rule for the member's
+// nominal depth-to-thickness ratio, reported beside the calculated CL as
+// information (NDS 2018 4.4.1.1 lets it replace the calculation).
+func (e *engine) lateralSupportRule() string {
+	r := e.sec.NominalDIn / e.sec.NominalBIn
+	var rule string
+	switch {
+	case r <= 2:
+		rule = "no lateral support required"
+	case r <= 4:
+		rule = "ends held in position (full-depth blocking, bridging, hangers, nailing or bolting)"
+	case r <= 5:
+		rule = "ends held in position and the compression edge held in line for its entire length"
+	case r <= 6:
+		rule = "bridging, full-depth blocking or diagonal cross bracing at intervals of at most 8 ft, compression edge held in line, ends held in position"
+	case r <= 7:
+		rule = "both edges held in line for their entire length and ends held in position"
+	default:
+		rule = "outside the rule's range (d/b > 7): the calculated CL applies"
+	}
+	return fmt.Sprintf("NDS 2018 4.4.1.2, nominal d/b = %s: %s", num(r), rule)
+}
+
+// errorResult is the Result of a member that could not be checked, with
+// what was found before the error.
+func errorResult(m Member, e *engine, err error) Result {
+	r := Result{ID: m.ID, Size: m.Size, Species: m.Species, Grade: m.Grade, Status: StatusError}
+	if e != nil && e.sec.Name != "" {
+		r.Size = e.sec.Name
+	}
+	if e != nil && e.dv.Species != "" {
+		r.Species, r.Grade, r.Values = e.dv.Species, e.dv.Grade, e.dv
+	}
+	for i := 1; i < len(m.Bearings); i++ {
+		r.SpansIn = append(r.SpansIn, m.Bearings[i].AtIn-m.Bearings[i-1].AtIn)
+	}
+	r.OverhangsIn = [2]float64{m.OverhangStartIn, m.OverhangEndIn}
+	id := m.ID
+	if id == "" {
+		id = "member"
+	}
+	r.Messages = []string{id + ": " + err.Error()}
+	return r
+}
