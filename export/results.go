@@ -75,6 +75,11 @@ type Member struct {
 
 	BlockingRowsPerSpan []int     `json:"blocking_rows_per_span"`
 	BlockingAtIn        []float64 `json:"blocking_at_in"` // along the member from Start
+	// BlockingSteps are the solver's iterations that led to the rows,
+	// and Factors the adjustment factors used (CM, Ct, CF, Cr, ...): both
+	// for the written-out calculation in the report.
+	BlockingSteps []BlockingStep `json:"blocking_steps,omitempty"`
+	Factors       []TraceItem    `json:"factors,omitempty"`
 
 	Status   string   `json:"status"` // pass | fail | error
 	Messages []string `json:"messages"`
@@ -97,6 +102,20 @@ type TraceItem struct {
 	Value  float64 `json:"value"`
 	Unit   string  `json:"unit"`
 	Source string  `json:"source,omitempty"` // clause, table or equation
+	// Formula and Subst let a report write the step out:
+	// "le = 1.63 lu + 3 d = 1.63(56.0) + 3(7.25) = 113.0 in".
+	Formula string `json:"formula,omitempty"` // e.g. "1.63 lu + 3 d"
+	Subst   string `json:"subst,omitempty"`   // e.g. "1.63(56.0) + 3(7.25)"
+}
+
+// BlockingStep is one iteration of the blocking-row solver for a member:
+// the rows per span tried, the bottom edge's unbraced length and CL, and
+// the bending ratio that resulted.
+type BlockingStep struct {
+	RowsPerSpan int     `json:"rows_per_span"`
+	LuIn        float64 `json:"lu_in"`
+	CL          float64 `json:"cl"`
+	Ratio       float64 `json:"ratio"`
 }
 
 // Mark is one line of the framing schedule: members identical for design.
