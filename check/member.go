@@ -1,6 +1,7 @@
 package check
 
 import (
+	"errors"
 	"fmt"
 	"math"
 	"sort"
@@ -142,3 +143,5 @@ func (s *Settings) validate() error {
 	}
 	return nil
 }
+
+var errNoCandidates = errors.New("no candidate sizes to try")
