@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"strings"
 
+	"framecheck/check"
 	"framecheck/dxfimport"
 )
 
@@ -110,23 +111,21 @@ type Combinations struct {
 	// Standard is "ASCE 7-16" for the ASD combinations of ASCE 7-16
 	// §2.4.1, or "" when List is given.
 	Standard string
-	// List holds the explicit combinations, in file order.
-	List []LoadCombination
+	// List holds the explicit combinations as written, such as
+	// "D+0.75L+0.75(Lr or S)", in file order; check.ParseCombos reads them.
+	List []string
 }
 
 // StandardASCE716 names the ASD load combinations of ASCE 7-16 §2.4.1.
 const StandardASCE716 = "ASCE 7-16"
 
-// LoadCombination is one explicit combination such as "D+0.75L+0.75S".
-type LoadCombination struct {
-	Text  string     // as written in the project file
-	Terms []LoadTerm // in the order written
-}
-
-// LoadTerm is one factored load of a combination.
-type LoadTerm struct {
-	Factor float64 // e.g. 0.75
-	Load   string  // "D", "L", "Lr", "S" or "W"
+// Combos returns the combinations to check: check.DefaultCombos for the
+// standard set, else the parsed list (the loader has already checked it).
+func (c Combinations) Combos() ([]check.Combo, error) {
+	if c.Standard != "" {
+		return check.DefaultCombos(), nil
+	}
+	return check.ParseCombos(c.List)
 }
 
 // Loads is the [loads] table.
@@ -172,7 +171,6 @@ var (
 	temperatureValues = []string{"normal", "warm", "hot"}
 	useValues         = []string{"floor", "roof"}
 	ceilingValues     = []string{"plaster", "non-plaster", "none"}
-	loadSymbols       = []string{"D", "L", "Lr", "S", "W"}
 )
 
 // defaultBearingIn is the bearing length a [[support]] table gets when it
@@ -212,23 +210,15 @@ const roofLiveDefaultPsf = 20.0
 // does not act on a roof).
 const floorLiveDefaultPsf = 40.0
 
-// DeflectionLimits returns the n of L/n for live-type loads and for the
-// total load of a member by use and ceiling, from IBC 2018 Table 1604.3:
-// floor members L/360 and L/240; roof members supporting a plaster or
-// stucco ceiling L/360 and L/240, a non-plaster ceiling L/240 and L/180,
-// no ceiling L/180 and L/120.
-func DeflectionLimits(use, ceiling string) (live, total float64) {
-	if use != "roof" {
-		return 360, 240
+// deflectionLimits returns the n of L/n for live-type loads and for the
+// total load by use and ceiling (IBC 2018 Table 1604.3, as
+// check.DeflectionLimits gives them). The loader has checked both names.
+func deflectionLimits(use, ceiling string) (live, total float64) {
+	live, total, err := check.DeflectionLimits(use, ceiling)
+	if err != nil {
+		panic("framecheck: deflection limits of a checked zone: " + err.Error())
 	}
-	switch ceiling {
-	case "plaster":
-		return 360, 240
-	case "none":
-		return 180, 120
-	default:
-		return 240, 180
-	}
+	return live, total
 }
 
 // DefaultProject returns the project used for a plan without a project
@@ -327,9 +317,5 @@ func (c Combinations) String() string {
 	if c.Standard != "" {
 		return fmt.Sprintf("%q", c.Standard)
 	}
-	s := make([]string, len(c.List))
-	for i, lc := range c.List {
-		s[i] = fmt.Sprintf("%q", lc.Text)
-	}
-	return "[" + strings.Join(s, ", ") + "]"
+	return fmtList(c.List)
 }

@@ -48,8 +48,8 @@ func TestProjectErrors(t *testing.T) {
 			"lumber.by_layer.sise", []string{"did you mean size?"}},
 		{"after a multi-line array", "[sizing]\ncandidates = [\n  \"2x8\",\n  \"2x10\",\n]\n∑blocking_weight = 1\n",
 			"sizing.blocking_weight", []string{"did you mean blocking_piece_weight_bf?"}},
-		{"after a multi-line string", "[lumber]\nspecies = \"\"\"\nHem-Fir\nsize = 3\n\"\"\"\n∑grde = \"No.1\"\n",
-			"lumber.grde", []string{"did you mean grade?"}},
+		{"after a multi-line string", "[[zone]]\nname = \"\"\"\nA\nuse = 3\n\"\"\"\n∑dead = 1\n",
+			"zone.dead", []string{"did you mean dead_psf?"}},
 		{"wrong type", "[drawing]\n∑snap_tolerance_in = \"1.5\"\n",
 			"drawing.snap_tolerance_in", []string{"expected a number", "greater than 0", `got string "1.5"`}},
 		{"bool as string", "[design]\n∑wet_service = \"yes\"\n",
@@ -73,10 +73,14 @@ func TestProjectErrors(t *testing.T) {
 		{"bad ceiling", "[[zone]]\nname = \"A\"\n∑ceiling = \"gypsum\"\n", "zone.ceiling", []string{`"plaster" | "non-plaster" | "none"`}},
 		{"bad use", "[[zone]]\nname = \"A\"\n∑use = \"deck\"\n", "zone.use", []string{`"floor" | "roof"`}},
 		{"bad size", "[lumber]\n∑size = \"2x11\"\n", "lumber.size", []string{"nominal size", `"2x11"`}},
+		{"bad size in an override", "[lumber]\n[[lumber.by_layer]]\nlayers = [\"R*\"]\n∑size = \"2-12\"\n",
+			"lumber.by_layer.size", []string{"nominal size"}},
 		{"bad candidate", "[sizing]\n∑candidates = [\"2x6\", 8]\n", "sizing.candidates", []string{"entry 2", "integer 8"}},
 		{"standard not known", "[design]\n∑combinations = \"ASCE 7-22\"\n", "design.combinations", []string{`"ASCE 7-16" or a list`}},
-		{"bad combination", "[design]\n∑combinations = [\"D\", \"D+1.6Q\"]\n", "design.combinations", []string{`term "1.6Q"`, "D, L, Lr, S, W"}},
-		{"load twice", "[design]\n∑combinations = [\"D+L+0.5L\"]\n", "design.combinations", []string{"L appears twice"}},
+		{"bad combination", "[design]\n∑combinations = [\"D\", \"D+1.6Q\"]\n", "design.combinations", []string{`combination 2 "D+1.6Q"`, "D, L, Lr, S and W"}},
+		{"unknown species", "[lumber]\n∑species = \"Balsa\"\n", "lumber.species", []string{`unknown species "Balsa"`, "Hem-Fir"}},
+		{"unknown grade in an override", "[lumber]\n[[lumber.by_layer]]\nlayers = [\"R*\"]\n∑grade = \"No.4\"\n",
+			"lumber.by_layer.grade", []string{`unknown grade of Douglas Fir-Larch "No.4"`}},
 		{"combinations as number", "[design]\n∑combinations = 7\n", "design.combinations", []string{"array of strings"}},
 		{"default zone unknown", "[loads]\n∑default_zone = \"ATTIC\"\n[[zone]]\nname = \"FLOOR\"\n[[zone]]\nname = \"ROOF\"\n",
 			"loads.default_zone", []string{`no zone is named "ATTIC"`, `"FLOOR", "ROOF"`}},
@@ -266,9 +270,12 @@ func TestFullProject(t *testing.T) {
 	if p.Loads.DefaultZone != "storage" || p.Zone(p.Loads.DefaultZone).Name != "STORAGE" {
 		t.Errorf("default zone %q", p.Loads.DefaultZone)
 	}
-	c := p.Design.Combinations.List
-	if len(c) != 4 || !reflect.DeepEqual(c[2].Terms, []LoadTerm{{1, "D"}, {0.75, "L"}, {0.75, "S"}}) {
-		t.Errorf("combinations %+v", c)
+	c, err := p.Design.Combinations.Combos()
+	if err != nil || len(c) != 5 || c[2].Name != "D+0.75L+0.75S" || c[4].Name != "D+0.75L+0.75(LrorS)" || len(c[4].Cases) != 2 {
+		t.Errorf("combinations %+v, %v", c, err)
+	}
+	if p.Lumber.ByLayer[0].Size != "2x12" || p.Sizing.Candidates[1] != "2x10" {
+		t.Errorf("sizes not in canonical form: %+v %+v", p.Lumber.ByLayer, p.Sizing)
 	}
 	roles := map[string]string{"j-deck-2": RoleJoists, "Rafter": RoleJoists, "BLK1": RoleBlocking,
 		"zones": RoleZones, "NOTES": RoleLabels, "wall-int-3": "support:bearing-wall",
@@ -318,27 +325,6 @@ func TestSchemaMatchesLoader(t *testing.T) {
 	}
 	if len(got) != len(schema) {
 		t.Errorf("loader tables %d, schema %d", len(got), len(schema))
-	}
-}
-
-func TestParseCombination(t *testing.T) {
-	// ASCE 7-16 §2.4.1 combination 6a, written with spaces.
-	lc, msg := parseCombination("D + 0.75L + 0.75(0.6)W")
-	if msg == "" {
-		t.Errorf("nested factor accepted: %+v", lc)
-	}
-	lc, msg = parseCombination("0.6D+0.6W")
-	if msg != "" || !reflect.DeepEqual(lc.Terms, []LoadTerm{{0.6, "D"}, {0.6, "W"}}) {
-		t.Errorf("0.6D+0.6W: %+v %s", lc, msg)
-	}
-	lc, msg = parseCombination("D+0.75Lr")
-	if msg != "" || lc.Terms[1] != (LoadTerm{0.75, "Lr"}) {
-		t.Errorf("D+0.75Lr: %+v %s", lc, msg)
-	}
-	for _, bad := range []string{"", "D+", "0D", "D+.L", "1..2D", "d"} {
-		if _, msg := parseCombination(bad); msg == "" {
-			t.Errorf("%q accepted", bad)
-		}
 	}
 }
 

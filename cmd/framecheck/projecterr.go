@@ -6,6 +6,8 @@ import (
 	"sort"
 	"strconv"
 	"strings"
+
+	"framecheck/check"
 )
 
 // A ProjectError is one problem in a project file. Line is 1-based; 0 when
@@ -164,61 +166,14 @@ func deflectionLimit(x float64) string {
 	return "must be 0 (not checked) or at least 1 (the n of L/n)"
 }
 
-// validSize reports whether s is a nominal dimension-lumber size "BxD"
-// with B of 2, 3 or 4 and D of 2 to 16 in.
-func validSize(s string) bool {
-	b, d, ok := strings.Cut(s, "x")
-	if !ok {
-		return false
+// sizeCheck reads a nominal size as check.ParseSize does ("2x10",
+// "2 X 10") and returns its canonical name.
+func sizeCheck(s string) (string, string) {
+	sec, err := check.ParseSize(s)
+	if err != nil {
+		return "", `a nominal size such as "2x10" (2x, 3x or 4x; depth 4 to 16)`
 	}
-	switch b {
-	case "2", "3", "4":
-	default:
-		return false
-	}
-	switch d {
-	case "2", "3", "4", "5", "6", "8", "10", "12", "14", "16":
-		return true
-	}
-	return false
-}
-
-const sizeRule = `a nominal size such as "2x10" (2x, 3x or 4x; depth 2 to 16)`
-
-// parseCombination reads one load combination such as "D+0.75L+0.75S" or
-// "0.6D + 0.6W": terms joined by '+', each an optional positive factor and
-// one of the load symbols D, L, Lr, S, W, each symbol at most once.
-func parseCombination(s string) (LoadCombination, string) {
-	lc := LoadCombination{Text: s}
-	compact := strings.ReplaceAll(s, " ", "")
-	if compact == "" {
-		return lc, "is empty"
-	}
-	seen := map[string]bool{}
-	for _, term := range strings.Split(compact, "+") {
-		i := 0
-		for i < len(term) && (term[i] >= '0' && term[i] <= '9' || term[i] == '.') {
-			i++
-		}
-		f := 1.0
-		if i > 0 {
-			v, err := strconv.ParseFloat(term[:i], 64)
-			if err != nil || !(v > 0) {
-				return lc, fmt.Sprintf("factor %q in %q is not a positive number", term[:i], s)
-			}
-			f = v
-		}
-		sym := strings.TrimPrefix(term[i:], "*")
-		if !contains(loadSymbols, sym) {
-			return lc, fmt.Sprintf("term %q in %q: expected a factor and one of %s", term, s, strings.Join(loadSymbols, ", "))
-		}
-		if seen[sym] {
-			return lc, fmt.Sprintf("load %s appears twice in %q", sym, s)
-		}
-		seen[sym] = true
-		lc.Terms = append(lc.Terms, LoadTerm{Factor: f, Load: sym})
-	}
-	return lc, ""
+	return sec.Name, ""
 }
 
 func contains(list []string, s string) bool {

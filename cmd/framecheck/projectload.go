@@ -70,9 +70,15 @@ func (ld *loader) table(m map[string]any, path, show, label string) *table {
 	return t
 }
 
+// errorf reports a problem at the key of an internal path, once.
 func (ld *loader) errorf(path, format string, args ...any) {
-	ld.errs = append(ld.errs, &ProjectError{File: ld.file, Line: lineOf(ld.lines, path),
-		Key: displayKey(path), Msg: fmt.Sprintf(format, args...)})
+	e := &ProjectError{File: ld.file, Line: lineOf(ld.lines, path), Key: displayKey(path), Msg: fmt.Sprintf(format, args...)}
+	for _, x := range ld.errs {
+		if *x == *e {
+			return
+		}
+	}
+	ld.errs = append(ld.errs, e)
 }
 
 func (ld *loader) defaulted(t *table, key, format string, args ...any) {
@@ -136,9 +142,13 @@ func (ld *loader) enum(t *table, key string, dst *string, allowed []string) {
 	ld.errorf(path, "expected one of %s, got %s", strings.Join(quoteAll(allowed), " | "), describe(v))
 }
 
-// text reads a non-empty string; check, when not nil, returns "" or the
-// rule the string breaks.
-func (ld *loader) text(t *table, key string, dst *string, check func(string) string) {
+// A canonizer returns the canonical form of a string value, or "" and the
+// rule the value breaks.
+type canonizer func(string) (canon, rule string)
+
+// text reads a non-empty string, put in canonical form by canon when it
+// is not nil.
+func (ld *loader) text(t *table, key string, dst *string, canon canonizer) {
 	v, path, ok := ld.get(t, key, "")
 	if !ok {
 		if *dst != "" {
@@ -147,15 +157,20 @@ func (ld *loader) text(t *table, key string, dst *string, check func(string) str
 		return
 	}
 	s, isStr := v.(string)
+	s = strings.TrimSpace(s)
 	switch {
 	case !isStr:
 		ld.errorf(path, "expected a string, got %s", describe(v))
-	case strings.TrimSpace(s) == "":
+	case s == "":
 		ld.errorf(path, "must not be empty")
-	case check != nil && check(s) != "":
-		ld.errorf(path, "expected %s, got %q", check(s), s)
+	case canon != nil:
+		if c, rule := canon(s); rule != "" {
+			ld.errorf(path, "expected %s, got %q", rule, s)
+		} else {
+			*dst = c
+		}
 	default:
-		*dst = strings.TrimSpace(s)
+		*dst = s
 	}
 }
 
@@ -173,8 +188,8 @@ func (ld *loader) boolean(t *table, key string, dst *bool) {
 	*dst = b
 }
 
-// list reads a non-empty array of non-empty strings; check as for text.
-func (ld *loader) list(t *table, key string, dst *[]string, check func(string) string) {
+// list reads a non-empty array of non-empty strings; canon as for text.
+func (ld *loader) list(t *table, key string, dst *[]string, canon canonizer) {
 	v, path, ok := ld.get(t, key, "")
 	if !ok {
 		if *dst != nil {
@@ -182,7 +197,7 @@ func (ld *loader) list(t *table, key string, dst *[]string, check func(string) s
 		}
 		return
 	}
-	out, msg := stringList(v, check)
+	out, msg := stringList(v, canon)
 	if msg != "" {
 		ld.errorf(path, "%s", msg)
 		return
@@ -190,7 +205,7 @@ func (ld *loader) list(t *table, key string, dst *[]string, check func(string) s
 	*dst = out
 }
 
-func stringList(v any, check func(string) string) ([]string, string) {
+func stringList(v any, canon canonizer) ([]string, string) {
 	a, ok := v.([]any)
 	if !ok {
 		return nil, fmt.Sprintf("expected an array of strings such as [\"A*\", \"B*\"], got %s", describe(v))
@@ -201,15 +216,20 @@ func stringList(v any, check func(string) string) ([]string, string) {
 	out := make([]string, 0, len(a))
 	for i, e := range a {
 		s, isStr := e.(string)
+		s = strings.TrimSpace(s)
 		switch {
 		case !isStr:
 			return nil, fmt.Sprintf("entry %d: expected a string, got %s", i+1, describe(e))
-		case strings.TrimSpace(s) == "":
+		case s == "":
 			return nil, fmt.Sprintf("entry %d is empty", i+1)
-		case check != nil && check(s) != "":
-			return nil, fmt.Sprintf("entry %d: expected %s, got %q", i+1, check(s), s)
+		case canon != nil:
+			c, rule := canon(s)
+			if rule != "" {
+				return nil, fmt.Sprintf("entry %d: expected %s, got %q", i+1, rule, s)
+			}
+			s = c
 		}
-		out = append(out, strings.TrimSpace(s))
+		out = append(out, s)
 	}
 	return out, ""
 }

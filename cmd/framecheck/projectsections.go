@@ -3,6 +3,8 @@ package main
 import (
 	"fmt"
 	"strings"
+
+	"framecheck/check"
 )
 
 // project reads the top-level tables in the order the reference file
@@ -101,13 +103,46 @@ func (ld *loader) lumber(t *table) {
 		}
 		lu.ByLayer = append(lu.ByLayer, o)
 	}
+	ld.lookupLumber(t, t, t, lu.Species, lu.Grade, lu.Size)
+	for i, o := range lu.ByLayer {
+		e := elems[i]
+		pick := func(own, def string) (string, *table) {
+			if own != "" {
+				return own, e
+			}
+			return def, t
+		}
+		sp, spT := pick(o.Species, lu.Species)
+		gr, grT := pick(o.Grade, lu.Grade)
+		sz, szT := pick(o.Size, lu.Size)
+		if spT == t && grT == t && szT == t {
+			continue // gives nothing of its own: reported above
+		}
+		ld.lookupLumber(spT, grT, szT, sp, gr, sz)
+	}
 }
 
-func sizeCheck(s string) string {
-	if validSize(strings.TrimSpace(s)) {
-		return ""
+// lookupLumber checks that the built-in design values (check.Materials)
+// know the species and grade in the width of size, and reports a problem
+// at the key that caused it; spT, grT and szT are the tables that gave
+// each value.
+func (ld *loader) lookupLumber(spT, grT, szT *table, species, grade, size string) {
+	if species == "" || grade == "" || size == "" {
+		return // an error is already reported
 	}
-	return sizeRule
+	_, err := check.BuiltinMaterials().Lookup(species, grade, size)
+	if err == nil {
+		return
+	}
+	t, key := spT, "species"
+	switch msg := err.Error(); {
+	case strings.HasPrefix(msg, "unknown species"):
+	case strings.HasPrefix(msg, "unknown grade"):
+		t, key = grT, "grade"
+	default:
+		t, key = szT, "size"
+	}
+	ld.errorf(joinPath(t.path, key), "%v", err)
 }
 
 func (ld *loader) design(t *table) {
@@ -150,16 +185,11 @@ func (ld *loader) combinations(t *table, dst *Combinations) {
 			ld.errorf(path, "%s", msg)
 			return
 		}
-		var c Combinations
-		for _, s := range list {
-			lc, msg := parseCombination(s)
-			if msg != "" {
-				ld.errorf(path, "%s", msg)
-				return
-			}
-			c.List = append(c.List, lc)
+		if _, err := check.ParseCombos(list); err != nil {
+			ld.errorf(path, "%v; loads are D, L, Lr, S and W, as in \"D+0.75L+0.75(Lr or S)\"", err)
+			return
 		}
-		*dst = c
+		*dst = Combinations{List: list}
 	default:
 		ld.errorf(path, "expected %q or an array of strings, got %s", StandardASCE716, describe(v))
 	}
@@ -206,7 +236,7 @@ func (ld *loader) zones(root *table) {
 		ld.num(t, "wind_up_psf", "psf", &z.WindUpPsf, nonNegative)
 		ld.enum(t, "ceiling", &z.Ceiling, ceilingValues)
 		ld.boolean(t, "ceiling_braces_bottom", &z.CeilingBracesBottom)
-		z.LiveDeflectionLimit, z.TotalDeflectionLimit = DeflectionLimits(z.Use, z.Ceiling)
+		z.LiveDeflectionLimit, z.TotalDeflectionLimit = deflectionLimits(z.Use, z.Ceiling)
 		ld.limit(t, "live_deflection_limit", &z.LiveDeflectionLimit, z)
 		ld.limit(t, "total_deflection_limit", &z.TotalDeflectionLimit, z)
 		ld.p.Zones = append(ld.p.Zones, z)
