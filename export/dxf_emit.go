@@ -130,15 +130,15 @@ func markupEntityCount(m *Markup) int {
 
 // markup writes every markup entity of m, converted to drawing units.
 func (e *dxfEmitter) markup(m *Markup) {
-	k := 1 / m.ToInch
-	du := func(p [2]float64) [2]float64 { return [2]float64{p[0] * k, p[1] * k} }
+	k := m.ToInch
+	du := func(p [2]float64) [2]float64 { return [2]float64{p[0] / k, p[1] / k} }
 	for _, s := range m.Highlights {
 		e.line(LayerFail, du(s.A), du(s.B))
 	}
 	for _, s := range m.BlockingAdds {
 		e.line(LayerBlocking, du(s.A), du(s.B))
 	}
-	h := m.textHeight() * k
+	h := m.textHeight() / k
 	for _, l := range m.Labels {
 		e.text(LayerLabel, du(l.At), h, l.AngleDeg, l.Text)
 	}

@@ -46,7 +46,7 @@ func (e *NonFiniteError) Unwrap() error { return ErrNonFinite }
 // modified; when nothing needs replacing, Sanitize returns r itself.
 func Sanitize(r *Results) (*Results, []string) {
 	var fields []string
-	v, changed := sanitizeValue(reflect.ValueOf(*r), "", &fields)
+	v, changed := sanitizeValue(reflect.ValueOf(*r), make([]pathSeg, 0, 8), &fields)
 	if !changed {
 		return r, nil
 	}
@@ -88,16 +88,39 @@ func memberIndex(field string) (int, bool) {
 	return i, err == nil
 }
 
+// pathSeg is one step of a field path: a JSON name, or an index when
+// Name is "".
+type pathSeg struct {
+	Name  string
+	Index int
+}
+
+// joinPath formats segments as "members[3].checks[1].ratio".
+func joinPath(segs []pathSeg) string {
+	var b strings.Builder
+	for _, s := range segs {
+		if s.Name == "" {
+			fmt.Fprintf(&b, "[%d]", s.Index)
+			continue
+		}
+		if b.Len() > 0 {
+			b.WriteByte('.')
+		}
+		b.WriteString(s.Name)
+	}
+	return b.String()
+}
+
 // sanitizeValue returns v, or a copy of v with non-finite floats set to 0
 // (copying only the structs and slices on the way to such a value), and
 // whether it changed anything. Fields tagged json:"-" are left alone: they
-// never reach the file.
-func sanitizeValue(v reflect.Value, path string, fields *[]string) (reflect.Value, bool) {
+// never reach the file. path is only formatted when a value is replaced.
+func sanitizeValue(v reflect.Value, path []pathSeg, fields *[]string) (reflect.Value, bool) {
 	switch v.Kind() {
 	case reflect.Float32, reflect.Float64:
 		f := v.Float()
 		if math.IsNaN(f) || math.IsInf(f, 0) {
-			*fields = append(*fields, fmt.Sprintf("%s = %v", path, f))
+			*fields = append(*fields, fmt.Sprintf("%s = %v", joinPath(path), f))
 			return reflect.Zero(v.Type()), true
 		}
 	case reflect.Struct:
@@ -109,11 +132,7 @@ func sanitizeValue(v reflect.Value, path string, fields *[]string) (reflect.Valu
 			if !sf.IsExported() || name == "-" {
 				continue
 			}
-			p := name
-			if path != "" {
-				p = path + "." + name
-			}
-			nv, changed := sanitizeValue(v.Field(i), p, fields)
+			nv, changed := sanitizeValue(v.Field(i), append(path, pathSeg{Name: name}), fields)
 			if changed {
 				if !cp.IsValid() {
 					cp = reflect.New(t).Elem()
@@ -128,7 +147,7 @@ func sanitizeValue(v reflect.Value, path string, fields *[]string) (reflect.Valu
 	case reflect.Slice, reflect.Array:
 		var cp reflect.Value
 		for i := 0; i < v.Len(); i++ {
-			nv, changed := sanitizeValue(v.Index(i), fmt.Sprintf("%s[%d]", path, i), fields)
+			nv, changed := sanitizeValue(v.Index(i), append(path, pathSeg{Index: i}), fields)
 			if !changed {
 				continue
 			}
@@ -163,7 +182,8 @@ func jsonName(sf reflect.StructField) string {
 }
 
 // WriteJSON writes r as results.json to path, atomically. Schema is filled
-// in when empty. Lists are written as [] rather than null. NaN and ±Inf never
+// in when empty. Lists are written as [] rather than null; each member, mark
+// and blocking row is one line, so files diff well. NaN and ±Inf never
 // reach the file: they are written as 0 and reported, after a successful
 // write, as a *NonFiniteError (see Sanitize). A path ending in .dxf is
 // refused so that a results file can never replace a drawing.
@@ -172,15 +192,8 @@ func WriteJSON(path string, r *Results) error {
 		return err
 	}
 	clean, fields := Sanitize(r)
-	if clean.Schema == "" {
-		cp := *clean
-		cp.Schema = Schema
-		clean = &cp
-	}
 	err := writeAtomic(path, func(w *bufio.Writer) error {
-		enc := json.NewEncoder(w)
-		enc.SetIndent("", " ")
-		return enc.Encode(clean)
+		return encodeResults(w, clean)
 	})
 	if err != nil {
 		return err
@@ -191,6 +204,121 @@ func WriteJSON(path string, r *Results) error {
 	return nil
 }
 
+// encodeResults writes r as JSON: the top-level keys one per line, list
+// items one per line.
+func encodeResults(w *bufio.Writer, r *Results) error {
+	schema := r.Schema
+	if schema == "" {
+		schema = Schema
+	}
+	first := true
+	key := func(name string) {
+		if !first {
+			w.WriteString(",\n")
+		}
+		first = false
+		w.WriteString(" \"" + name + "\": ")
+	}
+	value := func(name string, v any) error {
+		key(name)
+		b, err := json.Marshal(v)
+		if err != nil {
+			return fmt.Errorf("%s: %w", name, err)
+		}
+		w.Write(b)
+		return nil
+	}
+	list := func(name string, n int, item func(i int) any) error {
+		key(name)
+		if n == 0 {
+			w.WriteString("[]")
+			return nil
+		}
+		w.WriteString("[\n")
+		for i := 0; i < n; i++ {
+			b, err := json.Marshal(item(i))
+			if err != nil {
+				return fmt.Errorf("%s[%d]: %w", name, i, err)
+			}
+			w.WriteString("  ")
+			w.Write(b)
+			if i < n-1 {
+				w.WriteByte(',')
+			}
+			w.WriteByte('\n')
+		}
+		w.WriteString(" ]")
+		return nil
+	}
+	w.WriteString("{\n")
+	steps := []func() error{
+		func() error { return value("schema", schema) },
+		func() error { return value("plan", r.Plan) },
+		func() error { return value("drawing_units", r.DrawingUnits) },
+		func() error {
+			return list("members", len(r.Members), func(i int) any { return memberForJSON(r.Members[i]) })
+		},
+		func() error {
+			return list("marks", len(r.Marks), func(i int) any {
+				m := r.Marks[i]
+				m.SpansIn = orEmpty(m.SpansIn)
+				m.BlockingRowsPerSpan = orEmpty(m.BlockingRowsPerSpan)
+				return m
+			})
+		},
+		func() error {
+			return list("blocking_rows", len(r.BlockingRows), func(i int) any {
+				b := r.BlockingRows[i]
+				b.ClearIn = orEmpty(b.ClearIn)
+				b.Members = orEmpty(b.Members)
+				return b
+			})
+		},
+		func() error {
+			t := r.Takeoff
+			t.Joists, t.Blocking, t.Hangers = orEmpty(t.Joists), orEmpty(t.Blocking), orEmpty(t.Hangers)
+			return value("takeoff", t)
+		},
+		func() error { return value("summary", r.Summary) },
+		func() error {
+			a := r.Assumptions
+			a.CodeEditions, a.Combinations = orEmpty(a.CodeEditions), orEmpty(a.Combinations)
+			a.Switches, a.Zones = orEmpty(a.Switches), orEmpty(a.Zones)
+			a.DesignValues, a.Notes = orEmpty(a.DesignValues), orEmpty(a.Notes)
+			return value("assumptions", a)
+		},
+	}
+	for _, step := range steps {
+		if err := step(); err != nil {
+			return err
+		}
+	}
+	w.WriteString("\n}\n")
+	return nil
+}
+
+// memberForJSON returns m with empty lists as [] (the checks are copied
+// only when one has a nil trace).
+func memberForJSON(m Member) Member {
+	m.BearingsAtIn = orEmpty(m.BearingsAtIn)
+	m.SpansIn = orEmpty(m.SpansIn)
+	m.Checks = orEmpty(m.Checks)
+	m.BlockingRowsPerSpan = orEmpty(m.BlockingRowsPerSpan)
+	m.BlockingAtIn = orEmpty(m.BlockingAtIn)
+	m.Messages = orEmpty(m.Messages)
+	for i := range m.Checks {
+		if m.Checks[i].Trace == nil {
+			cs := slices.Clone(m.Checks)
+			for j := range cs {
+				cs[j].Trace = orEmpty(cs[j].Trace)
+			}
+			m.Checks = cs
+			break
+		}
+	}
+	return m
+}
+
 // orEmpty returns s, or an empty non-nil slice when s is nil, so that the
 // JSON shows [] rather than null.
 func orEmpty[T any](s []T) []T {
@@ -198,76 +326,4 @@ func orEmpty[T any](s []T) []T {
 		return []T{}
 	}
 	return s
-}
-
-// MarshalJSON writes r with empty lists as [].
-func (r Results) MarshalJSON() ([]byte, error) {
-	type plain Results
-	p := plain(r)
-	p.Members = orEmpty(p.Members)
-	p.Marks = orEmpty(p.Marks)
-	p.BlockingRows = orEmpty(p.BlockingRows)
-	return json.Marshal(p)
-}
-
-// MarshalJSON writes m with empty lists as [].
-func (m Member) MarshalJSON() ([]byte, error) {
-	type plain Member
-	p := plain(m)
-	p.BearingsAtIn = orEmpty(p.BearingsAtIn)
-	p.SpansIn = orEmpty(p.SpansIn)
-	p.Checks = orEmpty(p.Checks)
-	p.BlockingRowsPerSpan = orEmpty(p.BlockingRowsPerSpan)
-	p.BlockingAtIn = orEmpty(p.BlockingAtIn)
-	p.Messages = orEmpty(p.Messages)
-	return json.Marshal(p)
-}
-
-// MarshalJSON writes c with an empty trace as [].
-func (c Check) MarshalJSON() ([]byte, error) {
-	type plain Check
-	p := plain(c)
-	p.Trace = orEmpty(p.Trace)
-	return json.Marshal(p)
-}
-
-// MarshalJSON writes m with empty lists as [].
-func (m Mark) MarshalJSON() ([]byte, error) {
-	type plain Mark
-	p := plain(m)
-	p.SpansIn = orEmpty(p.SpansIn)
-	p.BlockingRowsPerSpan = orEmpty(p.BlockingRowsPerSpan)
-	return json.Marshal(p)
-}
-
-// MarshalJSON writes b with empty lists as [].
-func (b BlockingRow) MarshalJSON() ([]byte, error) {
-	type plain BlockingRow
-	p := plain(b)
-	p.ClearIn = orEmpty(p.ClearIn)
-	p.Members = orEmpty(p.Members)
-	return json.Marshal(p)
-}
-
-// MarshalJSON writes t with empty lists as [].
-func (t Takeoff) MarshalJSON() ([]byte, error) {
-	type plain Takeoff
-	p := plain(t)
-	p.Joists = orEmpty(p.Joists)
-	p.Blocking = orEmpty(p.Blocking)
-	p.Hangers = orEmpty(p.Hangers)
-	return json.Marshal(p)
-}
-
-// MarshalJSON writes a with empty lists as [].
-func (a Assumptions) MarshalJSON() ([]byte, error) {
-	type plain Assumptions
-	p := plain(a)
-	p.CodeEditions = orEmpty(p.CodeEditions)
-	p.Combinations = orEmpty(p.Combinations)
-	p.Switches = orEmpty(p.Switches)
-	p.Zones = orEmpty(p.Zones)
-	p.DesignValues = orEmpty(p.DesignValues)
-	p.Notes = orEmpty(p.Notes)
-	return json.Marshal(p)
 }

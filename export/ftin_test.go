@@ -1,0 +1,48 @@
+package export
+
+import (
+	"math"
+	"testing"
+)
+
+func TestFtIn(t *testing.T) {
+	// 12 in to the foot; nearest 1/16 in (common practice, no source).
+	tests := []struct {
+		in   float64
+		want string
+	}{
+		{0, `0'-0"`},
+		{8, `0'-8"`},
+		{144, `12'-0"`},
+		{150.5, `12'-6 1/2"`},
+		{14.5, `1'-2 1/2"`},
+		{0.0625, `0'-0 1/16"`},
+		{33.75, `2'-9 3/4"`},
+		{11.99, `1'-0"`}, // rounds up to the next foot
+		{-18, `-1'-6"`},
+		{math.NaN(), "n/a"},
+		{math.Inf(1), "n/a"},
+	}
+	for _, tc := range tests {
+		if got := FtIn(tc.in); got != tc.want {
+			t.Errorf("FtIn(%v) = %s, want %s", tc.in, got, tc.want)
+		}
+	}
+}
+
+func TestUnitToInch(t *testing.T) {
+	// 1 in = 25.4 mm exactly (international inch, 1959).
+	tests := []struct {
+		unit string
+		want float64
+	}{{"in", 1}, {"ft", 12}, {"mm", 1 / 25.4}, {"cm", 1 / 2.54}, {"M", 1 / 0.0254}}
+	for _, tc := range tests {
+		got, ok := UnitToInch(tc.unit)
+		if !ok || math.Abs(got-tc.want) > 1e-12*tc.want {
+			t.Errorf("UnitToInch(%q) = %v %v, want %v", tc.unit, got, ok, tc.want)
+		}
+	}
+	if _, ok := UnitToInch("yd"); ok {
+		t.Error("yd accepted")
+	}
+}

@@ -1,0 +1,35 @@
+package export
+
+import (
+	"encoding/json"
+	"os"
+	"path/filepath"
+	"testing"
+)
+
+// loadFixture reads testdata/results.json (illustrative numbers, not design
+// results; see testdata/README.md).
+func loadFixture(t testing.TB) *Results {
+	t.Helper()
+	data, err := os.ReadFile(filepath.Join("testdata", "results.json"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	var r Results
+	if err := json.Unmarshal(data, &r); err != nil {
+		t.Fatal(err)
+	}
+	return &r
+}
+
+// noTempFiles fails when dir holds a leftover temporary file of writeAtomic.
+func noTempFiles(t *testing.T, dir string) {
+	t.Helper()
+	matches, err := filepath.Glob(filepath.Join(dir, ".*.tmp-*"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(matches) > 0 {
+		t.Errorf("temporary files left behind: %v", matches)
+	}
+}
