@@ -137,13 +137,18 @@ func TestCompatibilityRandom(t *testing.T) {
 		s0, s1 := b.SupportsAtIn[0], b.SupportsAtIn[1]
 		y0, y1 := at(s0), at(s1)
 		fix := func(x float64) float64 { return at(x) - y0 - (y1-y0)*(x-s0)/(s1-s0) }
+		// Scale: the deflection a moment of the largest magnitude on the
+		// beam would give over its length, M L^2 / EI, or the largest
+		// deflection if larger (loads of both signs can cancel, leaving a
+		// deflection far smaller than the trapezoidal rule's O(h^2) error
+		// on the curvature). A wrong support moment errs by a sizeable
+		// fraction of this scale, 1e-5 of it is well above the rule's error.
 		dmax, _ := r.MaxDeflection(0, b.LengthIn)
-		scale := math.Abs(dmax)
+		mp, _, mn, _ := r.MomentExtremes(0, b.LengthIn)
+		scale := math.Max(math.Abs(dmax), math.Max(mp, -mn)*b.LengthIn*b.LengthIn/b.EILbIn2)
 		if scale == 0 {
 			continue
 		}
-		// The trapezoidal rule errs by O(h^2); 1e-5 of the largest
-		// deflection is far below any wrong support moment.
 		for _, s := range b.SupportsAtIn {
 			near(t, "numerical deflection at support", fix(s), 0, 1e-5, scale, "compatibility")
 		}
@@ -223,6 +228,15 @@ func TestQueriesAgainstSamplingRandom(t *testing.T) {
 		// Sign changes: M = 0 there, each piece has one sign, neighbours
 		// differ.
 		sc := r.MomentSignChanges()
+		buf := r.AppendMomentSignChanges([]float64{-1})
+		if len(buf) != len(sc)+1 || buf[0] != -1 {
+			t.Fatalf("AppendMomentSignChanges = %v, want [-1] + %v", buf, sc)
+		}
+		for i := range sc {
+			if buf[i+1] != sc[i] {
+				t.Fatalf("AppendMomentSignChanges = %v, want [-1] + %v", buf, sc)
+			}
+		}
 		cuts := append(append([]float64{0}, sc...), b.LengthIn)
 		prev := 2
 		for i := 0; i+1 < len(cuts); i++ {
