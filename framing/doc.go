@@ -92,6 +92,7 @@
 //	FRM211 warning  callout that reaches no joist
 //	FRM212 warning  joist with no parallel neighbour
 //	FRM213 warning  arc segment on a support, blocking or label polyline: skipped
+//	FRM214 warning  entity with a coordinate that is not finite or beyond 1e9 in: skipped
 //
 // # Speed
 //

@@ -89,7 +89,9 @@ func (g *segIndex) cellRange(a, b Point, pad float64) (i0, j0, i1, j1 int) {
 // the segment into pieces no longer than one cell so a long diagonal
 // touches O(length/cell) cells rather than its whole bounding box.
 func (g *segIndex) visit(a, b Point, pad float64, fn func(c int)) {
-	n := int(dist(a, b)/g.cell) + 1
+	// a piece longer than a cell is still covered by its bounding box, so
+	// capping the count only widens boxes for segments longer than the grid
+	n := min(int(dist(a, b)/g.cell)+1, 2*(g.nx+g.ny)+2)
 	d := scale(sub(b, a), 1/float64(n))
 	for k := 0; k < n; k++ {
 		p := lerp(a, d, float64(k))

@@ -23,7 +23,12 @@ const (
 	CodeCalloutUnused   = "FRM211" // callout that reaches no joist
 	CodeNoNeighbour     = "FRM212" // joist with no parallel neighbour
 	CodeArcSegment      = "FRM213" // arc segment on a support, blocking or label layer: skipped
+	CodeBadCoordinate   = "FRM214" // entity with a non-finite or out-of-range coordinate: skipped
 )
+
+// maxCoordIn bounds the coordinates framing accepts: 10^9 in is about
+// 16,000 miles, far beyond any building, and keeps the grids finite.
+const maxCoordIn = 1e9
 
 type segItem struct {
 	a, b Point
@@ -106,6 +111,10 @@ func (g *grouper) classify(d *dxfimport.Drawing) {
 			roles[layer] = rs
 		}
 		r, spec := role(rs[0]), rs[1]
+		if r != roleNone && !finitePoints(e.Points) {
+			g.warn(e.Pos, CodeBadCoordinate, "%s has a coordinate that is not a finite number within %g in; skipped", e.Kind, maxCoordIn)
+			continue
+		}
 		used := true
 		switch r {
 		case roleNone:
@@ -130,6 +139,15 @@ func (g *grouper) classify(d *dxfimport.Drawing) {
 			g.plan.Ignored[fmt.Sprintf("%s (%s)", layer, e.Kind)]++
 		}
 	}
+}
+
+func finitePoints(pts []Point) bool {
+	for _, q := range pts {
+		if !(math.Abs(q.X) <= maxCoordIn && math.Abs(q.Y) <= maxCoordIn) { // false for NaN too
+			return false
+		}
+	}
+	return true
 }
 
 func isText(e dxfimport.Entity) bool {
