@@ -216,7 +216,7 @@ func (s *seg) slopeRoot(p, q, invEI float64) (float64, bool) {
 	}
 	// Start from the secant (regula falsi) point, then Newton on y' with
 	// y'' = -M/EI, falling back to bisection whenever a step leaves the
-	// bracket; stop when the step is below 1e-13 of the segment.
+	// bracket; stop after a Newton step below 1e-7 of the segment.
 	t := p + (q-p)*fp/(fp-fq)
 	for it := 0; it < 60; it++ {
 		f := s.slope(t, invEI)
@@ -231,9 +231,12 @@ func (s *seg) slopeRoot(p, q, invEI float64) (float64, bool) {
 		d := -s.moment(t) * invEI
 		tn := t - f/d
 		if d == 0 || !(tn > p && tn < q) {
-			tn = (p + q) / 2
+			t = (p + q) / 2
+			continue
 		}
-		if math.Abs(tn-t) <= 1e-13*s.l {
+		// Newton converges quadratically here: after a step of 1e-7 l
+		// the new point is within about (1e-7)^2 l of the root.
+		if math.Abs(tn-t) <= 1e-7*s.l {
 			return tn, true
 		}
 		t = tn
