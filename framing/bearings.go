@@ -43,6 +43,17 @@ func (g *grouper) findBearings() {
 		m := &p.Members[k]
 		hits = g.supportHits(k, minSin, hits[:0])
 		m.Bearings, g.bdirs[k] = g.bearingsFrom(hits, merged)
+		if len(m.Bearings) < 2 {
+			// the lines it does bear on are not "the nearest support"
+			own := map[int]bool{}
+			for _, h := range hits {
+				if h.direct {
+					own[h.sup] = true
+				}
+			}
+			g.noSupport(k, own)
+			continue
+		}
 		g.finishBearings(k)
 	}
 	g.buildSupports(merged)
@@ -179,15 +190,12 @@ func (g *grouper) bearingsFrom(hits []hit, merged map[[2]int]bool) ([]Bearing, [
 	return bs, dirs
 }
 
-// finishBearings sets overhangs, hangers and the no-support error.
+// finishBearings sets the overhangs and hangers of a member with at least
+// two bearings.
 func (g *grouper) finishBearings(k int) {
 	m := &g.plan.Members[k]
 	tol := g.opt.SnapToleranceIn
 	bs := m.Bearings
-	if len(bs) < 2 {
-		g.noSupport(k)
-		return
-	}
 	first, last := bs[0], bs[len(bs)-1]
 	if first.AtIn > first.LengthIn/2+tol {
 		m.OverhangStartIn = first.AtIn
@@ -202,14 +210,10 @@ func (g *grouper) finishBearings(k int) {
 }
 
 // noSupport marks member k as an error, naming the end with no support
-// and how far the nearest support line is from it.
-func (g *grouper) noSupport(k int) {
+// and how far the nearest other support line (not one in own) is from it.
+func (g *grouper) noSupport(k int, own map[int]bool) {
 	m := &g.plan.Members[k]
 	m.Error = true
-	own := map[string]bool{}
-	for _, b := range m.Bearings {
-		own[b.Pos.Handle+"|"+fmt.Sprint(b.Pos.Line)] = true
-	}
 	var ends []string
 	switch {
 	case len(m.Bearings) == 0:
@@ -238,7 +242,7 @@ func (g *grouper) noSupport(k int) {
 // nearestSearchIn bounds the search for the nearest support in messages.
 const nearestSearchIn = 1536.0
 
-func (g *grouper) nearestSupport(p Point, skip map[string]bool) (float64, *segItem, bool) {
+func (g *grouper) nearestSupport(p Point, skip map[int]bool) (float64, *segItem, bool) {
 	if g.supIdx == nil {
 		return 0, nil, false
 	}
@@ -246,7 +250,7 @@ func (g *grouper) nearestSupport(p Point, skip map[string]bool) (float64, *segIt
 		best, bi := math.Inf(1), -1
 		g.supIdx.query(p, p, r, func(s int) {
 			sg := &g.sups[s]
-			if skip[sg.pos.Handle+"|"+fmt.Sprint(sg.pos.Line)] {
+			if skip[s] {
 				return
 			}
 			if d := distPointSeg(p, sg.a, sg.b); d < best {

@@ -287,3 +287,15 @@ func TestWallDrawnAsRectangle(t *testing.T) {
 		t.Error("Group(nil) = nil, want an empty plan")
 	}
 }
+
+func TestPerimeterPolylineNearestSupport(t *testing.T) {
+	// the whole perimeter wall is one closed polyline: the joist bears on
+	// its south side and stops 6 in short of its north side, which is the
+	// nearest support to name even though it is the same entity
+	pl := newPlan().poly("WALL", true, rect(-10, 0, 100, 144)...).
+		joists(0, 138, 16).group(DefaultOptions())
+	m := &pl.Members[0]
+	if !m.Error || !strings.Contains(m.Messages[0], "end (16.00, 138.00) reaches no support; nearest support is 6.0 in away") {
+		t.Errorf("error %v messages %q", m.Error, m.Messages)
+	}
+}
