@@ -356,3 +356,33 @@ func TestSignChangesZeroStretch(t *testing.T) {
 		t.Errorf("no load: MomentExtremes(50, 10) = %g@%g, %g@%g, want zeros at from (10, the smaller end)", mp, xp, mn, xn)
 	}
 }
+
+func TestSymmetricOverhangsBothEnds(t *testing.T) {
+	// Hand derivation by statics and superposition (no table used): span
+	// l between supports, overhang a at each end, uniform w everywhere.
+	//   R = w (l + 2a) / 2 at each support;
+	//   M over each support = -w a^2 / 2 (cantilever);
+	//   M at mid-span = w l^2/8 - w a^2/2;
+	//   mid-span deflection = 5 w l^4/(384 EI) - (w a^2/2) l^2/(8 EI)
+	//     (equal end moments M bend a simple span by M l^2/8EI);
+	//   tip deflection = w a^4/(8 EI)            (cantilever alone)
+	//     + a (w a^2/2) l/(2 EI)                 (support rotation, end moments)
+	//     - a w l^3/(24 EI)                      (support rotation, span load).
+	// Closed forms from any mechanics of materials text (common practice).
+	const src = "statics and superposition by hand, written in the comment"
+	l, a, w := 192.0, 30.0, 4.5
+	b := Beam{LengthIn: l + 2*a, SupportsAtIn: []float64{a, a + l}, EILbIn2: eiTest}
+	r := mustSolve(t, b, w, w, w)
+	R := r.Reactions()
+	near(t, "R left", R[0], w*(l+2*a)/2, tolExact, 0, src)
+	near(t, "R right", R[1], w*(l+2*a)/2, tolExact, 0, src)
+	near(t, "M support", r.Moment(a), -w*a*a/2, tolExact, 0, src)
+	near(t, "M mid-span", r.Moment(a+l/2), w*l*l/8-w*a*a/2, tolExact, 0, src)
+	near(t, "mid-span deflection", r.Deflection(a+l/2), (5*w*l*l*l*l/384-w*a*a/2*l*l/8)/eiTest, tolExact, 0, src)
+	tip := (w*a*a*a*a/8 + a*(w*a*a/2)*l/2 - a*w*l*l*l/24) / eiTest
+	near(t, "left tip deflection", r.Deflection(0), tip, tolExact, 0, src)
+	near(t, "right tip deflection", r.Deflection(l+2*a), tip, tolExact, 0, src)
+	vl, vr := r.ShearEachSide(a)
+	near(t, "V left of support (-wa)", vl, -w*a, tolExact, 0, src)
+	near(t, "V right of support (R - wa)", vr, w*l/2, tolExact, 0, src)
+}
