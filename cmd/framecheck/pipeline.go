@@ -1,0 +1,366 @@
+package main
+
+import (
+	"fmt"
+	"math"
+	"runtime"
+	"sync"
+
+	"framecheck/check"
+	"framecheck/dxfimport"
+	"framecheck/framing"
+)
+
+// outcome is everything one check run found, before it is written out.
+type outcome struct {
+	project  *Project
+	drawing  *dxfimport.Drawing
+	plan     *framing.Plan
+	settings check.Settings
+	results  []check.Result        // one per plan member, same order
+	sizing   []*check.SizingResult // per member with --size, else nil
+	rows     []framing.BlockingRow // rows to add, by run
+	takeoff  framing.Takeoff
+	issues   dxfimport.IssueList // drawing, framing and design findings
+}
+
+// pipelineInput is what runs the pipeline: the plan file, its project,
+// the units override and whether to pick sizes.
+type pipelineInput struct {
+	planPath string
+	project  *Project
+	units    string // --units, overrides the project file and $INSUNITS
+	size     bool   // --size
+}
+
+// framingOptions maps the project file onto framing's options.
+func framingOptions(p *Project) framing.Options {
+	o := framing.DefaultOptions()
+	o.SnapToleranceIn = p.Drawing.SnapToleranceIn
+	o.MaxWallThicknessIn = p.Drawing.MaxWallThicknessIn
+	o.EdgeDistanceIn = p.Drawing.EdgeDistanceIn
+	o.JoistLayers = p.Layers.Joists
+	o.BlockingLayers = p.Layers.Blocking
+	o.ZoneLayers = p.Layers.Zones
+	o.LabelLayers = p.Layers.Labels
+	o.Supports = nil
+	for _, s := range p.Supports {
+		o.Supports = append(o.Supports, framing.SupportSpec{Layers: s.Layers, Kind: s.Kind, BearingIn: s.BearingIn})
+	}
+	o.Species, o.Grade, o.Size = p.Lumber.Species, p.Lumber.Grade, p.Lumber.Size
+	o.ByLayer = nil
+	for _, r := range p.Lumber.ByLayer {
+		o.ByLayer = append(o.ByLayer, framing.LumberRule{Layers: r.Layers, Species: r.Species, Grade: r.Grade, Size: r.Size})
+	}
+	o.DefaultZone = p.Loads.DefaultZone
+	if o.DefaultZone == "" && len(p.Zones) == 1 {
+		o.DefaultZone = p.Zones[0].Name
+	}
+	return o
+}
+
+// checkSettings maps the project file's [design] onto check's settings.
+func checkSettings(p *Project) (check.Settings, error) {
+	s := check.DefaultSettings()
+	s.TopEdgeBraced = p.Design.TopEdgeBraced
+	s.ShearAtD = p.Design.ShearAtD
+	s.WetService = p.Design.WetService
+	s.Incised = p.Design.Incised
+	s.PatternLive = p.Design.PatternLiveLoads
+	s.Temperature = p.Design.Temperature
+	s.Kcr = p.Design.Kcr
+	combos, err := p.Design.Combinations.Combos()
+	if err != nil {
+		return s, fmt.Errorf("%s: design.combinations: %v", p.File, err)
+	}
+	s.Combos = combos
+	return s, nil
+}
+
+// runPipeline reads the plan, groups it into members, checks every member,
+// decides blocking rows per run, names marks and counts the takeoff.
+// A returned error means the input is unusable (exit 2).
+func runPipeline(in pipelineInput) (*outcome, error) {
+	p := in.project
+	settings, err := checkSettings(p)
+	if err != nil {
+		return nil, err
+	}
+	units := p.Drawing.Units
+	if in.units != "" {
+		units = in.units
+	}
+	d, err := dxfimport.ReadFile(in.planPath, dxfimport.Options{Units: units})
+	if err != nil {
+		return nil, err
+	}
+	plan := framing.Group(d, framingOptions(p))
+	o := &outcome{project: p, drawing: d, plan: plan, settings: settings}
+	o.issues = append(o.issues, d.Issues...)
+	o.issues = append(o.issues, plan.Issues...)
+
+	inputs := make([]check.Member, len(plan.Members))
+	shifts := make([]float64, len(plan.Members))
+	usable := make([]bool, len(plan.Members))
+	o.results = make([]check.Result, len(plan.Members))
+	for k := range plan.Members {
+		m := &plan.Members[k]
+		cm, shift, msgs := checkInput(p, plan, k)
+		inputs[k], shifts[k] = cm, shift
+		if m.Error || len(msgs) > 0 {
+			o.results[k] = errorResult(m, append(append([]string(nil), m.Messages...), msgs...))
+			continue
+		}
+		usable[k] = true
+	}
+	if in.size {
+		o.sizing = make([]*check.SizingResult, len(plan.Members))
+	}
+	checkAll(inputs, shifts, usable, settings, p, o)
+
+	// Rows per run: the run gets the most rows any member needs, and every
+	// member of the run is checked with them (DOMAIN.md "Blocking rows").
+	for ri, run := range plan.Runs {
+		n, ref := 0, -1
+		for _, k := range run.Members {
+			if !usable[k] {
+				continue
+			}
+			if r := o.results[k].RowsPerSpan(); ref < 0 || r > n {
+				n, ref = r, k
+			}
+		}
+		if n == 0 || ref < 0 {
+			continue
+		}
+		for _, k := range run.Members {
+			if usable[k] && o.results[k].RowsPerSpan() != n {
+				cm := inputs[k]
+				cm.Size = o.results[k].Size
+				o.results[k] = unshift(check.CheckWithRows(cm, settings, n), shifts[k])
+			}
+		}
+		// Positions along the run's first member, from its Start:
+		// PlaceRows offsets each member by its own first bearing.
+		first := &plan.Members[run.Members[0]]
+		refM := &plan.Members[ref]
+		var at []float64
+		for _, x := range o.results[ref].BlockingAtIn {
+			at = append(at, x-firstBearing(refM)+firstBearing(first))
+		}
+		o.rows = append(o.rows, plan.PlaceRows(ri, at)...)
+	}
+
+	// Final sizes, then marks and the takeoff.
+	for k := range plan.Members {
+		if usable[k] && o.results[k].Size != "" {
+			plan.Members[k].Size = o.results[k].Size
+		}
+	}
+	framing.AssignMarks(plan)
+	for i := range o.rows {
+		o.rows[i].Size = plan.Members[plan.Runs[runIndex(plan, o.rows[i].Run)].Members[0]].Size
+	}
+	o.takeoff = framing.BuildTakeoff(plan, o.rows)
+	return o, nil
+}
+
+func runIndex(plan *framing.Plan, id string) int {
+	for i, r := range plan.Runs {
+		if r.ID == id {
+			return i
+		}
+	}
+	return 0
+}
+
+func firstBearing(m *framing.Member) float64 {
+	if len(m.Bearings) == 0 {
+		return 0
+	}
+	return m.Bearings[0].AtIn
+}
+
+// checkAll checks the usable members on every core. Members identical for
+// design (same check input but for the ID) are checked once.
+func checkAll(inputs []check.Member, shifts []float64, usable []bool, s check.Settings, p *Project, o *outcome) {
+	keys := make([]string, len(inputs))
+	first := map[string]int{}
+	var order []int
+	for k := range inputs {
+		if !usable[k] {
+			continue
+		}
+		keys[k] = memberKey(inputs[k])
+		if _, ok := first[keys[k]]; !ok {
+			first[keys[k]] = k
+			order = append(order, k)
+		}
+	}
+	workers := runtime.GOMAXPROCS(0)
+	var wg sync.WaitGroup
+	next := make(chan int)
+	for w := 0; w < workers; w++ {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			for k := range next {
+				if o.sizing != nil {
+					sr := check.Size(inputs[k], s, p.Sizing.Candidates, p.Sizing.BlockingPieceWeightBf)
+					o.sizing[k] = &sr
+					o.results[k] = sr.Chosen
+				} else {
+					o.results[k] = check.CheckMember(inputs[k], s)
+				}
+			}
+		}()
+	}
+	for _, k := range order {
+		next <- k
+	}
+	close(next)
+	wg.Wait()
+	results := make([]check.Result, len(inputs))
+	for k := range inputs {
+		if !usable[k] {
+			continue
+		}
+		src := first[keys[k]]
+		r := o.results[src]
+		r.ID = inputs[k].ID
+		results[k] = unshift(r, shifts[k])
+		if o.sizing != nil {
+			o.sizing[k] = o.sizing[src]
+		}
+	}
+	for k := range inputs {
+		if usable[k] {
+			o.results[k] = results[k]
+		}
+	}
+}
+
+// memberKey is the check input less the ID, exactly (floats in full).
+func memberKey(m check.Member) string {
+	m.ID = ""
+	return fmt.Sprintf("%v", m)
+}
+
+// checkInput builds check's input for plan member k. Bearings that lie a
+// little outside the drawn joist (an end stopping short of a single-line
+// support) are kept where they are and the member is lengthened to reach
+// them: shift is how far the start moved back, to be taken off the
+// positions check returns. msgs are reasons the member cannot be checked.
+func checkInput(p *Project, plan *framing.Plan, k int) (cm check.Member, shift float64, msgs []string) {
+	m := &plan.Members[k]
+	cm = check.Member{
+		ID: m.ID, Size: m.Size, Species: m.Species, Grade: m.Grade,
+		LengthIn:        m.LengthIn,
+		OverhangStartIn: m.OverhangStartIn, OverhangEndIn: m.OverhangEndIn,
+		SpacingIn: m.SpacingIn, TribIn: m.TribIn,
+	}
+	if cm.SpacingIn == 0 {
+		cm.SpacingIn = m.CalloutSpacingIn
+	}
+	if len(m.Bearings) > 0 && m.Bearings[0].AtIn < 0 {
+		shift = -m.Bearings[0].AtIn
+	}
+	for _, b := range m.Bearings {
+		cm.Bearings = append(cm.Bearings, check.Bearing{AtIn: b.AtIn + shift, LengthIn: b.LengthIn})
+	}
+	cm.LengthIn += shift
+	if n := len(cm.Bearings); n > 0 && cm.Bearings[n-1].AtIn > cm.LengthIn {
+		cm.LengthIn = cm.Bearings[n-1].AtIn
+	}
+	for _, x := range m.ExistingBlockingAtIn {
+		cm.BlockingAtIn = append(cm.BlockingAtIn, x+shift)
+	}
+	run := plan.Runs[m.Run]
+	// NDS 2018 4.3.9: at least three members, at most 24 in on centre,
+	// joined by a load-distributing element (the sheathing).
+	cm.Repetitive = len(run.Members) >= 3 && cm.SpacingIn > 0 && cm.SpacingIn <= 24
+	z, zmsgs := zoneEnvelope(p, m.Zones)
+	msgs = append(msgs, zmsgs...)
+	if z == nil {
+		return cm, shift, msgs
+	}
+	cm.Use = z.Use
+	cm.Loads = check.AreaLoads{DeadPsf: z.DeadPsf, LivePsf: z.LivePsf, RoofLivePsf: z.RoofLivePsf,
+		SnowPsf: z.SnowPsf, WindDownPsf: z.WindDownPsf, WindUpPsf: z.WindUpPsf}
+	if p.Design.AddSelfWeight {
+		cm.Loads.DeadPsf += selfWeightPsf(m.Size, cm.TribIn)
+	}
+	cm.LiveLimit, cm.TotalLimit = z.LiveDeflectionLimit, z.TotalDeflectionLimit
+	cm.BottomBracedContinuous = z.CeilingBracesBottom
+	return cm, shift, msgs
+}
+
+// woodDensityPcf is the unit weight NDS 2018 Supplement Table 1B uses for
+// its weights per foot of sawn lumber, 35 lb/ft3 (from memory: verify
+// against NDS 2018 Supplement Table 1B, heading note).
+const woodDensityPcf = 35.0
+
+// selfWeightPsf spreads the joist's own weight over its tributary width.
+func selfWeightPsf(size string, tribIn float64) float64 {
+	sec, err := check.ParseSize(size)
+	if err != nil || tribIn <= 0 {
+		return 0
+	}
+	plf := sec.AreaIn2 / 144 * woodDensityPcf
+	return plf / (tribIn / 12)
+}
+
+// zoneEnvelope returns the zone a member takes: its one zone, or for a
+// member crossing zone edges the envelope (largest of each load, the
+// stricter deflection limits, bottom bracing only if every zone gives it).
+func zoneEnvelope(p *Project, names []string) (*Zone, []string) {
+	if len(names) == 0 {
+		return nil, []string{"no load zone: the member lies outside every zone outline and the project has no default_zone"}
+	}
+	var env *Zone
+	for _, n := range names {
+		z := p.Zone(n)
+		if z == nil {
+			return nil, []string{fmt.Sprintf("load zone %q is drawn but the project file has no [[zone]] named so", n)}
+		}
+		if env == nil {
+			c := *z
+			env = &c
+			continue
+		}
+		env.Name += "+" + z.Name
+		if z.Use == "roof" && env.Use != "roof" {
+			// floor limits are the stricter, so a mixed member stays floor
+		}
+		env.DeadPsf = math.Max(env.DeadPsf, z.DeadPsf)
+		env.LivePsf = math.Max(env.LivePsf, z.LivePsf)
+		env.RoofLivePsf = math.Max(env.RoofLivePsf, z.RoofLivePsf)
+		env.SnowPsf = math.Max(env.SnowPsf, z.SnowPsf)
+		env.WindDownPsf = math.Max(env.WindDownPsf, z.WindDownPsf)
+		env.WindUpPsf = math.Max(env.WindUpPsf, z.WindUpPsf)
+		env.LiveDeflectionLimit = math.Max(env.LiveDeflectionLimit, z.LiveDeflectionLimit)
+		env.TotalDeflectionLimit = math.Max(env.TotalDeflectionLimit, z.TotalDeflectionLimit)
+		env.CeilingBracesBottom = env.CeilingBracesBottom && z.CeilingBracesBottom
+	}
+	return env, nil
+}
+
+// unshift moves positions check returned back to the drawn member.
+func unshift(r check.Result, shift float64) check.Result {
+	if shift == 0 {
+		return r
+	}
+	at := make([]float64, len(r.BlockingAtIn))
+	for i, x := range r.BlockingAtIn {
+		at[i] = x - shift
+	}
+	r.BlockingAtIn = at
+	return r
+}
+
+// errorResult is the result of a member that cannot be checked.
+func errorResult(m *framing.Member, msgs []string) check.Result {
+	return check.Result{ID: m.ID, Size: m.Size, Species: m.Species, Grade: m.Grade,
+		SpansIn: m.Spans(), OverhangsIn: [2]float64{m.OverhangStartIn, m.OverhangEndIn},
+		Status: check.StatusError, Messages: msgs}
+}

@@ -1,0 +1,293 @@
+package main
+
+import (
+	"fmt"
+	"path/filepath"
+	"sort"
+	"strings"
+
+	"framecheck/check"
+	"framecheck/export"
+	"framecheck/framing"
+)
+
+// exportResults maps an outcome onto export's results.json contract.
+func exportResults(o *outcome, planName string) *export.Results {
+	d, plan := o.drawing, o.plan
+	toInch := d.ToInch
+	if toInch <= 0 {
+		toInch = 1
+	}
+	units := d.Units
+	if units == "" {
+		units = "in" // read as inches, with a DXF issue saying so
+	}
+	r := &export.Results{Schema: export.Schema, Plan: filepath.Base(planName), DrawingUnits: units}
+	ids := make([]string, len(plan.Members))
+	for k := range plan.Members {
+		ids[k] = plan.Members[k].ID
+	}
+	for k := range plan.Members {
+		r.Members = append(r.Members, exportMember(&plan.Members[k], &o.results[k], toInch))
+		switch o.results[k].Status {
+		case check.StatusPass:
+			r.Summary.Pass++
+		case check.StatusFail:
+			r.Summary.Fail++
+		default:
+			r.Summary.Error++
+		}
+	}
+	r.Summary.Members = len(plan.Members)
+	r.Marks = exportMarks(r.Members)
+	for _, row := range o.rows {
+		r.BlockingRows = append(r.BlockingRows, exportRow(plan, row, ids, toInch))
+	}
+	r.Takeoff = exportTakeoff(o.takeoff)
+	r.Assumptions = assumptions(o)
+	return r
+}
+
+func exportMember(m *framing.Member, res *check.Result, toInch float64) export.Member {
+	em := export.Member{
+		ID: m.ID, Mark: m.Mark, Layer: m.Layer, Handle: m.Pos.Handle, Source: m.Pos.String(),
+		Start:   [2]float64{m.Start.X / toInch, m.Start.Y / toInch},
+		End:     [2]float64{m.End.X / toInch, m.End.Y / toInch},
+		StartIn: [2]float64{m.Start.X, m.Start.Y}, EndIn: [2]float64{m.End.X, m.End.Y},
+		LengthIn:    m.LengthIn,
+		SpansIn:     m.Spans(),
+		OverhangsIn: [2]float64{m.OverhangStartIn, m.OverhangEndIn},
+		TribIn:      m.TribIn, SpacingIn: m.SpacingIn,
+		Size: res.Size, Species: res.Species, Grade: res.Grade,
+		Zone:                strings.Join(m.Zones, "+"),
+		Governing:           res.Governing,
+		MaxRatio:            res.MaxRatio,
+		BlockingRowsPerSpan: res.BlockingRowsPerSpan,
+		BlockingAtIn:        res.BlockingAtIn,
+		Status:              res.Status,
+	}
+	if em.Size == "" {
+		em.Size, em.Species, em.Grade = m.Size, m.Species, m.Grade
+	}
+	for _, b := range m.Bearings {
+		em.BearingsAtIn = append(em.BearingsAtIn, b.AtIn)
+	}
+	for _, c := range res.Checks {
+		em.Checks = append(em.Checks, export.Check{Kind: c.Kind, Combo: c.Combo, Actual: c.Actual,
+			Allowable: c.Allowable, Unit: c.Unit, Ratio: c.Ratio, Trace: exportTrace(c.Trace)})
+	}
+	for _, s := range res.BlockingSteps {
+		em.BlockingSteps = append(em.BlockingSteps, export.BlockingStep{RowsPerSpan: s.RowsPerSpan, LuIn: s.LuIn, CL: s.CL, Ratio: s.Ratio})
+	}
+	em.Factors = exportTrace(res.Factors)
+	seen := map[string]bool{}
+	for _, group := range [][]string{m.Messages, res.Messages, res.Info} {
+		for _, msg := range group {
+			if !seen[msg] {
+				seen[msg] = true
+				em.Messages = append(em.Messages, msg)
+			}
+		}
+	}
+	return em
+}
+
+func exportTrace(t []check.TraceItem) []export.TraceItem {
+	var out []export.TraceItem
+	for _, it := range t {
+		out = append(out, export.TraceItem{Name: it.Symbol, Value: it.Value, Unit: it.Unit,
+			Source: it.Ref, Formula: it.Formula, Subst: it.Subst})
+	}
+	return out
+}
+
+// exportMarks builds the framing schedule: one line per mark, in mark
+// order (J1, J2, ... J10), with its member count and worst ratio.
+func exportMarks(members []export.Member) []export.Mark {
+	byMark := map[string]*export.Mark{}
+	var names []string
+	for i := range members {
+		m := &members[i]
+		if m.Mark == "" {
+			continue
+		}
+		mk := byMark[m.Mark]
+		if mk == nil {
+			mk = &export.Mark{Mark: m.Mark, Size: m.Size, Species: m.Species, Grade: m.Grade,
+				Zone: m.Zone, SpacingIn: m.SpacingIn, SpansIn: m.SpansIn,
+				BlockingRowsPerSpan: m.BlockingRowsPerSpan, Status: m.Status}
+			byMark[m.Mark] = mk
+			names = append(names, m.Mark)
+		}
+		mk.Count++
+		if m.MaxRatio > mk.MaxRatio {
+			mk.MaxRatio = m.MaxRatio
+		}
+		if statusRank(m.Status) > statusRank(mk.Status) {
+			mk.Status = m.Status
+		}
+	}
+	sort.Slice(names, func(i, j int) bool { return markLess(names[i], names[j]) })
+	out := make([]export.Mark, 0, len(names))
+	for _, n := range names {
+		out = append(out, *byMark[n])
+	}
+	return out
+}
+
+func statusRank(s string) int {
+	switch s {
+	case check.StatusPass:
+		return 0
+	case check.StatusFail:
+		return 1
+	}
+	return 2
+}
+
+// markLess orders J2 before J10.
+func markLess(a, b string) bool {
+	if len(a) != len(b) {
+		return len(a) < len(b)
+	}
+	return a < b
+}
+
+func exportRow(plan *framing.Plan, row framing.BlockingRow, ids []string, toInch float64) export.BlockingRow {
+	er := export.BlockingRow{ID: row.ID, Run: row.Run, Pieces: row.Pieces, ClearIn: row.ClearIn, Size: row.Size,
+		Start:   [2]float64{row.From.X / toInch, row.From.Y / toInch},
+		End:     [2]float64{row.To.X / toInch, row.To.Y / toInch},
+		StartIn: [2]float64{row.From.X, row.From.Y}, EndIn: [2]float64{row.To.X, row.To.Y},
+		PositionIn: row.AtIn,
+	}
+	ri := runIndex(plan, row.Run)
+	run := plan.Runs[ri]
+	for _, k := range run.Members {
+		er.Members = append(er.Members, ids[k])
+	}
+	// Which span of the run's first member the row falls in, and where
+	// along that span from its first bearing.
+	first := &plan.Members[run.Members[0]]
+	for i := 1; i < len(first.Bearings); i++ {
+		if row.AtIn <= first.Bearings[i].AtIn || i == len(first.Bearings)-1 {
+			er.SpanIndex = i - 1
+			er.PositionIn = row.AtIn - first.Bearings[i-1].AtIn
+			break
+		}
+	}
+	return er
+}
+
+func exportTakeoff(t framing.Takeoff) export.Takeoff {
+	var e export.Takeoff
+	for _, l := range t.Joists {
+		tl := export.TakeoffLine{Size: l.Size + " " + l.Species + " " + l.Grade, OrderLengthFt: float64(l.OrderLengthFt),
+			Count: l.Count, BoardFeet: l.BoardFeet}
+		if l.SpecialOrder {
+			tl.Note = "special order or spliced length (over 24 ft)"
+		}
+		e.Joists = append(e.Joists, tl)
+	}
+	for _, l := range t.Blocking {
+		e.Blocking = append(e.Blocking, export.TakeoffLine{Size: l.Size, Count: l.Pieces, BoardFeet: l.BoardFeet,
+			Note: fmt.Sprintf("full-depth blocking, %s of clear length in all", export.FtIn(l.TotalLengthIn))})
+	}
+	for _, l := range t.Hangers {
+		e.Hangers = append(e.Hangers, export.TakeoffLine{Size: l.Size, Count: l.Count, Note: "face-mount joist hanger at a flush beam"})
+	}
+	e.Totals = export.TakeoffTotals{JoistCount: t.JoistCount, JoistBoardFeet: t.JoistBoardFeet,
+		BlockingPieces: t.BlockingPieces, BlockingBoardFeet: t.BlockingBoardFeet,
+		Hangers: t.HangerCount, BoardFeet: t.TotalBoardFeet}
+	return e
+}
+
+// assumptions lists the code editions, combinations, switches, zones and
+// design values of the run, for the Inputs and Notes sheets.
+func assumptions(o *outcome) export.Assumptions {
+	p := o.project
+	a := export.Assumptions{
+		CodeEditions: []string{
+			"ANSI/AWC NDS 2018, allowable stress design (ASD), with the NDS 2018 Supplement design values",
+			"ASCE 7-16 section 2.4.1 ASD load combinations",
+			"IBC 2018 Table 1604.3 deflection limits",
+		},
+	}
+	for _, c := range o.settings.Combos {
+		a.Combinations = append(a.Combinations, c.Name)
+	}
+	if len(a.Combinations) == 0 {
+		for _, c := range check.DefaultCombos() {
+			a.Combinations = append(a.Combinations, c.Name)
+		}
+	}
+	src := func(key string) string {
+		if p.Given(key) {
+			return "project file"
+		}
+		return "default"
+	}
+	set := func(key, value, unit string) {
+		a.Switches = append(a.Switches, export.Setting{Name: key, Value: value, Unit: unit, Source: src(key)})
+	}
+	set("drawing.units", o.drawing.Units, "")
+	set("drawing.snap_tolerance_in", fmt.Sprint(p.Drawing.SnapToleranceIn), "in")
+	set("drawing.max_wall_thickness_in", fmt.Sprint(p.Drawing.MaxWallThicknessIn), "in")
+	set("drawing.edge_distance_in", fmt.Sprint(p.Drawing.EdgeDistanceIn), "in")
+	set("lumber.species", p.Lumber.Species, "")
+	set("lumber.grade", p.Lumber.Grade, "")
+	set("lumber.size", p.Lumber.Size, "")
+	set("design.top_edge_braced", fmt.Sprint(p.Design.TopEdgeBraced), "")
+	set("design.shear_at_d", fmt.Sprint(p.Design.ShearAtD), "")
+	set("design.wet_service", fmt.Sprint(p.Design.WetService), "")
+	set("design.temperature", p.Design.Temperature, "")
+	set("design.incised", fmt.Sprint(p.Design.Incised), "")
+	set("design.kcr", fmt.Sprint(p.Design.Kcr), "")
+	set("design.combinations", p.Design.Combinations.String(), "")
+	set("design.pattern_live_loads", fmt.Sprint(p.Design.PatternLiveLoads), "")
+	set("loads.default_zone", p.Loads.DefaultZone, "")
+	for _, z := range p.Zones {
+		a.Zones = append(a.Zones, export.Zone{Name: z.Name, Use: z.Use, DeadPsf: z.DeadPsf, LivePsf: z.LivePsf,
+			RoofLivePsf: z.RoofLivePsf, SnowPsf: z.SnowPsf, WindDownPsf: z.WindDownPsf, WindUpPsf: z.WindUpPsf,
+			Ceiling: z.Ceiling, LiveDeflectionLimit: z.LiveDeflectionLimit, TotalDeflectionLimit: z.TotalDeflectionLimit})
+	}
+	seen := map[string]bool{}
+	for k := range o.results {
+		res := &o.results[k]
+		v := res.Values
+		if v.Species == "" {
+			continue
+		}
+		key := v.Species + "|" + v.Grade + "|" + res.Size
+		if seen[key] {
+			continue
+		}
+		seen[key] = true
+		for _, dv := range []struct {
+			name string
+			val  float64
+		}{{"Fb", v.FbPsi}, {"Ft", v.FtPsi}, {"Fv", v.FvPsi}, {"Fc_perp", v.FcPerpPsi}, {"Fc", v.FcPsi}, {"E", v.EPsi}, {"Emin", v.EminPsi}} {
+			a.DesignValues = append(a.DesignValues, export.DesignValue{Species: v.Species, Grade: v.Grade, Size: res.Size,
+				Name: dv.name, Value: dv.val, Unit: "psi", Source: v.Source})
+		}
+	}
+	sort.SliceStable(a.DesignValues, func(i, j int) bool {
+		x, y := a.DesignValues[i], a.DesignValues[j]
+		if x.Species+x.Grade != y.Species+y.Grade {
+			return x.Species+x.Grade < y.Species+y.Grade
+		}
+		return x.Size < y.Size
+	})
+	a.Notes = append(a.Notes,
+		"Members are sawn-lumber joists under uniform load on their tributary width; spans are centre-to-centre of bearings (DOMAIN conventions).",
+		"The top edge is braced by the sheathing when design.top_edge_braced is true; the bottom edge only at bearings, blocking rows and by a ceiling fastened directly to the joists where a zone says so.",
+		"Blocking rows are decided per run: every member of a run is checked with the most rows any of its members needs.",
+		"Members crossing load-zone edges take the envelope of the zones' loads and the stricter deflection limits.",
+	)
+	if p.Design.AddSelfWeight {
+		a.Notes = append(a.Notes, "Joist self-weight is added to D at 35 lb/ft3 (NDS 2018 Supplement Table 1B basis).")
+	}
+	for _, used := range p.DefaultsUsed() {
+		a.Notes = append(a.Notes, "Default used: "+used)
+	}
+	return a
+}
