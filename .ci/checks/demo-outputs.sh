@@ -1,0 +1,22 @@
+#!/usr/bin/env bash
+# Runs the README's demo command and reads what it wrote with independent
+# readers: the annotated DXF (and overlay) with ezdxf, the schedule with
+# openpyxl, both compared against results.json.
+set -euo pipefail
+cd "$(dirname "$0")/../.."
+PY="${PY:-/usr/bin/python3}"
+out=$(mktemp -d)
+trap 'rm -rf "$out"' EXIT
+go build -o "$out/framecheck" ./cmd/framecheck
+set +e
+"$out/framecheck" demo -o "$out/demo" >"$out/stdout.txt" 2>"$out/stderr.txt"
+code=$?
+set -e
+# The demo plan has members that fail on purpose: exit 1 is expected.
+if [ "$code" -ne 1 ]; then
+  echo "framecheck demo exited $code, want 1 (some members fail by design)" >&2
+  cat "$out/stderr.txt" >&2
+  exit 1
+fi
+"$out/framecheck" check "$out/demo/plan.dxf" -p "$out/demo/framecheck.toml" -o "$out/overlay" --overlay >/dev/null 2>&1 || true
+"$PY" .ci/checks/demo_check.py "$out/demo" "$out/overlay"
