@@ -75,7 +75,8 @@ func (e *engine) intervals(continuous bool, pts []float64) []interval {
 	if len(e.spanSegs) > 1 {
 		inner = LeGeneral
 	}
-	out := make([]interval, 0, len(pts)+1)
+	out := e.ivBuf[:0]
+	defer func() { e.ivBuf = out[:0] }()
 	if pts[0] > 0 {
 		out = append(out, mk(0, pts[0], LeCantilever))
 	}
@@ -142,7 +143,11 @@ func (e *engine) bendingResult(kind string, ev edgeEval) CheckResult {
 	c := &e.cases[ev.ci]
 	fb := ev.mLbIn / e.sec.SIn3
 	fbAdj := ev.fbStar * ev.cl
-	t := e.arena.tracer(16)
+	n := 13
+	if ev.iv.braced {
+		n = 7
+	}
+	t := e.arena.tracer(n)
 	t.add("M", ev.mLbIn, "lb-in", "largest moment compressing this edge", "", "analysis ("+e.caseLabel(c)+")")
 	t.add("S", e.sec.SIn3, "in^3", "b d^2 / 6", t.f("%s(%s)^2 / 6", e.sec.BIn, e.sec.DIn), "NDS 2018 Supplement Table 1B")
 	t.add("fb", fb, "psi", "M / S", t.f("%s / %s", ev.mLbIn, e.sec.SIn3), "NDS 2018 3.3.2")

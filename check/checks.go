@@ -52,7 +52,7 @@ func (e *engine) shearCheck() CheckResult {
 	}
 	c := &e.cases[bestCI]
 	fv := 1.5 * bestV / e.sec.AreaIn2
-	t := e.arena.tracer(16)
+	t := e.arena.tracer(5)
 	where := "at the centre-line of bearing " + fmt.Sprint(bestJ+1)
 	if e.s.ShearAtD {
 		where = "at d from the face of bearing " + fmt.Sprint(bestJ+1)
@@ -97,7 +97,7 @@ func (e *engine) bearingCheck() (CheckResult, []string) {
 	}
 	b := e.m.Bearings[bestJ]
 	fc := bestR / (e.sec.BIn * b.LengthIn)
-	t := e.arena.tracer(16)
+	t := e.arena.tracer(6)
 	t.add("R", bestR, "lb", fmt.Sprintf("largest reaction at bearing %d", bestJ+1), "", "analysis ("+e.caseLabel(&e.cases[bestCI])+")")
 	t.add("lb", b.LengthIn, "in", "bearing length", "", "")
 	t.add("fc_perp", fc, "psi", "R / (b lb)", t.f("%s / (%s(%s))", bestR, e.sec.BIn, b.LengthIn), "NDS 2018 3.10.2")
@@ -214,7 +214,7 @@ func (e *engine) deflectionChecks() []CheckResult {
 }
 
 func (e *engine) deflResult(kind string, d deflWorst) CheckResult {
-	t := e.arena.tracer(16)
+	t := e.arena.tracer(5)
 	where := e.segLabel(d.seg)
 	t.add("delta", d.deflIn, "in", "largest deflection of "+where, "", "analysis, E' I ("+d.name+")")
 	t.add("E'", e.eAdj, "psi", "E CM Ct Ci", t.f("%s(%s)(%s)(%s)", e.dv.EPsi, e.cm.E, e.ct.E, e.ci.E), "NDS 2018 Table 4.3.1")

@@ -5,6 +5,7 @@ import (
 	"math"
 	"strconv"
 	"strings"
+	"sync"
 
 	"framecheck/check/beam"
 )
@@ -40,7 +41,11 @@ type engine struct {
 
 	cases []strengthCase
 	mMax  float64
-	arena traceArena // largest |M| of any case, for "is this edge in compression" tolerances
+	arena traceArena
+
+	wAll  []float64  // backing store of the cases' segment loads
+	ivBuf []interval // reused by intervals
+	sup   []float64  // backing store of bm.SupportsAtIn // largest |M| of any case, for "is this edge in compression" tolerances
 }
 
 // strengthCase is one combination case (one alternative, one wind
@@ -55,11 +60,25 @@ type strengthCase struct {
 
 var defaultCombos = DefaultCombos()
 
+// enginePool recycles engines, whose solved load cases are the bulk of a
+// check's memory. An engine goes back to the pool once its Result is
+// built; a Result shares no memory with its engine.
+var enginePool = sync.Pool{New: func() any { return new(engine) }}
+
+// release returns e to the pool.
+func (e *engine) release() {
+	if e != nil {
+		e.m, e.s = Member{}, Settings{}
+		enginePool.Put(e)
+	}
+}
+
 // newEngine validates m and s, looks up the material and builds the
 // analysis. On error the returned engine holds what was found so far (nil
 // when nothing).
 func newEngine(m Member, s Settings) (*engine, error) {
-	e := &engine{m: m, s: s}
+	e := enginePool.Get().(*engine)
+	*e = engine{m: m, s: s, cases: e.cases[:0], spanSegs: e.spanSegs[:0], wAll: e.wAll[:0], sup: e.sup[:0], ivBuf: e.ivBuf[:0]}
 	if err := s.validate(); err != nil {
 		return e, err
 	}
@@ -117,10 +136,11 @@ func (e *engine) factors() {
 func (e *engine) model() {
 	bs := e.m.Bearings
 	e.x0 = bs[0].AtIn - e.m.OverhangStartIn
-	sup := make([]float64, len(bs))
-	for i, b := range bs {
-		sup[i] = b.AtIn - e.x0
+	sup := e.sup[:0]
+	for _, b := range bs {
+		sup = append(sup, b.AtIn-e.x0)
 	}
+	e.sup = sup
 	length := bs[len(bs)-1].AtIn + e.m.OverhangEndIn - e.x0
 	e.bm = beam.Beam{LengthIn: length, SupportsAtIn: sup, EILbIn2: e.eAdj * e.sec.IIn4}
 	e.segs = e.bm.Segments()
@@ -214,8 +234,17 @@ func (e *engine) solveStrength() error {
 			n += len(pats)
 		}
 	}
-	e.cases = make([]strengthCase, n)
-	wAll := make([]float64, n*len(e.segs))
+	if cap(e.cases) >= n {
+		e.cases = e.cases[:n]
+	} else {
+		e.cases = make([]strengthCase, n)
+	}
+	if cap(e.wAll) >= n*len(e.segs) {
+		e.wAll = e.wAll[:n*len(e.segs)]
+	} else {
+		e.wAll = make([]float64, n*len(e.segs))
+	}
+	wAll := e.wAll
 	i := 0
 	for _, sp := range specs {
 		ps := pats
@@ -278,9 +307,28 @@ func (e *engine) caseSpec(f factorSet, dir float64) (caseSpec, bool) {
 	}, true
 }
 
+type caseNameKey struct {
+	f       factorSet
+	dir     float64
+	present [numLoadTypes]bool
+}
+
+// caseNames caches caseName: a run meets the same few cases again and again.
+var caseNames sync.Map
+
 // caseName writes a factor set as "D+0.75L+0.75S" or "0.6D+0.6W(up)",
 // leaving out loads that are zero.
 func caseName(f factorSet, dir float64, present [numLoadTypes]bool) string {
+	k := caseNameKey{f, dir, present}
+	if v, ok := caseNames.Load(k); ok {
+		return v.(string)
+	}
+	s := formatCaseName(f, dir, present)
+	caseNames.Store(k, s)
+	return s
+}
+
+func formatCaseName(f factorSet, dir float64, present [numLoadTypes]bool) string {
 	var b strings.Builder
 	for t := LoadType(0); t < numLoadTypes; t++ {
 		if f[t] == 0 || !present[t] {

@@ -14,6 +14,7 @@ import (
 // with a message, never a panic.
 func CheckMember(m Member, s Settings) Result {
 	e, err := newEngine(m, s)
+	defer e.release()
 	if err != nil {
 		return errorResult(m, e, err)
 	}
@@ -28,6 +29,7 @@ func CheckMember(m Member, s Settings) Result {
 // gets.
 func CheckWithRows(m Member, s Settings, rowsPerSpan int) Result {
 	e, err := newEngine(m, s)
+	defer e.release()
 	if err != nil {
 		return errorResult(m, e, err)
 	}
@@ -75,6 +77,7 @@ func (e *engine) solveBlocking() (int, []BlockingStep) {
 // result runs every check with n added rows per span.
 func (e *engine) result(n int) Result {
 	r := e.baseResult()
+	r.Checks = make([]CheckResult, 0, 6)
 	rows, _ := e.spanRows(n)
 	if n > 0 {
 		r.BlockingAtIn = rows

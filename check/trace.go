@@ -4,31 +4,38 @@ import (
 	"math"
 	"strconv"
 	"strings"
+	"unsafe"
 )
 
 // tracer collects TraceItems and formats numbers for them.
 type tracer struct {
 	items []TraceItem
-	buf   []byte
+	text  *textArena
+}
+
+// textArena holds the text of the substitution strings of one result in
+// few allocations: each string is appended to buf and handed out as a
+// string sharing buf's bytes. Bytes once handed out are never written
+// again (buf only grows, and a full buf is replaced, not reused), which is
+// what makes the unsafe.String view immutable as Go requires.
+type textArena struct {
+	buf []byte
 }
 
 // traceArena hands out trace slices from one allocation per result.
 type traceArena struct {
 	items []TraceItem
-	buf   []byte
+	text  textArena
 }
 
 // tracer returns a tracer whose items take up to n entries of the arena.
 func (a *traceArena) tracer(n int) tracer {
 	if cap(a.items)-len(a.items) < n {
-		a.items = make([]TraceItem, 0, max(96, n))
-	}
-	if a.buf == nil {
-		a.buf = make([]byte, 0, 128)
+		a.items = make([]TraceItem, 0, max(48, n))
 	}
 	l := len(a.items)
 	a.items = a.items[:l+n]
-	return tracer{items: a.items[l : l : l+n], buf: a.buf}
+	return tracer{items: a.items[l : l : l+n], text: &a.text}
 }
 
 func (t *tracer) add(sym string, v float64, unit, formula, subst, ref string) {
@@ -40,27 +47,42 @@ func (t *tracer) add(sym string, v float64, unit, formula, subst, ref string) {
 
 // f replaces each %s in format with the next value, printed as num does.
 func (t *tracer) f(format string, vals ...float64) string {
-	if t.buf == nil {
-		t.buf = make([]byte, 0, 128)
+	if t.text == nil {
+		t.text = &textArena{}
 	}
-	t.buf = t.buf[:0]
+	ta := t.text
+	if cap(ta.buf)-len(ta.buf) < len(format)+24*len(vals) {
+		ta.buf = make([]byte, 0, max(1024, 2*(len(format)+24*len(vals))))
+	}
+	start := len(ta.buf)
+	b := ta.buf
 	i := 0
 	for {
 		j := strings.Index(format, "%s")
 		if j < 0 || i >= len(vals) {
-			t.buf = append(t.buf, format...)
+			b = append(b, format...)
 			break
 		}
-		t.buf = append(t.buf, format[:j]...)
-		t.buf = appendNum(t.buf, vals[i])
+		b = append(b, format[:j]...)
+		b = appendNum(b, vals[i])
 		i++
 		format = format[j+2:]
 	}
-	return string(t.buf)
+	if cap(b) != cap(ta.buf) { // outgrew the estimate: keep the copy, leave buf alone
+		return string(b[start:])
+	}
+	ta.buf = b
+	if len(b) == start {
+		return ""
+	}
+	return unsafe.String(&b[start], len(b)-start)
 }
 
 // appendNum prints v with about four significant figures: whole numbers
 // from 1000 up, then at most 1, 2 or 3 decimals, trailing zeros dropped.
+// It rounds half away from zero through an integer, which is exact for the
+// magnitudes a joist check meets (below 1e15); larger or non-finite values
+// go through strconv.
 func appendNum(b []byte, v float64) []byte {
 	a := math.Abs(v)
 	prec := 3
@@ -72,20 +94,38 @@ func appendNum(b []byte, v float64) []byte {
 	case a >= 10:
 		prec = 2
 	}
-	n := len(b)
-	b = strconv.AppendFloat(b, v, 'f', prec, 64)
+	if !(a < 1e15) {
+		return strconv.AppendFloat(b, v, 'g', 6, 64)
+	}
+	scale := [4]float64{1, 10, 100, 1000}[prec]
+	n := int64(math.Floor(a*scale + 0.5))
+	if n == 0 {
+		return append(b, '0')
+	}
+	if v < 0 {
+		b = append(b, '-')
+	}
+	var digits [24]byte
+	i := len(digits)
+	for d := 0; n > 0 || d <= prec; d++ {
+		if d == prec && prec > 0 {
+			i--
+			digits[i] = '.'
+		}
+		i--
+		digits[i] = byte('0' + n%10)
+		n /= 10
+	}
+	out := digits[i:]
 	if prec > 0 {
-		for b[len(b)-1] == '0' {
-			b = b[:len(b)-1]
+		for out[len(out)-1] == '0' {
+			out = out[:len(out)-1]
 		}
-		if b[len(b)-1] == '.' {
-			b = b[:len(b)-1]
+		if out[len(out)-1] == '.' {
+			out = out[:len(out)-1]
 		}
 	}
-	if string(b[n:]) == "-0" {
-		b = append(b[:n], '0')
-	}
-	return b
+	return append(b, out...)
 }
 
 // num formats v as appendNum does.
