@@ -1,8 +1,10 @@
 package framing
 
 import (
+	"cmp"
 	"fmt"
 	"math"
+	"slices"
 	"sort"
 
 	"framecheck/dxfimport"
@@ -105,11 +107,11 @@ func (g *grouper) supportHits(k int, minSin float64, hits []hit) []hit {
 		}
 		hits = append(hits, hit{t: t, sup: s, sin: sin, direct: de <= tol})
 	})
-	sort.Slice(hits, func(i, j int) bool {
-		if hits[i].t != hits[j].t {
-			return hits[i].t < hits[j].t
+	slices.SortFunc(hits, func(a, b hit) int {
+		if c := cmp.Compare(a.t, b.t); c != 0 {
+			return c
 		}
-		return hits[i].sup < hits[j].sup
+		return a.sup - b.sup
 	})
 	return hits
 }
@@ -126,7 +128,8 @@ func (g *grouper) parallelSupports(a, b int) bool {
 // bearingsFrom turns sorted hits into bearings, merging double-line walls,
 // and returns each bearing's support direction for run matching.
 func (g *grouper) bearingsFrom(hits []hit, merged map[[2]int]bool) ([]Bearing, []Point) {
-	var direct, outer []hit
+	direct, outer := g.direct[:0], g.outer[:0]
+	defer func() { g.direct, g.outer = direct, outer }() // keep the buffers
 	for _, h := range hits {
 		if h.direct {
 			if n := len(direct); n > 0 && (h.t-direct[n-1].t)*h.sin < sameLineIn {
@@ -145,8 +148,8 @@ func (g *grouper) bearingsFrom(hits []hit, merged map[[2]int]bool) ([]Bearing, [
 		sep := math.Abs(b.t-a.t) * a.sin
 		return sep >= sameLineIn && sep <= wall+1e-9 && g.parallelSupports(a.sup, b.sup)
 	}
-	var bs []Bearing
-	var dirs []Point
+	bs := make([]Bearing, 0, len(direct))
+	dirs := make([]Point, 0, len(direct))
 	single := func(h hit) {
 		sp := g.opt.Supports[g.sups[h.sup].spec]
 		bs = append(bs, Bearing{AtIn: h.t, LengthIn: sp.BearingIn, Kind: sp.Kind, Pos: g.sups[h.sup].pos})

@@ -70,6 +70,8 @@ type grouper struct {
 
 	supIdx *segIndex
 	memIdx *segIndex
+
+	direct, outer []hit // scratch for bearingsFrom
 }
 
 type dirGroup struct {

@@ -48,11 +48,11 @@ func (p *Plan) PlaceRows(run int, atIn []float64) []BlockingRow {
 			if len(m.Bearings) > 0 {
 				t = at - refB + m.Bearings[0].AtIn
 			}
-			q := lerp(m.Start, p.dirs[k], t)
+			q := lerp(m.Start, p.dir(k), t)
 			if i == 0 {
 				row.From = q
 			} else {
-				gap := math.Abs(p.across[k] - p.across[r.Members[i-1]])
+				gap := math.Abs(p.acrossOf(k, ref) - p.acrossOf(r.Members[i-1], ref))
 				row.ClearIn = append(row.ClearIn, math.Max(0, gap-bIn))
 			}
 			row.To = q
@@ -61,4 +61,23 @@ func (p *Plan) PlaceRows(run int, atIn []float64) []BlockingRow {
 		rows = append(rows, row)
 	}
 	return rows
+}
+
+// dir returns member k's unit direction Start->End, from Group's record or,
+// for a Plan built by hand, from its end points.
+func (p *Plan) dir(k int) Point {
+	if len(p.dirs) == len(p.Members) {
+		return p.dirs[k]
+	}
+	return unit(sub(p.Members[k].End, p.Members[k].Start))
+}
+
+// acrossOf returns member k's offset across its direction group, from
+// Group's record or, for a Plan built by hand, along the normal of ref.
+func (p *Plan) acrossOf(k int, ref *Member) float64 {
+	if len(p.across) == len(p.Members) {
+		return p.across[k]
+	}
+	m := &p.Members[k]
+	return dot(mid(m.Start, m.End), rot90(unit(sub(ref.End, ref.Start))))
 }

@@ -112,3 +112,16 @@ func TestAssignMarks(t *testing.T) {
 		t.Errorf("after resizing M2: %s %s, want J2 J3", pl.Members[1].Mark, pl.Members[2].Mark)
 	}
 }
+
+func TestPlaceRowsOnHandBuiltPlan(t *testing.T) {
+	// a Plan not made by Group (as another package's test might build it)
+	p := &Plan{Runs: []Run{{ID: "R1", Members: []int{0, 1, 2}}}}
+	for _, x := range []float64{0, 24, 48} {
+		p.Members = append(p.Members, Member{Start: Point{X: x}, End: Point{X: x, Y: 120}, LengthIn: 120, Size: "2x8",
+			Bearings: []Bearing{{AtIn: 0}, {AtIn: 120}}})
+	}
+	rows := p.PlaceRows(0, []float64{60})
+	if len(rows) != 1 || rows[0].Pieces != 2 || !near(rows[0].ClearIn[0], 22.5, 1e-9) || !near(rows[0].To.Y, 60, 1e-9) {
+		t.Errorf("rows %+v, want 2 pieces of 24 - 1.5 = 22.5 in at y=60", rows)
+	}
+}
