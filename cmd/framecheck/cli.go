@@ -8,6 +8,7 @@ import (
 	"io/fs"
 	"os"
 	"strings"
+	"unicode/utf8"
 )
 
 // cmdFlags is a subcommand's flag set with its usage text.
@@ -146,4 +147,34 @@ Edit it to suit the plan, then pass it to check with -p.`)
 	}
 	fmt.Fprintf(stdout, "wrote %s\n", *out)
 	return exitOK
+}
+
+// writeTable writes rows as columns separated by two spaces, padded to the
+// widest cell; right[i] right-aligns column i. Trailing spaces are
+// trimmed.
+func writeTable(w io.Writer, rows [][]string, right []bool) {
+	var width []int
+	for _, r := range rows {
+		for i, c := range r {
+			if i >= len(width) {
+				width = append(width, 0)
+			}
+			width[i] = max(width[i], utf8.RuneCountInString(c))
+		}
+	}
+	for _, r := range rows {
+		var b strings.Builder
+		for i, c := range r {
+			if i > 0 {
+				b.WriteString("  ")
+			}
+			pad := strings.Repeat(" ", width[i]-utf8.RuneCountInString(c))
+			if i < len(right) && right[i] {
+				b.WriteString(pad + c)
+			} else {
+				b.WriteString(c + pad)
+			}
+		}
+		fmt.Fprintln(w, strings.TrimRight(b.String(), " "))
+	}
 }

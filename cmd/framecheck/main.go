@@ -139,6 +139,7 @@ type command struct {
 // commands lists the subcommands that are available, in the order the
 // usage message shows them.
 var commands = []command{
+	{"layers", "list a plan's layers, entity counts and roles", runLayers},
 	{"init", "write a commented starter project file", runInit},
 }
 

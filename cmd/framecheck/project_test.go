@@ -366,3 +366,20 @@ func FuzzLoadProject(f *testing.F) {
 		}
 	})
 }
+
+// TestDemoProject loads the demo's project file: the key names are an
+// interface, and the demo uses most of them.
+func TestDemoProject(t *testing.T) {
+	p, err := LoadProject("../../samples/demo/framecheck.toml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	edge := p.Zone("roof-edge")
+	// IBC 2018 Table 1604.3, roof member with no ceiling: L/180, L/120.
+	if edge == nil || edge.WindUpPsf != 75 || edge.LivePsf != 0 || edge.LiveDeflectionLimit != 180 || edge.TotalDeflectionLimit != 120 {
+		t.Errorf("ROOF-EDGE zone %+v", edge)
+	}
+	if len(p.Supports) != 3 || p.LayerRole("BEAM-DROPPED") != "support:dropped-beam" {
+		t.Errorf("supports %+v", p.Supports)
+	}
+}
