@@ -18,14 +18,14 @@ type block struct {
 
 // emit sends an entity to the block being read, or places it in model
 // space.
-func (r *reader) emit(l local) {
+func (r *reader) emit(l *local) {
 	if r.cur != nil {
-		r.cur.ents = append(r.cur.ents, l)
+		r.cur.ents = append(r.cur.ents, *l)
 		return
 	}
 	if l.ins != nil {
 		if r.blocks[strings.ToUpper(l.ins.name)] == nil && !r.finishing {
-			r.deferred = append(r.deferred, l)
+			r.deferred = append(r.deferred, *l)
 			return
 		}
 		r.emitInsert(l)
@@ -37,11 +37,11 @@ func (r *reader) emit(l local) {
 	}
 	k := r.d.ToInch
 	r.placeWarn(&l.e, &l.e, affine{A: k, E: k})
-	r.add(l.e)
+	r.add(&l.e)
 }
 
 // add appends a placed entity unless a coordinate overflowed.
-func (r *reader) add(e Entity) {
+func (r *reader) add(e *Entity) {
 	for _, p := range e.Points {
 		if math.IsInf(p.X, 0) || math.IsInf(p.Y, 0) || math.IsNaN(p.X) || math.IsNaN(p.Y) {
 			r.warnOnce("overflow", e.Pos, "DXF112", SevError,
@@ -119,7 +119,7 @@ func (r *reader) count(b *block) int {
 }
 
 // emitInsert expands a model-space INSERT into world entities.
-func (r *reader) emitInsert(l local) {
+func (r *reader) emitInsert(l *local) {
 	in := l.ins
 	b := r.blocks[strings.ToUpper(in.name)]
 	if b != nil {
@@ -204,7 +204,7 @@ func (r *reader) expand(in *insertRef, pos, from Pos, m affine, parentLayer stri
 					return
 				}
 				e := src.e
-				e.Points = make([]Point, len(src.e.Points))
+				e.Points = r.newPoints(len(src.e.Points))
 				if src.e.Bulges != nil {
 					e.Bulges = make([]float64, len(src.e.Bulges))
 				}
@@ -213,7 +213,7 @@ func (r *reader) expand(in *insertRef, pos, from Pos, m affine, parentLayer stri
 					e.Pos.Layer = layer
 				}
 				e.From = from
-				r.add(e)
+				r.add(&e)
 			}
 		}
 	}
@@ -278,7 +278,7 @@ type entityStore struct {
 	n      int
 }
 
-func (s *entityStore) add(e Entity) {
+func (s *entityStore) add(e *Entity) {
 	k := len(s.chunks) - 1
 	if k < 0 || len(s.chunks[k]) == cap(s.chunks[k]) {
 		size := 16
@@ -288,7 +288,7 @@ func (s *entityStore) add(e Entity) {
 		s.chunks = append(s.chunks, make([]Entity, 0, size))
 		k++
 	}
-	s.chunks[k] = append(s.chunks[k], e)
+	s.chunks[k] = append(s.chunks[k], *e)
 	s.n++
 }
 

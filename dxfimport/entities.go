@@ -111,7 +111,7 @@ func (r *reader) entity(g *group) error {
 	if err != nil {
 		return err
 	}
-	r.emit(l)
+	r.emit(&l)
 	return nil
 }
 
@@ -137,7 +137,7 @@ func (r *reader) coord(g *group, t rtag, base int, p *Point, z *float64) (bool, 
 
 func (r *reader) line(g *group, l *local) error {
 	l.e.Kind = KindLine
-	l.e.Points = make([]Point, 2)
+	l.e.Points = r.newPoints(2)
 	for _, t := range g.tags {
 		if _, err := r.coord(g, t, 10, &l.e.Points[0], nil); err != nil {
 			return err
@@ -151,7 +151,7 @@ func (r *reader) line(g *group, l *local) error {
 
 func (r *reader) point(g *group, l *local) error {
 	l.e.Kind = KindPoint
-	l.e.Points = make([]Point, 1)
+	l.e.Points = r.newPoints(1)
 	for _, t := range g.tags {
 		if _, err := r.coord(g, t, 10, &l.e.Points[0], nil); err != nil {
 			return err
@@ -165,7 +165,7 @@ func (r *reader) circle(g *group, l *local, c common) error {
 	if g.typ == "ARC" {
 		l.e.Kind = KindArc
 	}
-	l.e.Points = make([]Point, 1)
+	l.e.Points = r.newPoints(1)
 	var z float64
 	for _, t := range g.tags {
 		ok, err := r.coord(g, t, 10, &l.e.Points[0], &z)
@@ -193,7 +193,7 @@ func (r *reader) circle(g *group, l *local, c common) error {
 
 func (r *reader) text(g *group, l *local, c common) error {
 	l.e.Kind = KindText
-	l.e.Points = make([]Point, 1)
+	l.e.Points = r.newPoints(1)
 	var z float64
 	for _, t := range g.tags {
 		ok, err := r.coord(g, t, 10, &l.e.Points[0], &z)
@@ -224,7 +224,7 @@ func (r *reader) text(g *group, l *local, c common) error {
 // the 3 chunks followed by the 1 pair.
 func (r *reader) mtext(g *group, l *local, c common) error {
 	l.e.Kind = KindMText
-	l.e.Points = make([]Point, 1)
+	l.e.Points = r.newPoints(1)
 	var dir Point
 	hasDir := false
 	var text []byte
@@ -393,7 +393,7 @@ func (r *reader) closePoly() {
 	l := *r.poly
 	r.poly = nil
 	r.placeWarn(&l.e, &l.e, ocsMap(r.polyN, r.polyElev))
-	r.emit(l)
+	r.emit(&l)
 }
 
 // endEntity closes a POLYLINE left open by a missing SEQEND.

@@ -1,6 +1,7 @@
 package dxfimport
 
 import (
+	"bytes"
 	"io"
 	"strings"
 )
@@ -37,7 +38,7 @@ func (r *reader) readGroup() (*group, error) {
 		err := r.next()
 		if err == io.EOF {
 			return g, &ParseError{File: r.d.File, Line: max(r.tr.start, 1), Code: -1,
-				Err: wrapf(ErrTruncated, "the file ends inside %s (line %d)", g.typ, g.line)}
+				Err: wrapf(ErrTruncated, "the file ends inside 0/%s (line %d)", g.typ, g.line)}
 		}
 		if err != nil {
 			return g, err
@@ -50,7 +51,7 @@ func (r *reader) readGroup() (*group, error) {
 		g.arena = append(g.arena, r.tr.value...)
 		g.tags = append(g.tags, rtag{code: r.tr.code, line: r.tr.start, off: off, end: len(g.arena)})
 		if r.tr.code == 5 && g.handle == "" {
-			g.handle = strings.TrimSpace(string(r.tr.value))
+			g.handle = r.slab.str(bytes.TrimSpace(r.tr.value))
 		}
 	}
 }
@@ -177,4 +178,42 @@ func (r *reader) readEntities(start int) error {
 			return r.eofErr(err, "section ENTITIES", start)
 		}
 	}
+}
+
+// slab hands out small points slices and strings cut from larger blocks,
+// so that reading an entity costs no allocation of its own for them.
+type slab struct {
+	pts []Point
+	sb  strings.Builder
+}
+
+// newPoints returns n zero points with capacity n.
+func (r *reader) newPoints(n int) []Point {
+	s := &r.slab
+	if n > 64 {
+		return make([]Point, n)
+	}
+	if len(s.pts)+n > cap(s.pts) {
+		s.pts = make([]Point, 0, 2048)
+	}
+	k := len(s.pts)
+	s.pts = s.pts[:k+n]
+	return s.pts[k : k+n : k+n]
+}
+
+// str returns b as a string. The bytes go to an append-only builder: the
+// strings already handed out never change when it grows.
+func (s *slab) str(b []byte) string {
+	if len(b) == 0 {
+		return ""
+	}
+	if s.sb.Len()+len(b) > 16<<10 {
+		s.sb = strings.Builder{}
+	}
+	if s.sb.Cap() == 0 {
+		s.sb.Grow(16 << 10)
+	}
+	k := s.sb.Len()
+	s.sb.Write(b)
+	return s.sb.String()[k:]
 }

@@ -100,6 +100,7 @@ type reader struct {
 	deferred  []local // model-space inserts of blocks not yet defined
 	finishing bool
 	ents      entityStore
+	slab      slab
 	work      int  // block copies placed so far
 	stop      bool // the entity limit was hit: expand no more
 	warned    map[string]bool
@@ -386,8 +387,8 @@ func (r *reader) finish() {
 		r.closePoly()
 	}
 	r.finishing = true
-	for _, l := range r.deferred {
-		r.emitInsert(l)
+	for i := range r.deferred {
+		r.emitInsert(&r.deferred[i])
 	}
 	r.deferred = nil
 	d.Entities = r.ents.slice()
