@@ -35,13 +35,8 @@ func (f *dxfFacts) modern() bool { return f.Version > "AC1009" }
 // handles reports whether new records and entities need handles.
 func (f *dxfFacts) handles() bool { return f.modern() || f.HandSeed != "" }
 
-// scanDXF reads path once and gathers dxfFacts.
-func scanDXF(path string) (*dxfFacts, error) {
-	in, err := os.Open(path)
-	if err != nil {
-		return nil, err
-	}
-	defer in.Close()
+// scanDXF reads the drawing once and gathers dxfFacts; path names it in errors.
+func scanDXF(in io.Reader, path string) (*dxfFacts, error) {
 	facts := &dxfFacts{Layers: map[string]bool{}, EOL: "\n"}
 	pr := newPairReader(in, path)
 	var ctx dxfContext
@@ -161,15 +156,18 @@ func Annotate(inputPath, outputPath string, m Markup) error {
 	if err := m.validate(); err != nil {
 		return fmt.Errorf("export: %s: %w", outputPath, err)
 	}
-	facts, err := scanDXF(inputPath)
-	if err != nil {
-		return fmt.Errorf("export: %w", err)
-	}
 	in, err := os.Open(inputPath)
 	if err != nil {
 		return fmt.Errorf("export: %w", err)
 	}
 	defer in.Close()
+	facts, err := scanDXF(in, inputPath)
+	if err != nil {
+		return fmt.Errorf("export: %w", err)
+	}
+	if _, err := in.Seek(0, io.SeekStart); err != nil {
+		return fmt.Errorf("export: %w", err)
+	}
 	return writeAtomic(outputPath, func(w *bufio.Writer) error {
 		return copyAnnotated(newPairReader(in, inputPath), w, facts, &m)
 	})

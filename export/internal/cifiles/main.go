@@ -59,6 +59,14 @@ func run(args []string, stdout, stderr io.Writer) int {
 }
 
 func write(td, out string, stdout io.Writer) error {
+	// expect.json names files absolutely, so the checks can run anywhere.
+	td, err := filepath.Abs(td)
+	if err != nil {
+		return err
+	}
+	if out, err = filepath.Abs(out); err != nil {
+		return err
+	}
 	data, err := os.ReadFile(filepath.Join(td, "results.json"))
 	if err != nil {
 		return err

@@ -1,0 +1,79 @@
+package export
+
+import (
+	"bufio"
+	"bytes"
+	"errors"
+	"io"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+)
+
+// annotateBytes runs both passes of Annotate on in, in memory.
+func annotateBytes(in []byte, m *Markup) ([]byte, error) {
+	facts, err := scanDXF(bytes.NewReader(in), "fuzz.dxf")
+	if err != nil {
+		return nil, err
+	}
+	var out bytes.Buffer
+	w := bufio.NewWriter(&out)
+	if err := copyAnnotated(newPairReader(bytes.NewReader(in), "fuzz.dxf"), w, facts, m); err != nil {
+		return nil, err
+	}
+	if err := w.Flush(); err != nil {
+		return nil, err
+	}
+	return out.Bytes(), nil
+}
+
+// FuzzAnnotate: never panics; every error is a *DXFError with Line >= 0;
+// when it succeeds, the output reads to EOF and holds our markup.
+func FuzzAnnotate(f *testing.F) {
+	for _, name := range []string{"plan_r12.dxf", "plan_r2000.dxf", "plan_min_r12.dxf"} {
+		b, err := os.ReadFile(filepath.Join("testdata", name))
+		if err != nil {
+			f.Fatal(err)
+		}
+		f.Add(b)
+	}
+	f.Add([]byte("  0\nEOF\n"))
+	f.Add([]byte("  0\nSECTION\n  2\nHEADER\n  9\n$ACADVER\n  1\nAC1015\n  0\nENDSEC\n  0\nEOF\n"))
+	m := MarkupFromResults(&Results{Members: []Member{
+		{ID: "M1", Start: [2]float64{0, 0}, End: [2]float64{100, 0}, Status: StatusFail, MaxRatio: 1.2},
+	}}, 1)
+	f.Fuzz(func(t *testing.T, in []byte) {
+		out, err := annotateBytes(in, &m)
+		if err != nil {
+			var de *DXFError
+			if !errors.As(err, &de) || de.Line < 0 {
+				t.Fatalf("error %v (%T) is not a *DXFError", err, err)
+			}
+			return
+		}
+		pr := newPairReader(bytes.NewReader(out), "out.dxf")
+		var ctx dxfContext
+		ours := 0
+		for {
+			p, err := pr.next()
+			if err == io.EOF {
+				t.Fatal("output has no EOF")
+			}
+			if err != nil {
+				t.Fatalf("output unreadable: %v", err)
+			}
+			ctx.step(p)
+			if p.Code == 0 && strings.EqualFold(p.Value, "EOF") {
+				break
+			}
+			if p.Code == 8 && strings.HasPrefix(p.Value, "FC-") && ctx.Section == "ENTITIES" {
+				ours++
+			}
+		}
+		// The input may hold FC- entities of its own; ours are at least 2.
+		if ours < markupEntityCount(&m) {
+			t.Fatalf("%d markup entities in ENTITIES, want at least %d", ours, markupEntityCount(&m))
+		}
+	})
+}
