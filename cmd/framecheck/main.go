@@ -140,6 +140,7 @@ type command struct {
 // usage message shows them.
 var commands = []command{
 	{"layers", "list a plan's layers, entity counts and roles", runLayers},
+	{"member", "check one joist given by flags and print the calculation", runMember},
 	{"init", "write a commented starter project file", runInit},
 }
 

@@ -1,0 +1,141 @@
+package main
+
+import (
+	"math"
+	"reflect"
+	"strings"
+	"testing"
+
+	"framecheck/check"
+)
+
+func TestParseLength(t *testing.T) {
+	for _, c := range []struct {
+		in   string
+		want float64 // inches; 1 in = 25.4 mm exactly (NIST SP 811)
+	}{
+		{"168", 168}, {"168in", 168}, {`168"`, 168}, {"14ft", 168}, {"14'", 168}, {`14'6"`, 174}, {"14'6", 174},
+		{"4.2m", 4200 / 25.4}, {"350mm", 350 / 25.4}, {"35cm", 350 / 25.4}, {"3.5 in", 3.5}, {"0", 0},
+	} {
+		got, err := parseLength(c.in)
+		if err != nil || math.Abs(got-c.want) > 1e-9 {
+			t.Errorf("parseLength(%q) = %v, %v; want %v", c.in, got, err, c.want)
+		}
+	}
+	for _, bad := range []string{"", "-1", "ft", "abc", "1e400", "NaN", "14'x", "2yd"} {
+		if v, err := parseLength(bad); err == nil {
+			t.Errorf("parseLength(%q) = %v, want an error", bad, v)
+		}
+	}
+}
+
+// TestBuildMember checks the geometry made from the flags: bearings
+// centred lb/2 in from the start, one per span end, overhang past the last
+// centre-line.
+func TestBuildMember(t *testing.T) {
+	a := memberArgs{size: "2x10", species: "DF-L", grade: "No.2", use: "floor", ceiling: "non-plaster",
+		repetitive: true}
+	a.bearing.in, a.spacing.in = 3.5, 16
+	a.loads.DeadPsf = 10
+	for _, s := range []string{"12ft,10ft"} {
+		if err := a.spans.Set(s); err != nil {
+			t.Fatal(err)
+		}
+	}
+	a.overhang.in = 24
+	m, s, msg := buildMember(&a, map[string]bool{"dead": true})
+	if msg != "" {
+		t.Fatal(msg)
+	}
+	want := []check.Bearing{{AtIn: 1.75, LengthIn: 3.5}, {AtIn: 145.75, LengthIn: 3.5}, {AtIn: 265.75, LengthIn: 3.5}}
+	if !reflect.DeepEqual(m.Bearings, want) || m.LengthIn != 289.75 || m.OverhangEndIn != 24 {
+		t.Errorf("geometry: bearings %+v, length %v, overhang %v", m.Bearings, m.LengthIn, m.OverhangEndIn)
+	}
+	// Floor defaults of the project file; IBC 2018 Table 1604.3 floor limits.
+	if m.Loads != (check.AreaLoads{DeadPsf: 10, LivePsf: 40}) || m.LiveLimit != 360 || m.TotalLimit != 240 ||
+		m.TribIn != 16 || !m.Repetitive {
+		t.Errorf("member %+v", m)
+	}
+	if !reflect.DeepEqual(s, check.DefaultSettings()) {
+		t.Errorf("settings %+v", s)
+	}
+}
+
+func TestMemberCommand(t *testing.T) {
+	// DF-L No.2 2x10 at 16 in o.c., 14 ft span, D 10 + L 40 psf. By hand:
+	// w = 50 psf x 16/12 ft = 66.67 plf, M = w L^2 / 8 = 19600 lb-in,
+	// fb = M / S = 19600 / 21.39 = 916.3 psi (S from NDS 2018 Supplement
+	// Table 1B); Fb' = 900 x CF 1.1 x Cr 1.15 = 1138.5 psi (Supplement
+	// Table 4A, from memory: verify), ratio 0.805; live deflection
+	// 5 wL L^4 / (384 E I) = 5(4.444)(168^4) / (384(1.6e6)(98.93)) = 0.291 in.
+	code, out, errs := runCmd("member", "--size", "2x10", "--span", "14ft", "--dead", "10", "--live", "40")
+	if code != 0 || errs != "" {
+		t.Fatalf("exit %d, stderr %q\n%s", code, errs, out)
+	}
+	for _, want := range []string{
+		"2x10 Douglas Fir-Larch No.2, floor joist at 16 in o.c.",
+		"spans 168 in (14 ft)",
+		"bending-top under D+L: 916.3 psi against 1138.5 psi, ratio 0.805 ok",
+		"deflection-live under L, span 1: 0.291 in",
+		"PASS: governing bending-top, ratio 0.805",
+	} {
+		if !strings.Contains(out, want) {
+			t.Errorf("output lacks %q:\n%s", want, out)
+		}
+	}
+	// The same joist as a 2x6: fb = 19600 / 7.563 = 2592 psi against
+	// Fb' = 900 x 1.3 x 1.15 = 1345.5 psi: it fails, exit 1.
+	code, out, _ = runCmd("member", "--size", "2x6", "--span", "14ft", "--dead", "10", "--live", "40")
+	if code != 1 || !strings.Contains(out, "FAIL") || !strings.Contains(out, "2592") {
+		t.Errorf("2x6: exit %d\n%s", code, out)
+	}
+}
+
+func TestMemberUsageErrors(t *testing.T) {
+	for _, c := range []struct {
+		args []string
+		want string
+	}{
+		{[]string{"member", "--span", "14ft"}, "--size is required"},
+		{[]string{"member", "--size", "2x10"}, "--span is required"},
+		{[]string{"member", "--size", "2x10", "--span", "14yd"}, `length "14yd"`},
+		{[]string{"member", "--size", "2x10", "--span", "0"}, "must be greater than 0"},
+		{[]string{"member", "--size", "2x10", "--span", "14ft", "--use", "deck"}, `--use "deck"`},
+		{[]string{"member", "--size", "2x10", "--span", "14ft", "--ceiling", "gyp"}, `--ceiling "gyp"`},
+		{[]string{"member", "--size", "2x10", "--span", "14ft", "--species", "Balsa"}, `unknown species "Balsa"`},
+		{[]string{"member", "--size", "2x11", "--span", "14ft"}, `size "2x11"`},
+		{[]string{"member", "--size", "2x10", "--span", "14ft", "--live", "-5"}, "--live -5"},
+		{[]string{"member", "--size", "2x10", "--span", "14ft", "--live-limit", "0.5"}, "--live-limit 0.5"},
+		{[]string{"member", "--size", "2x10", "--span", "14ft", "-p", "testdata/none.toml"}, "none.toml"},
+		{[]string{"member", "--size", "2x10", "--span", "14ft", "extra"}, `unexpected argument "extra"`},
+		{[]string{"member", "--size", "2x10", "--span", "14ft", "--blocking", "-1"}, "--blocking -1"},
+	} {
+		code, out, errs := runCmd(c.args...)
+		if code != 2 || out != "" || !strings.Contains(errs, c.want) || !strings.HasPrefix(errs, "framecheck: member: ") {
+			t.Errorf("%q: exit %d, stderr %q; want 2 and %q", c.args, code, errs, c.want)
+		}
+	}
+}
+
+// TestMemberRoof: roof defaults (Lr 20 psf, no floor live) and the
+// IBC 2018 Table 1604.3 roof limits for a non-plaster ceiling, L/240 and
+// L/180.
+func TestMemberRoof(t *testing.T) {
+	code, out, _ := runCmd("member", "--size", "2x8", "--span", "12ft", "--use", "roof", "--wind-up", "30")
+	if code > 1 || !strings.Contains(out, "loads D 12, L 0, Lr 20, S 0, W down 0, W up 30 psf") ||
+		!strings.Contains(out, "deflection limits: live L/240, total L/180") {
+		t.Errorf("exit %d\n%s", code, out)
+	}
+	if !strings.Contains(out, "bending-bottom") {
+		t.Errorf("uplift 0.6D+0.6W = 0.6(30) - 0.6(12) > 0 should load the bottom edge:\n%s", out)
+	}
+}
+
+func TestFmtVal(t *testing.T) {
+	for x, want := range map[float64]string{1600000: "1600000", 1138.5: "1138.5", 916.289: "916.3", 0.805: "0.805",
+		0.28: "0.28", 1: "1", 0: "0", 0.00123: "0.00123", -2.5: "-2.5"} {
+		if got := fmtVal(x); got != want {
+			t.Errorf("fmtVal(%v) = %q, want %q", x, got, want)
+		}
+	}
+}
