@@ -50,8 +50,9 @@
 // For each direction group the members are sorted by their offset across
 // the group (along the normal n with n.X > 0, or n.Y > 0 for horizontal
 // joists) and each looks for the nearest parallel joist on either side whose
-// extent along u overlaps its own by more than the snap tolerance, no
-// farther than 120 in and no nearer than 0.5 in. Each side takes half that
+// extent along u overlaps its own by more than the snap tolerance and by at
+// least half the shorter of the two (so lapped joists are not neighbours),
+// no farther than 120 in and no nearer than 0.5 in. Each side takes half that
 // gap, or EdgeDistanceIn when there is none. SpacingIn is the mean of the
 // two gaps (the trib width), the one gap of an edge joist, 0 for a lone one.
 //

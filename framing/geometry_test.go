@@ -299,3 +299,22 @@ func TestPerimeterPolylineNearestSupport(t *testing.T) {
 		t.Errorf("error %v messages %q", m.Error, m.Messages)
 	}
 }
+
+func TestLappedJoistsAreNotNeighbours(t *testing.T) {
+	// joists lapped 24 in over the middle wall, the upper piece drawn
+	// 1.5 in to the side; the next pair 16 in over
+	p := newPlan().walls(-10, 100, 0, 144, 288)
+	for _, x := range []float64{0, 16, 32} {
+		p.line("JOIST", x, 0, x, 156).line("JOIST", x+1.5, 132, x+1.5, 288)
+	}
+	pl := p.group(DefaultOptions())
+	m := member(t, pl, 16, 78)
+	checkNear(t, "lower piece trib", m.TribIn, 16, 1e-9)
+	m = member(t, pl, 17.5, 210)
+	checkNear(t, "upper piece trib", m.TribIn, 16, 1e-9)
+	// the lap reaches 12 in past the wall centre-line, more than
+	// lb/2 + snap = 3.25 in: by DOMAIN.md's rule it is a short cantilever
+	if sp := m.Spans(); len(sp) != 1 || !near(sp[0], 144, 1e-9) || !near(m.OverhangStartIn, 12, 1e-9) {
+		t.Errorf("upper piece spans %v overhang %g, want [144] and 12", sp, m.OverhangStartIn)
+	}
+}

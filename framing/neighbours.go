@@ -11,9 +11,16 @@ import (
 // source: no floor joists sit 10 ft apart).
 const maxNeighbourGapIn = 120
 
-// minNeighbourGapIn: parallel joists closer than this (lapped pieces drawn
-// on one line) are not each other's neighbours.
+// minNeighbourGapIn: parallel joists closer than this (pieces drawn on one
+// line) are not each other's neighbours.
 const minNeighbourGapIn = 0.5
+
+// minOverlapFrac: a parallel joist is a neighbour only when the extents
+// overlap by more than the snap tolerance and by at least this fraction of
+// the shorter of the two, so joists lapped over a bearing (drawn 1.5 in
+// apart, overlapping by the lap only) do not take each other as the
+// neighbour (common practice, no source).
+const minOverlapFrac = 0.5
 
 // neighbours finds, per member, the nearest parallel joist on each side
 // whose extent overlaps its own by more than the snap tolerance, with one
@@ -39,7 +46,9 @@ func (g *grouper) neighbours() {
 	g.lo, g.hi = make([]int, n), make([]int, n)
 	tol := g.opt.SnapToleranceIn
 	overlaps := func(a, b int) bool {
-		return math.Min(g.a1[a], g.a1[b])-math.Max(g.a0[a], g.a0[b]) > tol
+		ov := math.Min(g.a1[a], g.a1[b]) - math.Max(g.a0[a], g.a0[b])
+		shorter := math.Min(g.a1[a]-g.a0[a], g.a1[b]-g.a0[b])
+		return ov > tol && ov >= minOverlapFrac*shorter
 	}
 	for x, k := range order {
 		g.lo[k], g.hi[k] = -1, -1
