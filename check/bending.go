@@ -100,9 +100,17 @@ func (e *engine) evalEdge(top bool, ivs []interval) edgeEval {
 	for i := range ivs {
 		iv := &ivs[i]
 		inCompression := false
+		whole := iv.a <= 0 && iv.b >= e.bm.LengthIn
 		for ci := range e.cases {
 			c := &e.cases[ci]
-			pos, _, neg, _ := c.r.MomentExtremes(iv.a, iv.b)
+			// A case with no moment of this sign anywhere cannot load this edge.
+			if (top && c.mPos <= tol) || (!top && -c.mNeg <= tol) {
+				continue
+			}
+			pos, neg := c.mPos, c.mNeg
+			if !whole {
+				pos, _, neg, _ = c.r.MomentExtremes(iv.a, iv.b)
+			}
 			m := pos
 			if !top {
 				m = -neg
@@ -148,7 +156,7 @@ func (e *engine) bendingResult(kind string, ev edgeEval) CheckResult {
 		n = 7
 	}
 	t := e.arena.tracer(n)
-	t.add("M", ev.mLbIn, "lb-in", "largest moment compressing this edge", "", "analysis ("+e.caseLabel(c)+")")
+	t.add("M", ev.mLbIn, "lb-in", "largest moment compressing this edge, governing case", "", refAnalysis)
 	t.add("S", e.sec.SIn3, "in^3", "b d^2 / 6", t.f("%s(%s)^2 / 6", e.sec.BIn, e.sec.DIn), "NDS 2018 Supplement Table 1B")
 	t.add("fb", fb, "psi", "M / S", t.f("%s / %s", ev.mLbIn, e.sec.SIn3), "NDS 2018 3.3.2")
 	t.add("Fb*", ev.fbStar, "psi", "Fb CD CM Ct CF Ci Cr",

@@ -3,6 +3,7 @@ package check
 import (
 	"fmt"
 	"math"
+	"strconv"
 
 	"framecheck/check/beam"
 )
@@ -53,11 +54,11 @@ func (e *engine) shearCheck() CheckResult {
 	c := &e.cases[bestCI]
 	fv := 1.5 * bestV / e.sec.AreaIn2
 	t := e.arena.tracer(5)
-	where := "at the centre-line of bearing " + fmt.Sprint(bestJ+1)
+	where := "at the centre-line of bearing " + strconv.Itoa(bestJ+1)
 	if e.s.ShearAtD {
-		where = "at d from the face of bearing " + fmt.Sprint(bestJ+1)
+		where = "at d from the face of bearing " + strconv.Itoa(bestJ+1)
 	}
-	t.add("V", bestV, "lb", "largest shear "+where, "", "analysis ("+e.caseLabel(c)+")")
+	t.add("V", bestV, "lb", "largest shear "+where, "", refAnalysis)
 	t.add("A", e.sec.AreaIn2, "in^2", "b d", t.f("%s(%s)", e.sec.BIn, e.sec.DIn), "NDS 2018 Supplement Table 1B")
 	t.add("fv", fv, "psi", "1.5 V / A", t.f("1.5(%s) / %s", bestV, e.sec.AreaIn2), "NDS 2018 Eq. 3.4-2")
 	t.add("Fv'", bestFv, "psi", "Fv CD CM Ct Ci", t.f("%s(%s)(%s)(%s)(%s)", e.dv.FvPsi, c.cd, e.cm.Fv, e.ct.Fv, e.ci.Fv), "NDS 2018 Table 4.3.1")
@@ -98,7 +99,7 @@ func (e *engine) bearingCheck() (CheckResult, []string) {
 	b := e.m.Bearings[bestJ]
 	fc := bestR / (e.sec.BIn * b.LengthIn)
 	t := e.arena.tracer(6)
-	t.add("R", bestR, "lb", fmt.Sprintf("largest reaction at bearing %d", bestJ+1), "", "analysis ("+e.caseLabel(&e.cases[bestCI])+")")
+	t.add("R", bestR, "lb", "largest reaction, at bearing "+strconv.Itoa(bestJ+1), "", refAnalysis)
 	t.add("lb", b.LengthIn, "in", "bearing length", "", "")
 	t.add("fc_perp", fc, "psi", "R / (b lb)", t.f("%s / (%s(%s))", bestR, e.sec.BIn, b.LengthIn), "NDS 2018 3.10.2")
 	if bestCb != 1 {
@@ -216,7 +217,7 @@ func (e *engine) deflectionChecks() []CheckResult {
 func (e *engine) deflResult(kind string, d deflWorst) CheckResult {
 	t := e.arena.tracer(5)
 	where := e.segLabel(d.seg)
-	t.add("delta", d.deflIn, "in", "largest deflection of "+where, "", "analysis, E' I ("+d.name+")")
+	t.add("delta", d.deflIn, "in", "largest deflection of "+where, "", refAnalysis)
 	t.add("E'", e.eAdj, "psi", "E CM Ct Ci", t.f("%s(%s)(%s)(%s)", e.dv.EPsi, e.cm.E, e.ct.E, e.ci.E), "NDS 2018 Table 4.3.1")
 	if kind == KindDeflectionTotal {
 		t.add("Kcr", e.kcr, "", "creep factor on D", "", "NDS 2018 3.5.2")

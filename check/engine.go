@@ -56,6 +56,8 @@ type strengthCase struct {
 	pattern uint32 // segments carrying the patterned live-type loads; all ones = not patterned
 	w       []float64
 	r       beam.Response
+
+	mPos, mNeg float64 // largest positive and most negative moment on the whole member
 }
 
 var defaultCombos = DefaultCombos()
@@ -264,8 +266,8 @@ func (e *engine) solveStrength() error {
 			if err := e.bm.SolveInto(&c.r, c.w); err != nil {
 				return err
 			}
-			pos, _, neg, _ := c.r.MomentExtremes(0, e.bm.LengthIn)
-			e.mMax = math.Max(e.mMax, math.Max(pos, -neg))
+			c.mPos, _, c.mNeg, _ = c.r.MomentExtremes(0, e.bm.LengthIn)
+			e.mMax = math.Max(e.mMax, math.Max(c.mPos, -c.mNeg))
 			i++
 		}
 	}

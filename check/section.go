@@ -39,7 +39,7 @@ func NewSection(bNom, dNom int) (Section, error) {
 		return Section{}, fmt.Errorf("size %dx%d: want a nominal 2x, 3x or 4x from 4 to 16 in deep (4, 5, 6, 8, 10, 12, 14, 16)", bNom, dNom)
 	}
 	return Section{
-		Name:       fmt.Sprintf("%dx%d", bNom, dNom),
+		Name:       strconv.Itoa(bNom) + "x" + strconv.Itoa(dNom),
 		NominalBIn: float64(bNom),
 		NominalDIn: float64(dNom),
 		BIn:        b,
@@ -53,6 +53,9 @@ func NewSection(bNom, dNom int) (Section, error) {
 // ParseSize reads a nominal size such as "2x10", "2X10", "2 x 12" or
 // "3x12" and returns its Section (NDS 2018 Supplement Table 1B).
 func ParseSize(s string) (Section, error) {
+	if sec, ok := parseSizeFast(s); ok {
+		return sec, nil
+	}
 	t := strings.ToLower(strings.Join(strings.Fields(s), ""))
 	t = strings.ReplaceAll(t, "×", "x")
 	parts := strings.Split(t, "x")
@@ -69,6 +72,23 @@ func ParseSize(s string) (Section, error) {
 		return Section{}, fmt.Errorf("size %q: %w", s, err)
 	}
 	return sec, nil
+}
+
+// parseSizeFast reads the plain spellings "2x10" and "2X10" without
+// allocating; anything else goes the long way.
+func parseSizeFast(s string) (Section, bool) {
+	if len(s) < 3 || len(s) > 4 || s[0] < '2' || s[0] > '4' || (s[1] != 'x' && s[1] != 'X') {
+		return Section{}, false
+	}
+	d := 0
+	for i := 2; i < len(s); i++ {
+		if s[i] < '0' || s[i] > '9' {
+			return Section{}, false
+		}
+		d = 10*d + int(s[i]-'0')
+	}
+	sec, err := NewSection(int(s[0]-'0'), d)
+	return sec, err == nil
 }
 
 // BoardFeetPerFt is the board measure of one foot of the nominal section:

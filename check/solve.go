@@ -3,6 +3,7 @@ package check
 import (
 	"fmt"
 	"math"
+	"sync"
 )
 
 // CheckMember checks m under s, adding blocking rows where the bottom
@@ -180,7 +181,19 @@ func tempName(s string) string {
 // nominal depth-to-thickness ratio, reported beside the calculated CL as
 // information (NDS 2018 4.4.1.1 lets it replace the calculation).
 func (e *engine) lateralSupportRule() string {
-	r := e.sec.NominalDIn / e.sec.NominalBIn
+	k := [2]float64{e.sec.NominalDIn, e.sec.NominalBIn}
+	if v, ok := lateralRules.Load(k); ok {
+		return v.(string)
+	}
+	v := lateralSupportRule(e.sec.NominalDIn / e.sec.NominalBIn)
+	lateralRules.Store(k, v)
+	return v
+}
+
+// lateralRules caches lateralSupportRule by nominal depth and thickness.
+var lateralRules sync.Map
+
+func lateralSupportRule(r float64) string {
 	var rule string
 	switch {
 	case r <= 2:

@@ -7,6 +7,10 @@ import (
 	"unsafe"
 )
 
+// refAnalysis is the Ref of trace values taken from the structural
+// analysis (package check/beam) under the check's governing case.
+const refAnalysis = "structural analysis (check/beam), exact for uniform loads"
+
 // tracer collects TraceItems and formats numbers for them.
 type tracer struct {
 	items []TraceItem
