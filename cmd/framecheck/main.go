@@ -25,31 +25,29 @@
 //
 //	framecheck check PLAN.dxf [-p PROJECT.toml] [-o OUTDIR] [--units U] [--size] [--overlay]
 //
-// Reads the plan, finds the joists and their supports, checks every joist
-// and writes results.json, schedule.xlsx and the annotated DXF into
-// OUTDIR, then prints a summary table: members, pass or fail, blocking
-// rows and takeoff totals, and the project-file defaults that applied.
+// Reads the plan, finds the joists and their supports, checks every joist,
+// decides the blocking rows each run needs, and writes results.json,
+// schedule.xlsx and an annotated copy of the drawing into OUTDIR, then
+// prints a summary table: members, pass or fail, blocking rows, takeoff
+// totals, and the project-file defaults that applied.
 //
 //	-p PROJECT.toml  project file (see "framecheck init"); without it, the
 //	                 built-in defaults, which suit a plan drawn on JOIST*
 //	                 and WALL* layers
-//	-o OUTDIR        output folder; default: a folder beside the plan,
-//	                 named after it
+//	-o OUTDIR        output folder; default: PLAN-framecheck beside the plan
 //	--units U        unit of the drawing: in, ft, mm, cm or m; overrides
 //	                 the project file and the DXF header ($INSUNITS)
-//	--size           choose the smallest passing size from the project
-//	                 file's [sizing] candidates instead of checking the
-//	                 sizes given
-//	--overlay        write the annotations alone, to lay over the original
-//	                 drawing, instead of an annotated copy of the plan
+//	--size           pick the lightest passing size from the project file's
+//	                 [sizing] candidates instead of checking the sizes given
+//	--overlay        also write the markup alone as an R12 overlay DXF
 //
 // # demo
 //
 //	framecheck demo [-o OUTDIR]
 //
-// Runs check on the demo plan and project file built into the program, so
-// it works from any folder with no files at hand. OUTDIR defaults to
-// ./framecheck-demo.
+// Writes the demo plan and project file built into the program into OUTDIR
+// (default ./framecheck-demo) and runs check on them, so the whole job can
+// be seen from any folder with no files at hand.
 //
 // # layers
 //
@@ -57,39 +55,50 @@
 //
 // Lists every layer of the plan with its entity counts by type and the
 // role the project file gives it (joists, blocking, zones, labels, or a
-// support kind), or none: the quick way to map a new drawing to a project
-// file.
+// support kind), or none, then notes: layers off or frozen, patterns that
+// match no layer, what the reader skipped. The quick way to map a new
+// drawing to a project file. Without -p the built-in patterns apply.
 //
 // # member
 //
 //	framecheck member --size 2x10 --span 14ft [flags]
 //
 // Checks one joist described by flags and prints the calculation trace:
-// loads, combinations, adjustment factors, stresses, deflections and
-// ratios, each with its NDS, ASCE 7 or IBC reference.
+// reference design values and their table, adjustment factors, and for
+// each check its governing load combination, the formulas with the numbers
+// put in, the NDS, ASCE 7 or IBC reference, and the ratio. Exit status 0
+// when the joist passes, 1 when it fails.
 //
-//	--size S          nominal size, e.g. 2x10
-//	--species NAME    species group (default Douglas Fir-Larch)
-//	--grade G         grade (default No.2)
-//	--span L          span, centre to centre of bearings; repeat the flag
-//	                  or give a comma list for a continuous joist
-//	--overhang L      cantilever past the last bearing
-//	--spacing L       joist spacing (tributary width), default 16
-//	--dead, --live, --roof-live, --snow, --wind-down, --wind-up PSF
-//	                  area loads in psf
-//	--use floor|roof  member use, for the deflection limits
-//	--ceiling C       plaster, non-plaster or none
-//	--bottom-braced   a ceiling fastened to the joist braces its bottom edge
-//	--blocking N      rows of blocking in each span
+//	--size S            nominal size, e.g. 2x10 (required)
+//	--span L            span, centre to centre of bearings (required);
+//	                    repeat the flag or give a comma list (12ft,10ft)
+//	                    for a continuous joist
+//	--species NAME      species group (default Douglas Fir-Larch)
+//	--grade G           grade (default No.2)
+//	--overhang L        cantilever past the last bearing's centre-line
+//	--bearing L         bearing length at each support (default 3.5)
+//	--spacing L         on-centre spacing, taken as the tributary width
+//	                    (default 16)
+//	--dead PSF          D, self-weight included (default 12)
+//	--live PSF          L (default 40 for a floor, 0 for a roof)
+//	--roof-live PSF     Lr (default 0 for a floor, 20 for a roof)
+//	--snow, --wind-down, --wind-up PSF
+//	                    S, and wind toward or away from the joist at
+//	                    strength level (default 0)
+//	--use floor|roof    member use (default floor)
+//	--ceiling C         plaster, non-plaster or none (default non-plaster)
+//	--live-limit N, --total-limit N
+//	                    deflection limits L/N, 0 = not checked (default
+//	                    from use and ceiling, IBC 2018 Table 1604.3)
+//	--bottom-braced     a ceiling fastened to the joist braces its bottom
+//	                    edge
+//	--blocking N        blocking rows in each span (default: as many as the
+//	                    bottom edge needs)
+//	--repetitive=false  no repetitive member factor Cr
+//	-p PROJECT.toml     take the [design] switches from a project file
 //
-// Lengths are inches unless they carry a unit (14ft, 3.5in, 4.2m).
-//
-// # materials
-//
-//	framecheck materials [SPECIES]
-//
-// Prints the reference design values in use (Fb, Ft, Fv, Fc_perp, Fc, E,
-// Emin by grade) with their source tables, for one species or all.
+// Lengths are inches unless they carry a unit: 14ft, 14'6", 3.5in, 4.2m,
+// 350mm.
 //
 // # init
 //
@@ -103,9 +112,12 @@
 //
 // # Example
 //
-//	$ framecheck init
+//	$ framecheck demo                       # the built-in plan, into ./framecheck-demo
+//	$ framecheck layers plan.dxf            # which layers hold what
+//	$ framecheck init                       # a starter project file to edit
 //	wrote framecheck.toml
 //	$ framecheck check plan.dxf -p framecheck.toml
+//	$ framecheck member --size 2x10 --span 14ft --dead 10 --live 40
 package main
 
 import (

@@ -121,7 +121,7 @@ func buildMember(a *memberArgs, set map[string]bool) (check.Member, check.Settin
 	if a.project != "" {
 		p, err := LoadProject(a.project)
 		if err == nil {
-			settings, err = p.CheckSettings()
+			settings, err = checkSettings(p)
 		}
 		if err != nil {
 			return m, check.Settings{}, err.Error()

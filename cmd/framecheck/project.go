@@ -319,18 +319,3 @@ func (c Combinations) String() string {
 	}
 	return fmtList(c.List)
 }
-
-// CheckSettings returns the [design] switches as package check takes
-// them, with the built-in design values.
-func (p *Project) CheckSettings() (check.Settings, error) {
-	combos, err := p.Design.Combinations.Combos()
-	if err != nil {
-		return check.Settings{}, err
-	}
-	d := p.Design
-	return check.Settings{
-		TopEdgeBraced: d.TopEdgeBraced, ShearAtD: d.ShearAtD, WetService: d.WetService,
-		Incised: d.Incised, PatternLive: d.PatternLiveLoads, Temperature: d.Temperature,
-		Kcr: d.Kcr, Combos: combos,
-	}, nil
-}
