@@ -319,3 +319,17 @@ func TestAnnotateRefuses(t *testing.T) {
 	}
 	noTempFiles(t, dir)
 }
+
+func TestCleanText(t *testing.T) {
+	// A Unicode character in DXF text is written \U+XXXX (from memory: verify
+	// against the AutoCAD DXF reference, TEXT group 1).
+	for _, tc := range []struct{ in, want string }{
+		{"J1 0.52", "J1 0.52"},
+		{"J1\n0.52", "J1 0.52"},
+		{"Ø 1.00", `\U+00D8 1.00`},
+	} {
+		if got := cleanText(tc.in); got != tc.want {
+			t.Errorf("cleanText(%q) = %q, want %q", tc.in, got, tc.want)
+		}
+	}
+}

@@ -2,6 +2,7 @@ package export
 
 import (
 	"bufio"
+	"fmt"
 	"strconv"
 	"strings"
 )
@@ -90,14 +91,24 @@ func (e *dxfEmitter) text(layer string, at [2]float64, h, deg float64, s string)
 	e.pair(73, "2") // middle
 }
 
-// cleanText keeps a label on one line: control characters become spaces.
+// cleanText keeps a label on one line and in ASCII: control characters
+// become spaces and other non-ASCII characters the DXF escape \U+XXXX, so
+// the file reads the same whatever its code page ($DWGCODEPAGE).
 func cleanText(s string) string {
-	return strings.Map(func(r rune) rune {
-		if r < 0x20 || r == 0x7f {
-			return ' '
+	var b strings.Builder
+	for _, r := range s {
+		switch {
+		case r < 0x20 || r == 0x7f:
+			b.WriteByte(' ')
+		case r < 0x80:
+			b.WriteRune(r)
+		case r <= 0xffff:
+			fmt.Fprintf(&b, "\\U+%04X", r)
+		default:
+			b.WriteByte('?') // outside the basic plane: no DXF escape
 		}
-		return r
-	}, s)
+	}
+	return b.String()
 }
 
 // layer writes one LAYER table record.

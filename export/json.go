@@ -10,6 +10,7 @@ import (
 	"slices"
 	"strconv"
 	"strings"
+	"sync"
 )
 
 // ErrNonFinite marks a results file written with NaN or Inf values
@@ -126,13 +127,9 @@ func sanitizeValue(v reflect.Value, path []pathSeg, fields *[]string) (reflect.V
 	case reflect.Struct:
 		var cp reflect.Value
 		t := v.Type()
-		for i := 0; i < t.NumField(); i++ {
-			sf := t.Field(i)
-			name := jsonName(sf)
-			if !sf.IsExported() || name == "-" {
-				continue
-			}
-			nv, changed := sanitizeValue(v.Field(i), append(path, pathSeg{Name: name}), fields)
+		for _, fi := range jsonFields(t) {
+			i := fi.Index
+			nv, changed := sanitizeValue(v.Field(i), append(path, pathSeg{Name: fi.Name}), fields)
 			if changed {
 				if !cp.IsValid() {
 					cp = reflect.New(t).Elem()
@@ -167,6 +164,30 @@ func sanitizeValue(v reflect.Value, path []pathSeg, fields *[]string) (reflect.V
 		}
 	}
 	return v, false
+}
+
+// jsonField is an exported struct field that reaches the JSON.
+type jsonField struct {
+	Index int
+	Name  string
+}
+
+var jsonFieldCache sync.Map // reflect.Type -> []jsonField
+
+// jsonFields lists t's fields that reach the JSON, with their JSON names.
+func jsonFields(t reflect.Type) []jsonField {
+	if c, ok := jsonFieldCache.Load(t); ok {
+		return c.([]jsonField)
+	}
+	var fs []jsonField
+	for i := 0; i < t.NumField(); i++ {
+		sf := t.Field(i)
+		if name := jsonName(sf); sf.IsExported() && name != "-" {
+			fs = append(fs, jsonField{Index: i, Name: name})
+		}
+	}
+	jsonFieldCache.Store(t, fs)
+	return fs
 }
 
 func jsonName(sf reflect.StructField) string {
