@@ -1,6 +1,7 @@
 package check
 
 import (
+	"os"
 	"strings"
 	"testing"
 )
@@ -148,6 +149,51 @@ Test Spruce,MSR 2100,4,0,2100,1575,135,425,1875,1800000,660000,none,
 		_, err := LoadMaterialsCSV(strings.NewReader(b.text), "mine.csv")
 		if err == nil || !strings.Contains(err.Error(), b.want) {
 			t.Errorf("LoadMaterialsCSV(%q) error = %v; want it to contain %q", b.text, err, b.want)
+		}
+	}
+}
+
+// TestUserMaterials_CSVAndTOML loads the same invented row from
+// testdata/user_materials.csv and .toml and expects identical values.
+func TestUserMaterials_CSVAndTOML(t *testing.T) {
+	fc, err := os.Open("testdata/user_materials.csv")
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer fc.Close()
+	fromCSV, err := LoadMaterialsCSV(fc, "user_materials.csv")
+	if err != nil {
+		t.Fatal(err)
+	}
+	ft, err := os.Open("testdata/user_materials.toml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer ft.Close()
+	fromTOML, err := LoadMaterialsTOML(ft, "user_materials.toml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	a, errA := fromCSV.Lookup("example spruce", "MSR 2100f-1.8E", "2x10")
+	b, errB := fromTOML.Lookup("Example Spruce", "msr 2100f 1.8e", "2x10")
+	if errA != nil || errB != nil || a != b || a.FbPsi != 2100 || a.EPsi != 1.8e6 {
+		t.Errorf("CSV %+v (%v)\nTOML %+v (%v)", a, errA, b, errB)
+	}
+	if _, err := fromCSV.Lookup("Example Spruce", "MSR 2100f-1.8E", "2x4"); err != nil {
+		t.Errorf("2x4 within min width 4: %v", err)
+	}
+	if _, err := fromCSV.Lookup("Example Spruce", "MSR 2100f-1.8E", "3x4"); err != nil {
+		t.Errorf("3x4: %v", err)
+	}
+	for _, bad := range []struct{ text, want string }{
+		{"[[material]]\nspecies = \"X\"\ngrade = \"Y\"\nfb_psi = \"abc\"\n", "material 1: column fb_psi"},
+		{"[[material]]\nspecies = \"X\"\ncolour = 3\n", "unknown key \"colour\""},
+		{"[[material]\n", "user.toml:2"}, // the TOML reader reports the line after the unclosed name
+		{"[other]\nx = 1\n", "unknown key"},
+	} {
+		_, err := LoadMaterialsTOML(strings.NewReader(bad.text), "user.toml")
+		if err == nil || !strings.Contains(err.Error(), bad.want) {
+			t.Errorf("LoadMaterialsTOML(%q) error %v; want %q", bad.text, err, bad.want)
 		}
 	}
 }
