@@ -203,7 +203,7 @@ func copyAnnotated(pr *pairReader, w *bufio.Writer, facts *dxfFacts, m *Markup) 
 
 	var ctx dxfContext
 	var headerVar string
-	seededHeader, layerCountDone := false, false
+	seededHeader, layerCountDone, emitted := false, false, false
 	raw := func(p pair) {
 		w.WriteString(p.RawCode)
 		w.WriteString(p.RawValue)
@@ -231,7 +231,10 @@ func copyAnnotated(pr *pairReader, w *bufio.Writer, facts *dxfFacts, m *Markup) 
 						a.layerTable()
 					}
 				case "ENTITIES":
-					a.em.markup(m)
+					if !emitted {
+						a.em.markup(m)
+						emitted = true
+					}
 				}
 			case "ENDTAB":
 				if ctx.Table == "LAYER" {
@@ -260,6 +263,9 @@ func copyAnnotated(pr *pairReader, w *bufio.Writer, facts *dxfFacts, m *Markup) 
 			case "EOF":
 				if !facts.HasTables {
 					a.tablesSection()
+				}
+				if facts.HasEntities && !emitted {
+					return &DXFError{File: pr.file, Line: p.Line, Err: errors.New("EOF inside the ENTITIES section (no ENDSEC)")}
 				}
 				if !facts.HasEntities {
 					a.em.pair(0, "SECTION")

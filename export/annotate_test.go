@@ -333,3 +333,39 @@ func TestCleanText(t *testing.T) {
 		}
 	}
 }
+
+func TestAnnotateTablesWithoutLayerTable(t *testing.T) {
+	dir := t.TempDir()
+	src := filepath.Join(dir, "nolayer.dxf")
+	body := "  0\nSECTION\n  2\nTABLES\n  0\nTABLE\n  2\nLTYPE\n 70\n1\n  0\nLTYPE\n  2\nCONTINUOUS\n 70\n0\n  3\nSolid\n 72\n65\n 73\n0\n 40\n0.0\n  0\nENDTAB\n  0\nENDSEC\n" +
+		"  0\nSECTION\n  2\nENTITIES\n  0\nLINE\n  8\nJOIST\n 10\n0\n 20\n56\n 11\n144\n 21\n56\n  0\nENDSEC\n  0\nEOF\n"
+	if err := os.WriteFile(src, []byte(body), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	dst := filepath.Join(dir, "out.dxf")
+	if err := Annotate(src, dst, fixtureMarkup(t, 1)); err != nil {
+		t.Fatal(err)
+	}
+	out := parseDXF(t, dst)
+	if out.LayerCount != 3 || out.count("LAYER", LayerFail) != 1 || out.count("TEXT", LayerLabel) != 4 {
+		t.Errorf("LAYER count %d, FC-FAIL records %d, labels %d; want 3, 1, 4",
+			out.LayerCount, out.count("LAYER", LayerFail), out.count("TEXT", LayerLabel))
+	}
+	if ok, at := isSubsequence(strings.SplitAfter(body, "\n")[:len(strings.SplitAfter(body, "\n"))-1], out.Lines); !ok {
+		t.Errorf("input line %d missing", at+1)
+	}
+}
+
+func TestAnnotateUnclosedEntities(t *testing.T) {
+	dir := t.TempDir()
+	src := filepath.Join(dir, "open.dxf")
+	body := "  0\nSECTION\n  2\nENTITIES\n  0\nLINE\n  8\nJ\n 10\n0\n 20\n0\n 11\n1\n 21\n0\n  0\nEOF\n"
+	if err := os.WriteFile(src, []byte(body), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	err := Annotate(src, filepath.Join(dir, "out.dxf"), fixtureMarkup(t, 1))
+	var de *DXFError
+	if !errors.As(err, &de) || de.Line != 17 {
+		t.Errorf("err = %v, want a *DXFError at line 17 (the EOF)", err)
+	}
+}
