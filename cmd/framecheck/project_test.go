@@ -383,3 +383,16 @@ func TestDemoProject(t *testing.T) {
 		t.Errorf("supports %+v", p.Supports)
 	}
 }
+
+func BenchmarkParseProject(b *testing.B) {
+	data, err := os.ReadFile("testdata/full.toml")
+	if err != nil {
+		b.Fatal(err)
+	}
+	b.SetBytes(int64(len(data)))
+	for b.Loop() {
+		if _, err := ParseProject("full.toml", data); err != nil {
+			b.Fatal(err)
+		}
+	}
+}
