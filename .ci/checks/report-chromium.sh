@@ -1,0 +1,52 @@
+#!/usr/bin/env bash
+# report.html rendered by a real browser: Debian's chromium, headless, to a
+# PNG screenshot and a PDF (print CSS). Fails when either is missing or
+# empty. The report is the demo's when `framecheck demo -o DIR` writes
+# DIR/report.html, else the export package's fixture (report_gen's plan).
+set -euo pipefail
+cd "$(dirname "$0")/../.."
+
+CHROMIUM=/usr/bin/chromium
+if [ ! -x "$CHROMIUM" ]; then
+  export DEBIAN_FRONTEND=noninteractive
+  apt-get install -y -qq chromium >/dev/null
+fi
+
+out=$(mktemp -d)
+profile=$(mktemp -d)
+trap 'rm -rf "$out" "$profile"' EXIT
+
+report=""
+if go run ./cmd/framecheck demo -o "$out/demo" >"$out/demo.log" 2>&1 && [ -s "$out/demo/report.html" ]; then
+  report="$out/demo/report.html"
+  echo "report-chromium: demo report"
+else
+  report="$out/report.html"
+  FRAMECHECK_REPORT_OUT="$report" go test ./export/ -run '^TestReportOut$' -count=1 >/dev/null
+  echo "report-chromium: fixture report (demo not available)"
+fi
+[ -s "$report" ] || { echo "report-chromium: no report written" >&2; exit 1; }
+
+flags=(--headless --no-sandbox --disable-gpu --no-first-run
+  --disable-background-networking --disable-component-update --disable-sync
+  --hide-scrollbars --user-data-dir="$profile")
+url="file://$report"
+timeout 120 "$CHROMIUM" "${flags[@]}" --window-size=1400,1000 --screenshot="$out/report.png" "$url" >"$out/png.log" 2>&1 || true
+timeout 120 "$CHROMIUM" "${flags[@]}" --no-pdf-header-footer --print-to-pdf="$out/report.pdf" "$url" >"$out/pdf.log" 2>&1 || true
+
+fail=0
+for f in report.png report.pdf; do
+  if [ ! -s "$out/$f" ]; then
+    echo "report-chromium: $f missing or empty" >&2
+    cat "$out/${f#report.}.log" >&2 || true
+    fail=1
+  fi
+done
+[ "$fail" = 0 ] || exit 1
+# Magic numbers: a PNG starts with \x89PNG, a PDF with %PDF.
+head -c 4 "$out/report.png" | grep -q PNG || { echo "report-chromium: report.png is not a PNG" >&2; exit 1; }
+head -c 4 "$out/report.pdf" | grep -q '%PDF' || { echo "report-chromium: report.pdf is not a PDF" >&2; exit 1; }
+if [ -n "${REPORT_KEEP:-}" ]; then
+  mkdir -p "$REPORT_KEEP" && cp "$out/report.png" "$out/report.pdf" "$report" "$REPORT_KEEP/"
+fi
+echo "report-chromium: PNG $(stat -c %s "$out/report.png") bytes, PDF $(stat -c %s "$out/report.pdf") bytes"

@@ -1,0 +1,200 @@
+package export
+
+import (
+	"bufio"
+	"cmp"
+	"fmt"
+	"html/template"
+	"slices"
+	"time"
+)
+
+// PlanGeometry is the drawing that Results does not carry: the support
+// lines and the load-zone outlines, in inches (world coordinates after unit
+// conversion, the same frame as Member.StartIn/EndIn).
+type PlanGeometry struct {
+	Supports []Polyline    `json:"supports"`
+	Zones    []ZoneOutline `json:"zones"`
+}
+
+// Polyline is a support line (wall, beam or ledger) as drawn, in inches.
+type Polyline struct {
+	Layer  string       `json:"layer,omitempty"`
+	Points [][2]float64 `json:"points"`
+	Closed bool         `json:"closed,omitempty"`
+}
+
+// ZoneOutline is the closed outline of a load zone, in inches, with the
+// zone's name as the project file gives it.
+type ZoneOutline struct {
+	Name   string       `json:"name"`
+	Points [][2]float64 `json:"points"`
+}
+
+// WriteReport writes report.html for r to path, atomically: one
+// self-contained page (inline CSS, SVG and a little JavaScript for pan,
+// zoom and member details; nothing fetched from the network) with the
+// summary, the plan coloured by each member's largest ratio, the framing
+// schedule, the takeoff, the calculation of each mark written out from the
+// check traces, the assumptions and the cautions. g may be nil (no supports
+// or zones drawn). when is printed as the report's date, so a caller that
+// passes a fixed time gets the same bytes for the same input.
+//
+// Member coordinates are StartIn/EndIn when set, else Start/End times the
+// inch factor of r.DrawingUnits. Non-finite numbers are printed as "n/a"
+// and a member whose coordinates are not finite is drawn nowhere but is
+// still listed, so the page never shows NaN or Inf.
+func WriteReport(path string, r *Results, g *PlanGeometry, when time.Time) error {
+	if r == nil {
+		return fmt.Errorf("export: %s: no results to report", path)
+	}
+	if err := refuseDrawing(path); err != nil {
+		return err
+	}
+	if g == nil {
+		g = &PlanGeometry{}
+	}
+	page := buildReport(r, g, when)
+	return writeAtomic(path, func(w *bufio.Writer) error {
+		return reportTemplate.Execute(w, page)
+	})
+}
+
+// reportPage is what the template renders.
+type reportPage struct {
+	Title       string
+	Plan        string
+	Date        string
+	Editions    []string
+	Summary     Summary
+	Worst       []worstRow
+	ErrorRows   []worstRow
+	MoreErrors  int
+	PlanSVG     template.HTML // the <svg> element, written by planSVG
+	MemberJSON  template.JS   // details of every member for the hover panel
+	Legend      []legendRow
+	Marks       []markRow
+	Takeoff     Takeoff
+	Totals      TakeoffTotals
+	Calcs       []markCalc
+	Assumptions Assumptions
+	Combos      []string
+	Cautions    []string
+}
+
+// worstRow is one line of the summary's list of worst members.
+type worstRow struct {
+	ID, Mark, Size, Governing, Status, Ratio, Source string
+	Messages                                         []string
+}
+
+// markRow is one line of the framing schedule.
+type markRow struct {
+	Mark, Size, Species, Grade, Zone, Spacing, Spans, Rows, Ratio, Status, Band string
+	Count                                                                       int
+}
+
+// worstShown is how many members the summary lists as the worst.
+const worstShown = 10
+
+// errorsShown is how many erroring members the summary lists by name.
+const errorsShown = 50
+
+func buildReport(r *Results, g *PlanGeometry, when time.Time) *reportPage {
+	p := &reportPage{
+		Title:       "framecheck report: " + r.Plan,
+		Plan:        r.Plan,
+		Date:        when.UTC().Format("2006-01-02 15:04 UTC"),
+		Editions:    r.Assumptions.CodeEditions,
+		Summary:     r.Summary,
+		Takeoff:     r.Takeoff,
+		Totals:      r.Takeoff.Totals,
+		Assumptions: r.Assumptions,
+		Combos:      r.Assumptions.Combinations,
+		Cautions:    Cautions,
+		Legend:      legendRows(),
+	}
+	if len(p.Combos) == 0 {
+		p.Combos = defaultCombos
+	}
+	// Worst members: the largest ratios among members that were checked.
+	idx := make([]int, 0, len(r.Members))
+	for i := range r.Members {
+		m := &r.Members[i]
+		if m.Status == StatusError {
+			if len(p.ErrorRows) < errorsShown {
+				p.ErrorRows = append(p.ErrorRows, newWorstRow(m))
+			} else {
+				p.MoreErrors++
+			}
+			continue
+		}
+		idx = append(idx, i)
+	}
+	if len(idx) > worstShown {
+		// Partial selection is enough; a full sort of 100k is also cheap,
+		// but keep it proportional.
+		slices.SortFunc(idx, func(a, b int) int {
+			return cmp.Or(cmp.Compare(ratioKey(r.Members[b].MaxRatio), ratioKey(r.Members[a].MaxRatio)), cmp.Compare(a, b))
+		})
+		idx = idx[:worstShown]
+	} else {
+		slices.SortStableFunc(idx, func(a, b int) int {
+			return cmp.Compare(ratioKey(r.Members[b].MaxRatio), ratioKey(r.Members[a].MaxRatio))
+		})
+	}
+	for _, i := range idx {
+		p.Worst = append(p.Worst, newWorstRow(&r.Members[i]))
+	}
+	for _, mk := range r.Marks {
+		p.Marks = append(p.Marks, markRow{
+			Mark: mk.Mark, Size: mk.Size, Species: mk.Species, Grade: mk.Grade, Zone: mk.Zone,
+			Spacing: inOrNA(mk.SpacingIn), Spans: ftInList(mk.SpansIn), Rows: intList(mk.BlockingRowsPerSpan),
+			Ratio: ratioText(mk.MaxRatio), Status: mk.Status, Band: bandClass(mk.MaxRatio, mk.Status), Count: mk.Count,
+		})
+	}
+	p.PlanSVG, p.MemberJSON = planSVG(r, g)
+	p.Calcs = buildCalcs(r)
+	return p
+}
+
+// ratioKey orders non-finite ratios last among the worst.
+func ratioKey(v float64) float64 {
+	if !finite(v) {
+		return -1
+	}
+	return v
+}
+
+func newWorstRow(m *Member) worstRow {
+	w := worstRow{ID: m.ID, Mark: m.Mark, Size: m.Size, Governing: m.Governing, Status: m.Status, Source: m.Source, Messages: m.Messages}
+	if m.Status == StatusError {
+		w.Ratio = "n/a"
+	} else {
+		w.Ratio = ratioText(m.MaxRatio)
+	}
+	return w
+}
+
+// ratioText prints a ratio to three decimals, as the schedule does.
+func ratioText(v float64) string {
+	if !finite(v) {
+		return "n/a"
+	}
+	return fmt.Sprintf("%.3f", v)
+}
+
+// inOrNA prints a length in inches as 16 in, or "n/a" when unknown.
+func inOrNA(v float64) string {
+	if !finite(v) || v <= 0 {
+		return "n/a"
+	}
+	return fmtNum(v) + " in"
+}
+
+// defaultCombos are the ASCE 7-16 2.4.1 ASD combinations (1 to 7, the
+// loads framecheck knows), shown when Results names none.
+var defaultCombos = []string{
+	"D", "D+L", "D+(Lr or S)", "D+0.75L+0.75(Lr or S)", "D+0.6W",
+	"D+0.75L+0.75(0.6W)+0.75(Lr or S)", "0.6D+0.6W",
+}

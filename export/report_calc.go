@@ -1,0 +1,283 @@
+package export
+
+import (
+	"math"
+	"strconv"
+	"strings"
+)
+
+// markCalc is the written-out calculation of one mark, for its governing
+// member (the member of the mark with the largest ratio).
+type markCalc struct {
+	Mark, Anchor, Member, Status, Band, Ratio string
+	Count, MoreMembers                        int
+	Members                                   []string
+	Inputs                                    []keyValue
+	DesignValues                              []DesignValue
+	AreaLoads                                 []areaLoad
+	Combos                                    []comboLoad
+	ComboProblems                             []string
+	Factors                                   []traceLine
+	Checks                                    []checkCalc
+	Steps                                     []stepRow
+	Messages                                  []string
+}
+
+// keyValue is one input line.
+type keyValue struct{ Key, Value string }
+
+// areaLoad is one load of the zone: p (psf) and w = p x trib (plf).
+type areaLoad struct{ Load, Psf, Subst, WPlf string }
+
+// traceLine is one step as an engineer writes it: Name = Formula = Subst =
+// Value Unit (Source). Note holds a formula given in words (no numbers to
+// substitute), printed after the value.
+type traceLine struct {
+	Name, Formula, Subst, Value, Unit, Source, Note string
+}
+
+// checkCalc is one check of the governing member.
+type checkCalc struct {
+	Title, Kind, Combo, Clause                    string
+	Lines                                         []traceLine
+	Actual, Allowable, Unit, Ratio, Verdict, Band string
+}
+
+// stepRow is one iteration of the blocking-row solver.
+type stepRow struct{ Rows, Lu, CL, Ratio, Verdict string }
+
+// membersListed is how many member ids a mark's calculation names.
+const membersListed = 40
+
+// checkTitles names each check kind and the clause it follows.
+var checkTitles = map[string][2]string{
+	KindBendingTop:      {"Bending, top edge in compression", "NDS 2018 3.3, 4.3"},
+	KindBendingBottom:   {"Bending, bottom edge in compression", "NDS 2018 3.3, 4.3"},
+	KindShear:           {"Shear parallel to grain", "NDS 2018 3.4"},
+	KindDeflectionLive:  {"Deflection, live-type load", "NDS 2018 3.5; IBC 2018 Table 1604.3"},
+	KindDeflectionTotal: {"Deflection, total load with creep", "NDS 2018 3.5.2; IBC 2018 Table 1604.3"},
+	KindBearing:         {"Bearing perpendicular to grain", "NDS 2018 3.10"},
+}
+
+func buildCalcs(r *Results) []markCalc {
+	pos := make(map[string]int, len(r.Marks))
+	calcs := make([]markCalc, len(r.Marks))
+	gov := make([]int, len(r.Marks))
+	for i, mk := range r.Marks {
+		pos[mk.Mark] = i
+		calcs[i] = markCalc{Mark: mk.Mark, Anchor: "mark-" + anchorSafe(mk.Mark), Status: mk.Status,
+			Band: bandClass(mk.MaxRatio, mk.Status), Ratio: ratioText(mk.MaxRatio)}
+		gov[i] = -1
+	}
+	for i := range r.Members {
+		m := &r.Members[i]
+		k, ok := pos[m.Mark]
+		if !ok {
+			continue
+		}
+		c := &calcs[k]
+		c.Count++
+		if len(c.Members) < membersListed {
+			c.Members = append(c.Members, m.ID)
+		} else {
+			c.MoreMembers++
+		}
+		if gov[k] < 0 || ratioKey(m.MaxRatio) > ratioKey(r.Members[gov[k]].MaxRatio) {
+			gov[k] = i
+		}
+	}
+	for k := range calcs {
+		if gov[k] >= 0 {
+			fillCalc(&calcs[k], r, &r.Members[gov[k]])
+		}
+	}
+	return calcs
+}
+
+func fillCalc(c *markCalc, r *Results, m *Member) {
+	c.Member = m.ID
+	c.Messages = m.Messages
+	var zone *Zone
+	for i := range r.Assumptions.Zones {
+		if r.Assumptions.Zones[i].Name == m.Zone {
+			zone = &r.Assumptions.Zones[i]
+		}
+	}
+	c.Inputs = []keyValue{
+		{"Member", m.ID + sourceSuffix(m.Source)},
+		{"Size", strings.TrimSpace(m.Size + " " + m.Species + " " + m.Grade)},
+		{"Length", FtIn(m.LengthIn) + " (" + fmtNum(m.LengthIn) + " in)"},
+		{"Bearings at (from start)", numList(m.BearingsAtIn) + " in"},
+		{"Spans, centre to centre of bearings", ftInList(m.SpansIn) + " (" + numList(m.SpansIn) + " in)"},
+		{"Overhangs (start, end)", fmtNum(m.OverhangsIn[0]) + " in, " + fmtNum(m.OverhangsIn[1]) + " in"},
+		{"Spacing", inOrNA(m.SpacingIn)},
+		{"Tributary width", inOrNA(m.TribIn)},
+		{"Load zone", m.Zone},
+	}
+	if zone != nil {
+		c.Inputs = append(c.Inputs,
+			keyValue{"Use, ceiling", zone.Use + ", " + zone.Ceiling},
+			keyValue{"Deflection limits (live, total)", limitText(zone.LiveDeflectionLimit) + ", " + limitText(zone.TotalDeflectionLimit)})
+	}
+	c.Inputs = append(c.Inputs, keyValue{"Blocking rows per span", intList(m.BlockingRowsPerSpan)})
+	if len(m.BlockingAtIn) > 0 {
+		c.Inputs = append(c.Inputs, keyValue{"Blocking rows at (from start)", numList(m.BlockingAtIn) + " in"})
+	}
+	for _, dv := range r.Assumptions.DesignValues {
+		if dv.Species == m.Species && dv.Grade == m.Grade && (dv.Size == "" || dv.Size == m.Size || !strings.Contains(dv.Size, "x")) {
+			c.DesignValues = append(c.DesignValues, dv)
+		}
+	}
+	cd := map[string]float64{}
+	for _, f := range m.Factors {
+		if f.Name == "CD" && f.Formula != "" {
+			cd[strings.Join(strings.Fields(f.Formula), "")] = f.Value
+			continue
+		}
+		c.Factors = append(c.Factors, newTraceLine(f))
+	}
+	if zone != nil {
+		tribFt := m.TribIn / 12
+		for _, l := range []struct {
+			name string
+			psf  float64
+		}{{"D", zone.DeadPsf}, {"L", zone.LivePsf}, {"Lr", zone.RoofLivePsf}, {"S", zone.SnowPsf}, {"W down", zone.WindDownPsf}, {"W up", zone.WindUpPsf}} {
+			if l.psf == 0 {
+				continue
+			}
+			c.AreaLoads = append(c.AreaLoads, areaLoad{Load: l.name, Psf: fmtNum(l.psf),
+				Subst: fmtNum(l.psf) + "(" + fmtNum(m.TribIn) + " / 12)", WPlf: fmtNum(l.psf * tribFt)})
+		}
+		combos := r.Assumptions.Combinations
+		if len(combos) == 0 {
+			combos = defaultCombos
+		}
+		c.Combos, c.ComboProblems = comboLoads(combos, zone, m.TribIn, cd)
+	}
+	for _, ch := range m.Checks {
+		t := checkTitles[ch.Kind]
+		if t[0] == "" {
+			t = [2]string{ch.Kind, ""}
+		}
+		cc := checkCalc{Title: t[0], Kind: ch.Kind, Combo: ch.Combo, Clause: t[1],
+			Actual: fmtNum(ch.Actual), Allowable: fmtNum(ch.Allowable), Unit: ch.Unit, Ratio: ratioText(ch.Ratio),
+			Band: bandClass(ch.Ratio, "")}
+		switch {
+		case !finite(ch.Ratio):
+			cc.Verdict = "not evaluated"
+		case ch.Ratio <= 1:
+			cc.Verdict = "OK"
+		default:
+			cc.Verdict = "NOT OK"
+		}
+		for _, it := range ch.Trace {
+			cc.Lines = append(cc.Lines, newTraceLine(it))
+		}
+		c.Checks = append(c.Checks, cc)
+	}
+	for _, s := range m.BlockingSteps {
+		v := "passes"
+		if !finite(s.Ratio) || s.Ratio > 1 {
+			v = "fails"
+		}
+		c.Steps = append(c.Steps, stepRow{Rows: strconv.Itoa(s.RowsPerSpan), Lu: fmtNum(s.LuIn), CL: fmtNum(s.CL), Ratio: ratioText(s.Ratio), Verdict: v})
+	}
+}
+
+func newTraceLine(t TraceItem) traceLine {
+	l := traceLine{Name: t.Name, Formula: t.Formula, Subst: t.Subst, Value: fmtNum(t.Value), Unit: t.Unit, Source: t.Source}
+	if t.Subst == "" && wordy(t.Formula) {
+		l.Note, l.Formula = t.Formula, ""
+	}
+	return l
+}
+
+// wordy reports whether a formula is written in words ("largest moment
+// compressing this edge") rather than symbols ("b d^2 / 6"): it holds a
+// run of four or more letters that is not a function name.
+func wordy(s string) bool {
+	run := 0
+	start := 0
+	for i := 0; i <= len(s); i++ {
+		if i < len(s) && (s[i] >= 'a' && s[i] <= 'z' || s[i] >= 'A' && s[i] <= 'Z') {
+			if run == 0 {
+				start = i
+			}
+			run++
+			continue
+		}
+		if run >= 4 && s[start:i] != "sqrt" {
+			return true
+		}
+		run = 0
+	}
+	return false
+}
+
+func sourceSuffix(src string) string {
+	if src == "" {
+		return ""
+	}
+	return ", " + src
+}
+
+// limitText prints a deflection limit as L/360, or "not checked" for 0.
+func limitText(n float64) string {
+	if !finite(n) || n <= 0 {
+		return "not checked"
+	}
+	return "L/" + fmtNum(n)
+}
+
+// anchorSafe keeps letters, digits, '-' and '_' of a mark for an HTML id.
+func anchorSafe(s string) string {
+	return strings.Map(func(r rune) rune {
+		if r >= 'a' && r <= 'z' || r >= 'A' && r <= 'Z' || r >= '0' && r <= '9' || r == '-' || r == '_' {
+			return r
+		}
+		return '_'
+	}, s)
+}
+
+// fmtNum prints a number with about four significant figures: whole
+// numbers from 1,000 up (with thousands separators), then at most 1, 2 or 3
+// decimals, trailing zeros dropped; "n/a" for NaN or Inf.
+func fmtNum(v float64) string {
+	if !finite(v) {
+		return "n/a"
+	}
+	a := math.Abs(v)
+	prec := 3
+	switch {
+	case a >= 1000:
+		prec = 0
+	case a >= 100:
+		prec = 1
+	case a >= 10:
+		prec = 2
+	}
+	s := strconv.FormatFloat(v, 'f', prec, 64)
+	if prec > 0 {
+		s = strings.TrimRight(s, "0")
+		s = strings.TrimSuffix(s, ".")
+	}
+	if s == "-0" {
+		s = "0"
+	}
+	if prec == 0 && a >= 1000 {
+		neg := strings.HasPrefix(s, "-")
+		digits := strings.TrimPrefix(s, "-")
+		var b strings.Builder
+		for i, d := range digits {
+			if i > 0 && (len(digits)-i)%3 == 0 {
+				b.WriteByte(',')
+			}
+			b.WriteRune(d)
+		}
+		s = b.String()
+		if neg {
+			s = "-" + s
+		}
+	}
+	return s
+}

@@ -1,0 +1,462 @@
+package export
+
+import (
+	"html/template"
+	"math"
+	"strconv"
+	"unicode/utf8"
+)
+
+// labelEveryMemberUpTo is the largest plan whose members each get a mark
+// label; larger plans label a member only where the mark changes from the
+// previous member in the Results order (position order), which still names
+// every run, and failing or erroring members always.
+const labelEveryMemberUpTo = 2000
+
+// planSVG writes the plan as one <svg> element and the member details for
+// the hover panel as a JavaScript array. It is written by hand into one
+// buffer, not through the template, so that a plan of 100,000 members stays
+// fast: every string is escaped by appendHTML or appendJSString.
+//
+// The drawing is in inches with y negated, so north (drawing +y) is up on
+// the page while text stays upright.
+func planSVG(r *Results, g *PlanGeometry) (template.HTML, template.JS) {
+	toInch, ok := UnitToInch(r.DrawingUnits)
+	if !ok {
+		toInch = 1
+	}
+	type seg struct{ a, b [2]float64 }
+	segs := make([]seg, len(r.Members))
+	var bb bbox
+	minGap := math.Inf(1)
+	for i := range r.Members {
+		m := &r.Members[i]
+		a, b := inches(m.Start, m.End, m.StartIn, m.EndIn, toInch)
+		segs[i] = seg{a, b}
+		bb.add(a)
+		bb.add(b)
+		for _, gap := range [2]float64{m.SpacingIn, m.TribIn} {
+			if finite(gap) && gap > 0 && gap < minGap {
+				minGap = gap
+			}
+		}
+	}
+	for _, p := range g.Supports {
+		for _, q := range p.Points {
+			bb.add(q)
+		}
+	}
+	for _, z := range g.Zones {
+		for _, q := range z.Points {
+			bb.add(q)
+		}
+	}
+	rows := make([]seg, len(r.BlockingRows))
+	for i := range r.BlockingRows {
+		br := &r.BlockingRows[i]
+		a, b := inches(br.Start, br.End, br.StartIn, br.EndIn, toInch)
+		rows[i] = seg{a, b}
+		bb.add(a)
+		bb.add(b)
+	}
+	if bb.empty() {
+		bb.add([2]float64{0, 0})
+		bb.add([2]float64{120, 120})
+	}
+	w, h := bb.hi[0]-bb.lo[0], bb.hi[1]-bb.lo[1]
+	ext := math.Max(w, h)
+	if ext <= 0 {
+		ext = 120
+	}
+	pad := 0.04 * ext
+	textH := LabelHeightIn(ext)
+	if !math.IsInf(minGap, 1) && textH > 0.6*minGap {
+		textH = 0.6 * minGap
+	}
+
+	buf := make([]byte, 0, 256+len(r.Members)*200)
+	buf = append(buf, `<svg id="plan-svg" xmlns="http://www.w3.org/2000/svg" preserveAspectRatio="xMidYMid meet" role="img" aria-label="framing plan coloured by ratio" viewBox="`...)
+	buf = appendCoord(buf, bb.lo[0]-pad)
+	buf = append(buf, ' ')
+	buf = appendCoord(buf, -bb.hi[1]-pad)
+	buf = append(buf, ' ')
+	buf = appendCoord(buf, w+2*pad)
+	buf = append(buf, ' ')
+	buf = appendCoord(buf, h+2*pad)
+	buf = append(buf, `">`+"\n"...)
+
+	buf = append(buf, `<g id="zones">`...)
+	for _, z := range g.Zones {
+		if len(z.Points) < 3 || !finitePoints(z.Points) {
+			continue
+		}
+		buf = append(buf, `<polygon class="zone" points="`...)
+		buf = appendPoints(buf, z.Points)
+		buf = append(buf, `"><title>zone `...)
+		buf = appendHTML(buf, z.Name)
+		buf = append(buf, `</title></polygon>`...)
+		c := centroid(z.Points)
+		buf = append(buf, `<text class="zone-name" text-anchor="middle" x="`...)
+		buf = appendCoord(buf, c[0])
+		buf = append(buf, `" y="`...)
+		buf = appendCoord(buf, -c[1])
+		buf = append(buf, `" font-size="`...)
+		buf = appendCoord(buf, 1.6*textH)
+		buf = append(buf, `">`...)
+		buf = appendHTML(buf, z.Name)
+		buf = append(buf, "</text>\n"...)
+	}
+	buf = append(buf, "</g>\n"+`<g id="supports">`...)
+	for _, s := range g.Supports {
+		if len(s.Points) < 2 || !finitePoints(s.Points) {
+			continue
+		}
+		if s.Closed {
+			buf = append(buf, `<polygon class="support" points="`...)
+		} else {
+			buf = append(buf, `<polyline class="support" points="`...)
+		}
+		buf = appendPoints(buf, s.Points)
+		buf = append(buf, `"><title>`...)
+		buf = appendHTML(buf, s.Layer)
+		buf = append(buf, "</title></poly"...)
+		if s.Closed {
+			buf = append(buf, "gon>\n"...)
+		} else {
+			buf = append(buf, "line>\n"...)
+		}
+	}
+
+	// One <line> per member: id, band class, colour. Failing and erroring
+	// members carry an extra class that draws them heavier.
+	buf = append(buf, "</g>\n"+`<g id="members">`+"\n"...)
+	for i := range r.Members {
+		m := &r.Members[i]
+		band := bandClass(m.MaxRatio, m.Status)
+		buf = append(buf, `<line id="m-`...)
+		buf = appendHTML(buf, m.ID)
+		buf = append(buf, `" class="j `...)
+		buf = append(buf, band...)
+		switch m.Status {
+		case StatusFail:
+			buf = append(buf, " fail"...)
+		case StatusError:
+			buf = append(buf, " err"...)
+		}
+		buf = append(buf, `" data-i="`...)
+		buf = strconv.AppendInt(buf, int64(i), 10)
+		s := segs[i]
+		if finite(s.a[0]) && finite(s.a[1]) && finite(s.b[0]) && finite(s.b[1]) {
+			buf = append(buf, `" x1="`...)
+			buf = appendCoord(buf, s.a[0])
+			buf = append(buf, `" y1="`...)
+			buf = appendCoord(buf, -s.a[1])
+			buf = append(buf, `" x2="`...)
+			buf = appendCoord(buf, s.b[0])
+			buf = append(buf, `" y2="`...)
+			buf = appendCoord(buf, -s.b[1])
+		}
+		buf = append(buf, `" stroke="`...)
+		if m.Status == StatusError {
+			buf = append(buf, errorColour...)
+		} else {
+			buf = appendColour(buf, m.MaxRatio)
+		}
+		buf = append(buf, "\"/>\n"...)
+	}
+
+	buf = append(buf, "</g>\n"+`<g id="blocking">`...)
+	for i := range r.BlockingRows {
+		br := &r.BlockingRows[i]
+		s := rows[i]
+		if !finite(s.a[0]) || !finite(s.a[1]) || !finite(s.b[0]) || !finite(s.b[1]) {
+			continue
+		}
+		buf = append(buf, `<line id="b-`...)
+		buf = appendHTML(buf, br.ID)
+		if br.Existing {
+			buf = append(buf, `" class="blk-existing" x1="`...)
+		} else {
+			buf = append(buf, `" class="blk-add" x1="`...)
+		}
+		buf = appendCoord(buf, s.a[0])
+		buf = append(buf, `" y1="`...)
+		buf = appendCoord(buf, -s.a[1])
+		buf = append(buf, `" x2="`...)
+		buf = appendCoord(buf, s.b[0])
+		buf = append(buf, `" y2="`...)
+		buf = appendCoord(buf, -s.b[1])
+		buf = append(buf, `"><title>blocking row `...)
+		buf = appendHTML(buf, br.ID)
+		buf = append(buf, ", run "...)
+		buf = appendHTML(buf, br.Run)
+		buf = append(buf, ", "...)
+		buf = strconv.AppendInt(buf, int64(br.Pieces), 10)
+		buf = append(buf, " pieces "...)
+		buf = appendHTML(buf, br.Size)
+		if br.Existing {
+			buf = append(buf, " (existing)"...)
+		} else {
+			buf = append(buf, " to add"...)
+		}
+		buf = append(buf, "</title></line>\n"...)
+	}
+
+	buf = append(buf, "</g>\n"+`<g id="labels" font-size="`...)
+	buf = appendCoord(buf, textH)
+	buf = append(buf, `">`+"\n"...)
+	every := len(r.Members) <= labelEveryMemberUpTo
+	for i := range r.Members {
+		m := &r.Members[i]
+		s := segs[i]
+		if !finite(s.a[0]) || !finite(s.a[1]) || !finite(s.b[0]) || !finite(s.b[1]) {
+			continue
+		}
+		class := "lbl"
+		switch {
+		case m.Status == StatusFail:
+			class = "lbl lbl-fail"
+		case m.Status == StatusError:
+			class = "lbl lbl-err"
+		case every || i == 0 || m.Mark != r.Members[i-1].Mark:
+		default:
+			continue
+		}
+		buf = appendLabel(buf, m, class, s.a, s.b, textH)
+	}
+	buf = append(buf, "</g>\n</svg>"...)
+
+	js := make([]byte, 0, 64+len(r.Members)*96)
+	js = append(js, '[')
+	for i := range r.Members {
+		m := &r.Members[i]
+		if i > 0 {
+			js = append(js, ",\n"...)
+		}
+		js = append(js, '[')
+		js = appendJSString(js, m.ID)
+		js = append(js, ',')
+		js = appendJSString(js, m.Mark)
+		js = append(js, ',')
+		js = appendJSString(js, m.Size+" "+m.Species+" "+m.Grade)
+		js = append(js, ',')
+		js = appendJSString(js, ftInList(m.SpansIn))
+		js = append(js, ',')
+		js = appendJSString(js, ratioText(m.MaxRatio))
+		js = append(js, ',')
+		js = appendJSString(js, m.Governing)
+		js = append(js, ',')
+		js = appendJSString(js, m.Status)
+		js = append(js, ',')
+		js = appendJSString(js, m.Source)
+		js = append(js, ',')
+		js = appendJSString(js, checkRatios(m))
+		js = append(js, ']')
+	}
+	js = append(js, ']')
+	return template.HTML(buf), template.JS(js)
+}
+
+// appendLabel writes the text at a member's midpoint, along the member and
+// kept readable (angle in (-90, 90]): the mark, with the ratio for a
+// failing member and "ERROR" for a member in error. Marks sit at 30% of the
+// member's length, clear of mid-span blocking rows; failure and error
+// labels at the midpoint.
+func appendLabel(buf []byte, m *Member, class string, a, b [2]float64, textH float64) []byte {
+	text := m.Mark
+	if text == "" {
+		text = m.ID
+	}
+	switch m.Status {
+	case StatusFail:
+		text += " " + ratioText(m.MaxRatio)
+	case StatusError:
+		text = m.ID + " ERROR"
+	}
+	ang := math.Atan2(b[1]-a[1], b[0]-a[0]) * 180 / math.Pi
+	for ang > 90 {
+		ang -= 180
+	}
+	for ang <= -90 {
+		ang += 180
+	}
+	// Lift the text off the line by a third of its height, perpendicular
+	// to the member (drawing frame, +y north).
+	rad := ang * math.Pi / 180
+	off := 0.35 * textH
+	t := 0.5
+	if m.Status == StatusPass {
+		t = 0.3
+	}
+	x := a[0] + t*(b[0]-a[0]) - math.Sin(rad)*off
+	y := a[1] + t*(b[1]-a[1]) + math.Cos(rad)*off
+	buf = append(buf, `<text class="`...)
+	buf = append(buf, class...)
+	buf = append(buf, `" text-anchor="middle" x="`...)
+	buf = appendCoord(buf, x)
+	buf = append(buf, `" y="`...)
+	buf = appendCoord(buf, -y)
+	if ang != 0 {
+		buf = append(buf, `" transform="rotate(`...)
+		buf = appendCoord(buf, -ang)
+		buf = append(buf, ' ')
+		buf = appendCoord(buf, x)
+		buf = append(buf, ' ')
+		buf = appendCoord(buf, -y)
+		buf = append(buf, ')')
+	}
+	buf = append(buf, `">`...)
+	buf = appendHTML(buf, text)
+	return append(buf, "</text>\n"...)
+}
+
+// checkRatios lists a member's ratios by check kind for the details panel:
+// "bending-top 0.805 (D+L); shear 0.280 (D+L)".
+func checkRatios(m *Member) string {
+	b := make([]byte, 0, 32*len(m.Checks))
+	for i, c := range m.Checks {
+		if i > 0 {
+			b = append(b, "; "...)
+		}
+		b = append(b, c.Kind...)
+		b = append(b, ' ')
+		b = append(b, ratioText(c.Ratio)...)
+		b = append(b, " ("...)
+		b = append(b, c.Combo...)
+		b = append(b, ')')
+	}
+	return string(b)
+}
+
+// bbox is a bounding box of finite points.
+type bbox struct {
+	lo, hi [2]float64
+	n      int
+}
+
+func (bb *bbox) add(p [2]float64) {
+	if !finite(p[0]) || !finite(p[1]) {
+		return
+	}
+	if bb.n == 0 {
+		bb.lo, bb.hi = p, p
+	} else {
+		bb.lo = [2]float64{math.Min(bb.lo[0], p[0]), math.Min(bb.lo[1], p[1])}
+		bb.hi = [2]float64{math.Max(bb.hi[0], p[0]), math.Max(bb.hi[1], p[1])}
+	}
+	bb.n++
+}
+
+func (bb *bbox) empty() bool { return bb.n == 0 }
+
+func finitePoints(ps [][2]float64) bool {
+	for _, p := range ps {
+		if !finite(p[0]) || !finite(p[1]) {
+			return false
+		}
+	}
+	return true
+}
+
+// centroid returns the mean of the outline's points: enough to place a
+// zone's name inside a rectangle or a convex outline.
+func centroid(ps [][2]float64) [2]float64 {
+	var c [2]float64
+	for _, p := range ps {
+		c[0] += p[0]
+		c[1] += p[1]
+	}
+	n := float64(len(ps))
+	return [2]float64{c[0] / n, c[1] / n}
+}
+
+// appendPoints writes "x,-y x,-y ..." for an SVG points attribute.
+func appendPoints(b []byte, ps [][2]float64) []byte {
+	for i, p := range ps {
+		if i > 0 {
+			b = append(b, ' ')
+		}
+		b = appendCoord(b, p[0])
+		b = append(b, ',')
+		b = appendCoord(b, -p[1])
+	}
+	return b
+}
+
+// appendCoord writes v to 0.01 with trailing zeros dropped; -0 as 0.
+func appendCoord(b []byte, v float64) []byte {
+	v = math.Round(v*100) / 100
+	if v == 0 {
+		return append(b, '0')
+	}
+	n := len(b)
+	b = strconv.AppendFloat(b, v, 'f', 2, 64)
+	for b[len(b)-1] == '0' {
+		b = b[:len(b)-1]
+	}
+	if b[len(b)-1] == '.' {
+		b = b[:len(b)-1]
+	}
+	if len(b) == n {
+		b = append(b, '0')
+	}
+	return b
+}
+
+// appendHTML appends s escaped for HTML text and quoted attribute values.
+func appendHTML(b []byte, s string) []byte {
+	for i := 0; i < len(s); i++ {
+		switch c := s[i]; c {
+		case '&':
+			b = append(b, "&amp;"...)
+		case '<':
+			b = append(b, "&lt;"...)
+		case '>':
+			b = append(b, "&gt;"...)
+		case '"':
+			b = append(b, "&#34;"...)
+		case '\'':
+			b = append(b, "&#39;"...)
+		case 0:
+			b = append(b, "\uFFFD"...)
+		default:
+			b = append(b, c)
+		}
+	}
+	return b
+}
+
+// appendJSString appends s as a double-quoted JavaScript (and JSON) string
+// that is safe inside a <script> element: <, >, & and the line separators
+// are written as \u escapes, invalid UTF-8 as U+FFFD.
+func appendJSString(b []byte, s string) []byte {
+	const hex = "0123456789abcdef"
+	b = append(b, '"')
+	for i := 0; i < len(s); {
+		c := s[i]
+		if c < utf8.RuneSelf {
+			switch {
+			case c == '"' || c == '\\':
+				b = append(b, '\\', c)
+			case c < 0x20 || c == '<' || c == '>' || c == '&' || c == 0x7f:
+				b = append(b, '\\', 'u', '0', '0', hex[c>>4], hex[c&15])
+			default:
+				b = append(b, c)
+			}
+			i++
+			continue
+		}
+		r, size := utf8.DecodeRuneInString(s[i:])
+		switch {
+		case r == utf8.RuneError && size == 1:
+			b = append(b, `\ufffd`...)
+		case r == '\u2028' || r == '\u2029':
+			b = append(b, `\u202`...)
+			b = append(b, hex[r&15])
+		default:
+			b = append(b, s[i:i+size]...)
+		}
+		i += size
+	}
+	return append(b, '"')
+}

@@ -1,0 +1,252 @@
+package export
+
+import (
+	"bytes"
+	"encoding/json"
+	"math"
+	"os"
+	"path/filepath"
+	"regexp"
+	"strconv"
+	"strings"
+	"testing"
+	"time"
+
+	"golang.org/x/net/html"
+)
+
+// reportWhen is the fixed date of the report tests.
+var reportWhen = time.Date(2026, 3, 14, 9, 30, 0, 0, time.UTC)
+
+// loadReportFixture reads testdata/report_results.json and
+// report_geometry.json, written by testdata/report_gen from package check's
+// results for a made-up plan (see the doc comment of report_gen).
+func loadReportFixture(t testing.TB) (*Results, *PlanGeometry) {
+	t.Helper()
+	var r Results
+	var g PlanGeometry
+	for name, v := range map[string]any{"report_results.json": &r, "report_geometry.json": &g} {
+		data, err := os.ReadFile(filepath.Join("testdata", name))
+		if err != nil {
+			t.Fatal(err)
+		}
+		if err := json.Unmarshal(data, v); err != nil {
+			t.Fatalf("%s: %v", name, err)
+		}
+	}
+	return &r, &g
+}
+
+// writeAndParse writes the report of r to a temporary folder and parses it.
+func repWriteParse(t *testing.T, r *Results, g *PlanGeometry) (*html.Node, []byte) {
+	t.Helper()
+	dir := t.TempDir()
+	path := filepath.Join(dir, "report.html")
+	if err := WriteReport(path, r, g, reportWhen); err != nil {
+		t.Fatal(err)
+	}
+	noTempReportFiles(t, dir)
+	data, err := os.ReadFile(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	doc, err := html.Parse(bytes.NewReader(data))
+	if err != nil {
+		t.Fatal(err)
+	}
+	return doc, data
+}
+
+func noTempReportFiles(t *testing.T, dir string) {
+	t.Helper()
+	m, _ := filepath.Glob(filepath.Join(dir, ".*.tmp-*"))
+	if len(m) > 0 {
+		t.Errorf("temporary files left behind: %v", m)
+	}
+}
+
+// TestReportOut writes the fixture's report to $FRAMECHECK_REPORT_OUT for
+// .ci/checks/report-chromium.sh; without the variable it is skipped.
+func TestReportOut(t *testing.T) {
+	out := os.Getenv("FRAMECHECK_REPORT_OUT")
+	if out == "" {
+		t.Skip("FRAMECHECK_REPORT_OUT not set")
+	}
+	r, g := loadReportFixture(t)
+	if err := WriteReport(out, r, g, reportWhen); err != nil {
+		t.Fatal(err)
+	}
+}
+
+func TestWriteReportSections(t *testing.T) {
+	r, g := loadReportFixture(t)
+	doc, data := repWriteParse(t, r, g)
+	for _, id := range []string{"summary", "plan", "schedule", "takeoff", "calculations", "assumptions", "cautions", "plan-svg", "members", "supports", "zones", "blocking", "worst", "errors", "totals"} {
+		if repByID(doc, id) == nil {
+			t.Errorf("no element with id %q", id)
+		}
+	}
+	caut := repText(repByID(doc, "cautions"))
+	for _, c := range Cautions {
+		if !strings.Contains(caut, c) {
+			t.Errorf("cautions section lacks %q", c)
+		}
+	}
+	sum := repText(repByID(doc, "summary"))
+	for _, want := range []string{"2026-03-14 09:30 UTC", r.Plan, "NDS 2018", "ASCE 7-16", "IBC 2018"} {
+		if !strings.Contains(sum, want) {
+			t.Errorf("summary lacks %q", want)
+		}
+	}
+	// The counts of the summary cards are those of Results.Summary.
+	var cards []string
+	repWalk(repByID(doc, "summary"), func(n *html.Node) {
+		if n.Type == html.ElementNode && n.Data == "div" && repHasClass(n, "card") {
+			cards = append(cards, repText(repFirstTag(n, "b")))
+		}
+	})
+	want := []string{strconv.Itoa(r.Summary.Members), strconv.Itoa(r.Summary.Pass), strconv.Itoa(r.Summary.Fail), strconv.Itoa(r.Summary.Error), strconv.Itoa(len(r.Marks))}
+	if strings.Join(cards, " ") != strings.Join(want, " ") {
+		t.Errorf("summary cards %v, want %v", cards, want)
+	}
+	// The worst member listed first has the largest ratio of the fixture.
+	worst := repRows(repByID(doc, "worst"))
+	if len(worst) < 2 {
+		t.Fatalf("worst table has %d rows", len(worst))
+	}
+	best := ""
+	maxR := -1.0
+	for _, m := range r.Members {
+		if m.Status != StatusError && m.MaxRatio > maxR {
+			best, maxR = m.ID, m.MaxRatio
+		}
+	}
+	if worst[1][0] != best {
+		t.Errorf("worst member listed %q, want %q", worst[1][0], best)
+	}
+	// Schedule: one row per mark; takeoff totals as in Results.
+	if got := len(repRows(repByID(doc, "schedule"))); got != len(r.Marks)+1 {
+		t.Errorf("schedule has %d rows, want %d marks + header", got, len(r.Marks))
+	}
+	tot := repRows(repByID(doc, "totals"))[1]
+	if tot[0] != strconv.Itoa(r.Takeoff.Totals.JoistCount) || tot[2] != strconv.Itoa(r.Takeoff.Totals.BlockingPieces) {
+		t.Errorf("totals row %v, want joists %d, blocking pieces %d", tot, r.Takeoff.Totals.JoistCount, r.Takeoff.Totals.BlockingPieces)
+	}
+	if !bytes.Contains(data, []byte("@media print")) || !bytes.Contains(data, []byte("break-before:page")) {
+		t.Error("no print CSS with page breaks")
+	}
+	for _, bad := range []string{"http://", "https://"} {
+		for _, line := range strings.Split(string(data), "\n") {
+			if strings.Contains(line, bad) && !strings.Contains(line, "http://www.w3.org/2000/svg") {
+				t.Errorf("network address in the page: %.120s", line)
+			}
+		}
+	}
+}
+
+// wantBand is the band of a ratio as the legend states it (our own bands,
+// common practice, no source).
+func repWantBand(ratio float64, status string) string {
+	switch {
+	case status == StatusError:
+		return "band-error"
+	case status == StatusFail || ratio > 1:
+		return "band-over"
+	case ratio >= 0.9:
+		return "band-90-100"
+	case ratio >= 0.75:
+		return "band-75-90"
+	case ratio >= 0.5:
+		return "band-50-75"
+	}
+	return "band-lt50"
+}
+
+func TestWriteReportMemberElements(t *testing.T) {
+	r, g := loadReportFixture(t)
+	doc, _ := repWriteParse(t, r, g)
+	group := repByID(doc, "members")
+	byMember := map[string][]*html.Node{}
+	repWalk(group, func(n *html.Node) {
+		if n.Type == html.ElementNode && n.Data != "g" {
+			byMember[repAttr(n, "id")] = append(byMember[repAttr(n, "id")], n)
+		}
+	})
+	if len(byMember) != len(r.Members) {
+		t.Errorf("%d member elements, want %d", len(byMember), len(r.Members))
+	}
+	hex := regexp.MustCompile(`^#[0-9a-f]{6}$`)
+	for _, m := range r.Members {
+		els := byMember["m-"+m.ID]
+		if len(els) != 1 {
+			t.Errorf("%s: %d elements, want 1", m.ID, len(els))
+			continue
+		}
+		el := els[0]
+		if el.Data != "line" {
+			t.Errorf("%s: <%s>, want <line>", m.ID, el.Data)
+		}
+		if b := repWantBand(m.MaxRatio, m.Status); !repHasClass(el, b) {
+			t.Errorf("%s ratio %.3f %s: class %q, want %s", m.ID, m.MaxRatio, m.Status, repAttr(el, "class"), b)
+		}
+		if m.Status == StatusFail && !repHasClass(el, "fail") || m.Status == StatusError && !repHasClass(el, "err") {
+			t.Errorf("%s %s: class %q lacks the heavy style", m.ID, m.Status, repAttr(el, "class"))
+		}
+		if !hex.MatchString(repAttr(el, "stroke")) {
+			t.Errorf("%s: stroke %q", m.ID, repAttr(el, "stroke"))
+		}
+		// Inches, y negated so north is up; coordinates to 0.01 in.
+		a, b := m.StartIn, m.EndIn
+		if a == ([2]float64{}) && b == ([2]float64{}) {
+			f, _ := UnitToInch(r.DrawingUnits)
+			a, b = [2]float64{m.Start[0] * f, m.Start[1] * f}, [2]float64{m.End[0] * f, m.End[1] * f}
+		}
+		for k, want := range map[string]float64{"x1": a[0], "y1": -a[1], "x2": b[0], "y2": -b[1]} {
+			got, err := strconv.ParseFloat(repAttr(el, k), 64)
+			if err != nil || math.Abs(got-want) > 0.005 {
+				t.Errorf("%s: %s = %q, want %.2f", m.ID, k, repAttr(el, k), want)
+			}
+		}
+	}
+	// Failing and erroring members are labelled.
+	labels := repText(repByID(doc, "labels"))
+	for _, m := range r.Members {
+		if m.Status == StatusError && !strings.Contains(labels, m.ID+" ERROR") {
+			t.Errorf("no label %q", m.ID+" ERROR")
+		}
+		if m.Status == StatusFail && !strings.Contains(labels, m.Mark+" "+strconv.FormatFloat(m.MaxRatio, 'f', 3, 64)) {
+			t.Errorf("no label for failing %s", m.ID)
+		}
+	}
+	// One line per blocking row to add.
+	var adds int
+	repWalk(repByID(doc, "blocking"), func(n *html.Node) {
+		if n.Type == html.ElementNode && repHasClass(n, "blk-add") {
+			adds++
+		}
+	})
+	want := 0
+	for _, br := range r.BlockingRows {
+		if !br.Existing {
+			want++
+		}
+	}
+	if adds != want || want == 0 {
+		t.Errorf("%d blocking rows drawn, want %d (fixture must have some)", adds, want)
+	}
+}
+
+// closeTo compares a printed number with the value it stands for: the
+// report prints about four significant figures (at most three decimals), so
+// it allows half a unit of the last place printed.
+func repCloseTo(text string, want float64) bool {
+	got, err := strconv.ParseFloat(strings.ReplaceAll(text, ",", ""), 64)
+	if err != nil {
+		return false
+	}
+	tol := math.Max(5e-4*math.Abs(want), 5e-4+1e-12)
+	if math.Abs(want) >= 1000 {
+		tol = 0.5 + 1e-9
+	}
+	return math.Abs(got-want) <= tol
+}

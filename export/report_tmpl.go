@@ -1,0 +1,237 @@
+package export
+
+import (
+	"html/template"
+	"strconv"
+)
+
+// reportTemplate is the page. Section ids (summary, plan, schedule,
+// takeoff, calculations, mark-<mark>, assumptions, cautions) are stable:
+// the tests and any reader's links use them.
+var reportTemplate = template.Must(template.New("report").Funcs(template.FuncMap{"num": fmtNum, "bf": boardFeet}).Parse(reportHTML))
+
+// boardFeet prints board feet to 0.1, or "n/a".
+func boardFeet(v float64) string {
+	if !finite(v) {
+		return "n/a"
+	}
+	return strconv.FormatFloat(v, 'f', 1, 64)
+}
+
+const reportCSS = `
+:root{--ink:#1b1f24;--muted:#5c6570;--rule:#d5dae0;--band:#f4f6f8}
+*{box-sizing:border-box}
+body{font:14px/1.45 system-ui,-apple-system,"Segoe UI",Roboto,"DejaVu Sans",sans-serif;color:var(--ink);margin:0;background:#fff}
+header.top{padding:14px 24px;border-bottom:3px solid var(--ink);display:flex;justify-content:space-between;align-items:baseline;flex-wrap:wrap;gap:8px}
+header.top h1{font-size:20px;margin:0}
+header.top .meta{color:var(--muted)}
+nav.toc{padding:6px 24px;border-bottom:1px solid var(--rule);font-size:13px}
+nav.toc a{margin-right:14px;color:var(--ink)}
+main{padding:0 24px 40px}
+section{margin-top:22px}
+h2{font-size:17px;border-bottom:1px solid var(--rule);padding-bottom:3px;margin:0 0 10px}
+h3{font-size:15px;margin:16px 0 6px}
+table{border-collapse:collapse;margin:4px 0 10px;font-size:13px}
+th,td{border:1px solid var(--rule);padding:3px 8px;text-align:left;vertical-align:top}
+th{background:var(--band);font-weight:600}
+td.n{text-align:right;font-variant-numeric:tabular-nums}
+.sum-grid{display:grid;grid-template-columns:minmax(300px,1fr) minmax(300px,1.6fr);gap:24px;align-items:start}
+h3.tight{margin-top:0}
+#worst{font-size:12px}#worst td,#worst th{padding:1px 6px}
+.cards{display:flex;gap:12px;flex-wrap:wrap}
+.card{border:1px solid var(--rule);border-radius:4px;padding:6px 12px;min-width:84px}
+.card b{display:block;font-size:22px}
+.card.pass b{color:#1e7a52}.card.fail b{color:#b3261e}.card.error b{color:#6b6b6b}
+.status-pass{color:#1e7a52}.status-fail{color:#b3261e;font-weight:600}.status-error{color:#6b6b6b;font-weight:600}
+.sw{display:inline-block;width:26px;height:10px;border-radius:2px;vertical-align:middle;margin-right:6px}
+.plan-wrap{position:relative;border:1px solid var(--rule);background:#fbfbfa}
+#plan-svg{display:block;width:100%;height:min(70vh,820px);min-height:420px;cursor:grab}
+#plan-svg .zone{fill:#e8eef5;fill-opacity:.55;stroke:#7d93ab;stroke-dasharray:6 4;vector-effect:non-scaling-stroke;stroke-width:1px}
+#plan-svg .zone-name{fill:#7d93ab;font-weight:700;opacity:.8}
+#plan-svg .support{fill:none;stroke:#3a3f45;stroke-width:4px;vector-effect:non-scaling-stroke;stroke-linecap:square}
+#plan-svg .j{stroke-width:2px;vector-effect:non-scaling-stroke;stroke-linecap:round}
+#plan-svg .j.fail{stroke-width:5px}
+#plan-svg .j.err{stroke-width:4px;stroke-dasharray:8 5}
+#plan-svg .j:hover,#plan-svg .j.sel{stroke:#000 !important;stroke-width:6px}
+#plan-svg .blk-add{stroke:#0a8fa8;stroke-width:3px;stroke-dasharray:10 4;vector-effect:non-scaling-stroke}
+#plan-svg .blk-existing{stroke:#8a8f96;stroke-width:1.5px;vector-effect:non-scaling-stroke}
+#plan-svg .lbl{fill:#333;pointer-events:none}
+#plan-svg .lbl-fail{fill:#b3261e;font-weight:700}
+#plan-svg .lbl-err{fill:#555;font-weight:700}
+#details{position:absolute;top:8px;right:8px;background:#fff;border:1px solid var(--rule);border-radius:4px;padding:6px 10px;font-size:12px;max-width:360px;box-shadow:0 1px 4px rgba(0,0,0,.12)}
+#details:empty{display:none}
+.legend{display:flex;gap:14px;flex-wrap:wrap;align-items:center;margin:8px 0;font-size:12px}
+.scale{display:block;width:220px;height:12px;border:1px solid var(--rule);background:linear-gradient(90deg,#2b6cb0 0%,#1e9a6e 33.3%,#d9a41a 53.3%,#d7301f 66.7%,#6a1b9a 100%)}
+.scale-ticks{display:flex;justify-content:space-between;width:220px;font-size:10px;color:var(--muted)}
+.hint{color:var(--muted);font-size:12px}
+.calc{border-top:2px solid var(--ink);margin-top:26px;padding-top:6px}
+.calc h3{font-size:16px}
+.eq{font-family:"DejaVu Sans Mono",Consolas,monospace;font-size:12.5px;margin:1px 0 1px 12px;white-space:pre-wrap}
+.eq .sym{font-weight:700}
+.eq .val{font-weight:700}
+.eq .src{color:var(--muted);font-family:system-ui,sans-serif;font-size:11.5px;margin-left:10px}
+.eq .note{color:var(--muted)}
+.check{margin:8px 0 10px;padding:4px 0 6px 8px;border-left:4px solid var(--rule)}
+.check.band-over{border-left-color:#b3261e}
+.check h4{margin:2px 0 4px;font-size:14px}
+.check h4 .clause{font-weight:400;color:var(--muted);font-size:12px;margin-left:8px}
+.result{margin:3px 0 0 12px;font-weight:600}
+.result.ok{color:#1e7a52}.result.ng{color:#b3261e}
+.msgs{color:#b3261e}
+.cautions{border:2px solid #b3261e;border-radius:4px;padding:6px 16px;background:#fff7f6}
+@media print{
+  @page{size:letter;margin:0.5in}
+  body{font-size:10.5pt}
+  nav.toc,#details,.hint{display:none}
+  header.top{border-bottom-width:2px}
+  #plan{break-before:page;break-after:page}
+  #plan-svg{height:7.6in;min-height:0;cursor:auto}
+  .calc{break-before:page;border-top:none}
+  table,.check{break-inside:avoid}
+  a{color:inherit;text-decoration:none}
+}
+`
+
+const reportJS = `
+(function(){
+  var svg=document.getElementById('plan-svg'), out=document.getElementById('details');
+  if(!svg) return;
+  var vb=svg.viewBox.baseVal, home=[vb.x,vb.y,vb.width,vb.height], sel=null;
+  function set(x,y,w,h){vb.x=x;vb.y=y;vb.width=w;vb.height=h;}
+  function pt(e){var r=svg.getBoundingClientRect(),s=Math.max(vb.width/r.width,vb.height/r.height);
+    return [vb.x+(e.clientX-r.left-(r.width-vb.width/s)/2)*s, vb.y+(e.clientY-r.top-(r.height-vb.height/s)/2)*s, s];}
+  svg.addEventListener('wheel',function(e){e.preventDefault();var p=pt(e),k=e.deltaY<0?0.8:1.25;
+    set(p[0]-(p[0]-vb.x)*k,p[1]-(p[1]-vb.y)*k,vb.width*k,vb.height*k);},{passive:false});
+  var drag=null;
+  svg.addEventListener('mousedown',function(e){drag=[e.clientX,e.clientY,vb.x,vb.y,pt(e)[2]];});
+  window.addEventListener('mousemove',function(e){if(!drag)return;
+    set(drag[2]-(e.clientX-drag[0])*drag[4],drag[3]-(e.clientY-drag[1])*drag[4],vb.width,vb.height);});
+  window.addEventListener('mouseup',function(){drag=null;});
+  svg.addEventListener('dblclick',function(){set(home[0],home[1],home[2],home[3]);});
+  function text(tag,s){var el=document.createElement(tag);el.textContent=s;return el;}
+  function show(el,pin){var i=+el.getAttribute('data-i'),m=FC_MEMBERS[i];if(!m)return;
+    if(pin){if(sel)sel.classList.remove('sel');sel=el;el.classList.add('sel');}
+    out.textContent='';
+    out.appendChild(text('b',m[0]+(m[1]?'  mark '+m[1]:'')));
+    [['size',m[2]],['spans',m[3]],['max ratio',m[4]+(m[5]?' ('+m[5]+')':'')],['status',m[6]],['checks',m[8]],['drawn',m[7]]]
+      .forEach(function(r){if(r[1]){out.appendChild(document.createElement('br'));out.appendChild(text('span',r[0]+': '+r[1]));}});
+    if(m[1]){var a=document.createElement('a');a.href='#mark-'+m[1].replace(/[^A-Za-z0-9_-]/g,'_');a.textContent='calculation';
+      out.appendChild(document.createElement('br'));out.appendChild(a);}
+  }
+  svg.addEventListener('mouseover',function(e){if(e.target.classList.contains('j')&&!sel)show(e.target,false);});
+  svg.addEventListener('click',function(e){if(e.target.classList.contains('j'))show(e.target,true);
+    else if(sel){sel.classList.remove('sel');sel=null;out.textContent='';}});
+})();
+`
+
+const reportHTML = `<!DOCTYPE html>
+<html lang="en">
+<head>
+<meta charset="utf-8">
+<meta name="viewport" content="width=device-width, initial-scale=1">
+<title>{{.Title}}</title>
+<style>` + reportCSS + `</style>
+</head>
+<body>
+<header class="top"><h1>Joist check: {{.Plan}}</h1>
+<div class="meta">framecheck report · {{.Date}}</div></header>
+<nav class="toc"><a href="#summary">Summary</a><a href="#plan">Plan</a><a href="#schedule">Schedule</a><a href="#takeoff">Takeoff</a><a href="#calculations">Calculations</a><a href="#assumptions">Assumptions</a><a href="#cautions">Cautions</a></nav>
+<main>
+<section id="summary"><h2>Summary</h2>
+<div class="sum-grid"><div>
+<p>Plan <b>{{.Plan}}</b>, checked {{.Date}}.<br>Design basis: {{range $i, $e := .Editions}}{{if $i}}; {{end}}{{$e}}{{end}}.</p>
+<div class="cards">
+<div class="card"><b>{{.Summary.Members}}</b>members</div>
+<div class="card pass"><b>{{.Summary.Pass}}</b>pass</div>
+<div class="card fail"><b>{{.Summary.Fail}}</b>fail</div>
+<div class="card error"><b>{{.Summary.Error}}</b>error</div>
+<div class="card"><b>{{len .Marks}}</b>marks</div>
+</div>
+</div>
+<div><h3 class="tight">Worst members</h3>
+<table id="worst"><tr><th>member</th><th>mark</th><th>size</th><th>max ratio</th><th>governing check</th><th>status</th><th>drawn</th></tr>
+{{range .Worst}}<tr><td>{{.ID}}</td><td>{{.Mark}}</td><td>{{.Size}}</td><td class="n">{{.Ratio}}</td><td>{{.Governing}}</td><td class="status-{{.Status}}">{{.Status}}</td><td>{{.Source}}</td></tr>
+{{end}}</table>
+</div></div>
+</section>
+
+<section id="plan"><h2>Plan: members coloured by their largest ratio</h2>
+<div class="legend"><span><span class="scale"></span><span class="scale-ticks"><span>0</span><span>0.5</span><span>0.8</span><span>1.0</span><span>1.5</span></span></span>
+{{range .Legend}}<span class="{{.Class}}"><span class="sw" style="background:{{.Colour}}"></span>{{.Label}}</span>{{end}}
+<span><span class="sw" style="background:#0a8fa8;height:3px"></span>blocking row to add</span>
+<span><span class="sw" style="background:#3a3f45;height:4px"></span>support</span></div>
+<div class="plan-wrap">{{.PlanSVG}}<div id="details"></div></div>
+<p class="hint">North is up. Scroll to zoom, drag to pan, double-click to reset; hover or click a member for its details.</p>
+</section>
+
+{{if .ErrorRows}}<section id="errors-list"><h2>Members in error (not checked)</h2>
+<table id="errors"><tr><th>member</th><th>drawn</th><th>why</th></tr>
+{{range .ErrorRows}}<tr><td>{{.ID}}</td><td>{{.Source}}</td><td>{{range $i, $m := .Messages}}{{if $i}}<br>{{end}}{{$m}}{{end}}</td></tr>
+{{end}}</table>{{if .MoreErrors}}<p>and {{.MoreErrors}} more members in error (see results.json).</p>{{end}}
+</section>{{end}}
+
+<section id="schedule"><h2>Framing schedule</h2>
+<table><tr><th>mark</th><th>size</th><th>species</th><th>grade</th><th>zone</th><th>spacing</th><th>spans</th><th>count</th><th>blocking rows per span</th><th>max ratio</th><th>status</th></tr>
+{{range .Marks}}<tr class="{{.Band}}"><td><a href="#mark-{{.Mark}}">{{.Mark}}</a></td><td>{{.Size}}</td><td>{{.Species}}</td><td>{{.Grade}}</td><td>{{.Zone}}</td><td class="n">{{.Spacing}}</td><td>{{.Spans}}</td><td class="n">{{.Count}}</td><td class="n">{{.Rows}}</td><td class="n">{{.Ratio}}</td><td class="status-{{.Status}}">{{.Status}}</td></tr>
+{{end}}</table>
+</section>
+
+<section id="takeoff"><h2>Takeoff</h2>
+<table><tr><th>item</th><th>size</th><th>order length</th><th>count</th><th>board feet</th><th>note</th></tr>
+{{range .Takeoff.Joists}}<tr><td>joist</td><td>{{.Size}}</td><td class="n">{{num .OrderLengthFt}} ft</td><td class="n">{{.Count}}</td><td class="n">{{bf .BoardFeet}}</td><td>{{.Note}}</td></tr>
+{{end}}{{range .Takeoff.Blocking}}<tr><td>blocking</td><td>{{.Size}}</td><td></td><td class="n">{{.Count}}</td><td class="n">{{bf .BoardFeet}}</td><td>{{.Note}}</td></tr>
+{{end}}{{range .Takeoff.Hangers}}<tr><td>hanger</td><td>{{.Size}}</td><td></td><td class="n">{{.Count}}</td><td></td><td>{{.Note}}</td></tr>
+{{end}}</table>
+<table id="totals"><tr><th>joists</th><th>joist board feet</th><th>blocking pieces</th><th>blocking board feet</th><th>hangers</th><th>total board feet</th></tr>
+<tr><td class="n">{{.Totals.JoistCount}}</td><td class="n">{{bf .Totals.JoistBoardFeet}}</td><td class="n">{{.Totals.BlockingPieces}}</td><td class="n">{{bf .Totals.BlockingBoardFeet}}</td><td class="n">{{.Totals.Hangers}}</td><td class="n">{{bf .Totals.BoardFeet}}</td></tr></table>
+</section>
+
+<section id="calculations"><h2>Calculations by mark</h2>
+<p>Each mark is calculated for its governing member (largest ratio); the other members of the mark are identical for design.</p>
+{{range .Calcs}}<article class="calc" id="{{.Anchor}}" data-mark="{{.Mark}}" data-member="{{.Member}}">
+<h3>Mark {{.Mark}}: {{.Count}} member{{if ne .Count 1}}s{{end}}, max ratio {{.Ratio}}, <span class="status-{{.Status}}">{{.Status}}</span></h3>
+<p class="hint">Members: {{range $i, $m := .Members}}{{if $i}}, {{end}}{{$m}}{{end}}{{if .MoreMembers}} and {{.MoreMembers}} more{{end}}.</p>
+{{if .Messages}}<p class="msgs">{{range .Messages}}{{.}}<br>{{end}}</p>{{end}}
+<h4>Inputs</h4>
+<table class="inputs">{{range .Inputs}}<tr><th>{{.Key}}</th><td>{{.Value}}</td></tr>{{end}}</table>
+{{if .DesignValues}}<h4>Reference design values</h4>
+<table><tr><th>value</th><th></th><th>size</th><th>source</th></tr>{{range .DesignValues}}<tr><td>{{.Name}}</td><td class="n">{{num .Value}} {{.Unit}}</td><td>{{.Size}}</td><td>{{.Source}}</td></tr>{{end}}</table>{{end}}
+{{if .AreaLoads}}<h4>Loads on the tributary width</h4>
+{{range .AreaLoads}}<div class="eq"><span class="sym">w_{{.Load}}</span> = p trib = {{.Subst}} = <span class="val">{{.WPlf}}</span> plf</div>{{end}}{{end}}
+{{if .Combos}}<h4>Load combinations (ASCE 7-16 2.4.1, ASD)</h4>
+<table class="combos"><tr><th>combination</th><th>case</th><th>w = sum of factor x w</th><th>w, plf</th><th>CD (NDS 2018 Table 2.3.2)</th></tr>
+{{range .Combos}}<tr><td>{{.Combo}}</td><td>{{.Case}}</td><td>{{.Subst}}</td><td class="n">{{.WPlf}}</td><td class="n">{{.CD}}</td></tr>{{end}}</table>{{end}}
+{{range .ComboProblems}}<p class="msgs">{{.}}</p>{{end}}
+{{if .Factors}}<h4>Adjustment factors</h4>
+{{range .Factors}}{{template "line" .}}{{end}}{{end}}
+<h4>Checks</h4>
+{{range .Checks}}<div class="check {{.Band}}" data-kind="{{.Kind}}"><h4>{{.Title}}, {{.Combo}}<span class="clause">{{.Clause}}</span></h4>
+{{range .Lines}}{{template "line" .}}{{end}}
+<div class="result {{if eq .Verdict "OK"}}ok{{else}}ng{{end}}">{{.Actual}} {{.Unit}} / {{.Allowable}} {{.Unit}} = <span class="ratio">{{.Ratio}}</span> {{if eq .Verdict "OK"}}&le; 1.000{{else}}&gt; 1.000{{end}}: {{.Verdict}}</div></div>
+{{end}}
+{{if .Steps}}<h4>Blocking rows: bottom-edge bending per number of rows (DOMAIN rule; CL by NDS 2018 3.3.3)</h4>
+<table class="steps"><tr><th>rows per span</th><th>lu, in</th><th>CL</th><th>ratio</th><th></th></tr>
+{{range .Steps}}<tr><td class="n">{{.Rows}}</td><td class="n">{{.Lu}}</td><td class="n">{{.CL}}</td><td class="n">{{.Ratio}}</td><td>{{.Verdict}}</td></tr>{{end}}</table>{{end}}
+</article>
+{{end}}</section>
+
+<section id="assumptions"><h2>Assumptions</h2>
+<h3>Code editions</h3><ul>{{range .Assumptions.CodeEditions}}<li>{{.}}</li>{{end}}</ul>
+<h3>Load combinations</h3><ul>{{range .Combos}}<li>{{.}}</li>{{end}}</ul>
+{{if .Assumptions.Zones}}<h3>Load zones</h3>
+<table><tr><th>zone</th><th>use</th><th>D psf</th><th>L psf</th><th>Lr psf</th><th>S psf</th><th>W down psf</th><th>W up psf</th><th>ceiling</th><th>live limit</th><th>total limit</th></tr>
+{{range .Assumptions.Zones}}<tr><td>{{.Name}}</td><td>{{.Use}}</td><td class="n">{{num .DeadPsf}}</td><td class="n">{{num .LivePsf}}</td><td class="n">{{num .RoofLivePsf}}</td><td class="n">{{num .SnowPsf}}</td><td class="n">{{num .WindDownPsf}}</td><td class="n">{{num .WindUpPsf}}</td><td>{{.Ceiling}}</td><td class="n">L/{{num .LiveDeflectionLimit}}</td><td class="n">L/{{num .TotalDeflectionLimit}}</td></tr>
+{{end}}</table><p class="hint">A limit of L/0 means that deflection is not checked.</p>{{end}}
+{{if .Assumptions.Switches}}<h3>Settings</h3>
+<table><tr><th>setting</th><th>value</th><th>from</th></tr>{{range .Assumptions.Switches}}<tr><td>{{.Name}}</td><td>{{.Value}} {{.Unit}}</td><td>{{.Source}}</td></tr>{{end}}</table>{{end}}
+{{if .Assumptions.DesignValues}}<h3>Design values used</h3>
+<table><tr><th>species</th><th>grade</th><th>size</th><th>value</th><th></th><th>source</th></tr>{{range .Assumptions.DesignValues}}<tr><td>{{.Species}}</td><td>{{.Grade}}</td><td>{{.Size}}</td><td>{{.Name}}</td><td class="n">{{num .Value}} {{.Unit}}</td><td>{{.Source}}</td></tr>{{end}}</table>{{end}}
+{{if .Assumptions.Notes}}<h3>Notes</h3><ul>{{range .Assumptions.Notes}}<li>{{.}}</li>{{end}}</ul>{{end}}
+</section>
+
+<section id="cautions" class="cautions"><h2>Cautions</h2><ul>{{range .Cautions}}<li>{{.}}</li>{{end}}</ul></section>
+</main>
+<script>const FC_MEMBERS = {{.MemberJSON}};` + reportJS + `</script>
+</body>
+</html>
+{{define "line"}}<div class="eq"><span class="sym">{{.Name}}</span>{{if .Formula}} = <span class="f">{{.Formula}}</span>{{end}}{{if .Subst}} = <span class="s">{{.Subst}}</span>{{end}} = <span class="val">{{.Value}}</span>{{if .Unit}} <span class="u">{{.Unit}}</span>{{end}}{{if .Note}} <span class="note">({{.Note}})</span>{{end}}{{if .Source}}<span class="src">{{.Source}}</span>{{end}}</div>{{end}}`
