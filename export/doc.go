@@ -8,16 +8,29 @@
 // imports neither framing nor check. The caller fills a Results from those
 // packages and builds a Markup with MarkupFromResults.
 //
+// Writers:
+//
+//	WriteJSON(path, r)          results.json, schema "framecheck-results/1"; one member,
+//	                            mark or blocking row per line; NaN/Inf written as 0 and
+//	                            reported as a *NonFiniteError after the write
+//	WriteXLSX(path, r)          sheets Members, Marks, Blocking, Takeoff, Inputs, Notes
+//	Annotate(in, out, markup)   copy of the drawing with our layers and markup added
+//	WriteOverlay(path, markup, units)  the markup alone, R12
+//
 // Every writer writes atomically: a temporary file in the target folder,
 // fsync, then rename, so a failed write leaves no partial file and leaves an
-// earlier output untouched. No writer ever writes over the input drawing.
+// earlier output untouched. No writer ever writes over the input drawing:
+// Annotate refuses an output naming its input (ErrSameFile), and WriteJSON
+// and WriteXLSX refuse a .dxf path.
 //
-// Annotated DXF layers (names of our own, documented here and in the Notes
-// sheet):
+// Annotated DXF layers (names of our own, also listed on the Notes sheet):
 //
 //	FC-FAIL          colour 1 (red), a LINE over every failing or erroring member
 //	FC-BLOCKING-ADD  colour 4 (cyan), a LINE across the run for every blocking row to add
 //	FC-LABEL         colour 2 (yellow), a TEXT "mark ratio" at each member's midpoint
 //
-// A report.html writer is planned for a later issue (report.go).
+// Independent checks: .ci/checks/export-dxf.sh reads the annotated R12 and
+// R2000 plans and the overlay with ezdxf (audit, original entities kept,
+// markup counts); .ci/checks/export-xlsx.sh reads schedule.xlsx with
+// openpyxl. Both run export/internal/cifiles to write the files.
 package export
