@@ -131,7 +131,8 @@ func (r *reader) emitInsert(l *local) {
 		}
 	}
 	k := r.d.ToInch
-	r.expand(in, l.e.Pos, l.e.Pos, affine{A: k, E: k}, "0", 1, nil)
+	from := l.e.Pos
+	r.expand(in, l.e.Pos, &from, affine{A: k, E: k}, "0", 1, nil)
 }
 
 // expand places the entities of the block that in inserts, through the
@@ -139,7 +140,7 @@ func (r *reader) emitInsert(l *local) {
 // model-space INSERT's; parentLayer is the layer that entities on layer
 // "0" take (DXF rule: block entities on layer 0 take the layer of the
 // INSERT).
-func (r *reader) expand(in *insertRef, pos, from Pos, m affine, parentLayer string, depth int, stack []string) {
+func (r *reader) expand(in *insertRef, pos Pos, from *Pos, m affine, parentLayer string, depth int, stack []string) {
 	key := strings.ToUpper(in.name)
 	b := r.blocks[key]
 	if b == nil {
@@ -174,7 +175,7 @@ func (r *reader) expand(in *insertRef, pos, from Pos, m affine, parentLayer stri
 			// Every placed copy costs work even if nothing in it is
 			// kept (a cycle cut, an undefined block): bound it.
 			if r.work++; r.work > workBudget(r.opt.MaxEntities) {
-				r.hitLimit(from, cols*rows)
+				r.hitLimit(*from, cols*rows)
 				r.stop = true
 			}
 			if r.stop {
@@ -199,7 +200,7 @@ func (r *reader) expand(in *insertRef, pos, from Pos, m affine, parentLayer stri
 					continue
 				}
 				if r.ents.n >= r.opt.MaxEntities {
-					r.hitLimit(from, 1)
+					r.hitLimit(*from, 1)
 					r.stop = true
 					return
 				}

@@ -120,8 +120,12 @@ func compareDump(t *testing.T, d *Drawing, want *ezdxfDump) {
 			t.Errorf("entity %d (%s %s, ezdxf %s from %q): "+format,
 				append([]any{i, e.Kind, e.Pos, w.Type, w.From}, args...)...)
 		}
-		if e.Kind.String() != w.Type || e.Pos.Layer != w.Layer || e.From.Handle != w.From {
-			errorf("kind/layer/from: got %s/%s/%q", e.Kind, e.Pos.Layer, e.From.Handle)
+		from := ""
+		if e.From != nil {
+			from = e.From.Handle
+		}
+		if e.Kind.String() != w.Type || e.Pos.Layer != w.Layer || from != w.From {
+			errorf("kind/layer/from: got %s/%s/%q", e.Kind, e.Pos.Layer, from)
 			continue
 		}
 		if w.From == "" && e.Pos.Handle != w.Handle {
@@ -191,7 +195,11 @@ func checkLines(t *testing.T, path string, d *Drawing) {
 		lines = append(lines, strings.TrimRight(sc.Text(), "\r"))
 	}
 	for _, e := range d.Entities {
-		for _, p := range []Pos{e.Pos, e.From} {
+		ps := []Pos{e.Pos}
+		if e.From != nil {
+			ps = append(ps, *e.From)
+		}
+		for _, p := range ps {
 			if p.Line == 0 && p.Handle == "" {
 				continue
 			}

@@ -101,12 +101,6 @@ func FuzzRead(f *testing.F) {
 			f.Add(b)
 		}
 	}
-	small, _ := filepath.Glob("testdata/fuzz/seed/*")
-	for _, s := range small {
-		if b, err := os.ReadFile(s); err == nil {
-			f.Add(b)
-		}
-	}
 	f.Add([]byte(section("ENTITIES", dxf(0, "LWPOLYLINE", 8, "J", 90, 2, 70, 1, 10, 1, 20, 2, 42, 0.5, 10, 3, 20, 4)) + dxf(0, "EOF")))
 	f.Add([]byte(section("BLOCKS", blockDef("B", 1, 1, dxf(0, "LINE", 8, "0", 10, 0, 20, 0, 11, 1, 21, 0), dxf(0, "INSERT", 2, "B"))) +
 		section("ENTITIES", dxf(0, "INSERT", 8, "L", 2, "B", 70, 3, 71, 3, 44, 1, 45, 1, 230, -1))))

@@ -218,6 +218,9 @@ func clip(b []byte) string {
 // parseFloat parses a finite numeric value, allowing surrounding spaces.
 func parseFloat(b []byte) (float64, bool) {
 	b = bytes.TrimSpace(b)
+	if f, ok := fastFloat(b); ok {
+		return f, true
+	}
 	f, err := strconv.ParseFloat(string(b), 64)
 	if err != nil || math.IsNaN(f) || math.IsInf(f, 0) {
 		return 0, false
@@ -234,4 +237,56 @@ func parseInt(b []byte) (int, bool) {
 		return 0, false
 	}
 	return int(n), true
+}
+
+// pow10 holds the powers of ten that float64 represents exactly.
+var pow10 = [...]float64{1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10,
+	1e11, 1e12, 1e13, 1e14, 1e15, 1e16, 1e17, 1e18, 1e19, 1e20, 1e21, 1e22}
+
+// fastFloat parses the plain decimals CAD programs write ("-12.500000")
+// when they have at most 15 significant digits and 22 decimals: the
+// mantissa and the power of ten are then exact in float64 and one
+// correctly rounded division gives the same result as strconv.ParseFloat
+// (Clinger's fast path). Anything else reports false and goes to strconv.
+func fastFloat(s []byte) (float64, bool) {
+	if len(s) == 0 {
+		return 0, false
+	}
+	k, neg := 0, false
+	if s[0] == '-' || s[0] == '+' {
+		neg, k = s[0] == '-', 1
+	}
+	var mant uint64
+	digits, frac := 0, 0
+	dot, any := false, false
+	for ; k < len(s); k++ {
+		c := s[k]
+		switch {
+		case c >= '0' && c <= '9':
+			any = true
+			if dot {
+				frac++
+			}
+			if mant == 0 && c == '0' {
+				continue
+			}
+			if digits == 15 {
+				return 0, false
+			}
+			mant = mant*10 + uint64(c-'0')
+			digits++
+		case c == '.' && !dot:
+			dot = true
+		default:
+			return 0, false
+		}
+	}
+	if !any || frac >= len(pow10) {
+		return 0, false
+	}
+	f := float64(mant) / pow10[frac]
+	if neg {
+		f = -f
+	}
+	return f, true
 }

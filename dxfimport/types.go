@@ -96,10 +96,10 @@ type Entity struct {
 	// counter-clockwise from world +X.
 	RotationDeg float64
 	// From is the position of the model-space INSERT this entity was
-	// expanded from (the outermost one for nested blocks); the zero Pos
-	// for an entity drawn in model space. Pos then refers to the entity's
-	// definition inside the block.
-	From Pos
+	// expanded from (the outermost one for nested blocks), shared by all
+	// entities of that insert; nil for an entity drawn in model space.
+	// Pos then refers to the entity's definition inside the block.
+	From *Pos
 }
 
 // Layer is an entry of the LAYER table.
