@@ -43,6 +43,8 @@ type engine struct {
 	mMax  float64
 	arena traceArena
 
+	comboCDs []comboCD // every non-trivial combination case and its CD, for the report
+
 	wAll  []float64  // backing store of the cases' segment loads
 	ivBuf []interval // reused by intervals
 	sup   []float64  // backing store of bm.SupportsAtIn // largest |M| of any case, for "is this edge in compression" tolerances
@@ -80,7 +82,7 @@ func (e *engine) release() {
 // when nothing).
 func newEngine(m Member, s Settings) (*engine, error) {
 	e := enginePool.Get().(*engine)
-	*e = engine{m: m, s: s, cases: e.cases[:0], spanSegs: e.spanSegs[:0], wAll: e.wAll[:0], sup: e.sup[:0], ivBuf: e.ivBuf[:0]}
+	*e = engine{m: m, s: s, cases: e.cases[:0], spanSegs: e.spanSegs[:0], wAll: e.wAll[:0], sup: e.sup[:0], ivBuf: e.ivBuf[:0], comboCDs: e.comboCDs[:0]}
 	if err := s.validate(); err != nil {
 		return e, err
 	}
@@ -191,6 +193,12 @@ func (e *engine) patterns() []uint32 {
 	return append(out, even, odd)
 }
 
+// comboCD is a combination case's name and load duration factor.
+type comboCD struct {
+	name string
+	cd   float64
+}
+
 // caseSpec is one combination case before patterning: the load on every
 // segment (full) and the live-type load added on patterned segments.
 type caseSpec struct {
@@ -227,6 +235,13 @@ func (e *engine) solveStrength() error {
 				}
 			}
 		}
+	}
+	e.comboCDs = e.comboCDs[:0]
+	for _, sp := range specs {
+		e.comboCDs = append(e.comboCDs, comboCD{sp.name, sp.cd})
+	}
+	if len(e.segs) == 1 {
+		specs = pruneDominated(specs)
 	}
 	n := 0
 	for _, sp := range specs {
@@ -272,6 +287,34 @@ func (e *engine) solveStrength() error {
 		}
 	}
 	return nil
+}
+
+// pruneDominated drops, on a member of one segment, every case that
+// another case dominates: a load of the same sign at least as large, with
+// a load duration factor no larger. Every response of such a member is the
+// one load times a fixed shape, and Fb* CL, Fv' grow with CD, so the
+// dominated case can never govern (ties keep the first case).
+func pruneDominated(specs []caseSpec) []caseSpec {
+	out := specs[:0:0]
+	for i, a := range specs {
+		wa := a.full + a.patterned
+		dominated := false
+		for j, b := range specs {
+			if i == j {
+				continue
+			}
+			wb := b.full + b.patterned
+			if (wa >= 0) == (wb >= 0) && math.Abs(wb) >= math.Abs(wa) && b.cd <= a.cd &&
+				(math.Abs(wb) > math.Abs(wa) || b.cd < a.cd || j < i) {
+				dominated = true
+				break
+			}
+		}
+		if !dominated {
+			out = append(out, a)
+		}
+	}
+	return out
 }
 
 // caseSpec builds the case of one factor set and wind direction (+1

@@ -19,8 +19,8 @@ func CheckMember(m Member, s Settings) Result {
 	if err != nil {
 		return errorResult(m, e, err)
 	}
-	n, steps := e.solveBlocking()
-	r := e.result(n)
+	n, steps, bot := e.solveBlocking()
+	r := e.result(n, bot)
 	r.BlockingSteps = steps
 	return r
 }
@@ -37,7 +37,7 @@ func CheckWithRows(m Member, s Settings, rowsPerSpan int) Result {
 	if rowsPerSpan < 0 {
 		return errorResult(m, e, fmt.Errorf("rows per span %d: want >= 0", rowsPerSpan))
 	}
-	return e.result(rowsPerSpan)
+	return e.result(rowsPerSpan, nil)
 }
 
 // bottomEdge evaluates bottom-edge bending with n added rows per span.
@@ -46,20 +46,22 @@ func (e *engine) bottomEdge(n int) (edgeEval, float64) {
 	return e.evalEdge(false, e.intervals(e.m.BottomBracedContinuous, e.braces(rows))), luRows
 }
 
-// solveBlocking returns the rows per span the bottom edge needs and the
-// solver's steps (nil when no rows were needed or could help).
-func (e *engine) solveBlocking() (int, []BlockingStep) {
+// solveBlocking returns the rows per span the bottom edge needs, the
+// solver's steps (nil when no rows were needed) and the bottom edge's
+// evaluation with those rows (nil when not evaluated).
+func (e *engine) solveBlocking() (int, []BlockingStep, *edgeEval) {
 	if e.m.BottomBracedContinuous {
-		return 0, nil
+		return 0, nil, nil
 	}
-	ev, _ := e.bottomEdge(0)
-	if ev.passes() {
-		return 0, nil
+	ev0, _ := e.bottomEdge(0)
+	if ev0.passes() {
+		return 0, nil, &ev0
 	}
+	ev := ev0
 	steps := []BlockingStep{{RowsPerSpan: 0, LuIn: ev.iv.luIn, CL: ev.cl, Ratio: ev.ratio}}
 	// Rows cannot help when the edge fails even fully braced.
 	if ev.mLbIn/e.sec.SIn3 > e.cases[ev.ci].cd*e.fbNoCD*(1+ratioTol) {
-		return 0, steps
+		return 0, steps, &ev0
 	}
 	maxSpan := 0.0
 	for _, k := range e.spanSegs {
@@ -69,14 +71,15 @@ func (e *engine) solveBlocking() (int, []BlockingStep) {
 		ev, _ = e.bottomEdge(n)
 		steps = append(steps, BlockingStep{RowsPerSpan: n, LuIn: ev.iv.luIn, CL: ev.cl, Ratio: ev.ratio})
 		if ev.passes() {
-			return n, steps
+			return n, steps, &ev
 		}
 	}
-	return 0, steps
+	return 0, steps, &ev0
 }
 
-// result runs every check with n added rows per span.
-func (e *engine) result(n int) Result {
+// result runs every check with n added rows per span; bot, when not nil,
+// is the bottom edge already evaluated with those rows.
+func (e *engine) result(n int, bot *edgeEval) Result {
 	r := e.baseResult()
 	r.Checks = make([]CheckResult, 0, 6)
 	rows, _ := e.spanRows(n)
@@ -89,7 +92,10 @@ func (e *engine) result(n int) Result {
 	}
 	pts := e.braces(rows)
 	top := e.evalEdge(true, e.intervals(e.s.TopEdgeBraced, pts))
-	bot := e.evalEdge(false, e.intervals(e.m.BottomBracedContinuous, pts))
+	if bot == nil {
+		b := e.evalEdge(false, e.intervals(e.m.BottomBracedContinuous, pts))
+		bot = &b
+	}
 	if len(e.cases) == 0 || e.mMax == 0 {
 		r.Info = append(r.Info, "no load on the member: nothing to check")
 	}
@@ -97,7 +103,7 @@ func (e *engine) result(n int) Result {
 		r.Checks = append(r.Checks, e.bendingResult(KindBendingTop, top))
 	}
 	if bot.found {
-		r.Checks = append(r.Checks, e.bendingResult(KindBendingBottom, bot))
+		r.Checks = append(r.Checks, e.bendingResult(KindBendingBottom, *bot))
 	} else if len(e.cases) > 0 {
 		r.Info = append(r.Info, "bottom edge is not in compression under any combination")
 	}
@@ -148,12 +154,8 @@ func (e *engine) baseResult() Result {
 
 // factorTrace lists the adjustment factors used.
 func (e *engine) factorTrace() []TraceItem {
-	t := tracer{items: make([]TraceItem, 0, 12+len(e.cases))}
-	for i := range e.cases {
-		c := &e.cases[i]
-		if i > 0 && c.name == e.cases[i-1].name {
-			continue // the same combination under another live-load pattern
-		}
+	t := tracer{items: make([]TraceItem, 0, 12+len(e.comboCDs))}
+	for _, c := range e.comboCDs {
 		t.add("CD", c.cd, "", c.name, "shortest-duration load of the combination", "NDS 2018 2.3.2, Table 2.3.2")
 	}
 	t.add("CM(Fb)", e.cm.Fb, "", "wet service", "", "NDS 2018 Supplement Table 4A/4B")
