@@ -73,6 +73,13 @@ func TestTagReaderLinesCRLFAndPadding(t *testing.T) {
 	}
 }
 
+func TestByteOrderMark(t *testing.T) {
+	d := read(t, "\xef\xbb\xbf"+section("ENTITIES", dxf(0, "POINT", 8, "P", 10, 1, 20, 2))+dxf(0, "EOF"), Options{Units: "in"})
+	if len(d.Entities) != 1 || d.Entities[0].Pos.Line != 5 {
+		t.Errorf("got %+v", d.Entities)
+	}
+}
+
 func TestUnits(t *testing.T) {
 	line := section("ENTITIES", dxf(0, "LINE", 8, "J", 10, 0, 20, 0, 11, 1, 21, 2))
 	cases := []struct {

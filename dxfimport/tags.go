@@ -90,7 +90,12 @@ func (t *TagReader) readLine() ([]byte, error) {
 }
 
 // sniff refuses binary DXF, DWG and empty input before the first pair.
+// A UTF-8 byte-order mark, which some text tools add when they save a
+// DXF, is skipped.
 func (t *TagReader) sniff() error {
+	if bom, _ := t.br.Peek(3); bytes.Equal(bom, []byte("\xef\xbb\xbf")) {
+		t.br.Discard(3)
+	}
 	head, _ := t.br.Peek(len(binarySentinel))
 	if bytes.HasPrefix(head, []byte(binarySentinel)) {
 		return t.errAt(1, -1, ErrBinary)
