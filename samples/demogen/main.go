@@ -23,6 +23,8 @@ import (
 	"io"
 	"os"
 	"path/filepath"
+
+	"framecheck/samples/internal/dxfw"
 )
 
 // planFileName is the name of the file demogen writes.
@@ -60,7 +62,7 @@ func run(args []string, stdout, stderr io.Writer) int {
 
 // buildDXF draws both plans and the title block and returns the file.
 func buildDXF() []byte {
-	w := newDXFWriter(planLayers)
+	w := dxfw.New(planLayers)
 	for _, p := range []plan{floorPlan(), roofPlan()} {
 		drawPlan(w, p)
 	}
@@ -72,7 +74,7 @@ func buildDXF() []byte {
 
 // drawPlan writes one plan's entities, shifted by its offset: joists run
 // by run, then lines, zone outlines with their names, then labels.
-func drawPlan(w *dxfWriter, p plan) {
+func drawPlan(w *dxfw.Writer, p plan) {
 	dx := p.OffsetXIn
 	for _, r := range p.Runs {
 		for i := 0; i < r.Count; i++ {

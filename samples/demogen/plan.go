@@ -1,5 +1,7 @@
 package main
 
+import "framecheck/samples/internal/dxfw"
+
 // The demo building is the Dunmarrow Rigging Loft on Pellgrove Quay, a
 // made-up two-storey timber workshop in a made-up harbour. It is 36 ft by
 // 24 ft on wall centre-lines (432 in by 288 in). The drawing holds two
@@ -38,11 +40,12 @@ const (
 )
 
 // planLayers is the LAYER table after layer "0", with ACI colours.
-var planLayers = []dxfLayer{
-	{lyJoistFloor, 3}, {lyJoistRoof, 4}, {lyWallExt, 7}, {lyWallInt, 8},
-	{lyBeamFlush, 1}, {lyBeamDropped, 6}, {lyBlocking, 30}, {lyZoneFloor, 5},
-	{lyZoneRoof, 5}, {lyNote, 2}, {lyGrid, 9}, {lyDims, 9}, {lyOutline, 8},
-	{lyNotes, 7}, {lyTitle, 7},
+var planLayers = []dxfw.Layer{
+	{Name: lyJoistFloor, Color: 3}, {Name: lyJoistRoof, Color: 4}, {Name: lyWallExt, Color: 7},
+	{Name: lyWallInt, Color: 8}, {Name: lyBeamFlush, Color: 1}, {Name: lyBeamDropped, Color: 6},
+	{Name: lyBlocking, Color: 30}, {Name: lyZoneFloor, Color: 5}, {Name: lyZoneRoof, Color: 5},
+	{Name: lyNote, Color: 2}, {Name: lyGrid, Color: 9}, {Name: lyDims, Color: 9},
+	{Name: lyOutline, Color: 8}, {Name: lyNotes, Color: 7}, {Name: lyTitle, Color: 7},
 }
 
 // joistRun is a row of equal parallel joists drawn as LINEs. Joist i

@@ -1,9 +1,9 @@
-package main
+package dxfw
 
 import (
 	"bytes"
-	"fmt"
 	"strconv"
+	"strings"
 )
 
 // structHandles are the handles of the file's fixed structure: tables,
@@ -15,7 +15,7 @@ type structHandles struct {
 	activeVport                    string
 	ltByBlock, ltByLayer, ltCont   string
 	layer0                         string
-	layers                         []string // one per dxfWriter.layers
+	layers                         []string // one per Writer.layers
 	styleStandard, appidACAD       string
 	dimStandard                    string
 	msRecord, psRecord             string
@@ -23,7 +23,7 @@ type structHandles struct {
 	rootDict, groupDict            string
 }
 
-func (w *dxfWriter) allocStruct() structHandles {
+func (w *Writer) allocStruct() structHandles {
 	var h structHandles
 	for _, p := range []*string{&h.rootDict, &h.groupDict, &h.vport, &h.ltype, &h.layer,
 		&h.style, &h.view, &h.ucs, &h.appid, &h.dimstyle, &h.blockRecord,
@@ -40,22 +40,6 @@ func (w *dxfWriter) allocStruct() structHandles {
 	return h
 }
 
-// Bytes returns the whole file. Call it once, after the last entity.
-func (w *dxfWriter) Bytes() []byte {
-	var b bytes.Buffer
-	w.header(&b)
-	section(&b, "CLASSES")
-	pair(&b, 0, "ENDSEC")
-	w.tables(&b)
-	w.blocks(&b)
-	section(&b, "ENTITIES")
-	b.Write(w.entities.Bytes())
-	pair(&b, 0, "ENDSEC")
-	w.objects(&b)
-	pair(&b, 0, "EOF")
-	return b.Bytes()
-}
-
 func section(b *bytes.Buffer, name string) {
 	pair(b, 0, "SECTION")
 	pair(b, 2, name)
@@ -67,7 +51,7 @@ func point(b *bytes.Buffer, code int, x, y float64) {
 	pair(b, code+20, "0.0")
 }
 
-func (w *dxfWriter) header(b *bytes.Buffer) {
+func (w *Writer) header(b *bytes.Buffer) {
 	section(b, "HEADER")
 	hv := func(name string, code int, v string) {
 		pair(b, 9, name)
@@ -87,14 +71,14 @@ func (w *dxfWriter) header(b *bytes.Buffer) {
 	pair(b, 9, "$LIMMAX")
 	pair(b, 10, num(w.max[0]))
 	pair(b, 20, num(w.max[1]))
-	hv("$LUNITS", 70, "4")                        // architectural
-	hv("$MEASUREMENT", 70, "0")                   // imperial
-	hv("$INSUNITS", 70, "1")                      // inches
-	hv("$HANDSEED", 5, fmt.Sprintf("%X", w.next)) // next unused handle
+	hv("$LUNITS", 70, "4")                                              // architectural
+	hv("$MEASUREMENT", 70, "0")                                         // imperial
+	hv("$INSUNITS", 70, "1")                                            // inches
+	hv("$HANDSEED", 5, strings.ToUpper(strconv.FormatUint(w.next, 16))) // next unused handle
 	pair(b, 0, "ENDSEC")
 }
 
-func (w *dxfWriter) tables(b *bytes.Buffer) {
+func (w *Writer) tables(b *bytes.Buffer) {
 	h := &w.h
 	section(b, "TABLES")
 
@@ -179,7 +163,7 @@ func (w *dxfWriter) tables(b *bytes.Buffer) {
 	pair(b, 0, "ENDSEC")
 }
 
-func (w *dxfWriter) blocks(b *bytes.Buffer) {
+func (w *Writer) blocks(b *bytes.Buffer) {
 	h := &w.h
 	section(b, "BLOCKS")
 	for _, blk := range []struct {
@@ -216,7 +200,7 @@ func (w *dxfWriter) blocks(b *bytes.Buffer) {
 	pair(b, 0, "ENDSEC")
 }
 
-func (w *dxfWriter) objects(b *bytes.Buffer) {
+func (w *Writer) objects(b *bytes.Buffer) {
 	h := &w.h
 	section(b, "OBJECTS")
 	pair(b, 0, "DICTIONARY")

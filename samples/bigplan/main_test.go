@@ -1,0 +1,89 @@
+package main
+
+import (
+	"bytes"
+	"encoding/json"
+	"os"
+	"path/filepath"
+	"reflect"
+	"testing"
+
+	"framecheck/dxfimport"
+	"framecheck/samples/bigplan/synth"
+)
+
+func TestRun(t *testing.T) {
+	dir := t.TempDir()
+	dxf, toml := filepath.Join(dir, "big.dxf"), filepath.Join(dir, "big.toml")
+	var out, errOut bytes.Buffer
+	if code := run([]string{"-joists", "500", "-r12", "-o", dxf, "-project", toml}, &out, &errOut); code != 0 {
+		t.Fatalf("run = %d, stderr %q", code, errOut.String())
+	}
+	got, err := os.ReadFile(dxf)
+	if err != nil {
+		t.Fatal(err)
+	}
+	want, _ := synth.Build(synth.Options{Joists: 500, R12: true})
+	if !bytes.Equal(got, want) {
+		t.Error("written file differs from synth.Build")
+	}
+	if p, err := os.ReadFile(toml); err != nil || string(p) != synth.Project {
+		t.Errorf("project file: %v", err)
+	}
+	for _, args := range [][]string{{"-x"}, {"extra"}, {"-joists", "0"}} {
+		errOut.Reset()
+		if code := run(args, &out, &errOut); code != 2 {
+			t.Errorf("run(%q) = %d, want 2", args, code)
+		}
+		if errOut.Len() == 0 {
+			t.Errorf("run(%q): nothing on stderr", args)
+		}
+	}
+}
+
+// ezdxfCounts is one flavour in testdata/ezdxf_500.json, written by
+// testdata/ezdxf_counts.py with ezdxf 0.18.1 (an independent DXF library).
+type ezdxfCounts struct {
+	AcadVer     string         `json:"acadver"`
+	AuditErrors int            `json:"audit_errors"`
+	AuditFixes  int            `json:"audit_fixes"`
+	Layers      map[string]int `json:"layers"`
+}
+
+// TestAgainstEzdxf compares what ezdxf read from the 500-joist plans
+// (audit clean, entities per layer) with the plans written now, read by
+// package dxfimport.
+func TestAgainstEzdxf(t *testing.T) {
+	raw, err := os.ReadFile(filepath.Join("testdata", "ezdxf_500.json"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	var ez map[string]ezdxfCounts
+	if err := json.Unmarshal(raw, &ez); err != nil {
+		t.Fatal(err)
+	}
+	for flavour, r12 := range map[string]bool{"R2000": false, "R12": true} {
+		e, ok := ez[flavour]
+		if !ok {
+			t.Fatalf("testdata/ezdxf_500.json has no %s", flavour)
+		}
+		if e.AuditErrors != 0 || e.AuditFixes != 0 {
+			t.Errorf("%s: ezdxf audit %d errors, %d fixes", flavour, e.AuditErrors, e.AuditFixes)
+		}
+		data, _ := synth.Build(synth.Options{Joists: 500, R12: r12})
+		d, err := dxfimport.Read(bytes.NewReader(data), "big.dxf", dxfimport.Options{Units: "in"})
+		if err != nil {
+			t.Fatal(err)
+		}
+		if d.Version != e.AcadVer {
+			t.Errorf("%s: $ACADVER %q, ezdxf %q", flavour, d.Version, e.AcadVer)
+		}
+		got := map[string]int{}
+		for _, en := range d.Entities {
+			got[en.Pos.Layer]++
+		}
+		if !reflect.DeepEqual(got, e.Layers) {
+			t.Errorf("%s: entities per layer\n ours  %v\n ezdxf %v", flavour, got, e.Layers)
+		}
+	}
+}

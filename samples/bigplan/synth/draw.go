@@ -1,0 +1,88 @@
+package synth
+
+import "fmt"
+
+// wall draws a double-line wall of thickness tIn centred on y = yc from
+// x1 to x2.
+func wall(w drawer, layer string, x1, x2, yc, tIn float64) {
+	w.Line(layer, x1, yc-tIn/2, x2, yc-tIn/2)
+	w.Line(layer, x1, yc+tIn/2, x2, yc+tIn/2)
+}
+
+// drawer is the part of dxfw.Writer the drawing uses.
+type drawer interface {
+	Line(layer string, x1, y1, x2, y2 float64)
+	ClosedPolyline(layer string, pts [][2]float64)
+	Text(layer string, x, y, heightIn, rotDeg float64, s string)
+}
+
+// drawRun draws one run: its joists, supports, drawn blocking and
+// callout. Joist ends stop 0.5 in inside a wall's outer face, 0.5 in from
+// a flush beam's line and 0.75 in short of a dropped beam's line.
+func drawRun(w drawer, r *run) {
+	const ext = extWallIn / 2
+	x1, x2 := r.x0-8, r.x0+r.widthIn()+8
+	y0, s := r.y0, r.spanIn
+	var from, to float64 // joist ends, relative to y0
+	layer := lyJoistFloor
+	switch r.kind {
+	case kindSimple:
+		wall(w, lyWallExt, x1, x2, y0, extWallIn)
+		wall(w, lyWallExt, x1, x2, y0+s, extWallIn)
+		from, to = -ext+0.5, s+ext-0.5
+	case kindFlush, kindStorage:
+		w.Line(lyBeamFlush, x1, y0, x2, y0)
+		wall(w, lyWallExt, x1, x2, y0+s, extWallIn)
+		from, to = 0.5, s+ext-0.5
+	case kindContinuous:
+		wall(w, lyWallExt, x1, x2, y0, extWallIn)
+		wall(w, lyWallInt, x1, x2, y0+s, intWallIn)
+		wall(w, lyWallExt, x1, x2, y0+2*s, extWallIn)
+		w.Line(lyBlocking, x1+2, y0+s/2, x2-2, y0+s/2)
+		w.Line(lyBlocking, x1+2, y0+1.5*s, x2-2, y0+1.5*s)
+		from, to = -ext+0.5, 2*s+ext-0.5
+	case kindCantilever:
+		wall(w, lyWallExt, x1, x2, y0, extWallIn)
+		wall(w, lyWallExt, x1, x2, y0+s, extWallIn)
+		from, to = -ext+0.5, s+r.cantIn
+	case kindRoof:
+		w.Line(lyBeamDropped, x1, y0, x2, y0)
+		w.Line(lyBeamDropped, x1, y0+s, x2, y0+s)
+		from, to = 0.75, s-0.75
+		layer = lyJoistRoof
+	}
+	for i := 0; i < r.count; i++ {
+		x := r.x0 + float64(i)*r.ocIn
+		a := from
+		if i == r.short {
+			a += shortByIn
+		}
+		w.Line(layer, x, y0+a, x, y0+to)
+	}
+	if r.callout != "" {
+		ly := y0 + 0.4*s
+		w.Line(lyNote, x1+4, ly, x2-4, ly)
+		w.Text(lyNote, r.x0+8, ly+3, 6, 0, r.callout)
+	}
+}
+
+// drawZone outlines a unit's runs as one zone, writes the zone name inside
+// and a note naming the unit.
+func drawZone(w drawer, u int, runs []run) {
+	lo, hi := runs[0].x0-zoneMarginIn, 0.0
+	top := 0.0
+	for i := range runs {
+		hi = max(hi, runs[i].x0+runs[i].widthIn()+zoneMarginIn)
+		top = max(top, runs[i].extentIn())
+	}
+	y0 := runs[0].y0
+	b, t := y0-zoneMarginIn, y0+top+zoneMarginIn
+	layer := lyZoneFloor
+	if runs[0].kind == kindRoof {
+		layer = lyZoneRoof
+	}
+	w.ClosedPolyline(layer, [][2]float64{{lo, b}, {hi, b}, {hi, t}, {lo, t}})
+	w.Text(layer, lo+10, b+10, 8, 0, runs[0].zone)
+	w.Text(lyNotes, lo+10, t-20, 8, 0, fmt.Sprintf("UNIT %d", u+1))
+	w.Line(lyGrid, lo, t+20, hi, t+20)
+}
