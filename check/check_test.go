@@ -285,3 +285,28 @@ func TestPatternLive_TwoSpansOneLoaded(t *testing.T) {
 	full := CheckMember(m, s)
 	expectNear(t, "M+ both spans loaded", traceValue(t, find(t, full, KindBendingTop), "M"), 9.0/128*w*L*L, 1e-6, 1e-9, "AISC Manual Table 3-23 case 29 (0.0703 w L^2)")
 }
+
+// TestPruneDominated_ChangesNothing compares every check with and without
+// the dominated-case pruning of single-span members (common practice, no
+// source: the pruning is an optimisation and must not change results).
+func TestPruneDominated_ChangesNothing(t *testing.T) {
+	members := []Member{upliftRafter("2x10"), upliftRafter("2x8"), floorJoist("2x10", 168, 16)}
+	snow := upliftRafter("2x12")
+	snow.Loads = AreaLoads{DeadPsf: 12, RoofLivePsf: 20, SnowPsf: 25, WindDownPsf: 15, WindUpPsf: 10}
+	members = append(members, snow)
+	for _, m := range members {
+		a := CheckMember(m, DefaultSettings())
+		pruneCases = false
+		b := CheckMember(m, DefaultSettings())
+		pruneCases = true
+		if len(a.Checks) != len(b.Checks) || a.Status != b.Status || a.RowsPerSpan() != b.RowsPerSpan() {
+			t.Fatalf("%s %s: pruned %s/%d checks/%d rows, full %s/%d/%d", m.ID, m.Size, a.Status, len(a.Checks), a.RowsPerSpan(), b.Status, len(b.Checks), b.RowsPerSpan())
+		}
+		for i := range a.Checks {
+			ca, cb := a.Checks[i], b.Checks[i]
+			if ca.Kind != cb.Kind || ca.Combo != cb.Combo || !near(ca.Ratio, cb.Ratio, 1e-12, 1e-12) {
+				t.Errorf("%s %s: pruned %s %s %.6f, full %s %s %.6f", m.ID, m.Size, ca.Kind, ca.Combo, ca.Ratio, cb.Kind, cb.Combo, cb.Ratio)
+			}
+		}
+	}
+}

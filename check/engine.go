@@ -240,7 +240,7 @@ func (e *engine) solveStrength() error {
 	for _, sp := range specs {
 		e.comboCDs = append(e.comboCDs, comboCD{sp.name, sp.cd})
 	}
-	if len(e.segs) == 1 {
+	if len(e.segs) == 1 && pruneCases {
 		specs = pruneDominated(specs)
 	}
 	n := 0
@@ -289,13 +289,21 @@ func (e *engine) solveStrength() error {
 	return nil
 }
 
+// pruneCases switches pruneDominated on; tests switch it off to show it
+// changes no result.
+var pruneCases = true
+
 // pruneDominated drops, on a member of one segment, every case that
 // another case dominates: a load of the same sign at least as large, with
 // a load duration factor no larger. Every response of such a member is the
 // one load times a fixed shape, and Fb* CL, Fv' grow with CD, so the
 // dominated case can never govern (ties keep the first case).
 func pruneDominated(specs []caseSpec) []caseSpec {
-	out := specs[:0:0]
+	var dropBuf [16]bool
+	drop := dropBuf[:0]
+	if len(specs) > len(dropBuf) {
+		drop = make([]bool, 0, len(specs))
+	}
 	for i, a := range specs {
 		wa := a.full + a.patterned
 		dominated := false
@@ -310,8 +318,12 @@ func pruneDominated(specs []caseSpec) []caseSpec {
 				break
 			}
 		}
-		if !dominated {
-			out = append(out, a)
+		drop = append(drop, dominated)
+	}
+	out := specs[:0]
+	for i, sp := range specs {
+		if !drop[i] {
+			out = append(out, sp)
 		}
 	}
 	return out
