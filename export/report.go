@@ -6,6 +6,7 @@ import (
 	"fmt"
 	"html/template"
 	"slices"
+	"strconv"
 	"time"
 )
 
@@ -181,7 +182,7 @@ func ratioText(v float64) string {
 	if !finite(v) {
 		return "n/a"
 	}
-	return fmt.Sprintf("%.3f", v)
+	return strconv.FormatFloat(v, 'f', 3, 64)
 }
 
 // inOrNA prints a length in inches as 16 in, or "n/a" when unknown.

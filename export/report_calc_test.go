@@ -156,14 +156,16 @@ func TestComboLoads(t *testing.T) {
 	// w = p x trib: 10 psf x 16 in / 12 = 13.333 plf; 40 psf -> 53.333 plf;
 	// closed form, no source needed beyond the arithmetic.
 	z := &Zone{Name: "F", DeadPsf: 10, LivePsf: 40, WindUpPsf: 30}
-	got, probs := comboLoads([]string{"D", "D+L", "D+(Lr or S)", "0.6D+0.6W", "D+X"}, z, 16, map[string]float64{"D+L": 1})
+	got, probs := comboLoads([]string{"D", "D+L", "D+(Lr or S)", "D+0.75L+0.75(Lr or S)", "0.6D+0.6W", "D+X"}, z, 16, map[string]float64{"D+L": 1})
 	if len(probs) != 1 {
 		t.Errorf("problems %v, want one for D+X", probs)
 	}
 	want := map[string]float64{
-		"D":         13.333,
-		"D+L":       66.667,
-		"0.6D+0.6W": 0.6*13.333 - 0.6*40, // net uplift: 30 psf x 16/12 = 40 plf away
+		"D":   13.333,
+		"D+L": 66.667,
+		// both cases reduce to D + 0.75 L once Lr and S (absent) drop out: one line
+		"D+0.75L+0.75(Lr or S)": 13.333 + 0.75*53.333,
+		"0.6D+0.6W":             0.6*13.333 - 0.6*40, // net uplift: 30 psf x 16/12 = 40 plf away
 	}
 	if len(got) != len(want) {
 		t.Fatalf("%d lines %+v, want %d (D+(Lr or S) has no Lr or S and is left out)", len(got), got, len(want))
@@ -172,6 +174,9 @@ func TestComboLoads(t *testing.T) {
 		w, ok := want[l.Combo]
 		if !ok || !repCloseTo(l.WPlf, w) {
 			t.Errorf("%s %s: w = %s, want %.3f", l.Combo, l.Case, l.WPlf, w)
+		}
+		if l.Combo == "D+0.75L+0.75(Lr or S)" && l.Case != "D + 0.75 L" {
+			t.Errorf("case %q, want D + 0.75 L", l.Case)
 		}
 		if l.Combo == "D+L" && l.CD != "1" {
 			t.Errorf("D+L: CD %q, want 1 from the factors", l.CD)

@@ -135,12 +135,13 @@ func TestWriteReportNonFinite(t *testing.T) {
 func TestWriteReportEscapes(t *testing.T) {
 	r, g := loadReportFixture(t)
 	r.Plan = `plan<b id="inj1">x</b>.dxf`
-	r.Members[0].Source = `</script><b id="inj2">x</b>`
+	r.Members[0].Handle = `</script><b id="inj2">x</b>`
+	r.Members[5].Source = `</td><b id="inj6">x</b>`
 	r.Members[0].ID = `M"1<i id="inj3">`
 	r.Assumptions.Notes = append(r.Assumptions.Notes, `<script id="inj4">alert(1)</script>`)
 	g.Zones[0].Name = `Z<b id="inj5">`
 	doc, data := repWriteParse(t, r, g)
-	for i := 1; i <= 5; i++ {
+	for i := 1; i <= 6; i++ {
 		if repByID(doc, fmt.Sprintf("inj%d", i)) != nil {
 			t.Errorf("injected element inj%d made it into the page", i)
 		}
@@ -148,7 +149,7 @@ func TestWriteReportEscapes(t *testing.T) {
 	if repByID(doc, `m-M"1<i id="inj3">`) == nil {
 		t.Error("member with markup in its id has no element carrying the id")
 	}
-	// The member data stays one script; its text holds the source escaped.
+	// The member data stays one script; its text holds the handle escaped.
 	var scripts []string
 	repWalk(doc, func(n *html.Node) {
 		if n.Type == html.ElementNode && n.Data == "script" {

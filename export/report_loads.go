@@ -158,12 +158,14 @@ func zoneLineLoads(z *Zone, tribIn float64) map[string]float64 {
 // comboLoads evaluates each combination's line load on a member of zone z
 // and tributary width tribIn: w = sum of factor x line load, one line per
 // case, leaving out cases whose loads other than D are all zero (ASCE 7-16
-// 2.4.1 combinations with an absent load add nothing). cd maps a
+// 2.4.1 combinations with an absent load add nothing) and cases that repeat
+// an earlier one once the absent loads are dropped. cd maps a
 // combination name (spaces removed) to its CD from the member's factors.
 func comboLoads(combos []string, z *Zone, tribIn float64, cd map[string]float64) ([]comboLoad, []string) {
 	w := zoneLineLoads(z, tribIn)
 	var out []comboLoad
 	var problems []string
+	seen := map[string]bool{}
 	for _, name := range combos {
 		cases, err := parseCombo(name)
 		if err != nil {
@@ -177,40 +179,59 @@ func comboLoads(combos []string, z *Zone, tribIn float64, cd map[string]float64)
 		}
 		for _, c := range cases {
 			for _, dir := range windCases(c, w) {
-				total, subst, label, live := 0.0, "", "", false
-				for _, k := range []string{loadD, loadL, loadLr, loadS, loadW} {
-					f, ok := c[k]
-					if !ok {
-						continue
-					}
-					wk := w[k]
-					if k == loadW {
-						wk = w[dir]
-					}
-					if k != loadD && wk != 0 {
-						live = true
-					}
-					total += f * wk
-					if subst != "" {
-						subst += " + "
-					}
-					subst += fmtNum(f) + "(" + fmtNum(wk) + ")"
-					if label != "" {
-						label += " + "
-					}
-					label += fmtNum(f) + " " + k
-					if k == loadW {
-						label += " " + strings.TrimPrefix(dir, "W ")
-					}
-				}
-				if !live && !(len(c) == 1 && c[loadD] != 0) {
+				l, ok := evalCase(c, w, dir)
+				if !ok || seen[l.Case] {
 					continue
 				}
-				out = append(out, comboLoad{Combo: name, Case: label, Subst: subst, WPlf: fmtNum(total), CD: cdText})
+				seen[l.Case] = true
+				l.Combo, l.CD = name, cdText
+				out = append(out, l)
 			}
 		}
 	}
 	return out, problems
+}
+
+// evalCase writes one case out, leaving out loads the zone does not have:
+// "D + 0.75 L" = "12 + 0.75(40)" = 42. ok is false when the case has no
+// load other than D and is not D alone.
+func evalCase(c comboCase, w map[string]float64, dir string) (comboLoad, bool) {
+	var l comboLoad
+	total, live, terms := 0.0, false, 0
+	for _, k := range []string{loadD, loadL, loadLr, loadS, loadW} {
+		f, ok := c[k]
+		if !ok {
+			continue
+		}
+		wk, name := w[k], k
+		if k == loadW {
+			wk, name = w[dir], dir
+		}
+		if wk == 0 {
+			continue
+		}
+		if k != loadD {
+			live = true
+		}
+		total += f * wk
+		if terms > 0 {
+			l.Case += " + "
+			l.Subst += " + "
+		}
+		terms++
+		if f == 1 {
+			l.Case += name
+			l.Subst += fmtNum(wk)
+		} else {
+			l.Case += fmtNum(f) + " " + name
+			l.Subst += fmtNum(f) + "(" + fmtNum(wk) + ")"
+		}
+	}
+	if !live && !(len(c) == 1 && c[loadD] != 0) {
+		return l, false
+	}
+	l.WPlf = fmtNum(total)
+	return l, true
 }
 
 // windCases returns the wind directions a case is evaluated for: none when

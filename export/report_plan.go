@@ -13,8 +13,8 @@ import (
 // every run, and failing or erroring members always.
 const labelEveryMemberUpTo = 2000
 
-// planSVG writes the plan as one <svg> element and the member details for
-// the hover panel as a JavaScript array. It is written by hand into one
+// planSVG writes the plan as one <svg> element, and the member details for
+// the hover panel (memberData). It is written by hand into one
 // buffer, not through the template, so that a plan of 100,000 members stays
 // fast: every string is escaped by appendHTML or appendJSString.
 //
@@ -226,35 +226,7 @@ func planSVG(r *Results, g *PlanGeometry) (template.HTML, template.JS) {
 	}
 	buf = append(buf, "</g>\n</svg>"...)
 
-	js := make([]byte, 0, 64+len(r.Members)*96)
-	js = append(js, '[')
-	for i := range r.Members {
-		m := &r.Members[i]
-		if i > 0 {
-			js = append(js, ",\n"...)
-		}
-		js = append(js, '[')
-		js = appendJSString(js, m.ID)
-		js = append(js, ',')
-		js = appendJSString(js, m.Mark)
-		js = append(js, ',')
-		js = appendJSString(js, m.Size+" "+m.Species+" "+m.Grade)
-		js = append(js, ',')
-		js = appendJSString(js, ftInList(m.SpansIn))
-		js = append(js, ',')
-		js = appendJSString(js, ratioText(m.MaxRatio))
-		js = append(js, ',')
-		js = appendJSString(js, m.Governing)
-		js = append(js, ',')
-		js = appendJSString(js, m.Status)
-		js = append(js, ',')
-		js = appendJSString(js, m.Source)
-		js = append(js, ',')
-		js = appendJSString(js, checkRatios(m))
-		js = append(js, ']')
-	}
-	js = append(js, ']')
-	return template.HTML(buf), template.JS(js)
+	return template.HTML(buf), memberData(r)
 }
 
 // appendLabel writes the text at a member's midpoint, along the member and
@@ -308,24 +280,6 @@ func appendLabel(buf []byte, m *Member, class string, a, b [2]float64, textH flo
 	buf = append(buf, `">`...)
 	buf = appendHTML(buf, text)
 	return append(buf, "</text>\n"...)
-}
-
-// checkRatios lists a member's ratios by check kind for the details panel:
-// "bending-top 0.805 (D+L); shear 0.280 (D+L)".
-func checkRatios(m *Member) string {
-	b := make([]byte, 0, 32*len(m.Checks))
-	for i, c := range m.Checks {
-		if i > 0 {
-			b = append(b, "; "...)
-		}
-		b = append(b, c.Kind...)
-		b = append(b, ' ')
-		b = append(b, ratioText(c.Ratio)...)
-		b = append(b, " ("...)
-		b = append(b, c.Combo...)
-		b = append(b, ')')
-	}
-	return string(b)
 }
 
 // bbox is a bounding box of finite points.

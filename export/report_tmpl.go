@@ -8,7 +8,7 @@ import (
 // reportTemplate is the page. Section ids (summary, plan, schedule,
 // takeoff, calculations, mark-<mark>, assumptions, cautions) are stable:
 // the tests and any reader's links use them.
-var reportTemplate = template.Must(template.New("report").Funcs(template.FuncMap{"num": fmtNum, "bf": boardFeet}).Parse(reportHTML))
+var reportTemplate = template.Must(template.New("report").Funcs(template.FuncMap{"num": fmtNum, "bf": boardFeet, "limit": limitText}).Parse(reportHTML))
 
 // boardFeet prints board feet to 0.1, or "n/a".
 func boardFeet(v float64) string {
@@ -109,13 +109,16 @@ const reportJS = `
   window.addEventListener('mouseup',function(){drag=null;});
   svg.addEventListener('dblclick',function(){set(home[0],home[1],home[2],home[3]);});
   function text(tag,s){var el=document.createElement(tag);el.textContent=s;return el;}
-  function show(el,pin){var i=+el.getAttribute('data-i'),m=FC_MEMBERS[i];if(!m)return;
+  function show(el,pin){var i=+el.getAttribute('data-i'),m=FC.m[i];if(!m)return;
     if(pin){if(sel)sel.classList.remove('sel');sel=el;el.classList.add('sel');}
+    var t=FC.text,st={p:'pass',f:'fail',e:'error'}[m[6]],mark=t[m[1]],rs=[];
+    m[8].forEach(function(v,k){if(v!==null)rs.push(FC.kinds[k]+' '+v.toFixed(3));});
     out.textContent='';
-    out.appendChild(text('b',m[0]+(m[1]?'  mark '+m[1]:'')));
-    [['size',m[2]],['spans',m[3]],['max ratio',m[4]+(m[5]?' ('+m[5]+')':'')],['status',m[6]],['checks',m[8]],['drawn',m[7]]]
+    out.appendChild(text('b',m[0]+(mark?'  mark '+mark:'')));
+    [['size',t[m[2]]],['spans',t[m[3]]],['max ratio',m[4]===null?'':m[4].toFixed(3)+(m[5]>=0?' ('+FC.kinds[m[5]]+')':'')],
+     ['status',st],['ratios',rs.join(', ')],['handle',m[7]]]
       .forEach(function(r){if(r[1]){out.appendChild(document.createElement('br'));out.appendChild(text('span',r[0]+': '+r[1]));}});
-    if(m[1]){var a=document.createElement('a');a.href='#mark-'+m[1].replace(/[^A-Za-z0-9_-]/g,'_');a.textContent='calculation';
+    if(mark){var a=document.createElement('a');a.href='#mark-'+mark.replace(/[^A-Za-z0-9_-]/g,'_');a.textContent='calculation';
       out.appendChild(document.createElement('br'));out.appendChild(a);}
   }
   svg.addEventListener('mouseover',function(e){if(e.target.classList.contains('j')&&!sel)show(e.target,false);});
@@ -209,7 +212,7 @@ const reportHTML = `<!DOCTYPE html>
 {{range .Lines}}{{template "line" .}}{{end}}
 <div class="result {{if eq .Verdict "OK"}}ok{{else}}ng{{end}}">{{.Actual}} {{.Unit}} / {{.Allowable}} {{.Unit}} = <span class="ratio">{{.Ratio}}</span> {{if eq .Verdict "OK"}}&le; 1.000{{else}}&gt; 1.000{{end}}: {{.Verdict}}</div></div>
 {{end}}
-{{if .Steps}}<h4>Blocking rows: bottom-edge bending per number of rows (DOMAIN rule; CL by NDS 2018 3.3.3)</h4>
+{{if .Steps}}<h4>Blocking rows: bottom-edge bending for each number of rows tried (rows evenly spaced in every span; CL by NDS 2018 3.3.3)</h4>
 <table class="steps"><tr><th>rows per span</th><th>lu, in</th><th>CL</th><th>ratio</th><th></th></tr>
 {{range .Steps}}<tr><td class="n">{{.Rows}}</td><td class="n">{{.Lu}}</td><td class="n">{{.CL}}</td><td class="n">{{.Ratio}}</td><td>{{.Verdict}}</td></tr>{{end}}</table>{{end}}
 </article>
@@ -220,8 +223,8 @@ const reportHTML = `<!DOCTYPE html>
 <h3>Load combinations</h3><ul>{{range .Combos}}<li>{{.}}</li>{{end}}</ul>
 {{if .Assumptions.Zones}}<h3>Load zones</h3>
 <table><tr><th>zone</th><th>use</th><th>D psf</th><th>L psf</th><th>Lr psf</th><th>S psf</th><th>W down psf</th><th>W up psf</th><th>ceiling</th><th>live limit</th><th>total limit</th></tr>
-{{range .Assumptions.Zones}}<tr><td>{{.Name}}</td><td>{{.Use}}</td><td class="n">{{num .DeadPsf}}</td><td class="n">{{num .LivePsf}}</td><td class="n">{{num .RoofLivePsf}}</td><td class="n">{{num .SnowPsf}}</td><td class="n">{{num .WindDownPsf}}</td><td class="n">{{num .WindUpPsf}}</td><td>{{.Ceiling}}</td><td class="n">L/{{num .LiveDeflectionLimit}}</td><td class="n">L/{{num .TotalDeflectionLimit}}</td></tr>
-{{end}}</table><p class="hint">A limit of L/0 means that deflection is not checked.</p>{{end}}
+{{range .Assumptions.Zones}}<tr><td>{{.Name}}</td><td>{{.Use}}</td><td class="n">{{num .DeadPsf}}</td><td class="n">{{num .LivePsf}}</td><td class="n">{{num .RoofLivePsf}}</td><td class="n">{{num .SnowPsf}}</td><td class="n">{{num .WindDownPsf}}</td><td class="n">{{num .WindUpPsf}}</td><td>{{.Ceiling}}</td><td class="n">{{limit .LiveDeflectionLimit}}</td><td class="n">{{limit .TotalDeflectionLimit}}</td></tr>
+{{end}}</table>{{end}}
 {{if .Assumptions.Switches}}<h3>Settings</h3>
 <table><tr><th>setting</th><th>value</th><th>from</th></tr>{{range .Assumptions.Switches}}<tr><td>{{.Name}}</td><td>{{.Value}} {{.Unit}}</td><td>{{.Source}}</td></tr>{{end}}</table>{{end}}
 {{if .Assumptions.DesignValues}}<h3>Design values used</h3>
@@ -231,7 +234,7 @@ const reportHTML = `<!DOCTYPE html>
 
 <section id="cautions" class="cautions"><h2>Cautions</h2><ul>{{range .Cautions}}<li>{{.}}</li>{{end}}</ul></section>
 </main>
-<script>const FC_MEMBERS = {{.MemberJSON}};` + reportJS + `</script>
+<script>const FC = {{.MemberJSON}};` + reportJS + `</script>
 </body>
 </html>
 {{define "line"}}<div class="eq"><span class="sym">{{.Name}}</span>{{if .Formula}} = <span class="f">{{.Formula}}</span>{{end}}{{if .Subst}} = <span class="s">{{.Subst}}</span>{{end}} = <span class="val">{{.Value}}</span>{{if .Unit}} <span class="u">{{.Unit}}</span>{{end}}{{if .Note}} <span class="note">({{.Note}})</span>{{end}}{{if .Source}}<span class="src">{{.Source}}</span>{{end}}</div>{{end}}`
