@@ -95,3 +95,23 @@ func TestBadUnitsOption(t *testing.T) {
 		t.Errorf("got %v, want ErrUnits", err)
 	}
 }
+
+// errReader fails after its data, as a broken disk or network file would.
+type errReader struct{ data string }
+
+func (e *errReader) Read(p []byte) (int, error) {
+	if e.data == "" {
+		return 0, errors.New("disk on fire")
+	}
+	n := copy(p, e.data)
+	e.data = e.data[n:]
+	return n, nil
+}
+
+func TestReadErrorHasPosition(t *testing.T) {
+	_, err := Read(&errReader{data: "0\nSECTION\n2\nENTITIES\n"}, "io.dxf", Options{})
+	var pe *ParseError
+	if !errors.As(err, &pe) || pe.Line != 5 || err.Error() != "io.dxf:5: disk on fire" {
+		t.Errorf("got %v", err)
+	}
+}

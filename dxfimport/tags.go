@@ -74,7 +74,7 @@ func (t *TagReader) readLine() ([]byte, error) {
 		b = t.long
 	}
 	if err != nil && err != io.EOF {
-		return nil, err
+		return nil, t.errAt(t.line+1, -1, err) // an I/O error, with its position
 	}
 	if len(b) == 0 && err == io.EOF {
 		return nil, io.EOF
