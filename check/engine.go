@@ -230,7 +230,7 @@ func (e *engine) solveStrength() error {
 				}
 			}
 			for _, dir := range dirs[:nd] {
-				if sp, ok := e.caseSpec(f, dir); ok {
+				if sp, ok := e.caseSpec(f, dir); ok && !hasSpec(specs, sp) {
 					specs = append(specs, sp)
 				}
 			}
@@ -287,6 +287,18 @@ func (e *engine) solveStrength() error {
 		}
 	}
 	return nil
+}
+
+// hasSpec reports whether specs already holds a case with the loads and
+// CD of sp (two alternatives that reduce to the same case when a load is
+// zero, such as D+0.75L+0.75(Lr or S) without roof live or snow).
+func hasSpec(specs []caseSpec, sp caseSpec) bool {
+	for _, s := range specs {
+		if s.full == sp.full && s.patterned == sp.patterned && s.cd == sp.cd && s.name == sp.name {
+			return true
+		}
+	}
+	return false
 }
 
 // pruneCases switches pruneDominated on; tests switch it off to show it

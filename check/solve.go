@@ -156,7 +156,7 @@ func (e *engine) baseResult() Result {
 func (e *engine) factorTrace() []TraceItem {
 	t := tracer{items: make([]TraceItem, 0, 12+len(e.comboCDs))}
 	for _, c := range e.comboCDs {
-		t.add("CD", c.cd, "", c.name, "shortest-duration load of the combination", "NDS 2018 2.3.2, Table 2.3.2")
+		t.add("CD", c.cd, "", c.name, "", "NDS 2018 2.3.2, Table 2.3.2: shortest-duration load of the combination")
 	}
 	t.add("CM(Fb)", e.cm.Fb, "", "wet service", "", "NDS 2018 Supplement Table 4A/4B")
 	t.add("CM(Fv)", e.cm.Fv, "", "wet service", "", "NDS 2018 Supplement Table 4A/4B")
