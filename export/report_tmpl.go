@@ -83,6 +83,7 @@ h3.tight{margin-top:0}
   @page{size:letter;margin:0.5in}
   body{font-size:10.5pt}
   nav.toc,#details,.hint{display:none}
+  .sum-grid{display:block}
   header.top{border-bottom-width:2px}
   #plan{break-before:page;break-after:page}
   #plan-svg{height:7.6in;min-height:0;cursor:auto}
