@@ -35,7 +35,6 @@
 //	DXF104 warning  block inserts itself, or nesting deeper than the limit
 //	DXF105 error    more entities than Options.MaxEntities
 //	DXF106 warning  unsupported code page, or text not valid UTF-8
-//	DXF107 warning  no 0/EOF marker
 //	DXF108 warning  circle, arc or text under a non-uniform scale
 //	DXF109 info     Options.Units differs from $INSUNITS
 //	DXF110 warning  extrusion not along Z: projected onto XY

@@ -1,7 +1,10 @@
 package dxfimport
 
 import (
+	"bytes"
 	"errors"
+	"os"
+	"path/filepath"
 	"strings"
 	"testing"
 )
@@ -45,6 +48,8 @@ func TestRefusals(t *testing.T) {
 		{name: "ends inside entity", in: "0\nSECTION\n2\nENTITIES\n0\nLINE\n8\nA\n∑10\n1.0\n", err: ErrTruncated, code: -1},
 		{name: "ends inside header", in: "0\nSECTION\n2\nHEADER\n9\n$ACADVER\n∑1\nAC1009\n", err: ErrTruncated, code: -1},
 		{name: "ends after SECTION", in: "∑0\nSECTION\n", err: ErrTruncated, code: -1},
+		{name: "no EOF marker", in: "0\nSECTION\n2\nENTITIES\n∑0\nENDSEC\n", err: ErrTruncated, code: -1,
+			msg: "bin.dxf:5: truncated file: no 0/EOF marker after the last section: the file is cut off"},
 		{name: "bad code", in: "0\nSECTION\n∑X2\nHEADER\n0\nENDSEC\n0\nEOF\n", err: ErrBadCode, code: -1,
 			msg: `bin.dxf:3: bad group code: want an integer group code, got "X2"`},
 		{name: "code out of range", in: "0\nSECTION\n2\nENTITIES\n∑2000\nx\n", err: ErrBadCode, code: -1},
@@ -113,5 +118,31 @@ func TestReadErrorHasPosition(t *testing.T) {
 	var pe *ParseError
 	if !errors.As(err, &pe) || pe.Line != 5 || err.Error() != "io.dxf:5: disk on fire" {
 		t.Errorf("got %v", err)
+	}
+}
+
+// TestCutFixtures cuts each ezdxf fixture after every line before its
+// final 0/EOF pair: every prefix must be refused as truncated (and never
+// read as a smaller drawing), with the error at a line of the prefix.
+func TestCutFixtures(t *testing.T) {
+	files, _ := filepath.Glob("testdata/*.dxf")
+	for _, path := range files {
+		b, err := os.ReadFile(path)
+		if err != nil {
+			t.Fatal(err)
+		}
+		lines := strings.SplitAfter(string(b), "\n")
+		for len(lines) > 0 && strings.TrimSpace(lines[len(lines)-1]) == "" {
+			lines = lines[:len(lines)-1]
+		}
+		end := 0
+		for k := 0; k < len(lines)-2; k++ {
+			end += len(lines[k])
+			_, err := Read(bytes.NewReader(b[:end]), "cut.dxf", Options{})
+			var pe *ParseError
+			if !errors.Is(err, ErrTruncated) || !errors.As(err, &pe) || pe.Line < 1 || pe.Line > k+1 {
+				t.Fatalf("%s cut after line %d: got %v", path, k+1, err)
+			}
+		}
 	}
 }

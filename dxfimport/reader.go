@@ -138,9 +138,10 @@ func (r *reader) run() error {
 	for {
 		err := r.next()
 		if err == io.EOF {
-			r.d.Issues.Add(Pos{File: r.d.File, Line: r.tr.line}, "DXF107", SevWarning,
-				"the file has no 0/EOF marker after its last section")
-			break
+			// Strict: a DXF ends with 0/EOF; without it the file may
+			// have been cut off at a section boundary.
+			return &ParseError{File: r.d.File, Line: max(r.tr.start, 1), Code: -1,
+				Err: wrapf(ErrTruncated, "no 0/EOF marker after the last section: the file is cut off")}
 		}
 		if err != nil {
 			return err
