@@ -136,7 +136,7 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		return exitUsage
 	}
 	res := exportResults(o, c.planPath)
-	written, err := c.write(o, res)
+	written, err := c.write(o, res, stderr)
 	if err != nil {
 		fmt.Fprintf(stderr, "framecheck: %v\n", err)
 		return exitUsage
@@ -149,7 +149,8 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	return exitOK
 }
 
-// checkPaths refuses an output folder that is the plan itself.
+// checkPaths refuses an output folder that is the plan itself, or one
+// whose outputs would replace the plan or the project file.
 func (c *checkRun) checkPaths() error {
 	in, err1 := filepath.Abs(c.planPath)
 	out, err2 := filepath.Abs(c.outDir)
@@ -159,46 +160,111 @@ func (c *checkRun) checkPaths() error {
 	if st, err := os.Stat(c.outDir); err == nil && !st.IsDir() {
 		return fmt.Errorf("output folder %s exists and is not a folder", c.outDir)
 	}
+	for _, name := range c.outputNames() {
+		p := filepath.Join(c.outDir, name)
+		for _, src := range []string{c.planPath, c.projectPath} {
+			if src != "" && sameFile(src, p) {
+				return fmt.Errorf("output %s would replace the input %s: choose another -o", p, src)
+			}
+		}
+	}
 	return nil
 }
 
-// write writes every output into the output folder; each file goes to a
-// temporary name first and is renamed into place only when complete.
-func (c *checkRun) write(o *outcome, res *export.Results) ([]string, error) {
+// sameFile reports whether a and b name one file: the same absolute path,
+// or (both existing) the same file through a link.
+func sameFile(a, b string) bool {
+	aa, err1 := filepath.Abs(a)
+	bb, err2 := filepath.Abs(b)
+	if err1 == nil && err2 == nil && aa == bb {
+		return true
+	}
+	sa, err1 := os.Stat(a)
+	sb, err2 := os.Stat(b)
+	return err1 == nil && err2 == nil && os.SameFile(sa, sb)
+}
+
+// outputNames are the files a run may write into the output folder.
+func (c *checkRun) outputNames() []string {
+	base := strings.TrimSuffix(filepath.Base(c.planPath), filepath.Ext(c.planPath))
+	return []string{resultsName, scheduleName, base + "-checked.dxf", base + "-overlay.dxf"}
+}
+
+// write writes every output into the output folder, nothing lost: each
+// file is written complete into a private staging folder inside it, and
+// only when all are written are they renamed into place. A failure leaves
+// the folder's earlier files as they were and no partial file behind (a
+// folder that the run created is removed again).
+func (c *checkRun) write(o *outcome, res *export.Results, stderr io.Writer) (written []string, err error) {
+	_, statErr := os.Stat(c.outDir)
+	created := os.IsNotExist(statErr)
 	if err := os.MkdirAll(c.outDir, 0o755); err != nil {
 		return nil, err
 	}
-	base := strings.TrimSuffix(filepath.Base(c.planPath), filepath.Ext(c.planPath))
-	var written []string
-	add := func(name string, err error) error {
-		if err != nil {
-			return fmt.Errorf("writing %s: %w", name, err)
+	stage, err := os.MkdirTemp(c.outDir, ".framecheck-partial-")
+	if err != nil {
+		return nil, err
+	}
+	defer func() {
+		os.RemoveAll(stage)
+		if err != nil && created {
+			os.Remove(c.outDir) // only if still empty
 		}
-		written = append(written, name)
+	}()
+	names := c.outputNames()
+	var staged []string
+	add := func(name string, werr error) error {
+		if werr != nil && !errors.Is(werr, export.ErrNonFinite) {
+			return fmt.Errorf("writing %s: %w", filepath.Join(c.outDir, name), werr)
+		}
+		staged = append(staged, name)
 		return nil
 	}
-	p := filepath.Join(c.outDir, resultsName)
-	if err := add(p, export.WriteJSON(p, res)); err != nil && !errors.Is(err, export.ErrNonFinite) {
-		return written, err
+	if err := add(names[0], export.WriteJSON(filepath.Join(stage, names[0]), res)); err != nil {
+		return nil, err
 	}
-	p = filepath.Join(c.outDir, scheduleName)
-	if err := add(p, export.WriteXLSX(p, res)); err != nil && !errors.Is(err, export.ErrNonFinite) {
-		return written, err
+	if err := add(names[1], export.WriteXLSX(filepath.Join(stage, names[1]), res)); err != nil {
+		return nil, err
 	}
 	toInch := o.drawing.ToInch
 	if toInch <= 0 {
 		toInch = 1
 	}
 	mk := export.MarkupFromResults(res, toInch)
-	p = filepath.Join(c.outDir, base+"-checked.dxf")
-	if err := add(p, export.Annotate(c.planPath, p, mk)); err != nil {
-		return written, err
-	}
-	if c.overlay {
-		p = filepath.Join(c.outDir, base+"-overlay.dxf")
-		if err := add(p, export.WriteOverlay(p, mk, res.DrawingUnits)); err != nil {
-			return written, err
+	overlay := c.overlay
+	aerr := export.Annotate(c.planPath, filepath.Join(stage, names[2]), mk)
+	var dxfErr *export.DXFError
+	switch {
+	case errors.As(aerr, &dxfErr):
+		// The drawing was read, but its copy cannot be annotated (an R13+
+		// file without TABLES, no 0/EOF): the markup goes alone to the
+		// overlay instead, and the check results stand.
+		fmt.Fprintf(stderr, "framecheck: no annotated copy of %s: %v; the markup is written alone to %s instead\n",
+			c.planPath, aerr, filepath.Join(c.outDir, names[3]))
+		overlay = true
+	default:
+		if err := add(names[2], aerr); err != nil {
+			return nil, err
 		}
+	}
+	if overlay {
+		if err := add(names[3], export.WriteOverlay(filepath.Join(stage, names[3]), mk, res.DrawingUnits)); err != nil {
+			return nil, err
+		}
+	}
+	// Every output is complete: refuse before renaming any if one cannot
+	// take its place, then move them in.
+	for _, name := range staged {
+		if st, serr := os.Lstat(filepath.Join(c.outDir, name)); serr == nil && st.IsDir() {
+			return nil, fmt.Errorf("writing %s: a folder of that name is in the way", filepath.Join(c.outDir, name))
+		}
+	}
+	for _, name := range staged {
+		dst := filepath.Join(c.outDir, name)
+		if err := os.Rename(filepath.Join(stage, name), dst); err != nil {
+			return written, fmt.Errorf("writing %s: %w", dst, err)
+		}
+		written = append(written, dst)
 	}
 	return written, nil
 }
