@@ -1,7 +1,6 @@
 package check
 
 import (
-	"fmt"
 	"math"
 	"strconv"
 
@@ -86,8 +85,9 @@ func (e *engine) bearingCheck() (CheckResult, []string) {
 			}
 		}
 		if rMin < 0 {
-			info = append(info, fmt.Sprintf("bearing %d at %s in: net uplift reaction %s lb under %s; hold it down",
-				j+1, num(b.AtIn), num(-rMin), e.caseLabel(&e.cases[ciMin])))
+			t := e.arena.tracer(0)
+			info = append(info, t.f("bearing "+strconv.Itoa(j+1)+" at %s in: net uplift reaction %s lb under "+
+				e.caseLabel(&e.cases[ciMin])+"; hold it down", b.AtIn, -rMin))
 		}
 		edge := math.Min(b.AtIn-b.LengthIn/2, e.m.LengthIn-(b.AtIn+b.LengthIn/2))
 		cb := BearingAreaFactor(b.LengthIn, edge)

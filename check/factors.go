@@ -3,6 +3,7 @@ package check
 import (
 	"fmt"
 	"math"
+	"strings"
 )
 
 // LoadType is one kind of load, as ASCE 7-16 names them.
@@ -140,7 +141,7 @@ func SizeFactor(dv DesignValues, sec Section) SizeFactors {
 		}
 		return cf
 	case SizeFactor4A:
-		if gradeKey(dv.Grade) == "stud" {
+		if strings.EqualFold(dv.Grade, "Stud") {
 			if w <= 4 {
 				return SizeFactors{1.1, 1.1, 1.05}
 			}

@@ -68,6 +68,10 @@ func DefaultSettings() Settings {
 	return Settings{TopEdgeBraced: true, PatternLive: true, Temperature: "normal", Kcr: 1.5}
 }
 
+// maxBearings bounds the bearings of one member, so that its segments fit
+// the live-load pattern masks (uint32).
+const maxBearings = 30
+
 // minBlockingLuIn is the unbraced length below which the blocking solver
 // stops adding rows (DOMAIN rule: lu would fall below 24 in).
 const minBlockingLuIn = 24.0
@@ -81,6 +85,9 @@ func (m *Member) validate() error {
 	}
 	if len(m.Bearings) < 2 {
 		return fmt.Errorf("%d bearing(s): want at least 2", len(m.Bearings))
+	}
+	if len(m.Bearings) > maxBearings {
+		return fmt.Errorf("%d bearings: at most %d are supported", len(m.Bearings), maxBearings)
 	}
 	if !sort.SliceIsSorted(m.Bearings, func(i, j int) bool { return m.Bearings[i].AtIn < m.Bearings[j].AtIn }) {
 		return fmt.Errorf("bearings not sorted along the member")

@@ -162,14 +162,24 @@ func (e *engine) factorTrace() []TraceItem {
 	t.add("CM(Fv)", e.cm.Fv, "", "wet service", "", "NDS 2018 Supplement Table 4A/4B")
 	t.add("CM(Fc_perp)", e.cm.FcPerp, "", "wet service", "", "NDS 2018 Supplement Table 4A/4B")
 	t.add("CM(E)", e.cm.E, "", "wet service", "", "NDS 2018 Supplement Table 4A/4B")
-	t.add("Ct(Fb, Fv, Fc_perp)", e.ct.Fb, "", "temperature "+tempName(e.s.Temperature), "", "NDS 2018 Table 2.3.3")
-	t.add("Ct(E)", e.ct.E, "", "temperature "+tempName(e.s.Temperature), "", "NDS 2018 Table 2.3.3")
-	t.add("CF(Fb)", e.cf.Fb, "", "size factor, "+e.sec.Name, "", "NDS 2018 Supplement Table "+e.dv.SizeFactor)
+	t.add("Ct(Fb, Fv, Fc_perp)", e.ct.Fb, "", "temperature", tempName(e.s.Temperature), "NDS 2018 Table 2.3.3")
+	t.add("Ct(E)", e.ct.E, "", "temperature", tempName(e.s.Temperature), "NDS 2018 Table 2.3.3")
+	t.add("CF(Fb)", e.cf.Fb, "", "size factor", e.sec.Name, sizeFactorRef(e.dv.SizeFactor))
 	t.add("Cfu", 1, "", "bending about the strong axis", "", "NDS 2018 4.3.7")
 	t.add("Ci(Fb, Fv)", e.ci.Fb, "", "incising", "", "NDS 2018 Table 4.3.8")
 	t.add("Ci(E)", e.ci.E, "", "incising", "", "NDS 2018 Table 4.3.8")
 	t.add("Cr", e.cr, "", "repetitive member", "", "NDS 2018 4.3.9")
 	return t.items
+}
+
+func sizeFactorRef(rule string) string {
+	switch rule {
+	case SizeFactor4A:
+		return "NDS 2018 Supplement Table 4A, size factors"
+	case SizeFactor4B:
+		return "NDS 2018 Supplement Table 4B, footnote on size factors"
+	}
+	return "user design values: CF = 1.0"
 }
 
 func tempName(s string) string {
@@ -224,10 +234,19 @@ func errorResult(m Member, e *engine, err error) Result {
 	if e != nil && e.dv.Species != "" {
 		r.Species, r.Grade, r.Values = e.dv.Species, e.dv.Grade, e.dv
 	}
+	// Only finite numbers: results go to JSON.
 	for i := 1; i < len(m.Bearings); i++ {
-		r.SpansIn = append(r.SpansIn, m.Bearings[i].AtIn-m.Bearings[i-1].AtIn)
+		if sp := m.Bearings[i].AtIn - m.Bearings[i-1].AtIn; finite(sp) {
+			r.SpansIn = append(r.SpansIn, sp)
+		} else {
+			r.SpansIn = append(r.SpansIn, 0)
+		}
 	}
-	r.OverhangsIn = [2]float64{m.OverhangStartIn, m.OverhangEndIn}
+	for i, o := range []float64{m.OverhangStartIn, m.OverhangEndIn} {
+		if finite(o) {
+			r.OverhangsIn[i] = o
+		}
+	}
 	id := m.ID
 	if id == "" {
 		id = "member"
