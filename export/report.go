@@ -118,7 +118,7 @@ func buildReport(r *Results, g *PlanGeometry, when time.Time) *reportPage {
 	if len(p.Combos) == 0 {
 		p.Combos = defaultCombos
 	}
-	// Worst members: the largest ratios among members that were checked.
+	// Worst members: among the members that were checked.
 	idx := make([]int, 0, len(r.Members))
 	for i := range r.Members {
 		m := &r.Members[i]
@@ -132,17 +132,16 @@ func buildReport(r *Results, g *PlanGeometry, when time.Time) *reportPage {
 		}
 		idx = append(idx, i)
 	}
+	// Failing members first (a member can fail with every ratio below 1,
+	// when RB > 50), then by ratio, then in plan order.
+	worse := func(a, b int) int {
+		ma, mb := &r.Members[a], &r.Members[b]
+		return cmp.Or(cmp.Compare(failRank(mb.Status), failRank(ma.Status)),
+			cmp.Compare(ratioKey(mb.MaxRatio), ratioKey(ma.MaxRatio)), cmp.Compare(a, b))
+	}
+	slices.SortFunc(idx, worse)
 	if len(idx) > worstShown {
-		// Partial selection is enough; a full sort of 100k is also cheap,
-		// but keep it proportional.
-		slices.SortFunc(idx, func(a, b int) int {
-			return cmp.Or(cmp.Compare(ratioKey(r.Members[b].MaxRatio), ratioKey(r.Members[a].MaxRatio)), cmp.Compare(a, b))
-		})
 		idx = idx[:worstShown]
-	} else {
-		slices.SortStableFunc(idx, func(a, b int) int {
-			return cmp.Compare(ratioKey(r.Members[b].MaxRatio), ratioKey(r.Members[a].MaxRatio))
-		})
 	}
 	for _, i := range idx {
 		p.Worst = append(p.Worst, newWorstRow(&r.Members[i]))
@@ -157,6 +156,13 @@ func buildReport(r *Results, g *PlanGeometry, when time.Time) *reportPage {
 	p.PlanSVG, p.MemberJSON = planSVG(r, g)
 	p.Calcs = buildCalcs(r)
 	return p
+}
+
+func failRank(status string) int {
+	if status == StatusFail {
+		return 1
+	}
+	return 0
 }
 
 // ratioKey orders non-finite ratios last among the worst.

@@ -213,8 +213,10 @@ func TestRatioColour(t *testing.T) {
 	}
 }
 
-// bigResults is a plan of n joists at 16 in in rows of 50, every 10th
-// failing and every 97th in error, with the fixture's traces.
+// repBigResults is a plan of n joists at 16 in in rows of 50, copies of
+// the fixture's members (traces included) in turn: the copies of its member
+// in error stay in error, the others get ratios cycling from 0 to 1.29,
+// failing above 1.0.
 func repBigResults(tb testing.TB, n int) (*Results, *PlanGeometry) {
 	r, g := loadReportFixture(tb)
 	proto := r.Members
@@ -226,7 +228,13 @@ func repBigResults(tb testing.TB, n int) (*Results, *PlanGeometry) {
 		y := float64(i/50) * 200
 		m.ID = fmt.Sprintf("M%d", i+1)
 		m.StartIn, m.EndIn = [2]float64{x, y}, [2]float64{x, y + 168}
-		m.MaxRatio = float64(i%130) / 100
+		if m.Status != StatusError {
+			m.MaxRatio = float64(i%130) / 100
+			m.Status = StatusPass
+			if m.MaxRatio > 1 {
+				m.Status = StatusFail
+			}
+		}
 		big.Members[i] = m
 	}
 	big.Summary = Summary{Members: n}

@@ -109,7 +109,7 @@ func TestWriteReportSections(t *testing.T) {
 	if strings.Join(cards, " ") != strings.Join(want, " ") {
 		t.Errorf("summary cards %v, want %v", cards, want)
 	}
-	// The worst member listed first has the largest ratio of the fixture.
+	// The worst member listed first is the failing member with the largest ratio.
 	worst := repRows(repByID(doc, "worst"))
 	if len(worst) < 2 {
 		t.Fatalf("worst table has %d rows", len(worst))
@@ -117,9 +117,12 @@ func TestWriteReportSections(t *testing.T) {
 	best := ""
 	maxR := -1.0
 	for _, m := range r.Members {
-		if m.Status != StatusError && m.MaxRatio > maxR {
+		if m.Status == StatusFail && m.MaxRatio > maxR {
 			best, maxR = m.ID, m.MaxRatio
 		}
+	}
+	if best == "" {
+		t.Fatal("fixture has no failing member")
 	}
 	if worst[1][0] != best {
 		t.Errorf("worst member listed %q, want %q", worst[1][0], best)
