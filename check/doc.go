@@ -83,15 +83,17 @@
 //
 // BenchmarkCheckMember (a roof joist under net uplift: analysis, every
 // check with its trace, and the blocking solver's four bottom-edge
-// evaluations) measured 13.3 us of CPU per check, about 75,000 checks per
-// second on one core of this machine (AMD EPYC, 2 cores shared with other
-// jobs; go test -bench CheckMember -cpu 1, cpu-ns/op metric; wall-clock
-// ns/op varied from 13 to 250 us with the machine's load). The target of
-// 100,000 checks/s is not reached for that case: about a third of the time
-// is spent building the traces (some 45 trace items and 100 formatted
-// numbers per result) and the rest in the six load cases, three deflection
-// solves and the solver's steps. A simple-span floor joist that needs no
-// rows (BenchmarkCheckMemberFloor) measured 7.3 us, about 136,000 checks
-// per second; a three-span joist with a cantilever under 15 live-load
-// patterns (BenchmarkCheckMemberContinuous) about 87 us.
+// evaluations) measured 13.3 to 15 us of CPU per check, about 67,000 to
+// 75,000 checks per second on one core of this machine (AMD EPYC, 2 cores
+// shared with other jobs at a load average of 10 or more; go test -bench
+// CheckMember -cpu 1, cpu-ns/op metric; wall-clock ns/op varied from 13 to
+// 250 us with the load). The target of 100,000 checks/s is not reached for
+// that case: about a quarter of the time goes into formatting the traces
+// (some 58 trace items and 100 numbers per result, every Result carrying
+// its full calculation) and the rest into the load cases, three
+// deflection solves and the solver's steps. A simple-span floor joist that
+// needs no rows (BenchmarkCheckMemberFloor) measured 7.3 to 8.6 us, about
+// 120,000 to 136,000 checks per second; a three-span joist with a
+// cantilever under 15 live-load patterns (BenchmarkCheckMemberContinuous)
+// about 70 us.
 package check

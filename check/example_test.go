@@ -32,3 +32,26 @@ func ExampleCheckMember() {
 	// bearing          D+L              88.889  625.000 psi 0.142
 	// governing bending-top 0.805
 }
+
+// Sizing a roof joist under wind uplift: the deeper joist needs fewer
+// blocking rows, and the blocking weight decides which is economical.
+func ExampleSize() {
+	m := check.Member{
+		ID: "R1", Species: "DF-L", Grade: "No.2", LengthIn: 216,
+		Bearings:  []check.Bearing{{AtIn: 0, LengthIn: 1.5}, {AtIn: 216, LengthIn: 1.5}},
+		SpacingIn: 24, TribIn: 24, Use: "roof",
+		Loads:     check.AreaLoads{DeadPsf: 8, RoofLivePsf: 20, WindUpPsf: 50},
+		LiveLimit: 180, TotalLimit: 120, Repetitive: true,
+	}
+	sz := check.Size(m, check.DefaultSettings(), []string{"2x8", "2x10", "2x12"}, 2.0)
+	for _, a := range sz.Alternatives {
+		fmt.Printf("%-5s rows/span %d  max ratio %.3f  %.2f bf/ft  cost %.1f bf  pass %v\n",
+			a.Size, a.RowsPerSpan, a.MaxRatio, a.BoardFeetPerFt, a.Cost, a.Pass)
+	}
+	fmt.Println("chosen", sz.Chosen.Size, sz.Chosen.BlockingAtIn)
+	// Output:
+	// 2x8   rows/span 6  max ratio 1.334  1.33 bf/ft  cost 36.0 bf  pass false
+	// 2x10  rows/span 3  max ratio 0.894  1.67 bf/ft  cost 36.0 bf  pass true
+	// 2x12  rows/span 2  max ratio 0.872  2.00 bf/ft  cost 40.0 bf  pass true
+	// chosen 2x10 [54 108 162]
+}
