@@ -63,15 +63,17 @@
 // the 2-core AMD EPYC build machine, shared with other jobs (load average
 // 10-14), go1.26, 2026-12-02:
 //
-//	BenchmarkRead       124-155 MB/s wall, 120-154 MB per CPU-second
+//	BenchmarkRead       75-155 MB/s wall (mostly 124-155),
+//	                    120-154 MB per CPU-second
 //	                    207 MB and 225k allocations per read
 //	                    alloc/entity 1.92: everything allocated during a read
 //	                    is 1.92 times the entities' own size (structs,
 //	                    points, strings), which bounds the peak heap
-//	BenchmarkTagReader  287-318 MB/s (Tag with a string value per pair)
+//	BenchmarkTagReader  160-318 MB/s wall, 288-313 MB per CPU-second
+//	                    (Tag with a string value per pair)
 //
-// Under heavier load wall-clock figures fall (25-35 MB/s were seen at load
-// 15); MB per CPU-second, which counts the garbage collector's threads
-// too, is the steadier figure. Run with
+// Wall-clock figures follow the machine's load; MB per CPU-second, which
+// counts the garbage collector's threads too, is the steadier figure. Run
+// with
 // go test -run '^$' -bench . -benchtime 8x ./dxfimport
 package dxfimport
