@@ -11,12 +11,35 @@ import (
 type interval struct {
 	a, b      float64 // ends, analysis coordinates
 	braced    bool    // held continuously: CL = 1
-	kind      string  // LeSimple, LeCantilever or LeGeneral
+	kind      uint8   // index in leKinds
 	luIn      float64
 	leIn      float64
-	leFormula string
+	leFormula uint8 // index in leFormulas
 	rb        float64
 	fbEPsi    float64
+}
+
+// Stretch kinds, indices in leKinds.
+const (
+	kindSimple uint8 = iota
+	kindCantilever
+	kindGeneral
+)
+
+var (
+	leKinds    = [...]string{LeSimple, LeCantilever, LeGeneral}
+	leRefs     = [...]string{"NDS 2018 Table 3.3.3 (single span)", "NDS 2018 Table 3.3.3 (cantilever)", "NDS 2018 Table 3.3.3 (general, continuous spans)"}
+	leFormulas = [...]string{"2.06 lu", "1.63 lu + 3 d", "1.84 lu", "1.33 lu", "0.90 lu + 3 d"}
+)
+
+// formulaIndex returns the index of an EffectiveLength formula in leFormulas.
+func formulaIndex(f string) uint8 {
+	for i, g := range leFormulas {
+		if g == f {
+			return uint8(i)
+		}
+	}
+	return 0
 }
 
 // edgeEval is an edge's governing bending result.
@@ -61,30 +84,32 @@ func (e *engine) braces(rowsIn []float64) []float64 {
 func (e *engine) intervals(continuous bool, pts []float64) []interval {
 	L := e.bm.LengthIn
 	if continuous {
-		return []interval{{a: 0, b: L, braced: true, kind: "braced"}}
+		return append(e.ivBuf[:0], interval{a: 0, b: L, braced: true})
 	}
 	d, bw := e.sec.DIn, e.sec.BIn
-	mk := func(a, b float64, kind string) interval {
+	mk := func(a, b float64, kind uint8) interval {
 		iv := interval{a: a, b: b, kind: kind, luIn: b - a}
-		iv.leIn, iv.leFormula = EffectiveLength(kind, iv.luIn, d)
+		var f string
+		iv.leIn, f = EffectiveLength(leKinds[kind], iv.luIn, d)
+		iv.leFormula = formulaIndex(f)
 		iv.rb = SlendernessRatio(iv.leIn, d, bw)
 		iv.fbEPsi = CriticalBucklingValue(e.eminAdj, iv.rb)
 		return iv
 	}
-	inner := LeSimple
+	inner := kindSimple
 	if len(e.spanSegs) > 1 {
-		inner = LeGeneral
+		inner = kindGeneral
 	}
 	out := e.ivBuf[:0]
 	defer func() { e.ivBuf = out[:0] }()
 	if pts[0] > 0 {
-		out = append(out, mk(0, pts[0], LeCantilever))
+		out = append(out, mk(0, pts[0], kindCantilever))
 	}
 	for i := 0; i+1 < len(pts); i++ {
 		out = append(out, mk(pts[i], pts[i+1], inner))
 	}
 	if last := pts[len(pts)-1]; last < L {
-		out = append(out, mk(last, L, LeCantilever))
+		out = append(out, mk(last, L, kindCantilever))
 	}
 	return out
 }
@@ -167,7 +192,8 @@ func (e *engine) bendingResult(kind string, ev edgeEval) CheckResult {
 		iv := ev.iv
 		t.add("lu", iv.luIn, "in", "distance between bracing points", t.f("%s - %s", iv.b+e.x0, iv.a+e.x0), "NDS 2018 3.3.3.4")
 		t.add("lu/d", iv.luIn/e.sec.DIn, "", "lu / d", t.f("%s / %s", iv.luIn, e.sec.DIn), "NDS 2018 Table 3.3.3")
-		t.add("le", iv.leIn, "in", iv.leFormula, leSubst(&t, iv.leFormula, iv.luIn, e.sec.DIn), "NDS 2018 Table 3.3.3 ("+iv.kind+")")
+		f := leFormulas[iv.leFormula]
+		t.add("le", iv.leIn, "in", f, leSubst(&t, f, iv.luIn, e.sec.DIn), leRefs[iv.kind])
 		t.add("RB", iv.rb, "", "sqrt(le d / b^2)", t.f("sqrt(%s(%s) / %s^2)", iv.leIn, e.sec.DIn, e.sec.BIn), "NDS 2018 Eq. 3.3-5")
 		t.add("Emin'", e.eminAdj, "psi", "Emin CM Ct Ci", t.f("%s(%s)(%s)(%s)", e.dv.EminPsi, e.cm.E, e.ct.E, e.ci.E), "NDS 2018 Table 4.3.1")
 		t.add("FbE", iv.fbEPsi, "psi", "1.20 Emin' / RB^2", t.f("1.20(%s) / %s^2", e.eminAdj, iv.rb), "NDS 2018 3.3.3.8")

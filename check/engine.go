@@ -43,7 +43,8 @@ type engine struct {
 	mMax  float64
 	arena traceArena
 
-	comboCDs []comboCD // every non-trivial combination case and its CD, for the report
+	comboCDs []comboCD       // every non-trivial combination case and its CD, for the report
+	names    []caseNameEntry // caseName cache, kept across pooled uses
 
 	wAll  []float64  // backing store of the cases' segment loads
 	ivBuf []interval // reused by intervals
@@ -82,7 +83,7 @@ func (e *engine) release() {
 // when nothing).
 func newEngine(m Member, s Settings) (*engine, error) {
 	e := enginePool.Get().(*engine)
-	*e = engine{m: m, s: s, cases: e.cases[:0], spanSegs: e.spanSegs[:0], wAll: e.wAll[:0], sup: e.sup[:0], ivBuf: e.ivBuf[:0], comboCDs: e.comboCDs[:0]}
+	*e = engine{m: m, s: s, cases: e.cases[:0], spanSegs: e.spanSegs[:0], wAll: e.wAll[:0], sup: e.sup[:0], ivBuf: e.ivBuf[:0], comboCDs: e.comboCDs[:0], names: e.names}
 	if err := s.validate(); err != nil {
 		return e, err
 	}
@@ -369,7 +370,7 @@ func (e *engine) caseSpec(f factorSet, dir float64) (caseSpec, bool) {
 		return caseSpec{}, false
 	}
 	return caseSpec{
-		name:      caseName(f, dir, present),
+		name:      e.caseName(f, dir, present),
 		cd:        ComboDurationFactor(f, present),
 		full:      f[LoadD]*e.wPli[LoadD] + f[LoadW]*wW,
 		patterned: f[LoadL]*e.wPli[LoadL] + f[LoadLr]*e.wPli[LoadLr] + f[LoadS]*e.wPli[LoadS],
@@ -382,18 +383,30 @@ type caseNameKey struct {
 	present [numLoadTypes]bool
 }
 
-// caseNames caches caseName: a run meets the same few cases again and again.
-var caseNames sync.Map
+type caseNameEntry struct {
+	key  caseNameKey
+	name string
+}
 
 // caseName writes a factor set as "D+0.75L+0.75S" or "0.6D+0.6W(up)",
 // leaving out loads that are zero.
 func caseName(f factorSet, dir float64, present [numLoadTypes]bool) string {
+	return formatCaseName(f, dir, present)
+}
+
+// caseName is caseName with a small cache kept by the pooled engine: a run
+// meets the same few cases again and again.
+func (e *engine) caseName(f factorSet, dir float64, present [numLoadTypes]bool) string {
 	k := caseNameKey{f, dir, present}
-	if v, ok := caseNames.Load(k); ok {
-		return v.(string)
+	for i := range e.names {
+		if e.names[i].key == k {
+			return e.names[i].name
+		}
 	}
 	s := formatCaseName(f, dir, present)
-	caseNames.Store(k, s)
+	if len(e.names) < 64 {
+		e.names = append(e.names, caseNameEntry{k, s})
+	}
 	return s
 }
 
