@@ -91,8 +91,8 @@ type worstRow struct {
 
 // markRow is one line of the framing schedule.
 type markRow struct {
-	Mark, Size, Species, Grade, Zone, Spacing, Spans, Rows, Ratio, Status, Band string
-	Count                                                                       int
+	Mark, Anchor, Size, Species, Grade, Zone, Spacing, Spans, Rows, Ratio, Status, Band string
+	Count                                                                               int
 }
 
 // worstShown is how many members the summary lists as the worst.
@@ -148,7 +148,7 @@ func buildReport(r *Results, g *PlanGeometry, when time.Time) *reportPage {
 	}
 	for _, mk := range r.Marks {
 		p.Marks = append(p.Marks, markRow{
-			Mark: mk.Mark, Size: mk.Size, Species: mk.Species, Grade: mk.Grade, Zone: mk.Zone,
+			Mark: mk.Mark, Anchor: "mark-" + anchorSafe(mk.Mark), Size: mk.Size, Species: mk.Species, Grade: mk.Grade, Zone: mk.Zone,
 			Spacing: inOrNA(mk.SpacingIn), Spans: ftInList(mk.SpansIn), Rows: intList(mk.BlockingRowsPerSpan),
 			Ratio: ratioText(mk.MaxRatio), Status: mk.Status, Band: bandClass(mk.MaxRatio, mk.Status), Count: mk.Count,
 		})

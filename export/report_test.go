@@ -135,6 +135,12 @@ func TestWriteReportSections(t *testing.T) {
 	if tot[0] != strconv.Itoa(r.Takeoff.Totals.JoistCount) || tot[2] != strconv.Itoa(r.Takeoff.Totals.BlockingPieces) {
 		t.Errorf("totals row %v, want joists %d, blocking pieces %d", tot, r.Takeoff.Totals.JoistCount, r.Takeoff.Totals.BlockingPieces)
 	}
+	// Every link inside the page lands on an element.
+	repWalk(doc, func(n *html.Node) {
+		if href := repAttr(n, "href"); n.Type == html.ElementNode && strings.HasPrefix(href, "#") && repByID(doc, href[1:]) == nil {
+			t.Errorf("link %q leads nowhere", href)
+		}
+	})
 	if !bytes.Contains(data, []byte("@media print")) || !bytes.Contains(data, []byte("break-before:page")) {
 		t.Error("no print CSS with page breaks")
 	}

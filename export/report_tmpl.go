@@ -176,7 +176,7 @@ const reportHTML = `<!DOCTYPE html>
 
 <section id="schedule"><h2>Framing schedule</h2>
 <table><tr><th>mark</th><th>size</th><th>species</th><th>grade</th><th>zone</th><th>spacing</th><th>spans</th><th>count</th><th>blocking rows per span</th><th>max ratio</th><th>status</th></tr>
-{{range .Marks}}<tr class="{{.Band}}"><td><a href="#mark-{{.Mark}}">{{.Mark}}</a></td><td>{{.Size}}</td><td>{{.Species}}</td><td>{{.Grade}}</td><td>{{.Zone}}</td><td class="n">{{.Spacing}}</td><td>{{.Spans}}</td><td class="n">{{.Count}}</td><td class="n">{{.Rows}}</td><td class="n">{{.Ratio}}</td><td class="status-{{.Status}}">{{.Status}}</td></tr>
+{{range .Marks}}<tr class="{{.Band}}"><td><a href="#{{.Anchor}}">{{.Mark}}</a></td><td>{{.Size}}</td><td>{{.Species}}</td><td>{{.Grade}}</td><td>{{.Zone}}</td><td class="n">{{.Spacing}}</td><td>{{.Spans}}</td><td class="n">{{.Count}}</td><td class="n">{{.Rows}}</td><td class="n">{{.Ratio}}</td><td class="status-{{.Status}}">{{.Status}}</td></tr>
 {{end}}</table>
 </section>
 
