@@ -83,17 +83,17 @@
 //
 // BenchmarkCheckMember (a roof joist under net uplift: analysis, every
 // check with its trace, and the blocking solver's four bottom-edge
-// evaluations) measured 13.3 to 15 us of CPU per check, about 67,000 to
-// 75,000 checks per second on one core of this machine (AMD EPYC, 2 cores
-// shared with other jobs at a load average of 10 or more; go test -bench
-// CheckMember -cpu 1, cpu-ns/op metric; wall-clock ns/op varied from 13 to
+// evaluations) measured 11.6 to 13.7 us of CPU per check, about 73,000 to
+// 86,000 checks per second on one core of this machine (AMD EPYC, 2 cores
+// shared with other jobs at a load average of about 11; go test -bench
+// CheckMember -cpu 1, cpu-ns/op metric; wall-clock ns/op varied from 16 to
 // 250 us with the load). The target of 100,000 checks/s is not reached for
-// that case: about a quarter of the time goes into formatting the traces
-// (some 58 trace items and 100 numbers per result, every Result carrying
-// its full calculation) and the rest into the load cases, three
+// that case: close to half of the time goes into building the traces (some
+// 58 trace items and 100 formatted numbers per result, every Result
+// carrying its full calculation), the rest into the load cases, three
 // deflection solves and the solver's steps. A simple-span floor joist that
-// needs no rows (BenchmarkCheckMemberFloor) measured 7.3 to 8.6 us, about
-// 120,000 to 136,000 checks per second; a three-span joist with a
+// needs no rows (BenchmarkCheckMemberFloor) measured 6.7 to 7.0 us, about
+// 143,000 to 150,000 checks per second; a three-span joist with a
 // cantilever under 15 live-load patterns (BenchmarkCheckMemberContinuous)
-// about 70 us.
+// about 65 to 69 us.
 package check
