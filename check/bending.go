@@ -121,7 +121,10 @@ func (e *engine) intervals(continuous bool, pts []float64) []interval {
 // and CL from equation 3.3-6 for each stretch.
 func (e *engine) evalEdge(top bool, ivs []interval) edgeEval {
 	ev := edgeEval{ci: -1}
-	tol := 1e-6*e.mMax + 1e-9
+	// Moments below 0.1% of the largest on the member do not count as
+	// compressing an edge (an overhang of a few inches, say): their stress
+	// is negligible and their stretch would otherwise set RB.
+	tol := 1e-3*e.mMax + 1e-9
 	for i := range ivs {
 		iv := &ivs[i]
 		inCompression := false

@@ -54,7 +54,8 @@
 //     stretch reaching a free end, simple-span row for a single-span
 //     member, the general row for spans of continuous members), RB, FbE
 //     and CL (Eq. 3.3-6), against the largest moment of that sign in the
-//     stretch. The inflection point is not taken as a brace. The top edge
+//     stretch. The inflection point is not taken as a brace; moments
+//     below 0.1% of the member's largest do not count as compression. The top edge
 //     is held continuously when Settings.TopEdgeBraced; the bottom edge
 //     when Member.BottomBracedContinuous. RB > 50 fails (NDS 3.3.3.7).
 //     Cfu = 1 (strong-axis bending), CV does not apply to sawn lumber.
