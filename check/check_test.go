@@ -310,3 +310,51 @@ func TestPruneDominated_ChangesNothing(t *testing.T) {
 		}
 	}
 }
+
+// TestShearAtD_ClosedForm: with loads within d of the bearing face left
+// out (NDS 2018 3.4.3.1(a)), V on a uniformly loaded simple span is
+// w (L/2 - lb/2 - d) (statics).
+func TestShearAtD_ClosedForm(t *testing.T) {
+	m := floorJoist("2x10", 168, 16)
+	m.Bearings = []Bearing{{0, 3.5}, {168, 3.5}}
+	s := DefaultSettings()
+	s.ShearAtD = true
+	r := CheckMember(m, s)
+	w := 50 * 16 / 144.0
+	expectNear(t, "V at d", traceValue(t, find(t, r, KindShear), "V"), w*(168.0/2-3.5/2-9.25), 1e-6, 1e-9, "w (L/2 - lb/2 - d)")
+}
+
+// TestBearingAreaFactor_InteriorBearing: the interior bearing of a
+// two-span joist, 1.5 in long and far from the member ends, takes Cb =
+// (1.5 + 0.375)/1.5 = 1.25 (NDS 2018 3.10.4): Fc_perp' = 625 (1.25).
+func TestBearingAreaFactor_InteriorBearing(t *testing.T) {
+	L := 144.0
+	m := floorJoist("2x10", 2*L, 16)
+	m.Bearings = []Bearing{{0, 1.5}, {L, 1.5}, {2 * L, 1.5}}
+	b := find(t, CheckMember(m, DefaultSettings()), KindBearing)
+	expectNear(t, "Fc_perp'", b.Allowable, 625*1.25, 1e-9, 0, "NDS 2018 3.10.4 with Supplement Table 4A Fc_perp 625 psi (from memory: verify)")
+	expectNear(t, "Cb", traceValue(t, b, "Cb"), 1.25, 1e-12, 0, "NDS 2018 3.10.4")
+}
+
+// TestCantileverDeflection_BackSpanRotation: live load on the back span
+// only lifts the tip of the overhang by w L^3 a / (24 E I) (AISC Steel
+// Construction Manual Table 3-23, case 24, "beam overhanging one support,
+// uniform load between supports"), more than the overhang's own load
+// pushes it down here (w a^3 (4L + 3a) / (24 E I), case 25); the check
+// compares it with 2a/360 (IBC 2018 Table 1604.3 note h).
+func TestCantileverDeflection_BackSpanRotation(t *testing.T) {
+	a, L := 36.0, 120.0
+	m := floorJoist("2x10", L+a, 16)
+	m.Bearings = []Bearing{{0, 1.5}, {L, 3.5}}
+	m.OverhangEndIn = a
+	m.Loads = AreaLoads{DeadPsf: 10, LivePsf: 40}
+	r := CheckMember(m, DefaultSettings())
+	d := find(t, r, KindDeflectionLive)
+	w := 40 * 16 / 144.0
+	ei := 1.6e6 * 1.5 * 9.25 * 9.25 * 9.25 / 12
+	if !strings.Contains(d.Combo, "end overhang") {
+		t.Fatalf("governing live deflection %q, want the end overhang", d.Combo)
+	}
+	expectNear(t, "tip deflection", d.Actual, w*L*L*L*a/(24*ei), 1e-9, 1e-9, "AISC Manual Table 3-23 case 24")
+	expectNear(t, "allowed", d.Allowable, 2*a/360, 1e-12, 0, "IBC 2018 Table 1604.3 note h")
+}
