@@ -79,7 +79,10 @@ type Member struct {
 	// and Factors the adjustment factors used (CM, Ct, CF, Cr, ...): both
 	// for the written-out calculation in the report.
 	BlockingSteps []BlockingStep `json:"blocking_steps,omitempty"`
-	Factors       []TraceItem    `json:"factors,omitempty"`
+	// Info holds notes that are not findings: the NDS 2018 4.4.1.2
+	// lateral-support rule beside the calculated CL, uplift at a bearing.
+	Info    []string    `json:"info,omitempty"`
+	Factors []TraceItem `json:"factors,omitempty"`
 
 	Status   string   `json:"status"` // pass | fail | error
 	Messages []string `json:"messages"`

@@ -8,6 +8,7 @@ import (
 	"path/filepath"
 	"strings"
 	"text/tabwriter"
+	"time"
 
 	"framecheck/dxfimport"
 	"framecheck/export"
@@ -26,7 +27,25 @@ func init() {
 const (
 	resultsName  = "results.json"
 	scheduleName = "schedule.xlsx"
+	reportName   = "report.html"
 )
+
+// planGeometry gives the report the supports and zone outlines to draw.
+func planGeometry(o *outcome) *export.PlanGeometry {
+	g := &export.PlanGeometry{}
+	for _, s := range o.plan.Supports {
+		g.Supports = append(g.Supports, export.Polyline{Layer: s.Pos.Layer,
+			Points: [][2]float64{{s.A.X, s.A.Y}, {s.B.X, s.B.Y}}})
+	}
+	for _, z := range o.plan.Zones {
+		zo := export.ZoneOutline{Name: z.Name}
+		for _, p := range z.Points {
+			zo.Points = append(zo.Points, [2]float64{p.X, p.Y})
+		}
+		g.Zones = append(g.Zones, zo)
+	}
+	return g
+}
 
 // checkRun is one `check` invocation after flag parsing.
 type checkRun struct {
@@ -187,7 +206,7 @@ func sameFile(a, b string) bool {
 // outputNames are the files a run may write into the output folder.
 func (c *checkRun) outputNames() []string {
 	base := strings.TrimSuffix(filepath.Base(c.planPath), filepath.Ext(c.planPath))
-	return []string{resultsName, scheduleName, base + "-checked.dxf", base + "-overlay.dxf"}
+	return []string{resultsName, scheduleName, base + "-checked.dxf", base + "-overlay.dxf", reportName}
 }
 
 // write writes every output into the output folder, nothing lost: each
@@ -224,6 +243,9 @@ func (c *checkRun) write(o *outcome, res *export.Results, stderr io.Writer) (wri
 		return nil, err
 	}
 	if err := add(names[1], export.WriteXLSX(filepath.Join(stage, names[1]), res)); err != nil {
+		return nil, err
+	}
+	if err := add(names[4], export.WriteReport(filepath.Join(stage, names[4]), res, planGeometry(o), time.Now())); err != nil {
 		return nil, err
 	}
 	toInch := o.drawing.ToInch

@@ -63,7 +63,7 @@ func TestDemoEndToEnd(t *testing.T) {
 	if code != exitFail {
 		t.Errorf("exit %d, want %d: the demo has failing members by design\nstderr:\n%s", code, exitFail, stderr)
 	}
-	for _, name := range []string{resultsName, scheduleName, "plan-checked.dxf"} {
+	for _, name := range []string{resultsName, scheduleName, reportName, "plan-checked.dxf"} {
 		st, err := os.Stat(filepath.Join(dir, name))
 		if err != nil || st.Size() == 0 {
 			t.Errorf("%s missing or empty: %v", name, err)

@@ -81,7 +81,8 @@ func exportMember(m *framing.Member, res *check.Result, toInch float64) export.M
 	}
 	em.Factors = exportTrace(res.Factors)
 	seen := map[string]bool{}
-	for _, group := range [][]string{m.Messages, res.Messages, res.Info} {
+	em.Info = res.Info
+	for _, group := range [][]string{m.Messages, res.Messages} {
 		for _, msg := range group {
 			if !seen[msg] {
 				seen[msg] = true
