@@ -40,15 +40,15 @@ type engine struct {
 	wUpPli   float64 // wind suction magnitude, lb/in
 
 	cases []strengthCase
-	mMax  float64
-	arena traceArena
+	mMax  float64    // largest |M| of any case, for "is this edge in compression" tolerances
+	arena traceArena // trace items and text of the Result being built
 
 	comboCDs []comboCD       // every non-trivial combination case and its CD, for the report
 	names    []caseNameEntry // caseName cache, kept across pooled uses
 
 	wAll  []float64  // backing store of the cases' segment loads
 	ivBuf []interval // reused by intervals
-	sup   []float64  // backing store of bm.SupportsAtIn // largest |M| of any case, for "is this edge in compression" tolerances
+	sup   []float64  // backing store of bm.SupportsAtIn
 }
 
 // strengthCase is one combination case (one alternative, one wind
@@ -79,8 +79,7 @@ func (e *engine) release() {
 }
 
 // newEngine validates m and s, looks up the material and builds the
-// analysis. On error the returned engine holds what was found so far (nil
-// when nothing).
+// analysis. On error the returned engine holds what was found so far.
 func newEngine(m Member, s Settings) (*engine, error) {
 	e := enginePool.Get().(*engine)
 	*e = engine{m: m, s: s, cases: e.cases[:0], spanSegs: e.spanSegs[:0], wAll: e.wAll[:0], sup: e.sup[:0], ivBuf: e.ivBuf[:0], comboCDs: e.comboCDs[:0], names: e.names}
@@ -140,6 +139,14 @@ func (e *engine) factors() {
 // overhang's tip, supports at the bearing centre-lines.
 func (e *engine) model() {
 	bs := e.m.Bearings
+	// An overhang under 0.01 in is no cantilever: it would only make a
+	// degenerate segment.
+	if e.m.OverhangStartIn < 0.01 {
+		e.m.OverhangStartIn = 0
+	}
+	if e.m.OverhangEndIn < 0.01 {
+		e.m.OverhangEndIn = 0
+	}
 	e.x0 = bs[0].AtIn - e.m.OverhangStartIn
 	sup := e.sup[:0]
 	for _, b := range bs {
