@@ -94,3 +94,34 @@ func checkFinite(t *testing.T, i int, r Result) {
 		}
 	}
 }
+
+// TestConcurrentChecks runs members from several goroutines (the engine
+// pool and the caches are shared) and expects the sequential results.
+// Common practice, no source.
+func TestConcurrentChecks(t *testing.T) {
+	members := []Member{upliftRafter("2x10"), upliftRafter("2x12"), floorJoist("2x10", 168, 16), floorJoist("2x8", 150, 24)}
+	want := make([]Result, len(members))
+	for i, m := range members {
+		want[i] = CheckMember(m, DefaultSettings())
+	}
+	done := make(chan string, 8)
+	for g := 0; g < 8; g++ {
+		go func(g int) {
+			msg := ""
+			for k := 0; k < 50 && msg == ""; k++ {
+				i := (g + k) % len(members)
+				r := CheckMember(members[i], DefaultSettings())
+				if r.MaxRatio != want[i].MaxRatio || r.Governing != want[i].Governing || len(r.Checks) != len(want[i].Checks) ||
+					r.Checks[0].Trace[0].Subst != want[i].Checks[0].Trace[0].Subst || r.Checks[0].Combo != want[i].Checks[0].Combo {
+					msg = "goroutine result differs for " + members[i].Size
+				}
+			}
+			done <- msg
+		}(g)
+	}
+	for g := 0; g < 8; g++ {
+		if msg := <-done; msg != "" {
+			t.Error(msg)
+		}
+	}
+}
