@@ -120,7 +120,8 @@ var materialColumns = []string{"species", "grade", "min_width_in", "max_width_in
 // 0 = no limit), fb_psi, ft_psi, fv_psi, fc_perp_psi, fc_psi, e_psi,
 // emin_psi, size_factor (4A, 4B or none) and source. The header line is
 // required; lines starting with # are comments. name is used in errors,
-// which read "name:line: column: problem".
+// which read "name:line: column: problem". The result holds only the
+// file's rows: use BuiltinMaterials().Merge(user) to search both.
 func LoadMaterialsCSV(r io.Reader, name string) (*Materials, error) {
 	cr := csv.NewReader(r)
 	cr.Comment = '#'
