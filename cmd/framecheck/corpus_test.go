@@ -393,6 +393,14 @@ func TestBadCorpusHugeCoordinates(t *testing.T) {
 		wantStderr(t, r, fmt.Sprintf("(handle %s, layer ", h))
 	}
 	wantStderr(t, r, "FRM214")
+	// The lines left out are listed in results.json (and the Notes sheet),
+	// not only on the terminal.
+	notes := strings.Join(r.results.Assumptions.Notes, "\n")
+	for _, h := range []string{"106", "107", "108", "109", "10A", "10B"} {
+		if !strings.Contains(notes, fmt.Sprintf("(handle %s, layer ", h)) || !strings.Contains(notes, "FRM214") {
+			t.Errorf("notes do not list the line of handle %s:\n%s", h, notes)
+		}
+	}
 }
 
 // Joists that reach no support are errors that say so, end by end.
@@ -407,6 +415,10 @@ func TestBadCorpusUnsupported(t *testing.T) {
 			}
 		}
 		wantStderr(t, r, "no-supports.dxf:19 (handle 101, layer JOIST): error FRM204: M1 start")
+		// A member's own findings are in its messages, not repeated in the notes.
+		if notes := strings.Join(r.results.Assumptions.Notes, "\n"); strings.Contains(notes, "FRM204") {
+			t.Errorf("member findings repeated in the notes:\n%s", notes)
+		}
 	})
 	t.Run("one end", func(t *testing.T) {
 		r := runCorpus(t, "one-end-unsupported.dxf", "", "")
@@ -450,6 +462,9 @@ func TestBadCorpusBlocks(t *testing.T) {
 		wantAll(t, r, export.StatusPass, 3)
 		wantStderr(t, r, `self-insert.dxf:103 (handle 106, layer 0): warning DXF104: block "SELF" inserts itself`,
 			`block "PING" inserts itself (through PING > PONG)`)
+		if notes := strings.Join(r.results.Assumptions.Notes, "\n"); !strings.Contains(notes, `block "SELF" inserts itself`) {
+			t.Errorf("notes lack the self-insert finding:\n%s", notes)
+		}
 	})
 }
 

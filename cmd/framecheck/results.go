@@ -7,6 +7,7 @@ import (
 	"strings"
 
 	"framecheck/check"
+	"framecheck/dxfimport"
 	"framecheck/export"
 	"framecheck/framing"
 )
@@ -290,5 +291,34 @@ func assumptions(o *outcome) export.Assumptions {
 	for _, used := range p.DefaultsUsed() {
 		a.Notes = append(a.Notes, "Default used: "+used)
 	}
+	a.Notes = append(a.Notes, drawingFindings(o)...)
 	return a
+}
+
+// mostFindings caps the drawing findings listed in the notes.
+const mostFindings = 50
+
+// drawingFindings lists the warnings and errors about the drawing that
+// belong to no member (lines left out, blocks not expanded, entities past
+// the limit), so that results.json and the Notes sheet show what was not
+// checked. A member's own findings are already in its messages.
+func drawingFindings(o *outcome) []string {
+	own := map[dxfimport.Pos]bool{}
+	for k := range o.plan.Members {
+		own[o.plan.Members[k].Pos] = true
+	}
+	var notes []string
+	n := 0
+	for _, is := range o.issues {
+		if is.Severity < dxfimport.SevWarning || own[is.Pos] {
+			continue
+		}
+		if n++; n <= mostFindings {
+			notes = append(notes, "Drawing finding: "+is.Error())
+		}
+	}
+	if n > mostFindings {
+		notes = append(notes, fmt.Sprintf("Drawing findings: %d more not listed", n-mostFindings))
+	}
+	return notes
 }
