@@ -56,12 +56,13 @@ type edgeEval struct {
 	maxRBInt interval
 }
 
-// braces returns the bracing points of an edge in analysis coordinates:
+// braces returns the bracing points of an edge in analysis coordinates
+// (in a buffer of the engine that the next call overwrites):
 // the bearings plus the blocking rows (member positions) that fall inside
 // the model, sorted and without duplicates.
 func (e *engine) braces(rowsIn []float64) []float64 {
-	pts := make([]float64, 0, len(e.bm.SupportsAtIn)+len(rowsIn)+len(e.m.BlockingAtIn))
-	pts = append(pts, e.bm.SupportsAtIn...)
+	pts := append(e.ptsBuf[:0], e.bm.SupportsAtIn...)
+	defer func() { e.ptsBuf = pts[:0] }()
 	for _, set := range [][]float64{e.m.BlockingAtIn, rowsIn} {
 		for _, x := range set {
 			if xa := x - e.x0; xa > 0 && xa < e.bm.LengthIn {
@@ -227,12 +228,14 @@ func leSubst(t *tracer, formula string, lu, d float64) string {
 }
 
 // spanRows returns the positions (member coordinates) of n evenly spaced
-// blocking rows in every span, and the largest row spacing.
+// blocking rows in every span, and the largest row spacing. The slice is
+// the engine's and is overwritten by the next call: copy it to keep it.
 func (e *engine) spanRows(n int) (rows []float64, maxLuIn float64) {
 	if n <= 0 {
 		return nil, 0
 	}
-	rows = make([]float64, 0, n*len(e.spanSegs))
+	rows = e.rowsBuf[:0]
+	defer func() { e.rowsBuf = rows[:0] }()
 	for _, k := range e.spanSegs {
 		sg := e.segs[k]
 		l := sg.ToIn - sg.FromIn

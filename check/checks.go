@@ -135,7 +135,8 @@ func (e *engine) deflectionChecks() []CheckResult {
 		name string
 		w    float64
 	}
-	lives := make([]lt, 0, 5)
+	var livesBuf [5]lt
+	lives := livesBuf[:0]
 	for _, l := range []lt{{"L", e.wPli[LoadL]}, {"Lr", e.wPli[LoadLr]}, {"S", e.wPli[LoadS]},
 		{"0.42W(down)", 0.42 * e.wPli[LoadW]}, {"0.42W(up)", -0.42 * e.wUpPli}} {
 		if l.w != 0 {
@@ -144,7 +145,12 @@ func (e *engine) deflectionChecks() []CheckResult {
 	}
 	pats := e.patterns()
 	var r beam.Response
-	w := make([]float64, len(e.segs))
+	var wBuf [8]float64
+	w := wBuf[:0]
+	if len(e.segs) > len(wBuf) {
+		w = make([]float64, 0, len(e.segs))
+	}
+	w = w[:len(e.segs)]
 	liveW := deflWorst{ratio: -1}
 	totW := deflWorst{ratio: -1}
 	wD := e.kcr * e.wPli[LoadD]

@@ -46,9 +46,12 @@ type engine struct {
 	comboCDs []comboCD       // every non-trivial combination case and its CD, for the report
 	names    []caseNameEntry // caseName cache, kept across pooled uses
 
-	wAll  []float64  // backing store of the cases' segment loads
-	ivBuf []interval // reused by intervals
-	sup   []float64  // backing store of bm.SupportsAtIn
+	wAll    []float64  // backing store of the cases' segment loads
+	ivBuf   []interval // reused by intervals
+	sup     []float64  // backing store of bm.SupportsAtIn
+	ptsBuf  []float64  // reused by braces
+	rowsBuf []float64  // reused by spanRows
+	patBuf  []uint32   // reused by patterns
 }
 
 // strengthCase is one combination case (one alternative, one wind
@@ -82,7 +85,7 @@ func (e *engine) release() {
 // analysis. On error the returned engine holds what was found so far.
 func newEngine(m Member, s Settings) (*engine, error) {
 	e := enginePool.Get().(*engine)
-	*e = engine{m: m, s: s, cases: e.cases[:0], spanSegs: e.spanSegs[:0], wAll: e.wAll[:0], sup: e.sup[:0], ivBuf: e.ivBuf[:0], comboCDs: e.comboCDs[:0], names: e.names}
+	*e = engine{m: m, s: s, cases: e.cases[:0], spanSegs: e.spanSegs[:0], wAll: e.wAll[:0], sup: e.sup[:0], ivBuf: e.ivBuf[:0], ptsBuf: e.ptsBuf[:0], rowsBuf: e.rowsBuf[:0], patBuf: e.patBuf[:0], comboCDs: e.comboCDs[:0], names: e.names}
 	if err := s.validate(); err != nil {
 		return e, err
 	}
@@ -175,17 +178,19 @@ func (e *engine) patterns() []uint32 {
 	n := len(e.segs)
 	all := uint32(1)<<n - 1
 	if !e.s.PatternLive || n == 1 {
-		return []uint32{all}
+		e.patBuf = append(e.patBuf[:0], all)
+		return e.patBuf
 	}
 	if n <= 5 {
-		out := make([]uint32, 0, all)
-		out = append(out, all)
+		out := append(e.patBuf[:0], all)
+		defer func() { e.patBuf = out }()
 		for p := uint32(1); p < all; p++ {
 			out = append(out, p)
 		}
 		return out
 	}
-	out := []uint32{all}
+	out := append(e.patBuf[:0], all)
+	defer func() { e.patBuf = out }()
 	var odd, even uint32
 	for k := 0; k < n; k++ {
 		out = append(out, 1<<k)

@@ -84,7 +84,7 @@ func (e *engine) result(n int, bot *edgeEval) Result {
 	r.Checks = make([]CheckResult, 0, 6)
 	rows, _ := e.spanRows(n)
 	if n > 0 {
-		r.BlockingAtIn = rows
+		r.BlockingAtIn = append([]float64(nil), rows...)
 		r.BlockingRowsPerSpan = make([]int, len(e.spanSegs))
 		for i := range r.BlockingRowsPerSpan {
 			r.BlockingRowsPerSpan[i] = n
