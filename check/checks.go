@@ -118,7 +118,9 @@ func (e *engine) bearingCheck() (CheckResult, []string) {
 type deflWorst struct {
 	ratio, deflIn, allowIn, spanIn, limit float64
 	seg                                   int
-	name                                  string
+	live                                  string // live-type load, "" for dead load alone
+	withD                                 bool   // Kcr D added (total deflection)
+	pattern                               uint32
 	cant                                  bool
 }
 
@@ -129,7 +131,9 @@ type deflWorst struct {
 // 2018 3.5.2) plus each live-type case, against span/TotalLimit. Spans use
 // the largest deflection between their bearings; a cantilever its tip
 // deflection (back-span rotation included) against 2 x overhang / limit
-// (footnote h). A limit of 0 skips that check.
+// (footnote h). A limit of 0 skips that check. A member of one span is
+// solved once under a unit load and scaled, every response being
+// proportional to its one load.
 func (e *engine) deflectionChecks() []CheckResult {
 	type lt struct {
 		name string
@@ -137,7 +141,7 @@ func (e *engine) deflectionChecks() []CheckResult {
 	}
 	var livesBuf [5]lt
 	lives := livesBuf[:0]
-	for _, l := range []lt{{"L", e.wPli[LoadL]}, {"Lr", e.wPli[LoadLr]}, {"S", e.wPli[LoadS]},
+	for _, l := range [...]lt{{"L", e.wPli[LoadL]}, {"Lr", e.wPli[LoadLr]}, {"S", e.wPli[LoadS]},
 		{"0.42W(down)", 0.42 * e.wPli[LoadW]}, {"0.42W(up)", -0.42 * e.wUpPli}} {
 		if l.w != 0 {
 			lives = append(lives, l)
@@ -154,8 +158,26 @@ func (e *engine) deflectionChecks() []CheckResult {
 	liveW := deflWorst{ratio: -1}
 	totW := deflWorst{ratio: -1}
 	wD := e.kcr * e.wPli[LoadD]
-	kcrName := num(e.kcr) + "D"
-	eval := func(name string, limit float64, worst *deflWorst) {
+
+	single := len(e.segs) == 1 && !e.segs[0].Cantilever
+	unitY := 0.0
+	if single {
+		w[0] = 1
+		if err := e.bm.SolveInto(&r, w); err != nil {
+			return nil
+		}
+		unitY, _ = r.MaxDeflection(e.segs[0].FromIn, e.segs[0].ToIn)
+	}
+	eval := func(live string, withD bool, pat uint32, limit float64, worst *deflWorst) {
+		if single {
+			sg := e.segs[0]
+			l := sg.ToIn - sg.FromIn
+			y, allow := math.Abs(w[0]*unitY), l/limit
+			if ratio := y / allow; ratio > worst.ratio {
+				*worst = deflWorst{ratio: ratio, deflIn: y, allowIn: allow, spanIn: l, limit: limit, live: live, withD: withD, pattern: pat}
+			}
+			return
+		}
 		if err := e.bm.SolveInto(&r, w); err != nil {
 			return
 		}
@@ -173,17 +195,13 @@ func (e *engine) deflectionChecks() []CheckResult {
 				allow = l / limit
 			}
 			if ratio := math.Abs(y) / allow; ratio > worst.ratio {
-				*worst = deflWorst{ratio: ratio, deflIn: math.Abs(y), allowIn: allow, spanIn: l, limit: limit, seg: k, name: name, cant: sg.Cantilever}
+				*worst = deflWorst{ratio: ratio, deflIn: math.Abs(y), allowIn: allow, spanIn: l, limit: limit,
+					seg: k, live: live, withD: withD, pattern: pat, cant: sg.Cantilever}
 			}
 		}
 	}
 	for _, lv := range lives {
-		p := pats
-		for _, pat := range p {
-			label := lv.name
-			if pl := e.patternLabel(pat); pl != "" {
-				label += " (" + pl + ")"
-			}
+		for _, pat := range pats {
 			if e.m.LiveLimit > 0 {
 				for k := range w {
 					w[k] = 0
@@ -191,7 +209,7 @@ func (e *engine) deflectionChecks() []CheckResult {
 						w[k] = lv.w
 					}
 				}
-				eval(label, e.m.LiveLimit, &liveW)
+				eval(lv.name, false, pat, e.m.LiveLimit, &liveW)
 			}
 			if e.m.TotalLimit > 0 && lv.w > 0 {
 				for k := range w {
@@ -200,7 +218,7 @@ func (e *engine) deflectionChecks() []CheckResult {
 						w[k] += lv.w
 					}
 				}
-				eval(kcrName+"+"+label, e.m.TotalLimit, &totW)
+				eval(lv.name, true, pat, e.m.TotalLimit, &totW)
 			}
 		}
 	}
@@ -208,7 +226,7 @@ func (e *engine) deflectionChecks() []CheckResult {
 		for k := range w {
 			w[k] = wD
 		}
-		eval(kcrName, e.m.TotalLimit, &totW)
+		eval("", true, pats[0], e.m.TotalLimit, &totW)
 	}
 	var out []CheckResult
 	if liveW.ratio >= 0 {
@@ -218,6 +236,22 @@ func (e *engine) deflectionChecks() []CheckResult {
 		out = append(out, e.deflResult(KindDeflectionTotal, totW))
 	}
 	return out
+}
+
+// deflName names a service case: "L", "1.5D+Lr (live-type loads on span 1)".
+func (e *engine) deflName(d deflWorst) string {
+	name := d.live
+	if d.withD {
+		if name == "" {
+			name = num(e.kcr) + "D"
+		} else {
+			name = num(e.kcr) + "D+" + name
+		}
+	}
+	if pl := e.patternLabel(d.pattern); pl != "" && d.live != "" {
+		name += " (" + pl + ")"
+	}
+	return name
 }
 
 func (e *engine) deflResult(kind string, d deflWorst) CheckResult {
@@ -234,5 +268,5 @@ func (e *engine) deflResult(kind string, d deflWorst) CheckResult {
 		t.add("delta_allow", d.allowIn, "in", "L / limit", t.f("%s / %s", d.spanIn, d.limit), "IBC 2018 Table 1604.3")
 	}
 	t.add("ratio", d.ratio, "", "delta / delta_allow", t.f("%s / %s", d.deflIn, d.allowIn), "")
-	return CheckResult{Kind: kind, Combo: d.name + ", " + where, Actual: d.deflIn, Allowable: d.allowIn, Unit: "in", Ratio: d.ratio, Trace: t.items}
+	return CheckResult{Kind: kind, Combo: e.deflName(d) + ", " + where, Actual: d.deflIn, Allowable: d.allowIn, Unit: "in", Ratio: d.ratio, Trace: t.items}
 }
