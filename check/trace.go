@@ -101,35 +101,29 @@ func appendNum(b []byte, v float64) []byte {
 	if !(a < 1e15) {
 		return strconv.AppendFloat(b, v, 'g', 6, 64)
 	}
-	scale := [4]float64{1, 10, 100, 1000}[prec]
-	n := int64(math.Floor(a*scale + 0.5))
+	scales := [4]int64{1, 10, 100, 1000}
+	n := int64(math.Floor(a*float64(scales[prec]) + 0.5))
 	if n == 0 {
 		return append(b, '0')
 	}
 	if v < 0 {
 		b = append(b, '-')
 	}
-	var digits [24]byte
-	i := len(digits)
-	for d := 0; n > 0 || d <= prec; d++ {
-		if d == prec && prec > 0 {
-			i--
-			digits[i] = '.'
-		}
-		i--
-		digits[i] = byte('0' + n%10)
-		n /= 10
+	ip, fp := n/scales[prec], n%scales[prec]
+	b = strconv.AppendInt(b, ip, 10)
+	if fp == 0 {
+		return b
 	}
-	out := digits[i:]
-	if prec > 0 {
-		for out[len(out)-1] == '0' {
-			out = out[:len(out)-1]
-		}
-		if out[len(out)-1] == '.' {
-			out = out[:len(out)-1]
-		}
+	// fp has prec digits with leading zeros; drop its trailing zeros.
+	for fp%10 == 0 {
+		fp /= 10
+		prec--
 	}
-	return append(b, out...)
+	b = append(b, '.')
+	for d := prec - 1; d >= 0; d-- {
+		b = append(b, byte('0'+fp/scales[d]%10))
+	}
+	return b
 }
 
 // num formats v as appendNum does.
