@@ -154,7 +154,7 @@ func (e *engine) baseResult() Result {
 
 // factorTrace lists the adjustment factors used.
 func (e *engine) factorTrace() []TraceItem {
-	t := tracer{items: make([]TraceItem, 0, 12+len(e.comboCDs))}
+	t := e.arena.tracer(12 + len(e.comboCDs))
 	for _, c := range e.comboCDs {
 		t.add("CD", c.cd, "", c.name, "", "NDS 2018 2.3.2, Table 2.3.2: shortest-duration load of the combination")
 	}

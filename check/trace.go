@@ -35,7 +35,7 @@ type traceArena struct {
 // tracer returns a tracer whose items take up to n entries of the arena.
 func (a *traceArena) tracer(n int) tracer {
 	if cap(a.items)-len(a.items) < n {
-		a.items = make([]TraceItem, 0, max(48, n))
+		a.items = make([]TraceItem, 0, max(64, n))
 	}
 	l := len(a.items)
 	a.items = a.items[:l+n]
