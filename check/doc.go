@@ -84,18 +84,18 @@
 //
 // BenchmarkCheckMember (a roof joist under net uplift: analysis, every
 // check with its trace, and the blocking solver's four bottom-edge
-// evaluations) measured 10.1 us of CPU per check in the quietest run,
-// about 98,500 checks per second on one core of this machine (AMD EPYC, 2
-// cores shared with other jobs), and 11.6 to 14 us (71,000 to 86,000 per
-// second) while the load average stood between 5 and 11 (go test -bench
-// CheckMember -cpu 1; the cpu-ns/op metric is the process's CPU time,
-// wall-clock ns/op ran from 10 to 250 us with the load). So the target of
-// 100,000 checks/s is just missed for that case: close to half of the time
-// goes into building the traces (some 58 trace items and 100 formatted
-// numbers per result, every Result carrying its full calculation), the
-// rest into the load cases, three deflection solves and the solver's
-// steps. A simple-span floor joist that needs no rows
-// (BenchmarkCheckMemberFloor) measured 6.7 to 7.8 us, 128,000 to 150,000
+// evaluations) measured 10.1 to 10.3 us of CPU per check in the quietest
+// runs, about 97,000 to 98,500 checks per second on one core of this
+// machine (AMD EPYC, 2 cores shared with other jobs), and 11 to 14 us
+// (71,000 to 87,000 per second) while the load average stood between 5
+// and 11 (go test -bench CheckMember -cpu 1; the cpu-ns/op metric is the
+// process's CPU time, wall-clock ns/op ran from 10 to 250 us with the
+// load). So the target of 100,000 checks/s is just missed for that case:
+// close to half of the time goes into building the traces (some 64 trace
+// items and 100 formatted numbers per result, every Result carrying its
+// full calculation), the rest into the load cases, the deflection solve
+// and the solver's steps. A simple-span floor joist that needs no rows
+// (BenchmarkCheckMemberFloor) measured 6.7 to 7.7 us, 130,000 to 150,000
 // checks per second; a three-span joist with a cantilever under 15
-// live-load patterns (BenchmarkCheckMemberContinuous) 65 to 80 us.
+// live-load patterns (BenchmarkCheckMemberContinuous) 65 to 70 us.
 package check
