@@ -188,7 +188,8 @@ func ComboDurationFactor(factors [numLoadTypes]float64, present [numLoadTypes]bo
 // L/total for a member use ("floor" or "roof") and ceiling ("plaster",
 // "non-plaster" or "none"): floor 360 and 240; roof with a plaster or
 // stucco ceiling 360 and 240, non-plaster ceiling 240 and 180, no ceiling
-// 180 and 120. Floors ignore the ceiling.
+// 180 and 120. Floors ignore the ceiling. From memory: verify against IBC
+// 2018 Table 1604.3.
 func DeflectionLimits(use, ceiling string) (live, total float64, err error) {
 	switch use {
 	case "floor":
