@@ -20,6 +20,7 @@ type Combo struct {
 // defaultComboSpecs are the basic ASD combinations of ASCE 7-16 2.4.1 for
 // the loads framecheck knows (D, L, Lr, S, W; no rain, flood, ice or
 // earthquake): combinations 1, 2, 3, 4, 5 (W part), 6a (W part) and 7.
+// From memory: verify against ASCE 7-16 2.4.1.
 var defaultComboSpecs = []string{
 	"D",
 	"D+L",

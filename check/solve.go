@@ -191,7 +191,8 @@ func tempName(s string) string {
 
 // lateralSupportRule states the NDS 2018 4.4.1.2 rule for the member's
 // nominal depth-to-thickness ratio, reported beside the calculated CL as
-// information (NDS 2018 4.4.1.1 lets it replace the calculation).
+// information (NDS 2018 4.4.1.1 lets it replace the calculation). The
+// rule text is paraphrased from memory: verify against NDS 2018 4.4.1.2.
 func (e *engine) lateralSupportRule() string {
 	k := [2]float64{e.sec.NominalDIn, e.sec.NominalBIn}
 	if v, ok := lateralRules.Load(k); ok {
