@@ -49,4 +49,7 @@
 // other builds, so figures vary by about 2x): about 55-70 ns for a simple
 // span, 100-120 ns for two spans with a cantilever, 140-160 ns for four
 // spans; Solve adds its one allocation (about 130-400 ns under load).
+// BenchmarkQueries (MomentExtremes, MaxDeflection and MomentSignChanges
+// over the whole beam) took about 120 ns, 550 ns and 800 ns for the same
+// three beams; MaxDeflection's root finding is most of it.
 package beam

@@ -107,7 +107,14 @@ func (s *seg) momentRoots(tol float64) (float64, float64, int) {
 // midpoint shows. A moment that only touches zero (at a simple end
 // support, say) is not a change. Moments within 1e-9 of the largest
 // moment on the beam count as zero. Returns nil when there is none.
-func (r *Response) MomentSignChanges() []float64 { return r.AppendMomentSignChanges(nil) }
+func (r *Response) MomentSignChanges() []float64 {
+	var buf [16]float64
+	out := r.AppendMomentSignChanges(buf[:0])
+	if len(out) == 0 {
+		return nil
+	}
+	return append([]float64(nil), out...)
+}
 
 // AppendMomentSignChanges appends the points of MomentSignChanges to dst
 // and returns the extended slice, so a caller can reuse one buffer.
