@@ -133,27 +133,37 @@ func (e *engine) evalEdge(top bool, ivs []interval) edgeEval {
 		for ci := range e.cases {
 			c := &e.cases[ci]
 			// A case with no moment of this sign anywhere cannot load this edge.
-			if (top && c.mPos <= tol) || (!top && -c.mNeg <= tol) {
-				continue
-			}
-			pos, neg := c.mPos, c.mNeg
-			if !whole {
-				pos, _, neg, _ = c.r.MomentExtremes(iv.a, iv.b)
-			}
-			m := pos
+			mWhole := c.mPos
 			if !top {
-				m = -neg
+				mWhole = -c.mNeg
 			}
-			if m <= tol {
+			if mWhole <= tol {
 				continue
 			}
-			inCompression = true
 			fbStar := e.fbNoCD * c.cd
 			cl := 1.0
 			if !iv.braced {
 				cl = BeamStabilityFactor(iv.fbEPsi, fbStar)
 			}
-			ratio := m / e.sec.SIn3 / (fbStar * cl)
+			capLbIn := e.sec.SIn3 * fbStar * cl
+			// Nor can one whose largest moment anywhere would not beat the
+			// ratio found so far, once this stretch's RB is accounted for.
+			if pruneCases && ev.found && mWhole/capLbIn <= ev.ratio && (inCompression || iv.braced || iv.rb <= ev.maxRB) {
+				continue
+			}
+			m := mWhole
+			if !whole {
+				pos, _, neg, _ := c.r.MomentExtremes(iv.a, iv.b)
+				m = pos
+				if !top {
+					m = -neg
+				}
+			}
+			if m <= tol {
+				continue
+			}
+			inCompression = true
+			ratio := m / capLbIn
 			if !ev.found || ratio > ev.ratio {
 				ev.found, ev.ratio, ev.ci, ev.iv, ev.mLbIn, ev.fbStar, ev.cl = true, ratio, ci, *iv, m, fbStar, cl
 			}

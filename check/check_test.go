@@ -287,19 +287,28 @@ func TestPatternLive_TwoSpansOneLoaded(t *testing.T) {
 }
 
 // TestPruneDominated_ChangesNothing compares every check with and without
-// the dominated-case pruning of single-span members (common practice, no
-// source: the pruning is an optimisation and must not change results).
+// the dominated-case pruning of single-span members and the bound that
+// skips cases in the bending checks (common practice, no source: both are
+// optimisations and must not change results).
 func TestPruneDominated_ChangesNothing(t *testing.T) {
 	members := []Member{upliftRafter("2x10"), upliftRafter("2x8"), floorJoist("2x10", 168, 16)}
 	snow := upliftRafter("2x12")
 	snow.Loads = AreaLoads{DeadPsf: 12, RoofLivePsf: 20, SnowPsf: 25, WindDownPsf: 15, WindUpPsf: 10}
-	members = append(members, snow)
+	cont := floorJoist("2x10", 3*144+24, 16)
+	cont.Bearings = []Bearing{{0, 1.5}, {144, 3.5}, {288, 3.5}, {432, 1.5}}
+	cont.OverhangEndIn = 24
+	contRoof := upliftRafter("2x10")
+	contRoof.LengthIn = 2*216 + 30
+	contRoof.Bearings = []Bearing{{30, 3.5}, {246, 3.5}, {462, 3.5}}
+	contRoof.OverhangStartIn = 30
+	members = append(members, snow, cont, contRoof)
 	for _, m := range members {
 		a := CheckMember(m, DefaultSettings())
 		pruneCases = false
 		b := CheckMember(m, DefaultSettings())
 		pruneCases = true
-		if len(a.Checks) != len(b.Checks) || a.Status != b.Status || a.RowsPerSpan() != b.RowsPerSpan() {
+		if len(a.Checks) != len(b.Checks) || a.Status != b.Status || a.RowsPerSpan() != b.RowsPerSpan() ||
+			a.RB != b.RB || len(a.BlockingSteps) != len(b.BlockingSteps) {
 			t.Fatalf("%s %s: pruned %s/%d checks/%d rows, full %s/%d/%d", m.ID, m.Size, a.Status, len(a.Checks), a.RowsPerSpan(), b.Status, len(b.Checks), b.RowsPerSpan())
 		}
 		for i := range a.Checks {

@@ -314,8 +314,8 @@ func hasSpec(specs []caseSpec, sp caseSpec) bool {
 	return false
 }
 
-// pruneCases switches pruneDominated on; tests switch it off to show it
-// changes no result.
+// pruneCases switches on pruneDominated and the bound that lets evalEdge
+// skip cases; tests switch it off to show they change no result.
 var pruneCases = true
 
 // pruneDominated drops, on a member of one segment, every case that
