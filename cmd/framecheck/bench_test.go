@@ -21,6 +21,7 @@ import (
 	"sync"
 	"syscall"
 	"testing"
+	"time"
 
 	"framecheck/check"
 	"framecheck/dxfimport"
@@ -136,13 +137,12 @@ func forSizes(b *testing.B, bench func(b *testing.B, n int)) {
 
 // BenchmarkCheckRun is the whole `framecheck check PLAN -p PROJECT -o DIR`:
 // read, group, check, blocking rows, marks, takeoff, results.json,
-// schedule.xlsx and the annotated DXF.
+// schedule.xlsx, report.html and the annotated DXF.
 func BenchmarkCheckRun(b *testing.B) {
 	forSizes(b, func(b *testing.B, n int) {
 		dir := b.TempDir()
 		p := writeBigPlan(b, dir, n, false)
 		out := filepath.Join(dir, "out")
-		b.SetBytes(p.bytes)
 		b.ResetTimer()
 		for b.Loop() {
 			if code := run([]string{"check", p.dxf, "-p", p.toml, "-o", out}, io.Discard, io.Discard); code == exitUsage {
@@ -159,7 +159,6 @@ func BenchmarkCheckRunR12(b *testing.B) {
 		dir := b.TempDir()
 		p := writeBigPlan(b, dir, n, true)
 		out := filepath.Join(dir, "out")
-		b.SetBytes(p.bytes)
 		b.ResetTimer()
 		for b.Loop() {
 			if code := run([]string{"check", p.dxf, "-p", p.toml, "-o", out}, io.Discard, io.Discard); code == exitUsage {
@@ -334,6 +333,25 @@ func BenchmarkStageXLSX(b *testing.B) {
 		b.ResetTimer()
 		for b.Loop() {
 			if err := export.WriteXLSX(out, pp.results); err != nil {
+				b.Fatal(err)
+			}
+		}
+		perJoist(b, n)
+	})
+}
+
+// BenchmarkStageReport writes report.html (export.WriteReport).
+func BenchmarkStageReport(b *testing.B) {
+	forSizes(b, func(b *testing.B, n int) {
+		dir := b.TempDir()
+		pp := prepare(b, dir, n)
+		out := filepath.Join(dir, "report.html")
+		g := planGeometry(pp.outcome)
+		when := time.Date(2026, 12, 2, 0, 0, 0, 0, time.UTC)
+		b.ReportAllocs()
+		b.ResetTimer()
+		for b.Loop() {
+			if err := export.WriteReport(out, pp.results, g, when); err != nil {
 				b.Fatal(err)
 			}
 		}
