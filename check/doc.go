@@ -86,8 +86,8 @@
 // check with its trace, and the blocking solver's four bottom-edge
 // evaluations) measured 10.1 to 10.3 us of CPU per check in the quietest
 // runs, about 97,000 to 98,500 checks per second on one core of this
-// machine (AMD EPYC, 2 cores shared with other jobs), and 11 to 14 us
-// (71,000 to 87,000 per second) while the load average stood between 5
+// machine (AMD EPYC, 2 cores shared with other jobs), and 11 to 15 us
+// (66,000 to 87,000 per second) while the load average stood between 5
 // and 11 (go test -bench CheckMember -cpu 1; the cpu-ns/op metric is the
 // process's CPU time, wall-clock ns/op ran from 10 to 250 us with the
 // load). So the target of 100,000 checks/s is just missed for that case:
