@@ -27,7 +27,8 @@
 //
 // Reads the plan, finds the joists and their supports, checks every joist,
 // decides the blocking rows each run needs, and writes results.json,
-// schedule.xlsx and an annotated copy of the drawing into OUTDIR, then
+// schedule.xlsx, report.html and an annotated copy of the drawing
+// (PLAN-checked.dxf) into OUTDIR, then
 // prints a summary table: members, pass or fail, blocking rows, takeoff
 // totals, and the project-file defaults that applied.
 //
@@ -100,6 +101,15 @@
 // Lengths are inches unless they carry a unit: 14ft, 14'6", 3.5in, 4.2m,
 // 350mm.
 //
+// # materials
+//
+//	framecheck materials [SPECIES] [-p PROJECT.toml]
+//
+// Prints the reference design values in use (Fb, Ft, Fv, Fc_perp, Fc, E,
+// Emin by grade and nominal width) with the table each row comes from:
+// NDS 2018 Supplement Tables 4A and 4B, plus the rows of the project
+// file's [lumber] materials_file when -p is given.
+//
 // # init
 //
 //	framecheck init [-o FILE] [--force]
@@ -153,6 +163,7 @@ type command struct {
 var commands = []command{
 	{"layers", "list a plan's layers, entity counts and roles", runLayers},
 	{"member", "check one joist given by flags and print the calculation", runMember},
+	{"materials", "print the design values in use and their sources", runMaterials},
 	{"init", "write a commented starter project file", runInit},
 }
 

@@ -74,6 +74,9 @@ func checkSettings(p *Project) (check.Settings, error) {
 		return s, fmt.Errorf("%s: design.combinations: %v", p.File, err)
 	}
 	s.Combos = combos
+	if p.Materials != nil {
+		s.Materials = p.Materials
+	}
 	return s, nil
 }
 

@@ -27,6 +27,10 @@ type Project struct {
 	Zones    []Zone          // [[zone]]
 	Sizing   Sizing          // [sizing]
 
+	// Materials is the built-in design values merged with the rows of
+	// [lumber] materials_file, or nil when the project gives none.
+	Materials *check.Materials
+
 	// given holds the internal key paths ("zone[0].dead_psf") that the
 	// file sets explicitly.
 	given map[string]bool
@@ -70,6 +74,10 @@ type Lumber struct {
 	Species string // e.g. "Douglas Fir-Larch"
 	Grade   string // e.g. "No.2"
 	Size    string // nominal, e.g. "2x10"
+	// MaterialsFile is a CSV or TOML file of the user's own design values
+	// (another species, MSR lumber, a product's published values), with
+	// the columns of check's built-in tables; relative to the project file.
+	MaterialsFile string
 	// ByLayer holds the [[lumber.by_layer]] overrides, first match wins.
 	ByLayer []LumberOverride
 }

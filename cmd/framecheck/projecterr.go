@@ -68,7 +68,7 @@ var schema = []struct {
 	{"[drawing]", []string{"units", "snap_tolerance_in", "max_wall_thickness_in", "edge_distance_in"}},
 	{"[layers]", []string{"joists", "blocking", "zones", "labels"}},
 	{"[[support]]", []string{"layers", "kind", "bearing_in"}},
-	{"[lumber]", []string{"species", "grade", "size", "by_layer"}},
+	{"[lumber]", []string{"species", "grade", "size", "materials_file", "by_layer"}},
 	{"[[lumber.by_layer]]", []string{"layers", "species", "grade", "size"}},
 	{"[design]", []string{"top_edge_braced", "shear_at_d", "wet_service", "temperature", "incised", "kcr",
 		"add_self_weight", "combinations", "pattern_live_loads"}},

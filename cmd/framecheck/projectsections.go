@@ -2,6 +2,8 @@ package main
 
 import (
 	"fmt"
+	"os"
+	"path/filepath"
 	"strings"
 
 	"framecheck/check"
@@ -90,6 +92,7 @@ func (ld *loader) lumber(t *table) {
 	ld.text(t, "species", &lu.Species, nil)
 	ld.text(t, "grade", &lu.Grade, nil)
 	ld.text(t, "size", &lu.Size, sizeCheck)
+	ld.materialsFile(t)
 	elems, _ := ld.arrayTables(t, "by_layer")
 	for _, e := range elems {
 		var o LumberOverride
@@ -130,7 +133,11 @@ func (ld *loader) lookupLumber(spT, grT, szT *table, species, grade, size string
 	if species == "" || grade == "" || size == "" {
 		return // an error is already reported
 	}
-	_, err := check.BuiltinMaterials().Lookup(species, grade, size)
+	mats := check.BuiltinMaterials()
+	if ld.p.Materials != nil {
+		mats = ld.p.Materials
+	}
+	_, err := mats.Lookup(species, grade, size)
 	if err == nil {
 		return
 	}
@@ -331,4 +338,41 @@ func (ld *loader) patternOwners() {
 		path := fmt.Sprintf("support[%d].layers", i)
 		add(fmt.Sprintf("[[support]] %d (%s)", i+1, s.Kind), path, s.Layers)
 	}
+}
+
+// materialsFile reads [lumber] materials_file, a CSV (.csv) or TOML
+// (.toml) file of design values with the columns of the built-in tables,
+// found relative to the project file, and merges it over the built-in
+// tables so later species and grade lookups see both.
+func (ld *loader) materialsFile(t *table) {
+	lu := &ld.p.Lumber
+	ld.text(t, "materials_file", &lu.MaterialsFile, nil)
+	if lu.MaterialsFile == "" {
+		return
+	}
+	path := lu.MaterialsFile
+	if !filepath.IsAbs(path) {
+		path = filepath.Join(filepath.Dir(ld.file), path)
+	}
+	f, err := os.Open(path)
+	if err != nil {
+		ld.errorf(joinPath(t.path, "materials_file"), "%v", err)
+		return
+	}
+	defer f.Close()
+	var user *check.Materials
+	switch strings.ToLower(filepath.Ext(path)) {
+	case ".csv":
+		user, err = check.LoadMaterialsCSV(f, path)
+	case ".toml":
+		user, err = check.LoadMaterialsTOML(f, path)
+	default:
+		ld.errorf(joinPath(t.path, "materials_file"), "expected a .csv or .toml file, got %q", lu.MaterialsFile)
+		return
+	}
+	if err != nil {
+		ld.errorf(joinPath(t.path, "materials_file"), "%v", err)
+		return
+	}
+	ld.p.Materials = check.BuiltinMaterials().Merge(user)
 }

@@ -44,6 +44,11 @@ bearing_in = 1.5
 species = "Douglas Fir-Larch"
 grade = "No.2"
 size = "2x10"
+# Your own design values (another species, MSR lumber, a product's published
+# values) in a CSV or TOML file with the columns of the built-in tables:
+# species,grade,min_width_in,max_width_in,fb_psi,ft_psi,fv_psi,fc_perp_psi,
+# fc_psi,e_psi,emin_psi,size_factor,source. Relative to this file.
+# materials_file = "my-materials.csv"
 
 # Overrides by joist layer: the first table whose patterns match wins and
 # replaces any of species, grade and size it gives. For example:
