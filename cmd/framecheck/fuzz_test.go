@@ -93,12 +93,13 @@ func FuzzCheckPlan(f *testing.F) {
 	f.Add([]byte(richPlan()), 0.0, 1e-300, 1e300, 1e-300, -1e308, 0.0, 1e308, 0.0, false)
 	f.Add([]byte(smallPlan()), 144.0, 16.0, 144.0, 16.0, 144.0, 0.0, 144.0, 0.0, true)
 	proj := DefaultProject()
+	// A worker process runs one input at a time: one file serves them all.
+	path := filepath.Join(f.TempDir(), "plan.dxf")
 	f.Fuzz(func(t *testing.T, plan []byte, jx1, jy1, jx2, jy2, wx1, wy1, wx2, wy2 float64, size bool) {
 		if len(plan) > 1<<16 {
 			return
 		}
 		data := withLines(plan, [4]float64{jx1, jy1, jx2, jy2}, [4]float64{wx1, wy1, wx2, wy2})
-		path := filepath.Join(t.TempDir(), "plan.dxf")
 		if err := os.WriteFile(path, data, 0o644); err != nil {
 			t.Fatal(err)
 		}
