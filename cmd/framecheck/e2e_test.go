@@ -9,6 +9,9 @@ import (
 	"strings"
 	"testing"
 
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+
 	"framecheck/export"
 )
 
@@ -19,13 +22,9 @@ func runDemoTo(t *testing.T, dir string) (int, string, string, *export.Results) 
 	var out, errb bytes.Buffer
 	code := run([]string{"demo", "-o", dir}, &out, &errb)
 	data, err := os.ReadFile(filepath.Join(dir, resultsName))
-	if err != nil {
-		t.Fatalf("demo wrote no results.json (exit %d): %v\nstderr:\n%s", code, err, errb.String())
-	}
+	require.NoError(t, err, "demo wrote no results.json (exit %d); stderr:\n%s", code, errb.String())
 	var r export.Results
-	if err := json.Unmarshal(data, &r); err != nil {
-		t.Fatalf("results.json: %v", err)
-	}
+	require.NoError(t, json.Unmarshal(data, &r), "results.json")
 	return code, out.String(), errb.String(), &r
 }
 
@@ -60,18 +59,15 @@ func near(got, want, relTol float64) bool {
 func TestDemoEndToEnd(t *testing.T) {
 	dir := t.TempDir()
 	code, stdout, stderr, r := runDemoTo(t, dir)
-	if code != exitFail {
-		t.Errorf("exit %d, want %d: the demo has failing members by design\nstderr:\n%s", code, exitFail, stderr)
-	}
+	assert.Equal(t, exitFail, code, "the demo has failing members by design; stderr:\n%s", stderr)
 	for _, name := range []string{resultsName, scheduleName, reportName, "plan-checked.dxf"} {
 		st, err := os.Stat(filepath.Join(dir, name))
-		if err != nil || st.Size() == 0 {
-			t.Errorf("%s missing or empty: %v", name, err)
+		if assert.NoError(t, err, name) {
+			assert.NotZero(t, st.Size(), "%s is empty", name)
 		}
 	}
-	if r.Schema != export.Schema || r.DrawingUnits != "in" {
-		t.Errorf("schema %q units %q", r.Schema, r.DrawingUnits)
-	}
+	assert.Equal(t, export.Schema, r.Schema)
+	assert.Equal(t, "in", r.DrawingUnits)
 	if r.Summary.Members != len(r.Members) || r.Summary.Pass+r.Summary.Fail+r.Summary.Error != len(r.Members) {
 		t.Errorf("summary %+v does not add up to %d members", r.Summary, len(r.Members))
 	}
