@@ -1,7 +1,9 @@
 // Package export writes what a designer hands on from a framecheck run: the
 // results file other programs read (results.json), the member schedule with
 // lumber takeoff (schedule.xlsx) and markup on the designer's own drawing
-// (an annotated copy of the DXF, or the markup alone as an R12 overlay).
+// (an annotated copy of the DXF, or the markup alone as an R12 overlay), and
+// report.html, the plan coloured by utilisation with each mark's
+// calculation written out.
 //
 // It takes plain structs (Results, Markup) that mirror the results.json
 // contract; it knows nothing about how members were found or checked, so it
@@ -16,6 +18,8 @@
 //	WriteXLSX(path, r)          sheets Members, Marks, Blocking, Takeoff, Inputs, Notes
 //	Annotate(in, out, markup)   copy of the drawing with our layers and markup added
 //	WriteOverlay(path, markup, units)  the markup alone, R12
+//	WriteReport(path, r, geometry, when) report.html: self-contained page with the plan
+//	                            as SVG, schedule, takeoff and per-mark calculations
 //
 // Every writer writes atomically: a temporary file in the target folder,
 // fsync, then rename, so a failed write leaves no partial file and leaves an
