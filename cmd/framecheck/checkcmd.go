@@ -63,7 +63,8 @@ func runCheckCmd(args []string, stdout, stderr io.Writer) int {
 (NDS 2018 ASD, ASCE 7-16 combinations, IBC 2018 deflection limits), decides
 the blocking rows each run needs, and writes results.json, schedule.xlsx and
 an annotated copy of the drawing into OUTDIR. Exit status: 0 every member
-passes, 1 a member fails or is in error, 2 unusable input or usage.`)
+passes, 1 a member fails or is in error or part of the drawing could not be
+read, 2 unusable input or usage.`)
 	var c checkRun
 	f.StringVar(&c.projectPath, "p", "", "project file (TOML); default: built-in defaults")
 	f.StringVar(&c.outDir, "o", "", "output folder (default: a folder beside the plan, named after it)")
@@ -165,7 +166,25 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	if res.Summary.Fail+res.Summary.Error > 0 {
 		return exitFail
 	}
+	// Every member found passes, but part of the drawing was left out
+	// (entities past the limit, coordinates that overflow): not a clean run.
+	if n := errorFindings(o.issues); n > 0 {
+		fmt.Fprintf(stderr, "framecheck: %s: %d error finding(s) above: part of the drawing was not read, so not every joist may have been checked\n",
+			c.planPath, n)
+		return exitFail
+	}
 	return exitOK
+}
+
+// errorFindings counts the error-severity findings.
+func errorFindings(l dxfimport.IssueList) int {
+	n := 0
+	for _, is := range l {
+		if is.Severity == dxfimport.SevError {
+			n++
+		}
+	}
+	return n
 }
 
 // checkPaths refuses an output folder that is the plan itself, or one

@@ -92,6 +92,39 @@ func (d *dxfText) block(name string) {
 
 func (d *dxfText) endblk() { d.pair(0, "ENDBLK") }
 
+// text writes a TEXT (no handle) of height h at (x, y).
+func (d *dxfText) text(layer string, x, y, h float64, s string) {
+	d.pair(0, "TEXT")
+	d.pair(8, layer)
+	d.num(10, x)
+	d.num(20, y)
+	d.num(40, h)
+	d.pair(1, s)
+}
+
+// outline writes a closed LWPOLYLINE through pts.
+func (d *dxfText) outline(layer string, pts ...[2]float64) {
+	d.pair(0, "LWPOLYLINE")
+	d.pair(8, layer)
+	d.pair(90, strconv.Itoa(len(pts)))
+	d.pair(70, "1")
+	for _, p := range pts {
+		d.num(10, p[0])
+		d.num(20, p[1])
+	}
+}
+
+// minsert writes an INSERT of name with rows x cols copies spaced dx, dy
+// (a MINSERT in R12 terms: DXF reference, INSERT group codes 70, 71, 44,
+// 45).
+func (d *dxfText) minsert(name string, cols, rows int, dx, dy float64) {
+	d.insert("0", name, 0, 0)
+	d.pair(70, strconv.Itoa(cols))
+	d.pair(71, strconv.Itoa(rows))
+	d.num(44, dx)
+	d.num(45, dy)
+}
+
 func (d *dxfText) String() string { return d.b.String() }
 
 func dxfNum(f float64) string { return strconv.FormatFloat(f, 'g', -1, 64) }
@@ -345,6 +378,80 @@ var badFiles = map[string]func() string{
 		d.eof()
 		return d.String()
 	},
+}
+
+// moreBadFiles are further generated cases, kept apart for length.
+var moreBadFiles = map[string]func() string{
+	// The good plan with its last "0/EOF" pair cut off.
+	"no-eof.dxf": func() string {
+		s := smallPlanR12()
+		return s[:strings.LastIndex(s, "  0\nEOF\n")]
+	},
+	// A zero-length joist, and a joist drawn twice on top of another.
+	"zero-and-duplicate.dxf": func() string {
+		var d dxfText
+		d.header("AC1009", 1)
+		d.section("ENTITIES")
+		d.plan("WALL", "JOIST", 5, 0, 0)
+		d.line("JOIST", 50, 40, 50, 40)
+		d.line("JOIST", 0, 32, 144, 32)
+		d.endsec()
+		d.eof()
+		return d.String()
+	},
+	// Callouts the parser refuses (no such lumber; spacing out of range)
+	// beside the joists: warnings, and the joists keep the project size.
+	"bad-callouts.dxf": func() string {
+		var d dxfText
+		d.header("AC1009", 1)
+		d.section("ENTITIES")
+		d.plan("WALL", "JOIST", 5, 0, 0)
+		d.text("FRAMING-NOTE", 40, 30, 4, "2x99 @ 16")
+		d.text("FRAMING-NOTE", 40, 62, 4, "2x12 @ 96")
+		d.endsec()
+		d.eof()
+		return d.String()
+	},
+	// A load-zone outline over the upper three joists named ATTIC, which
+	// the project file (built-in defaults: FLOOR only) does not define.
+	"unknown-zone.dxf": func() string {
+		var d dxfText
+		d.header("AC1009", 1)
+		d.section("ENTITIES")
+		d.plan("WALL", "JOIST", 5, 0, 0)
+		d.outline("LOAD-ZONE", [2]float64{-10, 40}, [2]float64{200, 40}, [2]float64{200, 200}, [2]float64{-10, 200})
+		d.text("LOAD-ZONE", 100, 100, 6, "ATTIC")
+		d.endsec()
+		d.eof()
+		return d.String()
+	},
+	// 700 bytes that expand to 10^10 lines: block B is block A (one line)
+	// in a 1000 x 1000 array, and model space inserts B 100 x 100 times.
+	// The reader counts before it expands and leaves the insert out.
+	"minsert-bomb.dxf": func() string {
+		var d dxfText
+		d.header("AC1009", 1)
+		d.section("BLOCKS")
+		d.block("A")
+		d.line("A-FURN", 0, 0, 1, 1)
+		d.endblk()
+		d.block("B")
+		d.minsert("A", 1000, 1000, 2, 2)
+		d.endblk()
+		d.endsec()
+		d.section("ENTITIES")
+		d.minsert("B", 100, 100, 3000, 3000)
+		d.plan("WALL", "JOIST", 5, 0, 0)
+		d.endsec()
+		d.eof()
+		return d.String()
+	},
+}
+
+func init() {
+	for k, v := range moreBadFiles {
+		badFiles[k] = v
+	}
 }
 
 // nested puts the small plan inside a chain of depth blocks.

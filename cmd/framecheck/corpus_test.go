@@ -527,3 +527,58 @@ func TestBadCorpusProjectSyntax(t *testing.T) {
 	wantCode(t, r, exitUsage)
 	wantStderr(t, r, "project-syntax.toml:6: TOML syntax")
 }
+
+// More damaged and messy drawings.
+func TestBadCorpusMessy(t *testing.T) {
+	t.Run("no EOF", func(t *testing.T) {
+		r := runCorpus(t, "no-eof.dxf", "", "")
+		wantCode(t, r, exitUsage)
+		wantStderr(t, r, "no-eof.dxf:117: truncated file: no 0/EOF marker")
+	})
+	t.Run("zero length and duplicate", func(t *testing.T) {
+		r := runCorpus(t, "zero-and-duplicate.dxf", "", "")
+		wantCode(t, r, exitOK)
+		wantAll(t, r, export.StatusPass, 5)
+		wantStderr(t, r, "zero-and-duplicate.dxf:117 (handle 108, layer JOIST): warning FRM202",
+			"zero-and-duplicate.dxf:131 (handle 109, layer JOIST): warning FRM203")
+	})
+	t.Run("bad callouts", func(t *testing.T) {
+		r := runCorpus(t, "bad-callouts.dxf", "", "")
+		wantCode(t, r, exitOK)
+		wantAll(t, r, export.StatusPass, 5)
+		wantStderr(t, r, `bad-callouts.dxf:117 (layer FRAMING-NOTE): warning FRM208`, "2x99",
+			`bad-callouts.dxf:129 (layer FRAMING-NOTE): warning FRM208`, "spacing 96 in")
+		for _, m := range r.results.Members {
+			if m.Size != "2x10" {
+				t.Errorf("%s took size %s from a refused callout", m.ID, m.Size)
+			}
+		}
+	})
+	t.Run("unknown zone", func(t *testing.T) {
+		// The upper three joists lie in the ATTIC outline; the lower two
+		// take the default zone and are checked.
+		r := runCorpus(t, "unknown-zone.dxf", "", "")
+		wantCode(t, r, exitFail)
+		for _, m := range r.results.Members {
+			inAttic := m.Start[1] > 40
+			switch {
+			case inAttic && (m.Status != export.StatusError || !strings.Contains(strings.Join(m.Messages, " "), `"ATTIC"`)):
+				t.Errorf("%s in ATTIC: %s %q", m.ID, m.Status, m.Messages)
+			case !inAttic && m.Status != export.StatusPass:
+				t.Errorf("%s outside ATTIC: %s %q", m.ID, m.Status, m.Messages)
+			}
+		}
+	})
+	t.Run("MINSERT bomb", func(t *testing.T) {
+		// Left out whole before it is expanded: the run is quick and small,
+		// the plan beside it is checked, and the exit status says that
+		// part of the drawing was not read.
+		r := runCorpus(t, "minsert-bomb.dxf", "", "")
+		wantCode(t, r, exitFail)
+		wantAll(t, r, export.StatusPass, 5)
+		wantStderr(t, r, "minsert-bomb.dxf:91 (handle 103, layer 0): error DXF105", "part of the drawing was not read")
+		if !strings.Contains(strings.Join(r.results.Assumptions.Notes, "\n"), "DXF105") {
+			t.Errorf("notes lack DXF105: %q", r.results.Assumptions.Notes)
+		}
+	})
+}
