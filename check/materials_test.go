@@ -7,9 +7,13 @@ import (
 )
 
 // TestMaterials_NDS2018SupplementTable4A4B spot-checks reference design
-// values. Expected values typed from memory: verify against NDS 2018
-// Supplement Tables 4A and 4B (the same recollection fills the tables, so
-// these rows guard the lookup, the name folding and the width classes).
+// values. Table 4A rows checked against the NDS 2018 Supplement Table 4A
+// values tabulated in buddyd16/Structural-Engineering
+// Wood/nds2018_table4a_reference_values.csv; Table 4B rows against the
+// post-2013 Southern Pine values (SFPA Southern Pine Use Guide, metric) in
+// xcfem/xc python_modules/materials/awc_nds/dimensional_lumber.py, converted
+// to psi (docs/VERIFIED.md). These rows guard the lookup, the name folding
+// and the width classes.
 func TestMaterials_NDS2018SupplementTable4A4B(t *testing.T) {
 	rows := []struct {
 		species, grade, size         string
@@ -25,8 +29,9 @@ func TestMaterials_NDS2018SupplementTable4A4B(t *testing.T) {
 		{"Spruce-Pine-Fir", "#1", "2x8", 875, 450, 135, 425, 1150, 1400000, 510000, "Table 4A (No.1/No.2)"},
 		{"Southern Pine", "No.2", "2x10", 800, 475, 175, 565, 1300, 1400000, 510000, "Table 4B, 10 in wide"},
 		{"SYP", "No.2", "2x8", 925, 550, 175, 565, 1350, 1400000, 510000, "Table 4B, 8 in wide"},
-		{"SP", "No.1", "2x12", 1000, 650, 175, 565, 1450, 1600000, 580000, "Table 4B, 12 in wide"},
-		{"SP", "No.1", "2x14", 1000, 650, 175, 565, 1450, 1600000, 580000, "Table 4B, 12 in row for wider lumber"},
+		{"SP", "No.1", "2x12", 1000, 650, 175, 565, 1400, 1600000, 580000, "Table 4B, 12 in wide"},
+		{"SP", "No.1", "2x14", 1000, 650, 175, 565, 1400, 1600000, 580000, "Table 4B, 12 in row for wider lumber"},
+		{"SP", "Select Structural", "2x8", 1950, 1350, 175, 565, 1700, 1800000, 660000, "Table 4B, 8 in wide"},
 	}
 	mats := BuiltinMaterials()
 	for _, r := range rows {
@@ -35,7 +40,7 @@ func TestMaterials_NDS2018SupplementTable4A4B(t *testing.T) {
 			t.Errorf("%s %s %s: %v", r.species, r.grade, r.size, err)
 			continue
 		}
-		src := "NDS 2018 Supplement " + r.source + " (from memory: verify)"
+		src := "NDS 2018 Supplement " + r.source + " (checked: docs/VERIFIED.md)"
 		got := []float64{dv.FbPsi, dv.FtPsi, dv.FvPsi, dv.FcPerpPsi, dv.FcPsi, dv.EPsi, dv.EminPsi}
 		want := []float64{r.fb, r.ft, r.fv, r.fcp, r.fc, r.e, r.emin}
 		for i, n := range []string{"Fb", "Ft", "Fv", "Fc_perp", "Fc", "E", "Emin"} {
