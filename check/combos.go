@@ -20,7 +20,11 @@ type Combo struct {
 // defaultComboSpecs are the basic ASD combinations of ASCE 7-16 2.4.1 for
 // the loads framecheck knows (D, L, Lr, S, W; no rain, flood, ice or
 // earthquake): combinations 1, 2, 3, 4, 5 (W part), 6a (W part) and 7.
-// From memory: verify against ASCE 7-16 2.4.1.
+// Checked against the ASD basic combinations of ASCE 7-10 2.4.1
+// (engineeringexamples.net, "Nominal Load Combinations for Allowable Stress
+// Design in ASCE 7-10") and ASCE 7-22 2.4.1 (callout.app/codes/asce-7-22-2-4-1),
+// whose D, L, Lr, S and W terms are the same as these; the ASCE 7-16 text
+// itself was not found in a stored copy.
 var defaultComboSpecs = []string{
 	"D",
 	"D+L",
@@ -189,8 +193,9 @@ func ComboDurationFactor(factors [numLoadTypes]float64, present [numLoadTypes]bo
 // L/total for a member use ("floor" or "roof") and ceiling ("plaster",
 // "non-plaster" or "none"): floor 360 and 240; roof with a plaster or
 // stucco ceiling 360 and 240, non-plaster ceiling 240 and 180, no ceiling
-// 180 and 120. Floors ignore the ceiling. From memory: verify against IBC
-// 2018 Table 1604.3.
+// 180 and 120. Floors ignore the ceiling. Checked against IBC Table 1604.3
+// as published at up.codes/s/serviceability (the 2015 edition and a later
+// one, same rows): agrees.
 func DeflectionLimits(use, ceiling string) (live, total float64, err error) {
 	switch use {
 	case "floor":

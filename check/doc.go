@@ -22,8 +22,8 @@
 // combinations, IBC 2018 Table 1604.3 deflection limits. Design values are
 // the built-in tables nds2018_table4a.csv (Supplement Table 4A: Douglas
 // Fir-Larch, Hem-Fir, Spruce-Pine-Fir) and nds2018_table4b.csv (Table 4B:
-// Southern Pine), typed from memory and to be verified against the
-// Supplement; users add rows with LoadMaterialsCSV or LoadMaterialsTOML
+// Southern Pine), checked against stored tabulations of the Supplement
+// (docs/VERIFIED.md); users add rows with LoadMaterialsCSV or LoadMaterialsTOML
 // (same columns). A new edition means new tables and new spot checks.
 //
 // # Method and assumptions

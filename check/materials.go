@@ -67,14 +67,16 @@ type lookupVal struct {
 
 // table4aCSV holds the reference design values of NDS 2018 Supplement Table
 // 4A for Douglas Fir-Larch, Hem-Fir and Spruce-Pine-Fir dimension lumber
-// (typed from memory: verify against the Supplement).
+// (checked against two stored tabulations of the Supplement table; see the
+// file's header and docs/VERIFIED.md).
 //
 //go:embed nds2018_table4a.csv
 var table4aCSV string
 
 // table4bCSV holds the reference design values of NDS 2018 Supplement Table
-// 4B for Southern Pine dimension lumber by width (typed from memory: verify
-// against the Supplement). A new edition of the Supplement means new CSV
+// 4B for Southern Pine dimension lumber by width (checked against the
+// post-2013 SFPA values in metric, converted to psi; see the file's header
+// and docs/VERIFIED.md). A new edition of the Supplement means new CSV
 // files and new spot checks in materials_test.go.
 //
 //go:embed nds2018_table4b.csv

@@ -22,9 +22,11 @@ type Section struct {
 // dressedThicknessIn gives the dressed thickness of each nominal thickness,
 // and dressedWidthIn the dressed width of each nominal width, for dry
 // dimension lumber (NDS 2018 Supplement Table 1A, standard dressed sizes S4S,
-// the dimensions Table 1B is computed from). Nominal widths of 5 in and
-// less dress 1/2 in smaller, wider ones 3/4 in smaller. From memory:
-// verify against NDS 2018 Supplement Table 1A.
+// the dimensions Table 1B is computed from). Thicknesses and nominal widths
+// of 6 in and less dress 1/2 in smaller, wider ones 3/4 in smaller. Checked
+// against the dry dressed sizes of NDS 2018 Supplement Table 1A as coded in
+// xcfem/xc python_modules/materials/awc_nds/dimensional_lumber.py
+// (getDressedThickness, getDressedWidth): agrees.
 var (
 	dressedThicknessIn = map[int]float64{2: 1.5, 3: 2.5, 4: 3.5}
 	dressedWidthIn     = map[int]float64{4: 3.5, 5: 4.5, 6: 5.5, 8: 7.25, 10: 9.25, 12: 11.25, 14: 13.25, 16: 15.25}
