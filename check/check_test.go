@@ -341,7 +341,7 @@ func TestBearingAreaFactor_InteriorBearing(t *testing.T) {
 	m := floorJoist("2x10", 2*L, 16)
 	m.Bearings = []Bearing{{0, 1.5}, {L, 1.5}, {2 * L, 1.5}}
 	b := find(t, CheckMember(m, DefaultSettings()), KindBearing)
-	expectNear(t, "Fc_perp'", b.Allowable, 625*1.25, 1e-9, 0, "NDS 2018 3.10.4 with Supplement Table 4A Fc_perp 625 psi (from memory: verify)")
+	expectNear(t, "Fc_perp'", b.Allowable, 625*1.25, 1e-9, 0, "NDS 2018 3.10.4 with Supplement Table 4A Fc_perp 625 psi (checked against stored tabulations, docs/VERIFIED.md)")
 	expectNear(t, "Cb", traceValue(t, b, "Cb"), 1.25, 1e-12, 0, "NDS 2018 3.10.4")
 }
 

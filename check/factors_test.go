@@ -37,7 +37,7 @@ func TestEffectiveLength_NDS2018Table333(t *testing.T) {
 
 // TestBeamStabilityFactor_HandCalculation reproduces CL for a DF-L No.2
 // 2x10 (b 1.5 in, d 9.25 in, Emin 580,000 psi, Fb 900 psi; NDS 2018
-// Supplement Table 4A, from memory: verify) under wind uplift, bottom edge
+// Supplement Table 4A, checked: docs/VERIFIED.md) under wind uplift, bottom edge
 // braced every lu = 96 in of a simple span. Written out by hand:
 //
 //	Fb* = Fb CD CF Cr = 900 (1.6)(1.1)(1.15)      = 1821.6 psi

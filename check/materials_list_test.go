@@ -14,7 +14,7 @@ func TestRows_ListsTheTables(t *testing.T) {
 			t.Fatalf("Rows(DF-L) returned %s", r.Species)
 		}
 		// NDS 2018 Supplement Table 4A, Douglas Fir-Larch No.2: Fb 900 psi,
-		// E 1,600,000 psi (from memory: verify, as the table itself).
+		// E 1,600,000 psi (checked: docs/VERIFIED.md, as the table itself).
 		if r.Grade == "No.2" {
 			found = true
 			if r.FbPsi != 900 || r.EPsi != 1.6e6 {

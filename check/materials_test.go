@@ -51,7 +51,9 @@ func TestMaterials_NDS2018SupplementTable4A4B(t *testing.T) {
 
 // TestSizeFactor_NDS2018SupplementTable4A checks CF for Fb (and Ft, Fc
 // where given) from the size-factor table of NDS 2018 Supplement Table 4A
-// (from memory: verify) and the Table 4B footnote for Southern Pine.
+// (checked against the size-factor data of xcfem/xc dimensional_lumber.py,
+// docs/VERIFIED.md) and the Table 4B footnote for Southern Pine (from
+// memory: verify against NDS 2018 Supplement Table 4B).
 func TestSizeFactor_NDS2018SupplementTable4A(t *testing.T) {
 	rows := []struct {
 		species, grade, size string
@@ -75,7 +77,7 @@ func TestSizeFactor_NDS2018SupplementTable4A(t *testing.T) {
 		}
 		sec, _ := ParseSize(r.size)
 		cf := SizeFactor(dv, sec)
-		src := "NDS 2018 Supplement Table 4A/4B size factors (from memory: verify)"
+		src := "NDS 2018 Supplement Table 4A size factors (checked: docs/VERIFIED.md); Table 4B footnote (from memory: verify)"
 		expectNear(t, r.size+" "+r.grade+" CF(Fb)", cf.Fb, r.fb, 1e-12, 0, src)
 		expectNear(t, r.size+" "+r.grade+" CF(Ft)", cf.Ft, r.ft, 1e-12, 0, src)
 		expectNear(t, r.size+" "+r.grade+" CF(Fc)", cf.Fc, r.fc, 1e-12, 0, src)

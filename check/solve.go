@@ -191,8 +191,13 @@ func tempName(s string) string {
 
 // lateralSupportRule states the NDS 2018 4.4.1.2 rule for the member's
 // nominal depth-to-thickness ratio, reported beside the calculated CL as
-// information (NDS 2018 4.4.1.1 lets it replace the calculation). The
-// rule text is paraphrased from memory: verify against NDS 2018 4.4.1.2.
+// information (NDS 2018 4.4.1.1 lets it replace the calculation). The d/b
+// limits 2, 4, 5, 6, 7 and the kind of support each asks for (none; ends;
+// compression edge; blocking or bridging; both edges) agree with
+// getRequiredRestraint in xcfem/xc python_modules/materials/awc_nds/
+// AWCNDS_materials.py (NDS 2018 4.4.1.2 (a) to (e)); the wording, and the
+// 8 ft blocking interval, are paraphrased from memory: verify against NDS
+// 2018 4.4.1.2.
 func (e *engine) lateralSupportRule() string {
 	k := [2]float64{e.sec.NominalDIn, e.sec.NominalBIn}
 	if v, ok := lateralRules.Load(k); ok {
