@@ -13,7 +13,7 @@ func TestMaterialsCommand(t *testing.T) {
 		t.Fatalf("exit %d: %s", code, errs)
 	}
 	// NDS 2018 Supplement Table 4A, Douglas Fir-Larch No.2: Fb 900, Fv 180,
-	// Fc_perp 625, E 1,600,000, Emin 580,000 psi (from memory: verify).
+	// Fc_perp 625, E 1,600,000, Emin 580,000 psi (checked: docs/VERIFIED.md).
 	for _, want := range []string{"Douglas Fir-Larch", "No.2", "900", "1600000", "580000", "NDS 2018 Supplement Table 4A"} {
 		if !strings.Contains(out, want) {
 			t.Errorf("materials DF-L lacks %q:\n%s", want, out)
