@@ -58,10 +58,12 @@ func intList(ns []int) string {
 func numList(vs []float64) string {
 	parts := make([]string, len(vs))
 	for i, v := range vs {
-		parts[i] = strconv.FormatFloat(v, 'f', -1, 64)
-		if math.Abs(v*100-math.Round(v*100)) > 1e-9 {
-			parts[i] = strconv.FormatFloat(v, 'f', 2, 64)
+		p := strings.TrimRight(strconv.FormatFloat(v, 'f', 2, 64), "0")
+		p = strings.TrimSuffix(p, ".")
+		if p == "-0" {
+			p = "0"
 		}
+		parts[i] = p
 	}
 	return strings.Join(parts, ", ")
 }

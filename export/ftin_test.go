@@ -46,3 +46,13 @@ func TestUnitToInch(t *testing.T) {
 		t.Error("yd accepted")
 	}
 }
+
+// numList prints lengths to 0.01 in without float noise (common practice,
+// no source): values that came out of arithmetic like 119.25000000000003.
+func TestNumListRounds(t *testing.T) {
+	got := numList([]float64{-0.7500000000000001, 120.00000000000003, 14.5, 0, -0.001, 3.14159})
+	want := "-0.75, 120, 14.5, 0, 0, 3.14"
+	if got != want {
+		t.Errorf("numList = %q, want %q", got, want)
+	}
+}

@@ -119,7 +119,11 @@ func fillCalc(c *markCalc, r *Results, m *Member) {
 			keyValue{"Use, ceiling", zone.Use + ", " + zone.Ceiling},
 			keyValue{"Deflection limits (live, total)", limitText(zone.LiveDeflectionLimit) + ", " + limitText(zone.TotalDeflectionLimit)})
 	}
-	c.Inputs = append(c.Inputs, keyValue{"Blocking rows per span", intList(m.BlockingRowsPerSpan)})
+	rows := intList(m.BlockingRowsPerSpan)
+	if rows == "" {
+		rows = "none added"
+	}
+	c.Inputs = append(c.Inputs, keyValue{"Blocking rows per span", rows})
 	if len(m.BlockingAtIn) > 0 {
 		c.Inputs = append(c.Inputs, keyValue{"Blocking rows at (from start)", numList(m.BlockingAtIn) + " in"})
 	}
