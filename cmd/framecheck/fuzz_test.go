@@ -10,7 +10,36 @@ import (
 
 	"framecheck/dxfimport"
 	"framecheck/export"
+	"framecheck/samples"
 )
+
+// upliftProject turns every design switch from its default and loads a
+// roof zone (named FLOOR, as richPlan's outline is) with net uplift.
+const upliftProject = `
+[drawing]
+snap_tolerance_in = 3
+edge_distance_in = 6
+[design]
+top_edge_braced = false
+shear_at_d = true
+wet_service = true
+temperature = "hot"
+incised = true
+add_self_weight = true
+pattern_live_loads = false
+[[zone]]
+name = "FLOOR"
+use = "roof"
+dead_psf = 5
+roof_live_psf = 20
+snow_psf = 40
+wind_down_psf = 20
+wind_up_psf = 60
+ceiling = "plaster"
+ceiling_braces_bottom = false
+[sizing]
+candidates = ["2x6", "2x8", "3x10", "4x12", "2x14"]
+`
 
 // richPlan is a small plan that reaches most of the pipeline: a
 // two-span continuous run, a cantilever past the last wall, a flush beam
@@ -88,14 +117,24 @@ func FuzzCheckPlan(f *testing.F) {
 	seeds := []string{smallPlan(), smallPlanR12(), richPlan(), badFiles["self-insert.dxf"](),
 		badFiles["nested-blocks.dxf"](), badFiles["one-end-unsupported.dxf"](), badFiles["coords-1e300.dxf"]()}
 	for i, s := range seeds {
-		f.Add([]byte(s), 0.0, 40.0, 144.0, 40.0, 72.0, -10.0, 72.0, 200.0, i%2 == 0)
+		f.Add([]byte(s), 0.0, 40.0, 144.0, 40.0, 72.0, -10.0, 72.0, 200.0, i%2 == 0, uint8(i))
 	}
-	f.Add([]byte(richPlan()), 0.0, 1e-300, 1e300, 1e-300, -1e308, 0.0, 1e308, 0.0, false)
-	f.Add([]byte(smallPlan()), 144.0, 16.0, 144.0, 16.0, 144.0, 0.0, 144.0, 0.0, true)
-	proj := DefaultProject()
+	f.Add([]byte(richPlan()), 0.0, 1e-300, 1e300, 1e-300, -1e308, 0.0, 1e308, 0.0, false, uint8(1))
+	f.Add([]byte(smallPlan()), 144.0, 16.0, 144.0, 16.0, 144.0, 0.0, 144.0, 0.0, true, uint8(2))
+	// The projects a plan is checked with: the built-in defaults, the
+	// demo's (several zones, by-layer sizes, three support kinds), and a
+	// roof under uplift with every design switch turned from its default.
+	projects := []*Project{DefaultProject()}
+	for _, text := range []string{string(samples.DemoProject), upliftProject} {
+		p, err := ParseProject("fuzz.toml", []byte(text))
+		if err != nil {
+			f.Fatal(err)
+		}
+		projects = append(projects, p)
+	}
 	// A worker process runs one input at a time: one file serves them all.
 	path := filepath.Join(f.TempDir(), "plan.dxf")
-	f.Fuzz(func(t *testing.T, plan []byte, jx1, jy1, jx2, jy2, wx1, wy1, wx2, wy2 float64, size bool) {
+	f.Fuzz(func(t *testing.T, plan []byte, jx1, jy1, jx2, jy2, wx1, wy1, wx2, wy2 float64, size bool, which uint8) {
 		if len(plan) > 1<<16 {
 			return
 		}
@@ -103,7 +142,7 @@ func FuzzCheckPlan(f *testing.F) {
 		if err := os.WriteFile(path, data, 0o644); err != nil {
 			t.Fatal(err)
 		}
-		o, err := runPipeline(pipelineInput{planPath: path, project: proj, size: size})
+		o, err := runPipeline(pipelineInput{planPath: path, project: projects[int(which)%len(projects)], size: size})
 		if err != nil {
 			var pe *dxfimport.ParseError
 			if !errors.As(err, &pe) {
