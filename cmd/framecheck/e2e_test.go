@@ -211,3 +211,46 @@ func TestCheckBadInputs(t *testing.T) {
 		})
 	}
 }
+
+// TestCheckSizePicksOneSizePerRun runs `check --size` on the demo plan: the
+// overloaded storage run needs 2x14, and every run comes out in one size.
+func TestCheckSizePicksOneSizePerRun(t *testing.T) {
+	dir := t.TempDir()
+	var out, errb bytes.Buffer
+	require.NotEqual(t, exitUsage, run([]string{"demo", "-o", dir}, &out, &errb), errb.String())
+	outDir := filepath.Join(dir, "sized")
+	out.Reset()
+	errb.Reset()
+	code := run([]string{"check", filepath.Join(dir, "plan.dxf"), "-p", filepath.Join(dir, "framecheck.toml"), "-o", outDir, "--size"}, &out, &errb)
+	// The joist drawn short of its beam stays an error member: exit 1.
+	assert.Equal(t, exitFail, code, errb.String())
+	data, err := os.ReadFile(filepath.Join(outDir, resultsName))
+	require.NoError(t, err)
+	var r export.Results
+	require.NoError(t, json.Unmarshal(data, &r))
+	assert.Zero(t, r.Summary.Fail, "sizing leaves no failing member")
+	sizeOfRun := map[string]string{}
+	for _, row := range r.BlockingRows {
+		for _, id := range row.Members {
+			m := memberByID(t, &r, id)
+			if s, ok := sizeOfRun[row.Run]; ok && s != m.Size {
+				t.Errorf("run %s framed in %s and %s", row.Run, s, m.Size)
+			}
+			sizeOfRun[row.Run] = m.Size
+		}
+	}
+	// Storage bay, 144 in span, D 12 + L 125 psf at 16 in: M = 39,456 lb-in
+	// (see TestDemoEndToEnd). 2x12: S = 31.64 in^3, Fb' = 900(1.0)(1.15) =
+	// 1,035 psi, fb = 1,247 psi: fails. 2x14: S = 1.5(13.25)^2/6 = 43.89 in^3
+	// (NDS 2018 Supplement Table 1B), CF = 0.9 (Table 4A), Fb' = 900(0.9)(1.15)
+	// = 931.5 psi, fb = 899 psi, ratio 0.965: the lightest that passes.
+	for _, m := range r.Members {
+		if m.Zone != "STORAGE" || m.Status == export.StatusError {
+			continue
+		}
+		assert.Equal(t, "2x14", m.Size, "%s", m.ID)
+		if m.TribIn > 15 { // interior joists carry the full 16 in
+			assert.InDelta(t, 0.965, checkOf(t, &m, export.KindBendingTop).Ratio, 0.003, "%s", m.ID)
+		}
+	}
+}

@@ -120,6 +120,9 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 		o.sizing = make([]*check.SizingResult, len(plan.Members))
 	}
 	checkAll(inputs, shifts, usable, settings, p, o)
+	if in.size {
+		sizeRuns(plan, inputs, shifts, usable, settings, o)
+	}
 
 	// Rows per run: the run gets the most rows any member needs, and every
 	// member of the run is checked with them (DOMAIN.md "Blocking rows").
@@ -182,6 +185,48 @@ func firstBearing(m *framing.Member) float64 {
 		return 0
 	}
 	return m.Bearings[0].AtIn
+}
+
+// sizeRuns gives every member of a run the deepest size any of its members
+// needs: a run is framed in one size (common practice, no source), so an
+// edge joist that could be lighter takes its neighbours' size. Members that
+// change size are checked again, blocking solver included.
+func sizeRuns(plan *framing.Plan, inputs []check.Member, shifts []float64, usable []bool, s check.Settings, o *outcome) {
+	cache := map[string]check.Result{}
+	for _, run := range plan.Runs {
+		best, bestSec := "", check.Section{}
+		for _, k := range run.Members {
+			if !usable[k] || o.results[k].Status == check.StatusError {
+				continue
+			}
+			sec, err := check.ParseSize(o.results[k].Size)
+			if err != nil {
+				continue
+			}
+			if best == "" || sec.NominalDIn > bestSec.NominalDIn ||
+				(sec.NominalDIn == bestSec.NominalDIn && sec.NominalBIn > bestSec.NominalBIn) {
+				best, bestSec = o.results[k].Size, sec
+			}
+		}
+		if best == "" {
+			continue
+		}
+		for _, k := range run.Members {
+			if !usable[k] || o.results[k].Size == best {
+				continue
+			}
+			cm := inputs[k]
+			cm.Size = best
+			key := memberKey(cm)
+			r, ok := cache[key]
+			if !ok {
+				r = check.CheckMember(cm, s)
+				cache[key] = r
+			}
+			r.ID = cm.ID
+			o.results[k] = unshift(r, shifts[k])
+		}
+	}
 }
 
 // checkAll checks the usable members on every core. Members identical for
