@@ -135,7 +135,7 @@ func fillCalc(c *markCalc, r *Results, m *Member) {
 	cd := map[string]float64{}
 	for _, f := range m.Factors {
 		if f.Name == "CD" && f.Formula != "" {
-			cd[strings.Join(strings.Fields(f.Formula), "")] = f.Value
+			cd[caseKey(f.Formula)] = f.Value
 			continue
 		}
 		c.Factors = append(c.Factors, newTraceLine(f))

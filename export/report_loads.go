@@ -159,8 +159,9 @@ func zoneLineLoads(z *Zone, tribIn float64) map[string]float64 {
 // and tributary width tribIn: w = sum of factor x line load, one line per
 // case, leaving out cases whose loads other than D are all zero (ASCE 7-16
 // 2.4.1 combinations with an absent load add nothing) and cases that repeat
-// an earlier one once the absent loads are dropped. cd maps a
-// combination name (spaces removed) to its CD from the member's factors.
+// an earlier one once the absent loads are dropped. cd maps a load
+// case (caseKey of the engine's case name) to its CD from the member's
+// factors.
 func comboLoads(combos []string, z *Zone, tribIn float64, cd map[string]float64) ([]comboLoad, []string) {
 	w := zoneLineLoads(z, tribIn)
 	var out []comboLoad
@@ -172,11 +173,6 @@ func comboLoads(combos []string, z *Zone, tribIn float64, cd map[string]float64)
 			problems = append(problems, err.Error())
 			continue
 		}
-		key := strings.Join(strings.Fields(name), "")
-		cdText := ""
-		if v, ok := cd[key]; ok {
-			cdText = fmtNum(v)
-		}
 		for _, c := range cases {
 			for _, dir := range windCases(c, w) {
 				l, ok := evalCase(c, w, dir)
@@ -184,7 +180,10 @@ func comboLoads(combos []string, z *Zone, tribIn float64, cd map[string]float64)
 					continue
 				}
 				seen[l.Case] = true
-				l.Combo, l.CD = name, cdText
+				l.Combo = name
+				if v, ok := cd[caseKey(l.Case)]; ok {
+					l.CD = fmtNum(v)
+				}
 				out = append(out, l)
 			}
 		}
@@ -250,4 +249,11 @@ func windCases(c comboCase, w map[string]float64) []string {
 		return []string{"W down"} // zero wind: dropped as trivial
 	}
 	return dirs
+}
+
+// caseKey folds a load-case name for matching the engine's names with the
+// report's: spaces and parentheses dropped, so "D + 0.6 W up" and
+// "D+0.6W(up)" are both "D+0.6Wup".
+func caseKey(s string) string {
+	return strings.NewReplacer(" ", "", "(", "", ")", "").Replace(s)
 }
