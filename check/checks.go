@@ -222,7 +222,13 @@ func (e *engine) deflectionChecks() []CheckResult {
 			}
 		}
 	}
-	if e.m.TotalLimit > 0 && len(lives) == 0 && wD > 0 {
+	// With no downward live-type load (none, or wind suction only) the
+	// largest live-type deflection adds nothing: total = Kcr D alone.
+	down := false
+	for _, lv := range lives {
+		down = down || lv.w > 0
+	}
+	if e.m.TotalLimit > 0 && !down && wD > 0 {
 		for k := range w {
 			w[k] = wD
 		}

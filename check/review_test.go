@@ -1,0 +1,37 @@
+package check
+
+import (
+	"math"
+	"testing"
+)
+
+// TestTotalDeflection_UpliftOnlyRoof: a roof joist whose only live-type
+// load is wind suction still has its total deflection checked. Total =
+// Kcr x (deflection from D) + the largest live-type deflection (NDS 2018
+// 3.5.2; DOMAIN rule), and 0.42 W up deflects the joist upward, so the
+// largest downward live-type deflection is 0 and total = 1.5 x 5 wD L^4 /
+// (384 E I) against L/180 (IBC 2018 Table 1604.3, roof, non-plaster
+// ceiling). Hand calculation: wD = 10 psf x 16 in / 144 = 1.1111 lb/in,
+// I = 1.5 (7.25)^3 / 12 = 47.635 in^4, 5 wD L^4 / (384 E I) with L = 168 in,
+// E = 1,600,000 psi = 0.15121 in; x 1.5 = 0.2268 in; allowed 168/180 =
+// 0.9333 in.
+func TestTotalDeflection_UpliftOnlyRoof(t *testing.T) {
+	L := 168.0
+	m := Member{ID: "R1", Size: "2x8", Species: "Douglas Fir-Larch", Grade: "No.2", LengthIn: L,
+		Bearings: []Bearing{{0, 1.5}, {L, 1.5}}, SpacingIn: 16, TribIn: 16, Use: "roof",
+		Loads: AreaLoads{DeadPsf: 10, WindUpPsf: 30}, LiveLimit: 240, TotalLimit: 180, Repetitive: true}
+	r := CheckMember(m, DefaultSettings())
+	var tot *CheckResult
+	for i := range r.Checks {
+		if r.Checks[i].Kind == KindDeflectionTotal {
+			tot = &r.Checks[i]
+		}
+	}
+	if tot == nil {
+		t.Fatalf("no total deflection check with D and wind suction only (%d checks, messages %v)", len(r.Checks), r.Messages)
+	}
+	ei := 1.6e6 * 1.5 * 7.25 * 7.25 * 7.25 / 12
+	wD := 10 * 16 / 144.0
+	expectNear(t, "total deflection", tot.Actual, 1.5*5*wD*math.Pow(L, 4)/(384*ei), 1e-9, 1e-9, "NDS 2018 3.5.2 Kcr 1.5; 5 w L^4 / 384 E I")
+	expectNear(t, "allowed", tot.Allowable, L/180, 1e-12, 0, "IBC 2018 Table 1604.3 (roof, non-plaster ceiling)")
+}
