@@ -173,7 +173,12 @@ func (e *engine) model() {
 // patterns returns the masks of segments loaded by the live-type loads:
 // all segments, and, when patterning applies (PatternLive and more than
 // one segment), every non-empty subset for up to 5 segments, else each
-// single segment, alternate segments and adjacent pairs.
+// single segment, alternate segments, adjacent pairs, and each adjacent
+// pair with every second segment beyond it (the arrangement that gives
+// the largest negative moment and reaction at the support between the
+// pair: the influence line of a support moment alternates in sign span by
+// span, Mueller-Breslau; ASCE 7-16 4.3.3 asks for the most unfavourable
+// arrangement).
 func (e *engine) patterns() []uint32 {
 	n := len(e.segs)
 	all := uint32(1)<<n - 1
@@ -203,7 +208,20 @@ func (e *engine) patterns() []uint32 {
 			odd |= 1 << k
 		}
 	}
-	return append(out, even, odd)
+	out = append(out, even, odd)
+	for k := 0; k+1 < n; k++ {
+		p := uint32(3) << k
+		for j := k - 2; j >= 0; j -= 2 {
+			p |= 1 << j
+		}
+		for j := k + 3; j < n; j += 2 {
+			p |= 1 << j
+		}
+		if p != 3<<k && p != all {
+			out = append(out, p)
+		}
+	}
+	return out
 }
 
 // comboCD is a combination case's name and load duration factor.

@@ -3,6 +3,8 @@ package check
 import (
 	"math"
 	"testing"
+
+	"framecheck/check/beam"
 )
 
 // TestTotalDeflection_UpliftOnlyRoof: a roof joist whose only live-type
@@ -34,4 +36,53 @@ func TestTotalDeflection_UpliftOnlyRoof(t *testing.T) {
 	wD := 10 * 16 / 144.0
 	expectNear(t, "total deflection", tot.Actual, 1.5*5*wD*math.Pow(L, 4)/(384*ei), 1e-9, 1e-9, "NDS 2018 3.5.2 Kcr 1.5; 5 w L^4 / 384 E I")
 	expectNear(t, "allowed", tot.Allowable, L/180, 1e-12, 0, "IBC 2018 Table 1604.3 (roof, non-plaster ceiling)")
+}
+
+// TestPatternLive_SixSpans_WorstSupportMoment: ASCE 7-16 4.3.3 (partial
+// loading) asks for the most unfavourable arrangement of live load. On a
+// continuous beam the largest negative moment over a support, and the
+// largest reaction, come from loading the two spans next to it and every
+// second span beyond (Mueller-Breslau: the influence line of a support
+// moment alternates in sign span by span). The expected values are the
+// worst over all 2^6 - 1 arrangements of live load on six equal spans,
+// each solved by the three-moment equation (check/beam, verified against
+// AISC Manual Table 3-23); the engine must find the same worst case.
+func TestPatternLive_SixSpans_WorstSupportMoment(t *testing.T) {
+	const n = 6
+	L := 120.0
+	m := floorJoist("2x12", n*L, 16)
+	m.Bearings = nil
+	sup := make([]float64, 0, n+1)
+	for i := 0; i <= n; i++ {
+		m.Bearings = append(m.Bearings, Bearing{float64(i) * L, 3.5})
+		sup = append(sup, float64(i)*L)
+	}
+	m.Loads = AreaLoads{LivePsf: 40}
+	m.BottomBracedContinuous = true // CL = 1: the governing M is the largest negative moment
+	m.LiveLimit = 0
+	r := CheckMember(m, DefaultSettings())
+	w := 40 * 16 / 144.0
+	b := beam.Beam{LengthIn: n * L, SupportsAtIn: sup, EILbIn2: 1e9}
+	worstM, worstR := 0.0, 0.0
+	for p := 1; p < 1<<n; p++ {
+		ws := make([]float64, n)
+		for k := range ws {
+			if p&(1<<k) != 0 {
+				ws[k] = w
+			}
+		}
+		resp, err := b.Solve(ws)
+		if err != nil {
+			t.Fatal(err)
+		}
+		_, _, neg, _ := resp.MomentExtremes(0, n*L)
+		worstM = math.Max(worstM, -neg)
+		for _, rx := range resp.Reactions() {
+			worstR = math.Max(worstR, rx)
+		}
+	}
+	expectNear(t, "largest support moment", traceValue(t, find(t, r, KindBendingBottom), "M"), worstM, 1e-6, 1e-9,
+		"ASCE 7-16 4.3.3, worst of all 63 live-load arrangements")
+	expectNear(t, "largest reaction", traceValue(t, find(t, r, KindBearing), "R"), worstR, 1e-6, 1e-9,
+		"ASCE 7-16 4.3.3, worst of all 63 live-load arrangements")
 }
