@@ -1,6 +1,7 @@
 package main
 
 import (
+	"bytes"
 	"errors"
 	"fmt"
 	"io"
@@ -110,16 +111,25 @@ check on them, so the whole job can be seen with no files at hand.`)
 	if len(pos) != 0 {
 		return f.usageError(stderr, "demo takes no arguments")
 	}
+	c.planPath = filepath.Join(c.outDir, samples.DemoPlanName)
+	c.projectPath = filepath.Join(c.outDir, "framecheck.toml")
+	files := []struct {
+		path string
+		data []byte
+	}{{c.planPath, samples.DemoPlan}, {c.projectPath, samples.DemoProject}}
+	// Nothing lost: a file of the user's under either name is left alone
+	// (the demo's own files from an earlier run may be written again).
+	for _, w := range files {
+		if old, err := os.ReadFile(w.path); err == nil && !bytes.Equal(old, w.data) {
+			fmt.Fprintf(stderr, "framecheck: demo: %s exists and is not the demo's; choose another -o\n", w.path)
+			return exitUsage
+		}
+	}
 	if err := os.MkdirAll(c.outDir, 0o755); err != nil {
 		fmt.Fprintf(stderr, "framecheck: %v\n", err)
 		return exitUsage
 	}
-	c.planPath = filepath.Join(c.outDir, samples.DemoPlanName)
-	c.projectPath = filepath.Join(c.outDir, "framecheck.toml")
-	for _, w := range []struct {
-		path string
-		data []byte
-	}{{c.planPath, samples.DemoPlan}, {c.projectPath, samples.DemoProject}} {
+	for _, w := range files {
 		if err := os.WriteFile(w.path, w.data, 0o644); err != nil {
 			fmt.Fprintf(stderr, "framecheck: %v\n", err)
 			return exitUsage

@@ -199,3 +199,36 @@ func TestNothingLostInputReadOnly(t *testing.T) {
 		t.Errorf("plan changed: mode %v -> %v, time %v -> %v", st0.Mode(), st1.Mode(), st0.ModTime(), st1.ModTime())
 	}
 }
+
+// demo writes its plan and project file into OUTDIR: files of the user's
+// under those names are never replaced, while the demo's own files from
+// an earlier run are.
+func TestNothingLostDemoKeepsUserFiles(t *testing.T) {
+	dir := t.TempDir()
+	if code, stderr := runCheck(t, "demo", "-o", dir); code == exitUsage {
+		t.Fatalf("first demo: exit 2\n%s", stderr)
+	}
+	if code, stderr := runCheck(t, "demo", "-o", dir); code == exitUsage {
+		t.Fatalf("second demo in the same folder: exit 2\n%s", stderr)
+	}
+	for _, name := range []string{"framecheck.toml", "plan.dxf"} {
+		t.Run(name, func(t *testing.T) {
+			dir := t.TempDir()
+			mine := []byte("# the user's own file\n")
+			p := filepath.Join(dir, name)
+			if err := os.WriteFile(p, mine, 0o644); err != nil {
+				t.Fatal(err)
+			}
+			code, stderr := runCheck(t, "demo", "-o", dir)
+			if code != exitUsage || !strings.Contains(stderr, "exists and is not the demo's") {
+				t.Errorf("exit %d\n%s", code, stderr)
+			}
+			if data, _ := os.ReadFile(p); !bytes.Equal(data, mine) {
+				t.Errorf("%s was replaced", name)
+			}
+			if ents, _ := os.ReadDir(dir); len(ents) != 1 {
+				t.Errorf("the folder holds %d entries, want only the user's file", len(ents))
+			}
+		})
+	}
+}
