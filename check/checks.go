@@ -68,15 +68,28 @@ func (e *engine) shearCheck() CheckResult {
 // bearingCheck returns the bearing check: fc_perp = R / (b lb) at each
 // bearing against Fc_perp' = Fc_perp CM Ct Ci Cb (NDS 2018 3.10.2, Table
 // 4.3.1; no CD), with the largest downward reaction of any strength case.
-// Uplift reactions are returned as information.
+// Uplift reactions are returned as information. The reaction at an end
+// that is part of its bearing includes the load on the piece past the
+// centre-line.
 func (e *engine) bearingCheck() (CheckResult, []string) {
 	var info []string
 	best, bestJ, bestCI := -1.0, 0, 0
 	var bestR, bestCb, bestFc float64
+	last := len(e.m.Bearings) - 1
 	for j, b := range e.m.Bearings {
+		// An end that is part of its bearing (no overhang analysed) puts
+		// the load on its piece past the centre-line straight into the
+		// reaction (DOMAIN rule), carried as the next segment carries it.
+		stub, seg := 0.0, 0
+		if j == 0 && e.m.OverhangStartIn == 0 {
+			stub = b.AtIn
+		} else if j == last && e.m.OverhangEndIn == 0 {
+			stub, seg = e.m.LengthIn-b.AtIn, len(e.segs)-1
+		}
+		stub = math.Max(stub, 0)
 		rMax, rMin, ciMax, ciMin := 0.0, 0.0, 0, 0
 		for ci := range e.cases {
-			r := e.cases[ci].r.Reactions()[j]
+			r := e.cases[ci].r.Reactions()[j] + e.cases[ci].w[seg]*stub
 			if r > rMax {
 				rMax, ciMax = r, ci
 			}

@@ -86,3 +86,22 @@ func TestPatternLive_SixSpans_WorstSupportMoment(t *testing.T) {
 	expectNear(t, "largest reaction", traceValue(t, find(t, r, KindBearing), "R"), worstR, 1e-6, 1e-9,
 		"ASCE 7-16 4.3.3, worst of all 63 live-load arrangements")
 }
+
+// TestBearing_EndPastCentreLineLoadsTheReaction: an end that stops inside
+// its bearing is part of the bearing and its load goes to the reaction
+// (DOMAIN rule on overhangs). A 2x10 floor joist, 168 in centre to centre
+// of 3.5 in bearings, ends flush with the outer faces: member 171.5 in,
+// 1.75 in past each centre-line. Hand calculation: w = (10 + 40) psf x
+// 16 in / 144 = 5.5556 lb/in; R = w (168/2 + 1.75) = 476.39 lb (statics);
+// fc_perp = R / (b lb) = 476.39 / (1.5 x 3.5) = 90.74 psi (NDS 2018
+// 3.10.2). Shear at the centre-line stays w L / 2 = 466.67 lb.
+func TestBearing_EndPastCentreLineLoadsTheReaction(t *testing.T) {
+	m := floorJoist("2x10", 171.5, 16)
+	m.Bearings = []Bearing{{1.75, 3.5}, {169.75, 3.5}}
+	r := CheckMember(m, DefaultSettings())
+	w := 50 * 16 / 144.0
+	b := find(t, r, KindBearing)
+	expectNear(t, "R", traceValue(t, b, "R"), w*(84+1.75), 1e-9, 1e-9, "statics: w (L/2 + 1.75 in)")
+	expectNear(t, "fc_perp", b.Actual, w*(84+1.75)/(1.5*3.5), 1e-9, 1e-9, "NDS 2018 3.10.2")
+	expectNear(t, "V", traceValue(t, find(t, r, KindShear), "V"), w*84, 1e-9, 1e-9, "statics: w L / 2")
+}
