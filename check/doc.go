@@ -43,8 +43,11 @@
 //   - Pattern loading (Settings.PatternLive): on members of more than one
 //     segment (spans and cantilevers), L, Lr and S are applied to every
 //     non-empty subset of segments (up to five segments; beyond that, each
-//     segment, adjacent pairs and alternate segments) and the worst case
-//     kept. D is never patterned; W is applied to the whole member. On a
+//     segment, adjacent pairs, alternate segments and each adjacent pair
+//     with every second segment beyond it, the worst arrangement for a
+//     support) and the worst case kept. D is never patterned; W is applied
+//     to the whole member in strength cases (ASCE 7 asks no partial wind
+//     loading), span by span like the others in deflection. On a
 //     single span, cases another case dominates (same-sign load at least as
 //     large with CD no larger) are dropped, which changes no result.
 //   - Bending: each edge is checked over the stretches between its bracing
