@@ -383,6 +383,24 @@ func TestBadCorpusNonASCIILayers(t *testing.T) {
 	}
 }
 
+// Project-file layer patterns outside ASCII, in another case: the 🪵
+// joists and 🏠 walls match no pattern and are left out; the others are
+// checked, the 梁 joists in the by-layer size.
+func TestBadCorpusNonASCIIProject(t *testing.T) {
+	r := runCorpus(t, "non-ascii-layers.dxf", "", "non-ascii-layers.toml")
+	wantCode(t, r, exitOK)
+	wantAll(t, r, export.StatusPass, 6)
+	for _, m := range r.results.Members {
+		want := "2x10"
+		if m.Layer == "JOIST-梁-二階" {
+			want = "2x12"
+		}
+		if m.Size != want || m.Layer == "JOIST-🪵" {
+			t.Errorf("%s on %q: size %s, want %s", m.ID, m.Layer, m.Size, want)
+		}
+	}
+}
+
 // A plan drawn at 1e300 in: its lines are skipped with a warning naming
 // each handle; the good plan beside it is checked.
 func TestBadCorpusHugeCoordinates(t *testing.T) {
