@@ -105,3 +105,55 @@ func TestBearing_EndPastCentreLineLoadsTheReaction(t *testing.T) {
 	expectNear(t, "fc_perp", b.Actual, w*(84+1.75)/(1.5*3.5), 1e-9, 1e-9, "NDS 2018 3.10.2")
 	expectNear(t, "V", traceValue(t, find(t, r, KindShear), "V"), w*84, 1e-9, 1e-9, "statics: w L / 2")
 }
+
+// TestBottomEdge_UpliftSimpleSpan_HandCalculation: a 2x8 DF-L No.2 roof
+// joist, 168 in simple span at 16 in, D 10 psf, W up 30 psf: 0.6D + 0.6W
+// is a net uplift of 12 psf (ASCE 7-16 2.4.1 combination 7) that puts the
+// bottom edge, braced only at the bearings, in compression. By hand:
+// w = 12 x 16 / 144 = 1.3333 lb/in, M = w L^2 / 8 = 4704 lb-in;
+// Fb* = Fb CD CF Cr = 900 (1.6)(1.2)(1.15) = 1987.2 psi (NDS 2018 Table
+// 2.3.2 CD for W; Supplement Table 4A CF; 4.3.9 Cr); lu = 168 in, lu/d =
+// 23.2 >= 7, simple span: le = 1.63 lu + 3 d = 295.59 in (NDS 2018 Table
+// 3.3.3); RB = sqrt(le d / b^2) = 30.862; FbE = 1.20 Emin / RB^2 =
+// 1.20 (580,000) / 952.46 = 730.74 psi; FbE/Fb* = 0.36772, CL = 1.36772/1.9
+// - sqrt((1.36772/1.9)^2 - 0.36772/0.95) = 0.35776 (NDS 2018 Eq. 3.3-6);
+// Fb' = 710.94 psi.
+func TestBottomEdge_UpliftSimpleSpan_HandCalculation(t *testing.T) {
+	L := 168.0
+	m := Member{ID: "R1", Size: "2x8", Species: "Douglas Fir-Larch", Grade: "No.2", LengthIn: L,
+		Bearings: []Bearing{{0, 1.5}, {L, 1.5}}, SpacingIn: 16, TribIn: 16, Use: "roof",
+		Loads: AreaLoads{DeadPsf: 10, WindUpPsf: 30}, LiveLimit: 240, TotalLimit: 180, Repetitive: true}
+	b := find(t, CheckWithRows(m, DefaultSettings(), 0), KindBendingBottom)
+	src := "hand calculation in the comment (NDS 2018 3.3.3, Table 3.3.3, Eq. 3.3-6)"
+	expectNear(t, "M", traceValue(t, b, "M"), 4704, 1e-6, 0, src)
+	expectNear(t, "Fb*", traceValue(t, b, "Fb*"), 1987.2, 1e-9, 1e-12, src)
+	expectNear(t, "le", traceValue(t, b, "le"), 295.59, 1e-9, 1e-12, src)
+	expectNear(t, "RB", traceValue(t, b, "RB"), 30.862, 0.0005, 0, src)
+	expectNear(t, "FbE", traceValue(t, b, "FbE"), 730.74, 0.005, 0, src)
+	expectNear(t, "CL", traceValue(t, b, "CL"), 0.35776, 0.00001, 0, src)
+	expectNear(t, "Fb'", b.Allowable, 710.94, 0.01, 0, src)
+}
+
+// TestBottomEdge_TwoSpans_GeneralRow_HandCalculation: a 2x8 DF-L No.2
+// floor joist over two 144 in spans at 16 in, D 12 + L 40 psf, no rows:
+// the bottom edge over the interior bearing is braced only at the
+// bearings. By hand: w = 52 x 16 / 144 = 5.7778 lb/in, M = w L^2 / 8 =
+// 14,976 lb-in (two equal spans, AISC Manual Table 3-23 case 29); lu =
+// 144 in, lu/d = 19.86 > 14.3: general row le = 1.84 lu = 264.96 in (NDS
+// 2018 Table 3.3.3 note 1); RB = sqrt(264.96 (7.25)) / 1.5 = 29.219; FbE
+// = 1.20 (580,000) / 853.76 = 815.22 psi; Fb* = 900 (1.0)(1.2)(1.15) =
+// 1242 psi; FbE/Fb* = 0.65637, CL = 0.60896 (Eq. 3.3-6); fb = M / S =
+// 14,976 / 13.1406 = 1139.7 psi; ratio = 1139.7 / (1242 x 0.60897) = 1.5068.
+func TestBottomEdge_TwoSpans_GeneralRow_HandCalculation(t *testing.T) {
+	L := 144.0
+	m := floorJoist("2x8", 2*L, 16)
+	m.Bearings = []Bearing{{0, 3.5}, {L, 3.5}, {2 * L, 3.5}}
+	m.Loads = AreaLoads{DeadPsf: 12, LivePsf: 40}
+	b := find(t, CheckWithRows(m, DefaultSettings(), 0), KindBendingBottom)
+	src := "hand calculation in the comment (NDS 2018 3.3.3, Table 3.3.3, Eq. 3.3-6)"
+	expectNear(t, "M", traceValue(t, b, "M"), 14976, 1e-6, 0, src)
+	expectNear(t, "le", traceValue(t, b, "le"), 264.96, 1e-9, 1e-12, src)
+	expectNear(t, "RB", traceValue(t, b, "RB"), 29.219, 0.0005, 0, src)
+	expectNear(t, "CL", traceValue(t, b, "CL"), 0.60896, 0.00001, 0, src)
+	expectNear(t, "ratio", b.Ratio, 1.5068, 0.0001, 0, src)
+}
