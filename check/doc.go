@@ -41,13 +41,15 @@
 //     whose variable loads are all zero are skipped. CD is that of the
 //     shortest-duration non-zero load (NDS 2.3.2).
 //   - Pattern loading (Settings.PatternLive): on members of more than one
-//     segment (spans and cantilevers), L, Lr and S are applied to every
+//     segment (spans and cantilevers), L, Lr, S and W are applied to every
 //     non-empty subset of segments (up to five segments; beyond that, each
 //     segment, adjacent pairs, alternate segments and each adjacent pair
 //     with every second segment beyond it, the worst arrangement for a
-//     support) and the worst case kept. D is never patterned; W is applied
-//     to the whole member in strength cases (ASCE 7 asks no partial wind
-//     loading), span by span like the others in deflection. On a
+//     support) and the worst case kept. D is never patterned. W is
+//     patterned too (DOMAIN.md counts it among the live-type loads): ASCE 7
+//     prescribes no partial wind loading for joists, but roof pressures
+//     differ from zone to zone along a member, so loading the spans one by
+//     one is the conservative envelope. On a
 //     single span, cases another case dominates (same-sign load at least as
 //     large with CD no larger) are dropped, which changes no result.
 //   - Bending: each edge is checked over the stretches between its bracing

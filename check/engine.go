@@ -402,8 +402,8 @@ func (e *engine) caseSpec(f factorSet, dir float64) (caseSpec, bool) {
 	return caseSpec{
 		name:      e.caseName(f, dir, present),
 		cd:        ComboDurationFactor(f, present),
-		full:      f[LoadD]*e.wPli[LoadD] + f[LoadW]*wW,
-		patterned: f[LoadL]*e.wPli[LoadL] + f[LoadLr]*e.wPli[LoadLr] + f[LoadS]*e.wPli[LoadS],
+		full:      f[LoadD] * e.wPli[LoadD],
+		patterned: f[LoadL]*e.wPli[LoadL] + f[LoadLr]*e.wPli[LoadLr] + f[LoadS]*e.wPli[LoadS] + f[LoadW]*wW,
 	}, true
 }
 
