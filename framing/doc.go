@@ -18,7 +18,9 @@
 // A joist is a LINE, a 2-vertex polyline or a polyline whose vertices lie
 // on one line (within 0.1 in) going one way. Bent polylines, polylines with
 // arcs and zero-length lines are skipped with a warning; a joist drawn twice
-// (both ends within the snap tolerance) is kept once, naming both handles.
+// (on one line, within 0.5 in across, both ends within the snap tolerance)
+// is kept once, naming both handles. The plies of a doubled joist, drawn
+// 1.5 in apart, are separate members.
 //
 // Joists are clustered by direction (mod 180 degrees, chained within
 // AngleTolDeg). Each group has a direction u at an angle in (-90, 90]

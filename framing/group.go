@@ -392,7 +392,9 @@ func directionGroups(js []segItem, tolDeg float64) ([]int, []dirGroup) {
 }
 
 // dropDuplicates keeps one of each set of joists drawn over each other
-// (both ends within the snap tolerance) and warns naming both handles.
+// (midpoints less than minNeighbourGapIn apart across, both ends within
+// the snap tolerance) and warns naming both handles. A doubled joist, its
+// plies drawn 1.5 in apart, is two members, not a duplicate.
 func (g *grouper) dropDuplicates(js []segItem, grpOf []int) []bool {
 	tol := g.opt.SnapToleranceIn
 	keep := make([]bool, len(js))
@@ -420,7 +422,7 @@ func (g *grouper) dropDuplicates(js []segItem, grpOf []int) []bool {
 		if !keep[i] {
 			continue
 		}
-		for y := x + 1; y < len(ks) && grpOf[ks[y].i] == grpOf[i] && ks[y].c-ks[x].c <= tol; y++ {
+		for y := x + 1; y < len(ks) && grpOf[ks[y].i] == grpOf[i] && ks[y].c-ks[x].c < minNeighbourGapIn; y++ {
 			j := ks[y].i
 			if keep[j] && dist(js[i].a, js[j].a) <= tol && dist(js[i].b, js[j].b) <= tol {
 				keep[j] = false
