@@ -27,3 +27,24 @@ func TestDoubledJoistIsNotADuplicate(t *testing.T) {
 		checkNear(t, "trib", member(t, pl, w.x, 72).TribIn, w.trib, 1e-9)
 	}
 }
+
+func TestRowPiecesSkipDoubledJoistPlies(t *testing.T) {
+	// a run x = 0, 16, 17.5, 33.5 (a doubled joist at 16/17.5): a row
+	// crosses the bays 0-16 and 17.5-33.5, clear 16 - 1.5 = 14.5 in each
+	// (2x dressed thickness 1.5 in, NDS 2018 Supplement Table 1B); the
+	// plies face to face have no bay between them, so 2 pieces, not 3.
+	pl := newPlan().walls(-10, 100, 0, 144).joists(0, 144, 0, 16, 17.5, 33.5).group(DefaultOptions())
+	if len(pl.Runs) != 1 {
+		t.Fatalf("runs %+v, want one", pl.Runs)
+	}
+	rows := pl.PlaceRows(0, []float64{72})
+	if len(rows) != 1 || rows[0].Pieces != 2 || len(rows[0].ClearIn) != 2 {
+		t.Fatalf("rows %+v, want one row of 2 pieces", rows)
+	}
+	for _, c := range rows[0].ClearIn {
+		checkNear(t, "clear", c, 14.5, 1e-9)
+	}
+	if to := BuildTakeoff(pl, rows); to.BlockingPieces != 2 {
+		t.Errorf("takeoff blocking pieces %d, want 2", to.BlockingPieces)
+	}
+}

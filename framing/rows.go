@@ -14,7 +14,7 @@ type BlockingRow struct {
 	AtIn    float64
 	From    Point     // on the run's first member (ordered across)
 	To      Point     // on its last member
-	Pieces  int       // bays crossed = members - 1
+	Pieces  int       // bays crossed: members - 1, less any bay with no clear space (a doubled joist's plies)
 	ClearIn []float64 // clear length of each piece: gap between joists less the joist thickness
 	Size    string    // the run's joist size (first member's)
 }
@@ -52,8 +52,11 @@ func (p *Plan) PlaceRows(run int, atIn []float64) []BlockingRow {
 			if i == 0 {
 				row.From = q
 			} else {
+				// plies of a doubled joist leave no bay: no piece there
 				gap := math.Abs(p.acrossOf(k, ref) - p.acrossOf(r.Members[i-1], ref))
-				row.ClearIn = append(row.ClearIn, math.Max(0, gap-bIn))
+				if clear := gap - bIn; clear > minNeighbourGapIn {
+					row.ClearIn = append(row.ClearIn, clear)
+				}
 			}
 			row.To = q
 		}
