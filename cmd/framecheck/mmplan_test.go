@@ -1,0 +1,131 @@
+package main
+
+import (
+	"bytes"
+	"encoding/json"
+	"math"
+	"os"
+	"path/filepath"
+	"testing"
+
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+
+	"framecheck/export"
+)
+
+// TestMillimetrePlanEndToEnd runs check on a plan drawn the way a CAD user
+// draws one: a second floor in millimetres ($INSUNITS 4) on layers of the
+// user's own naming (S-JOIS, S-WALL-BRG, S-BEAM, A-ANNO), joists as
+// 2-vertex LWPOLYLINEs (every other one drawn backwards), double-line
+// bearing walls, a flush beam drawn as its centre-line, a stair opening
+// with a header and doubled trimmers, a block of joists inserted rotated
+// 90 degrees, an MTEXT callout with formatting codes and no load-zone
+// outlines. testdata/mm_plan/gen_mm_plan.py (ezdxf) wrote mm_plan.dxf;
+// mm_plan.toml is `framecheck init` edited for those layers and 15 psf
+// dead / 40 psf live.
+//
+// Spans by hand, centre-to-centre of bearings (DOMAIN.md; common practice,
+// no source), converted at 25.4 mm/in:
+//
+//	south wall y 0/139.7 mm -> centre 69.85; interior wall 3600/3688.9 ->
+//	3644.45; flush beam line 3644.45; header 4500; north wall
+//	7175.5/7315.2 -> 7245.35.
+//	south span  (3644.45 - 69.85) / 25.4 = 3574.6 / 25.4 = 140.732 in
+//	north span  (7245.35 - 3644.45) / 25.4 = 3600.9 / 25.4 = 141.768 in
+//	tail to header (4500 - 3644.45) / 25.4 = 855.55 / 25.4 = 33.683 in
+func TestMillimetrePlanEndToEnd(t *testing.T) {
+	dir := t.TempDir()
+	for _, name := range []string{"mm_plan.dxf", "mm_plan.toml"} {
+		data, err := os.ReadFile(filepath.Join("testdata", "mm_plan", name))
+		require.NoError(t, err)
+		require.NoError(t, os.WriteFile(filepath.Join(dir, name), data, 0o644))
+	}
+	out := filepath.Join(dir, "out")
+	var stdout, stderr bytes.Buffer
+	code := run([]string{"check", filepath.Join(dir, "mm_plan.dxf"), "-p", filepath.Join(dir, "mm_plan.toml"), "-o", out},
+		&stdout, &stderr)
+	require.NotEqual(t, exitUsage, code, "stdout:\n%s\nstderr:\n%s", stdout.String(), stderr.String())
+	data, err := os.ReadFile(filepath.Join(out, resultsName))
+	require.NoError(t, err)
+	var r export.Results
+	require.NoError(t, json.Unmarshal(data, &r))
+	assert.Equal(t, r.Summary.Pass == len(r.Members), code == exitOK, "exit %d for %+v", code, r.Summary)
+	assert.Equal(t, "mm", r.DrawingUnits)
+
+	// 11 west-bay lines + 2 second trimmer plies + 12 east-bay south
+	// joists in model space, 12 in the rotated block (gen_mm_plan.py)
+	require.Len(t, r.Members, 37)
+	assert.Equal(t, 37, r.Summary.Pass+r.Summary.Fail+r.Summary.Error)
+	assert.Zero(t, r.Summary.Fail, "2x10 DF-L No.2 at 16 in over 11'-9\" passes 55 psf")
+
+	const south, north, tail = 3574.6 / 25.4, 3600.9 / 25.4, 855.55 / 25.4
+	// trimmers (x 831.85, 869.95, 2012.95, 2051.05 mm) carry the header's
+	// point load, out of scope: only the other joists are asserted here
+	trimmer := map[float64]bool{831.85: true, 869.95: true, 2012.95: true, 2051.05: true}
+	x0, sp := 19.05, 406.4 // gen_mm_plan.py: joist k at x0 + sp k
+	var west, tails, eastS, blockN int
+	for i := range r.Members {
+		m := &r.Members[i]
+		x := math.Round(m.Start[0]*100) / 100
+		y0, y1 := math.Min(m.Start[1], m.End[1]), math.Max(m.Start[1], m.End[1])
+		if trimmer[x] {
+			continue
+		}
+		var want []float64
+		onGrid := (x - x0) / sp // joist k of the model-space grid
+		switch {
+		case y0 == 0 && y1 == 7315.2: // west bay, over the interior wall
+			want, west = []float64{south, north}, west+1
+		case y0 == 0 && y1 == 4500: // tail joists to the stair header
+			want, tails = []float64{south, tail}, tails+1
+		case y0 == 0 && math.Abs(y1-3644.45) < 1e-6: // east bay, wall to flush beam
+			want, eastS = []float64{south}, eastS+1
+		case math.Abs(y0-3644.45) < 1e-6 && y1 == 7315.2: // the rotated block
+			want, blockN = []float64{north}, blockN+1
+			onGrid = (9124.95 - x) / sp // block joists count from the east
+		default:
+			t.Errorf("%s at (%g, %g)-(%g, %g) mm is not a joist gen_mm_plan.py draws", m.ID, m.Start[0], m.Start[1], m.End[0], m.End[1])
+			continue
+		}
+		if assert.Len(t, m.SpansIn, len(want), m.ID) {
+			for j := range want {
+				assert.InDelta(t, want[j], m.SpansIn[j], 0.01, "%s span %d", m.ID, j+1)
+			}
+		}
+		assert.Equal(t, "pass", m.Status, "%s at x = %g mm: %v", m.ID, x, m.Messages)
+		assert.InDelta(t, math.Round(onGrid), onGrid, 1e-6, "%s x = %g mm is off the 406.4 mm grid", m.ID, x)
+	}
+	assert.Equal(t, []int{7, 2, 12, 12}, []int{west, tails, eastS, blockN}, "west, tail, east-south, block joists")
+
+	// hand check of an interior east-bay joist (x = 4895.85 mm), simple
+	// span 140.732 in, trib 16 in (406.4 mm), D+L = 55 psf:
+	//   w = 55 x 16 / 144 = 6.111 lb/in; M = w L^2 / 8 = 15129 lb-in
+	//   fb = M / S = 15129 / 21.39 = 707.3 psi (S of 1.5 x 9.25 in,
+	//   NDS 2018 Supplement Table 1B)
+	//   Fb' = Fb CD CF Cr = 900 x 1.0 x 1.1 x 1.15 = 1138.5 psi (Fb and CF:
+	//   NDS 2018 Supplement Table 4A; Cr NDS 4.3.9) -> ratio 0.621
+	//   live deflection 5 w_L L^4 / 384 E I, w_L = 40 x 16 / 144 = 4.444
+	//   lb/in, E 1.6e6 psi, I 98.93 in^4: 0.1434 in against L/360 = 0.391
+	for i := range r.Members {
+		m := &r.Members[i]
+		if math.Abs(m.Start[0]-4895.85) > 0.01 {
+			continue
+		}
+		assert.InDelta(t, 16, m.TribIn, 1e-6)
+		for _, c := range m.Checks {
+			switch c.Kind {
+			case "bending-top":
+				assert.InDelta(t, 707.3, c.Actual, 0.1, "fb")
+				assert.InDelta(t, 1138.5, c.Allowable, 0.01, "Fb'")
+			case "deflection-live":
+				assert.InDelta(t, 0.1434, c.Actual, 0.0005, "live deflection")
+				assert.InDelta(t, south/360, c.Allowable, 1e-6, "L/360")
+			}
+		}
+	}
+
+	// one hanger at each flush-beam end: 12 + 12 at the beam, 2 tail
+	// joists at the header
+	assert.Equal(t, 26, r.Takeoff.Totals.Hangers)
+}
