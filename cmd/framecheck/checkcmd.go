@@ -166,6 +166,14 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		return exitUsage
 	}
 	res := exportResults(o, c.planPath)
+	// No NaN or Inf reaches any output, the summary or the exit status: a
+	// member holding one is in error, saying which value (a safety net;
+	// the checks should never produce one).
+	res, bad := export.Sanitize(res)
+	if len(bad) > 0 {
+		fmt.Fprintf(stderr, "framecheck: %d non-finite values written as 0 and their members put in error: %s\n",
+			len(bad), strings.Join(bad[:min(len(bad), 5)], "; "))
+	}
 	written, err := c.write(o, res, stderr)
 	if err != nil {
 		fmt.Fprintf(stderr, "framecheck: %v\n", err)
