@@ -194,18 +194,25 @@ func (g *grouper) bearingsFrom(hits []hit, merged map[[2]int]bool) ([]Bearing, [
 }
 
 // finishBearings sets the overhangs and hangers of a member with at least
-// two bearings.
+// two bearings. An end is part of its bearing when it stops within
+// lb/2 + snap tolerance of the centre-line, measured square to the
+// support as the snap tolerance is: along a joist meeting the support at
+// an angle a that is (lb/2 + snap) / sin a.
 func (g *grouper) finishBearings(k int) {
 	m := &g.plan.Members[k]
 	tol := g.opt.SnapToleranceIn
 	bs := m.Bearings
 	first, last := bs[0], bs[len(bs)-1]
-	if first.AtIn > first.LengthIn/2+tol {
+	reach := func(i int) float64 {
+		sin := math.Abs(cross(g.plan.dirs[k], g.bdirs[k][i]))
+		return (bs[i].LengthIn/2 + tol) / math.Max(sin, 1e-9)
+	}
+	if first.AtIn > reach(0) {
 		m.OverhangStartIn = first.AtIn
 	} else if first.Kind == KindFlushBeam {
 		m.HangersStart = true
 	}
-	if rest := m.LengthIn - last.AtIn; rest > last.LengthIn/2+tol {
+	if rest := m.LengthIn - last.AtIn; rest > reach(len(bs)-1) {
 		m.OverhangEndIn = rest
 	} else if last.Kind == KindFlushBeam {
 		m.HangersEnd = true

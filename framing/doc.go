@@ -43,7 +43,9 @@
 // naming the unsupported end and the nearest other support.
 //
 // Overhangs follow DOMAIN.md: an end more than lb/2 + SnapToleranceIn past
-// the outermost bearing centre is a cantilever of that length; otherwise it
+// the outermost bearing centre, measured square to the support (so a joist
+// skewed to its wall may run (lb/2 + snap) / sin(angle) along itself), is a
+// cantilever of that length; otherwise it
 // is part of the bearing (overhang 0), and an end so bearing on a flush
 // beam hangs in a hanger.
 //

@@ -1,6 +1,7 @@
 package framing
 
 import (
+	"math"
 	"testing"
 )
 
@@ -46,5 +47,41 @@ func TestRowPiecesSkipDoubledJoistPlies(t *testing.T) {
 	}
 	if to := BuildTakeoff(pl, rows); to.BlockingPieces != 2 {
 		t.Errorf("takeoff blocking pieces %d, want 2", to.BlockingPieces)
+	}
+}
+
+func TestSkewedJoistEndInsideWallIsNoOverhang(t *testing.T) {
+	// Joists at 30 degrees to double-line walls 5.5 in thick (faces at
+	// y = 0/5.5 and 149.5/155), drawn from outer face to outer face.
+	// Along a joist a wall is 5.5 / sin 30 = 11 in wide, so each end sits
+	// 5.5 in past its bearing centre-line but still inside the wall: part
+	// of the bearing, no cantilever (DOMAIN.md "Members from a plan").
+	// Span = (152.25 - 2.75) / sin 30 = 299 in; length 155 / sin 30 = 310.
+	p := newPlan()
+	for _, y := range []float64{0, 5.5, 149.5, 155} {
+		p.line("WALL", -50, y, 700, y)
+	}
+	c := math.Cos(math.Pi / 6)
+	for _, x := range []float64{0, 32, 64} {
+		p.line("JOIST", x, 0, x+310*c, 155)
+	}
+	// a joist stopping 3 in (perpendicular) past a single-line wall at
+	// y = 400 from a wall at y = 250: 6 in along the joist, within
+	// (lb/2 + snap) / sin 30 = (1.75 + 1.5) / 0.5 = 6.5 in: no overhang
+	p.line("WALL", -50, 250, 700, 250).line("WALL", -50, 400, 700, 400)
+	p.line("JOIST", 0, 250, 153*2*c, 403)
+	pl := p.group(DefaultOptions())
+	for _, m := range pl.Members {
+		if m.Error || m.OverhangStartIn != 0 || m.OverhangEndIn != 0 {
+			t.Errorf("%s error %v overhangs %g/%g, want none (%q)", m.ID, m.Error, m.OverhangStartIn, m.OverhangEndIn, m.Messages)
+		}
+	}
+	m := member(t, pl, 155*c, 77.5)
+	if sp := m.Spans(); len(sp) != 1 || !near(sp[0], 299, 1e-6) {
+		t.Errorf("spans %v, want [299]", sp)
+	}
+	m = member(t, pl, 153*c, 326.5)
+	if sp := m.Spans(); len(sp) != 1 || !near(sp[0], 300, 1e-6) {
+		t.Errorf("spans %v, want [(400 - 250) / sin 30 = 300]", sp)
 	}
 }
