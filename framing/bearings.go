@@ -43,7 +43,10 @@ func (g *grouper) findBearings() {
 	var hits []hit
 	for k := range p.Members {
 		m := &p.Members[k]
+		g.carried = g.carried[:0]
 		hits = g.supportHits(k, minSin, hits[:0])
+		slices.SortFunc(g.carried, func(a, b hit) int { return cmp.Compare(a.t, b.t) })
+		g.carriedBeams(k)
 		m.Bearings, g.bdirs[k] = g.bearingsFrom(hits, merged)
 		if len(m.Bearings) < 2 {
 			// the lines it does bear on are not "the nearest support"
@@ -105,6 +108,10 @@ func (g *grouper) supportHits(k int, minSin float64, hits []hit) []hit {
 		if de > tol+wall {
 			return
 		}
+		if g.framesInto(sg, t, L, lerp(m.Start, u, t)) {
+			g.carried = append(g.carried, hit{t: t, sup: s, sin: sin})
+			return
+		}
 		hits = append(hits, hit{t: t, sup: s, sin: sin, direct: de <= tol})
 	})
 	slices.SortFunc(hits, func(a, b hit) int {
@@ -114,6 +121,43 @@ func (g *grouper) supportHits(k int, minSin float64, hits []hit) []hit {
 		return a.sup - b.sup
 	})
 	return hits
+}
+
+// framesInto reports whether support line sg, met at t along a member of
+// length L at point q, is a flush beam framing into the member (a header
+// hung from a trimmer): the beam ends on the member, and the member runs
+// on more than a wall thickness plus the snap tolerance past it both ways.
+// A flush beam sits in the joists' plane, so a member it ends on carries
+// it rather than bearing on it.
+func (g *grouper) framesInto(sg *segItem, t, L float64, q Point) bool {
+	if g.opt.Supports[sg.spec].Kind != KindFlushBeam {
+		return false
+	}
+	tol := g.opt.SnapToleranceIn
+	far := g.opt.MaxWallThicknessIn + tol
+	if t <= far || t >= L-far {
+		return false
+	}
+	return dist(q, sg.a) <= tol || dist(q, sg.b) <= tol
+}
+
+// carriedBeams makes member k an error when a flush beam frames into it:
+// the beam's reaction is a point load, outside the checks' scope
+// (DOMAIN.md "Cautions"). A double-line beam is named once.
+func (g *grouper) carriedBeams(k int) {
+	m := &g.plan.Members[k]
+	last := math.Inf(-1)
+	for _, h := range g.carried {
+		if h.t-last <= g.opt.MaxWallThicknessIn {
+			continue
+		}
+		last = h.t
+		m.Error = true
+		msg := fmt.Sprintf("%s carries the end of a flush beam or header (%s) %.1f in from its start: "+
+			"a point load, which the checks do not cover; design this member by hand", m.ID, g.sups[h.sup].pos, h.t)
+		m.Messages = append(m.Messages, msg)
+		g.plan.Issues.Add(m.Pos, CodeCarriesBeam, dxfimport.SevError, "%s", msg)
+	}
 }
 
 func (g *grouper) parallelSupports(a, b int) bool {

@@ -40,7 +40,11 @@
 // two lines (a joist drawn into the wall). Bearing.AtIn may be a little
 // below 0 or above LengthIn when an end stops short of its support.
 // A member with fewer than two bearings is an error member, with a message
-// naming the unsupported end and the nearest other support.
+// naming the unsupported end and the nearest other support. A flush beam
+// that ends on a joist more than MaxWallThicknessIn + SnapToleranceIn from
+// both its ends (a header hung from a trimmer) is carried by the joist,
+// not a bearing of it; the joist is an error member, as its point load is
+// outside the checks' scope.
 //
 // Overhangs follow DOMAIN.md: an end more than lb/2 + SnapToleranceIn past
 // the outermost bearing centre, measured square to the support (so a joist
@@ -98,6 +102,7 @@
 //	FRM212 warning  joist with no parallel neighbour
 //	FRM213 warning  arc segment on a support, blocking or label polyline: skipped
 //	FRM214 warning  entity with a coordinate that is not finite or beyond 1e9 in: skipped
+//	FRM215 error    a flush beam ends on the joist away from its ends (header on a trimmer): point load
 //
 // # Speed
 //

@@ -24,6 +24,7 @@ const (
 	CodeNoNeighbour     = "FRM212" // joist with no parallel neighbour
 	CodeArcSegment      = "FRM213" // arc segment on a support, blocking or label layer: skipped
 	CodeBadCoordinate   = "FRM214" // entity with a non-finite or out-of-range coordinate: skipped
+	CodeCarriesBeam     = "FRM215" // flush beam ending on a joist between its bearings: error member
 )
 
 // maxCoordIn bounds the coordinates framing accepts: 10^9 in is about
@@ -72,6 +73,7 @@ type grouper struct {
 	memIdx *segIndex
 
 	direct, outer []hit // scratch for bearingsFrom
+	carried       []hit // flush beams framing into the current member
 }
 
 type dirGroup struct {

@@ -2,6 +2,7 @@ package framing
 
 import (
 	"math"
+	"strings"
 	"testing"
 )
 
@@ -83,5 +84,51 @@ func TestSkewedJoistEndInsideWallIsNoOverhang(t *testing.T) {
 	m = member(t, pl, 153*c, 326.5)
 	if sp := m.Spans(); len(sp) != 1 || !near(sp[0], 300, 1e-6) {
 		t.Errorf("spans %v, want [(400 - 250) / sin 30 = 300]", sp)
+	}
+}
+
+func TestHeaderFramingIntoTrimmerIsNotItsBearing(t *testing.T) {
+	// A stair opening: a flush-beam header at y = 100 hangs between the
+	// doubled trimmers (plies at x = 48/49.5 and 96/97.5) and carries
+	// tail joists at x = 64 and 80 running to the wall at y = 144. The
+	// header ends on the trimmers: they carry it, it does not carry
+	// them, so it is not one of their bearings (each ply keeps its single
+	// 144 in span). The header's reaction is a point load, outside the
+	// tool's scope (DOMAIN.md "Cautions"): the plies are error members
+	// saying so. The tail joists span 144 - 100 = 44 in and hang from the
+	// header at their start.
+	p := newPlan().walls(-10, 200, 0, 144)
+	p.joists(0, 144, 0, 16, 32, 48, 49.5, 96, 97.5, 112, 128)
+	p.line("BEAM-FLUSH", 49.5, 100, 96, 100)
+	p.joists(100, 144, 64, 80)
+	pl := p.group(DefaultOptions())
+	for _, x := range []float64{48, 49.5, 96, 97.5} {
+		m := member(t, pl, x, 72)
+		if sp := m.Spans(); len(sp) != 1 || !near(sp[0], 144, 1e-9) || !m.Error {
+			t.Errorf("trimmer x=%g spans %v error %v, want [144] and an error", x, sp, m.Error)
+		}
+		if len(m.Messages) != 1 || !strings.Contains(m.Messages[0], "carries the end of a flush beam") {
+			t.Errorf("trimmer x=%g messages %q, want one about the header it carries", x, m.Messages)
+		}
+	}
+	if c := issueCodes(pl.Issues); c[CodeCarriesBeam] != 4 {
+		t.Errorf("issues %v, want 4 x %s", pl.Issues, CodeCarriesBeam)
+	}
+	for _, x := range []float64{64, 80} {
+		m := member(t, pl, x, 122)
+		if sp := m.Spans(); len(sp) != 1 || !near(sp[0], 44, 1e-9) || !m.HangersStart || m.HangersEnd || m.Error {
+			t.Errorf("tail x=%g spans %v hangers %v/%v error %v, want [44] and a hanger at the header", x, sp, m.HangersStart, m.HangersEnd, m.Error)
+		}
+	}
+	// a flush beam a joist ends on is still its bearing, even where the
+	// beam's own end is there too (the last joist along the beam)
+	if m := member(t, pl, 16, 72); m.Error {
+		t.Errorf("x=16: %q", m.Messages)
+	}
+	q := newPlan().walls(-10, 100, 0).line("BEAM-FLUSH", 0, 144, 100, 144).joists(0, 144, 0, 16)
+	for _, m := range q.group(DefaultOptions()).Members {
+		if m.Error || !m.HangersEnd {
+			t.Errorf("%s error %v hangers %v: %q", m.ID, m.Error, m.HangersEnd, m.Messages)
+		}
 	}
 }
