@@ -160,8 +160,12 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		return exitUsage
 	}
 	if len(o.plan.Members) == 0 {
-		fmt.Fprintf(stderr, "framecheck: %s: no joists found on the joist layers %s (run 'framecheck layers %s' to see the drawing's layers)\n",
-			c.planPath, strings.Join(proj.Layers.Joists, ", "), c.planPath)
+		layersCmd := "framecheck layers " + c.planPath
+		if c.projectPath != "" {
+			layersCmd += " -p " + c.projectPath
+		}
+		fmt.Fprintf(stderr, "framecheck: %s: no joists found on the joist layers %s (run '%s' to see the drawing's layers and the role each gets)\n",
+			c.planPath, strings.Join(proj.Layers.Joists, ", "), layersCmd)
 		printIssues(stderr, o.issues)
 		return exitUsage
 	}
@@ -340,6 +344,10 @@ func printIssues(w io.Writer, issues dxfimport.IssueList) {
 	}
 }
 
+// maxDefaultsListed: up to this many settings a project file left out are
+// named in the summary; more are only counted (the Notes sheet lists all).
+const maxDefaultsListed = 5
+
 // printSummary writes the run's summary: marks, failing members, blocking
 // rows and takeoff totals in aligned tables.
 func printSummary(w io.Writer, c *checkRun, proj *Project, r *export.Results, written []string) {
@@ -350,7 +358,15 @@ func printSummary(w io.Writer, c *checkRun, proj *Project, r *export.Results, wr
 		if c.projectPath == "" {
 			fmt.Fprintf(w, "no project file: built-in defaults used (%d settings; see the Inputs sheet)\n", len(used))
 		} else {
-			fmt.Fprintf(w, "%d settings left out of %s took their defaults (listed in the Notes sheet)\n", len(used), c.projectPath)
+			fmt.Fprintf(w, "%d settings left out of %s took their defaults", len(used), c.projectPath)
+			if len(used) > maxDefaultsListed {
+				fmt.Fprintln(w, " (listed in the Notes sheet)")
+			} else {
+				fmt.Fprintln(w, ":")
+				for _, u := range used {
+					fmt.Fprintf(w, "  %s\n", u)
+				}
+			}
 		}
 	}
 	fmt.Fprintln(w)

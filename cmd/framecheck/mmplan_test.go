@@ -6,6 +6,7 @@ import (
 	"math"
 	"os"
 	"path/filepath"
+	"strings"
 	"testing"
 
 	"github.com/stretchr/testify/assert"
@@ -128,4 +129,64 @@ func TestMillimetrePlanEndToEnd(t *testing.T) {
 	// one hanger at each flush-beam end: 12 + 12 at the beam, 2 tail
 	// joists at the header
 	assert.Equal(t, 26, r.Takeoff.Totals.Hangers)
+}
+
+// runMMPlan runs check on a copy of the millimetre plan with extra
+// arguments and, when toml is not "", that text as its project file.
+func runMMPlan(t *testing.T, toml string, args ...string) (int, string, string) {
+	t.Helper()
+	dir := t.TempDir()
+	data, err := os.ReadFile(filepath.Join("testdata", "mm_plan", "mm_plan.dxf"))
+	require.NoError(t, err)
+	plan := filepath.Join(dir, "mm_plan.dxf")
+	require.NoError(t, os.WriteFile(plan, data, 0o644))
+	if toml == "" {
+		b, err := os.ReadFile(filepath.Join("testdata", "mm_plan", "mm_plan.toml"))
+		require.NoError(t, err)
+		toml = string(b)
+	}
+	proj := filepath.Join(dir, "mm_plan.toml")
+	require.NoError(t, os.WriteFile(proj, []byte(toml), 0o644))
+	var stdout, stderr bytes.Buffer
+	code := run(append([]string{"check", plan, "-p", proj, "-o", filepath.Join(dir, "out")}, args...), &stdout, &stderr)
+	return code, stdout.String(), stderr.String()
+}
+
+// A millimetre plan read as inches (or metres) has spans 25 (or 1000)
+// times too long; the first finding says so and names where the units
+// came from. Read right, there is no such warning.
+func TestWrongUnitsAreQuestioned(t *testing.T) {
+	for _, units := range []string{"in", "m"} {
+		_, _, stderr := runMMPlan(t, "", "--units", units)
+		first, _, _ := strings.Cut(stderr, "\n")
+		assert.Contains(t, first, CodeUnitsDoubt, "--units %s: first finding", units)
+		assert.Contains(t, first, `units "`+units+`" (from --units)`)
+	}
+	_, _, stderr := runMMPlan(t, "")
+	assert.NotContains(t, stderr, CodeUnitsDoubt)
+}
+
+// The few settings a project file left out are named in the summary, not
+// only counted: mm_plan.toml is the starter file, whose units and
+// deflection limits are commented out.
+func TestSummaryNamesDefaultsUsed(t *testing.T) {
+	_, stdout, _ := runMMPlan(t, "")
+	assert.Contains(t, stdout, "3 settings left out of")
+	assert.Contains(t, stdout, "  drawing.units: from the DXF header ($INSUNITS)")
+	assert.Contains(t, stdout, "live_deflection_limit = 360")
+	assert.NotContains(t, stdout, "Notes sheet")
+}
+
+// A joist pattern that matches no layer stops the run (exit 2); the hint
+// names the layers command with the same project file, so its ROLE column
+// shows the mapping that found nothing.
+func TestNoJoistsHintKeepsProjectFile(t *testing.T) {
+	b, err := os.ReadFile(filepath.Join("testdata", "mm_plan", "mm_plan.toml"))
+	require.NoError(t, err)
+	toml := strings.Replace(string(b), `joists = ["S-JOIS"]`, `joists = ["S-JOIST"]`, 1)
+	require.NotEqual(t, string(b), toml)
+	code, _, stderr := runMMPlan(t, toml)
+	assert.Equal(t, exitUsage, code)
+	assert.Contains(t, stderr, "no joists found on the joist layers S-JOIST")
+	assert.Regexp(t, `run 'framecheck layers \S+mm_plan\.dxf -p \S+mm_plan\.toml'`, stderr)
 }

@@ -99,6 +99,10 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 	}
 	plan := framing.Group(d, framingOptions(p))
 	o := &outcome{project: p, drawing: d, plan: plan, settings: settings}
+	// a doubt about the units comes first: it explains the findings after it
+	if msg := unitsDoubt(plan, d, in.units, p.Drawing.Units); msg != "" {
+		o.issues.Add(dxfimport.Pos{File: in.planPath}, CodeUnitsDoubt, dxfimport.SevWarning, "%s", msg)
+	}
 	o.issues = append(o.issues, d.Issues...)
 	o.issues = append(o.issues, plan.Issues...)
 
