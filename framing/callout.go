@@ -25,7 +25,40 @@ var ErrBadCallout = errors.New("not a size callout")
 // spacing in inches (0 when the callout gives only a size). Nominal
 // thickness must be 2, 3 or 4 in and depth 2 to 16 in, no less than the
 // thickness; spacing must be above 0 and at most 48 in.
+//
+// A text of several lines (an MTEXT with paragraph breaks, such as
+// "2x10 @ 16\" O.C." over "DF-L No.2 U.N.O.") is a callout when one of its
+// lines is; lines giving different sizes or spacings are an error.
 func ParseCallout(s string) (size string, spacingIn float64, err error) {
+	size, spacingIn, err = parseCalloutLine(s)
+	lines := strings.Split(strings.ReplaceAll(s, "\r", "\n"), "\n")
+	if err == nil || len(lines) < 2 {
+		return size, spacingIn, err
+	}
+	found := ""
+	for _, l := range lines {
+		if strings.TrimSpace(l) == "" {
+			continue
+		}
+		sz, sp, lerr := parseCalloutLine(l)
+		if lerr != nil {
+			continue
+		}
+		if found != "" && (sz != size || sp != spacingIn) {
+			return "", 0, fmt.Errorf("%w: %q: lines %q and %q disagree", ErrBadCallout, s, found, strings.TrimSpace(l))
+		}
+		if found == "" {
+			found, size, spacingIn = strings.TrimSpace(l), sz, sp
+		}
+	}
+	if found == "" {
+		return "", 0, err
+	}
+	return size, spacingIn, nil
+}
+
+// parseCalloutLine reads one callout line; see ParseCallout.
+func parseCalloutLine(s string) (size string, spacingIn float64, err error) {
 	t := strings.Join(strings.Fields(s), " ")
 	t = strings.NewReplacer("”", `"`, "″", `"`, "“", `"`, "\u00a0", " ").Replace(t)
 	sm := calloutRE.FindStringSubmatch(t)
@@ -68,7 +101,7 @@ func (g *grouper) assignLumber() {
 	for _, t := range g.labelTexts {
 		size, sp, err := ParseCallout(t.text)
 		if err != nil {
-			g.warn(t.pos, CodeBadCallout, "label text is not a size callout: %v", err)
+			g.warn(t.pos, CodeBadCallout, "label-layer text left out: %v", err)
 			continue
 		}
 		c := callout{size, sp, strings.TrimSpace(t.text), t.pos}
@@ -168,9 +201,15 @@ func (g *grouper) memberIndex() *segIndex {
 
 func (g *grouper) applyCallouts(k int, cs []callout) {
 	m := &g.plan.Members[k]
+	// a callout without a spacing agrees with one that gives it
 	c0 := cs[0]
 	for _, c := range cs[1:] {
-		if c.size != c0.size || c.spacingIn != c0.spacingIn {
+		if c0.spacingIn == 0 {
+			c0.spacingIn = c.spacingIn
+		}
+	}
+	for _, c := range cs[1:] {
+		if c.size != c0.size || (c.spacingIn != 0 && c.spacingIn != c0.spacingIn) {
 			m.Error = true
 			msg := fmt.Sprintf("%s has conflicting size callouts %q (%s) and %q (%s); resolve the drawing",
 				m.ID, c0.text, c0.pos, c.text, c.pos)

@@ -83,7 +83,9 @@
 // joists crossed by the nearest label-layer line within max(12 in, 3 text
 // heights); without one, to the run of the joist within 24 in of the text.
 // Lumber is callout > first matching by_layer rule > project default.
-// Conflicting callouts make the member an error; a callout spacing more
+// Conflicting callouts (different sizes, or two different spacings; a
+// callout without a spacing agrees with one that has it) make the member
+// an error; a callout spacing more
 // than 1 in from the measured one is a warning.
 //
 // # Issue codes

@@ -132,3 +132,33 @@ func TestHeaderFramingIntoTrimmerIsNotItsBearing(t *testing.T) {
 		}
 	}
 }
+
+func TestCalloutWithoutSpacingAgreesWithOneThatGivesIt(t *testing.T) {
+	// `2x12` on one span line and `2x12 @ 16" o.c.` on another over the
+	// same joists say the same thing: no conflict; the joists take 2x12
+	// and the 16 in nominal spacing (measured 16 in: no warning).
+	// `2x10` against `2x12 @ 16` still conflicts (sizes differ).
+	pl := calloutPlan().
+		line("FRAMING-NOTE", -4, 60, 36, 60). // crosses x = 0, 16, 32
+		text("FRAMING-NOTE", `2x12 @ 16" o.c.`, 2, 61, 3).
+		line("FRAMING-NOTE", -4, 90, 20, 90). // crosses x = 0, 16
+		text("FRAMING-NOTE", "2x12", 2, 91, 3).
+		group(DefaultOptions())
+	for _, m := range pl.Members {
+		if m.Error || len(pl.Issues) != 0 {
+			t.Errorf("%s error %v, issues %v", m.ID, m.Error, pl.Issues)
+		}
+		if m.Start.X <= 32 && (m.Size != "2x12" || m.CalloutSpacingIn != 16) {
+			t.Errorf("%s size %s callout spacing %g, want 2x12 @ 16", m.ID, m.Size, m.CalloutSpacingIn)
+		}
+	}
+	pl = calloutPlan().
+		line("FRAMING-NOTE", -4, 60, 36, 60).
+		text("FRAMING-NOTE", `2x12 @ 16" o.c.`, 2, 61, 3).
+		line("FRAMING-NOTE", -4, 90, 20, 90).
+		text("FRAMING-NOTE", "2x10", 2, 91, 3).
+		group(DefaultOptions())
+	if c := issueCodes(pl.Issues); c[CodeCalloutConflict] != 2 {
+		t.Errorf("issues %v, want 2 conflicts (x = 0, 16)", pl.Issues)
+	}
+}
