@@ -17,6 +17,12 @@ import (
 var calloutRE = regexp.MustCompile(`(?i)^(\d+)\s*[x×]\s*(\d+)(?:\s*(?:joists?|rafters?))?` +
 	`(?:\s*(?:@|at)\s*(\d+(?:\.\d+)?|\.\d+)\s*(?:"|''|in\.?|inch(?:es)?)?\s*(?:o\.?\s*c\.?)?)?$`)
 
+// calloutLikeRE matches text that tries to be a size callout: a nominal
+// size such as "2x10" or "2 X 12", or an on-centre spacing. Label-layer
+// text without one (a room name, a general note) is not warned about one
+// by one.
+var calloutLikeRE = regexp.MustCompile(`(?i)\d\s*[x×]\s*\d|\bo\.?\s*c\b|@`)
+
 // ErrBadCallout is the cause of every ParseCallout error.
 var ErrBadCallout = errors.New("not a size callout")
 
@@ -98,8 +104,13 @@ func (g *grouper) assignLumber() {
 		return
 	}
 	got := make(map[int][]callout)
+	var other []textItem // texts that do not try to be callouts: room names, notes
 	for _, t := range g.labelTexts {
 		size, sp, err := ParseCallout(t.text)
+		if err != nil && !calloutLikeRE.MatchString(t.text) {
+			other = append(other, t)
+			continue
+		}
 		if err != nil {
 			g.warn(t.pos, CodeBadCallout, "label-layer text left out: %v", err)
 			continue
@@ -112,6 +123,11 @@ func (g *grouper) assignLumber() {
 		for _, k := range ms {
 			got[k] = append(got[k], c)
 		}
+	}
+	if len(other) > 0 {
+		g.plan.Issues.Add(other[0].pos, CodeBadCallout, dxfimport.SevInfo,
+			"%d label-layer text(s) with no size in them left out, such as %q (a callout reads like 2x10 @ 16\" o.c.)",
+			len(other), strings.Join(strings.Fields(other[0].text), " "))
 	}
 	ks := make([]int, 0, len(got))
 	for k := range got {
@@ -244,7 +260,19 @@ func (g *grouper) existingBlocking() {
 			}
 		})
 	}
+	// blocking drawn piece by piece touches each joist from both sides:
+	// one bracing point per position (within the snap tolerance)
 	for k := range p.Members {
-		sort.Float64s(p.Members[k].ExistingBlockingAtIn)
+		at := p.Members[k].ExistingBlockingAtIn
+		sort.Float64s(at)
+		n := 0
+		for _, x := range at {
+			if n > 0 && x-at[n-1] <= g.opt.SnapToleranceIn {
+				continue
+			}
+			at[n] = x
+			n++
+		}
+		p.Members[k].ExistingBlockingAtIn = at[:n]
 	}
 }

@@ -162,3 +162,19 @@ func TestCalloutWithoutSpacingAgreesWithOneThatGivesIt(t *testing.T) {
 		t.Errorf("issues %v, want 2 conflicts (x = 0, 16)", pl.Issues)
 	}
 }
+
+func TestBlockingDrawnPieceByPiece(t *testing.T) {
+	// drawn blocking as one short line per bay at y = 72 (each piece ends
+	// on the joists either side): every joist is braced once at 72 in
+	// from its start, not once per piece touching it
+	p := newPlan().walls(-10, 100, 0, 144).joists(0, 144, 0, 16, 32, 48)
+	for _, x := range []float64{0, 16, 32} {
+		p.line("BLOCKING", x, 72, x+16, 72)
+	}
+	pl := p.group(DefaultOptions())
+	for _, m := range pl.Members {
+		if len(m.ExistingBlockingAtIn) != 1 || !near(m.ExistingBlockingAtIn[0], 72, 1e-9) {
+			t.Errorf("%s drawn blocking at %v, want [72]", m.ID, m.ExistingBlockingAtIn)
+		}
+	}
+}
