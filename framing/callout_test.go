@@ -4,6 +4,8 @@ import (
 	"errors"
 	"strings"
 	"testing"
+
+	"framecheck/dxfimport"
 )
 
 func TestParseCallout(t *testing.T) {
@@ -23,6 +25,13 @@ func TestParseCallout(t *testing.T) {
 		{in: `2×10 @16in`, size: "2x10", spacingIn: 16},
 		{in: "2x10\n@ 16 o.c.", size: "2x10", spacingIn: 16}, // MTEXT line break
 		{in: `2x12`, size: "2x12", spacingIn: 0},
+		// MTEXT paragraphs: the callout line counts, a species/grade or
+		// note line under it does not stop it; two disagreeing lines do
+		{in: "2x10 @ 16\" O.C.\nDF-L No.2 U.N.O.", size: "2x10", spacingIn: 16},
+		{in: "FLOOR JOISTS:\n2X12 @ 12 OC\nTYP.", size: "2x12", spacingIn: 12},
+		{in: "2x10 @ 16\n2x10 @ 16 o.c.", size: "2x10", spacingIn: 16},
+		{in: "2x10 @ 16\n2x12 @ 16", bad: true},
+		{in: "BEDROOM 2\nCLOSET", bad: true},
 		{in: `4x14 at 12 inches o.c.`, size: "4x14", spacingIn: 12},
 		{in: `2x @ 16`, bad: true},
 		{in: `2x10 @`, bad: true},
@@ -117,5 +126,34 @@ func TestCalloutConflictAndBadText(t *testing.T) {
 		if i.Code == CodeBadCallout && !strings.Contains(i.Msg, "BLOCK @ MID") {
 			t.Errorf("bad callout message %q should quote the text", i.Msg)
 		}
+	}
+}
+
+// Room names and notes on a label layer are not callouts and are reported
+// once, as information; text that tries to be a callout and fails is
+// warned about by itself (common practice, no source).
+func TestLabelLayerRoomNamesAreOneInfo(t *testing.T) {
+	pl := calloutPlan().
+		text("FRAMING-NOTE", "BEDROOM 2", 500, 500, 3).
+		text("FRAMING-NOTE", "CLOSET", 520, 500, 3).
+		text("FRAMING-NOTE", "2-10 @ 16", 900, 900, 3).
+		group(DefaultOptions())
+	var info, warn []string
+	for _, i := range pl.Issues {
+		if i.Code != CodeBadCallout {
+			continue
+		}
+		switch i.Severity {
+		case dxfimport.SevInfo:
+			info = append(info, i.Msg)
+		case dxfimport.SevWarning:
+			warn = append(warn, i.Msg)
+		}
+	}
+	if len(info) != 1 || !strings.Contains(info[0], "2 label-layer text(s)") || !strings.Contains(info[0], `"BEDROOM 2"`) {
+		t.Errorf("info %q, want one naming 2 texts and the first", info)
+	}
+	if len(warn) != 1 || !strings.Contains(warn[0], `"2-10 @ 16"`) {
+		t.Errorf("warnings %q, want one about 2-10 @ 16", warn)
 	}
 }

@@ -99,7 +99,8 @@
 //	FRM205 error    member outside every zone and no default zone
 //	FRM206 warning  member crosses zone edges: envelope
 //	FRM207 warning  zone outline without a name, with two, or a name outside every outline
-//	FRM208 warning  label text that is not a size callout
+//	FRM208 warning  label text that tries to be a size callout and is not one
+//	       info     label texts with no size in them (room names, notes), counted once
 //	FRM209 error    conflicting callouts on one joist
 //	FRM210 warning  callout spacing differs from the measured spacing by more than 1 in
 //	FRM211 warning  callout that reaches no joist
