@@ -30,7 +30,7 @@
 // Everything else that is worth saying is a Drawing.Issues entry:
 //
 //	DXF101 warning  units unknown, read as inches
-//	DXF102 info     what was skipped (unknown entity types, sections)
+//	DXF102 info     what was skipped (unknown entity types, sections other than the routine CLASSES, OBJECTS and THUMBNAILIMAGE)
 //	DXF103 warning  INSERT of an undefined block
 //	DXF104 warning  block inserts itself, or nesting deeper than the limit
 //	DXF105 error    more entities than Options.MaxEntities

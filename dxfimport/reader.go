@@ -395,18 +395,30 @@ func (r *reader) finish() {
 	d.Entities = r.ents.slice()
 	d.ExtMin = Point{d.ExtMin.X * d.ToInch, d.ExtMin.Y * d.ToInch}
 	d.ExtMax = Point{d.ExtMax.X * d.ToInch, d.ExtMax.Y * d.ToInch}
-	if len(d.Skipped) > 0 {
-		keys := make([]string, 0, len(d.Skipped))
-		for k := range d.Skipped {
+	keys := make([]string, 0, len(d.Skipped))
+	for k := range d.Skipped {
+		if !routineSections[k] {
 			keys = append(keys, k)
 		}
+	}
+	if len(keys) > 0 {
 		sort.Strings(keys)
 		parts := make([]string, len(keys))
 		for i, k := range keys {
 			parts[i] = fmt.Sprintf("%s %d", k, d.Skipped[k])
 		}
-		d.Issues.Add(Pos{File: d.File}, "DXF102", SevInfo, "not read: %s", strings.Join(parts, ", "))
+		d.Issues.Add(Pos{File: d.File}, "DXF102", SevInfo, "not read (nothing framecheck uses): %s", strings.Join(parts, ", "))
 	}
+}
+
+// routineSections are sections every R13+ DXF has and that hold nothing
+// the checks use (class definitions, non-graphical objects, the preview
+// image). They are counted in Drawing.Skipped but not reported: a finding
+// for them on every plan would only be noise.
+var routineSections = map[string]bool{
+	"SECTION:CLASSES":        true,
+	"SECTION:OBJECTS":        true,
+	"SECTION:THUMBNAILIMAGE": true,
 }
 
 // warnOnce adds an issue the first time key is seen.

@@ -143,8 +143,27 @@ func TestSkippedAndLenient(t *testing.T) {
 	if got := issueCodes(d); got != "DXF102" {
 		t.Errorf("issues %s, want DXF102", got)
 	}
+	// CLASSES and OBJECTS are in every R13+ file: counted, not reported
+	if i := findIssue(d, "DXF102"); i == nil || strings.Contains(i.Msg, "SECTION:") || !strings.Contains(i.Msg, "HATCH 2") {
+		t.Errorf("DXF102 %+v: want the HATCHes and no routine section", i)
+	}
 	if d.Issues.Err() != nil {
 		t.Errorf("Err() = %v, want nil", d.Issues.Err())
+	}
+}
+
+// A plan holding nothing unusual but the sections every R13+ file has
+// gets no DXF102 finding at all.
+func TestRoutineSectionsNotReported(t *testing.T) {
+	in := section("CLASSES", dxf(0, "CLASS", 1, "X")) +
+		section("ENTITIES", dxf(0, "LINE", 8, "J", 10, 0, 20, 0, 11, 1, 21, 1)) +
+		section("OBJECTS", dxf(0, "DICTIONARY", 5, "C"))
+	d := read(t, in+dxf(0, "EOF"), Options{Units: "in"})
+	if got := issueCodes(d); got != "" {
+		t.Errorf("issues %s, want none", got)
+	}
+	if d.Skipped["SECTION:OBJECTS"] != 1 {
+		t.Errorf("skipped %v: OBJECTS is still counted", d.Skipped)
 	}
 }
 
