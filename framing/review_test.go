@@ -1,9 +1,13 @@
 package framing
 
 import (
+	"fmt"
 	"math"
+	"strconv"
 	"strings"
 	"testing"
+
+	"framecheck/dxfimport"
 )
 
 // Plans drawn the way framers draw them. Expected values are closed-form
@@ -176,5 +180,97 @@ func TestBlockingDrawnPieceByPiece(t *testing.T) {
 		if len(m.ExistingBlockingAtIn) != 1 || !near(m.ExistingBlockingAtIn[0], 72, 1e-9) {
 			t.Errorf("%s drawn blocking at %v, want [72]", m.ID, m.ExistingBlockingAtIn)
 		}
+	}
+}
+
+// mmDXF writes a minimal DXF in millimetres ($INSUNITS 4) of LINEs,
+// closed LWPOLYLINEs and TEXTs, each point mapped through f (in mm).
+func mmDXF(f func(x, y float64) (float64, float64), lines [][5]any, polys [][]float64, texts [][4]any) string {
+	var b strings.Builder
+	h := 0x100
+	num := func(v float64) string { return strconv.FormatFloat(v, 'f', -1, 64) }
+	ent := func(kind, layer string) {
+		h++
+		fmt.Fprintf(&b, "0\n%s\n5\n%X\n8\n%s\n", kind, h, layer)
+	}
+	b.WriteString("0\nSECTION\n2\nHEADER\n9\n$INSUNITS\n70\n4\n0\nENDSEC\n0\nSECTION\n2\nENTITIES\n")
+	for _, l := range lines {
+		ent("LINE", l[0].(string))
+		x0, y0 := f(l[1].(float64), l[2].(float64))
+		x1, y1 := f(l[3].(float64), l[4].(float64))
+		fmt.Fprintf(&b, "10\n%s\n20\n%s\n30\n0\n11\n%s\n21\n%s\n31\n0\n", num(x0), num(y0), num(x1), num(y1))
+	}
+	for _, p := range polys {
+		ent("LWPOLYLINE", "WALL")
+		fmt.Fprintf(&b, "90\n%d\n70\n1\n", len(p)/2)
+		for i := 0; i < len(p); i += 2 {
+			x, y := f(p[i], p[i+1])
+			fmt.Fprintf(&b, "10\n%s\n20\n%s\n", num(x), num(y))
+		}
+	}
+	for _, t := range texts {
+		ent("TEXT", "FRAMING-NOTE")
+		x, y := f(t[0].(float64), t[1].(float64))
+		fmt.Fprintf(&b, "10\n%s\n20\n%s\n30\n0\n40\n%s\n1\n%s\n", num(x), num(y), num(t[2].(float64)), t[3].(string))
+	}
+	b.WriteString("0\nENDSEC\n0\nEOF\n")
+	return b.String()
+}
+
+func TestMillimetrePlanAt45DegreesThroughDxfimport(t *testing.T) {
+	// A plan drawn in mm, rotated 45 degrees, read by dxfimport.Read:
+	// a 2x6 exterior wall drawn as a closed outline 139.7 mm (5.5 in)
+	// thick with its inner face on y = 0, a single-line wall at
+	// y = 3657.6 mm (144 in); joists at 406.4 mm (16 in) o.c., drawn
+	// alternately up and down, from the outer face (y = -5.5 in) to
+	// 19.05 mm (0.75 in) past the single-line wall. By hand, in inches:
+	//   bearings: mid-line of the outline, y = -2.75 (lb 5.5), and the
+	//   single line, y = 144 (lb 3.5); span 144 + 2.75 = 146.75;
+	//   length 5.5 + 144 + 0.75 = 150.25; no overhang (start 2.75 past
+	//   its bearing centre <= 2.75 + 1.5; end 0.75 <= 1.75 + 1.5);
+	//   trib 16 inside, 8 at the two edge joists.
+	// The callout `2x12 @ 16" o.c.` on a span line across all four sets
+	// their size; measured spacing 16 in: no warning.
+	const mm = 25.4
+	c, s := math.Cos(math.Pi/4), math.Sin(math.Pi/4)
+	rot := func(x, y float64) (float64, float64) { return c*x - s*y, s*x + c*y }
+	lines := [][5]any{{"WALL", -500.0, 144 * mm, 2000.0, 144 * mm}}
+	for i, x := range []float64{0, 16, 32, 48} {
+		y0, y1 := -5.5*mm, 144.75*mm
+		if i%2 == 1 {
+			y0, y1 = y1, y0
+		}
+		lines = append(lines, [5]any{"JOIST", x * mm, y0, x * mm, y1})
+	}
+	lines = append(lines, [5]any{"FRAMING-NOTE", -4 * mm, 60 * mm, 52 * mm, 60 * mm})
+	polys := [][]float64{{-500, -5.5 * mm, 2000, -5.5 * mm, 2000, 0, -500, 0}}
+	texts := [][4]any{{2 * mm, 61 * mm, 3 * mm, `2x12 @ 16" o.c.`}}
+	d, err := dxfimport.Read(strings.NewReader(mmDXF(rot, lines, polys, texts)), "mm.dxf", dxfimport.Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	pl := Group(d, DefaultOptions())
+	if len(pl.Members) != 4 || len(pl.Runs) != 1 || len(pl.Issues) != 0 {
+		t.Fatalf("members %d runs %d issues %v, want 4 in one run and no issues", len(pl.Members), len(pl.Runs), pl.Issues)
+	}
+	for _, m := range pl.Members {
+		if sp := m.Spans(); len(sp) != 1 || !near(sp[0], 146.75, 1e-6) {
+			t.Errorf("%s spans %v, want [146.75]", m.ID, sp)
+		}
+		checkNear(t, m.ID+" length", m.LengthIn, 150.25, 1e-6)
+		// Start is the end lower along the group direction (doc.go): at
+		// 45 degrees that is the end at the single-line wall
+		checkNear(t, m.ID+" lb at the single line", m.Bearings[0].LengthIn, 3.5, 1e-9)
+		checkNear(t, m.ID+" lb at the outline", m.Bearings[1].LengthIn, 5.5, 1e-6)
+		if m.Error || m.OverhangStartIn != 0 || m.OverhangEndIn != 0 || m.Size != "2x12" {
+			t.Errorf("%s error %v overhangs %g/%g size %s", m.ID, m.Error, m.OverhangStartIn, m.OverhangEndIn, m.Size)
+		}
+	}
+	var tribs []float64
+	for _, k := range pl.Runs[0].Members {
+		tribs = append(tribs, math.Round(pl.Members[k].TribIn*1e6)/1e6)
+	}
+	if fmt.Sprint(tribs) != "[8 16 16 8]" {
+		t.Errorf("tribs across the run %v, want [8 16 16 8]", tribs)
 	}
 }
