@@ -5,8 +5,10 @@ import (
 	"errors"
 	"fmt"
 	"io"
+	"math"
 	"os"
 	"path/filepath"
+	"strconv"
 	"strings"
 	"text/tabwriter"
 	"time"
@@ -371,10 +373,19 @@ func printSummary(w io.Writer, c *checkRun, proj *Project, r *export.Results, wr
 	}
 	fmt.Fprintln(w)
 	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
-	fmt.Fprintln(tw, "mark\tcount\tsize\tgrade\tzone\tspacing\tspans\tblocking/span\tmax ratio\tstatus")
+	// the tributary width beside the spacing: an edge joist has the same
+	// spacing as its neighbours but half their load
+	trib := map[string]float64{}
+	for _, m := range r.Members {
+		if _, ok := trib[m.Mark]; !ok && m.Mark != "" {
+			trib[m.Mark] = m.TribIn
+		}
+	}
+	fmt.Fprintln(tw, "mark\tcount\tsize\tgrade\tzone\tspacing\ttrib\tspans\tblocking/span\tmax ratio\tstatus")
 	for _, m := range r.Marks {
-		fmt.Fprintf(tw, "%s\t%d\t%s\t%s %s\t%s\t%s\t%s\t%s\t%.2f\t%s\n", m.Mark, m.Count, m.Size, shortSpecies(m.Species), m.Grade,
-			m.Zone, export.FtIn(m.SpacingIn), spansText(m.SpansIn), rowsText(m.BlockingRowsPerSpan), m.MaxRatio, statusText(colour, m.Status))
+		fmt.Fprintf(tw, "%s\t%d\t%s\t%s %s\t%s\t%s\t%s\t%s\t%s\t%.2f\t%s\n", m.Mark, m.Count, m.Size, shortSpecies(m.Species), m.Grade,
+			m.Zone, inchText(m.SpacingIn), inchText(trib[m.Mark]), spansText(m.SpansIn), rowsText(m.BlockingRowsPerSpan),
+			m.MaxRatio, statusText(colour, m.Status))
 	}
 	tw.Flush()
 
@@ -417,6 +428,12 @@ func printSummary(w io.Writer, c *checkRun, proj *Project, r *export.Results, wr
 	}
 	fmt.Fprintln(w, "\nframecheck assists a qualified designer; it does not replace engineering judgement or a")
 	fmt.Fprintln(w, "licensed professional's review. Check design values and code editions against local adoption.")
+}
+
+// inchText writes a spacing or tributary width in inches, as framers
+// give them ("16 in", "8.75 in"), to 0.01 in.
+func inchText(in float64) string {
+	return strconv.FormatFloat(math.Round(in*100)/100, 'f', -1, 64) + " in"
 }
 
 func shortSpecies(s string) string {

@@ -190,3 +190,16 @@ func TestNoJoistsHintKeepsProjectFile(t *testing.T) {
 	assert.Contains(t, stderr, "no joists found on the joist layers S-JOIST")
 	assert.Regexp(t, `run 'framecheck layers \S+mm_plan\.dxf -p \S+mm_plan\.toml'`, stderr)
 }
+
+// The summary gives each mark's tributary width beside its spacing, in
+// inches: the east edge joist of the mm plan (x = 8959.85 mm) is at
+// 406.4 mm = 16 in from its one neighbour and carries half of that,
+// 8 in (DOMAIN.md: half the gap to the one neighbour; common practice,
+// no source), so its row reads "16 in  8 in" where the interior joists
+// of the same span read "16 in  16 in".
+func TestSummaryShowsTribBesideSpacing(t *testing.T) {
+	_, stdout, _ := runMMPlan(t, "")
+	assert.Regexp(t, `(?m)^mark\s+count\s+size\s+grade\s+zone\s+spacing\s+trib\s+spans`, stdout)
+	assert.Regexp(t, `(?m)^J\d+\s+11\s+2x10\s+DF-L No\.2\s+FLOOR\s+16 in\s+16 in\s+11'-8 3/4"\s`, stdout)
+	assert.Regexp(t, `(?m)^J\d+\s+1\s+2x10\s+DF-L No\.2\s+FLOOR\s+16 in\s+8 in\s+11'-8 3/4"\s`, stdout)
+}

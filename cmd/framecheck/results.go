@@ -280,7 +280,7 @@ func assumptions(o *outcome) export.Assumptions {
 		return x.Size < y.Size
 	})
 	a.Notes = append(a.Notes,
-		"Members are sawn-lumber joists under uniform load on their tributary width; spans are centre-to-centre of bearings (DOMAIN conventions).",
+		"Members are sawn-lumber joists under uniform load on their tributary width; spans are centre-to-centre of bearings; an edge joist's tributary width is half the gap to its one neighbour (plus any drawing.edge_distance_in).",
 		"The top edge is braced by the sheathing when design.top_edge_braced is true; the bottom edge only at bearings, blocking rows and by a ceiling fastened directly to the joists where a zone says so.",
 		"Blocking rows are decided per run: every member of a run is checked with the most rows any of its members needs.",
 		"Members crossing load-zone edges take the envelope of the zones' loads and the stricter deflection limits.",
