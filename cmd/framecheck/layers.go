@@ -3,6 +3,7 @@ package main
 import (
 	"fmt"
 	"io"
+	"regexp"
 	"sort"
 	"strconv"
 	"strings"
@@ -205,7 +206,12 @@ func printLayers(w io.Writer, d *dxfimport.Drawing, p *Project, unitsSource stri
 		joists = joists || r.Role == RoleJoists && len(r.Counts) > 0
 	}
 	if !joists {
-		notes = append(notes, fmt.Sprintf("no entities on a joist layer: layers.joists is %s", fmtList(p.Layers.Joists)))
+		note := fmt.Sprintf("no entities on a joist layer: layers.joists is %s", fmtList(p.Layers.Joists))
+		if like := joistLikeLayers(rows); len(like) > 0 {
+			note += fmt.Sprintf("; the joists may be on %s: name that layer in [layers] joists of the project file ('framecheck init' writes one)",
+				strings.Join(like, ", "))
+		}
+		notes = append(notes, note)
 	}
 	for _, u := range unusedPatterns(rows, p) {
 		notes = append(notes, "pattern matches no layer: "+u)
@@ -219,6 +225,24 @@ func printLayers(w io.Writer, d *dxfimport.Drawing, p *Project, unitsSource stri
 			fmt.Fprintln(w, "  "+n)
 		}
 	}
+}
+
+// joistLikeRE matches layer names drafters give joists and rafters
+// ("S-JOIS", "FLR-JST", "JOISTS 2ND", "RAFTERS"): common practice, no
+// source.
+var joistLikeRE = regexp.MustCompile(`(?i)jois|jst|raft|rftr`)
+
+// joistLikeLayers names the layers without a role whose name looks like a
+// joist layer and that hold lines or polylines.
+func joistLikeLayers(rows []layerRow) []string {
+	var out []string
+	for _, r := range rows {
+		lines := r.Counts[dxfimport.KindLine] + r.Counts[dxfimport.KindLWPolyline] + r.Counts[dxfimport.KindPolyline]
+		if r.Role == "" && lines > 0 && joistLikeRE.MatchString(r.Name) {
+			out = append(out, r.Name)
+		}
+	}
+	return out
 }
 
 // versionName names a $ACADVER value.

@@ -203,3 +203,25 @@ func TestSummaryShowsTribBesideSpacing(t *testing.T) {
 	assert.Regexp(t, `(?m)^J\d+\s+11\s+2x10\s+DF-L No\.2\s+FLOOR\s+16 in\s+16 in\s+11'-8 3/4"\s`, stdout)
 	assert.Regexp(t, `(?m)^J\d+\s+1\s+2x10\s+DF-L No\.2\s+FLOOR\s+16 in\s+8 in\s+11'-8 3/4"\s`, stdout)
 }
+
+// A new user's first steps on their own drawing: layers without a
+// project file points at the layer that looks like the joists, and a
+// project file that does not exist yet is met with how to write one.
+func TestFirstStepsOnOwnLayers(t *testing.T) {
+	plan := filepath.Join("testdata", "mm_plan", "mm_plan.dxf")
+	var stdout, stderr bytes.Buffer
+	require.Equal(t, exitOK, run([]string{"layers", plan}, &stdout, &stderr), stderr.String())
+	assert.Contains(t, stdout.String(), "the joists may be on S-JOIS:")
+	assert.NotContains(t, stdout.String(), "S-JOIS, ", "only S-JOIS looks like a joist layer")
+
+	stdout.Reset()
+	require.Equal(t, exitOK, run([]string{"layers", plan, "-p", filepath.Join("testdata", "mm_plan", "mm_plan.toml")}, &stdout, &stderr))
+	assert.NotContains(t, stdout.String(), "the joists may be on")
+
+	missing := filepath.Join(t.TempDir(), "framecheck.toml")
+	for _, args := range [][]string{{"layers", plan}, {"check", plan, "-o", t.TempDir()}} {
+		stderr.Reset()
+		assert.Equal(t, exitUsage, run(append(args, "-p", missing), &stdout, &stderr), args[0])
+		assert.Contains(t, stderr.String(), "project file "+missing+" not found; 'framecheck init -o "+missing+"' writes a starter one", args[0])
+	}
+}

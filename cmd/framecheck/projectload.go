@@ -3,6 +3,7 @@ package main
 import (
 	"errors"
 	"fmt"
+	"io/fs"
 	"os"
 	"sort"
 	"strings"
@@ -14,6 +15,9 @@ import (
 // back as ProjectErrors, each naming the file, line and key.
 func LoadProject(path string) (*Project, error) {
 	data, err := os.ReadFile(path)
+	if errors.Is(err, fs.ErrNotExist) {
+		return nil, fmt.Errorf("project file %s not found; 'framecheck init -o %s' writes a starter one to edit: %w", path, path, err)
+	}
 	if err != nil {
 		return nil, err
 	}
