@@ -235,12 +235,38 @@ func (g *grouper) applyCallouts(k int, cs []callout) {
 		}
 	}
 	m.Size, m.CalloutSpacingIn = c0.size, c0.spacingIn
-	if c0.spacingIn > 0 && m.SpacingIn > 0 && math.Abs(m.SpacingIn-c0.spacingIn) > 1 {
+	if sp := g.jointSpacing(k); c0.spacingIn > 0 && sp > 0 && math.Abs(sp-c0.spacingIn) > 1 {
 		msg := fmt.Sprintf("%s: callout %q says %g in o.c. but the drawing measures %.2f in",
-			m.ID, c0.text, c0.spacingIn, m.SpacingIn)
+			m.ID, c0.text, c0.spacingIn, sp)
 		m.Messages = append(m.Messages, msg)
 		g.warn(m.Pos, CodeCalloutSpacing, "%s", msg)
 	}
+}
+
+// plyGapIn: parallel joists this close are plies of one built-up member
+// (a doubled joist, 1.5 in apart), not joists spaced on centre (common
+// practice, no source).
+const plyGapIn = 4
+
+// jointSpacing is member k's spacing to compare with a callout: the mean
+// of its gaps to its neighbours, leaving out gaps to a ply of the same
+// built-up member; 0 when no gap is left.
+func (g *grouper) jointSpacing(k int) float64 {
+	var sum float64
+	var n int
+	for _, j := range []int{g.lo[k], g.hi[k]} {
+		if j < 0 {
+			continue
+		}
+		if gap := math.Abs(g.plan.across[j] - g.plan.across[k]); gap > plyGapIn {
+			sum += gap
+			n++
+		}
+	}
+	if n == 0 {
+		return 0
+	}
+	return sum / float64(n)
 }
 
 // existingBlocking records where drawn blocking lines cross each member.

@@ -85,7 +85,8 @@
 // Lumber is callout > first matching by_layer rule > project default.
 // Conflicting callouts (different sizes, or two different spacings; a
 // callout without a spacing agrees with one that has it) make the member
-// an error; a callout spacing more than 1 in from the measured one is a
+// an error; a callout spacing more than 1 in from the measured one (gaps
+// of 4 in or less, between the plies of a doubled joist, left out) is a
 // warning. Drawn blocking lines crossing or touching a joist are its
 // bracing points, one per position (blocking drawn piece by piece touches
 // each joist from both sides).

@@ -274,3 +274,27 @@ func TestMillimetrePlanAt45DegreesThroughDxfimport(t *testing.T) {
 		t.Errorf("tribs across the run %v, want [8 16 16 8]", tribs)
 	}
 }
+
+func TestCalloutSpacingIgnoresDoubledJoistPlies(t *testing.T) {
+	// `2x10 @ 16" o.c.` over joists at x = 0, 16, 17.5 (a doubled joist,
+	// plies face to face), 33.5, 49.5: joist to joist is 16 in
+	// everywhere; the 1.5 in between the plies is not a spacing, so no
+	// FRM210 warning. The measured spacing of the plies stays their
+	// own (16 + 1.5) / 2 = 8.75 in (half the gap each side, DOMAIN.md).
+	pl := newPlan().walls(-10, 100, 0, 144).joists(0, 144, 0, 16, 17.5, 33.5, 49.5).
+		line("FRAMING-NOTE", -4, 60, 54, 60).
+		text("FRAMING-NOTE", `2x10 @ 16" o.c.`, 2, 61, 3).
+		group(DefaultOptions())
+	if c := issueCodes(pl.Issues); c[CodeCalloutSpacing] != 0 {
+		t.Errorf("issues %v: no spacing warning for the plies of a doubled joist", pl.Issues)
+	}
+	checkNear(t, "ply spacing", member(t, pl, 16, 72).SpacingIn, 8.75, 1e-9)
+	// a real mismatch is still reported: joists at 24 in under a 16 in callout
+	pl = newPlan().walls(-10, 100, 0, 144).joists(0, 144, 0, 24, 48).
+		line("FRAMING-NOTE", -4, 60, 54, 60).
+		text("FRAMING-NOTE", `2x10 @ 16" o.c.`, 2, 61, 3).
+		group(DefaultOptions())
+	if c := issueCodes(pl.Issues); c[CodeCalloutSpacing] != 3 {
+		t.Errorf("issues %v, want 3 spacing warnings (24 in measured)", pl.Issues)
+	}
+}
