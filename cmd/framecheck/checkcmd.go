@@ -168,6 +168,9 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		}
 		fmt.Fprintf(stderr, "framecheck: %s: no joists found on the joist layers %s (run '%s' to see the drawing's layers and the role each gets)\n",
 			c.planPath, strings.Join(proj.Layers.Joists, ", "), layersCmd)
+		if f := c.unusedProjectFile(); f != "" {
+			fmt.Fprintf(stderr, "framecheck: no -p given, so the built-in layer patterns applied; to use %s, add -p %s\n", f, f)
+		}
 		printIssues(stderr, o.issues)
 		return exitUsage
 	}
@@ -198,6 +201,24 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		return exitFail
 	}
 	return exitOK
+}
+
+// projectFileName is the name `framecheck init` gives the project file.
+const projectFileName = "framecheck.toml"
+
+// unusedProjectFile returns the path of a framecheck.toml in the working
+// folder or beside the plan when check runs without -p (the file was most
+// likely meant to be used), else "".
+func (c *checkRun) unusedProjectFile() string {
+	if c.projectPath != "" {
+		return ""
+	}
+	for _, f := range []string{projectFileName, filepath.Join(filepath.Dir(c.planPath), projectFileName)} {
+		if st, err := os.Stat(f); err == nil && st.Mode().IsRegular() {
+			return f
+		}
+	}
+	return ""
 }
 
 // errorFindings counts the error-severity findings.
@@ -359,6 +380,9 @@ func printSummary(w io.Writer, c *checkRun, proj *Project, r *export.Results, wr
 	if used := proj.DefaultsUsed(); len(used) > 0 {
 		if c.projectPath == "" {
 			fmt.Fprintf(w, "no project file: built-in defaults used (%d settings; see the Inputs sheet)\n", len(used))
+			if f := c.unusedProjectFile(); f != "" {
+				fmt.Fprintf(w, "%s was not read: pass it with -p %s\n", f, f)
+			}
 		} else {
 			fmt.Fprintf(w, "%d settings left out of %s took their defaults", len(used), c.projectPath)
 			if len(used) > maxDefaultsListed {

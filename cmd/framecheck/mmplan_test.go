@@ -225,3 +225,24 @@ func TestFirstStepsOnOwnLayers(t *testing.T) {
 		assert.Contains(t, stderr.String(), "project file "+missing+" not found; 'framecheck init -o "+missing+"' writes a starter one", args[0])
 	}
 }
+
+// check without -p beside the framecheck.toml that init wrote (the usual
+// slip after editing it) says the file was not read and how to pass it.
+func TestCheckWithoutProjectFlagNamesTheFileBeside(t *testing.T) {
+	dir := t.TempDir()
+	for src, dst := range map[string]string{"mm_plan.dxf": "mm_plan.dxf", "mm_plan.toml": "framecheck.toml"} {
+		data, err := os.ReadFile(filepath.Join("testdata", "mm_plan", src))
+		require.NoError(t, err)
+		require.NoError(t, os.WriteFile(filepath.Join(dir, dst), data, 0o644))
+	}
+	var stdout, stderr bytes.Buffer
+	code := run([]string{"check", filepath.Join(dir, "mm_plan.dxf"), "-o", filepath.Join(dir, "out")}, &stdout, &stderr)
+	assert.Equal(t, exitUsage, code, "the built-in JOIST* pattern finds nothing on S-JOIS")
+	want := filepath.Join(dir, "framecheck.toml")
+	assert.Contains(t, stderr.String(), "to use "+want+", add -p "+want)
+
+	require.NoError(t, os.Remove(want))
+	stderr.Reset()
+	run([]string{"check", filepath.Join(dir, "mm_plan.dxf"), "-o", filepath.Join(dir, "out")}, &stdout, &stderr)
+	assert.NotContains(t, stderr.String(), "add -p")
+}
