@@ -8,6 +8,7 @@ import (
 	"math"
 	"os"
 	"path/filepath"
+	"sort"
 	"strconv"
 	"strings"
 	"text/tabwriter"
@@ -395,6 +396,9 @@ func printSummary(w io.Writer, c *checkRun, proj *Project, r *export.Results, wr
 			}
 		}
 	}
+	if c.size {
+		fmt.Fprintln(w, sizingLine(proj, r))
+	}
 	fmt.Fprintln(w)
 	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
 	// the tributary width beside the spacing: an edge joist has the same
@@ -452,6 +456,30 @@ func printSummary(w io.Writer, c *checkRun, proj *Project, r *export.Results, wr
 	}
 	fmt.Fprintln(w, "\nframecheck assists a qualified designer; it does not replace engineering judgement or a")
 	fmt.Fprintln(w, "licensed professional's review. Check design values and code editions against local adoption.")
+}
+
+// sizingLine tells what --size did: the candidates tried and how many
+// checked members got each size.
+func sizingLine(proj *Project, r *export.Results) string {
+	count := map[string]int{}
+	for _, m := range r.Members {
+		if m.Status != "error" {
+			count[m.Size]++
+		}
+	}
+	var got []string
+	for _, sz := range proj.Sizing.Candidates {
+		if n := count[sz]; n > 0 {
+			got = append(got, fmt.Sprintf("%s for %d", sz, n))
+			delete(count, sz)
+		}
+	}
+	for sz, n := range count { // sizes outside the candidates: failing members keep theirs
+		got = append(got, fmt.Sprintf("%s for %d", sz, n))
+	}
+	sort.Strings(got[len(got)-len(count):])
+	return fmt.Sprintf("sizes picked by --size from [sizing] candidates %s, one size per run (the deepest any member needs): %s members",
+		strings.Join(proj.Sizing.Candidates, ", "), strings.Join(got, ", "))
 }
 
 // inchText writes a spacing or tributary width in inches, as framers

@@ -3,9 +3,12 @@ package main
 import (
 	"bytes"
 	"encoding/json"
+	"fmt"
 	"math"
 	"os"
 	"path/filepath"
+	"regexp"
+	"strconv"
 	"strings"
 	"testing"
 
@@ -245,4 +248,29 @@ func TestCheckWithoutProjectFlagNamesTheFileBeside(t *testing.T) {
 	stderr.Reset()
 	run([]string{"check", filepath.Join(dir, "mm_plan.dxf"), "-o", filepath.Join(dir, "out")}, &stdout, &stderr)
 	assert.NotContains(t, stderr.String(), "add -p")
+}
+
+// check --size says what it did: the line names the candidates and
+// accounts for every checked member (which size each run gets is the
+// engine's result and is not pinned here).
+func TestSizeSummaryLine(t *testing.T) {
+	_, stdout, _ := runMMPlan(t, "", "--size")
+	line := regexp.MustCompile(`(?m)^sizes picked by --size from \[sizing\] candidates 2x6, 2x8, 2x10, 2x12, 2x14, one size per run \(the deepest any member needs\): (.*) members$`).
+		FindStringSubmatch(stdout)
+	require.NotNil(t, line, stdout)
+	total := 0
+	for _, part := range strings.Split(line[1], ", ") {
+		var size string
+		var n int
+		_, err := fmt.Sscanf(part, "%s for %d", &size, &n)
+		require.NoError(t, err, part)
+		total += n
+	}
+	m := regexp.MustCompile(`(\d+) pass, (\d+) fail, (\d+) error`).FindStringSubmatch(stdout)
+	require.NotNil(t, m)
+	pass, _ := strconv.Atoi(m[1])
+	fail, _ := strconv.Atoi(m[2])
+	assert.Equal(t, pass+fail, total, "every checked member has a size in the line")
+	_, stdout, _ = runMMPlan(t, "")
+	assert.NotContains(t, stdout, "sizes picked by --size")
 }
