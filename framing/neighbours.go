@@ -86,6 +86,14 @@ func (g *grouper) setTrib(k int) {
 	edge := g.opt.EdgeDistanceIn
 	loT, hiT := edge, edge
 	var gaps []float64
+	m.Neighbours = [2]int{g.lo[k], g.hi[k]}
+	m.NeighbourGapsIn = [2]float64{}
+	if j := g.lo[k]; j >= 0 {
+		m.NeighbourGapsIn[0] = p.across[k] - p.across[j]
+	}
+	if j := g.hi[k]; j >= 0 {
+		m.NeighbourGapsIn[1] = p.across[j] - p.across[k]
+	}
 	if j := g.lo[k]; j >= 0 {
 		gap := p.across[k] - p.across[j]
 		loT = gap / 2

@@ -52,9 +52,15 @@ type Member struct {
 
 	ExistingBlockingAtIn []float64 // drawn blocking rows crossing the member, along it from Start
 	Run                  int       // index into Plan.Runs
-	HangersStart         bool      // Start frames into a flush beam
-	HangersEnd           bool
-	Mark                 string // set by AssignMarks
+	// Neighbours are the indices (into Plan.Members) of the nearest
+	// overlapping parallel joist on each side across the member's
+	// direction group, lower offset first; -1 where there is none. Error
+	// members are neighbours too. NeighbourGapsIn are the distances to them.
+	Neighbours      [2]int
+	NeighbourGapsIn [2]float64
+	HangersStart    bool // Start frames into a flush beam
+	HangersEnd      bool
+	Mark            string // set by AssignMarks
 
 	// Error marks an unusable member (an end with no support, conflicting
 	// callouts, no zone); it still counts as a neighbour for tribs.

@@ -327,10 +327,7 @@ func checkInput(p *Project, plan *framing.Plan, k int) (cm check.Member, shift f
 	for _, x := range m.ExistingBlockingAtIn {
 		cm.BlockingAtIn = append(cm.BlockingAtIn, x+shift)
 	}
-	run := plan.Runs[m.Run]
-	// NDS 2018 4.3.9: at least three members, at most 24 in on centre,
-	// joined by a load-distributing element (the sheathing).
-	cm.Repetitive = len(run.Members) >= 3 && cm.SpacingIn > 0 && cm.SpacingIn <= 24
+	cm.Repetitive = repetitive(plan, k)
 	z, zmsgs := zoneEnvelope(p, m.Zones)
 	msgs = append(msgs, zmsgs...)
 	if z == nil {
@@ -345,6 +342,30 @@ func checkInput(p *Project, plan *framing.Plan, k int) (cm check.Member, shift f
 	cm.LiveLimit, cm.TotalLimit = z.LiveDeflectionLimit, z.TotalDeflectionLimit
 	cm.BottomBracedContinuous = z.CeilingBracesBottom
 	return cm, shift, msgs
+}
+
+// repetitive reports whether plan member k qualifies for Cr (NDS 2018
+// 4.3.9): it is one of at least three joists side by side, no more than
+// 24 in on centre, joined by the sheathing. Neighbours count whatever their
+// bearings (a trimmer or a lapped joist beside it still shares the load
+// through the sheathing), which a run, made of joists with the same
+// bearings, would not.
+func repetitive(plan *framing.Plan, k int) bool {
+	const maxOnCentreIn = 24 + 1e-6
+	count := 1
+	for side := 0; side < 2; side++ {
+		j := k
+		for step := 0; step < 2 && count < 3; step++ {
+			m := &plan.Members[j]
+			next, gap := m.Neighbours[side], m.NeighbourGapsIn[side]
+			if next < 0 || gap > maxOnCentreIn {
+				break
+			}
+			count++
+			j = next
+		}
+	}
+	return count >= 3
 }
 
 // woodDensityPcf is the unit weight NDS 2018 Supplement Table 1B uses for
