@@ -282,7 +282,7 @@ func (g *grouper) noSupport(k int, own map[int]bool) {
 		if e == "end" {
 			p = m.End
 		}
-		msg := fmt.Sprintf("%s %s (%.2f, %.2f) reaches no support", m.ID, e, p.X, p.Y)
+		msg := fmt.Sprintf("%s %s %s reaches no support", m.ID, e, g.drawingPoint(p))
 		if d, s, ok := g.nearestSupport(p, own); ok {
 			msg += fmt.Sprintf("; nearest support is %.1f in away (%s)", d, s.pos)
 		} else {

@@ -74,6 +74,9 @@ type grouper struct {
 
 	direct, outer []hit // scratch for bearingsFrom
 	carried       []hit // flush beams framing into the current member
+
+	units  string  // the drawing's units ("mm"), for points in messages
+	toInch float64 // drawing units to inches
 }
 
 type dirGroup struct {
@@ -87,6 +90,7 @@ func Group(d *dxfimport.Drawing, opt Options) *Plan {
 	if d == nil {
 		return g.plan
 	}
+	g.units, g.toInch = d.Units, d.ToInch
 	g.classify(d)
 	g.makeMembers()
 	g.findBearings()
@@ -96,6 +100,16 @@ func Group(d *dxfimport.Drawing, opt Options) *Plan {
 	g.assignLumber()
 	g.existingBlocking()
 	return g.plan
+}
+
+// drawingPoint formats a point (inches inside framing) in the drawing's
+// own units, so it can be found in CAD: "(16.00, 138.00)" in an inch
+// drawing, "(4489.45, 0.00 mm)" in any other.
+func (g *grouper) drawingPoint(p Point) string {
+	if g.units == "" || g.units == "in" || g.toInch <= 0 {
+		return fmt.Sprintf("(%.2f, %.2f)", p.X, p.Y)
+	}
+	return fmt.Sprintf("(%.2f, %.2f %s)", p.X/g.toInch, p.Y/g.toInch, g.units)
 }
 
 func (g *grouper) warn(pos dxfimport.Pos, code string, format string, args ...any) {
@@ -188,7 +202,7 @@ func (g *grouper) addJoist(e dxfimport.Entity) bool {
 		return false
 	}
 	if dist(a, b) < 1e-6 {
-		g.warn(e.Pos, CodeZeroLength, "zero-length joist at (%.2f, %.2f); skipped", a.X, a.Y)
+		g.warn(e.Pos, CodeZeroLength, "zero-length joist at %s; skipped", g.drawingPoint(a))
 		return true
 	}
 	g.joists = append(g.joists, segItem{a: a, b: b, pos: e.Pos})
