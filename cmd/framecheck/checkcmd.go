@@ -16,6 +16,7 @@ import (
 
 	"framecheck/dxfimport"
 	"framecheck/export"
+	"framecheck/framing"
 	"framecheck/samples"
 )
 
@@ -175,6 +176,10 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		printIssues(stderr, o.issues)
 		return exitUsage
 	}
+	if msg := unmatchedSupports(o); msg != "" {
+		o.issues = append(dxfimport.IssueList{{Pos: dxfimport.Pos{File: c.planPath}, Code: CodeUnmatchedSupport,
+			Severity: dxfimport.SevWarning, Msg: msg}}, o.issues...)
+	}
 	res := exportResults(o, c.planPath)
 	// No NaN or Inf reaches any output, the summary or the exit status: a
 	// member holding one is in error, saying which value (a safety net;
@@ -202,6 +207,35 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		return exitFail
 	}
 	return exitOK
+}
+
+// CodeUnmatchedSupport is the warning that a support layer pattern matches
+// no layer while joists reach no support: the likely cause of their errors.
+const CodeUnmatchedSupport = "RUN302"
+
+// unmatchedSupports returns a warning naming the [[support]] layer
+// patterns that match no layer of the drawing, when some joist end
+// reaches no support; "" otherwise.
+func unmatchedSupports(o *outcome) string {
+	lost := false
+	for _, is := range o.issues {
+		lost = lost || is.Code == framing.CodeNoSupport
+	}
+	if !lost {
+		return ""
+	}
+	var pats []string
+	rows := layerRows(o.drawing, o.project)
+	for _, u := range unusedPatterns(rows, o.project) {
+		if strings.HasPrefix(u, "[[support]]") {
+			pats = append(pats, u)
+		}
+	}
+	if len(pats) == 0 {
+		return ""
+	}
+	return fmt.Sprintf("joist ends reach no support, and these support patterns match no layer of the drawing: %s; "+
+		"check the layer names with 'framecheck layers'", strings.Join(pats, "; "))
 }
 
 // projectFileName is the name `framecheck init` gives the project file.

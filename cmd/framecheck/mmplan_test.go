@@ -274,3 +274,25 @@ func TestSizeSummaryLine(t *testing.T) {
 	_, stdout, _ = runMMPlan(t, "")
 	assert.NotContains(t, stdout, "sizes picked by --size")
 }
+
+// A support pattern that names no layer ("S-WALL" for S-WALL-BRG) leaves
+// the joists bearing on nothing: the first finding names the pattern, and
+// each joist's "reaches no support" point is in the drawing's own units,
+// so it can be found in CAD (joist k = 11 starts at (19.05 + 406.4 x 11,
+// 0) = (4489.45, 0) mm, gen_mm_plan.py).
+func TestUnmatchedSupportPatternIsNamed(t *testing.T) {
+	b, err := os.ReadFile(filepath.Join("testdata", "mm_plan", "mm_plan.toml"))
+	require.NoError(t, err)
+	toml := strings.Replace(string(b), `layers = ["S-WALL-BRG"]`, `layers = ["S-WALL"]`, 1)
+	require.NotEqual(t, string(b), toml)
+	code, _, stderr := runMMPlan(t, toml)
+	assert.Equal(t, exitFail, code)
+	first, _, _ := strings.Cut(stderr, "\n")
+	assert.Contains(t, first, CodeUnmatchedSupport)
+	assert.Contains(t, first, `[[support]] 1 (bearing-wall): "S-WALL"`)
+	assert.NotContains(t, first, "S-BEAM", "the flush-beam pattern matches its layer")
+	assert.Contains(t, stderr, "start (4489.45, 0.00 mm) reaches no support")
+
+	_, _, stderr = runMMPlan(t, "")
+	assert.NotContains(t, stderr, CodeUnmatchedSupport)
+}
