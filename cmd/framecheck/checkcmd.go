@@ -211,7 +211,7 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 
 // CodeUnmatchedSupport is the warning that a support layer pattern matches
 // no layer while joists reach no support: the likely cause of their errors.
-const CodeUnmatchedSupport = "RUN302"
+const CodeUnmatchedSupport = "RUN402"
 
 // unmatchedSupports returns a warning naming the [[support]] layer
 // patterns that match no layer of the drawing, when some joist end

@@ -11,7 +11,7 @@ import (
 
 // CodeUnitsDoubt is the warning that the joists' spans look like a drawing
 // read in the wrong units.
-const CodeUnitsDoubt = "RUN301"
+const CodeUnitsDoubt = "RUN401"
 
 // Spans outside these bounds are not house or light-commercial joists:
 // a median span beyond them points at a drawing read in the wrong units
