@@ -296,3 +296,21 @@ func TestUnmatchedSupportPatternIsNamed(t *testing.T) {
 	_, _, stderr = runMMPlan(t, "")
 	assert.NotContains(t, stderr, CodeUnmatchedSupport)
 }
+
+// A millimetre plan saved with $INSUNITS 0 (unitless, common in CAD
+// exports) is read as inches: the units doubt says that was a guess.
+func TestUnitlessPlanUnitsDoubtSaysGuess(t *testing.T) {
+	data, err := os.ReadFile(filepath.Join("testdata", "mm_plan", "mm_plan.dxf"))
+	require.NoError(t, err)
+	// $INSUNITS is group 70 after the header variable name (gen_mm_plan.py sets 4)
+	txt := strings.Replace(string(data), "$INSUNITS\n 70\n4\n", "$INSUNITS\n 70\n0\n", 1)
+	require.NotEqual(t, string(data), txt, "no $INSUNITS 4 in the fixture")
+	dir := t.TempDir()
+	plan := filepath.Join(dir, "plan.dxf")
+	require.NoError(t, os.WriteFile(plan, []byte(txt), 0o644))
+	var stdout, stderr bytes.Buffer
+	run([]string{"check", plan, "-p", filepath.Join("testdata", "mm_plan", "mm_plan.toml"), "-o", filepath.Join(dir, "out")}, &stdout, &stderr)
+	first, _, _ := strings.Cut(stderr.String(), "\n")
+	assert.Contains(t, first, CodeUnitsDoubt)
+	assert.Contains(t, first, `units "in" (a guess: the drawing's $INSUNITS gives no units)`)
+}

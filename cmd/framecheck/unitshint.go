@@ -45,16 +45,16 @@ func unitsDoubt(plan *framing.Plan, d *dxfimport.Drawing, flagUnits, projectUnit
 	if med >= plausibleMinSpanIn && med <= plausibleMaxSpanIn {
 		return ""
 	}
-	units, from := d.Units, "the DXF header ($INSUNITS)"
+	units, from := d.Units, "from the DXF header ($INSUNITS)"
 	switch {
 	case flagUnits != "":
-		from = "--units"
+		from = "from --units"
 	case projectUnits != "":
-		from = "[drawing] units in the project file"
+		from = "from [drawing] units in the project file"
 	case units == "":
-		units, from = "in", "no $INSUNITS in the drawing, so inches"
+		units, from = "in", "a guess: the drawing's $INSUNITS gives no units"
 	}
 	return fmt.Sprintf("the joists' median span is %s, not a joist span: are the drawing units right? "+
-		"The drawing was read with units %q (from %s); give the right ones with --units or [drawing] units",
+		"The drawing was read with units %q (%s); give the right ones with --units or [drawing] units",
 		export.FtIn(med), units, from)
 }
