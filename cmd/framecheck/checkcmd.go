@@ -470,7 +470,11 @@ func printSummary(w io.Writer, c *checkRun, proj *Project, r *export.Results, wr
 			if len(m.Messages) > 0 {
 				msg = m.Messages[0]
 			}
-			fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%.2f\t%s\t%s\t%s\n", m.ID, m.Mark, m.Size, m.Governing, m.MaxRatio,
+			ratio := fmt.Sprintf("%.2f", m.MaxRatio)
+			if m.Status == "error" {
+				ratio = "-" // not checked: no ratio
+			}
+			fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\n", m.ID, m.Mark, m.Size, m.Governing, ratio,
 				statusText(colour, m.Status), m.Source, msg)
 		}
 		tw.Flush()

@@ -285,13 +285,15 @@ func TestUnmatchedSupportPatternIsNamed(t *testing.T) {
 	require.NoError(t, err)
 	toml := strings.Replace(string(b), `layers = ["S-WALL-BRG"]`, `layers = ["S-WALL"]`, 1)
 	require.NotEqual(t, string(b), toml)
-	code, _, stderr := runMMPlan(t, toml)
+	code, stdout, stderr := runMMPlan(t, toml)
 	assert.Equal(t, exitFail, code)
 	first, _, _ := strings.Cut(stderr, "\n")
 	assert.Contains(t, first, CodeUnmatchedSupport)
 	assert.Contains(t, first, `[[support]] 1 (bearing-wall): "S-WALL"`)
 	assert.NotContains(t, first, "S-BEAM", "the flush-beam pattern matches its layer")
 	assert.Contains(t, stderr, "start (4489.45, 0.00 mm) reaches no support")
+	// error members were not checked: the summary shows no ratio for them
+	assert.Regexp(t, `(?m)^M1\s+2x10\s+-\s+ERROR\s`, stdout)
 
 	_, _, stderr = runMMPlan(t, "")
 	assert.NotContains(t, stderr, CodeUnmatchedSupport)
