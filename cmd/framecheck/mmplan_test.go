@@ -243,6 +243,7 @@ func TestCheckWithoutProjectFlagNamesTheFileBeside(t *testing.T) {
 	assert.Equal(t, exitUsage, code, "the built-in JOIST* pattern finds nothing on S-JOIS")
 	want := filepath.Join(dir, "framecheck.toml")
 	assert.Contains(t, stderr.String(), "to use "+want+", add -p "+want)
+	assert.Contains(t, stderr.String(), "the joists may be on S-JOIS:")
 
 	require.NoError(t, os.Remove(want))
 	stderr.Reset()
