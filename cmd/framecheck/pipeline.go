@@ -128,6 +128,8 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 		sizeRuns(plan, inputs, shifts, usable, settings, o)
 	}
 
+	// Members identical for design checked with the same rows share one result.
+	withRows := map[string]check.Result{}
 	// Rows per run: the run gets the most rows any member needs, and every
 	// member of the run is checked with them (DOMAIN.md "Blocking rows").
 	for ri, run := range plan.Runs {
@@ -147,7 +149,14 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 			if usable[k] && o.results[k].RowsPerSpan() != n {
 				cm := inputs[k]
 				cm.Size = o.results[k].Size
-				o.results[k] = unshift(check.CheckWithRows(cm, settings, n), shifts[k])
+				key := fmt.Sprintf("%d|%s", n, memberKey(cm))
+				r, ok := withRows[key]
+				if !ok {
+					r = check.CheckWithRows(cm, settings, n)
+					withRows[key] = r
+				}
+				r.ID = cm.ID
+				o.results[k] = unshift(r, shifts[k])
 			}
 		}
 		// Positions along the run's first member, from its Start:

@@ -28,8 +28,10 @@ func exportResults(o *outcome, planName string) *export.Results {
 	for k := range plan.Members {
 		ids[k] = plan.Members[k].ID
 	}
+	conv := newResultConverter()
+	r.Members = make([]export.Member, 0, len(plan.Members))
 	for k := range plan.Members {
-		r.Members = append(r.Members, exportMember(&plan.Members[k], &o.results[k], toInch))
+		r.Members = append(r.Members, conv.member(&plan.Members[k], &o.results[k], toInch))
 		switch o.results[k].Status {
 		case check.StatusPass:
 			r.Summary.Pass++
@@ -49,7 +51,21 @@ func exportResults(o *outcome, planName string) *export.Results {
 	return r
 }
 
-func exportMember(m *framing.Member, res *check.Result, toInch float64) export.Member {
+// resultConverter maps check results onto export's types. Members identical
+// for design share one check.Result (its slices included), so their checks,
+// factors and solver steps are converted once and shared too.
+type resultConverter struct {
+	checks  map[*check.CheckResult][]export.Check
+	factors map[*check.TraceItem][]export.TraceItem
+	steps   map[*check.BlockingStep][]export.BlockingStep
+}
+
+func newResultConverter() *resultConverter {
+	return &resultConverter{checks: map[*check.CheckResult][]export.Check{},
+		factors: map[*check.TraceItem][]export.TraceItem{}, steps: map[*check.BlockingStep][]export.BlockingStep{}}
+}
+
+func (cv *resultConverter) member(m *framing.Member, res *check.Result, toInch float64) export.Member {
 	em := export.Member{
 		ID: m.ID, Mark: m.Mark, Layer: m.Layer, Handle: m.Pos.Handle, Source: m.Pos.String(),
 		Start:   [2]float64{m.Start.X / toInch, m.Start.Y / toInch},
@@ -73,14 +89,36 @@ func exportMember(m *framing.Member, res *check.Result, toInch float64) export.M
 	for _, b := range m.Bearings {
 		em.BearingsAtIn = append(em.BearingsAtIn, b.AtIn)
 	}
-	for _, c := range res.Checks {
-		em.Checks = append(em.Checks, export.Check{Kind: c.Kind, Combo: c.Combo, Actual: c.Actual,
-			Allowable: c.Allowable, Unit: c.Unit, Ratio: c.Ratio, Trace: exportTrace(c.Trace)})
+	if len(res.Checks) > 0 {
+		key := &res.Checks[0]
+		if _, ok := cv.checks[key]; !ok {
+			var cs []export.Check
+			for _, c := range res.Checks {
+				cs = append(cs, export.Check{Kind: c.Kind, Combo: c.Combo, Actual: c.Actual,
+					Allowable: c.Allowable, Unit: c.Unit, Ratio: c.Ratio, Trace: exportTrace(c.Trace)})
+			}
+			cv.checks[key] = cs
+		}
+		em.Checks = cv.checks[key]
 	}
-	for _, s := range res.BlockingSteps {
-		em.BlockingSteps = append(em.BlockingSteps, export.BlockingStep{RowsPerSpan: s.RowsPerSpan, LuIn: s.LuIn, CL: s.CL, Ratio: s.Ratio})
+	if len(res.BlockingSteps) > 0 {
+		key := &res.BlockingSteps[0]
+		if _, ok := cv.steps[key]; !ok {
+			var ss []export.BlockingStep
+			for _, s := range res.BlockingSteps {
+				ss = append(ss, export.BlockingStep{RowsPerSpan: s.RowsPerSpan, LuIn: s.LuIn, CL: s.CL, Ratio: s.Ratio})
+			}
+			cv.steps[key] = ss
+		}
+		em.BlockingSteps = cv.steps[key]
 	}
-	em.Factors = exportTrace(res.Factors)
+	if len(res.Factors) > 0 {
+		key := &res.Factors[0]
+		if _, ok := cv.factors[key]; !ok {
+			cv.factors[key] = exportTrace(res.Factors)
+		}
+		em.Factors = cv.factors[key]
+	}
 	seen := map[string]bool{}
 	em.Info = res.Info
 	for _, group := range [][]string{m.Messages, res.Messages} {
