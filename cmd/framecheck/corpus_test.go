@@ -539,11 +539,13 @@ func TestBadCorpusProjectMistakes(t *testing.T) {
 	}
 }
 
-// A TOML syntax error is reported with its line.
+// A TOML syntax error is reported at its own line: the unclosed table
+// name is on line 5 (the decoder itself says 6, the line after the
+// newline where it noticed).
 func TestBadCorpusProjectSyntax(t *testing.T) {
 	r := runCorpus(t, "good.dxf", "", "project-syntax.toml")
 	wantCode(t, r, exitUsage)
-	wantStderr(t, r, "project-syntax.toml:6: TOML syntax")
+	wantStderr(t, r, "project-syntax.toml:5: TOML syntax")
 }
 
 // More damaged and messy drawings.
@@ -599,4 +601,26 @@ func TestBadCorpusMessy(t *testing.T) {
 			t.Errorf("notes lack DXF105: %q", r.results.Assumptions.Notes)
 		}
 	})
+}
+
+// TOML syntax errors at the end of a line, inside one and at the end of
+// the file are each reported at the line that holds the mistake.
+func TestProjectSyntaxLines(t *testing.T) {
+	cases := []struct {
+		in   string
+		line int
+	}{
+		{"[drawing]\nunits = \"in\"\n[design\nkcr = 1.5\n", 3}, // unclosed table name
+		{"a = \nb = 2\n", 1},                                // no value
+		{"[drawing]\nunits = \"in\nb = 1\n", 2},             // newline inside a string
+		{"[a]\nb = 1\n[a]\nc = 2\n", 3},                     // table defined twice
+		{"[design]\ncombinations = [\"D\",\n\"D+L\",\n", 3}, // file ends inside an array
+	}
+	for _, c := range cases {
+		_, err := ParseProject("p.toml", []byte(c.in))
+		want := fmt.Sprintf("p.toml:%d: TOML syntax", c.line)
+		if err == nil || !strings.HasPrefix(err.Error(), want) {
+			t.Errorf("%q: got %v, want %s...", c.in, err, want)
+		}
+	}
 }

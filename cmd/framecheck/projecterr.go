@@ -163,7 +163,7 @@ func deflectionLimit(x float64) string {
 	if x == 0 || x >= 1 && !math.IsInf(x, 1) {
 		return ""
 	}
-	return "must be 0 (not checked) or at least 1 (the n of L/n)"
+	return "must be 0 (not checked) or at least 1"
 }
 
 // sizeCheck reads a nominal size as check.ParseSize does ("2x10",

@@ -1,6 +1,7 @@
 package main
 
 import (
+	"bytes"
 	"errors"
 	"fmt"
 	"io/fs"
@@ -33,7 +34,7 @@ func ParseProject(name string, data []byte) (*Project, error) {
 	if _, err := toml.Decode(string(data), &raw); err != nil {
 		var pe toml.ParseError
 		if errors.As(err, &pe) {
-			return nil, ProjectErrors{{File: name, Line: pe.Position.Line, Msg: "TOML syntax: " + pe.Message}}
+			return nil, ProjectErrors{{File: name, Line: syntaxLine(data, pe), Msg: "TOML syntax: " + pe.Message}}
 		}
 		return nil, ProjectErrors{{File: name, Msg: err.Error()}}
 	}
@@ -48,6 +49,16 @@ func ParseProject(name string, data []byte) (*Project, error) {
 		return nil, ld.errs
 	}
 	return p, nil
+}
+
+// syntaxLine is the 1-based line of a TOML syntax error, counted from its
+// byte offset: BurntSushi/toml v1.6.0 reports an error found at the
+// newline that ends a line (an unclosed "[design") on the next line.
+func syntaxLine(data []byte, pe toml.ParseError) int {
+	if s := pe.Position.Start; s >= 0 && s <= len(data) {
+		return 1 + bytes.Count(data[:s], []byte("\n"))
+	}
+	return pe.Position.Line
 }
 
 // loader walks the decoded TOML, filling a Project and gathering problems.
