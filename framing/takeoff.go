@@ -95,8 +95,6 @@ func BuildTakeoff(p *Plan, rows []BlockingRow) Takeoff {
 	}
 	for _, l := range joists {
 		t.Joists = append(t.Joists, *l)
-		t.JoistCount += l.Count
-		t.JoistBoardFeet += l.BoardFeet
 	}
 	sort.Slice(t.Joists, func(i, j int) bool {
 		a, b := t.Joists[i], t.Joists[j]
@@ -111,6 +109,12 @@ func BuildTakeoff(p *Plan, rows []BlockingRow) Takeoff {
 		}
 		return a.OrderLengthFt < b.OrderLengthFt
 	})
+	// Totals in the sorted order: summing in map order would change the
+	// last digits of the board feet from one run to the next.
+	for _, l := range t.Joists {
+		t.JoistCount += l.Count
+		t.JoistBoardFeet += l.BoardFeet
+	}
 	blocks := map[string]*BlockingLine{}
 	for _, r := range rows {
 		l := blocks[r.Size]
@@ -126,10 +130,12 @@ func BuildTakeoff(p *Plan, rows []BlockingRow) Takeoff {
 	}
 	for _, l := range blocks {
 		t.Blocking = append(t.Blocking, *l)
+	}
+	sort.Slice(t.Blocking, func(i, j int) bool { return sizeLess(t.Blocking[i].Size, t.Blocking[j].Size) })
+	for _, l := range t.Blocking {
 		t.BlockingPieces += l.Pieces
 		t.BlockingBoardFeet += l.BoardFeet
 	}
-	sort.Slice(t.Blocking, func(i, j int) bool { return sizeLess(t.Blocking[i].Size, t.Blocking[j].Size) })
 	for s, n := range hangers {
 		t.Hangers = append(t.Hangers, HangerLine{Size: s, Count: n})
 		t.HangerCount += n
