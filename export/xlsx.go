@@ -38,6 +38,10 @@ func WriteXLSX(path string, r *Results) error {
 	if err != nil {
 		return fmt.Errorf("export: %s: %w", path, err)
 	}
+	// Before any sheet is streamed: called after, it makes excelize read
+	// the streamed Members sheet back into memory and write it out again
+	// (at 10,000 members the schedule took 2.3 s instead of 0.3 s).
+	f.SetActiveSheet(0)
 	writers := []func(*excelize.File, *styles, *Results) error{
 		writeMembers, writeMarks, writeBlocking, writeTakeoff, writeInputs, writeNotes,
 	}
@@ -46,7 +50,6 @@ func WriteXLSX(path string, r *Results) error {
 			return fmt.Errorf("export: %s: %w", path, err)
 		}
 	}
-	f.SetActiveSheet(0)
 	return writeAtomic(path, func(w *bufio.Writer) error {
 		return f.Write(w)
 	})
