@@ -47,7 +47,7 @@ func (e *NonFiniteError) Unwrap() error { return ErrNonFinite }
 // modified; when nothing needs replacing, Sanitize returns r itself.
 func Sanitize(r *Results) (*Results, []string) {
 	var fields []string
-	v, changed := sanitizeValue(reflect.ValueOf(*r), make([]pathSeg, 0, 8), &fields)
+	v, changed := sanitizeValue(reflect.ValueOf(*r), make([]pathSeg, 0, 8), &fields, map[cleanSlice]bool{})
 	if !changed {
 		return r, nil
 	}
@@ -116,7 +116,9 @@ func joinPath(segs []pathSeg) string {
 // (copying only the structs and slices on the way to such a value), and
 // whether it changed anything. Fields tagged json:"-" are left alone: they
 // never reach the file. path is only formatted when a value is replaced.
-func sanitizeValue(v reflect.Value, path []pathSeg, fields *[]string) (reflect.Value, bool) {
+// clean holds the slices already found clean: members checked alike share
+// their check and trace slices, and each is walked once.
+func sanitizeValue(v reflect.Value, path []pathSeg, fields *[]string, clean map[cleanSlice]bool) (reflect.Value, bool) {
 	switch v.Kind() {
 	case reflect.Float32, reflect.Float64:
 		f := v.Float()
@@ -129,7 +131,7 @@ func sanitizeValue(v reflect.Value, path []pathSeg, fields *[]string) (reflect.V
 		t := v.Type()
 		for _, fi := range jsonFields(t) {
 			i := fi.Index
-			nv, changed := sanitizeValue(v.Field(i), append(path, pathSeg{Name: fi.Name}), fields)
+			nv, changed := sanitizeValue(v.Field(i), append(path, pathSeg{Name: fi.Name}), fields, clean)
 			if changed {
 				if !cp.IsValid() {
 					cp = reflect.New(t).Elem()
@@ -142,9 +144,16 @@ func sanitizeValue(v reflect.Value, path []pathSeg, fields *[]string) (reflect.V
 			return cp, true
 		}
 	case reflect.Slice, reflect.Array:
+		var id cleanSlice
+		if v.Kind() == reflect.Slice && v.Len() > 0 {
+			id = cleanSlice{v.Pointer(), v.Len(), v.Type()}
+			if clean[id] {
+				return v, false
+			}
+		}
 		var cp reflect.Value
 		for i := 0; i < v.Len(); i++ {
-			nv, changed := sanitizeValue(v.Index(i), append(path, pathSeg{Index: i}), fields)
+			nv, changed := sanitizeValue(v.Index(i), append(path, pathSeg{Index: i}), fields, clean)
 			if !changed {
 				continue
 			}
@@ -162,8 +171,18 @@ func sanitizeValue(v reflect.Value, path []pathSeg, fields *[]string) (reflect.V
 		if cp.IsValid() {
 			return cp, true
 		}
+		if id.n > 0 {
+			clean[id] = true
+		}
 	}
 	return v, false
+}
+
+// cleanSlice names a slice by its first element, length and type.
+type cleanSlice struct {
+	p uintptr
+	n int
+	t reflect.Type
 }
 
 // jsonField is an exported struct field that reaches the JSON.
@@ -249,7 +268,7 @@ func encodeResults(w *bufio.Writer, r *Results) error {
 		w.Write(b)
 		return nil
 	}
-	list := func(name string, n int, item func(i int) any) error {
+	listBytes := func(name string, n int, enc func(i int) ([]byte, error)) error {
 		key(name)
 		if n == 0 {
 			w.WriteString("[]")
@@ -257,7 +276,7 @@ func encodeResults(w *bufio.Writer, r *Results) error {
 		}
 		w.WriteString("[\n")
 		for i := 0; i < n; i++ {
-			b, err := json.Marshal(item(i))
+			b, err := enc(i)
 			if err != nil {
 				return fmt.Errorf("%s[%d]: %w", name, i, err)
 			}
@@ -271,13 +290,20 @@ func encodeResults(w *bufio.Writer, r *Results) error {
 		w.WriteString(" ]")
 		return nil
 	}
+	list := func(name string, n int, item func(i int) any) error {
+		return listBytes(name, n, func(i int) ([]byte, error) { return json.Marshal(item(i)) })
+	}
+	me := newMemberEncoder()
 	w.WriteString("{\n")
 	steps := []func() error{
 		func() error { return value("schema", schema) },
 		func() error { return value("plan", r.Plan) },
 		func() error { return value("drawing_units", r.DrawingUnits) },
 		func() error {
-			return list("members", len(r.Members), func(i int) any { return memberForJSON(r.Members[i]) })
+			return listBytes("members", len(r.Members), func(i int) ([]byte, error) {
+				m := memberForJSON(r.Members[i])
+				return me.encode(&m, &r.Members[i])
+			})
 		},
 		func() error {
 			return list("marks", len(r.Marks), func(i int) any {
