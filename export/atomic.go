@@ -31,11 +31,14 @@ func writeAtomic(path string, write func(w *bufio.Writer) error) (err error) {
 			os.Remove(tmpName)
 		}
 	}()
-	bw := bufio.NewWriterSize(tmp, 1<<16)
-	if err = write(bw); err != nil {
-		return fmt.Errorf("export: %s: %w", path, err)
+	sw := &syncingWriter{f: tmp, busy: make(chan struct{}, 1)}
+	bw := bufio.NewWriterSize(sw, 1<<16)
+	err = write(bw)
+	if err == nil {
+		err = bw.Flush()
 	}
-	if err = bw.Flush(); err != nil {
+	sw.busy <- struct{}{} // wait for a background sync still running
+	if err != nil {
 		return fmt.Errorf("export: %s: %w", path, err)
 	}
 	if err = tmp.Sync(); err != nil {
@@ -63,6 +66,38 @@ func writeAtomic(path string, write func(w *bufio.Writer) error) (err error) {
 		d.Close()
 	}
 	return nil
+}
+
+// syncEveryBytes is how much syncingWriter lets pile up before it starts
+// a background sync (a variable for the tests).
+var syncEveryBytes int64 = 32 << 20
+
+// syncingWriter writes to f and, after every syncEveryBytes, starts an
+// fsync in the background (unless one is still running), so the disk
+// takes most of a large file (a 100,000-member results.json is 800 MB)
+// while the rest is still being made, and the final Sync has little left
+// to do. busy holds a token while a background sync runs. Errors of the
+// background syncs are left to the final Sync to report.
+type syncingWriter struct {
+	f    *os.File
+	n    int64
+	busy chan struct{}
+}
+
+func (w *syncingWriter) Write(p []byte) (int, error) {
+	n, err := w.f.Write(p)
+	if w.n += int64(n); w.n >= syncEveryBytes {
+		w.n = 0
+		select {
+		case w.busy <- struct{}{}:
+			go func() {
+				_ = w.f.Sync()
+				<-w.busy
+			}()
+		default:
+		}
+	}
+	return n, err
 }
 
 // sameFile reports whether a and b name the same file: equal after
