@@ -108,6 +108,7 @@
 //	FRM212 warning  joist with no parallel neighbour
 //	FRM213 warning  arc segment on a support, blocking or label polyline: skipped
 //	FRM214 warning  entity with a coordinate that is not finite or beyond 1e9 in: skipped
+//	                (an error on a joist layer: that joist is not checked)
 //	FRM215 error    a flush beam ends on the joist away from its ends (header on a trimmer): point load
 //
 // # Speed

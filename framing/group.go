@@ -130,7 +130,14 @@ func (g *grouper) classify(d *dxfimport.Drawing) {
 		}
 		r, spec := role(rs[0]), rs[1]
 		if r != roleNone && !finitePoints(e.Points) {
-			g.warn(e.Pos, CodeBadCoordinate, "%s has a coordinate that is not a finite number within %g in; skipped", e.Kind, maxCoordIn)
+			// A joist left out is a joist not checked: an error, so that
+			// the run does not report a clean plan.
+			sev := dxfimport.SevWarning
+			if r == roleJoist {
+				sev = dxfimport.SevError
+			}
+			g.plan.Issues.Add(e.Pos, CodeBadCoordinate, sev,
+				"%s has a coordinate that is not a finite number within %g in; skipped", e.Kind, maxCoordIn)
 			continue
 		}
 		used := true
@@ -442,10 +449,19 @@ func (g *grouper) dropDuplicates(js []segItem, grpOf []int) []bool {
 			j := ks[y].i
 			if keep[j] && dist(js[i].a, js[j].a) <= tol && dist(js[i].b, js[j].b) <= tol {
 				keep[j] = false
-				g.warn(js[j].pos, CodeDuplicateJoist, "joist drawn twice: handle %s duplicates handle %s; kept once",
-					js[j].pos.Handle, js[i].pos.Handle)
+				g.warn(js[j].pos, CodeDuplicateJoist, "joist drawn twice: %s duplicates %s; kept once",
+					entityRef(js[j].pos), entityRef(js[i].pos))
 			}
 		}
 	}
 	return keep
+}
+
+// entityRef names a drawn entity in a message: "handle 2F", or "line 120"
+// in a file without handles.
+func entityRef(p dxfimport.Pos) string {
+	if p.Handle != "" {
+		return "handle " + p.Handle
+	}
+	return fmt.Sprintf("line %d", p.Line)
 }

@@ -401,16 +401,19 @@ func TestBadCorpusNonASCIIProject(t *testing.T) {
 	}
 }
 
-// A plan drawn at 1e300 in: its lines are skipped with a warning naming
-// each handle; the good plan beside it is checked.
+// A plan drawn at 1e300 in: its lines are skipped with a finding naming
+// each handle, an error for each joist (not checked), and the exit status
+// says so; the good plan beside it is checked.
 func TestBadCorpusHugeCoordinates(t *testing.T) {
 	r := runCorpus(t, "coords-1e300.dxf", "", "")
-	wantCode(t, r, exitOK)
+	wantCode(t, r, exitFail)
 	wantAll(t, r, export.StatusPass, 3)
-	for _, h := range []string{"106", "107", "108", "109", "10A", "10B"} {
-		wantStderr(t, r, fmt.Sprintf("(handle %s, layer ", h))
+	for _, h := range []string{"106", "107"} {
+		wantStderr(t, r, fmt.Sprintf("(handle %s, layer WALL): warning FRM214", h))
 	}
-	wantStderr(t, r, "FRM214")
+	for _, h := range []string{"108", "109", "10A", "10B"} {
+		wantStderr(t, r, fmt.Sprintf("(handle %s, layer JOIST): error FRM214", h))
+	}
 	// The lines left out are listed in results.json (and the Notes sheet),
 	// not only on the terminal.
 	notes := strings.Join(r.results.Assumptions.Notes, "\n")
