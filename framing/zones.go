@@ -67,9 +67,60 @@ func (g *grouper) assignZones() {
 		}
 		return
 	}
+	idx := newZoneIndex(zs)
 	for k := range p.Members {
-		g.memberZones(k, zs)
+		g.memberZones(k, zs, idx)
 	}
+}
+
+// zoneIndex finds the zones whose bounding box a member's may overlap: a
+// grid over the zones' boxes, each zone listed in every cell its box
+// touches. With many units, each in its own zone, this keeps zone lookup
+// from growing with members x zones.
+type zoneIndex struct {
+	grid *segIndex
+	cand []int
+}
+
+func newZoneIndex(zs []zoneGeom) *zoneIndex {
+	if len(zs) == 0 {
+		return &zoneIndex{}
+	}
+	lo, hi := zs[0].lo, zs[0].hi
+	typ := 0.0
+	for i := range zs {
+		lo.X, lo.Y = math.Min(lo.X, zs[i].lo.X), math.Min(lo.Y, zs[i].lo.Y)
+		hi.X, hi.Y = math.Max(hi.X, zs[i].hi.X), math.Max(hi.Y, zs[i].hi.Y)
+		typ += math.Max(zs[i].hi.X-zs[i].lo.X, zs[i].hi.Y-zs[i].lo.Y)
+	}
+	g := newSegIndex(lo, hi, len(zs), typ/float64(len(zs)))
+	for id := range zs {
+		i0, j0, i1, j1 := g.cellRange(zs[id].lo, zs[id].hi, 1)
+		for j := j0; j <= j1; j++ {
+			for i := i0; i <= i1; i++ {
+				g.cells[j*g.nx+i] = append(g.cells[j*g.nx+i], int32(id))
+			}
+		}
+	}
+	return &zoneIndex{grid: g}
+}
+
+// candidates returns, in increasing order, the zones whose bounding box
+// overlaps that of segment ab. The slice is reused by the next call.
+func (x *zoneIndex) candidates(zs []zoneGeom, a, b Point) []int {
+	x.cand = x.cand[:0]
+	if x.grid == nil {
+		return x.cand
+	}
+	x.grid.query(a, b, 1, func(i int) {
+		z := &zs[i]
+		if math.Max(a.X, b.X) >= z.lo.X && math.Min(a.X, b.X) <= z.hi.X &&
+			math.Max(a.Y, b.Y) >= z.lo.Y && math.Min(a.Y, b.Y) <= z.hi.Y {
+			x.cand = append(x.cand, i)
+		}
+	})
+	sort.Ints(x.cand)
+	return x.cand
 }
 
 // memberZones cuts member k where it crosses zone edges, takes the
@@ -77,17 +128,10 @@ func (g *grouper) assignZones() {
 // MaxWallThicknessIn of the member (so an end running into the wall on a
 // zone edge does not count); with none that long, the zone at the
 // midpoint. Pieces outside every outline belong to DefaultZone.
-func (g *grouper) memberZones(k int, zs []zoneGeom) {
+func (g *grouper) memberZones(k int, zs []zoneGeom, idx *zoneIndex) {
 	m := &g.plan.Members[k]
 	a, b := m.Start, m.End
-	var cand []int
-	for i := range zs {
-		z := &zs[i]
-		if math.Max(a.X, b.X) >= z.lo.X && math.Min(a.X, b.X) <= z.hi.X &&
-			math.Max(a.Y, b.Y) >= z.lo.Y && math.Min(a.Y, b.Y) <= z.hi.Y {
-			cand = append(cand, i)
-		}
-	}
+	cand := idx.candidates(zs, a, b)
 	ts := []float64{0, 1}
 	d := sub(b, a)
 	for _, i := range cand {
