@@ -148,9 +148,15 @@ func calloutReachIn(t textItem) float64 { return math.Max(12, 3*t.heightIn) }
 // lies over (within 24 in).
 func (g *grouper) calloutMembers(t textItem) []int {
 	best, bi := calloutReachIn(t), -1
-	for i, l := range g.labelLines {
-		if d := distPointSeg(t.p, l.a, l.b); d <= best {
-			best, bi = d, i
+	if li := g.labelIndex(); li != nil {
+		var near []int
+		li.query(t.p, t.p, best, func(i int) { near = append(near, i) })
+		sort.Ints(near) // ties go to the last line, as in drawing order
+		for _, i := range near {
+			l := g.labelLines[i]
+			if d := distPointSeg(t.p, l.a, l.b); d <= best {
+				best, bi = d, i
+			}
 		}
 	}
 	idx := g.memberIndex()
@@ -197,6 +203,18 @@ func (g *grouper) crossAt(k int, a, b Point) (float64, bool) {
 		return 0, false
 	}
 	return t, true
+}
+
+// labelIndex is a grid over the label lines, built on first use.
+func (g *grouper) labelIndex() *segIndex {
+	if g.lblIdx == nil && len(g.labelLines) > 0 {
+		lo, hi, typ := bounds(g.labelLines)
+		g.lblIdx = newSegIndex(lo, hi, len(g.labelLines), typ)
+		for i, l := range g.labelLines {
+			g.lblIdx.insert(i, l.a, l.b, 0)
+		}
+	}
+	return g.lblIdx
 }
 
 func (g *grouper) memberIndex() *segIndex {

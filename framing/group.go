@@ -71,6 +71,7 @@ type grouper struct {
 
 	supIdx *segIndex
 	memIdx *segIndex
+	lblIdx *segIndex
 
 	direct, outer []hit // scratch for bearingsFrom
 	carried       []hit // flush beams framing into the current member
