@@ -3,7 +3,7 @@ package framing
 import (
 	"fmt"
 	"math"
-	"strings"
+	"strconv"
 )
 
 // markKey is what makes two members identical for design (DOMAIN.md
@@ -14,26 +14,46 @@ import (
 // key because an edge joist carries less load than its interior
 // neighbours at the same spacing.
 func markKey(m *Member) string {
-	var b strings.Builder
-	fmt.Fprintf(&b, "%s|%s|%s|", m.Size, m.Species, m.Grade)
+	b := make([]byte, 0, 128)
+	num := func(v float64, sep byte) {
+		b = strconv.AppendFloat(b, v, 'g', -1, 64) // as %g
+		b = append(b, sep)
+	}
+	b = append(b, m.Size...)
+	b = append(b, '|')
+	b = append(b, m.Species...)
+	b = append(b, '|')
+	b = append(b, m.Grade...)
+	b = append(b, '|')
 	for _, s := range m.Spans() {
-		fmt.Fprintf(&b, "%g,", math.Ceil(s-1e-6))
+		num(math.Ceil(s-1e-6), ',')
 	}
-	fmt.Fprintf(&b, "|%g|%g|", math.Ceil(m.OverhangStartIn-1e-6), math.Ceil(m.OverhangEndIn-1e-6))
-	fmt.Fprintf(&b, "%g|%g|", math.Round(m.SpacingIn*2)/2, math.Round(m.TribIn*2)/2)
-	fmt.Fprintf(&b, "%s|", strings.Join(m.Zones, ","))
+	b = append(b, '|')
+	num(math.Ceil(m.OverhangStartIn-1e-6), '|')
+	num(math.Ceil(m.OverhangEndIn-1e-6), '|')
+	num(math.Round(m.SpacingIn*2)/2, '|')
+	num(math.Round(m.TribIn*2)/2, '|')
+	for i, z := range m.Zones {
+		if i > 0 {
+			b = append(b, ',')
+		}
+		b = append(b, z...)
+	}
+	b = append(b, '|')
 	for _, br := range m.Bearings {
-		fmt.Fprintf(&b, "%s:%g,", br.Kind, math.Round(br.LengthIn*4)/4)
+		b = append(b, br.Kind...)
+		b = append(b, ':')
+		num(math.Round(br.LengthIn*4)/4, ',')
 	}
-	b.WriteString("|")
+	b = append(b, '|')
 	ref := 0.0
 	if len(m.Bearings) > 0 {
 		ref = m.Bearings[0].AtIn
 	}
 	for _, at := range m.ExistingBlockingAtIn {
-		fmt.Fprintf(&b, "%g,", math.Round(at-ref))
+		num(math.Round(at-ref), ',')
 	}
-	return b.String()
+	return string(b)
 }
 
 // AssignMarks names groups of members identical for design J1, J2, ...
