@@ -1,6 +1,7 @@
 package dxfimport
 
 import (
+	"fmt"
 	"math"
 	"strings"
 )
@@ -54,8 +55,12 @@ func (r *reader) add(e *Entity) {
 
 // hitLimit reports the entity limit once.
 func (r *reader) hitLimit(pos Pos, n int) {
+	adds := fmt.Sprint(n)
+	if n > HardMaxEntities { // the count saturated (satMul, satAdd)
+		adds = fmt.Sprintf("more than %d", HardMaxEntities)
+	}
 	r.warnOnce("limit", pos, "DXF105", SevError,
-		"the drawing would hold more than %d entities (this one adds %d); the rest is left out", r.opt.MaxEntities, n)
+		"the drawing would hold more than %d entities (this one adds %s); the rest is left out", r.opt.MaxEntities, adds)
 }
 
 // workBudget is how many block copies expand may place in one Read: room

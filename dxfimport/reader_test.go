@@ -211,6 +211,16 @@ func TestInsertProblems(t *testing.T) {
 		if len(d.Entities) != 1 || i == nil || i.Severity != SevError || i.Pos.Handle != "2B" || d.Issues.Err() == nil {
 			t.Errorf("got %d entities, issue %+v", len(d.Entities), i)
 		}
+		// 30000 x 30000 copies pass the count's ceiling: the message says
+		// "more than", not a made-up number.
+		if want := fmt.Sprintf("this one adds more than %d)", HardMaxEntities); !strings.Contains(i.Msg, want) {
+			t.Errorf("message %q, want %q", i.Msg, want)
+		}
+		// Below the ceiling the count is exact: 40 x 40 copies of one line.
+		small := blocks + section("ENTITIES", dxf(0, "INSERT", 5, "2D", 8, "L", 2, "BIG", 70, 40, 71, 40, 44, 1, 45, 1)) + dxf(0, "EOF")
+		if i := findIssue(read(t, small, Options{Units: "in", MaxEntities: 1000}), "DXF105"); i == nil || !strings.Contains(i.Msg, "this one adds 1600)") {
+			t.Errorf("issue %+v, want DXF105 saying it adds 1600", i)
+		}
 		// Without a caller limit the hard limit still applies.
 		d = read(t, in, Options{Units: "in"})
 		if findIssue(d, "DXF105") == nil {
