@@ -11,6 +11,7 @@ import (
 	"sort"
 	"strconv"
 	"strings"
+	"sync"
 	"text/tabwriter"
 	"time"
 
@@ -342,22 +343,43 @@ func (c *checkRun) write(o *outcome, res *export.Results, stderr io.Writer) (wri
 		staged = append(staged, name)
 		return nil
 	}
-	if err := add(names[0], export.WriteJSON(filepath.Join(stage, names[0]), res)); err != nil {
-		return nil, err
-	}
-	if err := add(names[1], export.WriteXLSX(filepath.Join(stage, names[1]), res)); err != nil {
-		return nil, err
-	}
-	if err := add(names[4], export.WriteReport(filepath.Join(stage, names[4]), res, planGeometry(o), time.Now())); err != nil {
-		return nil, err
-	}
 	toInch := o.drawing.ToInch
 	if toInch <= 0 {
 		toInch = 1
 	}
 	mk := export.MarkupFromResults(res, toInch)
+	// The four outputs only read res and the plan: write them at once,
+	// one goroutine each, then take their errors in this order, as when
+	// they were written one after another.
+	jobs := []func() error{
+		func() error { return export.WriteJSON(filepath.Join(stage, names[0]), res) },
+		func() error { return export.WriteXLSX(filepath.Join(stage, names[1]), res) },
+		func() error {
+			return export.WriteReport(filepath.Join(stage, names[4]), res, planGeometry(o), time.Now())
+		},
+		func() error { return export.Annotate(c.planPath, filepath.Join(stage, names[2]), mk) },
+	}
+	errs := make([]error, len(jobs))
+	var wg sync.WaitGroup
+	for i, job := range jobs {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			errs[i] = job()
+		}()
+	}
+	wg.Wait()
+	if err := add(names[0], errs[0]); err != nil {
+		return nil, err
+	}
+	if err := add(names[1], errs[1]); err != nil {
+		return nil, err
+	}
+	if err := add(names[4], errs[2]); err != nil {
+		return nil, err
+	}
 	overlay := c.overlay
-	aerr := export.Annotate(c.planPath, filepath.Join(stage, names[2]), mk)
+	aerr := errs[3]
 	var dxfErr *export.DXFError
 	switch {
 	case errors.As(aerr, &dxfErr):
