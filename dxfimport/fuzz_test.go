@@ -10,7 +10,6 @@ import (
 	"strconv"
 	"strings"
 	"testing"
-	"unicode/utf8"
 )
 
 // writeSubset writes the LINE and LWPOLYLINE entities of d as a minimal
@@ -40,7 +39,7 @@ func writeSubset(w io.Writer, d *Drawing) error {
 			continue
 		}
 		if e.Pos.Handle != "" {
-			pair(5, escapeString(e.Pos.Handle))
+			pair(5, e.Pos.Handle) // the reader keeps handles raw: no escapes
 		}
 		pair(8, escapeString(e.Pos.Layer))
 		if e.Kind == KindLine {
@@ -70,23 +69,14 @@ func writeSubset(w io.Writer, d *Drawing) error {
 	return err
 }
 
-// escapeString writes s so that the reader reads it back as s. A byte
-// that is not UTF-8 (possible in a handle, which the reader keeps raw) is
-// written as it is: ranging over the string would turn it into U+FFFD
-// (found by FuzzRead: testdata/fuzz/FuzzRead/fcb6c05e4db8ed92).
 func escapeString(s string) string {
 	var sb strings.Builder
-	for i := 0; i < len(s); {
-		r, n := utf8.DecodeRuneInString(s[i:])
-		switch {
-		case r == utf8.RuneError && n == 1:
-			sb.WriteByte(s[i])
-		case r < 0x20 || r == 0x7f || r == '\\':
+	for _, r := range s {
+		if r < 0x20 || r == 0x7f || r == '\\' {
 			fmt.Fprintf(&sb, `\U+%04X`, r)
-		default:
+		} else {
 			sb.WriteRune(r)
 		}
-		i += n
 	}
 	return sb.String()
 }
