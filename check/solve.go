@@ -152,9 +152,24 @@ func (e *engine) baseResult() Result {
 	return r
 }
 
-// factorTrace lists the adjustment factors used.
+// factorTrace lists the adjustment factors used. Members of one size,
+// grade and load set share the list, so it is built once and handed out
+// again (see factorCache); callers must not modify it.
 func (e *engine) factorTrace() []TraceItem {
-	t := e.arena.tracer(12 + len(e.comboCDs))
+	key := factorKey{cm: e.cm, ct: e.ct, cf: e.cf, ci: e.ci, cr: e.cr,
+		sec: e.sec.Name, rule: e.dv.SizeFactor, temp: tempName(e.s.Temperature)}
+	if items, ok := factorCache.lookup(key, e.comboCDs); ok {
+		return items
+	}
+	items := e.buildFactorTrace()
+	factorCache.store(key, e.comboCDs, items)
+	return items
+}
+
+// buildFactorTrace writes the factor list out; its items own their memory
+// (not the engine's arena), since the list is shared between results.
+func (e *engine) buildFactorTrace() []TraceItem {
+	t := tracer{items: make([]TraceItem, 0, 12+len(e.comboCDs))}
 	for _, c := range e.comboCDs {
 		t.add("CD", c.cd, "", c.name, "", "NDS 2018 2.3.2, Table 2.3.2: shortest-duration load of the combination")
 	}
