@@ -10,7 +10,7 @@ import (
 // source: a cache must not change a result).
 func TestFactorTraceCache(t *testing.T) {
 	m := Member{ID: "F1", Size: "2x10", Species: "DF-L", Grade: "No.2", LengthIn: 144,
-		Bearings: []Bearing{{AtIn: 0, LengthIn: 3.5}, {AtIn: 144, LengthIn: 3.5}},
+		Bearings:  []Bearing{{AtIn: 0, LengthIn: 3.5}, {AtIn: 144, LengthIn: 3.5}},
 		SpacingIn: 16, TribIn: 16, Use: "floor", Loads: AreaLoads{DeadPsf: 12, LivePsf: 40},
 		LiveLimit: 360, TotalLimit: 240, Repetitive: true}
 	s := DefaultSettings()
