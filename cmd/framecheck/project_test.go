@@ -60,12 +60,14 @@ func TestProjectErrors(t *testing.T) {
 		{"empty list", "[layers]\n∑joists = []\n", "layers.joists", []string{"at least one"}},
 		{"zero snap", "[drawing]\n∑snap_tolerance_in = 0\n", "drawing.snap_tolerance_in", []string{"greater than 0", "got 0"}},
 		{"nan snap", "[drawing]\n∑snap_tolerance_in = nan\n", "drawing.snap_tolerance_in", []string{"greater than 0"}},
-		{"negative edge", "[drawing]\n∑edge_distance_in = -1\n", "drawing.edge_distance_in", []string{"0 or more", "got -1"}},
+		{"negative edge", "[drawing]\n∑edge_distance_in = -1\n", "drawing.edge_distance_in", []string{"from 0 to 48", "got -1"}},
 		{"negative load", "[[zone]]\nname = \"A\"\n[[zone]]\nname = \"FLOOR\"\n∑dead_psf = -5\n",
-			"zone.dead_psf", []string{"0 or more (psf)"}},
-		{"kcr below 1", "[design]\n∑kcr = 0.9\n", "design.kcr", []string{"at least 1"}},
+			"zone.dead_psf", []string{"from 0 to 1000 (psf)"}},
+		{"kcr below 1", "[design]\n∑kcr = 0.9\n", "design.kcr", []string{"from 1 to 3"}},
+		{"absurd load", "[[zone]]\nname = \"FLOOR\"\n∑live_psf = 1e300\n", "zone.live_psf", []string{"from 0 to 1000 (psf)", "got 1e+300"}},
+		{"absurd snap tolerance", "[drawing]\n∑snap_tolerance_in = 1e300\n", "drawing.snap_tolerance_in", []string{"at most 24"}},
 		{"limit between 0 and 1", "[[zone]]\nname = \"A\"\n∑live_deflection_limit = 0.5\n",
-			"zone.live_deflection_limit", []string{"0 (not checked) or at least 1"}},
+			"zone.live_deflection_limit", []string{"0 (not checked) or from 1 to 10000"}},
 		{"zero bearing", "[[support]]\nlayers = [\"W*\"]\n∑bearing_in = 0\n", "support.bearing_in", []string{"greater than 0"}},
 		{"bad unit", "[drawing]\n∑units = \"yd\"\n", "drawing.units", []string{`"in" | "ft" | "mm" | "cm" | "m"`, `"yd"`}},
 		{"bad kind", "[[support]]\nlayers = [\"P*\"]\n∑kind = \"post\"\n", "support.kind", []string{`"bearing-wall" | "dropped-beam" | "flush-beam" | "ledger"`}},
@@ -98,8 +100,8 @@ func TestProjectErrors(t *testing.T) {
 		{"pattern in a role and a default support", "[layers]\n∑joists = [\"WALL*\"]\n",
 			"layers.joists", []string{`"WALL*" is also in [[support]] 1 (bearing-wall) (a default)`}},
 		{"inline table", "∑drawing = { snap_tolerance_in = -1 }\n", "drawing.snap_tolerance_in", []string{"greater than 0"}},
-		{"dotted key", "∑drawing.edge_distance_in = -2\n", "drawing.edge_distance_in", []string{"0 or more"}},
-		{"quoted key", "[drawing]\n∑\"edge_distance_in\" = -2\n", "drawing.edge_distance_in", []string{"0 or more"}},
+		{"dotted key", "∑drawing.edge_distance_in = -2\n", "drawing.edge_distance_in", []string{"from 0 to 48"}},
+		{"quoted key", "[drawing]\n∑\"edge_distance_in\" = -2\n", "drawing.edge_distance_in", []string{"from 0 to 48"}},
 	}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
@@ -146,7 +148,7 @@ func TestProjectSyntaxError(t *testing.T) {
 func TestProjectErrorsAll(t *testing.T) {
 	in := "[design]\nkcr = 0\n[drawing]\nsnap = 1\nunits = \"yd\"\n"
 	_, err := ParseProject("p.toml", []byte(in))
-	want := "p.toml:2: design.kcr: must be at least 1 (creep factor), got 0\n" +
+	want := "p.toml:2: design.kcr: must be from 1 to 3 (creep factor), got 0\n" +
 		"p.toml:4: drawing.snap: unknown key in [drawing]; did you mean snap_tolerance_in?\n" +
 		"p.toml:5: drawing.units: expected one of \"in\" | \"ft\" | \"mm\" | \"cm\" | \"m\", got string \"yd\""
 	if err == nil || err.Error() != want {

@@ -2,7 +2,6 @@ package main
 
 import (
 	"fmt"
-	"math"
 	"sort"
 	"strconv"
 	"strings"
@@ -138,32 +137,40 @@ func fmtList(l []string) string {
 
 // Range checks for numeric keys: each returns "" when x is allowed, else
 // the allowed range.
-func positive(x float64) string {
-	if x > 0 && !math.IsInf(x, 1) {
-		return ""
+//
+// between returns a rule for a value from lo to hi: the upper bounds keep
+// out values no joist plan has (a typing slip such as 1e300 psf), which
+// would otherwise give nonsense rather than an error (common practice, no
+// source: each bound is far above anything a wood joist floor or roof
+// carries, or a drawing tolerance needs).
+func between(lo, hi float64, loIncluded bool) func(float64) string {
+	return func(x float64) string {
+		okLo := x > lo || (loIncluded && x == lo)
+		if okLo && x <= hi {
+			return ""
+		}
+		if loIncluded {
+			return fmt.Sprintf("must be from %s to %s", fmtNum(lo), fmtNum(hi))
+		}
+		return fmt.Sprintf("must be greater than %s and at most %s", fmtNum(lo), fmtNum(hi))
 	}
-	return "must be greater than 0"
 }
 
-func nonNegative(x float64) string {
-	if x >= 0 && !math.IsInf(x, 1) {
-		return ""
-	}
-	return "must be 0 or more"
-}
-
-func atLeastOne(x float64) string {
-	if x >= 1 && !math.IsInf(x, 1) {
-		return ""
-	}
-	return "must be at least 1"
-}
+// Upper bounds of project-file numbers (see between).
+var (
+	loadRule      = between(0, 1000, true) // psf
+	toleranceRule = between(0, 24, false)  // in: snap tolerance
+	thicknessRule = between(0, 48, false)  // in: wall thickness, bearing length
+	edgeRule      = between(0, 48, true)   // in
+	kcrRule       = between(1, 3, true)    // NDS 2018 3.5.2 uses 1.5 and 2.0
+	weightRule    = between(0, 100, true)  // board feet per blocking piece
+)
 
 func deflectionLimit(x float64) string {
-	if x == 0 || x >= 1 && !math.IsInf(x, 1) {
+	if x == 0 || x >= 1 && x <= 10000 {
 		return ""
 	}
-	return "must be 0 (not checked) or at least 1"
+	return "must be 0 (not checked) or from 1 to 10000"
 }
 
 // sizeCheck reads a nominal size as check.ParseSize does ("2x10",

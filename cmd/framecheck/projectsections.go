@@ -33,9 +33,9 @@ func (ld *loader) drawing(t *table) {
 		ld.get(t, "units", "")
 		ld.p.defaults = append(ld.p.defaults, "drawing.units: from the DXF header ($INSUNITS)")
 	}
-	ld.num(t, "snap_tolerance_in", "in", &d.SnapToleranceIn, positive)
-	ld.num(t, "max_wall_thickness_in", "in", &d.MaxWallThicknessIn, positive)
-	ld.num(t, "edge_distance_in", "in", &d.EdgeDistanceIn, nonNegative)
+	ld.num(t, "snap_tolerance_in", "in", &d.SnapToleranceIn, toleranceRule)
+	ld.num(t, "max_wall_thickness_in", "in", &d.MaxWallThicknessIn, thicknessRule)
+	ld.num(t, "edge_distance_in", "in", &d.EdgeDistanceIn, edgeRule)
 }
 
 func (ld *loader) layers(t *table) {
@@ -67,7 +67,7 @@ func (ld *loader) supports(root *table) {
 		ld.list(t, "layers", &s.Layers, nil)
 		ld.enum(t, "kind", &s.Kind, supportKinds)
 		s.BearingIn = defaultBearingIn[s.Kind]
-		ld.num(t, "bearing_in", "in", &s.BearingIn, positive)
+		ld.num(t, "bearing_in", "in", &s.BearingIn, thicknessRule)
 		ld.p.Supports = append(ld.p.Supports, s)
 	}
 }
@@ -166,7 +166,7 @@ func (ld *loader) design(t *table) {
 		d.Kcr = 2.0
 		ld.p.defaults = append(ld.p.defaults, "design.kcr = 2 (wet service, NDS 2018 §3.5.2)")
 	} else {
-		ld.num(t, "kcr", "creep factor", &d.Kcr, atLeastOne)
+		ld.num(t, "kcr", "creep factor", &d.Kcr, kcrRule)
 	}
 	ld.boolean(t, "add_self_weight", &d.AddSelfWeight)
 	ld.combinations(t, &d.Combinations)
@@ -235,12 +235,12 @@ func (ld *loader) zones(root *table) {
 		} else {
 			z.LivePsf = floorLiveDefaultPsf
 		}
-		ld.num(t, "dead_psf", "psf", &z.DeadPsf, nonNegative)
-		ld.num(t, "live_psf", "psf", &z.LivePsf, nonNegative)
-		ld.num(t, "roof_live_psf", "psf", &z.RoofLivePsf, nonNegative)
-		ld.num(t, "snow_psf", "psf", &z.SnowPsf, nonNegative)
-		ld.num(t, "wind_down_psf", "psf", &z.WindDownPsf, nonNegative)
-		ld.num(t, "wind_up_psf", "psf", &z.WindUpPsf, nonNegative)
+		ld.num(t, "dead_psf", "psf", &z.DeadPsf, loadRule)
+		ld.num(t, "live_psf", "psf", &z.LivePsf, loadRule)
+		ld.num(t, "roof_live_psf", "psf", &z.RoofLivePsf, loadRule)
+		ld.num(t, "snow_psf", "psf", &z.SnowPsf, loadRule)
+		ld.num(t, "wind_down_psf", "psf", &z.WindDownPsf, loadRule)
+		ld.num(t, "wind_up_psf", "psf", &z.WindUpPsf, loadRule)
 		ld.enum(t, "ceiling", &z.Ceiling, ceilingValues)
 		ld.boolean(t, "ceiling_braces_bottom", &z.CeilingBracesBottom)
 		z.LiveDeflectionLimit, z.TotalDeflectionLimit = deflectionLimits(z.Use, z.Ceiling)
@@ -300,7 +300,7 @@ func (ld *loader) sizing(t *table) {
 	s := &ld.p.Sizing
 	*s = Sizing{Candidates: []string{"2x6", "2x8", "2x10", "2x12", "2x14"}, BlockingPieceWeightBf: 2}
 	ld.list(t, "candidates", &s.Candidates, sizeCheck)
-	ld.num(t, "blocking_piece_weight_bf", "board feet", &s.BlockingPieceWeightBf, nonNegative)
+	ld.num(t, "blocking_piece_weight_bf", "board feet", &s.BlockingPieceWeightBf, weightRule)
 }
 
 // patternOwners reports a layer pattern that belongs to two roles: two
