@@ -138,26 +138,15 @@ func forSizes(b *testing.B, bench func(b *testing.B, n int)) {
 // BenchmarkCheckRun is the whole `framecheck check PLAN -p PROJECT -o DIR`:
 // read, group, check, blocking rows, marks, takeoff, results.json,
 // schedule.xlsx, report.html and the annotated DXF.
-func BenchmarkCheckRun(b *testing.B) {
-	forSizes(b, func(b *testing.B, n int) {
-		dir := b.TempDir()
-		p := writeBigPlan(b, dir, n, false)
-		out := filepath.Join(dir, "out")
-		b.ResetTimer()
-		for b.Loop() {
-			if code := run([]string{"check", p.dxf, "-p", p.toml, "-o", out}, io.Discard, io.Discard); code == exitUsage {
-				b.Fatalf("check exit %d", code)
-			}
-		}
-		perJoist(b, n)
-	})
-}
+func BenchmarkCheckRun(b *testing.B) { benchCheckRun(b, false) }
 
 // BenchmarkCheckRunR12 is BenchmarkCheckRun on the R12 flavour.
-func BenchmarkCheckRunR12(b *testing.B) {
+func BenchmarkCheckRunR12(b *testing.B) { benchCheckRun(b, true) }
+
+func benchCheckRun(b *testing.B, r12 bool) {
 	forSizes(b, func(b *testing.B, n int) {
 		dir := b.TempDir()
-		p := writeBigPlan(b, dir, n, true)
+		p := writeBigPlan(b, dir, n, r12)
 		out := filepath.Join(dir, "out")
 		b.ResetTimer()
 		for b.Loop() {
