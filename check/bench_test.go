@@ -34,10 +34,37 @@ func benchCheck(b *testing.B, m Member, s Settings, want string) {
 
 // BenchmarkCheckMember is one complete member check with the blocking
 // solver: a roof joist under net uplift whose bottom edge needs three rows
-// (each iteration runs the analysis, every check, the solver's four
-// bottom-edge evaluations, and builds every trace).
+// (each iteration runs the analysis, every check and the solver's four
+// bottom-edge evaluations, and records each check's governing numbers, from
+// which CheckResult.Trace writes the trace when asked).
 func BenchmarkCheckMember(b *testing.B) {
 	benchCheck(b, upliftRafter("2x10"), DefaultSettings(), StatusPass)
+}
+
+// BenchmarkCheckMemberTraced is BenchmarkCheckMember plus writing every
+// trace out as text, as a writer does once per distinct result.
+func BenchmarkCheckMemberTraced(b *testing.B) {
+	m, s := upliftRafter("2x10"), DefaultSettings()
+	b.ReportAllocs()
+	c0 := cpuNs()
+	n, chars := 0, 0
+	var buf []byte
+	for b.Loop() {
+		r := CheckMember(m, s)
+		for _, c := range r.Checks {
+			for _, it := range c.Trace() {
+				buf = it.Subst.Append(buf[:0])
+				chars += len(it.Symbol) + len(it.Formula) + len(it.Ref) + len(buf)
+			}
+		}
+		n++
+	}
+	if chars == 0 {
+		b.Fatal("no trace text")
+	}
+	if c := cpuNs() - c0; c > 0 && n > 0 {
+		b.ReportMetric(1e9*float64(n)/float64(c), "checks/cpu-s")
+	}
 }
 
 // BenchmarkCheckMemberFloor is a simple-span floor joist (no rows needed).

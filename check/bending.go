@@ -184,44 +184,31 @@ func (ev edgeEval) passes() bool {
 // ratioTol absorbs rounding in "ratio <= 1.000".
 const ratioTol = 1e-9
 
-// bendingResult writes an edge's governing result as a CheckResult with
-// its trace.
+// bendingResult writes an edge's governing result as a CheckResult,
+// recording its numbers for the trace.
 func (e *engine) bendingResult(kind string, ev edgeEval) CheckResult {
 	c := &e.cases[ev.ci]
 	fb := ev.mLbIn / e.sec.SIn3
 	fbAdj := ev.fbStar * ev.cl
-	n := 13
-	if ev.iv.braced {
-		n = 7
+	slot := 0
+	if kind == KindBendingBottom {
+		slot = 1
 	}
-	t := e.arena.tracer(n)
-	t.add("M", ev.mLbIn, "lb-in", "largest moment compressing this edge, governing case", "", refAnalysis)
-	t.add("S", e.sec.SIn3, "in^3", "b d^2 / 6", t.f("%s(%s)^2 / 6", e.sec.BIn, e.sec.DIn), "NDS 2018 Supplement Table 1B")
-	t.add("fb", fb, "psi", "M / S", t.f("%s / %s", ev.mLbIn, e.sec.SIn3), "NDS 2018 3.3.2")
-	t.add("Fb*", ev.fbStar, "psi", "Fb CD CM Ct CF Ci Cr",
-		t.f("%s(%s)(%s)(%s)(%s)(%s)(%s)", e.dv.FbPsi, c.cd, e.cm.Fb, e.ct.Fb, e.cf.Fb, e.ci.Fb, e.cr), "NDS 2018 3.3.3.8, Table 4.3.1")
-	if ev.iv.braced {
-		t.add("CL", 1, "", "edge braced continuously", "", "NDS 2018 3.3.3.3")
-	} else {
-		iv := ev.iv
-		t.add("lu", iv.luIn, "in", "distance between bracing points", t.f("%s - %s", iv.b+e.x0, iv.a+e.x0), "NDS 2018 3.3.3.4")
-		t.add("lu/d", iv.luIn/e.sec.DIn, "", "lu / d", t.f("%s / %s", iv.luIn, e.sec.DIn), "NDS 2018 Table 3.3.3")
-		f := leFormulas[iv.leFormula]
-		t.add("le", iv.leIn, "in", f, leSubst(&t, f, iv.luIn, e.sec.DIn), leRefs[iv.kind])
-		t.add("RB", iv.rb, "", "sqrt(le d / b^2)", t.f("sqrt(%s(%s) / %s^2)", iv.leIn, e.sec.DIn, e.sec.BIn), "NDS 2018 Eq. 3.3-5")
-		t.add("Emin'", e.eminAdj, "psi", "Emin CM Ct Ci", t.f("%s(%s)(%s)(%s)", e.dv.EminPsi, e.cm.E, e.ct.E, e.ci.E), "NDS 2018 Table 4.3.1")
-		t.add("FbE", iv.fbEPsi, "psi", "1.20 Emin' / RB^2", t.f("1.20(%s) / %s^2", e.eminAdj, iv.rb), "NDS 2018 3.3.3.8")
-		a := iv.fbEPsi / ev.fbStar
-		t.add("CL", ev.cl, "", "(1 + FbE/Fb*)/1.9 - sqrt(((1 + FbE/Fb*)/1.9)^2 - (FbE/Fb*)/0.95)",
-			t.f("(1 + %s)/1.9 - sqrt(((1 + %s)/1.9)^2 - %s/0.95)", a, a, a), "NDS 2018 Eq. 3.3-6")
+	e.rc.bend[slot] = bendRec{mLbIn: ev.mLbIn, cd: c.cd, fbStar: ev.fbStar, cl: ev.cl, iv: ev.iv}
+	return CheckResult{Kind: kind, Combo: e.caseLabel(c), Actual: fb, Allowable: fbAdj, Unit: "psi", Ratio: fb / fbAdj, calc: e.rc}
+}
+
+// bendingTraceLen is the number of trace items of a bending check whose
+// governing stretch is iv.
+func bendingTraceLen(iv interval) int {
+	if iv.braced {
+		return 7
 	}
-	t.add("Fb'", fbAdj, "psi", "Fb* CL Cfu", t.f("%s(%s)(1.0)", ev.fbStar, ev.cl), "NDS 2018 Table 4.3.1")
-	t.add("fb/Fb'", fb/fbAdj, "", "fb / Fb'", t.f("%s / %s", fb, fbAdj), "NDS 2018 3.3.1")
-	return CheckResult{Kind: kind, Combo: e.caseLabel(c), Actual: fb, Allowable: fbAdj, Unit: "psi", Ratio: fb / fbAdj, Trace: t.items}
+	return 13
 }
 
 // leSubst writes the numbers into an effective-length formula.
-func leSubst(t *tracer, formula string, lu, d float64) string {
+func leSubst(t *tracer, formula string, lu, d float64) Subst {
 	switch formula {
 	case "2.06 lu":
 		return t.f("2.06(%s)", lu)
@@ -234,7 +221,7 @@ func leSubst(t *tracer, formula string, lu, d float64) string {
 	case "0.90 lu + 3 d":
 		return t.f("0.90(%s) + 3(%s)", lu, d)
 	}
-	return ""
+	return Subst{}
 }
 
 // spanRows returns the positions (member coordinates) of n evenly spaced

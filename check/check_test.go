@@ -27,7 +27,7 @@ func find(t *testing.T, r Result, kind string) CheckResult {
 
 func traceValue(t *testing.T, c CheckResult, sym string) float64 {
 	t.Helper()
-	for _, ti := range c.Trace {
+	for _, ti := range c.Trace() {
 		if ti.Symbol == sym {
 			return ti.Value
 		}

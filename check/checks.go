@@ -52,17 +52,8 @@ func (e *engine) shearCheck() CheckResult {
 	}
 	c := &e.cases[bestCI]
 	fv := 1.5 * bestV / e.sec.AreaIn2
-	t := e.arena.tracer(5)
-	where := "at the centre-line of bearing " + strconv.Itoa(bestJ+1)
-	if e.s.ShearAtD {
-		where = "at d from the face of bearing " + strconv.Itoa(bestJ+1)
-	}
-	t.add("V", bestV, "lb", "largest shear "+where, "", refAnalysis)
-	t.add("A", e.sec.AreaIn2, "in^2", "b d", t.f("%s(%s)", e.sec.BIn, e.sec.DIn), "NDS 2018 Supplement Table 1B")
-	t.add("fv", fv, "psi", "1.5 V / A", t.f("1.5(%s) / %s", bestV, e.sec.AreaIn2), "NDS 2018 Eq. 3.4-2")
-	t.add("Fv'", bestFv, "psi", "Fv CD CM Ct Ci", t.f("%s(%s)(%s)(%s)(%s)", e.dv.FvPsi, c.cd, e.cm.Fv, e.ct.Fv, e.ci.Fv), "NDS 2018 Table 4.3.1")
-	t.add("fv/Fv'", fv/bestFv, "", "fv / Fv'", t.f("%s / %s", fv, bestFv), "NDS 2018 3.4.1")
-	return CheckResult{Kind: KindShear, Combo: e.caseLabel(c), Actual: fv, Allowable: bestFv, Unit: "psi", Ratio: fv / bestFv, Trace: t.items}
+	e.rc.shear = shearRec{vLb: bestV, cd: c.cd, fvAdjPsi: bestFv, bearing: bestJ}
+	return CheckResult{Kind: KindShear, Combo: e.caseLabel(c), Actual: fv, Allowable: bestFv, Unit: "psi", Ratio: fv / bestFv, calc: e.rc}
 }
 
 // bearingCheck returns the bearing check: fc_perp = R / (b lb) at each
@@ -98,9 +89,8 @@ func (e *engine) bearingCheck() (CheckResult, []string) {
 			}
 		}
 		if rMin < 0 {
-			t := e.arena.tracer(0)
-			info = append(info, t.f("bearing "+strconv.Itoa(j+1)+" at %s in: net uplift reaction %s lb under "+
-				e.caseLabel(&e.cases[ciMin])+"; hold it down", b.AtIn, -rMin))
+			info = append(info, (&tracer{}).f("bearing "+strconv.Itoa(j+1)+" at %s in: net uplift reaction %s lb under "+
+				e.caseLabel(&e.cases[ciMin])+"; hold it down", b.AtIn, -rMin).Text())
 		}
 		edge := math.Min(b.AtIn-b.LengthIn/2, e.m.LengthIn-(b.AtIn+b.LengthIn/2))
 		cb := BearingAreaFactor(b.LengthIn, edge)
@@ -111,20 +101,9 @@ func (e *engine) bearingCheck() (CheckResult, []string) {
 	}
 	b := e.m.Bearings[bestJ]
 	fc := bestR / (e.sec.BIn * b.LengthIn)
-	t := e.arena.tracer(6)
-	t.add("R", bestR, "lb", "largest reaction, at bearing "+strconv.Itoa(bestJ+1), "", refAnalysis)
-	t.add("lb", b.LengthIn, "in", "bearing length", "", "")
-	t.add("fc_perp", fc, "psi", "R / (b lb)", t.f("%s / (%s(%s))", bestR, e.sec.BIn, b.LengthIn), "NDS 2018 3.10.2")
-	if bestCb != 1 {
-		t.add("Cb", bestCb, "", "(lb + 0.375) / lb", t.f("(%s + 0.375) / %s", b.LengthIn, b.LengthIn), "NDS 2018 3.10.4")
-	} else {
-		t.add("Cb", 1, "", "bearing at a member end, or lb >= 6 in", "", "NDS 2018 3.10.4")
-	}
-	t.add("Fc_perp'", bestFc, "psi", "Fc_perp CM Ct Ci Cb",
-		t.f("%s(%s)(%s)(%s)(%s)", e.dv.FcPerpPsi, e.cm.FcPerp, e.ct.FcPerp, e.ci.FcPerp, bestCb), "NDS 2018 Table 4.3.1")
-	t.add("fc_perp/Fc_perp'", fc/bestFc, "", "fc_perp / Fc_perp'", t.f("%s / %s", fc, bestFc), "NDS 2018 3.10.2")
+	e.rc.bear = bearRec{rLb: bestR, lbIn: b.LengthIn, cb: bestCb, fcAdjPsi: bestFc, bearing: bestJ}
 	return CheckResult{Kind: KindBearing, Combo: e.caseLabel(&e.cases[bestCI]), Actual: fc, Allowable: bestFc,
-		Unit: "psi", Ratio: fc / bestFc, Trace: t.items}, info
+		Unit: "psi", Ratio: fc / bestFc, calc: e.rc}, info
 }
 
 // deflWorst is the governing deflection of one service case.
@@ -274,18 +253,12 @@ func (e *engine) deflName(d deflWorst) string {
 }
 
 func (e *engine) deflResult(kind string, d deflWorst) CheckResult {
-	t := e.arena.tracer(5)
 	where := e.segLabel(d.seg)
-	t.add("delta", d.deflIn, "in", "largest deflection of "+where, "", refAnalysis)
-	t.add("E'", e.eAdj, "psi", "E CM Ct Ci", t.f("%s(%s)(%s)(%s)", e.dv.EPsi, e.cm.E, e.ct.E, e.ci.E), "NDS 2018 Table 4.3.1")
+	slot := 0
 	if kind == KindDeflectionTotal {
-		t.add("Kcr", e.kcr, "", "creep factor on D", "", "NDS 2018 3.5.2")
+		slot = 1
 	}
-	if d.cant {
-		t.add("delta_allow", d.allowIn, "in", "2 Lc / limit", t.f("2(%s) / %s", d.spanIn, d.limit), "IBC 2018 Table 1604.3 note h")
-	} else {
-		t.add("delta_allow", d.allowIn, "in", "L / limit", t.f("%s / %s", d.spanIn, d.limit), "IBC 2018 Table 1604.3")
-	}
-	t.add("ratio", d.ratio, "", "delta / delta_allow", t.f("%s / %s", d.deflIn, d.allowIn), "")
-	return CheckResult{Kind: kind, Combo: e.deflName(d) + ", " + where, Actual: d.deflIn, Allowable: d.allowIn, Unit: "in", Ratio: d.ratio, Trace: t.items}
+	e.rc.defl[slot] = deflRec{deflIn: d.deflIn, allowIn: d.allowIn, spanIn: d.spanIn, limit: d.limit, ratio: d.ratio,
+		cant: d.cant, total: kind == KindDeflectionTotal, where: where}
+	return CheckResult{Kind: kind, Combo: e.deflName(d) + ", " + where, Actual: d.deflIn, Allowable: d.allowIn, Unit: "in", Ratio: d.ratio, calc: e.rc}
 }

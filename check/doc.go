@@ -87,29 +87,25 @@
 //
 // # Speed
 //
-// BenchmarkCheckMember (a roof joist under net uplift: analysis, every
-// check with its trace, and the blocking solver's four bottom-edge
-// evaluations) measured 10.1 to 10.3 us of CPU per check in the quietest
-// runs, about 97,000 to 98,500 checks per second on one core of this
-// machine (AMD EPYC, 2 cores shared with other jobs), and 11 to 15 us
-// (66,000 to 87,000 per second) while the load average stood between 5
-// and 11 (go test -bench CheckMember -cpu 1; the cpu-ns/op metric is the
-// process's CPU time, wall-clock ns/op ran from 10 to 250 us with the
-// load). So the target of 100,000 checks/s is just missed for that case:
-// close to half of the time goes into building the traces (some 64 trace
-// items and 100 formatted numbers per result, every Result carrying its
-// full calculation), the rest into the load cases, the deflection solve
-// and the solver's steps. A simple-span floor joist that needs no rows
-// (BenchmarkCheckMemberFloor) measured 6.7 to 7.7 us, 130,000 to 150,000
-// checks per second; a three-span joist with a cantilever under 15
-// live-load patterns (BenchmarkCheckMemberContinuous) 43 to 49 us.
+// A check records the governing numbers of each of its checks and writes
+// the trace (CheckResult.Trace: items, formulas, numbers put in) only when
+// asked; the writers ask once per distinct result. On 2 December 2026, go
+// test -bench CheckMember -cpu 1 on this machine (AMD EPYC, 2 cores shared
+// with other jobs, load average about 1; cpu-ns/op is the process's CPU
+// time):
 //
-// On 2 December 2026, with the factor list shared between results of one
-// size and load set (factorcache.go) and wind patterned like the other
-// live-type loads, the same benchmarks on the same machine (load average
-// about 1) gave: CheckMember 10.3 to 10.9 us, 91,000 to 97,000 checks per
-// second; CheckMemberFloor 6.5 to 7.9 us, 126,000 to 153,000;
-// CheckMemberContinuous 36 to 37 us, 27,000. The 100,000 target is still
-// missed for the uplift case with the solver; what remains is mostly
-// formatting the trace text (tracer.f, appendNum) and allocating it.
+//	BenchmarkCheckMember            6.6-8.8 us, 114,000-151,000 checks/s
+//	BenchmarkCheckMemberTraced      15.6-19.2 us, 52,000-64,000 checks/s
+//	BenchmarkCheckMemberFloor       4.9-5.1 us, 195,000-201,000 checks/s
+//	BenchmarkCheckMemberContinuous  36-42 us, 24,000-28,000 checks/s
+//
+// CheckMember is a roof joist under net uplift: analysis, every check and
+// the blocking solver's four bottom-edge evaluations, so the target of
+// 100,000 complete member checks per second on one core is met. Traced
+// adds writing all 43 trace items with their text (about 90 numbers
+// formatted), which is most of its cost; Floor is a simple-span floor
+// joist that needs no rows; Continuous a three-span joist with a
+// cantilever under 15 live-load patterns. Before the traces were written
+// on demand (commit 0fcca29) CheckMember measured 10.3-14.5 us, 69,000 to
+// 97,000 per second.
 package check

@@ -40,8 +40,8 @@ type engine struct {
 	wUpPli   float64 // wind suction magnitude, lb/in
 
 	cases []strengthCase
-	mMax  float64    // largest |M| of any case, for "is this edge in compression" tolerances
-	arena traceArena // trace items and text of the Result being built
+	mMax  float64     // largest |M| of any case, for "is this edge in compression" tolerances
+	rc    *calcRecord // numbers of the traces of the Result being built
 
 	comboCDs []comboCD       // every non-trivial combination case and its CD, for the report
 	names    []caseNameEntry // caseName cache, kept across pooled uses

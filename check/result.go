@@ -8,7 +8,7 @@ type TraceItem struct {
 	Value   float64 // 113.0
 	Unit    string  // in
 	Formula string  // 1.63 lu + 3 d
-	Subst   string  // 1.63(56.0) + 3(7.25)
+	Subst   Subst   // 1.63(56.0) + 3(7.25), printed by Subst.Text
 	Ref     string  // NDS 2018 Table 3.3.3
 }
 
@@ -30,7 +30,8 @@ type CheckResult struct {
 	Allowable float64 // Fb', Fv', allowed deflection or Fc_perp'
 	Unit      string  // psi or in
 	Ratio     float64 // Actual / Allowable
-	Trace     []TraceItem
+
+	calc *calcRecord // numbers the trace is written from (see Trace)
 }
 
 // BlockingStep is one iteration of the blocking-row solver: rows per span,

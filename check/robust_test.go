@@ -1,8 +1,10 @@
 package check
 
 import (
+	"fmt"
 	"math"
 	"math/rand"
+	"strings"
 	"testing"
 )
 
@@ -77,7 +79,7 @@ func checkFinite(t *testing.T, i int, r Result) {
 	nums = append(nums, r.BlockingAtIn...)
 	for _, c := range r.Checks {
 		nums = append(nums, c.Actual, c.Allowable, c.Ratio)
-		for _, ti := range c.Trace {
+		for _, ti := range c.Trace() {
 			nums = append(nums, ti.Value)
 		}
 	}
@@ -112,7 +114,7 @@ func TestConcurrentChecks(t *testing.T) {
 				i := (g + k) % len(members)
 				r := CheckMember(members[i], DefaultSettings())
 				if r.MaxRatio != want[i].MaxRatio || r.Governing != want[i].Governing || len(r.Checks) != len(want[i].Checks) ||
-					r.Checks[0].Trace[0].Subst != want[i].Checks[0].Trace[0].Subst || r.Checks[0].Combo != want[i].Checks[0].Combo {
+					traceText(r) != traceText(want[i]) || r.Checks[0].Combo != want[i].Checks[0].Combo {
 					msg = "goroutine result differs for " + members[i].Size
 				}
 			}
@@ -123,5 +125,34 @@ func TestConcurrentChecks(t *testing.T) {
 		if msg := <-done; msg != "" {
 			t.Error(msg)
 		}
+	}
+}
+
+// traceText writes every trace item of r out, one per line.
+func traceText(r Result) string {
+	var b strings.Builder
+	for _, c := range r.Checks {
+		for _, it := range c.Trace() {
+			fmt.Fprintf(&b, "%s %s %v %s %s = %s [%s]\n", c.Kind, it.Symbol, it.Value, it.Unit, it.Formula, it.Subst.Text(), it.Ref)
+		}
+	}
+	return b.String()
+}
+
+// TestTraceOutlivesEngine takes a result's trace again after the engine
+// that built it has checked other members: the trace is written from the
+// result's own record, never from pooled memory. Common practice, no
+// source.
+func TestTraceOutlivesEngine(t *testing.T) {
+	r := CheckMember(upliftRafter("2x10"), DefaultSettings())
+	first := traceText(r)
+	if !strings.Contains(first, "bending-bottom le ") || !strings.Contains(first, "= 2.06(") {
+		t.Fatalf("trace lacks the bottom edge's effective length:\n%s", first)
+	}
+	for i := 0; i < 20; i++ {
+		CheckMember(floorJoist("2x8", 150+float64(i), 24), DefaultSettings())
+	}
+	if again := traceText(r); again != first {
+		t.Errorf("trace changed after other checks:\n%s\nwas\n%s", again, first)
 	}
 }

@@ -96,6 +96,8 @@ func (e *engine) result(n int, bot *edgeEval) Result {
 		b := e.evalEdge(false, e.intervals(e.m.BottomBracedContinuous, pts))
 		bot = &b
 	}
+	e.rc = e.newCalcRecord()
+	defer func() { e.rc = nil }()
 	if len(e.cases) == 0 || e.mMax == 0 {
 		r.Info = append(r.Info, "no load on the member: nothing to check")
 	}
@@ -171,19 +173,19 @@ func (e *engine) factorTrace() []TraceItem {
 func (e *engine) buildFactorTrace() []TraceItem {
 	t := tracer{items: make([]TraceItem, 0, 12+len(e.comboCDs))}
 	for _, c := range e.comboCDs {
-		t.add("CD", c.cd, "", c.name, "", "NDS 2018 2.3.2, Table 2.3.2: shortest-duration load of the combination")
+		t.add("CD", c.cd, "", c.name, Subst{}, "NDS 2018 2.3.2, Table 2.3.2: shortest-duration load of the combination")
 	}
-	t.add("CM(Fb)", e.cm.Fb, "", "wet service", "", "NDS 2018 Supplement Table 4A/4B")
-	t.add("CM(Fv)", e.cm.Fv, "", "wet service", "", "NDS 2018 Supplement Table 4A/4B")
-	t.add("CM(Fc_perp)", e.cm.FcPerp, "", "wet service", "", "NDS 2018 Supplement Table 4A/4B")
-	t.add("CM(E)", e.cm.E, "", "wet service", "", "NDS 2018 Supplement Table 4A/4B")
-	t.add("Ct(Fb, Fv, Fc_perp)", e.ct.Fb, "", "temperature", tempName(e.s.Temperature), "NDS 2018 Table 2.3.3")
-	t.add("Ct(E)", e.ct.E, "", "temperature", tempName(e.s.Temperature), "NDS 2018 Table 2.3.3")
-	t.add("CF(Fb)", e.cf.Fb, "", "size factor", e.sec.Name, sizeFactorRef(e.dv.SizeFactor))
-	t.add("Cfu", 1, "", "bending about the strong axis", "", "NDS 2018 4.3.7")
-	t.add("Ci(Fb, Fv)", e.ci.Fb, "", "incising", "", "NDS 2018 Table 4.3.8")
-	t.add("Ci(E)", e.ci.E, "", "incising", "", "NDS 2018 Table 4.3.8")
-	t.add("Cr", e.cr, "", "repetitive member", "", "NDS 2018 4.3.9")
+	t.add("CM(Fb)", e.cm.Fb, "", "wet service", Subst{}, "NDS 2018 Supplement Table 4A/4B")
+	t.add("CM(Fv)", e.cm.Fv, "", "wet service", Subst{}, "NDS 2018 Supplement Table 4A/4B")
+	t.add("CM(Fc_perp)", e.cm.FcPerp, "", "wet service", Subst{}, "NDS 2018 Supplement Table 4A/4B")
+	t.add("CM(E)", e.cm.E, "", "wet service", Subst{}, "NDS 2018 Supplement Table 4A/4B")
+	t.add("Ct(Fb, Fv, Fc_perp)", e.ct.Fb, "", "temperature", lit(tempName(e.s.Temperature)), "NDS 2018 Table 2.3.3")
+	t.add("Ct(E)", e.ct.E, "", "temperature", lit(tempName(e.s.Temperature)), "NDS 2018 Table 2.3.3")
+	t.add("CF(Fb)", e.cf.Fb, "", "size factor", lit(e.sec.Name), sizeFactorRef(e.dv.SizeFactor))
+	t.add("Cfu", 1, "", "bending about the strong axis", Subst{}, "NDS 2018 4.3.7")
+	t.add("Ci(Fb, Fv)", e.ci.Fb, "", "incising", Subst{}, "NDS 2018 Table 4.3.8")
+	t.add("Ci(E)", e.ci.E, "", "incising", Subst{}, "NDS 2018 Table 4.3.8")
+	t.add("Cr", e.cr, "", "repetitive member", Subst{}, "NDS 2018 4.3.9")
 	return t.items
 }
 

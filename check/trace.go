@@ -4,82 +4,108 @@ import (
 	"math"
 	"strconv"
 	"strings"
-	"unsafe"
 )
 
 // refAnalysis is the Ref of trace values taken from the structural
 // analysis (package check/beam) under the check's governing case.
 const refAnalysis = "structural analysis (check/beam), exact for uniform loads"
 
-// tracer collects TraceItems and formats numbers for them.
+// Subst is a substitution line held as its format and numbers: each %s of
+// Format is the next of Nums, printed as appendNum does. A member check
+// records its trace this way and leaves the printing to whoever reads the
+// text (the writers do it once per distinct result), so checking a member
+// costs no text formatting. A Subst without numbers is Format verbatim.
+type Subst struct {
+	Format string
+	Nums   []float64
+}
+
+// Text returns s printed: "1.63(72) + 3(9.25)".
+func (s Subst) Text() string {
+	if len(s.Nums) == 0 {
+		return s.Format
+	}
+	return string(s.Append(make([]byte, 0, len(s.Format)+8*len(s.Nums))))
+}
+
+// String returns s.Text(), so a Subst prints as its text.
+func (s Subst) String() string { return s.Text() }
+
+// Append appends s printed to b.
+func (s Subst) Append(b []byte) []byte {
+	format, i := s.Format, 0
+	for {
+		j := strings.Index(format, "%s")
+		if j < 0 || i >= len(s.Nums) {
+			return append(b, format...)
+		}
+		b = append(b, format[:j]...)
+		b = appendNum(b, s.Nums[i])
+		i++
+		format = format[j+2:]
+	}
+}
+
+// lit is a Subst that is plain text.
+func lit(s string) Subst { return Subst{Format: s} }
+
+// tracer collects TraceItems.
 type tracer struct {
 	items []TraceItem
-	text  *textArena
+	nums  *[]float64 // arena the numbers of Substs are copied into
 }
 
-// textArena holds the text of the substitution strings of one result in
-// few allocations: each string is appended to buf and handed out as a
-// string sharing buf's bytes. Bytes once handed out are never written
-// again (buf only grows, and a full buf is replaced, not reused), which is
-// what makes the unsafe.String view immutable as Go requires.
-type textArena struct {
-	buf []byte
-}
-
-// traceArena hands out trace slices from one allocation per result.
+// traceArena hands out trace items and the numbers of their Substs from
+// few allocations per result. Parts once handed out are never written
+// again (a full slice is replaced, not reused), so results never share
+// memory that changes.
 type traceArena struct {
 	items []TraceItem
-	text  textArena
+	nums  []float64
+}
+
+// reserve makes room for the trace of one result: items trace items and
+// nums numbers of their Substs, so that a result's trace takes one
+// allocation of each kind, sized to fit.
+func (a *traceArena) reserve(items, nums int) {
+	if cap(a.items)-len(a.items) < items {
+		a.items = make([]TraceItem, 0, items)
+	}
+	if cap(a.nums)-len(a.nums) < nums {
+		a.nums = make([]float64, 0, nums)
+	}
 }
 
 // tracer returns a tracer whose items take up to n entries of the arena.
 func (a *traceArena) tracer(n int) tracer {
 	if cap(a.items)-len(a.items) < n {
-		a.items = make([]TraceItem, 0, max(64, n))
+		a.items = make([]TraceItem, 0, max(16, n))
 	}
 	l := len(a.items)
 	a.items = a.items[:l+n]
-	return tracer{items: a.items[l : l : l+n], text: &a.text}
+	return tracer{items: a.items[l : l : l+n], nums: &a.nums}
 }
 
-func (t *tracer) add(sym string, v float64, unit, formula, subst, ref string) {
+func (t *tracer) add(sym string, v float64, unit, formula string, subst Subst, ref string) {
 	if t.items == nil {
 		t.items = make([]TraceItem, 0, 16)
 	}
 	t.items = append(t.items, TraceItem{Symbol: sym, Value: v, Unit: unit, Formula: formula, Subst: subst, Ref: ref})
 }
 
-// f replaces each %s in format with the next value, printed as num does.
-func (t *tracer) f(format string, vals ...float64) string {
-	if t.text == nil {
-		t.text = &textArena{}
+// f returns format with vals as a Subst, the numbers copied to the arena.
+func (t *tracer) f(format string, vals ...float64) Subst {
+	if t.nums == nil {
+		return Subst{Format: format, Nums: append([]float64(nil), vals...)}
 	}
-	ta := t.text
-	if cap(ta.buf)-len(ta.buf) < len(format)+24*len(vals) {
-		ta.buf = make([]byte, 0, max(1024, 2*(len(format)+24*len(vals))))
+	a := *t.nums
+	if cap(a)-len(a) < len(vals) {
+		a = make([]float64, 0, max(32, len(vals)))
 	}
-	start := len(ta.buf)
-	b := ta.buf
-	i := 0
-	for {
-		j := strings.Index(format, "%s")
-		if j < 0 || i >= len(vals) {
-			b = append(b, format...)
-			break
-		}
-		b = append(b, format[:j]...)
-		b = appendNum(b, vals[i])
-		i++
-		format = format[j+2:]
-	}
-	if cap(b) != cap(ta.buf) { // outgrew the estimate: keep the copy, leave buf alone
-		return string(b[start:])
-	}
-	ta.buf = b
-	if len(b) == start {
-		return ""
-	}
-	return unsafe.String(&b[start], len(b)-start)
+	l := len(a)
+	a = append(a, vals...)
+	*t.nums = a
+	return Subst{Format: format, Nums: a[l : l+len(vals) : l+len(vals)]}
 }
 
 // appendNum prints v with about four significant figures: whole numbers

@@ -47,3 +47,23 @@ func mustParse(t *testing.T, s string) float64 {
 	}
 	return f
 }
+
+// TestSubstText prints substitutions as a report shows them: each %s the
+// next number, four significant figures (common practice, no source).
+func TestSubstText(t *testing.T) {
+	rows := []struct {
+		s    Subst
+		want string
+	}{
+		{Subst{Format: "1.63(%s) + 3(%s)", Nums: []float64{72, 9.25}}, "1.63(72) + 3(9.25)"},
+		{Subst{Format: "sqrt(%s(%s) / %s^2)", Nums: []float64{145.11, 9.25, 1.5}}, "sqrt(145.1(9.25) / 1.5^2)"},
+		{Subst{Format: "temperature = normal"}, "temperature = normal"},
+		{Subst{Format: "%s / %s", Nums: []float64{333.23}}, "333.2 / %s"},
+		{Subst{}, ""},
+	}
+	for _, r := range rows {
+		if got := r.s.Text(); got != r.want {
+			t.Errorf("%q %v: got %q, want %q", r.s.Format, r.s.Nums, got, r.want)
+		}
+	}
+}

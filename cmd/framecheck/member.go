@@ -197,7 +197,7 @@ func printMember(w io.Writer, m check.Member, r check.Result, colour bool) {
 		}
 		fmt.Fprintf(w, "\n%s under %s: %s %s against %s %s, ratio %.3f %s\n", c.Kind, c.Combo,
 			fmtVal(c.Actual), c.Unit, fmtVal(c.Allowable), c.Unit, c.Ratio, verdict)
-		printTrace(w, c.Trace)
+		printTrace(w, c.Trace())
 	}
 	if len(r.BlockingSteps) > 0 {
 		fmt.Fprintln(w, "\nblocking rows for the bottom edge:")
@@ -246,8 +246,8 @@ func printTrace(w io.Writer, items []check.TraceItem) {
 	for _, t := range items {
 		value := strings.TrimSpace(fmtVal(t.Value) + " " + t.Unit)
 		how := t.Formula
-		if t.Subst != "" && t.Subst != t.Formula {
-			how = strings.TrimSpace(how + " = " + t.Subst)
+		if s := t.Subst.Text(); s != "" && s != t.Formula {
+			how = strings.TrimSpace(how + " = " + s)
 			how = strings.TrimPrefix(how, "= ")
 		}
 		if t.Ref != "" {

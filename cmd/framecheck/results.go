@@ -95,7 +95,7 @@ func (cv *resultConverter) member(m *framing.Member, res *check.Result, toInch f
 			var cs []export.Check
 			for _, c := range res.Checks {
 				cs = append(cs, export.Check{Kind: c.Kind, Combo: c.Combo, Actual: c.Actual,
-					Allowable: c.Allowable, Unit: c.Unit, Ratio: c.Ratio, Trace: exportTrace(c.Trace)})
+					Allowable: c.Allowable, Unit: c.Unit, Ratio: c.Ratio, Trace: exportTrace(c.Trace())})
 			}
 			cv.checks[key] = cs
 		}
@@ -136,7 +136,7 @@ func exportTrace(t []check.TraceItem) []export.TraceItem {
 	var out []export.TraceItem
 	for _, it := range t {
 		out = append(out, export.TraceItem{Name: it.Symbol, Value: it.Value, Unit: it.Unit,
-			Source: it.Ref, Formula: it.Formula, Subst: it.Subst})
+			Source: it.Ref, Formula: it.Formula, Subst: it.Subst.Text()})
 	}
 	return out
 }

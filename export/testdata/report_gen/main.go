@@ -185,7 +185,7 @@ func fill(em *export.Member, res *check.Result) {
 func trace(ts []check.TraceItem) []export.TraceItem {
 	out := make([]export.TraceItem, len(ts))
 	for i, t := range ts {
-		out[i] = export.TraceItem{Name: t.Symbol, Value: t.Value, Unit: t.Unit, Source: t.Ref, Formula: t.Formula, Subst: t.Subst}
+		out[i] = export.TraceItem{Name: t.Symbol, Value: t.Value, Unit: t.Unit, Source: t.Ref, Formula: t.Formula, Subst: t.Subst.Text()}
 	}
 	return out
 }

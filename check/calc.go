@@ -1,0 +1,187 @@
+package check
+
+import "strconv"
+
+// A check records the numbers of its governing case (calcRecord) while it
+// runs and writes its trace only when asked (CheckResult.Trace): members
+// are checked far more often than their traces are read (the blocking
+// solver and the sizing loop evaluate many trials, and identical members
+// share one written trace), so a check costs no trace building.
+
+// calcCtx holds what every trace of one result reads: the section, the
+// reference design values and the adjustment factors, copied from the
+// engine so a Result shares no memory with it.
+type calcCtx struct {
+	bIn, dIn, sIn3, aIn2       float64
+	fbPsi, fvPsi, fcPerpPsi    float64
+	ePsi, eminPsi              float64
+	cm                         WetServiceFactors
+	ct                         TemperatureFactors
+	cf                         SizeFactors
+	ci                         IncisingFactors
+	cr, eAdj, eminAdj, kcr, x0 float64
+	shearAtD                   bool
+}
+
+// bendRec is an edge's governing bending case.
+type bendRec struct {
+	mLbIn, cd, fbStar, cl float64
+	iv                    interval
+}
+
+// shearRec is the governing shear case.
+type shearRec struct {
+	vLb, cd, fvAdjPsi float64
+	bearing           int
+}
+
+// bearRec is the governing bearing case.
+type bearRec struct {
+	rLb, lbIn, cb, fcAdjPsi float64
+	bearing                 int
+}
+
+// deflRec is a governing deflection case.
+type deflRec struct {
+	deflIn, allowIn, spanIn, limit, ratio float64
+	cant, total                           bool
+	where                                 string
+}
+
+// calcRecord holds the governing numbers of every check of one result, in
+// one allocation. It is written once, while the result is built, and only
+// read afterwards.
+type calcRecord struct {
+	ctx   calcCtx
+	bend  [2]bendRec // top, bottom
+	shear shearRec
+	defl  [2]deflRec // live, total
+	bear  bearRec
+}
+
+// newCalcRecord starts the record of the result e is building.
+func (e *engine) newCalcRecord() *calcRecord {
+	return &calcRecord{ctx: calcCtx{
+		bIn: e.sec.BIn, dIn: e.sec.DIn, sIn3: e.sec.SIn3, aIn2: e.sec.AreaIn2,
+		fbPsi: e.dv.FbPsi, fvPsi: e.dv.FvPsi, fcPerpPsi: e.dv.FcPerpPsi, ePsi: e.dv.EPsi, eminPsi: e.dv.EminPsi,
+		cm: e.cm, ct: e.ct, cf: e.cf, ci: e.ci, cr: e.cr, eAdj: e.eAdj, eminAdj: e.eminAdj, kcr: e.kcr, x0: e.x0,
+		shearAtD: e.s.ShearAtD,
+	}}
+}
+
+// Trace returns every intermediate value of the check, in the order a
+// report prints the calculation: factors, demand, capacity, ratio. Each
+// call builds a new slice, which the caller owns.
+func (c CheckResult) Trace() []TraceItem {
+	if c.calc == nil {
+		return nil
+	}
+	r := c.calc
+	switch c.Kind {
+	case KindBendingTop:
+		return r.bendingTrace(&r.bend[0])
+	case KindBendingBottom:
+		return r.bendingTrace(&r.bend[1])
+	case KindShear:
+		return r.shearTrace()
+	case KindDeflectionLive:
+		return r.deflTrace(&r.defl[0])
+	case KindDeflectionTotal:
+		return r.deflTrace(&r.defl[1])
+	case KindBearing:
+		return r.bearingTrace()
+	}
+	return nil
+}
+
+// newTracer returns a tracer with room for n items and their numbers.
+func newTracer(n int) tracer {
+	var a traceArena
+	a.reserve(n, 4*n)
+	return a.tracer(n)
+}
+
+// bendingTrace writes an edge's bending calculation (NDS 2018 3.3).
+func (r *calcRecord) bendingTrace(b *bendRec) []TraceItem {
+	x := &r.ctx
+	fb := b.mLbIn / x.sIn3
+	fbAdj := b.fbStar * b.cl
+	t := newTracer(bendingTraceLen(b.iv))
+	t.add("M", b.mLbIn, "lb-in", "largest moment compressing this edge, governing case", Subst{}, refAnalysis)
+	t.add("S", x.sIn3, "in^3", "b d^2 / 6", t.f("%s(%s)^2 / 6", x.bIn, x.dIn), "NDS 2018 Supplement Table 1B")
+	t.add("fb", fb, "psi", "M / S", t.f("%s / %s", b.mLbIn, x.sIn3), "NDS 2018 3.3.2")
+	t.add("Fb*", b.fbStar, "psi", "Fb CD CM Ct CF Ci Cr",
+		t.f("%s(%s)(%s)(%s)(%s)(%s)(%s)", x.fbPsi, b.cd, x.cm.Fb, x.ct.Fb, x.cf.Fb, x.ci.Fb, x.cr), "NDS 2018 3.3.3.8, Table 4.3.1")
+	if iv := b.iv; iv.braced {
+		t.add("CL", 1, "", "edge braced continuously", Subst{}, "NDS 2018 3.3.3.3")
+	} else {
+		t.add("lu", iv.luIn, "in", "distance between bracing points", t.f("%s - %s", iv.b+x.x0, iv.a+x.x0), "NDS 2018 3.3.3.4")
+		t.add("lu/d", iv.luIn/x.dIn, "", "lu / d", t.f("%s / %s", iv.luIn, x.dIn), "NDS 2018 Table 3.3.3")
+		f := leFormulas[iv.leFormula]
+		t.add("le", iv.leIn, "in", f, leSubst(&t, f, iv.luIn, x.dIn), leRefs[iv.kind])
+		t.add("RB", iv.rb, "", "sqrt(le d / b^2)", t.f("sqrt(%s(%s) / %s^2)", iv.leIn, x.dIn, x.bIn), "NDS 2018 Eq. 3.3-5")
+		t.add("Emin'", x.eminAdj, "psi", "Emin CM Ct Ci", t.f("%s(%s)(%s)(%s)", x.eminPsi, x.cm.E, x.ct.E, x.ci.E), "NDS 2018 Table 4.3.1")
+		t.add("FbE", iv.fbEPsi, "psi", "1.20 Emin' / RB^2", t.f("1.20(%s) / %s^2", x.eminAdj, iv.rb), "NDS 2018 3.3.3.8")
+		a := iv.fbEPsi / b.fbStar
+		t.add("CL", b.cl, "", "(1 + FbE/Fb*)/1.9 - sqrt(((1 + FbE/Fb*)/1.9)^2 - (FbE/Fb*)/0.95)",
+			t.f("(1 + %s)/1.9 - sqrt(((1 + %s)/1.9)^2 - %s/0.95)", a, a, a), "NDS 2018 Eq. 3.3-6")
+	}
+	t.add("Fb'", fbAdj, "psi", "Fb* CL Cfu", t.f("%s(%s)(1.0)", b.fbStar, b.cl), "NDS 2018 Table 4.3.1")
+	t.add("fb/Fb'", fb/fbAdj, "", "fb / Fb'", t.f("%s / %s", fb, fbAdj), "NDS 2018 3.3.1")
+	return t.items
+}
+
+// shearTrace writes the shear calculation (NDS 2018 3.4).
+func (r *calcRecord) shearTrace() []TraceItem {
+	x, s := &r.ctx, &r.shear
+	fv := 1.5 * s.vLb / x.aIn2
+	where := "at the centre-line of bearing " + strconv.Itoa(s.bearing+1)
+	if x.shearAtD {
+		where = "at d from the face of bearing " + strconv.Itoa(s.bearing+1)
+	}
+	t := newTracer(5)
+	t.add("V", s.vLb, "lb", "largest shear "+where, Subst{}, refAnalysis)
+	t.add("A", x.aIn2, "in^2", "b d", t.f("%s(%s)", x.bIn, x.dIn), "NDS 2018 Supplement Table 1B")
+	t.add("fv", fv, "psi", "1.5 V / A", t.f("1.5(%s) / %s", s.vLb, x.aIn2), "NDS 2018 Eq. 3.4-2")
+	t.add("Fv'", s.fvAdjPsi, "psi", "Fv CD CM Ct Ci", t.f("%s(%s)(%s)(%s)(%s)", x.fvPsi, s.cd, x.cm.Fv, x.ct.Fv, x.ci.Fv), "NDS 2018 Table 4.3.1")
+	t.add("fv/Fv'", fv/s.fvAdjPsi, "", "fv / Fv'", t.f("%s / %s", fv, s.fvAdjPsi), "NDS 2018 3.4.1")
+	return t.items
+}
+
+// bearingTrace writes the bearing calculation (NDS 2018 3.10).
+func (r *calcRecord) bearingTrace() []TraceItem {
+	x, b := &r.ctx, &r.bear
+	fc := b.rLb / (x.bIn * b.lbIn)
+	t := newTracer(6)
+	t.add("R", b.rLb, "lb", "largest reaction, at bearing "+strconv.Itoa(b.bearing+1), Subst{}, refAnalysis)
+	t.add("lb", b.lbIn, "in", "bearing length", Subst{}, "")
+	t.add("fc_perp", fc, "psi", "R / (b lb)", t.f("%s / (%s(%s))", b.rLb, x.bIn, b.lbIn), "NDS 2018 3.10.2")
+	if b.cb != 1 {
+		t.add("Cb", b.cb, "", "(lb + 0.375) / lb", t.f("(%s + 0.375) / %s", b.lbIn, b.lbIn), "NDS 2018 3.10.4")
+	} else {
+		t.add("Cb", 1, "", "bearing at a member end, or lb >= 6 in", Subst{}, "NDS 2018 3.10.4")
+	}
+	t.add("Fc_perp'", b.fcAdjPsi, "psi", "Fc_perp CM Ct Ci Cb",
+		t.f("%s(%s)(%s)(%s)(%s)", x.fcPerpPsi, x.cm.FcPerp, x.ct.FcPerp, x.ci.FcPerp, b.cb), "NDS 2018 Table 4.3.1")
+	t.add("fc_perp/Fc_perp'", fc/b.fcAdjPsi, "", "fc_perp / Fc_perp'", t.f("%s / %s", fc, b.fcAdjPsi), "NDS 2018 3.10.2")
+	return t.items
+}
+
+// deflTrace writes a deflection calculation (IBC 2018 Table 1604.3, NDS
+// 2018 3.5.2).
+func (r *calcRecord) deflTrace(d *deflRec) []TraceItem {
+	x := &r.ctx
+	t := newTracer(6)
+	t.add("delta", d.deflIn, "in", "largest deflection of "+d.where, Subst{}, refAnalysis)
+	t.add("E'", x.eAdj, "psi", "E CM Ct Ci", t.f("%s(%s)(%s)(%s)", x.ePsi, x.cm.E, x.ct.E, x.ci.E), "NDS 2018 Table 4.3.1")
+	if d.total {
+		t.add("Kcr", x.kcr, "", "creep factor on D", Subst{}, "NDS 2018 3.5.2")
+	}
+	if d.cant {
+		t.add("delta_allow", d.allowIn, "in", "2 Lc / limit", t.f("2(%s) / %s", d.spanIn, d.limit), "IBC 2018 Table 1604.3 note h")
+	} else {
+		t.add("delta_allow", d.allowIn, "in", "L / limit", t.f("%s / %s", d.spanIn, d.limit), "IBC 2018 Table 1604.3")
+	}
+	t.add("ratio", d.ratio, "", "delta / delta_allow", t.f("%s / %s", d.deflIn, d.allowIn), "")
+	return t.items
+}
