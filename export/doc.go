@@ -12,9 +12,11 @@
 //
 // Writers:
 //
-//	WriteJSON(path, r)          results.json, schema "framecheck-results/1"; one member,
-//	                            mark or blocking row per line; NaN/Inf written as 0 and
+//	WriteJSON(path, r)          results.json, schema "framecheck-results/2"; one member,
+//	                            calculation, mark or blocking row per line; traces and
+//	                            factors once per calculation; NaN/Inf written as 0 and
 //	                            reported as a *NonFiniteError after the write
+//	ReadJSON(path)              results.json back into Results, traces in place
 //	WriteXLSX(path, r)          sheets Members, Marks, Blocking, Takeoff, Inputs, Notes
 //	Annotate(in, out, markup)   copy of the drawing with our layers and markup added
 //	WriteOverlay(path, markup, units)  the markup alone, R12

@@ -221,8 +221,10 @@ func jsonName(sf reflect.StructField) string {
 	return name
 }
 
-// WriteJSON writes r as results.json to path, atomically. Schema is filled
-// in when empty. Lists are written as [] rather than null; each member, mark
+// WriteJSON writes r as results.json to path, atomically, in the layout of
+// Schema (which it writes, whatever r.Schema holds): members without their
+// traces and factors, which are in "calculations", written once for the
+// members that share them (the same Checks slice). Lists are written as [] rather than null; each member, mark
 // and blocking row is one line, so files diff well. NaN and ±Inf never
 // reach the file: they are written as 0 and reported, after a successful
 // write, as a *NonFiniteError (see Sanitize). A path ending in .dxf is
@@ -247,10 +249,7 @@ func WriteJSON(path string, r *Results) error {
 // encodeResults writes r as JSON: the top-level keys one per line, list
 // items one per line.
 func encodeResults(w *bufio.Writer, r *Results) error {
-	schema := r.Schema
-	if schema == "" {
-		schema = Schema
-	}
+	schema := Schema // the layout written here, whatever r.Schema says
 	first := true
 	key := func(name string) {
 		if !first {
@@ -294,6 +293,7 @@ func encodeResults(w *bufio.Writer, r *Results) error {
 		return listBytes(name, n, func(i int) ([]byte, error) { return json.Marshal(item(i)) })
 	}
 	me := newMemberEncoder()
+	calcs := newCalcTable()
 	w.WriteString("{\n")
 	steps := []func() error{
 		func() error { return value("schema", schema) },
@@ -301,10 +301,11 @@ func encodeResults(w *bufio.Writer, r *Results) error {
 		func() error { return value("drawing_units", r.DrawingUnits) },
 		func() error {
 			return listBytes("members", len(r.Members), func(i int) ([]byte, error) {
-				m := memberForJSON(r.Members[i])
+				m := memberForJSON(r.Members[i], calcs.id(&r.Members[i]))
 				return me.encode(&m, &r.Members[i])
 			})
 		},
+		func() error { return calcs.write(w, key) },
 		func() error {
 			return list("marks", len(r.Marks), func(i int) any {
 				m := r.Marks[i]
@@ -344,25 +345,19 @@ func encodeResults(w *bufio.Writer, r *Results) error {
 	return nil
 }
 
-// memberForJSON returns m with empty lists as [] (the checks are copied
-// only when one has a nil trace).
-func memberForJSON(m Member) Member {
+// memberForJSON returns m as a member of results.json names it: empty
+// lists as [], its calculation's id in Calculation and no factors (they
+// are in the calculation). The checks are left as they are; the member
+// encoder writes them without their traces.
+func memberForJSON(m Member, calc string) Member {
 	m.BearingsAtIn = orEmpty(m.BearingsAtIn)
 	m.SpansIn = orEmpty(m.SpansIn)
 	m.Checks = orEmpty(m.Checks)
 	m.BlockingRowsPerSpan = orEmpty(m.BlockingRowsPerSpan)
 	m.BlockingAtIn = orEmpty(m.BlockingAtIn)
 	m.Messages = orEmpty(m.Messages)
-	for i := range m.Checks {
-		if m.Checks[i].Trace == nil {
-			cs := slices.Clone(m.Checks)
-			for j := range cs {
-				cs[j].Trace = orEmpty(cs[j].Trace)
-			}
-			m.Checks = cs
-			break
-		}
-	}
+	m.Calculation = calc
+	m.Factors = nil
 	return m
 }
 

@@ -12,14 +12,17 @@ import (
 	"testing"
 )
 
-// contractKeys are the key names fixed by issue 5 (results.json contract).
+// contractKeys are the key names fixed by issue 5 (results.json contract),
+// with schema 2's calculations holding the traces.
 var contractKeys = map[string][]string{
-	"top": {"schema", "plan", "drawing_units", "members", "marks", "blocking_rows", "takeoff", "summary", "assumptions"},
+	"top": {"schema", "plan", "drawing_units", "members", "calculations", "marks", "blocking_rows", "takeoff", "summary", "assumptions"},
 	"member": {"id", "mark", "layer", "handle", "start", "end", "length_in", "bearings_at_in", "spans_in",
-		"overhangs_in", "trib_in", "size", "species", "grade", "zone", "checks", "governing", "max_ratio",
+		"overhangs_in", "trib_in", "size", "species", "grade", "zone", "calculation", "checks", "governing", "max_ratio",
 		"blocking_rows_per_span", "blocking_at_in", "status", "messages"},
-	"check":   {"kind", "combo", "actual", "allowable", "unit", "ratio", "trace"},
-	"summary": {"members", "pass", "fail", "error"},
+	"check":       {"kind", "combo", "actual", "allowable", "unit", "ratio"},
+	"calculation": {"checks", "factors"},
+	"calc check":  {"kind", "combo", "actual", "allowable", "unit", "ratio", "trace"},
+	"summary":     {"members", "pass", "fail", "error"},
 }
 
 func hasKeys(t *testing.T, what string, obj map[string]any, keys []string) {
@@ -47,18 +50,29 @@ func TestWriteJSONContract(t *testing.T) {
 		t.Fatal(err)
 	}
 	hasKeys(t, "top level", top, contractKeys["top"])
-	if top["schema"] != "framecheck-results/1" {
+	if top["schema"] != "framecheck-results/2" {
 		t.Errorf("schema = %v", top["schema"])
 	}
 	members := top["members"].([]any)
 	if len(members) != 4 {
 		t.Fatalf("%d members, want 4", len(members))
 	}
+	calcs := top["calculations"].(map[string]any)
 	for i, m := range members {
 		mm := m.(map[string]any)
 		hasKeys(t, "member", mm, contractKeys["member"])
-		for _, c := range mm["checks"].([]any) {
+		calc, ok := calcs[mm["calculation"].(string)].(map[string]any)
+		if !ok {
+			t.Fatalf("member %d: calculation %v not in calculations", i, mm["calculation"])
+		}
+		hasKeys(t, "calculation", calc, contractKeys["calculation"])
+		cc := calc["checks"].([]any)
+		for j, c := range mm["checks"].([]any) {
 			hasKeys(t, "check", c.(map[string]any), contractKeys["check"])
+			if _, ok := c.(map[string]any)["trace"]; ok {
+				t.Errorf("member %d check %d: trace beside the check, want it in the calculation", i, j)
+			}
+			hasKeys(t, "calc check", cc[j].(map[string]any), contractKeys["calc check"])
 		}
 		if i == 3 {
 			if mm["status"] != "fail" || mm["max_ratio"] != 1.12 || mm["governing"] != "bending-bottom" {
@@ -74,16 +88,94 @@ func TestWriteJSONContract(t *testing.T) {
 	if strings.Contains(string(data), "StartIn") || strings.Contains(string(data), "start_in") {
 		t.Error("inch coordinates leaked into the JSON")
 	}
-	// Round trip through the Go types gives the same Results.
-	var back Results
-	if err := json.Unmarshal(data, &back); err != nil {
+	// ReadJSON gives back the same Results, traces and factors in place.
+	back, err := ReadJSON(path)
+	if err != nil {
 		t.Fatal(err)
+	}
+	for i := range back.Members {
+		if back.Members[i].Calculation == "" {
+			t.Errorf("member %d has no calculation", i)
+		}
+		back.Members[i].Calculation = ""
 	}
 	r.Schema = Schema
 	a, _ := json.Marshal(r)
-	b, _ := json.Marshal(&back)
+	b, _ := json.Marshal(back)
 	if string(a) != string(b) {
-		t.Error("round trip changed the results")
+		t.Errorf("round trip changed the results:\n%s\n%s", a, b)
+	}
+}
+
+// TestWriteJSONTracesOnce: members checked alike (sharing their checks
+// slice, as the command hands them over) get one calculation, written
+// once; a member checked differently gets its own. Common practice, no
+// source.
+func TestWriteJSONTracesOnce(t *testing.T) {
+	r := loadFixture(t)
+	shared := r.Members[0]
+	var many []Member
+	for i := 0; i < 50; i++ {
+		m := shared
+		m.ID = "S" + string(rune('0'+i%10)) + string(rune('a'+i/10))
+		many = append(many, m)
+	}
+	other := r.Members[3]
+	r.Members = append(many, other)
+	path := filepath.Join(t.TempDir(), "results.json")
+	if err := WriteJSON(path, r); err != nil {
+		t.Fatal(err)
+	}
+	data, _ := os.ReadFile(path)
+	var top struct {
+		Members      []Member               `json:"members"`
+		Calculations map[string]Calculation `json:"calculations"`
+	}
+	if err := json.Unmarshal(data, &top); err != nil {
+		t.Fatal(err)
+	}
+	if len(top.Calculations) != 2 {
+		t.Errorf("%d calculations, want 2", len(top.Calculations))
+	}
+	for i, m := range top.Members {
+		want := "C1"
+		if i == 50 {
+			want = "C2"
+		}
+		if m.Calculation != want {
+			t.Errorf("member %d: calculation %q, want %q", i, m.Calculation, want)
+		}
+	}
+	if n := strings.Count(string(data), `"trace":`); n != len(shared.Checks)+len(other.Checks) {
+		t.Errorf("%d traces written, want %d (each calculation's checks once)", n, len(shared.Checks)+len(other.Checks))
+	}
+	back, err := ReadJSON(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got, want := back.Members[7].Checks[0].Trace, shared.Checks[0].Trace; !slices.Equal(got, want) {
+		t.Errorf("member 7's trace read back %v, want %v", got, want)
+	}
+	if &back.Members[7].Checks[0] != &back.Members[8].Checks[0] {
+		t.Error("members of one calculation do not share their checks after ReadJSON")
+	}
+}
+
+// TestReadJSONErrors: a member whose calculation is missing or does not
+// match is an error naming the file and the member; an unknown schema too.
+func TestReadJSONErrors(t *testing.T) {
+	cases := map[string]string{
+		`{"schema":"framecheck-results/2","members":[{"id":"M1","calculation":"C9","checks":[]}],"calculations":{}}`:                                                                  "member M1: calculation \"C9\"",
+		`{"schema":"framecheck-results/2","members":[{"id":"M2","calculation":"C1","checks":[{"kind":"shear"}]}],"calculations":{"C1":{"checks":[],"factors":[]}}}`:                   "member M2: 1 checks",
+		`{"schema":"framecheck-results/2","members":[{"id":"M3","calculation":"C1","checks":[{"kind":"shear"}]}],"calculations":{"C1":{"checks":[{"kind":"bearing"}],"factors":[]}}}`: "member M3: check 1",
+		`{"schema":"framecheck-results/9"}`: "schema",
+		`{"schema":`:                        "x.json",
+	}
+	for in, want := range cases {
+		_, err := ParseJSON("x.json", []byte(in))
+		if err == nil || !strings.Contains(err.Error(), want) || !strings.Contains(err.Error(), "x.json") {
+			t.Errorf("%s: error %v, want one containing %q", in, err, want)
+		}
 	}
 }
 

@@ -1,8 +1,11 @@
 package export
 
 // Schema is the value of results.json's "schema" key. Bump the number when
-// a key is renamed or removed; adding keys keeps it.
-const Schema = "framecheck-results/1"
+// a key is renamed or removed; adding keys keeps it. Version 2 moved the
+// traces and factors of the members' checks into "calculations", written
+// once for all the members checked alike (a member names its entry in
+// "calculation"); version 1 repeated them in every member.
+const Schema = "framecheck-results/2"
 
 // Check kinds, the values of Check.Kind.
 const (
@@ -27,10 +30,13 @@ const (
 	StatusError = "error"
 )
 
-// Results is the whole of results.json. JSON names are the contract of
-// issue 5; keep them.
+// Results is the whole of a run's results, as results.json holds them. JSON
+// names are the contract of issue 5; keep them. In the file (WriteJSON,
+// ReadJSON) the checks' traces and the factors are not in the members but
+// in the top-level "calculations" (see Schema); in memory every member
+// carries its own (often shared) slices.
 type Results struct {
-	Schema       string        `json:"schema"`        // Schema; WriteJSON fills it when empty
+	Schema       string        `json:"schema"`        // Schema; WriteJSON always writes Schema
 	Plan         string        `json:"plan"`          // input file name
 	DrawingUnits string        `json:"drawing_units"` // in | ft | mm | cm | m
 	Members      []Member      `json:"members"`
@@ -69,9 +75,12 @@ type Member struct {
 	Grade   string `json:"grade"`
 	Zone    string `json:"zone"`
 
-	Checks    []Check `json:"checks"`
-	Governing string  `json:"governing"` // Kind of the check with the largest ratio
-	MaxRatio  float64 `json:"max_ratio"`
+	// Calculation names the entry of results.json's "calculations" that
+	// holds this member's check traces and factors; WriteJSON sets it.
+	Calculation string  `json:"calculation,omitempty"`
+	Checks      []Check `json:"checks"`
+	Governing   string  `json:"governing"` // Kind of the check with the largest ratio
+	MaxRatio    float64 `json:"max_ratio"`
 
 	BlockingRowsPerSpan []int     `json:"blocking_rows_per_span"`
 	BlockingAtIn        []float64 `json:"blocking_at_in"` // along the member from Start
@@ -90,13 +99,15 @@ type Member struct {
 
 // Check is one design check of a member under one load combination.
 type Check struct {
-	Kind      string      `json:"kind"`  // one of CheckKinds
-	Combo     string      `json:"combo"` // e.g. "D+L"
-	Actual    float64     `json:"actual"`
-	Allowable float64     `json:"allowable"`
-	Unit      string      `json:"unit"` // psi, in, lbf ...
-	Ratio     float64     `json:"ratio"`
-	Trace     []TraceItem `json:"trace"`
+	Kind      string  `json:"kind"`  // one of CheckKinds
+	Combo     string  `json:"combo"` // e.g. "D+L"
+	Actual    float64 `json:"actual"`
+	Allowable float64 `json:"allowable"`
+	Unit      string  `json:"unit"` // psi, in, lbf ...
+	Ratio     float64 `json:"ratio"`
+	// Trace is every intermediate value; in results.json it is written in
+	// the member's calculation, not beside the check.
+	Trace []TraceItem `json:"trace,omitempty"`
 }
 
 // TraceItem is one intermediate value of a check (CD, CL, RB, M, ...).

@@ -27,9 +27,24 @@ def layer_counts(msp):
 
 def main(demo, overlay_dir):
     res = json.load(open(os.path.join(demo, "results.json")))
-    if res.get("schema") != "framecheck-results/1":
+    if res.get("schema") != "framecheck-results/2":
         fail("results.json schema %r" % res.get("schema"))
     members = res["members"]
+    # Schema 2: each member's traces are in the calculation it names; its
+    # checks there match its own, and each trace ends on the check's ratio.
+    calcs = res["calculations"]
+    for m in members:
+        if not m["checks"]:
+            continue
+        c = calcs.get(m.get("calculation"))
+        if c is None:
+            fail("member %s: calculation %r missing" % (m["id"], m.get("calculation")))
+        if [(k["kind"], k["ratio"]) for k in m["checks"]] != [(k["kind"], k["ratio"]) for k in c["checks"]]:
+            fail("member %s: checks differ from calculation %s" % (m["id"], m["calculation"]))
+        for k in c["checks"]:
+            if not k["trace"] or abs(k["trace"][-1]["value"] - k["ratio"]) > 1e-9 * max(1, k["ratio"]):
+                fail("calculation %s %s: trace does not end on the ratio %r" % (m["calculation"], k["kind"], k["ratio"]))
+    print("results.json: %d members share %d calculations" % (len(members), len(calcs)))
     s = res["summary"]
     if s["members"] != len(members) or s["pass"] + s["fail"] + s["error"] != len(members):
         fail("summary counts do not add up: %r" % s)

@@ -142,15 +142,11 @@ func runCorpus(t *testing.T, plan, planText, project string, extra ...string) co
 
 func readResults(t *testing.T, dir string) *export.Results {
 	t.Helper()
-	data, err := os.ReadFile(filepath.Join(dir, resultsName))
+	res, err := export.ReadJSON(filepath.Join(dir, resultsName))
 	if err != nil {
-		t.Fatalf("no results.json: %v", err)
-	}
-	var res export.Results
-	if err := json.Unmarshal(data, &res); err != nil {
 		t.Fatalf("results.json: %v", err)
 	}
-	return &res
+	return res
 }
 
 // nonFiniteRE matches the ways Go, Excel and DXF writers spell a

@@ -2,7 +2,6 @@ package main
 
 import (
 	"bytes"
-	"encoding/json"
 	"math"
 	"os"
 	"path/filepath"
@@ -21,11 +20,9 @@ func runDemoTo(t *testing.T, dir string) (int, string, string, *export.Results) 
 	t.Helper()
 	var out, errb bytes.Buffer
 	code := run([]string{"demo", "-o", dir}, &out, &errb)
-	data, err := os.ReadFile(filepath.Join(dir, resultsName))
-	require.NoError(t, err, "demo wrote no results.json (exit %d); stderr:\n%s", code, errb.String())
-	var r export.Results
-	require.NoError(t, json.Unmarshal(data, &r), "results.json")
-	return code, out.String(), errb.String(), &r
+	r, err := export.ReadJSON(filepath.Join(dir, resultsName))
+	require.NoError(t, err, "demo wrote no readable results.json (exit %d); stderr:\n%s", code, errb.String())
+	return code, out.String(), errb.String(), r
 }
 
 func memberByID(t *testing.T, r *export.Results, id string) *export.Member {
@@ -224,15 +221,13 @@ func TestCheckSizePicksOneSizePerRun(t *testing.T) {
 	code := run([]string{"check", filepath.Join(dir, "plan.dxf"), "-p", filepath.Join(dir, "framecheck.toml"), "-o", outDir, "--size"}, &out, &errb)
 	// The joist drawn short of its beam stays an error member: exit 1.
 	assert.Equal(t, exitFail, code, errb.String())
-	data, err := os.ReadFile(filepath.Join(outDir, resultsName))
+	r, err := export.ReadJSON(filepath.Join(outDir, resultsName))
 	require.NoError(t, err)
-	var r export.Results
-	require.NoError(t, json.Unmarshal(data, &r))
 	assert.Zero(t, r.Summary.Fail, "sizing leaves no failing member")
 	sizeOfRun := map[string]string{}
 	for _, row := range r.BlockingRows {
 		for _, id := range row.Members {
-			m := memberByID(t, &r, id)
+			m := memberByID(t, r, id)
 			if s, ok := sizeOfRun[row.Run]; ok && s != m.Size {
 				t.Errorf("run %s framed in %s and %s", row.Run, s, m.Size)
 			}

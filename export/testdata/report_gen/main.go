@@ -174,7 +174,7 @@ func fill(em *export.Member, res *check.Result) {
 	em.BlockingAtIn = append([]float64{}, res.BlockingAtIn...)
 	for _, c := range res.Checks {
 		em.Checks = append(em.Checks, export.Check{Kind: c.Kind, Combo: c.Combo, Actual: c.Actual,
-			Allowable: c.Allowable, Unit: c.Unit, Ratio: c.Ratio, Trace: trace(c.Trace)})
+			Allowable: c.Allowable, Unit: c.Unit, Ratio: c.Ratio, Trace: trace(c.Trace())})
 	}
 	for _, s := range res.BlockingSteps {
 		em.BlockingSteps = append(em.BlockingSteps, export.BlockingStep{RowsPerSpan: s.RowsPerSpan, LuIn: s.LuIn, CL: s.CL, Ratio: s.Ratio})
