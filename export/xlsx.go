@@ -189,8 +189,13 @@ func (s *sheet) style(k cellKind) int {
 	return s.st.plain[k]
 }
 
-// text adds a text cell.
+// text adds a text cell; an empty one is a styled cell without a value,
+// which excelize writes without the inline-string markup.
 func (s *sheet) text(v string) {
+	if v == "" {
+		s.store = append(s.store, excelize.Cell{StyleID: s.style(cText)})
+		return
+	}
 	s.store = append(s.store, excelize.Cell{StyleID: s.style(cText), Value: v})
 }
 

@@ -141,6 +141,7 @@ import (
 func main() {
 	log.SetFlags(0)
 	log.SetPrefix("framecheck: ")
+	tuneGC()
 	os.Exit(run(os.Args[1:], os.Stdout, os.Stderr))
 }
 
