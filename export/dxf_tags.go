@@ -7,6 +7,7 @@ import (
 	"io"
 	"strconv"
 	"strings"
+	"unsafe"
 )
 
 // ErrBinaryDXF is returned for a binary DXF input, which the annotator does
@@ -49,23 +50,41 @@ type pairReader struct {
 	r    *bufio.Reader
 	file string
 	line int
+	text []byte // chunk the lines are copied into (see readLine)
 }
 
 func newPairReader(r io.Reader, file string) *pairReader {
 	return &pairReader{r: bufio.NewReaderSize(r, 1<<16), file: file}
 }
 
-// readLine returns the next line with its ending, or io.EOF when nothing is left.
+// readLine returns the next line with its ending, or io.EOF when nothing
+// is left. Lines are copied into 64 KB chunks and handed out as strings
+// sharing a chunk's bytes, one allocation per chunk rather than per line;
+// bytes once handed out are never written again (a full chunk is
+// replaced, not reused), so the strings stay immutable.
 func (p *pairReader) readLine() (string, error) {
-	s, err := p.r.ReadString('\n')
-	if err == io.EOF && s != "" {
+	b, err := p.r.ReadSlice('\n')
+	if err == bufio.ErrBufferFull { // a line longer than the buffer
+		long := append([]byte(nil), b...)
+		for err == bufio.ErrBufferFull {
+			b, err = p.r.ReadSlice('\n')
+			long = append(long, b...)
+		}
+		b = long
+	}
+	if err == io.EOF && len(b) > 0 {
 		err = nil
 	}
 	if err != nil {
 		return "", err
 	}
 	p.line++
-	return s, nil
+	if cap(p.text)-len(p.text) < len(b) {
+		p.text = make([]byte, 0, max(1<<16, len(b)))
+	}
+	start := len(p.text)
+	p.text = append(p.text, b...)
+	return unsafe.String(&p.text[start], len(b)), nil
 }
 
 // next returns the next pair; io.EOF at a clean end of input.
