@@ -40,6 +40,7 @@
 //	DXF110 warning  extrusion not along Z: projected onto XY
 //	DXF111 warning  POLYLINE without SEQEND
 //	DXF112 error    coordinates overflow when converted to inches
+//	DXF113 error    LINE without both coordinates of both ends: left out
 //
 // Text: $DWGCODEPAGE ANSI_1252 files before AC1021 are decoded from code
 // page 1252, later files are UTF-8; \U+XXXX escapes are decoded; TEXT %%

@@ -1,5 +1,7 @@
 package dxfimport
 
+import "strings"
+
 // local is an entity as read, in the coordinates of its container (a
 // block definition or model space), drawing units, OCS already applied;
 // or an INSERT (ins != nil) still to be expanded.
@@ -89,7 +91,10 @@ func (r *reader) entity(g *group) error {
 	l := local{e: Entity{Pos: Pos{File: r.d.File, Line: g.line, Handle: g.handle, Layer: c.layer}}}
 	switch g.typ {
 	case "LINE":
-		err = r.line(g, &l)
+		var whole bool
+		if whole, err = r.line(g, &l); err == nil && !whole {
+			return nil
+		}
 	case "POINT":
 		err = r.point(g, &l)
 	case "CIRCLE", "ARC":
@@ -135,18 +140,45 @@ func (r *reader) coord(g *group, t rtag, base int, p *Point, z *float64) (bool, 
 	return true, err
 }
 
-func (r *reader) line(g *group, l *local) error {
+// line reads a LINE. One without both coordinates of both ends (codes 10,
+// 20, 11, 21) is left out with an error finding (DXF113) rather than read
+// with the DXF default of 0 for what is missing: a joist drawn to the
+// origin by a damaged file would be checked as a member it is not. It
+// reports whether the line is whole.
+func (r *reader) line(g *group, l *local) (bool, error) {
 	l.e.Kind = KindLine
 	l.e.Points = r.newPoints(2)
+	var seen [4]bool // 10, 20, 11, 21
 	for _, t := range g.tags {
+		switch t.code {
+		case 10, 20, 11, 21:
+			seen[(t.code%10)*2+t.code/10-1] = true
+		}
 		if _, err := r.coord(g, t, 10, &l.e.Points[0], nil); err != nil {
-			return err
+			return false, err
 		}
 		if _, err := r.coord(g, t, 11, &l.e.Points[1], nil); err != nil {
-			return err
+			return false, err
 		}
 	}
-	return nil
+	var missing []string
+	for i, code := range [4]string{"10", "20", "11", "21"} {
+		if !seen[i] {
+			missing = append(missing, code)
+		}
+	}
+	if len(missing) > 0 {
+		what := "start point"
+		if seen[0] && seen[1] {
+			what = "end point"
+		} else if !seen[2] || !seen[3] {
+			what = "start and end points"
+		}
+		r.d.Issues.Add(l.e.Pos, "DXF113", SevError, "LINE without its %s (group code %s missing): left out",
+			what, strings.Join(missing, ", "))
+		return false, nil
+	}
+	return true, nil
 }
 
 func (r *reader) point(g *group, l *local) error {

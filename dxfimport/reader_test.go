@@ -319,3 +319,33 @@ func TestFixtureR12Units(t *testing.T) {
 		t.Errorf("R2000 mm: units %q, issues %v", d.Units, d.Issues)
 	}
 }
+
+// TestLineMissingPoint: a LINE without one of its four coordinates is left
+// out with an error finding naming its line, handle and the missing codes;
+// the whole lines beside it are read. (DXF gives missing coordinates a
+// default of 0; common practice, no source, for refusing that here.)
+func TestLineMissingPoint(t *testing.T) {
+	in := section("ENTITIES",
+		dxf(0, "LINE", 5, "A1", 8, "J", 10, 0, 20, 0, 11, 96, 21, 0),
+		dxf(0, "LINE", 5, "A2", 8, "J", 10, 0, 20, 16),
+		dxf(0, "LINE", 5, "A3", 8, "J", 20, 32, 11, 96, 21, 32),
+		dxf(0, "LINE", 5, "A4", 8, "J", 10, 0, 20, 48, 11, 96, 21, 48)) + dxf(0, "EOF")
+	d := read(t, in, Options{Units: "in"})
+	if len(d.Entities) != 2 || d.Entities[0].Pos.Handle != "A1" || d.Entities[1].Pos.Handle != "A4" {
+		t.Fatalf("entities %+v, want A1 and A4 only", d.Entities)
+	}
+	want := map[string]string{"A2": "end point (group code 11, 21 missing)", "A3": "start point (group code 10 missing)"}
+	n := 0
+	for _, is := range d.Issues {
+		if is.Code != "DXF113" {
+			continue
+		}
+		n++
+		if is.Severity != SevError || !strings.Contains(is.Msg, want[is.Pos.Handle]) || is.Pos.Line == 0 {
+			t.Errorf("DXF113 %+v: want an error at its line saying %q", is, want[is.Pos.Handle])
+		}
+	}
+	if n != 2 {
+		t.Errorf("%d DXF113 findings, want 2 (%s)", n, issueCodes(d))
+	}
+}

@@ -399,6 +399,24 @@ var moreBadFiles = map[string]func() string{
 		d.eof()
 		return d.String()
 	},
+	// A joist LINE whose end point (codes 11 and 21) was lost: DXF would
+	// default it to the origin; the reader leaves the line out with an
+	// error, and the five whole joists are checked.
+	"line-missing-end.dxf": func() string {
+		var d dxfText
+		d.header("AC1009", 1)
+		d.section("ENTITIES")
+		d.plan("WALL", "JOIST", 5, 0, 0)
+		d.handle++
+		d.pair(0, "LINE")
+		d.pair(5, fmt.Sprintf("%X", 0x100+d.handle))
+		d.pair(8, "JOIST")
+		d.num(10, 0)
+		d.num(20, 104)
+		d.endsec()
+		d.eof()
+		return d.String()
+	},
 	// Callouts the parser refuses (no such lumber; spacing out of range)
 	// beside the joists: warnings, and the joists keep the project size.
 	"bad-callouts.dxf": func() string {

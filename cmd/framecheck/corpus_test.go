@@ -561,6 +561,15 @@ func TestBadCorpusMessy(t *testing.T) {
 		wantStderr(t, r, "zero-and-duplicate.dxf:117 (handle 108, layer JOIST): warning FRM202",
 			"zero-and-duplicate.dxf:131 (handle 109, layer JOIST): warning FRM203")
 	})
+	t.Run("line missing its end", func(t *testing.T) {
+		// Left out with an error finding at its line and handle; the
+		// plan's five joists are checked, and the run is not clean.
+		r := runCorpus(t, "line-missing-end.dxf", "", "")
+		wantCode(t, r, exitFail)
+		wantAll(t, r, export.StatusPass, 5)
+		wantStderr(t, r, "line-missing-end.dxf:", "(handle 108, layer JOIST): error DXF113: LINE without its end point (group code 11, 21 missing): left out",
+			"part of the drawing was not read")
+	})
 	t.Run("bad callouts", func(t *testing.T) {
 		r := runCorpus(t, "bad-callouts.dxf", "", "")
 		wantCode(t, r, exitOK)
