@@ -131,3 +131,22 @@ func TestLayersErrors(t *testing.T) {
 		}
 	}
 }
+
+// TestLayersPartialRead: a plan with an entity the reader left out (error
+// DXF113) still gets its layers listed; the finding goes to stderr and the
+// exit status is 1, as check gives for a plan read in part.
+func TestLayersPartialRead(t *testing.T) {
+	plan := filepath.Join("testdata", "bad", "line-missing-end.dxf")
+	code, out, errs := runCmd("layers", plan)
+	if code != exitFail {
+		t.Errorf("exit %d, want %d; stderr %q", code, exitFail, errs)
+	}
+	if !strings.Contains(out, "JOIST") || !strings.Contains(out, "WALL") {
+		t.Errorf("layers not listed:\n%s", out)
+	}
+	for _, want := range []string{"error DXF113", "(handle 108, layer JOIST)", "part of the drawing was not read"} {
+		if !strings.Contains(errs, want) {
+			t.Errorf("stderr lacks %q:\n%s", want, errs)
+		}
+	}
+}
