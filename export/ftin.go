@@ -45,6 +45,23 @@ func ftInList(ins []float64) string {
 	return strings.Join(parts, " + ")
 }
 
+// SpansText writes a member's or a mark's spans with its cantilevers at
+// the ends they are at, as a framing schedule lists them:
+// 3'-6" cantilever + 12'-0" + 12'-0". An overhang under 0.01 in is none.
+func SpansText(spansIn []float64, overhangsIn [2]float64) string {
+	parts := make([]string, 0, len(spansIn)+2)
+	if overhangsIn[0] >= 0.01 {
+		parts = append(parts, FtIn(overhangsIn[0])+" cantilever")
+	}
+	for _, v := range spansIn {
+		parts = append(parts, FtIn(v))
+	}
+	if overhangsIn[1] >= 0.01 {
+		parts = append(parts, FtIn(overhangsIn[1])+" cantilever")
+	}
+	return strings.Join(parts, " + ")
+}
+
 // intList formats []int as "1, 2".
 func intList(ns []int) string {
 	parts := make([]string, len(ns))

@@ -56,3 +56,24 @@ func TestNumListRounds(t *testing.T) {
 		t.Errorf("numList = %q, want %q", got, want)
 	}
 }
+
+// TestSpansText: spans in order with each cantilever at its end, as a
+// framing schedule lists them (common practice, no source).
+func TestSpansText(t *testing.T) {
+	rows := []struct {
+		spans []float64
+		ovh   [2]float64
+		want  string
+	}{
+		{[]float64{144}, [2]float64{}, `12'-0"`},
+		{[]float64{144}, [2]float64{42, 0}, `3'-6" cantilever + 12'-0"`},
+		{[]float64{144, 150}, [2]float64{0, 24}, `12'-0" + 12'-6" + 2'-0" cantilever`},
+		{[]float64{120}, [2]float64{0.004, 0}, `10'-0"`},
+		{nil, [2]float64{}, ""},
+	}
+	for _, r := range rows {
+		if got := SpansText(r.spans, r.ovh); got != r.want {
+			t.Errorf("SpansText(%v, %v) = %q, want %q", r.spans, r.ovh, got, r.want)
+		}
+	}
+}

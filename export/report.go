@@ -149,7 +149,7 @@ func buildReport(r *Results, g *PlanGeometry, when time.Time) *reportPage {
 	for _, mk := range r.Marks {
 		p.Marks = append(p.Marks, markRow{
 			Mark: mk.Mark, Anchor: "mark-" + anchorSafe(mk.Mark), Size: mk.Size, Species: mk.Species, Grade: mk.Grade, Zone: mk.Zone,
-			Spacing: inOrNA(mk.SpacingIn), Spans: ftInList(mk.SpansIn), Rows: intList(mk.BlockingRowsPerSpan),
+			Spacing: inOrNA(mk.SpacingIn), Spans: SpansText(mk.SpansIn, mk.OverhangsIn), Rows: intList(mk.BlockingRowsPerSpan),
 			Ratio: ratioText(mk.MaxRatio), Status: mk.Status, Band: bandClass(mk.MaxRatio, mk.Status), Count: mk.Count,
 		})
 	}

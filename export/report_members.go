@@ -50,7 +50,7 @@ func memberData(r *Results) template.JS {
 		body = append(body, ',')
 		body = strconv.AppendInt(body, int64(intern(m.Size+" "+m.Species+" "+m.Grade)), 10)
 		body = append(body, ',')
-		body = strconv.AppendInt(body, int64(intern(spansKey(m.SpansIn))), 10)
+		body = strconv.AppendInt(body, int64(intern(spansKey(m.SpansIn, m.OverhangsIn))), 10)
 		body = append(body, ',')
 		body = appendJSRatio(body, m.MaxRatio, m.Status != StatusError)
 		body = append(body, ',')
@@ -98,12 +98,10 @@ func memberData(r *Results) template.JS {
 	return template.JS(js)
 }
 
-// spansKey prints spans as 14'-0" + 12'-0" for the panel.
-func spansKey(spans []float64) string {
-	if len(spans) == 0 {
-		return ""
-	}
-	return ftInList(spans)
+// spansKey prints spans with any cantilever as 14'-0" + 2'-0" cantilever
+// for the panel.
+func spansKey(spans []float64, overhangs [2]float64) string {
+	return SpansText(spans, overhangs)
 }
 
 // appendJSRatio appends a ratio to three decimals, or null.

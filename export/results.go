@@ -134,17 +134,18 @@ type BlockingStep struct {
 
 // Mark is one line of the framing schedule: members identical for design.
 type Mark struct {
-	Mark                string    `json:"mark"`
-	Size                string    `json:"size"`
-	Species             string    `json:"species"`
-	Grade               string    `json:"grade"`
-	Zone                string    `json:"zone"`
-	SpacingIn           float64   `json:"spacing_in"`
-	SpansIn             []float64 `json:"spans_in"`
-	Count               int       `json:"count"`
-	BlockingRowsPerSpan []int     `json:"blocking_rows_per_span"`
-	MaxRatio            float64   `json:"max_ratio"`
-	Status              string    `json:"status"`
+	Mark                string     `json:"mark"`
+	Size                string     `json:"size"`
+	Species             string     `json:"species"`
+	Grade               string     `json:"grade"`
+	Zone                string     `json:"zone"`
+	SpacingIn           float64    `json:"spacing_in"`
+	SpansIn             []float64  `json:"spans_in"`
+	OverhangsIn         [2]float64 `json:"overhangs_in"` // cantilevers [at start, at end], as members'
+	Count               int        `json:"count"`
+	BlockingRowsPerSpan []int      `json:"blocking_rows_per_span"`
+	MaxRatio            float64    `json:"max_ratio"`
+	Status              string     `json:"status"`
 }
 
 // BlockingRow is one line of blocking across a run of adjacent parallel

@@ -98,7 +98,7 @@ func writeMembers(f *excelize.File, st *styles, r *Results) error {
 func writeMarks(f *excelize.File, st *styles, r *Results) error {
 	s, err := newSheet(f, st, SheetMarks, []column{
 		{"Mark", 7}, {"Size", 7}, {"Species / grade", 24}, {"Zone", 10},
-		{"Spacing (in)", 9}, {"Spans (ft-in)", 22}, {"Count", 7},
+		{"Spacing (in)", 9}, {"Spans (ft-in)", 30}, {"Count", 7},
 		{"Blocking rows / span", 11}, {"Max ratio", 9}, {"Status", 8},
 	})
 	if err != nil {
@@ -111,7 +111,7 @@ func writeMarks(f *excelize.File, st *styles, r *Results) error {
 		s.text(speciesGrade(m.Species, m.Grade))
 		s.text(m.Zone)
 		s.num(m.SpacingIn, cNum1)
-		s.text(ftInList(m.SpansIn))
+		s.text(SpansText(m.SpansIn, m.OverhangsIn))
 		s.integer(m.Count)
 		s.text(intList(m.BlockingRowsPerSpan))
 		s.ratio(m.MaxRatio, true)

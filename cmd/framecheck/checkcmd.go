@@ -480,7 +480,7 @@ func printSummary(w io.Writer, c *checkRun, proj *Project, r *export.Results, wr
 	fmt.Fprintln(tw, "mark\tcount\tsize\tgrade\tzone\tspacing\ttrib\tspans\tblocking/span\tmax ratio\tstatus")
 	for _, m := range r.Marks {
 		fmt.Fprintf(tw, "%s\t%d\t%s\t%s %s\t%s\t%s\t%s\t%s\t%s\t%.2f\t%s\n", m.Mark, m.Count, m.Size, shortSpecies(m.Species), m.Grade,
-			m.Zone, inchText(m.SpacingIn), inchText(trib[m.Mark]), spansText(m.SpansIn), rowsText(m.BlockingRowsPerSpan),
+			m.Zone, inchText(m.SpacingIn), inchText(trib[m.Mark]), spansText(m.SpansIn, m.OverhangsIn), rowsText(m.BlockingRowsPerSpan),
 			m.MaxRatio, statusText(colour, m.Status))
 	}
 	tw.Flush()
@@ -574,15 +574,11 @@ func shortSpecies(s string) string {
 	return s
 }
 
-func spansText(spans []float64) string {
-	var parts []string
-	for _, s := range spans {
-		parts = append(parts, export.FtIn(s))
+func spansText(spans []float64, overhangs [2]float64) string {
+	if t := export.SpansText(spans, overhangs); t != "" {
+		return t
 	}
-	if len(parts) == 0 {
-		return "-"
-	}
-	return strings.Join(parts, " + ")
+	return "-"
 }
 
 func rowsText(rows []int) string {

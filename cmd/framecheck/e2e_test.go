@@ -71,7 +71,15 @@ func TestDemoEndToEnd(t *testing.T) {
 	if r.Summary.Fail == 0 || r.Summary.Error == 0 || r.Summary.Pass == 0 {
 		t.Errorf("summary %+v: the demo should have passing, failing and error members", r.Summary)
 	}
-	for _, want := range []string{"mark", "blocking rows to add", "takeoff:", "licensed professional"} {
+	// The balcony joists run 42 in past the south wall (samples/demogen,
+	// F3): their mark lists the cantilever with the span, in results.json
+	// and in the printed schedule.
+	for _, mk := range r.Marks {
+		if strings.Contains(mk.Zone, "BALCONY") && mk.OverhangsIn != [2]float64{42, 0} {
+			t.Errorf("mark %s (%s): overhangs %v, want [42 0]", mk.Mark, mk.Zone, mk.OverhangsIn)
+		}
+	}
+	for _, want := range []string{"mark", "blocking rows to add", "takeoff:", "licensed professional", `3'-6" cantilever + 12'-0"`} {
 		if !strings.Contains(stdout, want) {
 			t.Errorf("summary lacks %q:\n%s", want, stdout)
 		}

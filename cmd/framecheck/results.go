@@ -154,7 +154,7 @@ func exportMarks(members []export.Member) []export.Mark {
 		mk := byMark[m.Mark]
 		if mk == nil {
 			mk = &export.Mark{Mark: m.Mark, Size: m.Size, Species: m.Species, Grade: m.Grade,
-				Zone: m.Zone, SpacingIn: m.SpacingIn, SpansIn: m.SpansIn,
+				Zone: m.Zone, SpacingIn: m.SpacingIn, SpansIn: m.SpansIn, OverhangsIn: m.OverhangsIn,
 				BlockingRowsPerSpan: m.BlockingRowsPerSpan, Status: m.Status}
 			byMark[m.Mark] = mk
 			names = append(names, m.Mark)
