@@ -3,6 +3,7 @@ package export
 import (
 	"archive/zip"
 	"bufio"
+	"bytes"
 	"compress/flate"
 	"fmt"
 	"io"
@@ -54,8 +55,14 @@ func WriteXLSX(path string, r *Results) error {
 			return fmt.Errorf("export: %s: %w", path, err)
 		}
 	}
+	// The workbook without the member rows is small; the rows are added
+	// to it as it is copied to the file (xlsx_members.go).
+	var book bytes.Buffer
+	if err := f.Write(&book); err != nil {
+		return fmt.Errorf("export: %s: %w", path, err)
+	}
 	return writeAtomic(path, func(w *bufio.Writer) error {
-		return f.Write(w)
+		return spliceMembers(w, book.Bytes(), st, r.Members)
 	})
 }
 
@@ -127,15 +134,13 @@ func newStyles(f *excelize.File) (*styles, error) {
 
 // sheet is one streamed worksheet with a header row.
 type sheet struct {
+	rowCells
 	f     *excelize.File
 	sw    *excelize.StreamWriter
-	st    *styles
 	name  string
 	ncols int
 	row   int
-	fail  bool            // current row is a failing row
-	store []excelize.Cell // the current row's cells
-	cells []any           // pointers into store, for SetRow
+	cells []any // pointers into store, for SetRow
 }
 
 // column is a header cell and its width in characters.
@@ -164,7 +169,7 @@ func newSheet(f *excelize.File, st *styles, name string, cols []column) (*sheet,
 	if err := sw.SetPanes(&excelize.Panes{Freeze: true, YSplit: 1, TopLeftCell: "A2", ActivePane: "bottomLeft"}); err != nil {
 		return nil, err
 	}
-	s := &sheet{f: f, sw: sw, st: st, name: name, ncols: len(cols)}
+	s := &sheet{rowCells: rowCells{st: st}, f: f, sw: sw, name: name, ncols: len(cols)}
 	head := make([]any, len(cols))
 	for i, c := range cols {
 		head[i] = excelize.Cell{StyleID: st.header, Value: c.Head}
@@ -174,59 +179,6 @@ func newSheet(f *excelize.File, st *styles, name string, cols []column) (*sheet,
 		return nil, err
 	}
 	return s, nil
-}
-
-// begin starts a row; fail shades it.
-func (s *sheet) begin(fail bool) {
-	s.fail = fail
-	s.store = s.store[:0]
-}
-
-func (s *sheet) style(k cellKind) int {
-	if s.fail {
-		return s.st.fail[k]
-	}
-	return s.st.plain[k]
-}
-
-// text adds a text cell; an empty one is a styled cell without a value,
-// which excelize writes without the inline-string markup.
-func (s *sheet) text(v string) {
-	if v == "" {
-		s.store = append(s.store, excelize.Cell{StyleID: s.style(cText)})
-		return
-	}
-	s.store = append(s.store, excelize.Cell{StyleID: s.style(cText), Value: v})
-}
-
-// num adds a number cell with format k; non-finite numbers become "n/a".
-func (s *sheet) num(v float64, k cellKind) {
-	if !finite(v) {
-		s.store = append(s.store, excelize.Cell{StyleID: s.style(cText), Value: "n/a"})
-		return
-	}
-	s.store = append(s.store, excelize.Cell{StyleID: s.style(k), Value: v})
-}
-
-// integer adds an integer cell.
-func (s *sheet) integer(v int) {
-	s.store = append(s.store, excelize.Cell{StyleID: s.style(cInt), Value: v})
-}
-
-// ratio adds a ratio cell, bold red over 1.00; ok=false leaves it blank.
-func (s *sheet) ratio(v float64, ok bool) {
-	switch {
-	case !ok:
-		s.store = append(s.store, excelize.Cell{StyleID: s.style(cText)})
-	case finite(v) && v > 1.0:
-		id := s.st.highOK
-		if s.fail {
-			id = s.st.high
-		}
-		s.store = append(s.store, excelize.Cell{StyleID: id, Value: v})
-	default:
-		s.num(v, cRatio)
-	}
 }
 
 // end writes the row.

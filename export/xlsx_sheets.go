@@ -39,59 +39,15 @@ func speciesGrade(species, grade string) string {
 	return strings.TrimSpace(species + " " + grade)
 }
 
+// writeMembers writes the Members sheet's columns, header row, frozen
+// pane and an autofilter over all the members' rows, which spliceMembers
+// then adds (see xlsx_members.go).
 func writeMembers(f *excelize.File, st *styles, r *Results) error {
 	s, err := newSheet(f, st, SheetMembers, membersColumns)
 	if err != nil {
 		return err
 	}
-	var kindRatio [6]float64
-	var kindSeen [6]bool
-	for i := range r.Members {
-		m := &r.Members[i]
-		s.begin(m.Status != StatusPass)
-		s.text(m.ID)
-		s.text(m.Mark)
-		s.text(m.Size)
-		s.text(speciesGrade(m.Species, m.Grade))
-		s.text(ftInList(m.SpansIn))
-		if m.OverhangsIn[0] != 0 || m.OverhangsIn[1] != 0 {
-			s.text(FtIn(m.OverhangsIn[0]) + " / " + FtIn(m.OverhangsIn[1]))
-		} else {
-			s.text("")
-		}
-		s.text(FtIn(m.LengthIn))
-		s.num(m.SpacingIn, cNum1)
-		s.num(m.TribIn, cNum1)
-		s.text(m.Zone)
-		kindSeen = [6]bool{}
-		for _, c := range m.Checks {
-			for k, kind := range CheckKinds {
-				if c.Kind == kind && (!kindSeen[k] || c.Ratio > kindRatio[k] || !finite(c.Ratio)) {
-					kindRatio[k], kindSeen[k] = c.Ratio, true
-				}
-			}
-		}
-		for k := range CheckKinds {
-			s.ratio(kindRatio[k], kindSeen[k])
-		}
-		g, ok := governingCheck(m)
-		s.text(m.Governing)
-		if ok {
-			s.text(g.Combo)
-		} else {
-			s.text("")
-		}
-		s.ratio(m.MaxRatio, len(m.Checks) > 0 || m.MaxRatio != 0)
-		s.text(intList(m.BlockingRowsPerSpan))
-		s.text(ftInList(m.BlockingAtIn))
-		s.text(m.Status)
-		s.text(m.Layer)
-		s.text(m.Handle)
-		s.text(strings.Join(m.Messages, "; "))
-		if err := s.end(); err != nil {
-			return err
-		}
-	}
+	s.row = len(r.Members) + 1
 	return s.close()
 }
 

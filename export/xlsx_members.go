@@ -1,0 +1,366 @@
+package export
+
+import (
+	"bytes"
+	"compress/flate"
+	"hash/crc32"
+	"math"
+	"runtime"
+	"strconv"
+	"strings"
+	"sync"
+	"unicode/utf16"
+	"unicode/utf8"
+
+	"github.com/xuri/excelize/v2"
+)
+
+// The Members sheet holds one row of 25 cells per member: 2.5 million
+// cells at 100,000 members, where excelize's stream writer spends about
+// half a microsecond a cell (2 s in all). So excelize writes the workbook
+// (styles, every other sheet, the Members sheet's columns, header row,
+// frozen pane and autofilter) and the member rows are written here as
+// SpreadsheetML (ECMA-376 Part 1, 18.3.1.73 row, 18.3.1.4 c, 18.3.1.53
+// is: inline strings), in blocks of rows that are built and deflated on
+// every core at once, then spliced into excelize's sheet part
+// (spliceMembers). The cells are the same excelize.Cell values, with the
+// same styles, that the sheet helpers build for excelize.
+
+// memberRowsPerBlock is how many member rows one block holds (about 3 MB
+// of XML).
+const memberRowsPerBlock = 2048
+
+// rowCells builds one row's cells with the schedule's styles.
+type rowCells struct {
+	st    *styles
+	fail  bool
+	store []excelize.Cell
+}
+
+// begin starts a row; fail shades it.
+func (s *rowCells) begin(fail bool) {
+	s.fail = fail
+	s.store = s.store[:0]
+}
+
+func (s *rowCells) style(k cellKind) int {
+	if s.fail {
+		return s.st.fail[k]
+	}
+	return s.st.plain[k]
+}
+
+// text adds a text cell; an empty one is a styled cell without a value.
+func (s *rowCells) text(v string) {
+	if v == "" {
+		s.store = append(s.store, excelize.Cell{StyleID: s.style(cText)})
+		return
+	}
+	s.store = append(s.store, excelize.Cell{StyleID: s.style(cText), Value: v})
+}
+
+// num adds a number cell with format k; non-finite numbers become "n/a".
+func (s *rowCells) num(v float64, k cellKind) {
+	if !finite(v) {
+		s.store = append(s.store, excelize.Cell{StyleID: s.style(cText), Value: "n/a"})
+		return
+	}
+	s.store = append(s.store, excelize.Cell{StyleID: s.style(k), Value: v})
+}
+
+// integer adds an integer cell.
+func (s *rowCells) integer(v int) {
+	s.store = append(s.store, excelize.Cell{StyleID: s.style(cInt), Value: v})
+}
+
+// ratio adds a ratio cell, bold red over 1.00; ok=false leaves it blank.
+func (s *rowCells) ratio(v float64, ok bool) {
+	switch {
+	case !ok:
+		s.store = append(s.store, excelize.Cell{StyleID: s.style(cText)})
+	case finite(v) && v > 1.0:
+		id := s.st.highOK
+		if s.fail {
+			id = s.st.high
+		}
+		s.store = append(s.store, excelize.Cell{StyleID: id, Value: v})
+	default:
+		s.num(v, cRatio)
+	}
+}
+
+// memberRow fills s with member m's cells, in membersColumns order.
+func memberRow(s *rowCells, m *Member) {
+	s.begin(m.Status != StatusPass)
+	s.text(m.ID)
+	s.text(m.Mark)
+	s.text(m.Size)
+	s.text(speciesGrade(m.Species, m.Grade))
+	s.text(ftInList(m.SpansIn))
+	if m.OverhangsIn[0] != 0 || m.OverhangsIn[1] != 0 {
+		s.text(FtIn(m.OverhangsIn[0]) + " / " + FtIn(m.OverhangsIn[1]))
+	} else {
+		s.text("")
+	}
+	s.text(FtIn(m.LengthIn))
+	s.num(m.SpacingIn, cNum1)
+	s.num(m.TribIn, cNum1)
+	s.text(m.Zone)
+	var kindRatio [6]float64
+	var kindSeen [6]bool
+	for _, c := range m.Checks {
+		for k, kind := range CheckKinds {
+			if c.Kind == kind && (!kindSeen[k] || c.Ratio > kindRatio[k] || !finite(c.Ratio)) {
+				kindRatio[k], kindSeen[k] = c.Ratio, true
+			}
+		}
+	}
+	for k := range CheckKinds {
+		s.ratio(kindRatio[k], kindSeen[k])
+	}
+	g, ok := governingCheck(m)
+	s.text(m.Governing)
+	if ok {
+		s.text(g.Combo)
+	} else {
+		s.text("")
+	}
+	s.ratio(m.MaxRatio, len(m.Checks) > 0 || m.MaxRatio != 0)
+	s.text(intList(m.BlockingRowsPerSpan))
+	s.text(ftInList(m.BlockingAtIn))
+	s.text(m.Status)
+	s.text(m.Layer)
+	s.text(m.Handle)
+	s.text(strings.Join(m.Messages, "; "))
+}
+
+// colNames are the column letters A, B, ... of the Members sheet.
+var colNames = func() []string {
+	out := make([]string, len(membersColumns))
+	for i := range out {
+		out[i], _ = excelize.ColumnNumberToName(i + 1)
+	}
+	return out
+}()
+
+// appendRow appends row number r with cells as a SpreadsheetML <row>.
+func appendRow(b []byte, r int, cells []excelize.Cell) []byte {
+	b = append(b, `<row r="`...)
+	b = strconv.AppendInt(b, int64(r), 10)
+	b = append(b, `">`...)
+	for i := range cells {
+		c := &cells[i]
+		b = append(b, `<c r="`...)
+		b = append(b, colNames[i]...)
+		b = strconv.AppendInt(b, int64(r), 10)
+		b = append(b, '"')
+		if c.StyleID != 0 {
+			b = append(b, ` s="`...)
+			b = strconv.AppendInt(b, int64(c.StyleID), 10)
+			b = append(b, '"')
+		}
+		switch v := c.Value.(type) {
+		case nil:
+			b = append(b, `/>`...)
+		case string:
+			b = append(b, ` t="inlineStr"><is><t`...)
+			if v != strings.TrimSpace(v) {
+				b = append(b, ` xml:space="preserve"`...)
+			}
+			b = append(b, '>')
+			b = appendXMLText(b, v)
+			b = append(b, `</t></is></c>`...)
+		case float64:
+			b = append(b, `><v>`...)
+			b = appendCellNumber(b, v)
+			b = append(b, `</v></c>`...)
+		case int:
+			b = append(b, `><v>`...)
+			b = strconv.AppendInt(b, int64(v), 10)
+			b = append(b, `</v></c>`...)
+		default:
+			b = append(b, ` t="inlineStr"><is><t>`...)
+			b = append(b, "?"...)
+			b = append(b, `</t></is></c>`...)
+		}
+	}
+	return append(b, `</row>`...)
+}
+
+// appendCellNumber writes a finite number as a cell value, the shortest
+// decimal that reads back as v: plain digits, exponent form (xsd:double)
+// only for magnitudes whose digits would run long.
+func appendCellNumber(b []byte, v float64) []byte {
+	if a := math.Abs(v); a != 0 && (a < 1e-20 || a >= 1e21) {
+		return strconv.AppendFloat(b, v, 'E', -1, 64)
+	}
+	return strconv.AppendFloat(b, v, 'f', -1, 64)
+}
+
+// maxCellChars is the most UTF-16 units a cell holds (the spreadsheet
+// limit of 32,767 characters).
+const maxCellChars = 32767
+
+// appendXMLText appends s as XML character data: &, < and > escaped,
+// carriage returns and tabs as character references (so they survive
+// reading), bytes that are not valid UTF-8 and characters XML 1.0 does
+// not allow as U+FFFD, and at most maxCellChars UTF-16 units.
+func appendXMLText(b []byte, s string) []byte {
+	units := 0
+	for i := 0; i < len(s); {
+		r, n := rune(s[i]), 1
+		if r >= utf8.RuneSelf {
+			r, n = utf8.DecodeRuneInString(s[i:])
+		}
+		if units += utf16.RuneLen(max(r, 0)); units > maxCellChars {
+			break
+		}
+		switch {
+		case r == '&':
+			b = append(b, "&amp;"...)
+		case r == '<':
+			b = append(b, "&lt;"...)
+		case r == '>':
+			b = append(b, "&gt;"...)
+		case r == '\r':
+			b = append(b, "&#xD;"...)
+		case r == '\t':
+			b = append(b, "&#x9;"...)
+		case r == '\n':
+			b = append(b, '\n')
+		case r == utf8.RuneError && n == 1, r < 0x20, r >= 0xD800 && r < 0xE000, r == 0xFFFE, r == 0xFFFF:
+			b = utf8.AppendRune(b, '\uFFFD')
+		default:
+			b = append(b, s[i:i+n]...)
+		}
+		i += n
+	}
+	return b
+}
+
+// rowBlock is one block of member rows, as XML and deflated.
+type rowBlock struct {
+	raw, deflated []byte
+}
+
+// memberBlocks builds the rows of members (row numbers from 2, after the
+// header) in blocks on every core, and hands each block to emit in order.
+// Each block is deflated on its own and ended with a sync flush, so the
+// blocks joined make one deflate stream (RFC 1951, 3.2.3: a stream is a
+// series of blocks; only the last has BFINAL set) once a final empty
+// block follows.
+func memberBlocks(st *styles, members []Member, emit func(rowBlock) error) error {
+	n := (len(members) + memberRowsPerBlock - 1) / memberRowsPerBlock
+	workers := min(runtime.GOMAXPROCS(0), max(n, 1))
+	type done struct {
+		i int
+		b rowBlock
+	}
+	jobs := make(chan int)
+	results := make(chan done, workers)
+	// Workers may run at most 2*workers blocks ahead of the writer, so
+	// memory stays a few blocks however large the plan.
+	slots := make(chan struct{}, 2*workers)
+	var wg sync.WaitGroup
+	for w := 0; w < workers; w++ {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			rc := rowCells{st: st}
+			var zbuf bytes.Buffer
+			zw, _ := flate.NewWriter(&zbuf, flate.BestSpeed)
+			for i := range jobs {
+				lo, hi := i*memberRowsPerBlock, min((i+1)*memberRowsPerBlock, len(members))
+				raw := make([]byte, 0, (hi-lo)*1600)
+				for k := lo; k < hi; k++ {
+					memberRow(&rc, &members[k])
+					raw = appendRow(raw, k+2, rc.store)
+				}
+				zbuf.Reset()
+				zw.Reset(&zbuf)
+				zw.Write(raw)
+				zw.Flush()
+				results <- done{i, rowBlock{raw: raw, deflated: bytes.Clone(zbuf.Bytes())}}
+			}
+		}()
+	}
+	stop := make(chan struct{})
+	go func() {
+		defer close(jobs)
+		for i := 0; i < n; i++ {
+			select {
+			case slots <- struct{}{}:
+			case <-stop:
+				return
+			}
+			select {
+			case jobs <- i:
+			case <-stop:
+				return
+			}
+		}
+	}()
+	go func() {
+		wg.Wait()
+		close(results)
+	}()
+	pending := map[int]rowBlock{}
+	next := 0
+	var err error
+	for d := range results {
+		pending[d.i] = d.b
+		for err == nil {
+			b, ok := pending[next]
+			if !ok {
+				break
+			}
+			delete(pending, next)
+			next++
+			<-slots
+			if err = emit(b); err != nil {
+				close(stop)
+			}
+		}
+		if err != nil {
+			// Drain the workers' results so they can finish.
+			for range results {
+				<-slots
+			}
+			break
+		}
+	}
+	return err
+}
+
+// deflatedPart is a zip part deflated piecewise, with what its local
+// header needs.
+type deflatedPart struct {
+	pieces   [][]byte
+	crc      uint32
+	raw, cmp uint64
+}
+
+// add appends raw data already deflated (sync-flushed) as z.
+func (p *deflatedPart) add(raw, z []byte) {
+	p.crc = crc32.Update(p.crc, crc32.IEEETable, raw)
+	p.raw += uint64(len(raw))
+	p.cmp += uint64(len(z))
+	p.pieces = append(p.pieces, z)
+}
+
+// deflatePiece deflates raw on its own with a sync flush.
+func deflatePiece(raw []byte) []byte {
+	var buf bytes.Buffer
+	zw, _ := flate.NewWriter(&buf, flate.BestSpeed)
+	zw.Write(raw)
+	zw.Flush()
+	return buf.Bytes()
+}
+
+// finalBlock is an empty deflate block with BFINAL set, ending a stream.
+func finalBlock() []byte {
+	var buf bytes.Buffer
+	zw, _ := flate.NewWriter(&buf, flate.BestSpeed)
+	zw.Close()
+	return buf.Bytes()
+}
