@@ -2,24 +2,22 @@ package export
 
 import (
 	"encoding/json"
+	"fmt"
+	"math"
 	"reflect"
-	"strings"
+	"strconv"
+	"unicode/utf8"
 )
 
 // memberEncoder writes a member exactly as json.Marshal does
-// memberForJSON(m) with the checks' traces left out, but encodes each
-// distinct checks slice once: members checked alike share it (the caller
-// checks identical members once).
-//
-// The member is written in five pieces, in field order: the fields before
-// Checks, "checks", the fields between Checks and Factors, "factors"
-// (always empty in the file, so left out), the fields after. The three runs of plain fields are encoded with struct
-// types built from Member's own fields (reflect.StructOf), so a field
-// added to Member is written without a change here.
+// memberForJSON(m) with the checks' traces left out, field by field and
+// without reflection (results.json holds one line per member, 100,000 of
+// them on a large plan), and encodes each distinct checks slice once:
+// members checked alike share it (the caller checks identical members
+// once). TestMemberEncoderMatchesMarshal holds it to encoding/json, with
+// every field of Member set: a field added to Member and not here fails
+// it.
 type memberEncoder struct {
-	parts   [3]memberPart
-	factors fieldTag
-	checks  fieldTag
 	// seen holds the slices met once; cache the JSON of those met again.
 	// A plan whose members are all different caches nothing.
 	seen  map[cleanSlice]bool
@@ -27,105 +25,215 @@ type memberEncoder struct {
 	buf   []byte // the last member written, reused
 }
 
-// memberPart is a run of Member's fields and a struct type holding them.
-type memberPart struct {
-	typ reflect.Type
-	idx []int // Member field index of each field of typ
-}
-
-// fieldTag is a field's JSON key (quoted, with its colon) and whether it
-// has omitempty.
-type fieldTag struct {
-	key       []byte
-	omitEmpty bool
-}
-
 func newMemberEncoder() *memberEncoder {
-	t := reflect.TypeFor[Member]()
-	e := &memberEncoder{seen: map[cleanSlice]bool{}, cache: map[cleanSlice][]byte{}}
-	part := 0
-	var fields [3][]reflect.StructField
-	for i := 0; i < t.NumField(); i++ {
-		f := t.Field(i)
-		switch f.Name {
-		case "Checks":
-			e.checks, part = tagOf(f), 1
-			continue
-		case "Factors":
-			e.factors, part = tagOf(f), 2
-			continue
-		}
-		fields[part] = append(fields[part], reflect.StructField{Name: f.Name, Type: f.Type, Tag: f.Tag})
-		e.parts[part].idx = append(e.parts[part].idx, i)
-	}
-	for p := range e.parts {
-		e.parts[p].typ = reflect.StructOf(fields[p])
-	}
-	return e
-}
-
-func tagOf(f reflect.StructField) fieldTag {
-	name, opts, _ := strings.Cut(f.Tag.Get("json"), ",")
-	if name == "" {
-		name = f.Name
-	}
-	key, _ := json.Marshal(name)
-	return fieldTag{key: append(key, ':'), omitEmpty: strings.Contains(","+opts+",", ",omitempty,")}
+	return &memberEncoder{seen: map[cleanSlice]bool{}, cache: map[cleanSlice][]byte{}}
 }
 
 // encode returns the JSON of member m (already through memberForJSON),
-// whose Checks and Factors came from orig's. The bytes are valid until
-// the next call.
+// whose Checks came from orig's. The bytes are valid until the next call.
+// A NaN or infinite number is an error, as with encoding/json.
 func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
-	v := reflect.ValueOf(m).Elem()
-	out := append(e.buf[:0], '{')
-	sep := func() {
-		if len(out) > 1 {
-			out = append(out, ',')
-		}
+	var w jsonOut
+	w.b = append(e.buf[:0], '{')
+	w.str("id", m.ID)
+	w.str("mark", m.Mark)
+	w.str("layer", m.Layer)
+	w.str("handle", m.Handle)
+	if m.Source != "" {
+		w.str("source", m.Source)
 	}
-	for p := range e.parts {
-		part := &e.parts[p]
-		pv := reflect.New(part.typ).Elem()
-		for j, i := range part.idx {
-			pv.Field(j).Set(v.Field(i))
+	w.floats("start", m.Start[:])
+	w.floats("end", m.End[:])
+	w.num("length_in", m.LengthIn)
+	w.floats("bearings_at_in", m.BearingsAtIn)
+	w.floats("spans_in", m.SpansIn)
+	w.floats("overhangs_in", m.OverhangsIn[:])
+	w.num("trib_in", m.TribIn)
+	w.num("spacing_in", m.SpacingIn)
+	w.str("size", m.Size)
+	w.str("species", m.Species)
+	w.str("grade", m.Grade)
+	w.str("zone", m.Zone)
+	if m.Calculation != "" {
+		w.str("calculation", m.Calculation)
+	}
+	checks, err := e.checksJSON(orig.Checks)
+	if err != nil {
+		return nil, err
+	}
+	w.key("checks")
+	if m.Checks == nil {
+		w.b = append(w.b, "null"...)
+	} else {
+		w.b = append(w.b, checks...)
+	}
+	w.str("governing", m.Governing)
+	w.num("max_ratio", m.MaxRatio)
+	w.ints("blocking_rows_per_span", m.BlockingRowsPerSpan)
+	w.floats("blocking_at_in", m.BlockingAtIn)
+	if len(m.BlockingSteps) > 0 {
+		w.key("blocking_steps")
+		w.b = append(w.b, '[')
+		for i, s := range m.BlockingSteps {
+			if i > 0 {
+				w.b = append(w.b, ',')
+			}
+			w.b = append(w.b, '{')
+			w.first = true
+			w.key("rows_per_span")
+			w.b = strconv.AppendInt(w.b, int64(s.RowsPerSpan), 10)
+			w.num("lu_in", s.LuIn)
+			w.num("cl", s.CL)
+			w.num("ratio", s.Ratio)
+			w.b = append(w.b, '}')
 		}
-		b, err := json.Marshal(pv.Interface())
+		w.b = append(w.b, ']')
+		w.first = false
+	}
+	if len(m.Info) > 0 {
+		w.strs("info", m.Info)
+	}
+	if len(m.Factors) > 0 { // never in the file (see memberForJSON); kept for parity
+		b, err := json.Marshal(m.Factors)
 		if err != nil {
 			return nil, err
 		}
-		if inner := b[1 : len(b)-1]; len(inner) > 0 {
-			sep()
-			out = append(out, inner...)
-		}
-		switch p {
-		case 0:
-			b, err := e.checksJSON(orig.Checks)
-			if err != nil {
-				return nil, err
-			}
-			out = e.field(out, e.checks, b, len(m.Checks) == 0, m.Checks == nil)
-		case 1:
-			out = e.field(out, e.factors, nil, len(m.Factors) == 0, m.Factors == nil)
-		}
+		w.key("factors")
+		w.b = append(w.b, b...)
 	}
-	e.buf = append(out, '}')
+	w.str("status", m.Status)
+	w.strs("messages", m.Messages)
+	if w.err != nil {
+		return nil, w.err
+	}
+	e.buf = append(w.b, '}')
 	return e.buf, nil
 }
 
-// field appends "name":value unless omitempty drops it.
-func (e *memberEncoder) field(out []byte, t fieldTag, value []byte, empty, isNil bool) []byte {
-	if empty && t.omitEmpty {
-		return out
+// jsonOut appends the fields of one JSON object.
+type jsonOut struct {
+	b     []byte
+	first bool // no field written yet in the current object (after '{')
+	err   error
+}
+
+// key writes "name": with the comma before it when needed.
+func (w *jsonOut) key(name string) {
+	if len(w.b) > 1 && !w.first {
+		w.b = append(w.b, ',')
 	}
-	if len(out) > 1 {
-		out = append(out, ',')
+	w.first = false
+	w.b = append(w.b, '"')
+	w.b = append(w.b, name...)
+	w.b = append(w.b, '"', ':')
+}
+
+func (w *jsonOut) str(name, v string) {
+	w.key(name)
+	w.b = appendJSONString(w.b, v)
+}
+
+func (w *jsonOut) num(name string, v float64) {
+	w.key(name)
+	w.float(v)
+}
+
+// float appends v as encoding/json writes a float64.
+func (w *jsonOut) float(v float64) {
+	if math.IsNaN(v) || math.IsInf(v, 0) {
+		if w.err == nil {
+			w.err = fmt.Errorf("json: unsupported value: %v", v)
+		}
+		w.b = append(w.b, '0')
+		return
 	}
-	out = append(out, t.key...)
-	if isNil {
-		return append(out, "null"...)
+	w.b = appendJSONFloat(w.b, v)
+}
+
+// floats writes a list of numbers; nil as null.
+func (w *jsonOut) floats(name string, vs []float64) {
+	w.key(name)
+	if vs == nil {
+		w.b = append(w.b, "null"...)
+		return
 	}
-	return append(out, value...)
+	w.b = append(w.b, '[')
+	for i, v := range vs {
+		if i > 0 {
+			w.b = append(w.b, ',')
+		}
+		w.float(v)
+	}
+	w.b = append(w.b, ']')
+}
+
+// ints writes a list of integers; nil as null.
+func (w *jsonOut) ints(name string, vs []int) {
+	w.key(name)
+	if vs == nil {
+		w.b = append(w.b, "null"...)
+		return
+	}
+	w.b = append(w.b, '[')
+	for i, v := range vs {
+		if i > 0 {
+			w.b = append(w.b, ',')
+		}
+		w.b = strconv.AppendInt(w.b, int64(v), 10)
+	}
+	w.b = append(w.b, ']')
+}
+
+// strs writes a list of strings; nil as null.
+func (w *jsonOut) strs(name string, vs []string) {
+	w.key(name)
+	if vs == nil {
+		w.b = append(w.b, "null"...)
+		return
+	}
+	w.b = append(w.b, '[')
+	for i, v := range vs {
+		if i > 0 {
+			w.b = append(w.b, ',')
+		}
+		w.b = appendJSONString(w.b, v)
+	}
+	w.b = append(w.b, ']')
+}
+
+// appendJSONFloat appends v as encoding/json writes a finite float64: the
+// shortest decimal that reads back as v, in exponent form below 1e-6 and
+// from 1e21, with a one-digit negative exponent kept to one digit.
+func appendJSONFloat(b []byte, v float64) []byte {
+	format := byte('f')
+	if a := math.Abs(v); a != 0 && (a < 1e-6 || a >= 1e21) {
+		format = 'e'
+	}
+	b = strconv.AppendFloat(b, v, format, -1, 64)
+	if format == 'e' {
+		// e-07 -> e-7, as encoding/json does.
+		if n := len(b); n >= 4 && b[n-4] == 'e' && b[n-3] == '-' && b[n-2] == '0' {
+			b[n-2] = b[n-1]
+			b = b[:n-1]
+		}
+	}
+	return b
+}
+
+// appendJSONString appends s quoted. Plain ASCII without characters that
+// JSON or HTML escaping touches is copied; anything else goes through
+// encoding/json, so the bytes are always its own.
+func appendJSONString(b []byte, s string) []byte {
+	for i := 0; i < len(s); i++ {
+		c := s[i]
+		if c < 0x20 || c >= utf8.RuneSelf || c == '"' || c == '\\' || c == '<' || c == '>' || c == '&' {
+			q, _ := json.Marshal(s)
+			return append(b, q...)
+		}
+	}
+	b = append(b, '"')
+	b = append(b, s...)
+	return append(b, '"')
 }
 
 // checksJSON returns the JSON of a member's checks without their traces

@@ -3,6 +3,8 @@ package export
 import (
 	"bytes"
 	"encoding/json"
+	"reflect"
+	"strconv"
 	"testing"
 )
 
@@ -36,6 +38,7 @@ func TestMemberEncoderMatchesMarshal(t *testing.T) {
 	empty.Checks, empty.Factors = []Check{}, []TraceItem{}
 	members = append(members, empty)
 	members = append(members, Member{})
+	members = append(members, fullMember(t), awkwardJSONMember())
 
 	e := newMemberEncoder()
 	for i := range members {
@@ -64,4 +67,57 @@ func TestMemberEncoderMatchesMarshal(t *testing.T) {
 	if len(e.cache) == 0 {
 		t.Error("shared slices were never cached")
 	}
+}
+
+// fullMember returns a Member with every field set to something that is
+// not its zero value, by reflection, so that a field added to Member and
+// not to the encoder makes TestMemberEncoderMatchesMarshal fail.
+func fullMember(t *testing.T) Member {
+	var m Member
+	v := reflect.ValueOf(&m).Elem()
+	n := 0
+	var fill func(f reflect.Value)
+	fill = func(f reflect.Value) {
+		n++
+		switch f.Kind() {
+		case reflect.String:
+			f.SetString("s" + strconv.Itoa(n))
+		case reflect.Float64:
+			f.SetFloat(float64(n) + 0.25)
+		case reflect.Int:
+			f.SetInt(int64(n))
+		case reflect.Bool:
+			f.SetBool(true)
+		case reflect.Array:
+			for i := 0; i < f.Len(); i++ {
+				fill(f.Index(i))
+			}
+		case reflect.Slice:
+			s := reflect.MakeSlice(f.Type(), 2, 2)
+			for i := 0; i < 2; i++ {
+				fill(s.Index(i))
+			}
+			f.Set(s)
+		case reflect.Struct:
+			for i := 0; i < f.NumField(); i++ {
+				if f.Type().Field(i).IsExported() {
+					fill(f.Field(i))
+				}
+			}
+		default:
+			t.Fatalf("fullMember: no filler for %s", f.Type())
+		}
+	}
+	fill(v)
+	return m
+}
+
+// awkwardJSONMember has text encoding/json escapes and numbers it writes
+// in exponent form.
+func awkwardJSONMember() Member {
+	return Member{ID: "M<1>&\"q\"", Layer: "tab\there\nline", Handle: "bad \xff byte", Zone: "ZÖNE \u2028 sep",
+		Source: "plan.dxf:1 (handle 2A)", Start: [2]float64{1e-7, -2e21}, End: [2]float64{123456789.125, -0.0000015},
+		LengthIn: 1e21, SpansIn: []float64{5e-324}, Messages: []string{"a\u0001b", "☃"}, Info: []string{"<info>"},
+		BlockingSteps: []BlockingStep{{RowsPerSpan: 1, LuIn: 72.5, CL: 0.59, Ratio: 1.0000000000000002}},
+		Status: StatusFail}
 }
