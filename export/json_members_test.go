@@ -119,5 +119,5 @@ func awkwardJSONMember() Member {
 		Source: "plan.dxf:1 (handle 2A)", Start: [2]float64{1e-7, -2e21}, End: [2]float64{123456789.125, -0.0000015},
 		LengthIn: 1e21, SpansIn: []float64{5e-324}, Messages: []string{"a\u0001b", "☃"}, Info: []string{"<info>"},
 		BlockingSteps: []BlockingStep{{RowsPerSpan: 1, LuIn: 72.5, CL: 0.59, Ratio: 1.0000000000000002}},
-		Status: StatusFail}
+		Status:        StatusFail}
 }
