@@ -47,7 +47,22 @@ func (e *NonFiniteError) Unwrap() error { return ErrNonFinite }
 // modified; when nothing needs replacing, Sanitize returns r itself.
 func Sanitize(r *Results) (*Results, []string) {
 	var fields []string
-	v, changed := sanitizeValue(reflect.ValueOf(*r), make([]pathSeg, 0, 8), &fields, map[cleanSlice]bool{})
+	var v reflect.Value
+	var changed bool
+	if membersFinite(r.Members) {
+		// The common case, typed and fast: walk the rest reflectively,
+		// with the members (nearly all of a large plan) left out.
+		rest := *r
+		rest.Members = nil
+		v, changed = sanitizeValue(reflect.ValueOf(rest), make([]pathSeg, 0, 8), &fields, map[cleanSlice]bool{})
+		if changed {
+			out := v.Interface().(Results)
+			out.Members = r.Members
+			v = reflect.ValueOf(out)
+		}
+	} else {
+		v, changed = sanitizeValue(reflect.ValueOf(*r), make([]pathSeg, 0, 8), &fields, map[cleanSlice]bool{})
+	}
 	if !changed {
 		return r, nil
 	}
@@ -73,6 +88,68 @@ func Sanitize(r *Results) (*Results, []string) {
 		flagged[i] = true
 	}
 	return &out, fields
+}
+
+// membersFinite reports whether every number of the members that reaches
+// results.json is finite, without reflection: Sanitize's fast path.
+// Members checked alike share their checks and factors, so each shared
+// slice is looked at once. TestMembersFiniteSeesEveryField holds it to
+// every float64 field of Member.
+func membersFinite(ms []Member) bool {
+	type checksID struct {
+		p *Check
+		n int
+	}
+	type factorsID struct {
+		p *TraceItem
+		n int
+	}
+	seenChecks := map[checksID]bool{}
+	seenFactors := map[factorsID]bool{}
+	fin := func(vs ...float64) bool {
+		for _, v := range vs {
+			if math.IsNaN(v) || math.IsInf(v, 0) {
+				return false
+			}
+		}
+		return true
+	}
+	items := func(ts []TraceItem) bool {
+		for i := range ts {
+			if !fin(ts[i].Value) {
+				return false
+			}
+		}
+		return true
+	}
+	for i := range ms {
+		m := &ms[i]
+		if !fin(m.Start[0], m.Start[1], m.End[0], m.End[1], m.LengthIn, m.OverhangsIn[0], m.OverhangsIn[1],
+			m.TribIn, m.SpacingIn, m.MaxRatio) || !fin(m.BearingsAtIn...) || !fin(m.SpansIn...) || !fin(m.BlockingAtIn...) {
+			return false
+		}
+		for _, s := range m.BlockingSteps {
+			if !fin(s.LuIn, s.CL, s.Ratio) {
+				return false
+			}
+		}
+		if len(m.Checks) > 0 && !seenChecks[checksID{&m.Checks[0], len(m.Checks)}] {
+			for j := range m.Checks {
+				c := &m.Checks[j]
+				if !fin(c.Actual, c.Allowable, c.Ratio) || !items(c.Trace) {
+					return false
+				}
+			}
+			seenChecks[checksID{&m.Checks[0], len(m.Checks)}] = true
+		}
+		if len(m.Factors) > 0 && !seenFactors[factorsID{&m.Factors[0], len(m.Factors)}] {
+			if !items(m.Factors) {
+				return false
+			}
+			seenFactors[factorsID{&m.Factors[0], len(m.Factors)}] = true
+		}
+	}
+	return true
 }
 
 // memberIndex parses "members[12]...." into 12.

@@ -6,6 +6,7 @@ import (
 	"math"
 	"os"
 	"path/filepath"
+	"reflect"
 	"slices"
 	"sort"
 	"strings"
@@ -273,5 +274,57 @@ func TestWriteJSONRefusesDrawingPath(t *testing.T) {
 	}
 	if b, _ := os.ReadFile(path); string(b) != "drawing" {
 		t.Error("drawing was overwritten")
+	}
+}
+
+// TestMembersFiniteSeesEveryField: Sanitize's typed fast path finds a NaN
+// in every float64 of a Member that reaches results.json, one at a time,
+// on a member with every field set (a field added to Member and not to
+// membersFinite fails here). Common practice, no source.
+func TestMembersFiniteSeesEveryField(t *testing.T) {
+	if !membersFinite([]Member{fullMember(t)}) {
+		t.Fatal("a member of finite numbers is reported non-finite")
+	}
+	// Count the float64 leaves that reach the JSON, then poison each.
+	var paths [][]int
+	var walk func(v reflect.Value, path []int)
+	walk = func(v reflect.Value, path []int) {
+		switch v.Kind() {
+		case reflect.Float64:
+			paths = append(paths, slices.Clone(path))
+		case reflect.Struct:
+			for i := 0; i < v.NumField(); i++ {
+				if f := v.Type().Field(i); f.IsExported() && f.Tag.Get("json") != "-" {
+					walk(v.Field(i), append(path, i))
+				}
+			}
+		case reflect.Slice, reflect.Array:
+			for i := 0; i < v.Len(); i++ {
+				walk(v.Index(i), append(path, i))
+			}
+		}
+	}
+	m := fullMember(t)
+	walk(reflect.ValueOf(m), nil)
+	if len(paths) < 20 {
+		t.Fatalf("only %d numbers found in a full member", len(paths))
+	}
+	for _, path := range paths {
+		m := fullMember(t)
+		v := reflect.ValueOf(&m).Elem()
+		for _, i := range path {
+			if v.Kind() == reflect.Struct {
+				v = v.Field(i)
+			} else {
+				v = v.Index(i)
+			}
+		}
+		v.SetFloat(math.NaN())
+		if membersFinite([]Member{m}) {
+			t.Errorf("NaN at field path %v not seen", path)
+		}
+		if _, fields := Sanitize(&Results{Members: []Member{m}}); len(fields) != 1 {
+			t.Errorf("NaN at field path %v: Sanitize reports %v", path, fields)
+		}
 	}
 }
