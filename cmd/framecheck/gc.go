@@ -17,13 +17,33 @@ const (
 	memoryLimit = 900 << 20
 )
 
+// gcTuned is set when tuneGC chose the collector's percentage (GOGC was
+// not set), so that pauseGC may change it.
+var gcTuned bool
+
 // tuneGC applies gcPercent and memoryLimit unless the user set GOGC or
 // GOMEMLIMIT, which then win.
 func tuneGC() {
 	if os.Getenv("GOGC") == "" {
 		debug.SetGCPercent(gcPercent)
+		gcTuned = true
 	}
 	if os.Getenv("GOMEMLIMIT") == "" {
 		debug.SetMemoryLimit(memoryLimit)
 	}
+}
+
+// pauseGC turns the collector off until the returned function is called,
+// for a stretch of work that only builds what stays live (reading the
+// drawing, grouping it into members): collecting during it finds little
+// to free and, with write barriers on, slowed reading a 100,000-joist plan
+// from 0.15 s to 0.3 s. The soft memory limit still holds, so the
+// collector runs anyway if the heap nears it. Without tuneGC (tests, or
+// GOGC set by the user) it does nothing.
+func pauseGC() (resume func()) {
+	if !gcTuned {
+		return func() {}
+	}
+	old := debug.SetGCPercent(-1)
+	return func() { debug.SetGCPercent(old) }
 }

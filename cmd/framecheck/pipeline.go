@@ -95,11 +95,14 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 	if in.units != "" {
 		units = in.units
 	}
+	resume := pauseGC()
 	d, err := dxfimport.ReadFile(in.planPath, dxfimport.Options{Units: units})
 	if err != nil {
+		resume()
 		return nil, err
 	}
 	plan := framing.Group(d, framingOptions(p))
+	resume()
 	o := &outcome{project: p, drawing: d, plan: plan, settings: settings}
 	// a doubt about the units comes first: it explains the findings after it
 	if msg := unitsDoubt(plan, d, in.units, p.Drawing.Units); msg != "" {
