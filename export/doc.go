@@ -18,6 +18,8 @@
 //	                            reported as a *NonFiniteError after the write
 //	ReadJSON(path)              results.json back into Results, traces in place
 //	WriteXLSX(path, r)          sheets Members, Marks, Blocking, Takeoff, Inputs, Notes
+//	                            (excelize writes the workbook; the Members rows are
+//	                            written here and spliced in, see xlsx_members.go)
 //	Annotate(in, out, markup)   copy of the drawing with our layers and markup added
 //	WriteOverlay(path, markup, units)  the markup alone, R12
 //	WriteReport(path, r, geometry, when) report.html: self-contained page with the plan
