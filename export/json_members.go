@@ -152,40 +152,22 @@ func (w *jsonOut) float(v float64) {
 
 // floats writes a list of numbers; nil as null.
 func (w *jsonOut) floats(name string, vs []float64) {
-	w.key(name)
-	if vs == nil {
-		w.b = append(w.b, "null"...)
-		return
-	}
-	w.b = append(w.b, '[')
-	for i, v := range vs {
-		if i > 0 {
-			w.b = append(w.b, ',')
-		}
-		w.float(v)
-	}
-	w.b = append(w.b, ']')
+	writeList(w, name, vs, func(v float64) { w.float(v) })
 }
 
 // ints writes a list of integers; nil as null.
 func (w *jsonOut) ints(name string, vs []int) {
-	w.key(name)
-	if vs == nil {
-		w.b = append(w.b, "null"...)
-		return
-	}
-	w.b = append(w.b, '[')
-	for i, v := range vs {
-		if i > 0 {
-			w.b = append(w.b, ',')
-		}
-		w.b = strconv.AppendInt(w.b, int64(v), 10)
-	}
-	w.b = append(w.b, ']')
+	writeList(w, name, vs, func(v int) { w.b = strconv.AppendInt(w.b, int64(v), 10) })
 }
 
 // strs writes a list of strings; nil as null.
 func (w *jsonOut) strs(name string, vs []string) {
+	writeList(w, name, vs, func(v string) { w.b = appendJSONString(w.b, v) })
+}
+
+// writeList writes "name":[...] with each element written by one; a nil
+// list as null, as encoding/json does.
+func writeList[T any](w *jsonOut, name string, vs []T, one func(T)) {
 	w.key(name)
 	if vs == nil {
 		w.b = append(w.b, "null"...)
@@ -196,7 +178,7 @@ func (w *jsonOut) strs(name string, vs []string) {
 		if i > 0 {
 			w.b = append(w.b, ',')
 		}
-		w.b = appendJSONString(w.b, v)
+		one(v)
 	}
 	w.b = append(w.b, ']')
 }
