@@ -207,3 +207,16 @@ func TestDeflatePiecesJoin(t *testing.T) {
 		t.Errorf("inflated %d bytes, want %d", len(got), len(want))
 	}
 }
+
+// TestMembersSheetEmpty: a plan without members gets a Members sheet with
+// its header row only, readable by excelize.
+func TestMembersSheetEmpty(t *testing.T) {
+	f := writeFixtureXLSX(t, &Results{Plan: "empty.dxf"})
+	rows, err := f.GetRows(SheetMembers)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(rows) != 1 || rows[0][0] != membersColumns[0].Head {
+		t.Errorf("rows %q, want the header only", rows)
+	}
+}
