@@ -1,8 +1,10 @@
 package framing
 
 import (
+	"cmp"
 	"fmt"
 	"math"
+	"slices"
 	"sort"
 
 	"framecheck/dxfimport"
@@ -419,6 +421,12 @@ func directionGroups(js []segItem, tolDeg float64) ([]int, []dirGroup) {
 // (midpoints less than minNeighbourGapIn apart across, both ends within
 // the snap tolerance) and warns naming both handles. A doubled joist, its
 // plies drawn 1.5 in apart, is two members, not a duplicate.
+//
+// Joists are taken in order of group, offset across and index; each one
+// kept drops the later ones that duplicate it. Its candidates are found
+// in a grid of cells minNeighbourGapIn across by the snap tolerance along
+// (a duplicate's start is within the tolerance, so within one cell along),
+// not by looking at every joist on its line.
 func (g *grouper) dropDuplicates(js []segItem, grpOf []int) []bool {
 	tol := g.opt.SnapToleranceIn
 	keep := make([]bool, len(js))
@@ -432,21 +440,50 @@ func (g *grouper) dropDuplicates(js []segItem, grpOf []int) []bool {
 		ks[i] = key{i, dot(mid(j.a, j.b), gr.n), dot(j.a, gr.u)}
 		keep[i] = true
 	}
-	sort.Slice(ks, func(x, y int) bool {
-		if grpOf[ks[x].i] != grpOf[ks[y].i] {
-			return grpOf[ks[x].i] < grpOf[ks[y].i]
+	slices.SortFunc(ks, func(x, y key) int {
+		if c := cmp.Compare(grpOf[x.i], grpOf[y.i]); c != 0 {
+			return c
 		}
-		if ks[x].c != ks[y].c {
-			return ks[x].c < ks[y].c
+		if c := cmp.Compare(x.c, y.c); c != 0 {
+			return c
 		}
-		return ks[x].i < ks[y].i
+		return cmp.Compare(x.i, y.i)
 	})
-	for x := range ks {
-		i := ks[x].i
-		if !keep[i] {
+	type cell struct {
+		grp  int
+		c, a int64
+	}
+	alongCell := math.Max(tol, 1)
+	cellOf := func(k key) cell {
+		return cell{grpOf[k.i], int64(math.Floor(k.c / minNeighbourGapIn)), int64(math.Floor(k.a / alongCell))}
+	}
+	grid := map[cell][]int{} // sorted positions, ascending
+	for x, k := range ks {
+		if !finiteKey(k.c, k.a) {
 			continue
 		}
-		for y := x + 1; y < len(ks) && grpOf[ks[y].i] == grpOf[i] && ks[y].c-ks[x].c < minNeighbourGapIn; y++ {
+		cl := cellOf(k)
+		grid[cl] = append(grid[cl], x)
+	}
+	var cand []int
+	for x, kx := range ks {
+		i := kx.i
+		if !keep[i] || !finiteKey(kx.c, kx.a) {
+			continue
+		}
+		cl := cellOf(kx)
+		cand = cand[:0]
+		for dc := int64(0); dc <= 1; dc++ {
+			for da := int64(-1); da <= 1; da++ {
+				for _, y := range grid[cell{cl.grp, cl.c + dc, cl.a + da}] {
+					if y > x && ks[y].c-kx.c < minNeighbourGapIn {
+						cand = append(cand, y)
+					}
+				}
+			}
+		}
+		slices.Sort(cand)
+		for _, y := range cand {
 			j := ks[y].i
 			if keep[j] && dist(js[i].a, js[j].a) <= tol && dist(js[i].b, js[j].b) <= tol {
 				keep[j] = false
@@ -456,6 +493,12 @@ func (g *grouper) dropDuplicates(js []segItem, grpOf []int) []bool {
 		}
 	}
 	return keep
+}
+
+// finiteKey reports whether both numbers are finite, so that they have a
+// grid cell (joists with other coordinates are left out before this).
+func finiteKey(c, a float64) bool {
+	return !math.IsNaN(c) && !math.IsInf(c, 0) && !math.IsNaN(a) && !math.IsInf(a, 0)
 }
 
 // entityRef names a drawn entity in a message: "handle 2F", or "line 120"

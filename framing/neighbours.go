@@ -1,8 +1,10 @@
 package framing
 
 import (
+	"cmp"
 	"fmt"
 	"math"
+	"slices"
 	"sort"
 )
 
@@ -23,9 +25,19 @@ const minNeighbourGapIn = 0.5
 const minOverlapFrac = 0.5
 
 // neighbours finds, per member, the nearest parallel joist on each side
-// whose extent overlaps its own by more than the snap tolerance, with one
-// sort per direction group and a short scan, and sets the tributary widths
-// and spacing.
+// whose extent overlaps its own by more than the snap tolerance, and sets
+// the tributary widths and spacing.
+//
+// Members are sorted by direction group, offset across and index, and cut
+// into lines: runs of one group at the same offset (joists drawn end to
+// end, or aligned bay after bay). A member's neighbour below is, in the
+// nearest line at least minNeighbourGapIn and at most maxNeighbourGapIn
+// below it that holds a member overlapping it, the overlapping member of
+// highest index (above: of lowest index): the member a scan down (up) the
+// sorted order meets first. Each line keeps its members sorted along the
+// group direction, so the overlapping ones are found by a binary search
+// rather than by looking at every joist of the line: a plan of 1,000 bays
+// whose joists line up would otherwise cost a million comparisons a joist.
 func (g *grouper) neighbours() {
 	p := g.plan
 	n := len(p.Members)
@@ -33,43 +45,43 @@ func (g *grouper) neighbours() {
 	for i := range order {
 		order[i] = i
 	}
-	sort.Slice(order, func(x, y int) bool {
-		a, b := order[x], order[y]
-		if g.grp[a] != g.grp[b] {
-			return g.grp[a] < g.grp[b]
+	slices.SortFunc(order, func(a, b int) int {
+		if c := cmp.Compare(g.grp[a], g.grp[b]); c != 0 {
+			return c
 		}
-		if p.across[a] != p.across[b] {
-			return p.across[a] < p.across[b]
+		if c := cmp.Compare(p.across[a], p.across[b]); c != 0 {
+			return c
 		}
-		return a < b
+		return cmp.Compare(a, b)
 	})
 	g.lo, g.hi = make([]int, n), make([]int, n)
-	tol := g.opt.SnapToleranceIn
-	overlaps := func(a, b int) bool {
-		ov := math.Min(g.a1[a], g.a1[b]) - math.Max(g.a0[a], g.a0[b])
-		shorter := math.Min(g.a1[a]-g.a0[a], g.a1[b]-g.a0[b])
-		return ov > tol && ov >= minOverlapFrac*shorter
-	}
+	lines, lineOf := g.lines(order)
 	for x, k := range order {
 		g.lo[k], g.hi[k] = -1, -1
-		for y := x - 1; y >= 0; y-- {
-			j := order[y]
-			gap := p.across[k] - p.across[j]
-			if g.grp[j] != g.grp[k] || gap > maxNeighbourGapIn {
+		for li := lineOf[x] - 1; li >= 0; li-- {
+			j0 := lines[li].members[0]
+			gap := p.across[k] - p.across[j0]
+			if g.grp[j0] != g.grp[k] || gap > maxNeighbourGapIn {
 				break
 			}
-			if gap >= minNeighbourGapIn && overlaps(k, j) {
+			if gap < minNeighbourGapIn {
+				continue
+			}
+			if j := g.overlapping(&lines[li], k, true); j >= 0 {
 				g.lo[k] = j
 				break
 			}
 		}
-		for y := x + 1; y < n; y++ {
-			j := order[y]
-			gap := p.across[j] - p.across[k]
-			if g.grp[j] != g.grp[k] || gap > maxNeighbourGapIn {
+		for li := lineOf[x] + 1; li < len(lines); li++ {
+			j0 := lines[li].members[0]
+			gap := p.across[j0] - p.across[k]
+			if g.grp[j0] != g.grp[k] || gap > maxNeighbourGapIn {
 				break
 			}
-			if gap >= minNeighbourGapIn && overlaps(k, j) {
+			if gap < minNeighbourGapIn {
+				continue
+			}
+			if j := g.overlapping(&lines[li], k, false); j >= 0 {
 				g.hi[k] = j
 				break
 			}
@@ -78,6 +90,82 @@ func (g *grouper) neighbours() {
 	for k := range p.Members {
 		g.setTrib(k)
 	}
+}
+
+// line is a run of members of one direction group at one offset across,
+// sorted by where they start along the group direction (a0), with the
+// largest end (a1) of each prefix of that order.
+type line struct {
+	members []int
+	maxA1   []float64
+}
+
+// lines cuts the sorted members into lines and returns them with each
+// sorted position's line.
+func (g *grouper) lines(order []int) ([]line, []int) {
+	p := g.plan
+	var out []line
+	lineOf := make([]int, len(order))
+	for x := 0; x < len(order); {
+		y := x + 1
+		for y < len(order) && g.grp[order[y]] == g.grp[order[x]] && p.across[order[y]] == p.across[order[x]] {
+			y++
+		}
+		l := line{members: order[x:y:y]}
+		if y-x > 1 {
+			l.members = slices.Clone(l.members)
+			slices.SortFunc(l.members, func(a, b int) int {
+				if c := cmp.Compare(g.a0[a], g.a0[b]); c != 0 {
+					return c
+				}
+				return cmp.Compare(a, b)
+			})
+			l.maxA1 = make([]float64, len(l.members))
+			m := math.Inf(-1)
+			for i, k := range l.members {
+				m = math.Max(m, g.a1[k])
+				l.maxA1[i] = m
+			}
+		}
+		for z := x; z < y; z++ {
+			lineOf[z] = len(out)
+		}
+		out = append(out, l)
+		x = y
+	}
+	return out, lineOf
+}
+
+// overlaps reports whether the extents of members a and b overlap by more
+// than the snap tolerance and by at least minOverlapFrac of the shorter.
+func (g *grouper) overlaps(a, b int) bool {
+	ov := math.Min(g.a1[a], g.a1[b]) - math.Max(g.a0[a], g.a0[b])
+	shorter := math.Min(g.a1[a]-g.a0[a], g.a1[b]-g.a0[b])
+	return ov > g.opt.SnapToleranceIn && ov >= minOverlapFrac*shorter
+}
+
+// overlapping returns the member of line l overlapping member k with the
+// highest index (highest true) or the lowest, or -1. A member overlapping
+// k starts before k ends and ends after k starts (an overlap greater than
+// the tolerance needs both), so only the members starting before k ends
+// are looked at, from the last, while some member up to there ends after
+// k starts.
+func (g *grouper) overlapping(l *line, k int, highest bool) int {
+	if len(l.members) == 1 {
+		if j := l.members[0]; g.overlaps(k, j) {
+			return j
+		}
+		return -1
+	}
+	end := sort.Search(len(l.members), func(i int) bool { return g.a0[l.members[i]] >= g.a1[k] })
+	best := -1
+	for y := end - 1; y >= 0 && l.maxA1[y] > g.a0[k]; y-- {
+		j := l.members[y]
+		if g.a1[j] > g.a0[k] && g.overlaps(k, j) && (best < 0 || (highest && j > best) || (!highest && j < best)) {
+			best = j
+		}
+	}
+	return best
 }
 
 func (g *grouper) setTrib(k int) {
