@@ -349,8 +349,8 @@ func (c *checkRun) write(o *outcome, res *export.Results, stderr io.Writer) (wri
 	}
 	mk := export.MarkupFromResults(res, toInch)
 	// The four outputs only read res and the plan: write them at once,
-	// one goroutine each, then take their errors in this order, as when
-	// they were written one after another.
+	// in the two lanes below, then take their errors in this order, as
+	// when they were written one after another.
 	jobs := []func() error{
 		func() error { return export.WriteJSON(filepath.Join(stage, names[0]), res) },
 		func() error { return export.WriteXLSX(filepath.Join(stage, names[1]), res) },

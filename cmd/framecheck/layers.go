@@ -133,18 +133,11 @@ Without -p the built-in layer patterns apply.`)
 	}
 	printLayers(stdout, d, p, source)
 	// Error findings (entities left out, the entity limit reached) do not
-	// hide the layers that were read: they are listed, the findings
-	// follow, and the exit status is 1, as check gives for a plan read
-	// only in part.
+	// hide the layers that were read: they are listed, the findings are
+	// among the notes, and the exit status is 1, as check gives for a
+	// plan read only in part.
 	if n := errorFindings(d.Issues); n > 0 {
-		var errs dxfimport.IssueList
-		for _, is := range d.Issues {
-			if is.Severity == dxfimport.SevError {
-				errs = append(errs, is)
-			}
-		}
-		printIssues(stderr, errs)
-		fmt.Fprintf(stderr, "framecheck: %s: %d error finding(s) above: part of the drawing was not read, so the counts may be short\n", pos[0], n)
+		fmt.Fprintf(stderr, "framecheck: %s: %d error finding(s) in the notes: part of the drawing was not read, so the counts may be short\n", pos[0], n)
 		return exitFail
 	}
 	return exitOK

@@ -59,8 +59,8 @@
 // support kind), or none, then notes: layers off or frozen, patterns that
 // match no layer, what the reader skipped. The quick way to map a new
 // drawing to a project file. Without -p the built-in patterns apply.
-// Entities the reader had to leave out are listed after the layers as
-// error findings, with exit status 1.
+// Entities the reader had to leave out are among the notes as error
+// findings, with exit status 1.
 //
 // # member
 //
