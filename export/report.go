@@ -83,10 +83,13 @@ type reportPage struct {
 	Cautions    []string
 }
 
-// worstRow is one line of the summary's list of worst members.
+// worstRow is one line of the summary's list of worst members: the worst
+// member of a mark, and how many members the mark has (Count 0 on the
+// list of members in error).
 type worstRow struct {
 	ID, Mark, Size, Governing, Status, Ratio, Source string
 	Messages                                         []string
+	Count                                            int
 }
 
 // markRow is one line of the framing schedule.
@@ -95,7 +98,7 @@ type markRow struct {
 	Count                                                                               int
 }
 
-// worstShown is how many members the summary lists as the worst.
+// worstShown is how many marks the summary lists by their worst member.
 const worstShown = 10
 
 // errorsShown is how many erroring members the summary lists by name.
@@ -140,11 +143,22 @@ func buildReport(r *Results, g *PlanGeometry, when time.Time) *reportPage {
 			cmp.Compare(ratioKey(mb.MaxRatio), ratioKey(ma.MaxRatio)), cmp.Compare(a, b))
 	}
 	slices.SortFunc(idx, worse)
-	if len(idx) > worstShown {
-		idx = idx[:worstShown]
-	}
+	// One line per mark, its worst member, so that the list shows the
+	// worst kinds of joist rather than ten copies of one: a failing mark
+	// fails for every member it has.
+	count := map[string]int{}
 	for _, i := range idx {
-		p.Worst = append(p.Worst, newWorstRow(&r.Members[i]))
+		count[markOrID(&r.Members[i])]++
+	}
+	shown := map[string]bool{}
+	for _, i := range idx {
+		m := &r.Members[i]
+		if key := markOrID(m); !shown[key] && len(p.Worst) < worstShown {
+			shown[key] = true
+			w := newWorstRow(m)
+			w.Count = count[key]
+			p.Worst = append(p.Worst, w)
+		}
 	}
 	for _, mk := range r.Marks {
 		p.Marks = append(p.Marks, markRow{
@@ -156,6 +170,14 @@ func buildReport(r *Results, g *PlanGeometry, when time.Time) *reportPage {
 	p.PlanSVG, p.MemberJSON = planSVG(r, g)
 	p.Calcs = buildCalcs(r)
 	return p
+}
+
+// markOrID is a member's mark, or its id when it has none.
+func markOrID(m *Member) string {
+	if m.Mark != "" {
+		return "mark " + m.Mark
+	}
+	return "member " + m.ID
 }
 
 func failRank(status string) int {

@@ -127,6 +127,24 @@ func TestWriteReportSections(t *testing.T) {
 	if worst[1][0] != best {
 		t.Errorf("worst member listed %q, want %q", worst[1][0], best)
 	}
+	// One line per mark, with the mark's member count (common practice,
+	// no source: a schedule lists types of joist, not each copy).
+	perMark := map[string]int{}
+	for _, m := range r.Members {
+		if m.Status != StatusError {
+			perMark[m.Mark]++
+		}
+	}
+	seen := map[string]bool{}
+	for _, row := range worst[1:] {
+		if seen[row[1]] {
+			t.Errorf("mark %s listed twice among the worst", row[1])
+		}
+		seen[row[1]] = true
+		if row[2] != strconv.Itoa(perMark[row[1]]) {
+			t.Errorf("mark %s: %s members listed, want %d", row[1], row[2], perMark[row[1]])
+		}
+	}
 	// Schedule: one row per mark; takeoff totals as in Results.
 	if got := len(repRows(repByID(doc, "schedule"))); got != len(r.Marks)+1 {
 		t.Errorf("schedule has %d rows, want %d marks + header", got, len(r.Marks))

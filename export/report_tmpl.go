@@ -152,9 +152,9 @@ const reportHTML = `<!DOCTYPE html>
 <div class="card"><b>{{len .Marks}}</b>marks</div>
 </div>
 </div>
-<div><h3 class="tight">Worst members</h3>
-<table id="worst"><tr><th>member</th><th>mark</th><th>size</th><th>max ratio</th><th>governing check</th><th>status</th><th>drawn</th></tr>
-{{range .Worst}}<tr><td>{{.ID}}</td><td>{{.Mark}}</td><td>{{.Size}}</td><td class="n">{{.Ratio}}</td><td>{{.Governing}}</td><td class="status-{{.Status}}">{{.Status}}</td><td>{{.Source}}</td></tr>
+<div><h3 class="tight">Worst members, one per mark</h3>
+<table id="worst"><tr><th>member</th><th>mark</th><th>count</th><th>size</th><th>max ratio</th><th>governing check</th><th>status</th><th>drawn</th></tr>
+{{range .Worst}}<tr><td>{{.ID}}</td><td>{{.Mark}}</td><td class="n">{{.Count}}</td><td>{{.Size}}</td><td class="n">{{.Ratio}}</td><td>{{.Governing}}</td><td class="status-{{.Status}}">{{.Status}}</td><td>{{.Source}}</td></tr>
 {{end}}</table>
 </div></div>
 </section>
