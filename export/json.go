@@ -74,7 +74,11 @@ func Sanitize(r *Results) (*Results, []string) {
 			continue
 		}
 		m := &out.Members[i]
-		m.Messages = append(slices.Clip(m.Messages), "non-finite value written as 0: "+f)
+		msg := "non-finite value written as 0: " + f
+		if strings.Contains(f, ".trace[") || strings.Contains(f, ".factors[") {
+			msg += " (results.json holds it in the member's calculation)"
+		}
+		m.Messages = append(slices.Clip(m.Messages), msg)
 		if !flagged[i] && m.Status != StatusError {
 			switch m.Status {
 			case StatusPass:

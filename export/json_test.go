@@ -242,6 +242,11 @@ func TestWriteJSONNonFinite(t *testing.T) {
 	if m2.Status != StatusError {
 		t.Errorf("M3 status %q, want error", m2.Status)
 	}
+	// A trace value is not beside the check in the file: the message says
+	// where it is.
+	if msg := strings.Join(m2.Messages, "\n"); !strings.Contains(msg, "trace[0].value = -Inf (results.json holds it in the member's calculation)") {
+		t.Errorf("M3 messages %q: want the trace value's place named", m2.Messages)
+	}
 	// The fixture has 3 pass, 1 fail; two passing members became errors.
 	if s := back.Summary; s.Pass != 1 || s.Fail != 1 || s.Error != 2 || s.Members != 4 {
 		t.Errorf("summary = %+v, want 4 members, 1 pass, 1 fail, 2 error", s)
