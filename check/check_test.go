@@ -105,7 +105,10 @@ func TestOverhang_ClosedForm(t *testing.T) {
 // from memory: verify), so the test runs the engine with a user material
 // holding that Fb; with the NDS 2018 value (900 psi) the bending-governed
 // spans grow by sqrt(900/875) = 1.4%, up to 3.5 in, which the second loop
-// checks.
+// checks. The 2018 ceiling joist table, read from a stored copy of the
+// code (TestSpanTable_IRC2018_R802_5_1_2), fits Fb = 900 psi, not 875: the
+// recalled floor spans may be an earlier edition's, another reason their
+// mark stays.
 func TestSpanTable_IRC2018_R502_3_1_2(t *testing.T) {
 	ft := func(f, in float64) float64 { return 12*f + in }
 	rows := []struct {
