@@ -423,10 +423,12 @@ func directionGroups(js []segItem, tolDeg float64) ([]int, []dirGroup) {
 // plies drawn 1.5 in apart, is two members, not a duplicate.
 //
 // Joists are taken in order of group, offset across and index; each one
-// kept drops the later ones that duplicate it. Its candidates are found
-// in a grid of cells minNeighbourGapIn across by the snap tolerance along
-// (a duplicate's start is within the tolerance, so within one cell along),
-// not by looking at every joist on its line.
+// kept drops the later ones that duplicate it, among the joists of its
+// window (the next ones less than minNeighbourGapIn across). A long window
+// (joists lined up bay after bay) is searched through a grid of cells
+// minNeighbourGapIn across by the snap tolerance along (a duplicate's
+// start is within the tolerance, so within one cell along), not joist by
+// joist.
 func (g *grouper) dropDuplicates(js []segItem, grpOf []int) []bool {
 	tol := g.opt.SnapToleranceIn
 	keep := make([]bool, len(js))
@@ -457,32 +459,54 @@ func (g *grouper) dropDuplicates(js []segItem, grpOf []int) []bool {
 	cellOf := func(k key) cell {
 		return cell{grpOf[k.i], int64(math.Floor(k.c / minNeighbourGapIn)), int64(math.Floor(k.a / alongCell))}
 	}
-	grid := map[cell][]int{} // sorted positions, ascending
-	for x, k := range ks {
-		if !finiteKey(k.c, k.a) {
-			continue
+	var grid map[cell][]int // sorted positions, ascending; built when a window is long
+	buildGrid := func() {
+		grid = map[cell][]int{}
+		for x, k := range ks {
+			if finiteKey(k.c, k.a) {
+				cl := cellOf(k)
+				grid[cl] = append(grid[cl], x)
+			}
 		}
-		cl := cellOf(k)
-		grid[cl] = append(grid[cl], x)
 	}
+	// end is the first position past x's window (same group, less than
+	// minNeighbourGapIn across); windows of up to shortWindow joists are
+	// scanned as they are, longer ones (joists lined up bay after bay)
+	// through the grid.
+	const shortWindow = 32
+	end := 0
 	var cand []int
 	for x, kx := range ks {
 		i := kx.i
-		if !keep[i] || !finiteKey(kx.c, kx.a) {
+		end = max(end, x+1)
+		for end < len(ks) && grpOf[ks[end].i] == grpOf[i] && ks[end].c-kx.c < minNeighbourGapIn {
+			end++
+		}
+		if !keep[i] {
 			continue
 		}
-		cl := cellOf(kx)
 		cand = cand[:0]
-		for dc := int64(0); dc <= 1; dc++ {
-			for da := int64(-1); da <= 1; da++ {
-				for _, y := range grid[cell{cl.grp, cl.c + dc, cl.a + da}] {
-					if y > x && ks[y].c-kx.c < minNeighbourGapIn {
-						cand = append(cand, y)
+		switch {
+		case end-x-1 <= shortWindow:
+			for y := x + 1; y < end; y++ {
+				cand = append(cand, y)
+			}
+		case finiteKey(kx.c, kx.a):
+			if grid == nil {
+				buildGrid()
+			}
+			cl := cellOf(kx)
+			for dc := int64(0); dc <= 1; dc++ {
+				for da := int64(-1); da <= 1; da++ {
+					for _, y := range grid[cell{cl.grp, cl.c + dc, cl.a + da}] {
+						if y > x && y < end {
+							cand = append(cand, y)
+						}
 					}
 				}
 			}
+			slices.Sort(cand)
 		}
-		slices.Sort(cand)
 		for _, y := range cand {
 			j := ks[y].i
 			if keep[j] && dist(js[i].a, js[j].a) <= tol && dist(js[i].b, js[j].b) <= tol {
