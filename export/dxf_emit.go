@@ -17,21 +17,31 @@ type dxfEmitter struct {
 	subclass bool   // R13+: subclass markers (100) and owner (330)
 	next     uint64 // next free handle
 	owner    string // model space block record handle for entities (R13+)
+	scratch  []byte // formats codes and numbers without allocating
 }
 
 func (e *dxfEmitter) pair(code int, value string) {
-	c := strconv.Itoa(code)
-	for len(c) < 3 {
-		c = " " + c
-	}
-	e.w.WriteString(c)
-	e.w.WriteString(e.eol)
+	e.code(code)
 	e.w.WriteString(value)
 	e.w.WriteString(e.eol)
 }
 
+// code writes a group code line, right-aligned in three columns.
+func (e *dxfEmitter) code(code int) {
+	e.scratch = strconv.AppendInt(e.scratch[:0], int64(code), 10)
+	for i := len(e.scratch); i < 3; i++ {
+		e.w.WriteByte(' ')
+	}
+	e.w.Write(e.scratch)
+	e.w.WriteString(e.eol)
+}
+
+// num writes a number pair, the shortest decimal that reads back as v.
 func (e *dxfEmitter) num(code int, v float64) {
-	e.pair(code, strconv.FormatFloat(v, 'f', -1, 64))
+	e.code(code)
+	e.scratch = strconv.AppendFloat(e.scratch[:0], v, 'f', -1, 64)
+	e.w.Write(e.scratch)
+	e.w.WriteString(e.eol)
 }
 
 // handle writes group 5 with the next free handle, when handles are used.
