@@ -18,6 +18,7 @@ import (
 	"os"
 	"path/filepath"
 	"runtime"
+	"runtime/debug"
 	"sync"
 	"syscall"
 	"testing"
@@ -144,12 +145,25 @@ func BenchmarkCheckRun(b *testing.B) { benchCheckRun(b, false) }
 func BenchmarkCheckRunR12(b *testing.B) { benchCheckRun(b, true) }
 
 func benchCheckRun(b *testing.B, r12 bool) {
+	// The collector as the command sets it (gc.go), not the test binary's
+	// defaults; put back afterwards.
+	oldPercent := debug.SetGCPercent(gcPercent)
+	oldLimit := debug.SetMemoryLimit(memoryLimit)
+	gcTuned = true
+	defer func() {
+		debug.SetGCPercent(oldPercent)
+		debug.SetMemoryLimit(oldLimit)
+		gcTuned = false
+	}()
 	forSizes(b, func(b *testing.B, n int) {
 		dir := b.TempDir()
 		p := writeBigPlan(b, dir, n, r12)
-		out := filepath.Join(dir, "out")
 		b.ResetTimer()
+		i := 0
 		for b.Loop() {
+			// A new folder each time, as a first run writes into.
+			i++
+			out := filepath.Join(dir, fmt.Sprintf("out%d", i))
 			if code := run([]string{"check", p.dxf, "-p", p.toml, "-o", out}, io.Discard, io.Discard); code == exitUsage {
 				b.Fatalf("check exit %d", code)
 			}
