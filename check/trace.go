@@ -11,10 +11,9 @@ import (
 const refAnalysis = "structural analysis (check/beam), exact for uniform loads"
 
 // Subst is a substitution line held as its format and numbers: each %s of
-// Format is the next of Nums, printed as appendNum does. A member check
-// records its trace this way and leaves the printing to whoever reads the
-// text (the writers do it once per distinct result), so checking a member
-// costs no text formatting. A Subst without numbers is Format verbatim.
+// Format is the next of Nums, printed as appendNum does, so that the text
+// is formatted only by whoever reads it (Text, Append). A Subst without
+// numbers is Format verbatim.
 type Subst struct {
 	Format string
 	Nums   []float64
