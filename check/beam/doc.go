@@ -1,6 +1,8 @@
 // Package beam analyses a prismatic member on two or more point supports,
 // with an optional cantilever (overhang) at either end, under a uniform
-// line load on each segment.
+// line load on each segment (Solve), or under any set of partial uniform
+// loads and point loads (SolveLoads: loads where they act, such as a joist
+// crossing load-zone edges, or joist reactions on a beam).
 //
 // It takes a Beam (length, support positions, EI) and one line load per
 // segment (Beam.Segments: the left overhang if any, each span between
