@@ -79,7 +79,7 @@ func BenchmarkCheckMemberFloor(b *testing.B) {
 // over the interior bearings takes the blocking solver several steps.
 func BenchmarkCheckMemberContinuous(b *testing.B) {
 	m := floorJoist("2x10", 3*144+24, 16)
-	m.Bearings = []Bearing{{0, 1.5}, {144, 3.5}, {288, 3.5}, {432, 1.5}}
+	m.Bearings = []Bearing{{AtIn: 0, LengthIn: 1.5}, {AtIn: 144, LengthIn: 3.5}, {AtIn: 288, LengthIn: 3.5}, {AtIn: 432, LengthIn: 1.5}}
 	m.OverhangEndIn = 24
 	benchCheck(b, m, DefaultSettings(), "")
 }

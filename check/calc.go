@@ -21,6 +21,7 @@ type calcCtx struct {
 	ci                         IncisingFactors
 	cr, eAdj, eminAdj, kcr, x0 float64
 	shearAtD                   bool
+	seasonedHalfD              bool
 }
 
 // bendRec is an edge's governing bending case.
@@ -33,18 +34,25 @@ type bendRec struct {
 type shearRec struct {
 	vLb, cd, fvAdjPsi float64
 	bearing           int
+	atD               uint8 // atDOff, atDApplied, atDUplift or atDHanger
 }
 
 // bearRec is the governing bearing case.
 type bearRec struct {
 	rLb, lbIn, cb, fcAdjPsi float64
 	bearing                 int
+	// support: the supporting plate or beam governs (its Fc_perp is lower)
+	support                 bool
+	supportName             string  // its species and grade
+	fcPerpPsi, fcPerpSupPsi float64 // reference Fc_perp of the member and of the support
 }
 
 // deflRec is a governing deflection case.
 type deflRec struct {
 	deflIn, allowIn, spanIn, limit, ratio float64
-	cant, total                           bool
+	cant                                  bool
+	kind                                  string
+	dFactor                               float64 // factor on D in the governing case
 	where                                 string
 }
 
@@ -55,7 +63,7 @@ type calcRecord struct {
 	ctx   calcCtx
 	bend  [2]bendRec // top, bottom
 	shear shearRec
-	defl  [2]deflRec // live, total
+	defl  [3]deflRec // live, total, long-term
 	bear  bearRec
 }
 
@@ -65,7 +73,7 @@ func (e *engine) newCalcRecord() *calcRecord {
 		bIn: e.sec.BIn, dIn: e.sec.DIn, sIn3: e.sec.SIn3, aIn2: e.sec.AreaIn2,
 		fbPsi: e.dv.FbPsi, fvPsi: e.dv.FvPsi, fcPerpPsi: e.dv.FcPerpPsi, ePsi: e.dv.EPsi, eminPsi: e.dv.EminPsi,
 		cm: e.cm, ct: e.ct, cf: e.cf, ci: e.ci, cr: e.cr, eAdj: e.eAdj, eminAdj: e.eminAdj, kcr: e.kcr, x0: e.x0,
-		shearAtD: e.s.ShearAtD,
+		shearAtD: e.s.ShearAtD, seasonedHalfD: e.s.Seasoned && !e.s.WetService,
 	}}
 }
 
@@ -88,6 +96,8 @@ func (c CheckResult) Trace() []TraceItem {
 		return r.deflTrace(&r.defl[0])
 	case KindDeflectionTotal:
 		return r.deflTrace(&r.defl[1])
+	case KindDeflectionLongTerm:
+		return r.deflTrace(&r.defl[2])
 	case KindBearing:
 		return r.bearingTrace()
 	}
@@ -135,11 +145,26 @@ func (r *calcRecord) bendingTrace(b *bendRec) []TraceItem {
 func (r *calcRecord) shearTrace() []TraceItem {
 	x, s := &r.ctx, &r.shear
 	fv := 1.5 * s.vLb / x.aIn2
-	where := "at the centre-line of bearing " + strconv.Itoa(s.bearing+1)
-	if x.shearAtD {
-		where = "at d from the face of bearing " + strconv.Itoa(s.bearing+1)
+	bn := strconv.Itoa(s.bearing + 1)
+	where := "at the centre-line of bearing " + bn
+	note := ""
+	switch s.atD {
+	case atDApplied:
+		where = "at d from the face of bearing " + bn
+		note = "loads within d of the bearing face left out: the member rests on the support and the load acts on the opposite face"
+	case atDUplift:
+		note = "shear_at_d not applied at bearing " + bn + ": net uplift there, the member is held down by connectors, so the load does not act on the face opposite the bearing"
+	case atDHanger:
+		note = "shear_at_d not applied at bearing " + bn + ": the member hangs from the support's face (hanger or ledger), not resting on it"
 	}
-	t := newTracer(5)
+	n := 5
+	if note != "" {
+		n++
+	}
+	t := newTracer(n)
+	if note != "" {
+		t.add("V at d", float64(btoi(s.atD == atDApplied)), "", note, Subst{}, "NDS 2018 3.4.3.1(a)")
+	}
 	t.add("V", s.vLb, "lb", "largest shear "+where, Subst{}, refAnalysis)
 	t.add("A", x.aIn2, "in^2", "b d", t.f("%s(%s)", x.bIn, x.dIn), "NDS 2018 Supplement Table 1B")
 	t.add("fv", fv, "psi", "1.5 V / A", t.f("1.5(%s) / %s", s.vLb, x.aIn2), "NDS 2018 Eq. 3.4-2")
@@ -148,39 +173,68 @@ func (r *calcRecord) shearTrace() []TraceItem {
 	return t.items
 }
 
+func btoi(b bool) int {
+	if b {
+		return 1
+	}
+	return 0
+}
+
 // bearingTrace writes the bearing calculation (NDS 2018 3.10).
 func (r *calcRecord) bearingTrace() []TraceItem {
 	x, b := &r.ctx, &r.bear
 	fc := b.rLb / (x.bIn * b.lbIn)
-	t := newTracer(6)
+	t := newTracer(7)
 	t.add("R", b.rLb, "lb", "largest reaction, at bearing "+strconv.Itoa(b.bearing+1), Subst{}, refAnalysis)
 	t.add("lb", b.lbIn, "in", "bearing length", Subst{}, "")
 	t.add("fc_perp", fc, "psi", "R / (b lb)", t.f("%s / (%s(%s))", b.rLb, x.bIn, b.lbIn), "NDS 2018 3.10.2")
-	if b.cb != 1 {
-		t.add("Cb", b.cb, "", "(lb + 0.375) / lb", t.f("(%s + 0.375) / %s", b.lbIn, b.lbIn), "NDS 2018 3.10.4")
+	if b.support {
+		t.add("Fc_perp", b.fcPerpSupPsi, "psi", "the support ("+b.supportName+") governs: its Fc_perp is below the member's "+
+			fmtG(b.fcPerpPsi)+" psi; Cb = 1 (its bearing length is the member's width)", Subst{}, "NDS 2018 3.10.2")
+		t.add("Fc_perp'", b.fcAdjPsi, "psi", "Fc_perp CM Ct Ci",
+			t.f("%s(%s)(%s)(%s)", b.fcPerpSupPsi, x.cm.FcPerp, x.ct.FcPerp, x.ci.FcPerp), "NDS 2018 Table 4.3.1")
 	} else {
-		t.add("Cb", 1, "", "bearing at a member end, or lb >= 6 in", Subst{}, "NDS 2018 3.10.4")
+		if b.cb != 1 {
+			t.add("Cb", b.cb, "", "(lb + 0.375) / lb", t.f("(%s + 0.375) / %s", b.lbIn, b.lbIn), "NDS 2018 3.10.4")
+		} else {
+			t.add("Cb", 1, "", "bearing at a member end, or lb >= 6 in", Subst{}, "NDS 2018 3.10.4")
+		}
+		t.add("Fc_perp'", b.fcAdjPsi, "psi", "Fc_perp CM Ct Ci Cb",
+			t.f("%s(%s)(%s)(%s)(%s)", x.fcPerpPsi, x.cm.FcPerp, x.ct.FcPerp, x.ci.FcPerp, b.cb), "NDS 2018 Table 4.3.1")
 	}
-	t.add("Fc_perp'", b.fcAdjPsi, "psi", "Fc_perp CM Ct Ci Cb",
-		t.f("%s(%s)(%s)(%s)(%s)", x.fcPerpPsi, x.cm.FcPerp, x.ct.FcPerp, x.ci.FcPerp, b.cb), "NDS 2018 Table 4.3.1")
 	t.add("fc_perp/Fc_perp'", fc/b.fcAdjPsi, "", "fc_perp / Fc_perp'", t.f("%s / %s", fc, b.fcAdjPsi), "NDS 2018 3.10.2")
 	return t.items
 }
+
+func fmtG(v float64) string { return strconv.FormatFloat(v, 'f', -1, 64) }
 
 // deflTrace writes a deflection calculation (IBC 2018 Table 1604.3, NDS
 // 2018 3.5.2).
 func (r *calcRecord) deflTrace(d *deflRec) []TraceItem {
 	x := &r.ctx
 	t := newTracer(6)
-	t.add("delta", d.deflIn, "in", "largest deflection of "+d.where, Subst{}, refAnalysis)
+	switch d.kind {
+	case KindDeflectionTotal:
+		if d.dFactor == 0.5 {
+			t.add("delta", d.deflIn, "in", "largest deflection of "+d.where+" under L + 0.5D (seasoned lumber, dry service)", Subst{}, "IBC 2018 Table 1604.3 note d; "+refAnalysis)
+		} else {
+			t.add("delta", d.deflIn, "in", "largest deflection of "+d.where+" under L + D", Subst{}, "IBC 2018 Table 1604.3; "+refAnalysis)
+		}
+	case KindDeflectionLongTerm:
+		t.add("delta", d.deflIn, "in", "largest deflection of "+d.where+": Kcr x dead-load deflection + live-type deflection", Subst{}, "NDS 2018 3.5.2; "+refAnalysis)
+		t.add("Kcr", x.kcr, "", "creep factor on the long-term (dead) load", Subst{}, "NDS 2018 3.5.2")
+	default:
+		t.add("delta", d.deflIn, "in", "largest deflection of "+d.where, Subst{}, refAnalysis)
+	}
 	t.add("E'", x.eAdj, "psi", "E CM Ct Ci", t.f("%s(%s)(%s)(%s)", x.ePsi, x.cm.E, x.ct.E, x.ci.E), "NDS 2018 Table 4.3.1")
-	if d.total {
-		t.add("Kcr", x.kcr, "", "creep factor on D", Subst{}, "NDS 2018 3.5.2")
+	ref := "IBC 2018 Table 1604.3"
+	if d.kind == KindDeflectionLongTerm {
+		ref = "NDS 2018 3.5.2; limit from the project file"
 	}
 	if d.cant {
-		t.add("delta_allow", d.allowIn, "in", "2 Lc / limit", t.f("2(%s) / %s", d.spanIn, d.limit), "IBC 2018 Table 1604.3 note h")
+		t.add("delta_allow", d.allowIn, "in", "2 Lc / limit", t.f("2(%s) / %s", d.spanIn, d.limit), ref+" note h")
 	} else {
-		t.add("delta_allow", d.allowIn, "in", "L / limit", t.f("%s / %s", d.spanIn, d.limit), "IBC 2018 Table 1604.3")
+		t.add("delta_allow", d.allowIn, "in", "L / limit", t.f("%s / %s", d.spanIn, d.limit), ref)
 	}
 	t.add("ratio", d.ratio, "", "delta / delta_allow", t.f("%s / %s", d.deflIn, d.allowIn), "")
 	return t.items

@@ -11,7 +11,7 @@ import (
 // IRC 2018 Table R502.3.1(2): 40 psf live, 10 psf dead, L/360.
 func floorJoist(size string, spanIn, spacingIn float64) Member {
 	return Member{ID: "J1", Size: size, Species: "Douglas Fir-Larch", Grade: "No.2", LengthIn: spanIn,
-		Bearings: []Bearing{{0, 1.5}, {spanIn, 1.5}}, SpacingIn: spacingIn, TribIn: spacingIn, Use: "floor",
+		Bearings: []Bearing{{AtIn: 0, LengthIn: 1.5}, {AtIn: spanIn, LengthIn: 1.5}}, SpacingIn: spacingIn, TribIn: spacingIn, Use: "floor",
 		Loads: AreaLoads{DeadPsf: 10, LivePsf: 40}, LiveLimit: 360, Repetitive: true}
 }
 
@@ -54,8 +54,24 @@ func TestSimpleSpan_ClosedForm(t *testing.T) {
 	expectNear(t, "R", traceValue(t, find(t, r, KindBearing), "R"), wT*L/2, 1e-6, 0, "w L / 2")
 	ei := 1.6e6 * 1.5 * 9.25 * 9.25 * 9.25 / 12
 	expectNear(t, "live deflection", find(t, r, KindDeflectionLive).Actual, 5*wL*math.Pow(L, 4)/(384*ei), 1e-9, 1e-9, "5 w L^4 / 384 E I")
-	// Total: Kcr = 1.5 on D (NDS 2018 3.5.2) plus L.
-	expectNear(t, "total deflection", find(t, r, KindDeflectionTotal).Actual, 5*(1.5*10*16/144.0+wL)*math.Pow(L, 4)/(384*ei), 1e-9, 1e-9, "5 w L^4 / 384 E I")
+	// Total (IBC 2018 Table 1604.3, D + L column): L + 0.5D for seasoned
+	// lumber in dry service (footnote d; DefaultSettings is seasoned).
+	expectNear(t, "total deflection", find(t, r, KindDeflectionTotal).Actual, 5*(0.5*10*16/144.0+wL)*math.Pow(L, 4)/(384*ei), 1e-9, 1e-9, "IBC 2018 Table 1604.3 note d; 5 w L^4 / 384 E I")
+	// Unseasoned (or wet service): L + D.
+	s := DefaultSettings()
+	s.Seasoned = false
+	r2 := CheckMember(m, s)
+	expectNear(t, "total deflection, unseasoned", find(t, r2, KindDeflectionTotal).Actual, 5*(10*16/144.0+wL)*math.Pow(L, 4)/(384*ei), 1e-9, 1e-9, "IBC 2018 Table 1604.3; 5 w L^4 / 384 E I")
+	// Long-term (NDS 2018 3.5.2): Kcr x D deflection + L deflection,
+	// reported (no limit given), not checked.
+	long := 5 * (1.5*10*16/144.0 + wL) * math.Pow(L, 4) / (384 * ei)
+	if !strings.Contains(strings.Join(r.Info, "\n"), "long-term deflection (NDS 2018 3.5.2, Kcr = 1.5) "+fmt.Sprintf("%.3f", long)) {
+		t.Errorf("info %q: want the long-term deflection %.3f in reported (NDS 2018 3.5.2)", r.Info, long)
+	}
+	m.LongTermLimit = 240
+	r3 := CheckMember(m, DefaultSettings())
+	expectNear(t, "long-term deflection", find(t, r3, KindDeflectionLongTerm).Actual, long, 1e-9, 1e-9, "NDS 2018 3.5.2, Kcr 1.5; 5 w L^4 / 384 E I")
+	expectNear(t, "long-term allowed", find(t, r3, KindDeflectionLongTerm).Allowable, L/240, 1e-12, 0, "L/240 as given")
 	// fb = M/S against Fb' = Fb CD CF Cr = 900 (1.0)(1.1)(1.15), NDS 2018 Table 4.3.1.
 	expectNear(t, "Fb'", find(t, r, KindBendingTop).Allowable, 900*1.1*1.15, 1e-9, 0, "NDS 2018 Table 4.3.1")
 }
@@ -67,7 +83,7 @@ func TestSimpleSpan_ClosedForm(t *testing.T) {
 func TestTwoEqualSpans_ClosedForm(t *testing.T) {
 	L := 144.0
 	m := floorJoist("2x10", 2*L, 16)
-	m.Bearings = []Bearing{{0, 1.5}, {L, 1.5}, {2 * L, 1.5}}
+	m.Bearings = []Bearing{{AtIn: 0, LengthIn: 1.5}, {AtIn: L, LengthIn: 1.5}, {AtIn: 2 * L, LengthIn: 1.5}}
 	m.Loads = AreaLoads{DeadPsf: 30} // dead only: one case, nothing patterned
 	r := CheckMember(m, DefaultSettings())
 	w := 30 * 16 / 144.0
@@ -87,7 +103,7 @@ func TestTwoEqualSpans_ClosedForm(t *testing.T) {
 func TestOverhang_ClosedForm(t *testing.T) {
 	a := 36.0
 	m := floorJoist("2x10", 120+a, 16)
-	m.Bearings = []Bearing{{0, 1.5}, {120, 3.5}}
+	m.Bearings = []Bearing{{AtIn: 0, LengthIn: 1.5}, {AtIn: 120, LengthIn: 3.5}}
 	m.OverhangEndIn = a
 	m.Loads = AreaLoads{DeadPsf: 30}
 	r := CheckMember(m, DefaultSettings())
@@ -231,7 +247,7 @@ func maxSpanOf(member func(size string, spanIn, spacingIn float64) Member, size 
 // for the test.
 func upliftRafter(size string) Member {
 	return Member{ID: "R1", Size: size, Species: "DF-L", Grade: "No.2", LengthIn: 216,
-		Bearings: []Bearing{{0, 1.5}, {216, 1.5}}, SpacingIn: 24, TribIn: 24, Use: "roof",
+		Bearings: []Bearing{{AtIn: 0, LengthIn: 1.5}, {AtIn: 216, LengthIn: 1.5}}, SpacingIn: 24, TribIn: 24, Use: "roof",
 		Loads: AreaLoads{DeadPsf: 8, RoofLivePsf: 20, WindUpPsf: 50}, LiveLimit: 180, TotalLimit: 120, Repetitive: true}
 }
 
@@ -341,7 +357,7 @@ func TestRBOver50_Fails(t *testing.T) {
 func TestPatternLive_TwoSpansOneLoaded(t *testing.T) {
 	L := 144.0
 	m := floorJoist("2x10", 2*L, 16)
-	m.Bearings = []Bearing{{0, 1.5}, {L, 1.5}, {2 * L, 1.5}}
+	m.Bearings = []Bearing{{AtIn: 0, LengthIn: 1.5}, {AtIn: L, LengthIn: 1.5}, {AtIn: 2 * L, LengthIn: 1.5}}
 	m.Loads = AreaLoads{LivePsf: 40}
 	w := 40 * 16 / 144.0
 	ei := 1.6e6 * 1.5 * 9.25 * 9.25 * 9.25 / 12
@@ -367,11 +383,11 @@ func TestPruneDominated_ChangesNothing(t *testing.T) {
 	snow := upliftRafter("2x12")
 	snow.Loads = AreaLoads{DeadPsf: 12, RoofLivePsf: 20, SnowPsf: 25, WindDownPsf: 15, WindUpPsf: 10}
 	cont := floorJoist("2x10", 3*144+24, 16)
-	cont.Bearings = []Bearing{{0, 1.5}, {144, 3.5}, {288, 3.5}, {432, 1.5}}
+	cont.Bearings = []Bearing{{AtIn: 0, LengthIn: 1.5}, {AtIn: 144, LengthIn: 3.5}, {AtIn: 288, LengthIn: 3.5}, {AtIn: 432, LengthIn: 1.5}}
 	cont.OverhangEndIn = 24
 	contRoof := upliftRafter("2x10")
 	contRoof.LengthIn = 2*216 + 30
-	contRoof.Bearings = []Bearing{{30, 3.5}, {246, 3.5}, {462, 3.5}}
+	contRoof.Bearings = []Bearing{{AtIn: 30, LengthIn: 3.5}, {AtIn: 246, LengthIn: 3.5}, {AtIn: 462, LengthIn: 3.5}}
 	contRoof.OverhangStartIn = 30
 	members = append(members, snow, cont, contRoof)
 	for _, m := range members {
@@ -397,7 +413,7 @@ func TestPruneDominated_ChangesNothing(t *testing.T) {
 // w (L/2 - lb/2 - d) (statics).
 func TestShearAtD_ClosedForm(t *testing.T) {
 	m := floorJoist("2x10", 168, 16)
-	m.Bearings = []Bearing{{0, 3.5}, {168, 3.5}}
+	m.Bearings = []Bearing{{AtIn: 0, LengthIn: 3.5}, {AtIn: 168, LengthIn: 3.5}}
 	s := DefaultSettings()
 	s.ShearAtD = true
 	r := CheckMember(m, s)
@@ -411,7 +427,7 @@ func TestShearAtD_ClosedForm(t *testing.T) {
 func TestBearingAreaFactor_InteriorBearing(t *testing.T) {
 	L := 144.0
 	m := floorJoist("2x10", 2*L, 16)
-	m.Bearings = []Bearing{{0, 1.5}, {L, 1.5}, {2 * L, 1.5}}
+	m.Bearings = []Bearing{{AtIn: 0, LengthIn: 1.5}, {AtIn: L, LengthIn: 1.5}, {AtIn: 2 * L, LengthIn: 1.5}}
 	b := find(t, CheckMember(m, DefaultSettings()), KindBearing)
 	expectNear(t, "Fc_perp'", b.Allowable, 625*1.25, 1e-9, 0, "NDS 2018 3.10.4 with Supplement Table 4A Fc_perp 625 psi (checked against stored tabulations, docs/VERIFIED.md)")
 	expectNear(t, "Cb", traceValue(t, b, "Cb"), 1.25, 1e-12, 0, "NDS 2018 3.10.4")
@@ -426,7 +442,7 @@ func TestBearingAreaFactor_InteriorBearing(t *testing.T) {
 func TestCantileverDeflection_BackSpanRotation(t *testing.T) {
 	a, L := 36.0, 120.0
 	m := floorJoist("2x10", L+a, 16)
-	m.Bearings = []Bearing{{0, 1.5}, {L, 3.5}}
+	m.Bearings = []Bearing{{AtIn: 0, LengthIn: 1.5}, {AtIn: L, LengthIn: 3.5}}
 	m.OverhangEndIn = a
 	m.Loads = AreaLoads{DeadPsf: 10, LivePsf: 40}
 	r := CheckMember(m, DefaultSettings())

@@ -1,64 +1,75 @@
 package check
 
 import (
+	"fmt"
 	"math"
 	"strconv"
-
-	"framecheck/check/beam"
 )
 
-// segAround returns the indices of the model segments left and right of
-// support j (-1 where there is none).
-func (e *engine) segAround(j int) (left, right int) {
-	first := 0
-	if len(e.segs) > 0 && e.segs[0].Cantilever {
-		first = 1
-	}
-	left, right = first+j-1, first+j
-	if right >= len(e.segs) {
-		right = -1
-	}
-	return left, right
-}
+// Why the shear at a bearing was or was not taken at d from its face.
+const (
+	atDOff     uint8 = iota // shear_at_d not set: V at the centre-line
+	atDApplied              // NDS 2018 3.4.3.1(a) holds: loads within d left out
+	atDUplift               // net uplift at the bearing: held by connectors
+	atDHanger               // the member hangs from the support's face
+)
 
 // shearCheck returns the shear check: fv = 1.5 V / A (NDS 2018 Eq. 3.4-2)
-// with V the largest shear at a bearing centre-line, or at a distance d
-// from the bearing face when Settings.ShearAtD (NDS 2018 3.4.3.1(a)), over
-// every strength case; Fv' = Fv CD CM Ct Ci (NDS 2018 Table 4.3.1).
+// with V the largest shear at a bearing centre-line over every strength
+// case; Fv' = Fv CD CM Ct Ci (NDS 2018 Table 4.3.1). With Settings.ShearAtD
+// the loads within d of the bearing face are left out of V (NDS 2018
+// 3.4.3.1(a)) only where that clause holds: the member rests on the
+// support and the load acts on the opposite face. So never at a bearing
+// with a net uplift reaction in that case (the connectors hold the member
+// down; the load does not press it onto the support) and never where the
+// member hangs from the support's face (Bearing.Hanger).
 func (e *engine) shearCheck() CheckResult {
 	best, bestV, bestCI, bestJ := -1.0, 0.0, 0, 0
-	bestFv := 0.0
+	bestFv, bestWhy := 0.0, atDOff
 	d := e.sec.DIn
 	for ci := range e.cases {
 		c := &e.cases[ci]
 		fvAdj := e.dv.FvPsi * c.cd * e.cm.Fv * e.ct.Fv * e.ci.Fv
 		for j, x := range e.bm.SupportsAtIn {
 			vl, vr := c.r.ShearEachSide(x)
+			why := atDOff
 			if e.s.ShearAtD {
-				off := e.m.Bearings[j].LengthIn/2 + d
-				l, r := e.segAround(j)
-				if l >= 0 {
-					vl += c.w[l] * math.Min(off, e.segs[l].ToIn-e.segs[l].FromIn)
-				}
-				if r >= 0 {
-					vr -= c.w[r] * math.Min(off, e.segs[r].ToIn-e.segs[r].FromIn)
+				switch {
+				case e.m.Bearings[j].Hanger:
+					why = atDHanger
+				case c.r.Reactions()[j] <= 0:
+					why = atDUplift
+				default:
+					why = atDApplied
+					off := e.m.Bearings[j].LengthIn/2 + d
+					// Only a downward load near the bearing is left out,
+					// and never more than the shear it relieves.
+					if ld := e.loadOn(c, x-off, x); ld > 0 && vl < 0 {
+						vl = math.Min(vl+ld, 0)
+					}
+					if ld := e.loadOn(c, x, x+off); ld > 0 && vr > 0 {
+						vr = math.Max(vr-ld, 0)
+					}
 				}
 			}
 			v := math.Max(math.Abs(vl), math.Abs(vr))
 			if ratio := 1.5 * v / e.sec.AreaIn2 / fvAdj; ratio > best {
-				best, bestV, bestCI, bestJ, bestFv = ratio, v, ci, j, fvAdj
+				best, bestV, bestCI, bestJ, bestFv, bestWhy = ratio, v, ci, j, fvAdj, why
 			}
 		}
 	}
 	c := &e.cases[bestCI]
 	fv := 1.5 * bestV / e.sec.AreaIn2
-	e.rc.shear = shearRec{vLb: bestV, cd: c.cd, fvAdjPsi: bestFv, bearing: bestJ}
+	e.rc.shear = shearRec{vLb: bestV, cd: c.cd, fvAdjPsi: bestFv, bearing: bestJ, atD: bestWhy}
 	return CheckResult{Kind: KindShear, Combo: e.caseLabel(c), Actual: fv, Allowable: bestFv, Unit: "psi", Ratio: fv / bestFv, calc: e.rc}
 }
 
 // bearingCheck returns the bearing check: fc_perp = R / (b lb) at each
 // bearing against Fc_perp' = Fc_perp CM Ct Ci Cb (NDS 2018 3.10.2, Table
 // 4.3.1; no CD), with the largest downward reaction of any strength case.
+// Where the bearing names the species and grade of the plate or beam under
+// the member, that support's Fc_perp' is checked too and the smaller
+// governs (NDS 2018 3.10.2 applies to both members in contact).
 // Uplift reactions are returned as information. The reaction at an end
 // that is part of its bearing includes the load on the piece past the
 // centre-line.
@@ -66,6 +77,7 @@ func (e *engine) bearingCheck() (CheckResult, []string) {
 	var info []string
 	best, bestJ, bestCI := -1.0, 0, 0
 	var bestR, bestCb, bestFc float64
+	bestSup := false
 	last := len(e.m.Bearings) - 1
 	for j, b := range e.m.Bearings {
 		// An end that is part of its bearing (no overhang analysed) puts
@@ -80,7 +92,15 @@ func (e *engine) bearingCheck() (CheckResult, []string) {
 		stub = math.Max(stub, 0)
 		rMax, rMin, ciMax, ciMin := 0.0, 0.0, 0, 0
 		for ci := range e.cases {
-			r := e.cases[ci].r.Reactions()[j] + e.cases[ci].w[seg]*stub
+			c := &e.cases[ci]
+			r := c.r.Reactions()[j]
+			if stub > 0 {
+				if j == 0 {
+					r += e.stubLoad(c, 0, b.AtIn, seg)
+				} else {
+					r += e.stubLoad(c, b.AtIn, e.m.LengthIn, seg)
+				}
+			}
 			if r > rMax {
 				rMax, ciMax = r, ci
 			}
@@ -95,13 +115,26 @@ func (e *engine) bearingCheck() (CheckResult, []string) {
 		edge := math.Min(b.AtIn-b.LengthIn/2, e.m.LengthIn-(b.AtIn+b.LengthIn/2))
 		cb := BearingAreaFactor(b.LengthIn, edge)
 		fcAdj := e.dv.FcPerpPsi * e.cm.FcPerp * e.ct.FcPerp * e.ci.FcPerp * cb
+		// The plate or beam under the member: the same contact area, its
+		// own Fc_perp, Cb = 1 (its bearing length is the member's width,
+		// and its distance from the support's end is not known).
+		onSupport := false
+		if j < len(e.supFc) && e.supFc[j].FcPerpPsi > 0 {
+			if sup := e.supFc[j].FcPerpPsi * e.cm.FcPerp * e.ct.FcPerp * e.ci.FcPerp; sup < fcAdj {
+				fcAdj, cb, onSupport = sup, 1, true
+			}
+		}
 		if ratio := rMax / (e.sec.BIn * b.LengthIn) / fcAdj; ratio > best {
-			best, bestJ, bestCI, bestR, bestCb, bestFc = ratio, j, ciMax, rMax, cb, fcAdj
+			best, bestJ, bestCI, bestR, bestCb, bestFc, bestSup = ratio, j, ciMax, rMax, cb, fcAdj, onSupport
 		}
 	}
 	b := e.m.Bearings[bestJ]
 	fc := bestR / (e.sec.BIn * b.LengthIn)
-	e.rc.bear = bearRec{rLb: bestR, lbIn: b.LengthIn, cb: bestCb, fcAdjPsi: bestFc, bearing: bestJ}
+	e.rc.bear = bearRec{rLb: bestR, lbIn: b.LengthIn, cb: bestCb, fcAdjPsi: bestFc, bearing: bestJ, fcPerpPsi: e.dv.FcPerpPsi}
+	if bestSup {
+		sv := e.supFc[bestJ]
+		e.rc.bear.support, e.rc.bear.fcPerpSupPsi, e.rc.bear.supportName = true, sv.FcPerpPsi, sv.Species+" "+sv.Grade
+	}
 	return CheckResult{Kind: KindBearing, Combo: e.caseLabel(&e.cases[bestCI]), Actual: fc, Allowable: bestFc,
 		Unit: "psi", Ratio: fc / bestFc, calc: e.rc}, info
 }
@@ -110,67 +143,102 @@ func (e *engine) bearingCheck() (CheckResult, []string) {
 type deflWorst struct {
 	ratio, deflIn, allowIn, spanIn, limit float64
 	seg                                   int
-	live                                  string // live-type load, "" for dead load alone
-	withD                                 bool   // Kcr D added (total deflection)
+	live                                  string  // live-type load, "" for dead load alone
+	dFactor                               float64 // factor on D in the case (0: none)
 	pattern                               uint32
 	cant                                  bool
 }
 
-// deflectionChecks returns the live and total deflection checks (IBC 2018
-// Table 1604.3 with its footnotes). Live: each live-type load alone at 1.0
-// (wind at 0.42 W, footnote f), pattern-loaded like the strength cases,
-// against span/LiveLimit. Total: Kcr times the dead-load deflection (NDS
-// 2018 3.5.2) plus each live-type case, against span/TotalLimit. Spans use
-// the largest deflection between their bearings; a cantilever its tip
-// deflection (back-span rotation included) against 2 x overhang / limit
-// (footnote h). A limit of 0 skips that check. A member of one span is
-// solved once under a unit load and scaled, every response being
-// proportional to its one load.
-func (e *engine) deflectionChecks() []CheckResult {
-	type lt struct {
-		name string
-		w    float64
-	}
-	var livesBuf [5]lt
+// serviceLoad is one live-type load of a service case: its factor set
+// (1.0, wind 0.42) and wind direction.
+type serviceLoad struct {
+	name string
+	f    factorSet
+	dir  float64
+	down bool // acts downward
+}
+
+// deflectionChecks returns the deflection checks and, when the long-term
+// deflection is reported but not checked, an information line.
+//
+//   - deflection-live (IBC 2018 Table 1604.3): each live-type load alone at
+//     1.0 (wind at 0.42 W, footnote f), pattern-loaded like the strength
+//     cases, against span/LiveLimit.
+//   - deflection-total (IBC 2018 Table 1604.3, the D + L column): the dead
+//     load plus each downward live-type case, or 0.5 D plus it for
+//     seasoned lumber in dry service (footnote d), against span/TotalLimit.
+//   - deflection-long-term (NDS 2018 3.5.2): Kcr times the deflection from
+//     the long-term load (the dead load) plus the deflection from the
+//     short-term load (each downward live-type case), against
+//     span/LongTermLimit; with no limit it is reported, not checked.
+//
+// Spans use the largest deflection between their bearings; a cantilever
+// its tip deflection (back-span rotation included) against 2 x overhang /
+// limit (footnote h). A limit of 0 skips that check. A uniformly loaded
+// member of one span is solved once under a unit load and scaled, every
+// response being proportional to its one load.
+func (e *engine) deflectionChecks() ([]CheckResult, string) {
+	var livesBuf [5]serviceLoad
 	lives := livesBuf[:0]
-	for _, l := range [...]lt{{"L", e.wPli[LoadL]}, {"Lr", e.wPli[LoadLr]}, {"S", e.wPli[LoadS]},
-		{"0.42W(down)", 0.42 * e.wPli[LoadW]}, {"0.42W(up)", -0.42 * e.wUpPli}} {
-		if l.w != 0 {
-			lives = append(lives, l)
+	pNone := e.present(0)
+	for _, t := range [...]LoadType{LoadL, LoadLr, LoadS} {
+		if pNone[t] {
+			var f factorSet
+			f[t] = 1
+			lives = append(lives, serviceLoad{name: t.String(), f: f, down: true})
 		}
+	}
+	var fw factorSet
+	fw[LoadW] = 0.42
+	if e.hasWind(1) {
+		lives = append(lives, serviceLoad{name: "0.42W(down)", f: fw, dir: 1, down: true})
+	}
+	if e.hasWind(-1) {
+		lives = append(lives, serviceLoad{name: "0.42W(up)", f: fw, dir: -1})
+	}
+	totalD := 1.0
+	if e.s.Seasoned && !e.s.WetService {
+		totalD = 0.5
 	}
 	pats := e.patterns()
-	var r beam.Response
+	var c strengthCase // carries the loads of one service case
 	var wBuf [8]float64
-	w := wBuf[:0]
-	if len(e.segs) > len(wBuf) {
-		w = make([]float64, 0, len(e.segs))
+	c.w = wBuf[:0]
+	if len(e.lps) > len(wBuf) {
+		c.w = make([]float64, 0, len(e.lps))
 	}
-	w = w[:len(e.segs)]
+	c.w = c.w[:len(e.lps)]
 	liveW := deflWorst{ratio: -1}
 	totW := deflWorst{ratio: -1}
-	wD := e.kcr * e.wPli[LoadD]
+	longW := deflWorst{ratio: -1}
+	longLimit := e.m.LongTermLimit
+	reportLong := longLimit == 0
+	if reportLong {
+		// Reported, not checked: measured against L/1 so that the worst
+		// case is the largest deflection relative to its span.
+		longLimit = 1
+	}
 
-	single := len(e.segs) == 1 && !e.segs[0].Cantilever
+	single := len(e.segs) == 1 && !e.segs[0].Cantilever && !e.general
 	unitY := 0.0
 	if single {
-		w[0] = 1
-		if err := e.bm.SolveInto(&r, w); err != nil {
-			return nil
+		c.w[0] = 1
+		if err := e.solve(&c.r, c.w, nil); err != nil {
+			return nil, ""
 		}
-		unitY, _ = r.MaxDeflection(e.segs[0].FromIn, e.segs[0].ToIn)
+		unitY, _ = c.r.MaxDeflection(e.segs[0].FromIn, e.segs[0].ToIn)
 	}
-	eval := func(live string, withD bool, pat uint32, limit float64, worst *deflWorst) {
+	eval := func(live string, dF float64, pat uint32, limit float64, worst *deflWorst) {
 		if single {
 			sg := e.segs[0]
 			l := sg.ToIn - sg.FromIn
-			y, allow := math.Abs(w[0]*unitY), l/limit
+			y, allow := math.Abs(c.w[0]*unitY), l/limit
 			if ratio := y / allow; ratio > worst.ratio {
-				*worst = deflWorst{ratio: ratio, deflIn: y, allowIn: allow, spanIn: l, limit: limit, live: live, withD: withD, pattern: pat}
+				*worst = deflWorst{ratio: ratio, deflIn: y, allowIn: allow, spanIn: l, limit: limit, live: live, dFactor: dF, pattern: pat}
 			}
 			return
 		}
-		if err := e.bm.SolveInto(&r, w); err != nil {
+		if err := e.solve(&c.r, c.w, c.pts); err != nil {
 			return
 		}
 		for k, sg := range e.segs {
@@ -181,50 +249,58 @@ func (e *engine) deflectionChecks() []CheckResult {
 				if k > 0 {
 					tip = sg.ToIn
 				}
-				y, allow = r.Deflection(tip), 2*l/limit
+				y, allow = c.r.Deflection(tip), 2*l/limit
 			} else {
-				y, _ = r.MaxDeflection(sg.FromIn, sg.ToIn)
+				y, _ = c.r.MaxDeflection(sg.FromIn, sg.ToIn)
 				allow = l / limit
 			}
 			if ratio := math.Abs(y) / allow; ratio > worst.ratio {
 				*worst = deflWorst{ratio: ratio, deflIn: math.Abs(y), allowIn: allow, spanIn: l, limit: limit,
-					seg: k, live: live, withD: withD, pattern: pat, cant: sg.Cantilever}
+					seg: k, live: live, dFactor: dF, pattern: pat, cant: sg.Cantilever}
 			}
 		}
 	}
-	for _, lv := range lives {
+	// set fills c with the service case: dF x D plus the live-type load
+	// lv (if any) on the segments of pat.
+	set := func(lv *serviceLoad, dF float64, pat uint32) {
+		var f factorSet
+		dir := 0.0
+		if lv != nil {
+			f, dir = lv.f, lv.dir
+		}
+		f[LoadD] = dF
+		c.f, c.dir, c.pattern = f, dir, pat
+		e.fillCase(&c)
+	}
+	down := false
+	for i := range lives {
+		lv := &lives[i]
+		down = down || lv.down
 		for _, pat := range pats {
 			if e.m.LiveLimit > 0 {
-				for k := range w {
-					w[k] = 0
-					if pat&(1<<k) != 0 {
-						w[k] = lv.w
-					}
-				}
-				eval(lv.name, false, pat, e.m.LiveLimit, &liveW)
+				set(lv, 0, pat)
+				eval(lv.name, 0, pat, e.m.LiveLimit, &liveW)
 			}
-			if e.m.TotalLimit > 0 && lv.w > 0 {
-				for k := range w {
-					w[k] = wD
-					if pat&(1<<k) != 0 {
-						w[k] += lv.w
-					}
-				}
-				eval(lv.name, true, pat, e.m.TotalLimit, &totW)
+			if !lv.down {
+				continue
 			}
+			if e.m.TotalLimit > 0 {
+				set(lv, totalD, pat)
+				eval(lv.name, totalD, pat, e.m.TotalLimit, &totW)
+			}
+			set(lv, e.kcr, pat)
+			eval(lv.name, e.kcr, pat, longLimit, &longW)
 		}
 	}
 	// With no downward live-type load (none, or wind suction only) the
-	// largest live-type deflection adds nothing: total = Kcr D alone.
-	down := false
-	for _, lv := range lives {
-		down = down || lv.w > 0
-	}
-	if e.m.TotalLimit > 0 && !down && wD > 0 {
-		for k := range w {
-			w[k] = wD
+	// dead load acts alone.
+	if !down && pNone[LoadD] {
+		if e.m.TotalLimit > 0 {
+			set(nil, totalD, pats[0])
+			eval("", totalD, pats[0], e.m.TotalLimit, &totW)
 		}
-		eval("", true, pats[0], e.m.TotalLimit, &totW)
+		set(nil, e.kcr, pats[0])
+		eval("", e.kcr, pats[0], longLimit, &longW)
 	}
 	var out []CheckResult
 	if liveW.ratio >= 0 {
@@ -233,17 +309,31 @@ func (e *engine) deflectionChecks() []CheckResult {
 	if totW.ratio >= 0 {
 		out = append(out, e.deflResult(KindDeflectionTotal, totW))
 	}
-	return out
+	info := ""
+	if longW.ratio >= 0 {
+		if reportLong {
+			info = fmt.Sprintf("long-term deflection (NDS 2018 3.5.2, Kcr = %s) %.3f in under %s, %s: span/%.0f; reported, not checked (no long_term_deflection_limit)",
+				num(e.kcr), longW.deflIn, e.deflName(longW), e.segLabel(longW.seg), longW.spanIn/math.Max(longW.deflIn, 1e-9))
+		} else {
+			out = append(out, e.deflResult(KindDeflectionLongTerm, longW))
+		}
+	}
+	return out, info
 }
 
-// deflName names a service case: "L", "1.5D+Lr (live-type loads on span 1)".
+// deflName names a service case: "L", "0.5D+Lr (live-type loads on span
+// 1)", "1.5D+L".
 func (e *engine) deflName(d deflWorst) string {
 	name := d.live
-	if d.withD {
+	if d.dFactor > 0 {
+		dn := "D"
+		if d.dFactor != 1 {
+			dn = num(d.dFactor) + "D"
+		}
 		if name == "" {
-			name = num(e.kcr) + "D"
+			name = dn
 		} else {
-			name = num(e.kcr) + "D+" + name
+			name = dn + "+" + name
 		}
 	}
 	if pl := e.patternLabel(d.pattern); pl != "" && d.live != "" {
@@ -255,10 +345,13 @@ func (e *engine) deflName(d deflWorst) string {
 func (e *engine) deflResult(kind string, d deflWorst) CheckResult {
 	where := e.segLabel(d.seg)
 	slot := 0
-	if kind == KindDeflectionTotal {
+	switch kind {
+	case KindDeflectionTotal:
 		slot = 1
+	case KindDeflectionLongTerm:
+		slot = 2
 	}
 	e.rc.defl[slot] = deflRec{deflIn: d.deflIn, allowIn: d.allowIn, spanIn: d.spanIn, limit: d.limit, ratio: d.ratio,
-		cant: d.cant, total: kind == KindDeflectionTotal, where: where}
+		cant: d.cant, kind: kind, dFactor: d.dFactor, where: where}
 	return CheckResult{Kind: kind, Combo: e.deflName(d) + ", " + where, Actual: d.deflIn, Allowable: d.allowIn, Unit: "in", Ratio: d.ratio, calc: e.rc}
 }

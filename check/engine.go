@@ -28,6 +28,8 @@ type engine struct {
 	cr  float64
 	kcr float64
 
+	supFc []DesignValues // per bearing: the support's design values (FcPerpPsi 0: none given)
+
 	fbNoCD  float64 // Fb CM Ct CF Ci Cr: Fb* / CD
 	eAdj    float64 // E'
 	eminAdj float64 // Emin'
@@ -35,9 +37,11 @@ type engine struct {
 	x0       float64 // member position of the analysis origin (start of the beam model)
 	bm       beam.Beam
 	segs     []beam.Segment
-	spanSegs []int // index in segs of each span between bearings
-	wPli     [numLoadTypes]float64
-	wUpPli   float64 // wind suction magnitude, lb/in
+	spanSegs []int         // index in segs of each span between bearings
+	mps      []memberPiece // the member's stretches and their line loads
+	lps      []loadPiece   // the model's load pieces: one per segment unless general
+	pls      []pointLd     // point loads
+	general  bool          // load pieces or point loads: solved with beam.SolveLoads
 
 	cases []strengthCase
 	mMax  float64     // largest |M| of any case, for "is this edge in compression" tolerances
@@ -59,8 +63,11 @@ type engine struct {
 type strengthCase struct {
 	name    string
 	cd      float64
-	pattern uint32 // segments carrying the patterned live-type loads; all ones = not patterned
-	w       []float64
+	f       factorSet
+	dir     float64          // wind +1 toward the member, -1 away, 0 none
+	pattern uint32           // segments carrying the patterned live-type loads; all ones = not patterned
+	w       []float64        // line load on each load piece, lb/in
+	pts     []beam.PointLoad // point loads (general members)
 	r       beam.Response
 
 	mPos, mNeg float64 // largest positive and most negative moment on the whole member
@@ -85,7 +92,7 @@ func (e *engine) release() {
 // analysis. On error the returned engine holds what was found so far.
 func newEngine(m Member, s Settings) (*engine, error) {
 	e := enginePool.Get().(*engine)
-	*e = engine{m: m, s: s, cases: e.cases[:0], spanSegs: e.spanSegs[:0], wAll: e.wAll[:0], sup: e.sup[:0], ivBuf: e.ivBuf[:0], ptsBuf: e.ptsBuf[:0], rowsBuf: e.rowsBuf[:0], patBuf: e.patBuf[:0], comboCDs: e.comboCDs[:0], names: e.names}
+	*e = engine{m: m, s: s, cases: e.cases[:0], spanSegs: e.spanSegs[:0], mps: e.mps[:0], lps: e.lps[:0], pls: e.pls[:0], wAll: e.wAll[:0], sup: e.sup[:0], ivBuf: e.ivBuf[:0], ptsBuf: e.ptsBuf[:0], rowsBuf: e.rowsBuf[:0], patBuf: e.patBuf[:0], comboCDs: e.comboCDs[:0], names: e.names}
 	if err := s.validate(); err != nil {
 		return e, err
 	}
@@ -105,6 +112,27 @@ func newEngine(m Member, s Settings) (*engine, error) {
 	e.dv = dv
 	if err := e.m.validate(); err != nil {
 		return e, err
+	}
+	e.supFc = nil
+	for j, b := range m.Bearings {
+		if b.SupportSpecies == "" && b.SupportGrade == "" {
+			continue
+		}
+		sp, gr := b.SupportSpecies, b.SupportGrade
+		if sp == "" {
+			sp = m.Species
+		}
+		if gr == "" {
+			gr = m.Grade
+		}
+		sdv, err := mats.Lookup(sp, gr, m.Size)
+		if err != nil {
+			return e, fmt.Errorf("bearing %d: the support's material: %v", j+1, err)
+		}
+		if e.supFc == nil {
+			e.supFc = make([]DesignValues, len(m.Bearings))
+		}
+		e.supFc[j] = sdv
 	}
 	e.factors()
 	e.model()
@@ -164,10 +192,7 @@ func (e *engine) model() {
 			e.spanSegs = append(e.spanSegs, i)
 		}
 	}
-	l := e.m.Loads
-	t := e.m.TribIn / 144 // psf x in / (144 in^2/ft^2) = lb/in
-	e.wPli = [numLoadTypes]float64{l.DeadPsf * t, l.LivePsf * t, l.RoofLivePsf * t, l.SnowPsf * t, l.WindDownPsf * t}
-	e.wUpPli = l.WindUpPsf * t
+	e.buildLoads()
 }
 
 // patterns returns the masks of segments loaded by the live-type loads:
@@ -235,7 +260,10 @@ type comboCD struct {
 type caseSpec struct {
 	name            string
 	cd              float64
-	full, patterned float64
+	f               factorSet
+	dir             float64
+	full, patterned float64 // the one uniform load's parts (not general members)
+	live            bool    // live-type loads act in the case: pattern it
 }
 
 // solveStrength expands the combinations into load cases and solves each.
@@ -253,10 +281,10 @@ func (e *engine) solveStrength() error {
 			nd := 1
 			if f[LoadW] > 0 {
 				nd = 0
-				if e.wPli[LoadW] > 0 {
+				if e.hasWind(1) {
 					dirs[nd], nd = 1, nd+1
 				}
-				if e.wUpPli > 0 {
+				if e.hasWind(-1) {
 					dirs[nd], nd = -1, nd+1
 				}
 			}
@@ -271,12 +299,12 @@ func (e *engine) solveStrength() error {
 	for _, sp := range specs {
 		e.comboCDs = append(e.comboCDs, comboCD{sp.name, sp.cd})
 	}
-	if len(e.segs) == 1 && pruneCases {
+	if len(e.segs) == 1 && !e.general && pruneCases {
 		specs = pruneDominated(specs)
 	}
 	n := 0
 	for _, sp := range specs {
-		if sp.patterned == 0 {
+		if !sp.live {
 			n++
 		} else {
 			n += len(pats)
@@ -287,29 +315,25 @@ func (e *engine) solveStrength() error {
 	} else {
 		e.cases = make([]strengthCase, n)
 	}
-	if cap(e.wAll) >= n*len(e.segs) {
-		e.wAll = e.wAll[:n*len(e.segs)]
+	np := len(e.lps)
+	if cap(e.wAll) >= n*np {
+		e.wAll = e.wAll[:n*np]
 	} else {
-		e.wAll = make([]float64, n*len(e.segs))
+		e.wAll = make([]float64, n*np)
 	}
 	wAll := e.wAll
 	i := 0
 	for _, sp := range specs {
 		ps := pats
-		if sp.patterned == 0 {
+		if !sp.live {
 			ps = pats[:1]
 		}
 		for _, p := range ps {
 			c := &e.cases[i]
-			c.name, c.cd, c.pattern = sp.name, sp.cd, p
-			c.w = wAll[i*len(e.segs) : (i+1)*len(e.segs)]
-			for k := range c.w {
-				c.w[k] = sp.full
-				if p&(1<<k) != 0 {
-					c.w[k] += sp.patterned
-				}
-			}
-			if err := e.bm.SolveInto(&c.r, c.w); err != nil {
+			c.name, c.cd, c.pattern, c.f, c.dir = sp.name, sp.cd, p, sp.f, sp.dir
+			c.w = wAll[i*np : (i+1)*np]
+			e.fillCase(c)
+			if err := e.solve(&c.r, c.w, c.pts); err != nil {
 				return err
 			}
 			c.mPos, _, c.mNeg, _ = c.r.MomentExtremes(0, e.bm.LengthIn)
@@ -325,7 +349,7 @@ func (e *engine) solveStrength() error {
 // zero, such as D+0.75L+0.75(Lr or S) without roof live or snow).
 func hasSpec(specs []caseSpec, sp caseSpec) bool {
 	for _, s := range specs {
-		if s.full == sp.full && s.patterned == sp.patterned && s.cd == sp.cd && s.name == sp.name {
+		if s.full == sp.full && s.patterned == sp.patterned && s.cd == sp.cd && s.name == sp.name && s.dir == sp.dir {
 			return true
 		}
 	}
@@ -376,20 +400,9 @@ func pruneDominated(specs []caseSpec) []caseSpec {
 // toward the member, -1 away, 0 none); ok is false for a case whose
 // variable loads are all zero, unless it is a dead-load-only combination.
 func (e *engine) caseSpec(f factorSet, dir float64) (caseSpec, bool) {
-	var present [numLoadTypes]bool
+	present := e.present(dir)
 	hasVar, varPresent := false, false
-	wW := 0.0
-	if dir > 0 {
-		wW = e.wPli[LoadW]
-	} else if dir < 0 {
-		wW = -e.wUpPli
-	}
 	for t := LoadL; t < numLoadTypes; t++ {
-		mag := e.wPli[t]
-		if t == LoadW {
-			mag = math.Abs(wW)
-		}
-		present[t] = mag > 0
 		if f[t] > 0 {
 			hasVar = true
 			varPresent = varPresent || present[t]
@@ -399,12 +412,18 @@ func (e *engine) caseSpec(f factorSet, dir float64) (caseSpec, bool) {
 	if hasVar && !varPresent {
 		return caseSpec{}, false
 	}
-	return caseSpec{
-		name:      e.caseName(f, dir, present),
-		cd:        ComboDurationFactor(f, present),
-		full:      f[LoadD] * e.wPli[LoadD],
-		patterned: f[LoadL]*e.wPli[LoadL] + f[LoadLr]*e.wPli[LoadLr] + f[LoadS]*e.wPli[LoadS] + f[LoadW]*wW,
-	}, true
+	sp := caseSpec{name: e.caseName(f, dir, present), cd: ComboDurationFactor(f, present), f: f, dir: dir}
+	if !e.general {
+		lw := &e.mps[0].lw
+		sp.full = lw.factored(f, dir, false)
+		sp.patterned = lw.factored(f, dir, true) - sp.full
+		sp.live = sp.patterned != 0
+	} else {
+		for t := LoadL; t < numLoadTypes; t++ {
+			sp.live = sp.live || (f[t] > 0 && present[t])
+		}
+	}
+	return sp, true
 }
 
 type caseNameKey struct {

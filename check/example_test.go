@@ -28,7 +28,7 @@ func ExampleCheckMember() {
 	// bending-top      D+L             916.289 1138.500 psi 0.805
 	// shear            D+L              50.450  180.000 psi 0.280
 	// deflection-live  L, span 1         0.291    0.467 in  0.624
-	// deflection-total 1.5D+L, span 1    0.400    0.700 in  0.572
+	// deflection-total 0.5D+L, span 1    0.328    0.700 in  0.468
 	// bearing          D+L              90.741  625.000 psi 0.145
 	// governing bending-top 0.805
 }

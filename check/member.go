@@ -17,6 +17,41 @@ type AreaLoads struct {
 	SnowPsf     float64 // S
 	WindDownPsf float64 // W toward the member
 	WindUpPsf   float64 // W away from the member
+	// UpliftDeadPsf is the dead load relied on to resist uplift: the D of
+	// every case in which the wind acts away from the member (0.6D + 0.6W
+	// among them), when HasUpliftDead; otherwise DeadPsf is used (DOMAIN.md
+	// "Loads", zone key uplift_dead_psf).
+	UpliftDeadPsf float64
+	HasUpliftDead bool
+}
+
+// upliftDead returns the dead load relied on against uplift, psf.
+func (l AreaLoads) upliftDead() float64 {
+	if l.HasUpliftDead {
+		return l.UpliftDeadPsf
+	}
+	return l.DeadPsf
+}
+
+// LoadPiece is a stretch of a member with its own area loads: a member
+// crossing load-zone edges is loaded zone by zone where each zone acts,
+// never with an envelope (DOMAIN.md "Loads"). FromIn and ToIn are member
+// positions, like Bearing.AtIn.
+type LoadPiece struct {
+	FromIn, ToIn float64
+	Zone         string // for messages and traces
+	Loads        AreaLoads
+}
+
+// PointLoad is a concentrated load on a member, lb per load type (wind at
+// strength level; WindUpLb a magnitude), at AtIn along the member.
+type PointLoad struct {
+	AtIn                               float64
+	DeadLb, LiveLb, RoofLiveLb, SnowLb float64
+	WindDownLb, WindUpLb               float64
+	UpliftDeadLb                       float64 // D relied on against uplift when HasUpliftDead
+	HasUpliftDead                      bool
+	Name                               string // for messages and traces
 }
 
 // Bearing is one support of a member: the centre-line position along the
@@ -24,6 +59,14 @@ type AreaLoads struct {
 type Bearing struct {
 	AtIn     float64 // centre-line, from the member start
 	LengthIn float64 // bearing length lb along the member
+	// Hanger: the member hangs from the support's face (a hanger at a flush
+	// beam or a face-mounted ledger) rather than resting on it, so NDS 2018
+	// 3.4.3.1(a) (shear at d) does not apply there.
+	Hanger bool
+	// SupportSpecies and SupportGrade name the plate or beam the member
+	// bears on; its Fc_perp is checked too and the smaller governs (NDS
+	// 2018 3.10.2). Empty: the member's own species and grade.
+	SupportSpecies, SupportGrade string
 }
 
 // Member is one joist to check. Positions run along the member from its
@@ -41,10 +84,20 @@ type Member struct {
 	TribIn                         float64 // tributary width
 	Use                            string  // "floor" or "roof"
 	Loads                          AreaLoads
-	LiveLimit, TotalLimit          float64 // L/limit; 0 = not checked
-	BottomBracedContinuous         bool    // ceiling fastened directly to the joists
-	BlockingAtIn                   []float64
-	Repetitive                     bool // Cr applies (NDS 2018 4.3.9 conditions met)
+	// LoadPieces, when given, replace Loads: each piece loads its stretch
+	// of the member with its own area loads on TribIn. Together they must
+	// cover the member from 0 to LengthIn without gaps or overlaps.
+	LoadPieces []LoadPiece
+	// PointLoads are concentrated loads on the member.
+	PointLoads             []PointLoad
+	LiveLimit, TotalLimit  float64 // L/limit; 0 = not checked
+	BottomBracedContinuous bool    // ceiling fastened directly to the joists
+	BlockingAtIn           []float64
+	Repetitive             bool // Cr applies (NDS 2018 4.3.9 conditions met)
+	// LongTermLimit is n of the NDS 2018 3.5.2 long-term deflection check
+	// (Kcr x the dead-load deflection + the short-term live-type deflection
+	// against L/n); 0 = reported, not checked.
+	LongTermLimit float64
 }
 
 // Settings are the design switches of a run (the project file's [design]).
@@ -55,17 +108,21 @@ type Settings struct {
 	Incised       bool   // Ci
 	PatternLive   bool   // live-type loads span by span on continuous and cantilevered members
 	Temperature   string // normal | warm | hot (Ct)
-	Kcr           float64
-	Combos        []Combo    // nil = ASCE 7-16 2.4.1 defaults
-	Materials     *Materials // nil = built-in tables
+	// Seasoned: lumber below 16 % moisture content at installation, used in
+	// dry service, so the IBC total deflection is taken under L + 0.5D (IBC
+	// 2018 Table 1604.3 footnote d); ignored under WetService.
+	Seasoned  bool
+	Kcr       float64
+	Combos    []Combo    // nil = ASCE 7-16 2.4.1 defaults
+	Materials *Materials // nil = built-in tables
 }
 
 // DefaultSettings returns the project-file defaults: top edge braced, no
-// shear-at-d reduction, dry service, not incised, pattern live loads,
-// normal temperature, Kcr = 1.5 (NDS 2018 3.5.2, seasoned lumber in dry
+// shear-at-d reduction, dry service, seasoned lumber, not incised, pattern
+// live loads, normal temperature, Kcr = 1.5 (NDS 2018 3.5.2, seasoned lumber in dry
 // service), ASCE 7-16 combinations, built-in design values.
 func DefaultSettings() Settings {
-	return Settings{TopEdgeBraced: true, PatternLive: true, Temperature: "normal", Kcr: 1.5}
+	return Settings{TopEdgeBraced: true, PatternLive: true, Temperature: "normal", Kcr: 1.5, Seasoned: true}
 }
 
 // maxBearings bounds the bearings of one member, so that its segments fit
@@ -117,14 +174,24 @@ func (m *Member) validate() error {
 	if !finite(m.SpacingIn) || m.SpacingIn < 0 {
 		return fmt.Errorf("spacing %v in: want >= 0", m.SpacingIn)
 	}
-	for _, l := range []struct {
-		name string
-		v    float64
-	}{{"dead", m.Loads.DeadPsf}, {"live", m.Loads.LivePsf}, {"roof live", m.Loads.RoofLivePsf},
-		{"snow", m.Loads.SnowPsf}, {"wind down", m.Loads.WindDownPsf}, {"wind up", m.Loads.WindUpPsf}} {
-		if !finite(l.v) || l.v < 0 {
-			return fmt.Errorf("%s load %v psf: want a finite load >= 0 (wind up is a magnitude)", l.name, l.v)
+	if err := m.Loads.validate(""); err != nil {
+		return err
+	}
+	if err := m.validatePieces(); err != nil {
+		return err
+	}
+	for i, p := range m.PointLoads {
+		if !finite(p.AtIn) || p.AtIn < -tol || p.AtIn > m.LengthIn+tol {
+			return fmt.Errorf("point load %d at %v in: want a position within the member (0 to %g in)", i+1, p.AtIn, m.LengthIn)
 		}
+		for _, v := range [...]float64{p.DeadLb, p.LiveLb, p.RoofLiveLb, p.SnowLb, p.WindDownLb, p.WindUpLb, p.UpliftDeadLb} {
+			if !finite(v) || v < 0 {
+				return fmt.Errorf("point load %d: load %v lb: want finite loads >= 0 (wind up is a magnitude)", i+1, v)
+			}
+		}
+	}
+	if !finite(m.LongTermLimit) || m.LongTermLimit < 0 {
+		return fmt.Errorf("long-term deflection limit L/%v: want a finite value >= 0 (0 = not checked)", m.LongTermLimit)
 	}
 	if m.Use != "floor" && m.Use != "roof" {
 		return fmt.Errorf("use %q: want floor or roof", m.Use)
@@ -136,6 +203,46 @@ func (m *Member) validate() error {
 		if !finite(x) {
 			return fmt.Errorf("blocking row at %v in: want a finite position", x)
 		}
+	}
+	return nil
+}
+
+// validate reports the first problem with area loads l; where names the
+// load piece, "" for the member's own loads.
+func (l AreaLoads) validate(where string) error {
+	for _, v := range [...]struct {
+		name string
+		v    float64
+	}{{"dead", l.DeadPsf}, {"live", l.LivePsf}, {"roof live", l.RoofLivePsf},
+		{"snow", l.SnowPsf}, {"wind down", l.WindDownPsf}, {"wind up", l.WindUpPsf}, {"uplift dead", l.UpliftDeadPsf}} {
+		if !finite(v.v) || v.v < 0 {
+			return fmt.Errorf("%s%s load %v psf: want a finite load >= 0 (wind up is a magnitude)", where, v.name, v.v)
+		}
+	}
+	return nil
+}
+
+// validatePieces reports a problem with m.LoadPieces: they must run from
+// the member's start to its end in order, each longer than 0, without gaps
+// or overlaps (within 0.01 in).
+func (m *Member) validatePieces() error {
+	const tol = 0.01
+	at := 0.0
+	for i, p := range m.LoadPieces {
+		where := fmt.Sprintf("load piece %d (%s): ", i+1, p.Zone)
+		if !finite(p.FromIn) || !finite(p.ToIn) || p.ToIn-p.FromIn <= 0 {
+			return fmt.Errorf("%sfrom %v to %v in: want a stretch of the member longer than 0", where, p.FromIn, p.ToIn)
+		}
+		if math.Abs(p.FromIn-at) > tol {
+			return fmt.Errorf("%sstarts at %g in: want %g in (pieces must follow one another from the member start)", where, p.FromIn, at)
+		}
+		if err := p.Loads.validate(where); err != nil {
+			return err
+		}
+		at = p.ToIn
+	}
+	if len(m.LoadPieces) > 0 && math.Abs(at-m.LengthIn) > tol {
+		return fmt.Errorf("load pieces end at %g in: want the member end, %g in", at, m.LengthIn)
 	}
 	return nil
 }

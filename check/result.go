@@ -19,7 +19,11 @@ const (
 	KindShear           = "shear"
 	KindDeflectionLive  = "deflection-live"
 	KindDeflectionTotal = "deflection-total"
-	KindBearing         = "bearing"
+	// KindDeflectionLongTerm is the NDS 2018 3.5.2 long-term deflection
+	// (Kcr x dead-load deflection + live-type deflection), checked only
+	// where the zone gives long_term_deflection_limit.
+	KindDeflectionLongTerm = "deflection-long-term"
+	KindBearing            = "bearing"
 )
 
 // CheckResult is one check at its governing load case.

@@ -112,7 +112,11 @@ func (e *engine) result(n int, bot *edgeEval) Result {
 	if len(e.cases) > 0 {
 		r.Checks = append(r.Checks, e.shearCheck())
 	}
-	r.Checks = append(r.Checks, e.deflectionChecks()...)
+	defl, longInfo := e.deflectionChecks()
+	r.Checks = append(r.Checks, defl...)
+	if longInfo != "" {
+		r.Info = append(r.Info, longInfo)
+	}
 	if len(e.cases) > 0 {
 		b, info := e.bearingCheck()
 		r.Checks = append(r.Checks, b)

@@ -1,0 +1,179 @@
+package check
+
+import (
+	"math"
+	"strings"
+	"testing"
+)
+
+// roofJoist is a DF-L No.2 2x8 roof joist, simple span L at 16 in, bottom
+// edge braced only at its bearings.
+func roofJoist(L float64) Member {
+	return Member{ID: "R1", Size: "2x8", Species: "Douglas Fir-Larch", Grade: "No.2", LengthIn: L,
+		Bearings: []Bearing{{AtIn: 0, LengthIn: 3.5}, {AtIn: L, LengthIn: 3.5}}, SpacingIn: 16, TribIn: 16, Use: "roof",
+		LiveLimit: 240, TotalLimit: 180, Repetitive: true}
+}
+
+// TestZonesWhereTheyAct_NetUplift: a roof joist of 192 in span with an
+// edge zone (D 8, W up 60 psf) over its first 170 in and a heavier zone
+// (D 25, W up 50 psf) over the last 22 in. In 0.6D + 0.6W (ASCE 7-16
+// 2.4.1, combination 7) each stretch keeps its own dead load:
+//
+//	w_A = (0.6(60) - 0.6(8)) 16/144 = 3.4667 lb/in up, over 0-170 in
+//	w_B = (0.6(50) - 0.6(25)) 16/144 = 1.6667 lb/in up, over 170-192 in
+//	R_left = [w_A 170 (192 - 85) + w_B 22 (192 - 181)] / 192 = 330.5 lb (hold-down)
+//	R_right = w_A 170 + w_B 22 - R_left = 295.5 lb
+//	M_max = R_left^2 / (2 w_A) = 15,755 lb-in, at x = R_left / w_A = 95.3 in
+//
+// (statics, written out). The envelope of the two zones (D 25 with W up
+// 60 everywhere) would give w = (36 - 15) 16/144 = 2.333 lb/in and
+// M = w L^2 / 8 = 10,752 lb-in: 32 % low.
+func TestZonesWhereTheyAct_NetUplift(t *testing.T) {
+	const src = "statics, written out in the comment (ASCE 7-16 2.4.1 combination 0.6D + 0.6W)"
+	L := 192.0
+	m := roofJoist(L)
+	m.LoadPieces = []LoadPiece{
+		{FromIn: 0, ToIn: 170, Zone: "EDGE", Loads: AreaLoads{DeadPsf: 8, RoofLivePsf: 20, WindUpPsf: 60}},
+		{FromIn: 170, ToIn: 192, Zone: "FIELD", Loads: AreaLoads{DeadPsf: 25, RoofLivePsf: 20, WindUpPsf: 50}},
+	}
+	s := DefaultSettings()
+	r := CheckMember(m, s)
+	if r.Status == StatusError {
+		t.Fatalf("error: %v", r.Messages)
+	}
+	wA := (0.6*60 - 0.6*8) * 16 / 144
+	wB := (0.6*50 - 0.6*25) * 16 / 144
+	rl := (wA*170*(192-85) + wB*22*(192-181)) / 192
+	expectNear(t, "R left", rl, 330.5, 0.1, 0, src)
+	mMax := rl * rl / (2 * wA)
+	bot := find(t, r, KindBendingBottom)
+	expectNear(t, "M bottom edge", traceValue(t, bot, "M"), mMax, 0, 1e-9, src)
+	if !strings.Contains(bot.Combo, "0.6D+0.6W(up)") {
+		t.Errorf("bottom-edge combination %q, want 0.6D+0.6W(up) (ASCE 7-16 2.4.1)", bot.Combo)
+	}
+	// The hold-down reaction is reported with its full value.
+	if !strings.Contains(strings.Join(r.Info, "\n"), "330.5") {
+		t.Errorf("info %q: want the net uplift reaction 330.5 lb at bearing 1 (statics)", r.Info)
+	}
+
+	// uplift_dead_psf: the dead load relied on against uplift may be less
+	// than D. With 5 psf in the edge zone: w_A = (36 - 3) 16/144 = 3.6667.
+	m.LoadPieces[0].Loads.UpliftDeadPsf, m.LoadPieces[0].Loads.HasUpliftDead = 5, true
+	r2 := CheckMember(m, s)
+	wA2 := (0.6*60 - 0.6*5) * 16 / 144
+	rl2 := (wA2*170*(192-85) + wB*22*(192-181)) / 192
+	expectNear(t, "M bottom edge, uplift dead 5 psf", traceValue(t, find(t, r2, KindBendingBottom), "M"), rl2*rl2/(2*wA2), 0, 1e-9, src)
+	// Gravity cases keep the full dead load: D + Lr, w = (8 + 20) 16/144 on
+	// 0-170 and (25 + 20) 16/144 on 170-192; M_max by statics.
+	top := find(t, r2, KindBendingTop)
+	g1, g2 := 28*16/144.0, 45*16/144.0
+	rg := (g1*170*(192-85) + g2*22*(192-181)) / 192
+	expectNear(t, "M top edge, D+Lr", traceValue(t, top, "M"), rg*rg/(2*g1), 0, 1e-9, "statics, written out (uniform loads, shear zero at x = R/w)")
+}
+
+// TestShearAtD_NotUnderUplift: NDS 2018 3.4.3.1(a) lets loads within d of
+// the bearing face be left out of V only where the member bears on the
+// support on one face and the load acts on the opposite face; under net
+// uplift the connectors hold the member, so V is the full reaction. A
+// 2x8 roof joist, L = 168 in, D 10, W up 60 psf: 0.6D + 0.6W gives
+// w = (36 - 6) 16/144 = 3.3333 lb/in up and V = w L / 2 = 280 lb (statics),
+// which governs shear (CD = 1.6 against D alone at CD 0.9, 1.111 lb/in).
+func TestShearAtD_NotUnderUplift(t *testing.T) {
+	L := 168.0
+	m := roofJoist(L)
+	m.Loads = AreaLoads{DeadPsf: 10, WindUpPsf: 60}
+	s := DefaultSettings()
+	s.ShearAtD = true
+	r := CheckMember(m, s)
+	sh := find(t, r, KindShear)
+	w := (0.6*60 - 0.6*10) * 16 / 144
+	expectNear(t, "V under net uplift", traceValue(t, sh, "V"), w*L/2, 1e-9, 1e-9, "statics, w L / 2; NDS 2018 3.4.3.1(a) not applicable")
+	found := false
+	for _, ti := range sh.Trace() {
+		if strings.Contains(ti.Formula, "net uplift") {
+			found = true
+		}
+	}
+	if !found {
+		t.Errorf("shear trace does not say why shear at d was not applied: %+v", sh.Trace())
+	}
+}
+
+// TestShearAtD_Gravity_AndHanger: under gravity the reduction applies at a
+// bearing the member rests on: V = w (L/2 - lb/2 - d), lb = 3.5 in, d =
+// 7.25 in (NDS 2018 3.4.3.1(a); statics). At a hanger the member does not
+// rest on the support and V = w L / 2.
+func TestShearAtD_Gravity_AndHanger(t *testing.T) {
+	L := 168.0
+	m := roofJoist(L)
+	m.Use = "floor"
+	m.Loads = AreaLoads{DeadPsf: 10, LivePsf: 40}
+	s := DefaultSettings()
+	s.ShearAtD = true
+	w := 50 * 16 / 144.0
+	r := CheckMember(m, s)
+	expectNear(t, "V at d", traceValue(t, find(t, r, KindShear), "V"), w*(L/2-3.5/2-7.25), 1e-9, 1e-9, "statics; NDS 2018 3.4.3.1(a)")
+	m.Bearings[1].Hanger = true
+	r = CheckMember(m, s)
+	expectNear(t, "V at the hanger", traceValue(t, find(t, r, KindShear), "V"), w*L/2, 1e-9, 1e-9, "statics, w L / 2 (hanger: NDS 2018 3.4.3.1(a) does not apply)")
+}
+
+// TestBearingOnWeakerPlate: a DF-L No.2 joist (Fc_perp 625 psi) on a
+// Spruce-Pine-Fir No.2 plate (Fc_perp 425 psi, NDS 2018 Supplement Table
+// 4A): the plate governs, Fc_perp' = 425 psi (CM = Ct = Ci = 1, Cb = 1).
+func TestBearingOnWeakerPlate(t *testing.T) {
+	m := floorJoist("2x10", 168, 16)
+	r := CheckMember(m, DefaultSettings())
+	expectNear(t, "Fc_perp' on the joist", find(t, r, KindBearing).Allowable, 625, 1e-9, 0, "NDS 2018 Supplement Table 4A, DF-L No.2")
+	m.Bearings[1].SupportSpecies, m.Bearings[1].SupportGrade = "Spruce-Pine-Fir", "No.2"
+	r = CheckMember(m, DefaultSettings())
+	b := find(t, r, KindBearing)
+	expectNear(t, "Fc_perp' on the plate", b.Allowable, 425, 1e-9, 0, "NDS 2018 Supplement Table 4A, SPF No.1/No.2")
+	R := 50 * 16 / 144.0 * 168 / 2
+	expectNear(t, "fc_perp", b.Actual, R/(1.5*1.5), 1e-9, 1e-9, "R / (b lb), statics")
+	m.Bearings[1].SupportSpecies = "Balsa"
+	if r := CheckMember(m, DefaultSettings()); r.Status != StatusError {
+		t.Errorf("unknown support species: status %s, want error", r.Status)
+	}
+}
+
+// TestPointLoadOnJoist: a 2x10 floor joist, L = 168 in, 50 psf at 16 in
+// (w = 5.5556 lb/in) with 400 lb D + 300 lb L at mid-span: D + L gives
+// M = w L^2 / 8 + P L / 4 = 19,600 + 29,400 = 49,000 lb-in and
+// V = w L / 2 + P / 2 = 466.67 + 350 = 816.67 lb (AISC Beam Diagrams and
+// Formulas, simple beam cases 1 and 7, superposed).
+func TestPointLoadOnJoist(t *testing.T) {
+	L := 168.0
+	m := floorJoist("2x10", L, 16)
+	m.PointLoads = []PointLoad{{AtIn: L / 2, DeadLb: 400, LiveLb: 300}}
+	r := CheckMember(m, DefaultSettings())
+	w := 50 * 16 / 144.0
+	expectNear(t, "M", traceValue(t, find(t, r, KindBendingTop), "M"), w*L*L/8+700*L/4, 1e-9, 1e-9, "AISC Beam Diagrams cases 1 + 7")
+	expectNear(t, "V", traceValue(t, find(t, r, KindShear), "V"), w*L/2+350, 1e-9, 1e-9, "AISC Beam Diagrams cases 1 + 7")
+	// Live deflection: 5 wL L^4/(384 EI) + P L^3/(48 EI) with wL = 4.4444 lb/in, P = 300 lb.
+	ei := 1.6e6 * 1.5 * 9.25 * 9.25 * 9.25 / 12
+	want := 5*40*16/144.0*math.Pow(L, 4)/(384*ei) + 300*L*L*L/(48*ei)
+	expectNear(t, "live deflection", find(t, r, KindDeflectionLive).Actual, want, 1e-9, 1e-9, "AISC Beam Diagrams cases 1 + 7")
+}
+
+// TestOneZonePieceMatchesUniform: a member whose load pieces all carry the
+// same loads gives the results of the member loaded uniformly (the general
+// solver against the segment solver).
+func TestOneZonePieceMatchesUniform(t *testing.T) {
+	L := 288.0
+	m := floorJoist("2x10", L, 16)
+	m.Bearings = []Bearing{{AtIn: 0, LengthIn: 1.5}, {AtIn: 144, LengthIn: 3.5}, {AtIn: L, LengthIn: 1.5}}
+	m.TotalLimit = 240
+	ref := CheckMember(m, DefaultSettings())
+	m.LoadPieces = []LoadPiece{{FromIn: 0, ToIn: 100, Loads: m.Loads}, {FromIn: 100, ToIn: 200, Loads: m.Loads}, {FromIn: 200, ToIn: L, Loads: m.Loads}}
+	got := CheckMember(m, DefaultSettings())
+	if len(got.Checks) != len(ref.Checks) {
+		t.Fatalf("%d checks, want %d", len(got.Checks), len(ref.Checks))
+	}
+	for i := range ref.Checks {
+		expectNear(t, ref.Checks[i].Kind, got.Checks[i].Ratio, ref.Checks[i].Ratio, 0, 1e-9, "the same member loaded uniformly")
+		if got.Checks[i].Combo != ref.Checks[i].Combo {
+			t.Errorf("%s: combination %q, want %q", ref.Checks[i].Kind, got.Checks[i].Combo, ref.Checks[i].Combo)
+		}
+	}
+}
