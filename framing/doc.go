@@ -77,7 +77,8 @@
 // A member is cut where it crosses zone edges; each piece takes the
 // innermost zone holding it (DefaultZone outside all), and every zone
 // holding more than MaxWallThicknessIn of the member counts. Several
-// zones: the member takes their envelope, with a message.
+// zones: each loads the member where it acts (Member.ZonePieces), with a
+// message naming the zones and lengths.
 //
 // A label text that parses as a size callout (ParseCallout) applies to the
 // joists crossed by the nearest label-layer line within max(12 in, 3 text
@@ -98,7 +99,7 @@
 //	FRM203 warning  joist drawn twice: kept once
 //	FRM204 error    an end reaches no support
 //	FRM205 error    member outside every zone and no default zone
-//	FRM206 warning  member crosses zone edges: envelope
+//	FRM206 warning  member crosses zone edges: loaded zone by zone
 //	FRM207 warning  zone outline without a name, with two, or a name outside every outline
 //	FRM208 warning  label text that tries to be a size callout and is not one
 //	       info     label texts with no size in them (room names, notes), counted once

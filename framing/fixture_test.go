@@ -78,7 +78,7 @@ func TestPlanFixtureEndToEnd(t *testing.T) {
 		t.Errorf("runs %+v, want R1 of 3 and R2 of 8", pl.Runs)
 	}
 	c := issueCodes(pl.Issues)
-	if c[CodeBadCallout] != 1 || c[CodeZoneEnvelope] != 8 || pl.Issues.Err() != nil {
+	if c[CodeBadCallout] != 1 || c[CodeZonePieces] != 8 || pl.Issues.Err() != nil {
 		t.Errorf("issues %v", pl.Issues)
 	}
 	if pl.Ignored["A-ANNO"] != 1 {

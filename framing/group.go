@@ -17,7 +17,7 @@ const (
 	CodeDuplicateJoist  = "FRM203" // joist drawn twice: kept once
 	CodeNoSupport       = "FRM204" // an end reaches no support: error member
 	CodeNoZone          = "FRM205" // member outside every zone, no default zone
-	CodeZoneEnvelope    = "FRM206" // member crosses zone edges: envelope of zones
+	CodeZonePieces      = "FRM206" // member crosses zone edges: loaded zone by zone
 	CodeZoneName        = "FRM207" // zone outline without a name, or with two
 	CodeBadCallout      = "FRM208" // label text that is not a size callout
 	CodeCalloutConflict = "FRM209" // two callouts disagree on one joist

@@ -9,7 +9,7 @@ import (
 // markKey is what makes two members identical for design (DOMAIN.md
 // "Marks"): size, species and grade, spans and overhangs rounded up to
 // 1 in, spacing and tributary width rounded to 0.5 in, zones (same
-// loads), bearing kinds and lengths (to 0.25 in) and drawn blocking
+// loads) and where each acts (to 1 in), bearing kinds and lengths (to 0.25 in) and drawn blocking
 // positions from the first bearing (to 1 in). Tributary width is in the
 // key because an edge joist carries less load than its interior
 // neighbours at the same spacing.
@@ -38,6 +38,17 @@ func markKey(m *Member) string {
 			b = append(b, ',')
 		}
 		b = append(b, z...)
+	}
+	// where each zone acts, from the first bearing, to 1 in
+	zref := 0.0
+	if len(m.Bearings) > 0 {
+		zref = m.Bearings[0].AtIn
+	}
+	for _, zp := range m.ZonePieces {
+		b = append(b, ';')
+		b = append(b, zp.Zone...)
+		b = append(b, ':')
+		num(math.Round(zp.ToIn-zref), ',')
 	}
 	b = append(b, '|')
 	for _, br := range m.Bearings {

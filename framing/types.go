@@ -28,6 +28,13 @@ type Bearing struct {
 	Pos      dxfimport.Pos // the support line (the first of a double-line wall's two)
 }
 
+// ZonePiece is a stretch of a member, along it from Start, lying in one
+// load zone.
+type ZonePiece struct {
+	FromIn, ToIn float64
+	Zone         string
+}
+
 // Member is one joist ready for design.
 type Member struct {
 	ID         string
@@ -48,7 +55,11 @@ type Member struct {
 	CalloutSpacingIn float64 // nominal spacing of the size callout, 0 when none
 
 	Size, Species, Grade string   // callout > by_layer > project default
-	Zones                []string // one zone, or several (envelope, with a message)
+	Zones                []string // the zones loading the member, sorted
+	// ZonePieces are the stretches of the member in each zone, from Start
+	// to End, when it crosses zone edges (nil when one zone loads all of
+	// it): each zone loads the member where it acts (DOMAIN.md "Loads").
+	ZonePieces []ZonePiece
 
 	ExistingBlockingAtIn []float64 // drawn blocking rows crossing the member, along it from Start
 	Run                  int       // index into Plan.Runs

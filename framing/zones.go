@@ -123,11 +123,12 @@ func (x *zoneIndex) candidates(zs []zoneGeom, a, b Point) []int {
 	return x.cand
 }
 
-// memberZones cuts member k where it crosses zone edges, takes the
-// innermost zone of each piece, and keeps each zone holding more than
-// MaxWallThicknessIn of the member (so an end running into the wall on a
-// zone edge does not count); with none that long, the zone at the
-// midpoint. Pieces outside every outline belong to DefaultZone.
+// memberZones cuts member k where it crosses zone edges and takes the
+// innermost zone of each piece; an end piece no longer than
+// MaxWallThicknessIn (an end running into the wall on a zone edge) joins
+// the piece beside it. Pieces outside every outline belong to
+// DefaultZone. A member in several zones keeps its pieces (ZonePieces):
+// each zone loads it where it acts.
 func (g *grouper) memberZones(k int, zs []zoneGeom, idx *zoneIndex) {
 	m := &g.plan.Members[k]
 	a, b := m.Start, m.End
@@ -157,34 +158,58 @@ func (g *grouper) memberZones(k int, zs []zoneGeom, idx *zoneIndex) {
 		}
 		return zs[best].Name
 	}
-	lengths := map[string]float64{}
+	// Stretches between crossings, each in its innermost zone ("" outside
+	// every outline), neighbours in the same zone merged.
+	var pieces []ZonePiece
 	for i := 1; i < len(ts); i++ {
 		if ts[i]-ts[i-1] <= 0 {
 			continue
 		}
 		z := innermost(lerp(a, d, (ts[i]+ts[i-1])/2))
-		lengths[z] += (ts[i] - ts[i-1]) * m.LengthIn
+		from, to := ts[i-1]*m.LengthIn, ts[i]*m.LengthIn
+		if n := len(pieces); n > 0 && pieces[n-1].Zone == z {
+			pieces[n-1].ToIn = to
+			continue
+		}
+		pieces = append(pieces, ZonePiece{FromIn: from, ToIn: to, Zone: z})
 	}
-	var got []string
-	for z, l := range lengths {
-		if l > g.opt.MaxWallThicknessIn {
-			got = append(got, z)
+	// An end stretch no longer than MaxWallThicknessIn (the end running
+	// into the wall on a zone edge) belongs to the stretch beside it.
+	for len(pieces) > 1 && pieces[0].ToIn-pieces[0].FromIn <= g.opt.MaxWallThicknessIn {
+		pieces[1].FromIn = pieces[0].FromIn
+		pieces = pieces[1:]
+	}
+	for n := len(pieces); n > 1 && pieces[n-1].ToIn-pieces[n-1].FromIn <= g.opt.MaxWallThicknessIn; n = len(pieces) {
+		pieces[n-2].ToIn = pieces[n-1].ToIn
+		pieces = pieces[:n-1]
+	}
+	if len(pieces) == 0 {
+		pieces = []ZonePiece{{FromIn: 0, ToIn: m.LengthIn, Zone: innermost(mid(a, b))}}
+	}
+	outside := false
+	for i := range pieces {
+		if pieces[i].Zone == "" {
+			outside = true
+			pieces[i].Zone = g.opt.DefaultZone
 		}
 	}
-	if len(got) == 0 {
-		got = []string{innermost(mid(a, b))}
+	// merge again: a stretch outside every outline may have taken the
+	// default zone of its neighbour
+	merged := pieces[:1]
+	for _, p := range pieces[1:] {
+		if last := &merged[len(merged)-1]; last.Zone == p.Zone {
+			last.ToIn = p.ToIn
+		} else {
+			merged = append(merged, p)
+		}
 	}
+	pieces = merged
 	seen := map[string]bool{}
 	var out []string
-	outside := false
-	for _, z := range got {
-		if z == "" {
-			outside = true
-			z = g.opt.DefaultZone
-		}
-		if z != "" && !seen[z] {
-			seen[z] = true
-			out = append(out, z)
+	for _, p := range pieces {
+		if p.Zone != "" && !seen[p.Zone] {
+			seen[p.Zone] = true
+			out = append(out, p.Zone)
 		}
 	}
 	sort.Strings(out)
@@ -195,10 +220,15 @@ func (g *grouper) memberZones(k int, zs []zoneGeom, idx *zoneIndex) {
 		m.Messages = append(m.Messages, msg)
 		g.plan.Issues.Add(m.Pos, CodeNoZone, dxfimport.SevError, "%s", msg)
 	}
-	if len(out) > 1 {
-		msg := fmt.Sprintf("%s crosses zone edges: designed for the envelope of zones %s", m.ID, strings.Join(out, ", "))
+	if len(pieces) > 1 {
+		m.ZonePieces = pieces
+		parts := make([]string, len(pieces))
+		for i, p := range pieces {
+			parts[i] = fmt.Sprintf("%s from %.1f to %.1f in (%.1f in)", p.Zone, p.FromIn, p.ToIn, p.ToIn-p.FromIn)
+		}
+		msg := fmt.Sprintf("%s crosses zone edges: each zone loads it where it acts: %s", m.ID, strings.Join(parts, ", "))
 		m.Messages = append(m.Messages, msg)
-		g.warn(m.Pos, CodeZoneEnvelope, "%s", msg)
+		g.plan.Issues.Add(m.Pos, CodeZonePieces, dxfimport.SevInfo, "%s", msg)
 	}
 }
 

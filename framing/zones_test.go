@@ -1,6 +1,7 @@
 package framing
 
 import (
+	"math"
 	"reflect"
 	"testing"
 )
@@ -35,7 +36,17 @@ func TestZones(t *testing.T) {
 			t.Errorf("member at (%g,%g) zones %v, want %v", c.x, c.y, m.Zones, c.want)
 		}
 	}
-	if cs := issueCodes(pl.Issues); cs[CodeZoneEnvelope] != 1 || cs[CodeZoneName] != 1 {
+	// The member crossing from CORRIDOR into ROOF keeps both stretches,
+	// end to end along it (each zone loads it where it acts).
+	if m := member(t, pl, 100, 144); len(m.ZonePieces) != 2 || m.ZonePieces[0].FromIn != 0 ||
+		math.Abs(m.ZonePieces[1].ToIn-m.LengthIn) > 1e-9 || m.ZonePieces[0].ToIn != m.ZonePieces[1].FromIn ||
+		m.ZonePieces[0].Zone == m.ZonePieces[1].Zone {
+		t.Errorf("member at (100,144): zone pieces %+v over %g in, want two zones end to end", m.ZonePieces, m.LengthIn)
+	}
+	if m := member(t, pl, 0, 72); m.ZonePieces != nil {
+		t.Errorf("member in one zone: pieces %+v, want none", m.ZonePieces)
+	}
+	if cs := issueCodes(pl.Issues); cs[CodeZonePieces] != 1 || cs[CodeZoneName] != 1 {
 		t.Errorf("issues %v", pl.Issues)
 	}
 	if len(pl.Zones) != 3 {

@@ -185,7 +185,7 @@ func TestWrongUnitsAreQuestioned(t *testing.T) {
 // deflection limits are commented out.
 func TestSummaryNamesDefaultsUsed(t *testing.T) {
 	_, stdout, _ := runMMPlan(t, "")
-	assert.Contains(t, stdout, "3 settings left out of")
+	assert.Contains(t, stdout, "4 settings left out of")
 	assert.Contains(t, stdout, "  drawing.units: from the DXF header ($INSUNITS)")
 	assert.Contains(t, stdout, "live_deflection_limit = 360")
 	assert.NotContains(t, stdout, "Notes sheet")

@@ -71,6 +71,7 @@ func checkSettings(p *Project) (check.Settings, error) {
 	s.PatternLive = p.Design.PatternLiveLoads
 	s.Temperature = p.Design.Temperature
 	s.Kcr = p.Design.Kcr
+	s.Seasoned = p.Design.Seasoned
 	combos, err := p.Design.Combinations.Combos()
 	if err != nil {
 		return s, fmt.Errorf("%s: design.combinations: %v", p.File, err)
@@ -372,7 +373,14 @@ func checkInput(p *Project, plan *framing.Plan, k int) (cm check.Member, shift f
 		shift = -m.Bearings[0].AtIn
 	}
 	for _, b := range m.Bearings {
-		cm.Bearings = append(cm.Bearings, check.Bearing{AtIn: b.AtIn + shift, LengthIn: b.LengthIn})
+		cb := check.Bearing{AtIn: b.AtIn + shift, LengthIn: b.LengthIn,
+			// a joist in a hanger, or on a ledger, hangs from the support's
+			// face: NDS 2018 3.4.3.1(a) does not hold there
+			Hanger: b.Kind == framing.KindFlushBeam || b.Kind == framing.KindLedger}
+		if sup := p.SupportOf(b.Pos.Layer); sup != nil {
+			cb.SupportSpecies, cb.SupportGrade = sup.Species, sup.Grade
+		}
+		cm.Bearings = append(cm.Bearings, cb)
 	}
 	cm.LengthIn += shift
 	if n := len(cm.Bearings); n > 0 && cm.Bearings[n-1].AtIn > cm.LengthIn {
@@ -382,20 +390,56 @@ func checkInput(p *Project, plan *framing.Plan, k int) (cm check.Member, shift f
 		cm.BlockingAtIn = append(cm.BlockingAtIn, x+shift)
 	}
 	cm.Repetitive = repetitive(plan, k)
-	z, zmsgs := zoneEnvelope(p, m.Zones)
+	zs, zmsgs := memberZones(p, m.Zones)
 	msgs = append(msgs, zmsgs...)
-	if z == nil {
+	if zs == nil {
 		return cm, shift, msgs
 	}
-	cm.Use = z.Use
-	cm.Loads = check.AreaLoads{DeadPsf: z.DeadPsf, LivePsf: z.LivePsf, RoofLivePsf: z.RoofLivePsf,
-		SnowPsf: z.SnowPsf, WindDownPsf: z.WindDownPsf, WindUpPsf: z.WindUpPsf}
+	sw := 0.0
 	if p.Design.AddSelfWeight {
-		cm.Loads.DeadPsf += selfWeightPsf(m.Size, cm.TribIn)
+		sw = selfWeightPsf(m.Size, cm.TribIn)
 	}
-	cm.LiveLimit, cm.TotalLimit = z.LiveDeflectionLimit, z.TotalDeflectionLimit
+	cm.Loads = zoneLoads(zs[0], sw)
+	if len(m.ZonePieces) > 1 {
+		// Each zone loads the member where it acts (DOMAIN.md "Loads"),
+		// never the envelope: in 0.6D + 0.6W a zone's dead load resists
+		// only its own uplift.
+		for i, zp := range m.ZonePieces {
+			from, to := zp.FromIn+shift, zp.ToIn+shift
+			if i == 0 {
+				from = 0
+			}
+			if i == len(m.ZonePieces)-1 {
+				to = cm.LengthIn
+			}
+			cm.LoadPieces = append(cm.LoadPieces, check.LoadPiece{FromIn: from, ToIn: to, Zone: zp.Zone, Loads: zoneLoads(p.Zone(zp.Zone), sw)})
+		}
+	}
+	// Use, deflection limits and bottom bracing are properties of the
+	// whole member: the strictest of its zones.
+	z := zs[0]
+	cm.Use = z.Use
+	cm.LiveLimit, cm.TotalLimit, cm.LongTermLimit = z.LiveDeflectionLimit, z.TotalDeflectionLimit, z.LongTermDeflectionLimit
 	cm.BottomBracedContinuous = z.CeilingBracesBottom
+	for _, z := range zs[1:] {
+		if z.Use == "floor" {
+			cm.Use = "floor" // floor limits are the stricter
+		}
+		cm.LiveLimit = math.Max(cm.LiveLimit, z.LiveDeflectionLimit)
+		cm.TotalLimit = math.Max(cm.TotalLimit, z.TotalDeflectionLimit)
+		cm.LongTermLimit = math.Max(cm.LongTermLimit, z.LongTermDeflectionLimit)
+		cm.BottomBracedContinuous = cm.BottomBracedContinuous && z.CeilingBracesBottom
+	}
 	return cm, shift, msgs
+}
+
+// zoneLoads returns the area loads of zone z, with selfPsf (the joist's own
+// weight spread over its tributary width, or 0) added to the dead load and
+// to the dead load relied on against uplift.
+func zoneLoads(z *Zone, selfPsf float64) check.AreaLoads {
+	return check.AreaLoads{DeadPsf: z.DeadPsf + selfPsf, LivePsf: z.LivePsf, RoofLivePsf: z.RoofLivePsf,
+		SnowPsf: z.SnowPsf, WindDownPsf: z.WindDownPsf, WindUpPsf: z.WindUpPsf,
+		UpliftDeadPsf: z.UpliftDeadPsf + selfPsf, HasUpliftDead: z.HasUpliftDead}
 }
 
 // repetitive reports whether plan member k qualifies for Cr (NDS 2018
@@ -437,39 +481,21 @@ func selfWeightPsf(size string, tribIn float64) float64 {
 	return plf / (tribIn / 12)
 }
 
-// zoneEnvelope returns the zone a member takes: its one zone, or for a
-// member crossing zone edges the envelope (largest of each load, the
-// stricter deflection limits, bottom bracing only if every zone gives it).
-func zoneEnvelope(p *Project, names []string) (*Zone, []string) {
+// memberZones returns the project zones of the names a member lies in, or
+// nil with the reason when it has none or one the project does not define.
+func memberZones(p *Project, names []string) ([]*Zone, []string) {
 	if len(names) == 0 {
 		return nil, []string{"no load zone: the member lies outside every zone outline and the project has no default_zone"}
 	}
-	var env *Zone
+	zs := make([]*Zone, 0, len(names))
 	for _, n := range names {
 		z := p.Zone(n)
 		if z == nil {
 			return nil, []string{fmt.Sprintf("load zone %q is drawn but the project file has no [[zone]] named so", n)}
 		}
-		if env == nil {
-			c := *z
-			env = &c
-			continue
-		}
-		env.Name += "+" + z.Name
-		if z.Use == "roof" && env.Use != "roof" {
-			// floor limits are the stricter, so a mixed member stays floor
-		}
-		env.DeadPsf = math.Max(env.DeadPsf, z.DeadPsf)
-		env.LivePsf = math.Max(env.LivePsf, z.LivePsf)
-		env.RoofLivePsf = math.Max(env.RoofLivePsf, z.RoofLivePsf)
-		env.SnowPsf = math.Max(env.SnowPsf, z.SnowPsf)
-		env.WindDownPsf = math.Max(env.WindDownPsf, z.WindDownPsf)
-		env.WindUpPsf = math.Max(env.WindUpPsf, z.WindUpPsf)
-		env.LiveDeflectionLimit = math.Max(env.LiveDeflectionLimit, z.LiveDeflectionLimit)
-		env.TotalDeflectionLimit = math.Max(env.TotalDeflectionLimit, z.TotalDeflectionLimit)
-		env.CeilingBracesBottom = env.CeilingBracesBottom && z.CeilingBracesBottom
+		zs = append(zs, z)
 	}
-	return env, nil
+	return zs, nil
 }
 
 // unshift moves positions check returned back to the drawn member.

@@ -66,6 +66,10 @@ type Support struct {
 	// BearingIn is the bearing length on a single-line support; a
 	// double-line wall uses its thickness instead.
 	BearingIn float64
+	// Species and Grade name the plate or beam the joists bear on; its
+	// Fc_perp is checked beside the joist's (NDS 2018 3.10.2). Empty: the
+	// joist's own.
+	Species, Grade string
 }
 
 // Lumber is the [lumber] table: the project default for every joist and
@@ -111,6 +115,10 @@ type Design struct {
 	// PatternLiveLoads applies live-type loads span by span on continuous
 	// and cantilevered members.
 	PatternLiveLoads bool
+	// Seasoned: lumber below 16 % moisture at installation in dry service,
+	// so the IBC total deflection is taken under L + 0.5D (IBC 2018 Table
+	// 1604.3 footnote d). Left out: true, unless wet_service.
+	Seasoned bool
 }
 
 // Combinations is the value of design.combinations: either a named
@@ -162,6 +170,13 @@ type Zone struct {
 	// TotalDeflectionLimit is the n of L/n for the total deflection; 0
 	// means not checked.
 	TotalDeflectionLimit float64
+	// UpliftDeadPsf is the dead load relied on against uplift (the D of
+	// 0.6D + 0.6W); left out, the zone's dead_psf (HasUpliftDead false).
+	UpliftDeadPsf float64
+	HasUpliftDead bool
+	// LongTermDeflectionLimit is the n of L/n for the NDS 2018 3.5.2
+	// long-term deflection; 0 (the default) means reported, not checked.
+	LongTermDeflectionLimit float64
 }
 
 // Sizing is the [sizing] table, used by `framecheck check --size`.
@@ -250,6 +265,17 @@ func (p *Project) DefaultsUsed() []string {
 // dotted path; elements of array tables carry a 0-based index, as in
 // "zone[1].dead_psf" or "lumber.by_layer[0].size".
 func (p *Project) Given(key string) bool { return p.given[key] }
+
+// SupportOf returns the [[support]] table whose layer patterns match
+// layer, or nil.
+func (p *Project) SupportOf(layer string) *Support {
+	for i := range p.Supports {
+		if dxfimport.MatchLayer(p.Supports[i].Layers, layer) {
+			return &p.Supports[i]
+		}
+	}
+	return nil
+}
 
 // Zone returns the zone of that name (case-insensitive), or nil.
 func (p *Project) Zone(name string) *Zone {

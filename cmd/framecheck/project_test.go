@@ -162,7 +162,7 @@ func TestDefaultProject(t *testing.T) {
 	if p.Drawing != (DrawingSettings{SnapToleranceIn: 1.5, MaxWallThicknessIn: 12}) {
 		t.Errorf("drawing %+v", p.Drawing)
 	}
-	wantSup := []Support{{[]string{"WALL*"}, "bearing-wall", 3.5}, {[]string{"BEAM-FLUSH*"}, "flush-beam", 1.5}}
+	wantSup := []Support{{Layers: []string{"WALL*"}, Kind: "bearing-wall", BearingIn: 3.5}, {Layers: []string{"BEAM-FLUSH*"}, Kind: "flush-beam", BearingIn: 1.5}}
 	if !reflect.DeepEqual(p.Supports, wantSup) {
 		t.Errorf("supports %+v", p.Supports)
 	}

@@ -66,14 +66,15 @@ var schema = []struct {
 	{"the top level", []string{"drawing", "layers", "support", "lumber", "design", "loads", "zone", "sizing"}},
 	{"[drawing]", []string{"units", "snap_tolerance_in", "max_wall_thickness_in", "edge_distance_in"}},
 	{"[layers]", []string{"joists", "blocking", "zones", "labels"}},
-	{"[[support]]", []string{"layers", "kind", "bearing_in"}},
+	{"[[support]]", []string{"layers", "kind", "bearing_in", "species", "grade"}},
 	{"[lumber]", []string{"species", "grade", "size", "materials_file", "by_layer"}},
 	{"[[lumber.by_layer]]", []string{"layers", "species", "grade", "size"}},
 	{"[design]", []string{"top_edge_braced", "shear_at_d", "wet_service", "temperature", "incised", "kcr",
-		"add_self_weight", "combinations", "pattern_live_loads"}},
+		"add_self_weight", "combinations", "pattern_live_loads", "seasoned"}},
 	{"[loads]", []string{"default_zone"}},
 	{"[[zone]]", []string{"name", "use", "dead_psf", "live_psf", "roof_live_psf", "snow_psf", "wind_down_psf",
-		"wind_up_psf", "ceiling", "ceiling_braces_bottom", "live_deflection_limit", "total_deflection_limit"}},
+		"wind_up_psf", "ceiling", "ceiling_braces_bottom", "live_deflection_limit", "total_deflection_limit",
+		"uplift_dead_psf", "long_term_deflection_limit"}},
 	{"[sizing]", []string{"candidates", "blocking_piece_weight_bf"}},
 }
 

@@ -68,6 +68,8 @@ func (ld *loader) supports(root *table) {
 		ld.enum(t, "kind", &s.Kind, supportKinds)
 		s.BearingIn = defaultBearingIn[s.Kind]
 		ld.num(t, "bearing_in", "in", &s.BearingIn, thicknessRule)
+		ld.text(t, "species", &s.Species, nil)
+		ld.text(t, "grade", &s.Grade, nil)
 		ld.p.Supports = append(ld.p.Supports, s)
 	}
 }
@@ -171,6 +173,14 @@ func (ld *loader) design(t *table) {
 	ld.boolean(t, "add_self_weight", &d.AddSelfWeight)
 	ld.combinations(t, &d.Combinations)
 	ld.boolean(t, "pattern_live_loads", &d.PatternLiveLoads)
+	d.Seasoned = !d.WetService
+	if has(t, "seasoned") {
+		ld.boolean(t, "seasoned", &d.Seasoned)
+	} else {
+		ld.get(t, "seasoned", "")
+		ld.defaulted(t, "seasoned", "%v (IBC 2018 Table 1604.3 note d: total deflection under %s)", d.Seasoned,
+			map[bool]string{true: "L + 0.5D", false: "L + D"}[d.Seasoned])
+	}
 }
 
 func (ld *loader) combinations(t *table, dst *Combinations) {
@@ -246,6 +256,17 @@ func (ld *loader) zones(root *table) {
 		z.LiveDeflectionLimit, z.TotalDeflectionLimit = deflectionLimits(z.Use, z.Ceiling)
 		ld.limit(t, "live_deflection_limit", &z.LiveDeflectionLimit, z)
 		ld.limit(t, "total_deflection_limit", &z.TotalDeflectionLimit, z)
+		if has(t, "uplift_dead_psf") {
+			z.HasUpliftDead = true
+			ld.num(t, "uplift_dead_psf", "psf", &z.UpliftDeadPsf, loadRule)
+		} else {
+			ld.get(t, "uplift_dead_psf", "")
+		}
+		if has(t, "long_term_deflection_limit") {
+			ld.num(t, "long_term_deflection_limit", "the n of L/n", &z.LongTermDeflectionLimit, deflectionLimit)
+		} else {
+			ld.get(t, "long_term_deflection_limit", "")
+		}
 		ld.p.Zones = append(ld.p.Zones, z)
 	}
 }

@@ -284,6 +284,7 @@ func assumptions(o *outcome) export.Assumptions {
 	set("design.kcr", fmt.Sprint(p.Design.Kcr), "")
 	set("design.combinations", p.Design.Combinations.String(), "")
 	set("design.pattern_live_loads", fmt.Sprint(p.Design.PatternLiveLoads), "")
+	set("design.seasoned", fmt.Sprint(p.Design.Seasoned), "")
 	set("loads.default_zone", p.Loads.DefaultZone, "")
 	for _, z := range p.Zones {
 		a.Zones = append(a.Zones, export.Zone{Name: z.Name, Use: z.Use, DeadPsf: z.DeadPsf, LivePsf: z.LivePsf,
@@ -321,7 +322,7 @@ func assumptions(o *outcome) export.Assumptions {
 		"Members are sawn-lumber joists under uniform load on their tributary width; spans are centre-to-centre of bearings; an edge joist's tributary width is half the gap to its one neighbour (plus any drawing.edge_distance_in).",
 		"The top edge is braced by the sheathing when design.top_edge_braced is true; the bottom edge only at bearings, blocking rows and by a ceiling fastened directly to the joists where a zone says so.",
 		"Blocking rows are decided per run: every member of a run is checked with the most rows any of its members needs.",
-		"Members crossing load-zone edges take the envelope of the zones' loads and the stricter deflection limits.",
+		"Members crossing load-zone edges are loaded zone by zone where each zone acts (each load combination with each zone's own loads); they take the stricter deflection limits of their zones.",
 	)
 	if p.Design.AddSelfWeight {
 		a.Notes = append(a.Notes, "Joist self-weight is added to D at 35 lb/ft3 (NDS 2018 Supplement Table 1B basis).")

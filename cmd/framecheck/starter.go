@@ -33,6 +33,8 @@ labels = ["FRAMING-NOTE*"]    # size callouts such as "2x10 @ 16 o.c." and the s
 layers = ["WALL*"]
 kind = "bearing-wall"         # bearing-wall | dropped-beam | flush-beam | ledger
 bearing_in = 3.5              # bearing on a single-line support; a double-line wall bears over its thickness
+# species = "Spruce-Pine-Fir" # the plate the joists bear on, if not the joists' own species and grade:
+# grade = "No.2"              # its Fc_perp is checked too, and the smaller governs
 
 [[support]]
 layers = ["BEAM-FLUSH*"]
@@ -62,7 +64,8 @@ shear_at_d = false            # true: load within d of a bearing face is left ou
 wet_service = false           # true: wet service factors CM apply
 temperature = "normal"        # normal (to 100 F) | warm (100 to 125 F) | hot (125 to 150 F)
 incised = false               # true: incising factor Ci applies
-kcr = 1.5                     # creep factor for long-term deflection; 2.0 for wet or unseasoned lumber
+kcr = 1.5                     # creep factor for long-term deflection (NDS 3.5.2); 2.0 for wet or unseasoned lumber
+seasoned = true               # below 16% moisture at installation, dry service: IBC total deflection under L + 0.5D
 add_self_weight = false       # true: add the joist's own weight to D (otherwise dead_psf includes it)
 combinations = "ASCE 7-16"    # the ASD set of ASCE 7-16 2.4.1, or a list: ["D", "D+L", "D+0.75L+0.75S", "0.6D+0.6W"]
 pattern_live_loads = true     # also load live-type loads span by span on continuous and cantilevered joists
@@ -88,6 +91,8 @@ ceiling_braces_bottom = false # true: a ceiling fastened to the joists braces th
 # roof with plaster ceiling 360/240, other ceiling 240/180, none 180/120.
 # live_deflection_limit = 360
 # total_deflection_limit = 240
+# long_term_deflection_limit = 0  # NDS 3.5.2 long-term deflection (Kcr D + live), L/n; 0 = reported, not checked
+# uplift_dead_psf = 12.0      # dead load relied on against uplift in 0.6D + 0.6W; left out = dead_psf
 
 [sizing]
 # Used by "framecheck check --size": the sizes tried, smallest first.
