@@ -89,7 +89,7 @@ func (e *engine) intervals(continuous bool, pts []float64) []interval {
 	}
 	d, bw := e.sec.DIn, e.sec.BIn
 	mk := func(a, b float64, kind uint8) interval {
-		iv := interval{a: a, b: b, kind: kind, luIn: b - a}
+		iv := interval{a: a, b: b, kind: kind, luIn: (b - a) / e.cosT} // along a sloped rafter
 		var f string
 		iv.leIn, f = EffectiveLength(leKinds[kind], iv.luIn, d)
 		iv.leFormula = formulaIndex(f)

@@ -22,6 +22,7 @@ type calcCtx struct {
 	cr, eAdj, eminAdj, kcr, x0 float64
 	shearAtD                   bool
 	seasonedHalfD              bool
+	cosT, pitch                float64 // slope of a rafter: cosine, rise in 12
 }
 
 // bendRec is an edge's governing bending case.
@@ -73,7 +74,7 @@ func (e *engine) newCalcRecord() *calcRecord {
 		bIn: e.sec.BIn, dIn: e.sec.DIn, sIn3: e.sec.SIn3, aIn2: e.sec.AreaIn2,
 		fbPsi: e.dv.FbPsi, fvPsi: e.dv.FvPsi, fcPerpPsi: e.dv.FcPerpPsi, ePsi: e.dv.EPsi, eminPsi: e.dv.EminPsi,
 		cm: e.cm, ct: e.ct, cf: e.cf, ci: e.ci, cr: e.cr, eAdj: e.eAdj, eminAdj: e.eminAdj, kcr: e.kcr, x0: e.x0,
-		shearAtD: e.s.ShearAtD, seasonedHalfD: e.s.Seasoned && !e.s.WetService,
+		shearAtD: e.s.ShearAtD, seasonedHalfD: e.s.Seasoned && !e.s.WetService, cosT: e.cosT, pitch: e.m.PitchRise12,
 	}}
 }
 
@@ -125,7 +126,12 @@ func (r *calcRecord) bendingTrace(b *bendRec) []TraceItem {
 	if iv := b.iv; iv.braced {
 		t.add("CL", 1, "", "edge braced continuously", Subst{}, "NDS 2018 3.3.3.3")
 	} else {
-		t.add("lu", iv.luIn, "in", "distance between bracing points", t.f("%s - %s", iv.b+x.x0, iv.a+x.x0), "NDS 2018 3.3.3.4")
+		if x.cosT < 1 {
+			t.add("lu", iv.luIn, "in", "distance between bracing points along the rafter, plan distance / cos(slope)",
+				t.f("(%s - %s) / %s", iv.b+x.x0, iv.a+x.x0, x.cosT), "NDS 2018 3.3.3.4")
+		} else {
+			t.add("lu", iv.luIn, "in", "distance between bracing points", t.f("%s - %s", iv.b+x.x0, iv.a+x.x0), "NDS 2018 3.3.3.4")
+		}
 		t.add("lu/d", iv.luIn/x.dIn, "", "lu / d", t.f("%s / %s", iv.luIn, x.dIn), "NDS 2018 Table 3.3.3")
 		f := leFormulas[iv.leFormula]
 		t.add("le", iv.leIn, "in", f, leSubst(&t, f, iv.luIn, x.dIn), leRefs[iv.kind])
@@ -227,6 +233,10 @@ func (r *calcRecord) deflTrace(d *deflRec) []TraceItem {
 		t.add("delta", d.deflIn, "in", "largest deflection of "+d.where, Subst{}, refAnalysis)
 	}
 	t.add("E'", x.eAdj, "psi", "E CM Ct Ci", t.f("%s(%s)(%s)(%s)", x.ePsi, x.cm.E, x.ct.E, x.ci.E), "NDS 2018 Table 4.3.1")
+	if x.cosT < 1 {
+		t.add("cos", x.cosT, "", "rafter at "+fmtG(x.pitch)+" in 12: cos = 12 / sqrt(12^2 + rise^2); delta is perpendicular to the rafter "+
+			"(projection's / cos^2) and the span is the sloped length (plan span / cos)", t.f("12 / sqrt(144 + %s^2)", x.pitch), "statics")
+	}
 	ref := "IBC 2018 Table 1604.3"
 	if d.kind == KindDeflectionLongTerm {
 		ref = "NDS 2018 3.5.2; limit from the project file"

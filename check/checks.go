@@ -228,11 +228,14 @@ func (e *engine) deflectionChecks() ([]CheckResult, string) {
 		}
 		unitY, _ = c.r.MaxDeflection(e.segs[0].FromIn, e.segs[0].ToIn)
 	}
+	// On a sloped rafter the deflection perpendicular to it is the
+	// projection's over cos^2, against the sloped length / limit (statics).
+	ys, ls := 1/(e.cosT*e.cosT), 1/e.cosT
 	eval := func(live string, dF float64, pat uint32, limit float64, worst *deflWorst) {
 		if single {
 			sg := e.segs[0]
-			l := sg.ToIn - sg.FromIn
-			y, allow := math.Abs(c.w[0]*unitY), l/limit
+			l := (sg.ToIn - sg.FromIn) * ls
+			y, allow := math.Abs(c.w[0]*unitY)*ys, l/limit
 			if ratio := y / allow; ratio > worst.ratio {
 				*worst = deflWorst{ratio: ratio, deflIn: y, allowIn: allow, spanIn: l, limit: limit, live: live, dFactor: dF, pattern: pat}
 			}
@@ -242,16 +245,17 @@ func (e *engine) deflectionChecks() ([]CheckResult, string) {
 			return
 		}
 		for k, sg := range e.segs {
-			l := sg.ToIn - sg.FromIn
+			l := (sg.ToIn - sg.FromIn) * ls
 			var y, allow float64
 			if sg.Cantilever {
 				tip := sg.FromIn
 				if k > 0 {
 					tip = sg.ToIn
 				}
-				y, allow = c.r.Deflection(tip), 2*l/limit
+				y, allow = c.r.Deflection(tip)*ys, 2*l/limit
 			} else {
 				y, _ = c.r.MaxDeflection(sg.FromIn, sg.ToIn)
+				y *= ys
 				allow = l / limit
 			}
 			if ratio := math.Abs(y) / allow; ratio > worst.ratio {

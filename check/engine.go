@@ -42,6 +42,7 @@ type engine struct {
 	lps      []loadPiece   // the model's load pieces: one per segment unless general
 	pls      []pointLd     // point loads
 	general  bool          // load pieces or point loads: solved with beam.SolveLoads
+	cosT     float64       // cosine of the rafter slope (1 flat)
 
 	cases []strengthCase
 	mMax  float64     // largest |M| of any case, for "is this edge in compression" tolerances
@@ -192,6 +193,7 @@ func (e *engine) model() {
 			e.spanSegs = append(e.spanSegs, i)
 		}
 	}
+	e.cosT = 12 / math.Hypot(12, e.m.PitchRise12)
 	e.buildLoads()
 }
 

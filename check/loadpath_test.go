@@ -177,3 +177,34 @@ func TestOneZonePieceMatchesUniform(t *testing.T) {
 		}
 	}
 }
+
+// TestSlopedRafter: a DF-L No.2 2x8 rafter at 6 in 12, 144 in plan span,
+// 16 in on centre; D 10 psf on slope (11.18 psf on plan, 10 / cos), Lr 20
+// psf on plan, W up 30 psf normal to the roof. Hand calculation (statics):
+//
+//	cos = 12 / sqrt(12^2 + 6^2) = 0.89443; sloped span 144 / cos = 161.0 in
+//	Lr deflection on plan 5 w L^4 / (384 E I) with w = 20 (16/144), then
+//	  / cos^2 (perpendicular to the rafter), against 161.0 / 240
+//	0.6D + 0.6W: w = 0.6 (30 / cos^2) - 0.6 (11.18) psf = 22.5 - 6.708 psf,
+//	  M = w (16/144) 144^2 / 8 on plan
+//	bottom edge unbraced over the sloped length: lu = 161.0 in
+func TestSlopedRafter(t *testing.T) {
+	L := 144.0
+	cos := 12 / math.Sqrt(144+36)
+	m := roofJoist(L)
+	m.PitchRise12 = 6
+	m.Loads = AreaLoads{DeadPsf: 10 / cos, RoofLivePsf: 20, WindUpPsf: 30}
+	r := CheckWithRows(m, DefaultSettings(), 0)
+	ei := 1.6e6 * 1.5 * 7.25 * 7.25 * 7.25 / 12
+	live := find(t, r, KindDeflectionLive)
+	expectNear(t, "live deflection", live.Actual, 5*20*16/144.0*math.Pow(L, 4)/(384*ei)/(cos*cos), 1e-9, 1e-9, "statics: perpendicular deflection of a sloped rafter")
+	expectNear(t, "allowed", live.Allowable, L/cos/240, 1e-12, 0, "IBC 2018 Table 1604.3, sloped length / 240")
+	bot := find(t, r, KindBendingBottom)
+	w := (0.6*30/(cos*cos) - 0.6*10/cos) * 16 / 144
+	expectNear(t, "M under 0.6D+0.6W", traceValue(t, bot, "M"), w*L*L/8, 1e-9, 1e-9, "statics, written out")
+	expectNear(t, "lu", traceValue(t, bot, "lu"), L/cos, 1e-9, 1e-9, "sloped length between bearings")
+	// Flat, the same joist has the plan values.
+	m.PitchRise12 = 0
+	r0 := CheckWithRows(m, DefaultSettings(), 0)
+	expectNear(t, "flat lu", traceValue(t, find(t, r0, KindBendingBottom), "lu"), L, 1e-9, 0, "plan length")
+}

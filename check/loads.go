@@ -119,10 +119,10 @@ func (e *engine) buildLoads() {
 	m := &e.m
 	e.mps = e.mps[:0]
 	if len(m.LoadPieces) == 0 {
-		e.mps = append(e.mps, memberPiece{from: 0, to: m.LengthIn, lw: lineLoadsOf(m.Loads, m.TribIn)})
+		e.mps = append(e.mps, memberPiece{from: 0, to: m.LengthIn, lw: e.slopeWind(lineLoadsOf(m.Loads, m.TribIn))})
 	} else {
 		for _, p := range m.LoadPieces {
-			e.mps = append(e.mps, memberPiece{from: p.FromIn, to: p.ToIn, zone: p.Zone, lw: lineLoadsOf(p.Loads, m.TribIn)})
+			e.mps = append(e.mps, memberPiece{from: p.FromIn, to: p.ToIn, zone: p.Zone, lw: e.slopeWind(lineLoadsOf(p.Loads, m.TribIn))})
 		}
 		// the first and last pieces reach the member ends exactly
 		e.mps[0].from = math.Min(e.mps[0].from, 0)
@@ -157,6 +157,20 @@ func (e *engine) buildLoads() {
 			}
 		}
 	}
+}
+
+// slopeWind converts the wind on a sloped rafter to the horizontal
+// projection the model uses: a pressure p normal to the roof, per sloped
+// area, bends the rafter as p L_s^2 / 8 = p L_h^2 / (8 cos^2); on the
+// projection it is p / cos^2 (statics; gravity loads on the projection
+// bend it as w L_h^2 / 8 already).
+func (e *engine) slopeWind(lw lineLoads) lineLoads {
+	if e.cosT < 1 {
+		k := 1 / (e.cosT * e.cosT)
+		lw.w[LoadW] *= k
+		lw.wUp *= k
+	}
+	return lw
 }
 
 // segAt returns the model segment holding analysis position x (the left

@@ -94,6 +94,14 @@ type Member struct {
 	BottomBracedContinuous bool    // ceiling fastened directly to the joists
 	BlockingAtIn           []float64
 	Repetitive             bool // Cr applies (NDS 2018 4.3.9 conditions met)
+	// PitchRise12 is the slope of a rafter drawn in plan, rise in 12 (0 =
+	// flat). Positions, spans and loads are on the horizontal projection,
+	// as the published rafter span tables take them (dead load on slope
+	// already converted by the caller); wind, acting normal to the roof,
+	// becomes w / cos^2 of the slope on the projection, the unbraced
+	// lengths and the deflection limits use the sloped length, and the
+	// deflection is taken perpendicular to the rafter.
+	PitchRise12 float64
 	// LongTermLimit is n of the NDS 2018 3.5.2 long-term deflection check
 	// (Kcr x the dead-load deflection + the short-term live-type deflection
 	// against L/n); 0 = reported, not checked.
@@ -189,6 +197,9 @@ func (m *Member) validate() error {
 				return fmt.Errorf("point load %d: load %v lb: want finite loads >= 0 (wind up is a magnitude)", i+1, v)
 			}
 		}
+	}
+	if !finite(m.PitchRise12) || m.PitchRise12 < 0 || m.PitchRise12 > 24 {
+		return fmt.Errorf("pitch %v in 12: want 0 (flat) to 24", m.PitchRise12)
 	}
 	if !finite(m.LongTermLimit) || m.LongTermLimit < 0 {
 		return fmt.Errorf("long-term deflection limit L/%v: want a finite value >= 0 (0 = not checked)", m.LongTermLimit)

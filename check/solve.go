@@ -65,7 +65,7 @@ func (e *engine) solveBlocking() (int, []BlockingStep, *edgeEval) {
 	}
 	maxSpan := 0.0
 	for _, k := range e.spanSegs {
-		maxSpan = math.Max(maxSpan, e.segs[k].ToIn-e.segs[k].FromIn)
+		maxSpan = math.Max(maxSpan, (e.segs[k].ToIn-e.segs[k].FromIn)/e.cosT)
 	}
 	for n := 1; maxSpan/float64(n+1) >= minBlockingLuIn; n++ {
 		ev, _ = e.bottomEdge(n)

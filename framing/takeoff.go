@@ -78,7 +78,7 @@ func BuildTakeoff(p *Plan, rows []BlockingRow) Takeoff {
 	hangers := map[string]int{}
 	for k := range p.Members {
 		m := &p.Members[k]
-		key := jk{m.Size, m.Species, m.Grade, OrderLengthFt(m.LengthIn)}
+		key := jk{m.Size, m.Species, m.Grade, OrderLengthFt(m.SlopedLengthIn())}
 		l := joists[key]
 		if l == nil {
 			l = &JoistLine{Size: m.Size, Species: m.Species, Grade: m.Grade, OrderLengthFt: key.ft,

@@ -56,6 +56,11 @@ type Member struct {
 
 	Size, Species, Grade string   // callout > by_layer > project default
 	Zones                []string // the zones loading the member, sorted
+	// SlopeFactor is the sloped length over the plan length of a rafter
+	// drawn in plan (1 / cos of the slope), set by the caller from the
+	// roof pitch; 0 or 1 for a flat member. The takeoff orders the sloped
+	// length.
+	SlopeFactor float64
 	// ZonePieces are the stretches of the member in each zone, from Start
 	// to End, when it crosses zone edges (nil when one zone loads all of
 	// it): each zone loads the member where it acts (DOMAIN.md "Loads").
@@ -77,6 +82,15 @@ type Member struct {
 	// callouts, no zone); it still counts as a neighbour for tribs.
 	Error    bool
 	Messages []string
+}
+
+// SlopedLengthIn returns the member's length along its slope: LengthIn
+// (drawn in plan) times SlopeFactor when that is set.
+func (m *Member) SlopedLengthIn() float64 {
+	if m.SlopeFactor > 1 {
+		return m.LengthIn * m.SlopeFactor
+	}
+	return m.LengthIn
 }
 
 // Spans returns the centre-to-centre distances between consecutive

@@ -182,6 +182,12 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 			plan.Members[k].Size = o.results[k].Size
 		}
 	}
+	// Rafters drawn in plan are ordered at their sloped length.
+	for k := range plan.Members {
+		if inputs[k].PitchRise12 > 0 {
+			plan.Members[k].SlopeFactor = math.Hypot(12, inputs[k].PitchRise12) / 12
+		}
+	}
 	framing.AssignMarks(plan)
 	for i := range o.rows {
 		o.rows[i].Size = plan.Members[plan.Runs[runIndex(plan, o.rows[i].Run)].Members[0]].Size
@@ -399,6 +405,15 @@ func checkInput(p *Project, plan *framing.Plan, k int) (cm check.Member, shift f
 	if p.Design.AddSelfWeight {
 		sw = selfWeightPsf(m.Size, cm.TribIn)
 	}
+	for _, z := range zs[1:] {
+		if z.PitchRise12 != zs[0].PitchRise12 {
+			msgs = append(msgs, fmt.Sprintf("the member crosses zones %s and %s, which have different pitches (%s and %s in 12): "+
+				"a rafter has one slope; draw the zone edge at the ridge or the member's end", zs[0].Name, z.Name,
+				fmtNum(zs[0].PitchRise12), fmtNum(z.PitchRise12)))
+			return cm, shift, msgs
+		}
+	}
+	cm.PitchRise12 = zs[0].PitchRise12
 	cm.Loads = zoneLoads(zs[0], sw)
 	if len(m.ZonePieces) > 1 {
 		// Each zone loads the member where it acts (DOMAIN.md "Loads"),
@@ -433,13 +448,26 @@ func checkInput(p *Project, plan *framing.Plan, k int) (cm check.Member, shift f
 	return cm, shift, msgs
 }
 
-// zoneLoads returns the area loads of zone z, with selfPsf (the joist's own
-// weight spread over its tributary width, or 0) added to the dead load and
-// to the dead load relied on against uplift.
+// zoneLoads returns the area loads of zone z on the horizontal projection,
+// with selfPsf (the joist's own weight spread over its tributary width, or
+// 0) added to the dead load and to the dead load relied on against uplift.
+// On a sloped roof a dead load given per sloped area (dead_on_slope) and
+// the member's own weight, which lies along the slope, are divided by cos
+// of the slope (statics: the sloped length over the plan length). Roof
+// live and snow loads are on the horizontal projection already (ASCE 7-16
+// 4.8, 7.1); wind stays normal to the roof and check converts it.
 func zoneLoads(z *Zone, selfPsf float64) check.AreaLoads {
-	return check.AreaLoads{DeadPsf: z.DeadPsf + selfPsf, LivePsf: z.LivePsf, RoofLivePsf: z.RoofLivePsf,
+	k := 1.0
+	if z.PitchRise12 > 0 {
+		k = math.Hypot(12, z.PitchRise12) / 12
+	}
+	d, ud := z.DeadPsf, z.UpliftDeadPsf
+	if z.DeadOnSlope {
+		d, ud = d*k, ud*k
+	}
+	return check.AreaLoads{DeadPsf: d + selfPsf*k, LivePsf: z.LivePsf, RoofLivePsf: z.RoofLivePsf,
 		SnowPsf: z.SnowPsf, WindDownPsf: z.WindDownPsf, WindUpPsf: z.WindUpPsf,
-		UpliftDeadPsf: z.UpliftDeadPsf + selfPsf, HasUpliftDead: z.HasUpliftDead}
+		UpliftDeadPsf: ud + selfPsf*k, HasUpliftDead: z.HasUpliftDead}
 }
 
 // repetitive reports whether plan member k qualifies for Cr (NDS 2018

@@ -177,6 +177,13 @@ type Zone struct {
 	// LongTermDeflectionLimit is the n of L/n for the NDS 2018 3.5.2
 	// long-term deflection; 0 (the default) means reported, not checked.
 	LongTermDeflectionLimit float64
+	// PitchRise12 is the roof slope, rise in 12 (0 flat): members drawn in
+	// plan are rafters on the horizontal projection.
+	PitchRise12 float64
+	// DeadOnSlope: dead_psf is per sloped area (the trade's usual way) and
+	// is converted to the horizontal projection (x 1/cos); false: it is
+	// per horizontal area already. Default true.
+	DeadOnSlope bool
 }
 
 // Sizing is the [sizing] table, used by `framecheck check --size`.
@@ -219,7 +226,7 @@ func defaultSupports() []Support {
 func defaultZone() Zone {
 	return Zone{
 		Name: "FLOOR", Use: "floor", DeadPsf: 12, LivePsf: 40,
-		Ceiling: "non-plaster", LiveDeflectionLimit: 360, TotalDeflectionLimit: 240,
+		Ceiling: "non-plaster", LiveDeflectionLimit: 360, TotalDeflectionLimit: 240, DeadOnSlope: true,
 	}
 }
 

@@ -2,6 +2,7 @@ package main
 
 import (
 	"errors"
+	"math"
 	"os"
 	"reflect"
 	"strings"
@@ -168,7 +169,7 @@ func TestDefaultProject(t *testing.T) {
 	}
 	// IBC 2018 Table 1604.3, floor members: L/360 live, L/240 total.
 	wantZone := Zone{Name: "FLOOR", Use: "floor", DeadPsf: 12, LivePsf: 40, Ceiling: "non-plaster",
-		LiveDeflectionLimit: 360, TotalDeflectionLimit: 240}
+		LiveDeflectionLimit: 360, TotalDeflectionLimit: 240, DeadOnSlope: true}
 	if len(p.Zones) != 1 || p.Zones[0] != wantZone || p.Loads.DefaultZone != "FLOOR" {
 		t.Errorf("zones %+v, default %q", p.Zones, p.Loads.DefaultZone)
 	}
@@ -396,5 +397,38 @@ func BenchmarkParseProject(b *testing.B) {
 		if _, err := ParseProject("full.toml", data); err != nil {
 			b.Fatal(err)
 		}
+	}
+}
+
+// TestZonePitch reads a roof pitch in the forms the trade writes it: a rise
+// in 12, "6:12", "6/12", or degrees (26.565 deg is 6 in 12: tan^-1(6/12),
+// trigonometry); anything else, or a pitch on a floor zone, is an error.
+func TestZonePitch(t *testing.T) {
+	for _, c := range []struct {
+		val  string
+		want float64
+		err  string
+	}{
+		{`6`, 6, ""}, {`"6:12"`, 6, ""}, {`"6/12"`, 6, ""}, {`"26.565deg"`, 6, ""}, {`0`, 0, ""},
+		{`"6:10"`, 0, "rise in 12"}, {`"steep"`, 0, "rise in 12"}, {`30`, 0, "rise in 12"}, {`-1`, 0, "rise in 12"},
+	} {
+		in := "[[zone]]\nname = \"R\"\nuse = \"roof\"\ndead_psf = 10\npitch = " + c.val + "\n"
+		p, err := ParseProject("p.toml", []byte(in))
+		if c.err != "" {
+			if err == nil || !strings.Contains(err.Error(), c.err) || !strings.Contains(err.Error(), "p.toml:5") {
+				t.Errorf("pitch = %s: error %v, want one at p.toml:5 saying %q", c.val, err, c.err)
+			}
+			continue
+		}
+		if err != nil {
+			t.Errorf("pitch = %s: %v", c.val, err)
+			continue
+		}
+		if math.Abs(p.Zones[0].PitchRise12-c.want) > 1e-3 {
+			t.Errorf("pitch = %s: %g in 12, want %g", c.val, p.Zones[0].PitchRise12, c.want)
+		}
+	}
+	if _, err := ParseProject("p.toml", []byte("[[zone]]\nname = \"F\"\nuse = \"floor\"\npitch = 4\n")); err == nil || !strings.Contains(err.Error(), "roof zone") {
+		t.Errorf("pitch on a floor zone: error %v, want one", err)
 	}
 }

@@ -2,8 +2,10 @@ package main
 
 import (
 	"fmt"
+	"math"
 	"os"
 	"path/filepath"
+	"strconv"
 	"strings"
 
 	"framecheck/check"
@@ -262,6 +264,16 @@ func (ld *loader) zones(root *table) {
 		} else {
 			ld.get(t, "uplift_dead_psf", "")
 		}
+		z.DeadOnSlope = true
+		ld.pitch(t, &z.PitchRise12)
+		if z.PitchRise12 > 0 && z.Use != "roof" {
+			ld.errorf(joinPath(t.path, "pitch"), "a pitch is for a roof zone; this zone's use is %q", z.Use)
+		}
+		if has(t, "dead_on_slope") {
+			ld.boolean(t, "dead_on_slope", &z.DeadOnSlope)
+		} else {
+			ld.get(t, "dead_on_slope", "")
+		}
 		if has(t, "long_term_deflection_limit") {
 			ld.num(t, "long_term_deflection_limit", "the n of L/n", &z.LongTermDeflectionLimit, deflectionLimit)
 		} else {
@@ -269,6 +281,49 @@ func (ld *loader) zones(root *table) {
 		}
 		ld.p.Zones = append(ld.p.Zones, z)
 	}
+}
+
+// pitch reads a roof slope: a number is the rise in 12 (6 for 6:12); a
+// string "6:12", "6/12" or "30deg" (degrees) is read as written.
+func (ld *loader) pitch(t *table, dst *float64) {
+	v, path, ok := ld.get(t, "pitch", "")
+	if !ok {
+		return
+	}
+	const want = "expected a rise in 12 such as 6, \"6:12\" or an angle such as \"26.57deg\", from 0 (flat) to 24 in 12"
+	var rise float64
+	switch x := v.(type) {
+	case int64:
+		rise = float64(x)
+	case float64:
+		rise = x
+	case string:
+		s := strings.ToLower(strings.TrimSpace(x))
+		var a, b float64
+		switch {
+		case strings.HasSuffix(s, "deg") || strings.HasSuffix(s, "°"):
+			n, err := strconv.ParseFloat(strings.TrimSpace(strings.TrimSuffix(strings.TrimSuffix(s, "deg"), "°")), 64)
+			if err != nil || n < 0 || n >= 90 {
+				ld.errorf(path, "%s, got %q", want, x)
+				return
+			}
+			rise = 12 * math.Tan(n*math.Pi/180)
+		default:
+			if _, err := fmt.Sscanf(strings.NewReplacer(":", " ", "/", " ").Replace(s), "%g %g", &a, &b); err != nil || b != 12 {
+				ld.errorf(path, "%s, got %q", want, x)
+				return
+			}
+			rise = a
+		}
+	default:
+		ld.errorf(path, "%s, got %s", want, describe(v))
+		return
+	}
+	if !(rise >= 0 && rise <= 24) {
+		ld.errorf(path, "%s, got %s", want, fmtNum(rise))
+		return
+	}
+	*dst = rise
 }
 
 // limit reads a deflection limit whose default comes from use and ceiling.

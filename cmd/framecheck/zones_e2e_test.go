@@ -2,6 +2,7 @@ package main
 
 import (
 	"bytes"
+	"math"
 	"os"
 	"path/filepath"
 	"strings"
@@ -96,4 +97,52 @@ func TestTwoZoneRoof_LoadsWhereTheyAct(t *testing.T) {
 		assert.Contains(t, msgs, "FIELD from 170.0 to 192.0 in", "%s: FRM206 names the zones and their lengths", m.ID)
 	}
 	assert.Equal(t, 5, interior, "five interior joists")
+}
+
+// TestSlopedRoof_TakeoffAndLoads: the same roof at 8 in 12 (cos = 12 /
+// sqrt(12^2 + 8^2) = 0.8321): each 192 in plan joist is 230.8 in along
+// the slope, so it is ordered at 20 ft, not 16 ft (DOMAIN.md "Takeoff",
+// next even foot); the dead load of 8 psf on slope is 9.615 psf on plan
+// (x 1/cos), so D + Lr on an interior joist (trib 16 in) gives, on the edge
+// zone, w = (9.615 + 20) 16/144 = 3.2906 lb/in (statics written out).
+func TestSlopedRoof_TakeoffAndLoads(t *testing.T) {
+	dir := t.TempDir()
+	dxf, toml := twoZoneRoof(t, dir)
+	data, err := os.ReadFile(toml)
+	require.NoError(t, err)
+	one := strings.Replace(string(data), "wind_up_psf = 60\n", "wind_up_psf = 60\npitch = 8\n", 1)
+	one = strings.Replace(one, "wind_up_psf = 50\n", "wind_up_psf = 50\npitch = \"8:12\"\n", 1)
+	require.NoError(t, os.WriteFile(toml, []byte(one), 0o644))
+	out := filepath.Join(dir, "out")
+	var stdout, stderr bytes.Buffer
+	code := run([]string{"check", dxf, "-p", toml, "-o", out}, &stdout, &stderr)
+	require.NotEqual(t, exitUsage, code, "stderr:\n%s", stderr.String())
+	r, err := export.ReadJSON(filepath.Join(out, resultsName))
+	require.NoError(t, err)
+	require.NotEmpty(t, r.Takeoff.Joists)
+	for _, l := range r.Takeoff.Joists {
+		assert.Equal(t, 20.0, float64(l.OrderLengthFt), "230.8 in along the slope is ordered at 20 ft")
+	}
+	cos := 12 / math.Hypot(12, 8)
+	g1, g2 := (8/cos+20)*16/144, (25/cos+20)*16/144
+	rg := (g1*170*(192-85) + g2*22*(192-181)) / 192
+	fb := rg * rg / (2 * g1) / (1.5 * 7.25 * 7.25 / 6)
+	for i := range r.Members {
+		if m := &r.Members[i]; m.TribIn == 16 {
+			c := checkOf(t, m, "bending-top")
+			assert.InDelta(t, fb, c.Actual, fb*1e-6, "%s top-edge fb under D+Lr (statics in the test comment)", m.ID)
+		}
+	}
+	// Different pitches across one member are an error on it.
+	bad := strings.Replace(one, "pitch = \"8:12\"", "pitch = 4", 1)
+	require.NoError(t, os.WriteFile(toml, []byte(bad), 0o644))
+	stdout.Reset()
+	stderr.Reset()
+	code = run([]string{"check", dxf, "-p", toml, "-o", filepath.Join(dir, "out2")}, &stdout, &stderr)
+	assert.Equal(t, exitFail, code)
+	r2, err := export.ReadJSON(filepath.Join(dir, "out2", resultsName))
+	require.NoError(t, err)
+	for _, m := range r2.Members {
+		assert.Equal(t, "error", m.Status, "%s crosses zones of different pitch", m.ID)
+	}
 }
