@@ -10,14 +10,15 @@ import (
 // combination cases: the adjustment factors, the size, the size-factor
 // rule and the temperature class.
 type factorKey struct {
-	cm   WetServiceFactors
-	ct   TemperatureFactors
-	cf   SizeFactors
-	ci   IncisingFactors
-	cr   float64
-	sec  string
-	rule string
-	temp string
+	cm    WetServiceFactors
+	ct    TemperatureFactors
+	cf    SizeFactors
+	ci    IncisingFactors
+	cr    float64
+	sec   string
+	rule  string
+	temp  string
+	pitch float64
 }
 
 type factorEntry struct {

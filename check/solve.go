@@ -163,7 +163,7 @@ func (e *engine) baseResult() Result {
 // again (see factorCache); callers must not modify it.
 func (e *engine) factorTrace() []TraceItem {
 	key := factorKey{cm: e.cm, ct: e.ct, cf: e.cf, ci: e.ci, cr: e.cr,
-		sec: e.sec.Name, rule: e.dv.SizeFactor, temp: tempName(e.s.Temperature)}
+		sec: e.sec.Name, rule: e.dv.SizeFactor, temp: tempName(e.s.Temperature), pitch: e.m.PitchRise12}
 	if items, ok := factorCache.lookup(key, e.comboCDs); ok {
 		return items
 	}
@@ -190,6 +190,12 @@ func (e *engine) buildFactorTrace() []TraceItem {
 	t.add("Ci(Fb, Fv)", e.ci.Fb, "", "incising", Subst{}, "NDS 2018 Table 4.3.8")
 	t.add("Ci(E)", e.ci.E, "", "incising", Subst{}, "NDS 2018 Table 4.3.8")
 	t.add("Cr", e.cr, "", "repetitive member", Subst{}, "NDS 2018 4.3.9")
+	if e.cosT < 1 {
+		t.add("cos(slope)", e.cosT, "", "rafter at "+fmtG(e.m.PitchRise12)+" in 12, drawn in plan: spans, dead, live and snow "+
+			"loads on the horizontal projection; wind normal to the roof x 1/cos^2; unbraced lengths and deflection "+
+			"limits on the sloped length (plan / cos); deflection perpendicular to the rafter (plan / cos^2)",
+			t.f("12 / sqrt(144 + %s^2)", e.m.PitchRise12), "statics")
+	}
 	return t.items
 }
 

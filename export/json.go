@@ -137,6 +137,11 @@ func membersFinite(ms []Member) bool {
 				return false
 			}
 		}
+		for _, z := range m.ZonePieces {
+			if !fin(z.FromIn, z.ToIn) {
+				return false
+			}
+		}
 		if len(m.Checks) > 0 && !seenChecks[checksID{&m.Checks[0], len(m.Checks)}] {
 			for j := range m.Checks {
 				c := &m.Checks[j]

@@ -54,6 +54,23 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 	w.str("species", m.Species)
 	w.str("grade", m.Grade)
 	w.str("zone", m.Zone)
+	if len(m.ZonePieces) > 0 {
+		w.key("zone_pieces")
+		w.b = append(w.b, '[')
+		for i, z := range m.ZonePieces {
+			if i > 0 {
+				w.b = append(w.b, ',')
+			}
+			w.b = append(w.b, '{')
+			w.first = true
+			w.str("zone", z.Zone)
+			w.num("from_in", z.FromIn)
+			w.num("to_in", z.ToIn)
+			w.b = append(w.b, '}')
+		}
+		w.b = append(w.b, ']')
+		w.first = false
+	}
 	if m.Calculation != "" {
 		w.str("calculation", m.Calculation)
 	}

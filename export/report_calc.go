@@ -94,6 +94,30 @@ func buildCalcs(r *Results) []markCalc {
 	return calcs
 }
 
+// zoneAreaLoads returns w = p x trib for each load of zone z, the load
+// names followed by where (a zone's stretch of the member, or "").
+func zoneAreaLoads(z *Zone, tribIn float64, where string) []areaLoad {
+	var out []areaLoad
+	for _, l := range []struct {
+		name string
+		psf  float64
+	}{{"D", z.DeadPsf}, {"L", z.LivePsf}, {"Lr", z.RoofLivePsf}, {"S", z.SnowPsf}, {"W down", z.WindDownPsf}, {"W up", z.WindUpPsf}} {
+		if l.psf == 0 {
+			continue
+		}
+		if l.name == "D" && z.DeadOnSlope && z.PitchRise12 > 0 {
+			// dead load per sloped area, on the plan: x 1/cos of the slope
+			k := math.Hypot(12, z.PitchRise12) / 12
+			out = append(out, areaLoad{Load: l.name + where + ", on slope, to plan / cos", Psf: fmtNum(l.psf * k),
+				Subst: fmtNum(l.psf) + "(" + fmtNum(k) + ")(" + fmtNum(tribIn) + " / 12)", WPlf: fmtNum(l.psf * k * tribIn / 12)})
+			continue
+		}
+		out = append(out, areaLoad{Load: l.name + where, Psf: fmtNum(l.psf),
+			Subst: fmtNum(l.psf) + "(" + fmtNum(tribIn) + " / 12)", WPlf: fmtNum(l.psf * tribIn / 12)})
+	}
+	return out
+}
+
 func fillCalc(c *markCalc, r *Results, m *Member) {
 	c.Member = m.ID
 	c.Messages = m.Messages
@@ -140,18 +164,17 @@ func fillCalc(c *markCalc, r *Results, m *Member) {
 		}
 		c.Factors = append(c.Factors, newTraceLine(f))
 	}
-	if zone != nil {
-		tribFt := m.TribIn / 12
-		for _, l := range []struct {
-			name string
-			psf  float64
-		}{{"D", zone.DeadPsf}, {"L", zone.LivePsf}, {"Lr", zone.RoofLivePsf}, {"S", zone.SnowPsf}, {"W down", zone.WindDownPsf}, {"W up", zone.WindUpPsf}} {
-			if l.psf == 0 {
-				continue
+	// A member crossing zone edges: each zone's loads where it acts.
+	for _, zp := range m.ZonePieces {
+		for i := range r.Assumptions.Zones {
+			if z := &r.Assumptions.Zones[i]; z.Name == zp.Zone {
+				c.AreaLoads = append(c.AreaLoads, zoneAreaLoads(z, m.TribIn,
+					" ("+z.Name+", "+fmtNum(zp.FromIn)+" to "+fmtNum(zp.ToIn)+" in from the start)")...)
 			}
-			c.AreaLoads = append(c.AreaLoads, areaLoad{Load: l.name, Psf: fmtNum(l.psf),
-				Subst: fmtNum(l.psf) + "(" + fmtNum(m.TribIn) + " / 12)", WPlf: fmtNum(l.psf * tribFt)})
 		}
+	}
+	if zone != nil {
+		c.AreaLoads = append(c.AreaLoads, zoneAreaLoads(zone, m.TribIn, "")...)
 		combos := r.Assumptions.Combinations
 		if len(combos) == 0 {
 			combos = defaultCombos

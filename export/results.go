@@ -47,6 +47,13 @@ type Results struct {
 	Assumptions  Assumptions   `json:"assumptions"`
 }
 
+// ZonePiece is a stretch of a member in one load zone.
+type ZonePiece struct {
+	Zone   string  `json:"zone"`
+	FromIn float64 `json:"from_in"`
+	ToIn   float64 `json:"to_in"`
+}
+
 // Member is one joist with its geometry, checks and outcome.
 type Member struct {
 	ID     string `json:"id"`
@@ -74,6 +81,9 @@ type Member struct {
 	Species string `json:"species"`
 	Grade   string `json:"grade"`
 	Zone    string `json:"zone"`
+	// ZonePieces, for a member crossing load-zone edges, say where each
+	// zone loads it (along the member from Start); absent otherwise.
+	ZonePieces []ZonePiece `json:"zone_pieces,omitempty"`
 
 	// Calculation names the entry of results.json's "calculations" that
 	// holds this member's check traces and factors; WriteJSON sets it.
@@ -236,6 +246,16 @@ type Zone struct {
 	Ceiling              string  `json:"ceiling"`
 	LiveDeflectionLimit  float64 `json:"live_deflection_limit"`  // L/n; 0 = not checked
 	TotalDeflectionLimit float64 `json:"total_deflection_limit"` // L/n; 0 = not checked
+	// LongTermDeflectionLimit is the n of the NDS 2018 3.5.2 long-term
+	// check; 0 = reported, not checked.
+	LongTermDeflectionLimit float64 `json:"long_term_deflection_limit"`
+	// UpliftDeadPsf is the dead load relied on against uplift, when the
+	// project gives one other than dead_psf.
+	UpliftDeadPsf *float64 `json:"uplift_dead_psf,omitempty"`
+	// PitchRise12 is the roof slope, rise in 12 (0 flat); DeadOnSlope says
+	// dead_psf is per sloped area (converted to the plan by 1/cos).
+	PitchRise12 float64 `json:"pitch,omitempty"`
+	DeadOnSlope bool    `json:"dead_on_slope,omitempty"`
 }
 
 // DesignValue is one reference design value or factor used, with its source.

@@ -89,6 +89,9 @@ func (cv *resultConverter) member(m *framing.Member, res *check.Result, toInch f
 	for _, b := range m.Bearings {
 		em.BearingsAtIn = append(em.BearingsAtIn, b.AtIn)
 	}
+	for _, z := range m.ZonePieces {
+		em.ZonePieces = append(em.ZonePieces, export.ZonePiece{Zone: z.Zone, FromIn: z.FromIn, ToIn: z.ToIn})
+	}
 	if len(res.Checks) > 0 {
 		key := &res.Checks[0]
 		if _, ok := cv.checks[key]; !ok {
@@ -289,7 +292,12 @@ func assumptions(o *outcome) export.Assumptions {
 	for _, z := range p.Zones {
 		a.Zones = append(a.Zones, export.Zone{Name: z.Name, Use: z.Use, DeadPsf: z.DeadPsf, LivePsf: z.LivePsf,
 			RoofLivePsf: z.RoofLivePsf, SnowPsf: z.SnowPsf, WindDownPsf: z.WindDownPsf, WindUpPsf: z.WindUpPsf,
-			Ceiling: z.Ceiling, LiveDeflectionLimit: z.LiveDeflectionLimit, TotalDeflectionLimit: z.TotalDeflectionLimit})
+			Ceiling: z.Ceiling, LiveDeflectionLimit: z.LiveDeflectionLimit, TotalDeflectionLimit: z.TotalDeflectionLimit,
+			LongTermDeflectionLimit: z.LongTermDeflectionLimit, PitchRise12: z.PitchRise12, DeadOnSlope: z.DeadOnSlope && z.PitchRise12 > 0})
+		if z.HasUpliftDead {
+			v := z.UpliftDeadPsf
+			a.Zones[len(a.Zones)-1].UpliftDeadPsf = &v
+		}
 	}
 	seen := map[string]bool{}
 	for k := range o.results {
