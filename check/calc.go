@@ -163,27 +163,18 @@ func (r *calcRecord) shearTrace() []TraceItem {
 	case atDHanger:
 		note = "shear_at_d not applied at bearing " + bn + ": the member hangs from the support's face (hanger or ledger), not resting on it"
 	}
-	n := 5
+	t := newTracer(5)
+	ref := refAnalysis
 	if note != "" {
-		n++
+		where += "; " + note
+		ref += "; NDS 2018 3.4.3.1(a)"
 	}
-	t := newTracer(n)
-	if note != "" {
-		t.add("V at d", float64(btoi(s.atD == atDApplied)), "", note, Subst{}, "NDS 2018 3.4.3.1(a)")
-	}
-	t.add("V", s.vLb, "lb", "largest shear "+where, Subst{}, refAnalysis)
+	t.add("V", s.vLb, "lb", "largest shear "+where, Subst{}, ref)
 	t.add("A", x.aIn2, "in^2", "b d", t.f("%s(%s)", x.bIn, x.dIn), "NDS 2018 Supplement Table 1B")
 	t.add("fv", fv, "psi", "1.5 V / A", t.f("1.5(%s) / %s", s.vLb, x.aIn2), "NDS 2018 Eq. 3.4-2")
 	t.add("Fv'", s.fvAdjPsi, "psi", "Fv CD CM Ct Ci", t.f("%s(%s)(%s)(%s)(%s)", x.fvPsi, s.cd, x.cm.Fv, x.ct.Fv, x.ci.Fv), "NDS 2018 Table 4.3.1")
 	t.add("fv/Fv'", fv/s.fvAdjPsi, "", "fv / Fv'", t.f("%s / %s", fv, s.fvAdjPsi), "NDS 2018 3.4.1")
 	return t.items
-}
-
-func btoi(b bool) int {
-	if b {
-		return 1
-	}
-	return 0
 }
 
 // bearingTrace writes the bearing calculation (NDS 2018 3.10).

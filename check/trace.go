@@ -8,7 +8,7 @@ import (
 
 // refAnalysis is the Ref of trace values taken from the structural
 // analysis (package check/beam) under the check's governing case.
-const refAnalysis = "structural analysis (check/beam), exact for uniform loads"
+const refAnalysis = "beam analysis, three-moment equation and statics (exact for uniform, partial and point loads)"
 
 // Subst is a substitution line held as its format and numbers: each %s of
 // Format is the next of Nums, printed as appendNum does, so that the text
