@@ -66,6 +66,7 @@ type calcRecord struct {
 	shear shearRec
 	defl  [3]deflRec // live, total, long-term
 	bear  bearRec
+	col   colRec // posts
 }
 
 // newCalcRecord starts the record of the result e is building.
@@ -99,6 +100,8 @@ func (c CheckResult) Trace() []TraceItem {
 		return r.deflTrace(&r.defl[1])
 	case KindDeflectionLongTerm:
 		return r.deflTrace(&r.defl[2])
+	case KindCompression, KindBearingParallel:
+		return r.columnTrace(c.Kind)
 	case KindBearing:
 		return r.bearingTrace()
 	}

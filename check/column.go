@@ -1,0 +1,253 @@
+package check
+
+import (
+	"fmt"
+	"math"
+)
+
+// KindCompression is the column check of a post: fc = P / A against
+// Fc' = Fc* CP (NDS 2018 3.6.3, 3.7.1). KindBearingParallel is the bearing
+// of the member above on the post's end grain: fc = P / A against Fc*
+// (NDS 2018 3.10.1).
+const (
+	KindCompression     = "compression"
+	KindBearingParallel = "bearing-end-grain"
+)
+
+// PostLoads are the axial loads on a post by load type, lb, downward
+// positive; WindUpLb is the magnitude of the wind load away from the post
+// (uplift), UpliftDeadLb the dead load relied on against it (used when
+// HasUpliftDead).
+type PostLoads struct {
+	DeadLb, LiveLb, RoofLiveLb, SnowLb, WindDownLb, WindUpLb float64
+	UpliftDeadLb                                             float64
+	HasUpliftDead                                            bool
+}
+
+// Post is a solid sawn post (a column) with its loads: axial only, braced
+// at both ends, buckling about its weaker axis over KeHeight.
+type Post struct {
+	ID, Size, Species, Grade string
+	HeightIn                 float64 // unbraced length l
+	Ke                       float64 // buckling length coefficient, NDS 2018 Appendix G (1.0 pinned-pinned); 0 = 1.0
+	Loads                    PostLoads
+}
+
+// PostCase is one combination's axial load on a post.
+type PostCase struct {
+	Name string
+	CD   float64
+	PLb  float64 // downward positive; negative is net uplift (tension)
+}
+
+// PostResult is the outcome of checking one post.
+type PostResult struct {
+	ID         string
+	Checks     []CheckResult // compression, bearing on the end grain
+	Cases      []PostCase    // every combination's load, for the connectors and the foundation
+	DownLb     float64       // largest downward load and its case
+	DownCombo  string
+	UpLb       float64 // largest net uplift (magnitude), 0 when none
+	UpCombo    string
+	LeOverD    float64 // slenderness le/d about the weaker axis
+	Status     string
+	Messages   []string
+	MaxRatio   float64
+	Governing  string
+	DesignVals DesignValues
+}
+
+// CheckPost checks post p under the combinations of s (ASCE 7-16 2.4.1 by
+// default) as a solid sawn column (NDS 2018 3.7.1):
+//
+//	Fc* = Fc CD CM Ct CF Ci
+//	FcE = 0.822 Emin' / (le/d)^2, le = Ke l, d the smaller dimension
+//	CP  = (1 + FcE/Fc*)/(2c) - sqrt([(1 + FcE/Fc*)/(2c)]^2 - (FcE/Fc*)/c), c = 0.8
+//	fc = P / A <= Fc' = Fc* CP, with le/d <= 50 (NDS 2018 3.7.1.4)
+//
+// and the bearing of the member above on its end grain, fc = P / A <= Fc*
+// (NDS 2018 3.10.1). A post whose size or material is unknown is an error.
+func CheckPost(p Post, s Settings) PostResult {
+	r := PostResult{ID: p.ID, Status: StatusError}
+	sec, err := ParseSize(p.Size)
+	if err != nil {
+		r.Messages = append(r.Messages, err.Error())
+		return r
+	}
+	mats := s.Materials
+	if mats == nil {
+		mats = BuiltinMaterials()
+	}
+	dv, err := mats.Lookup(p.Species, p.Grade, p.Size)
+	if err != nil {
+		r.Messages = append(r.Messages, err.Error())
+		return r
+	}
+	r.DesignVals = dv
+	if !(p.HeightIn > 0) || math.IsInf(p.HeightIn, 0) {
+		r.Messages = append(r.Messages, fmt.Sprintf("height %v in: want a finite height > 0", p.HeightIn))
+		return r
+	}
+	ke := p.Ke
+	if ke == 0 {
+		ke = 1
+	}
+	if !(ke > 0) || ke > 10 {
+		r.Messages = append(r.Messages, fmt.Sprintf("Ke %v: want a buckling length coefficient above 0 (NDS 2018 Appendix G)", ke))
+		return r
+	}
+	cf := SizeFactor(dv, sec)
+	cfFc := cf.Fc
+	if dv.SizeFactor == SizeFactor4B {
+		cfFc = 1
+	}
+	cm := WetServiceFactor(s.WetService, dv, cf.Fb, cfFc)
+	ct, _ := TemperatureFactor(s.Temperature, s.WetService)
+	ci := IncisingFactor(s.Incised) // Ci of Fc is that of Fb, 0.80 (NDS 2018 Table 4.3.8)
+	d := math.Min(sec.BIn, sec.DIn)
+	area := sec.BIn * sec.DIn
+	le := ke * p.HeightIn
+	r.LeOverD = le / d
+	// CM, Ct and Ci for Fc and for E: NDS 2018 Table 4.3.1. Ct of Fc is the
+	// one of Fb, Fv and Fc_perp in Table 2.3.3 (all but E and Emin).
+	eminAdj := dv.EminPsi * cm.E * ct.E * ci.E
+	fcE := 0.822 * eminAdj / (r.LeOverD * r.LeOverD)
+	const c = 0.8 // sawn lumber, NDS 2018 3.7.1.5
+
+	combos := s.Combos
+	if combos == nil {
+		combos = defaultCombos
+	}
+	l := p.Loads
+	loads := [numLoadTypes]float64{l.DeadLb, l.LiveLb, l.RoofLiveLb, l.SnowLb, l.WindDownLb}
+	var present [numLoadTypes]bool
+	for t := range loads {
+		present[t] = loads[t] > 0
+	}
+	present[LoadD] = true
+	best := -1.0
+	var bestComp, bestBear CheckResult
+	for _, cb := range combos {
+		for _, f := range cb.Cases {
+			dirs := []float64{0}
+			if f[LoadW] > 0 {
+				dirs = dirs[:0]
+				if l.WindDownLb > 0 {
+					dirs = append(dirs, 1)
+				}
+				if l.WindUpLb > 0 {
+					dirs = append(dirs, -1)
+				}
+			}
+			for _, dir := range dirs {
+				pr := present
+				pr[LoadW] = dir != 0
+				hasVar, varPresent := false, false
+				for t := LoadL; t < numLoadTypes; t++ {
+					if f[t] > 0 {
+						hasVar = true
+						varPresent = varPresent || pr[t]
+					}
+				}
+				if hasVar && !varPresent {
+					continue
+				}
+				dead := l.DeadLb
+				w := 0.0
+				if dir > 0 {
+					w = l.WindDownLb
+				} else if dir < 0 {
+					w = -l.WindUpLb
+					if l.HasUpliftDead {
+						dead = l.UpliftDeadLb
+					}
+				}
+				P := f[LoadD]*dead + f[LoadL]*l.LiveLb + f[LoadLr]*l.RoofLiveLb + f[LoadS]*l.SnowLb + f[LoadW]*w
+				cd := ComboDurationFactor(f, pr)
+				name := formatCaseName(f, dir, pr)
+				dup := false
+				for _, pc := range r.Cases {
+					if pc.Name == name && pc.PLb == P {
+						dup = true
+					}
+				}
+				if dup {
+					continue
+				}
+				r.Cases = append(r.Cases, PostCase{Name: name, CD: cd, PLb: P})
+				if P > r.DownLb {
+					r.DownLb, r.DownCombo = P, name
+				}
+				if -P > r.UpLb {
+					r.UpLb, r.UpCombo = -P, name
+				}
+				if P <= 0 {
+					continue
+				}
+				fcStar := dv.FcPsi * cd * cm.Fc * ct.Fb * cfFc * ci.Fb
+				a := fcE / fcStar
+				k := (1 + a) / (2 * c)
+				cp := k - math.Sqrt(k*k-a/c)
+				fc := P / area
+				ratio := fc / (fcStar * cp)
+				if ratio > best {
+					best = ratio
+					bestComp = CheckResult{Kind: KindCompression, Combo: name, Actual: fc, Allowable: fcStar * cp, Unit: "psi", Ratio: ratio,
+						calc: &calcRecord{col: colRec{pLb: P, aIn2: area, leIn: le, dIn: d, ke: ke, hIn: p.HeightIn, cd: cd,
+							fcPsi: dv.FcPsi, cm: cm.Fc, ct: ct.Fb, cf: cfFc, ci: ci.Fb, fcStar: fcStar, eminPsi: dv.EminPsi,
+							eminAdj: eminAdj, fcE: fcE, cp: cp, c: c}}}
+					bestBear = CheckResult{Kind: KindBearingParallel, Combo: name, Actual: fc, Allowable: fcStar, Unit: "psi", Ratio: fc / fcStar,
+						calc: bestComp.calc}
+				}
+			}
+		}
+	}
+	r.Status = StatusPass
+	if best >= 0 {
+		r.Checks = []CheckResult{bestComp, bestBear}
+	}
+	for _, ch := range r.Checks {
+		if ch.Ratio > r.MaxRatio || r.Governing == "" {
+			r.MaxRatio, r.Governing = ch.Ratio, ch.Kind
+		}
+		if ch.Ratio > 1+ratioTol {
+			r.Status = StatusFail
+			r.Messages = append(r.Messages, fmt.Sprintf("%s: ratio %.3f > 1.000 (%s)", ch.Kind, ch.Ratio, ch.Combo))
+		}
+	}
+	if r.LeOverD > 50 {
+		r.Status = StatusFail
+		r.Messages = append(r.Messages, fmt.Sprintf("le/d = %.1f > 50: not permitted (NDS 2018 3.7.1.4)", r.LeOverD))
+	}
+	return r
+}
+
+// colRec holds the numbers of a post's governing compression case.
+type colRec struct {
+	pLb, aIn2, leIn, dIn, ke, hIn, cd float64
+	fcPsi, cm, ct, cf, ci, fcStar     float64
+	eminPsi, eminAdj, fcE, cp, c      float64
+}
+
+// columnTrace writes a post's compression calculation (NDS 2018 3.7.1).
+func (r *calcRecord) columnTrace(kind string) []TraceItem {
+	x := &r.col
+	t := newTracer(10)
+	fc := x.pLb / x.aIn2
+	t.add("P", x.pLb, "lb", "axial load, governing case", Subst{}, "statics: the reactions of the members above")
+	t.add("A", x.aIn2, "in^2", "b d", Subst{}, "NDS 2018 Supplement Table 1B")
+	t.add("fc", fc, "psi", "P / A", t.f("%s / %s", x.pLb, x.aIn2), "NDS 2018 3.6.3")
+	t.add("Fc*", x.fcStar, "psi", "Fc CD CM Ct CF Ci", t.f("%s(%s)(%s)(%s)(%s)(%s)", x.fcPsi, x.cd, x.cm, x.ct, x.cf, x.ci), "NDS 2018 Table 4.3.1")
+	if kind == KindBearingParallel {
+		t.add("fc/Fc*", fc/x.fcStar, "", "bearing on the end grain", t.f("%s / %s", fc, x.fcStar), "NDS 2018 3.10.1")
+		return t.items
+	}
+	t.add("le", x.leIn, "in", "Ke l", t.f("%s(%s)", x.ke, x.hIn), "NDS 2018 3.7.1.2, Appendix G")
+	t.add("le/d", x.leIn/x.dIn, "", "le / d, weaker axis (at most 50)", t.f("%s / %s", x.leIn, x.dIn), "NDS 2018 3.7.1.4")
+	t.add("FcE", x.fcE, "psi", "0.822 Emin' / (le/d)^2", t.f("0.822(%s) / %s^2", x.eminAdj, x.leIn/x.dIn), "NDS 2018 3.7.1.5")
+	t.add("CP", x.cp, "", "(1 + a)/(2c) - sqrt(((1 + a)/(2c))^2 - a/c), a = FcE/Fc*, c = 0.8",
+		t.f("a = %s / %s", x.fcE, x.fcStar), "NDS 2018 Eq. 3.7-1")
+	t.add("Fc'", x.fcStar*x.cp, "psi", "Fc* CP", t.f("%s(%s)", x.fcStar, x.cp), "NDS 2018 3.7.1")
+	t.add("fc/Fc'", fc/(x.fcStar*x.cp), "", "fc / Fc'", t.f("%s / %s", fc, x.fcStar*x.cp), "NDS 2018 3.6.3")
+	return t.items
+}
