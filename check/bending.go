@@ -80,6 +80,31 @@ func (e *engine) braces(rowsIn []float64) []float64 {
 	return out
 }
 
+// topIntervals returns the top edge's stretches: braced continuously by
+// the sheathing (Settings.TopEdgeBraced), or, on a member whose top edge
+// is held only at points (Member.TopBracedAtPoints), between the bearings
+// and those points; otherwise between the bracing points pts of both
+// edges.
+func (e *engine) topIntervals(pts []float64) []interval {
+	if !e.m.TopBracedAtPoints {
+		return e.intervals(e.s.TopEdgeBraced, pts)
+	}
+	own := append([]float64(nil), e.bm.SupportsAtIn...)
+	for _, x := range e.m.TopBracingAtIn {
+		if xa := x - e.x0; xa > 0 && xa < e.bm.LengthIn {
+			own = append(own, xa)
+		}
+	}
+	sort.Float64s(own)
+	out := own[:1]
+	for _, p := range own[1:] {
+		if p-out[len(out)-1] > 0.01 {
+			out = append(out, p)
+		}
+	}
+	return e.intervals(false, out)
+}
+
 // intervals cuts the model into the unbraced stretches of an edge braced
 // at pts (continuous true: one stretch held along its whole length).
 func (e *engine) intervals(continuous bool, pts []float64) []interval {

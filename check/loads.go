@@ -128,6 +128,12 @@ func (e *engine) buildLoads() {
 		e.mps[0].from = math.Min(e.mps[0].from, 0)
 		e.mps[len(e.mps)-1].to = math.Max(e.mps[len(e.mps)-1].to, m.LengthIn)
 	}
+	if m.SelfWeightPlf > 0 {
+		for i := range e.mps {
+			e.mps[i].lw.w[LoadD] += m.SelfWeightPlf / 12
+			e.mps[i].lw.wDUp += m.SelfWeightPlf / 12
+		}
+	}
 	e.pls = e.pls[:0]
 	for _, p := range m.PointLoads {
 		at := p.AtIn - e.x0

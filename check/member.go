@@ -89,7 +89,15 @@ type Member struct {
 	// cover the member from 0 to LengthIn without gaps or overlaps.
 	LoadPieces []LoadPiece
 	// PointLoads are concentrated loads on the member.
-	PointLoads             []PointLoad
+	PointLoads []PointLoad
+	// SelfWeightPlf is a dead line load along the whole member, lb/ft (a
+	// beam's own weight); area loads need TribIn, this does not.
+	SelfWeightPlf float64
+	// TopBracedAtPoints: the top edge is braced only at the bearings and
+	// at TopBracingAtIn (a beam's top edge held where joists bear on it or
+	// hang from it), not continuously, whatever Settings.TopEdgeBraced.
+	TopBracedAtPoints      bool
+	TopBracingAtIn         []float64
 	LiveLimit, TotalLimit  float64 // L/limit; 0 = not checked
 	BottomBracedContinuous bool    // ceiling fastened directly to the joists
 	BlockingAtIn           []float64
@@ -176,8 +184,16 @@ func (m *Member) validate() error {
 	if !finite(m.OverhangEndIn) || m.OverhangEndIn < 0 || last+m.OverhangEndIn > m.LengthIn+tol {
 		return fmt.Errorf("end overhang %v in: want 0 to %g in (the member ends there)", m.OverhangEndIn, m.LengthIn-last)
 	}
-	if !finite(m.TribIn) || m.TribIn <= 0 {
-		return fmt.Errorf("tributary width %v in: want > 0", m.TribIn)
+	if !finite(m.TribIn) || m.TribIn < 0 || (m.TribIn == 0 && len(m.PointLoads) == 0 && m.SelfWeightPlf == 0) {
+		return fmt.Errorf("tributary width %v in: want > 0 (0 only for a member loaded by point loads or its own weight)", m.TribIn)
+	}
+	if !finite(m.SelfWeightPlf) || m.SelfWeightPlf < 0 {
+		return fmt.Errorf("self-weight %v plf: want a finite load >= 0", m.SelfWeightPlf)
+	}
+	for _, x := range m.TopBracingAtIn {
+		if !finite(x) {
+			return fmt.Errorf("top-edge brace at %v in: want a finite position", x)
+		}
 	}
 	if !finite(m.SpacingIn) || m.SpacingIn < 0 {
 		return fmt.Errorf("spacing %v in: want >= 0", m.SpacingIn)

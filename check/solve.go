@@ -91,7 +91,7 @@ func (e *engine) result(n int, bot *edgeEval) Result {
 		}
 	}
 	pts := e.braces(rows)
-	top := e.evalEdge(true, e.intervals(e.s.TopEdgeBraced, pts))
+	top := e.evalEdge(true, e.topIntervals(pts))
 	if bot == nil {
 		b := e.evalEdge(false, e.intervals(e.m.BottomBracedContinuous, pts))
 		bot = &b
