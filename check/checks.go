@@ -201,11 +201,9 @@ func (e *engine) deflectionChecks() ([]CheckResult, string) {
 		totalD = 0.5
 	}
 	pats := e.patterns()
-	var c strengthCase // carries the loads of one service case
-	var wBuf [8]float64
-	c.w = wBuf[:0]
-	if len(e.lps) > len(wBuf) {
-		c.w = make([]float64, 0, len(e.lps))
+	c := &e.svc // carries the loads of one service case
+	if cap(c.w) < len(e.lps) {
+		c.w = make([]float64, len(e.lps))
 	}
 	c.w = c.w[:len(e.lps)]
 	liveW := deflWorst{ratio: -1}
@@ -274,7 +272,7 @@ func (e *engine) deflectionChecks() ([]CheckResult, string) {
 		}
 		f[LoadD] = dF
 		c.f, c.dir, c.pattern = f, dir, pat
-		e.fillCase(&c)
+		e.fillCase(c)
 	}
 	down := false
 	for i := range lives {

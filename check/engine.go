@@ -37,12 +37,14 @@ type engine struct {
 	x0       float64 // member position of the analysis origin (start of the beam model)
 	bm       beam.Beam
 	segs     []beam.Segment
-	spanSegs []int         // index in segs of each span between bearings
-	mps      []memberPiece // the member's stretches and their line loads
-	lps      []loadPiece   // the model's load pieces: one per segment unless general
-	pls      []pointLd     // point loads
-	general  bool          // load pieces or point loads: solved with beam.SolveLoads
-	cosT     float64       // cosine of the rafter slope (1 flat)
+	spanSegs []int                 // index in segs of each span between bearings
+	mps      []memberPiece         // the member's stretches and their line loads
+	lps      []loadPiece           // the model's load pieces: one per segment unless general
+	pls      []pointLd             // point loads
+	general  bool                  // load pieces or point loads: solved with beam.SolveLoads
+	cosT     float64               // cosine of the rafter slope (1 flat)
+	pres     [3][numLoadTypes]bool // load types present: wind none, toward, away (index dir+1)
+	svc      strengthCase          // the service case deflectionChecks reuses
 
 	cases []strengthCase
 	mMax  float64     // largest |M| of any case, for "is this edge in compression" tolerances
@@ -93,7 +95,7 @@ func (e *engine) release() {
 // analysis. On error the returned engine holds what was found so far.
 func newEngine(m Member, s Settings) (*engine, error) {
 	e := enginePool.Get().(*engine)
-	*e = engine{m: m, s: s, cases: e.cases[:0], spanSegs: e.spanSegs[:0], mps: e.mps[:0], lps: e.lps[:0], pls: e.pls[:0], wAll: e.wAll[:0], sup: e.sup[:0], ivBuf: e.ivBuf[:0], ptsBuf: e.ptsBuf[:0], rowsBuf: e.rowsBuf[:0], patBuf: e.patBuf[:0], comboCDs: e.comboCDs[:0], names: e.names}
+	*e = engine{m: m, s: s, cases: e.cases[:0], spanSegs: e.spanSegs[:0], mps: e.mps[:0], lps: e.lps[:0], pls: e.pls[:0], wAll: e.wAll[:0], sup: e.sup[:0], ivBuf: e.ivBuf[:0], ptsBuf: e.ptsBuf[:0], rowsBuf: e.rowsBuf[:0], patBuf: e.patBuf[:0], comboCDs: e.comboCDs[:0], names: e.names, svc: strengthCase{w: e.svc.w[:0], pts: e.svc.pts[:0], r: e.svc.r}}
 	if err := s.validate(); err != nil {
 		return e, err
 	}

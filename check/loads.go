@@ -79,8 +79,19 @@ func (lw *lineLoads) factored(f factorSet, dir float64, patterned bool) float64 
 }
 
 // present reports which load types act anywhere on the member (wind: in
-// direction dir).
+// direction dir), as buildLoads found them.
 func (e *engine) present(dir float64) [numLoadTypes]bool {
+	switch {
+	case dir > 0:
+		return e.pres[2]
+	case dir < 0:
+		return e.pres[0]
+	}
+	return e.pres[1]
+}
+
+// findPresent scans the member's loads for present.
+func (e *engine) findPresent(dir float64) [numLoadTypes]bool {
 	var p [numLoadTypes]bool
 	add := func(lw *lineLoads) {
 		for t := LoadType(0); t < numLoadTypes; t++ {
@@ -140,6 +151,7 @@ func (e *engine) buildLoads() {
 		e.pls = append(e.pls, pointLd{at: math.Min(math.Max(at, 0), e.bm.LengthIn), seg: e.segAt(at), lw: pointLoadsOf(p)})
 	}
 	e.general = len(e.mps) > 1 || len(e.pls) > 0
+	e.pres = [3][numLoadTypes]bool{e.findPresent(-1), e.findPresent(0), e.findPresent(1)}
 	e.lps = e.lps[:0]
 	if !e.general {
 		for k, sg := range e.segs {
