@@ -64,18 +64,37 @@
 //     is held continuously when Settings.TopEdgeBraced; the bottom edge
 //     when Member.BottomBracedContinuous. RB > 50 fails (NDS 3.3.3.7).
 //     Cfu = 1 (strong-axis bending), CV does not apply to sawn lumber.
-//   - Shear: V at bearing centre-lines, or at d from the bearing face with
-//     Settings.ShearAtD (the shear of the uniformly loaded segment taken
-//     lb/2 + d from the centre-line); fv = 1.5 V / A.
+//   - Loads where they act: Member.LoadPieces give each stretch of the
+//     member its own area loads (a member crossing load-zone edges), and
+//     Member.PointLoads concentrated loads by load type; each combination
+//     takes each stretch's own loads (never an envelope: in 0.6D + 0.6W a
+//     stretch's dead load resists only its own uplift, and a zone may rely
+//     on less dead load against uplift, AreaLoads.UpliftDeadPsf). Such
+//     members are solved exactly with beam.SolveLoads.
+//   - Shear: V at bearing centre-lines; with Settings.ShearAtD the loads
+//     within lb/2 + d of the centre-line are left out only where NDS
+//     3.4.3.1(a) holds: not at a bearing with net uplift in the case, not
+//     where the member hangs (Bearing.Hanger). fv = 1.5 V / A.
 //   - Deflection (service loads): live = each of L, Lr, S at 1.0 and W at
 //     0.42 (IBC Table 1604.3 note f), patterned like the strength cases;
-//     total = Kcr D + each live-type case (Kcr 1.5 dry, 2.0 wet when
-//     Settings.Kcr is 0, NDS 3.5.2). Spans: largest deflection between
-//     their bearings against span/limit; cantilevers: tip deflection
-//     (back-span rotation included) against 2 x overhang/limit (note h).
+//     total (IBC Table 1604.3) = D + each downward live-type case, or
+//     0.5 D + it for seasoned lumber in dry service (note d,
+//     Settings.Seasoned); long-term (NDS 3.5.2) = Kcr D + each downward
+//     live-type case (Kcr 1.5 dry, 2.0 wet when Settings.Kcr is 0), a
+//     check of its own only with Member.LongTermLimit, otherwise reported
+//     in Result.Info. Spans: largest deflection between their bearings
+//     against span/limit; cantilevers: tip deflection (back-span rotation
+//     included) against 2 x overhang/limit (note h).
+//   - Sloped rafters (Member.PitchRise12): positions and gravity loads on
+//     the horizontal projection; wind normal to the roof / cos^2; lu and
+//     the deflection limits on the sloped length; deflection perpendicular
+//     to the rafter (projection's / cos^2).
 //   - Bearing: largest downward reaction of any case over b lb, against
-//     Fc_perp CM Ct Ci Cb (no CD); net uplift at a bearing is reported in
-//     Result.Info.
+//     Fc_perp CM Ct Ci Cb (no CD), and against the support's own Fc_perp
+//     where the bearing names its species and grade (the smaller governs);
+//     net uplift at a bearing is reported in Result.Info.
+//   - Posts (CheckPost): solid sawn columns, NDS 3.7.1 (CP, le/d <= 50),
+//     and the end-grain bearing of the member above (3.10.1).
 //   - Blocking rows (DOMAIN rule): when the bottom edge fails with the
 //     bracing present, n = 1, 2, ... rows evenly spaced in every span (not
 //     in cantilevers), the same n in each span, until it passes or the row
