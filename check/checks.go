@@ -2,7 +2,6 @@ package check
 
 import (
 	"math"
-	"strconv"
 
 	"framecheck/check/beam"
 )
@@ -59,11 +58,12 @@ func (e *engine) shearCheck() CheckResult {
 // bearingCheck returns the bearing check: fc_perp = R / (b lb) at each
 // bearing against Fc_perp' = Fc_perp CM Ct Ci Cb (NDS 2018 3.10.2, Table
 // 4.3.1; no CD), with the largest downward reaction of any strength case.
-// Uplift reactions are returned as information. The reaction at an end
+// It also returns each bearing's largest downward and largest net uplift
+// reaction (Result.Reactions), found over the same cases. The reaction at an end
 // that is part of its bearing includes the load on the piece past the
 // centre-line.
-func (e *engine) bearingCheck() (CheckResult, []string) {
-	var info []string
+func (e *engine) bearingCheck() (CheckResult, []Reaction) {
+	reactions := make([]Reaction, 0, len(e.m.Bearings))
 	best, bestJ, bestCI := -1.0, 0, 0
 	var bestR, bestCb, bestFc float64
 	last := len(e.m.Bearings) - 1
@@ -88,10 +88,7 @@ func (e *engine) bearingCheck() (CheckResult, []string) {
 				rMin, ciMin = r, ci
 			}
 		}
-		if rMin < 0 {
-			info = append(info, (&tracer{}).f("bearing "+strconv.Itoa(j+1)+" at %s in: net uplift reaction %s lb under "+
-				e.caseLabel(&e.cases[ciMin])+"; hold it down", b.AtIn, -rMin).Text())
-		}
+		reactions = append(reactions, e.reaction(j, rMax, ciMax, rMin, ciMin))
 		edge := math.Min(b.AtIn-b.LengthIn/2, e.m.LengthIn-(b.AtIn+b.LengthIn/2))
 		cb := BearingAreaFactor(b.LengthIn, edge)
 		fcAdj := e.dv.FcPerpPsi * e.cm.FcPerp * e.ct.FcPerp * e.ci.FcPerp * cb
@@ -103,7 +100,21 @@ func (e *engine) bearingCheck() (CheckResult, []string) {
 	fc := bestR / (e.sec.BIn * b.LengthIn)
 	e.rc.bear = bearRec{rLb: bestR, lbIn: b.LengthIn, cb: bestCb, fcAdjPsi: bestFc, bearing: bestJ}
 	return CheckResult{Kind: KindBearing, Combo: e.caseLabel(&e.cases[bestCI]), Actual: fc, Allowable: bestFc,
-		Unit: "psi", Ratio: fc / bestFc, calc: e.rc}, info
+		Unit: "psi", Ratio: fc / bestFc, calc: e.rc}, reactions
+}
+
+// reaction is bearing j's Reaction from its largest downward reaction
+// rMax (case ciMax) and its most negative reaction rMin (case ciMin);
+// rMax <= 0 (rMin >= 0) means no case gives a reaction of that sign.
+func (e *engine) reaction(j int, rMax float64, ciMax int, rMin float64, ciMin int) Reaction {
+	r := Reaction{Bearing: j, AtIn: e.m.Bearings[j].AtIn}
+	if rMax > 0 {
+		r.DownLb, r.DownCombo = rMax, e.caseLabel(&e.cases[ciMax])
+	}
+	if rMin < 0 {
+		r.UpLb, r.UpCombo, r.UpCD = -rMin, e.caseLabel(&e.cases[ciMin]), e.cases[ciMin].cd
+	}
+	return r
 }
 
 // deflWorst is the governing deflection of one service case.

@@ -74,8 +74,9 @@
 //     their bearings against span/limit; cantilevers: tip deflection
 //     (back-span rotation included) against 2 x overhang/limit (note h).
 //   - Bearing: largest downward reaction of any case over b lb, against
-//     Fc_perp CM Ct Ci Cb (no CD); net uplift at a bearing is reported in
-//     Result.Info.
+//     Fc_perp CM Ct Ci Cb (no CD). Each bearing's largest downward and
+//     largest net uplift reaction, with its case, is in Result.Reactions
+//     (the connector demand at ASD level).
 //   - Blocking rows (DOMAIN rule): when the bottom edge fails with the
 //     bracing present, n = 1, 2, ... rows evenly spaced in every span (not
 //     in cantilevers), the same n in each span, until it passes or the row
