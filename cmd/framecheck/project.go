@@ -111,7 +111,17 @@ type Design struct {
 	// PatternLiveLoads applies live-type loads span by span on continuous
 	// and cantilevered members.
 	PatternLiveLoads bool
+	// UpliftReportLb is the net uplift reaction (ASD, lb) from which a
+	// bearing's uplift is flagged for a connector; smaller uplift is
+	// listed, not flagged. Every net uplift is listed whatever its size.
+	UpliftReportLb float64
 }
+
+// defaultUpliftReportLb is design.uplift_report_lb when left out: 50 lb,
+// below which nailing that any joist gets at its bearing is commonly taken
+// to hold the joist down (common practice, no source; the designer sets
+// the key to what the fastening at hand is good for).
+const defaultUpliftReportLb = 50.0
 
 // Combinations is the value of design.combinations: either a named
 // standard set or an explicit list.

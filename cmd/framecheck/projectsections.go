@@ -155,7 +155,7 @@ func (ld *loader) lookupLumber(spT, grT, szT *table, species, grade, size string
 func (ld *loader) design(t *table) {
 	d := &ld.p.Design
 	*d = Design{TopEdgeBraced: true, Temperature: "normal", Kcr: 1.5,
-		Combinations: Combinations{Standard: StandardASCE716}, PatternLiveLoads: true}
+		Combinations: Combinations{Standard: StandardASCE716}, PatternLiveLoads: true, UpliftReportLb: defaultUpliftReportLb}
 	ld.boolean(t, "top_edge_braced", &d.TopEdgeBraced)
 	ld.boolean(t, "shear_at_d", &d.ShearAtD)
 	ld.boolean(t, "wet_service", &d.WetService)
@@ -171,6 +171,7 @@ func (ld *loader) design(t *table) {
 	ld.boolean(t, "add_self_weight", &d.AddSelfWeight)
 	ld.combinations(t, &d.Combinations)
 	ld.boolean(t, "pattern_live_loads", &d.PatternLiveLoads)
+	ld.num(t, "uplift_report_lb", "lb", &d.UpliftReportLb, upliftRule)
 }
 
 func (ld *loader) combinations(t *table, dst *Combinations) {
