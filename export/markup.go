@@ -3,6 +3,7 @@ package export
 import (
 	"fmt"
 	"math"
+	"strconv"
 )
 
 // Markup is what the annotated DXF and the overlay draw, in inches (world
@@ -15,6 +16,7 @@ type Markup struct {
 	Highlights   []Segment // failing members, on LayerFail
 	BlockingAdds []Segment // blocking rows to add, on LayerBlocking
 	Labels       []Label   // mark and max ratio at member midpoints, on LayerLabel
+	Uplifts      []Label   // ASD uplift reaction at each flagged bearing, on LayerUplift
 }
 
 // Segment is a straight line in inches; Ref names what it marks (member or
@@ -34,9 +36,10 @@ type Label struct {
 // MarkupFromResults builds the markup for r: a highlight over each member
 // whose status is not pass, a line for each blocking row that is not already
 // drawn, and a label "mark ratio" (or "id ERROR") at each member's midpoint,
-// rotated along the member and kept readable (angle in (-90, 90]). Inch
-// coordinates are taken from StartIn/EndIn when set, else from Start/End
-// times toInch. The text height is LabelHeightIn of the members' extent,
+// rotated along the member and kept readable (angle in (-90, 90]), and a
+// label "uplift N lb" at each flagged bearing of r.Uplift, rotated as its
+// member's label. Inch coordinates are taken from StartIn/EndIn (PointIn)
+// when set, else from Start/End (Point) times toInch. The text height is LabelHeightIn of the members' extent,
 // capped at 0.6 of the smallest positive spacing or trib width so that
 // labels stay between neighbouring joists.
 func MarkupFromResults(r *Results, toInch float64) Markup {
@@ -57,13 +60,7 @@ func MarkupFromResults(r *Results, toInch float64) Markup {
 		} else {
 			text += fmt.Sprintf(" %.2f", mb.MaxRatio)
 		}
-		ang := math.Atan2(b[1]-a[1], b[0]-a[0]) * 180 / math.Pi
-		for ang > 90 {
-			ang -= 180
-		}
-		for ang <= -90 {
-			ang += 180
-		}
+		ang := readableAngle(a, b)
 		m.Labels = append(m.Labels, Label{At: [2]float64{(a[0] + b[0]) / 2, (a[1] + b[1]) / 2}, AngleDeg: ang, Text: text})
 		for _, g := range []float64{mb.SpacingIn, mb.TribIn} {
 			if g > 0 && g < minGap {
@@ -71,6 +68,7 @@ func MarkupFromResults(r *Results, toInch float64) Markup {
 			}
 		}
 	}
+	m.Uplifts = upliftLabels(r, toInch)
 	for i := range r.BlockingRows {
 		br := &r.BlockingRows[i]
 		if br.Existing {
@@ -85,6 +83,49 @@ func MarkupFromResults(r *Results, toInch float64) Markup {
 	}
 	m.TextHeightIn = h
 	return m
+}
+
+// readableAngle is the direction from a to b in degrees, turned into
+// (-90, 90] so that text along it reads left to right or upwards.
+func readableAngle(a, b [2]float64) float64 {
+	ang := math.Atan2(b[1]-a[1], b[0]-a[0]) * 180 / math.Pi
+	for ang > 90 {
+		ang -= 180
+	}
+	for ang <= -90 {
+		ang += 180
+	}
+	return ang
+}
+
+// upliftLabels places a label at each flagged bearing of r.Uplift: "uplift
+// 461 lb" (the ASD reaction rounded up to the pound), along its member.
+func upliftLabels(r *Results, toInch float64) []Label {
+	var out []Label
+	var byID map[string]*Member
+	for i := range r.Uplift.Bearings {
+		u := &r.Uplift.Bearings[i]
+		if !u.Flagged {
+			continue
+		}
+		if byID == nil {
+			byID = make(map[string]*Member, len(r.Members))
+			for k := range r.Members {
+				byID[r.Members[k].ID] = &r.Members[k]
+			}
+		}
+		at := u.PointIn
+		if at == ([2]float64{}) {
+			at = [2]float64{u.Point[0] * toInch, u.Point[1] * toInch}
+		}
+		ang := 0.0
+		if mb := byID[u.Member]; mb != nil {
+			a, b := inches(mb.Start, mb.End, mb.StartIn, mb.EndIn, toInch)
+			ang = readableAngle(a, b)
+		}
+		out = append(out, Label{At: at, AngleDeg: ang, Text: "uplift " + strconv.FormatFloat(math.Ceil(u.UpliftLb), 'f', 0, 64) + " lb"})
+	}
+	return out
 }
 
 func inches(start, end, startIn, endIn [2]float64, toInch float64) ([2]float64, [2]float64) {
@@ -125,9 +166,11 @@ func (m *Markup) validate() error {
 			}
 		}
 	}
-	for _, l := range m.Labels {
-		if !finite(l.At[0]) || !finite(l.At[1]) || !finite(l.AngleDeg) {
-			return fmt.Errorf("markup: label %q: non-finite position or angle", l.Text)
+	for _, group := range [][]Label{m.Labels, m.Uplifts} {
+		for _, l := range group {
+			if !finite(l.At[0]) || !finite(l.At[1]) || !finite(l.AngleDeg) {
+				return fmt.Errorf("markup: label %q: non-finite position or angle", l.Text)
+			}
 		}
 	}
 	return nil
