@@ -68,7 +68,6 @@ func MarkupFromResults(r *Results, toInch float64) Markup {
 			}
 		}
 	}
-	m.Uplifts = upliftLabels(r, toInch)
 	for i := range r.BlockingRows {
 		br := &r.BlockingRows[i]
 		if br.Existing {
@@ -82,6 +81,7 @@ func MarkupFromResults(r *Results, toInch float64) Markup {
 		h = 0.6 * minGap
 	}
 	m.TextHeightIn = h
+	m.Uplifts = upliftLabels(r, toInch, h)
 	return m
 }
 
@@ -99,8 +99,12 @@ func readableAngle(a, b [2]float64) float64 {
 }
 
 // upliftLabels places a label at each flagged bearing of r.Uplift: "uplift
-// 461 lb" (the ASD reaction rounded up to the pound), along its member.
-func upliftLabels(r *Results, toInch float64) []Label {
+// 461 lb" (the ASD reaction rounded up to the pound), along its member and
+// moved into the member from the bearing by about half its length plus
+// half a text height (at most a quarter of the member), so that the labels
+// of two members meeting at one support do not overlap (common practice,
+// no source: a text's width taken as 0.9 of its height per character).
+func upliftLabels(r *Results, toInch, h float64) []Label {
 	var out []Label
 	var byID map[string]*Member
 	for i := range r.Uplift.Bearings {
@@ -118,12 +122,21 @@ func upliftLabels(r *Results, toInch float64) []Label {
 		if at == ([2]float64{}) {
 			at = [2]float64{u.Point[0] * toInch, u.Point[1] * toInch}
 		}
+		text := "uplift " + strconv.FormatFloat(math.Ceil(u.UpliftLb), 'f', 0, 64) + " lb"
 		ang := 0.0
 		if mb := byID[u.Member]; mb != nil {
 			a, b := inches(mb.Start, mb.End, mb.StartIn, mb.EndIn, toInch)
 			ang = readableAngle(a, b)
+			// toward the member's midpoint
+			mid := [2]float64{(a[0] + b[0]) / 2, (a[1] + b[1]) / 2}
+			dx, dy := mid[0]-at[0], mid[1]-at[1]
+			if dist := math.Hypot(dx, dy); dist > 0 {
+				lenIn := math.Hypot(b[0]-a[0], b[1]-a[1])
+				off := math.Min(0.45*h*float64(len(text))+0.5*h, lenIn/4)
+				at = [2]float64{at[0] + dx/dist*off, at[1] + dy/dist*off}
+			}
 		}
-		out = append(out, Label{At: at, AngleDeg: ang, Text: "uplift " + strconv.FormatFloat(math.Ceil(u.UpliftLb), 'f', 0, 64) + " lb"})
+		out = append(out, Label{At: at, AngleDeg: ang, Text: text})
 	}
 	return out
 }

@@ -69,17 +69,21 @@ func TestMarkupFromResults(t *testing.T) {
 	}
 	// Uplift labels: the four flagged bearings of the fixture, M2's 0.8 lb
 	// (below report_lb 50) listed in results.json but not labelled; the
-	// reaction rounded up to the pound, along the member.
+	// reaction rounded up to the pound, along the member, moved into it
+	// from the bearing by 0.45 h x 13 characters + 0.5 h = 6.35 h with h =
+	// 1.2 in (the text height below): 7.62 in.
+	off := 6.35 * 1.2
 	wantUp := []struct {
 		at   [2]float64
 		text string
-	}{{[2]float64{0, 40}, "uplift 213 lb"}, {[2]float64{144, 40}, "uplift 213 lb"},
-		{[2]float64{0, 56}, "uplift 161 lb"}, {[2]float64{144, 56}, "uplift 161 lb"}}
+	}{{[2]float64{off, 40}, "uplift 213 lb"}, {[2]float64{144 - off, 40}, "uplift 213 lb"},
+		{[2]float64{off, 56}, "uplift 161 lb"}, {[2]float64{144 - off, 56}, "uplift 161 lb"}}
 	if len(m.Uplifts) != len(wantUp) {
 		t.Fatalf("%d uplift labels %+v, want %d", len(m.Uplifts), m.Uplifts, len(wantUp))
 	}
 	for i, w := range wantUp {
-		if l := m.Uplifts[i]; l.At != w.at || l.Text != w.text || l.AngleDeg != 0 {
+		l := m.Uplifts[i]
+		if math.Abs(l.At[0]-w.at[0]) > 1e-9 || l.At[1] != w.at[1] || l.Text != w.text || l.AngleDeg != 0 {
 			t.Errorf("uplift label %d = %+v, want %q at %v, 0 deg", i, l, w.text, w.at)
 		}
 	}

@@ -198,3 +198,47 @@ func TestUpliftSheetGroupsBySupportLine(t *testing.T) {
 		t.Errorf("no uplift: rows %q", rows)
 	}
 }
+
+// TestReportUpliftSection: the report lists the uplift by support line and
+// by bearing, flagged bearings first (largest first), the 0.8 lb uplift
+// listed as such, and says what a connector must do without naming one.
+// Common practice, no source.
+func TestReportUpliftSection(t *testing.T) {
+	r, g := loadReportFixture(t)
+	r.Uplift = loadFixture(t).Uplift
+	doc, _ := repWriteParse(t, r, g)
+	sec := repByID(doc, "uplift")
+	if sec == nil {
+		t.Fatal("no uplift section")
+	}
+	text := repText(sec)
+	for _, want := range []string{"5 bearings have a net uplift", "4 of 50 lb or more", "FC-UPLIFT", "1.6 for wind", "the designer picks the part"} {
+		if !strings.Contains(text, want) {
+			t.Errorf("uplift section lacks %q", want)
+		}
+	}
+	if strings.Contains(strings.ToLower(text), "hold it down") {
+		t.Error("advice wording in the uplift section")
+	}
+	lines := repRows(repByID(doc, "uplift-lines"))
+	if len(lines) != 3 || lines[1][0] != "WALL handle 34" || lines[1][2] != "3" || lines[1][3] != "2" ||
+		lines[1][5] != "373.5" || lines[1][6] != "212.5" {
+		t.Errorf("support lines %q", lines)
+	}
+	rows := repRows(repByID(doc, "uplift-bearings"))
+	if len(rows) != 6 {
+		t.Fatalf("%d bearing rows, want a header and 5: %q", len(rows), rows)
+	}
+	if rows[1][0] != "M3" || rows[1][4] != "212.5" || rows[1][7] != "flagged" {
+		t.Errorf("first bearing row %q, want M3's 212.5 lb flagged", rows[1])
+	}
+	if last := rows[5]; last[0] != "M2" || last[4] != "0.8" || last[7] != "listed" {
+		t.Errorf("last bearing row %q, want M2's 0.8 lb listed", last)
+	}
+
+	r.Uplift = UpliftReport{ReportLb: 50}
+	doc, _ = repWriteParse(t, r, g)
+	if !strings.Contains(repText(repByID(doc, "uplift")), "No bearing has a net uplift") {
+		t.Error("no uplift: the section does not say so")
+	}
+}
