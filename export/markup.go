@@ -105,18 +105,41 @@ func readableAngle(a, b [2]float64) float64 {
 // of two members meeting at one support do not overlap (common practice,
 // no source: a text's width taken as 0.9 of its height per character).
 func upliftLabels(r *Results, toInch, h float64) []Label {
-	var out []Label
-	var byID map[string]*Member
+	n := 0
 	for i := range r.Uplift.Bearings {
-		u := &r.Uplift.Bearings[i]
-		if !u.Flagged {
-			continue
+		if r.Uplift.Bearings[i].Flagged {
+			n++
 		}
+	}
+	if n == 0 {
+		return nil
+	}
+	out := make([]Label, 0, n)
+	// The bearings come in member order (as the command writes them): find
+	// each member by walking the members alongside, and only for bearings
+	// out of that order by a map of every member.
+	var byID map[string]*Member
+	next := 0
+	member := func(id string) *Member {
 		if byID == nil {
+			for j := next; j < len(r.Members); j++ {
+				if r.Members[j].ID == id {
+					next = j
+					return &r.Members[j]
+				}
+			}
+			// out of order (or unknown): from here on, the map
 			byID = make(map[string]*Member, len(r.Members))
 			for k := range r.Members {
 				byID[r.Members[k].ID] = &r.Members[k]
 			}
+		}
+		return byID[id]
+	}
+	for i := range r.Uplift.Bearings {
+		u := &r.Uplift.Bearings[i]
+		if !u.Flagged {
+			continue
 		}
 		at := u.PointIn
 		if at == ([2]float64{}) {
@@ -124,7 +147,7 @@ func upliftLabels(r *Results, toInch, h float64) []Label {
 		}
 		text := "uplift " + strconv.FormatFloat(math.Ceil(u.UpliftLb), 'f', 0, 64) + " lb"
 		ang := 0.0
-		if mb := byID[u.Member]; mb != nil {
+		if mb := member(u.Member); mb != nil {
 			a, b := inches(mb.Start, mb.End, mb.StartIn, mb.EndIn, toInch)
 			ang = readableAngle(a, b)
 			// toward the member's midpoint

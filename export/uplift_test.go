@@ -242,3 +242,30 @@ func TestReportUpliftSection(t *testing.T) {
 		t.Error("no uplift: the section does not say so")
 	}
 }
+
+// TestUpliftLabelsOutOfOrder: uplift bearings that do not come in member
+// order still find their member (label along it, moved into it). Common
+// practice, no source.
+func TestUpliftLabelsOutOfOrder(t *testing.T) {
+	r := &Results{Members: []Member{
+		{ID: "M1", StartIn: [2]float64{0, 0}, EndIn: [2]float64{200, 0}, Status: StatusPass},
+		{ID: "M2", StartIn: [2]float64{0, 0}, EndIn: [2]float64{0, 200}, Status: StatusPass},
+	}, Uplift: UpliftReport{ReportLb: 50, Bearings: []UpliftBearing{
+		{Member: "M2", Bearing: 2, PointIn: [2]float64{0, 200}, UpliftLb: 99.2, Flagged: true},
+		{Member: "M1", Bearing: 1, PointIn: [2]float64{0, 0}, UpliftLb: 70, Flagged: true},
+		{Member: "M9", Bearing: 1, PointIn: [2]float64{5, 5}, UpliftLb: 60, Flagged: true},
+	}}}
+	m := MarkupFromResults(r, 1)
+	if len(m.Uplifts) != 3 {
+		t.Fatalf("%d uplift labels", len(m.Uplifts))
+	}
+	if l := m.Uplifts[0]; l.AngleDeg != 90 || l.At[0] != 0 || !(l.At[1] < 200) || l.Text != "uplift 100 lb" {
+		t.Errorf("M2 label %+v, want along M2 (90 deg), below its end, 100 lb", l)
+	}
+	if l := m.Uplifts[1]; l.AngleDeg != 0 || !(l.At[0] > 0) || l.At[1] != 0 {
+		t.Errorf("M1 label %+v, want along M1, right of its start", l)
+	}
+	if l := m.Uplifts[2]; l.At != [2]float64{5, 5} || l.AngleDeg != 0 {
+		t.Errorf("label of an unknown member %+v, want at its point, 0 deg", l)
+	}
+}

@@ -59,6 +59,20 @@ func exportResults(o *outcome, planName string) *export.Results {
 // same order), and flags those from reportLb up.
 func exportUplift(plan *framing.Plan, results []check.Result, reportLb, toInch float64) export.UpliftReport {
 	u := export.UpliftReport{ReportLb: reportLb}
+	n := 0
+	for k := range results {
+		for _, re := range results[k].Reactions {
+			if re.UpLb > 0 {
+				n++
+			}
+		}
+	}
+	if n == 0 {
+		return u
+	}
+	u.Bearings = make([]export.UpliftBearing, 0, n)
+	// A plan has far fewer support lines than bearings: name each once.
+	names := map[dxfimport.Pos]string{}
 	for k := range plan.Members {
 		m := &plan.Members[k]
 		if k >= len(results) {
@@ -74,9 +88,14 @@ func exportUplift(plan *framing.Plan, results []check.Result, reportLb, toInch f
 				t := re.AtIn / m.LengthIn
 				p = framing.Point{X: m.Start.X + t*(m.End.X-m.Start.X), Y: m.Start.Y + t*(m.End.Y-m.Start.Y)}
 			}
+			name, ok := names[b.Pos]
+			if !ok {
+				name = supportName(b.Pos)
+				names[b.Pos] = name
+			}
 			u.Bearings = append(u.Bearings, export.UpliftBearing{
 				Member: m.ID, Mark: m.Mark, Bearing: re.Bearing + 1,
-				Support: supportName(b.Pos), SupportLayer: b.Pos.Layer, SupportHandle: b.Pos.Handle, SupportKind: b.Kind,
+				Support: name, SupportLayer: b.Pos.Layer, SupportHandle: b.Pos.Handle, SupportKind: b.Kind,
 				AtIn: re.AtIn, Point: [2]float64{p.X / toInch, p.Y / toInch}, PointIn: [2]float64{p.X, p.Y},
 				UpliftLb: re.UpLb, Combo: re.UpCombo, CD: re.UpCD, Flagged: re.UpLb >= reportLb,
 			})
