@@ -192,7 +192,7 @@ const reportHTML = `<!DOCTYPE html>
 
 <section id="uplift"><h2>Uplift at the bearings (connector demand)</h2>
 {{if .Uplift.Count}}<p>{{.Uplift.Count}} bearing{{if ne .Uplift.Count 1}}s{{end}} have a net uplift reaction under some load combination;
-{{.Uplift.Flagged}} of {{.Uplift.ReportLb}} lb or more (design.uplift_report_lb) are flagged, and labelled on layer FC-UPLIFT of the annotated drawing; smaller uplift is listed, not flagged.
+{{.Uplift.Flagged}} with {{.Uplift.ReportLb}} lb or more (design.uplift_report_lb) are flagged, and labelled on layer FC-UPLIFT of the annotated drawing; smaller uplift is listed, not flagged.
 Reactions are at ASD level (ASCE 7-16 2.4.1 combinations), by statics of each member as analysed.
 At each flagged bearing a connector is needed whose allowable load for the combination's load duration (CD, NDS 2018 Table 2.3.2: 1.6 for wind) is at least the uplift shown; the designer picks the part.</p>
 <h3>By support line</h3>

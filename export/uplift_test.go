@@ -212,7 +212,7 @@ func TestReportUpliftSection(t *testing.T) {
 		t.Fatal("no uplift section")
 	}
 	text := repText(sec)
-	for _, want := range []string{"5 bearings have a net uplift", "4 of 50 lb or more", "FC-UPLIFT", "1.6 for wind", "the designer picks the part"} {
+	for _, want := range []string{"5 bearings have a net uplift", "4 with 50 lb or more", "FC-UPLIFT", "1.6 for wind", "the designer picks the part"} {
 		if !strings.Contains(text, want) {
 			t.Errorf("uplift section lacks %q", want)
 		}
