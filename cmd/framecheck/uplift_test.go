@@ -167,3 +167,48 @@ func TestUplift_PositionOnDrawnMember(t *testing.T) {
 		t.Errorf("M1 bearing 2 at %v in, point %v; want 119 in, x = 120", e.AtIn, e.Point)
 	}
 }
+
+// TestUplift_DemoRoofBays: in the demo, the roof bays are under net uplift
+// and every bearing of theirs is listed with the reaction of statics,
+// written out: net suction q = 0.6 W - 0.6 D (ASCE 7-16 2.4.1, 0.6D+0.6W),
+// ROOF-EDGE 0.6(75) - 0.6(8) = 40.2 psf, ROOF-FIELD 0.6(40) - 0.6(8) =
+// 19.2 psf (samples/demo/framecheck.toml); w = q x trib / 144 lb/in; a
+// simple span L carries R = w (L/2 + e) at a bearing whose joist end runs
+// e past its centre-line (the piece inside the wall); 0 for an end short
+// of it. No floor member has uplift.
+func TestUplift_DemoRoofBays(t *testing.T) {
+	_, _, _, r := runDemoTo(t, t.TempDir())
+	netPsf := map[string]float64{"ROOF-EDGE": 0.6*75 - 0.6*8, "ROOF-FIELD": 0.6*40 - 0.6*8}
+	byID := map[string]*export.Member{}
+	for i := range r.Members {
+		byID[r.Members[i].ID] = &r.Members[i]
+	}
+	seen := map[string]int{}
+	compared := 0
+	for _, b := range r.Uplift.Bearings {
+		m := byID[b.Member]
+		q, roof := netPsf[m.Zone]
+		if !roof {
+			t.Errorf("%s (zone %s) listed with uplift %v lb", m.ID, m.Zone, b.UpliftLb)
+			continue
+		}
+		seen[m.Zone]++
+		if len(m.SpansIn) != 1 || m.OverhangsIn != [2]float64{} {
+			continue // the demo's roof members are simple spans; nothing else to compare
+		}
+		e := b.AtIn // start: the piece before the first bearing
+		if b.Bearing == 2 {
+			e = m.LengthIn - b.AtIn
+		}
+		e = math.Max(e, 0)
+		want := q * m.TribIn / 144 * (m.SpansIn[0]/2 + e)
+		compared++
+		if math.Abs(b.UpliftLb-want) > 1e-9*want || b.Combo != "0.6D+0.6W(up)" || b.CD != 1.6 || b.Flagged != (want >= 50) {
+			t.Errorf("%s bearing %d: %v lb (%s, CD %v, flagged %v), want %.4f lb under 0.6D+0.6W(up) (statics, written out)",
+				m.ID, b.Bearing, b.UpliftLb, b.Combo, b.CD, b.Flagged, want)
+		}
+	}
+	if seen["ROOF-EDGE"] == 0 || seen["ROOF-FIELD"] == 0 || compared == 0 {
+		t.Errorf("uplift bearings by zone %v, %d compared: want both roof zones", seen, compared)
+	}
+}
