@@ -3,7 +3,6 @@ package check
 import (
 	"fmt"
 	"math"
-	"strconv"
 )
 
 // Why the shear at a bearing was or was not taken at d from its face.
@@ -70,11 +69,12 @@ func (e *engine) shearCheck() CheckResult {
 // Where the bearing names the species and grade of the plate or beam under
 // the member, that support's Fc_perp' is checked too and the smaller
 // governs (NDS 2018 3.10.2 applies to both members in contact).
-// Uplift reactions are returned as information. The reaction at an end
+// It also returns each bearing's largest downward and largest net uplift
+// reaction (Result.Reactions), found over the same cases. The reaction at an end
 // that is part of its bearing includes the load on the piece past the
 // centre-line.
-func (e *engine) bearingCheck() (CheckResult, []string) {
-	var info []string
+func (e *engine) bearingCheck() (CheckResult, []Reaction) {
+	reactions := make([]Reaction, 0, len(e.m.Bearings))
 	best, bestJ, bestCI := -1.0, 0, 0
 	var bestR, bestCb, bestFc float64
 	bestSup := false
@@ -108,10 +108,7 @@ func (e *engine) bearingCheck() (CheckResult, []string) {
 				rMin, ciMin = r, ci
 			}
 		}
-		if rMin < 0 {
-			info = append(info, (&tracer{}).f("bearing "+strconv.Itoa(j+1)+" at %s in: net uplift reaction %s lb under "+
-				e.caseLabel(&e.cases[ciMin])+"; hold it down", b.AtIn, -rMin).Text())
-		}
+		reactions = append(reactions, e.reaction(j, rMax, ciMax, rMin, ciMin))
 		edge := math.Min(b.AtIn-b.LengthIn/2, e.m.LengthIn-(b.AtIn+b.LengthIn/2))
 		cb := BearingAreaFactor(b.LengthIn, edge)
 		fcAdj := e.dv.FcPerpPsi * e.cm.FcPerp * e.ct.FcPerp * e.ci.FcPerp * cb
@@ -136,7 +133,21 @@ func (e *engine) bearingCheck() (CheckResult, []string) {
 		e.rc.bear.support, e.rc.bear.fcPerpSupPsi, e.rc.bear.supportName = true, sv.FcPerpPsi, sv.Species+" "+sv.Grade
 	}
 	return CheckResult{Kind: KindBearing, Combo: e.caseLabel(&e.cases[bestCI]), Actual: fc, Allowable: bestFc,
-		Unit: "psi", Ratio: fc / bestFc, calc: e.rc}, info
+		Unit: "psi", Ratio: fc / bestFc, calc: e.rc}, reactions
+}
+
+// reaction is bearing j's Reaction from its largest downward reaction
+// rMax (case ciMax) and its most negative reaction rMin (case ciMin);
+// rMax <= 0 (rMin >= 0) means no case gives a reaction of that sign.
+func (e *engine) reaction(j int, rMax float64, ciMax int, rMin float64, ciMin int) Reaction {
+	r := Reaction{Bearing: j, AtIn: e.m.Bearings[j].AtIn}
+	if rMax > 0 {
+		r.DownLb, r.DownCombo = rMax, e.caseLabel(&e.cases[ciMax])
+	}
+	if rMin < 0 {
+		r.UpLb, r.UpCombo, r.UpCD = -rMin, e.caseLabel(&e.cases[ciMin]), e.cases[ciMin].cd
+	}
+	return r
 }
 
 // deflWorst is the governing deflection of one service case.

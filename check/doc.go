@@ -91,8 +91,10 @@
 //     to the rafter (projection's / cos^2).
 //   - Bearing: largest downward reaction of any case over b lb, against
 //     Fc_perp CM Ct Ci Cb (no CD), and against the support's own Fc_perp
-//     where the bearing names its species and grade (the smaller governs);
-//     net uplift at a bearing is reported in Result.Info.
+//     where the bearing names its species and grade (the smaller governs).
+//     Each bearing's largest downward and
+//     largest net uplift reaction, with its case, is in Result.Reactions
+//     (the connector demand at ASD level).
 //   - Posts (CheckPost): solid sawn columns, NDS 3.7.1 (CP, le/d <= 50),
 //     and the end-grain bearing of the member above (3.10.1).
 //   - Blocking rows (DOMAIN rule): when the bottom edge fails with the

@@ -70,7 +70,30 @@ type Result struct {
 	Factors              []TraceItem  // CD per combination, CM, Ct, CF, Cfu, Ci, Cr, ...
 	Status               string       // StatusPass, StatusFail or StatusError
 	Messages             []string     // why it failed or errored
-	Info                 []string     // NDS 4.4.1.2 rule, uplift at a bearing, ...
+	Info                 []string     // NDS 4.4.1.2 rule, ...
+	// Reactions are the ASD support reactions at each bearing, in bearing
+	// order: the connector demand (down and up) at every joint.
+	Reactions []Reaction
+}
+
+// Reaction is one bearing's largest downward and largest net uplift
+// reaction over the strength load cases (ASCE 7-16 2.4.1 ASD combinations,
+// live-type loads patterned as for the checks), with the case that gives
+// each. Reactions are found by statics of the analysed member (check/beam);
+// at an end that is part of its bearing the load on the piece past the
+// centre-line is added to the reaction. A value of 0 (with an empty combo)
+// means no case gives a reaction of that sign.
+type Reaction struct {
+	Bearing   int     // 0-based index into Member.Bearings
+	AtIn      float64 // bearing centre-line, from the member start
+	DownLb    float64 // largest reaction pressing the member onto the support, lb (>= 0)
+	DownCombo string  // its case, as CheckResult.Combo names cases
+	UpLb      float64 // largest net uplift, lb, as a positive magnitude (>= 0)
+	UpCombo   string  // its case, e.g. "0.6D+0.6W(up)"
+	// UpCD is the load duration factor of UpCombo (NDS 2018 2.3.2, Table
+	// 2.3.2: 1.6 for wind): the CD at which a connector's allowable load
+	// is compared with UpLb.
+	UpCD float64
 }
 
 // RowsPerSpan returns the number of blocking rows the result added in each

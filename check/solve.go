@@ -118,9 +118,9 @@ func (e *engine) result(n int, bot *edgeEval) Result {
 		r.Info = append(r.Info, longInfo)
 	}
 	if len(e.cases) > 0 {
-		b, info := e.bearingCheck()
+		b, reactions := e.bearingCheck()
 		r.Checks = append(r.Checks, b)
-		r.Info = append(r.Info, info...)
+		r.Reactions = reactions
 	}
 	r.RB = math.Max(top.maxRB, bot.maxRB)
 	r.Status = StatusPass

@@ -13,11 +13,11 @@
 // Writers:
 //
 //	WriteJSON(path, r)          results.json, schema "framecheck-results/2"; one member,
-//	                            calculation, mark or blocking row per line; traces and
+//	                            calculation, mark, blocking row or uplift bearing per line; traces and
 //	                            factors once per calculation; NaN/Inf written as 0 and
 //	                            reported as a *NonFiniteError after the write
 //	ReadJSON(path)              results.json back into Results, traces in place
-//	WriteXLSX(path, r)          sheets Members, Marks, Blocking, Takeoff, Inputs, Notes
+//	WriteXLSX(path, r)          sheets Members, Marks, Blocking, Takeoff, Uplift, Inputs, Notes
 //	                            (excelize writes the workbook; the Members rows are
 //	                            written here and spliced in, see xlsx_members.go)
 //	Annotate(in, out, markup)   copy of the drawing with our layers and markup added
@@ -36,6 +36,8 @@
 //	FC-FAIL          colour 1 (red), a LINE over every failing or erroring member
 //	FC-BLOCKING-ADD  colour 4 (cyan), a LINE across the run for every blocking row to add
 //	FC-LABEL         colour 2 (yellow), a TEXT "mark ratio" at each member's midpoint
+//	FC-UPLIFT        colour 6 (magenta), a TEXT "uplift N lb" at each bearing whose net
+//	                 uplift (ASD) is flagged (Results.Uplift)
 //
 // Independent checks: .ci/checks/export-dxf.sh reads the annotated R12 and
 // R2000 plans and the overlay with ezdxf (audit, original entities kept,

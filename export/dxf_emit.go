@@ -146,7 +146,7 @@ func (e *dxfEmitter) layer(name string, color, lineWeight int, ltype, tableHandl
 
 // markupEntityCount is the number of entities markup writes for m.
 func markupEntityCount(m *Markup) int {
-	return len(m.Highlights) + len(m.BlockingAdds) + len(m.Labels)
+	return len(m.Highlights) + len(m.BlockingAdds) + len(m.Labels) + len(m.Uplifts)
 }
 
 // markup writes every markup entity of m, converted to drawing units.
@@ -162,5 +162,8 @@ func (e *dxfEmitter) markup(m *Markup) {
 	h := m.textHeight() / k
 	for _, l := range m.Labels {
 		e.text(LayerLabel, du(l.At), h, l.AngleDeg, l.Text)
+	}
+	for _, l := range m.Uplifts {
+		e.text(LayerUplift, du(l.At), h, l.AngleDeg, l.Text)
 	}
 }

@@ -51,13 +51,21 @@ func Sanitize(r *Results) (*Results, []string) {
 	var changed bool
 	if membersFinite(r.Members) {
 		// The common case, typed and fast: walk the rest reflectively,
-		// with the members (nearly all of a large plan) left out.
+		// with the members (nearly all of a large plan) and the uplift
+		// bearings, when finite, left out.
+		upOK := upliftFinite(&r.Uplift)
 		rest := *r
 		rest.Members = nil
+		if upOK {
+			rest.Uplift.Bearings = nil
+		}
 		v, changed = sanitizeValue(reflect.ValueOf(rest), make([]pathSeg, 0, 8), &fields, map[cleanSlice]bool{})
 		if changed {
 			out := v.Interface().(Results)
 			out.Members = r.Members
+			if upOK {
+				out.Uplift.Bearings = r.Uplift.Bearings
+			}
 			v = reflect.ValueOf(out)
 		}
 	} else {
@@ -407,6 +415,13 @@ func encodeResults(w *bufio.Writer, r *Results) error {
 				b.Members = orEmpty(b.Members)
 				return b
 			})
+		},
+		func() error {
+			key("uplift")
+			if err := writeUpliftJSON(w, &r.Uplift); err != nil {
+				return fmt.Errorf("uplift: %w", err)
+			}
+			return nil
 		},
 		func() error {
 			t := r.Takeoff

@@ -7,6 +7,7 @@ const (
 	LayerFail     = "FC-FAIL"         // a LINE over every failing or erroring member
 	LayerBlocking = "FC-BLOCKING-ADD" // a LINE across the run for every blocking row to add
 	LayerLabel    = "FC-LABEL"        // a TEXT "mark ratio" at each member's midpoint
+	LayerUplift   = "FC-UPLIFT"       // a TEXT "uplift N lb" at each bearing with flagged net uplift
 )
 
 // markupLayers lists our layers with colour (ACI) and, for R2000+,
@@ -19,4 +20,5 @@ var markupLayers = []struct {
 	{LayerFail, 1, 70},
 	{LayerBlocking, 4, 35},
 	{LayerLabel, 2, 18},
+	{LayerUplift, 6, 18},
 }

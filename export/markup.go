@@ -3,6 +3,7 @@ package export
 import (
 	"fmt"
 	"math"
+	"strconv"
 )
 
 // Markup is what the annotated DXF and the overlay draw, in inches (world
@@ -15,6 +16,7 @@ type Markup struct {
 	Highlights   []Segment // failing members, on LayerFail
 	BlockingAdds []Segment // blocking rows to add, on LayerBlocking
 	Labels       []Label   // mark and max ratio at member midpoints, on LayerLabel
+	Uplifts      []Label   // ASD uplift reaction at each flagged bearing, on LayerUplift
 }
 
 // Segment is a straight line in inches; Ref names what it marks (member or
@@ -34,9 +36,10 @@ type Label struct {
 // MarkupFromResults builds the markup for r: a highlight over each member
 // whose status is not pass, a line for each blocking row that is not already
 // drawn, and a label "mark ratio" (or "id ERROR") at each member's midpoint,
-// rotated along the member and kept readable (angle in (-90, 90]). Inch
-// coordinates are taken from StartIn/EndIn when set, else from Start/End
-// times toInch. The text height is LabelHeightIn of the members' extent,
+// rotated along the member and kept readable (angle in (-90, 90]), and a
+// label "uplift N lb" at each flagged bearing of r.Uplift, rotated as its
+// member's label. Inch coordinates are taken from StartIn/EndIn (PointIn)
+// when set, else from Start/End (Point) times toInch. The text height is LabelHeightIn of the members' extent,
 // capped at 0.6 of the smallest positive spacing or trib width so that
 // labels stay between neighbouring joists.
 func MarkupFromResults(r *Results, toInch float64) Markup {
@@ -57,13 +60,7 @@ func MarkupFromResults(r *Results, toInch float64) Markup {
 		} else {
 			text += fmt.Sprintf(" %.2f", mb.MaxRatio)
 		}
-		ang := math.Atan2(b[1]-a[1], b[0]-a[0]) * 180 / math.Pi
-		for ang > 90 {
-			ang -= 180
-		}
-		for ang <= -90 {
-			ang += 180
-		}
+		ang := readableAngle(a, b)
 		m.Labels = append(m.Labels, Label{At: [2]float64{(a[0] + b[0]) / 2, (a[1] + b[1]) / 2}, AngleDeg: ang, Text: text})
 		for _, g := range []float64{mb.SpacingIn, mb.TribIn} {
 			if g > 0 && g < minGap {
@@ -84,7 +81,87 @@ func MarkupFromResults(r *Results, toInch float64) Markup {
 		h = 0.6 * minGap
 	}
 	m.TextHeightIn = h
+	m.Uplifts = upliftLabels(r, toInch, h)
 	return m
+}
+
+// readableAngle is the direction from a to b in degrees, turned into
+// (-90, 90] so that text along it reads left to right or upwards.
+func readableAngle(a, b [2]float64) float64 {
+	ang := math.Atan2(b[1]-a[1], b[0]-a[0]) * 180 / math.Pi
+	for ang > 90 {
+		ang -= 180
+	}
+	for ang <= -90 {
+		ang += 180
+	}
+	return ang
+}
+
+// upliftLabels places a label at each flagged bearing of r.Uplift: "uplift
+// 461 lb" (the ASD reaction rounded up to the pound), along its member and
+// moved into the member from the bearing by about half its length plus
+// half a text height (at most a quarter of the member), so that the labels
+// of two members meeting at one support do not overlap (common practice,
+// no source: a text's width taken as 0.9 of its height per character).
+func upliftLabels(r *Results, toInch, h float64) []Label {
+	n := 0
+	for i := range r.Uplift.Bearings {
+		if r.Uplift.Bearings[i].Flagged {
+			n++
+		}
+	}
+	if n == 0 {
+		return nil
+	}
+	out := make([]Label, 0, n)
+	// The bearings come in member order (as the command writes them): find
+	// each member by walking the members alongside, and only for bearings
+	// out of that order by a map of every member.
+	var byID map[string]*Member
+	next := 0
+	member := func(id string) *Member {
+		if byID == nil {
+			for j := next; j < len(r.Members); j++ {
+				if r.Members[j].ID == id {
+					next = j
+					return &r.Members[j]
+				}
+			}
+			// out of order (or unknown): from here on, the map
+			byID = make(map[string]*Member, len(r.Members))
+			for k := range r.Members {
+				byID[r.Members[k].ID] = &r.Members[k]
+			}
+		}
+		return byID[id]
+	}
+	for i := range r.Uplift.Bearings {
+		u := &r.Uplift.Bearings[i]
+		if !u.Flagged {
+			continue
+		}
+		at := u.PointIn
+		if at == ([2]float64{}) {
+			at = [2]float64{u.Point[0] * toInch, u.Point[1] * toInch}
+		}
+		text := "uplift " + strconv.FormatFloat(math.Ceil(u.UpliftLb), 'f', 0, 64) + " lb"
+		ang := 0.0
+		if mb := member(u.Member); mb != nil {
+			a, b := inches(mb.Start, mb.End, mb.StartIn, mb.EndIn, toInch)
+			ang = readableAngle(a, b)
+			// toward the member's midpoint
+			mid := [2]float64{(a[0] + b[0]) / 2, (a[1] + b[1]) / 2}
+			dx, dy := mid[0]-at[0], mid[1]-at[1]
+			if dist := math.Hypot(dx, dy); dist > 0 {
+				lenIn := math.Hypot(b[0]-a[0], b[1]-a[1])
+				off := math.Min(0.45*h*float64(len(text))+0.5*h, lenIn/4)
+				at = [2]float64{at[0] + dx/dist*off, at[1] + dy/dist*off}
+			}
+		}
+		out = append(out, Label{At: at, AngleDeg: ang, Text: text})
+	}
+	return out
 }
 
 func inches(start, end, startIn, endIn [2]float64, toInch float64) ([2]float64, [2]float64) {
@@ -125,9 +202,11 @@ func (m *Markup) validate() error {
 			}
 		}
 	}
-	for _, l := range m.Labels {
-		if !finite(l.At[0]) || !finite(l.At[1]) || !finite(l.AngleDeg) {
-			return fmt.Errorf("markup: label %q: non-finite position or angle", l.Text)
+	for _, group := range [][]Label{m.Labels, m.Uplifts} {
+		for _, l := range group {
+			if !finite(l.At[0]) || !finite(l.At[1]) || !finite(l.AngleDeg) {
+				return fmt.Errorf("markup: label %q: non-finite position or angle", l.Text)
+			}
 		}
 	}
 	return nil

@@ -136,6 +136,9 @@ func (m *Markup) bounds() (lo, hi [2]float64) {
 	for _, l := range m.Labels {
 		add(l.At)
 	}
+	for _, l := range m.Uplifts {
+		add(l.At)
+	}
 	if math.IsInf(lo[0], 1) {
 		return [2]float64{}, [2]float64{}
 	}

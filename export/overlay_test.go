@@ -19,12 +19,13 @@ func TestWriteOverlay(t *testing.T) {
 				t.Fatal(err)
 			}
 			d := parseDXF(t, path)
-			if d.count("LINE", LayerFail) != 1 || d.count("LINE", LayerBlocking) != 1 || d.count("TEXT", LayerLabel) != 4 {
-				t.Errorf("markup entities %d/%d/%d, want 1/1/4",
-					d.count("LINE", LayerFail), d.count("LINE", LayerBlocking), d.count("TEXT", LayerLabel))
+			if d.count("LINE", LayerFail) != 1 || d.count("LINE", LayerBlocking) != 1 || d.count("TEXT", LayerLabel) != 4 ||
+				d.count("TEXT", LayerUplift) != 4 {
+				t.Errorf("markup entities %d/%d/%d/%d, want 1/1/4/4", d.count("LINE", LayerFail),
+					d.count("LINE", LayerBlocking), d.count("TEXT", LayerLabel), d.count("TEXT", LayerUplift))
 			}
-			if d.LayerCount != 4 || d.count("LAYER", "0") != 1 {
-				t.Errorf("LAYER count %d, want layer 0 and our three", d.LayerCount)
+			if d.LayerCount != 5 || d.count("LAYER", "0") != 1 {
+				t.Errorf("LAYER count %d, want layer 0 and our four", d.LayerCount)
 			}
 			if d.Seed != "" {
 				t.Errorf("overlay has $HANDSEED %s; R12 without handles wanted", d.Seed)
@@ -65,6 +66,26 @@ func TestMarkupFromResults(t *testing.T) {
 	// M1 runs (0,8)-(144,8): midpoint (72, 8), horizontal.
 	if l := m.Labels[0]; l.At != [2]float64{72, 8} || l.AngleDeg != 0 {
 		t.Errorf("label 0 at %v angle %v, want (72, 8) 0", l.At, l.AngleDeg)
+	}
+	// Uplift labels: the four flagged bearings of the fixture, M2's 0.8 lb
+	// (below report_lb 50) listed in results.json but not labelled; the
+	// reaction rounded up to the pound, along the member, moved into it
+	// from the bearing by 0.45 h x 13 characters + 0.5 h = 6.35 h with h =
+	// 1.2 in (the text height below): 7.62 in.
+	off := 6.35 * 1.2
+	wantUp := []struct {
+		at   [2]float64
+		text string
+	}{{[2]float64{off, 40}, "uplift 213 lb"}, {[2]float64{144 - off, 40}, "uplift 213 lb"},
+		{[2]float64{off, 56}, "uplift 161 lb"}, {[2]float64{144 - off, 56}, "uplift 161 lb"}}
+	if len(m.Uplifts) != len(wantUp) {
+		t.Fatalf("%d uplift labels %+v, want %d", len(m.Uplifts), m.Uplifts, len(wantUp))
+	}
+	for i, w := range wantUp {
+		l := m.Uplifts[i]
+		if math.Abs(l.At[0]-w.at[0]) > 1e-9 || l.At[1] != w.at[1] || l.Text != w.text || l.AngleDeg != 0 {
+			t.Errorf("uplift label %d = %+v, want %q at %v, 0 deg", i, l, w.text, w.at)
+		}
 	}
 	// Extent 144 in -> 144/120 = 1.2 in, under 0.6 x 12 in (smallest trib).
 	if math.Abs(m.TextHeightIn-1.2) > 1e-12 {

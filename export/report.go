@@ -77,6 +77,7 @@ type reportPage struct {
 	Marks       []markRow
 	Takeoff     Takeoff
 	Totals      TakeoffTotals
+	Uplift      upliftSection
 	Calcs       []markCalc
 	Assumptions Assumptions
 	Combos      []string
@@ -167,6 +168,7 @@ func buildReport(r *Results, g *PlanGeometry, when time.Time) *reportPage {
 			Ratio: ratioText(mk.MaxRatio), Status: mk.Status, Band: bandClass(mk.MaxRatio, mk.Status), Count: mk.Count,
 		})
 	}
+	p.Uplift = buildUplift(r)
 	p.PlanSVG, p.MemberJSON = planSVG(r, g)
 	p.Calcs = buildCalcs(r)
 	return p

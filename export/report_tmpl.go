@@ -6,7 +6,7 @@ import (
 )
 
 // reportTemplate is the page. Section ids (summary, plan, schedule,
-// takeoff, calculations, mark-<mark>, assumptions, cautions) are stable:
+// takeoff, uplift, calculations, mark-<mark>, assumptions, cautions) are stable:
 // the tests and any reader's links use them.
 var reportTemplate = template.Must(template.New("report").Funcs(template.FuncMap{"num": fmtNum, "bf": boardFeet, "limit": limitText}).Parse(reportHTML))
 
@@ -139,7 +139,7 @@ const reportHTML = `<!DOCTYPE html>
 <body>
 <header class="top"><h1>Joist check: {{.Plan}}</h1>
 <div class="meta">framecheck report · {{.Date}}</div></header>
-<nav class="toc"><a href="#summary">Summary</a><a href="#plan">Plan</a><a href="#schedule">Schedule</a><a href="#takeoff">Takeoff</a><a href="#calculations">Calculations</a><a href="#assumptions">Assumptions</a><a href="#cautions">Cautions</a></nav>
+<nav class="toc"><a href="#summary">Summary</a><a href="#plan">Plan</a><a href="#schedule">Schedule</a><a href="#takeoff">Takeoff</a><a href="#uplift">Uplift</a><a href="#calculations">Calculations</a><a href="#assumptions">Assumptions</a><a href="#cautions">Cautions</a></nav>
 <main>
 <section id="summary"><h2>Summary</h2>
 <div class="sum-grid"><div>
@@ -188,6 +188,22 @@ const reportHTML = `<!DOCTYPE html>
 {{end}}</table>
 <table id="totals"><tr><th>joists</th><th>joist board feet</th><th>blocking pieces</th><th>blocking board feet</th><th>hangers</th><th>total board feet</th></tr>
 <tr><td class="n">{{.Totals.JoistCount}}</td><td class="n">{{bf .Totals.JoistBoardFeet}}</td><td class="n">{{.Totals.BlockingPieces}}</td><td class="n">{{bf .Totals.BlockingBoardFeet}}</td><td class="n">{{.Totals.Hangers}}</td><td class="n">{{bf .Totals.BoardFeet}}</td></tr></table>
+</section>
+
+<section id="uplift"><h2>Uplift at the bearings (connector demand)</h2>
+{{if .Uplift.Count}}<p>{{.Uplift.Count}} bearing{{if ne .Uplift.Count 1}}s{{end}} have a net uplift reaction under some load combination;
+{{.Uplift.Flagged}} with {{.Uplift.ReportLb}} lb or more (design.uplift_report_lb) are flagged, and labelled on layer FC-UPLIFT of the annotated drawing; smaller uplift is listed, not flagged.
+Reactions are at ASD level (ASCE 7-16 2.4.1 combinations), by statics of each member as analysed.
+At each flagged bearing a connector is needed whose allowable load for the combination's load duration (CD, NDS 2018 Table 2.3.2: 1.6 for wind) is at least the uplift shown; the designer picks the part.</p>
+<h3>By support line</h3>
+<table id="uplift-lines"><tr><th>support line</th><th>kind</th><th>bearings with uplift</th><th>flagged</th><th>largest, lb</th><th>total, lb</th><th>required connector capacity per bearing, ASD, lb</th><th>CD</th><th>combination</th><th>members</th></tr>
+{{range .Uplift.Lines}}<tr><td>{{.Support}}</td><td>{{.Kind}}</td><td class="n">{{.Count}}</td><td class="n">{{.Flagged}}</td><td class="n">{{.Max}}</td><td class="n">{{.Total}}</td><td class="n">{{.Need}}</td><td class="n">{{.CD}}</td><td>{{.Combo}}</td><td>{{.Members}}</td></tr>
+{{end}}</table>
+<h3>By bearing</h3>
+<table id="uplift-bearings"><tr><th>member</th><th>mark</th><th>support line (bearing)</th><th>from member start</th><th>uplift, lb (ASD)</th><th>combination</th><th>CD</th><th></th></tr>
+{{range .Uplift.Rows}}<tr><td>{{.Member}}</td><td>{{.Mark}}</td><td>{{.Support}}</td><td class="n">{{.At}}</td><td class="n">{{if .Flagged}}<b>{{.Uplift}}</b>{{else}}{{.Uplift}}{{end}}</td><td>{{.Combo}}</td><td class="n">{{.CD}}</td><td>{{if .Flagged}}flagged{{else}}listed{{end}}</td></tr>
+{{end}}</table>{{if .Uplift.More}}<p>and {{.Uplift.More}} more bearings with uplift (see results.json, "uplift").</p>{{end}}
+{{else}}<p>No bearing has a net uplift reaction under any load combination.</p>{{end}}
 </section>
 
 <section id="calculations"><h2>Calculations by mark</h2>

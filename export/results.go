@@ -42,6 +42,7 @@ type Results struct {
 	Members      []Member      `json:"members"`
 	Marks        []Mark        `json:"marks"`
 	BlockingRows []BlockingRow `json:"blocking_rows"`
+	Uplift       UpliftReport  `json:"uplift"` // bearings under net uplift (connector demand)
 	Takeoff      Takeoff       `json:"takeoff"`
 	Summary      Summary       `json:"summary"`
 	Assumptions  Assumptions   `json:"assumptions"`
@@ -99,7 +100,8 @@ type Member struct {
 	// for the written-out calculation in the report.
 	BlockingSteps []BlockingStep `json:"blocking_steps,omitempty"`
 	// Info holds notes that are not findings: the NDS 2018 4.4.1.2
-	// lateral-support rule beside the calculated CL, uplift at a bearing.
+	// lateral-support rule beside the calculated CL. (Uplift at the
+	// bearings is in Results.Uplift.)
 	Info    []string    `json:"info,omitempty"`
 	Factors []TraceItem `json:"factors,omitempty"`
 

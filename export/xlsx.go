@@ -17,12 +17,13 @@ const (
 	SheetMarks    = "Marks"
 	SheetBlocking = "Blocking"
 	SheetTakeoff  = "Takeoff"
+	SheetUplift   = "Uplift"
 	SheetInputs   = "Inputs"
 	SheetNotes    = "Notes"
 )
 
 // SheetNames lists the sheets of schedule.xlsx in order.
-var SheetNames = []string{SheetMembers, SheetMarks, SheetBlocking, SheetTakeoff, SheetInputs, SheetNotes}
+var SheetNames = []string{SheetMembers, SheetMarks, SheetBlocking, SheetTakeoff, SheetUplift, SheetInputs, SheetNotes}
 
 // WriteXLSX writes the member schedule with takeoff to path, atomically:
 // excelize builds the workbook (styles, every sheet, streamed), and the
@@ -49,7 +50,7 @@ func WriteXLSX(path string, r *Results) error {
 	// (at 10,000 members the schedule took 2.3 s instead of 0.3 s).
 	f.SetActiveSheet(0)
 	writers := []func(*excelize.File, *styles, *Results) error{
-		writeMembers, writeMarks, writeBlocking, writeTakeoff, writeInputs, writeNotes,
+		writeMembers, writeMarks, writeBlocking, writeTakeoff, writeUpliftSheet, writeInputs, writeNotes,
 	}
 	for _, w := range writers {
 		if err := w(f, st, r); err != nil {

@@ -227,6 +227,7 @@ var layerNotes = []string{
 	"Annotated drawing: layer " + LayerFail + " marks every failing or erroring member.",
 	"Annotated drawing: layer " + LayerBlocking + " draws every blocking row to add, across its run.",
 	"Annotated drawing: layer " + LayerLabel + " labels each member with its mark and largest ratio.",
+	"Annotated drawing: layer " + LayerUplift + " labels each bearing with flagged net uplift with its ASD uplift reaction (connector demand).",
 }
 
 func writeNotes(f *excelize.File, st *styles, r *Results) error {

@@ -37,6 +37,7 @@ func TestWriteXLSXSheets(t *testing.T) {
 		SheetMarks:    1 + len(r.Marks),
 		SheetBlocking: 1 + len(r.BlockingRows),
 		SheetTakeoff:  1 + 2 + 4, // one joist line, one blocking line, no hangers, four totals
+		SheetUplift:   1 + 2,     // the fixture's uplift is on two wall lines
 		SheetNotes:    1 + len(Cautions) + len(r.Assumptions.Notes) + len(layerNotes),
 	}
 	for sheet, n := range wantRows {

@@ -50,6 +50,16 @@ def main(demo, overlay_dir):
         fail("summary counts do not add up: %r" % s)
     failing = sum(1 for m in members if m["status"] != "pass")
     to_add = sum(1 for r in res["blocking_rows"] if not r.get("existing"))
+    # Uplift: every listed bearing has a positive reaction, flagged exactly
+    # from report_lb up; the demo's roof bays are under net uplift.
+    up = res["uplift"]
+    ids = {m["id"] for m in members}
+    for b in up["bearings"]:
+        if b["uplift_lb"] <= 0 or b["flagged"] != (b["uplift_lb"] >= up["report_lb"]) or b["member"] not in ids:
+            fail("uplift entry %r inconsistent with report_lb %r" % (b, up["report_lb"]))
+    flagged = sum(1 for b in up["bearings"] if b["flagged"])
+    if flagged == 0:
+        fail("the demo's roof bays are under net uplift, results.json flags none")
 
     # Annotated DXF: audit clean, original entities untouched, our markup there.
     src = ezdxf.readfile(os.path.join(demo, "plan.dxf"))
@@ -70,6 +80,8 @@ def main(demo, overlay_dir):
         fail("FC-BLOCKING-ADD holds %d entities, results.json has %d rows to add" % (on("FC-BLOCKING-ADD"), to_add))
     if on("FC-LABEL") != len(members):
         fail("FC-LABEL holds %d labels, results.json has %d members" % (on("FC-LABEL"), len(members)))
+    if on("FC-UPLIFT") != flagged or ours.get(("FC-UPLIFT", "TEXT"), 0) != flagged:
+        fail("FC-UPLIFT holds %d entities, results.json flags %d bearings" % (on("FC-UPLIFT"), flagged))
     # Geometry of the original joists is unchanged (first LINE on each layer).
     for e_src, e_out in zip(src.modelspace().query("LINE"), doc.modelspace().query("LINE")):
         if e_src.dxf.start.isclose(e_out.dxf.start, abs_tol=1e-9) is False or e_src.dxf.layer != e_out.dxf.layer:
@@ -85,14 +97,21 @@ def main(demo, overlay_dir):
     if odoc.audit().has_errors:
         fail("ezdxf audit errors in the overlay")
     layers = {e.dxf.layer.upper() for e in odoc.modelspace()}
-    if not layers <= {"FC-FAIL", "FC-BLOCKING-ADD", "FC-LABEL"}:
+    if not layers <= {"FC-FAIL", "FC-BLOCKING-ADD", "FC-LABEL", "FC-UPLIFT"}:
         fail("overlay holds entities on other layers: %r" % sorted(layers))
 
     # Schedule: sheets, one row per member, totals.
     wb = openpyxl.load_workbook(os.path.join(demo, "schedule.xlsx"), read_only=False)
-    want = ["Members", "Marks", "Blocking", "Takeoff", "Inputs", "Notes"]
+    want = ["Members", "Marks", "Blocking", "Takeoff", "Uplift", "Inputs", "Notes"]
     if wb.sheetnames != want:
         fail("sheets %r, want %r" % (wb.sheetnames, want))
+    # Uplift sheet: one row per support line, bearing counts adding up to
+    # results.json's list.
+    up_rows = [r for r in list(wb["Uplift"].iter_rows(values_only=True))[1:] if r and r[0]]
+    lines = {b["support"] for b in up["bearings"]}
+    if len(up_rows) != len(lines) or sum(r[2] for r in up_rows) != len(up["bearings"]):
+        fail("Uplift sheet: %d lines, %d bearings; results.json %d lines, %d bearings" % (
+            len(up_rows), sum(r[2] for r in up_rows), len(lines), len(up["bearings"])))
     rows = list(wb["Members"].iter_rows(values_only=True))
     data = [r for r in rows[1:] if any(v not in (None, "") for v in r)]
     if len(data) != len(members):
@@ -106,8 +125,8 @@ def main(demo, overlay_dir):
     notes = " ".join(str(v) for r in wb["Notes"].iter_rows(values_only=True) for v in r if v)
     if "licensed professional" not in notes:
         fail("Notes sheet lacks the cautions")
-    print("demo_check: %d members (%d failing or error), %d rows to add, %d marks: DXF, overlay and XLSX agree"
-          % (len(members), failing, to_add, len(res["marks"])))
+    print("demo_check: %d members (%d failing or error), %d rows to add, %d marks, %d uplift labels: DXF, overlay and XLSX agree"
+          % (len(members), failing, to_add, len(res["marks"]), flagged))
 
 
 if __name__ == "__main__":

@@ -8,11 +8,13 @@ expect.json saying what should be there. Exit status 1 on any failure.
 """
 
 import json
+import math
 import os
 import sys
 from collections import Counter
 
-OUR_LAYERS = ("FC-FAIL", "FC-BLOCKING-ADD", "FC-LABEL")
+OUR_LAYERS = ("FC-FAIL", "FC-BLOCKING-ADD", "FC-LABEL", "FC-UPLIFT")
+TEXT_LAYERS = ("FC-LABEL", "FC-UPLIFT")
 failures = []
 
 
@@ -145,7 +147,7 @@ def check_dxf(out):
                 fail("%s: layer %s not in the LAYER table" % (dst, layer))
         kinds = Counter((s[0], s[1]) for s in after_all if s[1] in OUR_LAYERS)
         for (t, layer), n in kinds.items():
-            want = "TEXT" if layer == "FC-LABEL" else "LINE"
+            want = "TEXT" if layer in TEXT_LAYERS else "LINE"
             if t != want:
                 fail("%s: %d %s on %s, want %s" % (dst, n, t, layer, want))
         # The highlight of a failing member lies on a drawn joist (checks the
@@ -154,6 +156,13 @@ def check_dxf(out):
         for s in after_all:
             if s[1] == "FC-FAIL" and s[2] not in joists:
                 fail("%s: highlight %s is not over a drawn joist" % (dst, s[2]))
+        # One uplift label per flagged bearing of results.json, each saying
+        # that bearing's uplift rounded up to the pound.
+        res = json.load(open(exp["json"]))
+        flagged = sorted("uplift %d lb" % math.ceil(b["uplift_lb"]) for b in res["uplift"]["bearings"] if b["flagged"])
+        labels = sorted(e.dxf.text for e in dout.modelspace() if e.dxf.layer.upper() == "FC-UPLIFT")
+        if labels != flagged:
+            fail("%s: FC-UPLIFT labels %s, want %s" % (dst, labels, flagged))
         for layer in din.layers:
             if layer.dxf.name not in dout.layers:
                 fail("%s: layer %s lost" % (dst, layer.dxf.name))
@@ -181,10 +190,11 @@ def check_xlsx(out):
     exp = json.load(open(os.path.join(out, "expect.json")))
     res = json.load(open(exp["json"]))
     wb = openpyxl.load_workbook(exp["xlsx"])
-    want = ["Members", "Marks", "Blocking", "Takeoff", "Inputs", "Notes"]
+    want = ["Members", "Marks", "Blocking", "Takeoff", "Uplift", "Inputs", "Notes"]
     if wb.sheetnames != want:
         fail("sheet names %s, want %s" % (wb.sheetnames, want))
         return
+    check_uplift_sheet(wb["Uplift"], res)
     t = res["takeoff"]
     rows = {
         "Members": exp["members"] + 1,
@@ -237,6 +247,53 @@ def check_xlsx(out):
     if "does not replace engineering judgement" not in notes:
         fail("Notes: the caution is missing")
     print("  sheets", wb.sheetnames, {ws.title: ws.max_row for ws in wb.worksheets})
+
+
+def check_uplift_sheet(ws, res):
+    """Uplift sheet: one row per support line, its counts and sums equal to
+    those of results.json's uplift bearings grouped here independently."""
+    groups = {}
+    for b in res["uplift"]["bearings"]:
+        g = groups.setdefault(b["support"] or "(support not known)", {"n": 0, "flagged": 0, "max": 0.0, "total": 0.0})
+        g["n"] += 1
+        g["flagged"] += 1 if b["flagged"] else 0
+        g["max"] = max(g["max"], b["uplift_lb"])
+        g["total"] += b["uplift_lb"]
+    rows = list(ws.iter_rows(values_only=True))
+    head = rows[0]
+    col = {h: i for i, h in enumerate(head)}
+    need = "Required connector capacity per bearing, ASD (lb)"
+    for h in ("Support line", "Bearings with uplift", "Flagged", "Largest uplift (lb)", "Total uplift (lb)", need, "CD"):
+        if h not in col:
+            fail("Uplift: no column %r" % h)
+            return
+    data = rows[1:]
+    if not groups:
+        if len(data) != 1 or data[0][0] != "none":
+            fail("Uplift: no uplift in results.json, sheet rows %r" % (data,))
+        return
+    if len(data) != len(groups):
+        fail("Uplift: %d rows, results.json has %d support lines with uplift" % (len(data), len(groups)))
+    for row in data:
+        g = groups.get(row[col["Support line"]])
+        if g is None:
+            fail("Uplift: support line %r not in results.json" % (row[col["Support line"]],))
+            continue
+        got = (row[col["Bearings with uplift"]], row[col["Flagged"]])
+        if got != (g["n"], g["flagged"]):
+            fail("Uplift %s: counts %s, want %s" % (row[0], got, (g["n"], g["flagged"])))
+        if abs(row[col["Largest uplift (lb)"]] - g["max"]) > 1e-9 * max(1, g["max"]) or \
+                abs(row[col["Total uplift (lb)"]] - g["total"]) > 1e-9 * max(1, g["total"]):
+            fail("Uplift %s: largest %r total %r, want %r %r" % (row[0], row[col["Largest uplift (lb)"]],
+                                                                  row[col["Total uplift (lb)"]], g["max"], g["total"]))
+        req = row[col[need]]
+        if g["flagged"] and (req is None or abs(req - g["max"]) > 1e-9 * max(1, g["max"])):
+            fail("Uplift %s: required capacity %r, want the largest uplift %r" % (row[0], req, g["max"]))
+        if not g["flagged"] and req not in (None, ""):
+            fail("Uplift %s: required capacity %r for a line with no flagged bearing" % (row[0], req))
+        if row[col["CD"]] != 1.6:
+            fail("Uplift %s: CD %r, want 1.6 (wind, NDS 2018 Table 2.3.2)" % (row[0], row[col["CD"]]))
+    print("  Uplift sheet: %d support lines agree with results.json" % len(groups))
 
 
 def main():

@@ -212,6 +212,19 @@ func printMember(w io.Writer, m check.Member, r check.Result, colour bool) {
 		}
 		fmt.Fprintf(w, "\nblocking: %d row(s) per span, at %s in from the start\n", n, strings.Join(at, ", "))
 	}
+	if len(r.Reactions) > 0 {
+		fmt.Fprintln(w, "\nreactions at the bearings (ASD, connector demand):")
+		for _, re := range r.Reactions {
+			fmt.Fprintf(w, "  bearing %d at %s in: down %s lb", re.Bearing+1, fmtVal(re.AtIn), fmtVal(re.DownLb))
+			if re.DownCombo != "" {
+				fmt.Fprintf(w, " (%s)", re.DownCombo)
+			}
+			if re.UpLb > 0 {
+				fmt.Fprintf(w, "; net uplift %s lb (%s, CD = %s)", fmtVal(re.UpLb), re.UpCombo, fmtNum(re.UpCD))
+			}
+			fmt.Fprintln(w)
+		}
+	}
 	if len(r.Info) > 0 {
 		fmt.Fprintln(w, "\nnotes:")
 		for _, s := range r.Info {

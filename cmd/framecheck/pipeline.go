@@ -536,6 +536,14 @@ func unshift(r check.Result, shift float64) check.Result {
 		at[i] = x - shift
 	}
 	r.BlockingAtIn = at
+	if len(r.Reactions) > 0 {
+		re := make([]check.Reaction, len(r.Reactions))
+		for i, x := range r.Reactions {
+			x.AtIn -= shift
+			re[i] = x
+		}
+		r.Reactions = re
+	}
 	return r
 }
 

@@ -119,7 +119,17 @@ type Design struct {
 	// so the IBC total deflection is taken under L + 0.5D (IBC 2018 Table
 	// 1604.3 footnote d). Left out: true, unless wet_service.
 	Seasoned bool
+	// UpliftReportLb is the net uplift reaction (ASD, lb) from which a
+	// bearing's uplift is flagged for a connector; smaller uplift is
+	// listed, not flagged. Every net uplift is listed whatever its size.
+	UpliftReportLb float64
 }
+
+// defaultUpliftReportLb is design.uplift_report_lb when left out: 50 lb,
+// below which nailing that any joist gets at its bearing is commonly taken
+// to hold the joist down (common practice, no source; the designer sets
+// the key to what the fastening at hand is good for).
+const defaultUpliftReportLb = 50.0
 
 // Combinations is the value of design.combinations: either a named
 // standard set or an explicit list.

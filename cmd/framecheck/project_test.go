@@ -65,6 +65,8 @@ func TestProjectErrors(t *testing.T) {
 		{"negative load", "[[zone]]\nname = \"A\"\n[[zone]]\nname = \"FLOOR\"\n∑dead_psf = -5\n",
 			"zone.dead_psf", []string{"from 0 to 1000 (psf)"}},
 		{"kcr below 1", "[design]\n∑kcr = 0.9\n", "design.kcr", []string{"from 1 to 3"}},
+		{"negative uplift report", "[design]\n∑uplift_report_lb = -1\n", "design.uplift_report_lb", []string{"from 0 to 100000 (lb)"}},
+		{"uplift report as text", "[design]\n∑uplift_report_lb = \"50 lb\"\n", "design.uplift_report_lb", []string{"expected a number"}},
 		{"absurd load", "[[zone]]\nname = \"FLOOR\"\n∑live_psf = 1e300\n", "zone.live_psf", []string{"from 0 to 1000 (psf)", "got 1e+300"}},
 		{"absurd snap tolerance", "[drawing]\n∑snap_tolerance_in = 1e300\n", "drawing.snap_tolerance_in", []string{"at most 24"}},
 		{"limit between 0 and 1", "[[zone]]\nname = \"A\"\n∑live_deflection_limit = 0.5\n",
@@ -276,6 +278,12 @@ func TestFullProject(t *testing.T) {
 	c, err := p.Design.Combinations.Combos()
 	if err != nil || len(c) != 5 || c[2].Name != "D+0.75L+0.75S" || c[4].Name != "D+0.75L+0.75(LrorS)" || len(c[4].Cases) != 2 {
 		t.Errorf("combinations %+v, %v", c, err)
+	}
+	if p.Design.UpliftReportLb != 75 {
+		t.Errorf("uplift_report_lb %v, want 75 as the file gives", p.Design.UpliftReportLb)
+	}
+	if d := DefaultProject().Design.UpliftReportLb; d != 50 {
+		t.Errorf("default uplift_report_lb %v, want 50 (PROJECT-FILE.md)", d)
 	}
 	if p.Lumber.ByLayer[0].Size != "2x12" || p.Sizing.Candidates[1] != "2x10" {
 		t.Errorf("sizes not in canonical form: %+v %+v", p.Lumber.ByLayer, p.Sizing)

@@ -70,7 +70,7 @@ var schema = []struct {
 	{"[lumber]", []string{"species", "grade", "size", "materials_file", "by_layer"}},
 	{"[[lumber.by_layer]]", []string{"layers", "species", "grade", "size"}},
 	{"[design]", []string{"top_edge_braced", "shear_at_d", "wet_service", "temperature", "incised", "kcr",
-		"add_self_weight", "combinations", "pattern_live_loads", "seasoned"}},
+		"add_self_weight", "combinations", "pattern_live_loads", "seasoned", "uplift_report_lb"}},
 	{"[loads]", []string{"default_zone"}},
 	{"[[zone]]", []string{"name", "use", "dead_psf", "live_psf", "roof_live_psf", "snow_psf", "wind_down_psf",
 		"wind_up_psf", "ceiling", "ceiling_braces_bottom", "live_deflection_limit", "total_deflection_limit",
@@ -165,6 +165,7 @@ var (
 	edgeRule      = between(0, 48, true)   // in
 	kcrRule       = between(1, 3, true)    // NDS 2018 3.5.2 uses 1.5 and 2.0
 	weightRule    = between(0, 100, true)  // board feet per blocking piece
+	upliftRule    = between(0, 1e5, true)  // lb: net uplift reported without a flag
 )
 
 func deflectionLimit(x float64) string {

@@ -159,7 +159,7 @@ func (ld *loader) lookupLumber(spT, grT, szT *table, species, grade, size string
 func (ld *loader) design(t *table) {
 	d := &ld.p.Design
 	*d = Design{TopEdgeBraced: true, Temperature: "normal", Kcr: 1.5,
-		Combinations: Combinations{Standard: StandardASCE716}, PatternLiveLoads: true}
+		Combinations: Combinations{Standard: StandardASCE716}, PatternLiveLoads: true, UpliftReportLb: defaultUpliftReportLb}
 	ld.boolean(t, "top_edge_braced", &d.TopEdgeBraced)
 	ld.boolean(t, "shear_at_d", &d.ShearAtD)
 	ld.boolean(t, "wet_service", &d.WetService)
@@ -183,6 +183,7 @@ func (ld *loader) design(t *table) {
 		ld.defaulted(t, "seasoned", "%v (IBC 2018 Table 1604.3 note d: total deflection under %s)", d.Seasoned,
 			map[bool]string{true: "L + 0.5D", false: "L + D"}[d.Seasoned])
 	}
+	ld.num(t, "uplift_report_lb", "lb", &d.UpliftReportLb, upliftRule)
 }
 
 func (ld *loader) combinations(t *table, dst *Combinations) {

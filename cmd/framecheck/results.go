@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"path/filepath"
 	"sort"
+	"strconv"
 	"strings"
 
 	"framecheck/check"
@@ -47,8 +48,73 @@ func exportResults(o *outcome, planName string) *export.Results {
 		r.BlockingRows = append(r.BlockingRows, exportRow(plan, row, ids, toInch))
 	}
 	r.Takeoff = exportTakeoff(o.takeoff)
+	r.Uplift = exportUplift(plan, o.results, o.project.Design.UpliftReportLb, toInch)
 	r.Assumptions = assumptions(o)
 	return r
+}
+
+// exportUplift lists every bearing that a net uplift reaction pulls off its
+// support under some combination, in member order then along each member,
+// with the support line it bears on (check's bearings are framing's, in the
+// same order), and flags those from reportLb up.
+func exportUplift(plan *framing.Plan, results []check.Result, reportLb, toInch float64) export.UpliftReport {
+	u := export.UpliftReport{ReportLb: reportLb}
+	n := 0
+	for k := range results {
+		for _, re := range results[k].Reactions {
+			if re.UpLb > 0 {
+				n++
+			}
+		}
+	}
+	if n == 0 {
+		return u
+	}
+	u.Bearings = make([]export.UpliftBearing, 0, n)
+	// A plan has far fewer support lines than bearings: name each once.
+	names := map[dxfimport.Pos]string{}
+	for k := range plan.Members {
+		m := &plan.Members[k]
+		if k >= len(results) {
+			break
+		}
+		for _, re := range results[k].Reactions {
+			if re.UpLb <= 0 || re.Bearing >= len(m.Bearings) {
+				continue
+			}
+			b := &m.Bearings[re.Bearing]
+			p := m.Start
+			if m.LengthIn > 0 {
+				t := re.AtIn / m.LengthIn
+				p = framing.Point{X: m.Start.X + t*(m.End.X-m.Start.X), Y: m.Start.Y + t*(m.End.Y-m.Start.Y)}
+			}
+			name, ok := names[b.Pos]
+			if !ok {
+				name = supportName(b.Pos)
+				names[b.Pos] = name
+			}
+			u.Bearings = append(u.Bearings, export.UpliftBearing{
+				Member: m.ID, Mark: m.Mark, Bearing: re.Bearing + 1,
+				Support: name, SupportLayer: b.Pos.Layer, SupportHandle: b.Pos.Handle, SupportKind: b.Kind,
+				AtIn: re.AtIn, Point: [2]float64{p.X / toInch, p.Y / toInch}, PointIn: [2]float64{p.X, p.Y},
+				UpliftLb: re.UpLb, Combo: re.UpCombo, CD: re.UpCD, Flagged: re.UpLb >= reportLb,
+			})
+		}
+	}
+	return u
+}
+
+// supportName names a support line by its layer and handle ("WALL-EXT
+// handle 2F1"), or its layer and DXF line when it has no handle; "" when
+// nothing is known of it.
+func supportName(p dxfimport.Pos) string {
+	switch {
+	case p.Handle != "":
+		return strings.TrimSpace(p.Layer + " handle " + p.Handle)
+	case p.Line > 0:
+		return strings.TrimSpace(p.Layer + " line " + strconv.Itoa(p.Line))
+	}
+	return p.Layer
 }
 
 // resultConverter maps check results onto export's types. Members identical
@@ -288,6 +354,7 @@ func assumptions(o *outcome) export.Assumptions {
 	set("design.combinations", p.Design.Combinations.String(), "")
 	set("design.pattern_live_loads", fmt.Sprint(p.Design.PatternLiveLoads), "")
 	set("design.seasoned", fmt.Sprint(p.Design.Seasoned), "")
+	set("design.uplift_report_lb", fmt.Sprint(p.Design.UpliftReportLb), "lb")
 	set("loads.default_zone", p.Loads.DefaultZone, "")
 	for _, z := range p.Zones {
 		a.Zones = append(a.Zones, export.Zone{Name: z.Name, Use: z.Use, DeadPsf: z.DeadPsf, LivePsf: z.LivePsf,
@@ -332,6 +399,11 @@ func assumptions(o *outcome) export.Assumptions {
 		"Blocking rows are decided per run: every member of a run is checked with the most rows any of its members needs.",
 		"Members crossing load-zone edges are loaded zone by zone where each zone acts (each load combination with each zone's own loads); they take the stricter deflection limits of their zones.",
 	)
+	a.Notes = append(a.Notes, fmt.Sprintf("Net uplift at a bearing is the joist's ASD reaction under the combination that gives the most "+
+		"(ASCE 7-16 2.4.1; 0.6D+0.6W with wind suction), by statics of the member as analysed. Every such bearing is listed "+
+		"(results.json \"uplift\", Uplift sheet); from design.uplift_report_lb = %s lb up it is flagged (layer %s) as the load "+
+		"a connector's allowable load for that load duration (CD = 1.6 for wind, NDS 2018 Table 2.3.2) must meet. "+
+		"No connector is named: the designer picks the part.", fmtNum(p.Design.UpliftReportLb), export.LayerUplift))
 	if p.Design.AddSelfWeight {
 		a.Notes = append(a.Notes, "Joist self-weight is added to D at 35 lb/ft3 (NDS 2018 Supplement Table 1B basis).")
 	}

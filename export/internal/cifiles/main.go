@@ -83,6 +83,7 @@ func write(td, out string, stdout io.Writer) error {
 			export.LayerFail:     len(m.Highlights),
 			export.LayerBlocking: len(m.BlockingAdds),
 			export.LayerLabel:    len(m.Labels),
+			export.LayerUplift:   len(m.Uplifts),
 		},
 		Overlay: filepath.Join(out, "overlay.dxf"),
 		XLSX:    filepath.Join(out, "schedule.xlsx"),
