@@ -1,0 +1,106 @@
+package check
+
+import "strings"
+
+// The bracing a result relies on is stated in its bending traces (issue 13
+// item 6; DOMAIN.md "Bracing relied on"): bearings brace both edges, which
+// assumes full-depth blocking, a rim board or hangers at every bearing,
+// interior ones included; the sheathing holds the top edge when
+// Settings.TopEdgeBraced; a ceiling fastened to the joists holds the bottom
+// edge when Member.BottomBracedContinuous; drawn rows and rows to add
+// brace both edges at their positions; inflection points count for the
+// bottom edge only under Settings.BraceAtInflection.
+
+// braceRec is the bracing of one result, recorded for its trace. The
+// slices are the Result's own (or new), never the engine's.
+type braceRec struct {
+	spansIn      []float64 // the Result's spans: bearings follow from the first
+	firstIn      float64   // first bearing, member position
+	drawn, added []float64 // member positions
+	nPts         int       // bracing points of the edges: bearings and rows in the member
+	topHeld      bool      // sheathing (Settings.TopEdgeBraced)
+	bottomHeld   bool      // ceiling (Member.BottomBracedContinuous)
+	continuous   bool      // the member has interior supports
+	ipRule       bool      // inflection points count (Settings.BraceAtInflection)
+	ips          []float64 // inflection points counted for the governing bottom-edge case, member positions
+	even         bool      // rows added n per span evenly spaced (no rows drawn)
+}
+
+// braceRecord records r's bracing; nPts is the number of bracing points
+// of an edge without the inflection points, ips (analysis coordinates)
+// the governing bottom-edge case's inflection points counted.
+func (e *engine) braceRecord(r *Result, nPts int, ips []float64, even bool) braceRec {
+	b := braceRec{spansIn: r.SpansIn, firstIn: e.m.Bearings[0].AtIn, drawn: r.DrawnBlockingAtIn, added: r.BlockingAtIn,
+		nPts: nPts, topHeld: e.s.TopEdgeBraced, bottomHeld: e.m.BottomBracedContinuous,
+		continuous: len(e.spanSegs) > 1, ipRule: e.inflectionRule(), even: even}
+	for _, x := range ips {
+		b.ips = append(b.ips, x+e.x0)
+	}
+	return b
+}
+
+// heldText is the formula of CL = 1 for an edge held continuously.
+func (b *braceRec) heldText(top bool) string {
+	if top {
+		return "top edge held continuously by the sheathing (design.top_edge_braced = true)"
+	}
+	return "bottom edge held continuously by a ceiling fastened to the joists (zone ceiling_braces_bottom = true)"
+}
+
+// pointsText lists an edge's bracing points in words, for the trace item
+// "bracing points" of an edge braced at points.
+func (b *braceRec) pointsText(top bool) string {
+	var s strings.Builder
+	s.WriteString("bearings at ")
+	at := b.firstIn
+	s.WriteString(num(at))
+	for _, sp := range b.spansIn {
+		at += sp
+		s.WriteString(", ")
+		s.WriteString(num(at))
+	}
+	s.WriteString(" in, each bracing both edges (assumes blocking, a rim board or hangers there)")
+	if len(b.drawn) > 0 {
+		s.WriteString("; drawn rows at ")
+		s.WriteString(numsText(b.drawn))
+		s.WriteString(" in (existing)")
+	}
+	if len(b.added) > 0 {
+		s.WriteString("; rows to add at ")
+		s.WriteString(numsText(b.added))
+		if b.even {
+			s.WriteString(" in (evenly spaced in every span)")
+		} else {
+			s.WriteString(" in (placed where the edge still failed)")
+		}
+	}
+	if top {
+		s.WriteString("; top edge not held by the sheathing (design.top_edge_braced = false)")
+		return s.String()
+	}
+	if b.continuous {
+		switch {
+		case b.ipRule && len(b.ips) > 0:
+			s.WriteString("; inflection points counted as braces (design.brace_at_inflection = true) at ")
+			s.WriteString(numsText(b.ips))
+			s.WriteString(" in")
+		case b.ipRule:
+			s.WriteString("; inflection points counted as braces (design.brace_at_inflection = true), none in the governing case")
+		default:
+			s.WriteString("; inflection points not counted as braces (design.brace_at_inflection = false)")
+		}
+	}
+	return s.String()
+}
+
+// numsText prints positions as "48, 96".
+func numsText(v []float64) string {
+	var s strings.Builder
+	for i, x := range v {
+		if i > 0 {
+			s.WriteString(", ")
+		}
+		s.WriteString(num(x))
+	}
+	return s.String()
+}
