@@ -215,12 +215,13 @@ func (e *engine) solveFrom(fixed []float64) Result {
 			break
 		}
 		s := st[j]
+		// Candidates are compared on the stretch they change: another
+		// stretch may govern the member as a whole.
 		var best *edgeEval
 		var bestSt []stretch
 		var bestExtra []float64
 		try := func(cst []stretch, cextra []float64) {
-			r := e.solverRows(fixed, cextra, cst)
-			c, _ := e.bottomEval(r)
+			c := e.localEval(e.solverRows(fixed, cextra, cst), s)
 			if best == nil || (c.passes() && !best.passes()) || (c.passes() == best.passes() && c.ratio < best.ratio-ratioTol) {
 				best, bestSt, bestExtra = &c, cst, cextra
 			}
@@ -240,8 +241,9 @@ func (e *engine) solveFrom(fixed []float64) Result {
 		if best == nil {
 			break // lu would fall below 24 in
 		}
-		st, extra, ev = bestSt, bestExtra, *best
+		st, extra = bestSt, bestExtra
 		rows = e.solverRows(fixed, extra, st)
+		ev, _ = e.bottomEval(rows)
 		steps = append(steps, e.step(rows, ev))
 		if ev.passes() {
 			r := e.resultAt(rows, &ev, false)
@@ -253,6 +255,24 @@ func (e *engine) solveFrom(fixed []float64) Result {
 	r := e.resultAt(rows, &ev0, false)
 	r.BlockingSteps = steps
 	return r
+}
+
+// localEval evaluates the bottom edge with rows over the unbraced
+// stretches inside s only (without the inflection-point rule, under which
+// no inflection-point row is tried).
+func (e *engine) localEval(rows []float64, s stretch) edgeEval {
+	ivs := e.intervals(e.m.BottomBracedContinuous, e.braces(rows))
+	var sub []interval
+	for _, iv := range ivs {
+		if iv.a >= s.a-spanPosTolIn && iv.b <= s.b+spanPosTolIn {
+			sub = append(sub, iv)
+		}
+	}
+	if e.inflectionRule() {
+		ev, _ := e.bottomEval(rows)
+		return ev
+	}
+	return e.evalEdge(false, sub)
 }
 
 // step records one iteration of solveFrom: the rows added so far (a new

@@ -69,6 +69,7 @@ func checkSettings(p *Project) (check.Settings, error) {
 	s.WetService = p.Design.WetService
 	s.Incised = p.Design.Incised
 	s.PatternLive = p.Design.PatternLiveLoads
+	s.BraceAtInflection = p.Design.BraceAtInflection
 	s.Temperature = p.Design.Temperature
 	s.Kcr = p.Design.Kcr
 	combos, err := p.Design.Combinations.Combos()

@@ -111,6 +111,10 @@ type Design struct {
 	// PatternLiveLoads applies live-type loads span by span on continuous
 	// and cantilevered members.
 	PatternLiveLoads bool
+	// BraceAtInflection counts the inflection points over interior
+	// supports of continuous members as braces of the bottom edge
+	// (design.brace_at_inflection, default false; issue 13).
+	BraceAtInflection bool
 }
 
 // Combinations is the value of design.combinations: either a named

@@ -171,6 +171,7 @@ func (ld *loader) design(t *table) {
 	ld.boolean(t, "add_self_weight", &d.AddSelfWeight)
 	ld.combinations(t, &d.Combinations)
 	ld.boolean(t, "pattern_live_loads", &d.PatternLiveLoads)
+	ld.boolean(t, "brace_at_inflection", &d.BraceAtInflection)
 }
 
 func (ld *loader) combinations(t *table, dst *Combinations) {

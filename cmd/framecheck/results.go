@@ -284,6 +284,7 @@ func assumptions(o *outcome) export.Assumptions {
 	set("design.kcr", fmt.Sprint(p.Design.Kcr), "")
 	set("design.combinations", p.Design.Combinations.String(), "")
 	set("design.pattern_live_loads", fmt.Sprint(p.Design.PatternLiveLoads), "")
+	set("design.brace_at_inflection", fmt.Sprint(p.Design.BraceAtInflection), "")
 	set("loads.default_zone", p.Loads.DefaultZone, "")
 	for _, z := range p.Zones {
 		a.Zones = append(a.Zones, export.Zone{Name: z.Name, Use: z.Use, DeadPsf: z.DeadPsf, LivePsf: z.LivePsf,
