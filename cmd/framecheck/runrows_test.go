@@ -14,6 +14,18 @@ import (
 // true, a blocking row drawn across the run at y = 72 (a third point).
 func thirdPointPlan(t *testing.T, drawn bool) (*outcome, error) {
 	t.Helper()
+	plan, toml := thirdPointFiles(t, drawn)
+	p, err := LoadProject(toml)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return runPipeline(pipelineInput{planPath: plan, project: p})
+}
+
+// thirdPointFiles writes the plan of thirdPointPlan and its project file
+// into a new folder and returns their paths.
+func thirdPointFiles(t *testing.T, drawn bool) (plan, toml string) {
+	t.Helper()
 	dir := t.TempDir()
 	var d dxfText
 	d.header("AC1009", 1)
@@ -30,12 +42,13 @@ func thirdPointPlan(t *testing.T, drawn bool) (*outcome, error) {
 	}
 	d.endsec()
 	d.eof()
-	plan := filepath.Join(dir, "roof.dxf")
+	plan = filepath.Join(dir, "roof.dxf")
 	if err := os.WriteFile(plan, []byte(d.b.String()), 0o644); err != nil {
 		t.Fatal(err)
 	}
 	// The loads of check's thirdPointRafter: D 8, Lr 20, W up 40 psf.
-	p, err := ParseProject("roof.toml", []byte(`
+	toml = filepath.Join(dir, "roof.toml")
+	err := os.WriteFile(toml, []byte(`
 [lumber]
 species = "Douglas Fir-Larch"
 grade = "No.2"
@@ -48,11 +61,11 @@ dead_psf = 8.0
 roof_live_psf = 20.0
 wind_up_psf = 40.0
 ceiling = "none"
-`))
+`), 0o644)
 	if err != nil {
 		t.Fatal(err)
 	}
-	return runPipeline(pipelineInput{planPath: plan, project: p})
+	return plan, toml
 }
 
 // TestDrawnThirdPointRow_FourPiecesToAdd is issue 13's takeoff error: a
