@@ -15,14 +15,14 @@ import "strings"
 // slices are the Result's own (or new), never the engine's.
 type braceRec struct {
 	spansIn      []float64 // the Result's spans: bearings follow from the first
-	firstIn      float64   // first bearing, member position
 	drawn, added []float64 // member positions
-	nPts         int       // bracing points of the edges: bearings and rows in the member
+	ips          []float64 // inflection points counted for the governing bottom-edge case, member positions
+	firstIn      float64   // first bearing, member position
+	nPts         int32     // bracing points of the edges: bearings and rows in the member
 	topHeld      bool      // sheathing (Settings.TopEdgeBraced)
 	bottomHeld   bool      // ceiling (Member.BottomBracedContinuous)
 	continuous   bool      // the member has interior supports
 	ipRule       bool      // inflection points count (Settings.BraceAtInflection)
-	ips          []float64 // inflection points counted for the governing bottom-edge case, member positions
 	even         bool      // rows added n per span evenly spaced (no rows drawn)
 }
 
@@ -31,7 +31,7 @@ type braceRec struct {
 // the governing bottom-edge case's inflection points counted.
 func (e *engine) braceRecord(r *Result, nPts int, ips []float64, even bool) braceRec {
 	b := braceRec{spansIn: r.SpansIn, firstIn: e.m.Bearings[0].AtIn, drawn: r.DrawnBlockingAtIn, added: r.BlockingAtIn,
-		nPts: nPts, topHeld: e.s.TopEdgeBraced, bottomHeld: e.m.BottomBracedContinuous,
+		nPts: int32(nPts), topHeld: e.s.TopEdgeBraced, bottomHeld: e.m.BottomBracedContinuous,
 		continuous: len(e.spanSegs) > 1, ipRule: e.inflectionRule(), even: even}
 	for _, x := range ips {
 		b.ips = append(b.ips, x+e.x0)

@@ -117,7 +117,7 @@ func (r *calcRecord) bendingTrace(b *bendRec, top bool) []TraceItem {
 	if iv := b.iv; iv.braced {
 		t.add("CL", 1, "", r.brace.heldText(top), Subst{}, "NDS 2018 3.3.3.3")
 	} else {
-		n := r.brace.nPts
+		n := int(r.brace.nPts)
 		if !top {
 			n += len(r.brace.ips)
 		}
