@@ -168,3 +168,80 @@ func TestDrawnRowAtBearing_RulesUnchanged(t *testing.T) {
 		t.Errorf("drawn rows at the bearings changed the result: %v -> %v", a.BlockingAtIn, b.BlockingAtIn)
 	}
 }
+
+// TestDrawnRows_Properties runs the solver on random continuous members
+// with random drawn rows, with and without the inflection-point rule: it
+// never panics, added rows are sorted, inside spans and at least 24 in
+// from every bearing and drawn row (DOMAIN.md "Blocking rows"), and a
+// member that passes has its bottom edge within 1.000. Common practice, no
+// source.
+func TestDrawnRows_Properties(t *testing.T) {
+	rnd := uint64(7)
+	next := func() float64 { // xorshift, reproducible
+		rnd ^= rnd << 13
+		rnd ^= rnd >> 7
+		rnd ^= rnd << 17
+		return float64(rnd%1_000_000) / 1_000_000
+	}
+	exercised, withIP := 0, 0
+	for i := 0; i < 300; i++ {
+		nSpans := 1 + int(next()*3)
+		var bs []Bearing
+		at := 0.0
+		for k := 0; k <= nSpans; k++ {
+			bs = append(bs, Bearing{AtIn: at, LengthIn: 3.5})
+			at += 96 + math.Round(next()*120)
+		}
+		last := bs[len(bs)-1].AtIn
+		over := 0.0
+		if next() < 0.3 {
+			over = math.Round(next() * 30)
+		}
+		m := Member{ID: "P", Size: []string{"2x8", "2x10", "2x12"}[int(next()*3)], Species: "DF-L", Grade: "No.2",
+			LengthIn: last + over, Bearings: bs, OverhangEndIn: over, SpacingIn: 16, TribIn: 16, Use: "roof",
+			Loads:     AreaLoads{DeadPsf: 5 + 10*next(), RoofLivePsf: 20, WindUpPsf: 80 * next()},
+			LiveLimit: 180, TotalLimit: 120, Repetitive: true}
+		for j := int(next() * 3); j > 0; j-- {
+			m.BlockingAtIn = append(m.BlockingAtIn, math.Round(next()*m.LengthIn))
+		}
+		s := DefaultSettings()
+		s.BraceAtInflection = next() < 0.5
+		r := CheckMember(m, s)
+		if r.Status == StatusError {
+			t.Fatalf("case %d: %v", i, r.Messages)
+		}
+		if m.HasDrawnRowsInSpans() && len(r.BlockingAtIn) > 0 {
+			exercised++
+			if nSpans > 1 && !s.BraceAtInflection {
+				withIP++
+			}
+		}
+		for j, x := range r.BlockingAtIn {
+			if j > 0 && x < r.BlockingAtIn[j-1] {
+				t.Errorf("case %d: rows not sorted %v", i, r.BlockingAtIn)
+			}
+			if x <= 0 || x >= last {
+				t.Errorf("case %d: row at %v outside the spans (0..%v)", i, x, last)
+			}
+			others := append([]float64(nil), m.BlockingAtIn...)
+			for _, b := range bs {
+				others = append(others, b.AtIn)
+			}
+			for _, y := range others {
+				if math.Abs(x-y) < minBlockingLuIn-1e-6 {
+					t.Errorf("case %d: row at %v is %.2f in from a brace at %v (drawn %v)", i, x, math.Abs(x-y), y, m.BlockingAtIn)
+				}
+			}
+		}
+		if r.Status == StatusPass {
+			for _, c := range r.Checks {
+				if c.Kind == KindBendingBottom && c.Ratio > 1+1e-9 {
+					t.Errorf("case %d: passes with bottom-edge ratio %.3f", i, c.Ratio)
+				}
+			}
+		}
+	}
+	if exercised < 30 || withIP < 10 {
+		t.Errorf("only %d cases added rows to drawn ones (%d continuous, inflection-point candidates on)", exercised, withIP)
+	}
+}
