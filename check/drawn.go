@@ -190,13 +190,13 @@ func (e *engine) inflectionRow(ci int, s stretch) (float64, bool) {
 // them. When no number of rows makes it pass, the result has only fixed
 // and says the edge fails, as with rows evenly spaced.
 func (e *engine) solveFrom(fixed []float64) Result {
-	st := e.stretches(fixed)
-	var extra []float64
-	rows := e.solverRows(fixed, extra, st)
+	rows := e.solverRows(fixed, nil, nil)
 	ev0, _ := e.bottomEval(rows)
 	if e.m.BottomBracedContinuous || ev0.passes() {
 		return e.resultAt(rows, &ev0, false)
 	}
+	st := e.stretches(fixed)
+	var extra []float64
 	steps := []BlockingStep{e.step(rows, ev0)}
 	// Rows cannot help when the edge fails even fully braced.
 	if ev0.found && ev0.mLbIn/e.sec.SIn3 > e.cases[ev0.ci].cd*e.fbNoCD*(1+ratioTol) {
