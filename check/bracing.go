@@ -23,16 +23,34 @@ type braceRec struct {
 	bottomHeld   bool      // ceiling (Member.BottomBracedContinuous)
 	continuous   bool      // the member has interior supports
 	ipRule       bool      // inflection points count (Settings.BraceAtInflection)
-	even         bool      // rows added n per span evenly spaced (no rows drawn)
+	how          rowsHow   // how the rows to add were placed
+}
+
+// rowsHow says how a result's rows to add were placed, for its trace.
+type rowsHow uint8
+
+const (
+	rowsSolved rowsHow = iota // by the solver, where the edge still failed (rows drawn)
+	rowsEven                  // n per span, evenly spaced (no rows drawn)
+	rowsGiven                 // given: the rows of its run (CheckWithRowsAt)
+	rowsFrom                  // the rows of its run, and more where the edge still failed (CheckMemberFrom)
+)
+
+// rowsHowText is the note after the positions of the rows to add.
+var rowsHowText = [...]string{
+	rowsSolved: " in (placed where the edge still failed, clear of the drawn rows)",
+	rowsEven:   " in (evenly spaced in every span)",
+	rowsGiven:  " in (the rows of its run)",
+	rowsFrom:   " in (the rows of its run, and rows placed where the edge still failed)",
 }
 
 // braceRecord records r's bracing; nPts is the number of bracing points
 // of an edge without the inflection points, ips (analysis coordinates)
 // the governing bottom-edge case's inflection points counted.
-func (e *engine) braceRecord(r *Result, nPts int, ips []float64, even bool) braceRec {
+func (e *engine) braceRecord(r *Result, nPts int, ips []float64, how rowsHow) braceRec {
 	b := braceRec{spansIn: r.SpansIn, firstIn: e.m.Bearings[0].AtIn, drawn: r.DrawnBlockingAtIn, added: r.BlockingAtIn,
 		nPts: int32(nPts), topHeld: e.s.TopEdgeBraced, bottomHeld: e.m.BottomBracedContinuous,
-		continuous: len(e.spanSegs) > 1, ipRule: e.inflectionRule(), even: even}
+		continuous: len(e.spanSegs) > 1, ipRule: e.inflectionRule(), how: how}
 	for _, x := range ips {
 		b.ips = append(b.ips, x+e.x0)
 	}
@@ -68,11 +86,7 @@ func (b *braceRec) pointsText(top bool) string {
 	if len(b.added) > 0 {
 		s.WriteString("; rows to add at ")
 		s.WriteString(numsText(b.added))
-		if b.even {
-			s.WriteString(" in (evenly spaced in every span)")
-		} else {
-			s.WriteString(" in (placed where the edge still failed)")
-		}
+		s.WriteString(rowsHowText[b.how])
 	}
 	if top {
 		s.WriteString("; top edge not held by the sheathing (design.top_edge_braced = false)")

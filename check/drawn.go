@@ -190,17 +190,21 @@ func (e *engine) inflectionRow(ci int, s stretch) (float64, bool) {
 // them. When no number of rows makes it pass, the result has only fixed
 // and says the edge fails, as with rows evenly spaced.
 func (e *engine) solveFrom(fixed []float64) Result {
+	how := rowsSolved
+	if len(fixed) > 0 {
+		how = rowsFrom
+	}
 	rows := e.solverRows(fixed, nil, nil)
 	ev0, _ := e.bottomEval(rows)
 	if e.m.BottomBracedContinuous || ev0.passes() {
-		return e.resultAt(rows, &ev0, false)
+		return e.resultAt(rows, &ev0, how)
 	}
 	st := e.stretches(fixed)
 	var extra []float64
 	steps := []BlockingStep{e.step(rows, ev0)}
 	// Rows cannot help when the edge fails even fully braced.
 	if ev0.found && ev0.mLbIn/e.sec.SIn3 > e.cases[ev0.ci].cd*e.fbNoCD*(1+ratioTol) {
-		r := e.resultAt(rows, &ev0, false)
+		r := e.resultAt(rows, &ev0, how)
 		r.BlockingSteps = steps
 		return r
 	}
@@ -246,13 +250,13 @@ func (e *engine) solveFrom(fixed []float64) Result {
 		ev, _ = e.bottomEval(rows)
 		steps = append(steps, e.step(rows, ev))
 		if ev.passes() {
-			r := e.resultAt(rows, &ev, false)
+			r := e.resultAt(rows, &ev, how)
 			r.BlockingSteps = steps
 			return r
 		}
 	}
 	rows = e.solverRows(fixed, nil, nil)
-	r := e.resultAt(rows, &ev0, false)
+	r := e.resultAt(rows, &ev0, how)
 	r.BlockingSteps = steps
 	return r
 }

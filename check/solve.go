@@ -61,7 +61,7 @@ func CheckWithRowsAt(m Member, s Settings, atIn []float64) Result {
 	if err != nil {
 		return errorResult(m, e, err)
 	}
-	return e.resultAt(rows, nil, false)
+	return e.resultAt(rows, nil, rowsGiven)
 }
 
 // CheckMemberFrom checks m under s starting from the drawn rows and rows
@@ -124,14 +124,14 @@ func (e *engine) solveBlocking() (int, []BlockingStep, *edgeEval) {
 // is the bottom edge already evaluated with those rows.
 func (e *engine) result(n int, bot *edgeEval) Result {
 	rows, _ := e.spanRows(n)
-	return e.resultAt(rows, bot, n > 0)
+	return e.resultAt(rows, bot, rowsEven)
 }
 
 // resultAt runs every check with blocking rows added at rows (member
 // positions, sorted; on top of the drawn rows); bot, when not nil, is the
-// bottom edge already evaluated with those rows. even says the rows are n
-// per span evenly spaced, for the trace.
-func (e *engine) resultAt(rows []float64, bot *edgeEval, even bool) Result {
+// bottom edge already evaluated with those rows. how says how the rows
+// were placed, for the trace.
+func (e *engine) resultAt(rows []float64, bot *edgeEval, how rowsHow) Result {
 	r := e.baseResult()
 	r.Checks = make([]CheckResult, 0, 6)
 	if len(rows) > 0 {
@@ -149,7 +149,7 @@ func (e *engine) resultAt(rows []float64, bot *edgeEval, even bool) Result {
 	}
 	e.rc = e.newCalcRecord()
 	defer func() { e.rc = nil }()
-	e.rc.brace = e.braceRecord(&r, nTop, ips, even)
+	e.rc.brace = e.braceRecord(&r, nTop, ips, how)
 	if len(e.cases) == 0 || e.mMax == 0 {
 		r.Info = append(r.Info, "no load on the member: nothing to check")
 	}
