@@ -146,6 +146,12 @@ func (e *engine) intervals(continuous bool, pts []float64) []interval {
 // Fb CD CM Ct CF Ci Cr (NDS 2018 Table 4.3.1; Cfu = 1, strong-axis bending)
 // and CL from equation 3.3-6 for each stretch.
 func (e *engine) evalEdge(top bool, ivs []interval) edgeEval {
+	return e.evalEdgeSel(top, ivs, nil)
+}
+
+// evalEdgeSel is evalEdge over the cases ci with sel[ci] (every case when
+// sel is nil).
+func (e *engine) evalEdgeSel(top bool, ivs []interval, sel []bool) edgeEval {
 	ev := edgeEval{ci: -1}
 	// Moments below 0.1% of the largest on the member do not count as
 	// compressing an edge (an overhang of a few inches, say): their stress
@@ -156,6 +162,9 @@ func (e *engine) evalEdge(top bool, ivs []interval) edgeEval {
 		inCompression := false
 		whole := iv.a <= 0 && iv.b >= e.bm.LengthIn
 		for ci := range e.cases {
+			if sel != nil && !sel[ci] {
+				continue
+			}
 			c := &e.cases[ci]
 			// A case with no moment of this sign anywhere cannot load this edge.
 			mWhole := c.mPos
@@ -229,7 +238,7 @@ func bendingTraceLen(iv interval) int {
 	if iv.braced {
 		return 7
 	}
-	return 13
+	return 14
 }
 
 // leSubst writes the numbers into an effective-length formula.

@@ -67,6 +67,7 @@ type calcRecord struct {
 	defl  [3]deflRec // live, total, long-term
 	bear  bearRec
 	col   colRec // posts
+	brace braceRec
 }
 
 // newCalcRecord starts the record of the result e is building.
@@ -89,9 +90,9 @@ func (c CheckResult) Trace() []TraceItem {
 	r := c.calc
 	switch c.Kind {
 	case KindBendingTop:
-		return r.bendingTrace(&r.bend[0])
+		return r.bendingTrace(&r.bend[0], true)
 	case KindBendingBottom:
-		return r.bendingTrace(&r.bend[1])
+		return r.bendingTrace(&r.bend[1], false)
 	case KindShear:
 		return r.shearTrace()
 	case KindDeflectionLive:
@@ -115,8 +116,9 @@ func newTracer(n int) tracer {
 	return a.tracer(n)
 }
 
-// bendingTrace writes an edge's bending calculation (NDS 2018 3.3).
-func (r *calcRecord) bendingTrace(b *bendRec) []TraceItem {
+// bendingTrace writes an edge's bending calculation (NDS 2018 3.3), top
+// or bottom, with the bracing it relied on.
+func (r *calcRecord) bendingTrace(b *bendRec, top bool) []TraceItem {
 	x := &r.ctx
 	fb := b.mLbIn / x.sIn3
 	fbAdj := b.fbStar * b.cl
@@ -127,8 +129,13 @@ func (r *calcRecord) bendingTrace(b *bendRec) []TraceItem {
 	t.add("Fb*", b.fbStar, "psi", "Fb CD CM Ct CF Ci Cr",
 		t.f("%s(%s)(%s)(%s)(%s)(%s)(%s)", x.fbPsi, b.cd, x.cm.Fb, x.ct.Fb, x.cf.Fb, x.ci.Fb, x.cr), "NDS 2018 3.3.3.8, Table 4.3.1")
 	if iv := b.iv; iv.braced {
-		t.add("CL", 1, "", "edge braced continuously", Subst{}, "NDS 2018 3.3.3.3")
+		t.add("CL", 1, "", r.brace.heldText(top), Subst{}, "NDS 2018 3.3.3.3")
 	} else {
+		n := int(r.brace.nPts)
+		if !top {
+			n += len(r.brace.ips)
+		}
+		t.add("bracing points", float64(n), "", r.brace.pointsText(top), Subst{}, "NDS 2018 3.3.3.4: lu between points of lateral support")
 		if x.cosT < 1 {
 			t.add("lu", iv.luIn, "in", "distance between bracing points along the rafter, plan distance / cos(slope)",
 				t.f("(%s - %s) / %s", iv.b+x.x0, iv.a+x.x0, x.cosT), "NDS 2018 3.3.3.4")

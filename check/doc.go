@@ -59,7 +59,8 @@
 //     stretch reaching a free end, simple-span row for a single-span
 //     member, the general row for spans of continuous members), RB, FbE
 //     and CL (Eq. 3.3-6), against the largest moment of that sign in the
-//     stretch. The inflection point is not taken as a brace; moments
+//     stretch. The inflection point is taken as a brace of the bottom edge
+//     only under Settings.BraceAtInflection (inflection.go); moments
 //     below 0.1% of the member's largest do not count as compression. The top edge
 //     is held continuously when Settings.TopEdgeBraced; the bottom edge
 //     when Member.BottomBracedContinuous. RB > 50 fails (NDS 3.3.3.7).
@@ -100,11 +101,16 @@
 //   - Blocking rows (DOMAIN rule): when the bottom edge fails with the
 //     bracing present, n = 1, 2, ... rows evenly spaced in every span (not
 //     in cantilevers), the same n in each span, until it passes or the row
-//     spacing would fall below 24 in. Rows cannot help, and none are
-//     tried, when the edge fails with CL = 1.
+//     spacing would fall below 24 in. With rows drawn in a span
+//     (Member.BlockingAtIn) they are kept and rows are added one at a time
+//     where the edge still fails (drawn.go); Result.BlockingAtIn holds only
+//     the rows to add, Result.DrawnBlockingAtIn the drawn ones. Rows cannot
+//     help, and none are tried, when the edge fails with CL = 1.
+//   - The bending traces state the bracing relied on (bracing.go).
 //   - Cr = 1.15 needs Member.Repetitive and a spacing of at most 24 in.
 //   - NDS 4.4.1.2 (lateral support by nominal d/b) is stated in
-//     Result.Info beside the calculated CL, never as the governing check.
+//     Result.Info as "the alternative rule of NDS 2018 4.4.1.2 would ask
+//     for ...", after the calculated CL, never as a requirement.
 //
 // # Speed
 //

@@ -131,6 +131,13 @@ type Settings struct {
 	Kcr       float64
 	Combos    []Combo    // nil = ASCE 7-16 2.4.1 defaults
 	Materials *Materials // nil = built-in tables
+
+	// BraceAtInflection counts the inflection points next to an interior
+	// support of a continuous member as braces of the bottom edge, for the
+	// load cases that put that edge in compression over the support
+	// (project file design.brace_at_inflection; common practice, no
+	// source). See inflection.go.
+	BraceAtInflection bool
 }
 
 // DefaultSettings returns the project-file defaults: top edge braced, no

@@ -38,10 +38,13 @@ type CheckResult struct {
 	calc *calcRecord // numbers the trace is written from (see Trace)
 }
 
-// BlockingStep is one iteration of the blocking-row solver: rows per span,
-// the bottom edge's governing unbraced length, CL and ratio.
+// BlockingStep is one iteration of the blocking-row solver: rows per span
+// (rows evenly spaced, no rows drawn) or the positions of the rows added
+// so far (rows drawn: AtIn, along the member from its start), the bottom
+// edge's governing unbraced length, CL and ratio.
 type BlockingStep struct {
 	RowsPerSpan int
+	AtIn        []float64 // rows added at this step when rows are drawn; nil otherwise
 	LuIn, CL    float64
 	Ratio       float64
 }
@@ -64,7 +67,8 @@ type Result struct {
 	MaxRatio             float64   // its ratio
 	RB                   float64   // largest slenderness ratio of an edge in compression
 	BlockingRowsPerSpan  []int     // rows added, per span
-	BlockingAtIn         []float64 // positions of the added rows along the member
+	BlockingAtIn         []float64 // positions of the added rows along the member (only the rows to add)
+	DrawnBlockingAtIn    []float64 // drawn rows the member relied on (existing, not in the takeoff)
 	BlockingSteps        []BlockingStep
 	Values               DesignValues // reference values used, with their source
 	Factors              []TraceItem  // CD per combination, CM, Ct, CF, Cfu, Ci, Cr, ...
@@ -96,8 +100,10 @@ type Reaction struct {
 	UpCD float64
 }
 
-// RowsPerSpan returns the number of blocking rows the result added in each
-// span (the same in every span), or 0.
+// RowsPerSpan returns the number of blocking rows the result added in the
+// first span (the same in every span when no rows are drawn), or 0. With
+// rows drawn the spans may differ: see BlockingRowsPerSpan and
+// BlockingAtIn.
 func (r *Result) RowsPerSpan() int {
 	if len(r.BlockingRowsPerSpan) == 0 {
 		return 0

@@ -43,7 +43,8 @@ func Size(m Member, s Settings, candidates []string, blockingPieceWeightBf float
 		a := Alternative{Size: r.Size, RowsPerSpan: r.RowsPerSpan(), MaxRatio: r.MaxRatio, Pass: r.Status == StatusPass}
 		if sec, err := ParseSize(c); err == nil && r.Status != StatusError {
 			a.BoardFeetPerFt = sec.BoardFeetPerFt()
-			a.Cost = a.BoardFeetPerFt*m.LengthIn/12 + float64(a.RowsPerSpan*len(r.SpansIn))*blockingPieceWeightBf
+			// the rows to add (with rows drawn, spans may differ in rows)
+			a.Cost = a.BoardFeetPerFt*m.LengthIn/12 + float64(len(r.BlockingAtIn))*blockingPieceWeightBf
 		}
 		out.Alternatives = append(out.Alternatives, a)
 		i := len(out.Alternatives) - 1

@@ -7,17 +7,23 @@ import (
 )
 
 // CheckMember checks m under s, adding blocking rows where the bottom
-// edge needs them: when bottom-edge bending fails with the bracing present
-// (bearings, drawn rows, ceiling switch), it tries n = 1, 2, 3, ... rows
-// evenly spaced in every span (the same n in each) until that check passes
-// or the row spacing would fall below 24 in; then the member passes or
-// fails on every check with those rows. Bad input gives Status "error"
-// with a message, never a panic.
+// edge needs them. With no rows drawn inside its spans, when bottom-edge
+// bending fails with the bracing present (bearings, ceiling switch), it
+// tries n = 1, 2, 3, ... rows evenly spaced in every span (the same n in
+// each) until that check passes or the row spacing would fall below 24
+// in. With rows drawn (m.BlockingAtIn), it keeps them and adds rows one at
+// a time where the edge still fails (see solveFrom). Then the member
+// passes or fails on every check with those rows; Result.BlockingAtIn
+// holds only the rows to add. Bad input gives Status "error" with a
+// message, never a panic.
 func CheckMember(m Member, s Settings) Result {
 	e, err := newEngine(m, s)
 	defer e.release()
 	if err != nil {
 		return errorResult(m, e, err)
+	}
+	if e.drawnInSpans() {
+		return e.solveFrom(nil)
 	}
 	n, steps, bot := e.solveBlocking()
 	r := e.result(n, bot)
@@ -40,10 +46,47 @@ func CheckWithRows(m Member, s Settings, rowsPerSpan int) Result {
 	return e.result(rowsPerSpan, nil)
 }
 
+// CheckWithRowsAt checks m under s with blocking rows added at atIn
+// (positions along the member from its start, on top of the drawn rows
+// m.BlockingAtIn): the rows its run gets when rows are drawn. A row within
+// d (the member's dressed depth) of a drawn row is that drawn row and is
+// not added; rows outside the member brace nothing and are left out.
+func CheckWithRowsAt(m Member, s Settings, atIn []float64) Result {
+	e, err := newEngine(m, s)
+	defer e.release()
+	if err != nil {
+		return errorResult(m, e, err)
+	}
+	rows, err := e.keepRows(atIn)
+	if err != nil {
+		return errorResult(m, e, err)
+	}
+	return e.resultAt(rows, nil, rowsGiven)
+}
+
+// CheckMemberFrom checks m under s starting from the drawn rows and rows
+// already added at atIn (its run's rows, kept as CheckWithRowsAt keeps
+// them), adding more, as CheckMember does from drawn rows, where the
+// bottom edge still fails. Result.BlockingAtIn holds the rows of atIn kept
+// and those added.
+func CheckMemberFrom(m Member, s Settings, atIn []float64) Result {
+	e, err := newEngine(m, s)
+	defer e.release()
+	if err != nil {
+		return errorResult(m, e, err)
+	}
+	rows, err := e.keepRows(atIn)
+	if err != nil {
+		return errorResult(m, e, err)
+	}
+	return e.solveFrom(rows)
+}
+
 // bottomEdge evaluates bottom-edge bending with n added rows per span.
 func (e *engine) bottomEdge(n int) (edgeEval, float64) {
 	rows, luRows := e.spanRows(n)
-	return e.evalEdge(false, e.intervals(e.m.BottomBracedContinuous, e.braces(rows))), luRows
+	ev, _ := e.bottomEval(rows)
+	return ev, luRows
 }
 
 // solveBlocking returns the rows per span the bottom edge needs, the
@@ -80,24 +123,33 @@ func (e *engine) solveBlocking() (int, []BlockingStep, *edgeEval) {
 // result runs every check with n added rows per span; bot, when not nil,
 // is the bottom edge already evaluated with those rows.
 func (e *engine) result(n int, bot *edgeEval) Result {
+	rows, _ := e.spanRows(n)
+	return e.resultAt(rows, bot, rowsEven)
+}
+
+// resultAt runs every check with blocking rows added at rows (member
+// positions, sorted; on top of the drawn rows); bot, when not nil, is the
+// bottom edge already evaluated with those rows. how says how the rows
+// were placed, for the trace.
+func (e *engine) resultAt(rows []float64, bot *edgeEval, how rowsHow) Result {
 	r := e.baseResult()
 	r.Checks = make([]CheckResult, 0, 6)
-	rows, _ := e.spanRows(n)
-	if n > 0 {
+	if len(rows) > 0 {
 		r.BlockingAtIn = append([]float64(nil), rows...)
-		r.BlockingRowsPerSpan = make([]int, len(e.spanSegs))
-		for i := range r.BlockingRowsPerSpan {
-			r.BlockingRowsPerSpan[i] = n
-		}
+		r.BlockingRowsPerSpan = e.rowsPerSpan(rows)
 	}
+	r.DrawnBlockingAtIn = e.drawnInModel()
 	pts := e.braces(rows)
+	nTop := len(pts)
 	top := e.evalEdge(true, e.topIntervals(pts))
-	if bot == nil {
-		b := e.evalEdge(false, e.intervals(e.m.BottomBracedContinuous, pts))
-		bot = &b
+	var ips []float64
+	if bot == nil || e.inflectionRule() {
+		b, g := e.bottomEval(rows)
+		bot, ips = &b, g
 	}
 	e.rc = e.newCalcRecord()
 	defer func() { e.rc = nil }()
+	e.rc.brace = e.braceRecord(&r, nTop, ips, how)
 	if len(e.cases) == 0 || e.mMax == 0 {
 		r.Info = append(r.Info, "no load on the member: nothing to check")
 	}
@@ -216,9 +268,11 @@ func tempName(s string) string {
 	return s
 }
 
-// lateralSupportRule states the NDS 2018 4.4.1.2 rule for the member's
-// nominal depth-to-thickness ratio, reported beside the calculated CL as
-// information (NDS 2018 4.4.1.1 lets it replace the calculation). The d/b
+// lateralSupportRule states what the NDS 2018 4.4.1.2 rule would ask for
+// at the member's nominal depth-to-thickness ratio, reported after the
+// calculated CL as "the alternative rule of 4.4.1.2 would ask for ...",
+// never as a requirement (NDS 2018 4.4.1.1 lets it replace the
+// calculation; framecheck calculates CL, issue 13 item 6). The d/b
 // limits 2, 4, 5, 6, 7 and the kind of support each asks for (none; ends;
 // compression edge; blocking or bridging; both edges) agree with
 // getRequiredRestraint in xcfem/xc python_modules/materials/awc_nds/
@@ -242,19 +296,19 @@ func lateralSupportRule(r float64) string {
 	var rule string
 	switch {
 	case r <= 2:
-		rule = "no lateral support required"
+		rule = "no lateral support"
 	case r <= 4:
-		rule = "ends held in position (full-depth blocking, bridging, hangers, nailing or bolting)"
+		rule = "the ends held in position (full-depth blocking, bridging, hangers, nailing or bolting)"
 	case r <= 5:
-		rule = "ends held in position and the compression edge held in line for its entire length"
+		rule = "the ends held in position and the compression edge held in line for its entire length"
 	case r <= 6:
-		rule = "bridging, full-depth blocking or diagonal cross bracing at intervals of at most 8 ft, compression edge held in line, ends held in position"
+		rule = "bridging, full-depth blocking or diagonal cross bracing at intervals of at most 8 ft, the compression edge held in line and the ends held in position"
 	case r <= 7:
-		rule = "both edges held in line for their entire length and ends held in position"
+		rule = "both edges held in line for their entire length and the ends held in position"
 	default:
-		rule = "outside the rule's range (d/b > 7): the calculated CL applies"
+		return fmt.Sprintf("CL above is calculated per NDS 2018 3.3.3; the alternative rule of NDS 2018 4.4.1.2 does not cover nominal d/b = %s (over 7)", num(r))
 	}
-	return fmt.Sprintf("NDS 2018 4.4.1.2, nominal d/b = %s: %s", num(r), rule)
+	return fmt.Sprintf("CL above is calculated per NDS 2018 3.3.3 with the bracing stated; the alternative rule of NDS 2018 4.4.1.2 (nominal d/b = %s) would ask for %s: for comparison only, not a requirement here", num(r), rule)
 }
 
 // errorResult is the Result of a member that could not be checked, with

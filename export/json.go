@@ -137,11 +137,11 @@ func membersFinite(ms []Member) bool {
 	for i := range ms {
 		m := &ms[i]
 		if !fin(m.Start[0], m.Start[1], m.End[0], m.End[1], m.LengthIn, m.OverhangsIn[0], m.OverhangsIn[1],
-			m.TribIn, m.SpacingIn, m.MaxRatio) || !fin(m.BearingsAtIn...) || !fin(m.SpansIn...) || !fin(m.BlockingAtIn...) {
+			m.TribIn, m.SpacingIn, m.MaxRatio) || !fin(m.BearingsAtIn...) || !fin(m.SpansIn...) || !fin(m.BlockingAtIn...) || !fin(m.DrawnBlockingAtIn...) {
 			return false
 		}
 		for _, s := range m.BlockingSteps {
-			if !fin(s.LuIn, s.CL, s.Ratio) {
+			if !fin(s.LuIn, s.CL, s.Ratio) || !fin(s.AtIn...) {
 				return false
 			}
 		}

@@ -88,6 +88,9 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 	w.num("max_ratio", m.MaxRatio)
 	w.ints("blocking_rows_per_span", m.BlockingRowsPerSpan)
 	w.floats("blocking_at_in", m.BlockingAtIn)
+	if len(m.DrawnBlockingAtIn) > 0 {
+		w.floats("drawn_blocking_at_in", m.DrawnBlockingAtIn)
+	}
 	if len(m.BlockingSteps) > 0 {
 		w.key("blocking_steps")
 		w.b = append(w.b, '[')
@@ -99,6 +102,9 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 			w.first = true
 			w.key("rows_per_span")
 			w.b = strconv.AppendInt(w.b, int64(s.RowsPerSpan), 10)
+			if len(s.AtIn) > 0 {
+				w.floats("added_at_in", s.AtIn)
+			}
 			w.num("lu_in", s.LuIn)
 			w.num("cl", s.CL)
 			w.num("ratio", s.Ratio)

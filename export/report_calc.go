@@ -20,6 +20,8 @@ type markCalc struct {
 	Factors                                   []traceLine
 	Checks                                    []checkCalc
 	Steps                                     []stepRow
+	StepsDrawn                                bool     // rows drawn: the solver placed rows one at a time
+	Bracing                                   []string // the bracing relied on, edge by edge
 	Messages                                  []string
 }
 
@@ -41,10 +43,12 @@ type checkCalc struct {
 	Title, Kind, Combo, Clause                    string
 	Lines                                         []traceLine
 	Actual, Allowable, Unit, Ratio, Verdict, Band string
+	After                                         []string // printed after the result: the NDS 4.4.1.2 comparison
 }
 
-// stepRow is one iteration of the blocking-row solver.
-type stepRow struct{ Rows, Lu, CL, Ratio, Verdict string }
+// stepRow is one iteration of the blocking-row solver: rows per span, or
+// with rows drawn the number of rows added and where (At).
+type stepRow struct{ Rows, Lu, CL, Ratio, Verdict, At string }
 
 // membersListed is how many member ids a mark's calculation names.
 const membersListed = 40
@@ -143,13 +147,16 @@ func fillCalc(c *markCalc, r *Results, m *Member) {
 			keyValue{"Use, ceiling", zone.Use + ", " + zone.Ceiling},
 			keyValue{"Deflection limits (live, total)", limitText(zone.LiveDeflectionLimit) + ", " + limitText(zone.TotalDeflectionLimit)})
 	}
+	if len(m.DrawnBlockingAtIn) > 0 {
+		c.Inputs = append(c.Inputs, keyValue{"Blocking rows drawn, existing (from start)", numList(m.DrawnBlockingAtIn) + " in"})
+	}
 	rows := intList(m.BlockingRowsPerSpan)
 	if rows == "" {
 		rows = "none added"
 	}
-	c.Inputs = append(c.Inputs, keyValue{"Blocking rows per span", rows})
+	c.Inputs = append(c.Inputs, keyValue{"Blocking rows to add, per span", rows})
 	if len(m.BlockingAtIn) > 0 {
-		c.Inputs = append(c.Inputs, keyValue{"Blocking rows at (from start)", numList(m.BlockingAtIn) + " in"})
+		c.Inputs = append(c.Inputs, keyValue{"Blocking rows to add at (from start)", numList(m.BlockingAtIn) + " in"})
 	}
 	for _, dv := range r.Assumptions.DesignValues {
 		if dv.Species == m.Species && dv.Grade == m.Grade && (dv.Size == "" || dv.Size == m.Size || !strings.Contains(dv.Size, "x")) {
@@ -202,13 +209,58 @@ func fillCalc(c *markCalc, r *Results, m *Member) {
 		}
 		c.Checks = append(c.Checks, cc)
 	}
+	c.Bracing = bracingLines(m)
+	// The NDS 2018 4.4.1.2 comparison goes after the last CL result.
+	for i := len(c.Checks) - 1; i >= 0; i-- {
+		if k := c.Checks[i].Kind; k == KindBendingTop || k == KindBendingBottom {
+			for _, s := range m.Info {
+				if strings.Contains(s, "4.4.1.2") {
+					c.Checks[i].After = append(c.Checks[i].After, s)
+				}
+			}
+			break
+		}
+	}
 	for _, s := range m.BlockingSteps {
 		v := "passes"
 		if !finite(s.Ratio) || s.Ratio > 1 {
 			v = "fails"
 		}
-		c.Steps = append(c.Steps, stepRow{Rows: strconv.Itoa(s.RowsPerSpan), Lu: fmtNum(s.LuIn), CL: fmtNum(s.CL), Ratio: ratioText(s.Ratio), Verdict: v})
+		row := stepRow{Rows: strconv.Itoa(s.RowsPerSpan), Lu: fmtNum(s.LuIn), CL: fmtNum(s.CL), Ratio: ratioText(s.Ratio), Verdict: v}
+		if s.AtIn != nil {
+			c.StepsDrawn = true
+			row.Rows, row.At = strconv.Itoa(len(s.AtIn)), numList(s.AtIn)
+		}
+		c.Steps = append(c.Steps, row)
 	}
+}
+
+// bracingLines states, edge by edge, the bracing the member's bending
+// checks relied on, from their traces: the "bracing points" step, or CL = 1
+// for an edge held continuously (check's bracing.go writes both).
+func bracingLines(m *Member) []string {
+	var out []string
+	bottom := false
+	for _, ch := range m.Checks {
+		edge := "Top edge: "
+		switch ch.Kind {
+		case KindBendingTop:
+		case KindBendingBottom:
+			edge, bottom = "Bottom edge: ", true
+		default:
+			continue
+		}
+		for _, it := range ch.Trace {
+			if it.Name == "bracing points" || (it.Name == "CL" && it.Subst == "" && strings.Contains(it.Formula, "held continuously")) {
+				out = append(out, edge+it.Formula)
+				break
+			}
+		}
+	}
+	if len(out) > 0 && !bottom {
+		out = append(out, "Bottom edge: not in compression under any combination")
+	}
+	return out
 }
 
 func newTraceLine(t TraceItem) traceLine {

@@ -214,6 +214,7 @@ At each flagged bearing a connector is needed whose allowable load for the combi
 {{if .Messages}}<p class="msgs">{{range .Messages}}{{.}}<br>{{end}}</p>{{end}}
 <h4>Inputs</h4>
 <table class="inputs">{{range .Inputs}}<tr><th>{{.Key}}</th><td>{{.Value}}</td></tr>{{end}}</table>
+{{if .Bracing}}<h4>Bracing relied on</h4><ul class="bracing">{{range .Bracing}}<li>{{.}}</li>{{end}}</ul>{{end}}
 {{if .DesignValues}}<h4>Reference design values</h4>
 <table><tr><th>value</th><th></th><th>size</th><th>source</th></tr>{{range .DesignValues}}<tr><td>{{.Name}}</td><td class="n">{{num .Value}} {{.Unit}}</td><td>{{.Size}}</td><td>{{.Source}}</td></tr>{{end}}</table>{{end}}
 {{if .AreaLoads}}<h4>Loads on the tributary width</h4>
@@ -227,11 +228,14 @@ At each flagged bearing a connector is needed whose allowable load for the combi
 <h4>Checks</h4>
 {{range .Checks}}<div class="check {{.Band}}" data-kind="{{.Kind}}"><h4>{{.Title}}, {{.Combo}}<span class="clause">{{.Clause}}</span></h4>
 {{range .Lines}}{{template "line" .}}{{end}}
-<div class="result {{if eq .Verdict "OK"}}ok{{else}}ng{{end}}">{{.Actual}} {{.Unit}} / {{.Allowable}} {{.Unit}} = <span class="ratio">{{.Ratio}}</span> {{if eq .Verdict "OK"}}&le; 1.000{{else}}&gt; 1.000{{end}}: {{.Verdict}}</div></div>
+<div class="result {{if eq .Verdict "OK"}}ok{{else}}ng{{end}}">{{.Actual}} {{.Unit}} / {{.Allowable}} {{.Unit}} = <span class="ratio">{{.Ratio}}</span> {{if eq .Verdict "OK"}}&le; 1.000{{else}}&gt; 1.000{{end}}: {{.Verdict}}</div>
+{{range .After}}<p class="hint alt-rule">{{.}}</p>{{end}}</div>
 {{end}}
-{{if .Steps}}<h4>Blocking rows: bottom-edge bending for each number of rows tried (rows evenly spaced in every span; CL by NDS 2018 3.3.3)</h4>
+{{if .Steps}}{{if .StepsDrawn}}<h4>Blocking rows: bottom-edge bending with the drawn rows, then each row added where the edge still failed (CL by NDS 2018 3.3.3)</h4>
+<table class="steps"><tr><th>rows added</th><th>lu, in</th><th>CL</th><th>ratio</th><th></th><th>rows added at, in</th></tr>
+{{range .Steps}}<tr><td class="n">{{.Rows}}</td><td class="n">{{.Lu}}</td><td class="n">{{.CL}}</td><td class="n">{{.Ratio}}</td><td>{{.Verdict}}</td><td>{{.At}}</td></tr>{{end}}</table>{{else}}<h4>Blocking rows: bottom-edge bending for each number of rows tried (rows evenly spaced in every span; CL by NDS 2018 3.3.3)</h4>
 <table class="steps"><tr><th>rows per span</th><th>lu, in</th><th>CL</th><th>ratio</th><th></th></tr>
-{{range .Steps}}<tr><td class="n">{{.Rows}}</td><td class="n">{{.Lu}}</td><td class="n">{{.CL}}</td><td class="n">{{.Ratio}}</td><td>{{.Verdict}}</td></tr>{{end}}</table>{{end}}
+{{range .Steps}}<tr><td class="n">{{.Rows}}</td><td class="n">{{.Lu}}</td><td class="n">{{.CL}}</td><td class="n">{{.Ratio}}</td><td>{{.Verdict}}</td></tr>{{end}}</table>{{end}}{{end}}
 </article>
 {{end}}</section>
 

@@ -94,7 +94,10 @@ type Member struct {
 	MaxRatio    float64 `json:"max_ratio"`
 
 	BlockingRowsPerSpan []int     `json:"blocking_rows_per_span"`
-	BlockingAtIn        []float64 `json:"blocking_at_in"` // along the member from Start
+	BlockingAtIn        []float64 `json:"blocking_at_in"` // rows to add, along the member from Start
+	// DrawnBlockingAtIn are the rows drawn on the plan that the member
+	// relied on (existing: not in the takeoff), along it from Start.
+	DrawnBlockingAtIn []float64 `json:"drawn_blocking_at_in,omitempty"`
 	// BlockingSteps are the solver's iterations that led to the rows,
 	// and Factors the adjustment factors used (CM, Ct, CF, Cr, ...): both
 	// for the written-out calculation in the report.
@@ -138,10 +141,13 @@ type TraceItem struct {
 // the rows per span tried, the bottom edge's unbraced length and CL, and
 // the bending ratio that resulted.
 type BlockingStep struct {
-	RowsPerSpan int     `json:"rows_per_span"`
-	LuIn        float64 `json:"lu_in"`
-	CL          float64 `json:"cl"`
-	Ratio       float64 `json:"ratio"`
+	RowsPerSpan int `json:"rows_per_span"`
+	// AtIn are the rows added so far when rows are drawn (placed one at
+	// a time rather than n per span), along the member from Start.
+	AtIn  []float64 `json:"added_at_in,omitempty"`
+	LuIn  float64   `json:"lu_in"`
+	CL    float64   `json:"cl"`
+	Ratio float64   `json:"ratio"`
 }
 
 // Mark is one line of the framing schedule: members identical for design.

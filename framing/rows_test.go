@@ -125,3 +125,36 @@ func TestPlaceRowsOnHandBuiltPlan(t *testing.T) {
 		t.Errorf("rows %+v, want 2 pieces of 24 - 1.5 = 22.5 in at y=60", rows)
 	}
 }
+
+// TestPlaceRows_DrawnBaysNotCounted: a bay whose two joists both carry a
+// drawn row within d of the row to add is blocked already and gets no
+// piece; a row blocked across every bay is not laid (the takeoff counts
+// only pieces to add; issue 13). 2x10: d = 9.25 in (NDS 2018 Supplement
+// Table 1B).
+func TestPlaceRows_DrawnBaysNotCounted(t *testing.T) {
+	pl := newPlan().walls(-10, 100, 0, 144).joists(0, 144, 0, 16, 32, 48, 64).group(DefaultOptions())
+	// drawn blocking at 72 across the first three joists (two bays), and
+	// at 100 across all five
+	for k := range pl.Members {
+		if x := pl.Members[k].Start.X; x <= 16.5 {
+			pl.Members[k].ExistingBlockingAtIn = []float64{72, 100}
+		} else if x <= 32.5 {
+			pl.Members[k].ExistingBlockingAtIn = []float64{72, 100}
+		} else {
+			pl.Members[k].ExistingBlockingAtIn = []float64{100}
+		}
+	}
+	rows := pl.PlaceRows(0, []float64{76, 40, 108})
+	if len(rows) != 2 {
+		t.Fatalf("rows %+v, want 2 (the one at 108 is on the drawn row at 100)", rows)
+	}
+	if rows[0].Pieces != 2 || rows[1].Pieces != 4 {
+		t.Errorf("pieces %d, %d; want 2 (two bays drawn at 72) and 4", rows[0].Pieces, rows[1].Pieces)
+	}
+	if rows[0].ID != "R1-B1" || rows[1].ID != "R1-B2" {
+		t.Errorf("ids %s %s", rows[0].ID, rows[1].ID)
+	}
+	if to := BuildTakeoff(pl, rows); to.BlockingPieces != 6 {
+		t.Errorf("takeoff: %d pieces, want 6", to.BlockingPieces)
+	}
+}

@@ -157,6 +157,15 @@ func buildMember(a *memberArgs, set map[string]bool) (check.Member, check.Settin
 	return m, settings, ""
 }
 
+// valList prints positions as "72, 144".
+func valList(xs []float64) string {
+	at := make([]string, len(xs))
+	for i, x := range xs {
+		at[i] = fmtVal(x)
+	}
+	return strings.Join(at, ", ")
+}
+
 // printMember writes the member, its design values and factors, each
 // check with its trace, the blocking rows and the verdict.
 func printMember(w io.Writer, m check.Member, r check.Result, colour bool) {
@@ -202,15 +211,22 @@ func printMember(w io.Writer, m check.Member, r check.Result, colour bool) {
 	if len(r.BlockingSteps) > 0 {
 		fmt.Fprintln(w, "\nblocking rows for the bottom edge:")
 		for _, s := range r.BlockingSteps {
+			if s.AtIn != nil {
+				fmt.Fprintf(w, "  %d added (at %s in): lu %s in, CL %.3f, ratio %.3f\n", len(s.AtIn), valList(s.AtIn), fmtVal(s.LuIn), s.CL, s.Ratio)
+				continue
+			}
 			fmt.Fprintf(w, "  %d per span: lu %s in, CL %.3f, ratio %.3f\n", s.RowsPerSpan, fmtVal(s.LuIn), s.CL, s.Ratio)
 		}
 	}
-	if n := r.RowsPerSpan(); n > 0 {
-		at := make([]string, len(r.BlockingAtIn))
-		for i, x := range r.BlockingAtIn {
-			at[i] = fmtVal(x)
+	if len(r.DrawnBlockingAtIn) > 0 {
+		fmt.Fprintf(w, "\nblocking drawn (existing): at %s in from the start\n", valList(r.DrawnBlockingAtIn))
+	}
+	if len(r.BlockingAtIn) > 0 {
+		if len(r.DrawnBlockingAtIn) == 0 {
+			fmt.Fprintf(w, "\nblocking: %d row(s) per span, at %s in from the start\n", r.RowsPerSpan(), valList(r.BlockingAtIn))
+		} else {
+			fmt.Fprintf(w, "blocking to add: %d row(s), at %s in from the start\n", len(r.BlockingAtIn), valList(r.BlockingAtIn))
 		}
-		fmt.Fprintf(w, "\nblocking: %d row(s) per span, at %s in from the start\n", n, strings.Join(at, ", "))
 	}
 	if len(r.Reactions) > 0 {
 		fmt.Fprintln(w, "\nreactions at the bearings (ASD, connector demand):")

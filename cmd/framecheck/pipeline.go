@@ -69,6 +69,7 @@ func checkSettings(p *Project) (check.Settings, error) {
 	s.WetService = p.Design.WetService
 	s.Incised = p.Design.Incised
 	s.PatternLive = p.Design.PatternLiveLoads
+	s.BraceAtInflection = p.Design.BraceAtInflection
 	s.Temperature = p.Design.Temperature
 	s.Kcr = p.Design.Kcr
 	s.Seasoned = p.Design.Seasoned
@@ -134,47 +135,7 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 		sizeRuns(plan, inputs, shifts, usable, settings, o)
 	}
 
-	// Members identical for design checked with the same rows share one result.
-	withRows := map[string]check.Result{}
-	// Rows per run: the run gets the most rows any member needs, and every
-	// member of the run is checked with them (DOMAIN.md "Blocking rows").
-	for ri, run := range plan.Runs {
-		n, ref := 0, -1
-		for _, k := range run.Members {
-			if !usable[k] {
-				continue
-			}
-			if r := o.results[k].RowsPerSpan(); ref < 0 || r > n {
-				n, ref = r, k
-			}
-		}
-		if n == 0 || ref < 0 {
-			continue
-		}
-		for _, k := range run.Members {
-			if usable[k] && o.results[k].RowsPerSpan() != n {
-				cm := inputs[k]
-				cm.Size = o.results[k].Size
-				key := fmt.Sprintf("%d|%s", n, memberKey(cm))
-				r, ok := withRows[key]
-				if !ok {
-					r = check.CheckWithRows(cm, settings, n)
-					withRows[key] = r
-				}
-				r.ID = cm.ID
-				o.results[k] = unshift(r, shifts[k])
-			}
-		}
-		// Positions along the run's first member, from its Start:
-		// PlaceRows offsets each member by its own first bearing.
-		first := &plan.Members[run.Members[0]]
-		refM := &plan.Members[ref]
-		var at []float64
-		for _, x := range o.results[ref].BlockingAtIn {
-			at = append(at, x-firstBearing(refM)+firstBearing(first))
-		}
-		o.rows = append(o.rows, plan.PlaceRows(ri, at)...)
-	}
+	decideRunRows(plan, inputs, shifts, usable, settings, o)
 
 	// Final sizes, then marks and the takeoff.
 	for k := range plan.Members {
@@ -531,11 +492,25 @@ func unshift(r check.Result, shift float64) check.Result {
 	if shift == 0 {
 		return r
 	}
-	at := make([]float64, len(r.BlockingAtIn))
-	for i, x := range r.BlockingAtIn {
-		at[i] = x - shift
+	move := func(xs []float64) []float64 {
+		if xs == nil {
+			return nil
+		}
+		at := make([]float64, len(xs))
+		for i, x := range xs {
+			at[i] = x - shift
+		}
+		return at
 	}
-	r.BlockingAtIn = at
+	r.BlockingAtIn = move(r.BlockingAtIn)
+	r.DrawnBlockingAtIn = move(r.DrawnBlockingAtIn)
+	if len(r.BlockingSteps) > 0 && r.BlockingSteps[0].AtIn != nil {
+		steps := append([]check.BlockingStep(nil), r.BlockingSteps...)
+		for i := range steps {
+			steps[i].AtIn = move(steps[i].AtIn)
+		}
+		r.BlockingSteps = steps
+	}
 	if len(r.Reactions) > 0 {
 		re := make([]check.Reaction, len(r.Reactions))
 		for i, x := range r.Reactions {

@@ -123,6 +123,10 @@ type Design struct {
 	// bearing's uplift is flagged for a connector; smaller uplift is
 	// listed, not flagged. Every net uplift is listed whatever its size.
 	UpliftReportLb float64
+	// BraceAtInflection counts the inflection points over interior
+	// supports of continuous members as braces of the bottom edge
+	// (design.brace_at_inflection, default false; issue 13).
+	BraceAtInflection bool
 }
 
 // defaultUpliftReportLb is design.uplift_report_lb when left out: 50 lb,

@@ -177,7 +177,8 @@ func TestDefaultProject(t *testing.T) {
 	}
 	d := p.Design
 	if !d.TopEdgeBraced || d.ShearAtD || d.WetService || d.Temperature != "normal" || d.Incised || d.Kcr != 1.5 ||
-		d.AddSelfWeight || d.Combinations.Standard != StandardASCE716 || d.Combinations.List != nil || !d.PatternLiveLoads {
+		d.AddSelfWeight || d.Combinations.Standard != StandardASCE716 || d.Combinations.List != nil || !d.PatternLiveLoads ||
+		d.BraceAtInflection {
 		t.Errorf("design %+v", d)
 	}
 	if p.Lumber.Species != "Douglas Fir-Larch" || p.Lumber.Grade != "No.2" || p.Lumber.Size != "2x10" || p.Lumber.ByLayer != nil {
@@ -268,6 +269,9 @@ func TestFullProject(t *testing.T) {
 	}
 	if len(p.DefaultsUsed()) != 2 { // bearing_in of the dropped-beam and ledger tables
 		t.Errorf("defaults used in a full file: %q", p.DefaultsUsed())
+	}
+	if !p.Design.BraceAtInflection {
+		t.Error("design.brace_at_inflection = true not read")
 	}
 	if p.Supports[1].BearingIn != 3.5 || p.Supports[3].BearingIn != 1.5 {
 		t.Errorf("bearing by kind: %+v", p.Supports)

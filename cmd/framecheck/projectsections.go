@@ -184,6 +184,7 @@ func (ld *loader) design(t *table) {
 			map[bool]string{true: "L + 0.5D", false: "L + D"}[d.Seasoned])
 	}
 	ld.num(t, "uplift_report_lb", "lb", &d.UpliftReportLb, upliftRule)
+	ld.boolean(t, "brace_at_inflection", &d.BraceAtInflection)
 }
 
 func (ld *loader) combinations(t *table, dst *Combinations) {

@@ -147,6 +147,7 @@ func (cv *resultConverter) member(m *framing.Member, res *check.Result, toInch f
 		MaxRatio:            res.MaxRatio,
 		BlockingRowsPerSpan: res.BlockingRowsPerSpan,
 		BlockingAtIn:        res.BlockingAtIn,
+		DrawnBlockingAtIn:   res.DrawnBlockingAtIn,
 		Status:              res.Status,
 	}
 	if em.Size == "" {
@@ -175,7 +176,7 @@ func (cv *resultConverter) member(m *framing.Member, res *check.Result, toInch f
 		if _, ok := cv.steps[key]; !ok {
 			var ss []export.BlockingStep
 			for _, s := range res.BlockingSteps {
-				ss = append(ss, export.BlockingStep{RowsPerSpan: s.RowsPerSpan, LuIn: s.LuIn, CL: s.CL, Ratio: s.Ratio})
+				ss = append(ss, export.BlockingStep{RowsPerSpan: s.RowsPerSpan, AtIn: s.AtIn, LuIn: s.LuIn, CL: s.CL, Ratio: s.Ratio})
 			}
 			cv.steps[key] = ss
 		}
@@ -355,6 +356,7 @@ func assumptions(o *outcome) export.Assumptions {
 	set("design.pattern_live_loads", fmt.Sprint(p.Design.PatternLiveLoads), "")
 	set("design.seasoned", fmt.Sprint(p.Design.Seasoned), "")
 	set("design.uplift_report_lb", fmt.Sprint(p.Design.UpliftReportLb), "lb")
+	set("design.brace_at_inflection", fmt.Sprint(p.Design.BraceAtInflection), "")
 	set("loads.default_zone", p.Loads.DefaultZone, "")
 	for _, z := range p.Zones {
 		a.Zones = append(a.Zones, export.Zone{Name: z.Name, Use: z.Use, DeadPsf: z.DeadPsf, LivePsf: z.LivePsf,
@@ -395,8 +397,6 @@ func assumptions(o *outcome) export.Assumptions {
 	})
 	a.Notes = append(a.Notes,
 		"Members are sawn-lumber joists under uniform load on their tributary width; spans are centre-to-centre of bearings; an edge joist's tributary width is half the gap to its one neighbour (plus any drawing.edge_distance_in).",
-		"The top edge is braced by the sheathing when design.top_edge_braced is true; the bottom edge only at bearings, blocking rows and by a ceiling fastened directly to the joists where a zone says so.",
-		"Blocking rows are decided per run: every member of a run is checked with the most rows any of its members needs.",
 		"Members crossing load-zone edges are loaded zone by zone where each zone acts (each load combination with each zone's own loads); they take the stricter deflection limits of their zones.",
 	)
 	a.Notes = append(a.Notes, fmt.Sprintf("Net uplift at a bearing is the joist's ASD reaction under the combination that gives the most "+
@@ -404,6 +404,7 @@ func assumptions(o *outcome) export.Assumptions {
 		"(results.json \"uplift\", Uplift sheet); from design.uplift_report_lb = %s lb up it is flagged (layer %s) as the load "+
 		"a connector's allowable load for that load duration (CD = 1.6 for wind, NDS 2018 Table 2.3.2) must meet. "+
 		"No connector is named: the designer picks the part.", fmtNum(p.Design.UpliftReportLb), export.LayerUplift))
+	a.Notes = append(a.Notes, bracingNotes(p)...)
 	if p.Design.AddSelfWeight {
 		a.Notes = append(a.Notes, "Joist self-weight is added to D at 35 lb/ft3 (NDS 2018 Supplement Table 1B basis).")
 	}
@@ -412,6 +413,39 @@ func assumptions(o *outcome) export.Assumptions {
 	}
 	a.Notes = append(a.Notes, drawingFindings(o)...)
 	return a
+}
+
+// bracingNotes states once, for the whole run, the lateral bracing the
+// bending checks rely on (issue 13 item 6; DOMAIN.md "Bracing relied
+// on"); each mark's calculation lists the braces of its own member.
+func bracingNotes(p *Project) []string {
+	notes := []string{"Bracing, bearings: every bearing, interior bearings included, is taken as a brace of both edges of the joist (CL, NDS 2018 3.3.3); this assumes full-depth blocking, a rim board or joist hangers at each bearing."}
+	if p.Design.TopEdgeBraced {
+		notes = append(notes, "Bracing, top edge: held continuously by the sheathing fastened to it (design.top_edge_braced = true), so CL = 1 for the top edge.")
+	} else {
+		notes = append(notes, "Bracing, top edge: not held by the sheathing (design.top_edge_braced = false); braced only at bearings and blocking rows.")
+	}
+	var ceiling []string
+	for _, z := range p.Zones {
+		if z.CeilingBracesBottom {
+			ceiling = append(ceiling, z.Name)
+		}
+	}
+	if len(ceiling) > 0 {
+		notes = append(notes, fmt.Sprintf("Bracing, bottom edge: held continuously by a ceiling fastened directly to the joists in zone(s) %s (ceiling_braces_bottom = true); elsewhere braced only at bearings, blocking rows and, where enabled, inflection points.", strings.Join(ceiling, ", ")))
+	} else {
+		notes = append(notes, "Bracing, bottom edge: no zone has a ceiling fastened directly to the joists (ceiling_braces_bottom); the bottom edge is braced only at bearings, blocking rows and, where enabled, inflection points.")
+	}
+	notes = append(notes,
+		fmt.Sprintf("Bracing, drawn rows: blocking drawn on the plan (layers %s) is existing bracing of both edges at its position; it is kept and not counted in the takeoff.", strings.Join(p.Layers.Blocking, ", ")),
+		"Bracing, rows to add: where the bottom edge still fails, rows are added: with no row drawn in the spans, n rows evenly spaced in every span (the same n in each) until it passes or lu would fall below 24 in; with rows drawn, one row at a time in the stretch where the edge still fails, spaced to shorten its longest unbraced length, never within the joist depth d of a drawn row. Rows are decided per run: every member of a run is braced by, and checked with, the run's rows. Only rows to add are in the takeoff.")
+	if p.Design.BraceAtInflection {
+		notes = append(notes, "Bracing, inflection points: over interior supports of continuous joists, the inflection point on each side is counted as a brace of the bottom edge for the load cases whose moment there is negative (design.brace_at_inflection = true, common practice).")
+	} else {
+		notes = append(notes, "Bracing, inflection points: not counted as braces (design.brace_at_inflection = false); over interior supports the bottom edge is braced at bearings and blocking rows only.")
+	}
+	notes = append(notes, "CL is calculated per NDS 2018 3.3.3 with this bracing; the alternative rule of NDS 2018 4.4.1.2 (lateral support by nominal d/b) is shown after each CL result for comparison only, never as a requirement.")
+	return notes
 }
 
 // mostFindings caps the drawing findings listed in the notes.

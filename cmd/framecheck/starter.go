@@ -70,6 +70,7 @@ add_self_weight = false       # true: add the joist's own weight to D (otherwise
 combinations = "ASCE 7-16"    # the ASD set of ASCE 7-16 2.4.1, or a list: ["D", "D+L", "D+0.75L+0.75S", "0.6D+0.6W"]
 pattern_live_loads = true     # also load live-type loads span by span on continuous and cantilevered joists
 uplift_report_lb = 50.0       # net uplift reactions (ASD, lb) from this size up are flagged for a connector; smaller ones are listed
+brace_at_inflection = false   # true: count the inflection point over an interior support as a brace of the bottom edge
 
 [loads]
 default_zone = "FLOOR"        # zone of joists outside every drawn outline (with a single zone, that zone)
