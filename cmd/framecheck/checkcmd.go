@@ -593,9 +593,9 @@ func rowsText(rows []int) string {
 func statusText(colour bool, s string) string {
 	switch s {
 	case "pass":
-		return paint(colour, "32", "pass")
+		return paint(colour, colourGreen, "pass")
 	case "fail":
-		return paint(colour, "31", "FAIL")
+		return paint(colour, colourRed, "FAIL")
 	}
-	return paint(colour, "33", "ERROR")
+	return paint(colour, colourYellow, "ERROR")
 }

@@ -90,9 +90,10 @@ func useColour(w io.Writer) bool {
 
 // ANSI colours for the terminal summary.
 const (
-	colourRed   = "\x1b[31m"
-	colourGreen = "\x1b[32m"
-	colourBold  = "\x1b[1m"
+	colourRed    = "\x1b[31m"
+	colourGreen  = "\x1b[32m"
+	colourYellow = "\x1b[33m"
+	colourBold   = "\x1b[1m"
 )
 
 // paint wraps s in an ANSI colour when on is true.
