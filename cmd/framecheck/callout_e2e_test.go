@@ -1,0 +1,88 @@
+package main
+
+import (
+	"strings"
+	"testing"
+
+	"framecheck/export"
+)
+
+// calloutPlanText is the corpus's small plan (five joists at y = 16 ...
+// 80, 12 ft simple span) with one label-layer span line and callout per
+// group of joists: texts[i] on a line across the joists with y in
+// [lo[i], hi[i]].
+func calloutPlanText(texts []string, lo, hi []float64) string {
+	var d dxfText
+	d.header("AC1015", 1)
+	d.section("ENTITIES")
+	d.plan("WALL", "JOIST", 5, 0, 0)
+	for i, s := range texts {
+		x := 30 + 20*float64(i)
+		d.line("FRAMING-NOTE", x, lo[i]-4, x, hi[i]+4)
+		d.text("FRAMING-NOTE", x+2, (lo[i]+hi[i])/2, 4, s)
+	}
+	d.endsec()
+	d.eof()
+	return d.String()
+}
+
+// Callouts in the trade's spellings reach the check: species and grade
+// from a callout override the project's (the design values used are
+// Hem-Fir No.1's), a built-up member is an error saying built-up members
+// are not checked (never one ply checked in its place), and a metric
+// section is an error saying how to map it. The other members are
+// checked; exit 1.
+func TestCalloutsReachTheCheck(t *testing.T) {
+	plan := calloutPlanText(
+		[]string{`(2) 2x10 DF-L #2`, `2X10 HF No.1 @ 16" O.C. TYP.`, `140x45 @ 450`},
+		[]float64{16, 48, 64}, []float64{32, 48, 80})
+	r := runCorpus(t, "callouts.dxf", plan, "")
+	wantCode(t, r, exitFail)
+	if r.results == nil {
+		t.Fatal("no results")
+	}
+	for _, m := range r.results.Members {
+		msgs := strings.Join(m.Messages, " ")
+		switch y := m.Start[1]; {
+		case y <= 32:
+			if m.Status != export.StatusError || m.Size != "(2) 2x10" || !strings.Contains(msgs, "built-up members are not checked yet") {
+				t.Errorf("%s at y %g: %s %s %q, want an error: built-up not checked", m.ID, y, m.Status, m.Size, msgs)
+			}
+		case y == 48:
+			if m.Status != export.StatusPass || m.Size != "2x10" || m.Species != "Hem-Fir" || m.Grade != "No.1" {
+				t.Errorf("%s at y %g: %s %s %s %s, want a pass as 2x10 Hem-Fir No.1", m.ID, y, m.Status, m.Size, m.Species, m.Grade)
+			}
+		default:
+			if m.Status != export.StatusError || m.Size != "" || !strings.Contains(msgs, "metric sawn section") ||
+				!strings.Contains(msgs, "user material with its own section and design values") {
+				t.Errorf("%s at y %g: %s %q %q, want an error: metric section", m.ID, y, m.Status, m.Size, msgs)
+			}
+		}
+	}
+	// Hem-Fir No.1, 2x10: Fb 975 psi, E 1,500,000 psi (NDS 2018
+	// Supplement Table 4A, Hem-Fir, No.1).
+	got := map[string]float64{}
+	for _, v := range r.results.Assumptions.DesignValues {
+		if v.Species == "Hem-Fir" && v.Grade == "No.1" {
+			got[v.Name] = v.Value
+		}
+	}
+	if got["Fb"] != 975 || got["E"] != 1500000 {
+		t.Errorf("Hem-Fir No.1 design values %v, want Fb 975 and E 1500000 psi", got)
+	}
+}
+
+// Metric and built-up sizes in the project file are refused, naming the
+// key's line and saying why.
+func TestProjectSizeMetricAndBuiltUpRefused(t *testing.T) {
+	for _, c := range []struct{ size, want string }{
+		{"90x45", "metric sawn section"},
+		{"45x190", "user material with its own section and design values"},
+		{"(2) 2x10", "built-up members are not checked yet"},
+	} {
+		_, err := ParseProject("p.toml", []byte("[lumber]\nsize = \""+c.size+"\"\n"))
+		if err == nil || !strings.Contains(err.Error(), c.want) || !strings.Contains(err.Error(), "p.toml:2:") {
+			t.Errorf("size %q: %v, want line 2 and %q", c.size, err, c.want)
+		}
+	}
+}
