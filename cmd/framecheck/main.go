@@ -66,6 +66,10 @@
 //
 //	framecheck member --size 2x10 --span 14ft [flags]
 //
+// Lengths (L) carry their unit as the trade writes them: 14'-6", 14' 6",
+// 14ft, 168in, 3 1/2", 4.2m, 350mm. A bare number is refused, naming both
+// readings: "--span 14: 14 in or 14 ft? write 14ft or 14in".
+//
 // Checks one joist described by flags and prints the calculation trace:
 // reference design values and their table, adjustment factors, and for
 // each check its governing load combination, the formulas with the numbers
@@ -79,9 +83,9 @@
 //	--species NAME      species group (default Douglas Fir-Larch)
 //	--grade G           grade (default No.2)
 //	--overhang L        cantilever past the last bearing's centre-line
-//	--bearing L         bearing length at each support (default 3.5)
+//	--bearing L         bearing length at each support (default 3.5in)
 //	--spacing L         on-centre spacing, taken as the tributary width
-//	                    (default 16)
+//	                    (default 16in)
 //	--dead PSF          D, self-weight included (default 12)
 //	--live PSF          L (default 40 for a floor, 0 for a roof)
 //	--roof-live PSF     Lr (default 0 for a floor, 20 for a roof)
