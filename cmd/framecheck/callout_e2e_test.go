@@ -86,3 +86,64 @@ func TestProjectSizeMetricAndBuiltUpRefused(t *testing.T) {
 		}
 	}
 }
+
+// feetPlanText is a plan drawn in feet (two walls 14 ft apart, five
+// joists 16 in = 1.333 ft apart) saved with $INSUNITS 0 (unitless), as
+// CAD exports often are: read as inches, its spans are 14 in.
+func feetPlanText() string {
+	const spanFt, spacingFt = 14.0, 16.0 / 12
+	var d dxfText
+	d.header("AC1009", 0)
+	d.section("ENTITIES")
+	d.line("WALL", 0, 0, 0, 6*spacingFt)
+	d.line("WALL", spanFt, 0, spanFt, 6*spacingFt)
+	for i := 1; i <= 5; i++ {
+		y := float64(i) * spacingFt
+		d.line("JOIST", 0, y, spanFt, y)
+	}
+	d.endsec()
+	d.eof()
+	return d.String()
+}
+
+// A drawing in feet with no units: RUN401 first on stderr, a span warning
+// on every member, and exit status 1 even though every member "passes";
+// the summary's first line counts the warnings and says the run is
+// doubtful. Read with --units ft, the same plan is clean (exit 0).
+func TestFeetDrawingWithoutUnitsIsDoubtful(t *testing.T) {
+	r := runCorpus(t, "feet.dxf", feetPlanText(), "")
+	wantCode(t, r, exitFail)
+	first, _, _ := strings.Cut(r.stderr, "\n")
+	if !strings.Contains(first, CodeUnitsDoubt) || !strings.Contains(first, `units "in" (a guess`) {
+		t.Errorf("first finding %q, want RUN401 saying the units were a guess", first)
+	}
+	summary := ""
+	for _, l := range strings.Split(r.stdout, "\n") {
+		if strings.HasPrefix(l, "framecheck feet.dxf:") {
+			summary = l
+			break
+		}
+	}
+	// 5 members, each with a span of 14 in (< 24 in): 5 FRM290, 1 RUN401,
+	// and DXF101 ($INSUNITS 0 read as inches)
+	if want := "5 members: 5 pass, 0 fail, 0 error, 7 warnings; RUN DOUBTFUL: RUN401 the drawing units look wrong"; !strings.Contains(summary, want) {
+		t.Errorf("summary line %q, want %q", summary, want)
+	}
+	if !strings.Contains(r.stderr, "every member passes, but the joists' median span is 1'-2\"") {
+		t.Errorf("stderr does not say why the exit status is 1:\n%s", r.stderr)
+	}
+	for _, m := range r.results.Members {
+		if !strings.Contains(strings.Join(m.Messages, " "), "design span 1 is 1'-2\", under 2'-0\"") {
+			t.Errorf("%s: no span warning in %q", m.ID, m.Messages)
+		}
+	}
+
+	r = runCorpus(t, "feet.dxf", feetPlanText(), "", "--units", "ft")
+	wantCode(t, r, exitOK)
+	if strings.Contains(r.stderr, CodeUnitsDoubt) || strings.Contains(r.stderr, CodeSpanDoubt) {
+		t.Errorf("read in feet, still doubted:\n%s", r.stderr)
+	}
+	if !strings.Contains(r.stdout, "5 members: 5 pass, 0 fail, 0 error, 0 warnings\n") {
+		t.Errorf("summary:\n%s", r.stdout)
+	}
+}

@@ -18,8 +18,10 @@
 // and the NO_COLOR environment variable is unset.
 //
 // Exit status: 0 when every member passes (or the command succeeded), 1
-// when any member fails or is in error, 2 for unusable input (a bad
-// project file or drawing) or a usage error.
+// when any member fails or is in error, part of the drawing was not read,
+// or the run itself is doubtful (RUN4xx findings, such as spans that
+// point at wrong drawing units), 2 for unusable input (a bad project file
+// or drawing) or a usage error.
 //
 // # check
 //
@@ -30,7 +32,9 @@
 // schedule.xlsx, report.html and an annotated copy of the drawing
 // (PLAN-checked.dxf) into OUTDIR, then
 // prints a summary table: members, pass or fail, blocking rows, takeoff
-// totals, and the project-file defaults that applied.
+// totals, and the project-file defaults that applied. Its first line
+// counts the members by status and the warnings, and says when the run is
+// doubtful ("RUN DOUBTFUL: RUN401 the drawing units look wrong").
 //
 //	-p PROJECT.toml  project file (see "framecheck init"); without it, the
 //	                 built-in defaults, which suit a plan drawn on JOIST*
@@ -154,7 +158,7 @@ func main() {
 // Exit codes.
 const (
 	exitOK    = 0 // every member passes, or the command did its job
-	exitFail  = 1 // a member fails or is in error
+	exitFail  = 1 // a member fails or is in error, or the run is doubtful
 	exitUsage = 2 // unusable input or usage
 )
 
@@ -237,5 +241,5 @@ func usage(w io.Writer) {
 	}
 	fmt.Fprintln(w)
 	fmt.Fprintln(w, "Run 'framecheck <command> --help' for a command's flags.")
-	fmt.Fprintln(w, "Exit status: 0 all pass, 1 a member fails, 2 bad input or usage.")
+	fmt.Fprintln(w, "Exit status: 0 all pass, 1 a member fails or is in error or the run is doubtful, 2 bad input or usage.")
 }

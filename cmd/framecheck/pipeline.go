@@ -110,6 +110,7 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 	}
 	o.issues = append(o.issues, d.Issues...)
 	o.issues = append(o.issues, plan.Issues...)
+	spanWarnings(plan, &o.issues)
 
 	inputs := make([]check.Member, len(plan.Members))
 	shifts := make([]float64, len(plan.Members))
