@@ -147,3 +147,21 @@ func TestFeetDrawingWithoutUnitsIsDoubtful(t *testing.T) {
 		t.Errorf("summary:\n%s", r.stdout)
 	}
 }
+
+// With --size too, a built-up member stays an error: sizing never puts a
+// single joist in its place.
+func TestBuiltUpCalloutWithSizeStaysError(t *testing.T) {
+	plan := calloutPlanText([]string{`(2) 2x10 DF-L #2`}, []float64{16}, []float64{32})
+	r := runCorpus(t, "builtup.dxf", plan, "", "--size")
+	wantCode(t, r, exitFail)
+	for _, m := range r.results.Members {
+		builtUp := m.Start[1] <= 32
+		msgs := strings.Join(m.Messages, " ")
+		if builtUp && (m.Status != export.StatusError || m.Size != "(2) 2x10" || !strings.Contains(msgs, "built-up members are not checked yet")) {
+			t.Errorf("%s: %s %s %q, want the built-up member in error", m.ID, m.Status, m.Size, msgs)
+		}
+		if !builtUp && m.Status == export.StatusError {
+			t.Errorf("%s: %s %q", m.ID, m.Status, msgs)
+		}
+	}
+}

@@ -2,6 +2,7 @@ package main
 
 import (
 	"encoding/binary"
+	"errors"
 	"fmt"
 	"math"
 	"reflect"
@@ -383,6 +384,12 @@ func checkInput(p *Project, plan *framing.Plan, k int) (cm check.Member, shift f
 		cm.BlockingAtIn = append(cm.BlockingAtIn, x+shift)
 	}
 	cm.Repetitive = repetitive(plan, k)
+	// A built-up member ("(2) 2x10" from a callout) is an error until the
+	// engine checks built-up members, with or without --size: never one
+	// ply, nor a single joist picked in its place.
+	if _, err := check.ParseSize(m.Size); errors.Is(err, check.ErrBuiltUp) {
+		msgs = append(msgs, err.Error())
+	}
 	z, zmsgs := zoneEnvelope(p, m.Zones)
 	msgs = append(msgs, zmsgs...)
 	if z == nil {
