@@ -1,6 +1,8 @@
 package main
 
 import (
+	"os"
+	"path/filepath"
 	"strings"
 	"testing"
 
@@ -162,6 +164,64 @@ func TestBuiltUpCalloutWithSizeStaysError(t *testing.T) {
 		}
 		if !builtUp && m.Status == export.StatusError {
 			t.Errorf("%s: %s %q", m.ID, m.Status, msgs)
+		}
+	}
+}
+
+// testdata/callouts/callouts.dxf, written by ezdxf (gen_callouts.py), has
+// one bay of three joists per callout, each spelt as drafters write them,
+// as TEXT or as MTEXT with formatting codes and paragraph breaks. Bay i
+// lies at x = 200 i to 200 i + 144. Each bay's joists take what their
+// callout says, or are errors naming the callout's handle when it names a
+// size but cannot be read; the rest of the plan is checked.
+func TestCalloutsWrittenByEzdxf(t *testing.T) {
+	data, err := os.ReadFile(filepath.Join("testdata", "callouts", "callouts.dxf"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	const dfl = "Douglas Fir-Larch"
+	bays := []struct {
+		size, species, grade string // for a readable callout
+		errWant              string // for one that cannot be read
+	}{
+		{size: "2x8", species: dfl, grade: "No.2"},                          // 2X8 @ 16" O.C. TYP.
+		{size: "2x10", species: dfl, grade: "No.2"},                         // 2x10 DF-L #2 @ 16"
+		{size: "(2) 2x10", errWant: "built-up members are not checked yet"}, // (2) 2x10 \P DF-L No.2
+		{size: "2x12", species: "Hem-Fir", grade: "No.1"},                   // {\f..;2x12 HF No.1}\P@ 1'-4" o/c U.N.O.
+		{size: "2x10", species: "Southern Pine", grade: "No.2"},             // 2x10 SP #2 @ 16 OC CJ
+		// SPF No.2 is graded with No.1 as one grade (NDS 2018 Supplement
+		// Table 4A, Spruce-Pine-Fir "No.1/No.2")
+		{size: "2x10", species: "Spruce-Pine-Fir", grade: "No.1/No.2"}, // 2x10 SPF #2 @16" RAFTERS
+		{size: "2x10", species: dfl, grade: "No.2"},                    // 2x10 DFL No.2 @ 16 o.c.
+		{errWant: `"2x10 @ banana"`},
+		{errWant: "spacing 0\" (0 in) is outside 4-48 in"},
+		{errWant: "metric sawn section"},
+		{errWant: "spacing 200\" (200 in) is outside 4-48 in"},
+	}
+	r := runCorpus(t, "callouts.dxf", string(data), "")
+	wantCode(t, r, exitFail)
+	count := make([]int, len(bays))
+	for _, m := range r.results.Members {
+		i := int(m.Start[0] / 200)
+		if i < 0 || i >= len(bays) {
+			t.Fatalf("%s at x %g: no such bay", m.ID, m.Start[0])
+		}
+		count[i]++
+		b, msgs := bays[i], strings.Join(m.Messages, " ")
+		switch {
+		case b.errWant != "":
+			if m.Status != export.StatusError || m.Size != b.size || !strings.Contains(msgs, b.errWant) ||
+				b.size == "" && !strings.Contains(msgs, "handle ") {
+				t.Errorf("bay %d %s: %s %q %q, want an error saying %q", i, m.ID, m.Status, m.Size, msgs, b.errWant)
+			}
+		case m.Status == export.StatusError || m.Size != b.size || m.Species != b.species || m.Grade != b.grade:
+			t.Errorf("bay %d %s: %s %s %s %s %q, want %s %s %s checked", i, m.ID, m.Status, m.Size, m.Species, m.Grade, msgs,
+				b.size, b.species, b.grade)
+		}
+	}
+	for i, n := range count {
+		if n != 3 {
+			t.Errorf("bay %d: %d members, want 3", i, n)
 		}
 	}
 }
