@@ -122,10 +122,11 @@ func ReadCallout(s string) (Callout, error) {
 		}
 		lc, hasSize, err := readCalloutLine(l)
 		if err != nil {
-			// A heading or general note without a size or spacing mark
-			// under the callout line is left out; one with them that
+			// A heading or general note ("BLOCKING @ MIDSPAN") above or
+			// under the callout line is left out; a line that names a
+			// size, or starts as a spacing does ("@ 2'-0\"", "16 OC"), and
 			// cannot be read is an error.
-			if hasSize || calloutLikeRE.MatchString(l) {
+			if hasSize || spacingLineRE.MatchString(skipNotes(l)) {
 				if firstErr == nil {
 					firstErr = err
 				}
@@ -198,15 +199,16 @@ func flatText(s string) string { return strings.Join(strings.Fields(s), " ") }
 var (
 	// plies of a built-up member before the size: "(2) 2x10", "(2)-2x10",
 	// "2-2x10", "DBL 2x10", "TRIPLE 2x12"
-	pliesRE     = regexp.MustCompile(`(?i)^(?:\(\s*(\d+)\s*\)\s*-?\s*|(\d+)\s*-\s*|(DBL|DOUBLE|DOUBLED|TRPL|TPL|TRIPLE|TRIPLED)\.?\s+)`)
-	sizeRE      = regexp.MustCompile(`(?i)^(\d+(?:\.\d+)?)\s*X\s*(\d+(?:\.\d+)?)`)
-	anySizeRE   = regexp.MustCompile(`(?i)\d\s*X\s*\d`)
-	sepRE       = regexp.MustCompile(`(?i)^[\s,;:]+`)
-	atRE        = regexp.MustCompile(`(?i)^(?:@|AT\b)\s*`)
-	ocRE        = regexp.MustCompile(`(?i)^\s*(?:O\s*/\s*C|O\.?\s*C)\.?`)
-	ftInRE      = regexp.MustCompile(`(?i)^(\d+(?:\.\d+)?|\.\d+)\s*(?:'|FT\b\.?|FEET\b|FOOT\b)\s*-?\s*(?:(\d+(?:\.\d+)?)?(?:\s*(\d+)\s*/\s*(\d+))?\s*(?:"|''|IN\b\.?)?)?`)
-	inRE        = regexp.MustCompile(`(?i)^(\d+(?:\.\d+)?|\.\d+)(?:\s+(\d+)\s*/\s*(\d+))?\s*("|''|IN\b\.?|INCH(?:ES)?\b|MM\b|CM\b)?`)
-	noteWordsRE = regexp.MustCompile(`(?i)^(?:SEE\b.*$|REF\b.*$|TYP(?:ICAL)?\b\.?|U\.?\s*N\.?\s*O\b\.?|U\.?\s*O\.?\s*N\b\.?|UNLESS\s+(?:OTHERWISE\s+)?NOTED\b|SIM(?:ILAR)?\b\.?|` +
+	pliesRE       = regexp.MustCompile(`(?i)^(?:\(\s*(\d+)\s*\)\s*-?\s*|(\d+)\s*-\s*|(DBL|DOUBLE|DOUBLED|TRPL|TPL|TRIPLE|TRIPLED)\.?\s+)`)
+	sizeRE        = regexp.MustCompile(`(?i)^(\d+(?:\.\d+)?)\s*X\s*(\d+(?:\.\d+)?)`)
+	spacingLineRE = regexp.MustCompile(`(?i)^(?:@|AT\b|\d|\.\d)`)
+	anySizeRE     = regexp.MustCompile(`(?i)\d\s*X\s*\d`)
+	sepRE         = regexp.MustCompile(`(?i)^[\s,;:]+`)
+	atRE          = regexp.MustCompile(`(?i)^(?:@|AT\b)\s*`)
+	ocRE          = regexp.MustCompile(`(?i)^\s*(?:O\s*/\s*C|O\.?\s*C)\.?`)
+	ftInRE        = regexp.MustCompile(`(?i)^(\d+(?:\.\d+)?|\.\d+)\s*(?:'|FT\b\.?|FEET\b|FOOT\b)\s*-?\s*(?:(\d+(?:\.\d+)?)?(?:\s*(\d+)\s*/\s*(\d+))?\s*(?:"|''|IN\b\.?)?)?`)
+	inRE          = regexp.MustCompile(`(?i)^(\d+(?:\.\d+)?|\.\d+)(?:\s+(\d+)\s*/\s*(\d+))?\s*("|''|IN\b\.?|INCH(?:ES)?\b|MM\b|CM\b)?`)
+	noteWordsRE   = regexp.MustCompile(`(?i)^(?:SEE\b.*$|REF\b.*$|TYP(?:ICAL)?\b\.?|U\.?\s*N\.?\s*O\b\.?|U\.?\s*O\.?\s*N\b\.?|UNLESS\s+(?:OTHERWISE\s+)?NOTED\b|SIM(?:ILAR)?\b\.?|` +
 		`[FCR]\.?\s?J\b\.?|JOISTS?\b|RAFTERS?\b|FLOOR\b|CEILING\b|ROOF\b|DECK\b|FRAMING\b|EQ\b\.?|ABOVE\b|BELOW\b|` +
 		`KD(?:-?19)?\b|S-?DRY\b|S4S\b|NEW\b|\(\s*E\s*\)|\(\s*N\s*\))`)
 )

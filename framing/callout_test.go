@@ -68,6 +68,8 @@ func TestReadCallout(t *testing.T) {
 		{"FLOOR JOISTS:\n2X12 @ 12 OC\nTYP.", Callout{Size: "2x12", Plies: 1, SpacingIn: 12}},
 		{"2x10 @ 16\n2x10 @ 16 o.c.", Callout{Size: "2x10", Plies: 1, SpacingIn: 16}},
 		{"2x10 @ 16\r\nBLOCKING AT MIDSPAN", Callout{Size: "2x10", Plies: 1, SpacingIn: 16}},
+		{"2x10 @ 16\nBLOCKING @ 8'-0\" O.C.", Callout{Size: "2x10", Plies: 1, SpacingIn: 16}},
+		{"FLOOR JOISTS, LEVEL 2:\n2x10 DF-L #2", Callout{Size: "2x10", Plies: 1, Species: "Douglas Fir-Larch", Grade: "No.2"}},
 	}
 	for _, c := range ok {
 		got, err := ReadCallout(c.in)
@@ -82,6 +84,9 @@ func TestReadCallout(t *testing.T) {
 	bad := []struct{ in, why string }{
 		{"2x10 @ 16\n2x12 @ 16", "different sizes"},
 		{"2x10 @ 16\n@ 24", "two spacings"},
+		{"2x10\n@ banana", `no spacing read at "banana"`},
+		{"2x10\n16 bananas", `"16" not understood`},
+		{"TYP. @ 2\n2x10", "outside 4-48 in"},
 		{"BEDROOM 2\nCLOSET", "names no size"},
 		{`2x @ 16`, ""},
 		{`2x10 @`, "no spacing"},
