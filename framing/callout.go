@@ -44,8 +44,18 @@ func (g *grouper) assignLumber() {
 	got := make(map[int][]callout)
 	unread := make(map[int]unreadCallout) // members under a callout that cannot be read
 	var other []textItem                  // texts that do not try to be callouts: room names, notes
+	type reading struct {
+		co  Callout
+		err error
+	}
+	read := map[string]reading{} // a plan repeats its callouts run after run
 	for _, t := range g.labelTexts {
-		co, err := ReadCallout(t.text)
+		r, ok := read[t.text]
+		if !ok {
+			r.co, r.err = ReadCallout(t.text)
+			read[t.text] = r
+		}
+		co, err := r.co, r.err
 		if err != nil && !calloutLikeRE.MatchString(t.text) {
 			other = append(other, t)
 			continue
