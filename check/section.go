@@ -1,6 +1,7 @@
 package check
 
 import (
+	"errors"
 	"fmt"
 	"strconv"
 	"strings"
@@ -53,20 +54,54 @@ func NewSection(bNom, dNom int) (Section, error) {
 	}, nil
 }
 
+// ErrBuiltUp is the cause of ParseSize's error for a built-up member
+// ("(2) 2x10"): the engine checks single sawn members only, and does not
+// check one ply in place of the member.
+var ErrBuiltUp = errors.New("built-up members are not checked yet")
+
+// ErrMetricSection is the cause of ParseSize's error for a metric sawn
+// section such as 90x45 (mm), which is not NDS dimension lumber.
+var ErrMetricSection = errors.New("metric sawn section, not NDS dimension lumber")
+
 // ParseSize reads a nominal size such as "2x10", "2X10", "2 x 12" or
-// "3x12" and returns its Section (NDS 2018 Supplement Table 1B).
+// "3x12" and returns its Section (NDS 2018 Supplement Table 1B). A
+// built-up size "(2) 2x10" is an error wrapping ErrBuiltUp ("(1) 2x10" is
+// 2x10); a metric section such as "90x45" or "45x190" (two numbers of 19
+// or more: mm) is an error wrapping ErrMetricSection that says how to map
+// it, never read as a nominal US size.
 func ParseSize(s string) (Section, error) {
 	if sec, ok := parseSizeFast(s); ok {
 		return sec, nil
 	}
 	t := strings.ToLower(strings.Join(strings.Fields(s), ""))
 	t = strings.ReplaceAll(t, "×", "x")
+	if rest, ok := strings.CutPrefix(t, "("); ok {
+		n, ply, ok := strings.Cut(rest, ")")
+		plies, err := strconv.Atoi(n)
+		if !ok || err != nil || plies < 1 {
+			return Section{}, fmt.Errorf("size %q: want a nominal size such as 2x10, or (n) 2x10 for n plies", s)
+		}
+		sec, err := ParseSize(strings.TrimPrefix(ply, "-"))
+		switch {
+		case err != nil:
+			return Section{}, err
+		case plies > 1:
+			return Section{}, fmt.Errorf("size %q: %w: a member of %d plies of %s (b = %d x %g in) is not checked as one ply "+
+				"either; check it by hand", s, ErrBuiltUp, plies, sec.Name, plies, sec.BIn)
+		}
+		return sec, nil
+	}
 	parts := strings.Split(t, "x")
 	if len(parts) != 2 {
 		return Section{}, fmt.Errorf("size %q: want nominal thickness x depth, such as 2x10", s)
 	}
 	b, errB := strconv.Atoi(parts[0])
 	d, errD := strconv.Atoi(parts[1])
+	if bf, df, ok := metricPair(parts[0], parts[1]); ok {
+		return Section{}, fmt.Errorf("size %q: %w: %g x %g mm is not read as a nominal US size; map it to a user material "+
+			"with its own section and design values: write the nominal US size whose dressed section it matches (2x4 is "+
+			"38 x 89 mm, 2x8 38 x 184 mm) and give its species' design values in a materials_file ([lumber])", s, ErrMetricSection, bf, df)
+	}
 	if errB != nil || errD != nil {
 		return Section{}, fmt.Errorf("size %q: want nominal thickness x depth in whole inches, such as 2x10", s)
 	}
@@ -75,6 +110,16 @@ func ParseSize(s string) (Section, error) {
 		return Section{}, fmt.Errorf("size %q: %w", s, err)
 	}
 	return sec, nil
+}
+
+// metricPair reports whether b x d reads as a metric sawn section in mm:
+// both numbers 19 or more (19 mm is the thinnest metric sawn thickness in
+// use, and no nominal US dimension is over 16; common practice, no
+// source).
+func metricPair(b, d string) (float64, float64, bool) {
+	bf, errB := strconv.ParseFloat(b, 64)
+	df, errD := strconv.ParseFloat(d, 64)
+	return bf, df, errB == nil && errD == nil && bf >= 19 && df >= 19 && bf < 1e6 && df < 1e6
 }
 
 // parseSizeFast reads the plain spellings "2x10" and "2X10" without

@@ -1,6 +1,7 @@
 package check
 
 import (
+	"errors"
 	"strings"
 	"testing"
 )
@@ -57,4 +58,40 @@ func TestParseSize(t *testing.T) {
 	}
 	s, _ := ParseSize("2x10")
 	expectNear(t, "2x10 board feet per foot", s.BoardFeetPerFt(), 20.0/12, 1e-12, 0, "board measure = nominal b d / 12, common practice, no source")
+}
+
+// A built-up size is read but refused (the engine does not check built-up
+// members, and never checks one ply in their place); a metric section is
+// refused with a message saying how to map it, never read as a nominal
+// US size (issue 14 items 5 and 7).
+func TestParseSizeBuiltUpAndMetric(t *testing.T) {
+	for _, in := range []string{"(1) 2x10", "(1)2X10"} {
+		if s, err := ParseSize(in); err != nil || s.Name != "2x10" {
+			t.Errorf("ParseSize(%q) = %q, %v; want 2x10", in, s.Name, err)
+		}
+	}
+	for _, in := range []string{"(2) 2x10", "(3) 2x12", "(2)-2x8"} {
+		_, err := ParseSize(in)
+		if !errors.Is(err, ErrBuiltUp) || !strings.Contains(err.Error(), "plies") {
+			t.Errorf("ParseSize(%q): %v, want ErrBuiltUp", in, err)
+		}
+	}
+	for _, in := range []string{"90x45", "140x45", "190x45", "45x190", "90 x 45", "240X45"} {
+		_, err := ParseSize(in)
+		if !errors.Is(err, ErrMetricSection) {
+			t.Errorf("ParseSize(%q): %v, want ErrMetricSection", in, err)
+			continue
+		}
+		for _, want := range []string{"mm", "not read as a nominal US size", "user material", "own section and design values"} {
+			if !strings.Contains(err.Error(), want) {
+				t.Errorf("ParseSize(%q): %q should say %q", in, err, want)
+			}
+		}
+	}
+	for _, in := range []string{"(0) 2x10", "(x) 2x10", "(2 2x10", "(2) 2x11", "2x18", "2x45"} {
+		_, err := ParseSize(in)
+		if err == nil || errors.Is(err, ErrBuiltUp) || errors.Is(err, ErrMetricSection) {
+			t.Errorf("ParseSize(%q): %v, want a plain size error", in, err)
+		}
+	}
 }

@@ -6,16 +6,10 @@ import (
 	"math"
 	"regexp"
 	"sort"
-	"strconv"
 	"strings"
 
 	"framecheck/dxfimport"
 )
-
-// calloutRE matches a size callout: nominal size, then optionally "@" or
-// "at", a spacing, an inch mark and "o.c." in any of the usual spellings.
-var calloutRE = regexp.MustCompile(`(?i)^(\d+)\s*[x×]\s*(\d+)(?:\s*(?:joists?|rafters?))?` +
-	`(?:\s*(?:@|at)\s*(\d+(?:\.\d+)?|\.\d+)\s*(?:"|''|in\.?|inch(?:es)?)?\s*(?:o\.?\s*c\.?)?)?$`)
 
 // calloutLikeRE matches text that tries to be a size callout: a nominal
 // size such as "2x10" or "2 X 12", or an on-centre spacing. Label-layer
@@ -23,73 +17,17 @@ var calloutRE = regexp.MustCompile(`(?i)^(\d+)\s*[x×]\s*(\d+)(?:\s*(?:joists?|r
 // by one.
 var calloutLikeRE = regexp.MustCompile(`(?i)\d\s*[x×]\s*\d|\bo\.?\s*c\b|@`)
 
-// ErrBadCallout is the cause of every ParseCallout error.
-var ErrBadCallout = errors.New("not a size callout")
-
-// ParseCallout reads a size callout such as `2x10 @ 16" o.c.`, `2X12@12`
-// or `2x8 at 19.2 in. oc` and returns the nominal size ("2x10") and the
-// spacing in inches (0 when the callout gives only a size). Nominal
-// thickness must be 2, 3 or 4 in and depth 2 to 16 in, no less than the
-// thickness; spacing must be above 0 and at most 48 in.
-//
-// A text of several lines (an MTEXT with paragraph breaks, such as
-// "2x10 @ 16\" O.C." over "DF-L No.2 U.N.O.") is a callout when one of its
-// lines is; lines giving different sizes or spacings are an error.
-func ParseCallout(s string) (size string, spacingIn float64, err error) {
-	size, spacingIn, err = parseCalloutLine(s)
-	lines := strings.Split(strings.ReplaceAll(s, "\r", "\n"), "\n")
-	if err == nil || len(lines) < 2 {
-		return size, spacingIn, err
-	}
-	found := ""
-	for _, l := range lines {
-		if strings.TrimSpace(l) == "" {
-			continue
-		}
-		sz, sp, lerr := parseCalloutLine(l)
-		if lerr != nil {
-			continue
-		}
-		if found != "" && (sz != size || sp != spacingIn) {
-			return "", 0, fmt.Errorf("%w: %q: lines %q and %q disagree", ErrBadCallout, s, found, strings.TrimSpace(l))
-		}
-		if found == "" {
-			found, size, spacingIn = strings.TrimSpace(l), sz, sp
-		}
-	}
-	if found == "" {
-		return "", 0, err
-	}
-	return size, spacingIn, nil
-}
-
-// parseCalloutLine reads one callout line; see ParseCallout.
-func parseCalloutLine(s string) (size string, spacingIn float64, err error) {
-	t := strings.Join(strings.Fields(s), " ")
-	t = strings.NewReplacer("”", `"`, "″", `"`, "“", `"`, "\u00a0", " ").Replace(t)
-	sm := calloutRE.FindStringSubmatch(t)
-	if sm == nil {
-		return "", 0, fmt.Errorf("%w: %q (want a form like 2x10 @ 16\" o.c.)", ErrBadCallout, s)
-	}
-	b, _ := strconv.Atoi(sm[1])
-	d, _ := strconv.Atoi(sm[2])
-	if b < 2 || b > 4 || d < 2 || d > 16 || d < b {
-		return "", 0, fmt.Errorf("%w: %q: nominal size %dx%d is not dimension lumber (2-4 x 2-16 in)", ErrBadCallout, s, b, d)
-	}
-	if sm[3] != "" {
-		spacingIn, _ = strconv.ParseFloat(sm[3], 64)
-		if spacingIn <= 0 || spacingIn > 48 {
-			return "", 0, fmt.Errorf("%w: %q: spacing %g in is outside 0-48 in", ErrBadCallout, s, spacingIn)
-		}
-	}
-	return fmt.Sprintf("%dx%d", b, d), spacingIn, nil
+// unreadCallout is a label text that names a size but cannot be read.
+type unreadCallout struct {
+	text   string
+	pos    dxfimport.Pos
+	reason string
 }
 
 type callout struct {
-	size      string
-	spacingIn float64
-	text      string
-	pos       dxfimport.Pos
+	Callout
+	text string
+	pos  dxfimport.Pos
 }
 
 // assignLumber gives each member its by-layer or default lumber, then
@@ -104,19 +42,51 @@ func (g *grouper) assignLumber() {
 		return
 	}
 	got := make(map[int][]callout)
-	var other []textItem // texts that do not try to be callouts: room names, notes
+	unread := make(map[int]unreadCallout) // members under a callout that cannot be read
+	var other []textItem                  // texts that do not try to be callouts: room names, notes
+	type reading struct {
+		co  Callout
+		err error
+	}
+	read := map[string]reading{} // a plan repeats its callouts run after run
 	for _, t := range g.labelTexts {
-		size, sp, err := ParseCallout(t.text)
+		r, ok := read[t.text]
+		if !ok {
+			r.co, r.err = ReadCallout(t.text)
+			read[t.text] = r
+		}
+		co, err := r.co, r.err
 		if err != nil && !calloutLikeRE.MatchString(t.text) {
 			other = append(other, t)
 			continue
 		}
-		if err != nil {
+		text := flatText(t.text)
+		if err != nil && !anySizeRE.MatchString(normalizeCallout(t.text)) {
 			g.warn(t.pos, CodeBadCallout, "label-layer text left out: %v", err)
 			continue
 		}
-		c := callout{size, sp, strings.TrimSpace(t.text), t.pos}
 		ms := g.calloutMembers(t)
+		if err != nil {
+			// It names a size but cannot be read: an error on the
+			// members under it, never the default size.
+			if len(ms) == 0 {
+				g.warn(t.pos, CodeBadCallout, "callout cannot be read and reaches no joist: %v", err)
+				continue
+			}
+			g.plan.Issues.Add(t.pos, CodeBadCallout, dxfimport.SevError,
+				"%v; the %d joist(s) under it are in error, not checked at the project's size", err, len(ms))
+			for _, k := range ms {
+				if _, seen := unread[k]; !seen {
+					reason := err.Error()
+					if ce := (*CalloutError)(nil); errors.As(err, &ce) {
+						reason = ce.Reason
+					}
+					unread[k] = unreadCallout{text, t.pos, reason}
+				}
+			}
+			continue
+		}
+		c := callout{co, text, t.pos}
 		if len(ms) == 0 {
 			g.warn(t.pos, CodeCalloutUnused, "callout %q reaches no joist: no span line under it and no joist near it", c.text)
 		}
@@ -136,6 +106,12 @@ func (g *grouper) assignLumber() {
 	sort.Ints(ks)
 	for _, k := range ks {
 		g.applyCallouts(k, got[k])
+	}
+	for k, u := range unread {
+		m := &p.Members[k]
+		m.Error, m.Size = true, "" // no size: the project's is not assumed
+		m.Messages = append(m.Messages, fmt.Sprintf("%s: the size callout %q (%s) cannot be read: %s; "+
+			"the member is not checked", m.ID, u.text, u.pos, u.reason))
 	}
 }
 
@@ -233,29 +209,34 @@ func (g *grouper) memberIndex() *segIndex {
 	return g.memIdx
 }
 
+// applyCallouts gives member k the size, plies, spacing, species and
+// grade of the callouts over it; callouts that disagree make it an error.
 func (g *grouper) applyCallouts(k int, cs []callout) {
 	m := &g.plan.Members[k]
-	// a callout without a spacing agrees with one that gives it
+	// a callout without a spacing (species, grade) agrees with one that
+	// gives it
 	c0 := cs[0]
 	for _, c := range cs[1:] {
-		if c0.spacingIn == 0 {
-			c0.spacingIn = c.spacingIn
-		}
-	}
-	for _, c := range cs[1:] {
-		if c.size != c0.size || (c.spacingIn != 0 && c.spacingIn != c0.spacingIn) {
+		err := c0.merge(c.Callout)
+		if c.Designation() != c0.Designation() || err != nil {
 			m.Error = true
 			msg := fmt.Sprintf("%s has conflicting size callouts %q (%s) and %q (%s); resolve the drawing",
-				m.ID, c0.text, c0.pos, c.text, c.pos)
+				m.ID, cs[0].text, cs[0].pos, c.text, c.pos)
 			m.Messages = append(m.Messages, msg)
 			g.plan.Issues.Add(m.Pos, CodeCalloutConflict, dxfimport.SevError, "%s", msg)
 			return
 		}
 	}
-	m.Size, m.CalloutSpacingIn = c0.size, c0.spacingIn
-	if sp := g.jointSpacing(k); c0.spacingIn > 0 && sp > 0 && math.Abs(sp-c0.spacingIn) > 1 {
+	m.Size, m.CalloutSpacingIn = c0.Designation(), c0.SpacingIn
+	if c0.Species != "" {
+		m.Species = c0.Species
+	}
+	if c0.Grade != "" {
+		m.Grade = c0.Grade
+	}
+	if sp := g.jointSpacing(k); c0.SpacingIn > 0 && sp > 0 && math.Abs(sp-c0.SpacingIn) > 1 {
 		msg := fmt.Sprintf("%s: callout %q says %g in o.c. but the drawing measures %.2f in",
-			m.ID, c0.text, c0.spacingIn, sp)
+			m.ID, c0.text, c0.SpacingIn, sp)
 		m.Messages = append(m.Messages, msg)
 		g.warn(m.Pos, CodeCalloutSpacing, "%s", msg)
 	}

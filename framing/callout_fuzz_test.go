@@ -4,48 +4,60 @@ import (
 	"errors"
 	"fmt"
 	"math"
-	"strconv"
 	"testing"
 )
 
-// FuzzParseCallout: ParseCallout never panics; it either wraps
-// ErrBadCallout or returns dimension lumber (2-4 x 2-16 nominal, depth no
-// less than thickness) and a spacing of 0 or in (0, 48] in; and what it
-// returns, written back as a callout, reads back the same.
+// FuzzParseCallout: ReadCallout never panics; it either wraps
+// ErrBadCallout and returns nothing, or returns dimension lumber (2-4 x
+// 2-16 nominal, depth no less than thickness) of 1 to 5 plies, a spacing
+// of 0 or in [4, 48] in, and species and grade from the canonical lists;
+// what it returns, written back by Callout.String, reads back the same;
+// and ParseCallout agrees with it.
 func FuzzParseCallout(f *testing.F) {
 	for _, s := range []string{`2x10 @ 16" o.c.`, "2X12@12", "2x8 at 19.2 in. oc", "2 x 6", "4x16 joists @ 24in",
 		"3×14 rafters at .5 inches o c", "2x10 @ 16″ o.c.", "2x10\u00a0@\u00a016”", "2x1", "16x2", "2x10 @ 0", "2x10 @ 1e3",
-		"", "@", "2x10 @ 16.0000000000000000001"} {
+		"", "@", "2x10 @ 16.0000000000000000001", `(2) 2x10 DF-L #2 @ 1'-4" O.C. TYP.`, "2-2x12 SPF No.1/No.2 @ 24 o/c CJ",
+		"90x45 @ 450", "2x10 HF SEL STR 16 OC U.N.O.", "DBL 2x8\nSYP #1 & BTR\n@ 13 1/2\"", "2x10 @ 400 mm", "2x10 @ 2'"} {
 		f.Add(s)
 	}
+	species := map[string]bool{"": true, "Douglas Fir-Larch": true, "Hem-Fir": true, "Spruce-Pine-Fir": true, "Southern Pine": true}
+	grades := map[string]bool{"": true, "No.1": true, "No.2": true, "No.3": true, "No.1 & Btr": true, "No.1/No.2": true,
+		"Select Structural": true, "Stud": true}
 	f.Fuzz(func(t *testing.T, s string) {
-		size, spacingIn, err := ParseCallout(s)
+		c, err := ReadCallout(s)
+		size, spacingIn, perr := ParseCallout(s)
+		if (err == nil) != (perr == nil) {
+			t.Fatalf("%q: ReadCallout %v, ParseCallout %v", s, err, perr)
+		}
 		if err != nil {
 			if !errors.Is(err, ErrBadCallout) {
 				t.Fatalf("%q: error %v does not wrap ErrBadCallout", s, err)
 			}
-			if size != "" || spacingIn != 0 {
-				t.Fatalf("%q: error with results %q %v", s, size, spacingIn)
+			if c != (Callout{}) || size != "" || spacingIn != 0 {
+				t.Fatalf("%q: error with results %+v %q %v", s, c, size, spacingIn)
 			}
 			return
 		}
+		if size != c.Designation() || spacingIn != c.SpacingIn {
+			t.Fatalf("%q: ParseCallout %q %v, ReadCallout %+v", s, size, spacingIn, c)
+		}
 		var b, d int
-		if n, _ := fmt.Sscanf(size, "%dx%d", &b, &d); n != 2 || fmt.Sprintf("%dx%d", b, d) != size {
-			t.Fatalf("%q: size %q is not in the form BxD", s, size)
+		if n, _ := fmt.Sscanf(c.Size, "%dx%d", &b, &d); n != 2 || fmt.Sprintf("%dx%d", b, d) != c.Size {
+			t.Fatalf("%q: size %q is not in the form BxD", s, c.Size)
 		}
-		if b < 2 || b > 4 || d < 2 || d > 16 || d < b {
-			t.Fatalf("%q: size %q is not dimension lumber", s, size)
+		if b < 2 || b > 4 || d < 2 || d > 16 || d < b || c.Plies < 1 || c.Plies > maxPlies {
+			t.Fatalf("%q: %+v is not dimension lumber", s, c)
 		}
-		if math.IsNaN(spacingIn) || spacingIn < 0 || spacingIn > 48 {
-			t.Fatalf("%q: spacing %v in", s, spacingIn)
+		if math.IsNaN(c.SpacingIn) || c.SpacingIn != 0 && (c.SpacingIn < minCalloutSpacingIn || c.SpacingIn > maxCalloutSpacingIn) {
+			t.Fatalf("%q: spacing %v in", s, c.SpacingIn)
 		}
-		back := size
-		if spacingIn > 0 {
-			back += ` @ ` + strconv.FormatFloat(spacingIn, 'f', -1, 64) + `" o.c.`
+		if !species[c.Species] || !grades[c.Grade] {
+			t.Fatalf("%q: species %q grade %q", s, c.Species, c.Grade)
 		}
-		size2, spacing2, err := ParseCallout(back)
-		if err != nil || size2 != size || spacing2 != spacingIn {
-			t.Fatalf("%q -> %q %v -> %q: %q %v %v", s, size, spacingIn, back, size2, spacing2, err)
+		back := c.String()
+		c2, err := ReadCallout(back)
+		if err != nil || c2 != c {
+			t.Fatalf("%q -> %+v -> %q -> %+v %v", s, c, back, c2, err)
 		}
 	})
 }

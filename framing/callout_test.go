@@ -8,52 +8,128 @@ import (
 	"framecheck/dxfimport"
 )
 
-func TestParseCallout(t *testing.T) {
-	// Spellings drafters use on framing plans (common practice, no source).
-	cases := []struct {
-		in        string
-		size      string
-		spacingIn float64
-		bad       bool
+// TestReadCallout reads callouts in the spellings drafters use on framing
+// plans (common practice, no source: the forms listed in issue 14 item 5
+// and those seen on plans); each row gives the whole reading.
+func TestReadCallout(t *testing.T) {
+	const dfl, hf, spf, sp = "Douglas Fir-Larch", "Hem-Fir", "Spruce-Pine-Fir", "Southern Pine"
+	ok := []struct {
+		in   string
+		want Callout
 	}{
-		{in: `2x10 @ 16" o.c.`, size: "2x10", spacingIn: 16},
-		{in: `2X12@12`, size: "2x12", spacingIn: 12},
-		{in: `2x8 at 19.2 in. oc`, size: "2x8", spacingIn: 19.2},
-		{in: `2x6 @ 24 OC`, size: "2x6", spacingIn: 24},
-		{in: `  2 x 10   @  16 ” O.C. `, size: "2x10", spacingIn: 16},
-		{in: `2x10 joists @ 16" o.c.`, size: "2x10", spacingIn: 16},
-		{in: `2×10 @16in`, size: "2x10", spacingIn: 16},
-		{in: "2x10\n@ 16 o.c.", size: "2x10", spacingIn: 16}, // MTEXT line break
-		{in: `2x12`, size: "2x12", spacingIn: 0},
+		{`2x10 @ 16" o.c.`, Callout{Size: "2x10", Plies: 1, SpacingIn: 16}},
+		{`2X12@12`, Callout{Size: "2x12", Plies: 1, SpacingIn: 12}},
+		{`2x8 at 19.2 in. oc`, Callout{Size: "2x8", Plies: 1, SpacingIn: 19.2}},
+		{`2x6 @ 24 OC`, Callout{Size: "2x6", Plies: 1, SpacingIn: 24}},
+		{`  2 x 10   @  16 ” O.C. `, Callout{Size: "2x10", Plies: 1, SpacingIn: 16}},
+		{`2x10 joists @ 16" o.c.`, Callout{Size: "2x10", Plies: 1, SpacingIn: 16}},
+		{`2×10 @16in`, Callout{Size: "2x10", Plies: 1, SpacingIn: 16}},
+		{`2x12`, Callout{Size: "2x12", Plies: 1}},
+		{`4x14 at 12 inches o.c.`, Callout{Size: "4x14", Plies: 1, SpacingIn: 12}},
+		// issue 14 item 5: spacing spellings
+		{`2x10 16" o.c.`, Callout{Size: "2x10", Plies: 1, SpacingIn: 16}},
+		{`2x10 16 OC`, Callout{Size: "2x10", Plies: 1, SpacingIn: 16}},
+		{`2x10 @16"`, Callout{Size: "2x10", Plies: 1, SpacingIn: 16}},
+		{`2x10 @ 1'-4"`, Callout{Size: "2x10", Plies: 1, SpacingIn: 16}},
+		{`2x10 @ 1' 4" O.C.`, Callout{Size: "2x10", Plies: 1, SpacingIn: 16}},
+		{`2x12 @ 2' o/c`, Callout{Size: "2x12", Plies: 1, SpacingIn: 24}},
+		{`2x10 16 o/c`, Callout{Size: "2x10", Plies: 1, SpacingIn: 16}},
+		{`2x10 @ 16'' O.C.`, Callout{Size: "2x10", Plies: 1, SpacingIn: 16}},
+		{`2x10 @ 13 1/2"`, Callout{Size: "2x10", Plies: 1, SpacingIn: 13.5}},
+		{`2x10 @ 406.4 mm`, Callout{Size: "2x10", Plies: 1, SpacingIn: 16}}, // 406.4 / 25.4 = 16 exactly
+		// issue 14 item 5: trailing notes, upper case
+		{`2X8 @ 16" O.C. TYP.`, Callout{Size: "2x8", Plies: 1, SpacingIn: 16}},
+		{`2x10 @ 16" U.N.O.`, Callout{Size: "2x10", Plies: 1, SpacingIn: 16}},
+		{`2x8 @ 24" O.C. CJ`, Callout{Size: "2x8", Plies: 1, SpacingIn: 24}},
+		{`2x10 FJ @ 16`, Callout{Size: "2x10", Plies: 1, SpacingIn: 16}},
+		{`2x8 RAFTERS @ 24" O.C.`, Callout{Size: "2x8", Plies: 1, SpacingIn: 24}},
+		{`2x10 @ 16 OC TYP, SEE NOTE 4`, Callout{Size: "2x10", Plies: 1, SpacingIn: 16}},
+		// species and grade
+		{`2x10 DF-L #2 @ 16"`, Callout{Size: "2x10", Plies: 1, SpacingIn: 16, Species: dfl, Grade: "No.2"}},
+		{`2x10 HF No.1 @ 16 o.c.`, Callout{Size: "2x10", Plies: 1, SpacingIn: 16, Species: hf, Grade: "No.1"}},
+		{`2x8 SP #2 @ 16"`, Callout{Size: "2x8", Plies: 1, SpacingIn: 16, Species: sp, Grade: "No.2"}},
+		{`2x6 SPF #2 @ 24" O.C. CJ`, Callout{Size: "2x6", Plies: 1, SpacingIn: 24, Species: spf, Grade: "No.2"}},
+		{`2x12 DFL No.2 @ 12`, Callout{Size: "2x12", Plies: 1, SpacingIn: 12, Species: dfl, Grade: "No.2"}},
+		{`2x10 @ 16" o.c. DF#1`, Callout{Size: "2x10", Plies: 1, SpacingIn: 16, Species: dfl, Grade: "No.1"}},
+		{`2x10 D.F.L. NO. 1 & BTR`, Callout{Size: "2x10", Plies: 1, Species: dfl, Grade: "No.1 & Btr"}},
+		{`2x10 Hem-Fir Sel Str @ 16`, Callout{Size: "2x10", Plies: 1, SpacingIn: 16, Species: hf, Grade: "Select Structural"}},
+		{`2x12 SYP SS`, Callout{Size: "2x12", Plies: 1, Species: sp, Grade: "Select Structural"}},
+		{`2x10 S-P-F No.1/No.2 @ 16`, Callout{Size: "2x10", Plies: 1, SpacingIn: 16, Species: spf, Grade: "No.1/No.2"}},
+		{`2x10 #2 @ 16`, Callout{Size: "2x10", Plies: 1, SpacingIn: 16, Grade: "No.2"}},
+		// plies of a built-up member
+		{`(2) 2x10`, Callout{Size: "2x10", Plies: 2}},
+		{`(3)2x12 DF-L #2`, Callout{Size: "2x12", Plies: 3, Species: dfl, Grade: "No.2"}},
+		{`2-2x10`, Callout{Size: "2x10", Plies: 2}},
+		{`DBL 2x10 @ 16`, Callout{Size: "2x10", Plies: 2, SpacingIn: 16}},
 		// MTEXT paragraphs: the callout line counts, a species/grade or
-		// note line under it does not stop it; two disagreeing lines do
-		{in: "2x10 @ 16\" O.C.\nDF-L No.2 U.N.O.", size: "2x10", spacingIn: 16},
-		{in: "FLOOR JOISTS:\n2X12 @ 12 OC\nTYP.", size: "2x12", spacingIn: 12},
-		{in: "2x10 @ 16\n2x10 @ 16 o.c.", size: "2x10", spacingIn: 16},
-		{in: "2x10 @ 16\n2x12 @ 16", bad: true},
-		{in: "BEDROOM 2\nCLOSET", bad: true},
-		{in: `4x14 at 12 inches o.c.`, size: "4x14", spacingIn: 12},
-		{in: `2x @ 16`, bad: true},
-		{in: `2x10 @`, bad: true},
-		{in: `2x10 @ 0`, bad: true},
-		{in: `2x10 @ 60" o.c.`, bad: true},
-		{in: `10x2 @ 16`, bad: true},
-		{in: `6x10 @ 16`, bad: true},
-		{in: `2x10 @ 16 ft`, bad: true},
-		{in: `SEE NOTE 3`, bad: true},
-		{in: `(2) 2x10`, bad: true},
-		{in: ``, bad: true},
+		// note line under it adds to it or is left out
+		{"2x10\n@ 16 o.c.", Callout{Size: "2x10", Plies: 1, SpacingIn: 16}},
+		{"2x10 @ 16\" O.C.\nDF-L No.2 U.N.O.", Callout{Size: "2x10", Plies: 1, SpacingIn: 16, Species: dfl, Grade: "No.2"}},
+		{"FLOOR JOISTS:\n2X12 @ 12 OC\nTYP.", Callout{Size: "2x12", Plies: 1, SpacingIn: 12}},
+		{"2x10 @ 16\n2x10 @ 16 o.c.", Callout{Size: "2x10", Plies: 1, SpacingIn: 16}},
+		{"2x10 @ 16\r\nBLOCKING AT MIDSPAN", Callout{Size: "2x10", Plies: 1, SpacingIn: 16}},
+		{"2x10 @ 16\nBLOCKING @ 8'-0\" O.C.", Callout{Size: "2x10", Plies: 1, SpacingIn: 16}},
+		{"FLOOR JOISTS, LEVEL 2:\n2x10 DF-L #2", Callout{Size: "2x10", Plies: 1, Species: "Douglas Fir-Larch", Grade: "No.2"}},
 	}
-	for _, c := range cases {
-		size, sp, err := ParseCallout(c.in)
-		if c.bad {
-			if err == nil || !errors.Is(err, ErrBadCallout) {
-				t.Errorf("ParseCallout(%q) = %q, %g, %v; want ErrBadCallout", c.in, size, sp, err)
-			}
-			continue
+	for _, c := range ok {
+		got, err := ReadCallout(c.in)
+		if err != nil || got != c.want {
+			t.Errorf("ReadCallout(%q) = %+v, %v; want %+v", c.in, got, err, c.want)
 		}
-		if err != nil || size != c.size || sp != c.spacingIn {
-			t.Errorf("ParseCallout(%q) = %q, %g, %v; want %q, %g", c.in, size, sp, err, c.size, c.spacingIn)
+		size, sp, err := ParseCallout(c.in)
+		if err != nil || size != c.want.Designation() || sp != c.want.SpacingIn {
+			t.Errorf("ParseCallout(%q) = %q, %g, %v", c.in, size, sp, err)
+		}
+	}
+	bad := []struct{ in, why string }{
+		{"2x10 @ 16\n2x12 @ 16", "different sizes"},
+		{"2x10 @ 16\n@ 24", "two spacings"},
+		{"2x10\n@ banana", `no spacing read at "banana"`},
+		{"2x10\n16 bananas", `"16" not understood`},
+		{"TYP. @ 2\n2x10", "outside 4-48 in"},
+		{"BEDROOM 2\nCLOSET", "names no size"},
+		{`2x @ 16`, ""},
+		{`2x10 @`, "no spacing"},
+		{`2x10 @ 0`, "outside 4-48 in"},
+		{`2x10 @ 0"`, "outside 4-48 in"},
+		{`2x10 @ 200"`, "outside 4-48 in"},
+		{`2x10 @ 60" o.c.`, "outside 4-48 in"},
+		{`2x10 200 OC`, "outside 4-48 in"},
+		{`2x10 @ 2`, "outside 4-48 in"}, // 2 in o.c. is nonsense: 2' meant?
+		{`2x10 @ banana`, `no spacing read at "banana"`},
+		{`2x10 @ 16 banana`, `"banana" not understood`},
+		{`10x2 @ 16`, "not dimension lumber"},
+		{`6x10 @ 16`, "not dimension lumber"},
+		{`2x10 @ 16 ft`, "outside 4-48 in"},
+		{`SEE NOTE 3`, "names no size"},
+		{`PROVIDE 2x10 @ 16`, "size must come first"},
+		{`2x10 DF-L #2 HF @ 16`, "two species"},
+		{`(9) 2x10`, "plies"},
+		{`1.75x11.875 LVL`, "not a nominal sawn lumber size"},
+		{`2x10X12`, "runs into the size"},
+		{`90x45 @ 450`, "metric sawn section"},
+		{`140x45`, "metric sawn section"},
+		{`45x190 @ 600 mm`, "metric sawn section"},
+		{``, "names no size"},
+	}
+	for _, c := range bad {
+		got, err := ReadCallout(c.in)
+		if err == nil || !errors.Is(err, ErrBadCallout) || !strings.Contains(err.Error(), c.why) {
+			t.Errorf("ReadCallout(%q) = %+v, %v; want ErrBadCallout saying %q", c.in, got, err, c.why)
+		}
+		if size, sp, err := ParseCallout(c.in); err == nil || size != "" || sp != 0 {
+			t.Errorf("ParseCallout(%q) = %q, %g, %v; want an error", c.in, size, sp, err)
+		}
+	}
+}
+
+// A metric section is refused with a message saying how to map it, not
+// read as a nominal size.
+func TestMetricCalloutSaysHowToMap(t *testing.T) {
+	_, err := ReadCallout("90x45 @ 450")
+	for _, want := range []string{"90x45", "not NDS dimension lumber", "user material", "own section and design values"} {
+		if err == nil || !strings.Contains(err.Error(), want) {
+			t.Errorf("error %v should say %q", err, want)
 		}
 	}
 }
@@ -155,5 +231,38 @@ func TestLabelLayerRoomNamesAreOneInfo(t *testing.T) {
 	}
 	if len(warn) != 1 || !strings.Contains(warn[0], `"2-10 @ 16"`) {
 		t.Errorf("warnings %q, want one about 2-10 @ 16", warn)
+	}
+}
+
+// Built-up sizes in the takeoff: n plies add their thicknesses, nominal
+// and dressed (NDS 2018 Supplement Table 1A: 2x dresses to 1.5 in, 10 in
+// to 9.25 in; board measure nominal b d / 12, common practice).
+func TestBuiltUpSizeThickness(t *testing.T) {
+	for _, c := range []struct {
+		size         string
+		nb, nd       int
+		db, dd       float64
+		boardFtPer12 float64
+	}{
+		{"2x10", 2, 10, 1.5, 9.25, 20},
+		{"(2) 2x10", 4, 10, 3.0, 9.25, 40},
+		{"(3) 2x12", 6, 12, 4.5, 11.25, 72},
+	} {
+		b, d, err := NominalSize(c.size)
+		db, dd, err2 := DressedSize(c.size)
+		if err != nil || err2 != nil || b != c.nb || d != c.nd || db != c.db || dd != c.dd {
+			t.Errorf("%s: nominal %dx%d dressed %gx%g (%v %v); want %dx%d, %gx%g", c.size, b, d, db, dd, err, err2, c.nb, c.nd, c.db, c.dd)
+		}
+		if bf := boardFeet(c.size, 12); bf != c.boardFtPer12 {
+			t.Errorf("%s: %g bf in 12 ft, want %g", c.size, bf, c.boardFtPer12)
+		}
+	}
+	for _, s := range []string{"(0) 2x10", "(x) 2x10", "(2 2x10"} {
+		if _, _, err := NominalSize(s); err == nil {
+			t.Errorf("NominalSize(%q): want an error", s)
+		}
+		if _, _, err := DressedSize(s); err == nil {
+			t.Errorf("DressedSize(%q): want an error", s)
+		}
 	}
 }

@@ -80,13 +80,18 @@
 // zones: each loads the member where it acts (Member.ZonePieces), with a
 // message naming the zones and lengths.
 //
-// A label text that parses as a size callout (ParseCallout) applies to the
+// A label text that reads as a size callout (ReadCallout: size, plies,
+// spacing, species and grade as the trade writes them) applies to the
 // joists crossed by the nearest label-layer line within max(12 in, 3 text
 // heights); without one, to the run of the joist within 24 in of the text.
-// Lumber is callout > first matching by_layer rule > project default.
-// Conflicting callouts (different sizes, or two different spacings; a
-// callout without a spacing agrees with one that has it) make the member
-// an error; a callout spacing more than 1 in from the measured one (gaps
+// Lumber is callout > first matching by_layer rule > project default, for
+// size, species and grade each; a built-up callout "(2) 2x10" gives the
+// size "(2) 2x10". A text that names a size but cannot be read (nonsense
+// spacing, no such lumber, a metric section) makes the members under it
+// errors with no size: the project default is never assumed for them.
+// Conflicting callouts (different sizes, species, grades, or two different
+// spacings; a callout without a value agrees with one that has it) make
+// the member an error; a callout spacing more than 1 in from the measured one (gaps
 // of 4 in or less, between the plies of a doubled joist, left out) is a
 // warning. Drawn blocking lines crossing or touching a joist are its
 // bracing points, one per position (blocking drawn piece by piece touches
@@ -101,7 +106,8 @@
 //	FRM205 error    member outside every zone and no default zone
 //	FRM206 warning  member crosses zone edges: loaded zone by zone
 //	FRM207 warning  zone outline without a name, with two, or a name outside every outline
-//	FRM208 warning  label text that tries to be a size callout and is not one
+//	FRM208 error    callout naming a size that cannot be read: its members are errors
+//	FRM208 warning  label text that tries to be a callout, names no size (or reaches no joist)
 //	       info     label texts with no size in them (room names, notes), counted once
 //	FRM209 error    conflicting callouts on one joist
 //	FRM210 warning  callout spacing differs from the measured spacing by more than 1 in

@@ -7,17 +7,34 @@ import (
 )
 
 // NominalSize splits a nominal size such as "2x10" into its nominal
-// thickness and depth in inches.
+// thickness and depth in inches. A built-up size "(2) 2x10" (Callout.
+// Designation) has n times the thickness of one ply.
 func NominalSize(size string) (bIn, dIn int, err error) {
-	parts := strings.Split(strings.ToLower(strings.TrimSpace(size)), "x")
-	if len(parts) == 2 {
+	plies, ply := splitPlies(size)
+	parts := strings.Split(strings.ToLower(strings.TrimSpace(ply)), "x")
+	if len(parts) == 2 && plies > 0 {
 		b, e1 := strconv.Atoi(strings.TrimSpace(parts[0]))
 		d, e2 := strconv.Atoi(strings.TrimSpace(parts[1]))
 		if e1 == nil && e2 == nil && b > 0 && d > 0 {
-			return b, d, nil
+			return plies * b, d, nil
 		}
 	}
 	return 0, 0, fmt.Errorf("size %q: want nominal thickness x depth, like 2x10", size)
+}
+
+// splitPlies splits "(n) 2x10" into n and "2x10"; a size without a ply
+// count is one ply; a bad count gives 0.
+func splitPlies(size string) (int, string) {
+	rest, ok := strings.CutPrefix(strings.TrimSpace(size), "(")
+	if !ok {
+		return 1, size
+	}
+	n, ply, ok := strings.Cut(rest, ")")
+	plies, err := strconv.Atoi(strings.TrimSpace(n))
+	if !ok || err != nil || plies < 1 {
+		return 0, size
+	}
+	return plies, strings.TrimPrefix(strings.TrimSpace(ply), "-")
 }
 
 // dressedIn returns the dressed (actual) dimension of a nominal dimension
@@ -36,11 +53,13 @@ func dressedIn(nominal int) float64 {
 }
 
 // DressedSize returns the dressed thickness and depth of a nominal size,
-// in inches (NDS 2018 Supplement Table 1B).
+// in inches (NDS 2018 Supplement Table 1B); a built-up member's is its
+// plies' thicknesses added ("(2) 2x10": 3.0 x 9.25 in).
 func DressedSize(size string) (bIn, dIn float64, err error) {
-	b, d, err := NominalSize(size)
-	if err != nil {
-		return 0, 0, err
+	plies, ply := splitPlies(size)
+	b, d, err := NominalSize(ply)
+	if err != nil || plies < 1 {
+		return 0, 0, fmt.Errorf("size %q: want nominal thickness x depth, like 2x10", size)
 	}
-	return dressedIn(b), dressedIn(d), nil
+	return float64(plies) * dressedIn(b), dressedIn(d), nil
 }

@@ -61,6 +61,9 @@ type checkRun struct {
 	units       string
 	size        bool
 	overlay     bool
+
+	warnings int               // warning findings, counted in the summary
+	doubts   []dxfimport.Issue // findings that make the whole run doubtful (runDoubts)
 }
 
 func runCheckCmd(args []string, stdout, stderr io.Writer) int {
@@ -69,8 +72,9 @@ func runCheckCmd(args []string, stdout, stderr io.Writer) int {
 (NDS 2018 ASD, ASCE 7-16 combinations, IBC 2018 deflection limits), decides
 the blocking rows each run needs, and writes results.json, schedule.xlsx and
 an annotated copy of the drawing into OUTDIR. Exit status: 0 every member
-passes, 1 a member fails or is in error or part of the drawing could not be
-read, 2 unusable input or usage.`)
+passes, 1 a member fails or is in error, part of the drawing could not be
+read or the run is doubtful (RUN401: the spans point at wrong drawing
+units), 2 unusable input or usage.`)
 	var c checkRun
 	f.StringVar(&c.projectPath, "p", "", "project file (TOML); default: built-in defaults")
 	f.StringVar(&c.outDir, "o", "", "output folder (default: a folder beside the plan, named after it)")
@@ -200,8 +204,16 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		return exitUsage
 	}
 	printIssues(stderr, o.issues)
+	c.warnings, c.doubts = countWarnings(o.issues), runDoubts(o.issues)
 	printSummary(stdout, c, proj, res, written)
 	if res.Summary.Fail+res.Summary.Error > 0 {
+		return exitFail
+	}
+	// Every member passes, but the run itself is in doubt (RUN401: spans
+	// that point at wrong drawing units): not a clean run.
+	if len(c.doubts) > 0 {
+		fmt.Fprintf(stderr, "framecheck: %s: every member passes, but %s: the result is doubtful until that is resolved\n",
+			c.planPath, c.doubts[0].Msg)
 		return exitFail
 	}
 	// Every member found passes, but part of the drawing was left out
@@ -440,8 +452,8 @@ const maxDefaultsListed = 5
 // rows and takeoff totals in aligned tables.
 func printSummary(w io.Writer, c *checkRun, proj *Project, r *export.Results, written []string) {
 	colour := useColour(w)
-	fmt.Fprintf(w, "\nframecheck %s: %d members: %d pass, %d fail, %d error\n",
-		r.Plan, r.Summary.Members, r.Summary.Pass, r.Summary.Fail, r.Summary.Error)
+	fmt.Fprintf(w, "\nframecheck %s: %d members: %d pass, %d fail, %d error, %s%s\n",
+		r.Plan, r.Summary.Members, r.Summary.Pass, r.Summary.Fail, r.Summary.Error, plural(c.warnings, "warning"), doubtText(c.doubts))
 	if used := proj.DefaultsUsed(); len(used) > 0 {
 		if c.projectPath == "" {
 			fmt.Fprintf(w, "no project file: built-in defaults used (%d settings; see the Inputs sheet)\n", len(used))
@@ -593,9 +605,9 @@ func rowsText(rows []int) string {
 func statusText(colour bool, s string) string {
 	switch s {
 	case "pass":
-		return paint(colour, "32", "pass")
+		return paint(colour, colourGreen, "pass")
 	case "fail":
-		return paint(colour, "31", "FAIL")
+		return paint(colour, colourRed, "FAIL")
 	}
-	return paint(colour, "33", "ERROR")
+	return paint(colour, colourYellow, "ERROR")
 }

@@ -7,6 +7,8 @@ import (
 	"io"
 	"io/fs"
 	"os"
+	"regexp"
+	"strconv"
 	"strings"
 	"unicode/utf8"
 )
@@ -52,7 +54,7 @@ func (f *cmdFlags) parse(args []string, stdout, stderr io.Writer) ([]string, int
 				f.printUsage(stdout)
 				return nil, exitOK
 			}
-			return nil, f.usageError(stderr, "%v", err)
+			return nil, f.usageError(stderr, "%s", flagErrorText(err))
 		}
 		rest := f.Args()
 		if len(rest) == 0 {
@@ -64,6 +66,24 @@ func (f *cmdFlags) parse(args []string, stdout, stderr io.Writer) ([]string, int
 		pos = append(pos, rest[0])
 		args = rest[1:]
 	}
+}
+
+// flagValueRE matches the flag package's message for a value its Set
+// refused.
+var flagValueRE = regexp.MustCompile(`^invalid value ("(?:[^"\\]|\\.)*") for flag -([\w-]+): ((?s).*)$`)
+
+// flagErrorText words a flag error as the command line was typed:
+// "--span 14: 14 in or 14 ft? write 14ft or 14in".
+func flagErrorText(err error) string {
+	m := flagValueRE.FindStringSubmatch(err.Error())
+	if m == nil {
+		return err.Error()
+	}
+	v, uerr := strconv.Unquote(m[1])
+	if uerr != nil {
+		return err.Error()
+	}
+	return "--" + m[2] + " " + v + ": " + m[3]
 }
 
 // usageError prints a usage mistake and the synopsis; it returns 2.
@@ -90,9 +110,10 @@ func useColour(w io.Writer) bool {
 
 // ANSI colours for the terminal summary.
 const (
-	colourRed   = "\x1b[31m"
-	colourGreen = "\x1b[32m"
-	colourBold  = "\x1b[1m"
+	colourRed    = "\x1b[31m"
+	colourGreen  = "\x1b[32m"
+	colourYellow = "\x1b[33m"
+	colourBold   = "\x1b[1m"
 )
 
 // paint wraps s in an ANSI colour when on is true.

@@ -94,7 +94,9 @@ func (d *dxfText) endblk() { d.pair(0, "ENDBLK") }
 
 // text writes a TEXT (no handle) of height h at (x, y).
 func (d *dxfText) text(layer string, x, y, h float64, s string) {
+	d.handle++
 	d.pair(0, "TEXT")
+	d.pair(5, fmt.Sprintf("%X", 0x100+d.handle))
 	d.pair(8, layer)
 	d.num(10, x)
 	d.num(20, y)
@@ -417,15 +419,23 @@ var moreBadFiles = map[string]func() string{
 		d.eof()
 		return d.String()
 	},
-	// Callouts the parser refuses (no such lumber; spacing out of range)
-	// beside the joists: warnings, and the joists keep the project size.
+	// Callouts on span lines across the joists: two name a size but
+	// cannot be read (nonsense spacing; no such lumber), so the joists
+	// under them (y = 16, 32 and 48) are errors, not checked at the
+	// project size; the third is read in the trade's spelling, and its two
+	// joists are checked. A fourth, spacing out of range, reaches no joist.
 	"bad-callouts.dxf": func() string {
 		var d dxfText
 		d.header("AC1009", 1)
 		d.section("ENTITIES")
 		d.plan("WALL", "JOIST", 5, 0, 0)
-		d.text("FRAMING-NOTE", 40, 30, 4, "2x99 @ 16")
-		d.text("FRAMING-NOTE", 40, 62, 4, "2x12 @ 96")
+		d.line("FRAMING-NOTE", 40, 8, 40, 40)
+		d.text("FRAMING-NOTE", 42, 24, 4, "2x10 @ banana")
+		d.line("FRAMING-NOTE", 100, 40, 100, 56)
+		d.text("FRAMING-NOTE", 102, 50, 4, "2x99 @ 16")
+		d.line("FRAMING-NOTE", 120, 56, 120, 88)
+		d.text("FRAMING-NOTE", 122, 72, 4, `2X10 DF-L #2 @ 16" O.C. TYP.`)
+		d.text("FRAMING-NOTE", 400, 400, 4, "2x12 @ 96")
 		d.endsec()
 		d.eof()
 		return d.String()

@@ -571,14 +571,26 @@ func TestBadCorpusMessy(t *testing.T) {
 			"part of the drawing was not read")
 	})
 	t.Run("bad callouts", func(t *testing.T) {
+		// Joists y = 16, 32 under "2x10 @ banana", y = 48 under "2x99 @ 16":
+		// errors naming the text and its handle, with no size (the
+		// project's 2x10 is not assumed); y = 64, 80 under the readable
+		// callout are checked as 2x10 DF-L No.2 and pass (the good plan's
+		// hand check). Exit 1.
 		r := runCorpus(t, "bad-callouts.dxf", "", "")
-		wantCode(t, r, exitOK)
-		wantAll(t, r, export.StatusPass, 5)
-		wantStderr(t, r, `bad-callouts.dxf:117 (layer FRAMING-NOTE): warning FRM208`, "2x99",
-			`bad-callouts.dxf:129 (layer FRAMING-NOTE): warning FRM208`, "96")
+		wantCode(t, r, exitFail)
+		wantStderr(t, r, `bad-callouts.dxf:131 (handle 109, layer FRAMING-NOTE): error FRM208: size callout not read: "2x10 @ banana": no spacing read at "banana"`,
+			"the 2 joist(s) under it are in error",
+			`bad-callouts.dxf:159 (handle 10B, layer FRAMING-NOTE): error FRM208: size callout not read: "2x99 @ 16": nominal size 2x99 is not dimension lumber`,
+			`bad-callouts.dxf:201 (handle 10E, layer FRAMING-NOTE): warning FRM208: callout cannot be read and reaches no joist`, "spacing 96 in is outside 4-48 in")
 		for _, m := range r.results.Members {
-			if m.Size != "2x10" {
-				t.Errorf("%s took size %s from a refused callout", m.ID, m.Size)
+			msgs := strings.Join(m.Messages, " ")
+			switch y := m.Start[1]; {
+			case y < 40 && (m.Status != export.StatusError || m.Size != "" || !strings.Contains(msgs, `"2x10 @ banana" (`) || !strings.Contains(msgs, "handle 109")):
+				t.Errorf("%s at y %g: %s %q %q, want error naming the callout and its handle, no size", m.ID, y, m.Status, m.Size, msgs)
+			case y > 40 && y < 56 && (m.Status != export.StatusError || m.Size != "" || !strings.Contains(msgs, `"2x99 @ 16"`)):
+				t.Errorf("%s at y %g: %s %q %q, want error", m.ID, y, m.Status, m.Size, msgs)
+			case y > 56 && (m.Status != export.StatusPass || m.Size != "2x10" || m.Species != "Douglas Fir-Larch" || m.Grade != "No.2"):
+				t.Errorf("%s at y %g: %s %s %s %s, want a pass as 2x10 DF-L No.2", m.ID, y, m.Status, m.Size, m.Species, m.Grade)
 			}
 		}
 	})

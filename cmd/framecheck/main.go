@@ -18,8 +18,10 @@
 // and the NO_COLOR environment variable is unset.
 //
 // Exit status: 0 when every member passes (or the command succeeded), 1
-// when any member fails or is in error, 2 for unusable input (a bad
-// project file or drawing) or a usage error.
+// when any member fails or is in error, part of the drawing was not read,
+// or the run itself is doubtful (RUN4xx findings, such as spans that
+// point at wrong drawing units), 2 for unusable input (a bad project file
+// or drawing) or a usage error.
 //
 // # check
 //
@@ -30,7 +32,9 @@
 // schedule.xlsx, report.html and an annotated copy of the drawing
 // (PLAN-checked.dxf) into OUTDIR, then
 // prints a summary table: members, pass or fail, blocking rows, takeoff
-// totals, and the project-file defaults that applied.
+// totals, and the project-file defaults that applied. Its first line
+// counts the members by status and the warnings, and says when the run is
+// doubtful ("RUN DOUBTFUL: RUN401 the drawing units look wrong").
 //
 //	-p PROJECT.toml  project file (see "framecheck init"); without it, the
 //	                 built-in defaults, which suit a plan drawn on JOIST*
@@ -66,6 +70,10 @@
 //
 //	framecheck member --size 2x10 --span 14ft [flags]
 //
+// Lengths (L) carry their unit as the trade writes them: 14'-6", 14' 6",
+// 14ft, 168in, 3 1/2", 4.2m, 350mm. A bare number is refused, naming both
+// readings: "--span 14: 14 in or 14 ft? write 14ft or 14in".
+//
 // Checks one joist described by flags and prints the calculation trace:
 // reference design values and their table, adjustment factors, and for
 // each check its governing load combination, the formulas with the numbers
@@ -79,9 +87,9 @@
 //	--species NAME      species group (default Douglas Fir-Larch)
 //	--grade G           grade (default No.2)
 //	--overhang L        cantilever past the last bearing's centre-line
-//	--bearing L         bearing length at each support (default 3.5)
+//	--bearing L         bearing length at each support (default 3.5in)
 //	--spacing L         on-centre spacing, taken as the tributary width
-//	                    (default 16)
+//	                    (default 16in)
 //	--dead PSF          D, self-weight included (default 12)
 //	--live PSF          L (default 40 for a floor, 0 for a roof)
 //	--roof-live PSF     Lr (default 0 for a floor, 20 for a roof)
@@ -150,7 +158,7 @@ func main() {
 // Exit codes.
 const (
 	exitOK    = 0 // every member passes, or the command did its job
-	exitFail  = 1 // a member fails or is in error
+	exitFail  = 1 // a member fails or is in error, or the run is doubtful
 	exitUsage = 2 // unusable input or usage
 )
 
@@ -233,5 +241,5 @@ func usage(w io.Writer) {
 	}
 	fmt.Fprintln(w)
 	fmt.Fprintln(w, "Run 'framecheck <command> --help' for a command's flags.")
-	fmt.Fprintln(w, "Exit status: 0 all pass, 1 a member fails, 2 bad input or usage.")
+	fmt.Fprintln(w, "Exit status: 0 all pass, 1 a member fails or is in error or the run is doubtful, 2 bad input or usage.")
 }

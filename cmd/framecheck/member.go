@@ -28,8 +28,9 @@ func runMember(args []string, stdout, stderr io.Writer) int {
 Checks one joist described by flags and prints the calculation trace:
 design values, adjustment factors, and for each check its governing load
 combination, the formulas with the numbers put in, and the ratio.
-Lengths are inches unless they carry a unit: 14ft, 14'6", 3.5in, 4.2m,
-350mm. Exit status 0 when the joist passes, 1 when it fails.`)
+Lengths carry their unit as the trade writes them: 14'-6", 14' 6", 14ft,
+168in, 3 1/2", 4.2m, 350mm; a bare number is refused (14 in or 14 ft?).
+Exit status 0 when the joist passes, 1 when it fails.`)
 	var a memberArgs
 	a.bearing.in, a.spacing.in = 3.5, 16
 	f.StringVar(&a.size, "size", "", "nominal `size`, e.g. 2x10 (required)")

@@ -2,6 +2,7 @@ package main
 
 import (
 	"encoding/binary"
+	"errors"
 	"fmt"
 	"math"
 	"reflect"
@@ -112,6 +113,7 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 	}
 	o.issues = append(o.issues, d.Issues...)
 	o.issues = append(o.issues, plan.Issues...)
+	spanWarnings(plan, &o.issues)
 
 	inputs := make([]check.Member, len(plan.Members))
 	shifts := make([]float64, len(plan.Members))
@@ -357,6 +359,12 @@ func checkInput(p *Project, plan *framing.Plan, k int) (cm check.Member, shift f
 		cm.BlockingAtIn = append(cm.BlockingAtIn, x+shift)
 	}
 	cm.Repetitive = repetitive(plan, k)
+	// A built-up member ("(2) 2x10" from a callout) is an error until the
+	// engine checks built-up members, with or without --size: never one
+	// ply, nor a single joist picked in its place.
+	if _, err := check.ParseSize(m.Size); errors.Is(err, check.ErrBuiltUp) {
+		msgs = append(msgs, err.Error())
+	}
 	zs, zmsgs := memberZones(p, m.Zones)
 	msgs = append(msgs, zmsgs...)
 	if zs == nil {

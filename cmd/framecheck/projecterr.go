@@ -1,6 +1,7 @@
 package main
 
 import (
+	"errors"
 	"fmt"
 	"sort"
 	"strconv"
@@ -180,7 +181,10 @@ func deflectionLimit(x float64) string {
 // "2 X 10") and returns its canonical name.
 func sizeCheck(s string) (string, string) {
 	sec, err := check.ParseSize(s)
-	if err != nil {
+	switch {
+	case errors.Is(err, check.ErrMetricSection), errors.Is(err, check.ErrBuiltUp):
+		return "", `a nominal size such as "2x10" (` + err.Error() + ")"
+	case err != nil:
 		return "", `a nominal size such as "2x10" (2x, 3x or 4x; depth 4 to 16)`
 	}
 	return sec.Name, ""

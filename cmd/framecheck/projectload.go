@@ -116,7 +116,9 @@ func (ld *loader) get(t *table, key, show string) (any, string, bool) {
 }
 
 // num reads a number (integer or float) checked by rule; unit goes into
-// messages.
+// messages. A key in inches ("in", its name ending in _in) also takes a
+// length as the trade writes it, as a string: "3 1/2\"", "1'-0\"", "89mm";
+// a bare number there is inches, as the key's name says.
 func (ld *loader) num(t *table, key, unit string, dst *float64, rule func(float64) string) {
 	v, path, ok := ld.get(t, key, "")
 	if !ok {
@@ -129,6 +131,17 @@ func (ld *loader) num(t *table, key, unit string, dst *float64, rule func(float6
 		x = float64(n)
 	case float64:
 		x = n
+	case string:
+		if unit != "in" {
+			ld.errorf(path, "expected a number (%s, %s), got %s", unit, rule(-1), describe(v))
+			return
+		}
+		l, err := parseLengthIn(n)
+		if err != nil {
+			ld.errorf(path, "expected a number of inches or a length with its unit (%s): %v", rule(-1), err)
+			return
+		}
+		x = l
 	default:
 		ld.errorf(path, "expected a number (%s, %s), got %s", unit, rule(-1), describe(v))
 		return

@@ -7,6 +7,8 @@ package main
 const starterProject = `# framecheck project file: the designer's inputs for one framing plan.
 #
 # Lengths are inches unless a key says otherwise; area loads are psf.
+# A key in inches (ending in _in) also takes a length with its unit as a
+# string, as framers write it: "3 1/2\"", "1'-0\"", "89mm".
 # Every plain key may be left out and then takes the value written here.
 # A misspelled or unknown key is an error, never ignored.
 # Check with: framecheck check PLAN.dxf -p framecheck.toml
