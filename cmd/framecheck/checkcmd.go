@@ -442,24 +442,7 @@ func printSummary(w io.Writer, c *checkRun, proj *Project, r *export.Results, wr
 	colour := useColour(w)
 	fmt.Fprintf(w, "\nframecheck %s: %d members: %d pass, %d fail, %d error\n",
 		r.Plan, r.Summary.Members, r.Summary.Pass, r.Summary.Fail, r.Summary.Error)
-	if used := proj.DefaultsUsed(); len(used) > 0 {
-		if c.projectPath == "" {
-			fmt.Fprintf(w, "no project file: built-in defaults used (%d settings; see the Inputs sheet)\n", len(used))
-			if f := c.unusedProjectFile(); f != "" {
-				fmt.Fprintf(w, "%s was not read: pass it with -p %s\n", f, f)
-			}
-		} else {
-			fmt.Fprintf(w, "%d settings left out of %s took their defaults", len(used), c.projectPath)
-			if len(used) > maxDefaultsListed {
-				fmt.Fprintln(w, " (listed in the Notes sheet)")
-			} else {
-				fmt.Fprintln(w, ":")
-				for _, u := range used {
-					fmt.Fprintf(w, "  %s\n", u)
-				}
-			}
-		}
-	}
+	printDefaults(w, c, proj)
 	if c.size {
 		fmt.Fprintln(w, sizingLine(proj, r))
 	}

@@ -72,7 +72,7 @@ var schema = []struct {
 	{"[design]", []string{"top_edge_braced", "shear_at_d", "wet_service", "temperature", "incised", "kcr",
 		"add_self_weight", "combinations", "pattern_live_loads"}},
 	{"[loads]", []string{"default_zone"}},
-	{"[[zone]]", []string{"name", "use", "dead_psf", "live_psf", "roof_live_psf", "snow_psf", "wind_down_psf",
+	{"[[zone]]", []string{"name", "use", "allow_zero", "dead_psf", "live_psf", "roof_live_psf", "snow_psf", "wind_down_psf",
 		"wind_up_psf", "ceiling", "ceiling_braces_bottom", "live_deflection_limit", "total_deflection_limit"}},
 	{"[sizing]", []string{"candidates", "blocking_piece_weight_bf"}},
 }
