@@ -126,21 +126,21 @@ check on them, so the whole job can be seen with no files at hand.`)
 	// (the demo's own files from an earlier run may be written again).
 	for _, w := range files {
 		if old, err := os.ReadFile(w.path); err == nil && !bytes.Equal(old, w.data) {
-			fmt.Fprintf(stderr, "framecheck: demo: %s exists and is not the demo's; choose another -o\n", w.path)
+			fmt.Fprintf(stderr, "framecheck: demo: %s exists and is not the demo's; choose another -o\n", termText(w.path))
 			return exitUsage
 		}
 	}
 	if err := os.MkdirAll(c.outDir, 0o755); err != nil {
-		fmt.Fprintf(stderr, "framecheck: %v\n", err)
+		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitUsage
 	}
 	for _, w := range files {
 		if err := os.WriteFile(w.path, w.data, 0o644); err != nil {
-			fmt.Fprintf(stderr, "framecheck: %v\n", err)
+			fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 			return exitUsage
 		}
 	}
-	fmt.Fprintf(stdout, "demo plan and project file written to %s\n", c.outDir)
+	fmt.Fprintf(stdout, "demo plan and project file written to %s\n", termText(c.outDir))
 	return c.run(stdout, stderr)
 }
 
@@ -150,18 +150,18 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	if c.projectPath != "" {
 		p, err := LoadProject(c.projectPath)
 		if err != nil {
-			fmt.Fprintf(stderr, "framecheck: %v\n", err)
+			fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 			return exitUsage
 		}
 		proj = p
 	}
 	if err := c.checkPaths(); err != nil {
-		fmt.Fprintf(stderr, "framecheck: %v\n", err)
+		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitUsage
 	}
 	o, err := runPipeline(pipelineInput{planPath: c.planPath, project: proj, units: c.units, size: c.size})
 	if err != nil {
-		fmt.Fprintf(stderr, "framecheck: %v\n", err)
+		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitUsage
 	}
 	if len(o.plan.Members) == 0 {
@@ -170,13 +170,13 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 			layersCmd += " -p " + c.projectPath
 		}
 		fmt.Fprintf(stderr, "framecheck: %s: no joists found on the joist layers %s (run '%s' to see the drawing's layers and the role each gets)\n",
-			c.planPath, strings.Join(proj.Layers.Joists, ", "), layersCmd)
+			termText(c.planPath), termText(strings.Join(proj.Layers.Joists, ", ")), termText(layersCmd))
 		if like := joistLikeLayers(layerRows(o.drawing, proj)); len(like) > 0 {
 			fmt.Fprintf(stderr, "framecheck: the joists may be on %s: name that layer in [layers] joists of the project file\n",
-				strings.Join(like, ", "))
+				termText(strings.Join(like, ", ")))
 		}
 		if f := c.unusedProjectFile(); f != "" {
-			fmt.Fprintf(stderr, "framecheck: no -p given, so the built-in layer patterns applied; to use %s, add -p %s\n", f, f)
+			fmt.Fprintf(stderr, "framecheck: no -p given, so the built-in layer patterns applied; to use %s, add -p %s\n", termText(f), termText(f))
 		}
 		printIssues(stderr, o.issues)
 		return exitUsage
@@ -192,11 +192,11 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	res, bad := export.Sanitize(res)
 	if len(bad) > 0 {
 		fmt.Fprintf(stderr, "framecheck: %d non-finite values written as 0 and their members put in error: %s\n",
-			len(bad), strings.Join(bad[:min(len(bad), 5)], "; "))
+			len(bad), termText(strings.Join(bad[:min(len(bad), 5)], "; ")))
 	}
 	written, err := c.write(o, res, stderr)
 	if err != nil {
-		fmt.Fprintf(stderr, "framecheck: %v\n", err)
+		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitUsage
 	}
 	printIssues(stderr, o.issues)
@@ -208,7 +208,7 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	// (entities past the limit, coordinates that overflow): not a clean run.
 	if n := errorFindings(o.issues); n > 0 {
 		fmt.Fprintf(stderr, "framecheck: %s: %d error finding(s) above: part of the drawing was not read, so not every joist may have been checked\n",
-			c.planPath, n)
+			termText(c.planPath), n)
 		return exitFail
 	}
 	return exitOK
@@ -391,7 +391,7 @@ func (c *checkRun) write(o *outcome, res *export.Results, stderr io.Writer) (wri
 		// file without TABLES, no 0/EOF): the markup goes alone to the
 		// overlay instead, and the check results stand.
 		fmt.Fprintf(stderr, "framecheck: no annotated copy of %s: %v; the markup is written alone to %s instead\n",
-			c.planPath, aerr, filepath.Join(c.outDir, names[3]))
+			termText(c.planPath), termText(aerr.Error()), termText(filepath.Join(c.outDir, names[3])))
 		overlay = true
 	default:
 		if err := add(names[2], aerr); err != nil {
@@ -428,7 +428,7 @@ func printIssues(w io.Writer, issues dxfimport.IssueList) {
 			fmt.Fprintf(w, "framecheck: ... and %d more findings (see results.json messages)\n", len(issues)-most)
 			break
 		}
-		fmt.Fprintf(w, "framecheck: %s\n", is.Error())
+		fmt.Fprintf(w, "framecheck: %s\n", termText(is.Error()))
 	}
 }
 
@@ -441,10 +441,10 @@ const maxDefaultsListed = 5
 func printSummary(w io.Writer, c *checkRun, proj *Project, r *export.Results, written []string) {
 	colour := useColour(w)
 	fmt.Fprintf(w, "\nframecheck %s: %d members: %d pass, %d fail, %d error\n",
-		r.Plan, r.Summary.Members, r.Summary.Pass, r.Summary.Fail, r.Summary.Error)
+		termText(r.Plan), r.Summary.Members, r.Summary.Pass, r.Summary.Fail, r.Summary.Error)
 	printDefaults(w, c, proj)
 	if c.size {
-		fmt.Fprintln(w, sizingLine(proj, r))
+		fmt.Fprintln(w, termText(sizingLine(proj, r)))
 	}
 	fmt.Fprintln(w)
 	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
@@ -458,8 +458,9 @@ func printSummary(w io.Writer, c *checkRun, proj *Project, r *export.Results, wr
 	}
 	fmt.Fprintln(tw, "mark\tcount\tsize\tgrade\tzone\tspacing\ttrib\tspans\tblocking/span\tmax ratio\tstatus")
 	for _, m := range r.Marks {
-		fmt.Fprintf(tw, "%s\t%d\t%s\t%s %s\t%s\t%s\t%s\t%s\t%s\t%.2f\t%s\n", m.Mark, m.Count, m.Size, shortSpecies(m.Species), m.Grade,
-			m.Zone, inchText(m.SpacingIn), inchText(trib[m.Mark]), spansText(m.SpansIn, m.OverhangsIn), rowsText(m.BlockingRowsPerSpan),
+		fmt.Fprintf(tw, "%s\t%d\t%s\t%s %s\t%s\t%s\t%s\t%s\t%s\t%.2f\t%s\n", termCell(m.Mark, cellWidth), m.Count,
+			termCell(m.Size, cellWidth), termCell(shortSpecies(m.Species), cellWidth), termCell(m.Grade, cellWidth),
+			termCell(m.Zone, cellWidth), inchText(m.SpacingIn), inchText(trib[m.Mark]), spansText(m.SpansIn, m.OverhangsIn), rowsText(m.BlockingRowsPerSpan),
 			m.MaxRatio, statusText(colour, m.Status))
 	}
 	tw.Flush()
@@ -487,8 +488,9 @@ func printSummary(w io.Writer, c *checkRun, proj *Project, r *export.Results, wr
 			if m.Status == "error" {
 				ratio = "-" // not checked: no ratio
 			}
-			fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\n", m.ID, m.Mark, m.Size, m.Governing, ratio,
-				statusText(colour, m.Status), m.Source, msg)
+			fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\n", termCell(m.ID, cellWidth), termCell(m.Mark, cellWidth),
+				termCell(m.Size, cellWidth), termCell(m.Governing, cellWidth), ratio,
+				statusText(colour, m.Status), termCell(m.Source, sourceWidth), termCell(msg, messageWidth))
 		}
 		tw.Flush()
 	}
@@ -503,7 +505,7 @@ func printSummary(w io.Writer, c *checkRun, proj *Project, r *export.Results, wr
 	tw.Flush()
 	fmt.Fprintln(w, "\nwritten:")
 	for _, p := range written {
-		fmt.Fprintf(w, "  %s\n", p)
+		fmt.Fprintf(w, "  %s\n", termText(p))
 	}
 	fmt.Fprintln(w, "\nframecheck assists a qualified designer; it does not replace engineering judgement or a")
 	fmt.Fprintln(w, "licensed professional's review. Check design values and code editions against local adoption.")

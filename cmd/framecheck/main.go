@@ -215,7 +215,7 @@ func unknownCommand(name string, stderr io.Writer) int {
 	if best != "" {
 		msg += fmt.Sprintf("; did you mean %q?", best)
 	}
-	fmt.Fprintln(stderr, msg)
+	fmt.Fprintln(stderr, termText(msg))
 	fmt.Fprintln(stderr, "run 'framecheck help' for the list of commands")
 	return exitUsage
 }

@@ -20,18 +20,29 @@ const maxTermLine = 2000
 // termText returns s with every control character (C0 but tab, DEL, C1),
 // every bidirectional override and every byte that is not UTF-8 escaped
 // as Go writes them (\x1b, \u202e, \xff), cut to maxTermLine runes with an
-// ellipsis. Newlines are kept: callers print multi-line messages.
-func termText(s string) string { return escapeTerm(s, maxTermLine, true) }
+// ellipsis. Newlines are kept, each line cut on its own: callers print
+// multi-line messages (every mistake of a project file, one a line).
+func termText(s string) string {
+	if !strings.Contains(s, "\n") {
+		return escapeTerm(s, maxTermLine)
+	}
+	lines := strings.Split(s, "\n")
+	for i, l := range lines {
+		lines[i] = escapeTerm(l, maxTermLine)
+	}
+	return strings.Join(lines, "\n")
+}
 
 // termCell is termText for one table cell: newlines are escaped too, and
 // the text is cut to width runes (at least 2) with an ellipsis.
-func termCell(s string, width int) string { return escapeTerm(s, max(width, 2), false) }
+func termCell(s string, width int) string { return escapeTerm(s, max(width, 2)) }
 
-// escapeTerm escapes s and cuts it to width runes of output.
-func escapeTerm(s string, width int, keepNewline bool) string {
+// escapeTerm escapes s, newlines included, and cuts it to width runes of
+// output.
+func escapeTerm(s string, width int) string {
 	clean := true
 	for i := 0; i < len(s); i++ {
-		if b := s[i]; b < 0x20 && !(b == '\t' || b == '\n' && keepNewline) || b == 0x7f || b >= 0x80 {
+		if b := s[i]; b < 0x20 && b != '\t' || b == 0x7f || b >= 0x80 {
 			clean = false
 			break
 		}
@@ -47,8 +58,8 @@ func escapeTerm(s string, width int, keepNewline bool) string {
 		switch {
 		case r == utf8.RuneError && size == 1:
 			piece = fmt.Sprintf(`\x%02x`, s[i])
-		case r == '\n' && keepNewline, r == '\t':
-			piece = string(r)
+		case r == '\t':
+			piece = "\t"
 		case r < 0x20 || r == 0x7f:
 			piece = fmt.Sprintf(`\x%02x`, r)
 		case r >= 0x80 && r < 0xa0, isBidiControl(r):
@@ -73,3 +84,11 @@ func escapeTerm(s string, width int, keepNewline bool) string {
 func isBidiControl(r rune) bool {
 	return r >= 0x202a && r <= 0x202e || r >= 0x2066 && r <= 0x2069 || r == 0x200e || r == 0x200f || r == 0x061c
 }
+
+// Widths of table cells on the terminal, in runes: names and sizes, the
+// source position of a member, its first message.
+const (
+	cellWidth    = 40
+	sourceWidth  = 72
+	messageWidth = 120
+)

@@ -42,3 +42,12 @@ func TestTermText(t *testing.T) {
 		t.Errorf("a 1 MB name prints %d bytes", len(got))
 	}
 }
+
+// Each line of a multi-line message is cut on its own.
+func TestTermTextLines(t *testing.T) {
+	in := strings.Repeat("x", 3000) + "\nsecond line"
+	got := termText(in)
+	if !strings.HasSuffix(got, "…\nsecond line") {
+		t.Errorf("second line lost: ...%q", got[len(got)-30:])
+	}
+}
