@@ -33,9 +33,12 @@ func termText(s string) string {
 	return strings.Join(lines, "\n")
 }
 
-// termCell is termText for one table cell: newlines are escaped too, and
+// termCell is termText for one table cell: newlines and tabs (which would
+// break the columns) are escaped too, and
 // the text is cut to width runes (at least 2) with an ellipsis.
-func termCell(s string, width int) string { return escapeTerm(s, max(width, 2)) }
+func termCell(s string, width int) string {
+	return escapeTerm(strings.ReplaceAll(s, "\t", `\x09`), max(width, 2))
+}
 
 // escapeTerm escapes s, newlines included, and cuts it to width runes of
 // output.
