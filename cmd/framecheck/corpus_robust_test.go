@@ -20,6 +20,10 @@ const (
 )
 
 func init() {
+	// minsert-bomb.dxf with its one line on a joist layer.
+	badFiles["minsert-bomb-joists.dxf"] = func() string {
+		return strings.Replace(badFiles["minsert-bomb.dxf"](), "A-FURN", "JOIST-X", 1)
+	}
 	badFiles["escape-layers.dxf"] = func() string {
 		var d dxfText
 		d.header("AC1032", 1)
@@ -91,5 +95,41 @@ func TestHugeLayerNameIsCut(t *testing.T) {
 	}
 	if strings.Contains(r.stdout+r.stderr, "\x1b") {
 		t.Error("raw ESC on the terminal")
+	}
+}
+
+// TestProjectFileBounded: -p /dev/zero and a 5 MiB project file are
+// refused with the limit stated, exit 2, before anything is read into
+// memory past the limit (issue 15 item 5).
+func TestProjectFileBounded(t *testing.T) {
+	dir := t.TempDir()
+	big := filepath.Join(dir, "big.toml")
+	f, err := os.Create(big)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if err := f.Truncate(5 << 20); err != nil {
+		t.Fatal(err)
+	}
+	f.Close()
+	projects := []string{big}
+	if _, err := os.Stat("/dev/zero"); err == nil {
+		projects = append(projects, "/dev/zero")
+	}
+	for _, p := range projects {
+		var stdout, stderr bytes.Buffer
+		out := filepath.Join(dir, "out")
+		code := run([]string{"check", filepath.Join(badDir, "good.dxf"), "-p", p, "-o", out}, &stdout, &stderr)
+		if code != exitUsage || !strings.Contains(stderr.String(), "project file "+p) || !strings.Contains(stderr.String(), "the limit is 4 MiB") {
+			t.Errorf("-p %s: exit %d\n%s", p, code, stderr.String())
+		}
+		if _, err := os.Stat(out); err == nil {
+			t.Errorf("-p %s: output folder created", p)
+		}
+	}
+	var stdout, stderr bytes.Buffer
+	if code := run([]string{"layers", filepath.Join(badDir, "good.dxf"), "-p", big}, &stdout, &stderr); code != exitUsage ||
+		!strings.Contains(stderr.String(), "the limit is 4 MiB") {
+		t.Errorf("layers -p big: exit %d\n%s", code, stderr.String())
 	}
 }

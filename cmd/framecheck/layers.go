@@ -47,6 +47,12 @@ func layerRows(d *dxfimport.Drawing, p *Project) []layerRow {
 	for _, e := range d.Entities {
 		get(e.Pos.Layer).Counts[e.Kind]++
 	}
+	for layer, counts := range d.Dropped { // layers with no role: counted, not kept
+		r := get(layer)
+		for k, n := range counts {
+			r.Counts[k] += n
+		}
+	}
 	out := make([]layerRow, 0, len(rows))
 	for _, r := range rows {
 		out = append(out, *r)
@@ -115,7 +121,7 @@ Without -p the built-in layer patterns apply.`)
 			return exitUsage
 		}
 	}
-	opt := dxfimport.Options{Units: p.Drawing.Units}
+	opt := dxfimport.Options{Units: p.Drawing.Units, Keep: keepLayer(p)}
 	if *units != "" {
 		opt.Units = *units
 	}
@@ -143,6 +149,23 @@ Without -p the built-in layer patterns apply.`)
 	return exitOK
 }
 
+// keepLayer is the reader's Options.Keep for a project: the entities of
+// layers that have a role are kept, the others only counted.
+func keepLayer(p *Project) func(string) bool {
+	return func(layer string) bool { return p.LayerRole(layer) != "" }
+}
+
+// droppedCount is the number of entities read on layers with no role.
+func droppedCount(d *dxfimport.Drawing) int {
+	n := 0
+	for _, c := range d.Dropped {
+		for _, k := range c {
+			n += k
+		}
+	}
+	return n
+}
+
 // prefixLines puts "framecheck: " before every line after the first.
 func prefixLines(s string) string {
 	return strings.ReplaceAll(s, "\n", "\nframecheck: ")
@@ -154,7 +177,7 @@ func prefixLines(s string) string {
 func printLayers(w io.Writer, d *dxfimport.Drawing, p *Project, unitsSource string) {
 	rows := layerRows(d, p)
 	fmt.Fprintf(w, "%s: %s, %s, %d entities on %d layers\n", termText(d.File), termText(versionName(d.Version)),
-		termText(unitsNote(d, unitsSource)), len(d.Entities), len(rows))
+		termText(unitsNote(d, unitsSource)), len(d.Entities)+droppedCount(d), len(rows))
 	source := "built-in defaults"
 	if p.File != "" {
 		source = p.File

@@ -96,7 +96,7 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 		units = in.units
 	}
 	resume := pauseGC()
-	d, err := dxfimport.ReadFile(in.planPath, dxfimport.Options{Units: units})
+	d, err := dxfimport.ReadFile(in.planPath, dxfimport.Options{Units: units, Keep: keepLayer(p)})
 	if err != nil {
 		resume()
 		return nil, err

@@ -1,8 +1,9 @@
 package main
 
 import (
+	"bytes"
+	"errors"
 	"fmt"
-	"os"
 	"path/filepath"
 	"strings"
 
@@ -417,12 +418,15 @@ func (ld *loader) materialsFile(t *table) {
 	if !filepath.IsAbs(path) {
 		path = filepath.Join(filepath.Dir(ld.file), path)
 	}
-	f, err := os.Open(path)
+	data, err := readLimited(path, maxProjectBytes)
+	if errors.Is(err, errTooLarge) {
+		err = fmt.Errorf("%s: %w (the limit is %d MiB)", path, err, maxProjectBytes>>20)
+	}
 	if err != nil {
 		ld.errorf(joinPath(t.path, "materials_file"), "%v", err)
 		return
 	}
-	defer f.Close()
+	f := bytes.NewReader(data)
 	var user *check.Materials
 	switch strings.ToLower(filepath.Ext(path)) {
 	case ".csv":
