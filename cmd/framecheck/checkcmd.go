@@ -12,8 +12,8 @@ import (
 	"strconv"
 	"strings"
 	"sync"
+	"sync/atomic"
 	"text/tabwriter"
-	"time"
 
 	"framecheck/dxfimport"
 	"framecheck/export"
@@ -61,16 +61,26 @@ type checkRun struct {
 	units       string
 	size        bool
 	overlay     bool
+
+	planData []byte                    // the drawing, read once: checked and annotated from these bytes
+	set      atomic.Pointer[outputSet] // the output folder while the run holds it
 }
+
+// afterRead, when not nil, runs once the drawing is in memory (a test
+// replaces the file on disk there).
+var afterRead func()
 
 func runCheckCmd(args []string, stdout, stderr io.Writer) int {
 	f := newFlags("check", "framecheck check PLAN.dxf [-p PROJECT.toml] [-o OUTDIR] [--units U] [--size] [--overlay]",
 		`Reads the plan, finds the joists and their supports, checks every joist
 (NDS 2018 ASD, ASCE 7-16 combinations, IBC 2018 deflection limits), decides
-the blocking rows each run needs, and writes results.json, schedule.xlsx and
-an annotated copy of the drawing into OUTDIR. Exit status: 0 every member
-passes, 1 a member fails or is in error or part of the drawing could not be
-read, 2 unusable input or usage.`)
+the blocking rows each run needs, and writes results.json, schedule.xlsx,
+report.html, an annotated copy of the drawing and the manifest
+framecheck-run.json into OUTDIR, replacing the previous set as a whole.
+Exit status: 0 every member passes, 1 a member fails or is in error or part
+of the drawing could not be read, 2 unusable input or usage, 3 the machine
+failed the run (disk full, permission, OUTDIR locked by another run; the
+previous outputs kept), 130/143 stopped by SIGINT/SIGTERM.`)
 	var c checkRun
 	f.StringVar(&c.projectPath, "p", "", "project file (TOML); default: built-in defaults")
 	f.StringVar(&c.outDir, "o", "", "output folder (default: a folder beside the plan, named after it)")
@@ -146,6 +156,7 @@ check on them, so the whole job can be seen with no files at hand.`)
 
 // run does the whole job for one plan.
 func (c *checkRun) run(stdout, stderr io.Writer) int {
+	defer c.handleSignals(stderr)()
 	proj := DefaultProject()
 	if c.projectPath != "" {
 		p, err := LoadProject(c.projectPath)
@@ -159,7 +170,18 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitUsage
 	}
-	o, err := runPipeline(pipelineInput{planPath: c.planPath, project: proj, units: c.units, size: c.size})
+	// The drawing is read once: the checks and the annotated copy use
+	// the same bytes, whatever happens to the file meanwhile.
+	data, err := os.ReadFile(c.planPath)
+	if err != nil {
+		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
+		return exitUsage
+	}
+	c.planData = data
+	if afterRead != nil {
+		afterRead()
+	}
+	o, err := runPipeline(pipelineInput{planPath: c.planPath, planData: data, project: proj, units: c.units, size: c.size})
 	if err != nil {
 		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitUsage
@@ -186,6 +208,7 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 			Severity: dxfimport.SevWarning, Msg: msg}}, o.issues...)
 	}
 	res := exportResults(o, c.planPath)
+	res.InputSHA256 = sha256Hex(c.planData)
 	// No NaN or Inf reaches any output, the summary or the exit status: a
 	// member holding one is in error, saying which value (a safety net;
 	// the checks should never produce one).
@@ -194,10 +217,12 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "framecheck: %d non-finite values written as 0 and their members put in error: %s\n",
 			len(bad), termText(strings.Join(bad[:min(len(bad), 5)], "; ")))
 	}
-	written, err := c.write(o, res, stderr)
+	written, err := c.write(o, res, proj, stderr)
 	if err != nil {
+		// Every failure to write is one of the machine (a full disk, a
+		// permission, a lock): exit 3, the previous outputs kept.
 		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
-		return exitUsage
+		return exitMachine
 	}
 	printIssues(stderr, o.issues)
 	printSummary(stdout, c, proj, res, written)
@@ -313,32 +338,33 @@ func (c *checkRun) outputNames() []string {
 	return []string{resultsName, scheduleName, base + "-checked.dxf", base + "-overlay.dxf", reportName}
 }
 
-// write writes every output into the output folder, nothing lost: each
-// file is written complete into a private staging folder inside it, and
-// only when all are written are they renamed into place. A failure leaves
-// the folder's earlier files as they were and no partial file behind (a
-// folder that the run created is removed again).
-func (c *checkRun) write(o *outcome, res *export.Results, stderr io.Writer) (written []string, err error) {
-	_, statErr := os.Stat(c.outDir)
-	created := os.IsNotExist(statErr)
-	if err := os.MkdirAll(c.outDir, 0o755); err != nil {
-		return nil, err
-	}
-	stage, err := os.MkdirTemp(c.outDir, ".framecheck-partial-")
+// write writes every output into the output folder as one set (see
+// outset.go): each file complete into a staging folder, then the whole
+// set swapped in, the manifest last. A failure leaves the folder's
+// previous set as it was and no partial file behind (a folder that the
+// run created is removed again). Every error is a machineError.
+func (c *checkRun) write(o *outcome, res *export.Results, proj *Project, stderr io.Writer) (written []string, err error) {
+	when, err := runTime()
 	if err != nil {
 		return nil, err
 	}
+	set, err := openOutputSet(c.outDir)
+	if err != nil {
+		return nil, err
+	}
+	c.set.Store(set)
 	defer func() {
-		os.RemoveAll(stage)
-		if err != nil && created {
-			os.Remove(c.outDir) // only if still empty
+		if err != nil {
+			set.abort()
+		} else {
+			set.close()
 		}
 	}()
 	names := c.outputNames()
 	var staged []string
 	add := func(name string, werr error) error {
 		if werr != nil && !errors.Is(werr, export.ErrNonFinite) {
-			return fmt.Errorf("writing %s: %w", filepath.Join(c.outDir, name), werr)
+			return machine(fmt.Errorf("writing %s: %w", filepath.Join(c.outDir, name), werr))
 		}
 		staged = append(staged, name)
 		return nil
@@ -352,12 +378,12 @@ func (c *checkRun) write(o *outcome, res *export.Results, stderr io.Writer) (wri
 	// then take their errors in this order, as when they were written one
 	// after another.
 	jobs := []func() error{
-		func() error { return export.WriteJSON(filepath.Join(stage, names[0]), res) },
-		func() error { return export.WriteXLSX(filepath.Join(stage, names[1]), res) },
+		func() error { return export.WriteJSON(set.path(names[0]), res) },
+		func() error { return export.WriteXLSX(set.path(names[1]), res) },
 		func() error {
-			return export.WriteReport(filepath.Join(stage, names[4]), res, planGeometry(o), time.Now())
+			return export.WriteReport(set.path(names[4]), res, planGeometry(o), when)
 		},
-		func() error { return export.Annotate(c.planPath, filepath.Join(stage, names[2]), mk) },
+		func() error { return export.AnnotateBytes(c.planData, c.planPath, set.path(names[2]), mk) },
 	}
 	// One goroutine each: on a large plan they take about the same time
 	// (100,000 joists: spreadsheet 0.7 s, results 0.4 s, annotated
@@ -390,7 +416,7 @@ func (c *checkRun) write(o *outcome, res *export.Results, stderr io.Writer) (wri
 		// The drawing was read, but its copy cannot be annotated (an R13+
 		// file without TABLES, no 0/EOF): the markup goes alone to the
 		// overlay instead, and the check results stand.
-		fmt.Fprintf(stderr, "framecheck: no annotated copy of %s: %v; the markup is written alone to %s instead\n",
+		fmt.Fprintf(stderr, "framecheck: no annotated copy of %s: %s; the markup is written alone to %s instead\n",
 			termText(c.planPath), termText(aerr.Error()), termText(filepath.Join(c.outDir, names[3])))
 		overlay = true
 	default:
@@ -399,26 +425,28 @@ func (c *checkRun) write(o *outcome, res *export.Results, stderr io.Writer) (wri
 		}
 	}
 	if overlay {
-		if err := add(names[3], export.WriteOverlay(filepath.Join(stage, names[3]), mk, res.DrawingUnits)); err != nil {
+		if err := add(names[3], export.WriteOverlay(set.path(names[3]), mk, res.DrawingUnits)); err != nil {
 			return nil, err
 		}
 	}
-	// Every output is complete: refuse before renaming any if one cannot
-	// take its place, then move them in.
-	for _, name := range staged {
-		if st, serr := os.Lstat(filepath.Join(c.outDir, name)); serr == nil && st.IsDir() {
-			return nil, fmt.Errorf("writing %s: a folder of that name is in the way", filepath.Join(c.outDir, name))
-		}
+	in := &manifestInput{Path: c.planPath, SHA256: res.InputSHA256, Bytes: int64(len(c.planData))}
+	var pj *manifestInput
+	if c.projectPath != "" {
+		pj = &manifestInput{Path: c.projectPath, SHA256: proj.sha256, Bytes: proj.size}
 	}
-	for _, name := range staged {
-		dst := filepath.Join(c.outDir, name)
-		if err := os.Rename(filepath.Join(stage, name), dst); err != nil {
-			return written, fmt.Errorf("writing %s: %w", dst, err)
-		}
-		written = append(written, dst)
+	manifest, err := buildManifest(set, staged, in, pj, when)
+	if err != nil {
+		return nil, machine(fmt.Errorf("hashing the outputs in %s: %w", set.stage, err))
 	}
-	return written, nil
+	if beforeSwap != nil {
+		beforeSwap(set.stage)
+	}
+	return set.commit(staged, names, manifest)
 }
+
+// beforeSwap, when not nil, runs when the whole set is staged, before it
+// is swapped in (a test interrupts the run there).
+var beforeSwap func(stage string)
 
 // printIssues writes the drawing and framing findings, at most 25 of them.
 func printIssues(w io.Writer, issues dxfimport.IssueList) {

@@ -114,8 +114,8 @@ func TestNothingLostFailedRunKeepsOutputs(t *testing.T) {
 		t.Fatal(err)
 	}
 	code, stderr := runCheck(t, "check", plan, "-p", proj, "-o", out, "--overlay")
-	if code != exitUsage || !strings.Contains(stderr, "plan-overlay.dxf") {
-		t.Errorf("blocked output: exit %d, want 2 naming plan-overlay.dxf\n%s", code, stderr)
+	if code != exitMachine || !strings.Contains(stderr, "plan-overlay.dxf") {
+		t.Errorf("blocked output: exit %d, want 3 naming plan-overlay.dxf\n%s", code, stderr)
 	}
 	sameSnapshot(t, "blocked output", before, snapshot(t, out))
 	ents, _ := os.ReadDir(out)

@@ -19,7 +19,10 @@
 //
 // Exit status: 0 when every member passes (or the command succeeded), 1
 // when any member fails or is in error, 2 for unusable input (a bad
-// project file or drawing) or a usage error.
+// project file or drawing) or a usage error, 3 when the machine failed
+// the run (a full disk, a permission refused, the output folder locked by
+// another run: the previous outputs are kept), 130 or 143 after SIGINT or
+// SIGTERM (nothing written, the previous outputs untouched).
 //
 // # check
 //
@@ -28,7 +31,9 @@
 // Reads the plan, finds the joists and their supports, checks every joist,
 // decides the blocking rows each run needs, and writes results.json,
 // schedule.xlsx, report.html and an annotated copy of the drawing
-// (PLAN-checked.dxf) into OUTDIR, then
+// (PLAN-checked.dxf) into OUTDIR as one set that replaces the previous
+// one whole, with the manifest framecheck-run.json (tool version, time,
+// the inputs' and every output's SHA-256) written last, then
 // prints a summary table: members, pass or fail, blocking rows, takeoff
 // totals, and the project-file defaults that applied.
 //
@@ -152,6 +157,10 @@ const (
 	exitOK    = 0 // every member passes, or the command did its job
 	exitFail  = 1 // a member fails or is in error
 	exitUsage = 2 // unusable input or usage
+	// exitMachine: the machine failed the run (disk full, permission
+	// refused, the output folder locked by another run); the previous
+	// outputs are kept.
+	exitMachine = 3
 )
 
 // command is one subcommand of framecheck.
@@ -233,5 +242,6 @@ func usage(w io.Writer) {
 	}
 	fmt.Fprintln(w)
 	fmt.Fprintln(w, "Run 'framecheck <command> --help' for a command's flags.")
-	fmt.Fprintln(w, "Exit status: 0 all pass, 1 a member fails, 2 bad input or usage.")
+	fmt.Fprintln(w, "Exit status: 0 all pass, 1 a member fails, 2 bad input or usage, 3 the machine failed")
+	fmt.Fprintln(w, "(disk full, permission, output folder locked).")
 }

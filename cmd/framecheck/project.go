@@ -36,6 +36,10 @@ type Project struct {
 	given map[string]bool
 	// defaults lists, in file order, each default that applied.
 	defaults []string
+	// sha256 and size are the project file's hash and length, for the
+	// run's manifest ("" and 0 for the built-in defaults).
+	sha256 string
+	size   int64
 }
 
 // DrawingSettings is the [drawing] table.

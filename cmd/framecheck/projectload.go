@@ -26,7 +26,11 @@ func LoadProject(path string) (*Project, error) {
 	if err != nil {
 		return nil, err
 	}
-	return ParseProject(path, data)
+	p, err := ParseProject(path, data)
+	if err == nil {
+		p.sha256, p.size = sha256Hex(data), int64(len(data))
+	}
+	return p, err
 }
 
 // maxProjectBytes bounds the project file and the materials file it
