@@ -170,6 +170,10 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitUsage
 	}
+	if _, err := runTime(); err != nil {
+		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
+		return exitUsage
+	}
 	// The drawing is read once: the checks and the annotated copy use
 	// the same bytes, whatever happens to the file meanwhile.
 	data, err := os.ReadFile(c.planPath)
@@ -181,7 +185,9 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	if afterRead != nil {
 		afterRead()
 	}
-	o, err := runPipeline(pipelineInput{planPath: c.planPath, planData: data, project: proj, units: c.units, size: c.size})
+	// Inside the outputs (and the findings) the drawing is named by
+	// outputName, never by an absolute path.
+	o, err := runPipeline(pipelineInput{planPath: outputName(c.planPath), planData: data, project: proj, units: c.units, size: c.size})
 	if err != nil {
 		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitUsage
@@ -204,7 +210,7 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		return exitUsage
 	}
 	if msg := unmatchedSupports(o); msg != "" {
-		o.issues = append(dxfimport.IssueList{{Pos: dxfimport.Pos{File: c.planPath}, Code: CodeUnmatchedSupport,
+		o.issues = append(dxfimport.IssueList{{Pos: dxfimport.Pos{File: outputName(c.planPath)}, Code: CodeUnmatchedSupport,
 			Severity: dxfimport.SevWarning, Msg: msg}}, o.issues...)
 	}
 	res := exportResults(o, c.planPath)
@@ -429,10 +435,10 @@ func (c *checkRun) write(o *outcome, res *export.Results, proj *Project, stderr 
 			return nil, err
 		}
 	}
-	in := &manifestInput{Path: c.planPath, SHA256: res.InputSHA256, Bytes: int64(len(c.planData))}
+	in := &manifestInput{Path: outputName(c.planPath), SHA256: res.InputSHA256, Bytes: int64(len(c.planData))}
 	var pj *manifestInput
 	if c.projectPath != "" {
-		pj = &manifestInput{Path: c.projectPath, SHA256: proj.sha256, Bytes: proj.size}
+		pj = &manifestInput{Path: outputName(c.projectPath), SHA256: proj.sha256, Bytes: proj.size}
 	}
 	manifest, err := buildManifest(set, staged, in, pj, when)
 	if err != nil {

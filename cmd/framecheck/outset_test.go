@@ -88,8 +88,8 @@ func TestManifest(t *testing.T) {
 	m := wantCompleteSet(t, c.out)
 	data, _ := os.ReadFile(c.plan)
 	want := sha256Hex(data)
-	if m.Schema != ManifestSchema || m.Tool != "framecheck" || m.Version == "" || m.Input.Path != c.plan ||
-		m.Input.SHA256 != want || m.Input.Bytes != int64(len(data)) || m.Project == nil || m.Project.Path != c.proj {
+	if m.Schema != ManifestSchema || m.Tool != "framecheck" || m.Version == "" || m.Input.Path != "plan.dxf" ||
+		m.Input.SHA256 != want || m.Input.Bytes != int64(len(data)) || m.Project == nil || m.Project.Path != "p.toml" {
 		t.Errorf("manifest %+v", m)
 	}
 	if len(m.Files) != 4 {
@@ -234,7 +234,7 @@ func TestTwoRunsOneFolder(t *testing.T) {
 		m := wantCompleteSet(t, c.out)
 		res, _ := os.ReadFile(filepath.Join(c.out, resultsName))
 		fail := bytes.Contains(res, []byte(`"status":"fail"`))
-		if (m.Project.Path == proj2) != fail {
+		if (m.Project.Path == "p2.toml") != fail {
 			t.Errorf("manifest names %s but results.json has fail = %v", m.Project.Path, fail)
 		}
 		checkOutputsClean(t, c.out)

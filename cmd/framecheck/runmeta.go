@@ -8,8 +8,10 @@ import (
 	"io"
 	"os"
 	"os/signal"
+	"path/filepath"
 	"runtime/debug"
 	"strconv"
+	"strings"
 	"sync"
 	"syscall"
 	"time"
@@ -176,4 +178,23 @@ func (c *checkRun) handleSignals(stderr io.Writer) (stop func()) {
 		signal.Stop(ch)
 		close(quit)
 	}
+}
+
+// outputName is how the outputs (results.json, the report, the
+// spreadsheet, the manifest) and the findings name an input file: the
+// path as the user gave it when it is relative, else relative to the
+// working folder when the file is inside it, else its base name. Never
+// an absolute path: two runs on the same input from the same folder
+// write the same bytes, and the files say nothing of the machine's
+// folders.
+func outputName(p string) string {
+	if !filepath.IsAbs(p) {
+		return filepath.ToSlash(filepath.Clean(p))
+	}
+	if wd, err := os.Getwd(); err == nil {
+		if r, err := filepath.Rel(wd, p); err == nil && r != ".." && !strings.HasPrefix(r, ".."+string(filepath.Separator)) {
+			return filepath.ToSlash(r)
+		}
+	}
+	return filepath.Base(p)
 }
