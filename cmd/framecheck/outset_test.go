@@ -401,3 +401,22 @@ func TestChildProcess(t *testing.T) {
 	var out bytes.Buffer
 	os.Exit(run(strings.Split(args, "\x1f"), &out, os.Stderr))
 }
+
+// TestPermissionDenied: an output folder that cannot be made is a
+// failure of the machine, exit 3, with the reason. (Skipped as root,
+// whom permissions do not stop.)
+func TestPermissionDenied(t *testing.T) {
+	if os.Geteuid() == 0 {
+		t.Skip("root is not refused")
+	}
+	c := newOutsetCase(t)
+	ro := filepath.Join(c.dir, "ro")
+	if err := os.Mkdir(ro, 0o555); err != nil {
+		t.Fatal(err)
+	}
+	c.out = filepath.Join(ro, "out")
+	code, stderr := c.check(t)
+	if code != exitMachine || !strings.Contains(stderr, "permission denied") {
+		t.Errorf("exit %d, want 3 saying permission denied\n%s", code, stderr)
+	}
+}
