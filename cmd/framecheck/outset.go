@@ -138,7 +138,13 @@ func (s *outputSet) path(name string) string { return filepath.Join(s.stage, nam
 // removeDir, OUTDIR too when the run created it.
 func (s *outputSet) release(removeDir bool) {
 	if s.stage != "" {
-		os.RemoveAll(s.stage)
+		// A writer still running (an interrupt) may add a file while the
+		// folder is emptied: try again.
+		for range 3 {
+			if os.RemoveAll(s.stage) == nil {
+				break
+			}
+		}
 	}
 	if s.lock != nil {
 		unlock(s.lock, filepath.Join(s.dir, lockName))
