@@ -385,6 +385,65 @@ func TestInterruptChild(t *testing.T) {
 	}
 }
 
+// TestInterruptLargePlan: SIGINT to a child checking a 5,000-joist plan
+// as soon as its staging folder appears, while the outputs are being
+// written: exit 130, no staging folder left, the previous set intact.
+func TestInterruptLargePlan(t *testing.T) {
+	if testing.Short() {
+		t.Skip("runs a child process on a large plan")
+	}
+	exe, err := os.Executable()
+	if err != nil {
+		t.Skip(err)
+	}
+	dir := t.TempDir()
+	p := writeBigPlan(t, dir, 5000, false)
+	out := filepath.Join(dir, "out")
+	if code, stderr := runCheck(t, "check", p.dxf, "-p", p.toml, "-o", out); code != exitFail {
+		t.Fatalf("first run: exit %d\n%s", code, stderr)
+	}
+	before := snapshot(t, out)
+	cmd := exec.Command(exe, "-test.run=^TestChildProcess$")
+	cmd.Env = append(os.Environ(), "FRAMECHECK_CHILD_ARGS="+strings.Join([]string{"check", p.dxf, "-p", p.toml, "-o", out}, "\x1f"),
+		"FRAMECHECK_CHILD_NOHOOK=1")
+	var stderr bytes.Buffer
+	cmd.Stderr = &stderr
+	if err := cmd.Start(); err != nil {
+		t.Fatal(err)
+	}
+	exited := make(chan error, 1)
+	go func() { exited <- cmd.Wait() }()
+	var werr error
+	for sent := false; ; {
+		if !sent {
+			if m, _ := filepath.Glob(filepath.Join(out, stagePrefix+"*")); len(m) > 0 {
+				if err := cmd.Process.Signal(syscall.SIGINT); err != nil {
+					t.Fatal(err)
+				}
+				sent = true
+			}
+		}
+		select {
+		case werr = <-exited:
+		case <-time.After(time.Millisecond):
+			continue
+		}
+		if !sent {
+			t.Skip("the run ended before its staging folder was seen")
+		}
+		break
+	}
+	var ee *exec.ExitError
+	if !errors.As(werr, &ee) || ee.ExitCode() != exitSIGINT {
+		if werr == nil || ee != nil && ee.ExitCode() == exitFail {
+			t.Skip("the run ended before the signal arrived")
+		}
+		t.Fatalf("child: %v\n%s", werr, stderr.String())
+	}
+	sameSnapshot(t, "after the interrupt", before, snapshot(t, out))
+	checkOutputsClean(t, out)
+}
+
 // TestChildProcess is the child of TestInterruptChild: it runs the
 // command given in FRAMECHECK_CHILD_ARGS, says STAGED on stdout when the
 // set is staged and waits there to be stopped.
@@ -392,6 +451,10 @@ func TestChildProcess(t *testing.T) {
 	args := os.Getenv("FRAMECHECK_CHILD_ARGS")
 	if args == "" {
 		t.Skip("only run as TestInterruptChild's child")
+	}
+	if os.Getenv("FRAMECHECK_CHILD_NOHOOK") != "" {
+		var out bytes.Buffer
+		os.Exit(run(strings.Split(args, "\x1f"), &out, os.Stderr))
 	}
 	beforeSwap = func(stage string) {
 		fmt.Println("STAGED")
