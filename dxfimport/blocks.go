@@ -32,6 +32,10 @@ func (r *reader) emit(l *local) {
 		r.emitInsert(l)
 		return
 	}
+	if !r.keep(l.e.Pos.Layer) {
+		r.drop(&l.e)
+		return
+	}
 	if r.ents.n >= r.opt.MaxEntities {
 		r.hitLimit(l.e.Pos, 1)
 		return
@@ -51,6 +55,96 @@ func (r *reader) add(e *Entity) {
 		}
 	}
 	r.ents.add(e)
+}
+
+// keep reports whether entities on layer are kept (Options.Keep).
+func (r *reader) keep(layer string) bool {
+	if r.opt.Keep == nil {
+		return true
+	}
+	k, ok := r.kept[layer]
+	if !ok {
+		if r.kept == nil {
+			r.kept = map[string]bool{}
+		}
+		k = r.opt.Keep(layer)
+		r.kept[layer] = k
+	}
+	return k
+}
+
+// drop counts an entity of model space that is not kept, and gives its
+// points back to the slab when they were the last handed out.
+func (r *reader) drop(e *Entity) {
+	r.dropIn(e.Kind, e.Pos.Layer, e.Pos.Layer)
+	s := &r.slab
+	if n := len(e.Points); n > 0 && n <= 64 && len(s.pts) >= n && &s.pts[len(s.pts)-n] == &e.Points[0] {
+		s.pts = s.pts[:len(s.pts)-n]
+	}
+}
+
+// dropIn counts a dropped entity drawn on layer lay, which takes parent
+// when it is "0" (a block entity on layer 0 takes the insert's layer).
+func (r *reader) dropIn(k Kind, lay, parent string) {
+	if lay == "0" {
+		lay = parent
+	}
+	m := r.d.Dropped[lay]
+	if m == nil {
+		m = map[Kind]int{}
+		r.d.Dropped[lay] = m
+	}
+	m[k]++
+}
+
+// keepsAny reports whether an insert of b on layer places any entity on
+// a kept layer, nested inserts included (a block inserting itself adds
+// nothing new).
+func (r *reader) keepsAny(b *block, layer string, stack []*block) bool {
+	if r.opt.Keep == nil {
+		return true
+	}
+	key := b.name + "\x00" + layer
+	if v, ok := r.keepsMemo[key]; ok {
+		return v
+	}
+	for _, s := range stack {
+		if s == b {
+			return false
+		}
+	}
+	stack = append(stack, b)
+	any := false
+	for i := range b.ents {
+		lay := b.ents[i].e.Pos.Layer
+		if lay == "0" {
+			lay = layer
+		}
+		if in := b.ents[i].ins; in != nil {
+			if c := r.blocks[strings.ToUpper(in.name)]; c != nil && r.keepsAny(c, lay, stack) {
+				any = true
+				break
+			}
+			continue
+		}
+		if r.keep(lay) {
+			any = true
+			break
+		}
+	}
+	if r.keepsMemo == nil {
+		r.keepsMemo = map[string]bool{}
+	}
+	r.keepsMemo[key] = any
+	return any
+}
+
+// countText writes an entity count, saturated counts as "more than".
+func countText(n int) string {
+	if n > HardMaxEntities {
+		return fmt.Sprintf("more than %d", HardMaxEntities)
+	}
+	return fmt.Sprint(n)
 }
 
 // hitLimit reports the entity limit once.
@@ -131,6 +225,13 @@ func (r *reader) emitInsert(l *local) {
 		cols, rows := grid(in)
 		n := satMul(satMul(cols, rows), r.count(b))
 		if r.ents.n+n > r.opt.MaxEntities {
+			if !r.keepsAny(b, l.e.Pos.Layer, nil) {
+				// Noise only: every entity the caller uses is read all
+				// the same, so this is no doubt about them.
+				r.d.Issues.Add(l.e.Pos, "DXF105", SevWarning,
+					"an insert of block %q would add %s entities, none on a layer in use; left out uncounted", in.name, countText(n))
+				return
+			}
 			r.hitLimit(l.e.Pos, n)
 			return
 		}
@@ -202,6 +303,10 @@ func (r *reader) expand(in *insertRef, pos Pos, from *Pos, m affine, parentLayer
 				src := &b.ents[i]
 				if src.ins != nil {
 					r.expand(src.ins, src.e.Pos, from, mm, layer, depth+1, stack)
+					continue
+				}
+				if lay := src.e.Pos.Layer; (lay == "0" && !r.keep(layer)) || (lay != "0" && !r.keep(lay)) {
+					r.dropIn(src.e.Kind, lay, layer)
 					continue
 				}
 				if r.ents.n >= r.opt.MaxEntities {

@@ -33,7 +33,7 @@
 //	DXF102 info     what was skipped (unknown entity types, sections other than the routine CLASSES, OBJECTS and THUMBNAILIMAGE)
 //	DXF103 warning  INSERT of an undefined block
 //	DXF104 warning  block inserts itself, or nesting deeper than the limit
-//	DXF105 error    more entities than Options.MaxEntities
+//	DXF105 error    more entities than Options.MaxEntities (a warning when the insert left out places nothing on a layer Options.Keep keeps)
 //	DXF106 warning  unsupported code page, or text not valid UTF-8
 //	DXF108 warning  circle, arc or text under a non-uniform scale
 //	DXF109 info     Options.Units differs from $INSUNITS

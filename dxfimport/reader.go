@@ -22,6 +22,14 @@ type Options struct {
 	// caller's; HardMaxEntities always applies). An INSERT or MINSERT that
 	// would pass the limit is left out whole and reported as an error issue.
 	MaxEntities int
+	// Keep, when not nil, says which layers' entities the caller uses.
+	// Entities on other layers are read (and their syntax checked) but
+	// not kept: they are counted in Drawing.Dropped by layer and kind, so
+	// memory follows the kept entities, and MaxEntities applies to them
+	// alone. An INSERT that would pass the limit but places nothing on a
+	// kept layer is left out with a warning, not an error. Keep is called
+	// once per layer name.
+	Keep func(layer string) bool
 }
 
 // DefaultMaxInsertDepth is the nesting limit used when
@@ -60,6 +68,7 @@ func Read(r io.Reader, name string, opt Options) (*Drawing, error) {
 			File:    name,
 			ToInch:  1,
 			Skipped: map[string]int{},
+			Dropped: map[string]map[Kind]int{},
 		},
 	}
 	if rd.opt.MaxInsertDepth <= 0 {
@@ -104,6 +113,8 @@ type reader struct {
 	work      int  // block copies placed so far
 	stop      bool // the entity limit was hit: expand no more
 	warned    map[string]bool
+	kept      map[string]bool // Options.Keep by layer name
+	keepsMemo map[string]bool // keepsAny by block and inherited layer
 }
 
 // next reads the next pair into r.tr, skipping 999 comments.

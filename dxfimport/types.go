@@ -126,6 +126,9 @@ type Drawing struct {
 	// Skipped counts what was read but not kept, by entity type or
 	// "SECTION:<name>"; never fatal.
 	Skipped map[string]int
+	// Dropped counts the entities on layers Options.Keep left out, by
+	// layer and kind (block inserts expanded); empty when Keep is nil.
+	Dropped map[string]map[Kind]int
 	// Issues holds the non-fatal findings (missing units, unknown
 	// entities, a nested insert too deep, ...).
 	Issues IssueList

@@ -2,6 +2,7 @@ package export
 
 import (
 	"bufio"
+	"bytes"
 	"errors"
 	"fmt"
 	"io"
@@ -161,6 +162,25 @@ func Annotate(inputPath, outputPath string, m Markup) error {
 		return fmt.Errorf("export: %w", err)
 	}
 	defer in.Close()
+	return annotate(in, inputPath, outputPath, m)
+}
+
+// AnnotateBytes is Annotate for a drawing already in memory: input holds
+// its bytes and name its path (for messages, and refused as outputPath).
+// The run that checked those bytes annotates the very same ones, whatever
+// became of the file meanwhile.
+func AnnotateBytes(input []byte, name, outputPath string, m Markup) error {
+	if sameFile(name, outputPath) {
+		return fmt.Errorf("export: %s: %w", outputPath, ErrSameFile)
+	}
+	if err := m.validate(); err != nil {
+		return fmt.Errorf("export: %s: %w", outputPath, err)
+	}
+	return annotate(bytes.NewReader(input), name, outputPath, m)
+}
+
+// annotate reads the drawing twice from in (facts, then the copy).
+func annotate(in io.ReadSeeker, inputPath, outputPath string, m Markup) error {
 	facts, err := scanDXF(in, inputPath)
 	if err != nil {
 		return fmt.Errorf("export: %w", err)

@@ -392,6 +392,12 @@ func encodeResults(w *bufio.Writer, r *Results) error {
 	steps := []func() error{
 		func() error { return value("schema", schema) },
 		func() error { return value("plan", r.Plan) },
+		func() error {
+			if r.InputSHA256 == "" {
+				return nil
+			}
+			return value("input_sha256", r.InputSHA256)
+		},
 		func() error { return value("drawing_units", r.DrawingUnits) },
 		func() error {
 			return listBytes("members", len(r.Members), func(i int) ([]byte, error) {

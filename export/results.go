@@ -36,8 +36,11 @@ const (
 // in the top-level "calculations" (see Schema); in memory every member
 // carries its own (often shared) slices.
 type Results struct {
-	Schema       string        `json:"schema"`        // Schema; WriteJSON always writes Schema
-	Plan         string        `json:"plan"`          // input file name
+	Schema string `json:"schema"` // Schema; WriteJSON always writes Schema
+	Plan   string `json:"plan"`   // input file name
+	// InputSHA256 is the SHA-256 of the drawing's bytes as checked (hex);
+	// the run's manifest carries the same.
+	InputSHA256  string        `json:"input_sha256,omitempty"`
 	DrawingUnits string        `json:"drawing_units"` // in | ft | mm | cm | m
 	Members      []Member      `json:"members"`
 	Marks        []Mark        `json:"marks"`

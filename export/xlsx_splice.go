@@ -7,7 +7,9 @@ import (
 	"fmt"
 	"io"
 	"regexp"
+	"sort"
 	"strconv"
+	"time"
 )
 
 // membersPart is the zip part of the Members sheet: excelize names the
@@ -33,9 +35,9 @@ func spliceMembers(w io.Writer, book []byte, st *styles, members []Member) error
 	}
 	zw := zip.NewWriter(w)
 	found := false
-	for _, f := range zr.File {
+	for _, f := range partOrder(zr.File) {
 		if f.Name != membersPart {
-			if err := zw.Copy(f); err != nil {
+			if err := copyPart(zw, f); err != nil {
 				return err
 			}
 			continue
@@ -49,6 +51,56 @@ func spliceMembers(w io.Writer, book []byte, st *styles, members []Member) error
 		return errors.New("the workbook has no " + membersPart + " for the Members sheet")
 	}
 	return zw.Close()
+}
+
+// partOrder returns the parts of a workbook in a fixed order, so that the
+// same results give a byte-identical schedule.xlsx (excelize writes its
+// parts in map order, which varies from run to run): [Content_Types].xml
+// and the package relationships first, as ECMA-376 Part 2 lays a package
+// out by custom, then every other part by name.
+func partOrder(files []*zip.File) []*zip.File {
+	rank := func(name string) int {
+		switch name {
+		case "[Content_Types].xml":
+			return 0
+		case "_rels/.rels":
+			return 1
+		}
+		return 2
+	}
+	out := append([]*zip.File(nil), files...)
+	sort.SliceStable(out, func(i, j int) bool {
+		ri, rj := rank(out[i].Name), rank(out[j].Name)
+		if ri != rj {
+			return ri < rj
+		}
+		return out[i].Name < out[j].Name
+	})
+	return out
+}
+
+// copyPart copies a part as it is, still compressed, with a fixed time.
+func copyPart(zw *zip.Writer, f *zip.File) error {
+	fh := f.FileHeader
+	fixTime(&fh)
+	r, err := f.OpenRaw()
+	if err != nil {
+		return err
+	}
+	w, err := zw.CreateRaw(&fh)
+	if err != nil {
+		return err
+	}
+	_, err = io.Copy(w, r)
+	return err
+}
+
+// fixTime gives a part the zip format's zero date and time (what excelize
+// writes), whatever the clock says: the file then depends on the results
+// alone.
+func fixTime(fh *zip.FileHeader) {
+	fh.Modified = time.Time{}
+	fh.ModifiedTime, fh.ModifiedDate = 0, 0
 }
 
 // writeMembersPart writes the Members sheet part f with the member rows
@@ -86,6 +138,7 @@ func writeMembersPart(zw *zip.Writer, f *zip.File, st *styles, members []Member)
 	part.pieces = append(part.pieces, end)
 
 	fh := f.FileHeader
+	fixTime(&fh)
 	fh.Method = zip.Deflate
 	fh.CRC32 = part.crc
 	fh.CompressedSize64 = part.cmp

@@ -12,8 +12,8 @@ import (
 	"strconv"
 	"strings"
 	"sync"
+	"sync/atomic"
 	"text/tabwriter"
-	"time"
 
 	"framecheck/dxfimport"
 	"framecheck/export"
@@ -62,19 +62,28 @@ type checkRun struct {
 	size        bool
 	overlay     bool
 
-	warnings int               // warning findings, counted in the summary
-	doubts   []dxfimport.Issue // findings that make the whole run doubtful (runDoubts)
+	warnings int                       // warning findings, counted in the summary
+	doubts   []dxfimport.Issue         // findings that make the whole run doubtful (runDoubts)
+	planData []byte                    // the drawing, read once: checked and annotated from these bytes
+	set      atomic.Pointer[outputSet] // the output folder while the run holds it
 }
+
+// afterRead, when not nil, runs once the drawing is in memory (a test
+// replaces the file on disk there).
+var afterRead func()
 
 func runCheckCmd(args []string, stdout, stderr io.Writer) int {
 	f := newFlags("check", "framecheck check PLAN.dxf [-p PROJECT.toml] [-o OUTDIR] [--units U] [--size] [--overlay]",
 		`Reads the plan, finds the joists and their supports, checks every joist
 (NDS 2018 ASD, ASCE 7-16 combinations, IBC 2018 deflection limits), decides
-the blocking rows each run needs, and writes results.json, schedule.xlsx and
-an annotated copy of the drawing into OUTDIR. Exit status: 0 every member
-passes, 1 a member fails or is in error, part of the drawing could not be
-read or the run is doubtful (RUN401: the spans point at wrong drawing
-units), 2 unusable input or usage.`)
+the blocking rows each run needs, and writes results.json, schedule.xlsx,
+report.html, an annotated copy of the drawing and the manifest
+framecheck-run.json into OUTDIR, replacing the previous set as a whole.
+Exit status: 0 every member passes, 1 a member fails or is in error or part
+of the drawing could not be read or the run is doubtful (RUN401: the
+spans point at wrong drawing units), 2 unusable input or usage, 3 the machine
+failed the run (disk full, permission, OUTDIR locked by another run; the
+previous outputs kept), 130/143 stopped by SIGINT/SIGTERM.`)
 	var c checkRun
 	f.StringVar(&c.projectPath, "p", "", "project file (TOML); default: built-in defaults")
 	f.StringVar(&c.outDir, "o", "", "output folder (default: a folder beside the plan, named after it)")
@@ -130,42 +139,60 @@ check on them, so the whole job can be seen with no files at hand.`)
 	// (the demo's own files from an earlier run may be written again).
 	for _, w := range files {
 		if old, err := os.ReadFile(w.path); err == nil && !bytes.Equal(old, w.data) {
-			fmt.Fprintf(stderr, "framecheck: demo: %s exists and is not the demo's; choose another -o\n", w.path)
+			fmt.Fprintf(stderr, "framecheck: demo: %s exists and is not the demo's; choose another -o\n", termText(w.path))
 			return exitUsage
 		}
 	}
 	if err := os.MkdirAll(c.outDir, 0o755); err != nil {
-		fmt.Fprintf(stderr, "framecheck: %v\n", err)
+		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitUsage
 	}
 	for _, w := range files {
 		if err := os.WriteFile(w.path, w.data, 0o644); err != nil {
-			fmt.Fprintf(stderr, "framecheck: %v\n", err)
+			fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 			return exitUsage
 		}
 	}
-	fmt.Fprintf(stdout, "demo plan and project file written to %s\n", c.outDir)
+	fmt.Fprintf(stdout, "demo plan and project file written to %s\n", termText(c.outDir))
 	return c.run(stdout, stderr)
 }
 
 // run does the whole job for one plan.
 func (c *checkRun) run(stdout, stderr io.Writer) int {
+	defer c.handleSignals(stderr)()
 	proj := DefaultProject()
 	if c.projectPath != "" {
 		p, err := LoadProject(c.projectPath)
 		if err != nil {
-			fmt.Fprintf(stderr, "framecheck: %v\n", err)
+			fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 			return exitUsage
 		}
 		proj = p
 	}
 	if err := c.checkPaths(); err != nil {
-		fmt.Fprintf(stderr, "framecheck: %v\n", err)
+		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitUsage
 	}
-	o, err := runPipeline(pipelineInput{planPath: c.planPath, project: proj, units: c.units, size: c.size})
+	if _, err := runTime(); err != nil {
+		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
+		return exitUsage
+	}
+	// The drawing is read once: the checks and the annotated copy use
+	// the same bytes, whatever happens to the file meanwhile.
+	data, err := os.ReadFile(c.planPath)
 	if err != nil {
-		fmt.Fprintf(stderr, "framecheck: %v\n", err)
+		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
+		return exitUsage
+	}
+	c.planData = data
+	if afterRead != nil {
+		afterRead()
+	}
+	// Inside the outputs (and the findings) the drawing is named by
+	// outputName, never by an absolute path.
+	o, err := runPipeline(pipelineInput{planPath: outputName(c.planPath), planData: data, project: proj, units: c.units, size: c.size})
+	if err != nil {
+		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitUsage
 	}
 	if len(o.plan.Members) == 0 {
@@ -174,34 +201,37 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 			layersCmd += " -p " + c.projectPath
 		}
 		fmt.Fprintf(stderr, "framecheck: %s: no joists found on the joist layers %s (run '%s' to see the drawing's layers and the role each gets)\n",
-			c.planPath, strings.Join(proj.Layers.Joists, ", "), layersCmd)
+			termText(c.planPath), termText(strings.Join(proj.Layers.Joists, ", ")), termText(layersCmd))
 		if like := joistLikeLayers(layerRows(o.drawing, proj)); len(like) > 0 {
 			fmt.Fprintf(stderr, "framecheck: the joists may be on %s: name that layer in [layers] joists of the project file\n",
-				strings.Join(like, ", "))
+				termText(strings.Join(like, ", ")))
 		}
 		if f := c.unusedProjectFile(); f != "" {
-			fmt.Fprintf(stderr, "framecheck: no -p given, so the built-in layer patterns applied; to use %s, add -p %s\n", f, f)
+			fmt.Fprintf(stderr, "framecheck: no -p given, so the built-in layer patterns applied; to use %s, add -p %s\n", termText(f), termText(f))
 		}
 		printIssues(stderr, o.issues)
 		return exitUsage
 	}
 	if msg := unmatchedSupports(o); msg != "" {
-		o.issues = append(dxfimport.IssueList{{Pos: dxfimport.Pos{File: c.planPath}, Code: CodeUnmatchedSupport,
+		o.issues = append(dxfimport.IssueList{{Pos: dxfimport.Pos{File: outputName(c.planPath)}, Code: CodeUnmatchedSupport,
 			Severity: dxfimport.SevWarning, Msg: msg}}, o.issues...)
 	}
 	res := exportResults(o, c.planPath)
+	res.InputSHA256 = sha256Hex(c.planData)
 	// No NaN or Inf reaches any output, the summary or the exit status: a
 	// member holding one is in error, saying which value (a safety net;
 	// the checks should never produce one).
 	res, bad := export.Sanitize(res)
 	if len(bad) > 0 {
 		fmt.Fprintf(stderr, "framecheck: %d non-finite values written as 0 and their members put in error: %s\n",
-			len(bad), strings.Join(bad[:min(len(bad), 5)], "; "))
+			len(bad), termText(strings.Join(bad[:min(len(bad), 5)], "; ")))
 	}
-	written, err := c.write(o, res, stderr)
+	written, err := c.write(o, res, proj, stderr)
 	if err != nil {
-		fmt.Fprintf(stderr, "framecheck: %v\n", err)
-		return exitUsage
+		// Every failure to write is one of the machine (a full disk, a
+		// permission, a lock): exit 3, the previous outputs kept.
+		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
+		return exitMachine
 	}
 	printIssues(stderr, o.issues)
 	c.warnings, c.doubts = countWarnings(o.issues), runDoubts(o.issues)
@@ -220,7 +250,7 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	// (entities past the limit, coordinates that overflow): not a clean run.
 	if n := errorFindings(o.issues); n > 0 {
 		fmt.Fprintf(stderr, "framecheck: %s: %d error finding(s) above: part of the drawing was not read, so not every joist may have been checked\n",
-			c.planPath, n)
+			termText(c.planPath), n)
 		return exitFail
 	}
 	return exitOK
@@ -325,32 +355,33 @@ func (c *checkRun) outputNames() []string {
 	return []string{resultsName, scheduleName, base + "-checked.dxf", base + "-overlay.dxf", reportName}
 }
 
-// write writes every output into the output folder, nothing lost: each
-// file is written complete into a private staging folder inside it, and
-// only when all are written are they renamed into place. A failure leaves
-// the folder's earlier files as they were and no partial file behind (a
-// folder that the run created is removed again).
-func (c *checkRun) write(o *outcome, res *export.Results, stderr io.Writer) (written []string, err error) {
-	_, statErr := os.Stat(c.outDir)
-	created := os.IsNotExist(statErr)
-	if err := os.MkdirAll(c.outDir, 0o755); err != nil {
-		return nil, err
-	}
-	stage, err := os.MkdirTemp(c.outDir, ".framecheck-partial-")
+// write writes every output into the output folder as one set (see
+// outset.go): each file complete into a staging folder, then the whole
+// set swapped in, the manifest last. A failure leaves the folder's
+// previous set as it was and no partial file behind (a folder that the
+// run created is removed again). Every error is a machineError.
+func (c *checkRun) write(o *outcome, res *export.Results, proj *Project, stderr io.Writer) (written []string, err error) {
+	when, err := runTime()
 	if err != nil {
 		return nil, err
 	}
+	set, err := openOutputSet(c.outDir)
+	if err != nil {
+		return nil, err
+	}
+	c.set.Store(set)
 	defer func() {
-		os.RemoveAll(stage)
-		if err != nil && created {
-			os.Remove(c.outDir) // only if still empty
+		if err != nil {
+			set.abort()
+		} else {
+			set.close()
 		}
 	}()
 	names := c.outputNames()
 	var staged []string
 	add := func(name string, werr error) error {
 		if werr != nil && !errors.Is(werr, export.ErrNonFinite) {
-			return fmt.Errorf("writing %s: %w", filepath.Join(c.outDir, name), werr)
+			return machine(fmt.Errorf("writing %s: %w", filepath.Join(c.outDir, name), werr))
 		}
 		staged = append(staged, name)
 		return nil
@@ -364,12 +395,12 @@ func (c *checkRun) write(o *outcome, res *export.Results, stderr io.Writer) (wri
 	// then take their errors in this order, as when they were written one
 	// after another.
 	jobs := []func() error{
-		func() error { return export.WriteJSON(filepath.Join(stage, names[0]), res) },
-		func() error { return export.WriteXLSX(filepath.Join(stage, names[1]), res) },
+		func() error { return export.WriteJSON(set.path(names[0]), res) },
+		func() error { return export.WriteXLSX(set.path(names[1]), res) },
 		func() error {
-			return export.WriteReport(filepath.Join(stage, names[4]), res, planGeometry(o), time.Now())
+			return export.WriteReport(set.path(names[4]), res, planGeometry(o), when)
 		},
-		func() error { return export.Annotate(c.planPath, filepath.Join(stage, names[2]), mk) },
+		func() error { return export.AnnotateBytes(c.planData, c.planPath, set.path(names[2]), mk) },
 	}
 	// One goroutine each: on a large plan they take about the same time
 	// (100,000 joists: spreadsheet 0.7 s, results 0.4 s, annotated
@@ -402,8 +433,8 @@ func (c *checkRun) write(o *outcome, res *export.Results, stderr io.Writer) (wri
 		// The drawing was read, but its copy cannot be annotated (an R13+
 		// file without TABLES, no 0/EOF): the markup goes alone to the
 		// overlay instead, and the check results stand.
-		fmt.Fprintf(stderr, "framecheck: no annotated copy of %s: %v; the markup is written alone to %s instead\n",
-			c.planPath, aerr, filepath.Join(c.outDir, names[3]))
+		fmt.Fprintf(stderr, "framecheck: no annotated copy of %s: %s; the markup is written alone to %s instead\n",
+			termText(c.planPath), termText(aerr.Error()), termText(filepath.Join(c.outDir, names[3])))
 		overlay = true
 	default:
 		if err := add(names[2], aerr); err != nil {
@@ -411,26 +442,28 @@ func (c *checkRun) write(o *outcome, res *export.Results, stderr io.Writer) (wri
 		}
 	}
 	if overlay {
-		if err := add(names[3], export.WriteOverlay(filepath.Join(stage, names[3]), mk, res.DrawingUnits)); err != nil {
+		if err := add(names[3], export.WriteOverlay(set.path(names[3]), mk, res.DrawingUnits)); err != nil {
 			return nil, err
 		}
 	}
-	// Every output is complete: refuse before renaming any if one cannot
-	// take its place, then move them in.
-	for _, name := range staged {
-		if st, serr := os.Lstat(filepath.Join(c.outDir, name)); serr == nil && st.IsDir() {
-			return nil, fmt.Errorf("writing %s: a folder of that name is in the way", filepath.Join(c.outDir, name))
-		}
+	in := &manifestInput{Path: outputName(c.planPath), SHA256: res.InputSHA256, Bytes: int64(len(c.planData))}
+	var pj *manifestInput
+	if c.projectPath != "" {
+		pj = &manifestInput{Path: outputName(c.projectPath), SHA256: proj.sha256, Bytes: proj.size}
 	}
-	for _, name := range staged {
-		dst := filepath.Join(c.outDir, name)
-		if err := os.Rename(filepath.Join(stage, name), dst); err != nil {
-			return written, fmt.Errorf("writing %s: %w", dst, err)
-		}
-		written = append(written, dst)
+	manifest, err := buildManifest(set, staged, in, pj, when)
+	if err != nil {
+		return nil, machine(fmt.Errorf("hashing the outputs in %s: %w", set.stage, err))
 	}
-	return written, nil
+	if beforeSwap != nil {
+		beforeSwap(set.stage)
+	}
+	return set.commit(staged, names, manifest)
 }
+
+// beforeSwap, when not nil, runs when the whole set is staged, before it
+// is swapped in (a test interrupts the run there).
+var beforeSwap func(stage string)
 
 // printIssues writes the drawing and framing findings, at most 25 of them.
 func printIssues(w io.Writer, issues dxfimport.IssueList) {
@@ -440,7 +473,7 @@ func printIssues(w io.Writer, issues dxfimport.IssueList) {
 			fmt.Fprintf(w, "framecheck: ... and %d more findings (see results.json messages)\n", len(issues)-most)
 			break
 		}
-		fmt.Fprintf(w, "framecheck: %s\n", is.Error())
+		fmt.Fprintf(w, "framecheck: %s\n", termText(is.Error()))
 	}
 }
 
@@ -453,27 +486,10 @@ const maxDefaultsListed = 5
 func printSummary(w io.Writer, c *checkRun, proj *Project, r *export.Results, written []string) {
 	colour := useColour(w)
 	fmt.Fprintf(w, "\nframecheck %s: %d members: %d pass, %d fail, %d error, %s%s\n",
-		r.Plan, r.Summary.Members, r.Summary.Pass, r.Summary.Fail, r.Summary.Error, plural(c.warnings, "warning"), doubtText(c.doubts))
-	if used := proj.DefaultsUsed(); len(used) > 0 {
-		if c.projectPath == "" {
-			fmt.Fprintf(w, "no project file: built-in defaults used (%d settings; see the Inputs sheet)\n", len(used))
-			if f := c.unusedProjectFile(); f != "" {
-				fmt.Fprintf(w, "%s was not read: pass it with -p %s\n", f, f)
-			}
-		} else {
-			fmt.Fprintf(w, "%d settings left out of %s took their defaults", len(used), c.projectPath)
-			if len(used) > maxDefaultsListed {
-				fmt.Fprintln(w, " (listed in the Notes sheet)")
-			} else {
-				fmt.Fprintln(w, ":")
-				for _, u := range used {
-					fmt.Fprintf(w, "  %s\n", u)
-				}
-			}
-		}
-	}
+		termText(r.Plan), r.Summary.Members, r.Summary.Pass, r.Summary.Fail, r.Summary.Error, plural(c.warnings, "warning"), doubtText(c.doubts))
+	printDefaults(w, c, proj)
 	if c.size {
-		fmt.Fprintln(w, sizingLine(proj, r))
+		fmt.Fprintln(w, termText(sizingLine(proj, r)))
 	}
 	fmt.Fprintln(w)
 	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
@@ -487,8 +503,9 @@ func printSummary(w io.Writer, c *checkRun, proj *Project, r *export.Results, wr
 	}
 	fmt.Fprintln(tw, "mark\tcount\tsize\tgrade\tzone\tspacing\ttrib\tspans\tblocking/span\tmax ratio\tstatus")
 	for _, m := range r.Marks {
-		fmt.Fprintf(tw, "%s\t%d\t%s\t%s %s\t%s\t%s\t%s\t%s\t%s\t%.2f\t%s\n", m.Mark, m.Count, m.Size, shortSpecies(m.Species), m.Grade,
-			m.Zone, inchText(m.SpacingIn), inchText(trib[m.Mark]), spansText(m.SpansIn, m.OverhangsIn), rowsText(m.BlockingRowsPerSpan),
+		fmt.Fprintf(tw, "%s\t%d\t%s\t%s %s\t%s\t%s\t%s\t%s\t%s\t%.2f\t%s\n", termCell(m.Mark, cellWidth), m.Count,
+			termCell(m.Size, cellWidth), termCell(shortSpecies(m.Species), cellWidth), termCell(m.Grade, cellWidth),
+			termCell(m.Zone, cellWidth), inchText(m.SpacingIn), inchText(trib[m.Mark]), spansText(m.SpansIn, m.OverhangsIn), rowsText(m.BlockingRowsPerSpan),
 			m.MaxRatio, statusText(colour, m.Status))
 	}
 	tw.Flush()
@@ -516,8 +533,9 @@ func printSummary(w io.Writer, c *checkRun, proj *Project, r *export.Results, wr
 			if m.Status == "error" {
 				ratio = "-" // not checked: no ratio
 			}
-			fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\n", m.ID, m.Mark, m.Size, m.Governing, ratio,
-				statusText(colour, m.Status), m.Source, msg)
+			fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\n", termCell(m.ID, cellWidth), termCell(m.Mark, cellWidth),
+				termCell(m.Size, cellWidth), termCell(m.Governing, cellWidth), ratio,
+				statusText(colour, m.Status), termCell(m.Source, sourceWidth), termCell(msg, messageWidth))
 		}
 		tw.Flush()
 	}
@@ -532,7 +550,7 @@ func printSummary(w io.Writer, c *checkRun, proj *Project, r *export.Results, wr
 	tw.Flush()
 	fmt.Fprintln(w, "\nwritten:")
 	for _, p := range written {
-		fmt.Fprintf(w, "  %s\n", p)
+		fmt.Fprintf(w, "  %s\n", termText(p))
 	}
 	fmt.Fprintln(w, "\nframecheck assists a qualified designer; it does not replace engineering judgement or a")
 	fmt.Fprintln(w, "licensed professional's review. Check design values and code editions against local adoption.")

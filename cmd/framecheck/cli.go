@@ -88,7 +88,7 @@ func flagErrorText(err error) string {
 
 // usageError prints a usage mistake and the synopsis; it returns 2.
 func (f *cmdFlags) usageError(stderr io.Writer, format string, args ...any) int {
-	fmt.Fprintf(stderr, "framecheck: %s: %s\n", f.Name(), fmt.Sprintf(format, args...))
+	fmt.Fprintf(stderr, "framecheck: %s: %s\n", f.Name(), termText(fmt.Sprintf(format, args...)))
 	fmt.Fprintf(stderr, "usage: %s\n", f.synopsis)
 	fmt.Fprintf(stderr, "run 'framecheck %s --help' for details\n", f.Name())
 	return exitUsage
@@ -140,7 +140,7 @@ Edit it to suit the plan, then pass it to check with -p.`)
 	}
 	if *out == "-" {
 		if _, err := io.WriteString(stdout, starterProject); err != nil {
-			fmt.Fprintf(stderr, "framecheck: %v\n", err)
+			fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 			return exitUsage
 		}
 		return exitOK
@@ -151,11 +151,11 @@ Edit it to suit the plan, then pass it to check with -p.`)
 	}
 	file, err := os.OpenFile(*out, flags, 0o644)
 	if errors.Is(err, fs.ErrExist) {
-		fmt.Fprintf(stderr, "framecheck: %s already exists; use --force to overwrite it\n", *out)
+		fmt.Fprintf(stderr, "framecheck: %s already exists; use --force to overwrite it\n", termText(*out))
 		return exitUsage
 	}
 	if err != nil {
-		fmt.Fprintf(stderr, "framecheck: %v\n", err)
+		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitUsage
 	}
 	_, err = io.WriteString(file, starterProject)
@@ -163,10 +163,10 @@ Edit it to suit the plan, then pass it to check with -p.`)
 		err = cerr
 	}
 	if err != nil {
-		fmt.Fprintf(stderr, "framecheck: writing %s: %v\n", *out, err)
+		fmt.Fprintf(stderr, "framecheck: writing %s: %s\n", termText(*out), termText(err.Error()))
 		return exitUsage
 	}
-	fmt.Fprintf(stdout, "wrote %s\n", *out)
+	fmt.Fprintf(stdout, "wrote %s\n", termText(*out))
 	return exitOK
 }
 
@@ -180,6 +180,8 @@ func writeTable(w io.Writer, rows [][]string, right []bool) {
 			if i >= len(width) {
 				width = append(width, 0)
 			}
+			c = termCell(c, cellWidth)
+			r[i] = c
 			width[i] = max(width[i], utf8.RuneCountInString(c))
 		}
 	}

@@ -106,7 +106,7 @@ func TestNothingLostFailedRunKeepsOutputs(t *testing.T) {
 	// A heavier floor load changes every result, and writing fails on the
 	// last output (a folder stands where the overlay goes): nothing of the
 	// new run may replace the old files.
-	if err := os.WriteFile(proj, []byte("[[zone]]\nname = \"FLOOR\"\nlive_psf = 100\n"), 0o644); err != nil {
+	if err := os.WriteFile(proj, []byte("[[zone]]\nname = \"FLOOR\"\ndead_psf = 12\nlive_psf = 100\n"), 0o644); err != nil {
 		t.Fatal(err)
 	}
 	block := filepath.Join(out, "plan-overlay.dxf")
@@ -114,8 +114,8 @@ func TestNothingLostFailedRunKeepsOutputs(t *testing.T) {
 		t.Fatal(err)
 	}
 	code, stderr := runCheck(t, "check", plan, "-p", proj, "-o", out, "--overlay")
-	if code != exitUsage || !strings.Contains(stderr, "plan-overlay.dxf") {
-		t.Errorf("blocked output: exit %d, want 2 naming plan-overlay.dxf\n%s", code, stderr)
+	if code != exitMachine || !strings.Contains(stderr, "plan-overlay.dxf") {
+		t.Errorf("blocked output: exit %d, want 3 naming plan-overlay.dxf\n%s", code, stderr)
 	}
 	sameSnapshot(t, "blocked output", before, snapshot(t, out))
 	ents, _ := os.ReadDir(out)

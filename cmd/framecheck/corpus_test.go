@@ -611,15 +611,24 @@ func TestBadCorpusMessy(t *testing.T) {
 	})
 	t.Run("MINSERT bomb", func(t *testing.T) {
 		// Left out whole before it is expanded: the run is quick and small,
-		// the plan beside it is checked, and the exit status says that
-		// part of the drawing was not read.
+		// the plan beside it is checked. Its lines are furniture (a layer
+		// with no role), so every joist was read: a warning, exit 0
+		// (issue 15 item 5).
 		r := runCorpus(t, "minsert-bomb.dxf", "", "")
-		wantCode(t, r, exitFail)
+		wantCode(t, r, exitOK)
 		wantAll(t, r, export.StatusPass, 5)
-		wantStderr(t, r, "minsert-bomb.dxf:91 (handle 103, layer 0): error DXF105", "part of the drawing was not read")
+		wantStderr(t, r, "minsert-bomb.dxf:91 (handle 103, layer 0): warning DXF105", "none on a layer in use")
 		if !strings.Contains(strings.Join(r.results.Assumptions.Notes, "\n"), "DXF105") {
 			t.Errorf("notes lack DXF105: %q", r.results.Assumptions.Notes)
 		}
+	})
+	t.Run("MINSERT bomb of joists", func(t *testing.T) {
+		// The same bomb drawn on a joist layer: joists were left out, so
+		// the exit status says that part of the drawing was not read.
+		r := runCorpus(t, "minsert-bomb-joists.dxf", "", "")
+		wantCode(t, r, exitFail)
+		wantAll(t, r, export.StatusPass, 5)
+		wantStderr(t, r, "minsert-bomb-joists.dxf:91 (handle 103, layer 0): error DXF105", "part of the drawing was not read")
 	})
 }
 

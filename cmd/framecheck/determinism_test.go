@@ -101,3 +101,50 @@ func xlsxParts(t *testing.T, path string) map[string][]byte {
 	}
 	return parts
 }
+
+// TestRunsByteIdentical (issue 15 item 7): the same drawing and project
+// file, checked from two different folders given as absolute paths,
+// with SOURCE_DATE_EPOCH set, give byte-identical files, the manifest
+// included: the spreadsheet's parts are in a fixed order with fixed
+// times, and no output holds an absolute path. Without SOURCE_DATE_EPOCH
+// the report's date line and the manifest's "time" are the only
+// differences (the report states the minute of the run).
+func TestRunsByteIdentical(t *testing.T) {
+	t.Setenv("SOURCE_DATE_EPOCH", "1767225600") // 2026-01-01T00:00:00Z
+	var outs []string
+	for i := 0; i < 2; i++ {
+		c := newOutsetCase(t)
+		if code, stderr := c.check(t); code != exitOK {
+			t.Fatalf("run %d: exit %d\n%s", i, code, stderr)
+		}
+		outs = append(outs, c.out)
+	}
+	for _, name := range []string{resultsName, scheduleName, reportName, "plan-checked.dxf", manifestName} {
+		a, b := readFile(t, filepath.Join(outs[0], name)), readFile(t, filepath.Join(outs[1], name))
+		if !bytes.Equal(a, b) {
+			t.Errorf("%s differs between two runs", name)
+		}
+		if bytes.Contains(a, []byte(filepath.Dir(outs[0]))) {
+			t.Errorf("%s holds the absolute path of the run's folder", name)
+		}
+	}
+	report := readFile(t, filepath.Join(outs[0], reportName))
+	if !bytes.Contains(report, []byte("2026-01-01 00:00 UTC")) {
+		t.Error("the report's date is not SOURCE_DATE_EPOCH")
+	}
+	m := wantCompleteSet(t, outs[0])
+	if m.Time != "2026-01-01T00:00:00Z" {
+		t.Errorf("manifest time %s", m.Time)
+	}
+}
+
+// TestSourceDateEpochBad: a SOURCE_DATE_EPOCH that is not a number of
+// seconds is refused rather than ignored.
+func TestSourceDateEpochBad(t *testing.T) {
+	t.Setenv("SOURCE_DATE_EPOCH", "yesterday")
+	c := newOutsetCase(t)
+	code, stderr := c.check(t)
+	if code != exitUsage || !bytes.Contains([]byte(stderr), []byte("SOURCE_DATE_EPOCH")) {
+		t.Errorf("exit %d\n%s", code, stderr)
+	}
+}

@@ -47,6 +47,12 @@ func layerRows(d *dxfimport.Drawing, p *Project) []layerRow {
 	for _, e := range d.Entities {
 		get(e.Pos.Layer).Counts[e.Kind]++
 	}
+	for layer, counts := range d.Dropped { // layers with no role: counted, not kept
+		r := get(layer)
+		for k, n := range counts {
+			r.Counts[k] += n
+		}
+	}
 	out := make([]layerRow, 0, len(rows))
 	for _, r := range rows {
 		out = append(out, *r)
@@ -111,17 +117,17 @@ Without -p the built-in layer patterns apply.`)
 	if *projectPath != "" {
 		var err error
 		if p, err = LoadProject(*projectPath); err != nil {
-			fmt.Fprintf(stderr, "framecheck: %v\n", prefixLines(err.Error()))
+			fmt.Fprintf(stderr, "framecheck: %s\n", prefixLines(termText(err.Error())))
 			return exitUsage
 		}
 	}
-	opt := dxfimport.Options{Units: p.Drawing.Units}
+	opt := dxfimport.Options{Units: p.Drawing.Units, Keep: keepLayer(p)}
 	if *units != "" {
 		opt.Units = *units
 	}
 	d, err := dxfimport.ReadFile(pos[0], opt)
 	if err != nil {
-		fmt.Fprintf(stderr, "framecheck: %v\n", err)
+		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitUsage
 	}
 	source := ""
@@ -137,10 +143,27 @@ Without -p the built-in layer patterns apply.`)
 	// among the notes, and the exit status is 1, as check gives for a
 	// plan read only in part.
 	if n := errorFindings(d.Issues); n > 0 {
-		fmt.Fprintf(stderr, "framecheck: %s: %d error finding(s) in the notes: part of the drawing was not read, so the counts may be short\n", pos[0], n)
+		fmt.Fprintf(stderr, "framecheck: %s: %d error finding(s) in the notes: part of the drawing was not read, so the counts may be short\n", termText(pos[0]), n)
 		return exitFail
 	}
 	return exitOK
+}
+
+// keepLayer is the reader's Options.Keep for a project: the entities of
+// layers that have a role are kept, the others only counted.
+func keepLayer(p *Project) func(string) bool {
+	return func(layer string) bool { return p.LayerRole(layer) != "" }
+}
+
+// droppedCount is the number of entities read on layers with no role.
+func droppedCount(d *dxfimport.Drawing) int {
+	n := 0
+	for _, c := range d.Dropped {
+		for _, k := range c {
+			n += k
+		}
+	}
+	return n
 }
 
 // prefixLines puts "framecheck: " before every line after the first.
@@ -153,13 +176,13 @@ func prefixLines(s string) string {
 // "--units" or "drawing.units".
 func printLayers(w io.Writer, d *dxfimport.Drawing, p *Project, unitsSource string) {
 	rows := layerRows(d, p)
-	fmt.Fprintf(w, "%s: %s, %s, %d entities on %d layers\n", d.File, versionName(d.Version),
-		unitsNote(d, unitsSource), len(d.Entities), len(rows))
+	fmt.Fprintf(w, "%s: %s, %s, %d entities on %d layers\n", termText(d.File), termText(versionName(d.Version)),
+		termText(unitsNote(d, unitsSource)), len(d.Entities)+droppedCount(d), len(rows))
 	source := "built-in defaults"
 	if p.File != "" {
 		source = p.File
 	}
-	fmt.Fprintf(w, "roles from %s\n\n", source)
+	fmt.Fprintf(w, "roles from %s\n\n", termText(source))
 
 	var kinds []dxfimport.Kind
 	for _, k := range kindOrder {
@@ -227,7 +250,7 @@ func printLayers(w io.Writer, d *dxfimport.Drawing, p *Project, unitsSource stri
 	if len(notes) > 0 {
 		fmt.Fprintln(w, "\nnotes:")
 		for _, n := range notes {
-			fmt.Fprintln(w, "  "+n)
+			fmt.Fprintln(w, "  "+termText(n))
 		}
 	}
 }

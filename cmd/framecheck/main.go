@@ -21,7 +21,10 @@
 // when any member fails or is in error, part of the drawing was not read,
 // or the run itself is doubtful (RUN4xx findings, such as spans that
 // point at wrong drawing units), 2 for unusable input (a bad project file
-// or drawing) or a usage error.
+// or drawing) or a usage error, 3 when the machine failed
+// the run (a full disk, a permission refused, the output folder locked by
+// another run: the previous outputs are kept), 130 or 143 after SIGINT or
+// SIGTERM (nothing written, the previous outputs untouched).
 //
 // # check
 //
@@ -30,7 +33,9 @@
 // Reads the plan, finds the joists and their supports, checks every joist,
 // decides the blocking rows each run needs, and writes results.json,
 // schedule.xlsx, report.html and an annotated copy of the drawing
-// (PLAN-checked.dxf) into OUTDIR, then
+// (PLAN-checked.dxf) into OUTDIR as one set that replaces the previous
+// one whole, with the manifest framecheck-run.json (tool version, time,
+// the inputs' and every output's SHA-256) written last, then
 // prints a summary table: members, pass or fail, blocking rows, takeoff
 // totals, and the project-file defaults that applied. Its first line
 // counts the members by status and the warnings, and says when the run is
@@ -160,6 +165,10 @@ const (
 	exitOK    = 0 // every member passes, or the command did its job
 	exitFail  = 1 // a member fails or is in error, or the run is doubtful
 	exitUsage = 2 // unusable input or usage
+	// exitMachine: the machine failed the run (disk full, permission
+	// refused, the output folder locked by another run); the previous
+	// outputs are kept.
+	exitMachine = 3
 )
 
 // command is one subcommand of framecheck.
@@ -223,7 +232,7 @@ func unknownCommand(name string, stderr io.Writer) int {
 	if best != "" {
 		msg += fmt.Sprintf("; did you mean %q?", best)
 	}
-	fmt.Fprintln(stderr, msg)
+	fmt.Fprintln(stderr, termText(msg))
 	fmt.Fprintln(stderr, "run 'framecheck help' for the list of commands")
 	return exitUsage
 }
@@ -241,5 +250,6 @@ func usage(w io.Writer) {
 	}
 	fmt.Fprintln(w)
 	fmt.Fprintln(w, "Run 'framecheck <command> --help' for a command's flags.")
-	fmt.Fprintln(w, "Exit status: 0 all pass, 1 a member fails or is in error or the run is doubtful, 2 bad input or usage.")
+	fmt.Fprintln(w, "Exit status: 0 all pass, 1 a member fails or is in error or the run is doubtful, 2 bad input or usage,")
+	fmt.Fprintln(w, "3 the machine failed (disk full, permission, output folder locked).")
 }

@@ -64,7 +64,7 @@ func TestInitRoundTrip(t *testing.T) {
 		t.Fatal(err)
 	}
 	def := DefaultProject()
-	p.File, p.given, p.defaults = "", nil, nil
+	p.File, p.given, p.defaults, p.sha256, p.size = "", nil, nil, "", 0
 	def.given, def.defaults = nil, nil
 	if !reflect.DeepEqual(p, def) {
 		t.Errorf("starter file loads as\n%+v\nwant the defaults\n%+v", p, def)

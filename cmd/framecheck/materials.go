@@ -26,7 +26,7 @@ SPECIES may be any common spelling ("DF-L", "Douglas Fir-Larch", "SPF").`)
 	if *projectPath != "" {
 		p, err := LoadProject(*projectPath)
 		if err != nil {
-			fmt.Fprintf(stderr, "framecheck: %v\n", err)
+			fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 			return exitUsage
 		}
 		if p.Materials != nil {
@@ -39,7 +39,7 @@ SPECIES may be any common spelling ("DF-L", "Douglas Fir-Larch", "SPF").`)
 	}
 	rows, err := mats.Rows(species)
 	if err != nil {
-		fmt.Fprintf(stderr, "framecheck: materials: %v\n", err)
+		fmt.Fprintf(stderr, "framecheck: materials: %s\n", termText(err.Error()))
 		return exitUsage
 	}
 	table := [][]string{{"species", "grade", "widths", "Fb", "Ft", "Fv", "Fc_perp", "Fc", "E", "Emin", "CF rule", "source"}}

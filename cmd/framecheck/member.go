@@ -174,7 +174,7 @@ func printMember(w io.Writer, m check.Member, r check.Result, colour bool) {
 	for i, s := range r.SpansIn {
 		spans[i] = fmtIn(s)
 	}
-	fmt.Fprintf(w, "%s %s %s, %s joist at %s in o.c.\n", r.Size, r.Species, r.Grade, m.Use, fmtNum(m.SpacingIn))
+	fmt.Fprintf(w, "%s %s %s, %s joist at %s in o.c.\n", r.Size, termText(r.Species), termText(r.Grade), m.Use, fmtNum(m.SpacingIn))
 	fmt.Fprintf(w, "  spans %s", strings.Join(spans, ", "))
 	if r.OverhangsIn[0] > 0 || r.OverhangsIn[1] > 0 {
 		fmt.Fprintf(w, "; overhangs %s, %s", fmtIn(r.OverhangsIn[0]), fmtIn(r.OverhangsIn[1]))
@@ -189,11 +189,11 @@ func printMember(w io.Writer, m check.Member, r check.Result, colour bool) {
 	}
 	v := r.Values
 	if v.Source != "" {
-		fmt.Fprintf(w, "\nreference design values (%s):\n", v.Source)
+		fmt.Fprintf(w, "\nreference design values (%s):\n", termText(v.Source))
 		fmt.Fprintf(w, "  Fb %s  Ft %s  Fv %s  Fc_perp %s  Fc %s  E %s  Emin %s psi\n", fmtVal(v.FbPsi), fmtVal(v.FtPsi),
 			fmtVal(v.FvPsi), fmtVal(v.FcPerpPsi), fmtVal(v.FcPsi), fmtVal(v.EPsi), fmtVal(v.EminPsi))
 		if v.Note != "" {
-			fmt.Fprintf(w, "  %s\n", v.Note)
+			fmt.Fprintf(w, "  %s\n", termText(v.Note))
 		}
 	}
 	if len(r.Factors) > 0 {

@@ -1,6 +1,7 @@
 package main
 
 import (
+	"bytes"
 	"encoding/binary"
 	"errors"
 	"fmt"
@@ -31,6 +32,7 @@ type outcome struct {
 // the units override and whether to pick sizes.
 type pipelineInput struct {
 	planPath string
+	planData []byte // the drawing's bytes; nil: read planPath
 	project  *Project
 	units    string // --units, overrides the project file and $INSUNITS
 	size     bool   // --size
@@ -99,7 +101,13 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 		units = in.units
 	}
 	resume := pauseGC()
-	d, err := dxfimport.ReadFile(in.planPath, dxfimport.Options{Units: units})
+	opt := dxfimport.Options{Units: units, Keep: keepLayer(p)}
+	var d *dxfimport.Drawing
+	if in.planData != nil {
+		d, err = dxfimport.Read(bytes.NewReader(in.planData), in.planPath, opt)
+	} else {
+		d, err = dxfimport.ReadFile(in.planPath, opt)
+	}
 	if err != nil {
 		resume()
 		return nil, err

@@ -36,6 +36,10 @@ type Project struct {
 	given map[string]bool
 	// defaults lists, in file order, each default that applied.
 	defaults []string
+	// sha256 and size are the project file's hash and length, for the
+	// run's manifest ("" and 0 for the built-in defaults).
+	sha256 string
+	size   int64
 }
 
 // DrawingSettings is the [drawing] table.
@@ -198,6 +202,9 @@ type Zone struct {
 	// is converted to the horizontal projection (x 1/cos); false: it is
 	// per horizontal area already. Default true.
 	DeadOnSlope bool
+	// AllowZero (allow_zero) lets the zone leave out, or give as 0, its
+	// dead load and its use's live-type load; otherwise that is an error.
+	AllowZero bool
 }
 
 // Sizing is the [sizing] table, used by `framecheck check --size`.
@@ -244,14 +251,15 @@ func defaultZone() Zone {
 	}
 }
 
-// roofLiveDefaultPsf is roof_live_psf for a roof zone that leaves it out:
+// roofLiveDefaultPsf is roof_live_psf for a roof zone that gives snow_psf
+// but leaves roof_live_psf out, and for `framecheck member --use roof`:
 // ordinary flat, pitched and curved roofs, ASCE 7-16 Table 4.3-1 (from
 // memory: verify against ASCE 7-16 Table 4.3-1). A floor zone gets 0.
 const roofLiveDefaultPsf = 20.0
 
-// floorLiveDefaultPsf is live_psf for a floor zone that leaves it out, as
-// the project file reference shows; a roof zone gets 0 (floor live load
-// does not act on a roof).
+// floorLiveDefaultPsf is the floor live load of `framecheck member` and
+// of the built-in FLOOR zone, as the project file reference shows. A
+// [[zone]] that leaves live_psf out is an error (unless allow_zero).
 const floorLiveDefaultPsf = 40.0
 
 // deflectionLimits returns the n of L/n for live-type loads and for the

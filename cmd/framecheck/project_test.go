@@ -43,19 +43,19 @@ func TestProjectErrors(t *testing.T) {
 		{"nothing close", "[design]\n∑colour = \"red\"\n",
 			"design.colour", []string{"valid keys in [design]:", "kcr", "combinations"}},
 		{"unknown key in second zone",
-			"[[zone]]\nname = \"A\"\n[[zone]]\nname = \"B\"\n∑dead = 10\n[loads]\ndefault_zone = \"A\"\n",
+			"[[zone]]\nname = \"A\"\ndead_psf = 10\nlive_psf = 40\n[[zone]]\nname = \"B\"\nallow_zero = true\n∑dead = 10\n[loads]\ndefault_zone = \"A\"\n",
 			"zone.dead", []string{"unknown key in [[zone]]", "dead_psf"}},
 		{"unknown key in by_layer", "[lumber]\n[[lumber.by_layer]]\nlayers = [\"R*\"]\n∑sise = \"2x12\"\nsize = \"2x8\"\n",
 			"lumber.by_layer.sise", []string{"did you mean size?"}},
 		{"after a multi-line array", "[sizing]\ncandidates = [\n  \"2x8\",\n  \"2x10\",\n]\n∑blocking_weight = 1\n",
 			"sizing.blocking_weight", []string{"did you mean blocking_piece_weight_bf?"}},
-		{"after a multi-line string", "[[zone]]\nname = \"\"\"\nA\nuse = 3\n\"\"\"\n∑dead = 1\n",
+		{"after a multi-line string", "[[zone]]\nallow_zero = true\nname = \"\"\"\nA\nuse = 3\n\"\"\"\n∑dead = 1\n",
 			"zone.dead", []string{"did you mean dead_psf?"}},
 		{"wrong type", "[drawing]\n∑snap_tolerance_in = true\n",
 			"drawing.snap_tolerance_in", []string{"expected a number", "greater than 0", `got boolean true`}},
 		{"length without a unit we know", "[drawing]\n∑snap_tolerance_in = \"1.5 yd\"\n",
 			"drawing.snap_tolerance_in", []string{"expected a number of inches or a length with its unit", `length "1.5 yd"`}},
-		{"length string in a psf key", "[[zone]]\nname = \"F\"\nuse = \"floor\"\n∑dead_psf = \"12\"\n",
+		{"length string in a psf key", "[[zone]]\nname = \"F\"\nuse = \"floor\"\n∑dead_psf = \"12\"\nlive_psf = 40\n",
 			"zone.dead_psf", []string{"expected a number", `got string "12"`}},
 		{"bool as string", "[design]\n∑wet_service = \"yes\"\n",
 			"design.wet_service", []string{"expected true or false"}},
@@ -66,21 +66,21 @@ func TestProjectErrors(t *testing.T) {
 		{"zero snap", "[drawing]\n∑snap_tolerance_in = 0\n", "drawing.snap_tolerance_in", []string{"greater than 0", "got 0"}},
 		{"nan snap", "[drawing]\n∑snap_tolerance_in = nan\n", "drawing.snap_tolerance_in", []string{"greater than 0"}},
 		{"negative edge", "[drawing]\n∑edge_distance_in = -1\n", "drawing.edge_distance_in", []string{"from 0 to 48", "got -1"}},
-		{"negative load", "[[zone]]\nname = \"A\"\n[[zone]]\nname = \"FLOOR\"\n∑dead_psf = -5\n",
+		{"negative load", "[[zone]]\nname = \"A\"\ndead_psf = 10\nlive_psf = 40\n[[zone]]\nname = \"FLOOR\"\nlive_psf = 40\n∑dead_psf = -5\n",
 			"zone.dead_psf", []string{"from 0 to 1000 (psf)"}},
 		{"kcr below 1", "[design]\n∑kcr = 0.9\n", "design.kcr", []string{"from 1 to 3"}},
 		{"negative uplift report", "[design]\n∑uplift_report_lb = -1\n", "design.uplift_report_lb", []string{"from 0 to 100000 (lb)"}},
 		{"uplift report as text", "[design]\n∑uplift_report_lb = \"50 lb\"\n", "design.uplift_report_lb", []string{"expected a number"}},
-		{"absurd load", "[[zone]]\nname = \"FLOOR\"\n∑live_psf = 1e300\n", "zone.live_psf", []string{"from 0 to 1000 (psf)", "got 1e+300"}},
+		{"absurd load", "[[zone]]\nname = \"FLOOR\"\ndead_psf = 10\n∑live_psf = 1e300\n", "zone.live_psf", []string{"from 0 to 1000 (psf)", "got 1e+300"}},
 		{"absurd snap tolerance", "[drawing]\n∑snap_tolerance_in = 1e300\n", "drawing.snap_tolerance_in", []string{"at most 24"}},
-		{"limit between 0 and 1", "[[zone]]\nname = \"A\"\n∑live_deflection_limit = 0.5\n",
+		{"limit between 0 and 1", "[[zone]]\nname = \"A\"\ndead_psf = 10\nlive_psf = 40\n∑live_deflection_limit = 0.5\n",
 			"zone.live_deflection_limit", []string{"0 (not checked) or from 1 to 10000"}},
 		{"zero bearing", "[[support]]\nlayers = [\"W*\"]\n∑bearing_in = 0\n", "support.bearing_in", []string{"greater than 0"}},
 		{"bad unit", "[drawing]\n∑units = \"yd\"\n", "drawing.units", []string{`"in" | "ft" | "mm" | "cm" | "m"`, `"yd"`}},
 		{"bad kind", "[[support]]\nlayers = [\"P*\"]\n∑kind = \"post\"\n", "support.kind", []string{`"bearing-wall" | "dropped-beam" | "flush-beam" | "ledger"`}},
 		{"bad temperature", "[design]\n∑temperature = \"cold\"\n", "design.temperature", []string{`"normal" | "warm" | "hot"`}},
-		{"bad ceiling", "[[zone]]\nname = \"A\"\n∑ceiling = \"gypsum\"\n", "zone.ceiling", []string{`"plaster" | "non-plaster" | "none"`}},
-		{"bad use", "[[zone]]\nname = \"A\"\n∑use = \"deck\"\n", "zone.use", []string{`"floor" | "roof"`}},
+		{"bad ceiling", "[[zone]]\nname = \"A\"\ndead_psf = 10\nlive_psf = 40\n∑ceiling = \"gypsum\"\n", "zone.ceiling", []string{`"plaster" | "non-plaster" | "none"`}},
+		{"bad use", "[[zone]]\nname = \"A\"\nallow_zero = true\n∑use = \"deck\"\n", "zone.use", []string{`"floor" | "roof"`}},
 		{"bad size", "[lumber]\n∑size = \"2x11\"\n", "lumber.size", []string{"nominal size", `"2x11"`}},
 		{"bad size in an override", "[lumber]\n[[lumber.by_layer]]\nlayers = [\"R*\"]\n∑size = \"2-12\"\n",
 			"lumber.by_layer.size", []string{"nominal size"}},
@@ -97,9 +97,18 @@ func TestProjectErrors(t *testing.T) {
 			"loads.default_zone", []string{`"FLOOR"`}},
 		{"default zone needed", "∑[loads]\n[[zone]]\nname = \"A\"\n[[zone]]\nname = \"B\"\n",
 			"loads.default_zone", []string{"missing", `"A", "B"`}},
-		{"duplicate zone", "[[zone]]\nname = \"Floor\"\n[[zone]]\n∑name = \"FLOOR\"\n",
+		{"duplicate zone", "[[zone]]\nname = \"Floor\"\ndead_psf = 10\nlive_psf = 40\n[[zone]]\n∑name = \"FLOOR\"\ndead_psf = 10\nlive_psf = 40\n",
 			"zone.name", []string{"already defined (line 2)"}},
-		{"zone without name", "∑[[zone]]\ndead_psf = 10\n", "zone.name", []string{"missing", "[[zone]]"}},
+		{"zone without name", "∑[[zone]]\ndead_psf = 10\nlive_psf = 40\n", "zone.name", []string{"missing", "[[zone]]"}},
+		// issue 15 item 6: no silent zero loads
+		{"zone with only a name", "∑[[zone]]\nname = \"A\"\n", `[[zone]] "A"`,
+			[]string{"dead_psf left out", "live_psf left out", "allow_zero = true"}},
+		{"floor live given as 0", "∑[[zone]]\nname = \"A\"\ndead_psf = 10\nlive_psf = 0\n", `[[zone]] "A"`,
+			[]string{"live_psf = 0 (no floor live load)"}},
+		{"roof without roof live or snow", "∑[[zone]]\nname = \"R\"\nuse = \"roof\"\ndead_psf = 10\nsnow_psf = 0\n", `[[zone]] "R"`,
+			[]string{"roof_live_psf left out and snow_psf = 0"}},
+		{"dead load 0", "∑[[zone]]\nname = \"R\"\nuse = \"roof\"\ndead_psf = 0.0\nroof_live_psf = 20\n", `[[zone]] "R"`,
+			[]string{"dead_psf = 0 (no dead load)"}},
 		{"support without layers", "∑[[support]]\nkind = \"ledger\"\n", "support.layers", []string{"missing"}},
 		{"override without a value", "[lumber]\n∑[[lumber.by_layer]]\nlayers = [\"R*\"]\n", "lumber.by_layer", []string{"none of species, grade, size"}},
 		{"pattern in two supports", "[[support]]\nlayers = [\"WALL*\"]\n[[support]]\n∑layers = [\"BM*\", \"wall*\"]\nkind = \"flush-beam\"\n",
@@ -217,18 +226,26 @@ wet_service = true
 default_zone = "F"
 [[zone]]
 name = "F"
+dead_psf = 10
+live_psf = 40
 [[zone]]
 name = "R1"
 use = "roof"
 ceiling = "plaster"
+dead_psf = 10
+snow_psf = 25
 [[zone]]
 name = "R2"
 use = "roof"
+dead_psf = 10
+roof_live_psf = 20
 [[zone]]
 name = "R3"
 use = "roof"
 ceiling = "none"
 total_deflection_limit = 0
+dead_psf = 10
+snow_psf = 30
 `
 	p, err := ParseProject("z.toml", []byte(in))
 	if err != nil {
@@ -428,7 +445,7 @@ func TestZonePitch(t *testing.T) {
 		{`6`, 6, ""}, {`"6:12"`, 6, ""}, {`"6/12"`, 6, ""}, {`"26.565deg"`, 6, ""}, {`0`, 0, ""},
 		{`"6:10"`, 0, "rise in 12"}, {`"steep"`, 0, "rise in 12"}, {`30`, 0, "rise in 12"}, {`-1`, 0, "rise in 12"},
 	} {
-		in := "[[zone]]\nname = \"R\"\nuse = \"roof\"\ndead_psf = 10\npitch = " + c.val + "\n"
+		in := "[[zone]]\nname = \"R\"\nuse = \"roof\"\ndead_psf = 10\npitch = " + c.val + "\nroof_live_psf = 20\n"
 		p, err := ParseProject("p.toml", []byte(in))
 		if c.err != "" {
 			if err == nil || !strings.Contains(err.Error(), c.err) || !strings.Contains(err.Error(), "p.toml:5") {
@@ -446,5 +463,26 @@ func TestZonePitch(t *testing.T) {
 	}
 	if _, err := ParseProject("p.toml", []byte("[[zone]]\nname = \"F\"\nuse = \"floor\"\npitch = 4\n")); err == nil || !strings.Contains(err.Error(), "roof zone") {
 		t.Errorf("pitch on a floor zone: error %v, want one", err)
+	}
+}
+
+// TestAllowZero: a zone that sets allow_zero = true may leave its dead and
+// live loads out; they are then 0, not the defaults (issue 15 item 6).
+func TestAllowZero(t *testing.T) {
+	in := "[[zone]]\nname = \"TEST\"\nallow_zero = true\n[[zone]]\nname = \"R\"\nuse = \"roof\"\nallow_zero = true\nsnow_psf = 30\n[loads]\ndefault_zone = \"TEST\"\n"
+	p, err := ParseProject("z.toml", []byte(in))
+	if err != nil {
+		t.Fatal(err)
+	}
+	z := p.Zones[0]
+	if z.DeadPsf != 0 || z.LivePsf != 0 || !z.AllowZero {
+		t.Errorf("allow_zero zone: %+v, want D = L = 0", z)
+	}
+	if r := p.Zones[1]; r.RoofLivePsf != 0 || r.SnowPsf != 30 {
+		t.Errorf("allow_zero roof: %+v, want Lr 0 (left out), S 30", r)
+	}
+	if _, err := ParseProject("z.toml", []byte("[[zone]]\nname = \"A\"\nallow_zero = \"yes\"\n")); err == nil ||
+		!strings.Contains(err.Error(), "zone.allow_zero: expected true or false") {
+		t.Errorf("allow_zero as a string: %v", err)
 	}
 }

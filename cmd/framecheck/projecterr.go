@@ -74,7 +74,7 @@ var schema = []struct {
 		"add_self_weight", "combinations", "pattern_live_loads", "seasoned", "uplift_report_lb",
 		"brace_at_inflection"}},
 	{"[loads]", []string{"default_zone"}},
-	{"[[zone]]", []string{"name", "use", "dead_psf", "live_psf", "roof_live_psf", "snow_psf", "wind_down_psf",
+	{"[[zone]]", []string{"name", "use", "allow_zero", "dead_psf", "live_psf", "roof_live_psf", "snow_psf", "wind_down_psf",
 		"wind_up_psf", "ceiling", "ceiling_braces_bottom", "live_deflection_limit", "total_deflection_limit",
 		"uplift_dead_psf", "pitch", "dead_on_slope", "long_term_deflection_limit"}},
 	{"[sizing]", []string{"candidates", "blocking_piece_weight_bf"}},

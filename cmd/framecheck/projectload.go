@@ -4,6 +4,7 @@ import (
 	"bytes"
 	"errors"
 	"fmt"
+	"io"
 	"io/fs"
 	"os"
 	"sort"
@@ -15,14 +16,53 @@ import (
 // LoadProject reads and checks a project file. Problems in the file come
 // back as ProjectErrors, each naming the file, line and key.
 func LoadProject(path string) (*Project, error) {
-	data, err := os.ReadFile(path)
+	data, err := readLimited(path, maxProjectBytes)
 	if errors.Is(err, fs.ErrNotExist) {
 		return nil, fmt.Errorf("project file %s not found; 'framecheck init -o %s' writes a starter one to edit: %w", path, path, err)
+	}
+	if errors.Is(err, errTooLarge) {
+		return nil, fmt.Errorf("project file %s: %w (the limit is %d MiB; a project file is a few kilobytes of text)", path, err, maxProjectBytes>>20)
 	}
 	if err != nil {
 		return nil, err
 	}
-	return ParseProject(path, data)
+	p, err := ParseProject(path, data)
+	if err == nil {
+		p.sha256, p.size = sha256Hex(data), int64(len(data))
+	}
+	return p, err
+}
+
+// maxProjectBytes bounds the project file and the materials file it
+// names: a real one is a few kilobytes (common practice, no source);
+// /dev/zero or a drawing given by mistake is refused at once, not read
+// until memory runs out.
+const maxProjectBytes = 4 << 20
+
+// errTooLarge is the error of readLimited for a file past its limit.
+var errTooLarge = errors.New("larger than the limit")
+
+// readLimited reads the whole of a regular file of at most limit bytes.
+// It reads at most limit+1 bytes from anything else (a device, a pipe).
+func readLimited(path string, limit int64) ([]byte, error) {
+	f, err := os.Open(path)
+	if err != nil {
+		return nil, err
+	}
+	defer f.Close()
+	if st, err := f.Stat(); err == nil && st.Mode().IsRegular() && st.Size() > limit {
+		return nil, fmt.Errorf("%w: %d bytes", errTooLarge, st.Size())
+	} else if err == nil && st.IsDir() {
+		return nil, fmt.Errorf("%s is a folder, not a file", path)
+	}
+	data, err := io.ReadAll(io.LimitReader(f, limit+1))
+	if err != nil {
+		return nil, err
+	}
+	if int64(len(data)) > limit {
+		return nil, fmt.Errorf("%w: more than %d bytes", errTooLarge, limit)
+	}
+	return data, nil
 }
 
 // ParseProject checks project-file text; name is used in messages. Every

@@ -1,9 +1,10 @@
 package main
 
 import (
+	"bytes"
+	"errors"
 	"fmt"
 	"math"
-	"os"
 	"path/filepath"
 	"strconv"
 	"strings"
@@ -244,10 +245,12 @@ func (ld *loader) zones(root *table) {
 			t.label = fmt.Sprintf("[[zone]] %d: ", i+1)
 		}
 		ld.enum(t, "use", &z.Use, useValues)
-		if z.Use == "roof" {
+		ld.allowZero(t, &z.AllowZero)
+		// A roof zone that gives snow but leaves roof live out still gets
+		// the ordinary roof live load; no other load has a default: a zone
+		// without them is an error (zeroLoads) unless allow_zero is set.
+		if sv, ok := t.m["snow_psf"]; ok && z.Use == "roof" && !z.AllowZero && (sv != int64(0) && sv != float64(0)) {
 			z.RoofLivePsf = roofLiveDefaultPsf
-		} else {
-			z.LivePsf = floorLiveDefaultPsf
 		}
 		ld.num(t, "dead_psf", "psf", &z.DeadPsf, loadRule)
 		ld.num(t, "live_psf", "psf", &z.LivePsf, loadRule)
@@ -281,6 +284,7 @@ func (ld *loader) zones(root *table) {
 		} else {
 			ld.get(t, "long_term_deflection_limit", "")
 		}
+		ld.zeroLoads(t, z)
 		ld.p.Zones = append(ld.p.Zones, z)
 	}
 }
@@ -326,6 +330,66 @@ func (ld *loader) pitch(t *table, dst *float64) {
 		return
 	}
 	*dst = rise
+}
+
+// zeroLoads reports a zone that gives no dead load, or no load of its use
+// (a floor: live_psf; a roof: roof_live_psf or snow_psf), left out or 0,
+// unless it sets allow_zero = true: a zone with only a name would
+// otherwise be checked at D = 0 and pass with a ratio near 0, which is
+// never what the designer meant. The error is at the zone's line and
+// names the zone and every key missing.
+func (ld *loader) zeroLoads(t *table, z Zone) {
+	if z.AllowZero {
+		return
+	}
+	// state says how the file leaves key at zero: "left out", "= 0", or
+	// "" when it gives a value that is not 0 or is already reported.
+	state := func(key string) string {
+		v, ok := t.m[key]
+		switch {
+		case !ok:
+			return key + " left out"
+		case v == int64(0) || v == float64(0):
+			return key + " = 0"
+		}
+		return ""
+	}
+	var missing []string
+	if s := state("dead_psf"); s != "" {
+		missing = append(missing, s+" (no dead load)")
+	}
+	if z.Use == "roof" {
+		if lr, s := state("roof_live_psf"), state("snow_psf"); lr != "" && s != "" && z.RoofLivePsf == 0 {
+			missing = append(missing, lr+" and "+s+" (no roof live or snow load)")
+		}
+	} else if s := state("live_psf"); s != "" {
+		missing = append(missing, s+" (no floor live load)")
+	}
+	if len(missing) == 0 {
+		return
+	}
+	name := fmt.Sprintf("%q", z.Name)
+	if z.Name == "" {
+		name = strings.TrimSuffix(t.label, ": ")
+	}
+	ld.errs = append(ld.errs, &ProjectError{File: ld.file, Line: lineOf(ld.lines, t.path), Key: "[[zone]] " + name,
+		Msg: fmt.Sprintf("%s: give the zone's loads in psf, or set allow_zero = true if a zero load is meant",
+			strings.Join(missing, "; "))})
+}
+
+// allowZero reads [[zone]] allow_zero. Left out it is false, a safe
+// default that is not listed among the defaults taken.
+func (ld *loader) allowZero(t *table, dst *bool) {
+	v, path, ok := ld.get(t, "allow_zero", "")
+	if !ok {
+		return
+	}
+	b, isBool := v.(bool)
+	if !isBool {
+		ld.errorf(path, "expected true or false, got %s", describe(v))
+		return
+	}
+	*dst = b
 }
 
 // limit reads a deflection limit whose default comes from use and ceiling.
@@ -432,12 +496,15 @@ func (ld *loader) materialsFile(t *table) {
 	if !filepath.IsAbs(path) {
 		path = filepath.Join(filepath.Dir(ld.file), path)
 	}
-	f, err := os.Open(path)
+	data, err := readLimited(path, maxProjectBytes)
+	if errors.Is(err, errTooLarge) {
+		err = fmt.Errorf("%s: %w (the limit is %d MiB)", path, err, maxProjectBytes>>20)
+	}
 	if err != nil {
 		ld.errorf(joinPath(t.path, "materials_file"), "%v", err)
 		return
 	}
-	defer f.Close()
+	f := bytes.NewReader(data)
 	var user *check.Materials
 	switch strings.ToLower(filepath.Ext(path)) {
 	case ".csv":

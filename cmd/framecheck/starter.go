@@ -82,14 +82,15 @@ default_zone = "FLOOR"        # zone of joists outside every drawn outline (with
 [[zone]]
 name = "FLOOR"
 use = "floor"                 # floor | roof
-dead_psf = 12.0               # D, self-weight included
-live_psf = 40.0               # L, floor live load (a roof zone that leaves it out gets 0)
-roof_live_psf = 0.0           # Lr (a roof zone that leaves it out gets 20)
+dead_psf = 12.0               # D, self-weight included (left out or 0: an error, see allow_zero)
+live_psf = 40.0               # L, floor live load (a floor zone must give it; a roof zone gets 0)
+roof_live_psf = 0.0           # Lr (a roof zone must give Lr or S; given S only, it gets Lr 20)
 snow_psf = 0.0                # S
 wind_down_psf = 0.0           # wind pressure toward the joists
 wind_up_psf = 0.0             # wind suction away from the joists (uplift)
 ceiling = "non-plaster"       # plaster | non-plaster | none
 ceiling_braces_bottom = false # true: a ceiling fastened to the joists braces their bottom edge
+allow_zero = false            # true: the zone may leave out (or give 0 for) its dead load and its use's live-type load
 # Deflection limits, the n of L/n; 0 = not checked. Left out, they follow
 # IBC 2018 Table 1604.3 by use and ceiling: floor 360 live / 240 total;
 # roof with plaster ceiling 360/240, other ceiling 240/180, none 180/120.

@@ -40,7 +40,7 @@ func runUpliftPlan(t *testing.T, deadPsf, upPsf float64, extra string, x0 float6
 	dir := t.TempDir()
 	plan := filepath.Join(dir, "plan.dxf")
 	proj := filepath.Join(dir, "framecheck.toml")
-	toml := fmt.Sprintf("[drawing]\nunits = \"in\"\n%s\n[[zone]]\nname = \"ROOF\"\nuse = \"roof\"\ndead_psf = %v\nwind_up_psf = %v\n", extra, deadPsf, upPsf)
+	toml := fmt.Sprintf("[drawing]\nunits = \"in\"\n%s\n[[zone]]\nname = \"ROOF\"\nuse = \"roof\"\ndead_psf = %v\nroof_live_psf = 20\nwind_up_psf = %v\n", extra, deadPsf, upPsf)
 	if err := os.WriteFile(plan, []byte(upliftPlan(x0)), 0o644); err != nil {
 		t.Fatal(err)
 	}
