@@ -6,6 +6,8 @@ import (
 	"regexp"
 	"strconv"
 	"strings"
+
+	"framecheck/check"
 )
 
 // Length spellings (common practice, no source): feet and inches as
@@ -150,4 +152,48 @@ func fmtIn(in float64) string {
 		return s + " in"
 	}
 	return fmt.Sprintf("%s in (%s ft)", s, strconv.FormatFloat(math.Round(in/12*100)/100, 'f', -1, 64))
+}
+
+// pointFlag collects --point values: POS,TYPE=LB,... with POS a length
+// from the first bearing (trade forms, unit required) and TYPE one of D,
+// L, Lr, S, Wdown, Wup (lb; Wup a magnitude).
+type pointFlag struct{ loads []check.PointLoad }
+
+func (p *pointFlag) String() string { return fmt.Sprintf("%d point loads", len(p.loads)) }
+
+func (p *pointFlag) Set(s string) error {
+	parts := strings.Split(s, ",")
+	at, err := parseLength(strings.TrimSpace(parts[0]))
+	if err != nil {
+		return fmt.Errorf("position: %v", err)
+	}
+	if len(parts) < 2 {
+		return fmt.Errorf("%q: want POS,TYPE=LB[,TYPE=LB...], such as 7ft,D=400,L=300", s)
+	}
+	pl := check.PointLoad{AtIn: at}
+	for _, kv := range parts[1:] {
+		k, v, ok := strings.Cut(strings.TrimSpace(kv), "=")
+		n, err := strconv.ParseFloat(strings.TrimSpace(strings.TrimSuffix(strings.TrimSpace(v), "lb")), 64)
+		if !ok || err != nil || !(n >= 0) || math.IsInf(n, 0) {
+			return fmt.Errorf("%q: want TYPE=LB with a load of 0 lb or more, such as D=400", kv)
+		}
+		switch strings.ToLower(strings.TrimSpace(k)) {
+		case "d":
+			pl.DeadLb += n
+		case "l":
+			pl.LiveLb += n
+		case "lr":
+			pl.RoofLiveLb += n
+		case "s":
+			pl.SnowLb += n
+		case "wdown":
+			pl.WindDownLb += n
+		case "wup":
+			pl.WindUpLb += n
+		default:
+			return fmt.Errorf("%q: load type %q: want D, L, Lr, S, Wdown or Wup", kv, k)
+		}
+	}
+	p.loads = append(p.loads, pl)
+	return nil
 }

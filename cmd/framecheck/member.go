@@ -20,6 +20,8 @@ type memberArgs struct {
 	liveLimit, totalLimit                       float64
 	bottomBraced, repetitive                    bool
 	blocking                                    int
+	points                                      pointFlag
+	pitch                                       string
 }
 
 // runMember is `framecheck member`: one joist from flags, with its trace.
@@ -53,6 +55,8 @@ Exit status 0 when the joist passes, 1 when it fails.`)
 	f.BoolVar(&a.bottomBraced, "bottom-braced", false, "a ceiling fastened to the joist braces its bottom edge")
 	f.BoolVar(&a.repetitive, "repetitive", true, "repetitive member factor Cr applies (3 or more joists at 24 in or less, sheathed)")
 	f.IntVar(&a.blocking, "blocking", 0, "blocking `rows` in each span (default: as many as the bottom edge needs)")
+	f.Var(&a.points, "point", "point `load` POS,D=lb,L=lb,Lr=lb,S=lb,Wdown=lb,Wup=lb at POS from the first bearing, e.g. 7ft,D=400,L=300; repeatable")
+	f.StringVar(&a.pitch, "pitch", "", "roof `slope`, rise in 12 (6, 6:12 or 26.57deg): a rafter on the horizontal projection; --dead is then per sloped area")
 	f.StringVar(&a.project, "p", "", "project file `PROJECT.toml` whose [design] switches apply (default: the built-in defaults)")
 	pos, code := f.parse(args, stdout, stderr)
 	if code >= 0 {
@@ -141,13 +145,31 @@ func buildMember(a *memberArgs, set map[string]bool) (check.Member, check.Settin
 	if set["total-limit"] {
 		total = a.totalLimit
 	}
+	pitch := 0.0
+	if a.pitch != "" {
+		var msg string
+		if pitch, msg = parsePitch(a.pitch); msg != "" {
+			return m, check.Settings{}, "--pitch: " + msg
+		}
+		if pitch > 0 && a.use != "roof" {
+			return m, check.Settings{}, "--pitch is for a roof member: add --use roof"
+		}
+	}
+	if pitch > 0 {
+		// dead load per sloped area, on the plan (x 1/cos of the slope)
+		a.loads.DeadPsf *= math.Hypot(12, pitch) / 12
+	}
 	lb := a.bearing.in
 	at := lb / 2
 	m = check.Member{
 		ID: "M1", Size: a.size, Species: a.species, Grade: a.grade,
 		SpacingIn: a.spacing.in, TribIn: a.spacing.in, Use: a.use, Loads: a.loads,
 		LiveLimit: live, TotalLimit: total, BottomBracedContinuous: a.bottomBraced,
-		Repetitive: a.repetitive, OverhangEndIn: a.overhang.in,
+		Repetitive: a.repetitive, OverhangEndIn: a.overhang.in, PitchRise12: pitch,
+	}
+	for _, p := range a.points.loads {
+		p.AtIn += at
+		m.PointLoads = append(m.PointLoads, p)
 	}
 	m.Bearings = append(m.Bearings, check.Bearing{AtIn: at, LengthIn: lb})
 	for _, s := range a.spans.in {
@@ -155,6 +177,11 @@ func buildMember(a *memberArgs, set map[string]bool) (check.Member, check.Settin
 		m.Bearings = append(m.Bearings, check.Bearing{AtIn: at, LengthIn: lb})
 	}
 	m.LengthIn = at + max(a.overhang.in, lb/2)
+	for i, p := range m.PointLoads {
+		if p.AtIn > m.LengthIn {
+			return m, check.Settings{}, fmt.Sprintf("--point %d at %s from the first bearing lies past the member's end", i+1, fmtIn(p.AtIn-lb/2))
+		}
+	}
 	return m, settings, ""
 }
 
@@ -183,6 +210,14 @@ func printMember(w io.Writer, m check.Member, r check.Result, colour bool) {
 	l := m.Loads
 	fmt.Fprintf(w, "  loads D %s, L %s, Lr %s, S %s, W down %s, W up %s psf\n", fmtNum(l.DeadPsf), fmtNum(l.LivePsf),
 		fmtNum(l.RoofLivePsf), fmtNum(l.SnowPsf), fmtNum(l.WindDownPsf), fmtNum(l.WindUpPsf))
+	for _, p := range m.PointLoads {
+		fmt.Fprintf(w, "  point load at %s from the first bearing: D %s, L %s, Lr %s, S %s, W down %s, W up %s lb\n",
+			fmtIn(p.AtIn-m.Bearings[0].AtIn), fmtNum(p.DeadLb), fmtNum(p.LiveLb), fmtNum(p.RoofLiveLb), fmtNum(p.SnowLb),
+			fmtNum(p.WindDownLb), fmtNum(p.WindUpLb))
+	}
+	if m.PitchRise12 > 0 {
+		fmt.Fprintf(w, "  rafter at %s in 12, drawn in plan: spans and loads on the horizontal projection (D converted from the slope)\n", fmtNum(m.PitchRise12))
+	}
 	fmt.Fprintf(w, "  deflection limits: live %s, total %s\n", limitText(m.LiveLimit), limitText(m.TotalLimit))
 	if m.BottomBracedContinuous {
 		fmt.Fprintln(w, "  bottom edge braced by the ceiling")

@@ -168,3 +168,45 @@ func TestFmtVal(t *testing.T) {
 		}
 	}
 }
+
+// TestMemberPointAndPitch: --point and --pitch.
+//
+// The joist of TestMemberCommand with 400 lb D + 300 lb L at mid-span
+// (7 ft from the first bearing): M = w L^2 / 8 + P L / 4 = 19,600 +
+// 700 (168) / 4 = 49,000 lb-in, fb = 49,000 / 21.39 = 2,290.7 psi (AISC Beam
+// Diagrams and Formulas, simple beam cases 1 and 7, superposed).
+//
+// A 2x8 rafter at 6 in 12 on a 12 ft plan span, 24 in o.c., D 10 psf on
+// slope (11.18 psf on plan, x sqrt(12^2 + 6^2) / 12), Lr 20 psf on plan:
+// D + Lr on the plan, w = 31.18 psf x 2 ft = 62.36 plf = 5.197 lb/in,
+// M = 5.197 (144^2) / 8 = 13,470 lb-in, fb = 13,470 / 13.14 = 1,025 psi
+// (statics; S from NDS 2018 Supplement Table 1B).
+func TestMemberPointAndPitch(t *testing.T) {
+	code, out, errs := runCmd("member", "--size", "2x10", "--span", "14ft", "--dead", "10", "--live", "40", "--point", "7ft,D=400,L=300")
+	if code != 1 || errs != "" {
+		t.Fatalf("exit %d, stderr %q\n%s", code, errs, out)
+	}
+	for _, want := range []string{"point load at 84 in", "bending-top under D+L: 2290.7 psi", "M       =  49000 lb-in"} {
+		if !strings.Contains(out, want) {
+			t.Errorf("output lacks %q:\n%s", want, out)
+		}
+	}
+	code, out, errs = runCmd("member", "--size", "2x8", "--span", "12ft", "--spacing", "24in", "--use", "roof", "--dead", "10", "--pitch", "6:12")
+	if errs != "" || code > 1 {
+		t.Fatalf("exit %d, stderr %q\n%s", code, errs, out)
+	}
+	for _, want := range []string{"rafter at 6 in 12", "loads D 11.18", "bending-top under D+Lr: 1025"} {
+		if !strings.Contains(out, want) {
+			t.Errorf("output lacks %q:\n%s", want, out)
+		}
+	}
+	for _, bad := range [][]string{
+		{"--point", "7,D=400"}, {"--point", "7ft"}, {"--point", "7ft,X=3"}, {"--point", "7ft,D=-4"}, {"--point", "30ft,D=4"},
+		{"--pitch", "steep"}, {"--pitch", "6:12", "--use", "floor"},
+	} {
+		args := append([]string{"member", "--size", "2x10", "--span", "14ft"}, bad...)
+		if code, _, errs := runCmd(args...); code != 2 || errs == "" {
+			t.Errorf("%v: exit %d, stderr %q; want a usage error", bad, code, errs)
+		}
+	}
+}

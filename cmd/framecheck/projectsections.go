@@ -296,6 +296,18 @@ func (ld *loader) pitch(t *table, dst *float64) {
 	if !ok {
 		return
 	}
+	rise, msg := parsePitch(v)
+	if msg != "" {
+		ld.errorf(path, "%s", msg)
+		return
+	}
+	*dst = rise
+}
+
+// parsePitch reads a roof slope as a rise in 12: a number (6), a string
+// "6:12" or "6/12", or an angle "26.57deg"; from 0 (flat) to 24 in 12. The
+// message says what was expected when v is none of these.
+func parsePitch(v any) (float64, string) {
 	const want = "expected a rise in 12 such as 6, \"6:12\" or an angle such as \"26.57deg\", from 0 (flat) to 24 in 12"
 	var rise float64
 	switch x := v.(type) {
@@ -305,31 +317,31 @@ func (ld *loader) pitch(t *table, dst *float64) {
 		rise = x
 	case string:
 		s := strings.ToLower(strings.TrimSpace(x))
-		var a, b float64
 		switch {
 		case strings.HasSuffix(s, "deg") || strings.HasSuffix(s, "°"):
 			n, err := strconv.ParseFloat(strings.TrimSpace(strings.TrimSuffix(strings.TrimSuffix(s, "deg"), "°")), 64)
 			if err != nil || n < 0 || n >= 90 {
-				ld.errorf(path, "%s, got %q", want, x)
-				return
+				return 0, fmt.Sprintf("%s, got %q", want, x)
 			}
 			rise = 12 * math.Tan(n*math.Pi/180)
 		default:
+			var a, b float64
 			if _, err := fmt.Sscanf(strings.NewReplacer(":", " ", "/", " ").Replace(s), "%g %g", &a, &b); err != nil || b != 12 {
-				ld.errorf(path, "%s, got %q", want, x)
-				return
+				if n, err := strconv.ParseFloat(s, 64); err == nil {
+					a, b = n, 12
+				} else {
+					return 0, fmt.Sprintf("%s, got %q", want, x)
+				}
 			}
 			rise = a
 		}
 	default:
-		ld.errorf(path, "%s, got %s", want, describe(v))
-		return
+		return 0, fmt.Sprintf("%s, got %s", want, describe(v))
 	}
 	if !(rise >= 0 && rise <= 24) {
-		ld.errorf(path, "%s, got %s", want, fmtNum(rise))
-		return
+		return 0, fmt.Sprintf("%s, got %s", want, fmtNum(rise))
 	}
-	*dst = rise
+	return rise, ""
 }
 
 // zeroLoads reports a zone that gives no dead load, or no load of its use
