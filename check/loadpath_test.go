@@ -1,6 +1,7 @@
 package check
 
 import (
+	"fmt"
 	"math"
 	"strings"
 	"testing"
@@ -264,4 +265,38 @@ func TestBeamCarryingJoists(t *testing.T) {
 	beam.SelfWeightPlf = 3.5 * 11.25 / 144 * 35
 	r2 := CheckMember(beam, s)
 	expectNear(t, "M with self-weight", traceValue(t, find(t, r2, KindBendingTop), "M"), 216*P+beam.SelfWeightPlf/12*L*L/8, 1e-9, 1e-9, src)
+}
+
+// TestTotalDeflection_RoofJoist15ft_IBC: a 15 ft (180 in) 2x10 DF-L No.2
+// roof joist at 16 in, D 15 psf, Lr 20 psf, non-plaster ceiling (L/240
+// live, L/180 total, IBC 2018 Table 1604.3). The IBC total check takes the
+// deflection from L + 0.5D for seasoned lumber in dry service (footnote d):
+//
+//	w = (20 + 0.5(15)) 16/144 = 3.0556 lb/in; I = 98.93 in^4, E = 1.6e6 psi
+//	delta = 5 w L^4 / (384 E I) = 5 (3.0556)(180^4) / (384 (1.6e6)(98.93)) = 0.264 in
+//	allowed 180 / 180 = 1.000 in
+//
+// and the NDS 2018 3.5.2 long-term deflection, Kcr 1.5: (20 + 1.5(15)) 16/144
+// = 4.7222 lb/in, 0.408 in, reported, not checked.
+func TestTotalDeflection_RoofJoist15ft_IBC(t *testing.T) {
+	L := 180.0
+	m := roofJoist(L)
+	m.Size = "2x10"
+	m.Loads = AreaLoads{DeadPsf: 15, RoofLivePsf: 20}
+	r := CheckMember(m, DefaultSettings())
+	ei := 1.6e6 * 1.5 * 9.25 * 9.25 * 9.25 / 12
+	tot := find(t, r, KindDeflectionTotal)
+	w := (20 + 0.5*15) * 16 / 144.0
+	expectNear(t, "total deflection", tot.Actual, 5*w*math.Pow(L, 4)/(384*ei), 1e-9, 1e-9, "IBC 2018 Table 1604.3 note d; 5 w L^4 / 384 E I")
+	expectNear(t, "hand value", tot.Actual, 0.264, 5e-4, 0, "hand calculation in the comment")
+	expectNear(t, "allowed", tot.Allowable, 1.0, 1e-12, 0, "IBC 2018 Table 1604.3, roof, non-plaster ceiling, L/180")
+	if !strings.Contains(tot.Combo, "0.5D+Lr") {
+		t.Errorf("total deflection case %q, want 0.5D+Lr", tot.Combo)
+	}
+	wl := (20 + 1.5*15) * 16 / 144.0
+	long := 5 * wl * math.Pow(L, 4) / (384 * ei)
+	expectNear(t, "long-term hand value", long, 0.408, 5e-4, 0, "hand calculation in the comment")
+	if !strings.Contains(strings.Join(r.Info, "\n"), fmt.Sprintf("%.3f in under 1.5D+Lr", long)) {
+		t.Errorf("info %q: want the long-term deflection %.3f in reported", r.Info, long)
+	}
 }

@@ -288,3 +288,23 @@ func sortFloats(v []float64) {
 		}
 	}
 }
+
+// AISC Beam Diagrams and Formulas, continuous beam - two equal spans -
+// uniform load on one span: R1 = 7wl/16, R2 = 5wl/8, R3 = -wl/16, M over the
+// centre support -wl^2/16, Mmax = 49wl^2/512 at x = 7l/16. Given here as a
+// partial load over the first span of the two-span beam, so the general
+// three-moment equation carries it.
+func TestTwoSpansPartialLoadOneSpan(t *testing.T) {
+	const src = "AISC Steel Construction Manual, Beam Diagrams and Formulas, continuous beam - two equal spans - uniform load on one span (closed form)"
+	l, w := 150.0, 7.0
+	b := Beam{LengthIn: 2 * l, SupportsAtIn: []float64{0, l, 2 * l}, EILbIn2: eiTest}
+	r := mustSolveLoads(t, b, Loads{Partial: []PartialLoad{{FromIn: 0, ToIn: l, WPli: w}}})
+	R := r.Reactions()
+	near(t, "R1", R[0], 7*w*l/16, tolExact, w*l, src)
+	near(t, "R2", R[1], 5*w*l/8, tolExact, w*l, src)
+	near(t, "R3", R[2], -w*l/16, tolExact, w*l, src)
+	near(t, "M support", r.SupportMoments()[1], -w*l*l/16, tolExact, w*l*l, src)
+	mp, xp, _, _ := r.MomentExtremes(0, 2*l)
+	near(t, "Mmax", mp, 49*w*l*l/512, tolExact, w*l*l, src)
+	near(t, "x of Mmax", xp, 7*l/16, tolExact, l, src)
+}
