@@ -300,3 +300,21 @@ func TestTotalDeflection_RoofJoist15ft_IBC(t *testing.T) {
 		t.Errorf("info %q: want the long-term deflection %.3f in reported", r.Info, long)
 	}
 }
+
+// TestBuiltUpCarriesTwiceOnePly: a (2) 2x10 built-up joist with its top
+// edge braced carries twice the load of one 2x10 at the same ratios of
+// bending, shear and deflection (A, S and I double, the size factor is the
+// ply's: statics; NDS 2018 Supplement Table 4A size factors by ply width).
+// Its bearing stress is that of one ply at half the load, too.
+func TestBuiltUpCarriesTwiceOnePly(t *testing.T) {
+	one := floorJoist("2x10", 168, 16)
+	two := one
+	two.Size, two.TribIn = "(2) 2x10", 32
+	r1, r2 := CheckMember(one, DefaultSettings()), CheckMember(two, DefaultSettings())
+	if r2.Status == StatusError {
+		t.Fatalf("built-up: %v", r2.Messages)
+	}
+	for _, kind := range []string{KindBendingTop, KindShear, KindDeflectionLive, KindBearing} {
+		expectNear(t, kind, find(t, r2, kind).Ratio, find(t, r1, kind).Ratio, 0, 1e-9, "statics: two plies, twice the load")
+	}
+}

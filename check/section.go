@@ -18,6 +18,19 @@ type Section struct {
 	AreaIn2    float64 // A = b d
 	SIn3       float64 // Sxx = b d^2 / 6
 	IIn4       float64 // Ixx = b d^3 / 12
+	// Plies is the number of plies of a built-up member (2 to 4), 0 for a
+	// single piece. NominalBIn stays the ply's (the size factor is the
+	// ply's); BIn, AreaIn2, SIn3 and IIn4 are the whole member's.
+	Plies int
+}
+
+// MemberNominalBIn is the nominal thickness of the whole member: plies
+// times the ply's.
+func (s Section) MemberNominalBIn() float64 {
+	if s.Plies > 1 {
+		return float64(s.Plies) * s.NominalBIn
+	}
+	return s.NominalBIn
 }
 
 // dressedThicknessIn gives the dressed thickness of each nominal thickness,
@@ -54,10 +67,13 @@ func NewSection(bNom, dNom int) (Section, error) {
 	}, nil
 }
 
-// ErrBuiltUp is the cause of ParseSize's error for a built-up member
-// ("(2) 2x10"): the engine checks single sawn members only, and does not
-// check one ply in place of the member.
-var ErrBuiltUp = errors.New("built-up members are not checked yet")
+// ErrBuiltUp is the cause of ParseSize's error for a built-up member it
+// cannot read: more than 4 plies, or plies thicker than 2x.
+var ErrBuiltUp = errors.New("built-up member not checked")
+
+// maxPlies bounds a built-up member: nailed or bolted members of 2 to 4
+// plies of 2x lumber are common practice (no source); more is refused.
+const maxPlies = 4
 
 // ErrMetricSection is the cause of ParseSize's error for a metric sawn
 // section such as 90x45 (mm), which is not NDS dimension lumber.
@@ -85,9 +101,11 @@ func ParseSize(s string) (Section, error) {
 		switch {
 		case err != nil:
 			return Section{}, err
+		case plies > 1 && (plies > maxPlies || sec.NominalBIn != 2):
+			return Section{}, fmt.Errorf("size %q: %w: built-up members of 2 to %d plies of 2x lumber are checked; %d plies of %s are not, "+
+				"and are not checked as one ply either; check it by hand", s, ErrBuiltUp, maxPlies, plies, sec.Name)
 		case plies > 1:
-			return Section{}, fmt.Errorf("size %q: %w: a member of %d plies of %s (b = %d x %g in) is not checked as one ply "+
-				"either; check it by hand", s, ErrBuiltUp, plies, sec.Name, plies, sec.BIn)
+			return builtUp(sec, plies), nil
 		}
 		return sec, nil
 	}
@@ -110,6 +128,19 @@ func ParseSize(s string) (Section, error) {
 		return Section{}, fmt.Errorf("size %q: %w", s, err)
 	}
 	return sec, nil
+}
+
+// builtUp returns the section of n plies of ply fastened side by side,
+// acting as one member of width n b (common practice, no source: the NDS
+// gives no rule of its own for built-up beams; its built-up column rules
+// are NDS 2018 15.3). The ply's nominal size stays for the size factor.
+func builtUp(ply Section, n int) Section {
+	k := float64(n)
+	s := ply
+	s.Name = "(" + strconv.Itoa(n) + ") " + ply.Name
+	s.Plies = n
+	s.BIn, s.AreaIn2, s.SIn3, s.IIn4 = k*ply.BIn, k*ply.AreaIn2, k*ply.SIn3, k*ply.IIn4
+	return s
 }
 
 // metricPair reports whether b x d reads as a metric sawn section in mm:

@@ -60,17 +60,32 @@ func TestParseSize(t *testing.T) {
 	expectNear(t, "2x10 board feet per foot", s.BoardFeetPerFt(), 20.0/12, 1e-12, 0, "board measure = nominal b d / 12, common practice, no source")
 }
 
-// A built-up size is read but refused (the engine does not check built-up
-// members, and never checks one ply in their place); a metric section is
-// refused with a message saying how to map it, never read as a nominal
-// US size (issue 14 items 5 and 7).
+// A built-up size of 2 to 4 plies of 2x is one member of width n b (the
+// plies fastened to act together: common practice, no source); S and I of
+// (3) 2x12 are three times Table 1B's 31.64 in^3 and 178.0 in^4 (NDS 2018
+// Supplement Table 1B). Thicker plies or more plies are refused, never
+// checked as one ply; a metric section is refused with a message saying how
+// to map it, never read as a nominal US size (issue 14 items 5 and 7).
 func TestParseSizeBuiltUpAndMetric(t *testing.T) {
 	for _, in := range []string{"(1) 2x10", "(1)2X10"} {
 		if s, err := ParseSize(in); err != nil || s.Name != "2x10" {
 			t.Errorf("ParseSize(%q) = %q, %v; want 2x10", in, s.Name, err)
 		}
 	}
-	for _, in := range []string{"(2) 2x10", "(3) 2x12", "(2)-2x8"} {
+	s, err := ParseSize("(3) 2x12")
+	if err != nil || s.Plies != 3 || s.Name != "(3) 2x12" {
+		t.Fatalf("ParseSize((3) 2x12) = %+v, %v", s, err)
+	}
+	expectNear(t, "b", s.BIn, 4.5, 1e-12, 0, "3 x 1.5 in, NDS 2018 Supplement Table 1A")
+	expectNear(t, "S", s.SIn3, 3*31.64, 0.01, 0, "3 x 31.64 in^3, NDS 2018 Supplement Table 1B")
+	expectNear(t, "I", s.IIn4, 3*177.98, 0.01, 0, "3 x 177.98 in^4, NDS 2018 Supplement Table 1B")
+	expectNear(t, "nominal thickness of the member", s.MemberNominalBIn(), 6, 0, 0, "3 x 2 in")
+	for _, in := range []string{"(2)-2x8", "(4) 2x10"} {
+		if s, err := ParseSize(in); err != nil || s.Plies < 2 {
+			t.Errorf("ParseSize(%q) = %+v, %v; want a built-up section", in, s, err)
+		}
+	}
+	for _, in := range []string{"(5) 2x10", "(2) 4x10", "(2) 3x12"} {
 		_, err := ParseSize(in)
 		if !errors.Is(err, ErrBuiltUp) || !strings.Contains(err.Error(), "plies") {
 			t.Errorf("ParseSize(%q): %v, want ErrBuiltUp", in, err)

@@ -280,11 +280,11 @@ func tempName(s string) string {
 // 8 ft blocking interval, are paraphrased from memory: verify against NDS
 // 2018 4.4.1.2.
 func (e *engine) lateralSupportRule() string {
-	k := [2]float64{e.sec.NominalDIn, e.sec.NominalBIn}
+	k := [2]float64{e.sec.NominalDIn, e.sec.MemberNominalBIn()}
 	if v, ok := lateralRules.Load(k); ok {
 		return v.(string)
 	}
-	v := lateralSupportRule(e.sec.NominalDIn / e.sec.NominalBIn)
+	v := lateralSupportRule(e.sec.NominalDIn / e.sec.MemberNominalBIn())
 	lateralRules.Store(k, v)
 	return v
 }
