@@ -20,6 +20,11 @@ const minBearingAngleDeg = 10
 // a bearing of that member (common practice, no source).
 const minSupportFrac = 0.1
 
+// drawnTwiceIn: support lines met closer than this along a member are
+// one line drawn twice or in pieces, whatever their kinds (sheathing
+// drawn beside a plate is 3/8 in or more from it).
+const drawnTwiceIn = 0.25
+
 // sameLineIn: two support lines met closer than this along a joist are one
 // line drawn twice or in pieces, not a double-line wall.
 const sameLineIn = 0.5
@@ -187,7 +192,7 @@ func (g *grouper) bearingsFrom(hits []hit, merged map[[2]int]bool, L float64) ([
 	defer func() { g.direct, g.outer = direct, outer }() // keep the buffers
 	for _, h := range hits {
 		if h.direct {
-			if n := len(direct); n > 0 && (h.t-direct[n-1].t)*h.sin < sameLineIn {
+			if n := len(direct); n > 0 && (h.t-direct[n-1].t)*h.sin < drawnTwiceIn {
 				continue // same line drawn twice or in pieces
 			}
 			direct = append(direct, h)

@@ -219,13 +219,14 @@ func (g *grouper) outlines() {
 	endIdx := newBandIndex(maxGap, ends)
 	isCap := make([]bool, n)
 	capMax := g.capMaxLenIn()
-	corner := func(p Point, lines []int32) int32 {
+	corner := func(p Point, lines []int32) int32 { // the line with the nearest corner within tol
+		best, bl := tol, int32(-1)
 		for _, l := range lines {
-			if dist(p, js[l].a) <= tol || dist(p, js[l].b) <= tol {
-				return l
+			if d := math.Min(dist(p, js[l].a), dist(p, js[l].b)); d <= best {
+				best, bl = d, l
 			}
 		}
-		return -1
+		return bl
 	}
 	for i := range js {
 		if bundleOf[i] >= 0 {
