@@ -175,8 +175,12 @@ func (g *grouper) outlines() {
 		w1 := acrossAt(lmax, A1) - acrossAt(lmin, A1)
 		if math.Abs(w0-w1) > taperTolIn {
 			o.code = CodeNotRectangle
-			o.err = fmt.Sprintf("its outline is not a rectangle: the sides (%s, %s) are not parallel, %.2f in apart at one end and %.2f in at the other",
-				entityRef(js[lmin].pos), entityRef(js[lmax].pos), w0, w1)
+			sides := entityRef(js[lmin].pos)
+			if js[lmax].pos != js[lmin].pos {
+				sides += ", " + entityRef(js[lmax].pos)
+			}
+			o.err = fmt.Sprintf("its outline is not a rectangle: the sides (%s) are not parallel, %.2f in apart at one end and %.2f in at the other",
+				sides, w0, w1)
 		}
 		// seams: interior lines leaving plies at least minPlyIn each side
 		cs = cs[:0]
