@@ -94,6 +94,7 @@ type grouper struct {
 	memOl     []int32   // per member: index into ols, -1
 	segMem    []int32   // per joist item: its member, -1 when dropped
 	pieces    []drawnPiece
+	badPos    map[dxfimport.Pos]string // joist items standing for outlines that are not rectangles: why
 	arcs      []dxfimport.Pos // curved entities skipped on support, blocking and label layers
 	bulged    int             // of which polylines with arc segments
 }

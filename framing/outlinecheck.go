@@ -47,6 +47,12 @@ func (g *grouper) brokenOutlines() {
 	}
 	done := map[int]bool{}
 	dropRaw := map[int]bool{}
+	type figure struct {
+		pts []Point
+		pos dxfimport.Pos
+		msg string
+	}
+	var figures []figure
 	for _, r := range cands {
 		if done[r] {
 			continue
@@ -91,20 +97,31 @@ func (g *grouper) brokenOutlines() {
 		what := fmt.Sprintf("its outline of %d lines (%s) is not a rectangle", len(comp), handles(pos, 8))
 		if bundle >= 0 && g.ols[bundle].err == "" {
 			g.ols[bundle].err, g.ols[bundle].code = what, CodeNotRectangle
-		} else if bundle < 0 {
-			g.plan.Issues.Add(pos[0], CodeNotRectangle, dxfimport.SevError,
-				"joist outline of %d lines (%s) is not a rectangle; not checked: draw the member as a rectangle or as its centre line",
-				len(comp), handles(pos, 8))
 		}
 		for _, l := range comp {
 			if g.rawBundle == nil || g.rawBundle[l] < 0 {
 				dropRaw[l] = true
 			}
 		}
+		if bundle < 0 { // one error member on the figure's strip
+			var pts []Point
+			for _, l := range comp {
+				pts = append(pts, raw[l].a, raw[l].b)
+			}
+			figures = append(figures, figure{pts, pos[0], what})
+		}
 	}
 	if len(dropRaw) == 0 {
 		return
 	}
+	defer func() {
+		for _, f := range figures {
+			if !g.addBadOutline(f.pts, f.pos, f.msg) {
+				g.plan.Issues.Add(f.pos, CodeNotRectangle, dxfimport.SevError,
+					"joist outline: %s; not checked: draw the member as a rectangle or as its centre line", f.msg)
+			}
+		}
+	}()
 	drop := make([]bool, len(g.joists))
 	for i := range g.joists {
 		if r := rawIdx(i); r >= 0 && dropRaw[r] {

@@ -323,10 +323,18 @@ func (g *grouper) halfWidthIn(i int) float64 {
 // check has no built-up section yet, and reports outlines that are not
 // rectangles. It runs after the lumber is assigned.
 func (g *grouper) finishOutlines() {
+	p := g.plan
+	if g.badPos != nil {
+		for k := range p.Members {
+			m := &p.Members[k]
+			if msg, ok := g.badPos[m.Pos]; ok {
+				g.memberError(m, CodeNotRectangle, "%s: %s; not checked: draw it as a rectangle or as its centre line", m.ID, msg)
+			}
+		}
+	}
 	if g.memOl == nil {
 		return
 	}
-	p := g.plan
 	for k := range p.Members {
 		o := g.memOl[k]
 		if o < 0 {
@@ -463,12 +471,53 @@ func (g *grouper) addOutlinePolyline(e dxfimport.Entity, c []Point) {
 		if len(c) == 4 {
 			what = "4 corners that are not all square"
 		}
-		g.plan.Issues.Add(e.Pos, CodeNotRectangle, dxfimport.SevError,
-			"joist outline (%s) is a closed polyline of %s, not a rectangle; not checked: draw the member as a rectangle or as its centre line",
-			entityRef(e.Pos), what)
+		msg := fmt.Sprintf("its outline (%s) is a closed polyline of %s, not a rectangle", entityRef(e.Pos), what)
+		if !g.addBadOutline(c, e.Pos, msg) {
+			g.plan.Issues.Add(e.Pos, CodeNotRectangle, dxfimport.SevError,
+				"joist outline (%s) is a closed polyline of %s, not a rectangle and wider than a member; not checked: draw the member as a rectangle or as its centre line",
+				entityRef(e.Pos), what)
+		}
 		return
 	}
 	for i := range c {
 		g.joists = append(g.joists, segItem{a: c[i], b: c[(i+1)%4], pos: e.Pos})
 	}
+}
+
+// addBadOutline adds an outline that is not a rectangle as an error
+// member on the centre line of the strip it fills along its longest side,
+// so that it still counts as its neighbours' neighbour (DOMAIN.md: the
+// geometry is there even if the member is in error). It returns false,
+// adding nothing, when the strip is wider than a built-up member: that
+// is no joist outline.
+func (g *grouper) addBadOutline(pts []Point, pos dxfimport.Pos, msg string) bool {
+	var u Point
+	long := -1.0
+	for i := range pts {
+		if d := dist(pts[i], pts[(i+1)%len(pts)]); d > long {
+			long, u = d, unit(sub(pts[(i+1)%len(pts)], pts[i]))
+		}
+	}
+	n := rot90(u)
+	a0, a1, c0, c1 := math.Inf(1), math.Inf(-1), math.Inf(1), math.Inf(-1)
+	for _, p := range pts {
+		a0, a1 = math.Min(a0, dot(p, u)), math.Max(a1, dot(p, u))
+		c0, c1 = math.Min(c0, dot(p, n)), math.Max(c1, dot(p, n))
+	}
+	if c1-c0 > maxBuiltUpIn+g.opt.SnapToleranceIn || a1-a0 < 1e-6 {
+		return false
+	}
+	c := (c0 + c1) / 2
+	if g.badPos == nil {
+		g.badPos = map[dxfimport.Pos]string{}
+	}
+	g.badPos[pos] = msg
+	g.joists = append(g.joists, segItem{a: add(scale(u, a0), scale(n, c)), b: add(scale(u, a1), scale(n, c)), pos: pos})
+	if g.jol != nil {
+		g.jol = append(g.jol, -1)
+	}
+	if g.rawOf != nil {
+		g.rawOf = append(g.rawOf, -1)
+	}
+	return true
 }
