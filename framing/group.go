@@ -95,8 +95,8 @@ type grouper struct {
 	segMem    []int32   // per joist item: its member, -1 when dropped
 	pieces    []drawnPiece
 	badPos    map[dxfimport.Pos]string // joist items standing for outlines that are not rectangles: why
-	arcs      []dxfimport.Pos // curved entities skipped on support, blocking and label layers
-	bulged    int             // of which polylines with arc segments
+	arcs      []dxfimport.Pos          // curved entities skipped on support, blocking and label layers
+	bulged    int                      // of which polylines with arc segments
 }
 
 type dirGroup struct {
