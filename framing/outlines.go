@@ -30,11 +30,11 @@ func (g *grouper) capMaxLenIn() float64 { return 2*maxBuiltUpIn + 2*g.opt.SnapTo
 // outline is one member drawn as its outline: parallel lines a lumber
 // thickness apart, with or without end caps.
 type outline struct {
-	widthIn float64 // between the outermost sides, in
-	seams   int     // interior lines splitting it into plies
-	lines   int     // lines drawn for it, caps included
-	edges   [2]dxfimport.Pos
-	err     string // why it is not a usable member, "" when it is
+	widthIn float64  // between the outermost sides, in
+	seams   int      // interior lines splitting it into plies
+	lines   int      // lines drawn for it, caps included
+	edges   [2]int32 // the outermost sides, as lines of rawJoists
+	err     string   // why it is not a usable member, "" when it is
 	code    string
 }
 
@@ -82,29 +82,35 @@ func (g *grouper) outlines() {
 		return i
 	}
 	paired := false
-	for i := range js {
+	for x := range idx.keys {
+		i := int(idx.keys[x].id)
 		fi := fr[i]
 		li := fi.a1 - fi.a0
 		// the shorter's midpoint lies inside the longer's extent when they
 		// overlap by half the shorter: the longer finds it
-		idx.query(int32(grpOf[i]), fi.c, fi.a0, fi.a1, func(k *bandKey) {
-			j := int(k.id)
-			if j == i {
-				return
+		for _, r := range idx.nearRuns(x) {
+			if r < 0 {
+				continue
 			}
-			fj := fr[j]
-			gap := math.Abs(fj.c - fi.c)
-			shorter := math.Min(li, fj.a1-fj.a0)
-			ov := math.Min(fi.a1, fj.a1) - math.Max(fi.a0, fj.a0)
-			if gap > maxGap || ov <= 0 || ov < 0.5*shorter || shorter < math.Max(minEdgeIn, 4*gap) {
-				return
+			for y, end := idx.from(r, fi.a0), int(idx.runs[r+1]); y < end && idx.keys[y].a <= fi.a1; y++ {
+				j := int(idx.keys[y].id)
+				if j == i {
+					continue
+				}
+				fj := fr[j]
+				gap := math.Abs(fj.c - fi.c)
+				shorter := math.Min(li, fj.a1-fj.a0)
+				ov := math.Min(fi.a1, fj.a1) - math.Max(fi.a0, fj.a0)
+				if gap > maxGap || ov <= 0 || ov < 0.5*shorter || shorter < math.Max(minEdgeIn, 4*gap) {
+					continue
+				}
+				a, b := find(int32(i)), find(int32(j))
+				if a != b {
+					parent[max(a, b)] = min(a, b)
+					paired = true
+				}
 			}
-			a, b := find(int32(i)), find(int32(j))
-			if a != b {
-				parent[max(a, b)] = min(a, b)
-				paired = true
-			}
-		})
+		}
 	}
 	if !paired {
 		return
@@ -136,7 +142,14 @@ func (g *grouper) outlines() {
 		halfWidth  float64
 		start, end int32 // range of flat
 	}
-	var bundles []bundle
+	nb := 0
+	for r := 0; r < n; r++ {
+		if count[r+1]-count[r] >= 2 {
+			nb++
+		}
+	}
+	bundles := make([]bundle, 0, nb)
+	g.ols = slices.Grow(g.ols, nb)
 	var cs []float64
 	tol := g.opt.SnapToleranceIn
 	for r := int32(0); r < int32(n); r++ {
@@ -160,7 +173,7 @@ func (g *grouper) outlines() {
 			continue
 		}
 		gr := groups[grpOf[r]]
-		o := outline{widthIn: W, lines: len(lines), edges: [2]dxfimport.Pos{js[lmin].pos, js[lmax].pos}}
+		o := outline{widthIn: W, lines: len(lines), edges: [2]int32{lmin, lmax}}
 		// sides not parallel: the width at one end against the other
 		acrossAt := func(l int32, a float64) float64 {
 			p, q := js[l].a, js[l].b
@@ -207,12 +220,11 @@ func (g *grouper) outlines() {
 		return
 	}
 	// end caps: a short line whose ends touch the corners of one outline
-	// at one of its ends, going across it
-	ends := make([]bandKey, 0, 2*len(bundles))
+	// at one of its ends, going across it. Bundle ends and candidate caps
+	// (in the frame of each group with bundles) go in one index; each cap
+	// looks at the ends near it.
 	hasGrp := map[int32]bool{}
-	for b, bu := range bundles {
-		ends = append(ends, bandKey{grp: bu.grp, a: bu.a0, c: bu.c, id: int32(b)},
-			bandKey{grp: bu.grp, a: bu.a1, c: bu.c, id: int32(b)})
+	for _, bu := range bundles {
 		hasGrp[bu.grp] = true
 	}
 	grps := make([]int32, 0, len(hasGrp))
@@ -220,9 +232,25 @@ func (g *grouper) outlines() {
 		grps = append(grps, gi)
 	}
 	slices.Sort(grps)
-	endIdx := newBandIndex(maxGap, ends)
-	isCap := make([]bool, n)
 	capMax := g.capMaxLenIn()
+	ck := make([]bandKey, 0, 2*len(bundles)+n/2)
+	for b, bu := range bundles {
+		ck = append(ck, bandKey{grp: bu.grp, a: bu.a0, c: bu.c, id: int32(b)},
+			bandKey{grp: bu.grp, a: bu.a1, c: bu.c, id: int32(b)})
+	}
+	for i := range js {
+		if bundleOf[i] >= 0 || dist(js[i].a, js[i].b) > capMax {
+			continue
+		}
+		m := mid(js[i].a, js[i].b)
+		us := unit(sub(js[i].b, js[i].a))
+		for _, gi := range grps {
+			if gr := groups[gi]; math.Abs(cross(us, gr.u)) >= 0.5 { // across the sides, within 60 degrees of square
+				ck = append(ck, bandKey{grp: gi, a: dot(m, gr.u), c: dot(m, gr.n), id: -int32(i) - 1})
+			}
+		}
+	}
+	isCap := make([]bool, n)
 	corner := func(p Point, lines []int32) int32 { // the line with the nearest corner within tol
 		best, bl := tol, int32(-1)
 		for _, l := range lines {
@@ -232,39 +260,34 @@ func (g *grouper) outlines() {
 		}
 		return bl
 	}
-	for i := range js {
-		if bundleOf[i] >= 0 {
+	cidx := newBandIndex(maxGap, ck)
+	for x := range cidx.keys {
+		k := cidx.keys[x]
+		if k.id >= 0 || isCap[-k.id-1] {
 			continue
 		}
-		L := dist(js[i].a, js[i].b)
-		if L > capMax {
-			continue
-		}
-		m := mid(js[i].a, js[i].b)
-		us := unit(sub(js[i].b, js[i].a))
-		for _, gi := range grps {
-			gr := groups[gi]
-			if math.Abs(cross(us, gr.u)) < 0.5 { // within 30 degrees of the sides: not across them
+		i := int(-k.id - 1)
+		reach := dist(js[i].a, js[i].b)/2 + tol
+		nr := groups[k.grp].n
+	runs:
+		for _, r := range cidx.nearRuns(x) {
+			if r < 0 {
 				continue
 			}
-			am := dot(m, gr.u)
-			found := int32(-1)
-			endIdx.query(gi, dot(m, gr.n), am-L/2-tol, am+L/2+tol, func(k *bandKey) {
-				if found >= 0 {
-					return
+			for y, end := cidx.from(r, k.a-reach), int(cidx.runs[r+1]); y < end && cidx.keys[y].a <= k.a+reach; y++ {
+				b := cidx.keys[y].id
+				if b < 0 {
+					continue
 				}
-				bu := &bundles[k.id]
+				bu := &bundles[b]
 				lines := flat[bu.start:bu.end]
 				la, lb := corner(js[i].a, lines), corner(js[i].b, lines)
-				if la < 0 || lb < 0 || la == lb || math.Abs(dot(sub(js[i].b, js[i].a), gr.n)) < 0.5*minThickIn {
-					return
+				if la < 0 || lb < 0 || la == lb || math.Abs(dot(sub(js[i].b, js[i].a), nr)) < 0.5*minThickIn {
+					continue
 				}
-				found = k.id
-			})
-			if found >= 0 {
 				isCap[i] = true
-				g.ols[bundleOf[flat[bundles[found].start]]].lines++
-				break
+				g.ols[bundleOf[flat[bu.start]]].lines++
+				break runs
 			}
 		}
 	}
@@ -344,9 +367,10 @@ func (g *grouper) finishOutlines() {
 		ol := &g.ols[o]
 		m.DrawnThicknessIn = ol.widthIn
 		m.Plies = 1
-		drawn := entityRef(ol.edges[0])
-		if ol.edges[1] != ol.edges[0] {
-			drawn += " and " + entityRef(ol.edges[1])
+		e0, e1 := g.rawJoists[ol.edges[0]].pos, g.rawJoists[ol.edges[1]].pos
+		drawn := entityRef(e0)
+		if e1 != e0 {
+			drawn += " and " + entityRef(e1)
 		}
 		if ol.err != "" {
 			g.memberError(m, ol.code, "%s: %s; not checked: draw it as a rectangle or as its centre line", m.ID, ol.err)
