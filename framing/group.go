@@ -433,7 +433,7 @@ func directionGroups(js []segItem, tolDeg float64) ([]int, []dirGroup) {
 		}
 		ang[i], idx[i] = a, i
 	}
-	sort.Slice(idx, func(x, y int) bool { return ang[idx[x]] < ang[idx[y]] })
+	slices.SortFunc(idx, func(x, y int) int { return cmp.Compare(ang[x], ang[y]) })
 	grp := make([]int, n)
 	ng := 0
 	for k, i := range idx {
