@@ -154,3 +154,49 @@ func TestArcsOnSupportLayersReportedOnce(t *testing.T) {
 func arcEntity(p *plan, x float64) dxfimport.Entity {
 	return dxfimport.Entity{Kind: dxfimport.KindArc, Pos: p.pos("WALL"), Points: []Point{{X: x, Y: 0}}, RadiusIn: 30, StartDeg: 0, EndDeg: 90}
 }
+
+func TestBlockingDrawnAsOutlinesBetweenOutlines(t *testing.T) {
+	// Joists drawn as outlines at x = 0, 16, 32, 48 between walls at
+	// y = 0 and 144; blocking drawn as small rectangles (1.5 x 14.5 in)
+	// between them at y = 71.25..72.75, and as single lines staggered at
+	// y = 100 / 103. No blocking piece is a member; each member is braced
+	// at 72 and at the staggered pieces it touches; 3 + 3 pieces drawn,
+	// each 16 - 1.5 = 14.5 in clear (NDS 2018 Supplement Table 1B).
+	p := newPlan().walls(-10, 100, 0, 144)
+	for _, x := range []float64{0, 16, 32, 48} {
+		p.rect(x, 0, 144, 0.75)
+	}
+	for i, x := range []float64{0, 16, 32} {
+		p.line("JOIST", x+0.75, 71.25, x+15.25, 71.25).line("JOIST", x+15.25, 71.25, x+15.25, 72.75).
+			line("JOIST", x+15.25, 72.75, x+0.75, 72.75).line("JOIST", x+0.75, 72.75, x+0.75, 71.25)
+		y := 100 + 3*float64(i%2)
+		p.line("JOIST", x+0.75, y, x+15.25, y)
+	}
+	pl := p.group(DefaultOptions())
+	if len(pl.Members) != 4 || len(pl.DrawnBlocking) != 6 {
+		t.Fatalf("members %d, drawn blocking %d; want 4 and 6 (issues %v)", len(pl.Members), len(pl.DrawnBlocking), pl.Issues)
+	}
+	if c := issueCodes(pl.Issues); c[CodeThickness] != 0 || c[CodeNotRectangle] != 0 {
+		t.Errorf("issues %v", pl.Issues)
+	}
+	for _, w := range []struct {
+		x  float64
+		at []float64
+	}{{0, []float64{72, 100}}, {16, []float64{72, 100, 103}}, {32, []float64{72, 100, 103}}, {48, []float64{72, 100}}} {
+		m := member(t, pl, w.x, 72)
+		if len(m.ExistingBlockingAtIn) != len(w.at) {
+			t.Errorf("x=%g: blocking at %v, want %v", w.x, m.ExistingBlockingAtIn, w.at)
+			continue
+		}
+		for i := range w.at {
+			checkNear(t, "blocking position", m.ExistingBlockingAtIn[i], w.at[i], 1e-9)
+		}
+	}
+	to := BuildTakeoff(pl, nil)
+	if to.ExistingBlockingPieces != 6 || len(to.ExistingBlocking) != 1 || !near(to.ExistingBlocking[0].TotalLengthIn, 6*14.5, 1e-9) {
+		t.Errorf("takeoff existing blocking %+v", to.ExistingBlocking)
+	}
+	if to.JoistCount != 4 {
+		t.Errorf("takeoff joists %d, want 4", to.JoistCount)
+	}
+}
