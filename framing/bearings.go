@@ -16,8 +16,10 @@ import (
 const minBearingAngleDeg = 10
 
 // minSupportFrac: a support line shorter than this fraction of a member's
-// length (a tick, the end of a wall drawn across it, a door leaf) is not
-// a bearing of that member (common practice, no source).
+// length (a tick, the end of a wall drawn across it) is not a bearing of
+// that member, unless it is longer than the thickest wall plus the snap
+// tolerance (a wall drawn in pieces between openings still bears a long
+// continuous member) (common practice, no source).
 const minSupportFrac = 0.1
 
 // drawnTwiceIn: support lines met closer than this along a member are
@@ -100,10 +102,11 @@ func (g *grouper) supportHits(k int, minSin float64, hits []hit) []hit {
 	u := g.plan.dirs[k]
 	tol, wall := g.opt.SnapToleranceIn, g.opt.MaxWallThicknessIn
 	L := m.LengthIn
+	minLen := math.Min(minSupportFrac*L, wall+tol)
 	g.supIdx.query(m.Start, m.End, tol+wall, func(s int) {
 		sg := &g.sups[s]
 		t, _, sin, ok := segParams(m.Start, u, sg.a, sg.b)
-		if !ok || sin < minSin || dist(sg.a, sg.b) < minSupportFrac*L {
+		if !ok || sin < minSin || dist(sg.a, sg.b) < minLen {
 			return
 		}
 		if distPointSeg(lerp(m.Start, u, t), sg.a, sg.b) > tol {

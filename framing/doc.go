@@ -74,8 +74,9 @@
 //
 // A support line is a bearing of a joist when the joist crosses it, or an
 // end stops within SnapToleranceIn of it; lines within 10 degrees of the
-// joist's direction, and lines shorter than a tenth of the joist (ticks,
-// a wall's end, a door leaf), are not bearings. Parallel support lines of
+// joist's direction, and lines shorter than a tenth of the joist and
+// than MaxWallThicknessIn + SnapToleranceIn (ticks, a wall's end), are
+// not bearings. Parallel support lines of
 // the same kind met by the joist within MaxWallThicknessIn of the first of
 // them (a double-line wall, the plies of a beam, plates and sheathing:
 // any number) are one bearing at the middle of the group whose length is
