@@ -15,6 +15,18 @@ import (
 // (common practice, no source).
 const minBearingAngleDeg = 10
 
+// minSupportFrac: a support line shorter than this fraction of a member's
+// length (a tick, the end of a wall drawn across it) is not a bearing of
+// that member, unless it is longer than the thickest wall plus the snap
+// tolerance (a wall drawn in pieces between openings still bears a long
+// continuous member) (common practice, no source).
+const minSupportFrac = 0.1
+
+// drawnTwiceIn: support lines met closer than this along a member are
+// one line drawn twice or in pieces, whatever their kinds (sheathing
+// drawn beside a plate is 3/8 in or more from it).
+const drawnTwiceIn = 0.25
+
 // sameLineIn: two support lines met closer than this along a joist are one
 // line drawn twice or in pieces, not a double-line wall.
 const sameLineIn = 0.5
@@ -39,6 +51,7 @@ func (g *grouper) findBearings() {
 		}
 	}
 	merged := map[[2]int]bool{}
+	g.inGroup = make([]bool, len(g.sups))
 	minSin := math.Sin(minBearingAngleDeg * math.Pi / 180)
 	var hits []hit
 	for k := range p.Members {
@@ -47,7 +60,7 @@ func (g *grouper) findBearings() {
 		hits = g.supportHits(k, minSin, hits[:0])
 		slices.SortFunc(g.carried, func(a, b hit) int { return cmp.Compare(a.t, b.t) })
 		g.carriedBeams(k)
-		m.Bearings, g.bdirs[k] = g.bearingsFrom(hits, merged)
+		m.Bearings, g.bdirs[k] = g.bearingsFrom(hits, merged, m.LengthIn)
 		if len(m.Bearings) < 2 {
 			// the lines it does bear on are not "the nearest support"
 			own := map[int]bool{}
@@ -89,10 +102,11 @@ func (g *grouper) supportHits(k int, minSin float64, hits []hit) []hit {
 	u := g.plan.dirs[k]
 	tol, wall := g.opt.SnapToleranceIn, g.opt.MaxWallThicknessIn
 	L := m.LengthIn
+	minLen := math.Min(minSupportFrac*L, wall+tol)
 	g.supIdx.query(m.Start, m.End, tol+wall, func(s int) {
 		sg := &g.sups[s]
 		t, _, sin, ok := segParams(m.Start, u, sg.a, sg.b)
-		if !ok || sin < minSin {
+		if !ok || sin < minSin || dist(sg.a, sg.b) < minLen {
 			return
 		}
 		if distPointSeg(lerp(m.Start, u, t), sg.a, sg.b) > tol {
@@ -169,14 +183,19 @@ func (g *grouper) parallelSupports(a, b int) bool {
 	return c <= math.Sin(g.opt.AngleTolDeg*math.Pi/180)+1e-12
 }
 
-// bearingsFrom turns sorted hits into bearings, merging double-line walls,
-// and returns each bearing's support direction for run matching.
-func (g *grouper) bearingsFrom(hits []hit, merged map[[2]int]bool) ([]Bearing, []Point) {
+// bearingsFrom turns sorted hits into bearings and returns each
+// bearing's support direction for run matching. Parallel support lines of
+// one kind that the member meets within MaxWallThicknessIn of the first
+// of them (plates, plies, sheathing: any number) are one bearing at the
+// middle of the group, as long as the group is wide; where the member's
+// end stops inside the group, the lines just past that end belong to it
+// too, and the bearing length stops at the end. L is the member's length.
+func (g *grouper) bearingsFrom(hits []hit, merged map[[2]int]bool, L float64) ([]Bearing, []Point) {
 	direct, outer := g.direct[:0], g.outer[:0]
 	defer func() { g.direct, g.outer = direct, outer }() // keep the buffers
 	for _, h := range hits {
 		if h.direct {
-			if n := len(direct); n > 0 && (h.t-direct[n-1].t)*h.sin < sameLineIn {
+			if n := len(direct); n > 0 && (h.t-direct[n-1].t)*h.sin < drawnTwiceIn {
 				continue // same line drawn twice or in pieces
 			}
 			direct = append(direct, h)
@@ -188,53 +207,68 @@ func (g *grouper) bearingsFrom(hits []hit, merged map[[2]int]bool) ([]Bearing, [
 		return nil, nil
 	}
 	wall := g.opt.MaxWallThicknessIn
-	pair := func(a, b hit) bool {
-		sep := math.Abs(b.t-a.t) * a.sin
-		return sep >= sameLineIn && sep <= wall+1e-9 && g.parallelSupports(a.sup, b.sup)
+	fits := func(a, b hit) bool { // b is in the group whose far line is a
+		return math.Abs(b.t-a.t)*a.sin <= wall+1e-9 && g.parallelSupports(a.sup, b.sup)
 	}
 	bs := make([]Bearing, 0, len(direct))
 	dirs := make([]Point, 0, len(direct))
-	single := func(h hit) {
-		sp := g.opt.Supports[g.sups[h.sup].spec]
-		bs = append(bs, Bearing{AtIn: h.t, LengthIn: sp.BearingIn, Kind: sp.Kind, Pos: g.sups[h.sup].pos})
-		dirs = append(dirs, unit(sub(g.sups[h.sup].b, g.sups[h.sup].a)))
-	}
-	double := func(a, b hit) {
-		if a.t > b.t {
-			a, b = b, a
+	var grp []hit
+	for i := 0; i < len(direct); {
+		j := i + 1
+		for j < len(direct) && fits(direct[i], direct[j]) {
+			j++
 		}
-		sp := g.opt.Supports[g.sups[a.sup].spec]
-		bs = append(bs, Bearing{AtIn: (a.t + b.t) / 2, LengthIn: (b.t - a.t) * a.sin, Kind: sp.Kind, Pos: g.sups[a.sup].pos})
-		lo, hi := min(a.sup, b.sup), max(a.sup, b.sup)
-		merged[[2]int{lo, hi}] = true
-		dirs = append(dirs, unit(sub(g.sups[a.sup].b, g.sups[a.sup].a)))
-	}
-	// an end stopping inside a double-line wall: pair the outermost direct
-	// line with the nearest outer line beyond that end
-	var startOuter, endOuter *hit
-	for i := range outer {
-		h := &outer[i]
-		if h.t < 0 && pair(*h, direct[0]) {
-			startOuter = h // last one wins: nearest the start
+		grp = append(grp[:0], direct[i:j]...)
+		if i == 0 { // lines before the start, nearest first
+			for x := len(outer) - 1; x >= 0; x-- {
+				if h := outer[x]; h.t < 0 && h.t < grp[0].t {
+					if !fits(grp[len(grp)-1], h) || !g.parallelSupports(grp[0].sup, h.sup) {
+						break
+					}
+					grp = append([]hit{h}, grp...)
+				}
+			}
 		}
-		if h.t > 0 && endOuter == nil && pair(direct[len(direct)-1], *h) {
-			endOuter = h
+		if j == len(direct) { // lines past the end, nearest first
+			for _, h := range outer {
+				if h.t > L && h.t > grp[len(grp)-1].t {
+					if !fits(grp[0], h) || !g.parallelSupports(grp[0].sup, h.sup) {
+						break
+					}
+					grp = append(grp, h)
+				}
+			}
 		}
-	}
-	for i := 0; i < len(direct); i++ {
-		switch {
-		case i == 0 && startOuter != nil:
-			double(*startOuter, direct[0])
-		case i == len(direct)-1 && endOuter != nil && !(i == 0 && startOuter != nil):
-			double(direct[i], *endOuter)
-		case i+1 < len(direct) && pair(direct[i], direct[i+1]):
-			double(direct[i], direct[i+1])
-			i++
-		default:
-			single(direct[i])
-		}
+		b, d := g.groupBearing(grp, merged, L)
+		bs, dirs = append(bs, b), append(dirs, d)
+		i = j
 	}
 	return bs, dirs
+}
+
+// groupBearing makes one bearing of a group of parallel support lines
+// met by a member of length L, sorted along it.
+func (g *grouper) groupBearing(grp []hit, merged map[[2]int]bool, L float64) (Bearing, Point) {
+	first, last := grp[0], grp[len(grp)-1]
+	s0 := &g.sups[first.sup]
+	sp := g.opt.Supports[s0.spec]
+	dir := unit(sub(s0.b, s0.a))
+	width := (last.t - first.t) * first.sin
+	if len(grp) == 1 || width < sameLineIn {
+		return Bearing{AtIn: first.t, LengthIn: sp.BearingIn, Kind: sp.Kind, Pos: s0.pos}, dir
+	}
+	lb := width
+	if first.t < 0 { // the start stops inside the group
+		lb = math.Min(lb, last.t*first.sin)
+	}
+	if last.t > L {
+		lb = math.Min(lb, (L-first.t)*first.sin)
+	}
+	merged[[2]int{min(first.sup, last.sup), max(first.sup, last.sup)}] = true
+	for _, h := range grp[1 : len(grp)-1] {
+		g.inGroup[h.sup] = true
+	}
+	return Bearing{AtIn: (first.t + last.t) / 2, LengthIn: lb, Kind: sp.Kind, Pos: s0.pos}, dir
 }
 
 // finishBearings sets the overhangs and hangers of a member with at least
@@ -327,6 +361,9 @@ func (g *grouper) buildSupports(merged map[[2]int]bool) {
 	for pr := range merged {
 		pairs = append(pairs, pr)
 		used[pr[0]], used[pr[1]] = true, true
+	}
+	for i, in := range g.inGroup {
+		used[i] = used[i] || in
 	}
 	sort.Slice(pairs, func(i, j int) bool {
 		if pairs[i][0] != pairs[j][0] {

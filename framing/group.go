@@ -24,9 +24,12 @@ const (
 	CodeCalloutSpacing  = "FRM210" // callout spacing differs from measured by > 1 in
 	CodeCalloutUnused   = "FRM211" // callout that reaches no joist
 	CodeNoNeighbour     = "FRM212" // joist with no parallel neighbour
-	CodeArcSegment      = "FRM213" // arc segment on a support, blocking or label layer: skipped
+	CodeArcSegment      = "FRM213" // arcs on support layers, arc segments of polylines: skipped, reported once
 	CodeBadCoordinate   = "FRM214" // entity with a non-finite or out-of-range coordinate: skipped
 	CodeCarriesBeam     = "FRM215" // flush beam ending on a joist between its bearings: error member
+	CodeNotRectangle    = "FRM216" // joist outline that is not a rectangle: not checked
+	CodeThickness       = "FRM217" // outline's drawn thickness differs from its size's b
+	CodeBuiltUp         = "FRM218" // plies drawn side by side: one built-up member
 )
 
 // maxCoordIn bounds the coordinates framing accepts: 10^9 in is about
@@ -75,11 +78,25 @@ type grouper struct {
 	memIdx *segIndex
 	lblIdx *segIndex
 
-	direct, outer []hit // scratch for bearingsFrom
-	carried       []hit // flush beams framing into the current member
+	direct, outer []hit  // scratch for bearingsFrom
+	inGroup       []bool // per support line: inside a group of three or more, listed on the group's middle
+	carried       []hit  // flush beams framing into the current member
 
 	units  string  // the drawing's units ("mm"), for points in messages
 	toInch float64 // drawing units to inches
+
+	// outlines (outlines.go): set only when the plan has some
+	ols       []outline
+	jol       []int32   // per joist item: index into ols, -1 for a centre line
+	rawJoists []segItem // the joist lines as drawn, before outlines became centre lines
+	rawOf     []int32   // per joist item: its raw line, -1 for an outline's centre line
+	rawBundle []int32   // per raw line: index into ols, -1 when none
+	memOl     []int32   // per member: index into ols, -1
+	segMem    []int32   // per joist item: its member, -1 when dropped
+	pieces    []drawnPiece
+	badPos    map[dxfimport.Pos]string // joist items standing for outlines that are not rectangles: why
+	arcs      []dxfimport.Pos          // curved entities skipped on support, blocking and label layers
+	bulged    int                      // of which polylines with arc segments
 }
 
 type dirGroup struct {
@@ -95,12 +112,17 @@ func Group(d *dxfimport.Drawing, opt Options) *Plan {
 	}
 	g.units, g.toInch = d.Units, d.ToInch
 	g.classify(d)
+	g.outlines()
+	g.brokenOutlines()
+	g.joistBlocking()
 	g.makeMembers()
 	g.findBearings()
 	g.neighbours()
 	g.makeRuns()
 	g.assignZones()
 	g.assignLumber()
+	g.finishOutlines()
+	g.drawnBlocking()
 	g.existingBlocking()
 	return g.plan
 }
@@ -152,6 +174,9 @@ func (g *grouper) classify(d *dxfimport.Drawing) {
 			used = g.addJoist(e)
 		case roleSupport:
 			used = g.addSegments(e, spec, &g.sups)
+			if e.Kind == dxfimport.KindArc || e.Kind == dxfimport.KindCircle {
+				g.arcs = append(g.arcs, e.Pos)
+			}
 		case roleBlocking:
 			used = g.addSegments(e, -1, &g.blocking)
 		case roleLabel:
@@ -167,6 +192,27 @@ func (g *grouper) classify(d *dxfimport.Drawing) {
 			g.plan.Ignored[fmt.Sprintf("%s (%s)", layer, e.Kind)]++
 		}
 	}
+	g.reportArcs()
+}
+
+// reportArcs reports the curved entities left out of supports (arcs and
+// circles on support layers: door swings, or a curved wall) and the arc
+// segments of support, blocking and label polylines, once for all of
+// them, with a count and the first three. A member that bears on one is
+// an error member of its own (an end reaching no support). Arc segments
+// of polylines make it a warning; arcs and circles alone, an info.
+func (g *grouper) reportArcs() {
+	if len(g.arcs) == 0 {
+		return
+	}
+	sev := dxfimport.SevInfo
+	if g.bulged > 0 {
+		sev = dxfimport.SevWarning
+	}
+	g.plan.Issues.Add(g.arcs[0], CodeArcSegment, sev,
+		"%d curved entities on support, blocking or label layers left out (%d arcs or circles, %d polylines with arc segments; %s): "+
+			"only straight lines are supports; a member bearing on a curve is reported as reaching no support",
+		len(g.arcs), len(g.arcs)-g.bulged, g.bulged, handles(g.arcs, 3))
 }
 
 func finitePoints(pts []Point) bool {
@@ -201,6 +247,10 @@ func (g *grouper) addJoist(e dxfimport.Entity) bool {
 				g.warn(e.Pos, CodeBentJoist, "joist polyline has an arc segment; skipped")
 				return true
 			}
+		}
+		if c, closed := closedCorners(e.Points, e.Closed, g.opt.SnapToleranceIn); closed {
+			g.addOutlinePolyline(e, c)
+			return true
 		}
 		var ok bool
 		a, b, ok = straightPolyline(e.Points, e.Closed)
@@ -265,7 +315,10 @@ func (g *grouper) addSegments(e dxfimport.Entity, spec int, dst *[]segItem) bool
 		for i := 0; i < segs; i++ {
 			a, b := e.Points[i], e.Points[(i+1)%n]
 			if i < len(e.Bulges) && e.Bulges[i] != 0 {
-				g.warn(e.Pos, CodeArcSegment, "arc segment %d of the polyline skipped: only straight segments are used", i+1)
+				if n := len(g.arcs); n == 0 || g.arcs[n-1] != e.Pos {
+					g.arcs = append(g.arcs, e.Pos)
+					g.bulged++
+				}
 				continue
 			}
 			if dist(a, b) > 1e-6 {
@@ -336,9 +389,24 @@ func (g *grouper) makeMembers() {
 	g.a0 = make([]float64, n)
 	g.a1 = make([]float64, n)
 	g.bdirs = make([][]Point, n)
+	if g.jol != nil {
+		g.memOl = make([]int32, n)
+	}
+	if len(g.pieces) > 0 {
+		g.segMem = make([]int32, len(js))
+		for i := range g.segMem {
+			g.segMem[i] = -1
+		}
+	}
 	for k, i := range order {
 		j := js[i]
 		gr := groups[grpOf[i]]
+		if g.memOl != nil {
+			g.memOl[k] = g.jol[i]
+		}
+		if g.segMem != nil {
+			g.segMem[i] = int32(k)
+		}
 		p.Members[k] = Member{
 			ID: fmt.Sprintf("M%d", k+1), Pos: j.pos, Layer: j.pos.Layer,
 			Start: j.a, End: j.b, LengthIn: dist(j.a, j.b),
@@ -365,7 +433,7 @@ func directionGroups(js []segItem, tolDeg float64) ([]int, []dirGroup) {
 		}
 		ang[i], idx[i] = a, i
 	}
-	sort.Slice(idx, func(x, y int) bool { return ang[idx[x]] < ang[idx[y]] })
+	slices.SortFunc(idx, func(x, y int) int { return cmp.Compare(ang[x], ang[y]) })
 	grp := make([]int, n)
 	ng := 0
 	for k, i := range idx {

@@ -42,9 +42,15 @@ type Takeoff struct {
 	Joists   []JoistLine    // by size, species, grade, order length
 	Blocking []BlockingLine // by size
 	Hangers  []HangerLine   // by joist size
+	// ExistingBlocking is the blocking drawn on joist layers
+	// (Plan.DrawnBlocking), by size: in the drawing already, so not part
+	// of Blocking (the rows to add); its board feet are in TotalBoardFeet.
+	ExistingBlocking []BlockingLine
 	// Totals
 	JoistCount, BlockingPieces, HangerCount           int
 	JoistBoardFeet, BlockingBoardFeet, TotalBoardFeet float64
+	ExistingBlockingPieces                            int
+	ExistingBlockingBoardFeet                         float64
 }
 
 // OrderLengthFt returns the order length of a member of lengthIn: rounded
@@ -78,15 +84,18 @@ func BuildTakeoff(p *Plan, rows []BlockingRow) Takeoff {
 	hangers := map[string]int{}
 	for k := range p.Members {
 		m := &p.Members[k]
-		key := jk{m.Size, m.Species, m.Grade, OrderLengthFt(m.SlopedLengthIn())}
+		// a built-up member is its plies, ordered as single pieces
+		n, ply := splitPlies(m.Size)
+		pieces := max(1, n, m.Plies)
+		key := jk{ply, m.Species, m.Grade, OrderLengthFt(m.SlopedLengthIn())}
 		l := joists[key]
 		if l == nil {
-			l = &JoistLine{Size: m.Size, Species: m.Species, Grade: m.Grade, OrderLengthFt: key.ft,
+			l = &JoistLine{Size: ply, Species: m.Species, Grade: m.Grade, OrderLengthFt: key.ft,
 				SpecialOrder: key.ft > specialOrderFt}
 			joists[key] = l
 		}
-		l.Count++
-		l.BoardFeet += boardFeet(m.Size, float64(key.ft))
+		l.Count += pieces
+		l.BoardFeet += float64(pieces) * boardFeet(ply, float64(key.ft))
 		for _, h := range []bool{m.HangersStart, m.HangersEnd} {
 			if h {
 				hangers[m.Size]++
@@ -141,8 +150,48 @@ func BuildTakeoff(p *Plan, rows []BlockingRow) Takeoff {
 		t.HangerCount += n
 	}
 	sort.Slice(t.Hangers, func(i, j int) bool { return sizeLess(t.Hangers[i].Size, t.Hangers[j].Size) })
-	t.TotalBoardFeet = t.JoistBoardFeet + t.BlockingBoardFeet
+	t.ExistingBlocking = existingBlocking(p)
+	for _, l := range t.ExistingBlocking {
+		t.ExistingBlockingPieces += l.Pieces
+		t.ExistingBlockingBoardFeet += l.BoardFeet
+	}
+	t.TotalBoardFeet = t.JoistBoardFeet + t.BlockingBoardFeet + t.ExistingBlockingBoardFeet
 	return t
+}
+
+// existingBlocking counts the blocking pieces drawn on joist layers by
+// the size of the first member each joins; a piece's length is the clear
+// space between the two members' faces (centre to centre less the
+// dressed thickness, NDS 2018 Supplement Table 1B).
+func existingBlocking(p *Plan) []BlockingLine {
+	blocks := map[string]*BlockingLine{}
+	for _, d := range p.DrawnBlocking {
+		size := ""
+		for _, k := range d.Members {
+			if k >= 0 && k < len(p.Members) {
+				size = p.Members[k].Size
+				break
+			}
+		}
+		l := blocks[size]
+		if l == nil {
+			l = &BlockingLine{Size: size}
+			blocks[size] = l
+		}
+		clear := dist(d.From, d.To)
+		if bIn, _, err := DressedSize(size); err == nil {
+			clear = math.Max(0, clear-bIn)
+		}
+		l.Pieces++
+		l.TotalLengthIn += clear
+		l.BoardFeet += boardFeet(size, clear/12)
+	}
+	var out []BlockingLine
+	for _, l := range blocks {
+		out = append(out, *l)
+	}
+	sort.Slice(out, func(i, j int) bool { return sizeLess(out[i].Size, out[j].Size) })
+	return out
 }
 
 // sizeLess orders nominal sizes by thickness, then depth ("2x8" before

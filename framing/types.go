@@ -9,7 +9,11 @@ type Plan struct {
 	Runs     []Run         // adjacent parallel joists sharing their bearings
 	Supports []Support     // support lines after double-wall merging
 	Zones    []ZoneOutline // load-zone outlines with their names
-	Issues   dxfimport.IssueList
+	// DrawnBlocking are the blocking pieces drawn on joist layers: they
+	// brace the members they join and are counted in the takeoff as
+	// existing blocking; they are not members.
+	DrawnBlocking []DrawnBlock
+	Issues        dxfimport.IssueList
 	// Ignored counts entities framing did not use, by layer: every entity
 	// on a layer with no role, and entities of a kind the layer's role has
 	// no use for (key "LAYER (TEXT)").
@@ -42,6 +46,14 @@ type Member struct {
 	Layer      string
 	Start, End Point // oriented along the member's direction group (see doc.go)
 	LengthIn   float64
+	// DrawnThicknessIn is the width of the member's outline when it is
+	// drawn as one (two parallel lines or a rectangle: Start-End is then
+	// its centre line), 0 when it is drawn as its centre line.
+	DrawnThicknessIn float64
+	// Plies is the number of pieces drawn side by side for a member drawn
+	// as outlines (1 for one outline, 2 or more for a built-up member,
+	// which is an error member for now); 0 for a centre line.
+	Plies int
 
 	Bearings []Bearing // sorted along the member
 	// Cantilever lengths past the first/last bearing centre; 0 when the

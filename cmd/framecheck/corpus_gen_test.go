@@ -456,6 +456,42 @@ var moreBadFiles = map[string]func() string{
 	// 700 bytes that expand to 10^10 lines: block B is block A (one line)
 	// in a 1000 x 1000 array, and model space inserts B 100 x 100 times.
 	// The reader counts before it expands and leaves the insert out.
+	// Joists drawn as outlines that are not rectangles beside the five
+	// good joists: at y = 96 a tapered outline of 4 LINEs (1.5 in wide at
+	// the wall at x = 0, 5 in at x = 144), at y = 112 a closed 5-vertex
+	// LWPOLYLINE with a pointed end, then a good 4-LINE rectangle at
+	// y = 128. The walls run past all of them.
+	"outline-not-rectangle.dxf": func() string {
+		var d dxfText
+		d.header("AC1009", 1)
+		d.section("ENTITIES")
+		d.line("WALL", 0, 0, 0, 144)
+		d.line("WALL", spanIn, 0, spanIn, 144)
+		for i := 1; i <= 5; i++ {
+			d.line("JOIST", 0, float64(i)*spacingIn, spanIn, float64(i)*spacingIn)
+		}
+		d.line("JOIST", 0, 95.25, spanIn, 93.5)
+		d.line("JOIST", spanIn, 93.5, spanIn, 98.5)
+		d.line("JOIST", spanIn, 98.5, 0, 96.75)
+		d.line("JOIST", 0, 96.75, 0, 95.25)
+		d.handle++
+		d.pair(0, "LWPOLYLINE")
+		d.pair(5, fmt.Sprintf("%X", 0x100+d.handle))
+		d.pair(8, "JOIST")
+		d.pair(90, "5")
+		d.pair(70, "1")
+		for _, p := range [][2]float64{{0, 111.25}, {138, 111.25}, {spanIn, 112}, {138, 112.75}, {0, 112.75}} {
+			d.num(10, p[0])
+			d.num(20, p[1])
+		}
+		d.line("JOIST", 0, 127.25, spanIn, 127.25)
+		d.line("JOIST", spanIn, 127.25, spanIn, 128.75)
+		d.line("JOIST", spanIn, 128.75, 0, 128.75)
+		d.line("JOIST", 0, 128.75, 0, 127.25)
+		d.endsec()
+		d.eof()
+		return d.String()
+	},
 	"minsert-bomb.dxf": func() string {
 		var d dxfText
 		d.header("AC1009", 1)

@@ -594,6 +594,19 @@ func TestBadCorpusMessy(t *testing.T) {
 			}
 		}
 	})
+	t.Run("outline not a rectangle", func(t *testing.T) {
+		// The tapered outline (handles 108-10B) and the pointed polyline
+		// (10C) are error members naming their entities; the five joists
+		// and the good rectangle at y = 128 are checked and pass.
+		r := runCorpus(t, "outline-not-rectangle.dxf", "", "")
+		wantCode(t, r, exitFail)
+		wantStderr(t, r, "(handle 108, layer JOIST): error FRM216", "not parallel",
+			"(handle 10C, layer JOIST): error FRM216", "handle 10C) is a closed polyline of 5 corners, not a rectangle")
+		st := statuses(r.results)
+		if st[export.StatusPass] != 6 || st[export.StatusError] != 2 || len(r.results.Members) != 8 {
+			t.Errorf("statuses %v, want 6 pass and 2 error", st)
+		}
+	})
 	t.Run("unknown zone", func(t *testing.T) {
 		// The upper three joists lie in the ATTIC outline; the lower two
 		// take the default zone and are checked.

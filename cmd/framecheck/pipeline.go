@@ -196,8 +196,8 @@ func sizeRuns(plan *framing.Plan, inputs []check.Member, shifts []float64, usabl
 				continue
 			}
 			sec, err := check.ParseSize(o.results[k].Size)
-			if err != nil {
-				continue
+			if err != nil || sec.Plies > 1 {
+				continue // built-up members keep their plies and set no size for the run
 			}
 			if best == "" || sec.NominalDIn > bestSec.NominalDIn ||
 				(sec.NominalDIn == bestSec.NominalDIn && sec.NominalBIn > bestSec.NominalBIn) {
@@ -209,6 +209,9 @@ func sizeRuns(plan *framing.Plan, inputs []check.Member, shifts []float64, usabl
 		}
 		for _, k := range run.Members {
 			if !usable[k] || o.results[k].Size == best {
+				continue
+			}
+			if sec, err := check.ParseSize(inputs[k].Size); err == nil && sec.Plies > 1 {
 				continue
 			}
 			cm := inputs[k]
@@ -249,7 +252,11 @@ func checkAll(inputs []check.Member, shifts []float64, usable []bool, s check.Se
 		go func() {
 			defer wg.Done()
 			for k := range next {
-				if o.sizing != nil {
+				if sec, err := check.ParseSize(inputs[k].Size); o.sizing != nil && err == nil && sec.Plies > 1 {
+					// a built-up member keeps its plies: the candidates are
+					// single sizes, so it is checked as drawn
+					o.results[k] = check.CheckMember(inputs[k], s)
+				} else if o.sizing != nil {
 					sr := check.Size(inputs[k], s, p.Sizing.Candidates, p.Sizing.BlockingPieceWeightBf)
 					o.sizing[k] = &sr
 					o.results[k] = sr.Chosen

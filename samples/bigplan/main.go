@@ -3,13 +3,14 @@
 //
 // Usage:
 //
-//	go run ./samples/bigplan -joists 100000 -o big.dxf [-r12] [-project big.toml]
+//	go run ./samples/bigplan -joists 100000 -o big.dxf [-r12] [-outlines] [-project big.toml]
 //
 // The flags:
 //
 //	-joists N        number of joists (default 100000)
 //	-o FILE          DXF file to write (default big.dxf)
 //	-r12             write AC1009 (R12, POLYLINE zone outlines) instead of AC1015 (R2000)
+//	-outlines        draw each joist as a rectangle of four lines 1.5 in wide, not its centre line
 //	-project FILE    also write the project file that goes with the plan
 //
 // The plan is a grid of units of four joist runs each, one load zone per
@@ -46,6 +47,7 @@ func run(args []string, stdout, stderr io.Writer) int {
 	out := fs.String("o", "big.dxf", "DXF file to write")
 	r12 := fs.Bool("r12", false, "write R12 (AC1009) instead of R2000 (AC1015)")
 	project := fs.String("project", "", "also write the project file (TOML) here")
+	outlines := fs.Bool("outlines", false, "draw each joist as a rectangle of four lines 1.5 in wide")
 	if err := fs.Parse(args); err != nil {
 		return 2
 	}
@@ -57,7 +59,7 @@ func run(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "bigplan: -joists %d: want 1 to 10000000\n", *n)
 		return 2
 	}
-	st, err := writeFile(*out, synth.Options{Joists: *n, R12: *r12})
+	st, err := writeFile(*out, synth.Options{Joists: *n, R12: *r12, Outlines: *outlines})
 	if err != nil {
 		fmt.Fprintf(stderr, "bigplan: %v\n", err)
 		return 2

@@ -19,7 +19,10 @@ type drawer interface {
 // drawRun draws one run: its joists, supports, drawn blocking and
 // callout. Joist ends stop 0.5 in inside a wall's outer face, 0.5 in from
 // a flush beam's line and 0.75 in short of a dropped beam's line.
-func drawRun(w drawer, r *run) {
+//
+// With outlines, each joist is drawn as a rectangle of four LINEs 1.5 in
+// wide (a 2x) around that centre line.
+func drawRun(w drawer, r *run, outlines bool) {
 	const ext = extWallIn / 2
 	x1, x2 := r.x0-8, r.x0+r.widthIn()+8
 	y0, s := r.y0, r.spanIn
@@ -57,7 +60,15 @@ func drawRun(w drawer, r *run) {
 		if i == r.short {
 			a += shortByIn
 		}
-		w.Line(layer, x, y0+a, x, y0+to)
+		if !outlines {
+			w.Line(layer, x, y0+a, x, y0+to)
+			continue
+		}
+		const h = 0.75 // half a 2x's dressed thickness (NDS 2018 Supplement Table 1B)
+		w.Line(layer, x-h, y0+a, x-h, y0+to)
+		w.Line(layer, x-h, y0+to, x+h, y0+to)
+		w.Line(layer, x+h, y0+to, x+h, y0+a)
+		w.Line(layer, x+h, y0+a, x-h, y0+a)
 	}
 	if r.callout != "" {
 		ly := y0 + 0.4*s

@@ -43,8 +43,11 @@ const (
 
 // Options says what plan to draw.
 type Options struct {
-	Joists int  // number of joist lines; at least 1
+	Joists int  // number of joists; at least 1
 	R12    bool // AC1009 instead of AC1015
+	// Outlines draws each joist as a rectangle of four LINEs 1.5 in wide
+	// instead of its centre line: the same plan, four times the joist lines.
+	Outlines bool
 }
 
 // Stats is what the plan holds, by construction.
@@ -217,7 +220,7 @@ func draw(o Options) (*dxfw.Writer, Stats) {
 	st := Stats{Runs: len(runs), Units: units, Kinds: map[string]int{}}
 	for ri := range runs {
 		r := &runs[ri]
-		drawRun(w, r)
+		drawRun(w, r, o.Outlines)
 		st.Joists += r.count
 		st.Kinds[kindNames[r.kind]] += r.count
 		if r.short >= 0 {

@@ -6,6 +6,7 @@ import (
 	"testing"
 
 	"framecheck/dxfimport"
+	"framecheck/framing"
 )
 
 func TestBuildIsDeterministic(t *testing.T) {
@@ -71,4 +72,44 @@ func TestLayoutCovers(t *testing.T) {
 	if avg := float64(st.Joists) / float64(st.Runs); avg < 9 || avg > 29 {
 		t.Errorf("%.1f joists per run, want 9 to 29", avg)
 	}
+}
+
+// TestOutlinesSamePlan: the plan drawn as outlines groups into the same
+// members (centre lines, spans, tribs) as the plan drawn as centre lines.
+func TestOutlinesSamePlan(t *testing.T) {
+	read := func(o Options) *framing.Plan {
+		data, _ := Build(o)
+		d, err := dxfimport.Read(bytes.NewReader(data), "big.dxf", dxfimport.Options{Units: "in"})
+		if err != nil {
+			t.Fatal(err)
+		}
+		return framing.Group(d, projectOptions())
+	}
+	a, b := read(Options{Joists: 2000}), read(Options{Joists: 2000, Outlines: true})
+	if len(a.Members) != len(b.Members) || len(a.Members) < 2000 {
+		t.Fatalf("members %d and %d", len(a.Members), len(b.Members))
+	}
+	for k := range a.Members {
+		ma, mb := &a.Members[k], &b.Members[k]
+		sa, sb := ma.Spans(), mb.Spans()
+		if ma.Start != mb.Start || ma.End != mb.End || len(sa) != len(sb) || ma.TribIn != mb.TribIn || ma.Error != mb.Error {
+			t.Fatalf("%s: %v-%v spans %v trib %g error %v; outlines %v-%v spans %v trib %g error %v",
+				ma.ID, ma.Start, ma.End, sa, ma.TribIn, ma.Error, mb.Start, mb.End, sb, mb.TribIn, mb.Error)
+		}
+		if mb.DrawnThicknessIn != 1.5 {
+			t.Fatalf("%s drawn %g in thick", mb.ID, mb.DrawnThicknessIn)
+		}
+	}
+}
+
+// projectOptions are the framing options of Project's [layers] and
+// [[support]] tables.
+func projectOptions() framing.Options {
+	o := framing.DefaultOptions()
+	o.Supports = []framing.SupportSpec{
+		{Layers: []string{"WALL*"}, Kind: framing.KindBearingWall, BearingIn: 3.5},
+		{Layers: []string{"BEAM-FLUSH*"}, Kind: framing.KindFlushBeam, BearingIn: 1.5},
+		{Layers: []string{"BEAM-DROPPED*"}, Kind: framing.KindDroppedBeam, BearingIn: 1.75},
+	}
+	return o
 }
