@@ -186,11 +186,11 @@ func TestCalloutsWrittenByEzdxf(t *testing.T) {
 		size, species, grade string // for a readable callout
 		errWant              string // for one that cannot be read
 	}{
-		{size: "2x8", species: dfl, grade: "No.2"},                          // 2X8 @ 16" O.C. TYP.
-		{size: "2x10", species: dfl, grade: "No.2"},                         // 2x10 DF-L #2 @ 16"
-		{size: "(2) 2x10", species: dfl, grade: "No.2"},                     // (2) 2x10 \P DF-L No.2
-		{size: "2x12", species: "Hem-Fir", grade: "No.1"},                   // {\f..;2x12 HF No.1}\P@ 1'-4" o/c U.N.O.
-		{size: "2x10", species: "Southern Pine", grade: "No.2"},             // 2x10 SP #2 @ 16 OC CJ
+		{size: "2x8", species: dfl, grade: "No.2"},              // 2X8 @ 16" O.C. TYP.
+		{size: "2x10", species: dfl, grade: "No.2"},             // 2x10 DF-L #2 @ 16"
+		{size: "(2) 2x10", species: dfl, grade: "No.2"},         // (2) 2x10 \P DF-L No.2
+		{size: "2x12", species: "Hem-Fir", grade: "No.1"},       // {\f..;2x12 HF No.1}\P@ 1'-4" o/c U.N.O.
+		{size: "2x10", species: "Southern Pine", grade: "No.2"}, // 2x10 SP #2 @ 16 OC CJ
 		// SPF No.2 is graded with No.1 as one grade (NDS 2018 Supplement
 		// Table 4A, Spruce-Pine-Fir "No.1/No.2")
 		{size: "2x10", species: "Spruce-Pine-Fir", grade: "No.1/No.2"}, // 2x10 SPF #2 @16" RAFTERS
