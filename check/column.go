@@ -114,19 +114,76 @@ func CheckPost(p Post, s Settings) PostResult {
 	fcE := 0.822 * eminAdj / (r.LeOverD * r.LeOverD)
 	const c = 0.8 // sawn lumber, NDS 2018 3.7.1.5
 
+	r.Cases = LoadCases(p.Loads, s)
+	area2 := area
+	best := -1.0
+	var bestComp, bestBear CheckResult
+	for _, pc := range r.Cases {
+		P, cd, name := pc.PLb, pc.CD, pc.Name
+		if P > r.DownLb {
+			r.DownLb, r.DownCombo = P, name
+		}
+		if -P > r.UpLb {
+			r.UpLb, r.UpCombo = -P, name
+		}
+		if P <= 0 {
+			continue
+		}
+		fcStar := dv.FcPsi * cd * cm.Fc * ct.Fb * cfFc * ci.Fb
+		a := fcE / fcStar
+		k := (1 + a) / (2 * c)
+		cp := k - math.Sqrt(k*k-a/c)
+		fc := P / area2
+		ratio := fc / (fcStar * cp)
+		if ratio > best {
+			best = ratio
+			bestComp = CheckResult{Kind: KindCompression, Combo: name, Actual: fc, Allowable: fcStar * cp, Unit: "psi", Ratio: ratio,
+				calc: &calcRecord{col: colRec{pLb: P, aIn2: area, leIn: le, dIn: d, ke: ke, hIn: p.HeightIn, cd: cd,
+					fcPsi: dv.FcPsi, cm: cm.Fc, ct: ct.Fb, cf: cfFc, ci: ci.Fb, fcStar: fcStar, eminPsi: dv.EminPsi,
+					eminAdj: eminAdj, fcE: fcE, cp: cp, c: c}}}
+			bestBear = CheckResult{Kind: KindBearingParallel, Combo: name, Actual: fc, Allowable: fcStar, Unit: "psi", Ratio: fc / fcStar,
+				calc: bestComp.calc}
+		}
+	}
+	r.Status = StatusPass
+	if best >= 0 {
+		r.Checks = []CheckResult{bestComp, bestBear}
+	}
+	for _, ch := range r.Checks {
+		if ch.Ratio > r.MaxRatio || r.Governing == "" {
+			r.MaxRatio, r.Governing = ch.Ratio, ch.Kind
+		}
+		if ch.Ratio > 1+ratioTol {
+			r.Status = StatusFail
+			r.Messages = append(r.Messages, fmt.Sprintf("%s: ratio %.3f > 1.000 (%s)", ch.Kind, ch.Ratio, ch.Combo))
+		}
+	}
+	if r.LeOverD > 50 {
+		r.Status = StatusFail
+		r.Messages = append(r.Messages, fmt.Sprintf("le/d = %.1f > 50: not permitted (NDS 2018 3.7.1.4)", r.LeOverD))
+	}
+	return r
+}
+
+// LoadCases returns the load of every combination of s (ASCE 7-16 2.4.1
+// by default) on a support or connector carrying loads l, downward
+// positive, with its load duration factor (NDS 2018 Table 2.3.2);
+// combinations whose variable loads are all absent are left out, and a
+// combination with wind is taken with the wind each way that acts. In a
+// case with the wind away from the member the dead load is the one relied
+// on against uplift (l.UpliftDeadLb when HasUpliftDead).
+func LoadCases(l PostLoads, s Settings) []PostCase {
 	combos := s.Combos
 	if combos == nil {
 		combos = defaultCombos
 	}
-	l := p.Loads
 	loads := [numLoadTypes]float64{l.DeadLb, l.LiveLb, l.RoofLiveLb, l.SnowLb, l.WindDownLb}
 	var present [numLoadTypes]bool
 	for t := range loads {
 		present[t] = loads[t] > 0
 	}
 	present[LoadD] = true
-	best := -1.0
-	var bestComp, bestBear CheckResult
+	var out []PostCase
 	for _, cb := range combos {
 		for _, f := range cb.Cases {
 			dirs := []float64{0}
@@ -152,8 +209,7 @@ func CheckPost(p Post, s Settings) PostResult {
 				if hasVar && !varPresent {
 					continue
 				}
-				dead := l.DeadLb
-				w := 0.0
+				dead, w := l.DeadLb, 0.0
 				if dir > 0 {
 					w = l.WindDownLb
 				} else if dir < 0 {
@@ -163,63 +219,20 @@ func CheckPost(p Post, s Settings) PostResult {
 					}
 				}
 				P := f[LoadD]*dead + f[LoadL]*l.LiveLb + f[LoadLr]*l.RoofLiveLb + f[LoadS]*l.SnowLb + f[LoadW]*w
-				cd := ComboDurationFactor(f, pr)
 				name := formatCaseName(f, dir, pr)
 				dup := false
-				for _, pc := range r.Cases {
+				for _, pc := range out {
 					if pc.Name == name && pc.PLb == P {
 						dup = true
 					}
 				}
-				if dup {
-					continue
-				}
-				r.Cases = append(r.Cases, PostCase{Name: name, CD: cd, PLb: P})
-				if P > r.DownLb {
-					r.DownLb, r.DownCombo = P, name
-				}
-				if -P > r.UpLb {
-					r.UpLb, r.UpCombo = -P, name
-				}
-				if P <= 0 {
-					continue
-				}
-				fcStar := dv.FcPsi * cd * cm.Fc * ct.Fb * cfFc * ci.Fb
-				a := fcE / fcStar
-				k := (1 + a) / (2 * c)
-				cp := k - math.Sqrt(k*k-a/c)
-				fc := P / area
-				ratio := fc / (fcStar * cp)
-				if ratio > best {
-					best = ratio
-					bestComp = CheckResult{Kind: KindCompression, Combo: name, Actual: fc, Allowable: fcStar * cp, Unit: "psi", Ratio: ratio,
-						calc: &calcRecord{col: colRec{pLb: P, aIn2: area, leIn: le, dIn: d, ke: ke, hIn: p.HeightIn, cd: cd,
-							fcPsi: dv.FcPsi, cm: cm.Fc, ct: ct.Fb, cf: cfFc, ci: ci.Fb, fcStar: fcStar, eminPsi: dv.EminPsi,
-							eminAdj: eminAdj, fcE: fcE, cp: cp, c: c}}}
-					bestBear = CheckResult{Kind: KindBearingParallel, Combo: name, Actual: fc, Allowable: fcStar, Unit: "psi", Ratio: fc / fcStar,
-						calc: bestComp.calc}
+				if !dup {
+					out = append(out, PostCase{Name: name, CD: ComboDurationFactor(f, pr), PLb: P})
 				}
 			}
 		}
 	}
-	r.Status = StatusPass
-	if best >= 0 {
-		r.Checks = []CheckResult{bestComp, bestBear}
-	}
-	for _, ch := range r.Checks {
-		if ch.Ratio > r.MaxRatio || r.Governing == "" {
-			r.MaxRatio, r.Governing = ch.Ratio, ch.Kind
-		}
-		if ch.Ratio > 1+ratioTol {
-			r.Status = StatusFail
-			r.Messages = append(r.Messages, fmt.Sprintf("%s: ratio %.3f > 1.000 (%s)", ch.Kind, ch.Ratio, ch.Combo))
-		}
-	}
-	if r.LeOverD > 50 {
-		r.Status = StatusFail
-		r.Messages = append(r.Messages, fmt.Sprintf("le/d = %.1f > 50: not permitted (NDS 2018 3.7.1.4)", r.LeOverD))
-	}
-	return r
+	return out
 }
 
 // colRec holds the numbers of a post's governing compression case.

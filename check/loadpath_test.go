@@ -318,3 +318,35 @@ func TestBuiltUpCarriesTwiceOnePly(t *testing.T) {
 		expectNear(t, kind, find(t, r2, kind).Ratio, find(t, r1, kind).Ratio, 0, 1e-9, "statics: two plies, twice the load")
 	}
 }
+
+// TestServiceReactions: reactions by load type at service level. A simple
+// span: R = w L / 2 per load type (statics); two equal spans: the interior
+// reaction is 1.25 w L and the end ones 0.375 w L (AISC Beam Diagrams and
+// Formulas, continuous beam - two equal spans - uniform load); wind suction
+// is a pull of the same magnitudes; the uplift dead load its own reaction.
+func TestServiceReactions(t *testing.T) {
+	m := floorJoist("2x10", 168, 16)
+	m.Loads = AreaLoads{DeadPsf: 12, LivePsf: 40, WindUpPsf: 30, UpliftDeadPsf: 8, HasUpliftDead: true}
+	rs, err := ServiceReactions(m, DefaultSettings())
+	if err != nil {
+		t.Fatal(err)
+	}
+	k := 16 / 144.0 * 168 / 2
+	for _, r := range rs {
+		expectNear(t, "D", r.DeadLb, 12*k, 1e-9, 1e-9, "statics, w L / 2")
+		expectNear(t, "L", r.LiveLb, 40*k, 1e-9, 1e-9, "statics, w L / 2")
+		expectNear(t, "W up (pull)", r.WindUpLb, 30*k, 1e-9, 1e-9, "statics, w L / 2")
+		expectNear(t, "uplift dead", r.UpliftDeadLb, 8*k, 1e-9, 1e-9, "statics, w L / 2")
+	}
+	L := 144.0
+	m2 := floorJoist("2x10", 2*L, 16)
+	m2.Bearings = []Bearing{{AtIn: 0, LengthIn: 1.5}, {AtIn: L, LengthIn: 3.5}, {AtIn: 2 * L, LengthIn: 1.5}}
+	rs, err = ServiceReactions(m2, DefaultSettings())
+	if err != nil {
+		t.Fatal(err)
+	}
+	w := 40 * 16 / 144.0
+	src := "AISC Beam Diagrams and Formulas, continuous beam - two equal spans - uniform load"
+	expectNear(t, "L end", rs[0].LiveLb, 0.375*w*L, 1e-9, 1e-9, src)
+	expectNear(t, "L interior", rs[1].LiveLb, 1.25*w*L, 1e-9, 1e-9, src)
+}

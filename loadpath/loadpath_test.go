@@ -1,0 +1,167 @@
+package loadpath
+
+import (
+	"fmt"
+	"math"
+	"strings"
+	"testing"
+
+	"framecheck/check"
+)
+
+func near(t *testing.T, what string, got, want, tol float64, src string) {
+	t.Helper()
+	if math.Abs(got-want) > tol || math.IsNaN(got) {
+		t.Errorf("%s = %.4f, want %.4f (tol %g) [%s]", what, got, want, tol, src)
+	}
+}
+
+// twoLevelPlan: five 2x10 roof joists at 16 in, 144 in span, D 12, Lr 20,
+// W up 30 psf, bearing on a wall at one end and hanging from a flush beam
+// B1 at the other, at 16, 32, 48, 64 and 80 in along it. B1, a (2) 2x10
+// 96 in long, bears on the wall at its start and on a girder G1 at 48 in
+// along it at its end. G1, a (3) 2x12 120 in long, sits on posts P1 and P2.
+func twoLevelPlan() *Plan { return pathPlan(5, 96) }
+
+// pathPlan is twoLevelPlan with n joists at 16 in on a beam beamIn long.
+func pathPlan(n int, beamIn float64) *Plan {
+	p := &Plan{Walls: []WallIn{{ID: "W1"}}, Posts: []PostIn{
+		{ID: "P1", Check: check.Post{Size: "4x4", Species: "Douglas Fir-Larch", Grade: "No.2", HeightIn: 96}, Checked: true},
+		{ID: "P2", Check: check.Post{Size: "4x4", Species: "Douglas Fir-Larch", Grade: "No.2", HeightIn: 96}, Checked: true},
+	}}
+	for i := 1; i <= n; i++ {
+		p.Members = append(p.Members, MemberIn{ID: fmt.Sprintf("J%d", i), Check: check.Member{
+			Size: "2x10", Species: "Douglas Fir-Larch", Grade: "No.2", LengthIn: 144,
+			Bearings:  []check.Bearing{{AtIn: 0, LengthIn: 3.5}, {AtIn: 144, LengthIn: 1.5, Hanger: true}},
+			SpacingIn: 16, TribIn: 16, Use: "roof", Repetitive: true, LiveLimit: 240, TotalLimit: 180,
+			Loads: check.AreaLoads{DeadPsf: 12, RoofLivePsf: 20, WindUpPsf: 30},
+		}, Carriers: []Carrier{{Kind: Wall, Index: 0}, {Kind: Member, Index: n, AtIn: 16 * float64(i), Joint: "hanger"}}})
+	}
+	var braces []float64
+	for i := 1; i <= n; i++ {
+		braces = append(braces, 16*float64(i))
+	}
+	p.Members = append(p.Members, MemberIn{ID: "B1", Beam: true, Check: check.Member{
+		Size: "(2) 2x10", Species: "Douglas Fir-Larch", Grade: "No.2", LengthIn: beamIn,
+		Bearings: []check.Bearing{{AtIn: 0, LengthIn: 3.5}, {AtIn: beamIn, LengthIn: 3}}, Use: "roof",
+		LiveLimit: 240, TotalLimit: 180, TopBracedAtPoints: true, TopBracingAtIn: braces,
+		SelfWeightPlf: 9.0,
+	}, Carriers: []Carrier{{Kind: Wall, Index: 0}, {Kind: Member, Index: n + 1, AtIn: 48}}})
+	p.Members = append(p.Members, MemberIn{ID: "G1", Beam: true, Check: check.Member{
+		Size: "(3) 2x12", Species: "Douglas Fir-Larch", Grade: "No.2", LengthIn: 120,
+		Bearings: []check.Bearing{{AtIn: 0, LengthIn: 3.5}, {AtIn: 120, LengthIn: 3.5}}, Use: "roof",
+		LiveLimit: 240, TotalLimit: 180, TopBracedAtPoints: true, TopBracingAtIn: []float64{48},
+	}, Carriers: []Carrier{{Kind: Post, Index: 0}, {Kind: Post, Index: 1}}})
+	return p
+}
+
+// TestTwoLevelPath_Statics: the loads put on the plan reach the wall and
+// the posts, load type by load type, to 0.1 lb (statics: every member's
+// reactions add up to its loads). By hand, each joist passes w L / 2 to
+// the beam: D = 12 (16/144)(144)/2 = 96 lb, Lr = 160 lb, a pull of 240 lb
+// under W up; the beam carries five of them plus its own weight, 9 plf x 8
+// ft = 72 lb; its reaction on G1 is the moment of those loads about its
+// start over 96 in: D (96 (16 + 32 + 48 + 64 + 80) + 72 (48)) / 96 = 276 lb;
+// G1 sits at 48 of 120 in, so P1 takes 276 (72/120) = 165.6 lb of D and P2
+// 110.4 lb.
+func TestTwoLevelPath_Statics(t *testing.T) {
+	p := twoLevelPlan()
+	o := Solve(p, check.DefaultSettings())
+	if len(o.Errors) > 0 {
+		t.Fatalf("errors: %v", o.Errors)
+	}
+	src := "statics, written out in the test comment"
+	a, d := o.Applied, o.Delivered
+	for _, c := range []struct {
+		name      string
+		got, want float64
+	}{{"D", d.DeadLb, a.DeadLb}, {"Lr", d.RoofLiveLb, a.RoofLiveLb}, {"W up", d.WindUpLb, a.WindUpLb}, {"uplift D", d.UpliftDeadLb, a.UpliftDeadLb}} {
+		near(t, c.name+" delivered", c.got, c.want, 0.1, "statics: nothing lost")
+	}
+	near(t, "D applied", a.DeadLb, 5*12*16/144.0*144+72, 1e-6, src)
+	// per joist: 96 lb D at each end
+	j1 := o.Members[0].Passed
+	near(t, "joist D to the beam", j1[1].DeadLb, 96, 1e-6, src)
+	near(t, "joist Lr to the beam", j1[1].RoofLiveLb, 160, 1e-6, src)
+	near(t, "joist W up pull", j1[1].WindUpLb, 240, 1e-6, src)
+	b1 := o.Members[5].Passed
+	near(t, "beam D to the girder", b1[1].DeadLb, (96*(16+32+48+64+80)+72*48)/96.0, 1e-6, src)
+	near(t, "post P1 D", o.Posts[0].Loads.DeadLb, 276*72/120.0, 1e-6, src)
+	near(t, "post P2 D", o.Posts[1].Loads.DeadLb, 276*48/120.0, 1e-6, src)
+	// the order follows the path: joists, then B1, then G1
+	if !(o.Members[0].Order < o.Members[5].Order && o.Members[5].Order < o.Members[6].Order) {
+		t.Errorf("order joist %d, beam %d, girder %d", o.Members[0].Order, o.Members[5].Order, o.Members[6].Order)
+	}
+	// the beam is checked with the joists' point loads, per load type
+	if n := len(o.Members[5].Input.PointLoads); n != 5 {
+		t.Errorf("beam point loads %d, want 5", n)
+	}
+	if o.Members[5].Result.Status == check.StatusError {
+		t.Errorf("beam: %v", o.Members[5].Result.Messages)
+	}
+	if o.Posts[0].Result.Status != check.StatusPass {
+		t.Errorf("post P1: %s %v", o.Posts[0].Result.Status, o.Posts[0].Result.Messages)
+	}
+	// joints: every bearing has one, the hangers under net uplift 0.6D + 0.6W:
+	// 0.6 (96) - 0.6 (240) = -86.4 lb (ASCE 7-16 2.4.1)
+	if len(o.Joints) != 5*2+2+2 {
+		t.Errorf("joints %d, want 14", len(o.Joints))
+	}
+	for _, jt := range o.Joints {
+		if jt.Kind == "hanger" {
+			near(t, "hanger uplift", jt.UpLb, 86.4, 1e-6, "ASCE 7-16 2.4.1, 0.6D + 0.6W, statics")
+			if !strings.Contains(jt.UpCombo, "0.6W(up)") {
+				t.Errorf("hanger uplift combination %q", jt.UpCombo)
+			}
+			near(t, "hanger down", jt.DownLb, 96+160, 1e-6, "ASCE 7-16 2.4.1, D + Lr")
+		}
+	}
+}
+
+// TestEquivalentLineLoad: a beam 192 in long carrying eleven joists at 16
+// in as point loads (their reactions by load type) agrees within 1 % with
+// the same beam under the equivalent line load, each reaction spread over
+// the 16 in around it (from 8 to 184 in). By statics, with P a joist's
+// reaction, M at mid-span is 5.5 P (96) - P (80 + 64 + 48 + 32 + 16) =
+// 288 P against 5.5 P (96) - (P/16)(88)(44) = 286 P: 0.7 %.
+func TestEquivalentLineLoad(t *testing.T) {
+	p := pathPlan(11, 192)
+	o := Solve(p, check.DefaultSettings())
+	beam := o.Members[11]
+	line := p.Members[11].Check
+	line.TribIn = 12
+	line.LoadPieces = []check.LoadPiece{{FromIn: 0, ToIn: 8},
+		{FromIn: 8, ToIn: 184, Loads: check.AreaLoads{DeadPsf: 96 / 16.0 * 12, RoofLivePsf: 160 / 16.0 * 12, WindUpPsf: 240 / 16.0 * 12}},
+		{FromIn: 184, ToIn: 192}}
+	rl := check.CheckMember(line, check.DefaultSettings())
+	if len(beam.Result.Checks) != len(rl.Checks) {
+		t.Fatalf("%d checks against %d", len(beam.Result.Checks), len(rl.Checks))
+	}
+	for i, c := range beam.Result.Checks {
+		if c.Kind != rl.Checks[i].Kind {
+			t.Fatalf("checks differ: %s vs %s", c.Kind, rl.Checks[i].Kind)
+		}
+		if math.Abs(c.Actual-rl.Checks[i].Actual) > 0.01*math.Abs(rl.Checks[i].Actual) {
+			t.Errorf("%s: %.4g with the joists' reactions, %.4g with the line load: want within 1 %%", c.Kind, c.Actual, rl.Checks[i].Actual)
+		}
+	}
+}
+
+// TestCycle: two beams each bearing on the other are an error naming
+// both; the rest of the plan is solved.
+func TestCycle(t *testing.T) {
+	p := twoLevelPlan()
+	p.Members[6].Carriers[1] = Carrier{Kind: Member, Index: 5, AtIn: 90}
+	o := Solve(p, check.DefaultSettings())
+	if len(o.Errors) == 0 || !strings.Contains(o.Errors[0], "B1, G1") {
+		t.Fatalf("errors %v, want a cycle naming B1 and G1", o.Errors)
+	}
+	for _, k := range []int{5, 6} {
+		if o.Members[k].Result.Status != check.StatusError {
+			t.Errorf("%s: %s, want error", p.Members[k].ID, o.Members[k].Result.Status)
+		}
+	}
+	if o.Members[0].Result.Status == check.StatusError {
+		t.Errorf("joist J1 in error: %v", o.Members[0].Result.Messages)
+	}
+}
