@@ -21,13 +21,18 @@ func (g *grouper) assignZones() {
 	p := g.plan
 	names := make([][]textItem, len(g.zonePolys))
 	areas := make([]float64, len(g.zonePolys))
+	// Every outline's box in a grid, so that each name text is tried only
+	// against the outlines whose box holds it (not against all of them).
+	boxes := make([]zoneGeom, len(g.zonePolys))
 	for i, z := range g.zonePolys {
 		areas[i] = polygonArea(z.pts)
+		boxes[i].lo, boxes[i].hi = polyBox(z.pts)
 	}
+	boxIdx := newZoneIndex(boxes)
 	for _, t := range g.zoneTexts {
 		best := -1
-		for i, z := range g.zonePolys {
-			if pointInPolygon(t.p, z.pts) && (best < 0 || areas[i] < areas[best]) {
+		for _, i := range boxIdx.candidates(boxes, t.p, t.p) {
+			if pointInPolygon(t.p, g.zonePolys[i].pts) && (best < 0 || areas[i] < areas[best]) {
 				best = i
 			}
 		}
@@ -51,11 +56,7 @@ func (g *grouper) assignZones() {
 			}
 		}
 		zg := zoneGeom{ZoneOutline: ZoneOutline{Name: names[i][0].text, Points: z.pts, AreaIn2: areas[i], Pos: z.pos}}
-		zg.lo, zg.hi = Point{X: math.Inf(1), Y: math.Inf(1)}, Point{X: math.Inf(-1), Y: math.Inf(-1)}
-		for _, q := range z.pts {
-			zg.lo.X, zg.lo.Y = math.Min(zg.lo.X, q.X), math.Min(zg.lo.Y, q.Y)
-			zg.hi.X, zg.hi.Y = math.Max(zg.hi.X, q.X), math.Max(zg.hi.Y, q.Y)
-		}
+		zg.lo, zg.hi = boxes[i].lo, boxes[i].hi
 		zs = append(zs, zg)
 		p.Zones = append(p.Zones, zg.ZoneOutline)
 	}
@@ -71,6 +72,16 @@ func (g *grouper) assignZones() {
 	for k := range p.Members {
 		g.memberZones(k, zs, idx)
 	}
+}
+
+// polyBox returns the bounding box of pts.
+func polyBox(pts []Point) (lo, hi Point) {
+	lo, hi = Point{X: math.Inf(1), Y: math.Inf(1)}, Point{X: math.Inf(-1), Y: math.Inf(-1)}
+	for _, q := range pts {
+		lo.X, lo.Y = math.Min(lo.X, q.X), math.Min(lo.Y, q.Y)
+		hi.X, hi.Y = math.Max(hi.X, q.X), math.Max(hi.Y, q.Y)
+	}
+	return lo, hi
 }
 
 // zoneIndex finds the zones whose bounding box a member's may overlap: a

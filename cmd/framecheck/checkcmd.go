@@ -185,6 +185,7 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		return exitUsage
 	}
 	c.planData = data
+	scaleMemoryLimit(int64(len(data)))
 	if afterRead != nil {
 		afterRead()
 	}

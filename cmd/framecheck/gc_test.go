@@ -1,0 +1,36 @@
+package main
+
+import (
+	"runtime/debug"
+	"testing"
+)
+
+// TestScaleMemoryLimit: the soft limit grows with the drawing (30 bytes of
+// heap per byte of drawing, measured: README, Performance), never below
+// 900 MiB, never above 60 % of the machine's memory, and not at all when
+// the user set GOMEMLIMIT (common practice, no source: the numbers are
+// ours).
+func TestScaleMemoryLimit(t *testing.T) {
+	old := debug.SetMemoryLimit(-1)
+	defer debug.SetMemoryLimit(old)
+	defer func(v bool) { limitTuned = v }(limitTuned)
+	limitTuned = true
+	scaleMemoryLimit(1 << 20)
+	if got := debug.SetMemoryLimit(-1); got != memoryLimit {
+		t.Errorf("1 MiB drawing: limit %d, want %d", got, memoryLimit)
+	}
+	scaleMemoryLimit(100 << 20)
+	want := int64(30 * 100 << 20)
+	if total := machineMemory(); total > 0 && float64(want) > 0.6*float64(total) {
+		want = max(int64(memoryLimit), int64(0.6*float64(total)))
+	}
+	if got := debug.SetMemoryLimit(-1); got != want {
+		t.Errorf("100 MiB drawing: limit %d, want %d", got, want)
+	}
+	limitTuned = false
+	debug.SetMemoryLimit(123 << 20)
+	scaleMemoryLimit(100 << 20)
+	if got := debug.SetMemoryLimit(-1); got != 123<<20 {
+		t.Errorf("GOMEMLIMIT set: limit changed to %d", got)
+	}
+}
