@@ -36,6 +36,10 @@ type Options struct {
 
 	JoistLayers, BlockingLayers, ZoneLayers, LabelLayers []string
 	Supports                                             []SupportSpec
+	// PostLayers hold posts (circles, small closed outlines, block
+	// inserts); PointLoadLayers point-load marks and their texts (the
+	// load path, posts.go).
+	PostLayers, PointLoadLayers []string
 
 	Species, Grade, Size string // project default lumber
 	ByLayer              []LumberRule
@@ -56,6 +60,8 @@ func DefaultOptions() Options {
 		BlockingLayers:     []string{"BLOCKING*"},
 		ZoneLayers:         []string{"LOAD-ZONE*"},
 		LabelLayers:        []string{"FRAMING-NOTE*"},
+		PostLayers:         []string{"POST*"},
+		PointLoadLayers:    []string{"POINT-LOAD*"},
 		Supports: []SupportSpec{
 			{Layers: []string{"WALL*"}, Kind: KindBearingWall, BearingIn: 3.5},
 			{Layers: []string{"BEAM-FLUSH*"}, Kind: KindFlushBeam, BearingIn: 1.5},
