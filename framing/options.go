@@ -40,6 +40,9 @@ type Options struct {
 	// inserts); PointLoadLayers point-load marks and their texts (the
 	// load path, posts.go).
 	PostLayers, PointLoadLayers []string
+	// PointLoadNames are the names of the project's [[point_load]]
+	// tables, which a point-load text may name (ReadPointLoad).
+	PointLoadNames []string
 
 	Species, Grade, Size string // project default lumber
 	ByLayer              []LumberRule
@@ -83,6 +86,8 @@ const (
 	roleBlocking
 	roleZone
 	roleLabel
+	rolePost
+	rolePointLoad
 )
 
 // layerRole returns the role of a layer and, for supports, the index of
@@ -105,6 +110,10 @@ func (o *Options) layerRole(layer string) (role, int) {
 		return roleZone, -1
 	case dxfimport.MatchLayer(o.LabelLayers, layer):
 		return roleLabel, -1
+	case dxfimport.MatchLayer(o.PostLayers, layer):
+		return rolePost, -1
+	case dxfimport.MatchLayer(o.PointLoadLayers, layer):
+		return rolePointLoad, -1
 	}
 	return roleNone, -1
 }

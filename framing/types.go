@@ -13,7 +13,13 @@ type Plan struct {
 	// brace the members they join and are counted in the takeoff as
 	// existing blocking; they are not members.
 	DrawnBlocking []DrawnBlock
-	Issues        dxfimport.IssueList
+	// Posts, PointLoads and Beams are the load path as drawn (issue 17;
+	// loadpath_types.go): extra information, not used by the joists'
+	// checks.
+	Posts      []Post
+	PointLoads []PointLoadMark
+	Beams      []Beam
+	Issues     dxfimport.IssueList
 	// Ignored counts entities framing did not use, by layer: every entity
 	// on a layer with no role, and entities of a kind the layer's role has
 	// no use for (key "LAYER (TEXT)").

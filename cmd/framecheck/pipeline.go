@@ -50,6 +50,10 @@ func framingOptions(p *Project) framing.Options {
 	o.LabelLayers = p.Layers.Labels
 	o.PostLayers = p.PostLayers()
 	o.PointLoadLayers = p.Layers.PointLoads
+	o.PointLoadNames = nil
+	for _, l := range p.PointLoads {
+		o.PointLoadNames = append(o.PointLoadNames, l.Name)
+	}
 	o.Supports = nil
 	for _, s := range p.Supports {
 		o.Supports = append(o.Supports, framing.SupportSpec{Layers: s.Layers, Kind: s.Kind, BearingIn: s.BearingIn})
