@@ -122,6 +122,7 @@ func Group(d *dxfimport.Drawing, opt Options) *Plan {
 	g.neighbours()
 	g.makeRuns()
 	g.assignZones()
+	g.claimBeamCallouts()
 	g.assignLumber()
 	g.finishOutlines()
 	g.drawnBlocking()

@@ -16,6 +16,9 @@ type SupportSpec struct {
 	Layers    []string // case-insensitive globs
 	Kind      string   // bearing-wall | dropped-beam | flush-beam | ledger
 	BearingIn float64  // bearing length on a single-line support, in
+	// Rigid keeps the supports of this table rigid bearings, never beams
+	// (the project's check = false).
+	Rigid bool
 }
 
 // LumberRule is one [[lumber.by_layer]] table: overrides for joists on

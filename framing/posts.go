@@ -34,6 +34,8 @@ const (
 type loadPathState struct {
 	postEnts, loadEnts   []dxfimport.Entity
 	postTexts, loadTexts []textItem
+	refs                 supportRefs
+	beams                []beamGroup // beam candidates among the support lines (beams.go)
 }
 
 // add keeps an entity of a posts or point-load layer; it reports whether
@@ -79,7 +81,7 @@ func (s *loadPathState) add(e dxfimport.Entity, r role) bool {
 // bearings are known.
 func (g *grouper) loadPath() {
 	g.findPosts()
-	// beams: next
+	g.findBeams()
 	g.findPointLoads()
 }
 

@@ -36,6 +36,9 @@ type Bearing struct {
 	LengthIn float64       // bearing length: the support's bearing_in, or a double-line wall's thickness
 	Kind     string        // support kind: bearing-wall, dropped-beam, flush-beam, ledger
 	Pos      dxfimport.Pos // the support line (the first of a double-line wall's two)
+	// Support is the index into Plan.Supports of the support line (or
+	// merged double line) the member bears on; -1 when unknown.
+	Support int
 }
 
 // ZonePiece is a stretch of a member, along it from Start, lying in one

@@ -56,7 +56,7 @@ func framingOptions(p *Project) framing.Options {
 	}
 	o.Supports = nil
 	for _, s := range p.Supports {
-		o.Supports = append(o.Supports, framing.SupportSpec{Layers: s.Layers, Kind: s.Kind, BearingIn: s.BearingIn})
+		o.Supports = append(o.Supports, framing.SupportSpec{Layers: s.Layers, Kind: s.Kind, BearingIn: s.BearingIn, Rigid: !s.Check})
 	}
 	o.Species, o.Grade, o.Size = p.Lumber.Species, p.Lumber.Grade, p.Lumber.Size
 	o.ByLayer = nil
