@@ -269,7 +269,9 @@ func (g *grouper) findBeams() {
 			bm.WidthIn = 0
 		}
 		for _, i := range append(append([]int(nil), b.lines...), b.caps...) {
-			bm.Lines = append(bm.Lines, g.sups[i].pos)
+			if !slices.Contains(bm.Lines, g.sups[i].pos) { // a polyline's sides are one entity
+				bm.Lines = append(bm.Lines, g.sups[i].pos)
+			}
 			if si := g.supportOf(i); si >= 0 && !slices.Contains(bm.Supports, si) {
 				bm.Supports = append(bm.Supports, si)
 				if _, ok := bySupport[si]; !ok {

@@ -236,3 +236,33 @@ func TestBeamKeptRigid(t *testing.T) {
 		t.Errorf("beams %d, want 3", len(pl.Beams))
 	}
 }
+
+// TestLoadPathFixture reads testdata/loadpath.dxf, the same scenario
+// written by ezdxf (gen_loadpath.py), through the DXF reader: the
+// block-insert post, the closed-polyline post, MTEXT and POINT entities
+// come from another writer than ours.
+func TestLoadPathFixture(t *testing.T) {
+	d, err := dxfimport.ReadFile("testdata/loadpath.dxf", dxfimport.Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	pl := Group(d, loadPathOptions())
+	checkLoadPathPlan(t, pl, "testdata/loadpath.dxf")
+	as := map[string]string{}
+	for _, q := range pl.Posts {
+		as[q.DrawnAs] += q.ID + " "
+		switch q.At {
+		case Point{X: 200, Y: 72}:
+			if q.DrawnAs != "circle" || q.Text != "6x6" {
+				t.Errorf("post at (200, 72): %+v, want a circle with its text 6x6", q)
+			}
+		case Point{X: 200, Y: 216}:
+			if q.DrawnAs != "block" || q.Pos.Handle == "" || q.Pos.Layer != "POST" {
+				t.Errorf("post at (200, 216): %+v, want the block insert", q)
+			}
+		}
+	}
+	if len(as["circle"]) == 0 || len(as["block"]) == 0 || len(strings.Fields(as["outline"])) != 2 {
+		t.Errorf("posts drawn as %v", as)
+	}
+}

@@ -65,7 +65,8 @@ type Beam struct {
 	Kind  string // the support kind: dropped-beam, flush-beam, ledger
 	Layer string
 	// Supports are the indices into Plan.Supports of its lines; Lines
-	// the positions of the lines as drawn (end caps of an outline too).
+	// the entities it is drawn with, each once (end caps of an outline
+	// too).
 	Supports []int
 	Lines    []dxfimport.Pos
 	// Start and End are the ends of its centre line, oriented as members
