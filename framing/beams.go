@@ -184,25 +184,36 @@ func (g *grouper) claimBeamCallouts() {
 	if len(bs) == 0 || len(g.labelTexts) == 0 {
 		return
 	}
+	segs := make([]segItem, len(bs))
+	for k := range bs {
+		segs[k] = segItem{a: bs[k].start(), b: bs[k].end()}
+	}
+	lo, hi, typ := bounds(segs)
+	idx := newSegIndex(lo, hi, len(segs), typ)
+	for k, sg := range segs {
+		idx.insert(k, sg.a, sg.b, 0)
+	}
 	claimedBy := make([]int, len(g.labelTexts))
 	for ti, t := range g.labelTexts {
 		claimedBy[ti] = -1
+		reach := calloutReachIn(t)
+		bk, bd := -1, reach
+		idx.query(t.p, t.p, reach+maxWallPad(g), func(k int) {
+			b := &bs[k]
+			d := math.Max(0, distPointSeg(t.p, b.start(), b.end())-(b.c1-b.c0)/2)
+			if d < bd || d == bd && k > bk {
+				bk, bd = k, d
+			}
+		})
+		if bk < 0 {
+			continue
+		}
 		co, err := ReadCallout(t.text)
-		norm := normalizeCallout(t.text)
 		switch {
 		case err == nil && co.SpacingIn > 0: // a joist callout
 			continue
-		case err != nil && !beamMaterialRE.MatchString(t.text) && !anySizeRE.MatchString(norm):
+		case err != nil && !beamMaterialRE.MatchString(t.text) && !anySizeRE.MatchString(normalizeCallout(t.text)):
 			continue
-		}
-		reach := calloutReachIn(t)
-		bk, bd := -1, reach
-		for k := range bs {
-			b := &bs[k]
-			d := math.Max(0, distPointSeg(t.p, b.start(), b.end())-(b.c1-b.c0)/2)
-			if d <= bd {
-				bk, bd = k, d
-			}
 		}
 		if bk < 0 || g.nearerThanBeam(t.p, bd) {
 			continue
@@ -318,16 +329,35 @@ func (g *grouper) along(k int, q Point) float64 {
 func (g *grouper) beamOnPosts() {
 	p := g.plan
 	tol := g.opt.SnapToleranceIn
-	for k := range p.Beams {
-		b := &p.Beams[k]
-		for i := range p.Posts {
-			q := &p.Posts[i]
+	idx := g.beamIndex()
+	for i := range p.Posts {
+		q := &p.Posts[i]
+		idx.query(q.At, q.At, tol+maxWallPad(g), func(k int) {
+			b := &p.Beams[k]
 			if distPointSeg(q.At, b.Start, b.End) > b.WidthIn/2+tol {
-				continue
+				return
 			}
 			b.Bearings = append(b.Bearings, BeamBearing{AtIn: g.along(k, q.At), LengthIn: q.SizeIn, Kind: BeamOnPost, Index: i, Pos: q.Pos})
+		})
+	}
+}
+
+// beamIndex is a grid over the beams' centre lines, built on first use
+// after Plan.Beams is made.
+func (g *grouper) beamIndex() *segIndex {
+	p := g.plan
+	if g.lp.beamIdx == nil && len(p.Beams) > 0 {
+		segs := make([]segItem, len(p.Beams))
+		for k, b := range p.Beams {
+			segs[k] = segItem{a: b.Start, b: b.End}
+		}
+		lo, hi, typ := bounds(segs)
+		g.lp.beamIdx = newSegIndex(lo, hi, len(segs), typ)
+		for k, s := range segs {
+			g.lp.beamIdx.insert(k, s.a, s.b, 0)
 		}
 	}
+	return g.lp.beamIdx
 }
 
 // beamOnWalls adds the bearing walls a beam crosses or ends on, found as
@@ -442,15 +472,7 @@ func (g *grouper) beamOnBeams() {
 	p := g.plan
 	tol := g.opt.SnapToleranceIn
 	minSin := math.Sin(minBearingAngleDeg * math.Pi / 180)
-	segs := make([]segItem, len(p.Beams))
-	for k, b := range p.Beams {
-		segs[k] = segItem{a: b.Start, b: b.End}
-	}
-	lo, hi, typ := bounds(segs)
-	idx := newSegIndex(lo, hi, len(segs), typ)
-	for k, s := range segs {
-		idx.insert(k, s.a, s.b, 0)
-	}
+	idx := g.beamIndex()
 	for k := range p.Beams {
 		a := &p.Beams[k]
 		ua := unit(sub(a.End, a.Start))

@@ -201,12 +201,14 @@ func (g *grouper) placePointLoad(m *PointLoadMark) {
 	p := g.plan
 	tol := g.opt.SnapToleranceIn
 	best := math.Inf(1)
-	for k := range p.Beams {
-		b := &p.Beams[k]
-		if d := distPointSeg(m.At, b.Start, b.End); d <= b.WidthIn/2+tol && d <= best {
-			best, m.Beam = d, k
-			m.AtIn = dot(sub(m.At, b.Start), unit(sub(b.End, b.Start)))
-		}
+	if idx := g.beamIndex(); idx != nil {
+		idx.query(m.At, m.At, tol+maxWallPad(g), func(k int) {
+			b := &p.Beams[k]
+			if d := distPointSeg(m.At, b.Start, b.End); d <= b.WidthIn/2+tol && (d < best || d == best && k < m.Beam) {
+				best, m.Beam = d, k
+				m.AtIn = g.along(k, m.At)
+			}
+		})
 	}
 	if idx := g.memberIndex(); idx != nil {
 		idx.query(m.At, m.At, tol+maxBuiltUpIn, func(k int) {

@@ -36,6 +36,7 @@ type loadPathState struct {
 	postTexts, loadTexts []textItem
 	refs                 supportRefs
 	beams                []beamGroup // beam candidates among the support lines (beams.go)
+	beamIdx              *segIndex   // over Plan.Beams' centre lines
 }
 
 // add keeps an entity of a posts or point-load layer; it reports whether
