@@ -1,6 +1,8 @@
 package main
 
 import (
+	"os"
+	"path/filepath"
 	"reflect"
 	"strings"
 	"testing"
@@ -103,5 +105,49 @@ func TestMemberSizeCheck(t *testing.T) {
 		if got != want || (want == "") != (rule != "") {
 			t.Errorf("memberSizeCheck(%q) = %q, %q; want %q", in, got, rule, want)
 		}
+	}
+}
+
+// TestCheckRunsWithLoadPath runs `framecheck check` on framing's load-path
+// fixture (written by ezdxf): the joists are checked as before, the point
+// load on no joist and the one whose text cannot be read are error
+// findings naming their handles, the beam with nothing under it a warning,
+// and the run still writes its outputs.
+func TestCheckRunsWithLoadPath(t *testing.T) {
+	dir := t.TempDir()
+	proj := filepath.Join(dir, "p.toml")
+	toml := `[[support]]
+layers = ["WALL*"]
+kind = "bearing-wall"
+[[support]]
+layers = ["BEAM-FLUSH*"]
+kind = "flush-beam"
+[[support]]
+layers = ["BEAM-DROP*"]
+kind = "dropped-beam"
+[[point_load]]
+name = "RTU-1"
+dead_lb = 450
+`
+	if err := os.WriteFile(proj, []byte(toml), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	code, out, errs := runCmd("check", "../../framing/testdata/loadpath.dxf", "-p", proj, "-o", filepath.Join(dir, "out"))
+	if code != exitFail {
+		t.Errorf("exit %d, want %d (error findings)", code, exitFail)
+	}
+	if !strings.Contains(out, "20 members: 20 pass, 0 fail, 0 error") {
+		t.Errorf("summary:\n%s", out)
+	}
+	for _, want := range []string{"error FRM232", "error FRM231", "warning FRM234: B4"} {
+		if !strings.Contains(errs, want) {
+			t.Errorf("stderr lacks %q:\n%s", want, errs)
+		}
+	}
+	if strings.Contains(errs, "RTU-1") {
+		t.Errorf("the named point load RTU-1 is reported:\n%s", errs)
+	}
+	if _, err := os.Stat(filepath.Join(dir, "out", "results.json")); err != nil {
+		t.Error(err)
 	}
 }
