@@ -351,5 +351,11 @@ func (g *grouper) postTexts() {
 		}
 	}
 	assign(g.lp.postTexts, func(textItem) bool { return true })
-	assign(g.labelTexts, func(t textItem) bool { return anySizeRE.MatchString(normalizeCallout(t.text)) })
+	assign(g.labelTexts, func(t textItem) bool {
+		if !anySizeRE.MatchString(normalizeCallout(t.text)) {
+			return false
+		}
+		co, err := ReadCallout(t.text)
+		return err != nil || co.SpacingIn == 0 // "2x10 @ 16" o.c." is the joists'
+	})
 }

@@ -206,3 +206,25 @@ func memberIndex(t *testing.T, pl *Plan, x, y float64) int {
 	}
 	return -1
 }
+
+func TestBearingSupportIndex(t *testing.T) {
+	// joists x = 0, 16 from y = 0 to 200 on a double-line wall (y = 0 and
+	// 5.5) and a single-line wall at y = 200; a joist callout beside a
+	// post is not the post's text
+	p := newPlan().walls(-20, 40, 0, 5.5, 200).joists(0, 200, 0, 16)
+	p.circle("POST", 100, 100, 2).text("FRAMING-NOTE", "2x10 @ 16\" o.c.", 103, 100, 3)
+	pl := p.group(DefaultOptions())
+	for _, m := range pl.Members {
+		if len(m.Bearings) != 2 {
+			t.Fatalf("%s bearings %+v", m.ID, m.Bearings)
+		}
+		s0, s1 := m.Bearings[0].Support, m.Bearings[1].Support
+		if s0 < 0 || s1 < 0 || !pl.Supports[s0].Double || !near(pl.Supports[s0].ThicknessIn, 5.5, 1e-9) ||
+			pl.Supports[s1].Double || !near(pl.Supports[s1].A.Y, 200, 1e-9) {
+			t.Errorf("%s bearings on supports %d, %d of %+v", m.ID, s0, s1, pl.Supports)
+		}
+	}
+	if len(pl.Posts) != 1 || pl.Posts[0].Text != "" {
+		t.Errorf("posts %+v, want one without text", pl.Posts)
+	}
+}
