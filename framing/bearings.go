@@ -75,6 +75,7 @@ func (g *grouper) findBearings() {
 		g.finishBearings(k)
 	}
 	g.buildSupports(merged)
+	g.resolveBearingSupports()
 }
 
 // bounds returns the bounding box and mean length of segments.
@@ -255,7 +256,7 @@ func (g *grouper) groupBearing(grp []hit, merged map[[2]int]bool, L float64) (Be
 	dir := unit(sub(s0.b, s0.a))
 	width := (last.t - first.t) * first.sin
 	if len(grp) == 1 || width < sameLineIn {
-		return Bearing{AtIn: first.t, LengthIn: sp.BearingIn, Kind: sp.Kind, Pos: s0.pos}, dir
+		return Bearing{AtIn: first.t, LengthIn: sp.BearingIn, Kind: sp.Kind, Pos: s0.pos, Support: first.sup}, dir
 	}
 	lb := width
 	if first.t < 0 { // the start stops inside the group
@@ -264,11 +265,13 @@ func (g *grouper) groupBearing(grp []hit, merged map[[2]int]bool, L float64) (Be
 	if last.t > L {
 		lb = math.Min(lb, (L-first.t)*first.sin)
 	}
-	merged[[2]int{min(first.sup, last.sup), max(first.sup, last.sup)}] = true
+	key := [2]int{min(first.sup, last.sup), max(first.sup, last.sup)}
+	merged[key] = true
 	for _, h := range grp[1 : len(grp)-1] {
 		g.inGroup[h.sup] = true
+		g.lp.middle(h.sup, key)
 	}
-	return Bearing{AtIn: (first.t + last.t) / 2, LengthIn: lb, Kind: sp.Kind, Pos: s0.pos}, dir
+	return Bearing{AtIn: (first.t + last.t) / 2, LengthIn: lb, Kind: sp.Kind, Pos: s0.pos, Support: g.pairRef(key)}, dir
 }
 
 // finishBearings sets the overhangs and hangers of a member with at least
@@ -377,6 +380,7 @@ func (g *grouper) buildSupports(merged map[[2]int]bool) {
 			continue
 		}
 		sp := g.opt.Supports[s.spec]
+		g.supportOut(i, -1, len(p.Supports))
 		p.Supports = append(p.Supports, Support{Kind: sp.Kind, A: s.a, B: s.b, BearingIn: sp.BearingIn, Pos: s.pos})
 	}
 	for _, pr := range pairs {
@@ -391,6 +395,7 @@ func (g *grouper) buildSupports(merged map[[2]int]bool) {
 			lo, hi = math.Min(0, math.Min(t1, t2)), math.Max(dist(s1.a, s1.b), math.Max(t1, t2))
 		}
 		th := math.Abs(off)
+		g.supportOut(pr[0], pr[1], len(p.Supports))
 		p.Supports = append(p.Supports, Support{
 			Kind: g.opt.Supports[s1.spec].Kind, A: lerp(base, u, lo), B: lerp(base, u, hi),
 			BearingIn: th, Double: true, ThicknessIn: th, Pos: s1.pos, PosB: s2.pos,

@@ -170,6 +170,39 @@
 //	FRM216 error    joist outline that is not a rectangle: not checked
 //	FRM217 warning  an outline's drawn thickness differs from its size's b by more than 0.25 in
 //	FRM218 error    outlines drawn side by side: a built-up member, not checked yet
+//	FRM230 warning  entity on a posts layer that is no post (a large circle or outline, open lines): skipped
+//	FRM231 error    point-load mark with no text beside it, or a text that cannot be read
+//	FRM232 error    point-load mark on no joist or beam
+//	FRM233 warning  point-load text with no mark near it (or beside a mark with a nearer text)
+//	FRM234 warning  beam with fewer than two supports of its own found: stays a rigid bearing
+//	FRM235 error    beams that bear on each other in a cycle
+//
+// # The load path as drawn (posts.go, pointloads.go, beams.go)
+//
+// Posts (Plan.Posts, P1..) are circles up to 24 in across, closed
+// outlines up to 12 in across (a closed polyline, or lines meeting end to
+// end, diagonals allowed) and block inserts on posts layers; a size text
+// beside a post (on a posts layer, else a label text naming a size,
+// within max(12 in, 3 text heights)) is Post.Text. Point-load marks
+// (Plan.PointLoads) are POINTs, CIRCLEs and block inserts on point-load
+// layers; each takes the nearest text within max(12 in, 4 text heights),
+// read by ReadPointLoad, and sits on the nearest joist or beam whose centre
+// line passes within half its drawn width plus the snap tolerance.
+//
+// Beams (Plan.Beams, B1..) are the support lines of kinds other than
+// bearing-wall (unless SupportSpec.Rigid): parallel lines of one kind,
+// within MaxWallThicknessIn across and overlapping along, are one beam on
+// their centre line (its outline's end caps belong to it); n + 1 lines
+// are n plies. A label text naming a size with no spacing, or a glulam or
+// SCL callout, whose nearest beam is within its reach and nearer than any
+// joist or label line, is the beam's Callout (and not a joist callout).
+// A beam bears on posts under its centre line (within half its width plus
+// the snap tolerance), on bearing walls it crosses or ends on (in line with
+// it too), and on a beam its end lands on, inside that beam; with fewer
+// than two of these it stays a rigid bearing (Beam.Rigid). Joist bearings
+// on its lines are Beam.Carried (Bearing.Support names the entry of
+// Plan.Supports a joist bears on). Beams bearing on each other in a cycle
+// are an error; the loads themselves are for the caller.
 //
 // # Speed
 //

@@ -97,6 +97,8 @@ type grouper struct {
 	badPos    map[dxfimport.Pos]string // joist items standing for outlines that are not rectangles: why
 	arcs      []dxfimport.Pos          // curved entities skipped on support, blocking and label layers
 	bulged    int                      // of which polylines with arc segments
+
+	lp loadPathState // posts, point loads and beams (loadpath.go)
 }
 
 type dirGroup struct {
@@ -120,10 +122,12 @@ func Group(d *dxfimport.Drawing, opt Options) *Plan {
 	g.neighbours()
 	g.makeRuns()
 	g.assignZones()
+	g.claimBeamCallouts()
 	g.assignLumber()
 	g.finishOutlines()
 	g.drawnBlocking()
 	g.existingBlocking()
+	g.loadPath()
 	return g.plan
 }
 
@@ -187,6 +191,8 @@ func (g *grouper) classify(d *dxfimport.Drawing) {
 			}
 		case roleZone:
 			used = g.addZone(e)
+		case rolePost, rolePointLoad:
+			used = g.lp.add(e, r)
 		}
 		if !used {
 			g.plan.Ignored[fmt.Sprintf("%s (%s)", layer, e.Kind)]++

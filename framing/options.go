@@ -16,6 +16,9 @@ type SupportSpec struct {
 	Layers    []string // case-insensitive globs
 	Kind      string   // bearing-wall | dropped-beam | flush-beam | ledger
 	BearingIn float64  // bearing length on a single-line support, in
+	// Rigid keeps the supports of this table rigid bearings, never beams
+	// (the project's check = false).
+	Rigid bool
 }
 
 // LumberRule is one [[lumber.by_layer]] table: overrides for joists on
@@ -36,6 +39,13 @@ type Options struct {
 
 	JoistLayers, BlockingLayers, ZoneLayers, LabelLayers []string
 	Supports                                             []SupportSpec
+	// PostLayers hold posts (circles, small closed outlines, block
+	// inserts); PointLoadLayers point-load marks and their texts (the
+	// load path, posts.go).
+	PostLayers, PointLoadLayers []string
+	// PointLoadNames are the names of the project's [[point_load]]
+	// tables, which a point-load text may name (ReadPointLoad).
+	PointLoadNames []string
 
 	Species, Grade, Size string // project default lumber
 	ByLayer              []LumberRule
@@ -56,6 +66,8 @@ func DefaultOptions() Options {
 		BlockingLayers:     []string{"BLOCKING*"},
 		ZoneLayers:         []string{"LOAD-ZONE*"},
 		LabelLayers:        []string{"FRAMING-NOTE*"},
+		PostLayers:         []string{"POST*"},
+		PointLoadLayers:    []string{"POINT-LOAD*"},
 		Supports: []SupportSpec{
 			{Layers: []string{"WALL*"}, Kind: KindBearingWall, BearingIn: 3.5},
 			{Layers: []string{"BEAM-FLUSH*"}, Kind: KindFlushBeam, BearingIn: 1.5},
@@ -77,6 +89,8 @@ const (
 	roleBlocking
 	roleZone
 	roleLabel
+	rolePost
+	rolePointLoad
 )
 
 // layerRole returns the role of a layer and, for supports, the index of
@@ -99,6 +113,10 @@ func (o *Options) layerRole(layer string) (role, int) {
 		return roleZone, -1
 	case dxfimport.MatchLayer(o.LabelLayers, layer):
 		return roleLabel, -1
+	case dxfimport.MatchLayer(o.PostLayers, layer):
+		return rolePost, -1
+	case dxfimport.MatchLayer(o.PointLoadLayers, layer):
+		return rolePointLoad, -1
 	}
 	return roleNone, -1
 }

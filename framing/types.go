@@ -13,7 +13,13 @@ type Plan struct {
 	// brace the members they join and are counted in the takeoff as
 	// existing blocking; they are not members.
 	DrawnBlocking []DrawnBlock
-	Issues        dxfimport.IssueList
+	// Posts, PointLoads and Beams are the load path as drawn (issue 17;
+	// loadpath_types.go): extra information, not used by the joists'
+	// checks.
+	Posts      []Post
+	PointLoads []PointLoadMark
+	Beams      []Beam
+	Issues     dxfimport.IssueList
 	// Ignored counts entities framing did not use, by layer: every entity
 	// on a layer with no role, and entities of a kind the layer's role has
 	// no use for (key "LAYER (TEXT)").
@@ -30,6 +36,9 @@ type Bearing struct {
 	LengthIn float64       // bearing length: the support's bearing_in, or a double-line wall's thickness
 	Kind     string        // support kind: bearing-wall, dropped-beam, flush-beam, ledger
 	Pos      dxfimport.Pos // the support line (the first of a double-line wall's two)
+	// Support is the index into Plan.Supports of the support line (or
+	// merged double line) the member bears on; -1 when unknown.
+	Support int
 }
 
 // ZonePiece is a stretch of a member, along it from Start, lying in one

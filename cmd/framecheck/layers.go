@@ -98,8 +98,8 @@ func unusedPatterns(rows []layerRow, p *Project) []string {
 func runLayers(args []string, stdout, stderr io.Writer) int {
 	f := newFlags("layers", "framecheck layers PLAN.dxf [-p PROJECT.toml] [--units U]", `
 Lists every layer of the plan with its entity counts by type and the role
-the project file gives it (joists, blocking, zones, labels, or a support
-kind), or none: the quick way to map a new drawing to a project file.
+the project file gives it (joists, blocking, zones, labels, posts,
+point_loads, or a support kind), or none: the quick way to map a new drawing to a project file.
 Without -p the built-in layer patterns apply.`)
 	projectPath := f.String("p", "", "project file `PROJECT.toml` (default: the built-in defaults)")
 	units := f.String("units", "", "unit of the drawing, `U`: in, ft, mm, cm or m (default: the project file, then $INSUNITS)")

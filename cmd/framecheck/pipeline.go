@@ -48,9 +48,15 @@ func framingOptions(p *Project) framing.Options {
 	o.BlockingLayers = p.Layers.Blocking
 	o.ZoneLayers = p.Layers.Zones
 	o.LabelLayers = p.Layers.Labels
+	o.PostLayers = p.PostLayers()
+	o.PointLoadLayers = p.Layers.PointLoads
+	o.PointLoadNames = nil
+	for _, l := range p.PointLoads {
+		o.PointLoadNames = append(o.PointLoadNames, l.Name)
+	}
 	o.Supports = nil
 	for _, s := range p.Supports {
-		o.Supports = append(o.Supports, framing.SupportSpec{Layers: s.Layers, Kind: s.Kind, BearingIn: s.BearingIn})
+		o.Supports = append(o.Supports, framing.SupportSpec{Layers: s.Layers, Kind: s.Kind, BearingIn: s.BearingIn, Rigid: !s.Check})
 	}
 	o.Species, o.Grade, o.Size = p.Lumber.Species, p.Lumber.Grade, p.Lumber.Size
 	o.ByLayer = nil

@@ -26,6 +26,10 @@ type Project struct {
 	Loads    Loads           // [loads]
 	Zones    []Zone          // [[zone]]
 	Sizing   Sizing          // [sizing]
+	// Posts are the [[post]] tables; PointLoads the [[point_load]]
+	// tables (the load path, issue 17). Both are empty by default.
+	Posts      []Post
+	PointLoads []PointLoad
 
 	// Materials is the built-in design values merged with the rows of
 	// [lumber] materials_file, or nil when the project gives none.
@@ -59,6 +63,11 @@ type LayerRoles struct {
 	Blocking []string // blocking rows already drawn
 	Zones    []string // closed load-zone outlines with the zone name inside
 	Labels   []string // size callouts and their span lines
+	// Posts are the layers of posts under beams: circles, small closed
+	// outlines, block inserts (load path).
+	Posts []string
+	// PointLoads are the layers of point-load marks with their text.
+	PointLoads []string
 }
 
 // Support is one [[support]] table: the layers of one kind of support.
@@ -74,6 +83,41 @@ type Support struct {
 	// Fc_perp is checked beside the joist's (NDS 2018 3.10.2). Empty: the
 	// joist's own.
 	Species, Grade string
+	// Size is the beam's size when no callout on the plan gives one:
+	// "2x12" (with Plies for a built-up member), "4x12", or actual
+	// dimensions of glulam or SCL "5.125x12"; "" when not given.
+	Size string
+	// Plies is the number of plies of a built-up sawn beam of Size; 0
+	// when not given (one, or as a callout says).
+	Plies int
+	// Material names a user material (a glulam stress class, an SCL
+	// product's published values); "" for the lumber of Species, Grade.
+	Material string
+	// Check: a support of this table whose own supports are found is a
+	// member (a beam) checked with the loads it carries; false keeps it a
+	// rigid bearing. Default true.
+	Check bool
+}
+
+// Post is one [[post]] table: the size, lumber and height of the posts
+// on its layers (checked as columns, NDS 2018 3.7).
+type Post struct {
+	Layers         []string
+	Size           string // "4x4", "6x6"; "" when not given (a callout may give it)
+	Species, Grade string // "" when not given
+	HeightIn       float64
+	// Ke is the buckling length coefficient (NDS 2018 Appendix G, Table
+	// G1); default 1.0.
+	Ke float64
+}
+
+// PointLoad is one [[point_load]] table: a named load that point-load
+// text on the plan refers to, lb per load type (W strength level, as
+// [[zone]] gives its wind pressures).
+type PointLoad struct {
+	Name                               string
+	DeadLb, LiveLb, RoofLiveLb, SnowLb float64
+	WindDownLb, WindUpLb               float64
 }
 
 // Lumber is the [lumber] table: the project default for every joist and
@@ -213,6 +257,9 @@ type Sizing struct {
 	// BlockingPieceWeightBf is the cost of one blocking piece expressed in
 	// board feet of joist.
 	BlockingPieceWeightBf float64
+	// BeamCandidates are the beam sizes `--size` tries for beams,
+	// smallest first: "(2) 2x10", "4x12".
+	BeamCandidates []string
 }
 
 // Allowed values of the project file's enumerated keys.
@@ -238,8 +285,8 @@ var defaultBearingIn = map[string]float64{
 // defaultSupports are the support tables of a file without [[support]].
 func defaultSupports() []Support {
 	return []Support{
-		{Layers: []string{"WALL*"}, Kind: "bearing-wall", BearingIn: 3.5},
-		{Layers: []string{"BEAM-FLUSH*"}, Kind: "flush-beam", BearingIn: 1.5},
+		{Layers: []string{"WALL*"}, Kind: "bearing-wall", BearingIn: 3.5, Check: true},
+		{Layers: []string{"BEAM-FLUSH*"}, Kind: "flush-beam", BearingIn: 1.5, Check: true},
 	}
 }
 
@@ -322,13 +369,17 @@ const (
 	RoleBlocking = "blocking"
 	RoleZones    = "zones"
 	RoleLabels   = "labels"
+	RolePosts    = "posts"
+	// RolePointLoads is the role of point-load marks and their text.
+	RolePointLoads = "point_loads"
 	// Support layers report "support:" followed by the kind.
 	rolePrefixSupport = "support:"
 )
 
 // LayerRole returns the role the project gives a layer: "joists",
-// "blocking", "zones", "labels", "support:<kind>", or "" for none. Roles
-// are tried in that order, supports last.
+// "blocking", "zones", "labels", "posts" (layers.posts or the layers of
+// a [[post]] table), "point_loads", "support:<kind>", or "" for none.
+// Roles are tried in that order, supports last.
 func (p *Project) LayerRole(layer string) string {
 	roles := []struct {
 		name     string
@@ -338,6 +389,8 @@ func (p *Project) LayerRole(layer string) string {
 		{RoleBlocking, p.Layers.Blocking},
 		{RoleZones, p.Layers.Zones},
 		{RoleLabels, p.Layers.Labels},
+		{RolePosts, p.PostLayers()},
+		{RolePointLoads, p.Layers.PointLoads},
 	}
 	for _, r := range roles {
 		if dxfimport.MatchLayer(r.patterns, layer) {
@@ -350,6 +403,38 @@ func (p *Project) LayerRole(layer string) string {
 		}
 	}
 	return ""
+}
+
+// PostLayers returns the layer patterns of posts: layers.posts and the
+// layers of every [[post]] table.
+func (p *Project) PostLayers() []string {
+	out := append([]string(nil), p.Layers.Posts...)
+	for _, t := range p.Posts {
+		out = append(out, t.Layers...)
+	}
+	return out
+}
+
+// PostFor returns the first [[post]] table whose patterns match layer,
+// or nil.
+func (p *Project) PostFor(layer string) *Post {
+	for i := range p.Posts {
+		if dxfimport.MatchLayer(p.Posts[i].Layers, layer) {
+			return &p.Posts[i]
+		}
+	}
+	return nil
+}
+
+// PointLoad returns the [[point_load]] of that name (case-insensitive),
+// or nil.
+func (p *Project) PointLoad(name string) *PointLoad {
+	for i := range p.PointLoads {
+		if strings.EqualFold(p.PointLoads[i].Name, name) {
+			return &p.PointLoads[i]
+		}
+	}
+	return nil
 }
 
 // LumberFor returns the species, grade and size of a joist on that layer:

@@ -178,7 +178,8 @@ func TestDefaultProject(t *testing.T) {
 	if p.Drawing != (DrawingSettings{SnapToleranceIn: 1.5, MaxWallThicknessIn: 12}) {
 		t.Errorf("drawing %+v", p.Drawing)
 	}
-	wantSup := []Support{{Layers: []string{"WALL*"}, Kind: "bearing-wall", BearingIn: 3.5}, {Layers: []string{"BEAM-FLUSH*"}, Kind: "flush-beam", BearingIn: 1.5}}
+	wantSup := []Support{{Layers: []string{"WALL*"}, Kind: "bearing-wall", BearingIn: 3.5, Check: true},
+		{Layers: []string{"BEAM-FLUSH*"}, Kind: "flush-beam", BearingIn: 1.5, Check: true}}
 	if !reflect.DeepEqual(p.Supports, wantSup) {
 		t.Errorf("supports %+v", p.Supports)
 	}
@@ -197,7 +198,8 @@ func TestDefaultProject(t *testing.T) {
 	if p.Lumber.Species != "Douglas Fir-Larch" || p.Lumber.Grade != "No.2" || p.Lumber.Size != "2x10" || p.Lumber.ByLayer != nil {
 		t.Errorf("lumber %+v", p.Lumber)
 	}
-	if !reflect.DeepEqual(p.Sizing, Sizing{[]string{"2x6", "2x8", "2x10", "2x12", "2x14"}, 2}) {
+	if !reflect.DeepEqual(p.Sizing, Sizing{[]string{"2x6", "2x8", "2x10", "2x12", "2x14"}, 2,
+		[]string{"(2) 2x10", "(3) 2x10", "(2) 2x12", "(3) 2x12", "4x12"}}) {
 		t.Errorf("sizing %+v", p.Sizing)
 	}
 	used := strings.Join(p.DefaultsUsed(), "\n")

@@ -64,10 +64,11 @@ var schema = []struct {
 	show string
 	keys []string
 }{
-	{"the top level", []string{"drawing", "layers", "support", "lumber", "design", "loads", "zone", "sizing"}},
+	{"the top level", []string{"drawing", "layers", "support", "lumber", "design", "loads", "zone", "sizing",
+		"post", "point_load"}},
 	{"[drawing]", []string{"units", "snap_tolerance_in", "max_wall_thickness_in", "edge_distance_in"}},
-	{"[layers]", []string{"joists", "blocking", "zones", "labels"}},
-	{"[[support]]", []string{"layers", "kind", "bearing_in", "species", "grade"}},
+	{"[layers]", []string{"joists", "blocking", "zones", "labels", "posts", "point_loads"}},
+	{"[[support]]", []string{"layers", "kind", "bearing_in", "species", "grade", "size", "plies", "material", "check"}},
 	{"[lumber]", []string{"species", "grade", "size", "materials_file", "by_layer"}},
 	{"[[lumber.by_layer]]", []string{"layers", "species", "grade", "size"}},
 	{"[design]", []string{"top_edge_braced", "shear_at_d", "wet_service", "temperature", "incised", "kcr",
@@ -77,7 +78,9 @@ var schema = []struct {
 	{"[[zone]]", []string{"name", "use", "allow_zero", "dead_psf", "live_psf", "roof_live_psf", "snow_psf", "wind_down_psf",
 		"wind_up_psf", "ceiling", "ceiling_braces_bottom", "live_deflection_limit", "total_deflection_limit",
 		"uplift_dead_psf", "pitch", "dead_on_slope", "long_term_deflection_limit"}},
-	{"[sizing]", []string{"candidates", "blocking_piece_weight_bf"}},
+	{"[sizing]", []string{"candidates", "blocking_piece_weight_bf", "beam_candidates"}},
+	{"[[post]]", []string{"layers", "size", "species", "grade", "height_in", "ke"}},
+	{"[[point_load]]", []string{"name", "dead_lb", "live_lb", "roof_live_lb", "snow_lb", "wind_down_lb", "wind_up_lb"}},
 }
 
 // keyHome maps each key name to the first table of schema that has it.

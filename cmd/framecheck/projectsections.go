@@ -24,6 +24,8 @@ func (ld *loader) project(root *table) {
 	ld.zones(root)
 	ld.loads(loads)
 	ld.sizing(ld.sub(root, "sizing"))
+	ld.posts(root)
+	ld.pointLoads(root)
 	ld.patternOwners()
 }
 
@@ -46,11 +48,14 @@ func (ld *loader) layers(t *table) {
 	*l = LayerRoles{
 		Joists: []string{"JOIST*"}, Blocking: []string{"BLOCKING*"},
 		Zones: []string{"LOAD-ZONE*"}, Labels: []string{"FRAMING-NOTE*"},
+		Posts: []string{"POST*"}, PointLoads: []string{"POINT-LOAD*"},
 	}
 	ld.list(t, "joists", &l.Joists, nil)
 	ld.list(t, "blocking", &l.Blocking, nil)
 	ld.list(t, "zones", &l.Zones, nil)
 	ld.list(t, "labels", &l.Labels, nil)
+	ld.quietList(t, "posts", &l.Posts, nil)
+	ld.quietList(t, "point_loads", &l.PointLoads, nil)
 }
 
 func (ld *loader) supports(root *table) {
@@ -65,7 +70,7 @@ func (ld *loader) supports(root *table) {
 		return
 	}
 	for _, t := range elems {
-		s := Support{Kind: "bearing-wall"}
+		s := Support{Kind: "bearing-wall", Check: true}
 		ld.required(t, "layers")
 		ld.list(t, "layers", &s.Layers, nil)
 		ld.enum(t, "kind", &s.Kind, supportKinds)
@@ -73,6 +78,7 @@ func (ld *loader) supports(root *table) {
 		ld.num(t, "bearing_in", "in", &s.BearingIn, thicknessRule)
 		ld.text(t, "species", &s.Species, nil)
 		ld.text(t, "grade", &s.Grade, nil)
+		ld.beamKeys(t, &s)
 		ld.p.Supports = append(ld.p.Supports, s)
 	}
 }
@@ -455,6 +461,8 @@ func (ld *loader) sizing(t *table) {
 	*s = Sizing{Candidates: []string{"2x6", "2x8", "2x10", "2x12", "2x14"}, BlockingPieceWeightBf: 2}
 	ld.list(t, "candidates", &s.Candidates, sizeCheck)
 	ld.num(t, "blocking_piece_weight_bf", "board feet", &s.BlockingPieceWeightBf, weightRule)
+	s.BeamCandidates = []string{"(2) 2x10", "(3) 2x10", "(2) 2x12", "(3) 2x12", "4x12"}
+	ld.quietList(t, "beam_candidates", &s.BeamCandidates, memberSizeCheck)
 }
 
 // patternOwners reports a layer pattern that belongs to two roles: two
@@ -488,6 +496,8 @@ func (ld *loader) patternOwners() {
 	add("layers.blocking", "layers.blocking", ld.p.Layers.Blocking)
 	add("layers.zones", "layers.zones", ld.p.Layers.Zones)
 	add("layers.labels", "layers.labels", ld.p.Layers.Labels)
+	add("layers.posts", "layers.posts", ld.p.Layers.Posts)
+	add("layers.point_loads", "layers.point_loads", ld.p.Layers.PointLoads)
 	for i, s := range ld.p.Supports {
 		path := fmt.Sprintf("support[%d].layers", i)
 		add(fmt.Sprintf("[[support]] %d (%s)", i+1, s.Kind), path, s.Layers)

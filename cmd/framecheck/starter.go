@@ -28,6 +28,8 @@ joists = ["JOIST*"]
 blocking = ["BLOCKING*"]      # blocking rows already drawn; they brace the joists they cross
 zones = ["LOAD-ZONE*"]        # closed outlines with the load zone's name written inside
 labels = ["FRAMING-NOTE*"]    # size callouts such as "2x10 @ 16 o.c." and the span lines under them
+posts = ["POST*"]             # posts under beams: circles, small closed outlines, block inserts
+point_loads = ["POINT-LOAD*"] # point loads: a point, circle or block with a text such as "P: 1200 D, 800 L" (lb)
 
 # One [[support]] table per kind of support. A layer pattern may belong
 # to one table only. Without any [[support]] table, the two below apply.
@@ -42,6 +44,13 @@ bearing_in = 3.5              # bearing on a single-line support; a double-line 
 layers = ["BEAM-FLUSH*"]
 kind = "flush-beam"           # joists framing in here hang in hangers, counted in the takeoff
 bearing_in = 1.5
+# A support other than a bearing wall whose own supports are found on the
+# plan (posts, bearing walls, another beam) is a beam carrying the joists'
+# reactions. Its size comes from a callout near it, else from here:
+# size = "2x12"               # or glulam / SCL b x d in inches: "5.125x12", "3.5x11.875"
+# plies = 3                   # plies of a built-up sawn beam of that size
+# material = ""               # a user material's name (glulam stress class, SCL)
+# check = true                # false: keep it a rigid bearing
 
 [lumber]
 # Species, grade and nominal size of every joist unless overridden below.
@@ -103,4 +112,27 @@ allow_zero = false            # true: the zone may leave out (or give 0 for) its
 # Used by "framecheck check --size": the sizes tried, smallest first.
 candidates = ["2x6", "2x8", "2x10", "2x12", "2x14"]
 blocking_piece_weight_bf = 2.0  # one blocking piece costs as much as this many board feet of joist
+beam_candidates = ["(2) 2x10", "(3) 2x10", "(2) 2x12", "(3) 2x12", "4x12"]  # beam sizes tried, smallest first
+
+# Posts on the posts layers: one [[post]] table per kind of post. Without
+# a size and height (here or in a callout beside the post) a post's load
+# is reported, not checked. For example:
+# [[post]]
+# layers = ["POST*"]
+# size = "4x4"
+# species = "Douglas Fir-Larch"
+# grade = "No.2"
+# height_in = 96.0
+# ke = 1.0                    # buckling length coefficient (NDS Appendix G)
+
+# Named point loads that a text on the point-load layers can name (lb;
+# wind at strength level). For example:
+# [[point_load]]
+# name = "RTU-1"
+# dead_lb = 450.0
+# live_lb = 0.0
+# roof_live_lb = 0.0
+# snow_lb = 0.0
+# wind_down_lb = 0.0
+# wind_up_lb = 0.0
 `
