@@ -58,6 +58,13 @@ type MemberIn struct {
 	Beam     bool // a beam or girder, not a joist: for the outputs
 	Check    check.Member
 	Carriers []Carrier
+	// Result and Reactions, when given, are the member's check and its
+	// reactions by load type already found (a joist checked with its run's
+	// blocking rows; identical joists share them); Solve then neither
+	// checks nor analyses it again. Only a member that receives no load
+	// from another may come with them.
+	Result    *check.Result
+	Reactions []check.LoadReactions
 }
 
 // PostIn is a post; its loads come from the members it carries.
@@ -153,8 +160,14 @@ func Solve(p *Plan, s check.Settings) *Outcome {
 			o.Errors = append(o.Errors, mi.ID+": "+out.Result.Messages[0])
 			continue
 		}
-		out.Result = check.CheckMember(cm, s)
-		rs, err := check.ServiceReactions(cm, s)
+		var rs []check.LoadReactions
+		var err error
+		if mi.Result != nil && mi.Reactions != nil && len(incoming[k]) == 0 {
+			out.Result, rs = *mi.Result, mi.Reactions
+		} else {
+			out.Result = check.CheckMember(cm, s)
+			rs, err = check.ServiceReactions(cm, s)
+		}
 		if err != nil {
 			// nothing passes on from a member that cannot be analysed: its
 			// carriers are short of its load, which the outcome says
@@ -165,7 +178,10 @@ func Solve(p *Plan, s check.Settings) *Outcome {
 		for j, r := range rs {
 			c := mi.Carriers[j]
 			l := loadsOf(r)
-			o.Joints = append(o.Joints, joint(k, j, c, l, s))
+			// the joints to state: a beam's, and a joist's on a beam or a post
+			if mi.Beam || c.Kind == Member || c.Kind == Post {
+				o.Joints = append(o.Joints, joint(k, j, c, l, s))
+			}
 			switch c.Kind {
 			case Member:
 				incoming[c.Index] = append(incoming[c.Index], r.PointLoad(c.AtIn, mi.ID))
