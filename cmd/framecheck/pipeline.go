@@ -26,6 +26,7 @@ type outcome struct {
 	rows     []framing.BlockingRow // rows to add, by run
 	takeoff  framing.Takeoff
 	issues   dxfimport.IssueList // drawing, framing and design findings
+	path     *pathOutcome        // beams, posts, walls and joints of the load path; nil without beams or posts
 }
 
 // pipelineInput is what runs the pipeline: the plan file, its project,
@@ -133,10 +134,14 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 	shifts := make([]float64, len(plan.Members))
 	usable := make([]bool, len(plan.Members))
 	o.results = make([]check.Result, len(plan.Members))
+	inputMsgs := make([][]string, len(plan.Members))
+	for k := range plan.Members {
+		inputs[k], shifts[k], inputMsgs[k] = checkInput(p, plan, k)
+	}
+	badLoads := applyPointLoads(p, plan, inputs, shifts)
 	for k := range plan.Members {
 		m := &plan.Members[k]
-		cm, shift, msgs := checkInput(p, plan, k)
-		inputs[k], shifts[k] = cm, shift
+		msgs := append(inputMsgs[k], badLoads[k]...)
 		if m.Error || len(msgs) > 0 {
 			o.results[k] = errorResult(m, append(append([]string(nil), m.Messages...), msgs...))
 			continue
@@ -170,6 +175,7 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 		o.rows[i].Size = plan.Members[plan.Runs[runIndex(plan, o.rows[i].Run)].Members[0]].Size
 	}
 	o.takeoff = framing.BuildTakeoff(plan, o.rows)
+	runLoadPath(p, plan, inputs, shifts, usable, settings, o)
 	return o, nil
 }
 

@@ -1,0 +1,408 @@
+package main
+
+import (
+	"fmt"
+	"math"
+	"sort"
+
+	"framecheck/check"
+	"framecheck/dxfimport"
+	"framecheck/framing"
+	"framecheck/loadpath"
+)
+
+// Findings of the load path (design: CHK3xx).
+const (
+	CodeBeamNotChecked = "CHK310" // a beam with its own supports that cannot be checked
+	CodeLoadLost       = "CHK311" // a member in error bears on a beam: its load is not in the beam's check
+	CodeLoadPath       = "CHK312" // the load path itself: a cycle, reactions not found
+)
+
+// beamOutcome is a beam of the plan as the load path checked it.
+type beamOutcome struct {
+	beam  *framing.Beam
+	input check.Member
+	shift float64 // how far the check's origin lies before the beam's Start
+	res   check.Result
+	mark  string
+}
+
+// postOutcome is a post of the plan with the loads that reach it.
+type postOutcome struct {
+	post    *framing.Post
+	checked bool
+	out     loadpath.PostOut
+	size    string
+}
+
+// wallOutcome is a bearing-wall line with the loads that reach it.
+type wallOutcome struct {
+	support  int // index into Plan.Supports
+	loads    loadpath.Loads
+	lengthIn float64
+}
+
+// pathOutcome is what the load path found.
+type pathOutcome struct {
+	beams  []beamOutcome
+	posts  []postOutcome
+	walls  []wallOutcome
+	joints []loadpath.Joint
+	ids    []string // loadpath member index -> member or beam id
+	solved *loadpath.Outcome
+}
+
+// applyPointLoads puts the point loads drawn on joists on their check
+// inputs (positions shifted as the bearings are). A mark whose text cannot
+// be read makes its joist an error: never a load left out silently.
+func applyPointLoads(p *Project, plan *framing.Plan, inputs []check.Member, shifts []float64) map[int][]string {
+	bad := map[int][]string{}
+	for _, mk := range plan.PointLoads {
+		if mk.Member < 0 {
+			continue
+		}
+		if mk.Err != "" {
+			bad[mk.Member] = append(bad[mk.Member], fmt.Sprintf("point load %s: %s", mk.Pos, mk.Err))
+			continue
+		}
+		l, name := markLoads(p, mk)
+		l.AtIn = mk.AtIn + shifts[mk.Member]
+		l.Name = name
+		inputs[mk.Member].PointLoads = append(inputs[mk.Member].PointLoads, l)
+	}
+	return bad
+}
+
+// markLoads returns a point-load mark's loads: those its text gives, or
+// the [[point_load]] it names.
+func markLoads(p *Project, mk framing.PointLoadMark) (check.PointLoad, string) {
+	l := mk.Loads
+	name := mk.Text
+	if mk.Name != "" {
+		if pl := p.PointLoad(mk.Name); pl != nil {
+			l = framing.PointLoads{DeadLb: pl.DeadLb, LiveLb: pl.LiveLb, RoofLiveLb: pl.RoofLiveLb, SnowLb: pl.SnowLb,
+				WindDownLb: pl.WindDownLb, WindUpLb: pl.WindUpLb}
+			name = pl.Name
+		}
+	}
+	return check.PointLoad{DeadLb: l.DeadLb, LiveLb: l.LiveLb, RoofLiveLb: l.RoofLiveLb, SnowLb: l.SnowLb,
+		WindDownLb: l.WindDownLb, WindUpLb: l.WindUpLb}, name
+}
+
+// beamDensityPcf is the unit weight taken for a beam's own weight, as for
+// joists (woodDensityPcf; from memory: verify against NDS 2018 Supplement
+// Table 1B, heading note).
+const beamDensityPcf = woodDensityPcf
+
+// runLoadPath follows the loads of the checked joists down to the beams,
+// posts and walls that carry them (issue 17). Beams framing found with two
+// or more supports of their own are checked with the joists' reactions by
+// load type; posts under what reaches them; walls and posts get the loads
+// for the foundation.
+func runLoadPath(p *Project, plan *framing.Plan, inputs []check.Member, shifts []float64, usable []bool, s check.Settings, o *outcome) {
+	if len(plan.Beams) == 0 && len(plan.Posts) == 0 {
+		return
+	}
+	po := &pathOutcome{}
+	lp := &loadpath.Plan{}
+	// Walls: every bearing-wall support line.
+	wallOf := map[int]int{}
+	for i, sp := range plan.Supports {
+		if sp.Kind == framing.KindBearingWall {
+			wallOf[i] = len(lp.Walls)
+			lp.Walls = append(lp.Walls, loadpath.WallIn{ID: fmt.Sprintf("W%d", len(lp.Walls)+1)})
+			po.walls = append(po.walls, wallOutcome{support: i, lengthIn: math.Hypot(sp.B.X-sp.A.X, sp.B.Y-sp.A.Y)})
+		}
+	}
+	// Posts.
+	for i := range plan.Posts {
+		pt := &plan.Posts[i]
+		pc, checked, size := postInput(p, pt)
+		lp.Posts = append(lp.Posts, loadpath.PostIn{ID: pt.ID, Check: pc, Checked: checked})
+		po.posts = append(po.posts, postOutcome{post: pt, checked: checked, size: size})
+	}
+	// Beams: members of the path when they have their own supports.
+	beamMember := make([]int, len(plan.Beams))
+	for i := range plan.Beams {
+		b := &plan.Beams[i]
+		beamMember[i] = -1
+		if b.Rigid {
+			continue
+		}
+		cm, shift, msg := beamInput(p, plan, b)
+		bo := beamOutcome{beam: b, input: cm, shift: shift}
+		if msg != "" {
+			bo.res = check.Result{ID: b.ID, Size: cm.Size, Status: check.StatusError, Messages: []string{msg}}
+			o.issues.Add(b.Lines[0], CodeBeamNotChecked, dxfimport.SevError, "%s: %s", b.ID, msg)
+		} else {
+			beamMember[i] = len(lp.Members)
+			lp.Members = append(lp.Members, loadpath.MemberIn{ID: b.ID, Beam: true, Check: cm})
+			po.ids = append(po.ids, b.ID)
+		}
+		po.beams = append(po.beams, bo)
+	}
+	// Each beam's carriers, now that every beam has its place.
+	bi := 0
+	for i := range plan.Beams {
+		b := &plan.Beams[i]
+		if b.Rigid {
+			continue
+		}
+		k := beamMember[i]
+		if k >= 0 {
+			m := &lp.Members[k]
+			for _, br := range b.Bearings {
+				c := loadpath.Carrier{Kind: loadpath.Rigid}
+				switch br.Kind {
+				case framing.BeamOnPost:
+					c = loadpath.Carrier{Kind: loadpath.Post, Index: br.Index, Joint: "post cap"}
+				case framing.BeamOnWall:
+					if w, ok := wallOf[br.Index]; ok {
+						c = loadpath.Carrier{Kind: loadpath.Wall, Index: w, Joint: "beam on wall"}
+					}
+				case framing.BeamOnBeam:
+					if cb := beamMember[br.Index]; cb >= 0 {
+						at := along(&plan.Beams[br.Index], pointAlong(b, br.AtIn)) + po.beams[beamOutcomeIndex(plan, br.Index)].shift
+						c = loadpath.Carrier{Kind: loadpath.Member, Index: cb, AtIn: at, Joint: "beam to beam"}
+					}
+				}
+				m.Carriers = append(m.Carriers, c)
+			}
+			// point-load marks on the beam
+			for _, mk := range plan.PointLoads {
+				if mk.Beam == i && mk.Member < 0 && mk.Err == "" {
+					l, name := markLoads(p, mk)
+					l.AtIn, l.Name = mk.AtIn+po.beams[bi].shift, name
+					m.Check.PointLoads = append(m.Check.PointLoads, l)
+				}
+			}
+		}
+		bi++
+	}
+	// Joists: their results and reactions as found, each bearing to its
+	// beam, wall or rigid support. Identical joists share their reactions.
+	carriedBy := map[[2]int]loadpath.Carrier{}
+	for i := range plan.Beams {
+		b := &plan.Beams[i]
+		if beamMember[i] < 0 {
+			continue
+		}
+		shift := po.beams[beamOutcomeIndex(plan, i)].shift
+		for _, c := range b.Carried {
+			joint := "joist on beam"
+			if b.Kind == framing.KindFlushBeam || b.Kind == framing.KindLedger {
+				joint = "hanger"
+			}
+			carriedBy[[2]int{c.Member, c.Bearing}] = loadpath.Carrier{Kind: loadpath.Member, Index: beamMember[i], AtIn: c.AtIn + shift, Joint: joint}
+		}
+	}
+	reactions := map[string][]check.LoadReactions{}
+	for k := range plan.Members {
+		if !usable[k] || o.results[k].Status == check.StatusError {
+			if bearsOnBeam(carriedBy, k, len(plan.Members[k].Bearings)) {
+				o.issues.Add(plan.Members[k].Pos, CodeLoadLost, dxfimport.SevWarning,
+					"%s is in error: the load it would put on the beams under it is not in their checks", plan.Members[k].ID)
+			}
+			continue
+		}
+		cm := inputs[k]
+		cm.Size = o.results[k].Size
+		key := memberKey(cm)
+		rs, ok := reactions[key]
+		if !ok {
+			var err error
+			rs, err = check.ServiceReactions(cm, s)
+			if err != nil {
+				continue
+			}
+			reactions[key] = rs
+		}
+		mi := loadpath.MemberIn{ID: plan.Members[k].ID, Check: cm, Result: &o.results[k], Reactions: rs}
+		for j, b := range plan.Members[k].Bearings {
+			c, ok := carriedBy[[2]int{k, j}]
+			if !ok {
+				c = loadpath.Carrier{Kind: loadpath.Rigid}
+				if w, isWall := wallOf[b.Support]; isWall {
+					c = loadpath.Carrier{Kind: loadpath.Wall, Index: w}
+				}
+			}
+			mi.Carriers = append(mi.Carriers, c)
+		}
+		lp.Members = append(lp.Members, mi)
+		po.ids = append(po.ids, plan.Members[k].ID)
+	}
+	solved := loadpath.Solve(lp, s)
+	po.solved = solved
+	for _, e := range solved.Errors {
+		o.issues.Add(dxfimport.Pos{File: o.drawing.File}, CodeLoadPath, dxfimport.SevError, "%s", e)
+	}
+	bi = 0
+	for i := range plan.Beams {
+		if plan.Beams[i].Rigid {
+			continue
+		}
+		if k := beamMember[i]; k >= 0 {
+			bo := &po.beams[bi]
+			bo.input = solved.Members[k].Input
+			bo.res = unshift(solved.Members[k].Result, bo.shift)
+			bo.res.ID = plan.Beams[i].ID
+		}
+		bi++
+	}
+	for i := range po.posts {
+		po.posts[i].out = solved.Posts[i]
+	}
+	for i := range po.walls {
+		po.walls[i].loads = solved.Walls[i]
+	}
+	po.joints = solved.Joints
+	o.path = po
+}
+
+// beamOutcomeIndex returns the index into pathOutcome.beams of plan beam i
+// (rigid beams are left out of it).
+func beamOutcomeIndex(plan *framing.Plan, i int) int {
+	n := 0
+	for j := 0; j < i; j++ {
+		if !plan.Beams[j].Rigid {
+			n++
+		}
+	}
+	return n
+}
+
+func bearsOnBeam(carriedBy map[[2]int]loadpath.Carrier, k, n int) bool {
+	for j := 0; j < n; j++ {
+		if _, ok := carriedBy[[2]int{k, j}]; ok {
+			return true
+		}
+	}
+	return false
+}
+
+// pointAlong returns the point at distance t along beam b from its Start.
+func pointAlong(b *framing.Beam, t float64) framing.Point {
+	dx, dy := b.End.X-b.Start.X, b.End.Y-b.Start.Y
+	l := math.Hypot(dx, dy)
+	if l == 0 {
+		return b.Start
+	}
+	return framing.Point{X: b.Start.X + dx/l*t, Y: b.Start.Y + dy/l*t}
+}
+
+// along returns the distance along beam b from its Start of the
+// projection of q on its centre line.
+func along(b *framing.Beam, q framing.Point) float64 {
+	dx, dy := b.End.X-b.Start.X, b.End.Y-b.Start.Y
+	l := math.Hypot(dx, dy)
+	if l == 0 {
+		return 0
+	}
+	return ((q.X-b.Start.X)*dx + (q.Y-b.Start.Y)*dy) / l
+}
+
+// beamInput builds check's input for beam b: its size from its callout or
+// its [[support]] table, its lumber, its bearings, its own weight, its top
+// edge braced where joists bear on it or hang from it, and the deflection
+// limits of the strictest joists it carries (IBC 2018 Table 1604.3; a beam
+// carrying none takes the floor limits). msg says why it cannot be
+// checked.
+func beamInput(p *Project, plan *framing.Plan, b *framing.Beam) (check.Member, float64, string) {
+	sp := p.SupportOf(b.Layer)
+	size := b.Size
+	if size == "" && b.Callout != "" {
+		return check.Member{ID: b.ID}, 0, fmt.Sprintf("its callout %q is not a sawn size framecheck checks (glulam and structural "+
+			"composite lumber are not checked yet): check this beam by hand", b.Callout)
+	}
+	if size == "" && sp != nil && sp.Size != "" {
+		size = sp.Size
+		if sp.Plies > 1 {
+			size = fmt.Sprintf("(%d) %s", sp.Plies, sp.Size)
+		}
+	}
+	if size == "" {
+		return check.Member{ID: b.ID}, 0, "no size: write its size beside it on a label layer (such as (3) 2x12) or give [[support]] size"
+	}
+	if sp != nil && sp.Material != "" {
+		return check.Member{ID: b.ID, Size: size}, 0, fmt.Sprintf("material %q: beams of user materials are not checked yet; check this beam by hand", sp.Material)
+	}
+	species, grade := p.Lumber.Species, p.Lumber.Grade
+	if sp != nil {
+		if sp.Species != "" {
+			species = sp.Species
+		}
+		if sp.Grade != "" {
+			grade = sp.Grade
+		}
+	}
+	sec, err := check.ParseSize(size)
+	if err != nil {
+		return check.Member{ID: b.ID, Size: size}, 0, err.Error()
+	}
+	cm := check.Member{ID: b.ID, Size: size, Species: species, Grade: grade, LengthIn: b.LengthIn, Use: "floor",
+		SelfWeightPlf: sec.AreaIn2 / 144 * beamDensityPcf, TopBracedAtPoints: true}
+	bs := append([]framing.BeamBearing(nil), b.Bearings...)
+	sort.Slice(bs, func(i, j int) bool { return bs[i].AtIn < bs[j].AtIn })
+	shift := 0.0
+	if len(bs) > 0 && bs[0].AtIn < 0 {
+		shift = -bs[0].AtIn
+	}
+	for _, br := range bs {
+		lb := br.LengthIn
+		if lb <= 0 {
+			lb = 3.5 // a post of unknown size: a 4x post's 3.5 in (common practice, no source)
+		}
+		cm.Bearings = append(cm.Bearings, check.Bearing{AtIn: br.AtIn + shift, LengthIn: lb})
+	}
+	cm.LengthIn += shift
+	if n := len(cm.Bearings); n > 0 && cm.Bearings[n-1].AtIn > cm.LengthIn {
+		cm.LengthIn = cm.Bearings[n-1].AtIn
+	}
+	cm.OverhangStartIn = 0
+	cm.OverhangEndIn = 0
+	live, total := deflectionLimits("floor", "non-plaster")
+	roof := true
+	for _, c := range b.Carried {
+		cm.TopBracingAtIn = append(cm.TopBracingAtIn, c.AtIn+shift)
+		m := &plan.Members[c.Member]
+		for _, zn := range m.Zones {
+			if z := p.Zone(zn); z != nil && z.Use != "roof" {
+				roof = false
+			}
+		}
+	}
+	if roof && len(b.Carried) > 0 {
+		cm.Use = "roof"
+		live, total = deflectionLimits("roof", "non-plaster")
+	}
+	cm.LiveLimit, cm.TotalLimit = live, total
+	return cm, shift, ""
+}
+
+// postInput builds check's input for post pt from its [[post]] table and
+// the size beside it; checked is false when its size or height is not
+// known (its load is then only reported).
+func postInput(p *Project, pt *framing.Post) (check.Post, bool, string) {
+	pc := check.Post{ID: pt.ID, Species: p.Lumber.Species, Grade: p.Lumber.Grade}
+	if t := p.PostFor(pt.Pos.Layer); t != nil {
+		pc.Size, pc.HeightIn, pc.Ke = t.Size, t.HeightIn, t.Ke
+		if t.Species != "" {
+			pc.Species = t.Species
+		}
+		if t.Grade != "" {
+			pc.Grade = t.Grade
+		}
+	}
+	if pt.Text != "" {
+		if c, err := framing.ReadCallout(pt.Text); err == nil && c.Size != "" {
+			pc.Size = c.Designation()
+			if c.Species != "" {
+				pc.Species = c.Species
+			}
+			if c.Grade != "" {
+				pc.Grade = c.Grade
+			}
+		}
+	}
+	return pc, pc.Size != "" && pc.HeightIn > 0, pc.Size
+}
