@@ -37,6 +37,9 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 	w.b = append(e.buf[:0], '{')
 	w.str("id", m.ID)
 	w.str("mark", m.Mark)
+	if m.Run != "" {
+		w.str("run", m.Run)
+	}
 	w.str("layer", m.Layer)
 	w.str("handle", m.Handle)
 	if m.Source != "" {

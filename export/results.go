@@ -59,6 +59,7 @@ type ZonePiece struct {
 type Member struct {
 	ID     string `json:"id"`
 	Mark   string `json:"mark"`
+	Run    string `json:"run,omitempty"` // run of adjacent parallel joists, e.g. "R2"
 	Layer  string `json:"layer"`
 	Handle string `json:"handle"`
 	// Source names the drawn line, e.g. "plan.dxf:4410 (handle 2F1, layer JOISTS)".

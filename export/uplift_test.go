@@ -259,11 +259,13 @@ func TestUpliftLabelsOutOfOrder(t *testing.T) {
 	if len(m.Uplifts) != 3 {
 		t.Fatalf("%d uplift labels", len(m.Uplifts))
 	}
-	if l := m.Uplifts[0]; l.AngleDeg != 90 || l.At[0] != 0 || !(l.At[1] < 200) || l.Text != "uplift 100 lb" {
-		t.Errorf("M2 label %+v, want along M2 (90 deg), below its end, 100 lb", l)
+	// Beside the line: 0.65 h to its left as the text reads, h = 200/120 in.
+	side := 0.65 * 200.0 / 120
+	if l := m.Uplifts[0]; l.AngleDeg != 90 || math.Abs(l.At[0]+side) > 1e-9 || !(l.At[1] < 200) || l.Text != "uplift 100 lb" {
+		t.Errorf("M2 label %+v, want along M2 (90 deg), beside it, below its end, 100 lb", l)
 	}
-	if l := m.Uplifts[1]; l.AngleDeg != 0 || !(l.At[0] > 0) || l.At[1] != 0 {
-		t.Errorf("M1 label %+v, want along M1, right of its start", l)
+	if l := m.Uplifts[1]; l.AngleDeg != 0 || !(l.At[0] > 0) || math.Abs(l.At[1]-side) > 1e-9 {
+		t.Errorf("M1 label %+v, want along M1, beside it, right of its start", l)
 	}
 	if l := m.Uplifts[2]; l.At != [2]float64{5, 5} || l.AngleDeg != 0 {
 		t.Errorf("label of an unknown member %+v, want at its point, 0 deg", l)

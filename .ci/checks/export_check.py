@@ -13,8 +13,9 @@ import os
 import sys
 from collections import Counter
 
-OUR_LAYERS = ("FC-FAIL", "FC-BLOCKING-ADD", "FC-LABEL", "FC-UPLIFT")
-TEXT_LAYERS = ("FC-LABEL", "FC-UPLIFT")
+OUR_LAYERS = ("FC-FAIL", "FC-ERROR", "FC-BLOCKING-ADD", "FC-LABEL", "FC-UPLIFT", "FC-ID", "FC-KEY")
+TEXT_LAYERS = ("FC-LABEL", "FC-UPLIFT", "FC-ID")
+LINE_LAYERS = ("FC-FAIL",)  # the others hold lines and texts
 failures = []
 
 
@@ -147,7 +148,7 @@ def check_dxf(out):
                 fail("%s: layer %s not in the LAYER table" % (dst, layer))
         kinds = Counter((s[0], s[1]) for s in after_all if s[1] in OUR_LAYERS)
         for (t, layer), n in kinds.items():
-            want = "TEXT" if layer in TEXT_LAYERS else "LINE"
+            want = "TEXT" if layer in TEXT_LAYERS else "LINE" if layer in LINE_LAYERS else t
             if t != want:
                 fail("%s: %d %s on %s, want %s" % (dst, n, t, layer, want))
         # The highlight of a failing member lies on a drawn joist (checks the

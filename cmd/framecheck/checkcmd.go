@@ -399,6 +399,8 @@ func (c *checkRun) write(o *outcome, res *export.Results, stderr io.Writer) (wri
 		}
 	}
 	if overlay {
+		// The overlay's layers avoid the plan's colours too (when readable).
+		mk.UsedACI, _ = export.DrawingLayerColours(c.planPath)
 		if err := add(names[3], export.WriteOverlay(filepath.Join(stage, names[3]), mk, res.DrawingUnits)); err != nil {
 			return nil, err
 		}

@@ -32,7 +32,11 @@ func exportResults(o *outcome, planName string) *export.Results {
 	conv := newResultConverter()
 	r.Members = make([]export.Member, 0, len(plan.Members))
 	for k := range plan.Members {
-		r.Members = append(r.Members, conv.member(&plan.Members[k], &o.results[k], toInch))
+		em := conv.member(&plan.Members[k], &o.results[k], toInch)
+		if ri := plan.Members[k].Run; ri >= 0 && ri < len(plan.Runs) {
+			em.Run = plan.Runs[ri].ID
+		}
+		r.Members = append(r.Members, em)
 		switch o.results[k].Status {
 		case check.StatusPass:
 			r.Summary.Pass++
