@@ -141,3 +141,19 @@ func TestColour(t *testing.T) {
 		t.Errorf("paint on: %q", got)
 	}
 }
+
+// TestVersionFlag: --version prints the stamped version (set here as the
+// linker's -X would) and exits 0.
+func TestVersionFlag(t *testing.T) {
+	old := version
+	version = "v9.8.7-test"
+	defer func() { version = old }()
+	var out, errb strings.Builder
+	if code := run([]string{"--version"}, &out, &errb); code != exitOK || out.String() != "framecheck v9.8.7-test\n" {
+		t.Errorf("--version: exit %d, %q %q", code, out.String(), errb.String())
+	}
+	version = ""
+	if v := toolVersion(); v == "" {
+		t.Error("toolVersion empty without a stamp")
+	}
+}
