@@ -243,9 +243,19 @@ func errorReasons(r *Results, ends [][2][2]float64, h float64) []Label {
 // Rows evenly spaced in every span, the same number in each, read "ADD
 // BLOCKING 2 ROWS @ 1/3 PTS" (1 row: "@ MIDSPAN"; several spans: "EACH
 // SPAN" added); otherwise the positions are listed, span by span: "ADD
-// BLOCKING 2 ROWS AT 4'-6\", 9'-0\"". Evenly means within 1/2 in of span
+// BLOCKING 2 ROWS AT 4'-6\", 9'-0\"" (the markup lists them from the
+// datum, the face of the first bearing). Evenly means within 1/2 in of span
 // x k/(n+1) (common practice, no source).
 func BlockingNote(rowsAt [][]float64, spansIn []float64) string {
+	return blockingNote(rowsAt, spansIn, nil)
+}
+
+// blockingNote is BlockingNote listing, when the rows are not evenly
+// spaced, the positions listAt (same shape as rowsAt; nil: rowsAt).
+func blockingNote(rowsAt [][]float64, spansIn []float64, listAt [][]float64) string {
+	if listAt == nil {
+		listAt = rowsAt
+	}
 	total, n := 0, -1
 	even := true
 	for s, at := range rowsAt {
@@ -294,7 +304,7 @@ func BlockingNote(rowsAt [][]float64, spansIn []float64) string {
 		return s
 	}
 	var parts []string
-	for s, at := range rowsAt {
+	for s, at := range listAt {
 		if len(at) == 0 {
 			continue
 		}
@@ -305,7 +315,7 @@ func BlockingNote(rowsAt [][]float64, spansIn []float64) string {
 			ps[j] = FtIn(p)
 		}
 		p := strings.Join(ps, ", ")
-		if len(rowsAt) > 1 {
+		if len(listAt) > 1 {
 			p = "SPAN " + strconv.Itoa(s+1) + " " + p
 		}
 		parts = append(parts, p)
@@ -318,7 +328,8 @@ func BlockingNote(rowsAt [][]float64, spansIn []float64) string {
 func blockingNotes(r *Results, toInch, h float64) []Label {
 	type run struct {
 		first  int
-		rowsAt [][]float64
+		rowsAt [][]float64 // along each span from its first bearing's centre-line
+		faceAt [][]float64 // the same rows from the datum (FromFaceIn)
 	}
 	var order []string
 	runs := map[string]*run{}
@@ -340,8 +351,10 @@ func blockingNotes(r *Results, toInch, h float64) []Label {
 		}
 		for len(ru.rowsAt) <= br.SpanIndex {
 			ru.rowsAt = append(ru.rowsAt, nil)
+			ru.faceAt = append(ru.faceAt, nil)
 		}
 		ru.rowsAt[br.SpanIndex] = append(ru.rowsAt[br.SpanIndex], br.PositionIn)
+		ru.faceAt[br.SpanIndex] = append(ru.faceAt[br.SpanIndex], br.FromFaceIn)
 		if _, ok := spansOf[br.Run]; !ok {
 			for _, id := range br.Members {
 				if mb := byID[id]; mb != nil && len(mb.SpansIn) > 0 {
@@ -357,12 +370,13 @@ func blockingNotes(r *Results, toInch, h float64) []Label {
 		spans := spansOf[id]
 		for len(ru.rowsAt) < len(spans) {
 			ru.rowsAt = append(ru.rowsAt, nil)
+			ru.faceAt = append(ru.faceAt, nil)
 		}
 		br := &r.BlockingRows[ru.first]
 		a, b := inches(br.Start, br.End, br.StartIn, br.EndIn, toInch)
 		nv := normal(a, b)
 		at := [2]float64{(a[0]+b[0])/2 + 0.8*h*nv[0], (a[1]+b[1])/2 + 0.8*h*nv[1]}
-		out = append(out, Label{At: at, AngleDeg: readableAngle(a, b), Text: BlockingNote(ru.rowsAt, spans)})
+		out = append(out, Label{At: at, AngleDeg: readableAngle(a, b), Text: blockingNote(ru.rowsAt, spans, ru.faceAt)})
 	}
 	return out
 }

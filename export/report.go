@@ -198,7 +198,7 @@ func ratioKey(v float64) float64 {
 }
 
 func newWorstRow(m *Member) worstRow {
-	w := worstRow{ID: m.ID, Mark: m.Mark, Size: m.Size, Governing: m.Governing, Status: m.Status, Source: m.Source, Messages: m.Messages}
+	w := worstRow{ID: m.ID, Mark: m.Mark, Size: m.Size, Governing: m.Governing, Status: m.Status, Source: placeOf(m), Messages: m.Messages}
 	if m.Status == StatusError {
 		w.Ratio = "n/a"
 	} else {

@@ -143,7 +143,8 @@ const reportHTML = `<!DOCTYPE html>
 <main>
 <section id="summary"><h2>Summary</h2>
 <div class="sum-grid"><div>
-<p>Plan <b>{{.Plan}}</b>, checked {{.Date}}.<br>Design basis: {{range $i, $e := .Editions}}{{if $i}}; {{end}}{{$e}}{{end}}.</p>
+<p>Plan <b>{{.Plan}}</b>, checked {{.Date}}.<br>Design basis: {{range $i, $e := .Editions}}{{if $i}}; {{end}}{{$e}}{{end}}.<br>
+Positions along a member are measured from the face of its first bearing (the side toward the span), in feet-inches; locations are plan coordinates in feet-inches.</p>
 <div class="cards">
 <div class="card"><b>{{.Summary.Members}}</b>members</div>
 <div class="card pass"><b>{{.Summary.Pass}}</b>pass</div>
@@ -153,7 +154,7 @@ const reportHTML = `<!DOCTYPE html>
 </div>
 </div>
 <div><h3 class="tight">Worst members, one per mark</h3>
-<table id="worst"><tr><th>member</th><th>mark</th><th>count</th><th>size</th><th>max ratio</th><th>governing check</th><th>status</th><th>drawn</th></tr>
+<table id="worst"><tr><th>member</th><th>mark</th><th>count</th><th>size</th><th>max ratio</th><th>governing check</th><th>status</th><th>location on the plan</th></tr>
 {{range .Worst}}<tr><td>{{.ID}}</td><td>{{.Mark}}</td><td class="n">{{.Count}}</td><td>{{.Size}}</td><td class="n">{{.Ratio}}</td><td>{{.Governing}}</td><td class="status-{{.Status}}">{{.Status}}</td><td>{{.Source}}</td></tr>
 {{end}}</table>
 </div></div>
@@ -200,7 +201,7 @@ At each flagged bearing a connector is needed whose allowable load for the combi
 {{range .Uplift.Lines}}<tr><td>{{.Support}}</td><td>{{.Kind}}</td><td class="n">{{.Count}}</td><td class="n">{{.Flagged}}</td><td class="n">{{.Max}}</td><td class="n">{{.Total}}</td><td class="n">{{.Need}}</td><td class="n">{{.CD}}</td><td>{{.Combo}}</td><td>{{.Members}}</td></tr>
 {{end}}</table>
 <h3>By bearing</h3>
-<table id="uplift-bearings"><tr><th>member</th><th>mark</th><th>support line (bearing)</th><th>from member start</th><th>uplift, lb (ASD)</th><th>combination</th><th>CD</th><th></th></tr>
+<table id="uplift-bearings"><tr><th>member</th><th>mark</th><th>support line (bearing)</th><th>at, from face of first bearing</th><th>uplift, lb (ASD)</th><th>combination</th><th>CD</th><th></th></tr>
 {{range .Uplift.Rows}}<tr><td>{{.Member}}</td><td>{{.Mark}}</td><td>{{.Support}}</td><td class="n">{{.At}}</td><td class="n">{{if .Flagged}}<b>{{.Uplift}}</b>{{else}}{{.Uplift}}{{end}}</td><td>{{.Combo}}</td><td class="n">{{.CD}}</td><td>{{if .Flagged}}flagged{{else}}listed{{end}}</td></tr>
 {{end}}</table>{{if .Uplift.More}}<p>and {{.Uplift.More}} more bearings with uplift (see results.json, "uplift").</p>{{end}}
 {{else}}<p>No bearing has a net uplift reaction under any load combination.</p>{{end}}
@@ -232,7 +233,7 @@ At each flagged bearing a connector is needed whose allowable load for the combi
 {{range .After}}<p class="hint alt-rule">{{.}}</p>{{end}}</div>
 {{end}}
 {{if .Steps}}{{if .StepsDrawn}}<h4>Blocking rows: bottom-edge bending with the drawn rows, then each row added where the edge still failed (CL by NDS 2018 3.3.3)</h4>
-<table class="steps"><tr><th>rows added</th><th>lu, in</th><th>CL</th><th>ratio</th><th></th><th>rows added at, in</th></tr>
+<table class="steps"><tr><th>rows added</th><th>lu, in</th><th>CL</th><th>ratio</th><th></th><th>rows added at, from face of first bearing</th></tr>
 {{range .Steps}}<tr><td class="n">{{.Rows}}</td><td class="n">{{.Lu}}</td><td class="n">{{.CL}}</td><td class="n">{{.Ratio}}</td><td>{{.Verdict}}</td><td>{{.At}}</td></tr>{{end}}</table>{{else}}<h4>Blocking rows: bottom-edge bending for each number of rows tried (rows evenly spaced in every span; CL by NDS 2018 3.3.3)</h4>
 <table class="steps"><tr><th>rows per span</th><th>lu, in</th><th>CL</th><th>ratio</th><th></th></tr>
 {{range .Steps}}<tr><td class="n">{{.Rows}}</td><td class="n">{{.Lu}}</td><td class="n">{{.CL}}</td><td class="n">{{.Ratio}}</td><td>{{.Verdict}}</td></tr>{{end}}</table>{{end}}{{end}}

@@ -83,7 +83,7 @@ func buildUplift(r *Results) upliftSection {
 			support = unknownSupport
 		}
 		u.Rows = append(u.Rows, upliftRow{Member: b.Member, Mark: b.Mark,
-			Support: support + " (bearing " + strconv.Itoa(b.Bearing) + ")", At: FtIn(b.AtIn),
+			Support: support + " (bearing " + strconv.Itoa(b.Bearing) + ")", At: FtIn(b.FromFaceIn),
 			Uplift: lbText(b.UpliftLb), Combo: b.Combo, CD: fmtNum(b.CD), Flagged: b.Flagged})
 	}
 	return u

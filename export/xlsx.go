@@ -88,6 +88,7 @@ const (
 	cNum1           // 0.0
 	cRatio          // 0.00
 	cInt            // 0
+	cIn             // 0.00: inches (the formatting rule: in to 0.01)
 	nKinds
 )
 
@@ -112,7 +113,7 @@ func newStyles(f *excelize.File) (*styles, error) {
 	if err != nil {
 		return nil, err
 	}
-	formats := [nKinds]string{cText: "@", cNum1: "0.0", cRatio: "0.00", cInt: "0"}
+	formats := [nKinds]string{cText: "@", cNum1: "0.0", cRatio: "0.00", cInt: "0", cIn: "0.00"}
 	failFill := excelize.Fill{Type: "pattern", Pattern: 1, Color: []string{"F8CBAD"}}
 	for k := cellKind(0); k < nKinds; k++ {
 		fm := formats[k]

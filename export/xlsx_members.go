@@ -127,10 +127,11 @@ func memberRow(s *rowCells, m *Member) {
 	}
 	s.ratio(m.MaxRatio, len(m.Checks) > 0 || m.MaxRatio != 0)
 	s.text(intList(m.BlockingRowsPerSpan))
-	s.text(ftInList(m.BlockingAtIn))
+	s.text(ftInList(m.fromFaceList(m.BlockingAtIn)))
 	s.text(m.Status)
 	s.text(m.Layer)
 	s.text(m.Handle)
+	s.text(m.Location)
 	s.text(strings.Join(m.Messages, "; "))
 }
 

@@ -180,7 +180,7 @@ func TestMembersPartWellFormed(t *testing.T) {
 		if rows != len(r.Members)+1 {
 			t.Errorf("%d rows in the XML, want %d", rows, len(r.Members)+1)
 		}
-		if want := `<dimension ref="A1:Y5001"/>`; bytes.Contains(data, []byte("<dimension")) && !bytes.Contains(data, []byte(want)) {
+		if want := `<dimension ref="A1:Z5001"/>`; bytes.Contains(data, []byte("<dimension")) && !bytes.Contains(data, []byte(want)) {
 			t.Errorf("dimension is not %s", want)
 		}
 		return

@@ -16,9 +16,15 @@ var membersColumns = []column{
 	{"Bending top", 9}, {"Bending bottom", 9}, {"Shear", 9},
 	{"Defl. live", 9}, {"Defl. total", 9}, {"Bearing", 9},
 	{"Governing", 16}, {"Combination", 22}, {"Max ratio", 9},
-	{"Blocking rows / span", 11}, {"Blocking at (ft-in)", 24}, {"Status", 8},
-	{"Layer", 16}, {"Handle", 8}, {"Messages", 60},
+	{"Blocking rows / span", 11}, {BlockingAtHeader, 24}, {"Status", 8},
+	{"Layer", 16}, {"Handle", 8}, {"Location (plan, ft-in)", 48}, {"Messages", 60},
 }
+
+// The datum in the sheets' headers (DatumText).
+const (
+	BlockingAtHeader = "Blocking to add (ft-in from face of first bearing)"
+	PositionHeader   = "Position (ft-in from face of first bearing)"
+)
 
 // governingCheck returns the check that governs m: the largest ratio among
 // checks of kind m.Governing, or among all checks when that is empty.
@@ -81,7 +87,7 @@ func writeMarks(f *excelize.File, st *styles, r *Results) error {
 
 func writeBlocking(f *excelize.File, st *styles, r *Results) error {
 	s, err := newSheet(f, st, SheetBlocking, []column{
-		{"Row", 7}, {"Run", 7}, {"Span", 6}, {"Position (ft-in)", 14}, {"Position (in)", 10},
+		{"Row", 7}, {"Run", 7}, {"Span", 6}, {PositionHeader, 14}, {"From face of first bearing (in)", 10},
 		{"Pieces", 7}, {"Clear length of each piece (in)", 40}, {"Size", 7},
 		{"Drawn or add", 9}, {"Members", 40},
 	})
@@ -93,8 +99,8 @@ func writeBlocking(f *excelize.File, st *styles, r *Results) error {
 		s.text(b.ID)
 		s.text(b.Run)
 		s.integer(b.SpanIndex + 1)
-		s.text(FtIn(b.PositionIn))
-		s.num(b.PositionIn, cNum1)
+		s.text(FtIn(b.FromFaceIn))
+		s.num(b.FromFaceIn, cIn)
 		s.integer(b.Pieces)
 		s.text(numList(b.ClearIn))
 		s.text(b.Size)

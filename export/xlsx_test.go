@@ -107,8 +107,8 @@ func TestWriteXLSXCells(t *testing.T) {
 		{SheetMembers, "Governing", 5, "bending-bottom"},
 		{SheetMembers, "Combination", 5, "0.6D+0.6W"},
 		{SheetMembers, "Status", 5, "fail"},
-		{SheetMembers, "Spans (ft-in)", 2, `12'-0"`},      // 144 in
-		{SheetMembers, "Blocking at (ft-in)", 4, `6'-0"`}, // 72 in
+		{SheetMembers, "Spans (ft-in)", 2, `12'-0"`}, // 144 in
+		{SheetMembers, BlockingAtHeader, 4, `6'-0"`}, // 72 in, datum 0 in the fixture
 		{SheetMembers, "Species / grade", 2, "Douglas Fir-Larch No.2"},
 		{SheetMarks, "Count", 3, "2"},
 		{SheetBlocking, "Clear length of each piece (in)", 2, "14.5, 14.5"},

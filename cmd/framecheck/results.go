@@ -2,6 +2,7 @@ package main
 
 import (
 	"fmt"
+	"os"
 	"path/filepath"
 	"sort"
 	"strconv"
@@ -24,7 +25,7 @@ func exportResults(o *outcome, planName string) *export.Results {
 	if units == "" {
 		units = "in" // read as inches, with a DXF issue saying so
 	}
-	r := &export.Results{Schema: export.Schema, Plan: filepath.Base(planName), DrawingUnits: units}
+	r := &export.Results{Schema: export.Schema, Plan: filepath.Base(planName), DrawingUnits: units, Datum: export.DatumText}
 	ids := make([]string, len(plan.Members))
 	for k := range plan.Members {
 		ids[k] = plan.Members[k].ID
@@ -33,6 +34,7 @@ func exportResults(o *outcome, planName string) *export.Results {
 	r.Members = make([]export.Member, 0, len(plan.Members))
 	for k := range plan.Members {
 		em := conv.member(&plan.Members[k], &o.results[k], toInch)
+		placeMember(&em, &plan.Members[k])
 		if ri := plan.Members[k].Run; ri >= 0 && ri < len(plan.Runs) {
 			em.Run = plan.Runs[ri].ID
 		}
@@ -53,8 +55,85 @@ func exportResults(o *outcome, planName string) *export.Results {
 	}
 	r.Takeoff = exportTakeoff(o.takeoff)
 	r.Uplift = exportUplift(plan, o.results, o.project.Design.UpliftReportLb, toInch)
+	if len(r.Uplift.Bearings) > 0 {
+		datum := make(map[string]float64, len(r.Members))
+		for i := range r.Members {
+			datum[r.Members[i].ID] = r.Members[i].DatumIn
+		}
+		for i := range r.Uplift.Bearings {
+			u := &r.Uplift.Bearings[i]
+			u.FromFaceIn = u.AtIn - datum[u.Member]
+		}
+	}
 	r.Assumptions = assumptions(o)
 	return r
+}
+
+// datumIn is the datum of positions along m (export.DatumText): the face
+// of its first bearing toward the span, from Start, inches; Start itself
+// when m has no bearing.
+func datumIn(m *framing.Member) float64 {
+	if len(m.Bearings) == 0 {
+		return 0
+	}
+	b := m.Bearings[0]
+	if len(m.Bearings) == 1 && m.LengthIn > 0 && b.AtIn > m.LengthIn/2 {
+		return b.AtIn - b.LengthIn/2 // its only bearing is at the far end
+	}
+	return b.AtIn + b.LengthIn/2
+}
+
+// placeMember sets em's datum, its rows to add from the datum, and its
+// location: the drawing's file relative to the current folder, the handle
+// and layer, and the ends as plan coordinates in feet-inches.
+func placeMember(em *export.Member, m *framing.Member) {
+	em.DatumIn = datumIn(m)
+	if len(em.BlockingAtIn) > 0 {
+		em.BlockingFromFaceIn = make([]float64, len(em.BlockingAtIn))
+		for i, v := range em.BlockingAtIn {
+			em.BlockingFromFaceIn[i] = v - em.DatumIn
+		}
+	}
+	em.Location = locationText(m.Pos, [2]float64{m.Start.X, m.Start.Y}, [2]float64{m.End.X, m.End.Y})
+}
+
+// locationText is "plan.dxf handle 43 (layer JOIST-FLOOR), 49'-9 3/4",
+// 2'-0" to 61'-11 1/4", 2'-0"": the file relative to the current folder,
+// the handle (or DXF line when the drawing has none), the layer, and the
+// points (inches) in feet-inches plan coordinates.
+func locationText(p dxfimport.Pos, a, b [2]float64) string {
+	s := relToCwd(p.File)
+	switch {
+	case p.Handle != "":
+		s += " handle " + p.Handle
+	case p.Line > 0:
+		s += " line " + strconv.Itoa(p.Line)
+	}
+	if p.Layer != "" {
+		s += " (layer " + p.Layer + ")"
+	}
+	s = strings.TrimSpace(s)
+	pt := func(q [2]float64) string { return export.FtIn(q[0]) + ", " + export.FtIn(q[1]) }
+	if s != "" {
+		s += ", "
+	}
+	return s + pt(a) + " to " + pt(b)
+}
+
+// relToCwd names path relative to the current folder when it lies under
+// it (or is already relative), else as it is.
+func relToCwd(path string) string {
+	if path == "" || !filepath.IsAbs(path) {
+		return path
+	}
+	wd, err := os.Getwd()
+	if err != nil {
+		return path
+	}
+	if rel, err := filepath.Rel(wd, path); err == nil && !strings.HasPrefix(rel, "..") {
+		return rel
+	}
+	return path
 }
 
 // exportUplift lists every bearing that a net uplift reaction pulls off its
@@ -282,6 +361,7 @@ func exportRow(plan *framing.Plan, row framing.BlockingRow, ids []string, toInch
 	// Which span of the run's first member the row falls in, and where
 	// along that span from its first bearing.
 	first := &plan.Members[run.Members[0]]
+	er.FromFaceIn = row.AtIn - datumIn(first)
 	for i := 1; i < len(first.Bearings); i++ {
 		if row.AtIn <= first.Bearings[i].AtIn || i == len(first.Bearings)-1 {
 			er.SpanIndex = i - 1
