@@ -113,3 +113,22 @@ func TestOneDatumAcrossOutputs(t *testing.T) {
 		}
 	}
 }
+
+// TestPlanPointsFtIn: a finding's plan point in drawing units becomes
+// feet-inches plan coordinates: 256 in = 21'-4", 138 in = 11'-6"; in a
+// drawing in feet 21.5 ft = 21'-6" (arithmetic, written out).
+func TestPlanPointsFtIn(t *testing.T) {
+	for _, tc := range []struct {
+		msg    string
+		toInch float64
+		want   string
+	}{
+		{"M14 end (256.00, 138.00) reaches no support", 1, `M14 end (21'-4", 11'-6") reaches no support`},
+		{"M2 end (21.50, -1.25) reaches no support", 12, `M2 end (21'-6", -1'-3") reaches no support`},
+		{"no point here (layer A, 3)", 1, "no point here (layer A, 3)"},
+	} {
+		if got := planPointsFtIn(tc.msg, tc.toInch); got != tc.want {
+			t.Errorf("planPointsFtIn(%q) = %q, want %q", tc.msg, got, tc.want)
+		}
+	}
+}

@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"os"
 	"path/filepath"
+	"regexp"
 	"sort"
 	"strconv"
 	"strings"
@@ -35,6 +36,13 @@ func exportResults(o *outcome, planName string) *export.Results {
 	for k := range plan.Members {
 		em := conv.member(&plan.Members[k], &o.results[k], toInch)
 		placeMember(&em, &plan.Members[k])
+		if len(em.Messages) > 0 {
+			msgs := make([]string, len(em.Messages))
+			for i, msg := range em.Messages {
+				msgs[i] = planPointsFtIn(msg, toInch)
+			}
+			em.Messages = msgs
+		}
 		if ri := plan.Members[k].Run; ri >= 0 && ri < len(plan.Runs) {
 			em.Run = plan.Runs[ri].ID
 		}
@@ -95,6 +103,28 @@ func placeMember(em *export.Member, m *framing.Member) {
 		}
 	}
 	em.Location = locationText(m.Pos, [2]float64{m.Start.X, m.Start.Y}, [2]float64{m.End.X, m.End.Y})
+}
+
+// rePlanPoint is a plan point as framing's findings print it, in drawing
+// units to 0.01: "(256.00, 138.00)".
+var rePlanPoint = regexp.MustCompile(`\((-?[0-9]+\.[0-9]{2}), (-?[0-9]+\.[0-9]{2})\)`)
+
+// planPointsFtIn rewrites the plan points of a finding as feet-inches plan
+// coordinates ("(21'-4\", 11'-6\")"), toInch being the drawing's inches
+// per unit, so findings give locations as every other output does.
+func planPointsFtIn(msg string, toInch float64) string {
+	if !strings.Contains(msg, ".") {
+		return msg
+	}
+	return rePlanPoint.ReplaceAllStringFunc(msg, func(s string) string {
+		g := rePlanPoint.FindStringSubmatch(s)
+		x, err1 := strconv.ParseFloat(g[1], 64)
+		y, err2 := strconv.ParseFloat(g[2], 64)
+		if err1 != nil || err2 != nil {
+			return s
+		}
+		return "(" + export.FtIn(x*toInch) + ", " + export.FtIn(y*toInch) + ")"
+	})
 }
 
 // locationText is "plan.dxf handle 43 (layer JOIST-FLOOR), 49'-9 3/4",
