@@ -4,6 +4,7 @@ import (
 	"bufio"
 	"cmp"
 	"fmt"
+	"framecheck/export/internal/fmtx"
 	"html/template"
 	"slices"
 	"strconv"
@@ -165,7 +166,7 @@ func buildReport(r *Results, g *PlanGeometry, when time.Time) *reportPage {
 		p.Marks = append(p.Marks, markRow{
 			Mark: mk.Mark, Anchor: "mark-" + anchorSafe(mk.Mark), Size: mk.Size, Species: mk.Species, Grade: mk.Grade, Zone: mk.Zone,
 			Spacing: inOrNA(mk.SpacingIn), Spans: SpansText(mk.SpansIn, mk.OverhangsIn), Rows: intList(mk.BlockingRowsPerSpan),
-			Ratio: ratioText(mk.MaxRatio), Status: mk.Status, Band: bandClass(mk.MaxRatio, mk.Status), Count: mk.Count,
+			Ratio: fmtx.Ratio(mk.MaxRatio), Status: mk.Status, Band: bandClass(mk.MaxRatio, mk.Status), Count: mk.Count,
 		})
 	}
 	p.Uplift = buildUplift(r)
@@ -202,7 +203,7 @@ func newWorstRow(m *Member) worstRow {
 	if m.Status == StatusError {
 		w.Ratio = "n/a"
 	} else {
-		w.Ratio = ratioText(m.MaxRatio)
+		w.Ratio = fmtx.Ratio(m.MaxRatio)
 	}
 	return w
 }

@@ -1,6 +1,7 @@
 package export
 
 import (
+	"framecheck/export/internal/fmtx"
 	"math"
 	"regexp"
 	"strconv"
@@ -71,7 +72,7 @@ func buildCalcs(r *Results) []markCalc {
 	for i, mk := range r.Marks {
 		pos[mk.Mark] = i
 		calcs[i] = markCalc{Mark: mk.Mark, Anchor: "mark-" + anchorSafe(mk.Mark), Status: mk.Status,
-			Band: bandClass(mk.MaxRatio, mk.Status), Ratio: ratioText(mk.MaxRatio)}
+			Band: bandClass(mk.MaxRatio, mk.Status), Ratio: fmtx.Ratio(mk.MaxRatio)}
 		gov[i] = -1
 	}
 	for i := range r.Members {
@@ -196,7 +197,7 @@ func fillCalc(c *markCalc, r *Results, m *Member) {
 			t = [2]string{ch.Kind, ""}
 		}
 		cc := checkCalc{Title: t[0], Kind: ch.Kind, Combo: ch.Combo, Clause: t[1],
-			Actual: fmtNum(ch.Actual), Allowable: fmtNum(ch.Allowable), Unit: ch.Unit, Ratio: ratioText(ch.Ratio),
+			Actual: fmtx.Value(ch.Actual, ch.Unit), Allowable: fmtx.Value(ch.Allowable, ch.Unit), Unit: ch.Unit, Ratio: fmtx.RatioTrace(ch.Ratio),
 			Band: bandClass(ch.Ratio, "")}
 		switch {
 		case !finite(ch.Ratio):
@@ -230,7 +231,7 @@ func fillCalc(c *markCalc, r *Results, m *Member) {
 		if !finite(s.Ratio) || s.Ratio > 1 {
 			v = "fails"
 		}
-		row := stepRow{Rows: strconv.Itoa(s.RowsPerSpan), Lu: fmtNum(s.LuIn), CL: fmtNum(s.CL), Ratio: ratioText(s.Ratio), Verdict: v}
+		row := stepRow{Rows: strconv.Itoa(s.RowsPerSpan), Lu: fmtx.In(s.LuIn), CL: fmtx.Factor(s.CL), Ratio: fmtx.RatioTrace(s.Ratio), Verdict: v}
 		if s.AtIn != nil {
 			c.StepsDrawn = true
 			row.Rows, row.At = strconv.Itoa(len(s.AtIn)), ftInList(m.fromFaceList(s.AtIn))
@@ -298,7 +299,7 @@ func refaceText(s string, m *Member) string {
 }
 
 func newTraceLine(t TraceItem) traceLine {
-	l := traceLine{Name: t.Name, Formula: t.Formula, Subst: t.Subst, Value: fmtNum(t.Value), Unit: t.Unit, Source: t.Source}
+	l := traceLine{Name: t.Name, Formula: t.Formula, Subst: fmtx.GroupDigits(t.Subst), Value: fmtx.Value(t.Value, t.Unit), Unit: t.Unit, Source: t.Source}
 	if t.Subst == "" && wordy(t.Formula) {
 		l.Note, l.Formula = t.Formula, ""
 	}

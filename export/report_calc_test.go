@@ -1,6 +1,7 @@
 package export
 
 import (
+	"framecheck/export/internal/fmtx"
 	"math"
 	"strings"
 	"testing"
@@ -60,12 +61,12 @@ func TestWriteReportMarkTraces(t *testing.T) {
 				if l["sym"] != it.Name {
 					t.Errorf("%s %s line %d: symbol %q, want %q", mk.Mark, c.Kind, j, l["sym"], it.Name)
 				}
-				if !repCloseTo(l["val"], it.Value) {
+				if !repCloseToUnit(l["val"], it.Value, it.Unit) {
 					t.Errorf("%s %s %s: value %q, want %g", mk.Mark, c.Kind, it.Name, l["val"], it.Value)
 				}
 				if it.Subst != "" {
 					sawSubst = true
-					if l["s"] != it.Subst || l["f"] != it.Formula {
+					if l["s"] != fmtx.GroupDigits(it.Subst) || l["f"] != it.Formula {
 						t.Errorf("%s %s %s: %q = %q, want %q = %q", mk.Mark, c.Kind, it.Name, l["f"], l["s"], it.Formula, it.Subst)
 					}
 				}

@@ -1,6 +1,7 @@
 package export
 
 import (
+	"framecheck/export/internal/fmtx"
 	"html/template"
 	"strconv"
 )
@@ -8,7 +9,7 @@ import (
 // reportTemplate is the page. Section ids (summary, plan, schedule,
 // takeoff, uplift, calculations, mark-<mark>, assumptions, cautions) are stable:
 // the tests and any reader's links use them.
-var reportTemplate = template.Must(template.New("report").Funcs(template.FuncMap{"num": fmtNum, "bf": boardFeet, "limit": limitText}).Parse(reportHTML))
+var reportTemplate = template.Must(template.New("report").Funcs(template.FuncMap{"num": fmtNum, "val": fmtx.Value, "combo": fmtx.Combo, "bf": boardFeet, "limit": limitText}).Parse(reportHTML))
 
 // boardFeet prints board feet to 0.1, or "n/a".
 func boardFeet(v float64) string {
@@ -198,11 +199,11 @@ Reactions are at ASD level (ASCE 7-16 2.4.1 combinations), by statics of each me
 At each flagged bearing a connector is needed whose allowable load for the combination's load duration (CD, NDS 2018 Table 2.3.2: 1.6 for wind) is at least the uplift shown; the designer picks the part.</p>
 <h3>By support line</h3>
 <table id="uplift-lines"><tr><th>support line</th><th>kind</th><th>bearings with uplift</th><th>flagged</th><th>largest, lb</th><th>total, lb</th><th>required connector capacity per bearing, ASD, lb</th><th>CD</th><th>combination</th><th>members</th></tr>
-{{range .Uplift.Lines}}<tr><td>{{.Support}}</td><td>{{.Kind}}</td><td class="n">{{.Count}}</td><td class="n">{{.Flagged}}</td><td class="n">{{.Max}}</td><td class="n">{{.Total}}</td><td class="n">{{.Need}}</td><td class="n">{{.CD}}</td><td>{{.Combo}}</td><td>{{.Members}}</td></tr>
+{{range .Uplift.Lines}}<tr><td>{{.Support}}</td><td>{{.Kind}}</td><td class="n">{{.Count}}</td><td class="n">{{.Flagged}}</td><td class="n">{{.Max}}</td><td class="n">{{.Total}}</td><td class="n">{{.Need}}</td><td class="n">{{.CD}}</td><td>{{combo .Combo}}</td><td>{{.Members}}</td></tr>
 {{end}}</table>
 <h3>By bearing</h3>
 <table id="uplift-bearings"><tr><th>member</th><th>mark</th><th>support line (bearing)</th><th>at, from face of first bearing</th><th>uplift, lb (ASD)</th><th>combination</th><th>CD</th><th></th></tr>
-{{range .Uplift.Rows}}<tr><td>{{.Member}}</td><td>{{.Mark}}</td><td>{{.Support}}</td><td class="n">{{.At}}</td><td class="n">{{if .Flagged}}<b>{{.Uplift}}</b>{{else}}{{.Uplift}}{{end}}</td><td>{{.Combo}}</td><td class="n">{{.CD}}</td><td>{{if .Flagged}}flagged{{else}}listed{{end}}</td></tr>
+{{range .Uplift.Rows}}<tr><td>{{.Member}}</td><td>{{.Mark}}</td><td>{{.Support}}</td><td class="n">{{.At}}</td><td class="n">{{if .Flagged}}<b>{{.Uplift}}</b>{{else}}{{.Uplift}}{{end}}</td><td>{{combo .Combo}}</td><td class="n">{{.CD}}</td><td>{{if .Flagged}}flagged{{else}}listed{{end}}</td></tr>
 {{end}}</table>{{if .Uplift.More}}<p>and {{.Uplift.More}} more bearings with uplift (see results.json, "uplift").</p>{{end}}
 {{else}}<p>No bearing has a net uplift reaction under any load combination.</p>{{end}}
 </section>
@@ -217,17 +218,17 @@ At each flagged bearing a connector is needed whose allowable load for the combi
 <table class="inputs">{{range .Inputs}}<tr><th>{{.Key}}</th><td>{{.Value}}</td></tr>{{end}}</table>
 {{if .Bracing}}<h4>Bracing relied on</h4><ul class="bracing">{{range .Bracing}}<li>{{.}}</li>{{end}}</ul>{{end}}
 {{if .DesignValues}}<h4>Reference design values</h4>
-<table><tr><th>value</th><th></th><th>size</th><th>source</th></tr>{{range .DesignValues}}<tr><td>{{.Name}}</td><td class="n">{{num .Value}} {{.Unit}}</td><td>{{.Size}}</td><td>{{.Source}}</td></tr>{{end}}</table>{{end}}
+<table><tr><th>value</th><th></th><th>size</th><th>source</th></tr>{{range .DesignValues}}<tr><td>{{.Name}}</td><td class="n">{{val .Value .Unit}} {{.Unit}}</td><td>{{.Size}}</td><td>{{.Source}}</td></tr>{{end}}</table>{{end}}
 {{if .AreaLoads}}<h4>Loads on the tributary width</h4>
 {{range .AreaLoads}}<div class="eq"><span class="sym">w_{{.Load}}</span> = p trib = {{.Subst}} = <span class="val">{{.WPlf}}</span> plf</div>{{end}}{{end}}
 {{if .Combos}}<h4>Load combinations (ASCE 7-16 2.4.1, ASD)</h4>
 <table class="combos"><tr><th>combination</th><th>case</th><th>w = sum of factor x w</th><th>w, plf</th><th>CD (NDS 2018 Table 2.3.2)</th></tr>
-{{range .Combos}}<tr><td>{{.Combo}}</td><td>{{.Case}}</td><td>{{.Subst}}</td><td class="n">{{.WPlf}}</td><td class="n">{{.CD}}</td></tr>{{end}}</table>{{end}}
+{{range .Combos}}<tr><td>{{combo .Combo}}</td><td>{{.Case}}</td><td>{{.Subst}}</td><td class="n">{{.WPlf}}</td><td class="n">{{.CD}}</td></tr>{{end}}</table>{{end}}
 {{range .ComboProblems}}<p class="msgs">{{.}}</p>{{end}}
 {{if .Factors}}<h4>Adjustment factors</h4>
 {{range .Factors}}{{template "line" .}}{{end}}{{end}}
 <h4>Checks</h4>
-{{range .Checks}}<div class="check {{.Band}}" data-kind="{{.Kind}}"><h4>{{.Title}}, {{.Combo}}<span class="clause">{{.Clause}}</span></h4>
+{{range .Checks}}<div class="check {{.Band}}" data-kind="{{.Kind}}"><h4>{{.Title}}, {{combo .Combo}}<span class="clause">{{.Clause}}</span></h4>
 {{range .Lines}}{{template "line" .}}{{end}}
 <div class="result {{if eq .Verdict "OK"}}ok{{else}}ng{{end}}">{{.Actual}} {{.Unit}} / {{.Allowable}} {{.Unit}} = <span class="ratio">{{.Ratio}}</span> {{if eq .Verdict "OK"}}&le; 1.000{{else}}&gt; 1.000{{end}}: {{.Verdict}}</div>
 {{range .After}}<p class="hint alt-rule">{{.}}</p>{{end}}</div>
@@ -242,7 +243,7 @@ At each flagged bearing a connector is needed whose allowable load for the combi
 
 <section id="assumptions"><h2>Assumptions</h2>
 <h3>Code editions</h3><ul>{{range .Assumptions.CodeEditions}}<li>{{.}}</li>{{end}}</ul>
-<h3>Load combinations</h3><ul>{{range .Combos}}<li>{{.}}</li>{{end}}</ul>
+<h3>Load combinations</h3><ul>{{range .Combos}}<li>{{combo .}}</li>{{end}}</ul>
 {{if .Assumptions.Zones}}<h3>Load zones</h3>
 <table><tr><th>zone</th><th>use</th><th>D psf</th><th>L psf</th><th>Lr psf</th><th>S psf</th><th>W down psf</th><th>W up psf</th><th>ceiling</th><th>live limit</th><th>total limit</th></tr>
 {{range .Assumptions.Zones}}<tr><td>{{.Name}}</td><td>{{.Use}}</td><td class="n">{{num .DeadPsf}}</td><td class="n">{{num .LivePsf}}</td><td class="n">{{num .RoofLivePsf}}</td><td class="n">{{num .SnowPsf}}</td><td class="n">{{num .WindDownPsf}}</td><td class="n">{{num .WindUpPsf}}</td><td>{{.Ceiling}}</td><td class="n">{{limit .LiveDeflectionLimit}}</td><td class="n">{{limit .TotalDeflectionLimit}}</td></tr>
@@ -250,7 +251,7 @@ At each flagged bearing a connector is needed whose allowable load for the combi
 {{if .Assumptions.Switches}}<h3>Settings</h3>
 <table><tr><th>setting</th><th>value</th><th>from</th></tr>{{range .Assumptions.Switches}}<tr><td>{{.Name}}</td><td>{{.Value}} {{.Unit}}</td><td>{{.Source}}</td></tr>{{end}}</table>{{end}}
 {{if .Assumptions.DesignValues}}<h3>Design values used</h3>
-<table><tr><th>species</th><th>grade</th><th>size</th><th>value</th><th></th><th>source</th></tr>{{range .Assumptions.DesignValues}}<tr><td>{{.Species}}</td><td>{{.Grade}}</td><td>{{.Size}}</td><td>{{.Name}}</td><td class="n">{{num .Value}} {{.Unit}}</td><td>{{.Source}}</td></tr>{{end}}</table>{{end}}
+<table><tr><th>species</th><th>grade</th><th>size</th><th>value</th><th></th><th>source</th></tr>{{range .Assumptions.DesignValues}}<tr><td>{{.Species}}</td><td>{{.Grade}}</td><td>{{.Size}}</td><td>{{.Name}}</td><td class="n">{{val .Value .Unit}} {{.Unit}}</td><td>{{.Source}}</td></tr>{{end}}</table>{{end}}
 {{if .Assumptions.Notes}}<h3>Notes</h3><ul>{{range .Assumptions.Notes}}<li>{{.}}</li>{{end}}</ul>{{end}}
 </section>
 

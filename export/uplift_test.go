@@ -160,9 +160,11 @@ func TestUpliftSheetGroupsBySupportLine(t *testing.T) {
 	want := []struct {
 		support, count, flagged, max, total, need, cd string
 	}{
-		{"WALL handle 34", "3", "2", "212.5", "373.5", "212.5", "1.60"},
-		{"WALL handle 35", "2", "2", "212.5", "372.7", "212.5", "1.60"},
-		{"LEDGER handle 99", "1", "0", "12.3", "12.3", "", "1.60"},
+		// pounds shown to the nearest 1 (fmtx rules); the required
+		// capacity stored rounded up to the pound
+		{"WALL handle 34", "3", "2", "213", "374", "213", "1.60"},
+		{"WALL handle 35", "2", "2", "213", "373", "213", "1.60"},
+		{"LEDGER handle 99", "1", "0", "12", "12", "", "1.60"},
 	}
 	for i, w := range want {
 		row := rows[i+1]
@@ -222,17 +224,17 @@ func TestReportUpliftSection(t *testing.T) {
 	}
 	lines := repRows(repByID(doc, "uplift-lines"))
 	if len(lines) != 3 || lines[1][0] != "WALL handle 34" || lines[1][2] != "3" || lines[1][3] != "2" ||
-		lines[1][5] != "373.5" || lines[1][6] != "212.5" {
+		lines[1][5] != "374" || lines[1][6] != "213" { // demands up to the next pound
 		t.Errorf("support lines %q", lines)
 	}
 	rows := repRows(repByID(doc, "uplift-bearings"))
 	if len(rows) != 6 {
 		t.Fatalf("%d bearing rows, want a header and 5: %q", len(rows), rows)
 	}
-	if rows[1][0] != "M3" || rows[1][4] != "212.5" || rows[1][7] != "flagged" {
+	if rows[1][0] != "M3" || rows[1][4] != "213" || rows[1][7] != "flagged" {
 		t.Errorf("first bearing row %q, want M3's 212.5 lb flagged", rows[1])
 	}
-	if last := rows[5]; last[0] != "M2" || last[4] != "0.8" || last[7] != "listed" {
+	if last := rows[5]; last[0] != "M2" || last[4] != "1" || last[7] != "listed" {
 		t.Errorf("last bearing row %q, want M2's 0.8 lb listed", last)
 	}
 

@@ -89,6 +89,8 @@ const (
 	cRatio          // 0.00
 	cInt            // 0
 	cIn             // 0.00: inches (the formatting rule: in to 0.01)
+	cLb             // #,##0: pounds and psi to the nearest 1, grouped
+	cGen            // General: a value of any kind (the Inputs sheet)
 	nKinds
 )
 
@@ -113,7 +115,7 @@ func newStyles(f *excelize.File) (*styles, error) {
 	if err != nil {
 		return nil, err
 	}
-	formats := [nKinds]string{cText: "@", cNum1: "0.0", cRatio: "0.00", cInt: "0", cIn: "0.00"}
+	formats := [nKinds]string{cText: "@", cNum1: "0.0", cRatio: "0.00", cInt: "0", cIn: "0.00", cLb: "#,##0", cGen: "General"}
 	failFill := excelize.Fill{Type: "pattern", Pattern: 1, Color: []string{"F8CBAD"}}
 	for k := cellKind(0); k < nKinds; k++ {
 		fm := formats[k]

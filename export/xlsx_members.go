@@ -3,6 +3,7 @@ package export
 import (
 	"bytes"
 	"compress/flate"
+	"framecheck/export/internal/fmtx"
 	"hash/crc32"
 	"math"
 	"runtime"
@@ -103,8 +104,8 @@ func memberRow(s *rowCells, m *Member) {
 		s.text("")
 	}
 	s.text(FtIn(m.LengthIn))
-	s.num(m.SpacingIn, cNum1)
-	s.num(m.TribIn, cNum1)
+	s.num(m.SpacingIn, cIn)
+	s.num(m.TribIn, cIn)
 	s.text(m.Zone)
 	var kindRatio [6]float64
 	var kindSeen [6]bool
@@ -121,18 +122,35 @@ func memberRow(s *rowCells, m *Member) {
 	g, ok := governingCheck(m)
 	s.text(m.Governing)
 	if ok {
-		s.text(g.Combo)
+		s.text(fmtx.Combo(g.Combo))
 	} else {
 		s.text("")
 	}
 	s.ratio(m.MaxRatio, len(m.Checks) > 0 || m.MaxRatio != 0)
-	s.text(intList(m.BlockingRowsPerSpan))
+	rowsPerSpan(s, m.BlockingRowsPerSpan)
 	s.text(ftInList(m.fromFaceList(m.BlockingAtIn)))
 	s.text(m.Status)
 	s.text(m.Layer)
 	s.text(m.Handle)
 	s.text(m.Location)
 	s.text(strings.Join(m.Messages, "; "))
+}
+
+// rowsPerSpan adds the blocking rows per span as a number when every span
+// has the same count (or there is one span), as text ("1, 2") otherwise,
+// and empty when the member has none.
+func rowsPerSpan(s *rowCells, rows []int) {
+	if len(rows) == 0 {
+		s.text("")
+		return
+	}
+	for _, n := range rows[1:] {
+		if n != rows[0] {
+			s.text(intList(rows))
+			return
+		}
+	}
+	s.integer(rows[0])
 }
 
 // colNames are the column letters A, B, ... of the Members sheet.

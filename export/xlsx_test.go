@@ -105,7 +105,7 @@ func TestWriteXLSXCells(t *testing.T) {
 		{SheetMembers, "Bending bottom", 5, "1.12"},
 		{SheetMembers, "Shear", 5, ""},
 		{SheetMembers, "Governing", 5, "bending-bottom"},
-		{SheetMembers, "Combination", 5, "0.6D+0.6W"},
+		{SheetMembers, "Combination", 5, "0.6D + 0.6W"}, // as ASCE 7-16 2.4.1 writes it
 		{SheetMembers, "Status", 5, "fail"},
 		{SheetMembers, "Spans (ft-in)", 2, `12'-0"`}, // 144 in
 		{SheetMembers, BlockingAtHeader, 4, `6'-0"`}, // 72 in, datum 0 in the fixture

@@ -288,8 +288,9 @@ def check_uplift_sheet(ws, res):
             fail("Uplift %s: largest %r total %r, want %r %r" % (row[0], row[col["Largest uplift (lb)"]],
                                                                   row[col["Total uplift (lb)"]], g["max"], g["total"]))
         req = row[col[need]]
-        if g["flagged"] and (req is None or abs(req - g["max"]) > 1e-9 * max(1, g["max"])):
-            fail("Uplift %s: required capacity %r, want the largest uplift %r" % (row[0], req, g["max"]))
+        # the largest uplift rounded up to the pound: a demand is never rounded down
+        if g["flagged"] and (req is None or req != math.ceil(g["max"] - 1e-9)):
+            fail("Uplift %s: required capacity %r, want the largest uplift %r rounded up" % (row[0], req, g["max"]))
         if not g["flagged"] and req not in (None, ""):
             fail("Uplift %s: required capacity %r for a line with no flagged bearing" % (row[0], req))
         if row[col["CD"]] != 1.6:
