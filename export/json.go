@@ -392,6 +392,13 @@ func encodeResults(w *bufio.Writer, r *Results) error {
 	w.WriteString("{\n")
 	steps := []func() error{
 		func() error { return value("schema", schema) },
+		func() error {
+			if r.ToolVersion == "" {
+				return nil
+			}
+			return value("tool_version", r.ToolVersion)
+		},
+		func() error { return value("project", r.Project) },
 		func() error { return value("plan", r.Plan) },
 		func() error { return value("drawing_units", r.DrawingUnits) },
 		func() error {

@@ -21,6 +21,8 @@ type markCalc struct {
 	ComboProblems                             []string
 	Factors                                   []traceLine
 	Checks                                    []checkCalc
+	Others                                    []checkCalc // PackageGoverning: the checks not written out
+	FactorLine                                string      // PackageGoverning: the factors on one line
 	Steps                                     []stepRow
 	StepsDrawn                                bool     // rows drawn: the solver placed rows one at a time
 	Bracing                                   []string // the bracing relied on, edge by edge
@@ -46,6 +48,7 @@ type checkCalc struct {
 	Lines                                         []traceLine
 	Actual, Allowable, Unit, Ratio, Verdict, Band string
 	After                                         []string // printed after the result: the NDS 4.4.1.2 comparison
+	ratio                                         float64  // the ratio, for picking the governing check
 }
 
 // stepRow is one iteration of the blocking-row solver: rows per span, or
@@ -198,7 +201,7 @@ func fillCalc(c *markCalc, r *Results, m *Member) {
 		}
 		cc := checkCalc{Title: t[0], Kind: ch.Kind, Combo: ch.Combo, Clause: t[1],
 			Actual: fmtx.Value(ch.Actual, ch.Unit), Allowable: fmtx.Value(ch.Allowable, ch.Unit), Unit: ch.Unit, Ratio: fmtx.RatioTrace(ch.Ratio),
-			Band: bandClass(ch.Ratio, "")}
+			Band: bandClass(ch.Ratio, ""), ratio: ch.Ratio}
 		switch {
 		case !finite(ch.Ratio):
 			cc.Verdict = "not evaluated"

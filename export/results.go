@@ -1,5 +1,7 @@
 package export
 
+import "strings"
+
 // Schema is the value of results.json's "schema" key. Bump the number when
 // a key is renamed or removed; adding keys keeps it. Version 2 moved the
 // traces and factors of the members' checks into "calculations", written
@@ -37,7 +39,11 @@ const (
 // carries its own (often shared) slices.
 type Results struct {
 	Schema string `json:"schema"` // Schema; WriteJSON always writes Schema
-	Plan   string `json:"plan"`   // input file name
+	// ToolVersion is the framecheck version that wrote the results.
+	ToolVersion string `json:"tool_version,omitempty"`
+	// Project is the project file's [project] table.
+	Project ProjectInfo `json:"project"`
+	Plan    string      `json:"plan"` // input file name
 	// Datum states how positions along members are measured (DatumText).
 	Datum        string        `json:"datum,omitempty"`
 	DrawingUnits string        `json:"drawing_units"` // in | ft | mm | cm | m
@@ -48,6 +54,42 @@ type Results struct {
 	Takeoff      Takeoff       `json:"takeoff"`
 	Summary      Summary       `json:"summary"`
 	Assumptions  Assumptions   `json:"assumptions"`
+}
+
+// ProjectInfo is who and what the calculation is for (the project
+// file's [project] table), printed on every output.
+type ProjectInfo struct {
+	Name     string `json:"name"`
+	Number   string `json:"number"`
+	Address  string `json:"address"`
+	Designer string `json:"designer"`
+	Checker  string `json:"checker"`
+	Revision string `json:"revision"`
+	Date     string `json:"date"`
+}
+
+// Lines is the project's title block as text lines for the outputs:
+// "Garage loft, project 2026-041, 12 Orchard Lane" and "Designer A.
+// Designer; checker B. Checker; revision B; 2026-12-04", leaving out what
+// is empty; none when everything is.
+func (p ProjectInfo) Lines() []string {
+	join := func(parts ...string) string {
+		var keep []string
+		for _, s := range parts {
+			if s != "" && s != "project " && s != "designer " && s != "checker " && s != "revision " {
+				keep = append(keep, s)
+			}
+		}
+		return strings.Join(keep, ", ")
+	}
+	var out []string
+	if l := join(p.Name, "project "+p.Number, p.Address); l != "" {
+		out = append(out, l)
+	}
+	if l := join("designer "+p.Designer, "checker "+p.Checker, "revision "+p.Revision, p.Date); l != "" {
+		out = append(out, l)
+	}
+	return out
 }
 
 // ZonePiece is a stretch of a member in one load zone.

@@ -61,10 +61,23 @@ type checkRun struct {
 	units       string
 	size        bool
 	overlay     bool
+	pkg         string // report's calculation package: full | governing
+	pdf         bool   // also print report.pdf with a Chromium
+}
+
+// reportFlags adds --package and --pdf to f for c.
+func (c *checkRun) reportFlags(f *cmdFlags) {
+	f.StringVar(&c.pkg, "package", export.PackageFull, "report's calculation package: full (every check of each mark) or governing (each mark's governing check)")
+	f.BoolVar(&c.pdf, "pdf", false, "also write report.pdf beside report.html (needs Chromium or Chrome)")
+}
+
+// validPackage reports whether --package names a package.
+func (c *checkRun) validPackage() bool {
+	return c.pkg == "" || c.pkg == export.PackageFull || c.pkg == export.PackageGoverning
 }
 
 func runCheckCmd(args []string, stdout, stderr io.Writer) int {
-	f := newFlags("check", "framecheck check PLAN.dxf [-p PROJECT.toml] [-o OUTDIR] [--units U] [--size] [--overlay]",
+	f := newFlags("check", "framecheck check PLAN.dxf [-p PROJECT.toml] [-o OUTDIR] [--units U] [--size] [--overlay] [--package full|governing] [--pdf]",
 		`Reads the plan, finds the joists and their supports, checks every joist
 (NDS 2018 ASD, ASCE 7-16 combinations, IBC 2018 deflection limits), decides
 the blocking rows each run needs, and writes results.json, schedule.xlsx and
@@ -77,6 +90,7 @@ read, 2 unusable input or usage.`)
 	f.StringVar(&c.units, "units", "", "drawing units: in, ft, mm, cm or m (overrides the project file and $INSUNITS)")
 	f.BoolVar(&c.size, "size", false, "pick the lightest passing size from [sizing] candidates")
 	f.BoolVar(&c.overlay, "overlay", false, "also write the markup alone as an R12 overlay DXF")
+	c.reportFlags(f)
 	pos, code := f.parse(args, stdout, stderr)
 	if code >= 0 {
 		return code
@@ -87,6 +101,9 @@ read, 2 unusable input or usage.`)
 	c.planPath = pos[0]
 	if c.units != "" && !validUnit(c.units) {
 		return f.usageError(stderr, "--units %q: want in, ft, mm, cm or m", c.units)
+	}
+	if !c.validPackage() {
+		return f.usageError(stderr, "--package %q: want full or governing", c.pkg)
 	}
 	if c.outDir == "" {
 		base := strings.TrimSuffix(filepath.Base(c.planPath), filepath.Ext(c.planPath))
@@ -109,9 +126,13 @@ func runDemo(args []string, stdout, stderr io.Writer) int {
 check on them, so the whole job can be seen with no files at hand.`)
 	c := checkRun{}
 	f.StringVar(&c.outDir, "o", "framecheck-demo", "output folder")
+	c.reportFlags(f)
 	pos, code := f.parse(args, stdout, stderr)
 	if code >= 0 {
 		return code
+	}
+	if !c.validPackage() {
+		return f.usageError(stderr, "--package %q: want full or governing", c.pkg)
 	}
 	if len(pos) != 0 {
 		return f.usageError(stderr, "demo takes no arguments")
@@ -198,6 +219,13 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	if err != nil {
 		fmt.Fprintf(stderr, "framecheck: %v\n", err)
 		return exitUsage
+	}
+	if c.pdf {
+		if p, perr := writeReportPDF(filepath.Join(c.outDir, reportName)); perr != nil {
+			fmt.Fprintf(stderr, "framecheck: --pdf: %v\n", perr)
+		} else {
+			written = append(written, p)
+		}
 	}
 	printIssues(stderr, o.issues)
 	printSummary(stdout, c, proj, res, written)
@@ -355,7 +383,8 @@ func (c *checkRun) write(o *outcome, res *export.Results, stderr io.Writer) (wri
 		func() error { return export.WriteJSON(filepath.Join(stage, names[0]), res) },
 		func() error { return export.WriteXLSX(filepath.Join(stage, names[1]), res) },
 		func() error {
-			return export.WriteReport(filepath.Join(stage, names[4]), res, planGeometry(o), time.Now())
+			return export.WriteReportWith(filepath.Join(stage, names[4]), res, planGeometry(o), time.Now(),
+				export.ReportOptions{Package: c.pkg})
 		},
 		func() error { return export.Annotate(c.planPath, filepath.Join(stage, names[2]), mk) },
 	}

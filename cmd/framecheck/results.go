@@ -26,7 +26,8 @@ func exportResults(o *outcome, planName string) *export.Results {
 	if units == "" {
 		units = "in" // read as inches, with a DXF issue saying so
 	}
-	r := &export.Results{Schema: export.Schema, Plan: filepath.Base(planName), DrawingUnits: units, Datum: export.DatumText}
+	r := &export.Results{Schema: export.Schema, Plan: filepath.Base(planName), DrawingUnits: units, Datum: export.DatumText,
+		ToolVersion: toolVersion(), Project: exportInfo(o.project.Info)}
 	ids := make([]string, len(plan.Members))
 	for k := range plan.Members {
 		ids[k] = plan.Members[k].ID
