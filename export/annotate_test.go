@@ -146,7 +146,7 @@ func TestAnnotatePlans(t *testing.T) {
 				kind, layer string
 				n           int
 			}{{"LINE", LayerFail, 1}, {"LINE", LayerBlocking, 1}, {"TEXT", LayerLabel, 3}, {"TEXT", LayerUplift, 4},
-				{"TEXT", LayerID, 4}, {"TEXT", LayerKey, 8}} {
+				{"TEXT", LayerID, 4}, {"TEXT", LayerKey, 9}} {
 				if got := out.count(c.kind, c.layer); got != c.n {
 					t.Errorf("%d %s on %s, want %d", got, c.kind, c.layer, c.n)
 				}

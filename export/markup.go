@@ -30,6 +30,9 @@ type Markup struct {
 	UsedACI []int
 	// NoKey leaves the key out.
 	NoKey bool
+	// Stamp is the key's line naming the project and the tool version
+	// (MarkupStamp); "" leaves it out.
+	Stamp string
 }
 
 // Segment is a straight line in inches; Ref names what it marks (member or
@@ -70,7 +73,7 @@ const IDHeightFactor = 0.5
 // the members' extent, capped at 0.6 of the smallest positive spacing or
 // trib width so that labels stay between neighbouring joists.
 func MarkupFromResults(r *Results, toInch float64) Markup {
-	m := Markup{ToInch: toInch}
+	m := Markup{ToInch: toInch, Stamp: MarkupStamp(r)}
 	minGap := math.Inf(1)
 	lo := [2]float64{math.Inf(1), math.Inf(1)}
 	hi := [2]float64{math.Inf(-1), math.Inf(-1)}

@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 	"os"
+	"strings"
 )
 
 // keyItem is one entity of the key: a sample line in a layer's colour, or
@@ -40,6 +41,10 @@ func (m *Markup) key(colours map[string]int) []keyItem {
 	x := hi[0] + 4*h
 	y := hi[1]
 	items := []keyItem{{At: [2]float64{x, y}, Text: KeyTitle}}
+	if m.Stamp != "" {
+		y -= 1.8 * h
+		items = append(items, keyItem{At: [2]float64{x, y}, Text: m.Stamp})
+	}
 	y -= 1.8 * h
 	items = append(items, keyItem{At: [2]float64{x, y}, Text: KeyDatum})
 	for _, l := range markupLayers {
@@ -60,7 +65,37 @@ func (m *Markup) keyCount() int {
 	if m.NoKey {
 		return 0
 	}
-	return 2 + 2*(len(markupLayers)-1)
+	n := 2 + 2*(len(markupLayers)-1)
+	if m.Stamp != "" {
+		n++
+	}
+	return n
+}
+
+// KeyEntities is the number of entities the key puts on LayerKey.
+func (m *Markup) KeyEntities() int { return m.keyCount() }
+
+// MarkupStamp is the key's line naming the project and the tool:
+// "GARAGE LOFT 2026-041 REV B, FRAMECHECK V1.2.3".
+func MarkupStamp(r *Results) string {
+	v := r.ToolVersion
+	if v == "" {
+		v = "version not stamped"
+	}
+	var parts []string
+	for _, s := range []string{r.Project.Name, r.Project.Number} {
+		if s != "" {
+			parts = append(parts, s)
+		}
+	}
+	if r.Project.Revision != "" {
+		parts = append(parts, "REV "+r.Project.Revision)
+	}
+	s := "FRAMECHECK " + v
+	if len(parts) > 0 {
+		s = strings.Join(parts, " ") + ", " + s
+	}
+	return strings.ToUpper(s)
 }
 
 // usedSet is the set of ACI colours in cs, sign dropped (a negative colour

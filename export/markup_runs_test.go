@@ -108,3 +108,13 @@ func TestAnnotateColoursAndKey(t *testing.T) {
 		}
 	}
 }
+
+func TestMarkupStamp(t *testing.T) {
+	r := &Results{ToolVersion: "v1.2.3", Project: ProjectInfo{Name: "Garage loft", Number: "2026-041", Revision: "B"}}
+	if got, want := MarkupStamp(r), "GARAGE LOFT 2026-041 REV B, FRAMECHECK V1.2.3"; got != want {
+		t.Errorf("stamp %q, want %q", got, want)
+	}
+	if got := MarkupStamp(&Results{}); got != "FRAMECHECK VERSION NOT STAMPED" {
+		t.Errorf("stamp without version %q", got)
+	}
+}

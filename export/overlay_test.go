@@ -20,12 +20,12 @@ func TestWriteOverlay(t *testing.T) {
 			}
 			d := parseDXF(t, path)
 			// One label per run and mark (J1, J2, J3), the ids of the four
-			// members, one blocking note, the key: a title, the datum and
+			// members, one blocking note, the key: a title, the stamp, the datum and
 			// a sample line and text for each of our six other layers.
 			if d.count("LINE", LayerFail) != 1 || d.count("LINE", LayerBlocking) != 1 || d.count("TEXT", LayerLabel) != 3 ||
 				d.count("TEXT", LayerUplift) != 4 || d.count("TEXT", LayerID) != 4 || d.count("TEXT", LayerBlocking) != 1 ||
-				d.count("TEXT", LayerKey) != 8 || d.count("LINE", LayerKey) != 6 {
-				t.Errorf("markup entities %d/%d/%d/%d/%d/%d/%d/%d, want 1/1/3/4/4/1/8/6", d.count("LINE", LayerFail),
+				d.count("TEXT", LayerKey) != 9 || d.count("LINE", LayerKey) != 6 {
+				t.Errorf("markup entities %d/%d/%d/%d/%d/%d/%d/%d, want 1/1/3/4/4/1/9/6", d.count("LINE", LayerFail),
 					d.count("LINE", LayerBlocking), d.count("TEXT", LayerLabel), d.count("TEXT", LayerUplift),
 					d.count("TEXT", LayerID), d.count("TEXT", LayerBlocking), d.count("TEXT", LayerKey), d.count("LINE", LayerKey))
 			}

@@ -136,7 +136,7 @@ func TestUpliftSheetGroupsBySupportLine(t *testing.T) {
 		Support: "LEDGER handle 99", SupportLayer: "LEDGER", SupportHandle: "99", SupportKind: "ledger",
 		UpliftLb: 12.25, Combo: "0.6D+0.6W(up)", CD: 1.6})
 	f := writeFixtureXLSX(t, r)
-	rows, err := f.GetRows(SheetUplift)
+	rows, err := tableRowsOf(f, SheetUplift)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -195,7 +195,7 @@ func TestUpliftSheetGroupsBySupportLine(t *testing.T) {
 	// No uplift at all: one row saying so.
 	r.Uplift.Bearings = nil
 	f = writeFixtureXLSX(t, r)
-	rows, _ = f.GetRows(SheetUplift)
+	rows, _ = tableRowsOf(f, SheetUplift)
 	if len(rows) != 2 || rows[1][0] != "none" {
 		t.Errorf("no uplift: rows %q", rows)
 	}

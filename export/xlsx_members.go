@@ -262,8 +262,8 @@ type rowBlock struct {
 	raw, deflated []byte
 }
 
-// memberBlocks builds the rows of members (row numbers from 2, after the
-// header) in blocks on every core, and hands each block to emit in order.
+// memberBlocks builds the rows of members (row numbers from HeaderRow+1,
+// after the title rows and the header) in blocks on every core, and hands each block to emit in order.
 // Each block is deflated on its own and ended with a sync flush, so the
 // blocks joined make one deflate stream (RFC 1951, 3.2.3: a stream is a
 // series of blocks; only the last has BFINAL set) once a final empty
@@ -293,7 +293,7 @@ func memberBlocks(st *styles, members []Member, emit func(rowBlock) error) error
 				raw := make([]byte, 0, (hi-lo)*1600)
 				for k := lo; k < hi; k++ {
 					memberRow(&rc, &members[k])
-					raw = appendRow(raw, k+2, rc.store)
+					raw = appendRow(raw, k+HeaderRow+1, rc.store)
 				}
 				zbuf.Reset()
 				zw.Reset(&zbuf)

@@ -124,6 +124,8 @@ def main(demo, overlay_dir):
     if not any(e.dxf.text == "FRAMECHECK MARKUP KEY" for e in key) or \
             not all(any(e.dxf.text.startswith(n + " ") for e in key) for n in mine if n != "FC-KEY"):
         fail("the key lacks its title or a layer: %r" % [e.dxf.text for e in key])
+    if not any(("FRAMECHECK " + res.get("tool_version", "?")).upper() in e.dxf.text for e in key):
+        fail("the key does not stamp the tool version %r" % res.get("tool_version"))
     xs = []
     for e in src.modelspace():
         if e.dxftype() == "LINE":
@@ -171,19 +173,25 @@ def main(demo, overlay_dir):
         fail("sheets %r, want %r" % (wb.sheetnames, want))
     # Uplift sheet: one row per support line, bearing counts adding up to
     # results.json's list.
-    up_rows = [r for r in list(wb["Uplift"].iter_rows(values_only=True))[1:] if r and r[0]]
+    # Each sheet: two title rows (project, version), the header, the data.
+    skip = 3
+    for ws in wb.worksheets:
+        v = str(ws.cell(2, 1).value or "")
+        if "framecheck " not in v or res.get("tool_version", "") not in v:
+            fail("%s: row 2 %r does not stamp the tool version %r" % (ws.title, v, res.get("tool_version")))
+    up_rows = [r for r in list(wb["Uplift"].iter_rows(values_only=True))[skip:] if r and r[0]]
     lines = {b["support"] for b in up["bearings"]}
     if len(up_rows) != len(lines) or sum(r[2] for r in up_rows) != len(up["bearings"]):
         fail("Uplift sheet: %d lines, %d bearings; results.json %d lines, %d bearings" % (
             len(up_rows), sum(r[2] for r in up_rows), len(lines), len(up["bearings"])))
     rows = list(wb["Members"].iter_rows(values_only=True))
-    data = [r for r in rows[1:] if any(v not in (None, "") for v in r)]
+    data = [r for r in rows[skip:] if any(v not in (None, "") for v in r)]
     if len(data) != len(members):
         fail("Members sheet has %d rows, results.json %d members" % (len(data), len(members)))
     ids = [r[0] for r in data]
     if ids != [m["id"] for m in members]:
         fail("Members sheet ids differ from results.json")
-    marks = [r for r in list(wb["Marks"].iter_rows(values_only=True))[1:] if r and r[0]]
+    marks = [r for r in list(wb["Marks"].iter_rows(values_only=True))[skip:] if r and r[0]]
     if len(marks) != len(res["marks"]):
         fail("Marks sheet has %d rows, results.json %d marks" % (len(marks), len(res["marks"])))
     notes = " ".join(str(v) for r in wb["Notes"].iter_rows(values_only=True) for v in r if v)

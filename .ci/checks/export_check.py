@@ -17,6 +17,10 @@ OUR_LAYERS = ("FC-FAIL", "FC-ERROR", "FC-BLOCKING-ADD", "FC-LABEL", "FC-UPLIFT",
 TEXT_LAYERS = ("FC-LABEL", "FC-UPLIFT", "FC-ID")
 LINE_LAYERS = ("FC-FAIL",)  # the others hold lines and texts
 failures = []
+# Every sheet starts with the project's title block (two rows), then the
+# header row; the table's data follow it.
+TITLE_ROWS = 2
+HEAD = TITLE_ROWS + 1
 
 
 def fail(msg):
@@ -204,22 +208,24 @@ def check_xlsx(out):
         "Takeoff": 1 + len(t["joists"]) + len(t["blocking"]) + len(t["hangers"]) + 4,
     }
     for name, n in rows.items():
-        if wb[name].max_row != n:
-            fail("%s: %d rows, want %d" % (name, wb[name].max_row, n))
+        if wb[name].max_row != n + TITLE_ROWS:
+            fail("%s: %d rows, want %d" % (name, wb[name].max_row, n + TITLE_ROWS))
     for ws in wb.worksheets:
-        if ws.freeze_panes != "A2":
-            fail("%s: frozen panes %s, want A2" % (ws.title, ws.freeze_panes))
+        if ws.freeze_panes != "A%d" % (HEAD + 1):
+            fail("%s: frozen panes %s, want A%d" % (ws.title, ws.freeze_panes, HEAD + 1))
+        if not str(ws.cell(1, 1).value or ""):
+            fail("%s: no title block in row 1" % ws.title)
         # excelize writes the range absolute ($A$1:$Y$5); both forms are valid.
-        if not (ws.auto_filter.ref or "").replace("$", "").startswith("A1:"):
+        if not (ws.auto_filter.ref or "").replace("$", "").startswith("A%d:" % HEAD):
             fail("%s: no autofilter (%r)" % (ws.title, ws.auto_filter.ref))
     ms = wb["Members"]
-    head = [c.value for c in ms[1]]
+    head = [c.value for c in ms[HEAD]]
     col = {h: i for i, h in enumerate(head)}
     for h in ("ID", "Mark", "Spans (ft-in)", "Max ratio", "Status", "Governing", "Combination"):
         if h not in col:
             fail("Members: no column %r" % h)
             return
-    by_id = {row[col["ID"]].value: row for row in ms.iter_rows(min_row=2)}
+    by_id = {row[col["ID"]].value: row for row in ms.iter_rows(min_row=HEAD + 1)}
     for m in res["members"]:
         row = by_id.get(m["id"])
         if row is None:
@@ -241,7 +247,7 @@ def check_xlsx(out):
         fail("Members %s: span text %r, want 12'-0\"" % (first["id"], by_id[first["id"]][col["Spans (ft-in)"]].value))
     tk = wb["Takeoff"]
     j = t["joists"][0]
-    r2 = [c.value for c in tk[2]]
+    r2 = [c.value for c in tk[HEAD + 1]]
     if r2[0] != "Joists" or r2[1] != j["size"] or r2[4] != j["count"] or abs(r2[5] - j["board_feet"]) > 1e-9:
         fail("Takeoff row 2 %s, want joists %s" % (r2, j))
     notes = " ".join(str(c.value) for row in wb["Notes"].iter_rows() for c in row)
@@ -260,7 +266,7 @@ def check_uplift_sheet(ws, res):
         g["flagged"] += 1 if b["flagged"] else 0
         g["max"] = max(g["max"], b["uplift_lb"])
         g["total"] += b["uplift_lb"]
-    rows = list(ws.iter_rows(values_only=True))
+    rows = list(ws.iter_rows(values_only=True))[TITLE_ROWS:]
     head = rows[0]
     col = {h: i for i, h in enumerate(head)}
     need = "Required connector capacity per bearing, ASD (lb)"

@@ -64,9 +64,10 @@ func TestOneDatumAcrossOutputs(t *testing.T) {
 	defer f.Close()
 	col := func(sheet, head string) (int, [][]string) {
 		rows, err := f.GetRows(sheet)
-		if err != nil || len(rows) == 0 {
+		if err != nil || len(rows) < export.HeaderRow {
 			t.Fatalf("%s: %v", sheet, err)
 		}
+		rows = rows[export.TitleRows:] // the header first
 		for c, h := range rows[0] {
 			if h == head {
 				return c, rows

@@ -86,8 +86,8 @@ func write(td, out string, stdout io.Writer) error {
 			export.LayerLabel:    len(m.Labels),
 			export.LayerUplift:   len(m.Uplifts),
 			export.LayerID:       len(m.IDs),
-			// the key: title, datum, a sample line and a text per layer
-			export.LayerKey: 2 + 2*6,
+			// the key: title, stamp, datum, a sample line and a text per layer
+			export.LayerKey: m.KeyEntities(),
 		},
 		Overlay: filepath.Join(out, "overlay.dxf"),
 		XLSX:    filepath.Join(out, "schedule.xlsx"),
