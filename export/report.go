@@ -309,6 +309,14 @@ func governingOnly(c *markCalc) {
 	}
 	c.Checks = []checkCalc{c.Checks[g]}
 	c.DesignValues = nil
+	// the datum is stated once, in the summary
+	inputs := c.Inputs[:0:0]
+	for _, kv := range c.Inputs {
+		if kv.Key != "Positions along the member" {
+			inputs = append(inputs, kv)
+		}
+	}
+	c.Inputs = inputs
 	// the factors on one line, their sources after them
 	var parts, srcs []string
 	seen := map[string]bool{}

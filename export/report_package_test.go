@@ -89,3 +89,22 @@ func parseF(s string) float64 {
 	v, _ := strconv.ParseFloat(strings.ReplaceAll(strings.TrimSpace(s), ",", ""), 64)
 	return v
 }
+
+// TestMathHTML: the engine's names as NDS 2018 writes them (F′b with the
+// prime before the subscript, Fc⊥, ℓu, Δ), √ and powers; text is escaped.
+func TestMathHTML(t *testing.T) {
+	for _, tc := range []struct{ in, want string }{
+		{"Fb'", "F′<sub>b</sub>"},
+		{"Fb*", "F<sub>b</sub>*"},
+		{"fc_perp / Fc_perp'", "f<sub>c⊥</sub> / F′<sub>c⊥</sub>"},
+		{"delta / delta_allow", "Δ / Δ<sub>allow</sub>"},
+		{"sqrt(le d / b^2)", "√(ℓ<sub>e</sub> d / b²)"},
+		{"1.20 Emin' / RB^2", "1.20 E′<sub>min</sub> / R<sub>B</sub>²"},
+		{"w_Lr", "w<sub>Lr</sub>"},
+		{"a < b", "a &lt; b"},
+	} {
+		if got := string(mathHTML(tc.in)); got != tc.want {
+			t.Errorf("mathHTML(%q) = %q, want %q", tc.in, got, tc.want)
+		}
+	}
+}

@@ -9,7 +9,7 @@ import (
 // reportTemplate is the page. Section ids (summary, plan, schedule,
 // takeoff, uplift, calculations, mark-<mark>, assumptions, cautions) are stable:
 // the tests and any reader's links use them.
-var reportTemplate = template.Must(template.New("report").Funcs(template.FuncMap{"num": fmtNum, "val": fmtx.Value, "combo": fmtx.Combo, "bf": boardFeet, "limit": limitText}).Parse(reportHTML))
+var reportTemplate = template.Must(template.New("report").Funcs(template.FuncMap{"num": fmtNum, "val": fmtx.Value, "combo": fmtx.Combo, "math": mathHTML, "mathn": numHTML, "bf": boardFeet, "limit": limitText}).Parse(reportHTML))
 
 // boardFeet prints board feet to 0.1, or "n/a".
 func boardFeet(v float64) string {
@@ -69,6 +69,7 @@ h3.tight{margin-top:0}
 .calc h3{font-size:16px}
 .eq{font-family:"DejaVu Sans Mono",Consolas,monospace;font-size:12.5px;margin:1px 0 1px 12px;white-space:pre-wrap}
 .eq .sym{font-weight:700}
+sub,sup{line-height:0;font-size:75%}
 .eq .val{font-weight:700}
 .eq .src{color:var(--muted);font-family:system-ui,sans-serif;font-size:11.5px;margin-left:10px}
 .eq .note{color:var(--muted)}
@@ -108,8 +109,8 @@ h3.tight{margin-top:0}
   .pkg-governing #assumptions{columns:2;column-gap:16px;font-size:8pt}
   .pkg-governing #assumptions h2{column-span:all}
   .pkg-governing .calc{break-before:auto;border-top:2px solid var(--ink);margin-top:10px;font-size:8pt;line-height:1.3}
-  .pkg-governing .calc h3{font-size:11pt;margin:4px 0 2px}
-  .pkg-governing .calc h4{font-size:9.5pt;margin:6px 0 2px}
+  .pkg-governing .calc h3{font-size:10.5pt;margin:2px 0 1px}
+  .pkg-governing .calc h4{font-size:9pt;margin:4px 0 1px}
   .pkg-governing .calc table{font-size:8pt;margin:2px 0 4px}
   .pkg-governing .calc th,.pkg-governing .calc td{padding:1px 5px}
   .pkg-governing .calc .eq{font-size:7.5pt;margin-left:6px;line-height:1.3}
@@ -262,7 +263,7 @@ At each flagged bearing a connector is needed whose allowable load for the combi
 {{if .DesignValues}}<h4>Reference design values</h4>
 <table><tr><th>value</th><th></th><th>size</th><th>source</th></tr>{{range .DesignValues}}<tr><td>{{.Name}}</td><td class="n">{{val .Value .Unit}} {{.Unit}}</td><td>{{.Size}}</td><td>{{.Source}}</td></tr>{{end}}</table>{{end}}
 {{if .AreaLoads}}<h4>Loads on the tributary width</h4>
-<div class="loads">{{range .AreaLoads}}<div class="eq"><span class="sym">w_{{.Load}}</span> = p trib = {{.Subst}} = <span class="val">{{.WPlf}}</span> plf</div>{{end}}</div>{{end}}
+<div class="loads">{{range .AreaLoads}}<div class="eq"><span class="sym">w<sub>{{.Load}}</sub></span> = p trib = {{.Subst}} = <span class="val">{{.WPlf}}</span> plf</div>{{end}}</div>{{end}}
 {{if .Combos}}<h4>Load combinations (ASCE 7-16 2.4.1, ASD)</h4>
 <table class="combos"><tr><th>combination</th><th>case</th><th>w = sum of factor x w</th><th>w, plf</th><th>CD (NDS 2018 Table 2.3.2)</th></tr>
 {{range .Combos}}<tr><td>{{combo .Combo}}</td><td>{{.Case}}</td><td>{{.Subst}}</td><td class="n">{{.WPlf}}</td><td class="n">{{.CD}}</td></tr>{{end}}</table>{{end}}
@@ -273,7 +274,7 @@ At each flagged bearing a connector is needed whose allowable load for the combi
 <h4>{{if $.Governing}}Governing check{{else}}Checks{{end}}</h4>
 {{range .Checks}}<div class="check {{.Band}}" data-kind="{{.Kind}}"><h4>{{.Title}}, {{combo .Combo}}<span class="clause">{{.Clause}}</span></h4>
 {{range .Lines}}{{template "line" .}}{{end}}
-<div class="result {{if eq .Verdict "OK"}}ok{{else}}ng{{end}}">{{.Actual}} {{.Unit}} / {{.Allowable}} {{.Unit}} = <span class="ratio">{{.Ratio}}</span> {{if eq .Verdict "OK"}}&le; 1.000{{else}}&gt; 1.000{{end}}: {{.Verdict}}</div>
+<div class="result {{if eq .Verdict "OK"}}ok{{else}}ng{{end}}">{{.Actual}} {{mathn .Unit}} / {{.Allowable}} {{mathn .Unit}} = <span class="ratio">{{.Ratio}}</span> {{if eq .Verdict "OK"}}&le; 1.000{{else}}&gt; 1.000{{end}}: {{.Verdict}}</div>
 {{range .After}}<p class="hint alt-rule">{{.}}</p>{{end}}</div>
 {{end}}
 {{if .Others}}<h4>Other checks (not governing)</h4>
@@ -314,4 +315,4 @@ At each flagged bearing a connector is needed whose allowable load for the combi
 <div class="plan-wrap">{{.PlanSVG}}<div id="details"></div></div>
 <p class="hint">North is up. Scroll to zoom, drag to pan, double-click to reset; hover or click a member for its details.</p>
 </section>{{end}}
-{{define "line"}}<div class="eq"><span class="sym">{{.Name}}</span>{{if .Formula}} = <span class="f">{{.Formula}}</span>{{end}}{{if .Subst}} = <span class="s">{{.Subst}}</span>{{end}} = <span class="val">{{.Value}}</span>{{if .Unit}} <span class="u">{{.Unit}}</span>{{end}}{{if .Note}} <span class="note">({{.Note}})</span>{{end}}{{if .Source}}<span class="src">{{.Source}}</span>{{end}}</div>{{end}}`
+{{define "line"}}<div class="eq"><span class="sym">{{math .Name}}</span>{{if .Formula}} = <span class="f">{{math .Formula}}</span>{{end}}{{if .Subst}} = <span class="s">{{mathn .Subst}}</span>{{end}} = <span class="val">{{.Value}}</span>{{if .Unit}} <span class="u">{{mathn .Unit}}</span>{{end}}{{if .Note}} <span class="note">({{.Note}})</span>{{end}}{{if .Source}}<span class="src">{{.Source}}</span>{{end}}</div>{{end}}`
