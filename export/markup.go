@@ -119,10 +119,11 @@ func MarkupFromResults(r *Results, toInch float64) Markup {
 		h = 0.6 * minGap
 	}
 	m.TextHeightIn = h
-	m.Labels, m.IDs = runLabels(r, ends, h)
+	var side []float64
+	m.Labels, m.IDs, side = runLabels(r, ends, h)
 	m.Reasons = errorReasons(r, ends, h)
 	m.BlockingNotes = blockingNotes(r, toInch, h)
-	m.Uplifts = upliftLabels(r, toInch, h)
+	m.Uplifts = upliftLabels(r, toInch, h, side)
 	return m
 }
 
@@ -157,7 +158,7 @@ func normal(a, b [2]float64) [2]float64 {
 // the member's line by 0.65 text height to its left as the text reads
 // (common practice, no source: a text's width taken as 0.9 of its height
 // per character).
-func upliftLabels(r *Results, toInch, h float64) []Label {
+func upliftLabels(r *Results, toInch, h float64, side []float64) []Label {
 	n := 0
 	for i := range r.Uplift.Bearings {
 		if r.Uplift.Bearings[i].Flagged {
@@ -171,23 +172,26 @@ func upliftLabels(r *Results, toInch, h float64) []Label {
 	// The bearings come in member order (as the command writes them): find
 	// each member by walking the members alongside, and only for bearings
 	// out of that order by a map of every member.
-	var byID map[string]*Member
+	var byID map[string]int
 	next := 0
-	member := func(id string) *Member {
+	member := func(id string) int {
 		if byID == nil {
 			for j := next; j < len(r.Members); j++ {
 				if r.Members[j].ID == id {
 					next = j
-					return &r.Members[j]
+					return j
 				}
 			}
 			// out of order (or unknown): from here on, the map
-			byID = make(map[string]*Member, len(r.Members))
+			byID = make(map[string]int, len(r.Members))
 			for k := range r.Members {
-				byID[r.Members[k].ID] = &r.Members[k]
+				byID[r.Members[k].ID] = k
 			}
 		}
-		return byID[id]
+		if k, ok := byID[id]; ok {
+			return k
+		}
+		return -1
 	}
 	for i := range r.Uplift.Bearings {
 		u := &r.Uplift.Bearings[i]
@@ -200,7 +204,8 @@ func upliftLabels(r *Results, toInch, h float64) []Label {
 		}
 		text := "uplift " + strconv.FormatFloat(math.Ceil(u.UpliftLb), 'f', 0, 64) + " lb"
 		ang := 0.0
-		if mb := member(u.Member); mb != nil {
+		if k := member(u.Member); k >= 0 {
+			mb := &r.Members[k]
 			a, b := inches(mb.Start, mb.End, mb.StartIn, mb.EndIn, toInch)
 			ang = readableAngle(a, b)
 			// toward the member's midpoint
@@ -212,7 +217,11 @@ func upliftLabels(r *Results, toInch, h float64) []Label {
 				at = [2]float64{at[0] + dx/dist*off, at[1] + dy/dist*off}
 			}
 			nv := normal(a, b)
-			at = [2]float64{at[0] + 0.65*h*nv[0], at[1] + 0.65*h*nv[1]}
+			d := 0.65 * h
+			if k < len(side) && side[k] > 0 {
+				d = -d // the run's label is on that side
+			}
+			at = [2]float64{at[0] + d*nv[0], at[1] + d*nv[1]}
 		}
 		out = append(out, Label{At: at, AngleDeg: ang, Text: text})
 	}

@@ -9,14 +9,14 @@ import (
 )
 
 // CheckWord is how the markup names a governing check kind: BENDING,
-// BENDING BOTTOM EDGE, SHEAR, DEFL LIVE, DEFL TOTAL, DEFL LONG-TERM,
+// BENDING (BOTTOM) for the bottom edge in compression, SHEAR, DEFL LIVE, DEFL TOTAL, DEFL LONG-TERM,
 // BEARING; other kinds upper-cased.
 func CheckWord(kind string) string {
 	switch kind {
 	case KindBendingTop:
 		return "BENDING"
 	case KindBendingBottom:
-		return "BENDING BOTTOM EDGE"
+		return "BENDING (BOTTOM)"
 	case KindShear:
 		return "SHEAR"
 	case KindDeflectionLive:
@@ -100,8 +100,10 @@ func ErrorReason(msg string) string {
 // joist lines, on neither. A member with no neighbour gets it half its
 // spacing (at least 1.2 text heights) to the side. It also places each
 // member's id at its midpoint, 1.1 id heights off its line, on the side
-// away from a label.
-func runLabels(r *Results, ends [][2][2]float64, h float64) (labels, ids []Label) {
+// away from a label. A label wider than 0.7 of its member gets a smaller
+// height. side[i] is +1 when a label lies on member i's +n side, -1 on its
+// -n side, 0 when none does.
+func runLabels(r *Results, ends [][2][2]float64, h float64) (labels, ids []Label, side []float64) {
 	type group struct{ idx []int }
 	var order []string
 	groups := map[string]*group{}
@@ -183,7 +185,16 @@ func runLabels(r *Results, ends [][2][2]float64, h float64) (labels, ids []Label
 			labelSide[k] = -1
 		}
 		at := [2]float64{mid[0] + shift*nv[0], mid[1] + shift*nv[1]}
-		labels = append(labels, Label{At: at, AngleDeg: readableAngle(a, b), Text: RunLabel(&r.Members[worst])})
+		text := RunLabel(&r.Members[worst])
+		lb := Label{At: at, AngleDeg: readableAngle(a, b), Text: text}
+		// No wider than 0.7 of the member, so the labels of bays side by
+		// side stay apart (a character taken as 0.9 of the text height).
+		if lenIn := math.Hypot(b[0]-a[0], b[1]-a[1]); lenIn > 0 {
+			if fit := 0.7 * lenIn / (0.9 * float64(len(text))); fit < h {
+				lb.HeightIn = fit
+			}
+		}
+		labels = append(labels, lb)
 	}
 	hid := IDHeightFactor * h
 	for i := range r.Members {
@@ -197,7 +208,7 @@ func runLabels(r *Results, ends [][2][2]float64, h float64) (labels, ids []Label
 		mid := [2]float64{(a[0]+b[0])/2 + d*nv[0], (a[1]+b[1])/2 + d*nv[1]}
 		ids = append(ids, Label{At: mid, AngleDeg: readableAngle(a, b), Text: r.Members[i].ID, HeightIn: hid})
 	}
-	return labels, ids
+	return labels, ids, labelSide
 }
 
 // alongside reports whether the lines p and q are parallel (within 1

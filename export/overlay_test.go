@@ -70,7 +70,7 @@ func TestMarkupFromResults(t *testing.T) {
 	wantLabels := []Label{
 		{At: [2]float64{72, 0}, Text: "J1 2x8@16 DEFL TOTAL 0.52"},
 		{At: [2]float64{72, 32}, Text: "J2 2x8@16 DEFL TOTAL 0.69"},
-		{At: [2]float64{72, 48}, Text: "J3 2x8@16 BENDING BOTTOM EDGE 1.12"},
+		{At: [2]float64{72, 48}, Text: "J3 2x8@16 BENDING (BOTTOM) 1.12"},
 	}
 	if len(m.Labels) != len(wantLabels) {
 		t.Fatalf("labels %+v, want %d", m.Labels, len(wantLabels))

@@ -135,7 +135,7 @@ def main(demo, overlay_dir):
     if min(e.dxf.insert.x for e in key) <= max(xs):
         fail("the key overlaps the plan (x %.1f <= %.1f)" % (min(e.dxf.insert.x for e in key), max(xs)))
     # Labels beside the joist lines, not on them: the centre of every label
-    # (and error reason) is farther than half its height from every joist.
+    # (error reason, uplift) is farther than half its height from every joist.
     joists = [(e.dxf.start, e.dxf.end) for e in src.modelspace().query("LINE")
               if e.dxf.layer.upper().startswith("JOIST")]
     def dist(p, a, b):
@@ -143,7 +143,8 @@ def main(demo, overlay_dir):
         dx, dy = bx - ax, by - ay
         t = 0.0 if dx == dy == 0 else max(0.0, min(1.0, ((p.x - ax) * dx + (p.y - ay) * dy) / (dx * dx + dy * dy)))
         return ((p.x - ax - t * dx) ** 2 + (p.y - ay - t * dy) ** 2) ** 0.5
-    for e in labels + list(doc.modelspace().query('TEXT[layer=="FC-ERROR"]')):
+    for e in labels + list(doc.modelspace().query('TEXT[layer=="FC-ERROR"]')) + \
+            list(doc.modelspace().query('TEXT[layer=="FC-UPLIFT"]')):
         p = e.dxf.align_point
         d = min(dist(p, a, b) for a, b in joists)
         if d <= e.dxf.height / 2:
