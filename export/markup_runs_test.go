@@ -118,3 +118,29 @@ func TestMarkupStamp(t *testing.T) {
 		t.Errorf("stamp without version %q", got)
 	}
 }
+
+// TestOverlayAvoidsPlanColours: the overlay, written apart from the plan,
+// takes the plan's layer colours from Markup.UsedACI and avoids them too.
+func TestOverlayAvoidsPlanColours(t *testing.T) {
+	m := fixtureMarkup(t, 1)
+	m.UsedACI = []int{1, 6, 5, -32} // a layer switched off still counts
+	path := filepath.Join(t.TempDir(), "o.dxf")
+	if err := WriteOverlay(path, m, "in"); err != nil {
+		t.Fatal(err)
+	}
+	d := parseDXF(t, path)
+	seen := 0
+	for _, e := range d.Ents {
+		if e.Kind != "LAYER" || !isOurLayer(e.Layer) {
+			continue
+		}
+		seen++
+		switch c := e.Values[62][0]; c {
+		case "1", "6", "5", "32":
+			t.Errorf("overlay layer %s has the plan's colour %s", e.Layer, c)
+		}
+	}
+	if seen != len(markupLayers) {
+		t.Errorf("%d of our layers in the overlay, want %d", seen, len(markupLayers))
+	}
+}
