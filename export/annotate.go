@@ -6,6 +6,7 @@ import (
 	"errors"
 	"fmt"
 	"io"
+	"math"
 	"os"
 	"strconv"
 	"strings"
@@ -22,12 +23,17 @@ type dxfFacts struct {
 	HasEntities  bool
 	HasEOF       bool
 	Layers       map[string]bool // upper-case layer names in the LAYER table
-	LayerTable   string          // handle of the LAYER table head
-	Layer0LType  string          // linetype of layer "0"
-	Layer0Plot   string          // group 390 of layer "0" (R2000+)
-	ModelSpace   string          // handle of the *Model_Space block record
-	EOL          string          // line ending of the first line
-	FirstSection string          // name of the section that follows HEADER/CLASSES
+	LayerColours []int           // group 62 of each layer not ours (negative: switched off)
+	// Lo and Hi bound the entities' points (groups 10-13, 20-23 in
+	// ENTITIES), drawing units; HasExtent says any was seen.
+	Lo, Hi       [2]float64
+	HasExtent    bool
+	LayerTable   string // handle of the LAYER table head
+	Layer0LType  string // linetype of layer "0"
+	Layer0Plot   string // group 390 of layer "0" (R2000+)
+	ModelSpace   string // handle of the *Model_Space block record
+	EOL          string // line ending of the first line
+	FirstSection string // name of the section that follows HEADER/CLASSES
 }
 
 // modern reports R13 or later: subclass markers and owner handles.
@@ -100,6 +106,9 @@ func scanDXF(in io.Reader, path string) (*dxfFacts, error) {
 			facts.MaxHandle = max(facts.MaxHandle, h)
 			recHandle = p.Value
 		}
+		if ctx.Section == "ENTITIES" && p.Code >= 10 && p.Code <= 23 && p.Code%10 <= 3 {
+			facts.extend(p)
+		}
 		if ctx.Section != "TABLES" {
 			continue
 		}
@@ -113,6 +122,10 @@ func scanDXF(in io.Reader, path string) (*dxfFacts, error) {
 				case 2:
 					recName = p.Value
 					facts.Layers[strings.ToUpper(p.Value)] = true
+				case 62:
+					if c, err := strconv.Atoi(strings.TrimSpace(p.Value)); err == nil && !isOurLayer(recName) {
+						facts.LayerColours = append(facts.LayerColours, c)
+					}
 				case 6:
 					if recName == "0" {
 						facts.Layer0LType = p.Value
@@ -136,6 +149,25 @@ func scanDXF(in io.Reader, path string) (*dxfFacts, error) {
 		return nil, &DXFError{File: path, Err: errors.New("R13+ drawing without a TABLES section: cannot add layers")}
 	}
 	return facts, nil
+}
+
+// extend widens the entities' extent by a coordinate pair's value: groups
+// 10-13 are x, 20-23 y (an x comes before its y).
+func (f *dxfFacts) extend(p pair) {
+	v, err := strconv.ParseFloat(strings.TrimSpace(p.Value), 64)
+	if err != nil || !finite(v) {
+		return
+	}
+	i := 0
+	if p.Code >= 20 {
+		i = 1
+	}
+	if !f.HasExtent {
+		f.Lo, f.Hi = [2]float64{math.Inf(1), math.Inf(1)}, [2]float64{math.Inf(-1), math.Inf(-1)}
+		f.HasExtent = true
+	}
+	f.Lo[i] = math.Min(f.Lo[i], v)
+	f.Hi[i] = math.Max(f.Hi[i], v)
 }
 
 // Annotate copies the drawing inputPath to outputPath and adds the markup m
@@ -199,11 +231,22 @@ type annotator struct {
 	m         *Markup
 	em        *dxfEmitter
 	newLayers []int // indexes into markupLayers not yet in the drawing
+	colours   map[string]int
 	newSeed   uint64
 }
 
 func copyAnnotated(pr *pairReader, w *bufio.Writer, facts *dxfFacts, m *Markup) error {
 	a := &annotator{facts: facts, m: m}
+	a.colours = chooseColours(usedSet(append(append([]int(nil), facts.LayerColours...), m.UsedACI...)))
+	if facts.HasExtent && finite(facts.Lo[0]) && finite(facts.Lo[1]) && finite(facts.Hi[0]) && finite(facts.Hi[1]) {
+		k := m.ToInch
+		lo, hi := [2]float64{facts.Lo[0] * k, facts.Lo[1] * k}, [2]float64{facts.Hi[0] * k, facts.Hi[1] * k}
+		if m.PlanLo != ([2]float64{}) || m.PlanHi != ([2]float64{}) {
+			lo = [2]float64{math.Min(lo[0], m.PlanLo[0]), math.Min(lo[1], m.PlanLo[1])}
+			hi = [2]float64{math.Max(hi[0], m.PlanHi[0]), math.Max(hi[1], m.PlanHi[1])}
+		}
+		m.PlanLo, m.PlanHi = lo, hi
+	}
 	for i, l := range markupLayers {
 		if !facts.Layers[strings.ToUpper(l.Name)] {
 			a.newLayers = append(a.newLayers, i)
@@ -252,7 +295,7 @@ func copyAnnotated(pr *pairReader, w *bufio.Writer, facts *dxfFacts, m *Markup) 
 					}
 				case "ENTITIES":
 					if !emitted {
-						a.em.markup(m)
+						a.em.markup(m, a.colours)
 						emitted = true
 					}
 				}
@@ -290,7 +333,7 @@ func copyAnnotated(pr *pairReader, w *bufio.Writer, facts *dxfFacts, m *Markup) 
 				if !facts.HasEntities {
 					a.em.pair(0, "SECTION")
 					a.em.pair(2, "ENTITIES")
-					a.em.markup(m)
+					a.em.markup(m, a.colours)
 					a.em.pair(0, "ENDSEC")
 				}
 				raw(p)
@@ -333,7 +376,7 @@ func (a *annotator) layers() {
 	}
 	for _, i := range a.newLayers {
 		l := markupLayers[i]
-		a.em.layer(l.Name, l.Color, l.LineWeight, ltype, a.facts.LayerTable, a.facts.Layer0Plot)
+		a.em.layer(l.Name, a.colours[l.Name], l.LineWeight, ltype, a.facts.LayerTable, a.facts.Layer0Plot)
 	}
 }
 

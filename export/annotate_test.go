@@ -125,9 +125,9 @@ func TestAnnotatePlans(t *testing.T) {
 		failLineY string // y of the failing member M4 (56 in) in drawing units
 		newLayers int
 	}{
-		{"plan_r12.dxf", 1, true, "", "56", 4},
-		{"plan_r2000.dxf", 12, true, "17", strconv.FormatFloat(56.0/12, 'f', -1, 64), 4},
-		{"plan_min_r12.dxf", 1, false, "", "56", 4},
+		{"plan_r12.dxf", 1, true, "", "56", 7},
+		{"plan_r2000.dxf", 12, true, "17", strconv.FormatFloat(56.0/12, 'f', -1, 64), 7},
+		{"plan_min_r12.dxf", 1, false, "", "56", 7},
 	}
 	for _, tc := range tests {
 		t.Run(tc.file, func(t *testing.T) {
@@ -139,12 +139,14 @@ func TestAnnotatePlans(t *testing.T) {
 			}
 			in, out := parseDXF(t, src), parseDXF(t, dst)
 			// Our entities: one highlight (M4 fails), one blocking row to add
-			// (B1; B2 is drawn already), four labels, four uplift labels
-			// (M2's 0.8 lb is listed in results.json, not flagged).
+			// (B1; B2 is drawn already), three labels (one per run and mark:
+			// J1, J2, J3), four ids, four uplift labels (M2's 0.8 lb is
+			// listed in results.json, not flagged), the key.
 			for _, c := range []struct {
 				kind, layer string
 				n           int
-			}{{"LINE", LayerFail, 1}, {"LINE", LayerBlocking, 1}, {"TEXT", LayerLabel, 4}, {"TEXT", LayerUplift, 4}} {
+			}{{"LINE", LayerFail, 1}, {"LINE", LayerBlocking, 1}, {"TEXT", LayerLabel, 3}, {"TEXT", LayerUplift, 4},
+				{"TEXT", LayerID, 4}, {"TEXT", LayerKey, 9}} {
 				if got := out.count(c.kind, c.layer); got != c.n {
 					t.Errorf("%d %s on %s, want %d", got, c.kind, c.layer, c.n)
 				}
@@ -249,9 +251,9 @@ func TestAnnotateKeepsCRLFAndExistingLayer(t *testing.T) {
 		}
 	}
 	// The layer named fc-label exists already (names are case-insensitive):
-	// three layers are added, the count goes from 2 to 5.
-	if out.LayerCount != 5 || out.count("LAYER", LayerLabel) != 1 {
-		t.Errorf("LAYER count %d, %d FC-LABEL records; want 5 and 1", out.LayerCount, out.count("LAYER", LayerLabel))
+	// six layers are added, the count goes from 2 to 8.
+	if out.LayerCount != 8 || out.count("LAYER", LayerLabel) != 1 {
+		t.Errorf("LAYER count %d, %d FC-LABEL records; want 8 and 1", out.LayerCount, out.count("LAYER", LayerLabel))
 	}
 }
 
@@ -348,8 +350,8 @@ func TestAnnotateTablesWithoutLayerTable(t *testing.T) {
 		t.Fatal(err)
 	}
 	out := parseDXF(t, dst)
-	if out.LayerCount != 4 || out.count("LAYER", LayerFail) != 1 || out.count("TEXT", LayerLabel) != 4 {
-		t.Errorf("LAYER count %d, FC-FAIL records %d, labels %d; want 4, 1, 4",
+	if out.LayerCount != 7 || out.count("LAYER", LayerFail) != 1 || out.count("TEXT", LayerLabel) != 3 {
+		t.Errorf("LAYER count %d, FC-FAIL records %d, labels %d; want 7, 1, 3",
 			out.LayerCount, out.count("LAYER", LayerFail), out.count("TEXT", LayerLabel))
 	}
 	if ok, at := isSubsequence(strings.SplitAfter(body, "\n")[:len(strings.SplitAfter(body, "\n"))-1], out.Lines); !ok {

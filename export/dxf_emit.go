@@ -53,8 +53,9 @@ func (e *dxfEmitter) handle() {
 	e.next++
 }
 
-// entityHead writes the pairs every entity starts with.
-func (e *dxfEmitter) entityHead(kind, layer, subclass string) {
+// entityHead writes the pairs every entity starts with; colour 0 means
+// BYLAYER (no group 62).
+func (e *dxfEmitter) entityHead(kind, layer, subclass string, colour int) {
 	e.pair(0, kind)
 	e.handle()
 	if e.subclass {
@@ -64,14 +65,17 @@ func (e *dxfEmitter) entityHead(kind, layer, subclass string) {
 		e.pair(100, "AcDbEntity")
 	}
 	e.pair(8, layer)
+	if colour > 0 {
+		e.pair(62, strconv.Itoa(colour))
+	}
 	if e.subclass {
 		e.pair(100, subclass)
 	}
 }
 
-// line writes a LINE from a to b (drawing units).
-func (e *dxfEmitter) line(layer string, a, b [2]float64) {
-	e.entityHead("LINE", layer, "AcDbLine")
+// line writes a LINE from a to b (drawing units), colour 0 = BYLAYER.
+func (e *dxfEmitter) line(layer string, a, b [2]float64, colour int) {
+	e.entityHead("LINE", layer, "AcDbLine", colour)
 	e.num(10, a[0])
 	e.num(20, a[1])
 	e.num(30, 0)
@@ -82,7 +86,13 @@ func (e *dxfEmitter) line(layer string, a, b [2]float64) {
 
 // text writes a TEXT centred on at (drawing units), height h, rotated deg.
 func (e *dxfEmitter) text(layer string, at [2]float64, h, deg float64, s string) {
-	e.entityHead("TEXT", layer, "AcDbText")
+	e.alignedText(layer, at, h, deg, s, 1)
+}
+
+// alignedText writes a TEXT whose horizontal alignment (group 72: 0 left,
+// 1 centre) and vertical middle are at at (drawing units).
+func (e *dxfEmitter) alignedText(layer string, at [2]float64, h, deg float64, s string, halign int) {
+	e.entityHead("TEXT", layer, "AcDbText", 0)
 	e.num(10, at[0])
 	e.num(20, at[1])
 	e.num(30, 0)
@@ -91,7 +101,7 @@ func (e *dxfEmitter) text(layer string, at [2]float64, h, deg float64, s string)
 	if deg != 0 {
 		e.num(50, deg)
 	}
-	e.pair(72, "1") // centre
+	e.pair(72, strconv.Itoa(halign))
 	e.num(11, at[0])
 	e.num(21, at[1])
 	e.num(31, 0)
@@ -146,24 +156,42 @@ func (e *dxfEmitter) layer(name string, color, lineWeight int, ltype, tableHandl
 
 // markupEntityCount is the number of entities markup writes for m.
 func markupEntityCount(m *Markup) int {
-	return len(m.Highlights) + len(m.BlockingAdds) + len(m.Labels) + len(m.Uplifts)
+	n := len(m.Highlights) + len(m.Errors) + len(m.BlockingAdds) + m.keyCount()
+	for _, g := range m.labelGroups() {
+		n += len(g.Labels)
+	}
+	return n
 }
 
-// markup writes every markup entity of m, converted to drawing units.
-func (e *dxfEmitter) markup(m *Markup) {
+// markup writes every markup entity of m, converted to drawing units, and
+// the key, whose sample lines take the colours our layers were given.
+func (e *dxfEmitter) markup(m *Markup, colours map[string]int) {
 	k := m.ToInch
 	du := func(p [2]float64) [2]float64 { return [2]float64{p[0] / k, p[1] / k} }
 	for _, s := range m.Highlights {
-		e.line(LayerFail, du(s.A), du(s.B))
+		e.line(LayerFail, du(s.A), du(s.B), 0)
+	}
+	for _, s := range m.Errors {
+		e.line(LayerError, du(s.A), du(s.B), 0)
 	}
 	for _, s := range m.BlockingAdds {
-		e.line(LayerBlocking, du(s.A), du(s.B))
+		e.line(LayerBlocking, du(s.A), du(s.B), 0)
 	}
-	h := m.textHeight() / k
-	for _, l := range m.Labels {
-		e.text(LayerLabel, du(l.At), h, l.AngleDeg, l.Text)
+	h := m.textHeight()
+	for _, g := range m.labelGroups() {
+		for _, l := range g.Labels {
+			lh := h
+			if l.HeightIn > 0 {
+				lh = l.HeightIn
+			}
+			e.text(g.Layer, du(l.At), lh/k, l.AngleDeg, l.Text)
+		}
 	}
-	for _, l := range m.Uplifts {
-		e.text(LayerUplift, du(l.At), h, l.AngleDeg, l.Text)
+	for _, it := range m.key(colours) {
+		if it.Line {
+			e.line(LayerKey, du(it.A), du(it.B), it.Colour)
+		} else {
+			e.alignedText(LayerKey, du(it.At), h/k, 0, it.Text, 0)
+		}
 	}
 }

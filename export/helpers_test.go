@@ -2,6 +2,7 @@ package export
 
 import (
 	"encoding/json"
+	"github.com/xuri/excelize/v2"
 	"os"
 	"path/filepath"
 	"testing"
@@ -32,4 +33,14 @@ func noTempFiles(t *testing.T, dir string) {
 	if len(matches) > 0 {
 		t.Errorf("temporary files left behind: %v", matches)
 	}
+}
+
+// tableRowsOf is f.GetRows(sheet) from the header row on: the title rows
+// (SheetTitle) left out, so that rows[0] is the header.
+func tableRowsOf(f *excelize.File, sheet string) ([][]string, error) {
+	rows, err := f.GetRows(sheet)
+	if err != nil || len(rows) < TitleRows {
+		return rows, err
+	}
+	return rows[TitleRows:], nil
 }

@@ -137,7 +137,8 @@ func membersFinite(ms []Member) bool {
 	for i := range ms {
 		m := &ms[i]
 		if !fin(m.Start[0], m.Start[1], m.End[0], m.End[1], m.LengthIn, m.OverhangsIn[0], m.OverhangsIn[1],
-			m.TribIn, m.SpacingIn, m.MaxRatio) || !fin(m.BearingsAtIn...) || !fin(m.SpansIn...) || !fin(m.BlockingAtIn...) || !fin(m.DrawnBlockingAtIn...) {
+			m.TribIn, m.SpacingIn, m.MaxRatio, m.DatumIn) || !fin(m.BearingsAtIn...) || !fin(m.SpansIn...) || !fin(m.BlockingAtIn...) ||
+			!fin(m.DrawnBlockingAtIn...) || !fin(m.BlockingFromFaceIn...) {
 			return false
 		}
 		for _, s := range m.BlockingSteps {
@@ -391,6 +392,13 @@ func encodeResults(w *bufio.Writer, r *Results) error {
 	w.WriteString("{\n")
 	steps := []func() error{
 		func() error { return value("schema", schema) },
+		func() error {
+			if r.ToolVersion == "" {
+				return nil
+			}
+			return value("tool_version", r.ToolVersion)
+		},
+		func() error { return value("project", r.Project) },
 		func() error { return value("plan", r.Plan) },
 		func() error {
 			if r.InputSHA256 == "" {
@@ -399,6 +407,12 @@ func encodeResults(w *bufio.Writer, r *Results) error {
 			return value("input_sha256", r.InputSHA256)
 		},
 		func() error { return value("drawing_units", r.DrawingUnits) },
+		func() error {
+			if r.Datum == "" {
+				return nil
+			}
+			return value("datum", r.Datum)
+		},
 		func() error {
 			return listBytes("members", len(r.Members), func(i int) ([]byte, error) {
 				m := memberForJSON(r.Members[i], calcs.id(&r.Members[i]))

@@ -37,11 +37,18 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 	w.b = append(e.buf[:0], '{')
 	w.str("id", m.ID)
 	w.str("mark", m.Mark)
+	if m.Run != "" {
+		w.str("run", m.Run)
+	}
 	w.str("layer", m.Layer)
 	w.str("handle", m.Handle)
 	if m.Source != "" {
 		w.str("source", m.Source)
 	}
+	if m.Location != "" {
+		w.str("location", m.Location)
+	}
+	w.num("datum_in", m.DatumIn)
 	w.floats("start", m.Start[:])
 	w.floats("end", m.End[:])
 	w.num("length_in", m.LengthIn)
@@ -88,6 +95,9 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 	w.num("max_ratio", m.MaxRatio)
 	w.ints("blocking_rows_per_span", m.BlockingRowsPerSpan)
 	w.floats("blocking_at_in", m.BlockingAtIn)
+	if len(m.BlockingFromFaceIn) > 0 {
+		w.floats("blocking_from_face_in", m.BlockingFromFaceIn)
+	}
 	if len(m.DrawnBlockingAtIn) > 0 {
 		w.floats("drawn_blocking_at_in", m.DrawnBlockingAtIn)
 	}

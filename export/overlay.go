@@ -89,8 +89,9 @@ func writeOverlay(w *bufio.Writer, m *Markup, units string) {
 	e.pair(2, "LAYER")
 	e.pair(70, fmt.Sprint(len(markupLayers)+1))
 	e.layer("0", 7, 0, "CONTINUOUS", "", "")
+	colours := chooseColours(usedSet(m.UsedACI))
 	for _, l := range markupLayers {
-		e.layer(l.Name, l.Color, l.LineWeight, "CONTINUOUS", "", "")
+		e.layer(l.Name, colours[l.Name], l.LineWeight, "CONTINUOUS", "", "")
 	}
 	e.pair(0, "ENDTAB")
 	e.pair(0, "TABLE")
@@ -111,7 +112,7 @@ func writeOverlay(w *bufio.Writer, m *Markup, units string) {
 
 	e.pair(0, "SECTION")
 	e.pair(2, "ENTITIES")
-	e.markup(m)
+	e.markup(m, colours)
 	e.pair(0, "ENDSEC")
 	e.pair(0, "EOF")
 }
@@ -129,15 +130,16 @@ func (m *Markup) bounds() (lo, hi [2]float64) {
 		add(s.A)
 		add(s.B)
 	}
-	for _, s := range m.BlockingAdds {
-		add(s.A)
-		add(s.B)
+	for _, g := range [][]Segment{m.Errors, m.BlockingAdds} {
+		for _, s := range g {
+			add(s.A)
+			add(s.B)
+		}
 	}
-	for _, l := range m.Labels {
-		add(l.At)
-	}
-	for _, l := range m.Uplifts {
-		add(l.At)
+	for _, g := range m.labelGroups() {
+		for _, l := range g.Labels {
+			add(l.At)
+		}
 	}
 	if math.IsInf(lo[0], 1) {
 		return [2]float64{}, [2]float64{}

@@ -4,9 +4,11 @@ import (
 	"bufio"
 	"cmp"
 	"fmt"
+	"framecheck/export/internal/fmtx"
 	"html/template"
 	"slices"
 	"strconv"
+	"strings"
 	"time"
 )
 
@@ -46,6 +48,32 @@ type ZoneOutline struct {
 // and a member whose coordinates are not finite is drawn nowhere but is
 // still listed, so the page never shows NaN or Inf.
 func WriteReport(path string, r *Results, g *PlanGeometry, when time.Time) error {
+	return WriteReportWith(path, r, g, when, ReportOptions{})
+}
+
+// The calculation packages a report can print (ReportOptions.Package).
+const (
+	PackageFull      = "full"      // every check of each mark's governing member written out
+	PackageGoverning = "governing" // only each mark's governing check written out, the others tabulated
+)
+
+// ReportOptions choose what the report prints.
+type ReportOptions struct {
+	// Package is PackageFull (also "") or PackageGoverning. Either way each
+	// mark is calculated for its governing member (the largest ratio).
+	// PackageGoverning writes out only that member's governing check and
+	// lists its other checks in one table, leaves out the per-mark
+	// design values (the Assumptions list them once) and the uplift list
+	// by bearing (the list by support line stays): the short package for
+	// review.
+	Package string
+}
+
+// WriteReportWith is WriteReport with options.
+func WriteReportWith(path string, r *Results, g *PlanGeometry, when time.Time, opts ReportOptions) error {
+	if opts.Package != "" && opts.Package != PackageFull && opts.Package != PackageGoverning {
+		return fmt.Errorf("export: %s: package %q: want %q or %q", path, opts.Package, PackageFull, PackageGoverning)
+	}
 	if r == nil {
 		return fmt.Errorf("export: %s: no results to report", path)
 	}
@@ -56,6 +84,13 @@ func WriteReport(path string, r *Results, g *PlanGeometry, when time.Time) error
 		g = &PlanGeometry{}
 	}
 	page := buildReport(r, g, when)
+	if opts.Package == PackageGoverning {
+		page.Governing = true
+		for i := range page.Calcs {
+			governingOnly(&page.Calcs[i])
+		}
+		page.Uplift.Rows, page.Uplift.More = nil, 0
+	}
 	return writeAtomic(path, func(w *bufio.Writer) error {
 		return reportTemplate.Execute(w, page)
 	})
@@ -63,6 +98,15 @@ func WriteReport(path string, r *Results, g *PlanGeometry, when time.Time) error
 
 // reportPage is what the template renders.
 type reportPage struct {
+	// Governing: the short package (ReportOptions.Package).
+	Governing bool
+	// Project is the title block's lines (ProjectInfo.Lines), ProjectName
+	// the project's name, Version the tool's, Footer what the printed
+	// pages carry at their foot.
+	Project     []string
+	ProjectName string
+	Version     string
+	Footer      string
 	Title       string
 	Plan        string
 	Date        string
@@ -118,7 +162,21 @@ func buildReport(r *Results, g *PlanGeometry, when time.Time) *reportPage {
 		Combos:      r.Assumptions.Combinations,
 		Cautions:    Cautions,
 		Legend:      legendRows(),
+		Project:     r.Project.Lines(),
+		ProjectName: r.Project.Name,
+		Version:     r.ToolVersion,
 	}
+	if p.Version == "" {
+		p.Version = "version not stamped"
+	}
+	foot := []string{r.Plan}
+	if r.Project.Name != "" {
+		foot = []string{r.Project.Name, r.Plan}
+	}
+	if r.Project.Revision != "" {
+		foot = append(foot, "rev. "+r.Project.Revision)
+	}
+	p.Footer = strings.Join(append(foot, "framecheck "+p.Version), " · ")
 	if len(p.Combos) == 0 {
 		p.Combos = defaultCombos
 	}
@@ -165,7 +223,7 @@ func buildReport(r *Results, g *PlanGeometry, when time.Time) *reportPage {
 		p.Marks = append(p.Marks, markRow{
 			Mark: mk.Mark, Anchor: "mark-" + anchorSafe(mk.Mark), Size: mk.Size, Species: mk.Species, Grade: mk.Grade, Zone: mk.Zone,
 			Spacing: inOrNA(mk.SpacingIn), Spans: SpansText(mk.SpansIn, mk.OverhangsIn), Rows: intList(mk.BlockingRowsPerSpan),
-			Ratio: ratioText(mk.MaxRatio), Status: mk.Status, Band: bandClass(mk.MaxRatio, mk.Status), Count: mk.Count,
+			Ratio: fmtx.Ratio(mk.MaxRatio), Status: mk.Status, Band: bandClass(mk.MaxRatio, mk.Status), Count: mk.Count,
 		})
 	}
 	p.Uplift = buildUplift(r)
@@ -198,11 +256,11 @@ func ratioKey(v float64) float64 {
 }
 
 func newWorstRow(m *Member) worstRow {
-	w := worstRow{ID: m.ID, Mark: m.Mark, Size: m.Size, Governing: m.Governing, Status: m.Status, Source: m.Source, Messages: m.Messages}
+	w := worstRow{ID: m.ID, Mark: m.Mark, Size: m.Size, Governing: m.Governing, Status: m.Status, Source: placeOf(m), Messages: m.Messages}
 	if m.Status == StatusError {
 		w.Ratio = "n/a"
 	} else {
-		w.Ratio = ratioText(m.MaxRatio)
+		w.Ratio = fmtx.Ratio(m.MaxRatio)
 	}
 	return w
 }
@@ -228,4 +286,74 @@ func inOrNA(v float64) string {
 var defaultCombos = []string{
 	"D", "D+L", "D+(Lr or S)", "D+0.75L+0.75(Lr or S)", "D+0.6W",
 	"D+0.75L+0.75(0.6W)+0.75(Lr or S)", "0.6D+0.6W",
+}
+
+// governingOnly keeps the governing check of c written out (the one with
+// the largest ratio, the first on a tie) and moves the others to
+// c.Others, tabulated; the per-mark design values go (the Assumptions
+// list them).
+func governingOnly(c *markCalc) {
+	if len(c.Checks) == 0 {
+		return
+	}
+	g := 0
+	for i := range c.Checks {
+		if c.Checks[i].ratio > c.Checks[g].ratio {
+			g = i
+		}
+	}
+	for i := range c.Checks {
+		if i != g {
+			c.Others = append(c.Others, c.Checks[i])
+		}
+	}
+	c.Checks = []checkCalc{c.Checks[g]}
+	c.DesignValues = nil
+	// the datum is stated once, in the summary
+	inputs := c.Inputs[:0:0]
+	for _, kv := range c.Inputs {
+		if kv.Key != "Positions along the member" {
+			inputs = append(inputs, kv)
+		}
+	}
+	c.Inputs = inputs
+	// the factors on one line, their sources after them
+	var parts, srcs []string
+	seen := map[string]bool{}
+	for _, f := range c.Factors {
+		parts = append(parts, f.Name+" = "+f.Value)
+		if f.Source != "" && !seen[f.Source] {
+			seen[f.Source] = true
+			srcs = append(srcs, f.Source)
+		}
+	}
+	if len(parts) > 0 {
+		c.FactorLine = strings.Join(parts, "; ")
+		if len(srcs) > 0 {
+			c.FactorLine += " (" + strings.Join(srcs, "; ") + ")"
+		}
+		c.Factors = nil
+	}
+	// the combinations table keeps the governing combination's rows
+	base := comboBase(c.Checks[0].Combo)
+	var keep []comboLoad
+	for _, cl := range c.Combos {
+		if comboBase(cl.Combo) == base {
+			keep = append(keep, cl)
+		}
+	}
+	if len(keep) > 0 {
+		c.Combos = keep
+	}
+}
+
+// comboBase is a combination's name without what the engine appends
+// (", span 1", " (live-type loads on span 2)") and with no spaces.
+func comboBase(s string) string {
+	if i := strings.IndexAny(s, ", "); i >= 0 {
+		s = s[:i]
+	}
+	s = strings.ReplaceAll(s, "(up)", "")
+	s = strings.ReplaceAll(s, "(down)", "")
+	return strings.ReplaceAll(s, " ", "")
 }

@@ -1,7 +1,9 @@
 package export
 
 import (
+	"framecheck/export/internal/fmtx"
 	"math"
+	"regexp"
 	"strconv"
 	"strings"
 )
@@ -19,6 +21,8 @@ type markCalc struct {
 	ComboProblems                             []string
 	Factors                                   []traceLine
 	Checks                                    []checkCalc
+	Others                                    []checkCalc // PackageGoverning: the checks not written out
+	FactorLine                                string      // PackageGoverning: the factors on one line
 	Steps                                     []stepRow
 	StepsDrawn                                bool     // rows drawn: the solver placed rows one at a time
 	Bracing                                   []string // the bracing relied on, edge by edge
@@ -44,6 +48,7 @@ type checkCalc struct {
 	Lines                                         []traceLine
 	Actual, Allowable, Unit, Ratio, Verdict, Band string
 	After                                         []string // printed after the result: the NDS 4.4.1.2 comparison
+	ratio                                         float64  // the ratio, for picking the governing check
 }
 
 // stepRow is one iteration of the blocking-row solver: rows per span, or
@@ -70,7 +75,7 @@ func buildCalcs(r *Results) []markCalc {
 	for i, mk := range r.Marks {
 		pos[mk.Mark] = i
 		calcs[i] = markCalc{Mark: mk.Mark, Anchor: "mark-" + anchorSafe(mk.Mark), Status: mk.Status,
-			Band: bandClass(mk.MaxRatio, mk.Status), Ratio: ratioText(mk.MaxRatio)}
+			Band: bandClass(mk.MaxRatio, mk.Status), Ratio: fmtx.Ratio(mk.MaxRatio)}
 		gov[i] = -1
 	}
 	for i := range r.Members {
@@ -132,10 +137,11 @@ func fillCalc(c *markCalc, r *Results, m *Member) {
 		}
 	}
 	c.Inputs = []keyValue{
-		{"Member", m.ID + sourceSuffix(m.Source)},
+		{"Member", m.ID + sourceSuffix(placeOf(m))},
 		{"Size", strings.TrimSpace(m.Size + " " + m.Species + " " + m.Grade)},
 		{"Length", FtIn(m.LengthIn) + " (" + fmtNum(m.LengthIn) + " in)"},
-		{"Bearings at (from start)", numList(m.BearingsAtIn) + " in"},
+		{"Positions along the member", "from the face of its first bearing (the side toward the span)"},
+		{"Bearing centre-lines at", ftInList(m.fromFaceList(m.BearingsAtIn))},
 		{"Spans, centre to centre of bearings", ftInList(m.SpansIn) + " (" + numList(m.SpansIn) + " in)"},
 		{"Overhangs (start, end)", fmtNum(m.OverhangsIn[0]) + " in, " + fmtNum(m.OverhangsIn[1]) + " in"},
 		{"Spacing", inOrNA(m.SpacingIn)},
@@ -148,7 +154,7 @@ func fillCalc(c *markCalc, r *Results, m *Member) {
 			keyValue{"Deflection limits (live, total)", limitText(zone.LiveDeflectionLimit) + ", " + limitText(zone.TotalDeflectionLimit)})
 	}
 	if len(m.DrawnBlockingAtIn) > 0 {
-		c.Inputs = append(c.Inputs, keyValue{"Blocking rows drawn, existing (from start)", numList(m.DrawnBlockingAtIn) + " in"})
+		c.Inputs = append(c.Inputs, keyValue{"Blocking rows drawn, existing, at", ftInList(m.fromFaceList(m.DrawnBlockingAtIn))})
 	}
 	rows := intList(m.BlockingRowsPerSpan)
 	if rows == "" {
@@ -156,7 +162,7 @@ func fillCalc(c *markCalc, r *Results, m *Member) {
 	}
 	c.Inputs = append(c.Inputs, keyValue{"Blocking rows to add, per span", rows})
 	if len(m.BlockingAtIn) > 0 {
-		c.Inputs = append(c.Inputs, keyValue{"Blocking rows to add at (from start)", numList(m.BlockingAtIn) + " in"})
+		c.Inputs = append(c.Inputs, keyValue{"Blocking rows to add at", ftInList(m.fromFaceList(m.BlockingAtIn))})
 	}
 	for _, dv := range r.Assumptions.DesignValues {
 		if dv.Species == m.Species && dv.Grade == m.Grade && (dv.Size == "" || dv.Size == m.Size || !strings.Contains(dv.Size, "x")) {
@@ -176,7 +182,7 @@ func fillCalc(c *markCalc, r *Results, m *Member) {
 		for i := range r.Assumptions.Zones {
 			if z := &r.Assumptions.Zones[i]; z.Name == zp.Zone {
 				c.AreaLoads = append(c.AreaLoads, zoneAreaLoads(z, m.TribIn,
-					" ("+z.Name+", "+fmtNum(zp.FromIn)+" to "+fmtNum(zp.ToIn)+" in from the start)")...)
+					" ("+z.Name+", "+FtIn(m.FromFace(zp.FromIn))+" to "+FtIn(m.FromFace(zp.ToIn))+")")...)
 			}
 		}
 	}
@@ -194,8 +200,8 @@ func fillCalc(c *markCalc, r *Results, m *Member) {
 			t = [2]string{ch.Kind, ""}
 		}
 		cc := checkCalc{Title: t[0], Kind: ch.Kind, Combo: ch.Combo, Clause: t[1],
-			Actual: fmtNum(ch.Actual), Allowable: fmtNum(ch.Allowable), Unit: ch.Unit, Ratio: ratioText(ch.Ratio),
-			Band: bandClass(ch.Ratio, "")}
+			Actual: fmtx.Value(ch.Actual, ch.Unit), Allowable: fmtx.Value(ch.Allowable, ch.Unit), Unit: ch.Unit, Ratio: fmtx.RatioTrace(ch.Ratio),
+			Band: bandClass(ch.Ratio, ""), ratio: ch.Ratio}
 		switch {
 		case !finite(ch.Ratio):
 			cc.Verdict = "not evaluated"
@@ -205,7 +211,9 @@ func fillCalc(c *markCalc, r *Results, m *Member) {
 			cc.Verdict = "NOT OK"
 		}
 		for _, it := range ch.Trace {
-			cc.Lines = append(cc.Lines, newTraceLine(it))
+			l := newTraceLine(it)
+			l.Note = refaceText(l.Note, m)
+			cc.Lines = append(cc.Lines, l)
 		}
 		c.Checks = append(c.Checks, cc)
 	}
@@ -226,10 +234,10 @@ func fillCalc(c *markCalc, r *Results, m *Member) {
 		if !finite(s.Ratio) || s.Ratio > 1 {
 			v = "fails"
 		}
-		row := stepRow{Rows: strconv.Itoa(s.RowsPerSpan), Lu: fmtNum(s.LuIn), CL: fmtNum(s.CL), Ratio: ratioText(s.Ratio), Verdict: v}
+		row := stepRow{Rows: strconv.Itoa(s.RowsPerSpan), Lu: fmtx.In(s.LuIn), CL: fmtx.Factor(s.CL), Ratio: fmtx.RatioTrace(s.Ratio), Verdict: v}
 		if s.AtIn != nil {
 			c.StepsDrawn = true
-			row.Rows, row.At = strconv.Itoa(len(s.AtIn)), numList(s.AtIn)
+			row.Rows, row.At = strconv.Itoa(len(s.AtIn)), ftInList(m.fromFaceList(s.AtIn))
 		}
 		c.Steps = append(c.Steps, row)
 	}
@@ -252,7 +260,7 @@ func bracingLines(m *Member) []string {
 		}
 		for _, it := range ch.Trace {
 			if it.Name == "bracing points" || (it.Name == "CL" && it.Subst == "" && strings.Contains(it.Formula, "held continuously")) {
-				out = append(out, edge+it.Formula)
+				out = append(out, edge+refaceText(it.Formula, m))
 				break
 			}
 		}
@@ -263,8 +271,38 @@ func bracingLines(m *Member) []string {
 	return out
 }
 
+// rePositions finds a list of positions along a member in the words of
+// the engine's bracing record ("bearings at 2.25, 146.3 in", "rows to add
+// at 74.25 in", "... = true) at 60 in"), measured from the member's Start.
+var rePositions = regexp.MustCompile(`(bearings at|drawn rows at|rows to add at|\) at) (-?[0-9.]+(?:, -?[0-9.]+)*) in\b`)
+
+// refaceText rewrites such lists from the datum of m (the face of its
+// first bearing), in feet-inches, so the calculation gives positions as
+// every other output does.
+func refaceText(s string, m *Member) string {
+	if s == "" || !strings.Contains(s, " at ") {
+		return s
+	}
+	return rePositions.ReplaceAllStringFunc(s, func(match string) string {
+		g := rePositions.FindStringSubmatch(match)
+		var vs []float64
+		for _, p := range strings.Split(g[2], ", ") {
+			v, err := strconv.ParseFloat(p, 64)
+			if err != nil {
+				return match
+			}
+			vs = append(vs, m.FromFace(v))
+		}
+		parts := make([]string, len(vs))
+		for i, v := range vs {
+			parts[i] = FtIn(v)
+		}
+		return g[1] + " " + strings.Join(parts, ", ")
+	})
+}
+
 func newTraceLine(t TraceItem) traceLine {
-	l := traceLine{Name: t.Name, Formula: t.Formula, Subst: t.Subst, Value: fmtNum(t.Value), Unit: t.Unit, Source: t.Source}
+	l := traceLine{Name: t.Name, Formula: t.Formula, Subst: fmtx.GroupDigits(t.Subst), Value: fmtx.Value(t.Value, t.Unit), Unit: t.Unit, Source: t.Source}
 	if t.Subst == "" && wordy(t.Formula) {
 		l.Note, l.Formula = t.Formula, ""
 	}
@@ -359,4 +397,14 @@ func fmtNum(v float64) string {
 		}
 	}
 	return s
+}
+
+// placeOf is where the outputs say member m is: its Location (plan
+// coordinates in feet-inches, handle, file relative to the current
+// folder), else its Source.
+func placeOf(m *Member) string {
+	if m.Location != "" {
+		return m.Location
+	}
+	return m.Source
 }

@@ -1,6 +1,7 @@
 package export
 
 import (
+	"framecheck/export/internal/fmtx"
 	"math"
 	"strings"
 	"testing"
@@ -57,15 +58,16 @@ func TestWriteReportMarkTraces(t *testing.T) {
 			}
 			for j, it := range c.Trace {
 				l := lines[j]
-				if l["sym"] != it.Name {
-					t.Errorf("%s %s line %d: symbol %q, want %q", mk.Mark, c.Kind, j, l["sym"], it.Name)
+				// as an engineer writes it: F′b for Fb', Δ, √, ² (mathHTML)
+				if l["sym"] != mathText(it.Name) {
+					t.Errorf("%s %s line %d: symbol %q, want %q", mk.Mark, c.Kind, j, l["sym"], mathText(it.Name))
 				}
-				if !repCloseTo(l["val"], it.Value) {
+				if !repCloseToUnit(l["val"], it.Value, it.Unit) {
 					t.Errorf("%s %s %s: value %q, want %g", mk.Mark, c.Kind, it.Name, l["val"], it.Value)
 				}
 				if it.Subst != "" {
 					sawSubst = true
-					if l["s"] != it.Subst || l["f"] != it.Formula {
+					if l["s"] != powers.Replace(fmtx.GroupDigits(it.Subst)) || l["f"] != mathText(it.Formula) {
 						t.Errorf("%s %s %s: %q = %q, want %q = %q", mk.Mark, c.Kind, it.Name, l["f"], l["s"], it.Formula, it.Subst)
 					}
 				}

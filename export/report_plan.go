@@ -1,6 +1,7 @@
 package export
 
 import (
+	"framecheck/export/internal/fmtx"
 	"html/template"
 	"math"
 	"strconv"
@@ -241,7 +242,7 @@ func appendLabel(buf []byte, m *Member, class string, a, b [2]float64, textH flo
 	}
 	switch m.Status {
 	case StatusFail:
-		text += " " + ratioText(m.MaxRatio)
+		text += " " + fmtx.Ratio(m.MaxRatio)
 	case StatusError:
 		text = m.ID + " ERROR"
 	}

@@ -241,7 +241,7 @@ func TestWriteReportMemberElements(t *testing.T) {
 		if m.Status == StatusError && !strings.Contains(labels, m.ID+" ERROR") {
 			t.Errorf("no label %q", m.ID+" ERROR")
 		}
-		if m.Status == StatusFail && !strings.Contains(labels, m.Mark+" "+strconv.FormatFloat(m.MaxRatio, 'f', 3, 64)) {
+		if m.Status == StatusFail && !strings.Contains(labels, m.Mark+" "+strconv.FormatFloat(m.MaxRatio, 'f', 2, 64)) {
 			t.Errorf("no label for failing %s", m.ID)
 		}
 	}
@@ -266,6 +266,24 @@ func TestWriteReportMemberElements(t *testing.T) {
 // closeTo compares a printed number with the value it stands for: the
 // report prints about four significant figures (at most three decimals), so
 // it allows half a unit of the last place printed.
+// repCloseToUnit is repCloseTo with the rounding of the formatting rules
+// (fmtx): psi, lb and lb-in to the nearest 1, inches and section
+// properties to 0.01, other values to 0.001.
+func repCloseToUnit(text string, want float64, unit string) bool {
+	got, err := strconv.ParseFloat(strings.ReplaceAll(text, ",", ""), 64)
+	if err != nil {
+		return false
+	}
+	tol := 5e-4 + 1e-9
+	switch unit {
+	case "psi", "lb", "lb-in":
+		tol = 0.5 + 1e-9
+	case "in", "in^2", "in^3", "in^4":
+		tol = 0.005 + 1e-9
+	}
+	return math.Abs(got-want) <= tol
+}
+
 func repCloseTo(text string, want float64) bool {
 	got, err := strconv.ParseFloat(strings.ReplaceAll(text, ",", ""), 64)
 	if err != nil {

@@ -1,6 +1,7 @@
 package export
 
 import (
+	"framecheck/export/internal/fmtx"
 	"html/template"
 	"strconv"
 )
@@ -8,7 +9,7 @@ import (
 // reportTemplate is the page. Section ids (summary, plan, schedule,
 // takeoff, uplift, calculations, mark-<mark>, assumptions, cautions) are stable:
 // the tests and any reader's links use them.
-var reportTemplate = template.Must(template.New("report").Funcs(template.FuncMap{"num": fmtNum, "bf": boardFeet, "limit": limitText}).Parse(reportHTML))
+var reportTemplate = template.Must(template.New("report").Funcs(template.FuncMap{"num": fmtNum, "val": fmtx.Value, "combo": fmtx.Combo, "math": mathHTML, "mathn": numHTML, "bf": boardFeet, "limit": limitText}).Parse(reportHTML))
 
 // boardFeet prints board feet to 0.1, or "n/a".
 func boardFeet(v float64) string {
@@ -68,6 +69,7 @@ h3.tight{margin-top:0}
 .calc h3{font-size:16px}
 .eq{font-family:"DejaVu Sans Mono",Consolas,monospace;font-size:12.5px;margin:1px 0 1px 12px;white-space:pre-wrap}
 .eq .sym{font-weight:700}
+sub,sup{line-height:0;font-size:75%}
 .eq .val{font-weight:700}
 .eq .src{color:var(--muted);font-family:system-ui,sans-serif;font-size:11.5px;margin-left:10px}
 .eq .note{color:var(--muted)}
@@ -79,20 +81,55 @@ h3.tight{margin-top:0}
 .result.ok{color:#1e7a52}.result.ng{color:#b3261e}
 .msgs{color:#b3261e}
 .cautions{border:2px solid #b3261e;border-radius:4px;padding:6px 16px;background:#fff7f6}
+.title-page{display:none}
+.title-page h1{font-size:30px;margin:0 0 6px}
+.title-page .tp-sub{font-size:18px;margin:0 0 18px}
+.title-page table.tp{font-size:14px;margin-top:22px}
+.title-page table.tp th{width:1.6in}
 @media print{
-  @page{size:letter;margin:0.5in}
-  body{font-size:10.5pt}
-  nav.toc,#details,.hint{display:none}
+  @page{size:letter;margin:0.55in 0.5in 0.65in;
+    @bottom-right{content:"Page " counter(page) " of " counter(pages);font:8pt sans-serif;color:#444}}
+  @page plan{size:letter landscape;margin:0.4in 0.4in 0.55in}
+  body{font-size:10pt}
+  header.top,nav.toc,#details,.hint{display:none}
+  .title-page{display:block;break-after:page;padding-top:1.4in}
   .sum-grid{display:block}
-  header.top{border-bottom-width:2px}
-  #plan{break-before:page;break-after:page}
-  #plan-svg{height:7.6in;min-height:0;cursor:auto}
+  #plan{page:plan;break-before:page;break-after:page;margin-top:0}
+  #plan .legend{margin:0 0 4px}
+  .plan-wrap{border:none;background:none}
+  #plan-svg{width:10.1in;height:6.5in;min-height:0;cursor:auto}
+  h2,h3,h4{break-after:avoid;break-inside:avoid}
+  tr,.eq,.result,.check,.cards,table.inputs,table.others,table.combos,table.steps{break-inside:avoid}
   .calc{break-before:page;border-top:none}
-  table,.check{break-inside:avoid}
+  .pkg-governing{font-size:9pt}
+  .pkg-governing table{font-size:8pt}
+  .pkg-governing th,.pkg-governing td{padding:1px 4px}
+  .pkg-governing section{margin-top:12px}
+  .pkg-governing #assumptions table{font-size:7pt}
+  .pkg-governing #assumptions{columns:2;column-gap:16px;font-size:8pt}
+  .pkg-governing #assumptions h2{column-span:all}
+  .pkg-governing .calc{break-before:auto;border-top:2px solid var(--ink);margin-top:10px;font-size:8pt;line-height:1.3}
+  .pkg-governing .calc h3{font-size:10.5pt;margin:2px 0 1px}
+  .pkg-governing .calc h4{font-size:9pt;margin:4px 0 1px}
+  .pkg-governing .calc table{font-size:8pt;margin:2px 0 4px}
+  .pkg-governing .calc th,.pkg-governing .calc td{padding:1px 5px}
+  .pkg-governing .calc .eq{font-size:7.5pt;margin-left:6px;line-height:1.3}
+  .pkg-governing .calc .eq .src{font-size:7.5pt}
+  .pkg-governing table.inputs{display:block;columns:2;column-gap:14px;border:none}
+  .pkg-governing table.inputs tbody{display:block}
+  .pkg-governing table.inputs tr{display:flex;break-inside:avoid}
+  .pkg-governing table.inputs th{flex:0 0 40%}
+  .pkg-governing table.inputs td{flex:1}
+  .pkg-governing .factors{columns:2;column-gap:14px}
+  .pkg-governing .factors .eq{break-inside:avoid}
+  .pkg-governing .check{margin:4px 0;padding:2px 0 2px 6px;break-inside:auto}
+  .pkg-governing .loads{columns:2;column-gap:14px}
+  .pkg-governing #worst th:last-child,.pkg-governing #worst td:last-child{display:none}
+  .pkg-governing #uplift-lines th:last-child,.pkg-governing #uplift-lines td:last-child{display:none}
+  .pkg-governing ul.bracing{margin:2px 0;padding-left:16px}
   a{color:inherit;text-decoration:none}
 }
 `
-
 const reportJS = `
 (function(){
   var svg=document.getElementById('plan-svg'), out=document.getElementById('details');
@@ -135,15 +172,29 @@ const reportHTML = `<!DOCTYPE html>
 <meta name="viewport" content="width=device-width, initial-scale=1">
 <title>{{.Title}}</title>
 <style>` + reportCSS + `</style>
+<style>@media print{@page{@bottom-left{content:"{{.Footer}}";font:8pt sans-serif;color:#444}}}</style>
 </head>
-<body>
-<header class="top"><h1>Joist check: {{.Plan}}</h1>
-<div class="meta">framecheck report · {{.Date}}</div></header>
+<body{{if .Governing}} class="pkg-governing"{{end}}>
+<section id="title-page" class="title-page">
+<h1>{{if .ProjectName}}{{.ProjectName}}{{else}}Joist check{{end}}</h1>
+<p class="tp-sub">Wood joist calculations, NDS 2018 ASD: {{.Plan}}</p>
+<table class="tp">{{range .Project}}<tr><th>Project</th><td>{{.}}</td></tr>{{end}}
+<tr><th>Plan</th><td>{{.Plan}}</td></tr>
+<tr><th>Checked</th><td>{{.Date}}</td></tr>
+<tr><th>Design basis</th><td>{{range $i, $e := .Editions}}{{if $i}}; {{end}}{{$e}}{{end}}</td></tr>
+<tr><th>Result</th><td>{{.Summary.Members}} members: {{.Summary.Pass}} pass, {{.Summary.Fail}} fail, {{.Summary.Error}} in error</td></tr>
+<tr><th>Calculation package</th><td>{{if .Governing}}governing check of each mark written out, the others tabulated{{else}}every check of each mark written out{{end}}</td></tr>
+<tr><th>Tool</th><td>framecheck {{.Version}}</td></tr></table>
+<p class="tp-caution">{{range .Cautions}}{{.}} {{end}}</p>
+</section>
+<header class="top"><h1>{{if .ProjectName}}{{.ProjectName}}: {{end}}Joist check: {{.Plan}}</h1>
+<div class="meta">{{range .Project}}{{.}} · {{end}}framecheck {{.Version}} · {{.Date}}</div></header>
 <nav class="toc"><a href="#summary">Summary</a><a href="#plan">Plan</a><a href="#schedule">Schedule</a><a href="#takeoff">Takeoff</a><a href="#uplift">Uplift</a><a href="#calculations">Calculations</a><a href="#assumptions">Assumptions</a><a href="#cautions">Cautions</a></nav>
 <main>
 <section id="summary"><h2>Summary</h2>
 <div class="sum-grid"><div>
-<p>Plan <b>{{.Plan}}</b>, checked {{.Date}}.<br>Design basis: {{range $i, $e := .Editions}}{{if $i}}; {{end}}{{$e}}{{end}}.</p>
+<p>Plan <b>{{.Plan}}</b>, checked {{.Date}}.<br>Design basis: {{range $i, $e := .Editions}}{{if $i}}; {{end}}{{$e}}{{end}}.<br>
+Positions along a member are measured from the face of its first bearing (the side toward the span), in feet-inches; locations are plan coordinates in feet-inches.</p>
 <div class="cards">
 <div class="card"><b>{{.Summary.Members}}</b>members</div>
 <div class="card pass"><b>{{.Summary.Pass}}</b>pass</div>
@@ -153,20 +204,13 @@ const reportHTML = `<!DOCTYPE html>
 </div>
 </div>
 <div><h3 class="tight">Worst members, one per mark</h3>
-<table id="worst"><tr><th>member</th><th>mark</th><th>count</th><th>size</th><th>max ratio</th><th>governing check</th><th>status</th><th>drawn</th></tr>
+<table id="worst"><tr><th>member</th><th>mark</th><th>count</th><th>size</th><th>max ratio</th><th>governing check</th><th>status</th><th>location on the plan</th></tr>
 {{range .Worst}}<tr><td>{{.ID}}</td><td>{{.Mark}}</td><td class="n">{{.Count}}</td><td>{{.Size}}</td><td class="n">{{.Ratio}}</td><td>{{.Governing}}</td><td class="status-{{.Status}}">{{.Status}}</td><td>{{.Source}}</td></tr>
 {{end}}</table>
 </div></div>
 </section>
 
-<section id="plan"><h2>Plan: members coloured by their largest ratio</h2>
-<div class="legend"><span><span class="scale"></span><span class="scale-ticks"><span>0</span><span>0.5</span><span>0.8</span><span>1.0</span><span>1.5</span></span></span>
-{{range .Legend}}<span class="{{.Class}}"><span class="sw" style="background:{{.Colour}}"></span>{{.Label}}</span>{{end}}
-<span><span class="sw" style="background:#0a8fa8;height:3px"></span>blocking row to add</span>
-<span><span class="sw" style="background:#3a3f45;height:4px"></span>support</span></div>
-<div class="plan-wrap">{{.PlanSVG}}<div id="details"></div></div>
-<p class="hint">North is up. Scroll to zoom, drag to pan, double-click to reset; hover or click a member for its details.</p>
-</section>
+{{if not .Governing}}{{template "plansec" .}}{{end}}
 
 {{if .ErrorRows}}<section id="errors-list"><h2>Members in error (not checked)</h2>
 <table id="errors"><tr><th>member</th><th>drawn</th><th>why</th></tr>
@@ -197,14 +241,15 @@ Reactions are at ASD level (ASCE 7-16 2.4.1 combinations), by statics of each me
 At each flagged bearing a connector is needed whose allowable load for the combination's load duration (CD, NDS 2018 Table 2.3.2: 1.6 for wind) is at least the uplift shown; the designer picks the part.</p>
 <h3>By support line</h3>
 <table id="uplift-lines"><tr><th>support line</th><th>kind</th><th>bearings with uplift</th><th>flagged</th><th>largest, lb</th><th>total, lb</th><th>required connector capacity per bearing, ASD, lb</th><th>CD</th><th>combination</th><th>members</th></tr>
-{{range .Uplift.Lines}}<tr><td>{{.Support}}</td><td>{{.Kind}}</td><td class="n">{{.Count}}</td><td class="n">{{.Flagged}}</td><td class="n">{{.Max}}</td><td class="n">{{.Total}}</td><td class="n">{{.Need}}</td><td class="n">{{.CD}}</td><td>{{.Combo}}</td><td>{{.Members}}</td></tr>
+{{range .Uplift.Lines}}<tr><td>{{.Support}}</td><td>{{.Kind}}</td><td class="n">{{.Count}}</td><td class="n">{{.Flagged}}</td><td class="n">{{.Max}}</td><td class="n">{{.Total}}</td><td class="n">{{.Need}}</td><td class="n">{{.CD}}</td><td>{{combo .Combo}}</td><td>{{.Members}}</td></tr>
 {{end}}</table>
-<h3>By bearing</h3>
-<table id="uplift-bearings"><tr><th>member</th><th>mark</th><th>support line (bearing)</th><th>from member start</th><th>uplift, lb (ASD)</th><th>combination</th><th>CD</th><th></th></tr>
-{{range .Uplift.Rows}}<tr><td>{{.Member}}</td><td>{{.Mark}}</td><td>{{.Support}}</td><td class="n">{{.At}}</td><td class="n">{{if .Flagged}}<b>{{.Uplift}}</b>{{else}}{{.Uplift}}{{end}}</td><td>{{.Combo}}</td><td class="n">{{.CD}}</td><td>{{if .Flagged}}flagged{{else}}listed{{end}}</td></tr>
-{{end}}</table>{{if .Uplift.More}}<p>and {{.Uplift.More}} more bearings with uplift (see results.json, "uplift").</p>{{end}}
+{{if .Uplift.Rows}}<h3>By bearing</h3>
+<table id="uplift-bearings"><tr><th>member</th><th>mark</th><th>support line (bearing)</th><th>at, from face of first bearing</th><th>uplift, lb (ASD)</th><th>combination</th><th>CD</th><th></th></tr>
+{{range .Uplift.Rows}}<tr><td>{{.Member}}</td><td>{{.Mark}}</td><td>{{.Support}}</td><td class="n">{{.At}}</td><td class="n">{{if .Flagged}}<b>{{.Uplift}}</b>{{else}}{{.Uplift}}{{end}}</td><td>{{combo .Combo}}</td><td class="n">{{.CD}}</td><td>{{if .Flagged}}flagged{{else}}listed{{end}}</td></tr>
+{{end}}</table>{{end}}{{if .Uplift.More}}<p>and {{.Uplift.More}} more bearings with uplift (see results.json, "uplift").</p>{{end}}
 {{else}}<p>No bearing has a net uplift reaction under any load combination.</p>{{end}}
 </section>
+{{if .Governing}}{{template "plansec" .}}{{end}}
 
 <section id="calculations"><h2>Calculations by mark</h2>
 <p>Each mark is calculated for its governing member (largest ratio); the other members of the mark are identical for design.</p>
@@ -216,23 +261,27 @@ At each flagged bearing a connector is needed whose allowable load for the combi
 <table class="inputs">{{range .Inputs}}<tr><th>{{.Key}}</th><td>{{.Value}}</td></tr>{{end}}</table>
 {{if .Bracing}}<h4>Bracing relied on</h4><ul class="bracing">{{range .Bracing}}<li>{{.}}</li>{{end}}</ul>{{end}}
 {{if .DesignValues}}<h4>Reference design values</h4>
-<table><tr><th>value</th><th></th><th>size</th><th>source</th></tr>{{range .DesignValues}}<tr><td>{{.Name}}</td><td class="n">{{num .Value}} {{.Unit}}</td><td>{{.Size}}</td><td>{{.Source}}</td></tr>{{end}}</table>{{end}}
+<table><tr><th>value</th><th></th><th>size</th><th>source</th></tr>{{range .DesignValues}}<tr><td>{{.Name}}</td><td class="n">{{val .Value .Unit}} {{.Unit}}</td><td>{{.Size}}</td><td>{{.Source}}</td></tr>{{end}}</table>{{end}}
 {{if .AreaLoads}}<h4>Loads on the tributary width</h4>
-{{range .AreaLoads}}<div class="eq"><span class="sym">w_{{.Load}}</span> = p trib = {{.Subst}} = <span class="val">{{.WPlf}}</span> plf</div>{{end}}{{end}}
+<div class="loads">{{range .AreaLoads}}<div class="eq"><span class="sym">w<sub>{{.Load}}</sub></span> = p trib = {{.Subst}} = <span class="val">{{.WPlf}}</span> plf</div>{{end}}</div>{{end}}
 {{if .Combos}}<h4>Load combinations (ASCE 7-16 2.4.1, ASD)</h4>
 <table class="combos"><tr><th>combination</th><th>case</th><th>w = sum of factor x w</th><th>w, plf</th><th>CD (NDS 2018 Table 2.3.2)</th></tr>
-{{range .Combos}}<tr><td>{{.Combo}}</td><td>{{.Case}}</td><td>{{.Subst}}</td><td class="n">{{.WPlf}}</td><td class="n">{{.CD}}</td></tr>{{end}}</table>{{end}}
+{{range .Combos}}<tr><td>{{combo .Combo}}</td><td>{{.Case}}</td><td>{{.Subst}}</td><td class="n">{{.WPlf}}</td><td class="n">{{.CD}}</td></tr>{{end}}</table>{{end}}
 {{range .ComboProblems}}<p class="msgs">{{.}}</p>{{end}}
+{{if .FactorLine}}<p class="fline"><b>Adjustment factors:</b> {{.FactorLine}}</p>{{end}}
 {{if .Factors}}<h4>Adjustment factors</h4>
-{{range .Factors}}{{template "line" .}}{{end}}{{end}}
-<h4>Checks</h4>
-{{range .Checks}}<div class="check {{.Band}}" data-kind="{{.Kind}}"><h4>{{.Title}}, {{.Combo}}<span class="clause">{{.Clause}}</span></h4>
+<div class="factors">{{range .Factors}}{{template "line" .}}{{end}}</div>{{end}}
+<h4>{{if $.Governing}}Governing check{{else}}Checks{{end}}</h4>
+{{range .Checks}}<div class="check {{.Band}}" data-kind="{{.Kind}}"><h4>{{.Title}}, {{combo .Combo}}<span class="clause">{{.Clause}}</span></h4>
 {{range .Lines}}{{template "line" .}}{{end}}
-<div class="result {{if eq .Verdict "OK"}}ok{{else}}ng{{end}}">{{.Actual}} {{.Unit}} / {{.Allowable}} {{.Unit}} = <span class="ratio">{{.Ratio}}</span> {{if eq .Verdict "OK"}}&le; 1.000{{else}}&gt; 1.000{{end}}: {{.Verdict}}</div>
+<div class="result {{if eq .Verdict "OK"}}ok{{else}}ng{{end}}">{{.Actual}} {{mathn .Unit}} / {{.Allowable}} {{mathn .Unit}} = <span class="ratio">{{.Ratio}}</span> {{if eq .Verdict "OK"}}&le; 1.000{{else}}&gt; 1.000{{end}}: {{.Verdict}}</div>
 {{range .After}}<p class="hint alt-rule">{{.}}</p>{{end}}</div>
 {{end}}
+{{if .Others}}<h4>Other checks (not governing)</h4>
+<table class="others"><tr><th>check</th><th>combination</th><th>actual</th><th>allowable</th><th>ratio</th><th></th></tr>
+{{range .Others}}<tr><td>{{.Title}}</td><td>{{combo .Combo}}</td><td class="n">{{.Actual}} {{.Unit}}</td><td class="n">{{.Allowable}} {{.Unit}}</td><td class="n">{{.Ratio}}</td><td>{{.Verdict}}</td></tr>{{end}}</table>{{end}}
 {{if .Steps}}{{if .StepsDrawn}}<h4>Blocking rows: bottom-edge bending with the drawn rows, then each row added where the edge still failed (CL by NDS 2018 3.3.3)</h4>
-<table class="steps"><tr><th>rows added</th><th>lu, in</th><th>CL</th><th>ratio</th><th></th><th>rows added at, in</th></tr>
+<table class="steps"><tr><th>rows added</th><th>lu, in</th><th>CL</th><th>ratio</th><th></th><th>rows added at, from face of first bearing</th></tr>
 {{range .Steps}}<tr><td class="n">{{.Rows}}</td><td class="n">{{.Lu}}</td><td class="n">{{.CL}}</td><td class="n">{{.Ratio}}</td><td>{{.Verdict}}</td><td>{{.At}}</td></tr>{{end}}</table>{{else}}<h4>Blocking rows: bottom-edge bending for each number of rows tried (rows evenly spaced in every span; CL by NDS 2018 3.3.3)</h4>
 <table class="steps"><tr><th>rows per span</th><th>lu, in</th><th>CL</th><th>ratio</th><th></th></tr>
 {{range .Steps}}<tr><td class="n">{{.Rows}}</td><td class="n">{{.Lu}}</td><td class="n">{{.CL}}</td><td class="n">{{.Ratio}}</td><td>{{.Verdict}}</td></tr>{{end}}</table>{{end}}{{end}}
@@ -241,7 +290,7 @@ At each flagged bearing a connector is needed whose allowable load for the combi
 
 <section id="assumptions"><h2>Assumptions</h2>
 <h3>Code editions</h3><ul>{{range .Assumptions.CodeEditions}}<li>{{.}}</li>{{end}}</ul>
-<h3>Load combinations</h3><ul>{{range .Combos}}<li>{{.}}</li>{{end}}</ul>
+<h3>Load combinations</h3><ul>{{range .Combos}}<li>{{combo .}}</li>{{end}}</ul>
 {{if .Assumptions.Zones}}<h3>Load zones</h3>
 <table><tr><th>zone</th><th>use</th><th>D psf</th><th>L psf</th><th>Lr psf</th><th>S psf</th><th>W down psf</th><th>W up psf</th><th>ceiling</th><th>live limit</th><th>total limit</th></tr>
 {{range .Assumptions.Zones}}<tr><td>{{.Name}}</td><td>{{.Use}}</td><td class="n">{{num .DeadPsf}}</td><td class="n">{{num .LivePsf}}</td><td class="n">{{num .RoofLivePsf}}</td><td class="n">{{num .SnowPsf}}</td><td class="n">{{num .WindDownPsf}}</td><td class="n">{{num .WindUpPsf}}</td><td>{{.Ceiling}}</td><td class="n">{{limit .LiveDeflectionLimit}}</td><td class="n">{{limit .TotalDeflectionLimit}}</td></tr>
@@ -249,7 +298,7 @@ At each flagged bearing a connector is needed whose allowable load for the combi
 {{if .Assumptions.Switches}}<h3>Settings</h3>
 <table><tr><th>setting</th><th>value</th><th>from</th></tr>{{range .Assumptions.Switches}}<tr><td>{{.Name}}</td><td>{{.Value}} {{.Unit}}</td><td>{{.Source}}</td></tr>{{end}}</table>{{end}}
 {{if .Assumptions.DesignValues}}<h3>Design values used</h3>
-<table><tr><th>species</th><th>grade</th><th>size</th><th>value</th><th></th><th>source</th></tr>{{range .Assumptions.DesignValues}}<tr><td>{{.Species}}</td><td>{{.Grade}}</td><td>{{.Size}}</td><td>{{.Name}}</td><td class="n">{{num .Value}} {{.Unit}}</td><td>{{.Source}}</td></tr>{{end}}</table>{{end}}
+<table><tr><th>species</th><th>grade</th><th>size</th><th>value</th><th></th><th>source</th></tr>{{range .Assumptions.DesignValues}}<tr><td>{{.Species}}</td><td>{{.Grade}}</td><td>{{.Size}}</td><td>{{.Name}}</td><td class="n">{{val .Value .Unit}} {{.Unit}}</td><td>{{.Source}}</td></tr>{{end}}</table>{{end}}
 {{if .Assumptions.Notes}}<h3>Notes</h3><ul>{{range .Assumptions.Notes}}<li>{{.}}</li>{{end}}</ul>{{end}}
 </section>
 
@@ -258,4 +307,12 @@ At each flagged bearing a connector is needed whose allowable load for the combi
 <script>const FC = {{.MemberJSON}};` + reportJS + `</script>
 </body>
 </html>
-{{define "line"}}<div class="eq"><span class="sym">{{.Name}}</span>{{if .Formula}} = <span class="f">{{.Formula}}</span>{{end}}{{if .Subst}} = <span class="s">{{.Subst}}</span>{{end}} = <span class="val">{{.Value}}</span>{{if .Unit}} <span class="u">{{.Unit}}</span>{{end}}{{if .Note}} <span class="note">({{.Note}})</span>{{end}}{{if .Source}}<span class="src">{{.Source}}</span>{{end}}</div>{{end}}`
+{{define "plansec"}}<section id="plan"><h2>Plan: members coloured by their largest ratio</h2>
+<div class="legend"><span><span class="scale"></span><span class="scale-ticks"><span>0</span><span>0.5</span><span>0.8</span><span>1.0</span><span>1.5</span></span></span>
+{{range .Legend}}<span class="{{.Class}}"><span class="sw" style="background:{{.Colour}}"></span>{{.Label}}</span>{{end}}
+<span><span class="sw" style="background:#0a8fa8;height:3px"></span>blocking row to add</span>
+<span><span class="sw" style="background:#3a3f45;height:4px"></span>support</span></div>
+<div class="plan-wrap">{{.PlanSVG}}<div id="details"></div></div>
+<p class="hint">North is up. Scroll to zoom, drag to pan, double-click to reset; hover or click a member for its details.</p>
+</section>{{end}}
+{{define "line"}}<div class="eq"><span class="sym">{{math .Name}}</span>{{if .Formula}} = <span class="f">{{math .Formula}}</span>{{end}}{{if .Subst}} = <span class="s">{{mathn .Subst}}</span>{{end}} = <span class="val">{{.Value}}</span>{{if .Unit}} <span class="u">{{mathn .Unit}}</span>{{end}}{{if .Note}} <span class="note">({{.Note}})</span>{{end}}{{if .Source}}<span class="src">{{.Source}}</span>{{end}}</div>{{end}}`

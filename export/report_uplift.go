@@ -2,6 +2,8 @@ package export
 
 import (
 	"cmp"
+	"framecheck/export/internal/fmtx"
+	"math"
 	"slices"
 	"strconv"
 )
@@ -36,7 +38,7 @@ func lbText(v float64) string {
 	if !finite(v) {
 		return "n/a"
 	}
-	return strconv.FormatFloat(v, 'f', 1, 64)
+	return fmtx.Lb(math.Ceil(v)) // a connector demand: up to the next pound
 }
 
 // buildUplift fills the report's uplift section from r.Uplift: flagged
@@ -83,7 +85,7 @@ func buildUplift(r *Results) upliftSection {
 			support = unknownSupport
 		}
 		u.Rows = append(u.Rows, upliftRow{Member: b.Member, Mark: b.Mark,
-			Support: support + " (bearing " + strconv.Itoa(b.Bearing) + ")", At: FtIn(b.AtIn),
+			Support: support + " (bearing " + strconv.Itoa(b.Bearing) + ")", At: FtIn(b.FromFaceIn),
 			Uplift: lbText(b.UpliftLb), Combo: b.Combo, CD: fmtNum(b.CD), Flagged: b.Flagged})
 	}
 	return u

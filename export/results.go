@@ -1,5 +1,7 @@
 package export
 
+import "strings"
+
 // Schema is the value of results.json's "schema" key. Bump the number when
 // a key is renamed or removed; adding keys keeps it. Version 2 moved the
 // traces and factors of the members' checks into "calculations", written
@@ -37,10 +39,16 @@ const (
 // carries its own (often shared) slices.
 type Results struct {
 	Schema string `json:"schema"` // Schema; WriteJSON always writes Schema
-	Plan   string `json:"plan"`   // input file name
+	// ToolVersion is the framecheck version that wrote the results.
+	ToolVersion string `json:"tool_version,omitempty"`
+	// Project is the project file's [project] table.
+	Project ProjectInfo `json:"project"`
+	Plan    string      `json:"plan"` // input file name
 	// InputSHA256 is the SHA-256 of the drawing's bytes as checked (hex);
 	// the run's manifest carries the same.
-	InputSHA256  string        `json:"input_sha256,omitempty"`
+	InputSHA256 string `json:"input_sha256,omitempty"`
+	// Datum states how positions along members are measured (DatumText).
+	Datum        string        `json:"datum,omitempty"`
 	DrawingUnits string        `json:"drawing_units"` // in | ft | mm | cm | m
 	Members      []Member      `json:"members"`
 	Marks        []Mark        `json:"marks"`
@@ -49,6 +57,42 @@ type Results struct {
 	Takeoff      Takeoff       `json:"takeoff"`
 	Summary      Summary       `json:"summary"`
 	Assumptions  Assumptions   `json:"assumptions"`
+}
+
+// ProjectInfo is who and what the calculation is for (the project
+// file's [project] table), printed on every output.
+type ProjectInfo struct {
+	Name     string `json:"name"`
+	Number   string `json:"number"`
+	Address  string `json:"address"`
+	Designer string `json:"designer"`
+	Checker  string `json:"checker"`
+	Revision string `json:"revision"`
+	Date     string `json:"date"`
+}
+
+// Lines is the project's title block as text lines for the outputs:
+// "Garage loft, project 2026-041, 12 Orchard Lane" and "Designer A.
+// Designer; checker B. Checker; revision B; 2026-12-04", leaving out what
+// is empty; none when everything is.
+func (p ProjectInfo) Lines() []string {
+	join := func(parts ...string) string {
+		var keep []string
+		for _, s := range parts {
+			if s != "" && s != "project " && s != "designer " && s != "checker " && s != "revision " {
+				keep = append(keep, s)
+			}
+		}
+		return strings.Join(keep, ", ")
+	}
+	var out []string
+	if l := join(p.Name, "project "+p.Number, p.Address); l != "" {
+		out = append(out, l)
+	}
+	if l := join("designer "+p.Designer, "checker "+p.Checker, "revision "+p.Revision, p.Date); l != "" {
+		out = append(out, l)
+	}
+	return out
 }
 
 // ZonePiece is a stretch of a member in one load zone.
@@ -62,10 +106,20 @@ type ZonePiece struct {
 type Member struct {
 	ID     string `json:"id"`
 	Mark   string `json:"mark"`
+	Run    string `json:"run,omitempty"` // run of adjacent parallel joists, e.g. "R2"
 	Layer  string `json:"layer"`
 	Handle string `json:"handle"`
 	// Source names the drawn line, e.g. "plan.dxf:4410 (handle 2F1, layer JOISTS)".
 	Source string `json:"source,omitempty"`
+	// Location is where the member is on the plan, in feet-inches plan
+	// coordinates, with its handle and the drawing's file named relative
+	// to the current folder: "plan.dxf handle 43 (layer JOIST-FLOOR),
+	// 49'-9 3/4\", 2'-0\" to 61'-11 1/4\", 2'-0\"".
+	Location string `json:"location,omitempty"`
+	// DatumIn is the distance from Start to the face of the first
+	// bearing (its side toward the span), inches: the datum of every
+	// position along the member the outputs print (FromFace).
+	DatumIn float64 `json:"datum_in"`
 	// Start and End are in drawing units, as drawn.
 	Start [2]float64 `json:"start"`
 	End   [2]float64 `json:"end"`
@@ -98,6 +152,8 @@ type Member struct {
 
 	BlockingRowsPerSpan []int     `json:"blocking_rows_per_span"`
 	BlockingAtIn        []float64 `json:"blocking_at_in"` // rows to add, along the member from Start
+	// BlockingFromFaceIn are the same rows from the datum (DatumIn).
+	BlockingFromFaceIn []float64 `json:"blocking_from_face_in,omitempty"`
 	// DrawnBlockingAtIn are the rows drawn on the plan that the member
 	// relied on (existing: not in the takeoff), along it from Start.
 	DrawnBlockingAtIn []float64 `json:"drawn_blocking_at_in,omitempty"`
@@ -113,6 +169,23 @@ type Member struct {
 
 	Status   string   `json:"status"` // pass | fail | error
 	Messages []string `json:"messages"`
+}
+
+// DatumText is results.json's "datum": how positions along a member are
+// measured in every output.
+const DatumText = "positions along a member are measured from the face of its first bearing (the side toward the span): *from_face_in in inches, feet-inches to 1/16 in elsewhere; datum_in is that face's distance from the member's drawn start"
+
+// FromFace re-measures a position along m from its Start (inches) from
+// the datum, the face of its first bearing.
+func (m *Member) FromFace(atIn float64) float64 { return atIn - m.DatumIn }
+
+// fromFaceList re-measures positions along m from the datum.
+func (m *Member) fromFaceList(atIn []float64) []float64 {
+	out := make([]float64, len(atIn))
+	for i, v := range atIn {
+		out[i] = m.FromFace(v)
+	}
+	return out
 }
 
 // Check is one design check of a member under one load combination.
@@ -172,15 +245,18 @@ type Mark struct {
 // BlockingRow is one line of blocking across a run of adjacent parallel
 // joists at one position along the span.
 type BlockingRow struct {
-	ID         string    `json:"id"`          // e.g. "B1"
-	Run        string    `json:"run"`         // run id, e.g. "R2"
-	SpanIndex  int       `json:"span_index"`  // 0-based span of the run's members
-	PositionIn float64   `json:"position_in"` // along the span from its first bearing
-	Pieces     int       `json:"pieces"`      // joist-to-joist bays crossed
-	ClearIn    []float64 `json:"clear_in"`    // clear length of each piece
-	Size       string    `json:"size"`        // blocking size = joist size
-	Existing   bool      `json:"existing"`    // already drawn on a blocking layer
-	Members    []string  `json:"members"`     // ids of the members it crosses
+	ID         string  `json:"id"`          // e.g. "B1"
+	Run        string  `json:"run"`         // run id, e.g. "R2"
+	SpanIndex  int     `json:"span_index"`  // 0-based span of the run's members
+	PositionIn float64 `json:"position_in"` // along the span from its first bearing's centre-line
+	// FromFaceIn is the row's position along its members from the face
+	// of their first bearing (the datum, Member.DatumIn).
+	FromFaceIn float64   `json:"from_face_in"`
+	Pieces     int       `json:"pieces"`   // joist-to-joist bays crossed
+	ClearIn    []float64 `json:"clear_in"` // clear length of each piece
+	Size       string    `json:"size"`     // blocking size = joist size
+	Existing   bool      `json:"existing"` // already drawn on a blocking layer
+	Members    []string  `json:"members"`  // ids of the members it crosses
 	// Start and End of the row's line across the run, drawing units.
 	Start [2]float64 `json:"start"`
 	End   [2]float64 `json:"end"`

@@ -35,8 +35,10 @@ type UpliftBearing struct {
 	SupportKind   string `json:"support_kind"` // bearing-wall, dropped-beam, flush-beam, ledger
 	// AtIn is the bearing centre-line along the member from its Start, as
 	// Member.BearingsAtIn; Point is that point in drawing units.
-	AtIn  float64    `json:"at_in"`
-	Point [2]float64 `json:"point"`
+	AtIn float64 `json:"at_in"`
+	// FromFaceIn is AtIn from the member's datum (Member.DatumIn).
+	FromFaceIn float64    `json:"from_face_in"`
+	Point      [2]float64 `json:"point"`
 	// PointIn is Point in inches (world), for the DXF markup; not part of
 	// the JSON. Zero means "derive from Point".
 	PointIn [2]float64 `json:"-"`
@@ -129,7 +131,7 @@ func upliftFinite(u *UpliftReport) bool {
 	}
 	for i := range u.Bearings {
 		b := &u.Bearings[i]
-		if !ok(b.AtIn) || !ok(b.Point[0]) || !ok(b.Point[1]) || !ok(b.UpliftLb) || !ok(b.CD) {
+		if !ok(b.AtIn) || !ok(b.FromFaceIn) || !ok(b.Point[0]) || !ok(b.Point[1]) || !ok(b.UpliftLb) || !ok(b.CD) {
 			return false
 		}
 	}
@@ -186,6 +188,7 @@ func encodeUpliftBearing(dst []byte, b *UpliftBearing) ([]byte, error) {
 	o.str("support_handle", b.SupportHandle)
 	o.str("support_kind", b.SupportKind)
 	o.num("at_in", b.AtIn)
+	o.num("from_face_in", b.FromFaceIn)
 	o.floats("point", b.Point[:])
 	o.num("uplift_lb", b.UpliftLb)
 	o.str("combo", b.Combo)

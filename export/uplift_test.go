@@ -136,7 +136,7 @@ func TestUpliftSheetGroupsBySupportLine(t *testing.T) {
 		Support: "LEDGER handle 99", SupportLayer: "LEDGER", SupportHandle: "99", SupportKind: "ledger",
 		UpliftLb: 12.25, Combo: "0.6D+0.6W(up)", CD: 1.6})
 	f := writeFixtureXLSX(t, r)
-	rows, err := f.GetRows(SheetUplift)
+	rows, err := tableRowsOf(f, SheetUplift)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -160,9 +160,11 @@ func TestUpliftSheetGroupsBySupportLine(t *testing.T) {
 	want := []struct {
 		support, count, flagged, max, total, need, cd string
 	}{
-		{"WALL handle 34", "3", "2", "212.5", "373.5", "212.5", "1.60"},
-		{"WALL handle 35", "2", "2", "212.5", "372.7", "212.5", "1.60"},
-		{"LEDGER handle 99", "1", "0", "12.3", "12.3", "", "1.60"},
+		// pounds shown to the nearest 1 (fmtx rules); the required
+		// capacity stored rounded up to the pound
+		{"WALL handle 34", "3", "2", "213", "374", "213", "1.60"},
+		{"WALL handle 35", "2", "2", "213", "373", "213", "1.60"},
+		{"LEDGER handle 99", "1", "0", "12", "12", "", "1.60"},
 	}
 	for i, w := range want {
 		row := rows[i+1]
@@ -193,7 +195,7 @@ func TestUpliftSheetGroupsBySupportLine(t *testing.T) {
 	// No uplift at all: one row saying so.
 	r.Uplift.Bearings = nil
 	f = writeFixtureXLSX(t, r)
-	rows, _ = f.GetRows(SheetUplift)
+	rows, _ = tableRowsOf(f, SheetUplift)
 	if len(rows) != 2 || rows[1][0] != "none" {
 		t.Errorf("no uplift: rows %q", rows)
 	}
@@ -222,17 +224,17 @@ func TestReportUpliftSection(t *testing.T) {
 	}
 	lines := repRows(repByID(doc, "uplift-lines"))
 	if len(lines) != 3 || lines[1][0] != "WALL handle 34" || lines[1][2] != "3" || lines[1][3] != "2" ||
-		lines[1][5] != "373.5" || lines[1][6] != "212.5" {
+		lines[1][5] != "374" || lines[1][6] != "213" { // demands up to the next pound
 		t.Errorf("support lines %q", lines)
 	}
 	rows := repRows(repByID(doc, "uplift-bearings"))
 	if len(rows) != 6 {
 		t.Fatalf("%d bearing rows, want a header and 5: %q", len(rows), rows)
 	}
-	if rows[1][0] != "M3" || rows[1][4] != "212.5" || rows[1][7] != "flagged" {
+	if rows[1][0] != "M3" || rows[1][4] != "213" || rows[1][7] != "flagged" {
 		t.Errorf("first bearing row %q, want M3's 212.5 lb flagged", rows[1])
 	}
-	if last := rows[5]; last[0] != "M2" || last[4] != "0.8" || last[7] != "listed" {
+	if last := rows[5]; last[0] != "M2" || last[4] != "1" || last[7] != "listed" {
 		t.Errorf("last bearing row %q, want M2's 0.8 lb listed", last)
 	}
 
@@ -259,11 +261,13 @@ func TestUpliftLabelsOutOfOrder(t *testing.T) {
 	if len(m.Uplifts) != 3 {
 		t.Fatalf("%d uplift labels", len(m.Uplifts))
 	}
-	if l := m.Uplifts[0]; l.AngleDeg != 90 || l.At[0] != 0 || !(l.At[1] < 200) || l.Text != "uplift 100 lb" {
-		t.Errorf("M2 label %+v, want along M2 (90 deg), below its end, 100 lb", l)
+	// Beside the line: 0.65 h to its left as the text reads, h = 200/120 in.
+	side := 0.65 * 200.0 / 120
+	if l := m.Uplifts[0]; l.AngleDeg != 90 || math.Abs(l.At[0]+side) > 1e-9 || !(l.At[1] < 200) || l.Text != "uplift 100 lb" {
+		t.Errorf("M2 label %+v, want along M2 (90 deg), beside it, below its end, 100 lb", l)
 	}
-	if l := m.Uplifts[1]; l.AngleDeg != 0 || !(l.At[0] > 0) || l.At[1] != 0 {
-		t.Errorf("M1 label %+v, want along M1, right of its start", l)
+	if l := m.Uplifts[1]; l.AngleDeg != 0 || !(l.At[0] > 0) || math.Abs(l.At[1]-side) > 1e-9 {
+		t.Errorf("M1 label %+v, want along M1, beside it, right of its start", l)
 	}
 	if l := m.Uplifts[2]; l.At != [2]float64{5, 5} || l.AngleDeg != 0 {
 		t.Errorf("label of an unknown member %+v, want at its point, 0 deg", l)

@@ -7,6 +7,7 @@ import (
 	"compress/flate"
 	"fmt"
 	"io"
+	"strconv"
 
 	"github.com/xuri/excelize/v2"
 )
@@ -45,6 +46,7 @@ func WriteXLSX(path string, r *Results) error {
 	if err != nil {
 		return fmt.Errorf("export: %s: %w", path, err)
 	}
+	st.title = SheetTitle(r)
 	// Before any sheet is streamed: called after, it makes excelize read
 	// the streamed Members sheet back into memory and write it out again
 	// (at 10,000 members the schedule took 2.3 s instead of 0.3 s).
@@ -88,11 +90,46 @@ const (
 	cNum1           // 0.0
 	cRatio          // 0.00
 	cInt            // 0
+	cIn             // 0.00: inches (the formatting rule: in to 0.01)
+	cLb             // #,##0: pounds and psi to the nearest 1, grouped
+	cGen            // General: a value of any kind (the Inputs sheet)
 	nKinds
 )
 
+// TitleRows is the number of rows above each sheet's header row: the
+// project's title block and the tool version (SheetTitle).
+const TitleRows = 2
+
+// HeaderRow is the 1-based row of each sheet's header; its data start on
+// the row after it.
+const HeaderRow = TitleRows + 1
+
+// SheetTitle is the title block written in the first rows of every sheet:
+// the project (name, number, address) and who, revision and date, then
+// the plan and the framecheck version. Empty project fields are left out.
+func SheetTitle(r *Results) [TitleRows]string {
+	lines := r.Project.Lines()
+	var t [TitleRows]string
+	v := r.ToolVersion
+	if v == "" {
+		v = "version not stamped"
+	}
+	tail := "plan " + r.Plan + "; framecheck " + v
+	switch len(lines) {
+	case 0:
+		t[0], t[1] = "Joist check: "+r.Plan, tail
+	case 1:
+		t[0], t[1] = lines[0], tail
+	default:
+		t[0], t[1] = lines[0], lines[1]+"; "+tail
+	}
+	return t
+}
+
 // styles holds the style ids: plain, in a failing row, and a ratio over 1.
 type styles struct {
+	title  [TitleRows]string // SheetTitle of the results
+	bold   int               // the first title row
 	header int
 	plain  [nKinds]int
 	fail   [nKinds]int
@@ -103,6 +140,9 @@ type styles struct {
 func newStyles(f *excelize.File) (*styles, error) {
 	var st styles
 	var err error
+	if st.bold, err = f.NewStyle(&excelize.Style{Font: &excelize.Font{Bold: true, Size: 12}}); err != nil {
+		return nil, err
+	}
 	st.header, err = f.NewStyle(&excelize.Style{
 		Font:      &excelize.Font{Bold: true},
 		Fill:      excelize.Fill{Type: "pattern", Pattern: 1, Color: []string{"D9D9D9"}},
@@ -112,7 +152,7 @@ func newStyles(f *excelize.File) (*styles, error) {
 	if err != nil {
 		return nil, err
 	}
-	formats := [nKinds]string{cText: "@", cNum1: "0.0", cRatio: "0.00", cInt: "0"}
+	formats := [nKinds]string{cText: "@", cNum1: "0.0", cRatio: "0.00", cInt: "0", cIn: "0.00", cLb: "#,##0", cGen: "General"}
 	failFill := excelize.Fill{Type: "pattern", Pattern: 1, Color: []string{"F8CBAD"}}
 	for k := cellKind(0); k < nKinds; k++ {
 		fm := formats[k]
@@ -168,16 +208,26 @@ func newSheet(f *excelize.File, st *styles, name string, cols []column) (*sheet,
 			return nil, err
 		}
 	}
-	if err := sw.SetPanes(&excelize.Panes{Freeze: true, YSplit: 1, TopLeftCell: "A2", ActivePane: "bottomLeft"}); err != nil {
+	first := "A" + strconv.Itoa(HeaderRow+1)
+	if err := sw.SetPanes(&excelize.Panes{Freeze: true, YSplit: HeaderRow, TopLeftCell: first, ActivePane: "bottomLeft"}); err != nil {
 		return nil, err
 	}
 	s := &sheet{rowCells: rowCells{st: st}, f: f, sw: sw, name: name, ncols: len(cols)}
+	for i, line := range st.title {
+		style := 0
+		if i == 0 {
+			style = st.bold
+		}
+		if err := sw.SetRow("A"+strconv.Itoa(i+1), []any{excelize.Cell{StyleID: style, Value: line}}); err != nil {
+			return nil, err
+		}
+	}
 	head := make([]any, len(cols))
 	for i, c := range cols {
 		head[i] = excelize.Cell{StyleID: st.header, Value: c.Head}
 	}
-	s.row = 1
-	if err := sw.SetRow("A1", head, excelize.RowOpts{Height: 30}); err != nil {
+	s.row = HeaderRow
+	if err := sw.SetRow("A"+strconv.Itoa(HeaderRow), head, excelize.RowOpts{Height: 30}); err != nil {
 		return nil, err
 	}
 	return s, nil
@@ -201,11 +251,11 @@ func (s *sheet) end() error {
 
 // close sets the autofilter over the table and flushes the sheet.
 func (s *sheet) close() error {
-	last, err := excelize.CoordinatesToCellName(s.ncols, max(s.row, 2))
+	last, err := excelize.CoordinatesToCellName(s.ncols, max(s.row, HeaderRow+1))
 	if err != nil {
 		return err
 	}
-	if err := s.f.AutoFilter(s.name, "A1:"+last, nil); err != nil {
+	if err := s.f.AutoFilter(s.name, "A"+strconv.Itoa(HeaderRow)+":"+last, nil); err != nil {
 		return err
 	}
 	return s.sw.Flush()

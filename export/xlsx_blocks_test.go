@@ -35,7 +35,7 @@ func TestMemberBlocksStopsOnError(t *testing.T) {
 					time.Sleep(100 * time.Millisecond)
 					return boom
 				}
-				want := `<row r="` + strconv.Itoa(len(firstRows)*memberRowsPerBlock+2) + `">`
+				want := `<row r="` + strconv.Itoa(len(firstRows)*memberRowsPerBlock+HeaderRow+1) + `">`
 				if !bytes.HasPrefix(b.raw, []byte(want)) {
 					t.Errorf("block %d does not start with %s", len(firstRows), want)
 				}

@@ -3,6 +3,7 @@ package export
 import (
 	"bytes"
 	"compress/flate"
+	"framecheck/export/internal/fmtx"
 	"hash/crc32"
 	"math"
 	"runtime"
@@ -103,8 +104,8 @@ func memberRow(s *rowCells, m *Member) {
 		s.text("")
 	}
 	s.text(FtIn(m.LengthIn))
-	s.num(m.SpacingIn, cNum1)
-	s.num(m.TribIn, cNum1)
+	s.num(m.SpacingIn, cIn)
+	s.num(m.TribIn, cIn)
 	s.text(m.Zone)
 	var kindRatio [6]float64
 	var kindSeen [6]bool
@@ -121,17 +122,35 @@ func memberRow(s *rowCells, m *Member) {
 	g, ok := governingCheck(m)
 	s.text(m.Governing)
 	if ok {
-		s.text(g.Combo)
+		s.text(fmtx.Combo(g.Combo))
 	} else {
 		s.text("")
 	}
 	s.ratio(m.MaxRatio, len(m.Checks) > 0 || m.MaxRatio != 0)
-	s.text(intList(m.BlockingRowsPerSpan))
-	s.text(ftInList(m.BlockingAtIn))
+	rowsPerSpan(s, m.BlockingRowsPerSpan)
+	s.text(ftInList(m.fromFaceList(m.BlockingAtIn)))
 	s.text(m.Status)
 	s.text(m.Layer)
 	s.text(m.Handle)
+	s.text(m.Location)
 	s.text(strings.Join(m.Messages, "; "))
+}
+
+// rowsPerSpan adds the blocking rows per span as a number when every span
+// has the same count (or there is one span), as text ("1, 2") otherwise,
+// and empty when the member has none.
+func rowsPerSpan(s *rowCells, rows []int) {
+	if len(rows) == 0 {
+		s.text("")
+		return
+	}
+	for _, n := range rows[1:] {
+		if n != rows[0] {
+			s.text(intList(rows))
+			return
+		}
+	}
+	s.integer(rows[0])
 }
 
 // colNames are the column letters A, B, ... of the Members sheet.
@@ -243,8 +262,8 @@ type rowBlock struct {
 	raw, deflated []byte
 }
 
-// memberBlocks builds the rows of members (row numbers from 2, after the
-// header) in blocks on every core, and hands each block to emit in order.
+// memberBlocks builds the rows of members (row numbers from HeaderRow+1,
+// after the title rows and the header) in blocks on every core, and hands each block to emit in order.
 // Each block is deflated on its own and ended with a sync flush, so the
 // blocks joined make one deflate stream (RFC 1951, 3.2.3: a stream is a
 // series of blocks; only the last has BFINAL set) once a final empty
@@ -274,7 +293,7 @@ func memberBlocks(st *styles, members []Member, emit func(rowBlock) error) error
 				raw := make([]byte, 0, (hi-lo)*1600)
 				for k := lo; k < hi; k++ {
 					memberRow(&rc, &members[k])
-					raw = appendRow(raw, k+2, rc.store)
+					raw = appendRow(raw, k+HeaderRow+1, rc.store)
 				}
 				zbuf.Reset()
 				zw.Reset(&zbuf)

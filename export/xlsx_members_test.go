@@ -84,11 +84,11 @@ func TestMembersRowsMatchExcelize(t *testing.T) {
 	}
 	defer got.Close()
 	want := referenceMembersXLSX(t, r)
-	gotRows, err := got.GetRows(SheetMembers)
+	gotRows, err := tableRowsOf(got, SheetMembers)
 	if err != nil {
 		t.Fatal(err)
 	}
-	wantRows, err := want.GetRows(SheetMembers)
+	wantRows, err := tableRowsOf(want, SheetMembers)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -119,7 +119,7 @@ func TestMembersRowsMatchExcelize(t *testing.T) {
 		}
 	}
 	// The autofilter and the frozen header cover the table.
-	if panes, err := got.GetPanes(SheetMembers); err != nil || !panes.Freeze || panes.YSplit != 1 {
+	if panes, err := got.GetPanes(SheetMembers); err != nil || !panes.Freeze || panes.YSplit != HeaderRow {
 		t.Errorf("panes %+v, %v: want the header row frozen", panes, err)
 	}
 }
@@ -177,10 +177,10 @@ func TestMembersPartWellFormed(t *testing.T) {
 				rows++
 			}
 		}
-		if rows != len(r.Members)+1 {
-			t.Errorf("%d rows in the XML, want %d", rows, len(r.Members)+1)
+		if rows != len(r.Members)+HeaderRow {
+			t.Errorf("%d rows in the XML, want %d", rows, len(r.Members)+HeaderRow)
 		}
-		if want := `<dimension ref="A1:Y5001"/>`; bytes.Contains(data, []byte("<dimension")) && !bytes.Contains(data, []byte(want)) {
+		if want := `<dimension ref="A1:Z5003"/>`; bytes.Contains(data, []byte("<dimension")) && !bytes.Contains(data, []byte(want)) {
 			t.Errorf("dimension is not %s", want)
 		}
 		return
@@ -212,7 +212,7 @@ func TestDeflatePiecesJoin(t *testing.T) {
 // its header row only, readable by excelize.
 func TestMembersSheetEmpty(t *testing.T) {
 	f := writeFixtureXLSX(t, &Results{Plan: "empty.dxf"})
-	rows, err := f.GetRows(SheetMembers)
+	rows, err := tableRowsOf(f, SheetMembers)
 	if err != nil {
 		t.Fatal(err)
 	}

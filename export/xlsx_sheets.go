@@ -1,6 +1,7 @@
 package export
 
 import (
+	"framecheck/export/internal/fmtx"
 	"strconv"
 	"strings"
 
@@ -16,9 +17,15 @@ var membersColumns = []column{
 	{"Bending top", 9}, {"Bending bottom", 9}, {"Shear", 9},
 	{"Defl. live", 9}, {"Defl. total", 9}, {"Bearing", 9},
 	{"Governing", 16}, {"Combination", 22}, {"Max ratio", 9},
-	{"Blocking rows / span", 11}, {"Blocking at (ft-in)", 24}, {"Status", 8},
-	{"Layer", 16}, {"Handle", 8}, {"Messages", 60},
+	{"Blocking rows / span", 11}, {BlockingAtHeader, 24}, {"Status", 8},
+	{"Layer", 16}, {"Handle", 8}, {"Location (plan, ft-in)", 48}, {"Messages", 60},
 }
+
+// The datum in the sheets' headers (DatumText).
+const (
+	BlockingAtHeader = "Blocking to add (ft-in from face of first bearing)"
+	PositionHeader   = "Position (ft-in from face of first bearing)"
+)
 
 // governingCheck returns the check that governs m: the largest ratio among
 // checks of kind m.Governing, or among all checks when that is empty.
@@ -66,10 +73,10 @@ func writeMarks(f *excelize.File, st *styles, r *Results) error {
 		s.text(m.Size)
 		s.text(speciesGrade(m.Species, m.Grade))
 		s.text(m.Zone)
-		s.num(m.SpacingIn, cNum1)
+		s.num(m.SpacingIn, cIn)
 		s.text(SpansText(m.SpansIn, m.OverhangsIn))
 		s.integer(m.Count)
-		s.text(intList(m.BlockingRowsPerSpan))
+		rowsPerSpan(&s.rowCells, m.BlockingRowsPerSpan)
 		s.ratio(m.MaxRatio, true)
 		s.text(m.Status)
 		if err := s.end(); err != nil {
@@ -81,7 +88,7 @@ func writeMarks(f *excelize.File, st *styles, r *Results) error {
 
 func writeBlocking(f *excelize.File, st *styles, r *Results) error {
 	s, err := newSheet(f, st, SheetBlocking, []column{
-		{"Row", 7}, {"Run", 7}, {"Span", 6}, {"Position (ft-in)", 14}, {"Position (in)", 10},
+		{"Row", 7}, {"Run", 7}, {"Span", 6}, {PositionHeader, 14}, {"From face of first bearing (in)", 10},
 		{"Pieces", 7}, {"Clear length of each piece (in)", 40}, {"Size", 7},
 		{"Drawn or add", 9}, {"Members", 40},
 	})
@@ -93,8 +100,8 @@ func writeBlocking(f *excelize.File, st *styles, r *Results) error {
 		s.text(b.ID)
 		s.text(b.Run)
 		s.integer(b.SpanIndex + 1)
-		s.text(FtIn(b.PositionIn))
-		s.num(b.PositionIn, cNum1)
+		s.text(FtIn(b.FromFaceIn))
+		s.num(b.FromFaceIn, cIn)
 		s.integer(b.Pieces)
 		s.text(numList(b.ClearIn))
 		s.text(b.Size)
@@ -167,11 +174,18 @@ func writeInputs(f *excelize.File, st *styles, r *Results) error {
 	if err != nil {
 		return err
 	}
+	// A value is a number when it reads as one (loads, design values,
+	// numeric settings): stored as a number, so the sheet can compute
+	// with it and shows no thousands separators of ours.
 	row := func(group, name, value, unit, source string) error {
 		s.begin(false)
 		s.text(group)
 		s.text(name)
-		s.text(value)
+		if v, err := strconv.ParseFloat(value, 64); err == nil && finite(v) {
+			s.num(v, cGen)
+		} else {
+			s.text(value)
+		}
 		s.text(unit)
 		s.text(source)
 		return s.end()
@@ -186,7 +200,7 @@ func writeInputs(f *excelize.File, st *styles, r *Results) error {
 		rows = append(rows, [5]string{"setting", sw.Name, sw.Value, sw.Unit, sw.Source})
 	}
 	for _, c := range a.Combinations {
-		rows = append(rows, [5]string{"combination", c, "", "", "ASCE 7-16 2.4.1 or project file"})
+		rows = append(rows, [5]string{"combination", fmtx.Combo(c), "", "", "ASCE 7-16 2.4.1 or project file"})
 	}
 	for _, z := range a.Zones {
 		g := "zone " + z.Name
@@ -223,12 +237,13 @@ func fnum(v float64) string {
 }
 
 // layerNotes describe the annotated drawing's layers on the Notes sheet.
-var layerNotes = []string{
-	"Annotated drawing: layer " + LayerFail + " marks every failing or erroring member.",
-	"Annotated drawing: layer " + LayerBlocking + " draws every blocking row to add, across its run.",
-	"Annotated drawing: layer " + LayerLabel + " labels each member with its mark and largest ratio.",
-	"Annotated drawing: layer " + LayerUplift + " labels each bearing with flagged net uplift with its ASD uplift reaction (connector demand).",
-}
+var layerNotes = func() []string {
+	var out []string
+	for _, l := range markupLayers {
+		out = append(out, "Annotated drawing: layer "+l.Name+": "+l.Meaning+".")
+	}
+	return append(out, "Annotated drawing: our layers' colours differ from every layer colour of the drawing; the key (layer "+LayerKey+") right of the plan names each colour.")
+}()
 
 func writeNotes(f *excelize.File, st *styles, r *Results) error {
 	s, err := newSheet(f, st, SheetNotes, []column{{"Kind", 12}, {"Note", 120}})

@@ -120,7 +120,7 @@ func writeMembersPart(zw *zip.Writer, f *zip.File, st *styles, members []Member)
 		return errors.New("not the Members sheet as expected (no header row before </sheetData>)")
 	}
 	head, tail := xml[:cut], xml[cut:]
-	last := colNames[len(colNames)-1] + strconv.Itoa(len(members)+1)
+	last := colNames[len(colNames)-1] + strconv.Itoa(len(members)+HeaderRow)
 	head = dimensionRE.ReplaceAll(head, []byte(`<dimension ref="A1:`+last+`"/>`))
 
 	var part deflatedPart

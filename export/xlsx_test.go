@@ -41,7 +41,7 @@ func TestWriteXLSXSheets(t *testing.T) {
 		SheetNotes:    1 + len(Cautions) + len(r.Assumptions.Notes) + len(layerNotes),
 	}
 	for sheet, n := range wantRows {
-		rows, err := f.GetRows(sheet)
+		rows, err := tableRowsOf(f, sheet)
 		if err != nil {
 			t.Fatal(err)
 		}
@@ -63,7 +63,7 @@ func TestWriteXLSXSheets(t *testing.T) {
 		if err != nil {
 			t.Fatal(err)
 		}
-		if !p.Freeze || p.YSplit != 1 || p.TopLeftCell != "A2" {
+		if !p.Freeze || p.YSplit != HeaderRow || p.TopLeftCell != "A4" {
 			t.Errorf("%s: panes %+v, want the header row frozen", sheet, p)
 		}
 	}
@@ -72,7 +72,7 @@ func TestWriteXLSXSheets(t *testing.T) {
 // cellAt returns the cell name of the column headed head in row.
 func cellAt(t *testing.T, f *excelize.File, sheet, head string, row int) string {
 	t.Helper()
-	rows, err := f.GetRows(sheet)
+	rows, err := tableRowsOf(f, sheet)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -80,7 +80,7 @@ func cellAt(t *testing.T, f *excelize.File, sheet, head string, row int) string 
 	if col < 0 {
 		t.Fatalf("%s: no column %q in %q", sheet, head, rows[0])
 	}
-	name, _ := excelize.CoordinatesToCellName(col+1, row)
+	name, _ := excelize.CoordinatesToCellName(col+1, row+TitleRows) // row counts from the header
 	return name
 }
 
@@ -105,10 +105,10 @@ func TestWriteXLSXCells(t *testing.T) {
 		{SheetMembers, "Bending bottom", 5, "1.12"},
 		{SheetMembers, "Shear", 5, ""},
 		{SheetMembers, "Governing", 5, "bending-bottom"},
-		{SheetMembers, "Combination", 5, "0.6D+0.6W"},
+		{SheetMembers, "Combination", 5, "0.6D + 0.6W"}, // as ASCE 7-16 2.4.1 writes it
 		{SheetMembers, "Status", 5, "fail"},
-		{SheetMembers, "Spans (ft-in)", 2, `12'-0"`},      // 144 in
-		{SheetMembers, "Blocking at (ft-in)", 4, `6'-0"`}, // 72 in
+		{SheetMembers, "Spans (ft-in)", 2, `12'-0"`}, // 144 in
+		{SheetMembers, BlockingAtHeader, 4, `6'-0"`}, // 72 in, datum 0 in the fixture
 		{SheetMembers, "Species / grade", 2, "Douglas Fir-Larch No.2"},
 		{SheetMarks, "Count", 3, "2"},
 		{SheetBlocking, "Clear length of each piece (in)", 2, "14.5, 14.5"},
@@ -123,7 +123,7 @@ func TestWriteXLSXCells(t *testing.T) {
 			t.Errorf("%s %s row %d = %q, want %q", c.sheet, c.head, c.row, got, c.want)
 		}
 	}
-	notes, _ := f.GetRows(SheetNotes)
+	notes, _ := tableRowsOf(f, SheetNotes)
 	var all strings.Builder
 	for _, row := range notes {
 		all.WriteString(strings.Join(row, " "))
@@ -231,6 +231,28 @@ func BenchmarkWriteJSON(b *testing.B) {
 	for b.Loop() {
 		if err := WriteJSON(path, r); err != nil {
 			b.Fatal(err)
+		}
+	}
+}
+
+// TestSheetTitleRows: every sheet starts with the project's title block and
+// the tool version, above its header.
+func TestSheetTitleRows(t *testing.T) {
+	r := loadFixture(t)
+	r.ToolVersion = "v1.2.3-test"
+	r.Project = ProjectInfo{Name: "Garage loft", Number: "2026-041", Address: "12 Orchard Lane", Designer: "A. Designer",
+		Checker: "B. Checker", Revision: "B", Date: "2026-12-04"}
+	f := writeFixtureXLSX(t, r)
+	for _, sheet := range SheetNames {
+		rows, err := f.GetRows(sheet)
+		if err != nil || len(rows) < HeaderRow {
+			t.Fatalf("%s: %v %q", sheet, err, rows)
+		}
+		if rows[0][0] != "Garage loft, project 2026-041, 12 Orchard Lane" {
+			t.Errorf("%s row 1 %q", sheet, rows[0][0])
+		}
+		if want := "designer A. Designer, checker B. Checker, revision B, 2026-12-04; plan " + r.Plan + "; framecheck v1.2.3-test"; rows[1][0] != want {
+			t.Errorf("%s row 2 %q, want %q", sheet, rows[1][0], want)
 		}
 	}
 }

@@ -1,6 +1,8 @@
 package export
 
 import (
+	"framecheck/export/internal/fmtx"
+	"math"
 	"strconv"
 	"strings"
 
@@ -52,15 +54,15 @@ func writeUpliftSheet(f *excelize.File, st *styles, r *Results) error {
 		s.text(l.Kind)
 		s.integer(l.Count)
 		s.integer(l.Flagged)
-		s.num(l.MaxLb, cNum1)
-		s.num(l.TotalLb, cNum1)
+		s.num(l.MaxLb, cLb)
+		s.num(l.TotalLb, cLb)
 		if l.Flagged > 0 {
-			s.num(l.MaxLb, cNum1)
+			s.num(math.Ceil(l.MaxLb), cLb) // a demand: up to the next pound
 		} else {
 			s.text("")
 		}
 		s.num(l.CD, cRatio)
-		s.text(l.Combo)
+		s.text(fmtx.Combo(l.Combo))
 		s.text(memberList(l.Members))
 		s.text(upliftNote(l, r.Uplift.ReportLb))
 		if err := s.end(); err != nil {

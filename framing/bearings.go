@@ -271,7 +271,8 @@ func (g *grouper) groupBearing(grp []hit, merged map[[2]int]bool, L float64) (Be
 		g.inGroup[h.sup] = true
 		g.lp.middle(h.sup, key)
 	}
-	return Bearing{AtIn: (first.t + last.t) / 2, LengthIn: lb, Kind: sp.Kind, Pos: s0.pos, Support: g.pairRef(key)}, dir
+	return Bearing{AtIn: (first.t + last.t) / 2, LengthIn: lb, Kind: sp.Kind, Pos: s0.pos, Support: g.pairRef(key),
+		WidthIn: last.t - first.t}, dir
 }
 
 // finishBearings sets the overhangs and hangers of a member with at least

@@ -39,6 +39,23 @@ type Bearing struct {
 	// Support is the index into Plan.Supports of the support line (or
 	// merged double line) the member bears on; -1 when unknown.
 	Support int
+	// WidthIn is the width of a support drawn with several lines,
+	// measured along the member: LengthIn is shorter where the member
+	// stops inside it. 0 for a single line (the support's face is then
+	// LengthIn/2 from the centre-line).
+	WidthIn float64
+}
+
+// FaceIn returns the position along the member of the bearing's face
+// toward +dir (dir +1: toward End, -1: toward Start): the centre-line plus
+// or minus half the support's drawn width (or of the bearing length for a
+// single line).
+func (b Bearing) FaceIn(dir float64) float64 {
+	w := b.WidthIn
+	if w <= 0 {
+		w = b.LengthIn
+	}
+	return b.AtIn + dir*w/2
 }
 
 // ZonePiece is a stretch of a member, along it from Start, lying in one

@@ -74,14 +74,81 @@ def main(demo, overlay_dir):
     ours = {k: n for k, n in after.items() if k not in before}
     def on(layer):
         return sum(n for (l, _), n in ours.items() if l == layer)
-    if on("FC-FAIL") != failing:
-        fail("FC-FAIL holds %d entities, results.json has %d failing or error members" % (on("FC-FAIL"), failing))
-    if on("FC-BLOCKING-ADD") != to_add:
-        fail("FC-BLOCKING-ADD holds %d entities, results.json has %d rows to add" % (on("FC-BLOCKING-ADD"), to_add))
-    if on("FC-LABEL") != len(members):
-        fail("FC-LABEL holds %d labels, results.json has %d members" % (on("FC-LABEL"), len(members)))
+    def on_kind(layer, kind):
+        return ours.get((layer, kind), 0)
+    n_fail = sum(1 for m in members if m["status"] == "fail")
+    n_err = sum(1 for m in members if m["status"] == "error")
+    if on_kind("FC-FAIL", "LINE") != n_fail or on("FC-FAIL") != n_fail:
+        fail("FC-FAIL holds %d entities, results.json has %d failing members" % (on("FC-FAIL"), n_fail))
+    # Each member in error: its highlight and one short reason beside it.
+    if on_kind("FC-ERROR", "LINE") != n_err or on_kind("FC-ERROR", "TEXT") != n_err:
+        fail("FC-ERROR holds %d lines, %d texts; results.json has %d members in error" % (
+            on_kind("FC-ERROR", "LINE"), on_kind("FC-ERROR", "TEXT"), n_err))
+    for e in doc.modelspace().query('TEXT[layer=="FC-ERROR"]'):
+        if " ERROR: " not in e.dxf.text or e.dxf.text.endswith("ERROR: "):
+            fail("error label %r gives no reason" % e.dxf.text)
+    runs_to_add = {r["run"] for r in res["blocking_rows"] if not r.get("existing")}
+    if on_kind("FC-BLOCKING-ADD", "LINE") != to_add or on_kind("FC-BLOCKING-ADD", "TEXT") != len(runs_to_add):
+        fail("FC-BLOCKING-ADD holds %d lines, %d notes; results.json has %d rows to add in %d runs" % (
+            on_kind("FC-BLOCKING-ADD", "LINE"), on_kind("FC-BLOCKING-ADD", "TEXT"), to_add, len(runs_to_add)))
+    for e in doc.modelspace().query('TEXT[layer=="FC-BLOCKING-ADD"]'):
+        if not e.dxf.text.startswith("ADD BLOCKING "):
+            fail("blocking note %r" % e.dxf.text)
+    # One label per run and mark (not one per member), naming the mark.
+    groups = {(m.get("run"), m["mark"]) for m in members if m["status"] != "error"}
+    labels = [e for e in doc.modelspace().query('TEXT[layer=="FC-LABEL"]')]
+    if len(labels) != len(groups) or len(labels) >= len(members):
+        fail("FC-LABEL holds %d labels, results.json has %d runs x marks (%d members)" % (len(labels), len(groups), len(members)))
+    marks = {m["mark"] for m in members if m["mark"]}
+    for e in labels:
+        parts = e.dxf.text.split()
+        if parts[0] not in marks or "@" not in parts[1] or not parts[-1].replace(".", "").isdigit():
+            fail("label %r is not 'MARK SIZE@SPACING CHECK RATIO'" % e.dxf.text)
+    if on_kind("FC-ID", "TEXT") != len(members):
+        fail("FC-ID holds %d ids, results.json has %d members" % (on_kind("FC-ID", "TEXT"), len(members)))
     if on("FC-UPLIFT") != flagged or ours.get(("FC-UPLIFT", "TEXT"), 0) != flagged:
         fail("FC-UPLIFT holds %d entities, results.json flags %d bearings" % (on("FC-UPLIFT"), flagged))
+    # Colours: ours distinct from each other and from every layer of the
+    # source drawing, never yellow (ACI 2), which does not print on white.
+    src_colours = {abs(l.dxf.color) for l in src.layers}
+    mine = {}
+    for name in ("FC-FAIL", "FC-ERROR", "FC-BLOCKING-ADD", "FC-LABEL", "FC-UPLIFT", "FC-ID", "FC-KEY"):
+        if name not in doc.layers:
+            fail("plan-checked.dxf: no layer %s" % name)
+        c = abs(doc.layers.get(name).dxf.color)
+        if c in src_colours or c == 2 or c in mine.values():
+            fail("layer %s colour %d clashes (source uses %s, ours %s)" % (name, c, sorted(src_colours), mine))
+        mine[name] = c
+    # The key: a title and one line per layer, right of every source entity.
+    key = [e for e in doc.modelspace().query('TEXT[layer=="FC-KEY"]')]
+    if not any(e.dxf.text == "FRAMECHECK MARKUP KEY" for e in key) or \
+            not all(any(e.dxf.text.startswith(n + " ") for e in key) for n in mine if n != "FC-KEY"):
+        fail("the key lacks its title or a layer: %r" % [e.dxf.text for e in key])
+    if not any(("FRAMECHECK " + res.get("tool_version", "?")).upper() in e.dxf.text for e in key):
+        fail("the key does not stamp the tool version %r" % res.get("tool_version"))
+    xs = []
+    for e in src.modelspace():
+        if e.dxftype() == "LINE":
+            xs += [e.dxf.start.x, e.dxf.end.x]
+        elif e.dxftype() == "LWPOLYLINE":
+            xs += [p[0] for p in e.get_points("xy")]
+    if min(e.dxf.insert.x for e in key) <= max(xs):
+        fail("the key overlaps the plan (x %.1f <= %.1f)" % (min(e.dxf.insert.x for e in key), max(xs)))
+    # Labels beside the joist lines, not on them: the centre of every label
+    # (error reason, uplift) is farther than half its height from every joist.
+    joists = [(e.dxf.start, e.dxf.end) for e in src.modelspace().query("LINE")
+              if e.dxf.layer.upper().startswith("JOIST")]
+    def dist(p, a, b):
+        ax, ay, bx, by = a.x, a.y, b.x, b.y
+        dx, dy = bx - ax, by - ay
+        t = 0.0 if dx == dy == 0 else max(0.0, min(1.0, ((p.x - ax) * dx + (p.y - ay) * dy) / (dx * dx + dy * dy)))
+        return ((p.x - ax - t * dx) ** 2 + (p.y - ay - t * dy) ** 2) ** 0.5
+    for e in labels + list(doc.modelspace().query('TEXT[layer=="FC-ERROR"]')) + \
+            list(doc.modelspace().query('TEXT[layer=="FC-UPLIFT"]')):
+        p = e.dxf.align_point
+        d = min(dist(p, a, b) for a, b in joists)
+        if d <= e.dxf.height / 2:
+            fail("label %r at %s lies on a joist line (%.2f from it, height %.2f)" % (e.dxf.text, p, d, e.dxf.height))
     # Geometry of the original joists is unchanged (first LINE on each layer).
     for e_src, e_out in zip(src.modelspace().query("LINE"), doc.modelspace().query("LINE")):
         if e_src.dxf.start.isclose(e_out.dxf.start, abs_tol=1e-9) is False or e_src.dxf.layer != e_out.dxf.layer:
@@ -97,7 +164,7 @@ def main(demo, overlay_dir):
     if odoc.audit().has_errors:
         fail("ezdxf audit errors in the overlay")
     layers = {e.dxf.layer.upper() for e in odoc.modelspace()}
-    if not layers <= {"FC-FAIL", "FC-BLOCKING-ADD", "FC-LABEL", "FC-UPLIFT"}:
+    if not layers <= {"FC-FAIL", "FC-ERROR", "FC-BLOCKING-ADD", "FC-LABEL", "FC-UPLIFT", "FC-ID", "FC-KEY"}:
         fail("overlay holds entities on other layers: %r" % sorted(layers))
 
     # Schedule: sheets, one row per member, totals.
@@ -107,26 +174,32 @@ def main(demo, overlay_dir):
         fail("sheets %r, want %r" % (wb.sheetnames, want))
     # Uplift sheet: one row per support line, bearing counts adding up to
     # results.json's list.
-    up_rows = [r for r in list(wb["Uplift"].iter_rows(values_only=True))[1:] if r and r[0]]
+    # Each sheet: two title rows (project, version), the header, the data.
+    skip = 3
+    for ws in wb.worksheets:
+        v = str(ws.cell(2, 1).value or "")
+        if "framecheck " not in v or res.get("tool_version", "") not in v:
+            fail("%s: row 2 %r does not stamp the tool version %r" % (ws.title, v, res.get("tool_version")))
+    up_rows = [r for r in list(wb["Uplift"].iter_rows(values_only=True))[skip:] if r and r[0]]
     lines = {b["support"] for b in up["bearings"]}
     if len(up_rows) != len(lines) or sum(r[2] for r in up_rows) != len(up["bearings"]):
         fail("Uplift sheet: %d lines, %d bearings; results.json %d lines, %d bearings" % (
             len(up_rows), sum(r[2] for r in up_rows), len(lines), len(up["bearings"])))
     rows = list(wb["Members"].iter_rows(values_only=True))
-    data = [r for r in rows[1:] if any(v not in (None, "") for v in r)]
+    data = [r for r in rows[skip:] if any(v not in (None, "") for v in r)]
     if len(data) != len(members):
         fail("Members sheet has %d rows, results.json %d members" % (len(data), len(members)))
     ids = [r[0] for r in data]
     if ids != [m["id"] for m in members]:
         fail("Members sheet ids differ from results.json")
-    marks = [r for r in list(wb["Marks"].iter_rows(values_only=True))[1:] if r and r[0]]
+    marks = [r for r in list(wb["Marks"].iter_rows(values_only=True))[skip:] if r and r[0]]
     if len(marks) != len(res["marks"]):
         fail("Marks sheet has %d rows, results.json %d marks" % (len(marks), len(res["marks"])))
     notes = " ".join(str(v) for r in wb["Notes"].iter_rows(values_only=True) for v in r if v)
     if "licensed professional" not in notes:
         fail("Notes sheet lacks the cautions")
-    print("demo_check: %d members (%d failing or error), %d rows to add, %d marks, %d uplift labels: DXF, overlay and XLSX agree"
-          % (len(members), failing, to_add, len(res["marks"]), flagged))
+    print("demo_check: %d members (%d failing or error), %d rows to add, %d marks, %d run labels, %d uplift labels, colours %s: DXF, overlay and XLSX agree"
+          % (len(members), failing, to_add, len(res["marks"]), len(labels), flagged, mine))
 
 
 if __name__ == "__main__":

@@ -13,9 +13,14 @@ import os
 import sys
 from collections import Counter
 
-OUR_LAYERS = ("FC-FAIL", "FC-BLOCKING-ADD", "FC-LABEL", "FC-UPLIFT")
-TEXT_LAYERS = ("FC-LABEL", "FC-UPLIFT")
+OUR_LAYERS = ("FC-FAIL", "FC-ERROR", "FC-BLOCKING-ADD", "FC-LABEL", "FC-UPLIFT", "FC-ID", "FC-KEY")
+TEXT_LAYERS = ("FC-LABEL", "FC-UPLIFT", "FC-ID")
+LINE_LAYERS = ("FC-FAIL",)  # the others hold lines and texts
 failures = []
+# Every sheet starts with the project's title block (two rows), then the
+# header row; the table's data follow it.
+TITLE_ROWS = 2
+HEAD = TITLE_ROWS + 1
 
 
 def fail(msg):
@@ -147,7 +152,7 @@ def check_dxf(out):
                 fail("%s: layer %s not in the LAYER table" % (dst, layer))
         kinds = Counter((s[0], s[1]) for s in after_all if s[1] in OUR_LAYERS)
         for (t, layer), n in kinds.items():
-            want = "TEXT" if layer in TEXT_LAYERS else "LINE"
+            want = "TEXT" if layer in TEXT_LAYERS else "LINE" if layer in LINE_LAYERS else t
             if t != want:
                 fail("%s: %d %s on %s, want %s" % (dst, n, t, layer, want))
         # The highlight of a failing member lies on a drawn joist (checks the
@@ -203,22 +208,24 @@ def check_xlsx(out):
         "Takeoff": 1 + len(t["joists"]) + len(t["blocking"]) + len(t["hangers"]) + 4,
     }
     for name, n in rows.items():
-        if wb[name].max_row != n:
-            fail("%s: %d rows, want %d" % (name, wb[name].max_row, n))
+        if wb[name].max_row != n + TITLE_ROWS:
+            fail("%s: %d rows, want %d" % (name, wb[name].max_row, n + TITLE_ROWS))
     for ws in wb.worksheets:
-        if ws.freeze_panes != "A2":
-            fail("%s: frozen panes %s, want A2" % (ws.title, ws.freeze_panes))
+        if ws.freeze_panes != "A%d" % (HEAD + 1):
+            fail("%s: frozen panes %s, want A%d" % (ws.title, ws.freeze_panes, HEAD + 1))
+        if not str(ws.cell(1, 1).value or ""):
+            fail("%s: no title block in row 1" % ws.title)
         # excelize writes the range absolute ($A$1:$Y$5); both forms are valid.
-        if not (ws.auto_filter.ref or "").replace("$", "").startswith("A1:"):
+        if not (ws.auto_filter.ref or "").replace("$", "").startswith("A%d:" % HEAD):
             fail("%s: no autofilter (%r)" % (ws.title, ws.auto_filter.ref))
     ms = wb["Members"]
-    head = [c.value for c in ms[1]]
+    head = [c.value for c in ms[HEAD]]
     col = {h: i for i, h in enumerate(head)}
     for h in ("ID", "Mark", "Spans (ft-in)", "Max ratio", "Status", "Governing", "Combination"):
         if h not in col:
             fail("Members: no column %r" % h)
             return
-    by_id = {row[col["ID"]].value: row for row in ms.iter_rows(min_row=2)}
+    by_id = {row[col["ID"]].value: row for row in ms.iter_rows(min_row=HEAD + 1)}
     for m in res["members"]:
         row = by_id.get(m["id"])
         if row is None:
@@ -240,7 +247,7 @@ def check_xlsx(out):
         fail("Members %s: span text %r, want 12'-0\"" % (first["id"], by_id[first["id"]][col["Spans (ft-in)"]].value))
     tk = wb["Takeoff"]
     j = t["joists"][0]
-    r2 = [c.value for c in tk[2]]
+    r2 = [c.value for c in tk[HEAD + 1]]
     if r2[0] != "Joists" or r2[1] != j["size"] or r2[4] != j["count"] or abs(r2[5] - j["board_feet"]) > 1e-9:
         fail("Takeoff row 2 %s, want joists %s" % (r2, j))
     notes = " ".join(str(c.value) for row in wb["Notes"].iter_rows() for c in row)
@@ -259,7 +266,7 @@ def check_uplift_sheet(ws, res):
         g["flagged"] += 1 if b["flagged"] else 0
         g["max"] = max(g["max"], b["uplift_lb"])
         g["total"] += b["uplift_lb"]
-    rows = list(ws.iter_rows(values_only=True))
+    rows = list(ws.iter_rows(values_only=True))[TITLE_ROWS:]
     head = rows[0]
     col = {h: i for i, h in enumerate(head)}
     need = "Required connector capacity per bearing, ASD (lb)"
@@ -287,8 +294,9 @@ def check_uplift_sheet(ws, res):
             fail("Uplift %s: largest %r total %r, want %r %r" % (row[0], row[col["Largest uplift (lb)"]],
                                                                   row[col["Total uplift (lb)"]], g["max"], g["total"]))
         req = row[col[need]]
-        if g["flagged"] and (req is None or abs(req - g["max"]) > 1e-9 * max(1, g["max"])):
-            fail("Uplift %s: required capacity %r, want the largest uplift %r" % (row[0], req, g["max"]))
+        # the largest uplift rounded up to the pound: a demand is never rounded down
+        if g["flagged"] and (req is None or req != math.ceil(g["max"] - 1e-9)):
+            fail("Uplift %s: required capacity %r, want the largest uplift %r rounded up" % (row[0], req, g["max"]))
         if not g["flagged"] and req not in (None, ""):
             fail("Uplift %s: required capacity %r for a line with no flagged bearing" % (row[0], req))
         if row[col["CD"]] != 1.6:

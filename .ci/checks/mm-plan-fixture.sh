@@ -90,8 +90,13 @@ for m in r["members"]:
 checked = ezdxf.readfile(res + "/mm_plan-checked.dxf")
 if checked.audit().has_errors:
     fail("annotated copy does not audit clean")
+# one label per run and mark, one id per member
 labels = [e for e in checked.modelspace().query("TEXT") if e.dxf.layer == "FC-LABEL"]
-if len(labels) != len(r["members"]):
-    fail("%d FC-LABEL texts for %d members" % (len(labels), len(r["members"])))
+groups = {(m.get("run"), m["mark"]) for m in r["members"] if m["status"] != "error"}
+if len(labels) != len(groups):
+    fail("%d FC-LABEL texts for %d runs x marks" % (len(labels), len(groups)))
+ids = [e for e in checked.modelspace().query("TEXT") if e.dxf.layer == "FC-ID"]
+if sorted(e.dxf.text for e in ids) != sorted(m["id"] for m in r["members"]):
+    fail("FC-ID texts differ from the members' ids")
 print("mm-plan-fixture: %d joists, members and labels agree" % len(ends))
 PYEOF

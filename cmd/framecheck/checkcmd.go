@@ -66,6 +66,19 @@ type checkRun struct {
 	doubts   []dxfimport.Issue         // findings that make the whole run doubtful (runDoubts)
 	planData []byte                    // the drawing, read once: checked and annotated from these bytes
 	set      atomic.Pointer[outputSet] // the output folder while the run holds it
+	pkg      string                    // report's calculation package: full | governing
+	pdf      bool                      // also print report.pdf with a Chromium
+}
+
+// reportFlags adds --package and --pdf to f for c.
+func (c *checkRun) reportFlags(f *cmdFlags) {
+	f.StringVar(&c.pkg, "package", export.PackageFull, "report's calculation package: full (every check of each mark) or governing (each mark's governing check)")
+	f.BoolVar(&c.pdf, "pdf", false, "also write report.pdf beside report.html (needs Chromium or Chrome)")
+}
+
+// validPackage reports whether --package names a package.
+func (c *checkRun) validPackage() bool {
+	return c.pkg == "" || c.pkg == export.PackageFull || c.pkg == export.PackageGoverning
 }
 
 // afterRead, when not nil, runs once the drawing is in memory (a test
@@ -73,7 +86,7 @@ type checkRun struct {
 var afterRead func()
 
 func runCheckCmd(args []string, stdout, stderr io.Writer) int {
-	f := newFlags("check", "framecheck check PLAN.dxf [-p PROJECT.toml] [-o OUTDIR] [--units U] [--size] [--overlay]",
+	f := newFlags("check", "framecheck check PLAN.dxf [-p PROJECT.toml] [-o OUTDIR] [--units U] [--size] [--overlay] [--package full|governing] [--pdf]",
 		`Reads the plan, finds the joists and their supports, checks every joist
 (NDS 2018 ASD, ASCE 7-16 combinations, IBC 2018 deflection limits), decides
 the blocking rows each run needs, and writes results.json, schedule.xlsx,
@@ -90,6 +103,7 @@ previous outputs kept), 130/143 stopped by SIGINT/SIGTERM.`)
 	f.StringVar(&c.units, "units", "", "drawing units: in, ft, mm, cm or m (overrides the project file and $INSUNITS)")
 	f.BoolVar(&c.size, "size", false, "pick the lightest passing size from [sizing] candidates")
 	f.BoolVar(&c.overlay, "overlay", false, "also write the markup alone as an R12 overlay DXF")
+	c.reportFlags(f)
 	pos, code := f.parse(args, stdout, stderr)
 	if code >= 0 {
 		return code
@@ -100,6 +114,9 @@ previous outputs kept), 130/143 stopped by SIGINT/SIGTERM.`)
 	c.planPath = pos[0]
 	if c.units != "" && !validUnit(c.units) {
 		return f.usageError(stderr, "--units %q: want in, ft, mm, cm or m", c.units)
+	}
+	if !c.validPackage() {
+		return f.usageError(stderr, "--package %q: want full or governing", c.pkg)
 	}
 	if c.outDir == "" {
 		base := strings.TrimSuffix(filepath.Base(c.planPath), filepath.Ext(c.planPath))
@@ -122,9 +139,13 @@ func runDemo(args []string, stdout, stderr io.Writer) int {
 check on them, so the whole job can be seen with no files at hand.`)
 	c := checkRun{}
 	f.StringVar(&c.outDir, "o", "framecheck-demo", "output folder")
+	c.reportFlags(f)
 	pos, code := f.parse(args, stdout, stderr)
 	if code >= 0 {
 		return code
+	}
+	if !c.validPackage() {
+		return f.usageError(stderr, "--package %q: want full or governing", c.pkg)
 	}
 	if len(pos) != 0 {
 		return f.usageError(stderr, "demo takes no arguments")
@@ -233,6 +254,13 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		// permission, a lock): exit 3, the previous outputs kept.
 		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitMachine
+	}
+	if c.pdf {
+		if p, perr := writeReportPDF(filepath.Join(c.outDir, reportName)); perr != nil {
+			fmt.Fprintf(stderr, "framecheck: --pdf: %v\n", perr)
+		} else {
+			written = append(written, p)
+		}
 	}
 	printIssues(stderr, o.issues)
 	c.warnings, c.doubts = countWarnings(o.issues), runDoubts(o.issues)
@@ -399,7 +427,8 @@ func (c *checkRun) write(o *outcome, res *export.Results, proj *Project, stderr 
 		func() error { return export.WriteJSON(set.path(names[0]), res) },
 		func() error { return export.WriteXLSX(set.path(names[1]), res) },
 		func() error {
-			return export.WriteReport(set.path(names[4]), res, planGeometry(o), when)
+			return export.WriteReportWith(set.path(names[4]), res, planGeometry(o), when,
+				export.ReportOptions{Package: c.pkg})
 		},
 		func() error { return export.AnnotateBytes(c.planData, c.planPath, set.path(names[2]), mk) },
 	}
@@ -443,6 +472,8 @@ func (c *checkRun) write(o *outcome, res *export.Results, proj *Project, stderr 
 		}
 	}
 	if overlay {
+		// The overlay's layers avoid the plan's colours too (when readable).
+		mk.UsedACI, _ = export.DrawingLayerColours(c.planPath)
 		if err := add(names[3], export.WriteOverlay(set.path(names[3]), mk, res.DrawingUnits)); err != nil {
 			return nil, err
 		}

@@ -12,7 +12,7 @@
 //
 //	framecheck <command> [arguments]
 //
-// Every command takes --help. Flags may come before or after the file
+// `framecheck --version` prints the version. Every command takes --help. Flags may come before or after the file
 // arguments; "--" ends the flags. Errors go to standard error, prefixed
 // "framecheck: ". Colour is used only when standard output is a terminal
 // and the NO_COLOR environment variable is unset.
@@ -204,6 +204,9 @@ func run(args []string, stdout, stderr io.Writer) int {
 			return unknownCommand(args[1], stderr)
 		}
 		usage(stdout)
+		return exitOK
+	case "--version", "-version", "version":
+		fmt.Fprintln(stdout, "framecheck", toolVersion())
 		return exitOK
 	}
 	if c := lookup(name); c != nil {

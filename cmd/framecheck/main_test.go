@@ -141,3 +141,44 @@ func TestColour(t *testing.T) {
 		t.Errorf("paint on: %q", got)
 	}
 }
+
+// TestVersionFlag: --version prints the stamped version (set here as the
+// linker's -X would) and exits 0.
+func TestVersionFlag(t *testing.T) {
+	old := version
+	version = "v9.8.7-test"
+	defer func() { version = old }()
+	var out, errb strings.Builder
+	if code := run([]string{"--version"}, &out, &errb); code != exitOK || out.String() != "framecheck v9.8.7-test\n" {
+		t.Errorf("--version: exit %d, %q %q", code, out.String(), errb.String())
+	}
+	version = ""
+	if v := toolVersion(); v == "" {
+		t.Error("toolVersion empty without a stamp")
+	}
+}
+
+// TestPackageAndPDFFlags: --package takes full or governing; --pdf with
+// no browser to be found says how to get one and the run still writes its
+// outputs.
+func TestPackageAndPDFFlags(t *testing.T) {
+	dir := t.TempDir()
+	var out, errb strings.Builder
+	if code := run([]string{"demo", "-o", dir, "--package", "all"}, &out, &errb); code != exitUsage ||
+		!strings.Contains(errb.String(), "want full or governing") {
+		t.Errorf("--package all: exit %d, %q", code, errb.String())
+	}
+	t.Setenv("FRAMECHECK_CHROMIUM", filepath.Join(dir, "no-such-browser"))
+	out.Reset()
+	errb.Reset()
+	code := run([]string{"demo", "-o", dir, "--package", "governing", "--pdf"}, &out, &errb)
+	if code == exitUsage || !strings.Contains(errb.String(), "--pdf:") {
+		t.Errorf("--pdf without a browser: exit %d, stderr %q", code, errb.String())
+	}
+	if _, err := os.Stat(filepath.Join(dir, "report.html")); err != nil {
+		t.Errorf("no report.html: %v", err)
+	}
+	if _, err := os.Stat(filepath.Join(dir, pdfName)); err == nil {
+		t.Error("a report.pdf was written without a browser")
+	}
+}

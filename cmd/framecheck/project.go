@@ -18,6 +18,7 @@ type Project struct {
 	// defaults.
 	File string
 
+	Info     ProjectInfo     // [project]
 	Drawing  DrawingSettings // [drawing]
 	Layers   LayerRoles      // [layers]
 	Supports []Support       // [[support]]

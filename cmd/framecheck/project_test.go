@@ -488,3 +488,24 @@ func TestAllowZero(t *testing.T) {
 		t.Errorf("allow_zero as a string: %v", err)
 	}
 }
+
+// TestProjectInfoTable: [project] is free text printed on the outputs; a
+// TOML date is kept as written, a number where text is wanted is an
+// error naming the key and its line.
+func TestProjectInfoTable(t *testing.T) {
+	p, err := ParseProject("p.toml", []byte("[project]\nname = \"Garage loft\"\nnumber = \"2026-041\"\nrevision = \"B\"\ndate = 2026-12-04\n"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	want := ProjectInfo{Name: "Garage loft", Number: "2026-041", Revision: "B", Date: "2026-12-04"}
+	if p.Info != want {
+		t.Errorf("info %+v, want %+v", p.Info, want)
+	}
+	_, err = ParseProject("p.toml", []byte("[project]\nnumber = 41\n"))
+	if err == nil || !strings.Contains(err.Error(), "p.toml:2: project.number: expected a string") {
+		t.Errorf("number = 41: %v", err)
+	}
+	if p := DefaultProject(); p.Info != (ProjectInfo{}) {
+		t.Errorf("default project info %+v, want empty", p.Info)
+	}
+}

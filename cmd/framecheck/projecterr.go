@@ -64,8 +64,9 @@ var schema = []struct {
 	show string
 	keys []string
 }{
-	{"the top level", []string{"drawing", "layers", "support", "lumber", "design", "loads", "zone", "sizing",
+	{"the top level", []string{"project", "drawing", "layers", "support", "lumber", "design", "loads", "zone", "sizing",
 		"post", "point_load"}},
+	{"[project]", projectInfoKeys},
 	{"[drawing]", []string{"units", "snap_tolerance_in", "max_wall_thickness_in", "edge_distance_in"}},
 	{"[layers]", []string{"joists", "blocking", "zones", "labels", "posts", "point_loads"}},
 	{"[[support]]", []string{"layers", "kind", "bearing_in", "species", "grade", "size", "plies", "material", "check"}},

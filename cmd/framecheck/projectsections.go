@@ -15,6 +15,7 @@ import (
 // project reads the top-level tables in the order the reference file
 // lists them.
 func (ld *loader) project(root *table) {
+	ld.info(ld.sub(root, "project"))
 	ld.drawing(ld.sub(root, "drawing"))
 	ld.layers(ld.sub(root, "layers"))
 	ld.supports(root)

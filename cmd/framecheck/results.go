@@ -24,7 +24,8 @@ func exportResults(o *outcome, planName string) *export.Results {
 	if units == "" {
 		units = "in" // read as inches, with a DXF issue saying so
 	}
-	r := &export.Results{Schema: export.Schema, Plan: filepath.Base(planName), DrawingUnits: units}
+	r := &export.Results{Schema: export.Schema, Plan: filepath.Base(planName), DrawingUnits: units, Datum: export.DatumText,
+		ToolVersion: toolVersion(), Project: exportInfo(o.project.Info)}
 	ids := make([]string, len(plan.Members))
 	for k := range plan.Members {
 		ids[k] = plan.Members[k].ID
@@ -32,7 +33,19 @@ func exportResults(o *outcome, planName string) *export.Results {
 	conv := newResultConverter()
 	r.Members = make([]export.Member, 0, len(plan.Members))
 	for k := range plan.Members {
-		r.Members = append(r.Members, conv.member(&plan.Members[k], &o.results[k], toInch))
+		em := conv.member(&plan.Members[k], &o.results[k], toInch)
+		placeMember(&em, &plan.Members[k])
+		if len(em.Messages) > 0 {
+			msgs := make([]string, len(em.Messages))
+			for i, msg := range em.Messages {
+				msgs[i] = planPointsFtIn(msg, toInch)
+			}
+			em.Messages = msgs
+		}
+		if ri := plan.Members[k].Run; ri >= 0 && ri < len(plan.Runs) {
+			em.Run = plan.Runs[ri].ID
+		}
+		r.Members = append(r.Members, em)
 		switch o.results[k].Status {
 		case check.StatusPass:
 			r.Summary.Pass++
@@ -49,6 +62,16 @@ func exportResults(o *outcome, planName string) *export.Results {
 	}
 	r.Takeoff = exportTakeoff(o.takeoff)
 	r.Uplift = exportUplift(plan, o.results, o.project.Design.UpliftReportLb, toInch)
+	if len(r.Uplift.Bearings) > 0 {
+		datum := make(map[string]float64, len(r.Members))
+		for i := range r.Members {
+			datum[r.Members[i].ID] = r.Members[i].DatumIn
+		}
+		for i := range r.Uplift.Bearings {
+			u := &r.Uplift.Bearings[i]
+			u.FromFaceIn = u.AtIn - datum[u.Member]
+		}
+	}
 	r.Assumptions = assumptions(o)
 	return r
 }
@@ -278,6 +301,7 @@ func exportRow(plan *framing.Plan, row framing.BlockingRow, ids []string, toInch
 	// Which span of the run's first member the row falls in, and where
 	// along that span from its first bearing.
 	first := &plan.Members[run.Members[0]]
+	er.FromFaceIn = row.AtIn - datumIn(first)
 	for i := 1; i < len(first.Bearings); i++ {
 		if row.AtIn <= first.Bearings[i].AtIn || i == len(first.Bearings)-1 {
 			er.SpanIndex = i - 1

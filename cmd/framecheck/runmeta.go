@@ -9,46 +9,12 @@ import (
 	"os"
 	"os/signal"
 	"path/filepath"
-	"runtime/debug"
 	"strconv"
 	"strings"
 	"sync"
 	"syscall"
 	"time"
 )
-
-// version is the tool's version, set at build time with
-// -ldflags "-X main.version=v1.2.3"; empty, it comes from the build
-// information (module version and VCS revision).
-var version = ""
-
-// toolVersion returns version, or what the build information says.
-func toolVersion() string {
-	if version != "" {
-		return version
-	}
-	info, ok := debug.ReadBuildInfo()
-	if !ok {
-		return "unknown"
-	}
-	v := info.Main.Version
-	rev, dirty := "", false
-	for _, s := range info.Settings {
-		switch s.Key {
-		case "vcs.revision":
-			rev = s.Value
-		case "vcs.modified":
-			dirty = s.Value == "true"
-		}
-	}
-	if rev != "" {
-		v += " " + rev[:min(12, len(rev))]
-		if dirty {
-			v += "+modified"
-		}
-	}
-	return v
-}
 
 // runTime is the time a run states in its report and manifest: now, or
 // SOURCE_DATE_EPOCH (seconds since 1970, UTC) when it is set, so that two

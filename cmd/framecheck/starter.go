@@ -13,6 +13,16 @@ const starterProject = `# framecheck project file: the designer's inputs for one
 # A misspelled or unknown key is an error, never ignored.
 # Check with: framecheck check PLAN.dxf -p framecheck.toml
 
+[project]
+# Printed on the report, the first rows of every sheet and results.json.
+name = ""
+number = ""
+address = ""
+designer = ""
+checker = ""
+revision = ""
+date = ""                     # as you write it, e.g. "2026-12-04" or "4 Dec 2026"
+
 [drawing]
 # Unit of the drawing's coordinates: in | ft | mm | cm | m.
 # Left out, it comes from the DXF header ($INSUNITS).

@@ -81,9 +81,13 @@ func write(td, out string, stdout io.Writer) error {
 	e := expect{
 		Layers: map[string]int{
 			export.LayerFail:     len(m.Highlights),
-			export.LayerBlocking: len(m.BlockingAdds),
+			export.LayerError:    len(m.Errors) + len(m.Reasons),
+			export.LayerBlocking: len(m.BlockingAdds) + len(m.BlockingNotes),
 			export.LayerLabel:    len(m.Labels),
 			export.LayerUplift:   len(m.Uplifts),
+			export.LayerID:       len(m.IDs),
+			// the key: title, stamp, datum, a sample line and a text per layer
+			export.LayerKey: m.KeyEntities(),
 		},
 		Overlay: filepath.Join(out, "overlay.dxf"),
 		XLSX:    filepath.Join(out, "schedule.xlsx"),
