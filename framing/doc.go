@@ -173,7 +173,7 @@
 //	FRM230 warning  entity on a posts layer that is no post (a large circle or outline, open lines): skipped
 //	FRM231 error    point-load mark with no text beside it, or a text that cannot be read
 //	FRM232 error    point-load mark on no joist or beam
-//	FRM233 warning  point-load text with no mark near it (or beside a mark with a nearer text)
+//	FRM233 error    point-load text with no mark near it (or beside a mark with a nearer text): not applied
 //	FRM234 warning  beam with fewer than two supports of its own found: stays a rigid bearing
 //	FRM235 error    beams that bear on each other in a cycle
 //

@@ -15,7 +15,8 @@ func FuzzGroup(f *testing.F) {
 	f.Add([]byte("\x00\x01\x02\x03\x04\x05\x06\x07\x08\x09\x0a\x0b\x0c\x0d\x0e\x0f\x10\x11"))
 	f.Add([]byte("\xff\xff\xff\xff\xff\xff\xff\x7f\x00\x00\x00\x00\x00\x00\xf8\x7f"))
 	f.Fuzz(func(t *testing.T, data []byte) {
-		layers := []string{"JOIST", "WALL", "BEAM-FLUSH", "BLOCKING", "LOAD-ZONE", "FRAMING-NOTE", "OTHER"}
+		layers := []string{"JOIST", "WALL", "BEAM-FLUSH", "BLOCKING", "LOAD-ZONE", "FRAMING-NOTE", "OTHER",
+			"POST", "POINT-LOAD", "BEAM-DROP"}
 		p := newPlan()
 		num := func() float64 {
 			if len(data) < 2 {
@@ -29,7 +30,7 @@ func FuzzGroup(f *testing.F) {
 			return v
 		}
 		for len(data) >= 3 {
-			op, layer := data[0]%4, layers[int(data[1])%len(layers)]
+			op, layer := data[0]%6, layers[int(data[1])%len(layers)]
 			data = data[2:]
 			switch op {
 			case 0:
@@ -45,9 +46,13 @@ func FuzzGroup(f *testing.F) {
 				e := dxfimport.Entity{Kind: dxfimport.KindLWPolyline, Pos: p.pos(layer),
 					Points: []Point{{X: num(), Y: num()}, {X: num(), Y: num()}}, Bulges: []float64{num(), 0}}
 				p.d.Entities = append(p.d.Entities, e)
+			case 4:
+				p.circle(layer, num(), num(), math.Abs(num())/8)
+			case 5:
+				p.point(layer, num(), num())
 			}
 		}
-		opt := DefaultOptions()
+		opt := loadPathOptions()
 		pl := p.group(opt)
 		for _, m := range pl.Members {
 			if m.LengthIn <= 0 || math.IsNaN(m.TribIn) || m.TribIn < 0 || m.Run < 0 || m.Run >= len(pl.Runs) {
@@ -62,10 +67,54 @@ func FuzzGroup(f *testing.F) {
 				t.Fatalf("%s usable with %d bearings", m.ID, len(m.Bearings))
 			}
 		}
+		checkLoadPathIndices(t, pl)
 		for r := range pl.Runs {
 			pl.PlaceRows(r, []float64{10, 50})
 		}
 		AssignMarks(pl)
 		BuildTakeoff(pl, nil)
 	})
+}
+
+// checkLoadPathIndices checks that every index of the load path points
+// into its slice.
+func checkLoadPathIndices(t *testing.T, pl *Plan) {
+	t.Helper()
+	for _, m := range pl.Members {
+		for _, b := range m.Bearings {
+			if b.Support < -1 || b.Support >= len(pl.Supports) {
+				t.Fatalf("%s bearing support %d of %d", m.ID, b.Support, len(pl.Supports))
+			}
+		}
+	}
+	for _, b := range pl.Beams {
+		if b.LengthIn <= 0 || len(b.Lines) == 0 {
+			t.Fatalf("beam %+v", b)
+		}
+		for _, s := range b.Supports {
+			if s < 0 || s >= len(pl.Supports) {
+				t.Fatalf("%s support %d", b.ID, s)
+			}
+		}
+		for _, br := range b.Bearings {
+			n := map[string]int{BeamOnPost: len(pl.Posts), BeamOnWall: len(pl.Supports), BeamOnBeam: len(pl.Beams)}[br.Kind]
+			if br.Index < -1 || br.Index >= n {
+				t.Fatalf("%s bearing %+v", b.ID, br)
+			}
+		}
+		for _, c := range b.Carried {
+			if c.Member < 0 || c.Member >= len(pl.Members) || c.Bearing < 0 || c.Bearing >= len(pl.Members[c.Member].Bearings) {
+				t.Fatalf("%s carried %+v", b.ID, c)
+			}
+		}
+		if len(b.Bearings) < 2 != b.Rigid {
+			t.Fatalf("%s rigid %v with %d bearings", b.ID, b.Rigid, len(b.Bearings))
+		}
+	}
+	for _, m := range pl.PointLoads {
+		if m.Member >= len(pl.Members) || m.Beam >= len(pl.Beams) || m.Member >= 0 && m.Beam >= 0 ||
+			m.Member < 0 && m.Beam < 0 && m.Err == "" {
+			t.Fatalf("point load %+v", m)
+		}
+	}
 }

@@ -142,8 +142,13 @@ func (g *grouper) findPointLoads() {
 			marks = append(marks, PointLoadMark{At: at, Pos: *es[0].From, Text: text, TextPos: tp})
 		}
 	}
+	ownText := make([]bool, len(marks), len(marks)+len(model)) // a block's own text is its text
+	for i := range marks {
+		ownText[i] = marks[i].Text != ""
+	}
 	for _, e := range model {
 		marks = append(marks, PointLoadMark{At: e.Points[0], Pos: e.Pos})
+		ownText = append(ownText, false)
 	}
 	// each text goes to its nearest mark within reach; a mark takes the
 	// nearest of the texts that chose it
@@ -154,23 +159,23 @@ func (g *grouper) findPointLoads() {
 	for _, t := range s.loadTexts {
 		mk, md := -1, pointLoadReachIn(t)
 		for i := range marks {
-			if d := dist(marks[i].At, t.p); d <= md && marks[i].TextPos == (dxfimport.Pos{}) {
+			if d := dist(marks[i].At, t.p); d <= md && !ownText[i] {
 				mk, md = i, d
 			}
 		}
 		if mk < 0 {
-			g.warn(t.pos, CodePointLoadAlone, "point-load text %q has no point, circle or block within %.0f in; left out",
+			g.loadTextErr(t.pos, "point-load text %q has no point, circle or block within %.0f in",
 				flatText(t.text), pointLoadReachIn(t))
 			continue
 		}
 		if md < bestD[mk] {
 			if bestD[mk] < math.Inf(1) {
-				g.warn(marks[mk].TextPos, CodePointLoadAlone, "point-load text %q is beside a mark that has a nearer text; left out", marks[mk].Text)
+				g.loadTextErr(marks[mk].TextPos, "point-load text %q is beside a mark that has a nearer text", marks[mk].Text)
 			}
 			bestD[mk] = md
 			marks[mk].Text, marks[mk].TextPos = flatText(t.text), t.pos
 		} else {
-			g.warn(t.pos, CodePointLoadAlone, "point-load text %q is beside a mark that has a nearer text; left out", flatText(t.text))
+			g.loadTextErr(t.pos, "point-load text %q is beside a mark that has a nearer text", flatText(t.text))
 		}
 	}
 	for i := range marks {
@@ -191,6 +196,13 @@ func (g *grouper) findPointLoads() {
 		g.placePointLoad(m)
 	}
 	g.plan.PointLoads = marks
+}
+
+// loadTextErr reports a text on a point-load layer that loads nothing:
+// an error, as the load it gives is not applied anywhere.
+func (g *grouper) loadTextErr(pos dxfimport.Pos, format string, args ...any) {
+	g.plan.Issues.Add(pos, CodePointLoadAlone, dxfimport.SevError,
+		"%s; its load is not applied: put one text beside each point, circle or block", fmt.Sprintf(format, args...))
 }
 
 // placePointLoad finds the joist or beam a mark sits on: the nearest

@@ -15,7 +15,7 @@ const (
 	CodePostSkipped     = "FRM230" // entity on a posts layer that is no post: skipped
 	CodePointLoadText   = "FRM231" // point-load mark with no text, or a text that cannot be read
 	CodePointLoadOff    = "FRM232" // point-load mark on no joist or beam
-	CodePointLoadAlone  = "FRM233" // point-load text with no mark near it
+	CodePointLoadAlone  = "FRM233" // point-load text with no mark near it, or a second text beside one: not applied
 	CodeBeamUnsupported = "FRM234" // beam with fewer than two supports found: stays a rigid bearing
 	CodeBeamCycle       = "FRM235" // beams that bear on each other in a cycle
 )

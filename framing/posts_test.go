@@ -228,3 +228,17 @@ func TestBearingSupportIndex(t *testing.T) {
 		t.Errorf("posts %+v, want one without text", pl.Posts)
 	}
 }
+
+func TestPointLoadTwoTextsOneMark(t *testing.T) {
+	// two texts beside one mark: the nearer is its text, the other is
+	// reported as left out (never added to the load)
+	p := newPlan().walls(-10, 50, 0, 144).joists(0, 144, 16)
+	p.point("POINT-LOAD", 16, 72).text("POINT-LOAD", "P: 900 D", 20, 72, 3).text("POINT-LOAD", "P: 400 L", 18, 73, 3)
+	pl := p.group(loadPathOptions())
+	if len(pl.PointLoads) != 1 || pl.PointLoads[0].Text != "P: 400 L" || pl.PointLoads[0].Loads != (PointLoads{LiveLb: 400}) {
+		t.Fatalf("marks %+v", pl.PointLoads)
+	}
+	if c := issueCodes(pl.Issues)[CodePointLoadAlone]; c != 1 {
+		t.Errorf("FRM233 findings %d, want 1: %v", c, pl.Issues)
+	}
+}

@@ -64,8 +64,8 @@
 //	framecheck layers PLAN.dxf [-p PROJECT.toml] [--units U]
 //
 // Lists every layer of the plan with its entity counts by type and the
-// role the project file gives it (joists, blocking, zones, labels, or a
-// support kind), or none, then notes: layers off or frozen, patterns that
+// role the project file gives it (joists, blocking, zones, labels, posts,
+// point_loads, or a support kind), or none, then notes: layers off or frozen, patterns that
 // match no layer, what the reader skipped. The quick way to map a new
 // drawing to a project file. Without -p the built-in patterns apply.
 // Entities the reader had to leave out are among the notes as error

@@ -153,3 +153,24 @@ dead_lb = 450
 		t.Error(err)
 	}
 }
+
+// TestLayersShowsLoadPathRoles: `framecheck layers` names the posts and
+// point-load layers by their roles under the built-in patterns.
+func TestLayersShowsLoadPathRoles(t *testing.T) {
+	code, out, errs := runCmd("layers", "../../framing/testdata/loadpath.dxf")
+	if code != exitOK {
+		t.Fatalf("exit %d, stderr %q", code, errs)
+	}
+	for _, want := range []string{"POST", "POINT-LOAD"} {
+		var row string
+		for _, l := range strings.Split(out, "\n") {
+			if f := strings.Fields(l); len(f) > 0 && f[0] == want {
+				row = l
+			}
+		}
+		role := map[string]string{"POST": "posts", "POINT-LOAD": "point_loads"}[want]
+		if !strings.HasSuffix(strings.TrimSpace(row), role) {
+			t.Errorf("layer %s: row %q, want role %s\n%s", want, row, role, out)
+		}
+	}
+}
