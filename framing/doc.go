@@ -170,6 +170,10 @@
 //	FRM216 error    joist outline that is not a rectangle: not checked
 //	FRM217 warning  an outline's drawn thickness differs from its size's b by more than 0.25 in
 //	FRM218 error    outlines drawn side by side: a built-up member, not checked yet
+//	FRM219 error    bay outline or span symbol that cannot be laid out (no callout, no
+//	                spacing, no support on one side): nothing generated in it (bays.go);
+//	                a warning for joist positions at a bay's edges that reach no support
+//	FRM220 info     bay whose joists are drawn: its callout applies to them, none generated
 //
 // # Speed
 //

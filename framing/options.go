@@ -35,7 +35,10 @@ type Options struct {
 	AngleTolDeg        float64 // joists within this angle are parallel
 
 	JoistLayers, BlockingLayers, ZoneLayers, LabelLayers []string
-	Supports                                             []SupportSpec
+	// BayLayers hold closed outlines of bays whose joists are not drawn
+	// (bays.go): the joists are laid out from the bay's size callout.
+	BayLayers []string
+	Supports  []SupportSpec
 
 	Species, Grade, Size string // project default lumber
 	ByLayer              []LumberRule
@@ -56,6 +59,7 @@ func DefaultOptions() Options {
 		BlockingLayers:     []string{"BLOCKING*"},
 		ZoneLayers:         []string{"LOAD-ZONE*"},
 		LabelLayers:        []string{"FRAMING-NOTE*"},
+		BayLayers:          []string{"FRAMING-BAY*", "BAY*"},
 		Supports: []SupportSpec{
 			{Layers: []string{"WALL*"}, Kind: KindBearingWall, BearingIn: 3.5},
 			{Layers: []string{"BEAM-FLUSH*"}, Kind: KindFlushBeam, BearingIn: 1.5},
@@ -77,6 +81,7 @@ const (
 	roleBlocking
 	roleZone
 	roleLabel
+	roleBay
 )
 
 // layerRole returns the role of a layer and, for supports, the index of
@@ -99,6 +104,8 @@ func (o *Options) layerRole(layer string) (role, int) {
 		return roleZone, -1
 	case dxfimport.MatchLayer(o.LabelLayers, layer):
 		return roleLabel, -1
+	case dxfimport.MatchLayer(o.BayLayers, layer):
+		return roleBay, -1
 	}
 	return roleNone, -1
 }

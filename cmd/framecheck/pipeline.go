@@ -48,6 +48,7 @@ func framingOptions(p *Project) framing.Options {
 	o.BlockingLayers = p.Layers.Blocking
 	o.ZoneLayers = p.Layers.Zones
 	o.LabelLayers = p.Layers.Labels
+	o.BayLayers = p.Layers.Bays
 	o.Supports = nil
 	for _, s := range p.Supports {
 		o.Supports = append(o.Supports, framing.SupportSpec{Layers: s.Layers, Kind: s.Kind, BearingIn: s.BearingIn})

@@ -59,6 +59,9 @@ type LayerRoles struct {
 	Blocking []string // blocking rows already drawn
 	Zones    []string // closed load-zone outlines with the zone name inside
 	Labels   []string // size callouts and their span lines
+	// Bays are closed outlines of joist bays shown by a span symbol: the
+	// joists in them are not drawn (framing/bays.go lays them out).
+	Bays []string
 }
 
 // Support is one [[support]] table: the layers of one kind of support.
@@ -322,12 +325,13 @@ const (
 	RoleBlocking = "blocking"
 	RoleZones    = "zones"
 	RoleLabels   = "labels"
+	RoleBays     = "bays"
 	// Support layers report "support:" followed by the kind.
 	rolePrefixSupport = "support:"
 )
 
 // LayerRole returns the role the project gives a layer: "joists",
-// "blocking", "zones", "labels", "support:<kind>", or "" for none. Roles
+// "blocking", "zones", "labels", "bays", "support:<kind>", or "" for none. Roles
 // are tried in that order, supports last.
 func (p *Project) LayerRole(layer string) string {
 	roles := []struct {
@@ -338,6 +342,7 @@ func (p *Project) LayerRole(layer string) string {
 		{RoleBlocking, p.Layers.Blocking},
 		{RoleZones, p.Layers.Zones},
 		{RoleLabels, p.Layers.Labels},
+		{RoleBays, p.Layers.Bays},
 	}
 	for _, r := range roles {
 		if dxfimport.MatchLayer(r.patterns, layer) {

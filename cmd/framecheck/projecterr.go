@@ -66,7 +66,7 @@ var schema = []struct {
 }{
 	{"the top level", []string{"drawing", "layers", "support", "lumber", "design", "loads", "zone", "sizing"}},
 	{"[drawing]", []string{"units", "snap_tolerance_in", "max_wall_thickness_in", "edge_distance_in"}},
-	{"[layers]", []string{"joists", "blocking", "zones", "labels"}},
+	{"[layers]", []string{"joists", "blocking", "zones", "labels", "bays"}},
 	{"[[support]]", []string{"layers", "kind", "bearing_in", "species", "grade"}},
 	{"[lumber]", []string{"species", "grade", "size", "materials_file", "by_layer"}},
 	{"[[lumber.by_layer]]", []string{"layers", "species", "grade", "size"}},

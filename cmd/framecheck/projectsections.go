@@ -46,11 +46,13 @@ func (ld *loader) layers(t *table) {
 	*l = LayerRoles{
 		Joists: []string{"JOIST*"}, Blocking: []string{"BLOCKING*"},
 		Zones: []string{"LOAD-ZONE*"}, Labels: []string{"FRAMING-NOTE*"},
+		Bays: []string{"FRAMING-BAY*", "BAY*"},
 	}
 	ld.list(t, "joists", &l.Joists, nil)
 	ld.list(t, "blocking", &l.Blocking, nil)
 	ld.list(t, "zones", &l.Zones, nil)
 	ld.list(t, "labels", &l.Labels, nil)
+	ld.list(t, "bays", &l.Bays, nil)
 }
 
 func (ld *loader) supports(root *table) {

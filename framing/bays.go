@@ -1,0 +1,512 @@
+package framing
+
+import (
+	"fmt"
+	"math"
+	"sort"
+
+	"framecheck/dxfimport"
+)
+
+// Bays shown by a span symbol (DOMAIN.md "Drawings as people draw them").
+//
+// Most framing plans do not draw every joist: a bay is outlined (a closed
+// polyline on a bay layer) or a span line is drawn across it on the label
+// layer (with arrowheads, half-arrows, or none), and a size callout such
+// as `2x10 @ 16" o.c.` says what fills it. framing lays the joists out
+// before it groups members, so every rule that applies to a drawn joist
+// (bearings, tributary widths, zones, marks, blocking rows, takeoff)
+// applies to them; each is marked Member.Generated.
+//
+// The conventions read, and the choices made where drawings are silent:
+//
+//   - The joists run parallel to the span line. A bay outline without a
+//     span line inside it spans between the pair of its opposite edges
+//     that lie on support lines.
+//   - A span line is a label-layer line with a callout whose nearest label
+//     line it is, that crosses no drawn joist, and whose ends reach support
+//     lines crossing it at 45 degrees or more (within the thickest wall plus
+//     the snap tolerance). Arrowheads and half-arrows (short lines at its
+//     ends) and collinear pieces at its ends (a polyline arrow with width)
+//     belong to it; SOLID arrowheads are not read by the importer at all.
+//   - Across, a span line's bay is the stretch where both its end supports
+//     are drawn, cut at the nearest support line parallel to it on each
+//     side (a side wall or beam); an outline's bay is its own width.
+//   - The first joist is at the bay's edge of smaller offset across (the
+//     left edge, the bottom edge for joists running left to right), then
+//     one every callout spacing; a last joist is added at the far edge when
+//     the remaining gap is more than the snap tolerance.
+//   - Each joist runs from support to support: at each end it stops on the
+//     outermost line of the support met there (a double-line wall is borne
+//     over its full thickness), as a drawn joist would.
+//   - A bay with joists drawn in it (parallel to its span, midpoints inside)
+//     is not laid out again: its callout applies to the drawn joists.
+//
+// The choices are common practice, no source.
+
+// Issue codes of bays (FRM2xx, geometry).
+const (
+	CodeBay      = "FRM219" // bay or span symbol that cannot be laid out: error, nothing generated
+	CodeBayDrawn = "FRM220" // bay whose joists are drawn: its callout applies to them, none generated
+)
+
+// minSpanLineIn: a label line shorter than this is not a span line (an
+// arrowhead, a leader tick) (common practice, no source).
+const minSpanLineIn = 24
+
+// spanSupportSin: a span line's end support crosses it at 45 degrees or
+// more (common practice, no source).
+var spanSupportSin = math.Sqrt2 / 2
+
+// bayRegion is one bay: its frame, extent and callout.
+type bayRegion struct {
+	pos    dxfimport.Pos // the outline or span line
+	what   string        // "bay outline" or "span line", for messages
+	u, n   Point         // span direction; across normal (n.X > 0, or n.Y > 0)
+	c0, c1 float64       // extent across, in
+	a0, a1 float64       // extent along, as drawn, in
+	co     callout
+	ok     bool // its callout applies to the members inside it
+}
+
+// bays reads the bay outlines and span symbols and appends their joists
+// to g.joists. It runs only when the drawing has bay outlines, or label
+// lines and texts and supports (a span line needs all three).
+func (g *grouper) bays() {
+	if len(g.bayLoose) > 0 {
+		g.warn(g.bayLoose[0], CodeBay, "%d entities on bay layers left out (%s): a bay is read from a closed polyline",
+			len(g.bayLoose), handles(g.bayLoose, 3))
+	}
+	if len(g.bayPolys) == 0 && (len(g.labelLines) == 0 || len(g.labelTexts) == 0 || len(g.sups) == 0) {
+		return
+	}
+	g.bayText = make([]bool, len(g.labelTexts))
+	var regions []bayRegion
+	for _, bp := range g.bayPolys {
+		if r, ok := g.outlineBay(bp); ok {
+			regions = append(regions, r)
+		}
+	}
+	if len(g.labelLines) > 0 && len(g.sups) > 0 {
+		for ti := range g.labelTexts {
+			if g.bayText[ti] {
+				continue
+			}
+			if r, ok := g.spanLineBay(ti); ok {
+				regions = append(regions, r)
+			}
+		}
+	}
+	if len(regions) == 0 {
+		return
+	}
+	g.genFrom = len(g.joists)
+	for i := range regions {
+		g.layOut(&regions[i])
+	}
+	g.bayRegions = regions
+	if g.jol != nil || g.rawOf != nil {
+		for i := g.genFrom; i < len(g.joists); i++ {
+			if g.jol != nil {
+				g.jol = append(g.jol, -1)
+			}
+			if g.rawOf != nil {
+				g.rawOf = append(g.rawOf, -1)
+			}
+		}
+	}
+}
+
+// bayError reports a bay that cannot be laid out; nothing is generated
+// in it and the rest of the plan runs.
+func (g *grouper) bayError(r *bayRegion, format string, args ...any) {
+	g.plan.Issues.Add(r.pos, CodeBay, dxfimport.SevError, "%s (%s): %s; no joists laid out in it",
+		r.what, entityRef(r.pos), fmt.Sprintf(format, args...))
+}
+
+// frame sets r.u (oriented as given) and r.n, with exact axes kept exact.
+func (r *bayRegion) frame(u Point) {
+	switch {
+	case math.Abs(u.Y) < 1e-12:
+		u = Point{X: math.Copysign(1, u.X)}
+	case math.Abs(u.X) < 1e-12:
+		u = Point{Y: math.Copysign(1, u.Y)}
+	}
+	r.u = u
+	n := rot90(u)
+	if n.X < -1e-12 || (math.Abs(n.X) <= 1e-12 && n.Y < 0) {
+		n = scale(n, -1)
+	}
+	r.n = n
+}
+
+// readBayCallout reads the callout of a bay from the label texts given;
+// false (with an error reported) when there is none it can use.
+func (g *grouper) readBayCallout(r *bayRegion, texts []int) bool {
+	var got []callout
+	for _, ti := range texts {
+		t := g.labelTexts[ti]
+		co, err := ReadCallout(t.text)
+		if err != nil {
+			if !anySizeRE.MatchString(normalizeCallout(t.text)) {
+				continue // a room name or a note
+			}
+			g.bayError(r, "its callout %q (%s) cannot be read: %v", flatText(t.text), entityRef(t.pos), err)
+			return false
+		}
+		got = append(got, callout{co, flatText(t.text), t.pos})
+	}
+	if len(got) == 0 {
+		g.bayError(r, "no size callout (such as 2x10 @ 16\" o.c.) on a label layer inside it or beside its span line")
+		return false
+	}
+	c := got[0]
+	for _, o := range got[1:] {
+		if err := c.merge(o.Callout); err != nil || o.Designation() != c.Designation() {
+			g.bayError(r, "callouts %q (%s) and %q (%s) disagree", c.text, entityRef(c.pos), o.text, entityRef(o.pos))
+			return false
+		}
+	}
+	if c.SpacingIn <= 0 {
+		g.bayError(r, "its callout %q (%s) gives no spacing (such as @ 16\" o.c.), so the joists cannot be laid out", c.text, entityRef(c.pos))
+		return false
+	}
+	r.co = c
+	return true
+}
+
+// outlineBay reads a closed outline on a bay layer.
+func (g *grouper) outlineBay(bp polyItem) (bayRegion, bool) {
+	r := bayRegion{pos: bp.pos, what: "bay outline"}
+	var texts []int
+	for ti, t := range g.labelTexts {
+		if !g.bayText[ti] && pointInPolygon(t.p, bp.pts) {
+			texts = append(texts, ti)
+			g.bayText[ti] = true
+		}
+	}
+	// the span line: the longest label line with its midpoint inside
+	best := 0.0
+	var u Point
+	for _, l := range g.labelLines {
+		if L := dist(l.a, l.b); L >= minSpanLineIn && L > best && pointInPolygon(mid(l.a, l.b), bp.pts) {
+			best, u = L, unit(sub(l.b, l.a))
+		}
+	}
+	if best == 0 {
+		var ok bool
+		if u, ok = g.outlineSpanDir(bp.pts); !ok {
+			g.bayError(&r, "cannot tell which way it spans: no span line inside it, and not exactly one pair of its opposite edges lies on support lines")
+			return r, false
+		}
+	}
+	r.frame(u)
+	r.c0, r.c1, r.a0, r.a1 = math.Inf(1), math.Inf(-1), math.Inf(1), math.Inf(-1)
+	for _, q := range bp.pts {
+		c, a := dot(q, r.n), dot(q, r.u)
+		r.c0, r.c1 = math.Min(r.c0, c), math.Max(r.c1, c)
+		r.a0, r.a1 = math.Min(r.a0, a), math.Max(r.a1, a)
+	}
+	return r, g.readBayCallout(&r, texts)
+}
+
+// outlineSpanDir returns the span direction of a bay outline without a
+// span line: across the edges that lie on support lines (parallel within
+// 5 degrees, within the thickest wall plus the snap tolerance, overlapping
+// half the edge), when those edges all run one way.
+func (g *grouper) outlineSpanDir(pts []Point) (Point, bool) {
+	reach := g.opt.MaxWallThicknessIn + g.opt.SnapToleranceIn
+	parSin := math.Sin(5 * math.Pi / 180)
+	var dir Point
+	found := false
+	for i := range pts {
+		a, b := pts[i], pts[(i+1)%len(pts)]
+		L := dist(a, b)
+		if L < minEdgeIn {
+			continue
+		}
+		e := unit(sub(b, a))
+		on := false
+		for _, s := range g.sups {
+			su := unit(sub(s.b, s.a))
+			if math.Abs(cross(e, su)) > parSin || math.Abs(cross(e, sub(s.a, a))) > reach {
+				continue
+			}
+			t0, t1 := dot(sub(s.a, a), e), dot(sub(s.b, a), e)
+			if t0 > t1 {
+				t0, t1 = t1, t0
+			}
+			if math.Min(t1, L)-math.Max(t0, 0) >= L/2 {
+				on = true
+				break
+			}
+		}
+		if !on {
+			continue
+		}
+		if found && math.Abs(cross(dir, e)) > parSin {
+			return Point{}, false // edges on supports both ways
+		}
+		dir, found = e, true
+	}
+	if !found {
+		return Point{}, false
+	}
+	return rot90(dir), true
+}
+
+// spanLineBay reads label text ti as the callout of a span symbol when
+// its nearest label line is a span line (see the top of this file).
+func (g *grouper) spanLineBay(ti int) (bayRegion, bool) {
+	t := g.labelTexts[ti]
+	if !calloutLikeRE.MatchString(t.text) {
+		return bayRegion{}, false
+	}
+	li := g.labelIndex()
+	reach := calloutReachIn(t)
+	bi := -1
+	var near []int
+	li.query(t.p, t.p, reach, func(i int) { near = append(near, i) })
+	sort.Ints(near)
+	for _, i := range near {
+		l := g.labelLines[i]
+		if d := distPointSeg(t.p, l.a, l.b); d <= reach {
+			reach, bi = d, i
+		}
+	}
+	if bi < 0 {
+		return bayRegion{}, false
+	}
+	a, b, arrows := g.spanLine(bi)
+	L := dist(a, b)
+	if L < minSpanLineIn {
+		return bayRegion{}, false
+	}
+	u := unit(sub(b, a))
+	if g.crossesDrawnJoist(a, b) {
+		return bayRegion{}, false // a callout line across drawn joists
+	}
+	t0, _, ok0 := g.endSupport(a, u, 0, -1)
+	t1, _, ok1 := g.endSupport(a, u, L, +1)
+	if !ok0 && !ok1 && arrows == 0 {
+		return bayRegion{}, false // a leader, a note: left to assignLumber
+	}
+	r := bayRegion{pos: g.labelLines[bi].pos, what: "span line"}
+	r.frame(u)
+	g.bayText[ti] = true
+	if !ok0 || !ok1 {
+		side := "start"
+		p := a
+		if !ok1 {
+			side, p = "end", b
+		}
+		if !ok0 && !ok1 {
+			side = "either"
+		}
+		g.bayError(&r, "no support at its %s end near %s: a span line runs from support to support, each a support line across it within %.4g in of its end",
+			side, g.drawingPoint(p), g.opt.MaxWallThicknessIn+g.opt.SnapToleranceIn)
+		return r, false
+	}
+	if !g.readBayCallout(&r, []int{ti}) {
+		return r, false
+	}
+	// across: where both end supports are drawn, cut at parallel supports
+	c := dot(a, r.n)
+	r.a0, r.a1 = dot(a, r.u)+math.Min(t0, 0), dot(a, r.u)+math.Max(t1, L)
+	r.c0, r.c1 = math.Inf(-1), math.Inf(1)
+	for _, end := range []float64{t0, t1} {
+		lo, hi := g.supportExtent(lerp(a, u, end), r.n)
+		r.c0, r.c1 = math.Max(r.c0, lo), math.Min(r.c1, hi)
+	}
+	minSin := math.Sin(minBearingAngleDeg * math.Pi / 180)
+	for _, s := range g.sups {
+		if math.Abs(cross(unit(sub(s.b, s.a)), r.u)) >= minSin {
+			continue
+		}
+		sa, sb := dot(s.a, r.u), dot(s.b, r.u)
+		if math.Min(math.Max(sa, sb), r.a1)-math.Max(math.Min(sa, sb), r.a0) < (r.a1-r.a0)/2 {
+			continue
+		}
+		sc := dot(mid(s.a, s.b), r.n)
+		switch {
+		case sc < c-g.opt.SnapToleranceIn:
+			r.c0 = math.Max(r.c0, sc)
+		case sc > c+g.opt.SnapToleranceIn:
+			r.c1 = math.Min(r.c1, sc)
+		}
+	}
+	return r, true
+}
+
+// spanLine returns label line bi as a span line: taken through the
+// collinear label pieces touching its ends (a polyline arrow), from the
+// longer line an arrowhead touches when bi is one, with the number of
+// arrowheads (short label lines at an angle touching its ends).
+func (g *grouper) spanLine(bi int) (a, b Point, arrows int) {
+	tol := g.opt.SnapToleranceIn
+	li := g.labelIndex()
+	l := g.labelLines[bi]
+	a, b = l.a, l.b
+	if dist(a, b) < minSpanLineIn {
+		best := dist(a, b)
+		for _, p := range []Point{l.a, l.b} {
+			li.query(p, p, tol, func(i int) {
+				o := g.labelLines[i]
+				if L := dist(o.a, o.b); L > best && (dist(o.a, p) <= tol || dist(o.b, p) <= tol) {
+					best, a, b = L, o.a, o.b
+				}
+			})
+		}
+	}
+	u := unit(sub(b, a))
+	for grown := true; grown; {
+		grown = false
+		li.query(a, b, tol, func(i int) {
+			o := g.labelLines[i]
+			if math.Abs(cross(u, sub(o.a, a))) > tol || math.Abs(cross(u, sub(o.b, a))) > tol {
+				return
+			}
+			for _, q := range []Point{o.a, o.b} {
+				switch t := dot(sub(q, a), u); {
+				case t < -1e-9 && (dist(o.a, a) <= tol || dist(o.b, a) <= tol):
+					a, grown = q, true
+				case t > dist(a, b)+1e-9 && (dist(o.a, b) <= tol || dist(o.b, b) <= tol):
+					b, grown = q, true
+				}
+			}
+		})
+	}
+	L := dist(a, b)
+	for _, p := range []Point{a, b} {
+		li.query(p, p, tol, func(i int) {
+			o := g.labelLines[i]
+			if dist(o.a, o.b) < L/2 && math.Abs(cross(u, unit(sub(o.b, o.a)))) > 0.1 &&
+				(dist(o.a, p) <= tol || dist(o.b, p) <= tol) {
+				arrows++
+			}
+		})
+	}
+	return a, b, arrows
+}
+
+// crossesDrawnJoist reports whether segment ab crosses a drawn joist at
+// minBearingAngleDeg or more.
+func (g *grouper) crossesDrawnJoist(a, b Point) bool {
+	if len(g.joists) == 0 {
+		return false
+	}
+	if g.jIdx == nil {
+		lo, hi, typ := bounds(g.joists)
+		g.jIdx = newSegIndex(lo, hi, len(g.joists), typ)
+		for i, j := range g.joists {
+			g.jIdx.insert(i, j.a, j.b, 0)
+		}
+	}
+	u := unit(sub(b, a))
+	L := dist(a, b)
+	minSin := math.Sin(minBearingAngleDeg * math.Pi / 180)
+	found := false
+	g.jIdx.query(a, b, 0, func(i int) {
+		j := g.joists[i]
+		t, s, sin, ok := segParams(a, u, j.a, j.b)
+		if ok && sin >= minSin && t >= 0 && t <= L && s >= 0 && s <= 1 {
+			found = true
+		}
+	})
+	return found
+}
+
+// endSupport finds the support met at one end of a line from base along
+// u, near t = at: the support line crossing it at spanSupportSin or more
+// nearest to at, within the thickest wall plus the snap tolerance, and the
+// outermost line (toward dir) within the thickest wall of that one. It
+// returns the outermost line's t and its index.
+func (g *grouper) endSupport(base, u Point, at, dir float64) (float64, int, bool) {
+	reach := g.opt.MaxWallThicknessIn + g.opt.SnapToleranceIn
+	tol := g.opt.SnapToleranceIn
+	type cand struct {
+		t float64
+		s int
+	}
+	var cs []cand
+	p0, p1 := lerp(base, u, at-reach), lerp(base, u, at+reach)
+	for s := range g.sups {
+		sg := &g.sups[s]
+		if distPointSeg(sg.a, p0, p1) > reach+dist(sg.a, sg.b) { // far away: cheap reject
+			continue
+		}
+		t, _, sin, ok := segParams(base, u, sg.a, sg.b)
+		if !ok || sin < spanSupportSin || math.Abs(t-at) > reach {
+			continue
+		}
+		if distPointSeg(lerp(base, u, t), sg.a, sg.b) > tol {
+			continue // the line passes beyond the support's drawn end
+		}
+		cs = append(cs, cand{t, s})
+	}
+	if len(cs) == 0 {
+		return 0, -1, false
+	}
+	near := cs[0]
+	for _, c := range cs[1:] {
+		if math.Abs(c.t-at) < math.Abs(near.t-at) {
+			near = c
+		}
+	}
+	out := near
+	for _, c := range cs {
+		if dir*(c.t-out.t) > 0 && math.Abs(c.t-near.t) <= g.opt.MaxWallThicknessIn {
+			out = c
+		}
+	}
+	return out.t, out.s, true
+}
+
+// supportExtent returns the extent across (along n) of the support lines
+// through p, with the collinear lines joined end to end to them.
+func (g *grouper) supportExtent(p, n Point) (lo, hi float64) {
+	tol := g.opt.SnapToleranceIn
+	lo, hi = math.Inf(1), math.Inf(-1)
+	var on []int
+	for s, sg := range g.sups {
+		if distPointSeg(p, sg.a, sg.b) <= tol {
+			on = append(on, s)
+		}
+	}
+	for grown := true; grown; {
+		grown = false
+		for s, sg := range g.sups {
+			c0, c1 := dot(sg.a, n), dot(sg.b, n)
+			if c0 > c1 {
+				c0, c1 = c1, c0
+			}
+			use := false
+			for _, o := range on {
+				if o == s {
+					use = true
+					break
+				}
+			}
+			if !use {
+				// collinear with one on the list, touching the extent so far
+				for _, o := range on {
+					og := g.sups[o]
+					ou := unit(sub(og.b, og.a))
+					if math.Abs(cross(ou, sub(sg.a, og.a))) <= tol && math.Abs(cross(ou, sub(sg.b, og.a))) <= tol &&
+						c0 <= hi+tol && c1 >= lo-tol {
+						on, grown, use = append(on, s), true, true
+						break
+					}
+				}
+			}
+			if use && (c0 < lo || c1 > hi) {
+				lo, hi = math.Min(lo, c0), math.Max(hi, c1)
+				grown = true
+			}
+		}
+		if len(on) == 0 {
+			break
+		}
+	}
+	return lo, hi
+}
