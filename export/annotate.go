@@ -205,7 +205,7 @@ type annotator struct {
 func copyAnnotated(pr *pairReader, w *bufio.Writer, facts *dxfFacts, m *Markup) error {
 	a := &annotator{facts: facts, m: m}
 	for i, l := range markupLayers {
-		if !facts.Layers[strings.ToUpper(l.Name)] {
+		if !facts.Layers[strings.ToUpper(l.Name)] && m.usesLayer(l.Name) {
 			a.newLayers = append(a.newLayers, i)
 		}
 	}

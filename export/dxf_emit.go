@@ -146,7 +146,7 @@ func (e *dxfEmitter) layer(name string, color, lineWeight int, ltype, tableHandl
 
 // markupEntityCount is the number of entities markup writes for m.
 func markupEntityCount(m *Markup) int {
-	return len(m.Highlights) + len(m.BlockingAdds) + len(m.Labels) + len(m.Uplifts)
+	return len(m.Highlights) + len(m.BlockingAdds) + len(m.Labels) + len(m.Uplifts) + len(m.Generated)
 }
 
 // markup writes every markup entity of m, converted to drawing units.
@@ -158,6 +158,9 @@ func (e *dxfEmitter) markup(m *Markup) {
 	}
 	for _, s := range m.BlockingAdds {
 		e.line(LayerBlocking, du(s.A), du(s.B))
+	}
+	for _, s := range m.Generated {
+		e.line(LayerGenerated, du(s.A), du(s.B))
 	}
 	h := m.textHeight() / k
 	for _, l := range m.Labels {

@@ -42,6 +42,10 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 	if m.Source != "" {
 		w.str("source", m.Source)
 	}
+	if m.Generated {
+		w.key("generated")
+		w.b = append(w.b, "true"...)
+	}
 	w.floats("start", m.Start[:])
 	w.floats("end", m.End[:])
 	w.num("length_in", m.LengthIn)

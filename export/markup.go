@@ -17,6 +17,7 @@ type Markup struct {
 	BlockingAdds []Segment // blocking rows to add, on LayerBlocking
 	Labels       []Label   // mark and max ratio at member midpoints, on LayerLabel
 	Uplifts      []Label   // ASD uplift reaction at each flagged bearing, on LayerUplift
+	Generated    []Segment // members laid out in bays (not drawn), on LayerGenerated
 }
 
 // Segment is a straight line in inches; Ref names what it marks (member or
@@ -38,7 +39,7 @@ type Label struct {
 // drawn, and a label "mark ratio" (or "id ERROR") at each member's midpoint,
 // rotated along the member and kept readable (angle in (-90, 90]), and a
 // label "uplift N lb" at each flagged bearing of r.Uplift, rotated as its
-// member's label. Inch coordinates are taken from StartIn/EndIn (PointIn)
+// member's label, and a line on each generated member. Inch coordinates are taken from StartIn/EndIn (PointIn)
 // when set, else from Start/End (Point) times toInch. The text height is LabelHeightIn of the members' extent,
 // capped at 0.6 of the smallest positive spacing or trib width so that
 // labels stay between neighbouring joists.
@@ -50,6 +51,9 @@ func MarkupFromResults(r *Results, toInch float64) Markup {
 		a, b := inches(mb.Start, mb.End, mb.StartIn, mb.EndIn, toInch)
 		if mb.Status != StatusPass {
 			m.Highlights = append(m.Highlights, Segment{A: a, B: b, Ref: mb.ID})
+		}
+		if mb.Generated {
+			m.Generated = append(m.Generated, Segment{A: a, B: b, Ref: mb.ID})
 		}
 		text := mb.Mark
 		if text == "" {
@@ -195,7 +199,7 @@ func (m *Markup) validate() error {
 	if !finite(m.TextHeightIn) || m.TextHeightIn < 0 {
 		return fmt.Errorf("markup: text height %v in: want a finite height >= 0", m.TextHeightIn)
 	}
-	for _, group := range [][]Segment{m.Highlights, m.BlockingAdds} {
+	for _, group := range [][]Segment{m.Highlights, m.BlockingAdds, m.Generated} {
 		for _, s := range group {
 			if !finite(s.A[0]) || !finite(s.A[1]) || !finite(s.B[0]) || !finite(s.B[1]) {
 				return fmt.Errorf("markup: %s: non-finite coordinate %v %v", s.Ref, s.A, s.B)

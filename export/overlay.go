@@ -87,9 +87,18 @@ func writeOverlay(w *bufio.Writer, m *Markup, units string) {
 	e.pair(0, "ENDTAB")
 	e.pair(0, "TABLE")
 	e.pair(2, "LAYER")
-	e.pair(70, fmt.Sprint(len(markupLayers)+1))
+	n := 0
+	for _, l := range markupLayers {
+		if m.usesLayer(l.Name) {
+			n++
+		}
+	}
+	e.pair(70, fmt.Sprint(n+1))
 	e.layer("0", 7, 0, "CONTINUOUS", "", "")
 	for _, l := range markupLayers {
+		if !m.usesLayer(l.Name) {
+			continue
+		}
 		e.layer(l.Name, l.Color, l.LineWeight, "CONTINUOUS", "", "")
 	}
 	e.pair(0, "ENDTAB")
@@ -130,6 +139,10 @@ func (m *Markup) bounds() (lo, hi [2]float64) {
 		add(s.B)
 	}
 	for _, s := range m.BlockingAdds {
+		add(s.A)
+		add(s.B)
+	}
+	for _, s := range m.Generated {
 		add(s.A)
 		add(s.B)
 	}

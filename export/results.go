@@ -66,6 +66,10 @@ type Member struct {
 	Handle string `json:"handle"`
 	// Source names the drawn line, e.g. "plan.dxf:4410 (handle 2F1, layer JOISTS)".
 	Source string `json:"source,omitempty"`
+	// Generated marks a joist that is not drawn: laid out in a bay shown
+	// by a span symbol and a size callout; Handle and Source are then the
+	// bay's outline or span line.
+	Generated bool `json:"generated,omitempty"`
 	// Start and End are in drawing units, as drawn.
 	Start [2]float64 `json:"start"`
 	End   [2]float64 `json:"end"`

@@ -228,6 +228,7 @@ var layerNotes = []string{
 	"Annotated drawing: layer " + LayerBlocking + " draws every blocking row to add, across its run.",
 	"Annotated drawing: layer " + LayerLabel + " labels each member with its mark and largest ratio.",
 	"Annotated drawing: layer " + LayerUplift + " labels each bearing with flagged net uplift with its ASD uplift reaction (connector demand).",
+	"Annotated drawing: layer " + LayerGenerated + " draws every generated member: joists not drawn, laid out in a bay from its span symbol and callout (Members sheet: the note in Messages).",
 }
 
 func writeNotes(f *excelize.File, st *styles, r *Results) error {

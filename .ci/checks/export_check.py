@@ -13,7 +13,7 @@ import os
 import sys
 from collections import Counter
 
-OUR_LAYERS = ("FC-FAIL", "FC-BLOCKING-ADD", "FC-LABEL", "FC-UPLIFT")
+OUR_LAYERS = ("FC-FAIL", "FC-BLOCKING-ADD", "FC-LABEL", "FC-UPLIFT", "FC-GENERATED")
 TEXT_LAYERS = ("FC-LABEL", "FC-UPLIFT")
 failures = []
 

@@ -133,7 +133,7 @@ func newResultConverter() *resultConverter {
 
 func (cv *resultConverter) member(m *framing.Member, res *check.Result, toInch float64) export.Member {
 	em := export.Member{
-		ID: m.ID, Mark: m.Mark, Layer: m.Layer, Handle: m.Pos.Handle, Source: m.Pos.String(),
+		ID: m.ID, Mark: m.Mark, Layer: m.Layer, Handle: m.Pos.Handle, Source: m.Pos.String(), Generated: m.Generated,
 		Start:   [2]float64{m.Start.X / toInch, m.Start.Y / toInch},
 		End:     [2]float64{m.End.X / toInch, m.End.Y / toInch},
 		StartIn: [2]float64{m.Start.X, m.Start.Y}, EndIn: [2]float64{m.End.X, m.End.Y},
