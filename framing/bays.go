@@ -23,12 +23,17 @@ import (
 //   - The joists run parallel to the span line. A bay outline without a
 //     span line inside it spans between the pair of its opposite edges
 //     that lie on support lines.
-//   - A span line is a label-layer line with a callout whose nearest label
-//     line it is, that crosses no drawn joist, and whose ends reach support
-//     lines crossing it at 45 degrees or more (within the thickest wall plus
-//     the snap tolerance). Arrowheads and half-arrows (short lines at its
-//     ends) and collinear pieces at its ends (a polyline arrow with width)
-//     belong to it; SOLID arrowheads are not read by the importer at all.
+//   - A span line is a label-layer line at least 24 in long with a callout
+//     whose nearest label line it is, that crosses no drawn joist, does not
+//     run along a support line (a beam's callout), and whose ends both reach
+//     support lines crossing it at 45 degrees or more (within the thickest
+//     wall plus the snap tolerance). Arrowheads and half-arrows (short lines
+//     at its ends) and collinear pieces at its ends (a polyline arrow with
+//     width) belong to it; SOLID arrowheads are not read by the importer at
+//     all. With arrowheads at both ends it is a span symbol even when an end
+//     reaches no support, which is then an error; a line with an arrowhead
+//     at one end at most and a support at one end at most is a leader, read
+//     as before (a callout that reaches no joist).
 //   - Across, a span line's bay is the stretch where both its end supports
 //     are drawn, cut at the nearest support line parallel to it on each
 //     side (a side wall or beam); an outline's bay is its own width.
@@ -288,22 +293,27 @@ func (g *grouper) spanLineBay(ti int) (bayRegion, bool) {
 	}
 	t0, _, ok0 := g.endSupport(a, u, 0, -1)
 	t1, _, ok1 := g.endSupport(a, u, L, +1)
-	if !ok0 && !ok1 && arrows == 0 {
-		return bayRegion{}, false // a leader, a note: left to assignLumber
+	if !(ok0 && ok1) && !(arrows[0] > 0 && arrows[1] > 0) {
+		// a leader (an arrowhead at one end at most), a note: left to
+		// assignLumber, as before bays were read
+		return bayRegion{}, false
+	}
+	if g.alongSupport(a, b) {
+		return bayRegion{}, false // the callout of a beam or wall, drawn along it
 	}
 	r := bayRegion{pos: g.labelLines[bi].pos, what: "span line"}
 	r.frame(u)
 	g.bayText[ti] = true
 	if !ok0 || !ok1 {
-		side := "start"
+		side := "its start"
 		p := a
 		if !ok1 {
-			side, p = "end", b
+			side, p = "its end", b
 		}
 		if !ok0 && !ok1 {
-			side = "either"
+			side = "either end"
 		}
-		g.bayError(&r, "no support at its %s end near %s: a span line runs from support to support, each a support line across it within %.4g in of its end",
+		g.bayError(&r, "no support at %s near %s: a span line runs from support to support, each a support line across it within %.4g in of its end",
 			side, g.drawingPoint(p), g.opt.MaxWallThicknessIn+g.opt.SnapToleranceIn)
 		return r, false
 	}
@@ -341,8 +351,9 @@ func (g *grouper) spanLineBay(ti int) (bayRegion, bool) {
 // spanLine returns label line bi as a span line: taken through the
 // collinear label pieces touching its ends (a polyline arrow), from the
 // longer line an arrowhead touches when bi is one, with the number of
-// arrowheads (short label lines at an angle touching its ends).
-func (g *grouper) spanLine(bi int) (a, b Point, arrows int) {
+// arrowheads (short label lines at an angle touching its ends) at a and
+// at b.
+func (g *grouper) spanLine(bi int) (a, b Point, arrows [2]int) {
 	tol := g.opt.SnapToleranceIn
 	li := g.labelIndex()
 	l := g.labelLines[bi]
@@ -377,16 +388,36 @@ func (g *grouper) spanLine(bi int) (a, b Point, arrows int) {
 		})
 	}
 	L := dist(a, b)
-	for _, p := range []Point{a, b} {
+	for end, p := range []Point{a, b} {
 		li.query(p, p, tol, func(i int) {
 			o := g.labelLines[i]
 			if dist(o.a, o.b) < L/2 && math.Abs(cross(u, unit(sub(o.b, o.a)))) > 0.1 &&
 				(dist(o.a, p) <= tol || dist(o.b, p) <= tol) {
-				arrows++
+				arrows[end]++
 			}
 		})
 	}
 	return a, b, arrows
+}
+
+// alongSupport reports whether segment ab runs along a support line
+// (parallel within minBearingAngleDeg, within 12 in of it, overlapping
+// half of ab): the callout line of a beam or wall, not a span line
+// (common practice, no source).
+func (g *grouper) alongSupport(a, b Point) bool {
+	u := unit(sub(b, a))
+	L := dist(a, b)
+	minSin := math.Sin(minBearingAngleDeg * math.Pi / 180)
+	for _, s := range g.sups {
+		if math.Abs(cross(u, unit(sub(s.b, s.a)))) >= minSin || math.Abs(cross(u, sub(mid(s.a, s.b), a))) > 12 {
+			continue
+		}
+		t0, t1 := dot(sub(s.a, a), u), dot(sub(s.b, a), u)
+		if math.Min(math.Max(t0, t1), L)-math.Max(math.Min(t0, t1), 0) >= L/2 {
+			return true
+		}
+	}
+	return false
 }
 
 // crossesDrawnJoist reports whether segment ab crosses a drawn joist at
