@@ -288,9 +288,6 @@ func (g *grouper) spanLineBay(ti int) (bayRegion, bool) {
 		return bayRegion{}, false
 	}
 	u := unit(sub(b, a))
-	if g.crossesDrawnJoist(a, b) {
-		return bayRegion{}, false // a callout line across drawn joists
-	}
 	t0, _, ok0 := g.endSupport(a, u, 0, -1)
 	t1, _, ok1 := g.endSupport(a, u, L, +1)
 	if !(ok0 && ok1) && !(arrows[0] > 0 && arrows[1] > 0) {
@@ -300,6 +297,9 @@ func (g *grouper) spanLineBay(ti int) (bayRegion, bool) {
 	}
 	if g.alongSupport(a, b) {
 		return bayRegion{}, false // the callout of a beam or wall, drawn along it
+	}
+	if g.crossesDrawnJoist(a, b) {
+		return bayRegion{}, false // a callout line across drawn joists
 	}
 	r := bayRegion{pos: g.labelLines[bi].pos, what: "span line"}
 	r.frame(u)
@@ -408,16 +408,22 @@ func (g *grouper) alongSupport(a, b Point) bool {
 	u := unit(sub(b, a))
 	L := dist(a, b)
 	minSin := math.Sin(minBearingAngleDeg * math.Pi / 180)
-	for _, s := range g.sups {
+	found := false
+	idx := g.supportIndex()
+	if idx == nil {
+		return false
+	}
+	idx.query(a, b, 12, func(i int) {
+		s := &g.sups[i]
 		if math.Abs(cross(u, unit(sub(s.b, s.a)))) >= minSin || math.Abs(cross(u, sub(mid(s.a, s.b), a))) > 12 {
-			continue
+			return
 		}
 		t0, t1 := dot(sub(s.a, a), u), dot(sub(s.b, a), u)
 		if math.Min(math.Max(t0, t1), L)-math.Max(math.Min(t0, t1), 0) >= L/2 {
-			return true
+			found = true
 		}
-	}
-	return false
+	})
+	return found
 }
 
 // crossesDrawnJoist reports whether segment ab crosses a drawn joist at
@@ -460,21 +466,23 @@ func (g *grouper) endSupport(base, u Point, at, dir float64) (float64, int, bool
 		s int
 	}
 	var cs []cand
+	idx := g.supportIndex()
+	if idx == nil {
+		return 0, -1, false
+	}
 	p0, p1 := lerp(base, u, at-reach), lerp(base, u, at+reach)
-	for s := range g.sups {
+	idx.query(p0, p1, tol, func(s int) {
 		sg := &g.sups[s]
-		if distPointSeg(sg.a, p0, p1) > reach+dist(sg.a, sg.b) { // far away: cheap reject
-			continue
-		}
 		t, _, sin, ok := segParams(base, u, sg.a, sg.b)
 		if !ok || sin < spanSupportSin || math.Abs(t-at) > reach {
-			continue
+			return
 		}
 		if distPointSeg(lerp(base, u, t), sg.a, sg.b) > tol {
-			continue // the line passes beyond the support's drawn end
+			return // the line passes beyond the support's drawn end
 		}
 		cs = append(cs, cand{t, s})
-	}
+	})
+	sort.Slice(cs, func(i, j int) bool { return cs[i].s < cs[j].s }) // drawing order, whatever the grid's
 	if len(cs) == 0 {
 		return 0, -1, false
 	}

@@ -139,3 +139,14 @@ func TestBayErrorsNameTheHandle(t *testing.T) {
 		t.Errorf("%d %s errors, want 3 (the loose line is a warning)", errs, CodeBay)
 	}
 }
+
+// A bay outline in a plan with no support lines at all is one error, not
+// a crash.
+func TestBayWithoutAnySupport(t *testing.T) {
+	p := newPlan().poly("FRAMING-BAY", true, Point{X: 0, Y: 0}, Point{X: 40, Y: 0}, Point{X: 40, Y: 120}, Point{X: 0, Y: 120})
+	p.line("FRAMING-NOTE", 20, 0, 20, 120).text("FRAMING-NOTE", `2x10 @ 16" o.c.`, 22, 60, 3)
+	pl := p.group(DefaultOptions())
+	if len(pl.Members) != 0 || issueCodes(pl.Issues)[CodeBay] != 1 || pl.Issues.Err() == nil {
+		t.Errorf("%d members, issues %v; want none and one %s error", len(pl.Members), pl.Issues, CodeBay)
+	}
+}
