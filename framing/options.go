@@ -59,7 +59,7 @@ func DefaultOptions() Options {
 		BlockingLayers:     []string{"BLOCKING*"},
 		ZoneLayers:         []string{"LOAD-ZONE*"},
 		LabelLayers:        []string{"FRAMING-NOTE*"},
-		BayLayers:          []string{"FRAMING-BAY*", "BAY*"},
+		BayLayers:          []string{"FRAMING-BAY*"},
 		Supports: []SupportSpec{
 			{Layers: []string{"WALL*"}, Kind: KindBearingWall, BearingIn: 3.5},
 			{Layers: []string{"BEAM-FLUSH*"}, Kind: KindFlushBeam, BearingIn: 1.5},

@@ -46,7 +46,7 @@ func (ld *loader) layers(t *table) {
 	*l = LayerRoles{
 		Joists: []string{"JOIST*"}, Blocking: []string{"BLOCKING*"},
 		Zones: []string{"LOAD-ZONE*"}, Labels: []string{"FRAMING-NOTE*"},
-		Bays: []string{"FRAMING-BAY*", "BAY*"},
+		Bays: []string{"FRAMING-BAY*"},
 	}
 	ld.list(t, "joists", &l.Joists, nil)
 	ld.list(t, "blocking", &l.Blocking, nil)

@@ -28,7 +28,7 @@ joists = ["JOIST*"]
 blocking = ["BLOCKING*"]      # blocking rows already drawn; they brace the joists they cross
 zones = ["LOAD-ZONE*"]        # closed outlines with the load zone's name written inside
 labels = ["FRAMING-NOTE*"]    # size callouts such as "2x10 @ 16 o.c." and the span lines under them
-bays = ["FRAMING-BAY*", "BAY*"] # closed outlines of bays whose joists are not drawn, with a callout inside
+bays = ["FRAMING-BAY*"]       # closed outlines of bays whose joists are not drawn, with a callout inside
 
 # One [[support]] table per kind of support. A layer pattern may belong
 # to one table only. Without any [[support]] table, the two below apply.
