@@ -190,12 +190,21 @@ func (g *grouper) outlineBay(bp polyItem) (bayRegion, bool) {
 			g.bayText[ti] = true
 		}
 	}
-	// the span line: the longest label line with its midpoint inside
-	best := 0.0
+	// the span line: the longest label line with its midpoint inside;
+	// a callout written beside it outside the outline is the bay's too
+	best, sl := 0.0, -1
 	var u Point
-	for _, l := range g.labelLines {
+	for i, l := range g.labelLines {
 		if L := dist(l.a, l.b); L >= minSpanLineIn && L > best && pointInPolygon(mid(l.a, l.b), bp.pts) {
-			best, u = L, unit(sub(l.b, l.a))
+			best, sl, u = L, i, unit(sub(l.b, l.a))
+		}
+	}
+	if sl >= 0 {
+		for ti, t := range g.labelTexts {
+			if !g.bayText[ti] && calloutLikeRE.MatchString(t.text) && g.nearestLabelLine(t) == sl {
+				texts = append(texts, ti)
+				g.bayText[ti] = true
+			}
 		}
 	}
 	if best == 0 {
@@ -267,18 +276,7 @@ func (g *grouper) spanLineBay(ti int) (bayRegion, bool) {
 	if !calloutLikeRE.MatchString(t.text) {
 		return bayRegion{}, false
 	}
-	li := g.labelIndex()
-	reach := calloutReachIn(t)
-	bi := -1
-	var near []int
-	li.query(t.p, t.p, reach, func(i int) { near = append(near, i) })
-	sort.Ints(near)
-	for _, i := range near {
-		l := g.labelLines[i]
-		if d := distPointSeg(t.p, l.a, l.b); d <= reach {
-			reach, bi = d, i
-		}
-	}
+	bi := g.nearestLabelLine(t)
 	if bi < 0 {
 		return bayRegion{}, false
 	}
@@ -346,6 +344,28 @@ func (g *grouper) spanLineBay(ti int) (bayRegion, bool) {
 		}
 	}
 	return r, true
+}
+
+// nearestLabelLine returns the label line nearest text t within its
+// reach (the line its callout is read on, as calloutMembers reads it), or
+// -1.
+func (g *grouper) nearestLabelLine(t textItem) int {
+	li := g.labelIndex()
+	if li == nil {
+		return -1
+	}
+	reach := calloutReachIn(t)
+	bi := -1
+	var near []int
+	li.query(t.p, t.p, reach, func(i int) { near = append(near, i) })
+	sort.Ints(near)
+	for _, i := range near {
+		l := g.labelLines[i]
+		if d := distPointSeg(t.p, l.a, l.b); d <= reach {
+			reach, bi = d, i
+		}
+	}
+	return bi
 }
 
 // spanLine returns label line bi as a span line: taken through the

@@ -150,3 +150,26 @@ func TestBayWithoutAnySupport(t *testing.T) {
 		t.Errorf("%d members, issues %v; want none and one %s error", len(pl.Members), pl.Issues, CodeBay)
 	}
 }
+
+// A bay outline with a span line inside it takes its direction from the
+// span line (here across the outline's long side: joists 96 in long at
+// y = 0, 16, 32, 40, between walls at x = 0 and 96), and the callout
+// written beside the span line just outside the outline.
+func TestBayOutlineWithSpanLine(t *testing.T) {
+	p := newPlan()
+	p.line("WALL", 0, -10, 0, 50).line("WALL", 96, -10, 96, 50)
+	p.poly("FRAMING-BAY", true, Point{X: 0, Y: 0}, Point{X: 96, Y: 0}, Point{X: 96, Y: 40}, Point{X: 0, Y: 40})
+	p.line("FRAMING-NOTE", 0, 20, 96, 20)
+	p.text("FRAMING-NOTE", `2X8 @ 16" O.C. TYP.`, 100, 22, 3)
+	pl := p.group(DefaultOptions())
+	if len(pl.Members) != 4 || generated(pl) != 4 || pl.Issues.Err() != nil {
+		t.Fatalf("%d members, %d generated (issues %v), want 4", len(pl.Members), generated(pl), pl.Issues)
+	}
+	for _, y := range []float64{0, 16, 32, 40} {
+		m := member(t, pl, 48, y)
+		checkNear(t, m.ID+" length", m.LengthIn, 96, 1e-9)
+		if m.Size != "2x8" {
+			t.Errorf("joist at y %g: size %q", y, m.Size)
+		}
+	}
+}
