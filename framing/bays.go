@@ -92,11 +92,26 @@ func (g *grouper) bays() {
 		}
 	}
 	if len(g.labelLines) > 0 && len(g.sups) > 0 {
-		for ti := range g.labelTexts {
-			if g.bayText[ti] {
+		// the callout texts of each label line, in drawing order (a
+		// callout may be written as several texts on one line)
+		var lines []int
+		texts := map[int][]int{}
+		for ti, t := range g.labelTexts {
+			if g.bayText[ti] || !calloutLikeRE.MatchString(t.text) {
 				continue
 			}
-			if r, ok := g.spanLineBay(ti); ok {
+			bi := g.nearestLabelLine(t)
+			if bi < 0 {
+				continue
+			}
+			bi = g.spanLineOf(bi)
+			if texts[bi] == nil {
+				lines = append(lines, bi)
+			}
+			texts[bi] = append(texts[bi], ti)
+		}
+		for _, bi := range lines {
+			if r, ok := g.spanLineBay(bi, texts[bi]); ok {
 				regions = append(regions, r)
 			}
 		}
@@ -268,17 +283,9 @@ func (g *grouper) outlineSpanDir(pts []Point) (Point, bool) {
 	return rot90(dir), true
 }
 
-// spanLineBay reads label text ti as the callout of a span symbol when
-// its nearest label line is a span line (see the top of this file).
-func (g *grouper) spanLineBay(ti int) (bayRegion, bool) {
-	t := g.labelTexts[ti]
-	if !calloutLikeRE.MatchString(t.text) {
-		return bayRegion{}, false
-	}
-	bi := g.nearestLabelLine(t)
-	if bi < 0 {
-		return bayRegion{}, false
-	}
+// spanLineBay reads label line bi, with the callout texts ti that lie
+// nearest it, as a span symbol when it is one (see the top of this file).
+func (g *grouper) spanLineBay(bi int, ti []int) (bayRegion, bool) {
 	a, b, arrows := g.spanLine(bi)
 	L := dist(a, b)
 	if L < minSpanLineIn {
@@ -300,7 +307,9 @@ func (g *grouper) spanLineBay(ti int) (bayRegion, bool) {
 	}
 	r := bayRegion{pos: g.labelLines[bi].pos, what: "span line"}
 	r.frame(u)
-	g.bayText[ti] = true
+	for _, i := range ti {
+		g.bayText[i] = true
+	}
 	if !ok0 || !ok1 {
 		side := "its start"
 		p := a
@@ -314,7 +323,7 @@ func (g *grouper) spanLineBay(ti int) (bayRegion, bool) {
 			side, g.drawingPoint(p), g.opt.MaxWallThicknessIn+g.opt.SnapToleranceIn)
 		return r, false
 	}
-	if !g.readBayCallout(&r, []int{ti}) {
+	if !g.readBayCallout(&r, ti) {
 		return r, false
 	}
 	// across: where both end supports are drawn, cut at parallel supports

@@ -31,27 +31,35 @@ func (g *grouper) nearestLabelLine(t textItem) int {
 	return bi
 }
 
+// spanLineOf returns label line bi, or when it is short (an arrowhead)
+// the longest label line touching one of its ends.
+func (g *grouper) spanLineOf(bi int) int {
+	tol := g.opt.SnapToleranceIn
+	l := g.labelLines[bi]
+	best, out := dist(l.a, l.b), bi
+	if best >= minSpanLineIn {
+		return bi
+	}
+	li := g.labelIndex()
+	for _, p := range []Point{l.a, l.b} {
+		li.query(p, p, tol, func(i int) {
+			o := g.labelLines[i]
+			if L := dist(o.a, o.b); L > best && (dist(o.a, p) <= tol || dist(o.b, p) <= tol) {
+				best, out = L, i
+			}
+		})
+	}
+	return out
+}
+
 // spanLine returns label line bi as a span line: taken through the
-// collinear label pieces touching its ends (a polyline arrow), from the
-// longer line an arrowhead touches when bi is one, with the number of
-// arrowheads (short label lines at an angle touching its ends) at a and
-// at b.
+// collinear label pieces touching its ends (a polyline arrow), with the
+// number of arrowheads (short label lines at an angle touching its ends)
+// at a and at b.
 func (g *grouper) spanLine(bi int) (a, b Point, arrows [2]int) {
 	tol := g.opt.SnapToleranceIn
 	li := g.labelIndex()
-	l := g.labelLines[bi]
-	a, b = l.a, l.b
-	if dist(a, b) < minSpanLineIn {
-		best := dist(a, b)
-		for _, p := range []Point{l.a, l.b} {
-			li.query(p, p, tol, func(i int) {
-				o := g.labelLines[i]
-				if L := dist(o.a, o.b); L > best && (dist(o.a, p) <= tol || dist(o.b, p) <= tol) {
-					best, a, b = L, o.a, o.b
-				}
-			})
-		}
-	}
+	a, b = g.labelLines[bi].a, g.labelLines[bi].b
 	u := unit(sub(b, a))
 	for grown := true; grown; {
 		grown = false

@@ -173,3 +173,28 @@ func TestBayOutlineWithSpanLine(t *testing.T) {
 		}
 	}
 }
+
+// A callout written nearer an arrowhead than the span line is the span
+// line's: the bay is laid out once, and a finding about it names the span
+// line, not the arrowhead.
+func TestBayCalloutNearArrowhead(t *testing.T) {
+	p := newPlan().walls(20, 68, 0, 120)
+	p.line("FRAMING-NOTE", 44, 0, 44, 120)
+	span := p.d.Entities[len(p.d.Entities)-1].Pos.Handle
+	p.line("FRAMING-NOTE", 44, 0, 42, 6).line("FRAMING-NOTE", 44, 0, 46, 6)
+	p.line("FRAMING-NOTE", 44, 120, 42, 114).line("FRAMING-NOTE", 44, 120, 46, 114)
+	p.text("FRAMING-NOTE", `2x12 @ 16" o.c.`, 47, 8, 3)
+	p.text("FRAMING-NOTE", `2x12 @ 99" o.c.`, 47, 112, 3) // the same line's: the bay is in error
+	pl := p.group(DefaultOptions())
+	if len(pl.Members) != 0 || issueCodes(pl.Issues)[CodeBay] != 1 {
+		t.Fatalf("%d members, issues %v; want none and one %s", len(pl.Members), pl.Issues, CodeBay)
+	}
+	if msg := pl.Issues[0].Error(); !strings.Contains(msg, "span line (handle "+span+")") || !strings.Contains(msg, "spacing 99") {
+		t.Errorf("finding %q, want the span line's handle %s and the spacing", msg, span)
+	}
+	p.d.Entities = p.d.Entities[:len(p.d.Entities)-1]
+	pl = p.group(DefaultOptions())
+	if len(pl.Members) != 4 || generated(pl) != 4 || pl.Issues.Err() != nil {
+		t.Errorf("%d members, %d generated, issues %v; want 4 laid out", len(pl.Members), generated(pl), pl.Issues)
+	}
+}
