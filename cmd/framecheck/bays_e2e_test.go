@@ -54,6 +54,13 @@ func TestBaysOutputs(t *testing.T) {
 		if len(res.Members) != 9 {
 			t.Fatalf("%s: %d members in results.json", form, len(res.Members))
 		}
+		noted := false
+		for _, n := range res.Assumptions.Notes {
+			noted = noted || strings.HasPrefix(n, "9 joists are not drawn but laid out in bays")
+		}
+		if noted != gen {
+			t.Errorf("%s: layout assumption stated %v, want %v", form, noted, gen)
+		}
 		for _, m := range res.Members {
 			if m.Generated != gen || m.Status != export.StatusPass {
 				t.Errorf("%s %s: generated %v status %s, want %v pass", form, m.ID, m.Generated, m.Status, gen)
