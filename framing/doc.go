@@ -63,6 +63,17 @@
 // their own positions), and Plan.DrawnBlocking lists it for the takeoff
 // (Takeoff.ExistingBlocking, clear length = centre to centre less b).
 //
+// # Bays shown by a span symbol (bays.go, bays_geom.go, bays_layout.go)
+//
+// A closed outline on a bay layer, or a span line with a size callout on
+// the label layer running from support to support, stands for joists at
+// the callout's spacing that are not drawn. They are laid out (from the
+// bay's left or bottom edge, one every spacing, a last one on the far
+// edge) and appended to the joist lines before members are made, so every
+// rule below applies to them; Member.Generated marks them and Member.Pos
+// is the bay's outline or span line. A bay with joists drawn in it is not
+// laid out (its callout applies to them). bays.go states every rule.
+//
 // Joists are clustered by direction (mod 180 degrees, chained within
 // AngleTolDeg). Each group has a direction u at an angle in (-90, 90]
 // degrees, and every member is oriented along it: Start is the end with the
