@@ -11,6 +11,10 @@ import (
 // drawn a little askew) (common practice, no source).
 var bayParSin = math.Sin(2 * math.Pi / 180)
 
+// maxBayJoists bounds the joists of one bay (a bay between supports miles
+// long is a drawing mistake, and would exhaust memory).
+const maxBayJoists = 100000
+
 // layOut appends the joists of bay r to g.joists (see bays.go), or
 // reports why it cannot.
 func (g *grouper) layOut(r *bayRegion) {
@@ -43,6 +47,10 @@ func (g *grouper) layOut(r *bayRegion) {
 		return
 	}
 	s := r.co.SpacingIn
+	if n := (r.c1 - r.c0) / s; n > maxBayJoists {
+		g.bayError(r, "it is %.0f in wide: %.0f joists at %g in, more than the %d one bay may hold", r.c1-r.c0, n, s, maxBayJoists)
+		return
+	}
 	var cs []float64
 	for i := 0; ; i++ {
 		c := r.c0 + float64(i)*s

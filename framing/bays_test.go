@@ -86,8 +86,8 @@ func TestBayLeaderAndBeamCalloutAreNotSpanLines(t *testing.T) {
 // Bad bays, each one error naming its handle, the rest of the plan kept:
 // a callout with no spacing; an outline on supports on all four sides
 // with no span line (which way it spans cannot be told); a span line with
-// arrowheads at both ends and no support at one; loose lines on a bay
-// layer (a warning, with their handles).
+// arrowheads at both ends and no support at one; an outline with no
+// callout; loose lines on a bay layer (a warning, with their handles).
 func TestBayErrorsNameTheHandle(t *testing.T) {
 	p := newPlan().walls(-10, 300, 0, 120)
 	p.joists(0, 120, 200, 216, 232) // the drawn part of the plan
@@ -107,6 +107,10 @@ func TestBayErrorsNameTheHandle(t *testing.T) {
 	p.text("FRAMING-NOTE", `2x10 @ 16" o.c.`, 152, 80, 3)
 	p.line("FRAMING-BAY", 250, 0, 250, 120)
 	loose := p.d.Entities[len(p.d.Entities)-1].Pos.Handle
+	// no callout at all (a room name inside)
+	p.poly("FRAMING-BAY", true, Point{X: 260, Y: 0}, Point{X: 290, Y: 0}, Point{X: 290, Y: 120}, Point{X: 260, Y: 120})
+	noCallout := p.d.Entities[len(p.d.Entities)-1].Pos.Handle
+	p.text("FRAMING-NOTE", "STORAGE", 265, 60, 3)
 	pl := p.group(DefaultOptions())
 	var msgs []string
 	for _, is := range pl.Issues {
@@ -121,6 +125,7 @@ func TestBayErrorsNameTheHandle(t *testing.T) {
 		"bay outline (handle " + noDir + "): cannot tell which way it spans",
 		"span line (handle " + noSide + "): no support at its end near (150.00, 160.00)",
 		"1 entities on bay layers left out (handles " + loose + ")",
+		"bay outline (handle " + noCallout + "): no size callout",
 	} {
 		if !strings.Contains(all, want) {
 			t.Errorf("no finding saying %q in:\n%s", want, all)
@@ -135,8 +140,8 @@ func TestBayErrorsNameTheHandle(t *testing.T) {
 			errs++
 		}
 	}
-	if errs != 3 {
-		t.Errorf("%d %s errors, want 3 (the loose line is a warning)", errs, CodeBay)
+	if errs != 4 {
+		t.Errorf("%d %s errors, want 4 (the loose line is a warning)", errs, CodeBay)
 	}
 }
 
