@@ -105,7 +105,13 @@ func TestBaysOutputs(t *testing.T) {
 		}
 		if form == "outline" {
 			code, so, se := runCmd("layers", plan, "-p", proj)
-			if code != 0 || !strings.Contains(so, "FRAMING-BAY") || !strings.Contains(so, RoleBays) {
+			role := ""
+			for _, l := range strings.Split(so, "\n") {
+				if f := strings.Fields(l); len(f) > 0 && f[0] == "FRAMING-BAY" {
+					role = f[len(f)-1]
+				}
+			}
+			if code != 0 || role != RoleBays {
 				t.Errorf("layers: exit %d, no FRAMING-BAY with role %s:\n%s%s", code, RoleBays, so, se)
 			}
 		}
