@@ -248,7 +248,7 @@ func copyAnnotated(pr *pairReader, w *bufio.Writer, facts *dxfFacts, m *Markup) 
 		m.PlanLo, m.PlanHi = lo, hi
 	}
 	for i, l := range markupLayers {
-		if !facts.Layers[strings.ToUpper(l.Name)] {
+		if !facts.Layers[strings.ToUpper(l.Name)] && m.usesLayer(l.Name) {
 			a.newLayers = append(a.newLayers, i)
 		}
 	}

@@ -156,7 +156,7 @@ func (e *dxfEmitter) layer(name string, color, lineWeight int, ltype, tableHandl
 
 // markupEntityCount is the number of entities markup writes for m.
 func markupEntityCount(m *Markup) int {
-	n := len(m.Highlights) + len(m.Errors) + len(m.BlockingAdds) + m.keyCount()
+	n := len(m.Highlights) + len(m.Errors) + len(m.BlockingAdds) + len(m.Generated) + m.keyCount()
 	for _, g := range m.labelGroups() {
 		n += len(g.Labels)
 	}
@@ -176,6 +176,9 @@ func (e *dxfEmitter) markup(m *Markup, colours map[string]int) {
 	}
 	for _, s := range m.BlockingAdds {
 		e.line(LayerBlocking, du(s.A), du(s.B), 0)
+	}
+	for _, s := range m.Generated {
+		e.line(LayerGenerated, du(s.A), du(s.B), 0)
 	}
 	h := m.textHeight()
 	for _, g := range m.labelGroups() {

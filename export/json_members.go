@@ -49,6 +49,10 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 		w.str("location", m.Location)
 	}
 	w.num("datum_in", m.DatumIn)
+	if m.Generated {
+		w.key("generated")
+		w.b = append(w.b, "true"...)
+	}
 	w.floats("start", m.Start[:])
 	w.floats("end", m.End[:])
 	w.num("length_in", m.LengthIn)

@@ -16,7 +16,17 @@ const (
 	LayerUplift   = "FC-UPLIFT"       // a TEXT "uplift N lb" at each bearing with flagged net uplift
 	LayerID       = "FC-ID"           // member ids (M54), small, to switch off when not wanted
 	LayerKey      = "FC-KEY"          // the key: each markup layer, its colour and meaning
+	// LayerGenerated holds a LINE on every generated member (laid out in
+	// a bay shown by a span symbol, not drawn on the plan).
+	LayerGenerated = "FC-GENERATED"
 )
+
+// usesLayer reports whether the markup declares layer name: all of ours
+// but LayerGenerated, which only a plan with generated members gets (so
+// the files of plans without bays are as they were).
+func (m *Markup) usesLayer(name string) bool {
+	return name != LayerGenerated || len(m.Generated) > 0
+}
 
 // markupLayer is one of our layers: its name, the meaning the key gives
 // it, the ACI colours it may take in order of preference, and for R2000+
@@ -40,6 +50,7 @@ var markupLayers = []markupLayer{
 	{LayerLabel, "mark size@spacing, governing check and ratio, one per run", []int{32, 22, 34, 42, 24, 30}, 18},
 	{LayerUplift, "net uplift at a bearing, ASD lb: connector demand", []int{94, 92, 96, 84, 112, 3}, 18},
 	{LayerID, "member ids (switch this layer off to hide them)", []int{251, 252, 250, 253, 8, 9}, 13},
+	{LayerGenerated, "joists laid out in a bay from its span symbol and callout (not drawn on the plan)", []int{4, 130, 132, 140, 142, 134}, 25},
 	{LayerKey, "this key", []int{250, 251, 252, 7}, 18},
 }
 

@@ -32,7 +32,8 @@ type Markup struct {
 	NoKey bool
 	// Stamp is the key's line naming the project and the tool version
 	// (MarkupStamp); "" leaves it out.
-	Stamp string
+	Stamp     string
+	Generated []Segment // members laid out in bays (not drawn), on LayerGenerated
 }
 
 // Segment is a straight line in inches; Ref names what it marks (member or
@@ -66,7 +67,8 @@ const IDHeightFactor = 0.5
 //   - each member's id in small text beside its line (LayerID);
 //   - a line for each blocking row to add and one note per run
 //     (BlockingNote) beside its first row;
-//   - "uplift N lb" beside each flagged bearing of r.Uplift.
+//   - "uplift N lb" beside each flagged bearing of r.Uplift;
+//   - a line on each generated member (LayerGenerated).
 //
 // Inch coordinates are taken from StartIn/EndIn (PointIn) when set, else
 // from Start/End (Point) times toInch. The text height is LabelHeightIn of
@@ -93,6 +95,9 @@ func MarkupFromResults(r *Results, toInch float64) Markup {
 			m.Highlights = append(m.Highlights, Segment{A: a, B: b, Ref: mb.ID})
 		case StatusError:
 			m.Errors = append(m.Errors, Segment{A: a, B: b, Ref: mb.ID})
+		}
+		if mb.Generated {
+			m.Generated = append(m.Generated, Segment{A: a, B: b, Ref: mb.ID})
 		}
 		for _, g := range []float64{mb.SpacingIn, mb.TribIn} {
 			if g > 0 && g < minGap {
@@ -271,7 +276,7 @@ func (m *Markup) validate() error {
 	if !finite(m.TextHeightIn) || m.TextHeightIn < 0 {
 		return fmt.Errorf("markup: text height %v in: want a finite height >= 0", m.TextHeightIn)
 	}
-	for _, group := range [][]Segment{m.Highlights, m.Errors, m.BlockingAdds} {
+	for _, group := range [][]Segment{m.Highlights, m.Errors, m.BlockingAdds, m.Generated} {
 		for _, s := range group {
 			if !finite(s.A[0]) || !finite(s.A[1]) || !finite(s.B[0]) || !finite(s.B[1]) {
 				return fmt.Errorf("markup: %s: non-finite coordinate %v %v", s.Ref, s.A, s.B)

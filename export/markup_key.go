@@ -48,7 +48,7 @@ func (m *Markup) key(colours map[string]int) []keyItem {
 	y -= 1.8 * h
 	items = append(items, keyItem{At: [2]float64{x, y}, Text: KeyDatum})
 	for _, l := range markupLayers {
-		if l.Name == LayerKey {
+		if l.Name == LayerKey || !m.usesLayer(l.Name) {
 			continue
 		}
 		y -= 1.8 * h
@@ -65,7 +65,12 @@ func (m *Markup) keyCount() int {
 	if m.NoKey {
 		return 0
 	}
-	n := 2 + 2*(len(markupLayers)-1)
+	n := 2
+	for _, l := range markupLayers {
+		if l.Name != LayerKey && m.usesLayer(l.Name) {
+			n += 2
+		}
+	}
 	if m.Stamp != "" {
 		n++
 	}

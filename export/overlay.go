@@ -87,10 +87,19 @@ func writeOverlay(w *bufio.Writer, m *Markup, units string) {
 	e.pair(0, "ENDTAB")
 	e.pair(0, "TABLE")
 	e.pair(2, "LAYER")
-	e.pair(70, fmt.Sprint(len(markupLayers)+1))
+	n := 0
+	for _, l := range markupLayers {
+		if m.usesLayer(l.Name) {
+			n++
+		}
+	}
+	e.pair(70, fmt.Sprint(n+1))
 	e.layer("0", 7, 0, "CONTINUOUS", "", "")
 	colours := chooseColours(usedSet(m.UsedACI))
 	for _, l := range markupLayers {
+		if !m.usesLayer(l.Name) {
+			continue
+		}
 		e.layer(l.Name, colours[l.Name], l.LineWeight, "CONTINUOUS", "", "")
 	}
 	e.pair(0, "ENDTAB")
@@ -135,6 +144,10 @@ func (m *Markup) bounds() (lo, hi [2]float64) {
 			add(s.A)
 			add(s.B)
 		}
+	}
+	for _, s := range m.Generated {
+		add(s.A)
+		add(s.B)
 	}
 	for _, g := range m.labelGroups() {
 		for _, l := range g.Labels {

@@ -120,6 +120,10 @@ type Member struct {
 	// bearing (its side toward the span), inches: the datum of every
 	// position along the member the outputs print (FromFace).
 	DatumIn float64 `json:"datum_in"`
+	// Generated marks a joist that is not drawn: laid out in a bay shown
+	// by a span symbol and a size callout; Handle and Source are then the
+	// bay's outline or span line.
+	Generated bool `json:"generated,omitempty"`
 	// Start and End are in drawing units, as drawn.
 	Start [2]float64 `json:"start"`
 	End   [2]float64 `json:"end"`

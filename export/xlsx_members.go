@@ -133,8 +133,16 @@ func memberRow(s *rowCells, m *Member) {
 	s.text(m.Layer)
 	s.text(m.Handle)
 	s.text(m.Location)
-	s.text(strings.Join(m.Messages, "; "))
+	msgs := strings.Join(m.Messages, "; ")
+	if m.Generated {
+		msgs = strings.TrimSuffix(generatedNote+"; "+msgs, "; ")
+	}
+	s.text(msgs)
 }
+
+// generatedNote opens the Messages cell of a generated member (Handle is
+// then its bay's outline or span line).
+const generatedNote = "generated: not drawn, laid out in the bay of this handle from its span symbol and callout"
 
 // rowsPerSpan adds the blocking rows per span as a number when every span
 // has the same count (or there is one span), as text ("1, 2") otherwise,

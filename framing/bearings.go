@@ -43,13 +43,7 @@ type hit struct {
 // hangers and errors.
 func (g *grouper) findBearings() {
 	p := g.plan
-	if len(g.sups) > 0 {
-		lo, hi, typ := bounds(g.sups)
-		g.supIdx = newSegIndex(lo, hi, len(g.sups), typ)
-		for i, s := range g.sups {
-			g.supIdx.insert(i, s.a, s.b, 0)
-		}
-	}
+	g.supportIndex()
 	merged := map[[2]int]bool{}
 	g.inGroup = make([]bool, len(g.sups))
 	minSin := math.Sin(minBearingAngleDeg * math.Pi / 180)
@@ -76,6 +70,19 @@ func (g *grouper) findBearings() {
 	}
 	g.buildSupports(merged)
 	g.resolveBearingSupports()
+}
+
+// supportIndex builds the grid over the support lines, once (bays may
+// need it before findBearings).
+func (g *grouper) supportIndex() *segIndex {
+	if g.supIdx == nil && len(g.sups) > 0 {
+		lo, hi, typ := bounds(g.sups)
+		g.supIdx = newSegIndex(lo, hi, len(g.sups), typ)
+		for i, s := range g.sups {
+			g.supIdx.insert(i, s.a, s.b, 0)
+		}
+	}
+	return g.supIdx
 }
 
 // bounds returns the bounding box and mean length of segments.

@@ -38,7 +38,7 @@ func (g *grouper) assignLumber() {
 		m := &p.Members[k]
 		m.Species, m.Grade, m.Size = g.opt.lumberFor(m.Layer)
 	}
-	if len(g.labelTexts) == 0 {
+	if len(g.labelTexts) == 0 && len(g.bayRegions) == 0 {
 		return
 	}
 	got := make(map[int][]callout)
@@ -49,7 +49,10 @@ func (g *grouper) assignLumber() {
 		err error
 	}
 	read := map[string]reading{} // a plan repeats its callouts run after run
-	for _, t := range g.labelTexts {
+	for ti, t := range g.labelTexts {
+		if g.bayText != nil && g.bayText[ti] {
+			continue // read with its bay (bays.go)
+		}
 		r, ok := read[t.text]
 		if !ok {
 			r.co, r.err = ReadCallout(t.text)
@@ -99,6 +102,7 @@ func (g *grouper) assignLumber() {
 			"%d label-layer text(s) with no size in them left out, such as %q (a callout reads like 2x10 @ 16\" o.c.)",
 			len(other), strings.Join(strings.Fields(other[0].text), " "))
 	}
+	g.bayCallouts(got)
 	ks := make([]int, 0, len(got))
 	for k := range got {
 		ks = append(ks, k)
@@ -234,7 +238,9 @@ func (g *grouper) applyCallouts(k int, cs []callout) {
 	if c0.Grade != "" {
 		m.Grade = c0.Grade
 	}
-	if sp := g.jointSpacing(k); c0.SpacingIn > 0 && sp > 0 && math.Abs(sp-c0.SpacingIn) > 1 {
+	// a generated joist is at the callout's spacing but for the last gap
+	// of its bay, which is the layout's, not the drawing's
+	if sp := g.jointSpacing(k); !m.Generated && c0.SpacingIn > 0 && sp > 0 && math.Abs(sp-c0.SpacingIn) > 1 {
 		msg := fmt.Sprintf("%s: callout %q says %g in o.c. but the drawing measures %.2f in",
 			m.ID, c0.text, c0.SpacingIn, sp)
 		m.Messages = append(m.Messages, msg)

@@ -63,6 +63,17 @@
 // their own positions), and Plan.DrawnBlocking lists it for the takeoff
 // (Takeoff.ExistingBlocking, clear length = centre to centre less b).
 //
+// # Bays shown by a span symbol (bays.go, bays_geom.go, bays_layout.go)
+//
+// A closed outline on a bay layer, or a span line with a size callout on
+// the label layer running from support to support, stands for joists at
+// the callout's spacing that are not drawn. They are laid out (from the
+// bay's left or bottom edge, one every spacing, a last one on the far
+// edge) and appended to the joist lines before members are made, so every
+// rule below applies to them; Member.Generated marks them and Member.Pos
+// is the bay's outline or span line. A bay with joists drawn in it is not
+// laid out (its callout applies to them). bays.go states every rule.
+//
 // Joists are clustered by direction (mod 180 degrees, chained within
 // AngleTolDeg). Each group has a direction u at an angle in (-90, 90]
 // degrees, and every member is oriented along it: Start is the end with the
@@ -170,6 +181,10 @@
 //	FRM216 error    joist outline that is not a rectangle: not checked
 //	FRM217 warning  an outline's drawn thickness differs from its size's b by more than 0.25 in
 //	FRM218 error    outlines drawn side by side: a built-up member, not checked yet
+//	FRM219 error    bay outline or span symbol that cannot be laid out (no callout, no
+//	                spacing, no support on one side): nothing generated in it (bays.go);
+//	                a warning for joist positions at a bay's edges that reach no support
+//	FRM220 info     bay whose joists are drawn: its callout applies to them, none generated
 //	FRM230 warning  entity on a posts layer that is no post (a large circle or outline, open lines): skipped
 //	FRM231 error    point-load mark with no text beside it, or a text that cannot be read
 //	FRM232 error    point-load mark on no joist or beam

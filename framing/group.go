@@ -67,6 +67,14 @@ type grouper struct {
 	zoneTexts  []textItem
 	zonePolys  []polyItem
 
+	// bays (bays.go): set only when the plan has some
+	bayPolys   []polyItem      // closed outlines on bay layers
+	bayLoose   []dxfimport.Pos // other entities on bay layers, left out
+	bayText    []bool          // per label text: the callout of a bay
+	bayRegions []bayRegion     // the bays read
+	genFrom    int             // joist items from here on are generated; -1 when none
+	jIdx       *segIndex       // grid over the drawn joist items, built on first use
+
 	// per member, parallel to plan.Members
 	grp    []int
 	a0, a1 []float64 // extent along the group direction
@@ -108,7 +116,7 @@ type dirGroup struct {
 // Group turns an imported drawing into members. It never fails: problems
 // are in Plan.Issues and on the members (Error, Messages).
 func Group(d *dxfimport.Drawing, opt Options) *Plan {
-	g := &grouper{opt: opt, plan: &Plan{Ignored: map[string]int{}}}
+	g := &grouper{opt: opt, plan: &Plan{Ignored: map[string]int{}}, genFrom: -1}
 	if d == nil {
 		return g.plan
 	}
@@ -117,6 +125,7 @@ func Group(d *dxfimport.Drawing, opt Options) *Plan {
 	g.outlines()
 	g.brokenOutlines()
 	g.joistBlocking()
+	g.bays()
 	g.makeMembers()
 	g.findBearings()
 	g.neighbours()
@@ -193,6 +202,8 @@ func (g *grouper) classify(d *dxfimport.Drawing) {
 			used = g.addZone(e)
 		case rolePost, rolePointLoad:
 			used = g.lp.add(e, r)
+		case roleBay:
+			used = g.addBay(e)
 		}
 		if !used {
 			g.plan.Ignored[fmt.Sprintf("%s (%s)", layer, e.Kind)]++
@@ -416,6 +427,7 @@ func (g *grouper) makeMembers() {
 		p.Members[k] = Member{
 			ID: fmt.Sprintf("M%d", k+1), Pos: j.pos, Layer: j.pos.Layer,
 			Start: j.a, End: j.b, LengthIn: dist(j.a, j.b),
+			Generated: g.genFrom >= 0 && i >= g.genFrom,
 		}
 		p.dirs[k] = unit(sub(j.b, j.a))
 		p.across[k] = dot(mid(j.a, j.b), gr.n)

@@ -38,7 +38,10 @@ type Options struct {
 	AngleTolDeg        float64 // joists within this angle are parallel
 
 	JoistLayers, BlockingLayers, ZoneLayers, LabelLayers []string
-	Supports                                             []SupportSpec
+	// BayLayers hold closed outlines of bays whose joists are not drawn
+	// (bays.go): the joists are laid out from the bay's size callout.
+	BayLayers []string
+	Supports  []SupportSpec
 	// PostLayers hold posts (circles, small closed outlines, block
 	// inserts); PointLoadLayers point-load marks and their texts (the
 	// load path, posts.go).
@@ -68,6 +71,7 @@ func DefaultOptions() Options {
 		LabelLayers:        []string{"FRAMING-NOTE*"},
 		PostLayers:         []string{"POST*"},
 		PointLoadLayers:    []string{"POINT-LOAD*"},
+		BayLayers:          []string{"FRAMING-BAY*"},
 		Supports: []SupportSpec{
 			{Layers: []string{"WALL*"}, Kind: KindBearingWall, BearingIn: 3.5},
 			{Layers: []string{"BEAM-FLUSH*"}, Kind: KindFlushBeam, BearingIn: 1.5},
@@ -91,6 +95,7 @@ const (
 	roleLabel
 	rolePost
 	rolePointLoad
+	roleBay
 )
 
 // layerRole returns the role of a layer and, for supports, the index of
@@ -117,6 +122,8 @@ func (o *Options) layerRole(layer string) (role, int) {
 		return rolePost, -1
 	case dxfimport.MatchLayer(o.PointLoadLayers, layer):
 		return rolePointLoad, -1
+	case dxfimport.MatchLayer(o.BayLayers, layer):
+		return roleBay, -1
 	}
 	return roleNone, -1
 }

@@ -80,6 +80,10 @@ type Member struct {
 	// as outlines (1 for one outline, 2 or more for a built-up member,
 	// which is an error member for now); 0 for a centre line.
 	Plies int
+	// Generated marks a joist that is not drawn: framing laid it out in a
+	// bay shown by a span symbol and a size callout (bays.go). Pos is then
+	// the bay's outline or span line.
+	Generated bool
 
 	Bearings []Bearing // sorted along the member
 	// Cantilever lengths past the first/last bearing centre; 0 when the

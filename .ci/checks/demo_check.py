@@ -164,7 +164,7 @@ def main(demo, overlay_dir):
     if odoc.audit().has_errors:
         fail("ezdxf audit errors in the overlay")
     layers = {e.dxf.layer.upper() for e in odoc.modelspace()}
-    if not layers <= {"FC-FAIL", "FC-ERROR", "FC-BLOCKING-ADD", "FC-LABEL", "FC-UPLIFT", "FC-ID", "FC-KEY"}:
+    if not layers <= {"FC-FAIL", "FC-ERROR", "FC-BLOCKING-ADD", "FC-LABEL", "FC-UPLIFT", "FC-ID", "FC-KEY", "FC-GENERATED"}:
         fail("overlay holds entities on other layers: %r" % sorted(layers))
 
     # Schedule: sheets, one row per member, totals.

@@ -13,7 +13,7 @@ import os
 import sys
 from collections import Counter
 
-OUR_LAYERS = ("FC-FAIL", "FC-ERROR", "FC-BLOCKING-ADD", "FC-LABEL", "FC-UPLIFT", "FC-ID", "FC-KEY")
+OUR_LAYERS = ("FC-FAIL", "FC-ERROR", "FC-BLOCKING-ADD", "FC-LABEL", "FC-UPLIFT", "FC-ID", "FC-KEY", "FC-GENERATED")
 TEXT_LAYERS = ("FC-LABEL", "FC-UPLIFT", "FC-ID")
 LINE_LAYERS = ("FC-FAIL",)  # the others hold lines and texts
 failures = []

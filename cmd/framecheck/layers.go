@@ -75,7 +75,8 @@ func unusedPatterns(rows []layerRow, p *Project) []string {
 		patterns []string
 	}
 	roles := []role{{"layers.joists", p.Layers.Joists}, {"layers.blocking", p.Layers.Blocking},
-		{"layers.zones", p.Layers.Zones}, {"layers.labels", p.Layers.Labels}}
+		{"layers.zones", p.Layers.Zones}, {"layers.labels", p.Layers.Labels},
+		{"layers.bays", p.Layers.Bays}}
 	for i, s := range p.Supports {
 		roles = append(roles, role{fmt.Sprintf("[[support]] %d (%s)", i+1, s.Kind), s.Layers})
 	}
@@ -98,7 +99,7 @@ func unusedPatterns(rows []layerRow, p *Project) []string {
 func runLayers(args []string, stdout, stderr io.Writer) int {
 	f := newFlags("layers", "framecheck layers PLAN.dxf [-p PROJECT.toml] [--units U]", `
 Lists every layer of the plan with its entity counts by type and the role
-the project file gives it (joists, blocking, zones, labels, posts,
+the project file gives it (joists, blocking, zones, labels, bays, posts,
 point_loads, or a support kind), or none: the quick way to map a new drawing to a project file.
 Without -p the built-in layer patterns apply.`)
 	projectPath := f.String("p", "", "project file `PROJECT.toml` (default: the built-in defaults)")

@@ -55,6 +55,7 @@ func framingOptions(p *Project) framing.Options {
 	for _, l := range p.PointLoads {
 		o.PointLoadNames = append(o.PointLoadNames, l.Name)
 	}
+	o.BayLayers = p.Layers.Bays
 	o.Supports = nil
 	for _, s := range p.Supports {
 		o.Supports = append(o.Supports, framing.SupportSpec{Layers: s.Layers, Kind: s.Kind, BearingIn: s.BearingIn, Rigid: !s.Check})

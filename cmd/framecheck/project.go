@@ -64,6 +64,9 @@ type LayerRoles struct {
 	Blocking []string // blocking rows already drawn
 	Zones    []string // closed load-zone outlines with the zone name inside
 	Labels   []string // size callouts and their span lines
+	// Bays are closed outlines of joist bays shown by a span symbol: the
+	// joists in them are not drawn (framing/bays.go lays them out).
+	Bays []string
 	// Posts are the layers of posts under beams: circles, small closed
 	// outlines, block inserts (load path).
 	Posts []string
@@ -370,6 +373,7 @@ const (
 	RoleBlocking = "blocking"
 	RoleZones    = "zones"
 	RoleLabels   = "labels"
+	RoleBays     = "bays"
 	RolePosts    = "posts"
 	// RolePointLoads is the role of point-load marks and their text.
 	RolePointLoads = "point_loads"
@@ -378,9 +382,9 @@ const (
 )
 
 // LayerRole returns the role the project gives a layer: "joists",
-// "blocking", "zones", "labels", "posts" (layers.posts or the layers of
-// a [[post]] table), "point_loads", "support:<kind>", or "" for none.
-// Roles are tried in that order, supports last.
+// "blocking", "zones", "labels", "bays", "posts" (layers.posts or the
+// layers of a [[post]] table), "point_loads", "support:<kind>", or "" for
+// none. Roles are tried in that order, supports last.
 func (p *Project) LayerRole(layer string) string {
 	roles := []struct {
 		name     string
@@ -390,6 +394,7 @@ func (p *Project) LayerRole(layer string) string {
 		{RoleBlocking, p.Layers.Blocking},
 		{RoleZones, p.Layers.Zones},
 		{RoleLabels, p.Layers.Labels},
+		{RoleBays, p.Layers.Bays},
 		{RolePosts, p.PostLayers()},
 		{RolePointLoads, p.Layers.PointLoads},
 	}

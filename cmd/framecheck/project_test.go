@@ -316,7 +316,7 @@ func TestFullProject(t *testing.T) {
 		t.Errorf("sizes not in canonical form: %+v %+v", p.Lumber.ByLayer, p.Sizing)
 	}
 	roles := map[string]string{"j-deck-2": RoleJoists, "Rafter": RoleJoists, "BLK1": RoleBlocking,
-		"zones": RoleZones, "NOTES": RoleLabels, "wall-int-3": "support:bearing-wall",
+		"zones": RoleZones, "NOTES": RoleLabels, "joist-bays": RoleBays, "wall-int-3": "support:bearing-wall",
 		"BM-FLUSH": "support:flush-beam", "LEDGER": "support:ledger", "TEXT": ""}
 	for layer, want := range roles {
 		if got := p.LayerRole(layer); got != want {

@@ -68,7 +68,7 @@ var schema = []struct {
 		"post", "point_load"}},
 	{"[project]", projectInfoKeys},
 	{"[drawing]", []string{"units", "snap_tolerance_in", "max_wall_thickness_in", "edge_distance_in"}},
-	{"[layers]", []string{"joists", "blocking", "zones", "labels", "posts", "point_loads"}},
+	{"[layers]", []string{"joists", "blocking", "zones", "labels", "bays", "posts", "point_loads"}},
 	{"[[support]]", []string{"layers", "kind", "bearing_in", "species", "grade", "size", "plies", "material", "check"}},
 	{"[lumber]", []string{"species", "grade", "size", "materials_file", "by_layer"}},
 	{"[[lumber.by_layer]]", []string{"layers", "species", "grade", "size"}},

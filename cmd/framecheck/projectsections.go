@@ -49,12 +49,14 @@ func (ld *loader) layers(t *table) {
 	*l = LayerRoles{
 		Joists: []string{"JOIST*"}, Blocking: []string{"BLOCKING*"},
 		Zones: []string{"LOAD-ZONE*"}, Labels: []string{"FRAMING-NOTE*"},
+		Bays:  []string{"FRAMING-BAY*"},
 		Posts: []string{"POST*"}, PointLoads: []string{"POINT-LOAD*"},
 	}
 	ld.list(t, "joists", &l.Joists, nil)
 	ld.list(t, "blocking", &l.Blocking, nil)
 	ld.list(t, "zones", &l.Zones, nil)
 	ld.list(t, "labels", &l.Labels, nil)
+	ld.list(t, "bays", &l.Bays, nil)
 	ld.quietList(t, "posts", &l.Posts, nil)
 	ld.quietList(t, "point_loads", &l.PointLoads, nil)
 }

@@ -156,7 +156,7 @@ func newResultConverter() *resultConverter {
 
 func (cv *resultConverter) member(m *framing.Member, res *check.Result, toInch float64) export.Member {
 	em := export.Member{
-		ID: m.ID, Mark: m.Mark, Layer: m.Layer, Handle: m.Pos.Handle, Source: m.Pos.String(),
+		ID: m.ID, Mark: m.Mark, Layer: m.Layer, Handle: m.Pos.Handle, Source: m.Pos.String(), Generated: m.Generated,
 		Start:   [2]float64{m.Start.X / toInch, m.Start.Y / toInch},
 		End:     [2]float64{m.End.X / toInch, m.End.Y / toInch},
 		StartIn: [2]float64{m.Start.X, m.Start.Y}, EndIn: [2]float64{m.End.X, m.End.Y},
@@ -429,6 +429,12 @@ func assumptions(o *outcome) export.Assumptions {
 		"a connector's allowable load for that load duration (CD = 1.6 for wind, NDS 2018 Table 2.3.2) must meet. "+
 		"No connector is named: the designer picks the part.", fmtNum(p.Design.UpliftReportLb), export.LayerUplift))
 	a.Notes = append(a.Notes, bracingNotes(p)...)
+	if n := generatedCount(o.plan); n > 0 {
+		a.Notes = append(a.Notes, fmt.Sprintf("%d joists are not drawn but laid out in bays shown by a span symbol "+
+			"and a size callout (marked generated; layer %s): parallel to the span line, from support to support, "+
+			"the first at the bay's left edge (its bottom edge for joists running left to right), one every callout "+
+			"spacing, a last one on the far edge.", n, export.LayerGenerated))
+	}
 	if p.Design.AddSelfWeight {
 		a.Notes = append(a.Notes, "Joist self-weight is added to D at 35 lb/ft3 (NDS 2018 Supplement Table 1B basis).")
 	}
@@ -437,6 +443,17 @@ func assumptions(o *outcome) export.Assumptions {
 	}
 	a.Notes = append(a.Notes, drawingFindings(o)...)
 	return a
+}
+
+// generatedCount is the number of members framing laid out in bays.
+func generatedCount(pl *framing.Plan) int {
+	n := 0
+	for i := range pl.Members {
+		if pl.Members[i].Generated {
+			n++
+		}
+	}
+	return n
 }
 
 // bracingNotes states once, for the whole run, the lateral bracing the

@@ -38,6 +38,7 @@ joists = ["JOIST*"]
 blocking = ["BLOCKING*"]      # blocking rows already drawn; they brace the joists they cross
 zones = ["LOAD-ZONE*"]        # closed outlines with the load zone's name written inside
 labels = ["FRAMING-NOTE*"]    # size callouts such as "2x10 @ 16 o.c." and the span lines under them
+bays = ["FRAMING-BAY*"]       # closed outlines of bays whose joists are not drawn, with a callout inside
 posts = ["POST*"]             # posts under beams: circles, small closed outlines, block inserts
 point_loads = ["POINT-LOAD*"] # point loads: a point, circle or block with a text such as "P: 1200 D, 800 L" (lb)
 
