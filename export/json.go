@@ -444,6 +444,12 @@ func encodeResults(w *bufio.Writer, r *Results) error {
 			return nil
 		},
 		func() error {
+			if r.LoadPath == nil {
+				return nil
+			}
+			return value("load_path", r.LoadPath)
+		},
+		func() error {
 			t := r.Takeoff
 			t.Joists, t.Blocking, t.Hangers = orEmpty(t.Joists), orEmpty(t.Blocking), orEmpty(t.Hangers)
 			return value("takeoff", t)

@@ -129,7 +129,40 @@ func MarkupFromResults(r *Results, toInch float64) Markup {
 	m.Reasons = errorReasons(r, ends, h)
 	m.BlockingNotes = blockingNotes(r, toInch, h)
 	m.Uplifts = upliftLabels(r, toInch, h, side)
+	pathMarkup(&m, r, toInch, h)
 	return m
+}
+
+// pathMarkup adds the load path's beams: a line over each failing beam
+// (LayerFail) or beam in error (LayerError), and a label beside each beam,
+// offset from its line by one text height: "B1 (3) 2x12 BENDING 0.85".
+func pathMarkup(m *Markup, r *Results, toInch, h float64) {
+	if r.LoadPath == nil {
+		return
+	}
+	for _, b := range r.LoadPath.Beams {
+		a, e := inches(b.Start, b.End, b.StartIn, b.EndIn, toInch)
+		switch b.Status {
+		case StatusFail:
+			m.Highlights = append(m.Highlights, Segment{A: a, B: e, Ref: b.ID})
+		case StatusError:
+			m.Errors = append(m.Errors, Segment{A: a, B: e, Ref: b.ID})
+		}
+		text := b.ID + " " + b.Size
+		if b.Status == StatusError {
+			text += " ERROR"
+		} else if b.Governing != "" {
+			text += " " + CheckWord(b.Governing) + " " + strconv.FormatFloat(b.MaxRatio, 'f', 2, 64)
+		}
+		dx, dy := e[0]-a[0], e[1]-a[1]
+		l := math.Hypot(dx, dy)
+		if l == 0 {
+			continue
+		}
+		nx, ny := -dy/l, dx/l // beside the line, not on it
+		mid := [2]float64{(a[0]+e[0])/2 + nx*1.5*h, (a[1]+e[1])/2 + ny*1.5*h}
+		m.Labels = append(m.Labels, Label{At: mid, AngleDeg: readableAngle(a, e), Text: text})
+	}
 }
 
 // readableAngle is the direction from a to b in degrees, turned into

@@ -122,6 +122,7 @@ type reportPage struct {
 	Takeoff     Takeoff
 	Totals      TakeoffTotals
 	Uplift      upliftSection
+	Path        *pathSection // beams, posts, connections, foundation; nil without
 	Calcs       []markCalc
 	Assumptions Assumptions
 	Combos      []string
@@ -227,6 +228,7 @@ func buildReport(r *Results, g *PlanGeometry, when time.Time) *reportPage {
 		})
 	}
 	p.Uplift = buildUplift(r)
+	p.Path = buildPath(r)
 	p.PlanSVG, p.MemberJSON = planSVG(r, g)
 	p.Calcs = buildCalcs(r)
 	return p

@@ -54,6 +54,9 @@ type Results struct {
 	Marks        []Mark        `json:"marks"`
 	BlockingRows []BlockingRow `json:"blocking_rows"`
 	Uplift       UpliftReport  `json:"uplift"` // bearings under net uplift (connector demand)
+	// LoadPath holds the beams, posts, connections and foundation loads
+	// when the plan has beams or posts; nil otherwise.
+	LoadPath *LoadPath `json:"load_path,omitempty"`
 	Takeoff      Takeoff       `json:"takeoff"`
 	Summary      Summary       `json:"summary"`
 	Assumptions  Assumptions   `json:"assumptions"`

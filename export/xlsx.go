@@ -52,7 +52,7 @@ func WriteXLSX(path string, r *Results) error {
 	// (at 10,000 members the schedule took 2.3 s instead of 0.3 s).
 	f.SetActiveSheet(0)
 	writers := []func(*excelize.File, *styles, *Results) error{
-		writeMembers, writeMarks, writeBlocking, writeTakeoff, writeUpliftSheet, writeInputs, writeNotes,
+		writeMembers, writeMarks, writeBlocking, writeTakeoff, writeUpliftSheet, writeLoadPathSheets, writeInputs, writeNotes,
 	}
 	for _, w := range writers {
 		if err := w(f, st, r); err != nil {

@@ -265,7 +265,15 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	printIssues(stderr, o.issues)
 	c.warnings, c.doubts = countWarnings(o.issues), runDoubts(o.issues)
 	printSummary(stdout, c, proj, res, written)
+	if res.LoadPath != nil {
+		fmt.Fprintf(stdout, "load path: %s (Beams, Posts, Connections and Foundation sheets)\n", export.LoadPathSummary(res.LoadPath))
+	}
 	if res.Summary.Fail+res.Summary.Error > 0 {
+		return exitFail
+	}
+	if f, e := pathStatus(res.LoadPath); f+e > 0 {
+		fmt.Fprintf(stderr, "framecheck: %s: every joist passes, but %d beam(s) or post(s) of the load path fail or are in error (Beams and Posts sheets)\n",
+			termText(c.planPath), f+e)
 		return exitFail
 	}
 	// Every member passes, but the run itself is in doubt (RUN401: spans

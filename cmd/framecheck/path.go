@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 	"sort"
+	"strings"
 
 	"framecheck/check"
 	"framecheck/dxfimport"
@@ -33,6 +34,9 @@ type postOutcome struct {
 	checked bool
 	out     loadpath.PostOut
 	size    string
+	// unknown names the beams on the post that could not be checked: the
+	// load they bring is not known, so the post is not passed on it.
+	unknown []string
 }
 
 // wallOutcome is a bearing-wall line with the loads that reach it.
@@ -140,6 +144,15 @@ func runLoadPath(p *Project, plan *framing.Plan, inputs []check.Member, shifts [
 			po.ids = append(po.ids, b.ID)
 		}
 		po.beams = append(po.beams, bo)
+		if msg != "" {
+			// the posts under a beam that cannot be checked get a load
+			// nobody knows
+			for _, br := range b.Bearings {
+				if br.Kind == framing.BeamOnPost {
+					po.posts[br.Index].unknown = append(po.posts[br.Index].unknown, b.ID)
+				}
+			}
+		}
 	}
 	// Each beam's carriers, now that every beam has its place.
 	bi := 0
@@ -164,6 +177,10 @@ func runLoadPath(p *Project, plan *framing.Plan, inputs []check.Member, shifts [
 					if cb := beamMember[br.Index]; cb >= 0 {
 						at := along(&plan.Beams[br.Index], pointAlong(b, br.AtIn)) + po.beams[beamOutcomeIndex(plan, br.Index)].shift
 						c = loadpath.Carrier{Kind: loadpath.Member, Index: cb, AtIn: at, Joint: "beam to beam"}
+					} else {
+						o.issues.Add(b.Lines[0], CodeLoadLost, dxfimport.SevWarning,
+							"%s bears on %s, which is not checked: its load stops there and does not reach what carries %s",
+							b.ID, plan.Beams[br.Index].ID, plan.Beams[br.Index].ID)
 					}
 				}
 				m.Carriers = append(m.Carriers, c)
@@ -246,6 +263,21 @@ func runLoadPath(p *Project, plan *framing.Plan, inputs []check.Member, shifts [
 			bo.input = solved.Members[k].Input
 			bo.res = unshift(solved.Members[k].Result, bo.shift)
 			bo.res.ID = plan.Beams[i].ID
+			// a member it carries that could not be checked brings a load
+			// its check does not hold: never a pass on part of the load
+			var missing []string
+			for _, c := range plan.Beams[i].Carried {
+				if !usable[c.Member] || o.results[c.Member].Status == check.StatusError {
+					missing = append(missing, plan.Members[c.Member].ID)
+				}
+			}
+			if len(missing) > 0 {
+				bo.res.Messages = append(bo.res.Messages, fmt.Sprintf("carries %s, in error: their loads are not in this check",
+					strings.Join(missing, ", ")))
+				if bo.res.Status == check.StatusPass {
+					bo.res.Status = check.StatusError
+				}
+			}
 		}
 		bi++
 	}

@@ -2,9 +2,16 @@ package main
 
 import (
 	"math"
+	"os"
+	"path/filepath"
 	"testing"
 
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+	"github.com/xuri/excelize/v2"
+
 	"framecheck/check"
+	"framecheck/export"
 )
 
 // TestLoadPathOnFixture runs the pipeline on framing's load-path fixture
@@ -14,26 +21,7 @@ import (
 // the walls, posts and rigid supports load type by load type (statics:
 // nothing lost, to 0.1 lb).
 func TestLoadPathOnFixture(t *testing.T) {
-	p, err := ParseProject("p.toml", []byte(`[[support]]
-layers = ["WALL*"]
-kind = "bearing-wall"
-[[support]]
-layers = ["BEAM-FLUSH*"]
-kind = "flush-beam"
-size = "2x12"
-plies = 3
-[[support]]
-layers = ["BEAM-DROP*"]
-kind = "dropped-beam"
-size = "4x12"
-[[post]]
-layers = ["POST*"]
-size = "4x4"
-height_in = 96
-[[point_load]]
-name = "RTU-1"
-dead_lb = 450
-`))
+	p, err := ParseProject("p.toml", []byte(loadPathProject))
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -71,3 +59,67 @@ dead_lb = 450
 		t.Errorf("no load reached the posts")
 	}
 }
+
+// TestLoadPathOutputs: `check` on the load-path fixture writes the load
+// path in every output: results.json "load_path" (read back), the Beams,
+// Posts, Connections and Foundation sheets (read back with excelize), the
+// report's load path section, and a label per beam in the annotated DXF.
+func TestLoadPathOutputs(t *testing.T) {
+	dir := t.TempDir()
+	proj := filepath.Join(dir, "p.toml")
+	require.NoError(t, os.WriteFile(proj, []byte(loadPathProject), 0o644))
+	out := filepath.Join(dir, "out")
+	code, stdout, stderr := runCmd("check", "../../framing/testdata/loadpath.dxf", "-p", proj, "-o", out)
+	require.NotEqual(t, exitUsage, code, stderr)
+	assert.Contains(t, stdout, "load path: ")
+	r, err := export.ReadJSON(filepath.Join(out, resultsName))
+	require.NoError(t, err)
+	require.NotNil(t, r.LoadPath)
+	lp := r.LoadPath
+	assert.NotEmpty(t, lp.Beams)
+	assert.NotEmpty(t, lp.Posts)
+	assert.NotEmpty(t, lp.Connections)
+	assert.NotEmpty(t, lp.Foundation)
+	// nothing lost, load type by load type (statics)
+	assert.InDelta(t, lp.Applied.DeadLb, lp.Delivered.DeadLb, 0.1)
+	assert.InDelta(t, lp.Applied.LiveLb, lp.Delivered.LiveLb, 0.1)
+	f, err := excelize.OpenFile(filepath.Join(out, scheduleName))
+	require.NoError(t, err)
+	defer f.Close()
+	sheets := f.GetSheetList()
+	for _, s := range export.LoadPathSheetNames {
+		assert.Contains(t, sheets, s)
+	}
+	rows, err := f.GetRows(export.SheetBeams)
+	require.NoError(t, err)
+	assert.Equal(t, len(lp.Beams), len(rows)-export.HeaderRow, "one row per beam below the title rows and header")
+	html, err := os.ReadFile(filepath.Join(out, reportName))
+	require.NoError(t, err)
+	assert.Contains(t, string(html), `id="loadpath"`)
+	dxf, err := os.ReadFile(filepath.Join(out, "loadpath-checked.dxf"))
+	require.NoError(t, err)
+	for _, b := range lp.Beams {
+		assert.Contains(t, string(dxf), b.ID+" "+b.Size, "a label for %s", b.ID)
+	}
+}
+
+const loadPathProject = `[[support]]
+layers = ["WALL*"]
+kind = "bearing-wall"
+[[support]]
+layers = ["BEAM-FLUSH*"]
+kind = "flush-beam"
+size = "2x12"
+plies = 3
+[[support]]
+layers = ["BEAM-DROP*"]
+kind = "dropped-beam"
+size = "4x12"
+[[post]]
+layers = ["POST*"]
+size = "4x4"
+height_in = 96
+[[point_load]]
+name = "RTU-1"
+dead_lb = 450
+`

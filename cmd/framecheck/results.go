@@ -72,6 +72,7 @@ func exportResults(o *outcome, planName string) *export.Results {
 			u.FromFaceIn = u.AtIn - datum[u.Member]
 		}
 	}
+	r.LoadPath = exportLoadPath(o, toInch)
 	r.Assumptions = assumptions(o)
 	return r
 }

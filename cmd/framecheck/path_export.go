@@ -1,0 +1,167 @@
+package main
+
+import (
+	"fmt"
+	"math"
+	"strings"
+
+	"framecheck/check"
+	"framecheck/export"
+	"framecheck/loadpath"
+)
+
+// exportLoadPath maps what the load path found onto results.json's
+// load_path section and the sheets built from it; nil without one.
+func exportLoadPath(o *outcome, toInch float64) *export.LoadPath {
+	po := o.path
+	if po == nil || po.solved == nil {
+		return nil
+	}
+	plan := o.plan
+	lp := &export.LoadPath{Applied: typeLoads(po.solved.Applied), Delivered: typeLoads(po.solved.Delivered)}
+	wallID := map[int]string{}
+	for i, w := range po.walls {
+		wallID[w.support] = fmt.Sprintf("W%d", i+1)
+	}
+	marks := map[string]string{}
+	for i := range po.beams {
+		bo := &po.beams[i]
+		b := bo.beam
+		eb := export.PathBeam{ID: b.ID, Kind: b.Kind, Layer: b.Layer, LengthIn: b.LengthIn,
+			Start: [2]float64{b.Start.X / toInch, b.Start.Y / toInch}, End: [2]float64{b.End.X / toInch, b.End.Y / toInch},
+			StartIn: [2]float64{b.Start.X, b.Start.Y}, EndIn: [2]float64{b.End.X, b.End.Y},
+			Size: bo.res.Size, Species: bo.res.Species, Grade: bo.res.Grade, Status: bo.res.Status,
+			Governing: bo.res.Governing, MaxRatio: bo.res.MaxRatio, Messages: append(append([]string(nil), b.Messages...), bo.res.Messages...)}
+		if len(b.Lines) > 0 {
+			eb.Source = b.Lines[0].String()
+		}
+		if eb.Size == "" {
+			eb.Size = bo.input.Size
+		}
+		eb.SpansIn = bo.res.SpansIn
+		for _, br := range b.Bearings {
+			switch br.Kind {
+			case "post":
+				eb.Supports = append(eb.Supports, plan.Posts[br.Index].ID)
+			case "wall":
+				eb.Supports = append(eb.Supports, "wall "+wallID[br.Index])
+			default:
+				eb.Supports = append(eb.Supports, plan.Beams[br.Index].ID)
+			}
+		}
+		for _, c := range b.Carried {
+			eb.Carries = append(eb.Carries, plan.Members[c.Member].ID)
+		}
+		if eb.Carries == nil {
+			eb.Carries = []string{}
+		}
+		for _, c := range bo.res.Checks {
+			eb.Checks = append(eb.Checks, export.Check{Kind: c.Kind, Combo: c.Combo, Actual: c.Actual, Allowable: c.Allowable,
+				Unit: c.Unit, Ratio: c.Ratio, Trace: exportTrace(c.Trace())})
+		}
+		key := fmt.Sprintf("%s|%s|%s|%v|%.2f|%s", eb.Size, eb.Species, eb.Grade, roundUp(eb.SpansIn), eb.MaxRatio, eb.Status)
+		if marks[key] == "" {
+			marks[key] = fmt.Sprintf("B%d", len(marks)+1)
+		}
+		eb.Mark = marks[key]
+		lp.Beams = append(lp.Beams, eb)
+	}
+	for _, p := range po.posts {
+		pt := p.post
+		ep := export.PathPost{ID: pt.ID, Source: pt.Pos.String(), At: [2]float64{pt.At.X / toInch, pt.At.Y / toInch},
+			AtIn: [2]float64{pt.At.X, pt.At.Y}, Size: p.size, Checked: p.checked, Loads: typeLoads(p.out.Loads)}
+		for _, pc := range p.out.Cases {
+			if pc.PLb > ep.DownLb {
+				ep.DownLb, ep.DownCombo = pc.PLb, pc.Name
+			}
+			if -pc.PLb > ep.UpLb {
+				ep.UpLb, ep.UpCombo = -pc.PLb, pc.Name
+			}
+		}
+		if len(p.unknown) > 0 {
+			ep.Status = check.StatusError
+			ep.Messages = []string{fmt.Sprintf("carries %s, which could not be checked: the load it brings is not known, so this post "+
+				"is not checked; check the beam, then the post", strings.Join(p.unknown, ", "))}
+		} else if p.checked {
+			r := p.out.Result
+			ep.Species, ep.Grade, ep.Status, ep.Messages = r.DesignVals.Species, r.DesignVals.Grade, r.Status, r.Messages
+			for _, c := range r.Checks {
+				ep.Checks = append(ep.Checks, export.Check{Kind: c.Kind, Combo: c.Combo, Actual: c.Actual, Allowable: c.Allowable,
+					Unit: c.Unit, Ratio: c.Ratio, Trace: exportTrace(c.Trace())})
+			}
+		} else {
+			ep.Messages = []string{"no size or height: its load is reported, not checked (give a size beside it and [[post]] height_in)"}
+		}
+		lp.Posts = append(lp.Posts, ep)
+		lp.Connections = append(lp.Connections, export.Connection{Kind: "post base", Member: pt.ID, Bearing: 1, Carrier: "foundation",
+			Loads: ep.Loads, DownLb: ep.DownLb, DownCombo: ep.DownCombo, UpLb: ep.UpLb, UpCombo: ep.UpCombo})
+		lp.Foundation = append(lp.Foundation, export.FoundationLine{Kind: "post", ID: pt.ID, Source: ep.Source, Loads: ep.Loads})
+	}
+	for _, jt := range po.joints {
+		c := export.Connection{Kind: jt.Kind, Member: po.ids[jt.Member], Bearing: jt.Bearing + 1, Loads: typeLoads(jt.Loads),
+			DownLb: jt.DownLb, DownCombo: jt.DownCombo, UpLb: jt.UpLb, UpCombo: jt.UpCombo}
+		switch jt.Carrier.Kind {
+		case loadpath.Member:
+			c.Carrier = po.ids[jt.Carrier.Index]
+		case loadpath.Post:
+			c.Carrier = plan.Posts[jt.Carrier.Index].ID
+		case loadpath.Wall:
+			c.Carrier = fmt.Sprintf("wall W%d", jt.Carrier.Index+1)
+		default:
+			c.Carrier = "rigid support"
+		}
+		lp.Connections = append(lp.Connections, c)
+	}
+	for i, w := range po.walls {
+		if w.loads == (loadpath.Loads{HasUpliftDead: w.loads.HasUpliftDead, UpliftDeadLb: w.loads.UpliftDeadLb}) {
+			continue // nothing reaches it
+		}
+		fl := export.FoundationLine{Kind: "wall", ID: fmt.Sprintf("W%d", i+1), LengthIn: w.lengthIn, Loads: typeLoads(w.loads),
+			Source: plan.Supports[w.support].Pos.String()}
+		if ft := w.lengthIn / 12; ft > 0 {
+			l := fl.Loads
+			fl.PerFoot = export.TypeLoads{DeadLb: l.DeadLb / ft, LiveLb: l.LiveLb / ft, RoofLiveLb: l.RoofLiveLb / ft, SnowLb: l.SnowLb / ft,
+				WindDownLb: l.WindDownLb / ft, WindUpLb: l.WindUpLb / ft, UpliftDeadLb: l.UpliftDeadLb / ft}
+		}
+		lp.Foundation = append(lp.Foundation, fl)
+	}
+	return lp
+}
+
+func typeLoads(l loadpath.Loads) export.TypeLoads {
+	return export.TypeLoads{DeadLb: l.DeadLb, LiveLb: l.LiveLb, RoofLiveLb: l.RoofLiveLb, SnowLb: l.SnowLb,
+		WindDownLb: l.WindDownLb, WindUpLb: l.WindUpLb, UpliftDeadLb: l.UpliftDeadLb}
+}
+
+func roundUp(xs []float64) []float64 {
+	out := make([]float64, len(xs))
+	for i, x := range xs {
+		out[i] = math.Ceil(x - 1e-6)
+	}
+	return out
+}
+
+// pathStatus reports whether a beam or a checked post of the load path
+// fails or is in error: the run then exits 1 as for a joist.
+func pathStatus(lp *export.LoadPath) (fail, errs int) {
+	if lp == nil {
+		return 0, 0
+	}
+	for _, b := range lp.Beams {
+		switch b.Status {
+		case check.StatusFail:
+			fail++
+		case check.StatusError:
+			errs++
+		}
+	}
+	for _, p := range lp.Posts {
+		switch p.Status {
+		case check.StatusFail:
+			fail++
+		case check.StatusError:
+			errs++
+		}
+	}
+	return fail, errs
+}

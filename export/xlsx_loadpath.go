@@ -1,0 +1,215 @@
+package export
+
+import (
+	"math"
+	"strconv"
+	"strings"
+
+	"framecheck/export/internal/fmtx"
+
+	"github.com/xuri/excelize/v2"
+)
+
+// The load path's sheets, written after Uplift when the plan has beams or
+// posts (Results.LoadPath).
+const (
+	SheetBeams       = "Beams"
+	SheetPosts       = "Posts"
+	SheetConnections = "Connections"
+	SheetFoundation  = "Foundation"
+)
+
+// LoadPathSheetNames lists the load path's sheets in order.
+var LoadPathSheetNames = []string{SheetBeams, SheetPosts, SheetConnections, SheetFoundation}
+
+var beamColumns = []column{
+	{"ID", 8}, {"Mark", 7}, {"Kind", 12}, {"Size", 10}, {"Species / grade", 24}, {"Spans (ft-in)", 22},
+	{"Bears on", 24}, {"Carries", 40}, {"Governing", 16}, {"Combination", 22}, {"Max ratio", 9},
+	{"Status", 8}, {"Layer", 16}, {"Source", 40}, {"Messages", 60},
+}
+
+var postColumns = []column{
+	{"ID", 8}, {"Size", 8}, {"Species / grade", 24}, {"Height (ft-in)", 12},
+	{"D (lb)", 9}, {"L (lb)", 9}, {"Lr (lb)", 9}, {"S (lb)", 9}, {"W down (lb)", 9}, {"W up (lb)", 9},
+	{"Largest down, ASD (lb)", 11}, {"Combination", 22}, {"Net uplift, ASD (lb)", 11}, {"Combination", 22},
+	{"Column ratio", 9}, {"Status", 8}, {"Source", 40}, {"Messages", 60},
+}
+
+var connectionColumns = []column{
+	{"Joint", 16}, {"Member", 8}, {"Bearing", 7}, {"Carried by", 12},
+	{"D (lb)", 9}, {"L (lb)", 9}, {"Lr (lb)", 9}, {"S (lb)", 9}, {"W down (lb)", 9}, {"W up (lb)", 9},
+	{"Down, ASD (lb)", 10}, {"Combination", 22}, {"Up, ASD (lb)", 10}, {"Combination", 22},
+}
+
+var foundationColumns = []column{
+	{"Kind", 8}, {"ID", 8}, {"Length (ft-in)", 12},
+	{"D (lb)", 9}, {"L (lb)", 9}, {"Lr (lb)", 9}, {"S (lb)", 9}, {"W down (lb)", 9}, {"W up (lb)", 9},
+	{"D (plf)", 9}, {"L (plf)", 9}, {"Lr (plf)", 9}, {"S (plf)", 9}, {"W down (plf)", 9}, {"W up (plf)", 9},
+	{"Source", 40},
+}
+
+// writeLoadPathSheets writes the Beams, Posts, Connections and Foundation
+// sheets when r has a load path.
+func writeLoadPathSheets(f *excelize.File, st *styles, r *Results) error {
+	lp := r.LoadPath
+	if lp == nil {
+		return nil
+	}
+	s, err := newSheet(f, st, SheetBeams, beamColumns)
+	if err != nil {
+		return err
+	}
+	for _, b := range lp.Beams {
+		s.begin(b.Status != StatusPass)
+		s.text(b.ID)
+		s.text(b.Mark)
+		s.text(b.Kind)
+		s.text(b.Size)
+		s.text(speciesGrade(b.Species, b.Grade))
+		s.text(ftInList(b.SpansIn))
+		s.text(strings.Join(b.Supports, ", "))
+		s.text(memberList(b.Carries))
+		c, _ := governingOf(b.Checks, b.Governing)
+		s.text(b.Governing)
+		s.text(fmtx.Combo(c.Combo))
+		s.num(b.MaxRatio, cRatio)
+		s.text(b.Status)
+		s.text(b.Layer)
+		s.text(b.Source)
+		s.text(strings.Join(b.Messages, "; "))
+		if err := s.end(); err != nil {
+			return err
+		}
+	}
+	if err := s.close(); err != nil {
+		return err
+	}
+	if s, err = newSheet(f, st, SheetPosts, postColumns); err != nil {
+		return err
+	}
+	for _, p := range lp.Posts {
+		s.begin(p.Status == StatusFail || p.Status == StatusError)
+		s.text(p.ID)
+		s.text(p.Size)
+		s.text(speciesGrade(p.Species, p.Grade))
+		if p.HeightIn > 0 {
+			s.text(FtIn(p.HeightIn))
+		} else {
+			s.text("")
+		}
+		typeCells(s, p.Loads)
+		s.num(math.Ceil(p.DownLb), cLb)
+		s.text(fmtx.Combo(p.DownCombo))
+		s.num(math.Ceil(p.UpLb), cLb)
+		s.text(fmtx.Combo(p.UpCombo))
+		ratio := 0.0
+		for _, c := range p.Checks {
+			ratio = math.Max(ratio, c.Ratio)
+		}
+		if p.Checked {
+			s.num(ratio, cRatio)
+		} else {
+			s.text("not checked")
+		}
+		s.text(p.Status)
+		s.text(p.Source)
+		s.text(strings.Join(p.Messages, "; "))
+		if err := s.end(); err != nil {
+			return err
+		}
+	}
+	if err := s.close(); err != nil {
+		return err
+	}
+	if s, err = newSheet(f, st, SheetConnections, connectionColumns); err != nil {
+		return err
+	}
+	for _, c := range lp.Connections {
+		s.begin(false)
+		s.text(c.Kind)
+		s.text(c.Member)
+		s.integer(c.Bearing)
+		s.text(c.Carrier)
+		typeCells(s, c.Loads)
+		s.num(math.Ceil(c.DownLb), cLb) // demands: up to the next pound
+		s.text(fmtx.Combo(c.DownCombo))
+		s.num(math.Ceil(c.UpLb), cLb)
+		s.text(fmtx.Combo(c.UpCombo))
+		if err := s.end(); err != nil {
+			return err
+		}
+	}
+	if err := s.close(); err != nil {
+		return err
+	}
+	if s, err = newSheet(f, st, SheetFoundation, foundationColumns); err != nil {
+		return err
+	}
+	for _, fl := range lp.Foundation {
+		s.begin(false)
+		s.text(fl.Kind)
+		s.text(fl.ID)
+		if fl.LengthIn > 0 {
+			s.text(FtIn(fl.LengthIn))
+		} else {
+			s.text("")
+		}
+		typeCells(s, fl.Loads)
+		if fl.Kind == "wall" {
+			typeCells(s, fl.PerFoot)
+		} else {
+			for i := 0; i < 6; i++ {
+				s.text("")
+			}
+		}
+		s.text(fl.Source)
+		if err := s.end(); err != nil {
+			return err
+		}
+	}
+	return s.close()
+}
+
+// typeCells writes D, L, Lr, S, W down, W up.
+func typeCells(s *sheet, l TypeLoads) {
+	for _, v := range [...]float64{l.DeadLb, l.LiveLb, l.RoofLiveLb, l.SnowLb, l.WindDownLb, l.WindUpLb} {
+		s.num(math.Round(v), cLb)
+	}
+}
+
+// governingOf returns the check of kind gov with the largest ratio.
+func governingOf(cs []Check, gov string) (Check, bool) {
+	best, found := Check{}, false
+	for _, c := range cs {
+		if gov != "" && c.Kind != gov {
+			continue
+		}
+		if !found || c.Ratio > best.Ratio {
+			best, found = c, true
+		}
+	}
+	return best, found
+}
+
+// LoadPathSummary is the one-line count of the load path's members for the
+// report and the terminal: "3 beams: 2 pass, 1 fail; 2 posts checked".
+func LoadPathSummary(lp *LoadPath) string {
+	var pass, fail, errs, posts int
+	for _, b := range lp.Beams {
+		switch b.Status {
+		case StatusPass:
+			pass++
+		case StatusFail:
+			fail++
+		default:
+			errs++
+		}
+	}
+	for _, p := range lp.Posts {
+		if p.Checked {
+			posts++
+		}
+	}
+	return strconv.Itoa(len(lp.Beams)) + " beams: " + strconv.Itoa(pass) + " pass, " + strconv.Itoa(fail) + " fail, " +
+		strconv.Itoa(errs) + " error; " + strconv.Itoa(len(lp.Posts)) + " posts, " + strconv.Itoa(posts) + " checked"
+}
