@@ -175,11 +175,15 @@ func (e *engine) evalEdgeSel(top bool, ivs []interval, sel []bool) edgeEval {
 				continue
 			}
 			fbStar := e.fbNoCD * c.cd
+			if !top {
+				fbStar = e.fbNegNoCD * c.cd
+			}
 			cl := 1.0
 			if !iv.braced {
 				cl = BeamStabilityFactor(iv.fbEPsi, fbStar)
 			}
-			capLbIn := e.sec.SIn3 * fbStar * cl
+			// glulam: CV or CL, whichever is smaller (NDS 2018 5.3.6)
+			capLbIn := e.sec.SIn3 * fbStar * math.Min(cl, e.cv)
 			// Nor can one whose largest moment anywhere would not beat the
 			// ratio found so far, once this stretch's RB is accounted for.
 			if pruneCases && ev.found && mWhole/capLbIn <= ev.ratio && (inCompression || iv.braced || iv.rb <= ev.maxRB) {
@@ -223,12 +227,16 @@ const ratioTol = 1e-9
 func (e *engine) bendingResult(kind string, ev edgeEval) CheckResult {
 	c := &e.cases[ev.ci]
 	fb := ev.mLbIn / e.sec.SIn3
-	fbAdj := ev.fbStar * ev.cl
+	fbAdj := ev.fbStar * math.Min(ev.cl, e.cv)
 	slot := 0
+	fbRef := e.dv.FbPsi
 	if kind == KindBendingBottom {
 		slot = 1
+		if e.dv.FbNegPsi > 0 {
+			fbRef = e.dv.FbNegPsi
+		}
 	}
-	e.rc.bend[slot] = bendRec{mLbIn: ev.mLbIn, cd: c.cd, fbStar: ev.fbStar, cl: ev.cl, iv: ev.iv}
+	e.rc.bend[slot] = bendRec{mLbIn: ev.mLbIn, cd: c.cd, fbStar: ev.fbStar, cl: ev.cl, iv: ev.iv, fbRefPsi: fbRef, cv: e.cv}
 	return CheckResult{Kind: kind, Combo: e.caseLabel(c), Actual: fb, Allowable: fbAdj, Unit: "psi", Ratio: fb / fbAdj, calc: e.rc}
 }
 

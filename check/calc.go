@@ -1,6 +1,9 @@
 package check
 
-import "strconv"
+import (
+	"math"
+	"strconv"
+)
 
 // A check records the numbers of its governing case (calcRecord) while it
 // runs and writes its trace only when asked (CheckResult.Trace): members
@@ -29,6 +32,8 @@ type calcCtx struct {
 type bendRec struct {
 	mLbIn, cd, fbStar, cl float64
 	iv                    interval
+	fbRefPsi              float64 // the reference Fb used (glulam's Fbx- for the bottom edge)
+	cv                    float64 // glulam's volume factor; 1 for sawn lumber
 }
 
 // shearRec is the governing shear case.
@@ -121,13 +126,21 @@ func newTracer(n int) tracer {
 func (r *calcRecord) bendingTrace(b *bendRec, top bool) []TraceItem {
 	x := &r.ctx
 	fb := b.mLbIn / x.sIn3
-	fbAdj := b.fbStar * b.cl
+	cv := b.cv
+	if cv == 0 {
+		cv = 1
+	}
+	fbAdj := b.fbStar * math.Min(b.cl, cv)
+	fbRef := b.fbRefPsi
+	if fbRef == 0 {
+		fbRef = x.fbPsi
+	}
 	t := newTracer(bendingTraceLen(b.iv))
 	t.add("M", b.mLbIn, "lb-in", "largest moment compressing this edge, governing case", Subst{}, refAnalysis)
 	t.add("S", x.sIn3, "in^3", "b d^2 / 6", t.f("%s(%s)^2 / 6", x.bIn, x.dIn), "NDS 2018 Supplement Table 1B")
 	t.add("fb", fb, "psi", "M / S", t.f("%s / %s", b.mLbIn, x.sIn3), "NDS 2018 3.3.2")
 	t.add("Fb*", b.fbStar, "psi", "Fb CD CM Ct CF Ci Cr",
-		t.f("%s(%s)(%s)(%s)(%s)(%s)(%s)", x.fbPsi, b.cd, x.cm.Fb, x.ct.Fb, x.cf.Fb, x.ci.Fb, x.cr), "NDS 2018 3.3.3.8, Table 4.3.1")
+		t.f("%s(%s)(%s)(%s)(%s)(%s)(%s)", fbRef, b.cd, x.cm.Fb, x.ct.Fb, x.cf.Fb, x.ci.Fb, x.cr), "NDS 2018 3.3.3.8, Table 4.3.1")
 	if iv := b.iv; iv.braced {
 		t.add("CL", 1, "", r.brace.heldText(top), Subst{}, "NDS 2018 3.3.3.3")
 	} else {
@@ -152,7 +165,13 @@ func (r *calcRecord) bendingTrace(b *bendRec, top bool) []TraceItem {
 		t.add("CL", b.cl, "", "(1 + FbE/Fb*)/1.9 - sqrt(((1 + FbE/Fb*)/1.9)^2 - (FbE/Fb*)/0.95)",
 			t.f("(1 + %s)/1.9 - sqrt(((1 + %s)/1.9)^2 - %s/0.95)", a, a, a), "NDS 2018 Eq. 3.3-6")
 	}
-	t.add("Fb'", fbAdj, "psi", "Fb* CL Cfu", t.f("%s(%s)(1.0)", b.fbStar, b.cl), "NDS 2018 Table 4.3.1")
+	if cv < 1 {
+		t.add("CV", cv, "", "(21/L)^(1/10) (12/d)^(1/10) (5.125/b)^(1/10) <= 1.0, L the longest span in ft; the smaller of CL and CV applies",
+			Subst{}, "NDS 2018 5.3.6, Eq. 5.3-1")
+		t.add("Fb'", fbAdj, "psi", "Fb* min(CL, CV)", t.f("%s(%s)", b.fbStar, math.Min(b.cl, cv)), "NDS 2018 Table 5.3.1")
+	} else {
+		t.add("Fb'", fbAdj, "psi", "Fb* CL Cfu", t.f("%s(%s)(1.0)", b.fbStar, b.cl), "NDS 2018 Table 4.3.1")
+	}
 	t.add("fb/Fb'", fb/fbAdj, "", "fb / Fb'", t.f("%s / %s", fb, fbAdj), "NDS 2018 3.3.1")
 	return t.items
 }

@@ -203,7 +203,7 @@ func (e *engine) solveFrom(fixed []float64) Result {
 	var extra []float64
 	steps := []BlockingStep{e.step(rows, ev0)}
 	// Rows cannot help when the edge fails even fully braced.
-	if ev0.found && ev0.mLbIn/e.sec.SIn3 > e.cases[ev0.ci].cd*e.fbNoCD*(1+ratioTol) {
+	if ev0.found && ev0.mLbIn/e.sec.SIn3 > e.cases[ev0.ci].cd*e.fbNegNoCD*e.cv*(1+ratioTol) {
 		r := e.resultAt(rows, &ev0, how)
 		r.BlockingSteps = steps
 		return r

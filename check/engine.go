@@ -31,6 +31,12 @@ type engine struct {
 	supFc []DesignValues // per bearing: the support's design values (FcPerpPsi 0: none given)
 
 	fbNoCD  float64 // Fb CM Ct CF Ci Cr: Fb* / CD
+	// fbNegNoCD is fbNoCD for the bottom edge in compression (negative
+	// moment): glulam's Fbx-; fbNoCD otherwise.
+	fbNegNoCD float64
+	// cv is glulam's volume factor CV (NDS 2018 5.3.6), applied instead of
+	// CL when smaller; 1 for sawn lumber.
+	cv float64
 	eAdj    float64 // E'
 	eminAdj float64 // Emin'
 
@@ -113,6 +119,12 @@ func newEngine(m Member, s Settings) (*engine, error) {
 		return e, err
 	}
 	e.dv = dv
+	if sec.Actual && (dv.SizeFactor == SizeFactor4A || dv.SizeFactor == SizeFactor4B) {
+		return e, fmt.Errorf("size %s: sawn lumber of %s is sized by its nominal size (such as 2x10 or 4x12), not by actual inches", m.Size, dv.Species)
+	}
+	if dv.SizeFactor == SizeFactorGlulam && !sec.Actual {
+		return e, fmt.Errorf("size %s: glulam is sized by its actual inches (such as 5.125x12 or 5 1/8 x 12)", m.Size)
+	}
 	if err := e.m.validate(); err != nil {
 		return e, err
 	}
@@ -139,6 +151,17 @@ func newEngine(m Member, s Settings) (*engine, error) {
 	}
 	e.factors()
 	e.model()
+	if e.dv.SizeFactor == SizeFactorGlulam {
+		if e.s.WetService {
+			return e, fmt.Errorf("glulam in wet service: the wet-service factors of NDS 2018 Supplement Table 5A are not applied " +
+				"by framecheck; check this member by hand")
+		}
+		longest := 0.0
+		for _, k := range e.spanSegs {
+			longest = math.Max(longest, e.segs[k].ToIn-e.segs[k].FromIn)
+		}
+		e.cv = VolumeFactor(longest/12, e.sec.DIn, e.sec.BIn, e.dv.VolumeFactorX)
+	}
 	if err := e.solveStrength(); err != nil {
 		return e, err
 	}
@@ -157,7 +180,17 @@ func (e *engine) factors() {
 	e.ct, _ = TemperatureFactor(e.s.Temperature, e.s.WetService)
 	e.ci = IncisingFactor(e.s.Incised)
 	e.cr = RepetitiveMemberFactor(e.m.SpacingIn, e.m.Repetitive)
+	e.cv = 1
+	if e.dv.SizeFactor == SizeFactorGlulam {
+		// glulam: no size factor, no repetitive member factor, no incising
+		// factor (NDS 2018 Table 5.3.1); CV instead of CF
+		e.cf, e.cr, e.ci = SizeFactors{1, 1, 1}, 1, IncisingFactors{1, 1, 1, 1}
+	}
 	e.fbNoCD = e.dv.FbPsi * e.cm.Fb * e.ct.Fb * e.cf.Fb * e.ci.Fb * e.cr
+	e.fbNegNoCD = e.fbNoCD
+	if e.dv.FbNegPsi > 0 {
+		e.fbNegNoCD = e.dv.FbNegPsi * e.cm.Fb * e.ct.Fb * e.cf.Fb * e.ci.Fb * e.cr
+	}
 	e.eAdj = e.dv.EPsi * e.cm.E * e.ct.E * e.ci.E
 	e.eminAdj = e.dv.EminPsi * e.cm.E * e.ct.E * e.ci.E
 	e.kcr = e.s.Kcr

@@ -36,7 +36,13 @@ type DesignValues struct {
 	FcPsi          float64 // Fc, compression parallel to grain
 	EPsi           float64 // E, modulus of elasticity
 	EminPsi        float64 // Emin, for stability calculations
-	SizeFactor     string  // SizeFactor4A, SizeFactor4B or SizeFactorNone
+	SizeFactor     string  // SizeFactor4A, SizeFactor4B, SizeFactorNone or SizeFactorGlulam
+	// FbNegPsi is the bending value when the compression zone is stressed
+	// in tension (glulam Fbx-: negative moment); 0 = FbPsi.
+	FbNegPsi float64
+	// VolumeFactorX is x of the glulam volume factor CV (NDS 2018 5.3.6);
+	// 0 = no volume factor.
+	VolumeFactorX float64
 	Source         string  // "NDS 2018 Supplement Table 4A", or the user's file:line
 	Note           string  // a substitution the lookup made (Stud wider than 6 in, ...)
 }
@@ -237,6 +243,9 @@ func (m *Materials) Lookup(species, grade, size string) (DesignValues, error) {
 }
 
 func (m *Materials) lookup(species, grade string, sec Section) (DesignValues, error) {
+	if k := nameKey(species); k == "glulam" || k == "glb" || k == "gluedlaminatedtimber" {
+		return glulamValues(grade)
+	}
 	var err error
 	sp, err := m.resolveSpecies(species)
 	if err != nil {

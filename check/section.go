@@ -18,6 +18,10 @@ type Section struct {
 	AreaIn2    float64 // A = b d
 	SIn3       float64 // Sxx = b d^2 / 6
 	IIn4       float64 // Ixx = b d^3 / 12
+	// Actual: the dimensions are the member's own (glulam "5.125x12",
+	// structural composite lumber "3.5x11.875"), not a nominal size; then
+	// NominalBIn and NominalDIn hold them too.
+	Actual bool
 	// Plies is the number of plies of a built-up member (2 to 4), 0 for a
 	// single piece. NominalBIn stays the ply's (the size factor is the
 	// ply's); BIn, AreaIn2, SIn3 and IIn4 are the whole member's.
@@ -89,6 +93,9 @@ func ParseSize(s string) (Section, error) {
 	if sec, ok := parseSizeFast(s); ok {
 		return sec, nil
 	}
+	if strings.ContainsAny(s, "./") && !strings.Contains(s, "(") {
+		return parseActual(s)
+	}
 	t := strings.ToLower(strings.Join(strings.Fields(s), ""))
 	t = strings.ReplaceAll(t, "×", "x")
 	if rest, ok := strings.CutPrefix(t, "("); ok {
@@ -128,6 +135,52 @@ func ParseSize(s string) (Section, error) {
 		return Section{}, fmt.Errorf("size %q: %w", s, err)
 	}
 	return sec, nil
+}
+
+// parseActual reads a size in actual inches, with decimals or fractions:
+// "5.125x12", "5 1/8 x 12", "5-1/8 x 12", "3 1/2 x 11 7/8" (glulam and
+// structural composite lumber are sized so). Its name is written with
+// decimals: "5.125x12".
+func parseActual(s string) (Section, error) {
+	t := strings.ReplaceAll(strings.ToLower(s), "×", "x")
+	parts := strings.Split(t, "x")
+	bad := fmt.Errorf("size %q: want actual inches such as 5.125x12 or 5 1/8 x 12, or a nominal size such as 2x10", s)
+	if len(parts) != 2 {
+		return Section{}, bad
+	}
+	b, okB := parseInches(parts[0])
+	d, okD := parseInches(parts[1])
+	if !okB || !okD || b < 0.75 || d < 2 || b > 24 || d > 96 {
+		return Section{}, bad
+	}
+	name := strconv.FormatFloat(b, 'f', -1, 64) + "x" + strconv.FormatFloat(d, 'f', -1, 64)
+	return Section{Name: name, NominalBIn: b, NominalDIn: d, BIn: b, DIn: d, AreaIn2: b * d, SIn3: b * d * d / 6,
+		IIn4: b * d * d * d / 12, Actual: true}, nil
+}
+
+// parseInches reads "5.125", "5 1/8", "5-1/8", "7/8" or "12".
+func parseInches(s string) (float64, bool) {
+	s = strings.TrimSpace(strings.TrimSuffix(strings.TrimSpace(s), "\""))
+	whole, frac := s, ""
+	if i := strings.IndexAny(s, " -"); i > 0 && strings.Contains(s[i:], "/") {
+		whole, frac = strings.TrimSpace(s[:i]), strings.TrimSpace(s[i+1:])
+	} else if strings.Contains(s, "/") {
+		whole, frac = "0", s
+	}
+	w, err := strconv.ParseFloat(whole, 64)
+	if err != nil || w < 0 {
+		return 0, false
+	}
+	if frac != "" {
+		n, dn, ok := strings.Cut(frac, "/")
+		a, e1 := strconv.Atoi(n)
+		c, e2 := strconv.Atoi(dn)
+		if !ok || e1 != nil || e2 != nil || c <= 0 || a < 0 || a >= c {
+			return 0, false
+		}
+		w += float64(a) / float64(c)
+	}
+	return w, true
 }
 
 // builtUp returns the section of n plies of ply fastened side by side,

@@ -103,7 +103,7 @@ func (e *engine) solveBlocking() (int, []BlockingStep, *edgeEval) {
 	ev := ev0
 	steps := []BlockingStep{{RowsPerSpan: 0, LuIn: ev.iv.luIn, CL: ev.cl, Ratio: ev.ratio}}
 	// Rows cannot help when the edge fails even fully braced.
-	if ev.mLbIn/e.sec.SIn3 > e.cases[ev.ci].cd*e.fbNoCD*(1+ratioTol) {
+	if ev.mLbIn/e.sec.SIn3 > e.cases[ev.ci].cd*e.fbNegNoCD*e.cv*(1+ratioTol) {
 		return 0, steps, &ev0
 	}
 	maxSpan := 0.0

@@ -3,6 +3,7 @@ package main
 import (
 	"fmt"
 	"math"
+	"regexp"
 	"sort"
 	"strings"
 
@@ -333,6 +334,29 @@ func along(b *framing.Beam, q framing.Point) float64 {
 	return ((q.X-b.Start.X)*dx + (q.Y-b.Start.Y)*dy) / l
 }
 
+// glulamStressClass finds a glulam stress class such as 24F-1.8E.
+var glulamStressClass = regexp.MustCompile(`(?i)\b(\d{2}F-\d\.\dE)\b`)
+
+// glulamCallout reads a glulam beam's callout, "5 1/8 x 12 GLB 24F-1.8E"
+// or "5.125x12 glulam 24F-1.8E": its size in actual inches and its stress
+// class (NDS 2018 Supplement Table 5A).
+func glulamCallout(text string) (size, class string, ok bool) {
+	up := strings.ToUpper(text)
+	i := strings.Index(up, "GLB")
+	if j := strings.Index(up, "GLULAM"); i < 0 || (j >= 0 && j < i) {
+		i = j
+	}
+	m := glulamStressClass.FindStringSubmatch(text)
+	if i <= 0 || m == nil {
+		return "", "", false
+	}
+	sec, err := check.ParseSize(strings.TrimSpace(text[:i]))
+	if err != nil || !sec.Actual {
+		return "", "", false
+	}
+	return sec.Name, strings.ToUpper(m[1]), true
+}
+
 // beamInput builds check's input for beam b: its size from its callout or
 // its [[support]] table, its lumber, its bearings, its own weight, its top
 // edge braced where joists bear on it or hang from it, and the deflection
@@ -342,9 +366,16 @@ func along(b *framing.Beam, q framing.Point) float64 {
 func beamInput(p *Project, plan *framing.Plan, b *framing.Beam) (check.Member, float64, string) {
 	sp := p.SupportOf(b.Layer)
 	size := b.Size
+	species, grade := p.Lumber.Species, p.Lumber.Grade
+	glulam := false
 	if size == "" && b.Callout != "" {
-		return check.Member{ID: b.ID}, 0, fmt.Sprintf("its callout %q is not a sawn size framecheck checks (glulam and structural "+
-			"composite lumber are not checked yet): check this beam by hand", b.Callout)
+		sz, class, ok := glulamCallout(b.Callout)
+		if !ok {
+			return check.Member{ID: b.ID}, 0, fmt.Sprintf("its callout %q is not a size framecheck checks (sawn lumber such as "+
+				"(3) 2x12 or 4x12, or glulam such as 5 1/8 x 12 GLB 24F-1.8E; structural composite lumber is not checked "+
+				"yet): check this beam by hand", b.Callout)
+		}
+		size, species, grade, glulam = sz, check.GlulamSpecies, class, true
 	}
 	if size == "" && sp != nil && sp.Size != "" {
 		size = sp.Size
@@ -358,8 +389,7 @@ func beamInput(p *Project, plan *framing.Plan, b *framing.Beam) (check.Member, f
 	if sp != nil && sp.Material != "" {
 		return check.Member{ID: b.ID, Size: size}, 0, fmt.Sprintf("material %q: beams of user materials are not checked yet; check this beam by hand", sp.Material)
 	}
-	species, grade := p.Lumber.Species, p.Lumber.Grade
-	if sp != nil {
+	if sp != nil && !glulam {
 		if sp.Species != "" {
 			species = sp.Species
 		}

@@ -99,7 +99,7 @@ func TestMemberSizeCheck(t *testing.T) {
 	for in, want := range map[string]string{
 		"2x12": "2x12", "(3) 2X12": "(3) 2x12", "4 x 12": "4x12", "6x6": "6x6", "8X8": "8x8",
 		"5.125x12": "5.125x12", "3.5 x 11.875": "3.5x11.875",
-		"2x": "", "(5) 2x12": "", "0.5x12": "", "90x45": "", "5 1/8 x 12": "",
+		"2x": "", "(5) 2x12": "", "0.5x12": "", "90x45": "", "5 1/8 x 12": "5.125x12",
 	} {
 		got, rule := memberSizeCheck(in)
 		if got != want || (want == "") != (rule != "") {
