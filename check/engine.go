@@ -30,13 +30,13 @@ type engine struct {
 
 	supFc []DesignValues // per bearing: the support's design values (FcPerpPsi 0: none given)
 
-	fbNoCD  float64 // Fb CM Ct CF Ci Cr: Fb* / CD
+	fbNoCD float64 // Fb CM Ct CF Ci Cr: Fb* / CD
 	// fbNegNoCD is fbNoCD for the bottom edge in compression (negative
 	// moment): glulam's Fbx-; fbNoCD otherwise.
 	fbNegNoCD float64
 	// cv is glulam's volume factor CV (NDS 2018 5.3.6), applied instead of
 	// CL when smaller; 1 for sawn lumber.
-	cv float64
+	cv      float64
 	eAdj    float64 // E'
 	eminAdj float64 // Emin'
 

@@ -46,7 +46,7 @@ func glulamValues(class string) (DesignValues, error) {
 			return DesignValues{Species: GlulamSpecies, Grade: r.class, FbPsi: r.fbPos, FbNegPsi: r.fbNeg, FvPsi: r.fv,
 				FcPerpPsi: r.fcPerp, EPsi: r.e, EminPsi: r.eMin, FtPsi: r.ft, SizeFactor: SizeFactorGlulam,
 				VolumeFactorX: 10,
-				Source: "NDS 2018 Supplement Table 5A (from memory: verify)"}, nil
+				Source:        "NDS 2018 Supplement Table 5A (from memory: verify)"}, nil
 		}
 	}
 	return DesignValues{}, fmt.Errorf("glulam stress class %q: not known; the classes known are %s (or give the beam's "+

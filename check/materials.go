@@ -43,8 +43,8 @@ type DesignValues struct {
 	// VolumeFactorX is x of the glulam volume factor CV (NDS 2018 5.3.6);
 	// 0 = no volume factor.
 	VolumeFactorX float64
-	Source         string  // "NDS 2018 Supplement Table 4A", or the user's file:line
-	Note           string  // a substitution the lookup made (Stud wider than 6 in, ...)
+	Source        string // "NDS 2018 Supplement Table 4A", or the user's file:line
+	Note          string // a substitution the lookup made (Stud wider than 6 in, ...)
 }
 
 // materialRow is one line of a design-value table.

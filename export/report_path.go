@@ -21,8 +21,8 @@ type pathCheckRow struct{ Kind, Combo, Actual, Allowable, Unit, Ratio string }
 
 type pathBeamRow struct {
 	ID, Mark, Kind, Size, Spans, Supports, Carries, Governing, Ratio, Status, Messages string
-	Bad                                                                               bool
-	Checks                                                                            []pathCheckRow
+	Bad                                                                                bool
+	Checks                                                                             []pathCheckRow
 }
 
 type pathPostRow struct {

@@ -56,10 +56,10 @@ type Results struct {
 	Uplift       UpliftReport  `json:"uplift"` // bearings under net uplift (connector demand)
 	// LoadPath holds the beams, posts, connections and foundation loads
 	// when the plan has beams or posts; nil otherwise.
-	LoadPath *LoadPath `json:"load_path,omitempty"`
-	Takeoff      Takeoff       `json:"takeoff"`
-	Summary      Summary       `json:"summary"`
-	Assumptions  Assumptions   `json:"assumptions"`
+	LoadPath    *LoadPath   `json:"load_path,omitempty"`
+	Takeoff     Takeoff     `json:"takeoff"`
+	Summary     Summary     `json:"summary"`
+	Assumptions Assumptions `json:"assumptions"`
 }
 
 // ProjectInfo is who and what the calculation is for (the project
