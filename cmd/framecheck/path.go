@@ -105,8 +105,12 @@ const beamDensityPcf = woodDensityPcf
 // load type; posts under what reaches them; walls and posts get the loads
 // for the foundation.
 func runLoadPath(p *Project, plan *framing.Plan, inputs []check.Member, shifts []float64, usable []bool, s check.Settings, o *outcome) {
-	if len(plan.Beams) == 0 && len(plan.Posts) == 0 {
-		return
+	checkable := len(plan.Posts) > 0
+	for i := range plan.Beams {
+		checkable = checkable || !plan.Beams[i].Rigid
+	}
+	if !checkable {
+		return // no beam with supports of its own, no post: every support is a rigid bearing
 	}
 	po := &pathOutcome{}
 	lp := &loadpath.Plan{}
