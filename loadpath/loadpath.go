@@ -65,6 +65,12 @@ type MemberIn struct {
 	// from another may come with them.
 	Result    *check.Result
 	Reactions []check.LoadReactions
+	// Candidates, when given, are the sizes to pick from (lightest first):
+	// the member takes the first with which it passes, or the last when
+	// none does. DensityPcf, when above 0, gives its own weight for each
+	// size tried (Check.SelfWeightPlf = area x density).
+	Candidates []string
+	DensityPcf float64
 }
 
 // PostIn is a post; its loads come from the members it carries.
@@ -154,7 +160,6 @@ func Solve(p *Plan, s check.Settings) *Outcome {
 		cm.PointLoads = append(append([]check.PointLoad(nil), cm.PointLoads...), incoming[k]...)
 		out := &o.Members[k]
 		out.Order, out.Input = i, cm
-		addApplied(&o.Applied, mi.Check)
 		if len(mi.Carriers) != len(cm.Bearings) {
 			out.Result = errorResult(*mi, fmt.Sprintf("%d carriers for %d bearings", len(mi.Carriers), len(cm.Bearings)))
 			o.Errors = append(o.Errors, mi.ID+": "+out.Result.Messages[0])
@@ -165,9 +170,16 @@ func Solve(p *Plan, s check.Settings) *Outcome {
 		if mi.Result != nil && mi.Reactions != nil && len(incoming[k]) == 0 {
 			out.Result, rs = *mi.Result, mi.Reactions
 		} else {
+			if len(mi.Candidates) > 0 {
+				cm = pickSize(cm, mi, s)
+				out.Input = cm
+			}
 			out.Result = check.CheckMember(cm, s)
 			rs, err = check.ServiceReactions(cm, s)
 		}
+		own := cm // its own loads, as checked (the size picked sets its weight)
+		own.PointLoads = mi.Check.PointLoads
+		addApplied(&o.Applied, own)
 		if err != nil {
 			// nothing passes on from a member that cannot be analysed: its
 			// carriers are short of its load, which the outcome says
@@ -207,6 +219,33 @@ func Solve(p *Plan, s check.Settings) *Outcome {
 		}
 	}
 	return o
+}
+
+// pickSize returns cm with the first of mi's candidate sizes with which it
+// passes, or the last candidate when none does; sizes that cannot be read
+// are passed over.
+func pickSize(cm check.Member, mi *MemberIn, s check.Settings) check.Member {
+	var last check.Member
+	tried := false
+	for _, size := range mi.Candidates {
+		sec, err := check.ParseSize(size)
+		if err != nil {
+			continue
+		}
+		c := cm
+		c.Size = size
+		if mi.DensityPcf > 0 {
+			c.SelfWeightPlf = sec.AreaIn2 / 144 * mi.DensityPcf
+		}
+		last, tried = c, true
+		if check.CheckMember(c, s).Status == check.StatusPass {
+			return c
+		}
+	}
+	if !tried {
+		return cm
+	}
+	return last
 }
 
 // orderMembers returns the members in an order where each comes after

@@ -167,3 +167,35 @@ func TestCycle(t *testing.T) {
 		t.Errorf("joist J1 in error: %v", o.Members[0].Result.Messages)
 	}
 }
+
+// TestBeamSizing: with candidates the beam takes the lightest size with
+// which it passes; the girder under it then carries that beam's own weight
+// (9.57 plf per 2x12 ply... recomputed from the size: area x 35 pcf,
+// from memory: verify), and its reaction changes accordingly (statics).
+func TestBeamSizing(t *testing.T) {
+	p := pathPlan(11, 192)
+	p.Members[11].Check.Size = "2x6" // far too small
+	p.Members[11].Candidates = []string{"2x6", "(2) 2x8", "(2) 2x10", "(3) 2x12", "(4) 2x12"}
+	p.Members[11].DensityPcf = 35
+	o := Solve(p, check.DefaultSettings())
+	b := o.Members[11]
+	if b.Result.Status != check.StatusPass {
+		t.Fatalf("beam %s: %s %v", b.Input.Size, b.Result.Status, b.Result.Messages)
+	}
+	// the size before it fails: the pick is the lightest that passes
+	for i, c := range p.Members[11].Candidates {
+		if c == b.Input.Size && i > 0 {
+			prev := p.Members[11].Check
+			prev.Size = p.Members[11].Candidates[i-1]
+			sec, _ := check.ParseSize(prev.Size)
+			prev.SelfWeightPlf = sec.AreaIn2 / 144 * 35
+			prev.PointLoads = b.Input.PointLoads
+			if r := check.CheckMember(prev, check.DefaultSettings()); r.Status == check.StatusPass {
+				t.Errorf("%s passes too, yet %s was picked", prev.Size, b.Input.Size)
+			}
+		}
+	}
+	sec, _ := check.ParseSize(b.Input.Size)
+	near(t, "self-weight of the size picked", b.Input.SelfWeightPlf, sec.AreaIn2/144*35, 1e-9, "area x 35 pcf")
+	near(t, "D delivered", o.Delivered.DeadLb, o.Applied.DeadLb, 0.1, "statics: nothing lost")
+}

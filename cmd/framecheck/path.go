@@ -104,7 +104,10 @@ const beamDensityPcf = woodDensityPcf
 // or more supports of their own are checked with the joists' reactions by
 // load type; posts under what reaches them; walls and posts get the loads
 // for the foundation.
-func runLoadPath(p *Project, plan *framing.Plan, inputs []check.Member, shifts []float64, usable []bool, s check.Settings, o *outcome) {
+//
+// With sizing (--size), each beam takes the lightest of [sizing]
+// beam_candidates with which it passes, its own weight following the size.
+func runLoadPath(p *Project, plan *framing.Plan, inputs []check.Member, shifts []float64, usable []bool, s check.Settings, o *outcome, sizing bool) {
 	checkable := len(plan.Posts) > 0
 	for i := range plan.Beams {
 		checkable = checkable || !plan.Beams[i].Rigid
@@ -145,7 +148,11 @@ func runLoadPath(p *Project, plan *framing.Plan, inputs []check.Member, shifts [
 			o.issues.Add(b.Lines[0], CodeBeamNotChecked, dxfimport.SevError, "%s: %s", b.ID, msg)
 		} else {
 			beamMember[i] = len(lp.Members)
-			lp.Members = append(lp.Members, loadpath.MemberIn{ID: b.ID, Beam: true, Check: cm})
+			mi := loadpath.MemberIn{ID: b.ID, Beam: true, Check: cm}
+			if sizing && len(p.Sizing.BeamCandidates) > 0 && !strings.EqualFold(cm.Species, check.GlulamSpecies) {
+				mi.Candidates, mi.DensityPcf = p.Sizing.BeamCandidates, beamDensityPcf
+			}
+			lp.Members = append(lp.Members, mi)
 			po.ids = append(po.ids, b.ID)
 		}
 		po.beams = append(po.beams, bo)

@@ -123,3 +123,26 @@ height_in = 96
 name = "RTU-1"
 dead_lb = 450
 `
+
+// TestBeamSizingOnFixture: with --size each sawn beam of the load-path
+// fixture takes the lightest of [sizing] beam_candidates with which it
+// passes (the default list, PROJECT-FILE.md), or the last when none does;
+// the glulam girder keeps its callout's size.
+func TestBeamSizingOnFixture(t *testing.T) {
+	p, err := ParseProject("p.toml", []byte(loadPathProject))
+	require.NoError(t, err)
+	o, err := runPipeline(pipelineInput{planPath: "../../framing/testdata/loadpath.dxf", project: p, size: true})
+	require.NoError(t, err)
+	require.NotNil(t, o.path)
+	for _, b := range o.path.beams {
+		if b.input.Species == check.GlulamSpecies {
+			assert.Equal(t, "5.125x12", b.res.Size, "%s keeps its glulam size", b.beam.ID)
+			continue
+		}
+		assert.Contains(t, p.Sizing.BeamCandidates, b.res.Size, "%s sized from the candidates", b.beam.ID)
+		if b.res.Status == check.StatusPass {
+			continue
+		}
+		assert.Equal(t, p.Sizing.BeamCandidates[len(p.Sizing.BeamCandidates)-1], b.res.Size, "%s: none passes, the last is kept", b.beam.ID)
+	}
+}

@@ -176,7 +176,7 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 		o.rows[i].Size = plan.Members[plan.Runs[runIndex(plan, o.rows[i].Run)].Members[0]].Size
 	}
 	o.takeoff = framing.BuildTakeoff(plan, o.rows)
-	runLoadPath(p, plan, inputs, shifts, usable, settings, o)
+	runLoadPath(p, plan, inputs, shifts, usable, settings, o, in.size)
 	return o, nil
 }
 
