@@ -122,6 +122,9 @@ func newEngine(m Member, s Settings) (*engine, error) {
 	if sec.Actual && (dv.SizeFactor == SizeFactor4A || dv.SizeFactor == SizeFactor4B) {
 		return e, fmt.Errorf("size %s: sawn lumber of %s is sized by its nominal size (such as 2x10 or 4x12), not by actual inches", m.Size, dv.Species)
 	}
+	if dv.SizeFactor == SizeFactor4D && s.WetService {
+		return e, fmt.Errorf("size %s: timbers in wet service: the wet-service factors of NDS 2018 Supplement Table 4D are not applied by framecheck; check this member by hand", m.Size)
+	}
 	if dv.SizeFactor == SizeFactorGlulam && !sec.Actual {
 		return e, fmt.Errorf("size %s: glulam is sized by its actual inches (such as 5.125x12 or 5 1/8 x 12)", m.Size)
 	}

@@ -144,6 +144,8 @@ type SizeFactors struct{ Fb, Ft, Fc float64 }
 func SizeFactor(dv DesignValues, sec Section) SizeFactors {
 	w, t := int(sec.NominalDIn), int(sec.NominalBIn)
 	switch dv.SizeFactor {
+	case SizeFactor4D:
+		return SizeFactors{timberSizeFactor(sec.DIn), 1, 1}
 	case SizeFactor4B:
 		cf := SizeFactors{1, 1, 1}
 		if w > 12 {

@@ -64,6 +64,8 @@ type Materials struct {
 type lookupKey struct {
 	species, grade string
 	width          float64
+	thick          float64 // timbers and glulam are told by their thickness too
+	actual         bool
 }
 
 type lookupVal struct {
@@ -223,7 +225,7 @@ func (m *Materials) Lookup(species, grade, size string) (DesignValues, error) {
 	if err != nil {
 		return DesignValues{}, err
 	}
-	k := lookupKey{species, grade, sec.NominalDIn}
+	k := lookupKey{species, grade, sec.NominalDIn, sec.NominalBIn, sec.Actual}
 	m.mu.RLock()
 	v, ok := m.cache[k]
 	m.mu.RUnlock()
@@ -245,6 +247,9 @@ func (m *Materials) Lookup(species, grade, size string) (DesignValues, error) {
 func (m *Materials) lookup(species, grade string, sec Section) (DesignValues, error) {
 	if k := nameKey(species); k == "glulam" || k == "glb" || k == "gluedlaminatedtimber" {
 		return glulamValues(grade)
+	}
+	if sec.Timber {
+		return timberValues(species, grade, sec)
 	}
 	var err error
 	sp, err := m.resolveSpecies(species)

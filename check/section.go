@@ -18,6 +18,10 @@ type Section struct {
 	AreaIn2    float64 // A = b d
 	SIn3       float64 // Sxx = b d^2 / 6
 	IIn4       float64 // Ixx = b d^3 / 12
+	// Timber: a timber 5 in and thicker (NDS 2018 Supplement Table 4D):
+	// beams and stringers when d > b + 2 (nominal), posts and timbers
+	// otherwise.
+	Timber bool
 	// Actual: the dimensions are the member's own (glulam "5.125x12",
 	// structural composite lumber "3.5x11.875"), not a nominal size; then
 	// NominalBIn and NominalDIn hold them too.
@@ -130,6 +134,9 @@ func ParseSize(s string) (Section, error) {
 	if errB != nil || errD != nil {
 		return Section{}, fmt.Errorf("size %q: want nominal thickness x depth in whole inches, such as 2x10", s)
 	}
+	if b >= 5 && b <= 16 && d >= b && d <= 24 {
+		return timberSection(b, d), nil
+	}
 	sec, err := NewSection(b, d)
 	if err != nil {
 		return Section{}, fmt.Errorf("size %q: %w", s, err)
@@ -181,6 +188,15 @@ func parseInches(s string) (float64, bool) {
 		w += float64(a) / float64(c)
 	}
 	return w, true
+}
+
+// timberSection returns the section of a timber 5 in and thicker, nominal
+// b x d: dressed 1/2 in smaller each way (NDS 2018 Supplement Table 1A,
+// timbers, dry or green S4S; from memory: verify). Timber is true.
+func timberSection(b, d int) Section {
+	bi, di := float64(b)-0.5, float64(d)-0.5
+	return Section{Name: strconv.Itoa(b) + "x" + strconv.Itoa(d), NominalBIn: float64(b), NominalDIn: float64(d),
+		BIn: bi, DIn: di, AreaIn2: bi * di, SIn3: bi * di * di / 6, IIn4: bi * di * di * di / 12, Timber: true}
 }
 
 // builtUp returns the section of n plies of ply fastened side by side,

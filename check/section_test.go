@@ -49,7 +49,7 @@ func TestParseSize(t *testing.T) {
 			t.Errorf("ParseSize(%q) = %q, %v; want 2x10", in, s.Name, err)
 		}
 	}
-	for _, in := range []string{"", "2x", "x10", "2x11", "5x10", "2x10x12", "2x3", "2x18", "two by ten"} {
+	for _, in := range []string{"", "2x", "x10", "2x11", "5x4", "2x10x12", "2x3", "2x18", "two by ten"} {
 		if _, err := ParseSize(in); err == nil {
 			t.Errorf("ParseSize(%q): want an error", in)
 		} else if !strings.Contains(err.Error(), "size") {
