@@ -86,6 +86,7 @@ func WriteReportWith(path string, r *Results, g *PlanGeometry, when time.Time, o
 	page := buildReport(r, g, when)
 	if opts.Package == PackageGoverning {
 		page.Governing = true
+		page.Calcs, page.Covered = dropCovered(r, page.Calcs)
 		for i := range page.Calcs {
 			governingOnly(&page.Calcs[i])
 		}
@@ -123,6 +124,7 @@ type reportPage struct {
 	Totals      TakeoffTotals
 	Uplift      upliftSection
 	Path        *pathSection // beams, posts, connections, foundation; nil without
+	Covered     []coveredRow // PackageGoverning: marks left out, covered by another's calculation
 	Calcs       []markCalc
 	Assumptions Assumptions
 	Combos      []string

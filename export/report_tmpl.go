@@ -102,6 +102,8 @@ sub,sup{line-height:0;font-size:75%}
   tr,.eq,.result,.check,.cards,table.inputs,table.others,table.combos,table.steps{break-inside:avoid}
   .calc{break-before:page;border-top:none}
   .pkg-governing{font-size:9pt}
+  .pkg-governing .calc{break-before:auto;border-top:1px solid var(--rule);padding-top:4px}
+  .pkg-governing #path-beams table.sub,.pkg-governing #path-joints{display:none}
   .pkg-governing table{font-size:8pt}
   .pkg-governing th,.pkg-governing td{padding:1px 4px}
   .pkg-governing section{margin-top:12px}
@@ -275,6 +277,10 @@ At each flagged bearing a connector is needed whose allowable load for the combi
 
 <section id="calculations"><h2>Calculations by mark</h2>
 <p>Each mark is calculated for its governing member (largest ratio); the other members of the mark are identical for design.</p>
+{{if .Covered}}<p>Not written out here: marks whose every check ratio is at or below that of a mark of the same size, lumber, zone, spans and blocking that is written out (a joist at the edge of its run, say, carrying less). Their numbers are in the Members sheet and results.json; run without <code>--package governing</code> to write them out.</p>
+<table id="covered"><tr><th>mark</th><th>members</th><th>max ratio</th><th>covered by</th></tr>
+{{range .Covered}}<tr><td>{{.Mark}}</td><td class="n">{{.Count}}</td><td class="n">{{.Ratio}}</td><td>{{.By}}</td></tr>
+{{end}}</table>{{end}}
 {{range .Calcs}}<article class="calc" id="{{.Anchor}}" data-mark="{{.Mark}}" data-member="{{.Member}}">
 <h3>Mark {{.Mark}}: {{.Count}} member{{if ne .Count 1}}s{{end}}, max ratio {{.Ratio}}, <span class="status-{{.Status}}">{{.Status}}</span></h3>
 <p class="hint">Members: {{range $i, $m := .Members}}{{if $i}}, {{end}}{{$m}}{{end}}{{if .MoreMembers}} and {{.MoreMembers}} more{{end}}.</p>

@@ -73,13 +73,28 @@ func markKey(m *Member) string {
 // sizes are final. Error members get no mark.
 func AssignMarks(p *Plan) {
 	marks := map[string]string{}
+	// point loads drawn on a member make it a member of its own kind: where
+	// (from its first bearing, to 1 in) and what they carry
+	loads := map[int]string{}
+	for _, pl := range p.PointLoads {
+		if pl.Member < 0 || pl.Member >= len(p.Members) {
+			continue
+		}
+		ref := 0.0
+		if bs := p.Members[pl.Member].Bearings; len(bs) > 0 {
+			ref = bs[0].AtIn
+		}
+		l := pl.Loads
+		loads[pl.Member] += fmt.Sprintf("|P%g:%s:%g,%g,%g,%g,%g,%g", math.Round(pl.AtIn-ref), pl.Name,
+			l.DeadLb, l.LiveLb, l.RoofLiveLb, l.SnowLb, l.WindDownLb, l.WindUpLb)
+	}
 	for k := range p.Members {
 		m := &p.Members[k]
 		if m.Error {
 			m.Mark = ""
 			continue
 		}
-		key := markKey(m)
+		key := markKey(m) + loads[k]
 		mk, ok := marks[key]
 		if !ok {
 			mk = fmt.Sprintf("J%d", len(marks)+1)

@@ -145,7 +145,8 @@ func TestDemoPlanStructure(t *testing.T) {
 	}
 	callouts := s.texts["FRAMING-NOTE"]
 	sort.Strings(callouts)
-	want := []string{`2x10 @ 16" o.c.`, `2x10 @ 16" o.c.`, `2x12 @ 16" o.c.`}
+	// the loft's three joist callouts, the canopy's joists and its girder
+	want := []string{`2x10 @ 16" o.c.`, `2x10 @ 16" o.c.`, `2x12 @ 16" o.c.`, `2x8 @ 24" o.c.`, "5 1/8 x 12 GLB 24F-1.8E"}
 	if !reflect.DeepEqual(callouts, want) {
 		t.Errorf("callouts = %q, want %q", callouts, want)
 	}

@@ -96,7 +96,10 @@ def main(demo, overlay_dir):
             fail("blocking note %r" % e.dxf.text)
     # One label per run and mark (not one per member), naming the mark.
     groups = {(m.get("run"), m["mark"]) for m in members if m["status"] != "error"}
+    beams = (res.get("load_path") or {}).get("beams") or []
     labels = [e for e in doc.modelspace().query('TEXT[layer=="FC-LABEL"]')]
+    beam_ids = {b["id"] for b in beams}
+    labels = [e for e in labels if e.dxf.text.split()[0] not in beam_ids]  # one label per beam besides
     if len(labels) != len(groups) or len(labels) >= len(members):
         fail("FC-LABEL holds %d labels, results.json has %d runs x marks (%d members)" % (len(labels), len(groups), len(members)))
     marks = {m["mark"] for m in members if m["mark"]}
@@ -170,8 +173,20 @@ def main(demo, overlay_dir):
     # Schedule: sheets, one row per member, totals.
     wb = openpyxl.load_workbook(os.path.join(demo, "schedule.xlsx"), read_only=False)
     want = ["Members", "Marks", "Blocking", "Takeoff", "Uplift", "Inputs", "Notes"]
+    if res.get("load_path"):
+        want = want[:5] + ["Beams", "Posts", "Connections", "Foundation"] + want[5:]
     if wb.sheetnames != want:
         fail("sheets %r, want %r" % (wb.sheetnames, want))
+    if res.get("load_path"):
+        lp = res["load_path"]
+        for name, key in (("Beams", "beams"), ("Posts", "posts"), ("Connections", "connections"), ("Foundation", "foundation")):
+            n = wb[name].max_row - 3
+            if n != len(lp[key]):
+                fail("%s sheet: %d rows, results.json load_path.%s has %d" % (name, n, key, len(lp[key])))
+        a, d = lp["applied"], lp["delivered"]
+        for k in ("dead_lb", "live_lb", "roof_live_lb", "snow_lb", "wind_up_lb"):
+            if abs(a[k] - d[k]) > 0.1:
+                fail("load path: %s applied %.1f, delivered %.1f: lost on the way" % (k, a[k], d[k]))
     # Uplift sheet: one row per support line, bearing counts adding up to
     # results.json's list.
     # Each sheet: two title rows (project, version), the header, the data.

@@ -67,11 +67,13 @@ func TestLayersCommand(t *testing.T) {
 	for _, want := range []string{
 		"DXF R2000 (AC1015), units in ($INSUNITS 1)",
 		"roles from " + demoProject,
-		"LAYER            LINE  LWPOLYLINE  TEXT  ROLE",
-		"JOIST-FLOOR        40           -     -  joists",
-		"BEAM-DROPPED        2           -     -  support: dropped-beam",
-		"LOAD-ZONE-ROOF      -           3     3  zones",
-		"GRID                8           -     8  -",
+		"LAYER            LINE  LWPOLYLINE  TEXT  CIRCLE  ROLE",
+		"JOIST-FLOOR        40           -     -       -  joists",
+		"BEAM-DROPPED        2           -     -       -  support: dropped-beam",
+		"LOAD-ZONE-ROOF      -           4     4       -  zones",
+		"GRID                8           -     8       -  -",
+		"POST                -           -     -       2  posts",
+		"POINT-LOAD          -           -     1       1  point_loads",
 	} {
 		if !strings.Contains(out, want) {
 			t.Errorf("output lacks %q:\n%s", want, out)
@@ -79,7 +81,7 @@ func TestLayersCommand(t *testing.T) {
 	}
 	// With the built-in defaults the demo's BEAM-DROPPED layer has no role.
 	_, out, _ = runCmd("layers", "--units", "ft", demoPlan)
-	if !strings.Contains(out, "BEAM-DROPPED        2           -     -  -") || !strings.Contains(out, "units ft (--units)") {
+	if !strings.Contains(out, "BEAM-DROPPED        2           -     -       -  -") || !strings.Contains(out, "units ft (--units)") {
 		t.Errorf("defaults:\n%s", out)
 	}
 }

@@ -417,7 +417,7 @@ func TestDemoProject(t *testing.T) {
 	if edge == nil || edge.WindUpPsf != 75 || edge.LivePsf != 0 || edge.LiveDeflectionLimit != 180 || edge.TotalDeflectionLimit != 120 {
 		t.Errorf("ROOF-EDGE zone %+v", edge)
 	}
-	if len(p.Supports) != 3 || p.LayerRole("BEAM-DROPPED") != "support:dropped-beam" {
+	if len(p.Supports) != 5 || p.LayerRole("BEAM-DROPPED") != "support:dropped-beam" || p.LayerRole("POST") != "posts" {
 		t.Errorf("supports %+v", p.Supports)
 	}
 }

@@ -175,7 +175,8 @@ func TestUplift_PositionOnDrawnMember(t *testing.T) {
 // 19.2 psf (samples/demo/framecheck.toml); w = q x trib / 144 lb/in; a
 // simple span L carries R = w (L/2 + e) at a bearing whose joist end runs
 // e past its centre-line (the piece inside the wall); 0 for an end short
-// of it. No floor member has uplift.
+// of it. No floor member has uplift. (The canopy's roof, with its hoist
+// and its girder, is the load path's: its bearings are not compared here.)
 func TestUplift_DemoRoofBays(t *testing.T) {
 	_, _, _, r := runDemoTo(t, t.TempDir())
 	netPsf := map[string]float64{"ROOF-EDGE": 0.6*75 - 0.6*8, "ROOF-FIELD": 0.6*40 - 0.6*8}
@@ -187,6 +188,9 @@ func TestUplift_DemoRoofBays(t *testing.T) {
 	compared := 0
 	for _, b := range r.Uplift.Bearings {
 		m := byID[b.Member]
+		if m.Zone == "CANOPY" {
+			continue
+		}
 		q, roof := netPsf[m.Zone]
 		if !roof {
 			t.Errorf("%s (zone %s) listed with uplift %v lb", m.ID, m.Zone, b.UpliftLb)

@@ -67,7 +67,7 @@ func buildDXF() []byte {
 		drawPlan(w, p)
 	}
 	// Title block border around both plans and the sheet title.
-	w.ClosedPolyline(lyTitle, [][2]float64{{-120, -190}, {1150, -190}, {1150, 380}, {-120, 380}})
+	w.ClosedPolyline(lyTitle, [][2]float64{{-120, -190}, {1150, -190}, {1150, 620}, {-120, 620}})
 	w.Text(lyTitle, -100, -176, 14, 0, "DUNMARROW RIGGING LOFT - PELLGROVE QUAY - FRAMING PLANS")
 	return w.Bytes()
 }
@@ -95,6 +95,9 @@ func drawPlan(w *dxfw.Writer, p plan) {
 	}
 	for _, l := range p.Labels {
 		w.Text(l.Layer, l.X+dx, l.Y, l.HeightIn, l.RotDeg, l.Text)
+	}
+	for _, c := range p.Circles {
+		w.Circle(c.Layer, c.X+dx, c.Y, c.RIn)
 	}
 }
 

@@ -37,6 +37,13 @@ const (
 	lyOutline     = "ARCH-OUTLINE"
 	lyNotes       = "GENERAL-NOTES"
 	lyTitle       = "TITLE"
+	// The loading canopy north of the loft (the load path).
+	lyJoistCanopy = "JOIST-CANOPY"
+	lyWallCanopy  = "WALL-CANOPY"
+	lyBeamGirder  = "BEAM-GIRDER"
+	lyBeamHeader  = "BEAM-HEADER"
+	lyPost        = "POST"
+	lyPointLoad   = "POINT-LOAD"
 )
 
 // planLayers is the LAYER table after layer "0", with ACI colours.
@@ -46,6 +53,8 @@ var planLayers = []dxfw.Layer{
 	{Name: lyBlocking, Color: 30}, {Name: lyZoneFloor, Color: 5}, {Name: lyZoneRoof, Color: 5},
 	{Name: lyNote, Color: 2}, {Name: lyGrid, Color: 9}, {Name: lyDims, Color: 9},
 	{Name: lyOutline, Color: 8}, {Name: lyNotes, Color: 7}, {Name: lyTitle, Color: 7},
+	{Name: lyJoistCanopy, Color: 3}, {Name: lyWallCanopy, Color: 7}, {Name: lyBeamGirder, Color: 1},
+	{Name: lyBeamHeader, Color: 6}, {Name: lyPost, Color: 1}, {Name: lyPointLoad, Color: 2},
 }
 
 // joistRun is a row of equal parallel joists drawn as LINEs. Joist i
@@ -93,6 +102,12 @@ type zone struct {
 	TextX, TextY float64
 }
 
+// circle is a CIRCLE (a post, a point-load mark), plan-local.
+type circle struct {
+	Layer     string
+	X, Y, RIn float64
+}
+
 // plan is one framing plan of the drawing.
 type plan struct {
 	OffsetXIn float64
@@ -100,6 +115,7 @@ type plan struct {
 	Lines     []seg // supports, span lines, blocking, grid, dimensions, outlines
 	Zones     []zone
 	Labels    []label
+	Circles   []circle
 }
 
 // Exterior walls: 2x6 stud walls drawn as two lines 5.5 in apart, centre
@@ -189,7 +205,38 @@ func floorPlan() plan {
 	g, gl := gridAndDims()
 	p.Lines = append(p.Lines, g...)
 	p.Labels = append(p.Labels, gl...)
+	addCanopy(&p)
 	return p
+}
+
+// addCanopy draws the loading canopy north of the loft, on the floor
+// plan's sheet (y 400 to 544 in, so its members follow the loft's in the
+// members' order): the load path of the demo. Ten 2x8 roof joists at 24 in
+// span 144 in from a low wall (y = 400) to a glulam girder (y = 544) that
+// hangs them in hangers and sits on two 6x6 posts (x = 0 and x = 240). The
+// wall has a door opening from x = 96 to 144 in, bridged by a header that
+// bears on the wall on both sides and carries the two joists over the
+// opening. A hoist hangs from joist x = 60 at mid-span: a point load.
+func addCanopy(p *plan) {
+	p.Runs = append(p.Runs, joistRun{Name: "C1 canopy", Layer: lyJoistCanopy, Zone: "CANOPY",
+		X0In: 12, Y0In: 399.25, Count: 10, SpacingIn: 24, LengthIn: 144})
+	p.Lines = append(p.Lines,
+		seg{lyWallCanopy, -2, 400, 96, 400}, seg{lyWallCanopy, 144, 400, 242, 400},
+		seg{lyBeamHeader, 90, 400, 150, 400},
+		seg{lyBeamGirder, -6, 544, 246, 544},
+		seg{lyNote, 6, 470, 234, 470},
+	)
+	p.Circles = append(p.Circles,
+		circle{lyPost, 0, 544, 2.75}, circle{lyPost, 240, 544, 2.75},
+		circle{lyPointLoad, 60, 500, 1.5},
+	)
+	p.Labels = append(p.Labels,
+		label{lyNote, 160, 473, 6, 0, `2x8 @ 24" o.c.`},
+		label{lyNote, 70, 552, 6, 0, "5 1/8 x 12 GLB 24F-1.8E"},
+		label{lyPointLoad, 64, 503, 5, 0, "P: 400 D, 300 L"},
+		label{lyNotes, 20, 580, 5, 0, "LOADING CANOPY - HOIST ON JOIST AT GRID 1.5"},
+	)
+	p.Zones = append(p.Zones, zone{lyZoneRoof, "CANOPY", [][2]float64{{-8, 392}, {248, 392}, {248, 560}, {-8, 560}}, 180, 430})
 }
 
 // roofPlan is the low-slope roof: joists run east-west at 24 in on centre

@@ -115,6 +115,19 @@ func (w *Writer) subclass(name string) {
 }
 
 // Line adds a LINE from (x1, y1) to (x2, y2).
+// Circle writes a CIRCLE of radius r centred on (x, y).
+func (w *Writer) Circle(layer string, x, y, r float64) {
+	w.entityHead("CIRCLE", layer)
+	b := &w.entities
+	w.subclass("AcDbCircle")
+	pair(b, 10, num(x))
+	pair(b, 20, num(y))
+	pair(b, 30, "0.0")
+	pair(b, 40, num(r))
+	w.see(x-r, y-r)
+	w.see(x+r, y+r)
+}
+
 func (w *Writer) Line(layer string, x1, y1, x2, y2 float64) {
 	w.entityHead("LINE", layer)
 	b := &w.entities
