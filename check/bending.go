@@ -70,6 +70,12 @@ func (e *engine) braces(rowsIn []float64) []float64 {
 			}
 		}
 	}
+	return sortUnique(pts)
+}
+
+// sortUnique sorts pts in place and drops points within 0.01 in of the one
+// before; it returns the shortened slice.
+func sortUnique(pts []float64) []float64 {
 	sort.Float64s(pts)
 	out := pts[:1]
 	for _, p := range pts[1:] {
@@ -95,14 +101,7 @@ func (e *engine) topIntervals(pts []float64) []interval {
 			own = append(own, xa)
 		}
 	}
-	sort.Float64s(own)
-	out := own[:1]
-	for _, p := range own[1:] {
-		if p-out[len(out)-1] > 0.01 {
-			out = append(out, p)
-		}
-	}
-	return e.intervals(false, out)
+	return e.intervals(false, sortUnique(own))
 }
 
 // intervals cuts the model into the unbraced stretches of an edge braced
