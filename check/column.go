@@ -145,19 +145,10 @@ func CheckPost(p Post, s Settings) PostResult {
 				calc: bestComp.calc}
 		}
 	}
-	r.Status = StatusPass
 	if best >= 0 {
 		r.Checks = []CheckResult{bestComp, bestBear}
 	}
-	for _, ch := range r.Checks {
-		if ch.Ratio > r.MaxRatio || r.Governing == "" {
-			r.MaxRatio, r.Governing = ch.Ratio, ch.Kind
-		}
-		if ch.Ratio > 1+ratioTol {
-			r.Status = StatusFail
-			r.Messages = append(r.Messages, fmt.Sprintf("%s: ratio %.3f > 1.000 (%s)", ch.Kind, ch.Ratio, ch.Combo))
-		}
-	}
+	r.MaxRatio, r.Governing, r.Status, r.Messages = verdict(r.Checks, r.Messages)
 	if r.LeOverD > 50 {
 		r.Status = StatusFail
 		r.Messages = append(r.Messages, fmt.Sprintf("le/d = %.1f > 50: not permitted (NDS 2018 3.7.1.4)", r.LeOverD))

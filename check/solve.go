@@ -175,16 +175,7 @@ func (e *engine) resultAt(rows []float64, bot *edgeEval, how rowsHow) Result {
 		r.Reactions = reactions
 	}
 	r.RB = math.Max(top.maxRB, bot.maxRB)
-	r.Status = StatusPass
-	for _, c := range r.Checks {
-		if c.Ratio > r.MaxRatio || r.Governing == "" {
-			r.MaxRatio, r.Governing = c.Ratio, c.Kind
-		}
-		if c.Ratio > 1+ratioTol {
-			r.Status = StatusFail
-			r.Messages = append(r.Messages, fmt.Sprintf("%s: ratio %.3f > 1.000 (%s)", c.Kind, c.Ratio, c.Combo))
-		}
-	}
+	r.MaxRatio, r.Governing, r.Status, r.Messages = verdict(r.Checks, r.Messages)
 	if r.RB > 50 {
 		r.Status = StatusFail
 		r.Messages = append(r.Messages, fmt.Sprintf("RB = %.1f > 50: not permitted (NDS 2018 3.3.3.7)", r.RB))
@@ -249,6 +240,22 @@ func (e *engine) buildFactorTrace() []TraceItem {
 			t.f("12 / sqrt(144 + %s^2)", e.m.PitchRise12), "statics")
 	}
 	return t.items
+}
+
+// verdict returns the largest ratio of checks and its kind, and pass or
+// fail with a message added to msgs for each ratio over 1.000.
+func verdict(checks []CheckResult, msgs []string) (maxRatio float64, governing, status string, out []string) {
+	status, out = StatusPass, msgs
+	for _, c := range checks {
+		if c.Ratio > maxRatio || governing == "" {
+			maxRatio, governing = c.Ratio, c.Kind
+		}
+		if c.Ratio > 1+ratioTol {
+			status = StatusFail
+			out = append(out, fmt.Sprintf("%s: ratio %.3f > 1.000 (%s)", c.Kind, c.Ratio, c.Combo))
+		}
+	}
+	return maxRatio, governing, status, out
 }
 
 func sizeFactorRef(rule string) string {
