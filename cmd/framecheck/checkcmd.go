@@ -68,12 +68,15 @@ type checkRun struct {
 	set      atomic.Pointer[outputSet] // the output folder while the run holds it
 	pkg      string                    // report's calculation package: full | governing
 	pdf      bool                      // also print report.pdf with a Chromium
+	verbose  bool                      // -v: every failing member and the info findings
+	bad      []badGroup                // failing and error members by mark, for the summary
 }
 
 // reportFlags adds --package and --pdf to f for c.
 func (c *checkRun) reportFlags(f *cmdFlags) {
 	f.StringVar(&c.pkg, "package", export.PackageFull, "report's calculation package: full (every check of each mark) or governing (each mark's governing check)")
 	f.BoolVar(&c.pdf, "pdf", false, "also write report.pdf beside report.html (needs Chromium or Chrome)")
+	f.BoolVar(&c.verbose, "v", false, "verbose: list every member that fails or is in error, and the info findings")
 }
 
 // validPackage reports whether --package names a package.
@@ -86,7 +89,7 @@ func (c *checkRun) validPackage() bool {
 var afterRead func()
 
 func runCheckCmd(args []string, stdout, stderr io.Writer) int {
-	f := newFlags("check", "framecheck check PLAN.dxf [-p PROJECT.toml] [-o OUTDIR] [--units U] [--size] [--overlay] [--package full|governing] [--pdf]",
+	f := newFlags("check", "framecheck check PLAN.dxf [-p PROJECT.toml] [-o OUTDIR] [--units U] [--size] [--overlay] [--package full|governing] [--pdf] [-v]",
 		`Reads the plan, finds the joists and their supports, checks every joist
 (NDS 2018 ASD, ASCE 7-16 combinations, IBC 2018 deflection limits), decides
 the blocking rows each run needs, and writes results.json, schedule.xlsx,
@@ -134,7 +137,7 @@ func validUnit(u string) bool {
 }
 
 func runDemo(args []string, stdout, stderr io.Writer) int {
-	f := newFlags("demo", "framecheck demo [-o OUTDIR]",
+	f := newFlags("demo", "framecheck demo [-o OUTDIR] [-v]",
 		`Writes the built-in demo plan and its project file into OUTDIR and runs
 check on them, so the whole job can be seen with no files at hand.`)
 	c := checkRun{}
@@ -231,7 +234,7 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		if f := c.unusedProjectFile(); f != "" {
 			fmt.Fprintf(stderr, "framecheck: no -p given, so the built-in layer patterns applied; to use %s, add -p %s\n", termText(f), termText(f))
 		}
-		printIssues(stderr, o.issues)
+		printIssues(stderr, o.issues, c.verbose)
 		return exitUsage
 	}
 	if msg := unmatchedSupports(o); msg != "" {
@@ -262,8 +265,9 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 			written = append(written, p)
 		}
 	}
-	printIssues(stderr, o.issues)
+	printIssues(stderr, o.issues, c.verbose)
 	c.warnings, c.doubts = countWarnings(o.issues), runDoubts(o.issues)
+	c.bad = badGroups(o, res, proj)
 	printSummary(stdout, c, proj, res, written)
 	if res.Summary.Fail+res.Summary.Error > 0 {
 		return exitFail
@@ -497,18 +501,6 @@ func (c *checkRun) write(o *outcome, res *export.Results, proj *Project, stderr 
 // is swapped in (a test interrupts the run there).
 var beforeSwap func(stage string)
 
-// printIssues writes the drawing and framing findings, at most 25 of them.
-func printIssues(w io.Writer, issues dxfimport.IssueList) {
-	const most = 25
-	for i, is := range issues {
-		if i == most {
-			fmt.Fprintf(w, "framecheck: ... and %d more findings (see results.json messages)\n", len(issues)-most)
-			break
-		}
-		fmt.Fprintf(w, "framecheck: %s\n", termText(is.Error()))
-	}
-}
-
 // maxDefaultsListed: up to this many settings a project file left out are
 // named in the summary; more are only counted (the Notes sheet lists all).
 const maxDefaultsListed = 5
@@ -542,35 +534,7 @@ func printSummary(w io.Writer, c *checkRun, proj *Project, r *export.Results, wr
 	}
 	tw.Flush()
 
-	var bad []export.Member
-	for _, m := range r.Members {
-		if m.Status != "pass" {
-			bad = append(bad, m)
-		}
-	}
-	if len(bad) > 0 {
-		fmt.Fprintf(w, "\nmembers that fail or are in error (%d):\n", len(bad))
-		tw = tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
-		fmt.Fprintln(tw, "member\tmark\tsize\tgoverning\tratio\tstatus\tsource\tfirst message")
-		for i, m := range bad {
-			if i == 20 {
-				fmt.Fprintf(tw, "...\t%d more in results.json\n", len(bad)-20)
-				break
-			}
-			msg := ""
-			if len(m.Messages) > 0 {
-				msg = m.Messages[0]
-			}
-			ratio := fmt.Sprintf("%.2f", m.MaxRatio)
-			if m.Status == "error" {
-				ratio = "-" // not checked: no ratio
-			}
-			fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\n", termCell(m.ID, cellWidth), termCell(m.Mark, cellWidth),
-				termCell(m.Size, cellWidth), termCell(m.Governing, cellWidth), ratio,
-				statusText(colour, m.Status), termCell(m.Source, sourceWidth), termCell(msg, messageWidth))
-		}
-		tw.Flush()
-	}
+	printBadGroups(w, c.bad, r.Members, colour, c.verbose)
 	t := r.Takeoff.Totals
 	fmt.Fprintf(w, "\nblocking rows to add: %d (%d pieces)\n", len(r.BlockingRows), t.BlockingPieces)
 	fmt.Fprintln(w, "takeoff:")

@@ -311,8 +311,9 @@ func TestUnmatchedSupportPatternIsNamed(t *testing.T) {
 	assert.Contains(t, first, `[[support]] 1 (bearing-wall): "S-WALL"`)
 	assert.NotContains(t, first, "S-BEAM", "the flush-beam pattern matches its layer")
 	assert.Contains(t, stderr, "start (4489.45, 0.00 mm) reaches no support")
-	// error members were not checked: the summary shows no ratio for them
-	assert.Regexp(t, `(?m)^M1\s+2x10\s+-\s+ERROR\s`, stdout)
+	// error members were not checked: the summary's one line for them
+	// (no mark) shows no governing check, no ratio and no alternative
+	assert.Regexp(t, `(?m)^-\s+35\s+2x10\s+M1\s+-\s+-\s+not checked: .*ERROR$`, stdout)
 
 	_, _, stderr = runMMPlan(t, "")
 	assert.NotContains(t, stderr, CodeUnmatchedSupport)

@@ -22,6 +22,7 @@ type outcome struct {
 	plan     *framing.Plan
 	settings check.Settings
 	results  []check.Result        // one per plan member, same order
+	inputs   []check.Member        // each plan member's check input, same order
 	sizing   []*check.SizingResult // per member with --size, else nil
 	rows     []framing.BlockingRow // rows to add, by run
 	takeoff  framing.Takeoff
@@ -140,6 +141,7 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 		inputs[k], shifts[k], inputMsgs[k] = checkInput(p, plan, k)
 	}
 	badLoads := applyPointLoads(p, plan, inputs, shifts)
+	o.inputs = inputs
 	for k := range plan.Members {
 		m := &plan.Members[k]
 		msgs := append(inputMsgs[k], badLoads[k]...)
