@@ -71,8 +71,42 @@ func markKey(m *Member) string {
 // in order of first appearance in Plan.Members (sorted by midpoint y,
 // then x), so the same drawing always gets the same marks. Call it after
 // sizes are final. Error members get no mark.
-func AssignMarks(p *Plan) {
-	marks := map[string]string{}
+func AssignMarks(p *Plan) { AssignMarksKept(p, nil, nil) }
+
+// MarkKeys returns the key of each member of p that defines its mark
+// (size, species, grade, spans, spacing, zones, bearings, drawn
+// blocking: markKey), "" for an error member. Taken before --size
+// changes sizes, the keys are those of the members as drawn.
+func MarkKeys(p *Plan) []string {
+	keys := make([]string, len(p.Members))
+	for k := range p.Members {
+		if !p.Members[k].Error {
+			keys[k] = markKey(&p.Members[k])
+		}
+	}
+	return keys
+}
+
+// AssignMarksKept names the marks of p as AssignMarks does, but keeps the
+// names of an earlier run: known maps a defining key to its mark name
+// (as returned before). drawn[k] is member k's key as drawn (MarkKeys
+// before sizes changed; nil: the keys now), so picking sizes never
+// renames a mark. Members with one drawn key that got different sizes
+// are different marks: the first one's keeps the drawn key's name, each
+// other is known by the drawn key and its size. A key met for the first
+// time gets the next free name, after every name known, in order of
+// first appearance. It returns known with this run's keys added (a new
+// map; known is not changed).
+func AssignMarksKept(p *Plan, drawn []string, known map[string]string) map[string]string {
+	out := make(map[string]string, len(known))
+	next := 0
+	for k, v := range known {
+		out[k] = v
+		if n, ok := markNumber(v); ok && n > next {
+			next = n
+		}
+	}
+	firstSize := map[string]string{} // drawn key -> the size its first member got
 	for k := range p.Members {
 		m := &p.Members[k]
 		if m.Error {
@@ -80,11 +114,30 @@ func AssignMarks(p *Plan) {
 			continue
 		}
 		key := markKey(m)
-		mk, ok := marks[key]
+		if drawn != nil && drawn[k] != "" {
+			key = drawn[k]
+		}
+		if fs, ok := firstSize[key]; !ok {
+			firstSize[key] = m.Size
+		} else if fs != m.Size {
+			key += "|sized " + m.Size
+		}
+		mk, ok := out[key]
 		if !ok {
-			mk = fmt.Sprintf("J%d", len(marks)+1)
-			marks[key] = mk
+			next++
+			mk = fmt.Sprintf("J%d", next)
+			out[key] = mk
 		}
 		m.Mark = mk
 	}
+	return out
+}
+
+// markNumber reads the number of a mark name "J12".
+func markNumber(name string) (int, bool) {
+	if len(name) < 2 || name[0] != 'J' {
+		return 0, false
+	}
+	n, err := strconv.Atoi(name[1:])
+	return n, err == nil && n > 0
 }

@@ -215,10 +215,18 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	}
 	// Inside the outputs (and the findings) the drawing is named by
 	// outputName, never by an absolute path.
-	o, err := runPipeline(pipelineInput{planPath: outputName(c.planPath), planData: data, project: proj, units: c.units, size: c.size})
+	known, merr := readMarks(c.outDir)
+	if merr != nil {
+		fmt.Fprintf(stderr, "framecheck: warning: %s: the marks are named afresh\n", termText(merr.Error()))
+	}
+	o, err := runPipeline(pipelineInput{planPath: outputName(c.planPath), planData: data, project: proj, units: c.units, size: c.size, marks: known})
 	if err != nil {
 		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitUsage
+	}
+	if o.marksFresh {
+		fmt.Fprintf(stderr, "framecheck: none of the %d marks kept in %s is on this plan: the marks are named afresh from J1\n",
+			len(known), termText(filepath.Join(c.outDir, marksName)))
 	}
 	if len(o.plan.Members) == 0 {
 		layersCmd := "framecheck layers " + c.planPath
@@ -385,7 +393,7 @@ func sameFile(a, b string) bool {
 // outputNames are the files a run may write into the output folder.
 func (c *checkRun) outputNames() []string {
 	base := strings.TrimSuffix(filepath.Base(c.planPath), filepath.Ext(c.planPath))
-	return []string{resultsName, scheduleName, base + "-checked.dxf", base + "-overlay.dxf", reportName}
+	return []string{resultsName, scheduleName, base + "-checked.dxf", base + "-overlay.dxf", reportName, marksName}
 }
 
 // write writes every output into the output folder as one set (see
@@ -474,6 +482,14 @@ func (c *checkRun) write(o *outcome, res *export.Results, proj *Project, stderr 
 		if err := add(names[2], aerr); err != nil {
 			return nil, err
 		}
+	}
+	// the marks' names, for the next run into this folder
+	mdata, err := marksJSON(o.marks)
+	if err == nil {
+		err = writeSynced(set.path(marksName), mdata)
+	}
+	if err := add(marksName, err); err != nil {
+		return nil, err
 	}
 	if overlay {
 		// The overlay's layers avoid the plan's colours too (when readable).
@@ -572,8 +588,15 @@ func sizingLine(proj *Project, r *export.Results) string {
 		got = append(got, fmt.Sprintf("%s for %d", sz, n))
 	}
 	sort.Strings(got[len(got)-len(count):])
-	return fmt.Sprintf("sizes picked by --size from [sizing] candidates %s, one size per run (the deepest any member needs): %s members",
-		strings.Join(proj.Sizing.Candidates, ", "), strings.Join(got, ", "))
+	same := "one size per run (the deepest any member needs)"
+	switch proj.Sizing.SameDepth {
+	case "zone":
+		same = "one size per zone (the deepest any member needs)"
+	case "none":
+		same = "each member its own"
+	}
+	return fmt.Sprintf("sizes picked by --size from [sizing] candidates %s, %s: %s members",
+		strings.Join(proj.Sizing.Candidates, ", "), same, strings.Join(got, ", "))
 }
 
 // inchText writes a spacing or tributary width in inches, as framers

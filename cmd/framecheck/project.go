@@ -264,6 +264,11 @@ type Sizing struct {
 	// BeamCandidates are the beam sizes `--size` tries for beams,
 	// smallest first: "(2) 2x10", "4x12".
 	BeamCandidates []string
+	// SameDepth is what keeps one joist depth when --size picks sizes:
+	// "run" (every joist of a run of adjacent parallel joists takes the
+	// deepest size any of them needs), "zone" (the same over each load
+	// zone) or "none" (each joist its own lightest size).
+	SameDepth string
 }
 
 // Allowed values of the project file's enumerated keys.
@@ -273,6 +278,7 @@ var (
 	temperatureValues = []string{"normal", "warm", "hot"}
 	useValues         = []string{"floor", "roof"}
 	ceilingValues     = []string{"plaster", "non-plaster", "none"}
+	sameDepthValues   = []string{"run", "zone", "none"}
 )
 
 // defaultBearingIn is the bearing length a [[support]] table gets when it

@@ -199,7 +199,7 @@ func TestDefaultProject(t *testing.T) {
 		t.Errorf("lumber %+v", p.Lumber)
 	}
 	if !reflect.DeepEqual(p.Sizing, Sizing{[]string{"2x6", "2x8", "2x10", "2x12", "2x14"}, 2,
-		[]string{"(2) 2x10", "(3) 2x10", "(2) 2x12", "(3) 2x12", "4x12"}}) {
+		[]string{"(2) 2x10", "(3) 2x10", "(2) 2x12", "(3) 2x12", "4x12"}, "run"}) {
 		t.Errorf("sizing %+v", p.Sizing)
 	}
 	used := strings.Join(p.DefaultsUsed(), "\n")
@@ -295,6 +295,9 @@ func TestFullProject(t *testing.T) {
 	}
 	if !p.Design.BraceAtInflection {
 		t.Error("design.brace_at_inflection = true not read")
+	}
+	if p.Sizing.SameDepth != "zone" {
+		t.Errorf("sizing.same_depth = %q, want zone", p.Sizing.SameDepth)
 	}
 	if p.Supports[1].BearingIn != 3.5 || p.Supports[3].BearingIn != 1.5 {
 		t.Errorf("bearing by kind: %+v", p.Supports)
