@@ -70,6 +70,7 @@ type checkRun struct {
 	pdf      bool                      // also print report.pdf with a Chromium
 	verbose  bool                      // -v: every failing member and the info findings
 	bad      []badGroup                // failing and error members by mark, for the summary
+	layers   layerFlags                // --joists, --supports
 }
 
 // reportFlags adds --package and --pdf to f for c.
@@ -89,7 +90,7 @@ func (c *checkRun) validPackage() bool {
 var afterRead func()
 
 func runCheckCmd(args []string, stdout, stderr io.Writer) int {
-	f := newFlags("check", "framecheck check PLAN.dxf [-p PROJECT.toml] [-o OUTDIR] [--units U] [--size] [--overlay] [--package full|governing] [--pdf] [-v]",
+	f := newFlags("check", "framecheck check PLAN.dxf [-p PROJECT.toml] [-o OUTDIR] [--units U] [--size] [--overlay] [--package full|governing] [--pdf] [-v] [--joists PATTERNS] [--supports [KIND=]PATTERNS]",
 		`Reads the plan, finds the joists and their supports, checks every joist
 (NDS 2018 ASD, ASCE 7-16 combinations, IBC 2018 deflection limits), decides
 the blocking rows each run needs, and writes results.json, schedule.xlsx,
@@ -107,6 +108,7 @@ previous outputs kept), 130/143 stopped by SIGINT/SIGTERM.`)
 	f.BoolVar(&c.size, "size", false, "pick the lightest passing size from [sizing] candidates")
 	f.BoolVar(&c.overlay, "overlay", false, "also write the markup alone as an R12 overlay DXF")
 	c.reportFlags(f)
+	c.layers.add(f)
 	pos, code := f.parse(args, stdout, stderr)
 	if code >= 0 {
 		return code
@@ -192,6 +194,10 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 			return exitUsage
 		}
 		proj = p
+	}
+	if err := c.layers.apply(proj); err != nil {
+		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
+		return exitUsage
 	}
 	if err := c.checkPaths(); err != nil {
 		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))

@@ -293,10 +293,15 @@ var defaultBearingIn = map[string]float64{
 }
 
 // defaultSupports are the support tables of a file without [[support]].
+// S-WALL and S-BEAM are the structural wall and beam layers of the US
+// National CAD Standard, as recalled, not read from the standard (from
+// memory, verify). A beam on S-BEAM is taken as flush (joists in
+// hangers, 1.5 in seat): the shorter bearing of the two beam kinds, so a
+// dropped beam drawn there is checked on the safe side.
 func defaultSupports() []Support {
 	return []Support{
-		{Layers: []string{"WALL*"}, Kind: "bearing-wall", BearingIn: 3.5, Check: true},
-		{Layers: []string{"BEAM-FLUSH*"}, Kind: "flush-beam", BearingIn: 1.5, Check: true},
+		{Layers: []string{"WALL*", "S-WALL*"}, Kind: "bearing-wall", BearingIn: 3.5, Check: true},
+		{Layers: []string{"BEAM-FLUSH*", "S-BEAM*"}, Kind: "flush-beam", BearingIn: 1.5, Check: true},
 	}
 }
 

@@ -178,8 +178,9 @@ func TestDefaultProject(t *testing.T) {
 	if p.Drawing != (DrawingSettings{SnapToleranceIn: 1.5, MaxWallThicknessIn: 12}) {
 		t.Errorf("drawing %+v", p.Drawing)
 	}
-	wantSup := []Support{{Layers: []string{"WALL*"}, Kind: "bearing-wall", BearingIn: 3.5, Check: true},
-		{Layers: []string{"BEAM-FLUSH*"}, Kind: "flush-beam", BearingIn: 1.5, Check: true}}
+	// S-WALL, S-BEAM: US National CAD Standard structural layers, from memory: verify
+	wantSup := []Support{{Layers: []string{"WALL*", "S-WALL*"}, Kind: "bearing-wall", BearingIn: 3.5, Check: true},
+		{Layers: []string{"BEAM-FLUSH*", "S-BEAM*"}, Kind: "flush-beam", BearingIn: 1.5, Check: true}}
 	if !reflect.DeepEqual(p.Supports, wantSup) {
 		t.Errorf("supports %+v", p.Supports)
 	}
@@ -206,8 +207,9 @@ func TestDefaultProject(t *testing.T) {
 	for _, s := range []string{
 		"drawing.units: from the DXF header ($INSUNITS)",
 		"drawing.snap_tolerance_in = 1.5",
-		"layers.joists = [\"JOIST*\"]",
-		"[[support]]: none given; [\"WALL*\"] bearing-wall (bearing 3.5 in); [\"BEAM-FLUSH*\"] flush-beam (bearing 1.5 in)",
+		"layers.joists = [\"JOIST*\", \"S-JOIS*\"]",
+		"layers.labels = [\"FRAMING-NOTE*\", \"S-ANNO-NOTE*\", \"S-ANNO-TEXT*\"]",
+		"[[support]]: none given; [\"WALL*\", \"S-WALL*\"] bearing-wall (bearing 3.5 in); [\"BEAM-FLUSH*\", \"S-BEAM*\"] flush-beam (bearing 1.5 in)",
 		"design.combinations = \"ASCE 7-16\"",
 		"[[zone]]: none given; one zone FLOOR: floor, D 12 psf, L 40 psf, ceiling non-plaster, L/360 live, L/240 total",
 		"loads.default_zone = \"FLOOR\" (the only zone)",

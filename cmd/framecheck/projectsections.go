@@ -46,9 +46,13 @@ func (ld *loader) drawing(t *table) {
 
 func (ld *loader) layers(t *table) {
 	l := &ld.p.Layers
+	// The S- patterns are the structural layers of the US National CAD
+	// Standard (discipline S, major group JOIS joists, ANNO-NOTE and
+	// ANNO-TEXT notes; see defaultSupports for walls and beams), as
+	// recalled, not read from the standard: from memory, verify.
 	*l = LayerRoles{
-		Joists: []string{"JOIST*"}, Blocking: []string{"BLOCKING*"},
-		Zones: []string{"LOAD-ZONE*"}, Labels: []string{"FRAMING-NOTE*"},
+		Joists: []string{"JOIST*", "S-JOIS*"}, Blocking: []string{"BLOCKING*"},
+		Zones: []string{"LOAD-ZONE*"}, Labels: []string{"FRAMING-NOTE*", "S-ANNO-NOTE*", "S-ANNO-TEXT*"},
 		Bays:  []string{"FRAMING-BAY*"},
 		Posts: []string{"POST*"}, PointLoads: []string{"POINT-LOAD*"},
 	}
