@@ -412,11 +412,10 @@ func (c *checkRun) write(o *outcome, res *export.Results, proj *Project, stderr 
 	if err != nil {
 		return nil, err
 	}
-	set, err := openOutputSet(c.outDir)
+	set, err := openOutputSet(c.outDir, func(s *outputSet) { c.set.Store(s) })
 	if err != nil {
 		return nil, err
 	}
-	c.set.Store(set)
 	defer func() {
 		if err != nil {
 			set.abort()
