@@ -95,8 +95,10 @@ func MarkKeys(p *Plan) []string {
 // are different marks: the first one's keeps the drawn key's name, each
 // other is known by the drawn key and its size. A key met for the first
 // time gets the next free name, after every name known, in order of
-// first appearance. It returns known with this run's keys added (a new
-// map; known is not changed).
+// first appearance, the drawn keys first and then those of sizes split
+// off (so that, numbered afresh, the marks as drawn get the same names
+// with or without --size). It returns known with this run's keys added
+// (a new map; known is not changed).
 func AssignMarksKept(p *Plan, drawn []string, known map[string]string) map[string]string {
 	out := make(map[string]string, len(known))
 	next := 0
@@ -107,10 +109,11 @@ func AssignMarksKept(p *Plan, drawn []string, known map[string]string) map[strin
 		}
 	}
 	firstSize := map[string]string{} // drawn key -> the size its first member got
+	keys := make([]string, len(p.Members))
+	split := make([]bool, len(p.Members))
 	for k := range p.Members {
 		m := &p.Members[k]
 		if m.Error {
-			m.Mark = ""
 			continue
 		}
 		key := markKey(m)
@@ -121,14 +124,28 @@ func AssignMarksKept(p *Plan, drawn []string, known map[string]string) map[strin
 			firstSize[key] = m.Size
 		} else if fs != m.Size {
 			key += "|sized " + m.Size
+			split[k] = true
 		}
-		mk, ok := out[key]
-		if !ok {
-			next++
-			mk = fmt.Sprintf("J%d", next)
-			out[key] = mk
+		keys[k] = key
+	}
+	for _, pass := range []bool{false, true} {
+		for k := range p.Members {
+			m := &p.Members[k]
+			if m.Error {
+				m.Mark = ""
+				continue
+			}
+			if split[k] != pass {
+				continue
+			}
+			mk, ok := out[keys[k]]
+			if !ok {
+				next++
+				mk = fmt.Sprintf("J%d", next)
+				out[keys[k]] = mk
+			}
+			m.Mark = mk
 		}
-		m.Mark = mk
 	}
 	return out
 }
