@@ -242,8 +242,8 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "framecheck: %s: no joists found on the joist layers %s (run '%s' to see the drawing's layers and the role each gets)\n",
 			termText(c.planPath), termText(strings.Join(proj.Layers.Joists, ", ")), termText(layersCmd))
 		if like := joistLikeLayers(layerRows(o.drawing, proj)); len(like) > 0 {
-			fmt.Fprintf(stderr, "framecheck: the joists may be on %s: name that layer in [layers] joists of the project file\n",
-				termText(strings.Join(like, ", ")))
+			fmt.Fprintf(stderr, "framecheck: the joists may be on %s: name that layer in [layers] joists of the project file, or pass --joists %s\n",
+				termText(strings.Join(like, ", ")), termText(like[0]))
 		}
 		if f := c.unusedProjectFile(); f != "" {
 			fmt.Fprintf(stderr, "framecheck: no -p given, so the built-in layer patterns applied; to use %s, add -p %s\n", termText(f), termText(f))

@@ -274,6 +274,7 @@ func TestCheckWithoutProjectFlagNamesTheFileBeside(t *testing.T) {
 	want := filepath.Join(dir, "framecheck.toml")
 	assert.Contains(t, stderr.String(), "to use "+want+", add -p "+want)
 	assert.Contains(t, stderr.String(), "the joists may be on FLR-JST:")
+	assert.Contains(t, stderr.String(), "or pass --joists FLR-JST")
 
 	require.NoError(t, os.Remove(want))
 	stderr.Reset()
