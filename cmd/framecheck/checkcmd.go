@@ -94,7 +94,8 @@ func runCheckCmd(args []string, stdout, stderr io.Writer) int {
 		`Reads the plan, finds the joists and their supports, checks every joist
 (NDS 2018 ASD, ASCE 7-16 combinations, IBC 2018 deflection limits), decides
 the blocking rows each run needs, and writes results.json, schedule.xlsx,
-report.html, an annotated copy of the drawing and the manifest
+report.html, an annotated copy of the drawing, marks.json (the marks'
+names, kept for the next run into OUTDIR) and the manifest
 framecheck-run.json into OUTDIR, replacing the previous set as a whole.
 Exit status: 0 every member passes, 1 a member fails or is in error or part
 of the drawing could not be read or the run is doubtful (RUN401: the
