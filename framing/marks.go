@@ -73,27 +73,31 @@ func markKey(m *Member) string {
 // sizes are final. Error members get no mark.
 func AssignMarks(p *Plan) { AssignMarksKept(p, nil, nil) }
 
-// MarkKeys returns the key of each member of p that defines its mark
-// (size, species, grade, spans, spacing, zones, bearings, drawn
-// blocking: markKey), "" for an error member. Taken before --size
-// changes sizes, the keys are those of the members as drawn.
+// nameKey is markKey without the size: what a mark's name is kept by
+// (species, grade, spans, spacing, tributary width, zones, bearings,
+// drawn blocking), so that a size changed on the drawing in a revision,
+// or by --size, keeps the mark's name.
+func nameKey(m *Member) string { return markKey(m)[len(m.Size)+1:] }
+
+// MarkKeys returns the key each member's mark name is kept by (nameKey),
+// "" for an error member.
 func MarkKeys(p *Plan) []string {
 	keys := make([]string, len(p.Members))
 	for k := range p.Members {
 		if !p.Members[k].Error {
-			keys[k] = markKey(&p.Members[k])
+			keys[k] = nameKey(&p.Members[k])
 		}
 	}
 	return keys
 }
 
 // AssignMarksKept names the marks of p as AssignMarks does, but keeps the
-// names of an earlier run: known maps a defining key to its mark name
-// (as returned before). drawn[k] is member k's key as drawn (MarkKeys
-// before sizes changed; nil: the keys now), so picking sizes never
-// renames a mark. Members with one drawn key that got different sizes
-// are different marks: the first one's keeps the drawn key's name, each
-// other is known by the drawn key and its size. A key met for the first
+// names of an earlier run: known maps a key (MarkKeys) to its mark name
+// (as returned before). drawn[k] is member k's key (MarkKeys; nil: taken
+// now). The key leaves the size out, so a size changed on the drawing
+// or picked by --size renames no mark. Members with one key but
+// different sizes are different marks: the first one's size keeps the
+// key's name, each other is known by the key and its size. A key met for the first
 // time gets the next free name, after every name known, in order of
 // first appearance, the drawn keys first and then those of sizes split
 // off (so that, numbered afresh, the marks as drawn get the same names
@@ -116,7 +120,7 @@ func AssignMarksKept(p *Plan, drawn []string, known map[string]string) map[strin
 		if m.Error {
 			continue
 		}
-		key := markKey(m)
+		key := nameKey(m)
 		if drawn != nil && drawn[k] != "" {
 			key = drawn[k]
 		}

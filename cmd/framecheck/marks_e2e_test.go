@@ -329,3 +329,45 @@ func mustReadFile(t *testing.T, p string) []byte {
 	}
 	return b
 }
+
+// A revision that resizes a mark on the drawing keeps its name: the
+// storage bay's callout (handle 75, "2x10 @ 16\" o.c.") changed to 2x14
+// makes J12 a 2x14, still J12, and renames no other mark.
+func TestMarksStableAfterResizeOnDrawing(t *testing.T) {
+	c := newMarksCase(t)
+	first, _ := c.check(t, c.plan, "out")
+	data, err := os.ReadFile(c.plan)
+	if err != nil {
+		t.Fatal(err)
+	}
+	old := []byte("  5\n75\n")
+	i := bytes.Index(data, old)
+	j := bytes.Index(data[max(i, 0):], []byte("2x10 @ 16\" o.c."))
+	if i < 0 || j < 0 {
+		t.Fatal("the demo has no storage callout with handle 75")
+	}
+	rev := append([]byte(nil), data...)
+	copy(rev[i+j:], "2x14")
+	plan2 := filepath.Join(c.dir, "plan-rev3.dxf")
+	if err := os.WriteFile(plan2, rev, 0o644); err != nil {
+		t.Fatal(err)
+	}
+	second, r := c.check(t, plan2, "out")
+	storage := 0
+	for _, m := range r.Members {
+		if m.Zone == "STORAGE" && m.TribIn > 15 && m.Status != export.StatusError {
+			storage++
+			if m.Size != "2x14" || m.Mark != "J12" {
+				t.Errorf("%s: %s %s, want J12 2x14", m.ID, m.Mark, m.Size)
+			}
+		}
+	}
+	if storage == 0 {
+		t.Fatal("no storage joists")
+	}
+	for h, mk := range first {
+		if second[h] != mk {
+			t.Errorf("handle %s: %s before the revision, %s after", h, mk, second[h])
+		}
+	}
+}

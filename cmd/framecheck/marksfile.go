@@ -14,9 +14,9 @@ import (
 )
 
 // marksName is the file in OUTDIR that keeps the marks' names between
-// runs: each mark's defining key (framing.MarkKeys: size, species, grade,
-// spans, spacing, tributary width, zones, bearings, drawn blocking, as
-// drawn) and its name. The next run into the same folder reads it, so a
+// runs: each mark's defining key (framing.MarkKeys: species, grade,
+// spans, spacing, tributary width, zones, bearings, drawn blocking; not
+// the size) and its name. The next run into the same folder reads it, so a
 // mark keeps its name across runs and revisions of the plan, and --size
 // never renames one.
 const marksName = "marks.json"

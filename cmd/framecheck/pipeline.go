@@ -170,8 +170,8 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 
 	decideRunRows(plan, inputs, shifts, usable, settings, o)
 
-	// Final sizes, then marks (keyed as drawn, so that --size renames
-	// none) and the takeoff.
+	// Final sizes, then marks (keyed without their size, so that --size
+	// renames none; names kept from marks.json) and the takeoff.
 	drawn := framing.MarkKeys(plan)
 	for k := range plan.Members {
 		if usable[k] && o.results[k].Size != "" {
