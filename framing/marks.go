@@ -71,10 +71,31 @@ func markKey(m *Member) string {
 // in order of first appearance in Plan.Members (sorted by midpoint y,
 // then x), so the same drawing always gets the same marks. Call it after
 // sizes are final. Error members get no mark.
-func AssignMarks(p *Plan) {
-	marks := map[string]string{}
-	// point loads drawn on a member make it a member of its own kind: where
-	// (from its first bearing, to 1 in) and what they carry
+func AssignMarks(p *Plan) { AssignMarksKept(p, nil, nil) }
+
+// nameKey is markKey without the size: what a mark's name is kept by
+// (species, grade, spans, spacing, tributary width, zones, bearings,
+// drawn blocking), so that a size changed on the drawing in a revision,
+// or by --size, keeps the mark's name.
+func nameKey(m *Member) string { return markKey(m)[len(m.Size)+1:] }
+
+// MarkKeys returns the key each member's mark name is kept by (nameKey),
+// "" for an error member.
+func MarkKeys(p *Plan) []string {
+	keys := make([]string, len(p.Members))
+	loads := pointLoadKeys(p)
+	for k := range p.Members {
+		if !p.Members[k].Error {
+			keys[k] = nameKey(&p.Members[k]) + loads[k]
+		}
+	}
+	return keys
+}
+
+// pointLoadKeys returns, by member, what the point loads drawn on it add
+// to its key: where (from its first bearing, to 1 in) and what they carry.
+// Members identical but for a point load are not identical for design.
+func pointLoadKeys(p *Plan) map[int]string {
 	loads := map[int]string{}
 	for _, pl := range p.PointLoads {
 		if pl.Member < 0 || pl.Member >= len(p.Members) {
@@ -88,18 +109,78 @@ func AssignMarks(p *Plan) {
 		loads[pl.Member] += fmt.Sprintf("|P%g:%s:%g,%g,%g,%g,%g,%g", math.Round(pl.AtIn-ref), pl.Name,
 			l.DeadLb, l.LiveLb, l.RoofLiveLb, l.SnowLb, l.WindDownLb, l.WindUpLb)
 	}
+	return loads
+}
+
+// AssignMarksKept names the marks of p as AssignMarks does, but keeps the
+// names of an earlier run: known maps a key (MarkKeys) to its mark name
+// (as returned before). drawn[k] is member k's key (MarkKeys; nil: taken
+// now). The key leaves the size out, so a size changed on the drawing
+// or picked by --size renames no mark. Members with one key but
+// different sizes are different marks: the first one's size keeps the
+// key's name, each other is known by the key and its size. A key met for the first
+// time gets the next free name, after every name known, in order of
+// first appearance, the drawn keys first and then those of sizes split
+// off (so that, numbered afresh, the marks as drawn get the same names
+// with or without --size). It returns known with this run's keys added
+// (a new map; known is not changed).
+func AssignMarksKept(p *Plan, drawn []string, known map[string]string) map[string]string {
+	out := make(map[string]string, len(known))
+	next := 0
+	for k, v := range known {
+		out[k] = v
+		if n, ok := markNumber(v); ok && n > next {
+			next = n
+		}
+	}
+	firstSize := map[string]string{} // drawn key -> the size its first member got
+	keys := make([]string, len(p.Members))
+	loads := pointLoadKeys(p)
+	split := make([]bool, len(p.Members))
 	for k := range p.Members {
 		m := &p.Members[k]
 		if m.Error {
-			m.Mark = ""
 			continue
 		}
-		key := markKey(m) + loads[k]
-		mk, ok := marks[key]
-		if !ok {
-			mk = fmt.Sprintf("J%d", len(marks)+1)
-			marks[key] = mk
+		key := nameKey(m) + loads[k]
+		if drawn != nil && drawn[k] != "" {
+			key = drawn[k]
 		}
-		m.Mark = mk
+		if fs, ok := firstSize[key]; !ok {
+			firstSize[key] = m.Size
+		} else if fs != m.Size {
+			key += "|sized " + m.Size
+			split[k] = true
+		}
+		keys[k] = key
 	}
+	for _, pass := range []bool{false, true} {
+		for k := range p.Members {
+			m := &p.Members[k]
+			if m.Error {
+				m.Mark = ""
+				continue
+			}
+			if split[k] != pass {
+				continue
+			}
+			mk, ok := out[keys[k]]
+			if !ok {
+				next++
+				mk = fmt.Sprintf("J%d", next)
+				out[keys[k]] = mk
+			}
+			m.Mark = mk
+		}
+	}
+	return out
+}
+
+// markNumber reads the number of a mark name "J12".
+func markNumber(name string) (int, bool) {
+	if len(name) < 2 || name[0] != 'J' {
+		return 0, false
+	}
+	n, err := strconv.Atoi(name[1:])
+	return n, err == nil && n > 0
 }

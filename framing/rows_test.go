@@ -106,10 +106,14 @@ func TestAssignMarks(t *testing.T) {
 	if again != got {
 		t.Errorf("marks not reproducible: %s then %s", got, again)
 	}
+	// Resizing M2 splits J2 by size: the first member's size keeps the
+	// name, the other size is numbered after every mark, and no other
+	// mark moves (marks are named without their size, issue 16).
 	pl.Members[1].Size = "2x12"
 	AssignMarks(pl)
-	if pl.Members[1].Mark != "J2" || pl.Members[2].Mark != "J3" {
-		t.Errorf("after resizing M2: %s %s, want J2 J3", pl.Members[1].Mark, pl.Members[2].Mark)
+	if pl.Members[1].Mark != "J2" || pl.Members[2].Mark != "J5" || pl.Members[4].Mark != "J3" || pl.Members[5].Mark != "J4" {
+		t.Errorf("after resizing M2: M2 %s M3 %s M5 %s M6 %s, want J2 J5 J3 J4",
+			pl.Members[1].Mark, pl.Members[2].Mark, pl.Members[4].Mark, pl.Members[5].Mark)
 	}
 }
 

@@ -68,12 +68,16 @@ type checkRun struct {
 	set      atomic.Pointer[outputSet] // the output folder while the run holds it
 	pkg      string                    // report's calculation package: full | governing
 	pdf      bool                      // also print report.pdf with a Chromium
+	verbose  bool                      // -v: every failing member and the info findings
+	bad      []badGroup                // failing and error members by mark, for the summary
+	layers   layerFlags                // --joists, --supports
 }
 
 // reportFlags adds --package and --pdf to f for c.
 func (c *checkRun) reportFlags(f *cmdFlags) {
 	f.StringVar(&c.pkg, "package", export.PackageFull, "report's calculation package: full (every check of each mark) or governing (each mark's governing check)")
 	f.BoolVar(&c.pdf, "pdf", false, "also write report.pdf beside report.html (needs Chromium or Chrome)")
+	f.BoolVar(&c.verbose, "v", false, "verbose: list every member that fails or is in error, and the info findings")
 }
 
 // validPackage reports whether --package names a package.
@@ -86,11 +90,12 @@ func (c *checkRun) validPackage() bool {
 var afterRead func()
 
 func runCheckCmd(args []string, stdout, stderr io.Writer) int {
-	f := newFlags("check", "framecheck check PLAN.dxf [-p PROJECT.toml] [-o OUTDIR] [--units U] [--size] [--overlay] [--package full|governing] [--pdf]",
+	f := newFlags("check", "framecheck check PLAN.dxf [-p PROJECT.toml] [-o OUTDIR] [--units U] [--size] [--overlay] [--package full|governing] [--pdf] [-v] [--joists PATTERNS] [--supports [KIND=]PATTERNS]",
 		`Reads the plan, finds the joists and their supports, checks every joist
 (NDS 2018 ASD, ASCE 7-16 combinations, IBC 2018 deflection limits), decides
 the blocking rows each run needs, and writes results.json, schedule.xlsx,
-report.html, an annotated copy of the drawing and the manifest
+report.html, an annotated copy of the drawing, marks.json (the marks'
+names, kept for the next run into OUTDIR) and the manifest
 framecheck-run.json into OUTDIR, replacing the previous set as a whole.
 Exit status: 0 every member passes, 1 a member fails or is in error or part
 of the drawing could not be read or the run is doubtful (RUN401: the
@@ -104,6 +109,7 @@ previous outputs kept), 130/143 stopped by SIGINT/SIGTERM.`)
 	f.BoolVar(&c.size, "size", false, "pick the lightest passing size from [sizing] candidates")
 	f.BoolVar(&c.overlay, "overlay", false, "also write the markup alone as an R12 overlay DXF")
 	c.reportFlags(f)
+	c.layers.add(f)
 	pos, code := f.parse(args, stdout, stderr)
 	if code >= 0 {
 		return code
@@ -134,7 +140,7 @@ func validUnit(u string) bool {
 }
 
 func runDemo(args []string, stdout, stderr io.Writer) int {
-	f := newFlags("demo", "framecheck demo [-o OUTDIR]",
+	f := newFlags("demo", "framecheck demo [-o OUTDIR] [-v]",
 		`Writes the built-in demo plan and its project file into OUTDIR and runs
 check on them, so the whole job can be seen with no files at hand.`)
 	c := checkRun{}
@@ -190,6 +196,10 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		}
 		proj = p
 	}
+	if err := c.layers.apply(proj); err != nil {
+		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
+		return exitUsage
+	}
 	if err := c.checkPaths(); err != nil {
 		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitUsage
@@ -212,10 +222,18 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	}
 	// Inside the outputs (and the findings) the drawing is named by
 	// outputName, never by an absolute path.
-	o, err := runPipeline(pipelineInput{planPath: outputName(c.planPath), planData: data, project: proj, units: c.units, size: c.size})
+	known, merr := readMarks(c.outDir)
+	if merr != nil {
+		fmt.Fprintf(stderr, "framecheck: warning: %s: the marks are named afresh\n", termText(merr.Error()))
+	}
+	o, err := runPipeline(pipelineInput{planPath: outputName(c.planPath), planData: data, project: proj, units: c.units, size: c.size, marks: known})
 	if err != nil {
 		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitUsage
+	}
+	if o.marksFresh {
+		fmt.Fprintf(stderr, "framecheck: none of the %d marks kept in %s is on this plan: the marks are named afresh from J1\n",
+			len(known), termText(filepath.Join(c.outDir, marksName)))
 	}
 	if len(o.plan.Members) == 0 {
 		layersCmd := "framecheck layers " + c.planPath
@@ -225,13 +243,13 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "framecheck: %s: no joists found on the joist layers %s (run '%s' to see the drawing's layers and the role each gets)\n",
 			termText(c.planPath), termText(strings.Join(proj.Layers.Joists, ", ")), termText(layersCmd))
 		if like := joistLikeLayers(layerRows(o.drawing, proj)); len(like) > 0 {
-			fmt.Fprintf(stderr, "framecheck: the joists may be on %s: name that layer in [layers] joists of the project file\n",
-				termText(strings.Join(like, ", ")))
+			fmt.Fprintf(stderr, "framecheck: the joists may be on %s: name that layer in [layers] joists of the project file, or pass --joists %s\n",
+				termText(strings.Join(like, ", ")), termText(like[0]))
 		}
 		if f := c.unusedProjectFile(); f != "" {
 			fmt.Fprintf(stderr, "framecheck: no -p given, so the built-in layer patterns applied; to use %s, add -p %s\n", termText(f), termText(f))
 		}
-		printIssues(stderr, o.issues)
+		printIssues(stderr, o.issues, c.verbose)
 		return exitUsage
 	}
 	if msg := unmatchedSupports(o); msg != "" {
@@ -262,8 +280,9 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 			written = append(written, p)
 		}
 	}
-	printIssues(stderr, o.issues)
+	printIssues(stderr, o.issues, c.verbose)
 	c.warnings, c.doubts = countWarnings(o.issues), runDoubts(o.issues)
+	c.bad = badGroups(o, res, proj)
 	printSummary(stdout, c, proj, res, written)
 	if res.LoadPath != nil {
 		fmt.Fprintf(stdout, "load path: %s (Beams, Posts, Connections and Foundation sheets)\n", export.LoadPathSummary(res.LoadPath))
@@ -389,7 +408,7 @@ func sameFile(a, b string) bool {
 // outputNames are the files a run may write into the output folder.
 func (c *checkRun) outputNames() []string {
 	base := strings.TrimSuffix(filepath.Base(c.planPath), filepath.Ext(c.planPath))
-	return []string{resultsName, scheduleName, base + "-checked.dxf", base + "-overlay.dxf", reportName}
+	return []string{resultsName, scheduleName, base + "-checked.dxf", base + "-overlay.dxf", reportName, marksName}
 }
 
 // write writes every output into the output folder as one set (see
@@ -402,11 +421,10 @@ func (c *checkRun) write(o *outcome, res *export.Results, proj *Project, stderr 
 	if err != nil {
 		return nil, err
 	}
-	set, err := openOutputSet(c.outDir)
+	set, err := openOutputSet(c.outDir, func(s *outputSet) { c.set.Store(s) })
 	if err != nil {
 		return nil, err
 	}
-	c.set.Store(set)
 	defer func() {
 		if err != nil {
 			set.abort()
@@ -479,6 +497,14 @@ func (c *checkRun) write(o *outcome, res *export.Results, proj *Project, stderr 
 			return nil, err
 		}
 	}
+	// the marks' names, for the next run into this folder
+	mdata, err := marksJSON(o.marks)
+	if err == nil {
+		err = writeSynced(set.path(marksName), mdata)
+	}
+	if err := add(marksName, err); err != nil {
+		return nil, err
+	}
 	if overlay {
 		// The overlay's layers avoid the plan's colours too (when readable).
 		mk.UsedACI, _ = export.DrawingLayerColours(c.planPath)
@@ -504,18 +530,6 @@ func (c *checkRun) write(o *outcome, res *export.Results, proj *Project, stderr 
 // beforeSwap, when not nil, runs when the whole set is staged, before it
 // is swapped in (a test interrupts the run there).
 var beforeSwap func(stage string)
-
-// printIssues writes the drawing and framing findings, at most 25 of them.
-func printIssues(w io.Writer, issues dxfimport.IssueList) {
-	const most = 25
-	for i, is := range issues {
-		if i == most {
-			fmt.Fprintf(w, "framecheck: ... and %d more findings (see results.json messages)\n", len(issues)-most)
-			break
-		}
-		fmt.Fprintf(w, "framecheck: %s\n", termText(is.Error()))
-	}
-}
 
 // maxDefaultsListed: up to this many settings a project file left out are
 // named in the summary; more are only counted (the Notes sheet lists all).
@@ -550,35 +564,7 @@ func printSummary(w io.Writer, c *checkRun, proj *Project, r *export.Results, wr
 	}
 	tw.Flush()
 
-	var bad []export.Member
-	for _, m := range r.Members {
-		if m.Status != "pass" {
-			bad = append(bad, m)
-		}
-	}
-	if len(bad) > 0 {
-		fmt.Fprintf(w, "\nmembers that fail or are in error (%d):\n", len(bad))
-		tw = tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
-		fmt.Fprintln(tw, "member\tmark\tsize\tgoverning\tratio\tstatus\tsource\tfirst message")
-		for i, m := range bad {
-			if i == 20 {
-				fmt.Fprintf(tw, "...\t%d more in results.json\n", len(bad)-20)
-				break
-			}
-			msg := ""
-			if len(m.Messages) > 0 {
-				msg = m.Messages[0]
-			}
-			ratio := fmt.Sprintf("%.2f", m.MaxRatio)
-			if m.Status == "error" {
-				ratio = "-" // not checked: no ratio
-			}
-			fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\n", termCell(m.ID, cellWidth), termCell(m.Mark, cellWidth),
-				termCell(m.Size, cellWidth), termCell(m.Governing, cellWidth), ratio,
-				statusText(colour, m.Status), termCell(m.Source, sourceWidth), termCell(msg, messageWidth))
-		}
-		tw.Flush()
-	}
+	printBadGroups(w, c.bad, r.Members, colour, c.verbose)
 	t := r.Takeoff.Totals
 	fmt.Fprintf(w, "\nblocking rows to add: %d (%d pieces)\n", len(r.BlockingRows), t.BlockingPieces)
 	fmt.Fprintln(w, "takeoff:")
@@ -616,8 +602,15 @@ func sizingLine(proj *Project, r *export.Results) string {
 		got = append(got, fmt.Sprintf("%s for %d", sz, n))
 	}
 	sort.Strings(got[len(got)-len(count):])
-	return fmt.Sprintf("sizes picked by --size from [sizing] candidates %s, one size per run (the deepest any member needs): %s members",
-		strings.Join(proj.Sizing.Candidates, ", "), strings.Join(got, ", "))
+	same := "one size per run (the deepest any member needs)"
+	switch proj.Sizing.SameDepth {
+	case "zone":
+		same = "one size per zone (the deepest any member needs)"
+	case "none":
+		same = "each member its own"
+	}
+	return fmt.Sprintf("sizes picked by --size from [sizing] candidates %s, %s: %s members",
+		strings.Join(proj.Sizing.Candidates, ", "), same, strings.Join(got, ", "))
 }
 
 // inchText writes a spacing or tributary width in inches, as framers

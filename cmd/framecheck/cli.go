@@ -95,7 +95,8 @@ func (f *cmdFlags) usageError(stderr io.Writer, format string, args ...any) int 
 }
 
 // useColour reports whether output to w may be coloured: only when w is a
-// terminal and NO_COLOR is unset or empty (https://no-color.org).
+// terminal and NO_COLOR is unset or empty (https://no-color.org); on the
+// Windows console, once its escape-sequence processing is on (enableVT).
 func useColour(w io.Writer) bool {
 	if os.Getenv("NO_COLOR") != "" {
 		return false
@@ -105,7 +106,7 @@ func useColour(w io.Writer) bool {
 		return false
 	}
 	st, err := f.Stat()
-	return err == nil && st.Mode()&os.ModeCharDevice != 0
+	return err == nil && st.Mode()&os.ModeCharDevice != 0 && enableVT(f)
 }
 
 // ANSI colours for the terminal summary.

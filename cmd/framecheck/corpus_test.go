@@ -345,7 +345,7 @@ func TestBadCorpusGoodPlan(t *testing.T) {
 // Sections the reader does not know are skipped and listed; the plan is
 // checked.
 func TestBadCorpusUnknownSections(t *testing.T) {
-	r := runCorpus(t, "unknown-sections.dxf", "", "")
+	r := runCorpus(t, "unknown-sections.dxf", "", "", "-v") // info findings are printed with -v
 	wantCode(t, r, exitOK)
 	wantAll(t, r, export.StatusPass, 5)
 	wantStderr(t, r, "DXF102", "SECTION:FRAMECHECK_NOT_A_SECTION", "SECTION:ACDSDATA")

@@ -95,7 +95,7 @@ func TestLayersNotes(t *testing.T) {
 	out := b.String()
 	for _, want := range []string{
 		"layer WALLS is off", "layer J1 is frozen",
-		`no entities on a joist layer: layers.joists is ["JOIST*"]`,
+		`no entities on a joist layer: layers.joists is ["JOIST*", "S-JOIS*"]`,
 		`pattern matches no layer: layers.blocking: "BLOCKING*"`,
 		`pattern matches no layer: [[support]] 2 (flush-beam): "BEAM-FLUSH*"`,
 		"WALLS     1  support: bearing-wall",

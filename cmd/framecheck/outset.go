@@ -73,8 +73,11 @@ type outputSet struct {
 
 // openOutputSet creates OUTDIR if needed, takes its lock (waiting up to
 // lockWait), removes staging folders that earlier runs left behind, and
-// makes a staging folder.
-func openOutputSet(dir string) (*outputSet, error) {
+// makes a staging folder. held, when given, receives the set once the
+// lock is taken and before the staging folder exists, so that a signal
+// from then on finds the set to undo (interrupt) instead of leaving the
+// lock and the staging folder behind.
+func openOutputSet(dir string, held ...func(*outputSet)) (*outputSet, error) {
 	if fi, err := os.Lstat(dir); err == nil && fi.Mode()&fs.ModeSymlink != 0 {
 		if _, err := os.Stat(dir); err != nil {
 			target, _ := os.Readlink(dir)
@@ -106,12 +109,23 @@ func openOutputSet(dir string) (*outputSet, error) {
 		time.Sleep(50 * time.Millisecond)
 	}
 	s.removeStale()
+	for _, h := range held {
+		h(s)
+	}
+	s.mu.Lock()
+	if s.done { // interrupted (interrupt keeps mu: not reached then)
+		s.mu.Unlock()
+		return nil, machine(errors.New("interrupted"))
+	}
 	stage, err := os.MkdirTemp(dir, stagePrefix)
+	if err == nil {
+		s.stage = stage
+	}
+	s.mu.Unlock()
 	if err != nil {
 		s.abort()
 		return nil, machine(err)
 	}
-	s.stage = stage
 	return s, nil
 }
 

@@ -92,8 +92,8 @@ func TestManifest(t *testing.T) {
 		m.Input.SHA256 != want || m.Input.Bytes != int64(len(data)) || m.Project == nil || m.Project.Path != "p.toml" {
 		t.Errorf("manifest %+v", m)
 	}
-	if len(m.Files) != 4 {
-		t.Errorf("manifest lists %d files, want 4", len(m.Files))
+	if len(m.Files) != 5 { // results, schedule, report, annotated drawing, marks.json
+		t.Errorf("manifest lists %d files, want 5", len(m.Files))
 	}
 	res, _ := os.ReadFile(filepath.Join(c.out, resultsName))
 	if !bytes.Contains(res, []byte(`"input_sha256": "`+want+`"`)) {

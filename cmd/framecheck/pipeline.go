@@ -8,6 +8,7 @@ import (
 	"math"
 	"reflect"
 	"runtime"
+	"strings"
 	"sync"
 
 	"framecheck/check"
@@ -27,6 +28,12 @@ type outcome struct {
 	takeoff  framing.Takeoff
 	issues   dxfimport.IssueList // drawing, framing and design findings
 	path     *pathOutcome        // beams, posts, walls and joints of the load path; nil without beams or posts
+
+	inputs []check.Member    // each plan member's check input, same order
+	marks  map[string]string // every mark's name by its defining key, for marks.json
+	// marksFresh: marks.json named none of this plan's marks, so they
+	// were named afresh
+	marksFresh bool
 }
 
 // pipelineInput is what runs the pipeline: the plan file, its project,
@@ -37,6 +44,9 @@ type pipelineInput struct {
 	project  *Project
 	units    string // --units, overrides the project file and $INSUNITS
 	size     bool   // --size
+	// marks are the names of an earlier run's marks by their defining
+	// keys (OUTDIR's marks.json); nil: named afresh
+	marks map[string]string
 }
 
 // framingOptions maps the project file onto framing's options.
@@ -140,6 +150,7 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 		inputs[k], shifts[k], inputMsgs[k] = checkInput(p, plan, k)
 	}
 	badLoads := applyPointLoads(p, plan, inputs, shifts)
+	o.inputs = inputs
 	for k := range plan.Members {
 		m := &plan.Members[k]
 		msgs := append(inputMsgs[k], badLoads[k]...)
@@ -154,12 +165,14 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 	}
 	checkAll(inputs, shifts, usable, settings, p, o)
 	if in.size {
-		sizeRuns(plan, inputs, shifts, usable, settings, o)
+		sizeRuns(sameDepthGroups(plan, p.Sizing.SameDepth), inputs, shifts, usable, settings, o)
 	}
 
 	decideRunRows(plan, inputs, shifts, usable, settings, o)
 
-	// Final sizes, then marks and the takeoff.
+	// Final sizes, then marks (keyed without their size, so that --size
+	// renames none; names kept from marks.json) and the takeoff.
+	drawn := framing.MarkKeys(plan)
 	for k := range plan.Members {
 		if usable[k] && o.results[k].Size != "" {
 			plan.Members[k].Size = o.results[k].Size
@@ -171,7 +184,7 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 			plan.Members[k].SlopeFactor = math.Hypot(12, inputs[k].PitchRise12) / 12
 		}
 	}
-	framing.AssignMarks(plan)
+	o.marks, o.marksFresh = assignMarks(plan, drawn, in.marks)
 	for i := range o.rows {
 		o.rows[i].Size = plan.Members[plan.Runs[runIndex(plan, o.rows[i].Run)].Members[0]].Size
 	}
@@ -196,15 +209,46 @@ func firstBearing(m *framing.Member) float64 {
 	return m.Bearings[0].AtIn
 }
 
-// sizeRuns gives every member of a run the deepest size any of its members
-// needs: a run is framed in one size (common practice, no source), so an
-// edge joist that could be lighter takes its neighbours' size. Members that
-// change size are checked again, blocking solver included.
-func sizeRuns(plan *framing.Plan, inputs []check.Member, shifts []float64, usable []bool, s check.Settings, o *outcome) {
+// sameDepthGroups returns the groups of members that --size frames in
+// one depth, by [sizing] same_depth: each run of adjacent parallel joists
+// ("run"), the members loaded by the same zones ("zone", in plan order),
+// or none.
+func sameDepthGroups(plan *framing.Plan, sameDepth string) [][]int {
+	switch sameDepth {
+	case "none":
+		return nil
+	case "zone":
+		index := map[string]int{}
+		var groups [][]int
+		for k := range plan.Members {
+			z := strings.Join(plan.Members[k].Zones, "+")
+			gi, ok := index[z]
+			if !ok {
+				gi = len(groups)
+				index[z] = gi
+				groups = append(groups, nil)
+			}
+			groups[gi] = append(groups[gi], k)
+		}
+		return groups
+	}
+	groups := make([][]int, len(plan.Runs))
+	for i, run := range plan.Runs {
+		groups[i] = run.Members
+	}
+	return groups
+}
+
+// sizeRuns gives every member of each same-depth group (a run by default,
+// see sameDepthGroups) the deepest size any of its members needs: a run is
+// framed in one size (common practice, no source), so an edge joist that
+// could be lighter takes its neighbours' size. Members that change size
+// are checked again, blocking solver included.
+func sizeRuns(groups [][]int, inputs []check.Member, shifts []float64, usable []bool, s check.Settings, o *outcome) {
 	cache := map[string]check.Result{}
-	for _, run := range plan.Runs {
+	for _, members := range groups {
 		best, bestSec := "", check.Section{}
-		for _, k := range run.Members {
+		for _, k := range members {
 			if !usable[k] || o.results[k].Status == check.StatusError {
 				continue
 			}
@@ -220,7 +264,7 @@ func sizeRuns(plan *framing.Plan, inputs []check.Member, shifts []float64, usabl
 		if best == "" {
 			continue
 		}
-		for _, k := range run.Members {
+		for _, k := range members {
 			if !usable[k] || o.results[k].Size == best {
 				continue
 			}

@@ -264,6 +264,11 @@ type Sizing struct {
 	// BeamCandidates are the beam sizes `--size` tries for beams,
 	// smallest first: "(2) 2x10", "4x12".
 	BeamCandidates []string
+	// SameDepth is what keeps one joist depth when --size picks sizes:
+	// "run" (every joist of a run of adjacent parallel joists takes the
+	// deepest size any of them needs), "zone" (the same over each load
+	// zone) or "none" (each joist its own lightest size).
+	SameDepth string
 }
 
 // Allowed values of the project file's enumerated keys.
@@ -273,6 +278,7 @@ var (
 	temperatureValues = []string{"normal", "warm", "hot"}
 	useValues         = []string{"floor", "roof"}
 	ceilingValues     = []string{"plaster", "non-plaster", "none"}
+	sameDepthValues   = []string{"run", "zone", "none"}
 )
 
 // defaultBearingIn is the bearing length a [[support]] table gets when it
@@ -287,10 +293,15 @@ var defaultBearingIn = map[string]float64{
 }
 
 // defaultSupports are the support tables of a file without [[support]].
+// S-WALL and S-BEAM are the structural wall and beam layers of the US
+// National CAD Standard, as recalled, not read from the standard (from
+// memory, verify). A beam on S-BEAM is taken as flush (joists in
+// hangers, 1.5 in seat): the shorter bearing of the two beam kinds, so a
+// dropped beam drawn there is checked on the safe side.
 func defaultSupports() []Support {
 	return []Support{
-		{Layers: []string{"WALL*"}, Kind: "bearing-wall", BearingIn: 3.5, Check: true},
-		{Layers: []string{"BEAM-FLUSH*"}, Kind: "flush-beam", BearingIn: 1.5, Check: true},
+		{Layers: []string{"WALL*", "S-WALL*"}, Kind: "bearing-wall", BearingIn: 3.5, Check: true},
+		{Layers: []string{"BEAM-FLUSH*", "S-BEAM*"}, Kind: "flush-beam", BearingIn: 1.5, Check: true},
 	}
 }
 

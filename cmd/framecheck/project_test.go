@@ -178,8 +178,9 @@ func TestDefaultProject(t *testing.T) {
 	if p.Drawing != (DrawingSettings{SnapToleranceIn: 1.5, MaxWallThicknessIn: 12}) {
 		t.Errorf("drawing %+v", p.Drawing)
 	}
-	wantSup := []Support{{Layers: []string{"WALL*"}, Kind: "bearing-wall", BearingIn: 3.5, Check: true},
-		{Layers: []string{"BEAM-FLUSH*"}, Kind: "flush-beam", BearingIn: 1.5, Check: true}}
+	// S-WALL, S-BEAM: US National CAD Standard structural layers, from memory: verify
+	wantSup := []Support{{Layers: []string{"WALL*", "S-WALL*"}, Kind: "bearing-wall", BearingIn: 3.5, Check: true},
+		{Layers: []string{"BEAM-FLUSH*", "S-BEAM*"}, Kind: "flush-beam", BearingIn: 1.5, Check: true}}
 	if !reflect.DeepEqual(p.Supports, wantSup) {
 		t.Errorf("supports %+v", p.Supports)
 	}
@@ -199,15 +200,16 @@ func TestDefaultProject(t *testing.T) {
 		t.Errorf("lumber %+v", p.Lumber)
 	}
 	if !reflect.DeepEqual(p.Sizing, Sizing{[]string{"2x6", "2x8", "2x10", "2x12", "2x14"}, 2,
-		[]string{"(2) 2x10", "(3) 2x10", "(2) 2x12", "(3) 2x12", "4x12"}}) {
+		[]string{"(2) 2x10", "(3) 2x10", "(2) 2x12", "(3) 2x12", "4x12"}, "run"}) {
 		t.Errorf("sizing %+v", p.Sizing)
 	}
 	used := strings.Join(p.DefaultsUsed(), "\n")
 	for _, s := range []string{
 		"drawing.units: from the DXF header ($INSUNITS)",
 		"drawing.snap_tolerance_in = 1.5",
-		"layers.joists = [\"JOIST*\"]",
-		"[[support]]: none given; [\"WALL*\"] bearing-wall (bearing 3.5 in); [\"BEAM-FLUSH*\"] flush-beam (bearing 1.5 in)",
+		"layers.joists = [\"JOIST*\", \"S-JOIS*\"]",
+		"layers.labels = [\"FRAMING-NOTE*\", \"S-ANNO-NOTE*\", \"S-ANNO-TEXT*\"]",
+		"[[support]]: none given; [\"WALL*\", \"S-WALL*\"] bearing-wall (bearing 3.5 in); [\"BEAM-FLUSH*\", \"S-BEAM*\"] flush-beam (bearing 1.5 in)",
 		"design.combinations = \"ASCE 7-16\"",
 		"[[zone]]: none given; one zone FLOOR: floor, D 12 psf, L 40 psf, ceiling non-plaster, L/360 live, L/240 total",
 		"loads.default_zone = \"FLOOR\" (the only zone)",
@@ -295,6 +297,9 @@ func TestFullProject(t *testing.T) {
 	}
 	if !p.Design.BraceAtInflection {
 		t.Error("design.brace_at_inflection = true not read")
+	}
+	if p.Sizing.SameDepth != "zone" {
+		t.Errorf("sizing.same_depth = %q, want zone", p.Sizing.SameDepth)
 	}
 	if p.Supports[1].BearingIn != 3.5 || p.Supports[3].BearingIn != 1.5 {
 		t.Errorf("bearing by kind: %+v", p.Supports)

@@ -79,7 +79,7 @@ var schema = []struct {
 	{"[[zone]]", []string{"name", "use", "allow_zero", "dead_psf", "live_psf", "roof_live_psf", "snow_psf", "wind_down_psf",
 		"wind_up_psf", "ceiling", "ceiling_braces_bottom", "live_deflection_limit", "total_deflection_limit",
 		"uplift_dead_psf", "pitch", "dead_on_slope", "long_term_deflection_limit"}},
-	{"[sizing]", []string{"candidates", "blocking_piece_weight_bf", "beam_candidates"}},
+	{"[sizing]", []string{"candidates", "blocking_piece_weight_bf", "beam_candidates", "same_depth"}},
 	{"[[post]]", []string{"layers", "size", "species", "grade", "height_in", "ke"}},
 	{"[[point_load]]", []string{"name", "dead_lb", "live_lb", "roof_live_lb", "snow_lb", "wind_down_lb", "wind_up_lb"}},
 }

@@ -46,9 +46,13 @@ func (ld *loader) drawing(t *table) {
 
 func (ld *loader) layers(t *table) {
 	l := &ld.p.Layers
+	// The S- patterns are the structural layers of the US National CAD
+	// Standard (discipline S, major group JOIS joists, ANNO-NOTE and
+	// ANNO-TEXT notes; see defaultSupports for walls and beams), as
+	// recalled, not read from the standard: from memory, verify.
 	*l = LayerRoles{
-		Joists: []string{"JOIST*"}, Blocking: []string{"BLOCKING*"},
-		Zones: []string{"LOAD-ZONE*"}, Labels: []string{"FRAMING-NOTE*"},
+		Joists: []string{"JOIST*", "S-JOIS*"}, Blocking: []string{"BLOCKING*"},
+		Zones: []string{"LOAD-ZONE*"}, Labels: []string{"FRAMING-NOTE*", "S-ANNO-NOTE*", "S-ANNO-TEXT*"},
 		Bays:  []string{"FRAMING-BAY*"},
 		Posts: []string{"POST*"}, PointLoads: []string{"POINT-LOAD*"},
 	}
@@ -466,6 +470,12 @@ func (ld *loader) sizing(t *table) {
 	ld.num(t, "blocking_piece_weight_bf", "board feet", &s.BlockingPieceWeightBf, weightRule)
 	s.BeamCandidates = []string{"(2) 2x10", "(3) 2x10", "(2) 2x12", "(3) 2x12", "4x12"}
 	ld.quietList(t, "beam_candidates", &s.BeamCandidates, memberSizeCheck)
+	s.SameDepth = "run"
+	if has(t, "same_depth") {
+		ld.enum(t, "same_depth", &s.SameDepth, sameDepthValues)
+	} else {
+		ld.get(t, "same_depth", "")
+	}
 }
 
 // patternOwners reports a layer pattern that belongs to two roles: two

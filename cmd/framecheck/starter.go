@@ -33,11 +33,12 @@ edge_distance_in = 0.0        # extra width added to the tributary width of the 
 
 [layers]
 # Which drawing layers play which part. Patterns ignore case; * matches
-# any run of characters and ? a single one.
-joists = ["JOIST*"]
+# any run of characters and ? a single one. The S- patterns are the
+# structural layer names of the US National CAD Standard.
+joists = ["JOIST*", "S-JOIS*"]
 blocking = ["BLOCKING*"]      # blocking rows already drawn; they brace the joists they cross
 zones = ["LOAD-ZONE*"]        # closed outlines with the load zone's name written inside
-labels = ["FRAMING-NOTE*"]    # size callouts such as "2x10 @ 16 o.c." and the span lines under them
+labels = ["FRAMING-NOTE*", "S-ANNO-NOTE*", "S-ANNO-TEXT*"]  # size callouts such as "2x10 @ 16 o.c." and the span lines under them
 bays = ["FRAMING-BAY*"]       # closed outlines of bays whose joists are not drawn, with a callout inside
 posts = ["POST*"]             # posts under beams: circles, small closed outlines, block inserts
 point_loads = ["POINT-LOAD*"] # point loads: a point, circle or block with a text such as "P: 1200 D, 800 L" (lb)
@@ -45,14 +46,14 @@ point_loads = ["POINT-LOAD*"] # point loads: a point, circle or block with a tex
 # One [[support]] table per kind of support. A layer pattern may belong
 # to one table only. Without any [[support]] table, the two below apply.
 [[support]]
-layers = ["WALL*"]
+layers = ["WALL*", "S-WALL*"]
 kind = "bearing-wall"         # bearing-wall | dropped-beam | flush-beam | ledger
 bearing_in = 3.5              # bearing on a single-line support; a double-line wall bears over its thickness
 # species = "Spruce-Pine-Fir" # the plate the joists bear on, if not the joists' own species and grade:
 # grade = "No.2"              # its Fc_perp is checked too, and the smaller governs
 
 [[support]]
-layers = ["BEAM-FLUSH*"]
+layers = ["BEAM-FLUSH*", "S-BEAM*"]
 kind = "flush-beam"           # joists framing in here hang in hangers, counted in the takeoff
 bearing_in = 1.5
 # A support other than a bearing wall whose own supports are found on the
@@ -124,6 +125,7 @@ allow_zero = false            # true: the zone may leave out (or give 0 for) its
 candidates = ["2x6", "2x8", "2x10", "2x12", "2x14"]
 blocking_piece_weight_bf = 2.0  # one blocking piece costs as much as this many board feet of joist
 beam_candidates = ["(2) 2x10", "(3) 2x10", "(2) 2x12", "(3) 2x12", "4x12"]  # beam sizes tried, smallest first
+same_depth = "run"            # run | zone | none: keep one joist depth per run or per zone, or none
 
 # Posts on the posts layers: one [[post]] table per kind of post. Without
 # a size and height (here or in a callout beside the post) a post's load
