@@ -275,6 +275,9 @@ func readCalloutLine(l string) (c Callout, hasSize bool, err error) {
 			if m[1] != "" && (n < 1 || n > maxPlies) {
 				return bad("%s plies: want 1 to %d", m[1], maxPlies)
 			}
+			if m[2] != "" && n != 0 && n > maxPlies { // "10-2x10"
+				return bad("%s plies: want 1 to %d", m[2], maxPlies)
+			}
 			if n > 0 {
 				c.Plies, l = n, rest
 			}
