@@ -373,5 +373,27 @@ func FuzzSolve(f *testing.F) {
 		_, _, _, _ = r.MomentExtremes(0, L)
 		_, _ = r.MaxDeflection(0, L)
 		_ = r.MomentSignChanges()
+		// The same beam under general loads built from the same numbers:
+		// a partial load and a point load (SolveLoads) must never panic
+		// and must keep statics.
+		a, c := math.Abs(math.Mod(w2, L)), math.Abs(math.Mod(w3, L))
+		if a > c {
+			a, c = c, a
+		}
+		gl := Loads{Partial: []PartialLoad{{FromIn: a, ToIn: c, WPli: w0}}, Points: []PointLoad{{AtIn: math.Abs(math.Mod(w1, L)), PLb: w1}}}
+		rg, err := b.SolveLoads(gl)
+		if err != nil {
+			return
+		}
+		sumG, loadG := 0.0, w0*(c-a)+w1
+		for _, R := range rg.Reactions() {
+			sumG += R
+		}
+		if scaleG := math.Abs(w0*(c-a)) + math.Abs(w1); finite(sumG) && math.Abs(sumG-loadG) > 1e-7*scaleG+1e-9 {
+			t.Fatalf("general loads: sum R = %g, load %g; beam %+v loads %+v", sumG, loadG, b, gl)
+		}
+		_, _, _, _ = rg.MomentExtremes(0, L)
+		_, _ = rg.MaxDeflection(0, L)
+		_ = rg.MomentSignChanges()
 	})
 }
