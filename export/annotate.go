@@ -34,6 +34,12 @@ type dxfFacts struct {
 	ModelSpace   string // handle of the *Model_Space block record
 	EOL          string // line ending of the first line
 	FirstSection string // name of the section that follows HEADER/CLASSES
+	// edits are the places where the copy differs from the input, in
+	// input order (annotate_copy.go); EOFOff and EOFLine are where the
+	// EOF pair starts.
+	edits   []dxfEdit
+	EOFOff  int64
+	EOFLine int
 }
 
 // modern reports R13 or later: subclass markers and owner handles.
@@ -47,6 +53,7 @@ func scanDXF(in io.Reader, path string) (*dxfFacts, error) {
 	facts := &dxfFacts{Layers: map[string]bool{}, EOL: "\n"}
 	pr := newPairReader(in, path)
 	var ctx dxfContext
+	var plan editPlan
 	var headerVar, recHandle, recName string
 	first := true
 	for {
@@ -64,6 +71,8 @@ func scanDXF(in io.Reader, path string) (*dxfFacts, error) {
 			first = false
 		}
 		wasSect := ctx.wantSect
+		afterSection := plan.afterSection
+		facts.planEdit(p, &ctx, &plan)
 		ctx.step(p)
 		if wasSect && !ctx.wantSect {
 			switch ctx.Section {
@@ -77,6 +86,12 @@ func scanDXF(in io.Reader, path string) (*dxfFacts, error) {
 		}
 		if p.Code == 0 && strings.EqualFold(p.Value, "EOF") {
 			facts.HasEOF = true
+			facts.EOFOff, facts.EOFLine = p.Off, p.Line
+			if afterSection {
+				// The copy takes the pair after SECTION as its name, so
+				// this EOF does not end the drawing for it.
+				return nil, &DXFError{File: path, Line: p.Line, Err: errors.New("EOF right after SECTION (no section name)")}
+			}
 			break
 		}
 		if p.Code == 0 {
@@ -221,7 +236,7 @@ func annotate(in io.ReadSeeker, inputPath, outputPath string, m Markup) error {
 		return fmt.Errorf("export: %w", err)
 	}
 	return writeAtomic(outputPath, func(w *bufio.Writer) error {
-		return copyAnnotated(newPairReader(in, inputPath), w, facts, &m)
+		return copyEdited(in, inputPath, w, facts, &m)
 	})
 }
 
@@ -235,7 +250,9 @@ type annotator struct {
 	newSeed   uint64
 }
 
-func copyAnnotated(pr *pairReader, w *bufio.Writer, facts *dxfFacts, m *Markup) error {
+// newAnnotator chooses our layers' colours, the layers to add, the
+// handles and the markup's extent for a copy written to w.
+func newAnnotator(w *bufio.Writer, facts *dxfFacts, m *Markup) *annotator {
 	a := &annotator{facts: facts, m: m}
 	a.colours = chooseColours(usedSet(append(append([]int(nil), facts.LayerColours...), m.UsedACI...)))
 	if facts.HasExtent && finite(facts.Lo[0]) && finite(facts.Lo[1]) && finite(facts.Hi[0]) && finite(facts.Hi[1]) {
@@ -263,109 +280,7 @@ func copyAnnotated(pr *pairReader, w *bufio.Writer, facts *dxfFacts, m *Markup) 
 	a.newSeed = start + count
 	a.em = &dxfEmitter{w: w, eol: facts.EOL, handles: facts.handles(), subclass: facts.modern(),
 		next: start, owner: facts.ModelSpace}
-
-	var ctx dxfContext
-	var headerVar string
-	seededHeader, layerCountDone, emitted := false, false, false
-	raw := func(p pair) {
-		w.WriteString(p.RawCode)
-		w.WriteString(p.RawValue)
-	}
-	for {
-		p, err := pr.next()
-		if err != nil {
-			if err == io.EOF {
-				return &DXFError{File: pr.file, Line: pr.line, Err: ErrNoEOF}
-			}
-			return err
-		}
-		// Decisions that come before the pair is written.
-		if p.Code == 0 {
-			switch strings.ToUpper(p.Value) {
-			case "ENDSEC":
-				switch ctx.Section {
-				case "HEADER":
-					if a.em.handles && !seededHeader {
-						a.em.pair(9, "$HANDSEED")
-						a.em.pair(5, strconv.FormatUint(a.newSeed, 16))
-					}
-				case "TABLES":
-					if !facts.HasLayerTab {
-						a.layerTable()
-					}
-				case "ENTITIES":
-					if !emitted {
-						a.em.markup(m, a.colours)
-						emitted = true
-					}
-				}
-			case "ENDTAB":
-				if ctx.Table == "LAYER" {
-					a.layers()
-				}
-			case "SECTION":
-				// Look ahead at the section name: a drawing without TABLES
-				// gets one before its BLOCKS or ENTITIES section.
-				name, err := pr.next()
-				if err != nil {
-					if err == io.EOF {
-						return &DXFError{File: pr.file, Line: pr.line, Err: ErrNoEOF}
-					}
-					return err
-				}
-				up := strings.ToUpper(name.Value)
-				if !facts.HasTables && (up == "BLOCKS" || up == "ENTITIES") {
-					a.tablesSection()
-					facts.HasTables, facts.HasLayerTab = true, true
-				}
-				raw(p)
-				raw(name)
-				ctx.step(p)
-				ctx.step(name)
-				continue
-			case "EOF":
-				if !facts.HasTables {
-					a.tablesSection()
-				}
-				if facts.HasEntities && !emitted {
-					return &DXFError{File: pr.file, Line: p.Line, Err: errors.New("EOF inside the ENTITIES section (no ENDSEC)")}
-				}
-				if !facts.HasEntities {
-					a.em.pair(0, "SECTION")
-					a.em.pair(2, "ENTITIES")
-					a.em.markup(m, a.colours)
-					a.em.pair(0, "ENDSEC")
-				}
-				raw(p)
-				// Whatever follows EOF is copied as it is.
-				_, err := io.Copy(w, pr.r)
-				return err
-			}
-		}
-		// Values that change.
-		switch {
-		case ctx.Section == "HEADER" && p.Code == 9:
-			headerVar = strings.ToUpper(p.Value)
-		case ctx.Section == "HEADER" && headerVar == "$HANDSEED" && p.Code == 5 && a.em.handles:
-			w.WriteString(p.RawCode)
-			w.WriteString(strconv.FormatUint(a.newSeed, 16) + facts.EOL)
-			seededHeader = true
-			ctx.step(p)
-			continue
-		case ctx.Table == "LAYER" && ctx.TableHead && p.Code == 70 && !layerCountDone:
-			n, err := strconv.Atoi(p.Value)
-			if err != nil {
-				return &DXFError{File: pr.file, Line: p.Line, Err: fmt.Errorf("LAYER table count %q: want an integer", p.Value)}
-			}
-			w.WriteString(p.RawCode)
-			w.WriteString(strconv.Itoa(n+len(a.newLayers)) + facts.EOL)
-			layerCountDone = true
-			ctx.step(p)
-			continue
-		}
-		raw(p)
-		ctx.step(p)
-	}
+	return a
 }
 
 // layers writes our new LAYER records.

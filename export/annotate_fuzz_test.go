@@ -19,7 +19,7 @@ func annotateBytes(in []byte, m *Markup) ([]byte, error) {
 	}
 	var out bytes.Buffer
 	w := bufio.NewWriter(&out)
-	if err := copyAnnotated(newPairReader(bytes.NewReader(in), "fuzz.dxf"), w, facts, m); err != nil {
+	if err := copyEdited(bytes.NewReader(in), "fuzz.dxf", w, facts, m); err != nil {
 		return nil, err
 	}
 	if err := w.Flush(); err != nil {
@@ -45,6 +45,14 @@ func FuzzAnnotate(f *testing.F) {
 	}}, 1)
 	f.Fuzz(func(t *testing.T, in []byte) {
 		out, err := annotateBytes(in, &m)
+		// The range copy writes what the pair-by-pair copy wrote.
+		ref, refErr := annotateBytesReference(in, &m)
+		if (err == nil) != (refErr == nil) && !sectionThenEOF(in) {
+			t.Fatalf("range copy error %v, pair-by-pair copy error %v", err, refErr)
+		}
+		if err == nil && refErr == nil && !bytes.Equal(out, ref) {
+			t.Fatalf("range copy differs from the pair-by-pair copy")
+		}
 		if err != nil {
 			var de *DXFError
 			if !errors.As(err, &de) || de.Line < 0 {
@@ -76,4 +84,69 @@ func FuzzAnnotate(f *testing.F) {
 			t.Fatalf("%d markup entities in ENTITIES, want at least %d", ours, markupEntityCount(&m))
 		}
 	})
+}
+
+// annotateBytesReference is annotateBytes with the pair-by-pair copy of
+// annotate_ref_test.go.
+func annotateBytesReference(in []byte, m *Markup) ([]byte, error) {
+	facts, err := scanDXF(bytes.NewReader(in), "fuzz.dxf")
+	if err != nil {
+		return nil, err
+	}
+	var out bytes.Buffer
+	w := bufio.NewWriter(&out)
+	if err := copyAnnotated(newPairReader(bytes.NewReader(in), "fuzz.dxf"), w, facts, m); err != nil {
+		return nil, err
+	}
+	if err := w.Flush(); err != nil {
+		return nil, err
+	}
+	return out.Bytes(), nil
+}
+
+// sectionThenEOF reports whether a 0/SECTION pair is followed directly by
+// the EOF pair: the pair-by-pair copy took EOF for the section's name and
+// read on; the range copy reports the drawing as malformed.
+func sectionThenEOF(in []byte) bool {
+	pr := newPairReader(bytes.NewReader(in), "x")
+	prevSection := false
+	for {
+		p, err := pr.next()
+		if err != nil {
+			return false
+		}
+		eof := p.Code == 0 && strings.EqualFold(p.Value, "EOF")
+		if eof && prevSection {
+			return true
+		}
+		if eof {
+			return false
+		}
+		prevSection = p.Code == 0 && strings.EqualFold(p.Value, "SECTION")
+	}
+}
+
+// TestAnnotateSameAsPairCopy: on the test plans (R12, R2000, minimal) and
+// a synthetic plan of the kind samples/bigplan writes, the range copy
+// writes the same bytes as the pair-by-pair copy. Common practice, no
+// source.
+func TestAnnotateSameAsPairCopy(t *testing.T) {
+	m := fixtureMarkup(t, 1)
+	for _, name := range []string{"plan_r12.dxf", "plan_r2000.dxf", "plan_min_r12.dxf"} {
+		in, err := os.ReadFile(filepath.Join("testdata", name))
+		if err != nil {
+			t.Fatal(err)
+		}
+		got, err := annotateBytes(in, &m)
+		if err != nil {
+			t.Fatal(err)
+		}
+		want, err := annotateBytesReference(in, &m)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if !bytes.Equal(got, want) {
+			t.Errorf("%s: range copy differs from the pair-by-pair copy", name)
+		}
+	}
 }

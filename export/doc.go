@@ -12,11 +12,14 @@
 //
 // Writers:
 //
-//	WriteJSON(path, r)          results.json, schema "framecheck-results/2"; one member,
-//	                            calculation, mark, blocking row or uplift bearing per line; traces and
-//	                            factors once per calculation; NaN/Inf written as 0 and
-//	                            reported as a *NonFiniteError after the write
-//	ReadJSON(path)              results.json back into Results, traces in place
+//	WriteJSON(path, r)          results.json, schema "framecheck-results/3" (docs/RESULTS-SCHEMA.md);
+//	                            one member, calculation, info list, mark, blocking row or uplift
+//	                            bearing per line; checks, traces and factors once per calculation,
+//	                            info lines once per list; numbers to 6 significant digits
+//	                            (json_num.go); NaN/Inf written as 0 and reported as a
+//	                            *NonFiniteError after the write
+//	ReadJSON(path)              results.json back into Results, checks, traces and info in place
+//	                            (schemas 3, 2 and 1)
 //	WriteXLSX(path, r)          sheets Members, Marks, Blocking, Takeoff, Uplift, Inputs, Notes
 //	                            (excelize writes the workbook; the Members rows are
 //	                            written here and spliced in, see xlsx_members.go)

@@ -49,7 +49,10 @@ func (e *dxfEmitter) handle() {
 	if !e.handles {
 		return
 	}
-	e.pair(5, strconv.FormatUint(e.next, 16))
+	e.code(5)
+	e.scratch = strconv.AppendUint(e.scratch[:0], e.next, 16)
+	e.w.Write(e.scratch)
+	e.w.WriteString(e.eol)
 	e.next++
 }
 
@@ -115,6 +118,16 @@ func (e *dxfEmitter) alignedText(layer string, at [2]float64, h, deg float64, s 
 // become spaces and other non-ASCII characters the DXF escape \U+XXXX, so
 // the file reads the same whatever its code page ($DWGCODEPAGE).
 func cleanText(s string) string {
+	clean := true
+	for i := 0; i < len(s); i++ {
+		if c := s[i]; c < 0x20 || c >= 0x7f {
+			clean = false
+			break
+		}
+	}
+	if clean {
+		return s // plain printable ASCII: nothing to change, nothing allocated
+	}
 	var b strings.Builder
 	for _, r := range s {
 		switch {

@@ -43,6 +43,7 @@ type pair struct {
 	RawCode  string // the code line as read, line ending included
 	RawValue string // the value line as read, line ending included
 	Line     int    // 1-based line of the group code
+	Off      int64  // byte offset of the code line in the input
 }
 
 // pairReader reads pairs from an ASCII DXF stream.
@@ -50,6 +51,7 @@ type pairReader struct {
 	r    *bufio.Reader
 	file string
 	line int
+	off  int64  // bytes read so far (the lines handed out)
 	text []byte // chunk the lines are copied into (see readLine)
 }
 
@@ -79,6 +81,7 @@ func (p *pairReader) readLine() (string, error) {
 		return "", err
 	}
 	p.line++
+	p.off += int64(len(b))
 	if cap(p.text)-len(p.text) < len(b) {
 		p.text = make([]byte, 0, max(1<<16, len(b)))
 	}
@@ -89,6 +92,7 @@ func (p *pairReader) readLine() (string, error) {
 
 // next returns the next pair; io.EOF at a clean end of input.
 func (p *pairReader) next() (pair, error) {
+	off := p.off
 	codeLine, err := p.readLine()
 	if err != nil {
 		if err == io.EOF {
@@ -114,7 +118,7 @@ func (p *pairReader) next() (pair, error) {
 	}
 	return pair{
 		Code: code, Value: strings.TrimSpace(valueLine),
-		RawCode: codeLine, RawValue: valueLine, Line: line,
+		RawCode: codeLine, RawValue: valueLine, Line: line, Off: off,
 	}, nil
 }
 

@@ -330,7 +330,7 @@ func WriteJSON(path string, r *Results) error {
 	}
 	clean, fields := Sanitize(r)
 	err := writeAtomic(path, func(w *bufio.Writer) error {
-		return encodeResults(w, clean)
+		return encodeResults(w, clean, layoutV3)
 	})
 	if err != nil {
 		return err
@@ -341,10 +341,10 @@ func WriteJSON(path string, r *Results) error {
 	return nil
 }
 
-// encodeResults writes r as JSON: the top-level keys one per line, list
-// items one per line.
-func encodeResults(w *bufio.Writer, r *Results) error {
-	schema := Schema // the layout written here, whatever r.Schema says
+// encodeResults writes r as JSON in layout lay: the top-level keys one per
+// line, list items one per line.
+func encodeResults(w *bufio.Writer, r *Results, lay jsonLayout) error {
+	schema := lay.schema // the layout written here, whatever r.Schema says
 	first := true
 	key := func(name string) {
 		if !first {
@@ -387,7 +387,7 @@ func encodeResults(w *bufio.Writer, r *Results) error {
 	list := func(name string, n int, item func(i int) any) error {
 		return listBytes(name, n, func(i int) ([]byte, error) { return json.Marshal(item(i)) })
 	}
-	me := newMemberEncoder()
+	me := newMemberEncoder(lay)
 	calcs := newCalcTable()
 	w.WriteString("{\n")
 	steps := []func() error{
@@ -419,7 +419,13 @@ func encodeResults(w *bufio.Writer, r *Results) error {
 				return me.encode(&m, &r.Members[i])
 			})
 		},
-		func() error { return calcs.write(w, key) },
+		func() error { return calcs.write(w, key, lay.refs) },
+		func() error {
+			if !lay.refs {
+				return nil
+			}
+			return me.infos.write(w, key)
+		},
 		func() error {
 			return list("marks", len(r.Marks), func(i int) any {
 				m := r.Marks[i]

@@ -5,6 +5,7 @@ import (
 	"encoding/json"
 	"reflect"
 	"strconv"
+	"strings"
 )
 
 // Calculation is an entry of results.json's "calculations": the checks of
@@ -64,19 +65,106 @@ func sliceID[T any](s []T) cleanSlice {
 	return cleanSlice{v.Pointer(), v.Len(), v.Type()}
 }
 
-// calculation returns m's checks and factors as a Calculation.
-func calculation(m *Member) Calculation {
-	c := Calculation{Checks: make([]CalcCheck, len(m.Checks)), Factors: orEmpty(m.Factors)}
+// calculation returns m's checks and factors as a Calculation; with
+// round, every number rounded to SigDigits significant digits (copies:
+// m's slices are left as they are).
+func calculation(m *Member, round bool) Calculation {
+	items := func(ts []TraceItem) []TraceItem {
+		if !round || len(ts) == 0 {
+			return orEmpty(ts)
+		}
+		out := make([]TraceItem, len(ts))
+		for i, t := range ts {
+			t.Value = round6(t.Value)
+			out[i] = t
+		}
+		return out
+	}
+	c := Calculation{Checks: make([]CalcCheck, len(m.Checks)), Factors: items(m.Factors)}
 	for i, ch := range m.Checks {
-		c.Checks[i] = CalcCheck(ch)
-		c.Checks[i].Trace = orEmpty(ch.Trace)
+		cc := CalcCheck(ch)
+		cc.Trace = items(ch.Trace)
+		if round {
+			cc.Actual, cc.Allowable, cc.Ratio = round6(cc.Actual), round6(cc.Allowable), round6(cc.Ratio)
+		}
+		c.Checks[i] = cc
 	}
 	return c
 }
 
+// jsonLayout is how encodeResults lays results.json out. layoutV3 is what
+// WriteJSON writes (Schema); layoutV2 is kept for the test that compares
+// the two schemas member by member.
+type jsonLayout struct {
+	schema string
+	// refs: members without their checks (the calculation's) and with
+	// their info lines as a reference into "info_lists"; numbers with the
+	// digits they carry (json_num.go).
+	refs bool
+}
+
+var (
+	layoutV2 = jsonLayout{schema: "framecheck-results/2"}
+	layoutV3 = jsonLayout{schema: Schema, refs: true}
+)
+
+// infoTable numbers the distinct info lists in the order members meet
+// them: I1, I2, ... Members checked alike share one slice, found by its
+// address; equal lists in different slices share an id too.
+type infoTable struct {
+	bySlice map[cleanSlice]string
+	byText  map[string]string
+	order   [][]string
+}
+
+func newInfoTable() *infoTable {
+	return &infoTable{bySlice: map[cleanSlice]string{}, byText: map[string]string{}}
+}
+
+// id returns the id of the list info (not empty), numbering it when new.
+func (t *infoTable) id(info []string) string {
+	k := sliceID(info)
+	if id, ok := t.bySlice[k]; ok {
+		return id
+	}
+	text := strings.Join(info, "\x00")
+	id, ok := t.byText[text]
+	if !ok {
+		t.order = append(t.order, info)
+		id = "I" + strconv.Itoa(len(t.order))
+		t.byText[text] = id
+	}
+	t.bySlice[k] = id
+	return id
+}
+
+// write writes "info_lists" as a JSON object, one list per line.
+func (t *infoTable) write(w *bufio.Writer, key func(string)) error {
+	key("info_lists")
+	if len(t.order) == 0 {
+		w.WriteString("{}")
+		return nil
+	}
+	w.WriteString("{\n")
+	for i, info := range t.order {
+		b, err := json.Marshal(info)
+		if err != nil {
+			return err
+		}
+		w.WriteString("  \"I" + strconv.Itoa(i+1) + "\": ")
+		w.Write(b)
+		if i < len(t.order)-1 {
+			w.WriteByte(',')
+		}
+		w.WriteByte('\n')
+	}
+	w.WriteString(" }")
+	return nil
+}
+
 // write writes "calculations" as a JSON object, one entry per line, in
 // the order of their ids.
-func (t *calcTable) write(w *bufio.Writer, key func(string)) error {
+func (t *calcTable) write(w *bufio.Writer, key func(string), round bool) error {
 	key("calculations")
 	if len(t.order) == 0 {
 		w.WriteString("{}")
@@ -84,7 +172,7 @@ func (t *calcTable) write(w *bufio.Writer, key func(string)) error {
 	}
 	w.WriteString("{\n")
 	for i, m := range t.order {
-		b, err := json.Marshal(calculation(m))
+		b, err := json.Marshal(calculation(m, round))
 		if err != nil {
 			return err
 		}

@@ -9,15 +9,19 @@ import (
 	"unicode/utf8"
 )
 
-// memberEncoder writes a member exactly as json.Marshal does
-// memberForJSON(m) with the checks' traces left out, field by field and
-// without reflection (results.json holds one line per member, 100,000 of
-// them on a large plan), and encodes each distinct checks slice once:
-// members checked alike share it (the caller checks identical members
-// once). TestMemberEncoderMatchesMarshal holds it to encoding/json, with
-// every field of Member set: a field added to Member and not here fails
-// it.
+// memberEncoder writes a member field by field and without reflection
+// (results.json holds one line per member, 100,000 of them on a large
+// plan). In layout 2 it writes exactly what json.Marshal does for
+// memberForJSON(m) with the checks' traces left out, encoding each distinct
+// checks slice once (members checked alike share it);
+// TestMemberEncoderMatchesMarshal holds it to encoding/json, with every
+// field of Member set: a field added to Member and not here fails it. In
+// layout 3 (WriteJSON) the same fields less the checks, the info lines as
+// an id of "info_lists", and numbers as json_num.go writes them.
 type memberEncoder struct {
+	lay jsonLayout
+	// infos numbers the distinct info lists (schema 3).
+	infos *infoTable
 	// seen holds the slices met once; cache the JSON of those met again.
 	// A plan whose members are all different caches nothing.
 	seen  map[cleanSlice]bool
@@ -25,8 +29,8 @@ type memberEncoder struct {
 	buf   []byte // the last member written, reused
 }
 
-func newMemberEncoder() *memberEncoder {
-	return &memberEncoder{seen: map[cleanSlice]bool{}, cache: map[cleanSlice][]byte{}}
+func newMemberEncoder(lay jsonLayout) *memberEncoder {
+	return &memberEncoder{lay: lay, infos: newInfoTable(), seen: map[cleanSlice]bool{}, cache: map[cleanSlice][]byte{}}
 }
 
 // encode returns the JSON of member m (already through memberForJSON),
@@ -34,6 +38,7 @@ func newMemberEncoder() *memberEncoder {
 // A NaN or infinite number is an error, as with encoding/json.
 func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 	var w jsonOut
+	w.round = e.lay.refs
 	w.b = append(e.buf[:0], '{')
 	w.str("id", m.ID)
 	w.str("mark", m.Mark)
@@ -53,8 +58,8 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 		w.key("generated")
 		w.b = append(w.b, "true"...)
 	}
-	w.floats("start", m.Start[:])
-	w.floats("end", m.End[:])
+	w.coords("start", m.Start[:])
+	w.coords("end", m.End[:])
 	w.num("length_in", m.LengthIn)
 	w.floats("bearings_at_in", m.BearingsAtIn)
 	w.floats("spans_in", m.SpansIn)
@@ -85,15 +90,17 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 	if m.Calculation != "" {
 		w.str("calculation", m.Calculation)
 	}
-	checks, err := e.checksJSON(orig.Checks)
-	if err != nil {
-		return nil, err
-	}
-	w.key("checks")
-	if m.Checks == nil {
-		w.b = append(w.b, "null"...)
-	} else {
-		w.b = append(w.b, checks...)
+	if !e.lay.refs { // schema 3: the checks are the calculation's
+		checks, err := e.checksJSON(orig.Checks)
+		if err != nil {
+			return nil, err
+		}
+		w.key("checks")
+		if m.Checks == nil {
+			w.b = append(w.b, "null"...)
+		} else {
+			w.b = append(w.b, checks...)
+		}
 	}
 	w.str("governing", m.Governing)
 	w.num("max_ratio", m.MaxRatio)
@@ -128,7 +135,11 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 		w.first = false
 	}
 	if len(m.Info) > 0 {
-		w.strs("info", m.Info)
+		if e.lay.refs {
+			w.str("info_list", e.infos.id(m.Info))
+		} else {
+			w.strs("info", m.Info)
+		}
 	}
 	if len(m.Factors) > 0 { // never in the file (see memberForJSON); kept for parity
 		b, err := json.Marshal(m.Factors)
@@ -152,6 +163,9 @@ type jsonOut struct {
 	b     []byte
 	first bool // no field written yet in the current object (after '{')
 	err   error
+	// round writes numbers with the digits they carry (schema 3):
+	// SigDigits significant digits, coordinates to CoordDecimals places.
+	round bool
 }
 
 // key writes "name": with the comma before it when needed.
@@ -184,7 +198,22 @@ func (w *jsonOut) float(v float64) {
 		w.b = append(w.b, '0')
 		return
 	}
+	if w.round {
+		w.b = appendSig6(w.b, v)
+		return
+	}
 	w.b = appendJSONFloat(w.b, v)
+}
+
+// coords writes plan coordinates: to CoordDecimals places when rounding.
+func (w *jsonOut) coords(name string, vs []float64) {
+	writeList(w, name, vs, func(v float64) {
+		if w.round && !math.IsNaN(v) && !math.IsInf(v, 0) {
+			w.b = appendPlanCoord(w.b, v)
+			return
+		}
+		w.float(v)
+	})
 }
 
 // floats writes a list of numbers; nil as null.

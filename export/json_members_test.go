@@ -104,7 +104,7 @@ func awkwardJSONMember() Member {
 // same member with its checks' traces left out. It returns the encoder.
 func encoderMatchesMarshal(t *testing.T, members []Member) *memberEncoder {
 	t.Helper()
-	e := newMemberEncoder()
+	e := newMemberEncoder(layoutV2)
 	for i := range members {
 		m := memberForJSON(members[i], "C1")
 		ref := m

@@ -8,11 +8,15 @@ import (
 
 // ReadJSON reads a results.json that WriteJSON wrote and returns the
 // Results as they were in memory: each member's checks with their traces
-// and its factors, taken from its calculation (members of one calculation
-// share those slices). Files of schema framecheck-results/1, whose members
-// carry their own traces, are read as they are. Errors name the file and,
-// for a member whose calculation is missing or does not match its checks,
-// the member.
+// and its factors, taken from its calculation, and its info lines, taken
+// from "info_lists" (members of one calculation or one list share those
+// slices). Numbers are those of the file: from schema 3 rounded as
+// json_num.go says. Files of schema framecheck-results/2 (members carry
+// their checks without traces and their info lines) and
+// framecheck-results/1 (members carry their own traces) are read too.
+// Top-level sections this function does not know of are read as Results
+// declares them. Errors name the file and, for a member whose calculation
+// or info list is missing or does not match its checks, the member.
 func ReadJSON(path string) (*Results, error) {
 	data, err := os.ReadFile(path)
 	if err != nil {
@@ -23,6 +27,19 @@ func ReadJSON(path string) (*Results, error) {
 
 // ParseJSON is ReadJSON on data read from the file named name.
 func ParseJSON(name string, data []byte) (*Results, error) {
+	var head struct {
+		Schema string `json:"schema"`
+	}
+	if err := json.Unmarshal(data, &head); err != nil {
+		return nil, fmt.Errorf("%s: %w", name, err)
+	}
+	switch head.Schema {
+	case Schema:
+		return parseV3(name, data)
+	case "framecheck-results/1", "framecheck-results/2":
+	default:
+		return nil, fmt.Errorf("%s: schema %q: want %q, framecheck-results/2 or framecheck-results/1", name, head.Schema, Schema)
+	}
 	var f struct {
 		Results
 		Calculations map[string]Calculation `json:"calculations"`
@@ -31,12 +48,8 @@ func ParseJSON(name string, data []byte) (*Results, error) {
 		return nil, fmt.Errorf("%s: %w", name, err)
 	}
 	r := &f.Results
-	switch r.Schema {
-	case "framecheck-results/1":
+	if r.Schema == "framecheck-results/1" {
 		return r, nil
-	case Schema:
-	default:
-		return nil, fmt.Errorf("%s: schema %q: want %q or framecheck-results/1", name, r.Schema, Schema)
 	}
 	shared := make(map[string][]Check, len(f.Calculations))
 	for i := range r.Members {
@@ -68,5 +81,61 @@ func ParseJSON(name string, data []byte) (*Results, error) {
 		m.Checks = cs
 		m.Factors = c.Factors
 	}
+	return r, nil
+}
+
+// fileMemberV3 is a member as schema 3 writes it: no checks, its info
+// lines named in InfoList.
+type fileMemberV3 struct {
+	Member
+	InfoList string `json:"info_list"`
+}
+
+// parseV3 reads a schema 3 file: each member's checks and factors from its
+// calculation, its info lines from "info_lists".
+func parseV3(name string, data []byte) (*Results, error) {
+	var f struct {
+		Results
+		Members      []fileMemberV3         `json:"members"`
+		Calculations map[string]Calculation `json:"calculations"`
+		InfoLists    map[string][]string    `json:"info_lists"`
+	}
+	if err := json.Unmarshal(data, &f); err != nil {
+		return nil, fmt.Errorf("%s: %w", name, err)
+	}
+	r := &f.Results
+	r.Members = make([]Member, len(f.Members))
+	shared := make(map[string][]Check, len(f.Calculations))
+	for i := range f.Members {
+		fm := &f.Members[i]
+		m := &r.Members[i]
+		*m = fm.Member
+		if fm.InfoList != "" {
+			info, ok := f.InfoLists[fm.InfoList]
+			if !ok {
+				return nil, fmt.Errorf("%s: member %s: info list %q not in \"info_lists\"", name, m.ID, fm.InfoList)
+			}
+			m.Info = info
+		}
+		if m.Calculation == "" {
+			m.Checks = []Check{}
+			continue
+		}
+		c, ok := f.Calculations[m.Calculation]
+		if !ok {
+			return nil, fmt.Errorf("%s: member %s: calculation %q not in \"calculations\"", name, m.ID, m.Calculation)
+		}
+		cs, ok := shared[m.Calculation]
+		if !ok {
+			cs = make([]Check, len(c.Checks))
+			for j, cc := range c.Checks {
+				cs[j] = Check(cc)
+			}
+			shared[m.Calculation] = cs
+		}
+		m.Checks = cs
+		m.Factors = c.Factors
+	}
+	f.Members = nil
 	return r, nil
 }

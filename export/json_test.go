@@ -14,11 +14,13 @@ import (
 )
 
 // contractKeys are the key names fixed by issue 5 (results.json contract),
-// with schema 2's calculations holding the traces.
+// with schema 2's calculations holding the traces and schema 3's holding
+// the checks too (a member names its calculation, and its info lines by
+// an id of "info_lists").
 var contractKeys = map[string][]string{
-	"top": {"schema", "plan", "drawing_units", "members", "calculations", "marks", "blocking_rows", "takeoff", "summary", "assumptions"},
+	"top": {"schema", "plan", "drawing_units", "members", "calculations", "info_lists", "marks", "blocking_rows", "takeoff", "summary", "assumptions"},
 	"member": {"id", "mark", "layer", "handle", "start", "end", "length_in", "bearings_at_in", "spans_in",
-		"overhangs_in", "trib_in", "size", "species", "grade", "zone", "calculation", "checks", "governing", "max_ratio",
+		"overhangs_in", "trib_in", "size", "species", "grade", "zone", "calculation", "governing", "max_ratio",
 		"blocking_rows_per_span", "blocking_at_in", "status", "messages"},
 	"check":       {"kind", "combo", "actual", "allowable", "unit", "ratio"},
 	"calculation": {"checks", "factors"},
@@ -51,7 +53,7 @@ func TestWriteJSONContract(t *testing.T) {
 		t.Fatal(err)
 	}
 	hasKeys(t, "top level", top, contractKeys["top"])
-	if top["schema"] != "framecheck-results/2" {
+	if top["schema"] != "framecheck-results/3" {
 		t.Errorf("schema = %v", top["schema"])
 	}
 	members := top["members"].([]any)
@@ -67,13 +69,12 @@ func TestWriteJSONContract(t *testing.T) {
 			t.Fatalf("member %d: calculation %v not in calculations", i, mm["calculation"])
 		}
 		hasKeys(t, "calculation", calc, contractKeys["calculation"])
-		cc := calc["checks"].([]any)
-		for j, c := range mm["checks"].([]any) {
+		if _, ok := mm["checks"]; ok {
+			t.Errorf("member %d: checks beside the member, want them in its calculation only", i)
+		}
+		for _, c := range calc["checks"].([]any) {
 			hasKeys(t, "check", c.(map[string]any), contractKeys["check"])
-			if _, ok := c.(map[string]any)["trace"]; ok {
-				t.Errorf("member %d check %d: trace beside the check, want it in the calculation", i, j)
-			}
-			hasKeys(t, "calc check", cc[j].(map[string]any), contractKeys["calc check"])
+			hasKeys(t, "calc check", c.(map[string]any), contractKeys["calc check"])
 		}
 		if i == 3 {
 			if mm["status"] != "fail" || mm["max_ratio"] != 1.12 || mm["governing"] != "bending-bottom" {
@@ -195,9 +196,15 @@ func TestWriteJSONEmptyListsAreArrays(t *testing.T) {
 		t.Fatal(err)
 	}
 	m := top["members"].([]any)[0].(map[string]any)
-	for _, k := range []string{"bearings_at_in", "spans_in", "checks", "blocking_rows_per_span", "blocking_at_in", "messages"} {
+	for _, k := range []string{"bearings_at_in", "spans_in", "blocking_rows_per_span", "blocking_at_in", "messages"} {
 		if _, ok := m[k].([]any); !ok {
 			t.Errorf("%s = %#v, want a list", k, m[k])
+		}
+	}
+	calc := top["calculations"].(map[string]any)[m["calculation"].(string)].(map[string]any)
+	for _, k := range []string{"checks", "factors"} {
+		if _, ok := calc[k].([]any); !ok {
+			t.Errorf("calculation %s = %#v, want a list", k, calc[k])
 		}
 	}
 }
@@ -231,9 +238,12 @@ func TestWriteJSONNonFinite(t *testing.T) {
 	if rerr != nil {
 		t.Fatal(rerr)
 	}
-	var back Results
-	if err := json.Unmarshal(data, &back); err != nil {
-		t.Fatalf("file is not valid JSON: %v", err)
+	if !json.Valid(data) {
+		t.Fatal("file is not valid JSON")
+	}
+	back, err := ReadJSON(path)
+	if err != nil {
+		t.Fatal(err)
 	}
 	m1, m2 := back.Members[1], back.Members[2]
 	if m1.Checks[0].Ratio != 0 || m1.MaxRatio != 0 || m1.Status != StatusError || len(m1.Messages) != 2 {

@@ -9,13 +9,14 @@ import (
 )
 
 // labelEveryMemberUpTo is the largest plan whose members each get a mark
-// label; larger plans label a member only where the mark changes from the
-// previous member in the Results order (position order), which still names
-// every run, and failing or erroring members always.
+// label; larger plans label each mark once per run (where it first comes
+// in the Results order, position order), which still names every run,
+// failing members once per stretch of a run and mark (with the largest
+// ratio) and erroring members always.
 const labelEveryMemberUpTo = 2000
 
-// planSVG writes the plan as one <svg> element, and the member details for
-// the hover panel (memberData). It is written by hand into one
+// planSVG writes the plan as one <svg> element, the members drawn by runs
+// (report_runs.go), and the member details for the panel (memberData). It is written by hand into one
 // buffer, not through the template, so that a plan of 100,000 members stays
 // fast: every string is escaped by appendHTML or appendJSString.
 //
@@ -26,7 +27,7 @@ func planSVG(r *Results, g *PlanGeometry) (template.HTML, template.JS) {
 	if !ok {
 		toInch = 1
 	}
-	type seg struct{ a, b [2]float64 }
+	type seg = memberSeg
 	segs := make([]seg, len(r.Members))
 	var bb bbox
 	minGap := math.Inf(1)
@@ -75,7 +76,7 @@ func planSVG(r *Results, g *PlanGeometry) (template.HTML, template.JS) {
 		textH = 0.6 * minGap
 	}
 
-	buf := make([]byte, 0, 256+len(r.Members)*200)
+	buf := make([]byte, 0, 4096+len(r.Members)*24)
 	buf = append(buf, `<svg id="plan-svg" xmlns="http://www.w3.org/2000/svg" preserveAspectRatio="xMidYMid meet" role="img" aria-label="framing plan coloured by ratio" viewBox="`...)
 	buf = appendCoord(buf, bb.lo[0]-pad)
 	buf = append(buf, ' ')
@@ -108,63 +109,45 @@ func planSVG(r *Results, g *PlanGeometry) (template.HTML, template.JS) {
 		buf = append(buf, "</text>\n"...)
 	}
 	buf = append(buf, "</g>\n"+`<g id="supports">`...)
+	// Supports: one path per layer (its name the path's title), a
+	// subpath per support line: the page grows with the layers, not with
+	// the lines.
+	var layers []string
+	byLayer := map[string][]byte{}
 	for _, s := range g.Supports {
 		if len(s.Points) < 2 || !finitePoints(s.Points) {
 			continue
 		}
-		if s.Closed {
-			buf = append(buf, `<polygon class="support" points="`...)
-		} else {
-			buf = append(buf, `<polyline class="support" points="`...)
+		d, ok := byLayer[s.Layer]
+		if !ok {
+			layers = append(layers, s.Layer)
 		}
-		buf = appendPoints(buf, s.Points)
+		for k, q := range s.Points {
+			if k == 0 {
+				d = append(d, 'M')
+			} else {
+				d = append(d, 'L')
+			}
+			d = appendCoord(d, q[0])
+			d = append(d, ' ')
+			d = appendCoord(d, -q[1])
+		}
+		if s.Closed {
+			d = append(d, 'Z')
+		}
+		byLayer[s.Layer] = d
+	}
+	for _, l := range layers {
+		buf = append(buf, `<path class="support" d="`...)
+		buf = append(buf, byLayer[l]...)
 		buf = append(buf, `"><title>`...)
-		buf = appendHTML(buf, s.Layer)
-		buf = append(buf, "</title></poly"...)
-		if s.Closed {
-			buf = append(buf, "gon>\n"...)
-		} else {
-			buf = append(buf, "line>\n"...)
-		}
+		buf = appendHTML(buf, l)
+		buf = append(buf, "</title></path>\n"...)
 	}
 
-	// One <line> per member: id, band class, colour. Failing and erroring
-	// members carry an extra class that draws them heavier.
+	// The members by runs (report_runs.go).
 	buf = append(buf, "</g>\n"+`<g id="members">`+"\n"...)
-	for i := range r.Members {
-		m := &r.Members[i]
-		band := bandClass(m.MaxRatio, m.Status)
-		buf = append(buf, `<line id="m-`...)
-		buf = appendHTML(buf, m.ID)
-		buf = append(buf, `" class="j `...)
-		buf = append(buf, band...)
-		switch m.Status {
-		case StatusFail:
-			buf = append(buf, " fail"...)
-		case StatusError:
-			buf = append(buf, " err"...)
-		}
-		buf = append(buf, `" data-i="`...)
-		buf = strconv.AppendInt(buf, int64(i), 10)
-		s := segs[i]
-		if finite(s.a[0]) && finite(s.a[1]) && finite(s.b[0]) && finite(s.b[1]) {
-			buf = append(buf, `" x1="`...)
-			buf = appendCoord(buf, s.a[0])
-			buf = append(buf, `" y1="`...)
-			buf = appendCoord(buf, -s.a[1])
-			buf = append(buf, `" x2="`...)
-			buf = appendCoord(buf, s.b[0])
-			buf = append(buf, `" y2="`...)
-			buf = appendCoord(buf, -s.b[1])
-		}
-		buf = append(buf, `" stroke="`...)
-		if m.Status == StatusError {
-			buf = append(buf, errorColour...)
-		} else {
-			buf = appendColour(buf, m.MaxRatio)
-		}
-		buf = append(buf, "\"/>\n"...)
-	}
+	buf = appendMemberPaths(buf, r, segs)
 
 	buf = append(buf, "</g>\n"+`<g id="blocking">`...)
 	for i := range r.BlockingRows {
@@ -207,25 +190,44 @@ func planSVG(r *Results, g *PlanGeometry) (template.HTML, template.JS) {
 	buf = appendCoord(buf, textH)
 	buf = append(buf, `">`+"\n"...)
 	every := len(r.Members) <= labelEveryMemberUpTo
+	type runMark struct{ run, mark string }
+	labelled := map[runMark]bool{}
 	for i := range r.Members {
 		m := &r.Members[i]
 		s := segs[i]
 		if !finite(s.a[0]) || !finite(s.a[1]) || !finite(s.b[0]) || !finite(s.b[1]) {
 			continue
 		}
-		class := "lbl"
+		newGroup := i == 0 || m.Mark != r.Members[i-1].Mark || m.Run != r.Members[i-1].Run
+		class := "" // #labels text is styled as a plain label
 		switch {
-		case m.Status == StatusFail:
-			class = "lbl lbl-fail"
 		case m.Status == StatusError:
-			class = "lbl lbl-err"
-		case every || i == 0 || m.Mark != r.Members[i-1].Mark:
+			class = "lbl-err"
+		case m.Status == StatusFail && (every || newGroup || r.Members[i-1].Status != StatusFail):
+			// Large plans: one label per run and mark that fails, with
+			// the largest ratio of the members that follow it alike.
+			class = "lbl-fail"
+			if !every {
+				worst := *m
+				for j := i + 1; j < len(r.Members) && r.Members[j].Mark == m.Mark && r.Members[j].Run == m.Run && r.Members[j].Status == StatusFail; j++ {
+					if r.Members[j].MaxRatio > worst.MaxRatio {
+						worst.MaxRatio = r.Members[j].MaxRatio
+					}
+				}
+				buf = appendLabel(buf, &worst, class, s.a, s.b, textH)
+				continue
+			}
+		case m.Status == StatusFail:
+			continue
+		case every:
+		case newGroup && !labelled[runMark{m.Run, m.Mark}]:
+			labelled[runMark{m.Run, m.Mark}] = true
 		default:
 			continue
 		}
 		buf = appendLabel(buf, m, class, s.a, s.b, textH)
 	}
-	buf = append(buf, "</g>\n</svg>"...)
+	buf = append(buf, "</g>\n"+`<line id="pick" x1="0" y1="0" x2="0" y2="0" style="visibility:hidden"/>`+"\n</svg>"...)
 
 	return template.HTML(buf), memberData(r)
 }
@@ -263,19 +265,22 @@ func appendLabel(buf []byte, m *Member, class string, a, b [2]float64, textH flo
 	}
 	x := a[0] + t*(b[0]-a[0]) - math.Sin(rad)*off
 	y := a[1] + t*(b[1]-a[1]) + math.Cos(rad)*off
-	buf = append(buf, `<text class="`...)
-	buf = append(buf, class...)
-	buf = append(buf, `" text-anchor="middle" x="`...)
+	// The label's place as a translation (and its turn), the anchor in
+	// the CSS: about half the bytes of x, y and rotate(a x y).
+	buf = append(buf, `<text `...)
+	if class != "" {
+		buf = append(buf, `class="`...)
+		buf = append(buf, class...)
+		buf = append(buf, `" `...)
+	}
+	buf = append(buf, `transform="translate(`...)
 	buf = appendCoord(buf, x)
-	buf = append(buf, `" y="`...)
+	buf = append(buf, ' ')
 	buf = appendCoord(buf, -y)
+	buf = append(buf, ')')
 	if ang != 0 {
-		buf = append(buf, `" transform="rotate(`...)
+		buf = append(buf, `rotate(`...)
 		buf = appendCoord(buf, -ang)
-		buf = append(buf, ' ')
-		buf = appendCoord(buf, x)
-		buf = append(buf, ' ')
-		buf = appendCoord(buf, -y)
 		buf = append(buf, ')')
 	}
 	buf = append(buf, `">`...)

@@ -191,36 +191,41 @@ func repWantBand(ratio float64, status string) string {
 
 func TestWriteReportMemberElements(t *testing.T) {
 	r, g := loadReportFixture(t)
-	doc, _ := repWriteParse(t, r, g)
-	group := repByID(doc, "members")
-	byMember := map[string][]*html.Node{}
-	repWalk(group, func(n *html.Node) {
-		if n.Type == html.ElementNode && n.Data != "g" {
-			byMember[repAttr(n, "id")] = append(byMember[repAttr(n, "id")], n)
-		}
-	})
-	if len(byMember) != len(r.Members) {
-		t.Errorf("%d member elements, want %d", len(byMember), len(r.Members))
+	doc, data := repWriteParse(t, r, g)
+	page := repReadPage(t, doc, data)
+	if len(page.ids) != len(r.Members) {
+		t.Fatalf("%d members in the page's data, want %d", len(page.ids), len(r.Members))
+	}
+	runs := map[string]bool{}
+	for _, m := range r.Members {
+		runs[m.Run] = true
+	}
+	if page.paths > len(r.Members) || page.paths < len(runs) {
+		t.Errorf("%d member paths for %d members in %d runs", page.paths, len(r.Members), len(runs))
 	}
 	hex := regexp.MustCompile(`^#[0-9a-f]{6}$`)
-	for _, m := range r.Members {
-		els := byMember["m-"+m.ID]
-		if len(els) != 1 {
-			t.Errorf("%s: %d elements, want 1", m.ID, len(els))
+	status := map[string]string{StatusPass: "p", StatusFail: "f", StatusError: "e"}
+	for i, m := range r.Members {
+		if page.ids[i] != m.ID || page.handles[i] != m.Handle {
+			t.Errorf("member %d: id %q handle %q in the page, want %q %q", i, page.ids[i], page.handles[i], m.ID, m.Handle)
+		}
+		if grp := page.groups[page.group[i]]; grp[5] != status[m.Status] {
+			t.Errorf("%s: status %v in the page, want %s", m.ID, grp[5], m.Status)
+		}
+		d, ok := page.drawn[i]
+		if !ok {
+			t.Errorf("%s: drawn in no path", m.ID)
 			continue
 		}
-		el := els[0]
-		if el.Data != "line" {
-			t.Errorf("%s: <%s>, want <line>", m.ID, el.Data)
-		}
+		el := d.path.Parent // the group carries the class
 		if b := repWantBand(m.MaxRatio, m.Status); !repHasClass(el, b) {
 			t.Errorf("%s ratio %.3f %s: class %q, want %s", m.ID, m.MaxRatio, m.Status, repAttr(el, "class"), b)
 		}
 		if m.Status == StatusFail && !repHasClass(el, "fail") || m.Status == StatusError && !repHasClass(el, "err") {
 			t.Errorf("%s %s: class %q lacks the heavy style", m.ID, m.Status, repAttr(el, "class"))
 		}
-		if !hex.MatchString(repAttr(el, "stroke")) {
-			t.Errorf("%s: stroke %q", m.ID, repAttr(el, "stroke"))
+		if want := string(appendColour(nil, m.MaxRatio)); m.Status != StatusError && repAttr(d.path, "stroke") != want || !hex.MatchString(repAttr(d.path, "stroke")) {
+			t.Errorf("%s: stroke %q, want %s", m.ID, repAttr(d.path, "stroke"), want)
 		}
 		// Inches, y negated so north is up; coordinates to 0.01 in.
 		a, b := m.StartIn, m.EndIn
@@ -228,11 +233,8 @@ func TestWriteReportMemberElements(t *testing.T) {
 			f, _ := UnitToInch(r.DrawingUnits)
 			a, b = [2]float64{m.Start[0] * f, m.Start[1] * f}, [2]float64{m.End[0] * f, m.End[1] * f}
 		}
-		for k, want := range map[string]float64{"x1": a[0], "y1": -a[1], "x2": b[0], "y2": -b[1]} {
-			got, err := strconv.ParseFloat(repAttr(el, k), 64)
-			if err != nil || math.Abs(got-want) > 0.005 {
-				t.Errorf("%s: %s = %q, want %.2f", m.ID, k, repAttr(el, k), want)
-			}
+		if !repSameSegment(d.seg, a, b) {
+			t.Errorf("%s: drawn %v, want %v-%v", m.ID, d.seg, a, b)
 		}
 	}
 	// Failing and erroring members are labelled.

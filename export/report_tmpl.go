@@ -50,15 +50,15 @@ h3.tight{margin-top:0}
 #plan-svg .zone{fill:#e8eef5;fill-opacity:.55;stroke:#7d93ab;stroke-dasharray:6 4;vector-effect:non-scaling-stroke;stroke-width:1px}
 #plan-svg .zone-name{fill:#7d93ab;font-weight:700;opacity:.8}
 #plan-svg .support{fill:none;stroke:#3a3f45;stroke-width:4px;vector-effect:non-scaling-stroke;stroke-linecap:square}
-#plan-svg .j{stroke-width:2px;vector-effect:non-scaling-stroke;stroke-linecap:round}
-#plan-svg .j.fail{stroke-width:5px}
-#plan-svg .j.err{stroke-width:4px;stroke-dasharray:8 5}
-#plan-svg .j:hover,#plan-svg .j.sel{stroke:#000 !important;stroke-width:6px}
+#plan-svg .j path{fill:none;stroke-width:2px;vector-effect:non-scaling-stroke;stroke-linecap:round}
+#plan-svg .j.fail path{stroke-width:5px}
+#plan-svg .j.err path{stroke-width:4px;stroke-dasharray:8 5}
+#plan-svg #pick{stroke:#000;stroke-width:6px;vector-effect:non-scaling-stroke;stroke-linecap:round;pointer-events:none}
 #plan-svg .blk-add{stroke:#0a8fa8;stroke-width:3px;stroke-dasharray:10 4;vector-effect:non-scaling-stroke}
 #plan-svg .blk-existing{stroke:#8a8f96;stroke-width:1.5px;vector-effect:non-scaling-stroke}
-#plan-svg .lbl{fill:#333;pointer-events:none}
-#plan-svg .lbl-fail{fill:#b3261e;font-weight:700}
-#plan-svg .lbl-err{fill:#555;font-weight:700}
+#plan-svg #labels text{fill:#333;pointer-events:none;text-anchor:middle}
+#plan-svg #labels .lbl-fail{fill:#b3261e;font-weight:700}
+#plan-svg #labels .lbl-err{fill:#555;font-weight:700}
 #details{position:absolute;top:8px;right:8px;background:#fff;border:1px solid var(--rule);border-radius:4px;padding:6px 10px;font-size:12px;max-width:360px;box-shadow:0 1px 4px rgba(0,0,0,.12)}
 #details:empty{display:none}
 .legend{display:flex;gap:14px;flex-wrap:wrap;align-items:center;margin:8px 0;font-size:12px}
@@ -149,21 +149,44 @@ const reportJS = `
   window.addEventListener('mouseup',function(){drag=null;});
   svg.addEventListener('dblclick',function(){set(home[0],home[1],home[2],home[3]);});
   function text(tag,s){var el=document.createElement(tag);el.textContent=s;return el;}
-  function show(el,pin){var i=+el.getAttribute('data-i'),m=FC.m[i];if(!m)return;
-    if(pin){if(sel)sel.classList.remove('sel');sel=el;el.classList.add('sel');}
-    var t=FC.text,st={p:'pass',f:'fail',e:'error'}[m[6]],mark=t[m[1]],rs=[];
-    m[8].forEach(function(v,k){if(v!==null)rs.push(FC.kinds[k]+' '+v.toFixed(3));});
-    out.textContent='';
-    out.appendChild(text('b',m[0]+(mark?'  mark '+mark:'')));
-    [['size',t[m[2]]],['spans',t[m[3]]],['max ratio',m[4]===null?'':m[4].toFixed(3)+(m[5]>=0?' ('+FC.kinds[m[5]]+')':'')],
-     ['status',st],['ratios',rs.join(', ')],['handle',m[7]]]
+  // Member ids and handles, written only where they break the sequence.
+  var ids=[],hs=[];
+  function nid(id){var k=id.search(/[0-9]+$/);return k<0?null:id.slice(0,k)+(+id.slice(k)+1);}
+  function nh(h){return h===''?'':(parseInt(h,16)+1).toString(16).toUpperCase();}
+  FC.m.forEach(function(e,i){ids[i]=(e.length>1&&e[1]!==0)?e[1]:nid(ids[i-1]);hs[i]=e.length>2?e[2]:nh(hs[i-1]);});
+  // A path's segments (SVG frame) and members, read from its d and data-m once.
+  function segs(el){if(el._s)return el._s;var t=el.getAttribute('d').match(/[a-zA-Z]|-?[0-9.]+/g)||[],
+    s=[],x=0,y=0,k=0,c,sx,sy;
+    while(k<t.length){c=t[k++];var a=+t[k++];
+      if(c==='M'){x=a;y=+t[k++];}else if(c==='m'){x+=a;y+=+t[k++];}
+      else{sx=x;sy=y;if(c==='h')x+=a;else if(c==='v')y+=a;else{x+=a;y+=+t[k++];}s.push([sx,sy,x,y]);}}
+    var idx=[];el.getAttribute('data-m').split(',').forEach(function(r){var q=r.split('-'),lo=+q[0],hi=q.length>1?+q[1]:lo;
+      for(var i=lo;i<=hi;i++)idx.push(i);});
+    el._s={s:s,idx:idx};return el._s;}
+  function member(el,e){var d=segs(el),p=pt(e),best=-1,bd=1e300;
+    d.s.forEach(function(q,k){var dx=q[2]-q[0],dy=q[3]-q[1],l=dx*dx+dy*dy,
+      u=l>0?Math.max(0,Math.min(1,((p[0]-q[0])*dx+(p[1]-q[1])*dy)/l)):0,ex=q[0]+u*dx-p[0],ey=q[1]+u*dy-p[1],dd=ex*ex+ey*ey;
+      if(dd<bd){bd=dd;best=k;}});
+    return best<0?null:{i:d.idx[best],q:d.s[best]};}
+  var pick=document.getElementById('pick');
+  function mark(q){pick.style.visibility=q?'visible':'hidden';if(!q)return;pick.setAttribute('x1',q[0]);pick.setAttribute('y1',q[1]);pick.setAttribute('x2',q[2]);pick.setAttribute('y2',q[3]);}
+  function show(el,e,pin){var h=member(el,e);if(!h)return;var i=h.i,m=FC.m[i],g=m&&FC.g[m[0]];if(!g)return;
+    if(pin){sel=h;pick.classList.add('sel');}
+    mark(h.q);
+    var t=FC.text,st={p:'pass',f:'fail',e:'error'}[g[5]],mk=t[g[0]],rs=[];
+    g[6].forEach(function(v,k){if(v!==null)rs.push(FC.kinds[k]+' '+v.toFixed(3));});
+    out.textContent='';out.setAttribute('data-member',ids[i]);
+    out.appendChild(text('b',ids[i]+(mk?'  mark '+mk:'')));
+    [['size',t[g[1]]],['spans',t[g[2]]],['max ratio',g[3]===null?'':g[3].toFixed(3)+(g[4]>=0?' ('+FC.kinds[g[4]]+')':'')],
+     ['status',st],['ratios',rs.join(', ')],['handle',hs[i]]]
       .forEach(function(r){if(r[1]){out.appendChild(document.createElement('br'));out.appendChild(text('span',r[0]+': '+r[1]));}});
-    if(mark){var a=document.createElement('a');a.href='#mark-'+mark.replace(/[^A-Za-z0-9_-]/g,'_');a.textContent='calculation';
+    if(mk){var a=document.createElement('a');a.href='#mark-'+mk.replace(/[^A-Za-z0-9_-]/g,'_');a.textContent='calculation';
       out.appendChild(document.createElement('br'));out.appendChild(a);}
   }
-  svg.addEventListener('mouseover',function(e){if(e.target.classList.contains('j')&&!sel)show(e.target,false);});
-  svg.addEventListener('click',function(e){if(e.target.classList.contains('j'))show(e.target,true);
-    else if(sel){sel.classList.remove('sel');sel=null;out.textContent='';}});
+  function isJ(el){return el.tagName==='path'&&el.parentNode.classList.contains('j');}
+  svg.addEventListener('mousemove',function(e){if(!drag&&!sel&&isJ(e.target))show(e.target,e,false);});
+  svg.addEventListener('click',function(e){if(isJ(e.target))show(e.target,e,true);
+    else if(sel){sel=null;pick.classList.remove('sel');mark(null);out.textContent='';}});
 })();
 `
 

@@ -3,11 +3,16 @@ package export
 import "strings"
 
 // Schema is the value of results.json's "schema" key. Bump the number when
-// a key is renamed or removed; adding keys keeps it. Version 2 moved the
-// traces and factors of the members' checks into "calculations", written
-// once for all the members checked alike (a member names its entry in
-// "calculation"); version 1 repeated them in every member.
-const Schema = "framecheck-results/2"
+// a key is renamed or removed; adding keys keeps it. Version 3 (issue 18)
+// leaves the checks out of the members (they are their calculation's),
+// writes the members' info lines once in "info_lists" (a member names its
+// list in "info_list"), and writes the numbers of members and calculations
+// with the digits they carry (json_num.go). Version 2 moved the traces and
+// factors of the members' checks into "calculations", written once for all
+// the members checked alike (a member names its entry in "calculation");
+// version 1 repeated them in every member. docs/RESULTS-SCHEMA.md lists
+// every key.
+const Schema = "framecheck-results/3"
 
 // Check kinds, the values of Check.Kind.
 const (

@@ -48,10 +48,11 @@ done
 # Magic numbers: a PNG starts with \x89PNG, a PDF with %PDF.
 head -c 4 "$out/report.png" | grep -q PNG || { echo "report-chromium: report.png is not a PNG" >&2; exit 1; }
 head -c 4 "$out/report.pdf" | grep -q '%PDF' || { echo "report-chromium: report.pdf is not a PDF" >&2; exit 1; }
-# The hover panel: click the first member not in error in a copy of the page and read the
-# panel back from the DOM; it must name the member and list its ratios.
+# The panel: click the first segment of the first member path not in error (the plan draws
+# members by runs, one path per run and band) in a copy of the page, at that point on the
+# screen, and read the panel back from the DOM; it must name the member and list its ratios.
 probe="$(dirname "$report")/probe.html"
-sed 's@</body>@<script>var e=document.querySelector("#members line:not(.err)");e.dispatchEvent(new MouseEvent("click",{bubbles:true}));document.body.setAttribute("data-probe",e.id+"|"+document.getElementById("details").textContent);</script></body>@' "$report" >"$probe"
+sed 's@</body>@<script>var p=document.querySelector("#members g.j:not(.err) path"),q=p.getPointAtLength(0.5),c=p.getScreenCTM();p.dispatchEvent(new MouseEvent("click",{bubbles:true,clientX:c.a*q.x+c.c*q.y+c.e,clientY:c.b*q.x+c.d*q.y+c.f}));var d=document.getElementById("details");document.body.setAttribute("data-probe","m-"+d.getAttribute("data-member")+"|"+d.textContent);</script></body>@' "$report" >"$probe"
 dom=$(timeout 120 "$CHROMIUM" "${flags[@]}" --dump-dom "file://$probe" 2>/dev/null | grep -o 'data-probe="[^"]*"' || true)
 id=$(printf '%s' "$dom" | sed -n 's/^data-probe="m-\([^|]*\)|.*/\1/p')
 if [ -z "$id" ] || ! printf '%s' "$dom" | grep -q "|$id.*ratios: "; then

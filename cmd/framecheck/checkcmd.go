@@ -258,6 +258,9 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	}
 	res := exportResults(o, c.planPath)
 	res.InputSHA256 = sha256Hex(c.planData)
+	// From here the writers read res, the plan's supports and zones and
+	// the drawing's bytes: drop the members as grouped and checked.
+	o.releaseForWriters()
 	// No NaN or Inf reaches any output, the summary or the exit status: a
 	// member holding one is in error, saying which value (a safety net;
 	// the checks should never produce one).

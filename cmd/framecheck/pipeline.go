@@ -608,3 +608,20 @@ func errorResult(m *framing.Member, msgs []string) check.Result {
 		SpansIn: m.Spans(), OverhangsIn: [2]float64{m.OverhangStartIn, m.OverhangEndIn},
 		Status: check.StatusError, Messages: msgs}
 }
+
+// releaseForWriters drops what the writers do not read once the results
+// are mapped for export (exportResults) and the findings are in o.issues:
+// the drawing's entities (the annotated copy reads the drawing's bytes,
+// the report the plan's supports and zones), the members as grouped and
+// their check results and sizing. The live heap then follows the outputs
+// rather than holding the plan twice (issue 18). o.path (the load path)
+// stays.
+func (o *outcome) releaseForWriters() {
+	if o.drawing != nil {
+		o.drawing.Entities = nil
+	}
+	if o.plan != nil {
+		o.plan.Members = nil
+	}
+	o.results, o.sizing = nil, nil
+}

@@ -1,0 +1,126 @@
+package export
+
+import (
+	"math"
+	"strconv"
+)
+
+// Numbers in results.json from schema 3 are written with the digits they
+// carry (see Schema): lengths, loads, ratios and trace values as the
+// shortest decimal of the value rounded to SigDigits significant digits,
+// plan coordinates (start, end, point) rounded to CoordDecimals decimal
+// places of the drawing unit. 2.2500000000000004 is written 2.25. The
+// rounding is far below what the outputs print (ratios to 0.01, lengths to
+// 1/16 in) and below what the checks can claim from their inputs. Common
+// practice, no source.
+const (
+	SigDigits     = 6
+	CoordDecimals = 6
+)
+
+// appendSig6 appends v rounded to SigDigits significant digits as its
+// shortest decimal, in the format encoding/json uses for that rounded
+// value (plain decimals from 1e-6 to under 1e21, exponent form outside),
+// without allocating. appendSig6(b, v) equals appendJSONFloat(b,
+// round6(v)); TestAppendSig6MatchesRound holds it to that. v must be
+// finite.
+func appendSig6(b []byte, v float64) []byte {
+	if v == 0 {
+		return append(b, '0')
+	}
+	var tmp [32]byte
+	e := strconv.AppendFloat(tmp[:0], v, 'e', SigDigits-1, 64) // [-]d.ddddde±XX
+	neg := e[0] == '-'
+	if neg {
+		e = e[1:]
+	}
+	var digits [SigDigits]byte
+	digits[0] = e[0]
+	copy(digits[1:], e[2:2+SigDigits-1])
+	rest := e[2+SigDigits-1:] // e±XX
+	exp := 0
+	for _, c := range rest[2:] {
+		exp = exp*10 + int(c-'0')
+	}
+	if rest[1] == '-' {
+		exp = -exp
+	}
+	if exp < -6 || exp >= 21 {
+		return appendJSONFloat(b, round6(v)) // exponent form, rare
+	}
+	n := SigDigits
+	for n > 1 && digits[n-1] == '0' {
+		n--
+	}
+	if neg {
+		b = append(b, '-')
+	}
+	point := exp + 1 // digits before the decimal point
+	switch {
+	case point <= 0:
+		b = append(b, '0', '.')
+		for i := point; i < 0; i++ {
+			b = append(b, '0')
+		}
+		b = append(b, digits[:n]...)
+	case point >= n:
+		b = append(b, digits[:n]...)
+		for i := n; i < point; i++ {
+			b = append(b, '0')
+		}
+	default:
+		b = append(b, digits[:point]...)
+		b = append(b, '.')
+		b = append(b, digits[point:n]...)
+	}
+	return b
+}
+
+// round6 returns v rounded to SigDigits significant digits (the nearest
+// float64 to that decimal). Non-finite values are returned as they are.
+func round6(v float64) float64 {
+	if v == 0 || math.IsNaN(v) || math.IsInf(v, 0) {
+		return v
+	}
+	var tmp [32]byte
+	s := strconv.AppendFloat(tmp[:0], v, 'e', SigDigits-1, 64)
+	r, err := strconv.ParseFloat(string(s), 64)
+	if err != nil {
+		return v
+	}
+	return r
+}
+
+// appendPlanCoord appends a plan coordinate rounded to CoordDecimals decimal
+// places, trailing zeros dropped ("-2.25", "0"), without allocating. v
+// must be finite.
+func appendPlanCoord(b []byte, v float64) []byte {
+	if math.Abs(v) >= 1e15 {
+		return appendSig6(b, v) // 'f' would carry noise digits; never a real plan
+	}
+	start := len(b)
+	b = strconv.AppendFloat(b, v, 'f', CoordDecimals, 64)
+	for b[len(b)-1] == '0' {
+		b = b[:len(b)-1]
+	}
+	if b[len(b)-1] == '.' {
+		b = b[:len(b)-1]
+	}
+	if s := b[start:]; len(s) == 2 && s[0] == '-' && s[1] == '0' {
+		b = append(b[:start], '0') // -0.0000001 rounds to 0
+	}
+	return b
+}
+
+// roundPlanCoord returns v as appendPlanCoord writes it, read back.
+func roundPlanCoord(v float64) float64 {
+	if math.IsNaN(v) || math.IsInf(v, 0) {
+		return v
+	}
+	var tmp [40]byte
+	r, err := strconv.ParseFloat(string(appendPlanCoord(tmp[:0], v)), 64)
+	if err != nil {
+		return v
+	}
+	return r
+}
