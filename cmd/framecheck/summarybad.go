@@ -71,12 +71,14 @@ func badGroups(o *outcome, r *export.Results, proj *Project) []badGroup {
 		}
 		return a.Status == export.StatusFail && b.Status != export.StatusFail
 	})
-	if o == nil || len(o.inputs) != len(o.plan.Members) {
+	if o == nil {
 		return groups
 	}
+	// Keyed on the check inputs (which carry the member ids): the plan's
+	// members are released before the writers run.
 	member := map[string]int{}
-	for k := range o.plan.Members {
-		member[o.plan.Members[k].ID] = k
+	for k := range o.inputs {
+		member[o.inputs[k].ID] = k
 	}
 	for i := range groups {
 		g := &groups[i]
