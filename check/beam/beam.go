@@ -297,30 +297,49 @@ func threeMoment(ms []float64, spans []seg) {
 	if n <= 2 {
 		return
 	}
-	var cBuf, dBuf [16]float64
-	cp, dp := cBuf[:], dBuf[:]
+	var cBuf, dBuf, lBuf, rBuf [16]float64
+	cp, dp, lens, rhs := cBuf[:], dBuf[:], lBuf[:], rBuf[:]
 	if n > len(cBuf) {
-		cp, dp = make([]float64, n), make([]float64, n)
+		cp, dp, lens, rhs = make([]float64, n), make([]float64, n), make([]float64, n), make([]float64, n)
+	}
+	for j := 0; j < n-1; j++ {
+		lens[j] = spans[j].l
 	}
 	for i := 1; i <= n-2; i++ {
 		sl, sr := spans[i-1], spans[i]
-		lower, diag, upper := sl.l, 2*(sl.l+sr.l), sr.l
-		rhs := -(sl.w*sl.l*sl.l*sl.l + sr.w*sr.l*sr.l*sr.l) / 4
+		rhs[i] = -(sl.w*sl.l*sl.l*sl.l + sr.w*sr.l*sr.l*sr.l) / 4
+	}
+	solveMoments(ms, lens, rhs, cp, dp)
+}
+
+// solveMoments solves the three-moment equations
+//
+//	L_i M_i-1 + 2 (L_i + L_i+1) M_i + L_i+1 M_i+1 = rhs_i,  i = 1 .. n-2
+//
+// for the interior support moments ms[1:n-1], with ms[0] and ms[n-1]
+// given, lens[j] the span between supports j and j+1 and cp, dp scratch
+// of length n, by the Thomas algorithm without pivoting (the system is
+// diagonally dominant).
+func solveMoments(ms, lens, rhs, cp, dp []float64) {
+	n := len(ms)
+	for i := 1; i <= n-2; i++ {
+		lower, upper := lens[i-1], lens[i]
+		diag, r := 2*(lower+upper), rhs[i]
 		if i == 1 {
-			rhs -= lower * ms[0]
+			r -= lower * ms[0]
 			lower = 0
 		}
 		if i == n-2 {
-			rhs -= upper * ms[n-1]
+			r -= upper * ms[n-1]
 			upper = 0
 		}
 		den := diag
 		if i > 1 {
 			den -= lower * cp[i-1]
-			rhs -= lower * dp[i-1]
+			r -= lower * dp[i-1]
 		}
 		cp[i] = upper / den
-		dp[i] = rhs / den
+		dp[i] = r / den
 	}
 	ms[n-2] = dp[n-2]
 	for i := n - 3; i >= 1; i-- {

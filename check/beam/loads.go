@@ -361,30 +361,12 @@ func threeMomentGeneral(ms, sup, thL, thR []float64) {
 	if n <= 2 {
 		return
 	}
-	cp := make([]float64, n)
-	dp := make([]float64, n)
+	lens, rhs := make([]float64, n), make([]float64, n)
+	for j := 0; j < n-1; j++ {
+		lens[j] = sup[j+1] - sup[j]
+	}
 	for i := 1; i <= n-2; i++ {
-		ll, lr := sup[i]-sup[i-1], sup[i+1]-sup[i]
-		lower, diag, upper := ll, 2*(ll+lr), lr
-		rhs := -6 * (thR[i-1] + thL[i])
-		if i == 1 {
-			rhs -= lower * ms[0]
-			lower = 0
-		}
-		if i == n-2 {
-			rhs -= upper * ms[n-1]
-			upper = 0
-		}
-		den := diag
-		if i > 1 {
-			den -= lower * cp[i-1]
-			rhs -= lower * dp[i-1]
-		}
-		cp[i] = upper / den
-		dp[i] = rhs / den
+		rhs[i] = -6 * (thR[i-1] + thL[i])
 	}
-	ms[n-2] = dp[n-2]
-	for i := n - 3; i >= 1; i-- {
-		ms[i] = dp[i] - cp[i]*ms[i+1]
-	}
+	solveMoments(ms, lens, rhs, make([]float64, n), make([]float64, n))
 }
