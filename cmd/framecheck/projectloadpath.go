@@ -1,7 +1,6 @@
 package main
 
 import (
-	"fmt"
 	"regexp"
 	"strconv"
 	"strings"
@@ -62,19 +61,7 @@ func (ld *loader) pointLoads(root *table) {
 	seen := map[string]string{}
 	for i, t := range elems {
 		var pl PointLoad
-		ld.required(t, "name")
-		ld.text(t, "name", &pl.Name, nil)
-		if pl.Name != "" {
-			t.label = fmt.Sprintf("[[point_load]] %s: ", pl.Name)
-			key := strings.ToUpper(pl.Name)
-			if prev, dup := seen[key]; dup {
-				ld.errorf(t.path+".name", "point load %q is already defined (line %d); names must differ",
-					pl.Name, lineOf(ld.lines, prev))
-			}
-			seen[key] = t.path + ".name"
-		} else {
-			t.label = fmt.Sprintf("[[point_load]] %d: ", i+1)
-		}
+		ld.entryName(t, "point_load", "point load", i, seen, &pl.Name)
 		ld.optNum(t, "dead_lb", "lb", &pl.DeadLb, pointLoadRule)
 		ld.optNum(t, "live_lb", "lb", &pl.LiveLb, pointLoadRule)
 		ld.optNum(t, "roof_live_lb", "lb", &pl.RoofLiveLb, pointLoadRule)

@@ -244,19 +244,7 @@ func (ld *loader) zones(root *table) {
 	seen := map[string]string{}
 	for i, t := range elems {
 		z := Zone{Use: "floor", Ceiling: "non-plaster"}
-		ld.required(t, "name")
-		ld.text(t, "name", &z.Name, nil)
-		if z.Name != "" {
-			t.label = fmt.Sprintf("[[zone]] %s: ", z.Name)
-			key := strings.ToUpper(z.Name)
-			if prev, dup := seen[key]; dup {
-				ld.errorf(t.path+".name", "zone %q is already defined (line %d); zone names must differ",
-					z.Name, lineOf(ld.lines, prev))
-			}
-			seen[key] = t.path + ".name"
-		} else {
-			t.label = fmt.Sprintf("[[zone]] %d: ", i+1)
-		}
+		ld.entryName(t, "zone", "zone", i, seen, &z.Name)
 		ld.enum(t, "use", &z.Use, useValues)
 		ld.allowZero(t, &z.AllowZero)
 		// A roof zone that gives snow but leaves roof live out still gets
@@ -555,4 +543,25 @@ func (ld *loader) materialsFile(t *table) {
 		return
 	}
 	ld.p.Materials = check.BuiltinMaterials().Merge(user)
+}
+
+// entryName reads the required name of the i-th (0-based) [[table]]
+// entry t into name, labels the entry's messages with it ("[[zone]] ROOF: ",
+// or the entry's number when it has no name) and reports a name already
+// used by an earlier entry (case-insensitive; seen maps upper-cased names
+// to their key paths).
+func (ld *loader) entryName(t *table, table, what string, i int, seen map[string]string, name *string) {
+	ld.required(t, "name")
+	ld.text(t, "name", name, nil)
+	if *name == "" {
+		t.label = fmt.Sprintf("[[%s]] %d: ", table, i+1)
+		return
+	}
+	t.label = fmt.Sprintf("[[%s]] %s: ", table, *name)
+	key := strings.ToUpper(*name)
+	if prev, dup := seen[key]; dup {
+		ld.errorf(t.path+".name", "%s %q is already defined (line %d); %s names must differ",
+			what, *name, lineOf(ld.lines, prev), what)
+	}
+	seen[key] = t.path + ".name"
 }
