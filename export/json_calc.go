@@ -140,45 +140,33 @@ func (t *infoTable) id(info []string) string {
 
 // write writes "info_lists" as a JSON object, one list per line.
 func (t *infoTable) write(w *bufio.Writer, key func(string)) error {
-	key("info_lists")
-	if len(t.order) == 0 {
-		w.WriteString("{}")
-		return nil
-	}
-	w.WriteString("{\n")
-	for i, info := range t.order {
-		b, err := json.Marshal(info)
-		if err != nil {
-			return err
-		}
-		w.WriteString("  \"I" + strconv.Itoa(i+1) + "\": ")
-		w.Write(b)
-		if i < len(t.order)-1 {
-			w.WriteByte(',')
-		}
-		w.WriteByte('\n')
-	}
-	w.WriteString(" }")
-	return nil
+	return writeIDObject(w, key, "info_lists", "I", len(t.order), func(i int) any { return t.order[i] })
 }
 
 // write writes "calculations" as a JSON object, one entry per line, in
 // the order of their ids.
 func (t *calcTable) write(w *bufio.Writer, key func(string), round bool) error {
-	key("calculations")
-	if len(t.order) == 0 {
+	return writeIDObject(w, key, "calculations", "C", len(t.order), func(i int) any { return calculation(t.order[i], round) })
+}
+
+// writeIDObject writes the top-level key name as a JSON object of n
+// entries, one per line, with ids prefix+1, prefix+2, ... in order; item
+// gives the i-th (0-based) entry's value.
+func writeIDObject(w *bufio.Writer, key func(string), name, prefix string, n int, item func(int) any) error {
+	key(name)
+	if n == 0 {
 		w.WriteString("{}")
 		return nil
 	}
 	w.WriteString("{\n")
-	for i, m := range t.order {
-		b, err := json.Marshal(calculation(m, round))
+	for i := 0; i < n; i++ {
+		b, err := json.Marshal(item(i))
 		if err != nil {
 			return err
 		}
-		w.WriteString("  \"C" + strconv.Itoa(i+1) + "\": ")
+		w.WriteString("  \"" + prefix + strconv.Itoa(i+1) + "\": ")
 		w.Write(b)
-		if i < len(t.order)-1 {
+		if i < n-1 {
 			w.WriteByte(',')
 		}
 		w.WriteByte('\n')
