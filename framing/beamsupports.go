@@ -82,13 +82,7 @@ func (g *grouper) beamOnWalls() {
 			if !ok || sin < minSin || dist(sg.a, sg.b) < minLen || distPointSeg(lerp(b.Start, u, t), sg.a, sg.b) > tol {
 				return
 			}
-			de := 0.0
-			switch {
-			case t < 0:
-				de = distPointSeg(b.Start, sg.a, sg.b)
-			case t > L:
-				de = distPointSeg(b.End, sg.a, sg.b)
-			}
+			de := endGap(t, L, b.Start, b.End, sg.a, sg.b)
 			if de > tol+wall {
 				return
 			}

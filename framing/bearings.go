@@ -120,13 +120,7 @@ func (g *grouper) supportHits(k int, minSin float64, hits []hit) []hit {
 		if distPointSeg(lerp(m.Start, u, t), sg.a, sg.b) > tol {
 			return // passes beyond the support's drawn end
 		}
-		de := 0.0
-		switch {
-		case t < 0:
-			de = distPointSeg(m.Start, sg.a, sg.b)
-		case t > L:
-			de = distPointSeg(m.End, sg.a, sg.b)
-		}
+		de := endGap(t, L, m.Start, m.End, sg.a, sg.b)
 		if de > tol+wall {
 			return
 		}
@@ -409,4 +403,17 @@ func (g *grouper) buildSupports(merged map[[2]int]bool) {
 			BearingIn: th, Double: true, ThicknessIn: th, Pos: s1.pos, PosB: s2.pos,
 		})
 	}
+}
+
+// endGap is how far a member from start to end (length L) stops short of
+// the support segment a-b that its line meets at t along it: 0 when t lies
+// on the member, else the distance from the nearer end to the segment.
+func endGap(t, L float64, start, end, a, b Point) float64 {
+	switch {
+	case t < 0:
+		return distPointSeg(start, a, b)
+	case t > L:
+		return distPointSeg(end, a, b)
+	}
+	return 0
 }
