@@ -220,31 +220,17 @@ func (g *grouper) setTrib(k int) {
 func (g *grouper) makeRuns() {
 	p := g.plan
 	n := len(p.Members)
-	parent := make([]int, n)
-	for i := range parent {
-		parent[i] = i
-	}
-	var find func(int) int
-	find = func(i int) int {
-		for parent[i] != i {
-			parent[i] = parent[parent[i]]
-			i = parent[i]
-		}
-		return i
-	}
+	sets := newDisjointSets(n)
 	for k := 0; k < n; k++ {
 		for _, j := range []int{g.lo[k], g.hi[k]} {
 			if j >= 0 && g.sameBearings(k, j) {
-				a, b := find(k), find(j)
-				if a != b {
-					parent[max(a, b)] = min(a, b)
-				}
+				sets.union(k, j)
 			}
 		}
 	}
 	byRoot := map[int]int{}
 	for k := 0; k < n; k++ { // k ascending: runs numbered by first member
-		r := find(k)
+		r := sets.find(k)
 		ri, ok := byRoot[r]
 		if !ok {
 			ri = len(p.Runs)

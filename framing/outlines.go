@@ -67,17 +67,7 @@ func (g *grouper) outlines() {
 	}
 	maxGap := maxThickIn + thickTolIn
 	idx := newBandIndex(maxGap, keys)
-	parent := make([]int32, n)
-	for i := range parent {
-		parent[i] = int32(i)
-	}
-	find := func(i int32) int32 {
-		for parent[i] != i {
-			parent[i] = parent[parent[i]]
-			i = parent[i]
-		}
-		return i
-	}
+	sets := newDisjointSets(n)
 	paired := false
 	for x := range idx.keys {
 		i := int(idx.keys[x].id)
@@ -101,9 +91,7 @@ func (g *grouper) outlines() {
 				if gap > maxGap || ov <= 0 || ov < 0.5*shorter || shorter < math.Max(minEdgeIn, 4*gap) {
 					continue
 				}
-				a, b := find(int32(i)), find(int32(j))
-				if a != b {
-					parent[max(a, b)] = min(a, b)
+				if sets.union(i, j) {
 					paired = true
 				}
 			}
@@ -115,7 +103,7 @@ func (g *grouper) outlines() {
 	// lines of each bundle, flat, by bundle root then index
 	count := make([]int32, n+1)
 	for i := range js {
-		count[find(int32(i))+1]++
+		count[sets.find(i)+1]++
 	}
 	for i := 1; i <= n; i++ {
 		count[i] += count[i-1]
@@ -123,7 +111,7 @@ func (g *grouper) outlines() {
 	flat := make([]int32, n)
 	fill := slices.Clone(count[:n])
 	for i := range js {
-		r := find(int32(i))
+		r := sets.find(i)
 		flat[fill[r]] = int32(i)
 		fill[r]++
 	}

@@ -237,18 +237,7 @@ func (g *grouper) linePosts(lines []segItem) []Post {
 		return nil
 	}
 	tol := g.opt.SnapToleranceIn
-	parent := make([]int, n)
-	for i := range parent {
-		parent[i] = i
-	}
-	var find func(int) int
-	find = func(i int) int {
-		for parent[i] != i {
-			parent[i] = parent[parent[i]]
-			i = parent[i]
-		}
-		return i
-	}
+	sets := newDisjointSets(n)
 	// endpoints on a grid of cells one tolerance wide
 	type cell struct{ x, y int64 }
 	cellOf := func(p Point) cell { return cell{int64(math.Floor(p.X / tol)), int64(math.Floor(p.Y / tol))} }
@@ -267,7 +256,7 @@ func (g *grouper) linePosts(lines []segItem) []Post {
 				for _, f := range grid[cell{c.x + dx, c.y + dy}] {
 					if f/2 != e/2 && dist(end(e), end(f)) <= tol {
 						met[e], met[f] = true, true
-						parent[find(e/2)] = find(f / 2)
+						sets.union(e/2, f/2)
 					}
 				}
 			}
@@ -277,7 +266,7 @@ func (g *grouper) linePosts(lines []segItem) []Post {
 	clusters := map[int][]int{}
 	var roots []int
 	for i := range lines {
-		r := find(i)
+		r := sets.find(i)
 		if _, ok := clusters[r]; !ok {
 			roots = append(roots, r)
 		}
