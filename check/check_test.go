@@ -455,3 +455,95 @@ func TestCantileverDeflection_BackSpanRotation(t *testing.T) {
 	expectNear(t, "tip deflection", d.Actual, w*L*L*L*a/(24*ei), 1e-9, 1e-9, "AISC Manual Table 3-23 case 24")
 	expectNear(t, "allowed", d.Allowable, 2*a/360, 1e-12, 0, "IBC 2018 Table 1604.3 note h")
 }
+
+// TestSpanTable_IBC2018_2308_7_2_2 finds the longest span that passes for
+// DF-L No.2 rafters (20 psf roof live, 10 or 20 psf dead, ceiling attached,
+// L/240 under live load) and compares it with IBC 2018 Table 2308.7.2(2),
+// read from a stored copy of the 2018 code at
+// online.flipbuilder.com/mewf/msoi/files/basic-html/page568.html: the 12
+// and 16 in rows of Douglas Fir-Larch #2, 2x4 to 2x12 (cells "Note b", past
+// 26 ft, left out). Spans are horizontal projections and the loads are on
+// that projection (the table's basis; footnotes not on the stored page:
+// from memory: verify). The engine runs as for any roof joist: CD 1.25 for
+// roof live load (NDS 2018 Table 2.3.2), Cr 1.15, CF by width (Supplement
+// Table 4A). Where live-load deflection governs (2x4 to 2x8 at 10 psf
+// dead) the spans come within 1 in of the table with the NDS 2018 values.
+// Where bending governs the table fits Fb = 875 psi, as the floor table
+// above does (the earlier Supplement value, from memory: verify), not the
+// 2018 value of 900: so the test runs the engine with a user material of
+// Fb 875 and holds every cell within 1 in, and with the 2018 values holds
+// each span between the table's and sqrt(900/875) of it (plus 1 in). A
+// flat member and one at 6 in 12 with the same loads on the projection
+// give the same spans without the deflection limit (bending on the
+// projection is the same); deflection, taken perpendicular to the sloped
+// member against its sloped length, is 1/cos of the slope larger as a
+// ratio, so sloped spans governed by it are shorter than the table's.
+func TestSpanTable_IBC2018_2308_7_2_2(t *testing.T) {
+	sizes := []string{"2x4", "2x6", "2x8", "2x10", "2x12"}
+	rows := []struct {
+		spacing, dead float64
+		spans         string // 2x4 .. 2x12, feet-inches; "-" = Note b
+	}{
+		{12, 10, "9-10 15-6 20-5 25-8 -"},
+		{12, 20, "9-10 14-4 18-2 22-3 25-9"},
+		{16, 10, "8-11 14-1 18-2 22-3 25-9"},
+		{16, 20, "8-6 12-5 15-9 19-3 22-4"},
+	}
+	old, err := LoadMaterialsCSV(strings.NewReader(
+		strings.Join(materialColumns, ",")+"\nDouglas Fir-Larch,No.2,2,0,875,575,180,625,1350,1600000,580000,4A,span-table basis\n"), "fb875.csv")
+	if err != nil {
+		t.Fatal(err)
+	}
+	s875 := DefaultSettings()
+	s875.Materials = BuiltinMaterials().Merge(old)
+	for _, r := range rows {
+		for k, cell := range strings.Fields(r.spans) {
+			if cell == "-" {
+				continue
+			}
+			var f, in float64
+			if _, err := fmt.Sscanf(cell, "%g-%g", &f, &in); err != nil {
+				t.Fatalf("table cell %q: %v", cell, err)
+			}
+			want := 12*f + in
+			rafter := func(pitch float64) func(size string, spanIn, spacingIn float64) Member {
+				return func(size string, spanIn, spacingIn float64) Member {
+					m := floorJoist(size, spanIn, spacingIn)
+					m.Use = "roof"
+					m.Loads = AreaLoads{DeadPsf: r.dead, RoofLivePsf: 20}
+					m.LiveLimit, m.TotalLimit = 240, 0
+					m.PitchRise12 = pitch
+					return m
+				}
+			}
+			got := maxSpanOf(rafter(0), sizes[k], r.spacing, s875)
+			if math.Abs(got-want) > 1 {
+				t.Errorf("%s @ %v in, %v psf dead, Fb 875: longest span %.1f in, IBC 2018 Table 2308.7.2(2) %.0f in",
+					sizes[k], r.spacing, r.dead, got, want)
+			}
+			got900 := maxSpanOf(rafter(0), sizes[k], r.spacing, DefaultSettings())
+			if got900 < want-1 || got900 > want*math.Sqrt(900.0/875)+1 {
+				t.Errorf("%s @ %v in, %v psf dead, NDS 2018 values: longest span %.1f in, IBC 2018 Table 2308.7.2(2) %.0f in",
+					sizes[k], r.spacing, r.dead, got900, want)
+			}
+			// Without the deflection limit (bending, shear and bearing
+			// govern) the slope changes nothing: the loads and spans are on
+			// the projection.
+			noDefl := func(pitch float64) func(size string, spanIn, spacingIn float64) Member {
+				return func(size string, spanIn, spacingIn float64) Member {
+					m := rafter(pitch)(size, spanIn, spacingIn)
+					m.LiveLimit = 0
+					return m
+				}
+			}
+			{
+				flat := maxSpanOf(noDefl(0), sizes[k], r.spacing, s875)
+				sloped := maxSpanOf(noDefl(6), sizes[k], r.spacing, s875)
+				if math.Abs(sloped-flat) > 0.1 {
+					t.Errorf("%s @ %v in, %v psf dead: span without the deflection limit %.1f in flat, %.1f in at 6 in 12 (loads on the projection)",
+						sizes[k], r.spacing, r.dead, flat, sloped)
+				}
+			}
+		}
+	}
+}
