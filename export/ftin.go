@@ -1,7 +1,6 @@
 package export
 
 import (
-	"fmt"
 	"math"
 	"strconv"
 	"strings"
@@ -24,16 +23,26 @@ func FtIn(in float64) string {
 	rem := sixteenths % (12 * 16)
 	whole := rem / 16
 	frac := rem % 16
-	s := fmt.Sprintf("%s%d'-%d", sign, ft, whole)
+	// Appended by hand rather than with fmt: a plan's schedule, locations
+	// and labels format hundreds of thousands of lengths.
+	var buf [40]byte
+	b := append(buf[:0], sign...)
+	b = strconv.AppendInt(b, ft, 10)
+	b = append(b, "'-"...)
+	b = strconv.AppendInt(b, whole, 10)
 	if frac != 0 {
 		num, den := frac, int64(16)
 		for num%2 == 0 {
 			num /= 2
 			den /= 2
 		}
-		s += fmt.Sprintf(" %d/%d", num, den)
+		b = append(b, ' ')
+		b = strconv.AppendInt(b, num, 10)
+		b = append(b, '/')
+		b = strconv.AppendInt(b, den, 10)
 	}
-	return s + `"`
+	b = append(b, '"')
+	return string(b)
 }
 
 // ftInList formats lengths as "12'-0\" + 10'-6\"".
