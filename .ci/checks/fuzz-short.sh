@@ -13,7 +13,7 @@ targets=(
   "./framing FuzzParseCallout"
   "./export FuzzAnnotate"
   "./cmd/framecheck FuzzCheckPlan"
-  "./cmd/framecheck FuzzLoadProject"
+  "./project FuzzLoadProject"
   "./check/beam FuzzSolve"
 )
 # every Fuzz function of the module is in the list above

@@ -11,6 +11,7 @@ import (
 
 	"framecheck/dxfimport"
 	"framecheck/export"
+	"framecheck/project"
 )
 
 // TestBaysOutputs runs `framecheck check` on the plan of bays_test.go
@@ -111,8 +112,8 @@ func TestBaysOutputs(t *testing.T) {
 					role = f[len(f)-1]
 				}
 			}
-			if code != 0 || role != RoleBays {
-				t.Errorf("layers: exit %d, no FRAMING-BAY with role %s:\n%s%s", code, RoleBays, so, se)
+			if code != 0 || role != project.RoleBays {
+				t.Errorf("layers: exit %d, no FRAMING-BAY with role %s:\n%s%s", code, project.RoleBays, so, se)
 			}
 		}
 	}

@@ -16,6 +16,7 @@ import (
 
 	"framecheck/dxfimport"
 	"framecheck/framing"
+	"framecheck/project"
 )
 
 // groupSizes are the plans BenchmarkGroupPerJoist groups; the largest
@@ -29,7 +30,7 @@ func BenchmarkGroupPerJoist(b *testing.B) {
 	for _, n := range groupSizes {
 		b.Run(fmt.Sprintf("joists=%d", n), func(b *testing.B) {
 			p := writeBigPlan(b, b.TempDir(), n, false)
-			proj, err := LoadProject(p.toml)
+			proj, err := project.LoadProject(p.toml)
 			if err != nil {
 				b.Fatal(err)
 			}

@@ -28,6 +28,7 @@ import (
 	"framecheck/dxfimport"
 	"framecheck/export"
 	"framecheck/framing"
+	"framecheck/project"
 	"framecheck/samples/bigplan/synth"
 )
 
@@ -81,7 +82,7 @@ func writeBigPlanOpts(tb testing.TB, dir string, o synth.Options) bigPlan {
 // of later stages.
 type prepared struct {
 	bigPlan
-	project *Project
+	project *project.Project
 	outcome *outcome
 	results *export.Results
 	inputs  []check.Member
@@ -92,7 +93,7 @@ type prepared struct {
 func prepare(tb testing.TB, dir string, n int) *prepared {
 	tb.Helper()
 	pp := &prepared{bigPlan: writeBigPlan(tb, dir, n, false)}
-	proj, err := LoadProject(pp.toml)
+	proj, err := project.LoadProject(pp.toml)
 	if err != nil {
 		tb.Fatal(err)
 	}
@@ -109,7 +110,7 @@ func prepare(tb testing.TB, dir string, n int) *prepared {
 
 // checkInputs builds the check input of every plan member as runPipeline
 // does, with which members are usable.
-func checkInputs(p *Project, plan *framing.Plan) ([]check.Member, []float64, []bool) {
+func checkInputs(p *project.Project, plan *framing.Plan) ([]check.Member, []float64, []bool) {
 	inputs := make([]check.Member, len(plan.Members))
 	shifts := make([]float64, len(plan.Members))
 	usable := make([]bool, len(plan.Members))
@@ -208,7 +209,7 @@ func BenchmarkStageParse(b *testing.B) {
 func BenchmarkStageFraming(b *testing.B) {
 	forSizes(b, func(b *testing.B, n int) {
 		p := writeBigPlan(b, b.TempDir(), n, false)
-		proj, err := LoadProject(p.toml)
+		proj, err := project.LoadProject(p.toml)
 		if err != nil {
 			b.Fatal(err)
 		}
@@ -233,7 +234,7 @@ func BenchmarkStageFraming(b *testing.B) {
 func BenchmarkStageFramingOutlines(b *testing.B) {
 	forSizes(b, func(b *testing.B, n int) {
 		p := writeBigPlanOpts(b, b.TempDir(), synth.Options{Joists: n, Outlines: true})
-		proj, err := LoadProject(p.toml)
+		proj, err := project.LoadProject(p.toml)
 		if err != nil {
 			b.Fatal(err)
 		}
@@ -258,7 +259,7 @@ func BenchmarkStageFramingOutlines(b *testing.B) {
 func BenchmarkStagePipeline(b *testing.B) {
 	forSizes(b, func(b *testing.B, n int) {
 		p := writeBigPlan(b, b.TempDir(), n, false)
-		proj, err := LoadProject(p.toml)
+		proj, err := project.LoadProject(p.toml)
 		if err != nil {
 			b.Fatal(err)
 		}
@@ -433,7 +434,7 @@ func BenchmarkStageAnnotate(b *testing.B) {
 func TestBigPlanOutcome(t *testing.T) {
 	for _, r12 := range []bool{false, true} {
 		p := writeBigPlan(t, t.TempDir(), 2000, r12)
-		proj, err := LoadProject(p.toml)
+		proj, err := project.LoadProject(p.toml)
 		if err != nil {
 			t.Fatal(err)
 		}

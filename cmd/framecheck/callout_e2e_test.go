@@ -7,6 +7,7 @@ import (
 	"testing"
 
 	"framecheck/export"
+	"framecheck/project"
 )
 
 // calloutPlanText is the corpus's small plan (five joists at y = 16 ...
@@ -83,7 +84,7 @@ func TestProjectSizeMetricAndBuiltUpRefused(t *testing.T) {
 		{"(5) 2x10", "built-up member not checked"},
 		{"(2) 4x10", "built-up member not checked"},
 	} {
-		_, err := ParseProject("p.toml", []byte("[lumber]\nsize = \""+c.size+"\"\n"))
+		_, err := project.ParseProject("p.toml", []byte("[lumber]\nsize = \""+c.size+"\"\n"))
 		if err == nil || !strings.Contains(err.Error(), c.want) || !strings.Contains(err.Error(), "p.toml:2:") {
 			t.Errorf("size %q: %v, want line 2 and %q", c.size, err, c.want)
 		}

@@ -18,6 +18,7 @@ import (
 	"framecheck/dxfimport"
 	"framecheck/export"
 	"framecheck/framing"
+	"framecheck/project"
 	"framecheck/samples"
 )
 
@@ -187,9 +188,9 @@ check on them, so the whole job can be seen with no files at hand.`)
 // run does the whole job for one plan.
 func (c *checkRun) run(stdout, stderr io.Writer) int {
 	defer c.handleSignals(stderr)()
-	proj := DefaultProject()
+	proj := project.DefaultProject()
 	if c.projectPath != "" {
-		p, err := LoadProject(c.projectPath)
+		p, err := project.LoadProject(c.projectPath)
 		if err != nil {
 			fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 			return exitUsage
@@ -419,7 +420,7 @@ func (c *checkRun) outputNames() []string {
 // set swapped in, the manifest last. A failure leaves the folder's
 // previous set as it was and no partial file behind (a folder that the
 // run created is removed again). Every error is a machineError.
-func (c *checkRun) write(o *outcome, res *export.Results, proj *Project, stderr io.Writer) (written []string, err error) {
+func (c *checkRun) write(o *outcome, res *export.Results, proj *project.Project, stderr io.Writer) (written []string, err error) {
 	when, err := runTime()
 	if err != nil {
 		return nil, err
@@ -518,7 +519,7 @@ func (c *checkRun) write(o *outcome, res *export.Results, proj *Project, stderr 
 	in := &manifestInput{Path: outputName(c.planPath), SHA256: res.InputSHA256, Bytes: int64(len(c.planData))}
 	var pj *manifestInput
 	if c.projectPath != "" {
-		pj = &manifestInput{Path: outputName(c.projectPath), SHA256: proj.sha256, Bytes: proj.size}
+		pj = &manifestInput{Path: outputName(c.projectPath), SHA256: proj.FileSHA256(), Bytes: proj.FileSize()}
 	}
 	manifest, err := buildManifest(set, staged, in, pj, when)
 	if err != nil {
@@ -540,7 +541,7 @@ const maxDefaultsListed = 5
 
 // printSummary writes the run's summary: marks, failing members, blocking
 // rows and takeoff totals in aligned tables.
-func printSummary(w io.Writer, c *checkRun, proj *Project, r *export.Results, written []string) {
+func printSummary(w io.Writer, c *checkRun, proj *project.Project, r *export.Results, written []string) {
 	colour := useColour(w)
 	fmt.Fprintf(w, "\nframecheck %s: %d members: %d pass, %d fail, %d error, %s%s\n",
 		termText(r.Plan), r.Summary.Members, r.Summary.Pass, r.Summary.Fail, r.Summary.Error, plural(c.warnings, "warning"), doubtText(c.doubts))
@@ -587,7 +588,7 @@ func printSummary(w io.Writer, c *checkRun, proj *Project, r *export.Results, wr
 
 // sizingLine tells what --size did: the candidates tried and how many
 // checked members got each size.
-func sizingLine(proj *Project, r *export.Results) string {
+func sizingLine(proj *project.Project, r *export.Results) string {
 	count := map[string]int{}
 	for _, m := range r.Members {
 		if m.Status != "error" {

@@ -11,6 +11,8 @@ import (
 	"strconv"
 	"strings"
 	"unicode/utf8"
+
+	"framecheck/project"
 )
 
 // cmdFlags is a subcommand's flag set with its usage text.
@@ -140,7 +142,7 @@ Edit it to suit the plan, then pass it to check with -p.`)
 		return f.usageError(stderr, "unexpected argument %q", pos[0])
 	}
 	if *out == "-" {
-		if _, err := io.WriteString(stdout, starterProject); err != nil {
+		if _, err := io.WriteString(stdout, project.StarterProject); err != nil {
 			fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 			return exitUsage
 		}
@@ -159,7 +161,7 @@ Edit it to suit the plan, then pass it to check with -p.`)
 		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitUsage
 	}
-	_, err = io.WriteString(file, starterProject)
+	_, err = io.WriteString(file, project.StarterProject)
 	if cerr := file.Close(); err == nil {
 		err = cerr
 	}

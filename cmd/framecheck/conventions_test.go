@@ -25,6 +25,7 @@ import (
 	"testing"
 
 	"framecheck/dxfimport"
+	"framecheck/project"
 )
 
 // convProject gives the walls and the dropped beam their kinds.
@@ -189,7 +190,7 @@ func convRunFile(t *testing.T, plan, proj string) *outcome {
 	if err := os.WriteFile(proj, []byte(convProject), 0o644); err != nil {
 		t.Fatal(err)
 	}
-	p, err := LoadProject(proj)
+	p, err := project.LoadProject(proj)
 	if err != nil {
 		t.Fatal(err)
 	}

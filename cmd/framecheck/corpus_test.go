@@ -18,6 +18,7 @@ import (
 	"testing"
 
 	"framecheck/export"
+	"framecheck/project"
 )
 
 // The bad-input corpus: one end-to-end run of `framecheck check` per file
@@ -659,7 +660,7 @@ func TestProjectSyntaxLines(t *testing.T) {
 		{"[design]\ncombinations = [\"D\",\n\"D+L\",\n", 3}, // file ends inside an array
 	}
 	for _, c := range cases {
-		_, err := ParseProject("p.toml", []byte(c.in))
+		_, err := project.ParseProject("p.toml", []byte(c.in))
 		want := fmt.Sprintf("p.toml:%d: TOML syntax", c.line)
 		if err == nil || !strings.HasPrefix(err.Error(), want) {
 			t.Errorf("%q: got %v, want %s...", c.in, err, want)

@@ -4,6 +4,8 @@ import (
 	"fmt"
 	"io"
 	"strings"
+
+	"framecheck/project"
 )
 
 // engineeringDefault reports whether a default taken (an entry of
@@ -66,7 +68,7 @@ func defaultLabel(e string) (label, item string) {
 // printDefaults writes the defaults the run took: every engineering value
 // (grouped by table, one line each), and the other settings too when they
 // are few; more are counted and left to the Notes sheet.
-func printDefaults(w io.Writer, c *checkRun, proj *Project) {
+func printDefaults(w io.Writer, c *checkRun, proj *project.Project) {
 	used := proj.DefaultsUsed()
 	if len(used) == 0 {
 		return

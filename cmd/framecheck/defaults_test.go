@@ -4,6 +4,8 @@ import (
 	"bytes"
 	"strings"
 	"testing"
+
+	"framecheck/project"
 )
 
 // TestEngineeringDefaultsOnTerminal: without a project file, the loads,
@@ -11,7 +13,7 @@ import (
 // only counted (issue 15 item 6); the layer patterns are only counted.
 func TestEngineeringDefaultsOnTerminal(t *testing.T) {
 	var b bytes.Buffer
-	printDefaults(&b, &checkRun{planPath: "/nonexistent/plan.dxf"}, DefaultProject())
+	printDefaults(&b, &checkRun{planPath: "/nonexistent/plan.dxf"}, project.DefaultProject())
 	out := b.String()
 	for _, want := range []string{
 		"D 12 psf, L 40 psf", // the built-in FLOOR zone, PROJECT-FILE.md

@@ -10,6 +10,7 @@ import (
 
 	"framecheck/dxfimport"
 	"framecheck/export"
+	"framecheck/project"
 	"framecheck/samples"
 )
 
@@ -124,9 +125,9 @@ func FuzzCheckPlan(f *testing.F) {
 	// The projects a plan is checked with: the built-in defaults, the
 	// demo's (several zones, by-layer sizes, three support kinds), and a
 	// roof under uplift with every design switch turned from its default.
-	projects := []*Project{DefaultProject()}
+	projects := []*project.Project{project.DefaultProject()}
 	for _, text := range []string{string(samples.DemoProject), upliftProject} {
-		p, err := ParseProject("fuzz.toml", []byte(text))
+		p, err := project.ParseProject("fuzz.toml", []byte(text))
 		if err != nil {
 			f.Fatal(err)
 		}

@@ -3,6 +3,8 @@ package main
 import (
 	"fmt"
 	"strings"
+
+	"framecheck/project"
 )
 
 // layerFlags are check's --joists and --supports: layer patterns given on
@@ -18,7 +20,7 @@ type layerFlags struct {
 func (lf *layerFlags) add(f *cmdFlags) {
 	f.StringVar(&lf.joists, "joists", "", "joist layer patterns, comma-separated (replace [layers] joists)")
 	f.StringVar(&lf.supports, "supports", "", "support layer patterns, comma-separated, each PATTERN (a bearing wall) or KIND=PATTERN, "+
-		"KIND one of "+strings.Join(supportKinds, ", ")+" (replace the [[support]] tables)")
+		"KIND one of "+strings.Join(project.SupportKinds, ", ")+" (replace the [[support]] tables)")
 }
 
 // splitPatterns splits a comma-separated list of patterns, trimming
@@ -37,7 +39,7 @@ func splitPatterns(s string) []string {
 // (DXF layer names exclude it), so KIND=PATTERN is unambiguous. The
 // errors are usage errors: a flag with no pattern, an unknown kind, or a
 // pattern given to two roles.
-func (lf *layerFlags) apply(p *Project) error {
+func (lf *layerFlags) apply(p *project.Project) error {
 	if lf.joists == "" && lf.supports == "" {
 		return nil
 	}
@@ -60,39 +62,39 @@ func (lf *layerFlags) apply(p *Project) error {
 	}
 	// the defaults list (summary, Notes sheet) no longer names what the
 	// flags replaced
-	kept := p.defaults[:0:0]
-	for _, d := range p.defaults {
+	var kept []string
+	for _, d := range p.DefaultsUsed() {
 		if drop["layers.joists"] && strings.HasPrefix(d, "layers.joists ") ||
 			drop["[[support]]"] && strings.HasPrefix(d, "[[support]]") {
 			continue
 		}
 		kept = append(kept, d)
 	}
-	p.defaults = kept
+	p.SetDefaultsUsed(kept)
 	return patternsOnce(p)
 }
 
 // parseSupportsFlag reads --supports: PATTERN or KIND=PATTERN items,
 // comma-separated, into one support table per kind (in order of first
 // mention), each with its kind's default bearing length.
-func parseSupportsFlag(s string) ([]Support, error) {
+func parseSupportsFlag(s string) ([]project.Support, error) {
 	items := splitPatterns(s)
 	if len(items) == 0 {
 		return nil, fmt.Errorf("--supports %q: want one or more layer patterns, comma-separated", s)
 	}
-	var out []Support
+	var out []project.Support
 	index := map[string]int{}
 	for _, it := range items {
 		kind, pat := "bearing-wall", it
 		if k, v, ok := strings.Cut(it, "="); ok {
 			kind, pat = "", strings.TrimSpace(v)
-			for _, sk := range supportKinds {
+			for _, sk := range project.SupportKinds {
 				if strings.EqualFold(strings.TrimSpace(k), sk) {
 					kind = sk
 				}
 			}
 			if kind == "" {
-				return nil, fmt.Errorf("--supports %q: kind %q: want one of %s", it, strings.TrimSpace(k), strings.Join(supportKinds, ", "))
+				return nil, fmt.Errorf("--supports %q: kind %q: want one of %s", it, strings.TrimSpace(k), strings.Join(project.SupportKinds, ", "))
 			}
 			if pat == "" {
 				return nil, fmt.Errorf("--supports %q: no layer pattern after %s=", it, kind)
@@ -102,7 +104,7 @@ func parseSupportsFlag(s string) ([]Support, error) {
 		if !ok {
 			i = len(out)
 			index[kind] = i
-			out = append(out, Support{Kind: kind, BearingIn: defaultBearingIn[kind], Check: true})
+			out = append(out, project.Support{Kind: kind, BearingIn: project.DefaultBearingIn[kind], Check: true})
 		}
 		out[i].Layers = append(out[i].Layers, pat)
 	}
@@ -112,7 +114,7 @@ func parseSupportsFlag(s string) ([]Support, error) {
 // patternsOnce refuses a layer pattern that two roles of p name (joists
 // and a support, two supports, a support and labels, ...): a layer plays
 // one part. Patterns compare case-insensitively.
-func patternsOnce(p *Project) error {
+func patternsOnce(p *project.Project) error {
 	seen := map[string]string{}
 	check := func(role string, pats []string) error {
 		for _, pat := range pats {

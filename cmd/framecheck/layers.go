@@ -9,6 +9,7 @@ import (
 	"strings"
 
 	"framecheck/dxfimport"
+	"framecheck/project"
 )
 
 // layerRow is one line of the `framecheck layers` table.
@@ -30,7 +31,7 @@ var kindOrder = []dxfimport.Kind{
 // layerRows lists every layer of the drawing, from the LAYER table and
 // from the entities, sorted by name (case-insensitive), with its entity
 // counts and the role the project gives it.
-func layerRows(d *dxfimport.Drawing, p *Project) []layerRow {
+func layerRows(d *dxfimport.Drawing, p *project.Project) []layerRow {
 	rows := map[string]*layerRow{}
 	get := func(name string) *layerRow {
 		r, ok := rows[name]
@@ -69,7 +70,7 @@ func layerRows(d *dxfimport.Drawing, p *Project) []layerRow {
 
 // unusedPatterns lists the project's layer patterns that match no layer
 // of the drawing, as "layers.blocking: \"BLOCKING*\"".
-func unusedPatterns(rows []layerRow, p *Project) []string {
+func unusedPatterns(rows []layerRow, p *project.Project) []string {
 	type role struct {
 		key      string
 		patterns []string
@@ -111,13 +112,13 @@ Without -p the built-in layer patterns apply.`)
 	if len(pos) != 1 {
 		return f.usageError(stderr, "want one PLAN.dxf, got %d arguments", len(pos))
 	}
-	if *units != "" && !contains(unitsValues, *units) {
-		return f.usageError(stderr, "--units %q: want one of %s", *units, strings.Join(unitsValues, ", "))
+	if *units != "" && !project.Contains(project.UnitsValues, *units) {
+		return f.usageError(stderr, "--units %q: want one of %s", *units, strings.Join(project.UnitsValues, ", "))
 	}
-	p := DefaultProject()
+	p := project.DefaultProject()
 	if *projectPath != "" {
 		var err error
-		if p, err = LoadProject(*projectPath); err != nil {
+		if p, err = project.LoadProject(*projectPath); err != nil {
 			fmt.Fprintf(stderr, "framecheck: %s\n", prefixLines(termText(err.Error())))
 			return exitUsage
 		}
@@ -152,7 +153,7 @@ Without -p the built-in layer patterns apply.`)
 
 // keepLayer is the reader's Options.Keep for a project: the entities of
 // layers that have a role are kept, the others only counted.
-func keepLayer(p *Project) func(string) bool {
+func keepLayer(p *project.Project) func(string) bool {
 	return func(layer string) bool { return p.LayerRole(layer) != "" }
 }
 
@@ -175,7 +176,7 @@ func prefixLines(s string) string {
 // printLayers writes the drawing summary, the layer table and the notes.
 // unitsSource names where the unit came from when not from the header:
 // "--units" or "drawing.units".
-func printLayers(w io.Writer, d *dxfimport.Drawing, p *Project, unitsSource string) {
+func printLayers(w io.Writer, d *dxfimport.Drawing, p *project.Project, unitsSource string) {
 	rows := layerRows(d, p)
 	fmt.Fprintf(w, "%s: %s, %s, %d entities on %d layers\n", termText(d.File), termText(versionName(d.Version)),
 		termText(unitsNote(d, unitsSource)), len(d.Entities)+droppedCount(d), len(rows))
@@ -216,7 +217,7 @@ func printLayers(w io.Writer, d *dxfimport.Drawing, p *Project, unitsSource stri
 		if role == "" {
 			role = "-"
 		}
-		line = append(line, strings.Replace(role, rolePrefixSupport, "support: ", 1))
+		line = append(line, strings.Replace(role, project.RolePrefixSupport, "support: ", 1))
 		table = append(table, line)
 	}
 	writeTable(w, table, right)
@@ -232,10 +233,10 @@ func printLayers(w io.Writer, d *dxfimport.Drawing, p *Project, unitsSource stri
 	}
 	joists := false
 	for _, r := range rows {
-		joists = joists || r.Role == RoleJoists && len(r.Counts) > 0
+		joists = joists || r.Role == project.RoleJoists && len(r.Counts) > 0
 	}
 	if !joists {
-		note := fmt.Sprintf("no entities on a joist layer: layers.joists is %s", fmtList(p.Layers.Joists))
+		note := fmt.Sprintf("no entities on a joist layer: layers.joists is %s", project.FmtList(p.Layers.Joists))
 		if like := joistLikeLayers(rows); len(like) > 0 {
 			note += fmt.Sprintf("; the joists may be on %s: name that layer in [layers] joists of the project file ('framecheck init' writes one)",
 				strings.Join(like, ", "))

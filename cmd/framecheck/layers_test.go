@@ -8,6 +8,7 @@ import (
 	"testing"
 
 	"framecheck/dxfimport"
+	"framecheck/project"
 )
 
 // The demo plan and ezdxf's own count of its entities per layer
@@ -34,7 +35,7 @@ func TestLayerRowsAgainstEzdxf(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	p, err := LoadProject(demoProject)
+	p, err := project.LoadProject(demoProject)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -91,7 +92,7 @@ func TestLayersNotes(t *testing.T) {
 		Layers:   []dxfimport.Layer{{Name: "WALLS", On: false}, {Name: "J1", On: true, Frozen: true}},
 		Entities: []dxfimport.Entity{{Kind: dxfimport.KindLine, Pos: dxfimport.Pos{Layer: "WALLS"}}}}
 	var b strings.Builder
-	printLayers(&b, d, DefaultProject(), "")
+	printLayers(&b, d, project.DefaultProject(), "")
 	out := b.String()
 	for _, want := range []string{
 		"layer WALLS is off", "layer J1 is frozen",

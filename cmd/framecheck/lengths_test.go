@@ -1,47 +1,9 @@
 package main
 
 import (
-	"math"
 	"strings"
 	"testing"
 )
-
-// Keys in inches (their names end in _in) stay numbers, and also take a
-// length as the trade writes it, as a string; a bare number there is
-// inches, as the key says. 1 in = 25.4 mm exactly (NIST SP 811).
-func TestProjectLengthKeysTakeTradeForms(t *testing.T) {
-	p, err := ParseProject("p.toml", []byte(`[drawing]
-snap_tolerance_in = "38.1mm"
-max_wall_thickness_in = "1'-0\""
-edge_distance_in = "2"
-
-[[support]]
-layers = ["WALL*"]
-kind = "bearing-wall"
-bearing_in = "3 1/2\""
-
-[[support]]
-layers = ["BEAM*"]
-kind = "flush-beam"
-bearing_in = 1.5
-`))
-	if err != nil {
-		t.Fatal(err)
-	}
-	d := p.Drawing
-	for _, c := range []struct {
-		key       string
-		got, want float64
-	}{
-		{"snap_tolerance_in", d.SnapToleranceIn, 1.5}, {"max_wall_thickness_in", d.MaxWallThicknessIn, 12},
-		{"edge_distance_in", d.EdgeDistanceIn, 2}, {"bearing_in", p.Supports[0].BearingIn, 3.5},
-		{"bearing_in (number)", p.Supports[1].BearingIn, 1.5},
-	} {
-		if math.Abs(c.got-c.want) > 1e-9 {
-			t.Errorf("%s = %v, want %v", c.key, c.got, c.want)
-		}
-	}
-}
 
 // A length typed as every output prints it gives the same joist as in
 // inches; a bare number is refused naming both readings, exit 2.

@@ -151,6 +151,8 @@ import (
 	"log"
 	"os"
 	"strings"
+
+	"framecheck/project"
 )
 
 func main() {
@@ -228,7 +230,7 @@ func unknownCommand(name string, stderr io.Writer) int {
 	msg := fmt.Sprintf("framecheck: unknown command %q", name)
 	best, bestD := "", 3
 	for _, c := range commands {
-		if d := editDistance(strings.ToLower(name), c.name); d < bestD {
+		if d := project.EditDistance(strings.ToLower(name), c.name); d < bestD {
 			best, bestD = c.name, d
 		}
 	}

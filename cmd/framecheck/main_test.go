@@ -7,6 +7,8 @@ import (
 	"reflect"
 	"strings"
 	"testing"
+
+	"framecheck/project"
 )
 
 // runCmd runs the command in-process and returns its exit code and output.
@@ -51,26 +53,6 @@ func TestUsageAndExitCodes(t *testing.T) {
 	}
 }
 
-// TestInitRoundTrip writes the starter file and loads it back: it must
-// give exactly the built-in defaults.
-func TestInitRoundTrip(t *testing.T) {
-	path := filepath.Join(t.TempDir(), "framecheck.toml")
-	code, out, errs := runCmd("init", "-o", path)
-	if code != 0 || errs != "" || !strings.Contains(out, "wrote "+path) {
-		t.Fatalf("init: exit %d, stdout %q, stderr %q", code, out, errs)
-	}
-	p, err := LoadProject(path)
-	if err != nil {
-		t.Fatal(err)
-	}
-	def := DefaultProject()
-	p.File, p.given, p.defaults, p.sha256, p.size = "", nil, nil, "", 0
-	def.given, def.defaults = nil, nil
-	if !reflect.DeepEqual(p, def) {
-		t.Errorf("starter file loads as\n%+v\nwant the defaults\n%+v", p, def)
-	}
-}
-
 func TestInitRefusesOverwrite(t *testing.T) {
 	path := filepath.Join(t.TempDir(), "p.toml")
 	if err := os.WriteFile(path, []byte("# mine\n"), 0o644); err != nil {
@@ -84,14 +66,14 @@ func TestInitRefusesOverwrite(t *testing.T) {
 		t.Errorf("file changed without --force: %q", b)
 	}
 	code, _, errs = runCmd("init", "--force", "-o", path)
-	if b, _ := os.ReadFile(path); code != 0 || string(b) != starterProject {
+	if b, _ := os.ReadFile(path); code != 0 || string(b) != project.StarterProject {
 		t.Errorf("--force: exit %d, stderr %q, file not replaced", code, errs)
 	}
 }
 
 func TestInitStdout(t *testing.T) {
 	code, out, _ := runCmd("init", "-o", "-")
-	if code != 0 || out != starterProject {
+	if code != 0 || out != project.StarterProject {
 		t.Errorf("init -o -: exit %d, %d bytes", code, len(out))
 	}
 }

@@ -9,6 +9,7 @@ import (
 
 	"framecheck/export"
 	"framecheck/framing"
+	"framecheck/project"
 )
 
 // marksCase is the demo plan and project file in a folder, checked into
@@ -277,7 +278,7 @@ func TestSameDepth(t *testing.T) {
 			} else {
 				text += "\n[sizing]\nsame_depth = \"" + mode + "\"\n"
 			}
-			p, err := ParseProject("framecheck.toml", []byte(text))
+			p, err := project.ParseProject("framecheck.toml", []byte(text))
 			if err != nil {
 				t.Fatal(err)
 			}
@@ -315,7 +316,7 @@ func TestSameDepth(t *testing.T) {
 			}
 		})
 	}
-	if _, err := ParseProject("p.toml", []byte("[sizing]\nsame_depth = \"floor\"\n")); err == nil ||
+	if _, err := project.ParseProject("p.toml", []byte("[sizing]\nsame_depth = \"floor\"\n")); err == nil ||
 		!strings.Contains(err.Error(), `"run" | "zone" | "none"`) {
 		t.Errorf("same_depth = \"floor\": %v, want the allowed values named", err)
 	}

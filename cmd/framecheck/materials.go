@@ -6,6 +6,7 @@ import (
 	"strconv"
 
 	"framecheck/check"
+	"framecheck/project"
 )
 
 func runMaterials(args []string, stdout, stderr io.Writer) int {
@@ -24,7 +25,7 @@ SPECIES may be any common spelling ("DF-L", "Douglas Fir-Larch", "SPF").`)
 	}
 	mats := check.BuiltinMaterials()
 	if *projectPath != "" {
-		p, err := LoadProject(*projectPath)
+		p, err := project.LoadProject(*projectPath)
 		if err != nil {
 			fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 			return exitUsage

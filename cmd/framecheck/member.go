@@ -9,6 +9,7 @@ import (
 	"strings"
 
 	"framecheck/check"
+	"framecheck/project"
 )
 
 // memberArgs are the values of `framecheck member`'s flags.
@@ -93,9 +94,9 @@ func buildMember(a *memberArgs, set map[string]bool) (check.Member, check.Settin
 		return m, check.Settings{}, "--size is required"
 	case len(a.spans.in) == 0:
 		return m, check.Settings{}, "--span is required"
-	case !contains(useValues, a.use):
+	case !project.Contains(project.UseValues, a.use):
 		return m, check.Settings{}, fmt.Sprintf("--use %q: want floor or roof", a.use)
-	case !contains(ceilingValues, a.ceiling):
+	case !project.Contains(project.CeilingValues, a.ceiling):
 		return m, check.Settings{}, fmt.Sprintf("--ceiling %q: want plaster, non-plaster or none", a.ceiling)
 	case a.bearing.in <= 0 || a.spacing.in <= 0:
 		return m, check.Settings{}, "--bearing and --spacing must be greater than 0"
@@ -108,15 +109,15 @@ func buildMember(a *memberArgs, set map[string]bool) (check.Member, check.Settin
 	}{{"dead", a.loads.DeadPsf}, {"live", a.loads.LivePsf}, {"roof-live", a.loads.RoofLivePsf},
 		{"snow", a.loads.SnowPsf}, {"wind-down", a.loads.WindDownPsf}, {"wind-up", a.loads.WindUpPsf}} {
 		if !(l.v >= 0) || math.IsInf(l.v, 1) {
-			return m, check.Settings{}, fmt.Sprintf("--%s %s: want a load of 0 psf or more", l.name, fmtNum(l.v))
+			return m, check.Settings{}, fmt.Sprintf("--%s %s: want a load of 0 psf or more", l.name, project.FmtNum(l.v))
 		}
 	}
 	for _, l := range []struct {
 		name string
 		v    float64
 	}{{"live-limit", a.liveLimit}, {"total-limit", a.totalLimit}} {
-		if set[l.name] && deflectionLimit(l.v) != "" {
-			return m, check.Settings{}, fmt.Sprintf("--%s %s: want 0 (not checked) or at least 1", l.name, fmtNum(l.v))
+		if set[l.name] && project.DeflectionLimit(l.v) != "" {
+			return m, check.Settings{}, fmt.Sprintf("--%s %s: want 0 (not checked) or at least 1", l.name, project.FmtNum(l.v))
 		}
 	}
 	if _, err := check.BuiltinMaterials().Lookup(a.species, a.grade, a.size); err != nil {
@@ -124,7 +125,7 @@ func buildMember(a *memberArgs, set map[string]bool) (check.Member, check.Settin
 	}
 	settings := check.DefaultSettings()
 	if a.project != "" {
-		p, err := LoadProject(a.project)
+		p, err := project.LoadProject(a.project)
 		if err == nil {
 			settings, err = checkSettings(p)
 		}
@@ -133,12 +134,12 @@ func buildMember(a *memberArgs, set map[string]bool) (check.Member, check.Settin
 		}
 	}
 	if !set["live"] && a.use == "floor" {
-		a.loads.LivePsf = floorLiveDefaultPsf
+		a.loads.LivePsf = project.FloorLiveDefaultPsf
 	}
 	if !set["roof-live"] && a.use == "roof" {
-		a.loads.RoofLivePsf = roofLiveDefaultPsf
+		a.loads.RoofLivePsf = project.RoofLiveDefaultPsf
 	}
-	live, total := deflectionLimits(a.use, a.ceiling)
+	live, total := project.DeflectionLimits(a.use, a.ceiling)
 	if set["live-limit"] {
 		live = a.liveLimit
 	}
@@ -148,7 +149,7 @@ func buildMember(a *memberArgs, set map[string]bool) (check.Member, check.Settin
 	pitch := 0.0
 	if a.pitch != "" {
 		var msg string
-		if pitch, msg = parsePitch(a.pitch); msg != "" {
+		if pitch, msg = project.ParsePitch(a.pitch); msg != "" {
 			return m, check.Settings{}, "--pitch: " + msg
 		}
 		if pitch > 0 && a.use != "roof" {
@@ -201,22 +202,22 @@ func printMember(w io.Writer, m check.Member, r check.Result, colour bool) {
 	for i, s := range r.SpansIn {
 		spans[i] = fmtIn(s)
 	}
-	fmt.Fprintf(w, "%s %s %s, %s joist at %s in o.c.\n", r.Size, termText(r.Species), termText(r.Grade), m.Use, fmtNum(m.SpacingIn))
+	fmt.Fprintf(w, "%s %s %s, %s joist at %s in o.c.\n", r.Size, termText(r.Species), termText(r.Grade), m.Use, project.FmtNum(m.SpacingIn))
 	fmt.Fprintf(w, "  spans %s", strings.Join(spans, ", "))
 	if r.OverhangsIn[0] > 0 || r.OverhangsIn[1] > 0 {
 		fmt.Fprintf(w, "; overhangs %s, %s", fmtIn(r.OverhangsIn[0]), fmtIn(r.OverhangsIn[1]))
 	}
 	fmt.Fprintf(w, "; bearings %s long; member %s\n", fmtIn(m.Bearings[0].LengthIn), fmtIn(m.LengthIn))
 	l := m.Loads
-	fmt.Fprintf(w, "  loads D %s, L %s, Lr %s, S %s, W down %s, W up %s psf\n", fmtNum(l.DeadPsf), fmtNum(l.LivePsf),
-		fmtNum(l.RoofLivePsf), fmtNum(l.SnowPsf), fmtNum(l.WindDownPsf), fmtNum(l.WindUpPsf))
+	fmt.Fprintf(w, "  loads D %s, L %s, Lr %s, S %s, W down %s, W up %s psf\n", project.FmtNum(l.DeadPsf), project.FmtNum(l.LivePsf),
+		project.FmtNum(l.RoofLivePsf), project.FmtNum(l.SnowPsf), project.FmtNum(l.WindDownPsf), project.FmtNum(l.WindUpPsf))
 	for _, p := range m.PointLoads {
 		fmt.Fprintf(w, "  point load at %s from the first bearing: D %s, L %s, Lr %s, S %s, W down %s, W up %s lb\n",
-			fmtIn(p.AtIn-m.Bearings[0].AtIn), fmtNum(p.DeadLb), fmtNum(p.LiveLb), fmtNum(p.RoofLiveLb), fmtNum(p.SnowLb),
-			fmtNum(p.WindDownLb), fmtNum(p.WindUpLb))
+			fmtIn(p.AtIn-m.Bearings[0].AtIn), project.FmtNum(p.DeadLb), project.FmtNum(p.LiveLb), project.FmtNum(p.RoofLiveLb), project.FmtNum(p.SnowLb),
+			project.FmtNum(p.WindDownLb), project.FmtNum(p.WindUpLb))
 	}
 	if m.PitchRise12 > 0 {
-		fmt.Fprintf(w, "  rafter at %s in 12, drawn in plan: spans and loads on the horizontal projection (D converted from the slope)\n", fmtNum(m.PitchRise12))
+		fmt.Fprintf(w, "  rafter at %s in 12, drawn in plan: spans and loads on the horizontal projection (D converted from the slope)\n", project.FmtNum(m.PitchRise12))
 	}
 	fmt.Fprintf(w, "  deflection limits: live %s, total %s\n", limitText(m.LiveLimit), limitText(m.TotalLimit))
 	if m.BottomBracedContinuous {
@@ -272,7 +273,7 @@ func printMember(w io.Writer, m check.Member, r check.Result, colour bool) {
 				fmt.Fprintf(w, " (%s)", re.DownCombo)
 			}
 			if re.UpLb > 0 {
-				fmt.Fprintf(w, "; net uplift %s lb (%s, CD = %s)", fmtVal(re.UpLb), re.UpCombo, fmtNum(re.UpCD))
+				fmt.Fprintf(w, "; net uplift %s lb (%s, CD = %s)", fmtVal(re.UpLb), re.UpCombo, project.FmtNum(re.UpCD))
 			}
 			fmt.Fprintln(w)
 		}
@@ -350,5 +351,5 @@ func limitText(n float64) string {
 	if n == 0 {
 		return "not checked"
 	}
-	return "L/" + fmtNum(n)
+	return "L/" + project.FmtNum(n)
 }

@@ -11,6 +11,7 @@ import (
 	"framecheck/dxfimport"
 	"framecheck/framing"
 	"framecheck/loadpath"
+	"framecheck/project"
 )
 
 // Findings of the load path (design: CHK3xx).
@@ -60,7 +61,7 @@ type pathOutcome struct {
 // applyPointLoads puts the point loads drawn on joists on their check
 // inputs (positions shifted as the bearings are). A mark whose text cannot
 // be read makes its joist an error: never a load left out silently.
-func applyPointLoads(p *Project, plan *framing.Plan, inputs []check.Member, shifts []float64) map[int][]string {
+func applyPointLoads(p *project.Project, plan *framing.Plan, inputs []check.Member, shifts []float64) map[int][]string {
 	bad := map[int][]string{}
 	for _, mk := range plan.PointLoads {
 		if mk.Member < 0 {
@@ -80,7 +81,7 @@ func applyPointLoads(p *Project, plan *framing.Plan, inputs []check.Member, shif
 
 // markLoads returns a point-load mark's loads: those its text gives, or
 // the [[point_load]] it names.
-func markLoads(p *Project, mk framing.PointLoadMark) (check.PointLoad, string) {
+func markLoads(p *project.Project, mk framing.PointLoadMark) (check.PointLoad, string) {
 	l := mk.Loads
 	name := mk.Text
 	if mk.Name != "" {
@@ -107,7 +108,7 @@ const beamDensityPcf = woodDensityPcf
 //
 // With sizing (--size), each beam takes the lightest of [sizing]
 // beam_candidates with which it passes, its own weight following the size.
-func runLoadPath(p *Project, plan *framing.Plan, inputs []check.Member, shifts []float64, usable []bool, s check.Settings, o *outcome, sizing bool) {
+func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, shifts []float64, usable []bool, s check.Settings, o *outcome, sizing bool) {
 	checkable := len(plan.Posts) > 0
 	for i := range plan.Beams {
 		checkable = checkable || !plan.Beams[i].Rigid
@@ -374,7 +375,7 @@ func glulamCallout(text string) (size, class string, ok bool) {
 // limits of the strictest joists it carries (IBC 2018 Table 1604.3; a beam
 // carrying none takes the floor limits). msg says why it cannot be
 // checked.
-func beamInput(p *Project, plan *framing.Plan, b *framing.Beam) (check.Member, float64, string) {
+func beamInput(p *project.Project, plan *framing.Plan, b *framing.Beam) (check.Member, float64, string) {
 	sp := p.SupportOf(b.Layer)
 	size := b.Size
 	species, grade := p.Lumber.Species, p.Lumber.Grade
@@ -433,7 +434,7 @@ func beamInput(p *Project, plan *framing.Plan, b *framing.Beam) (check.Member, f
 	}
 	cm.OverhangStartIn = 0
 	cm.OverhangEndIn = 0
-	live, total := deflectionLimits("floor", "non-plaster")
+	live, total := project.DeflectionLimits("floor", "non-plaster")
 	roof := true
 	for _, c := range b.Carried {
 		cm.TopBracingAtIn = append(cm.TopBracingAtIn, c.AtIn+shift)
@@ -446,7 +447,7 @@ func beamInput(p *Project, plan *framing.Plan, b *framing.Beam) (check.Member, f
 	}
 	if roof && len(b.Carried) > 0 {
 		cm.Use = "roof"
-		live, total = deflectionLimits("roof", "non-plaster")
+		live, total = project.DeflectionLimits("roof", "non-plaster")
 	}
 	cm.LiveLimit, cm.TotalLimit = live, total
 	return cm, shift, ""
@@ -455,7 +456,7 @@ func beamInput(p *Project, plan *framing.Plan, b *framing.Beam) (check.Member, f
 // postInput builds check's input for post pt from its [[post]] table and
 // the size beside it; checked is false when its size or height is not
 // known (its load is then only reported).
-func postInput(p *Project, pt *framing.Post) (check.Post, bool, string) {
+func postInput(p *project.Project, pt *framing.Post) (check.Post, bool, string) {
 	pc := check.Post{ID: pt.ID, Species: p.Lumber.Species, Grade: p.Lumber.Grade}
 	if t := p.PostFor(pt.Pos.Layer); t != nil {
 		pc.Size, pc.HeightIn, pc.Ke = t.Size, t.HeightIn, t.Ke

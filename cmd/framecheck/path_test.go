@@ -12,6 +12,7 @@ import (
 
 	"framecheck/check"
 	"framecheck/export"
+	"framecheck/project"
 )
 
 // TestLoadPathOnFixture runs the pipeline on framing's load-path fixture
@@ -21,7 +22,7 @@ import (
 // the walls, posts and rigid supports load type by load type (statics:
 // nothing lost, to 0.1 lb).
 func TestLoadPathOnFixture(t *testing.T) {
-	p, err := ParseProject("p.toml", []byte(loadPathProject))
+	p, err := project.ParseProject("p.toml", []byte(loadPathProject))
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -129,7 +130,7 @@ dead_lb = 450
 // passes (the default list, PROJECT-FILE.md), or the last when none does;
 // the glulam girder keeps its callout's size.
 func TestBeamSizingOnFixture(t *testing.T) {
-	p, err := ParseProject("p.toml", []byte(loadPathProject))
+	p, err := project.ParseProject("p.toml", []byte(loadPathProject))
 	require.NoError(t, err)
 	o, err := runPipeline(pipelineInput{planPath: "../../framing/testdata/loadpath.dxf", project: p, size: true})
 	require.NoError(t, err)

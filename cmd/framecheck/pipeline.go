@@ -14,11 +14,12 @@ import (
 	"framecheck/check"
 	"framecheck/dxfimport"
 	"framecheck/framing"
+	"framecheck/project"
 )
 
 // outcome is everything one check run found, before it is written out.
 type outcome struct {
-	project  *Project
+	project  *project.Project
 	drawing  *dxfimport.Drawing
 	plan     *framing.Plan
 	settings check.Settings
@@ -41,7 +42,7 @@ type outcome struct {
 type pipelineInput struct {
 	planPath string
 	planData []byte // the drawing's bytes; nil: read planPath
-	project  *Project
+	project  *project.Project
 	units    string // --units, overrides the project file and $INSUNITS
 	size     bool   // --size
 	// marks are the names of an earlier run's marks by their defining
@@ -50,7 +51,7 @@ type pipelineInput struct {
 }
 
 // framingOptions maps the project file onto framing's options.
-func framingOptions(p *Project) framing.Options {
+func framingOptions(p *project.Project) framing.Options {
 	o := framing.DefaultOptions()
 	o.SnapToleranceIn = p.Drawing.SnapToleranceIn
 	o.MaxWallThicknessIn = p.Drawing.MaxWallThicknessIn
@@ -83,7 +84,7 @@ func framingOptions(p *Project) framing.Options {
 }
 
 // checkSettings maps the project file's [design] onto check's settings.
-func checkSettings(p *Project) (check.Settings, error) {
+func checkSettings(p *project.Project) (check.Settings, error) {
 	s := check.DefaultSettings()
 	s.TopEdgeBraced = p.Design.TopEdgeBraced
 	s.ShearAtD = p.Design.ShearAtD
@@ -287,7 +288,7 @@ func sizeRuns(groups [][]int, inputs []check.Member, shifts []float64, usable []
 
 // checkAll checks the usable members on every core. Members identical for
 // design (same check input but for the ID) are checked once.
-func checkAll(inputs []check.Member, shifts []float64, usable []bool, s check.Settings, p *Project, o *outcome) {
+func checkAll(inputs []check.Member, shifts []float64, usable []bool, s check.Settings, p *project.Project, o *outcome) {
 	keys := make([]string, len(inputs))
 	first := map[string]int{}
 	var order []int
@@ -399,7 +400,7 @@ func appendKey(b []byte, v reflect.Value) []byte {
 // support) are kept where they are and the member is lengthened to reach
 // them: shift is how far the start moved back, to be taken off the
 // positions check returns. msgs are reasons the member cannot be checked.
-func checkInput(p *Project, plan *framing.Plan, k int) (cm check.Member, shift float64, msgs []string) {
+func checkInput(p *project.Project, plan *framing.Plan, k int) (cm check.Member, shift float64, msgs []string) {
 	m := &plan.Members[k]
 	cm = check.Member{
 		ID: m.ID, Size: m.Size, Species: m.Species, Grade: m.Grade,
@@ -450,7 +451,7 @@ func checkInput(p *Project, plan *framing.Plan, k int) (cm check.Member, shift f
 		if z.PitchRise12 != zs[0].PitchRise12 {
 			msgs = append(msgs, fmt.Sprintf("the member crosses zones %s and %s, which have different pitches (%s and %s in 12): "+
 				"a rafter has one slope; draw the zone edge at the ridge or the member's end", zs[0].Name, z.Name,
-				fmtNum(zs[0].PitchRise12), fmtNum(z.PitchRise12)))
+				project.FmtNum(zs[0].PitchRise12), project.FmtNum(z.PitchRise12)))
 			return cm, shift, msgs
 		}
 	}
@@ -497,7 +498,7 @@ func checkInput(p *Project, plan *framing.Plan, k int) (cm check.Member, shift f
 // of the slope (statics: the sloped length over the plan length). Roof
 // live and snow loads are on the horizontal projection already (ASCE 7-16
 // 4.8, 7.1); wind stays normal to the roof and check converts it.
-func zoneLoads(z *Zone, selfPsf float64) check.AreaLoads {
+func zoneLoads(z *project.Zone, selfPsf float64) check.AreaLoads {
 	k := 1.0
 	if z.PitchRise12 > 0 {
 		k = math.Hypot(12, z.PitchRise12) / 12
@@ -552,11 +553,11 @@ func selfWeightPsf(size string, tribIn float64) float64 {
 
 // memberZones returns the project zones of the names a member lies in, or
 // nil with the reason when it has none or one the project does not define.
-func memberZones(p *Project, names []string) ([]*Zone, []string) {
+func memberZones(p *project.Project, names []string) ([]*project.Zone, []string) {
 	if len(names) == 0 {
 		return nil, []string{"no load zone: the member lies outside every zone outline and the project has no default_zone"}
 	}
-	zs := make([]*Zone, 0, len(names))
+	zs := make([]*project.Zone, 0, len(names))
 	for _, n := range names {
 		z := p.Zone(n)
 		if z == nil {

@@ -11,6 +11,7 @@ import (
 	"framecheck/dxfimport"
 	"framecheck/export"
 	"framecheck/framing"
+	"framecheck/project"
 )
 
 // exportResults maps an outcome onto export's results.json contract.
@@ -428,7 +429,7 @@ func assumptions(o *outcome) export.Assumptions {
 		"(ASCE 7-16 2.4.1; 0.6D+0.6W with wind suction), by statics of the member as analysed. Every such bearing is listed "+
 		"(results.json \"uplift\", Uplift sheet); from design.uplift_report_lb = %s lb up it is flagged (layer %s) as the load "+
 		"a connector's allowable load for that load duration (CD = 1.6 for wind, NDS 2018 Table 2.3.2) must meet. "+
-		"No connector is named: the designer picks the part.", fmtNum(p.Design.UpliftReportLb), export.LayerUplift))
+		"No connector is named: the designer picks the part.", project.FmtNum(p.Design.UpliftReportLb), export.LayerUplift))
 	a.Notes = append(a.Notes, bracingNotes(p)...)
 	if n := generatedCount(o.plan); n > 0 {
 		a.Notes = append(a.Notes, fmt.Sprintf("%d joists are not drawn but laid out in bays shown by a span symbol "+
@@ -460,7 +461,7 @@ func generatedCount(pl *framing.Plan) int {
 // bracingNotes states once, for the whole run, the lateral bracing the
 // bending checks rely on (issue 13 item 6; DOMAIN.md "Bracing relied
 // on"); each mark's calculation lists the braces of its own member.
-func bracingNotes(p *Project) []string {
+func bracingNotes(p *project.Project) []string {
 	notes := []string{"Bracing, bearings: every bearing, interior bearings included, is taken as a brace of both edges of the joist (CL, NDS 2018 3.3.3); this assumes full-depth blocking, a rim board or joist hangers at each bearing."}
 	if p.Design.TopEdgeBraced {
 		notes = append(notes, "Bracing, top edge: held continuously by the sheathing fastened to it (design.top_edge_braced = true), so CL = 1 for the top edge.")
@@ -516,4 +517,10 @@ func drawingFindings(o *outcome) []string {
 		notes = append(notes, fmt.Sprintf("Drawing findings: %d more not listed", n-mostFindings))
 	}
 	return notes
+}
+
+// exportInfo maps the [project] table onto export's.
+func exportInfo(pi project.ProjectInfo) export.ProjectInfo {
+	return export.ProjectInfo{Name: pi.Name, Number: pi.Number, Address: pi.Address, Designer: pi.Designer,
+		Checker: pi.Checker, Revision: pi.Revision, Date: pi.Date}
 }

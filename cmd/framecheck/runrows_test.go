@@ -7,6 +7,7 @@ import (
 	"testing"
 
 	"framecheck/check"
+	"framecheck/project"
 )
 
 // thirdPointPlan writes a roof of five 2x10 joists at 24 in on centre,
@@ -15,7 +16,7 @@ import (
 func thirdPointPlan(t *testing.T, drawn bool) (*outcome, error) {
 	t.Helper()
 	plan, toml := thirdPointFiles(t, drawn)
-	p, err := LoadProject(toml)
+	p, err := project.LoadProject(toml)
 	if err != nil {
 		t.Fatal(err)
 	}

@@ -12,6 +12,7 @@ import (
 
 	"framecheck/check"
 	"framecheck/export"
+	"framecheck/project"
 )
 
 // demoTo runs `framecheck demo` with stdout going to out (read back by
@@ -99,7 +100,7 @@ func TestLightestPassingAlternative(t *testing.T) {
 	if code := run([]string{"demo", "-o", dir}, &stdout, &stderr); code != exitFail {
 		t.Fatalf("exit %d: %s", code, stderr.String())
 	}
-	proj, err := LoadProject(filepath.Join(dir, "framecheck.toml"))
+	proj, err := project.LoadProject(filepath.Join(dir, "framecheck.toml"))
 	if err != nil {
 		t.Fatal(err)
 	}

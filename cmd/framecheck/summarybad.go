@@ -10,6 +10,7 @@ import (
 	"framecheck/check"
 	"framecheck/dxfimport"
 	"framecheck/export"
+	"framecheck/project"
 )
 
 // badGroup is one line of the summary's table of members that fail or
@@ -39,7 +40,7 @@ type badGroup struct {
 // group the lightest [sizing] candidate with which its worst member
 // passes, by checking that member again at each candidate size
 // (check.Size with its blocking rows; nothing is assumed).
-func badGroups(o *outcome, r *export.Results, proj *Project) []badGroup {
+func badGroups(o *outcome, r *export.Results, proj *project.Project) []badGroup {
 	index := map[string]int{}
 	var groups []badGroup
 	for i := range r.Members {
@@ -96,7 +97,7 @@ func badGroups(o *outcome, r *export.Results, proj *Project) []badGroup {
 // blocking rows it needs (check.Size), and returns the candidate of the
 // fewest board feet per foot that passes with its largest ratio, or ""
 // when none passes.
-func lightestPassing(m check.Member, s check.Settings, sz Sizing) (string, float64) {
+func lightestPassing(m check.Member, s check.Settings, sz project.Sizing) (string, float64) {
 	res := check.Size(m, s, sz.Candidates, sz.BlockingPieceWeightBf)
 	best := -1
 	for i, a := range res.Alternatives {

@@ -1,10 +1,8 @@
-package main
+package project
 
 import (
 	"strings"
 	"time"
-
-	"framecheck/export"
 )
 
 // ProjectInfo is the [project] table: who and what the calculation is
@@ -43,10 +41,4 @@ func (ld *loader) info(t *table) {
 			ld.errorf(path, "expected a string, got %s", describe(v))
 		}
 	}
-}
-
-// exportInfo maps the [project] table onto export's.
-func exportInfo(pi ProjectInfo) export.ProjectInfo {
-	return export.ProjectInfo{Name: pi.Name, Number: pi.Number, Address: pi.Address, Designer: pi.Designer,
-		Checker: pi.Checker, Revision: pi.Revision, Date: pi.Date}
 }

@@ -1,4 +1,4 @@
-package main
+package project
 
 import (
 	"fmt"
@@ -215,7 +215,7 @@ func suggest(key string, valid []knownKey, tableShow string) string {
 	best, bestD := "", 1<<30
 	lk := strings.ToLower(key)
 	for _, v := range valid {
-		d := editDistance(lk, v.name)
+		d := EditDistance(lk, v.name)
 		if strings.HasPrefix(v.name, lk+"_") || strings.HasPrefix(lk, v.name+"_") || allWordsIn(lk, v.name) {
 			d = min(d, 1)
 		}
@@ -241,15 +241,15 @@ func suggest(key string, valid []knownKey, tableShow string) string {
 func allWordsIn(key, name string) bool {
 	words := strings.Split(name, "_")
 	for _, w := range strings.Split(key, "_") {
-		if !contains(words, w) {
+		if !Contains(words, w) {
 			return false
 		}
 	}
 	return true
 }
 
-// editDistance is the Levenshtein distance between a and b, in bytes.
-func editDistance(a, b string) int {
+// EditDistance is the Levenshtein distance between a and b, in bytes.
+func EditDistance(a, b string) int {
 	prev := make([]int, len(b)+1)
 	cur := make([]int, len(b)+1)
 	for j := range prev {

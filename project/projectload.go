@@ -1,7 +1,9 @@
-package main
+package project
 
 import (
 	"bytes"
+	"crypto/sha256"
+	"encoding/hex"
 	"errors"
 	"fmt"
 	"io"
@@ -162,7 +164,7 @@ func (ld *loader) get(t *table, key, show string) (any, string, bool) {
 func (ld *loader) num(t *table, key, unit string, dst *float64, rule func(float64) string) {
 	v, path, ok := ld.get(t, key, "")
 	if !ok {
-		ld.defaulted(t, key, "%s", fmtNum(*dst))
+		ld.defaulted(t, key, "%s", FmtNum(*dst))
 		return
 	}
 	var x float64
@@ -176,7 +178,7 @@ func (ld *loader) num(t *table, key, unit string, dst *float64, rule func(float6
 			ld.errorf(path, "expected a number (%s, %s), got %s", unit, rule(-1), describe(v))
 			return
 		}
-		l, err := parseLengthIn(n)
+		l, err := ParseLengthIn(n)
 		if err != nil {
 			ld.errorf(path, "expected a number of inches or a length with its unit (%s): %v", rule(-1), err)
 			return
@@ -187,7 +189,7 @@ func (ld *loader) num(t *table, key, unit string, dst *float64, rule func(float6
 		return
 	}
 	if msg := rule(x); msg != "" {
-		ld.errorf(path, "%s (%s), got %s", msg, unit, fmtNum(x))
+		ld.errorf(path, "%s (%s), got %s", msg, unit, FmtNum(x))
 		return
 	}
 	*dst = x
@@ -261,7 +263,7 @@ func (ld *loader) list(t *table, key string, dst *[]string, canon canonizer) {
 	v, path, ok := ld.get(t, key, "")
 	if !ok {
 		if *dst != nil {
-			ld.defaulted(t, key, "%s", fmtList(*dst))
+			ld.defaulted(t, key, "%s", FmtList(*dst))
 		}
 		return
 	}
@@ -374,4 +376,10 @@ func quoteAll(l []string) []string {
 		out[i] = fmt.Sprintf("%q", s)
 	}
 	return out
+}
+
+// sha256Hex is the SHA-256 of data in hexadecimal.
+func sha256Hex(data []byte) string {
+	h := sha256.Sum256(data)
+	return hex.EncodeToString(h[:])
 }

@@ -1,4 +1,4 @@
-package main
+package project
 
 import (
 	"bytes"
@@ -34,7 +34,7 @@ func (ld *loader) drawing(t *table) {
 	d := &ld.p.Drawing
 	*d = DrawingSettings{SnapToleranceIn: 1.5, MaxWallThicknessIn: 12}
 	if has(t, "units") {
-		ld.enum(t, "units", &d.Units, unitsValues)
+		ld.enum(t, "units", &d.Units, UnitsValues)
 	} else {
 		ld.get(t, "units", "")
 		ld.p.defaults = append(ld.p.defaults, "drawing.units: from the DXF header ($INSUNITS)")
@@ -71,7 +71,7 @@ func (ld *loader) supports(root *table) {
 		ld.p.Supports = defaultSupports()
 		var s []string
 		for _, sp := range ld.p.Supports {
-			s = append(s, fmt.Sprintf("%s %s (bearing %s in)", fmtList(sp.Layers), sp.Kind, fmtNum(sp.BearingIn)))
+			s = append(s, fmt.Sprintf("%s %s (bearing %s in)", FmtList(sp.Layers), sp.Kind, FmtNum(sp.BearingIn)))
 		}
 		ld.p.defaults = append(ld.p.defaults, "[[support]]: none given; "+strings.Join(s, "; "))
 		return
@@ -80,8 +80,8 @@ func (ld *loader) supports(root *table) {
 		s := Support{Kind: "bearing-wall", Check: true}
 		ld.required(t, "layers")
 		ld.list(t, "layers", &s.Layers, nil)
-		ld.enum(t, "kind", &s.Kind, supportKinds)
-		s.BearingIn = defaultBearingIn[s.Kind]
+		ld.enum(t, "kind", &s.Kind, SupportKinds)
+		s.BearingIn = DefaultBearingIn[s.Kind]
 		ld.num(t, "bearing_in", "in", &s.BearingIn, thicknessRule)
 		ld.text(t, "species", &s.Species, nil)
 		ld.text(t, "grade", &s.Grade, nil)
@@ -237,21 +237,21 @@ func (ld *loader) zones(root *table) {
 		ld.p.Zones = []Zone{z}
 		ld.p.defaults = append(ld.p.defaults, fmt.Sprintf(
 			"[[zone]]: none given; one zone %s: %s, D %s psf, L %s psf, ceiling %s, L/%s live, L/%s total",
-			z.Name, z.Use, fmtNum(z.DeadPsf), fmtNum(z.LivePsf), z.Ceiling,
-			fmtNum(z.LiveDeflectionLimit), fmtNum(z.TotalDeflectionLimit)))
+			z.Name, z.Use, FmtNum(z.DeadPsf), FmtNum(z.LivePsf), z.Ceiling,
+			FmtNum(z.LiveDeflectionLimit), FmtNum(z.TotalDeflectionLimit)))
 		return
 	}
 	seen := map[string]string{}
 	for i, t := range elems {
 		z := Zone{Use: "floor", Ceiling: "non-plaster"}
 		ld.entryName(t, "zone", "zone", i, seen, &z.Name)
-		ld.enum(t, "use", &z.Use, useValues)
+		ld.enum(t, "use", &z.Use, UseValues)
 		ld.allowZero(t, &z.AllowZero)
 		// A roof zone that gives snow but leaves roof live out still gets
 		// the ordinary roof live load; no other load has a default: a zone
 		// without them is an error (zeroLoads) unless allow_zero is set.
 		if sv, ok := t.m["snow_psf"]; ok && z.Use == "roof" && !z.AllowZero && (sv != int64(0) && sv != float64(0)) {
-			z.RoofLivePsf = roofLiveDefaultPsf
+			z.RoofLivePsf = RoofLiveDefaultPsf
 		}
 		ld.num(t, "dead_psf", "psf", &z.DeadPsf, loadRule)
 		ld.num(t, "live_psf", "psf", &z.LivePsf, loadRule)
@@ -259,9 +259,9 @@ func (ld *loader) zones(root *table) {
 		ld.num(t, "snow_psf", "psf", &z.SnowPsf, loadRule)
 		ld.num(t, "wind_down_psf", "psf", &z.WindDownPsf, loadRule)
 		ld.num(t, "wind_up_psf", "psf", &z.WindUpPsf, loadRule)
-		ld.enum(t, "ceiling", &z.Ceiling, ceilingValues)
+		ld.enum(t, "ceiling", &z.Ceiling, CeilingValues)
 		ld.boolean(t, "ceiling_braces_bottom", &z.CeilingBracesBottom)
-		z.LiveDeflectionLimit, z.TotalDeflectionLimit = deflectionLimits(z.Use, z.Ceiling)
+		z.LiveDeflectionLimit, z.TotalDeflectionLimit = DeflectionLimits(z.Use, z.Ceiling)
 		ld.limit(t, "live_deflection_limit", &z.LiveDeflectionLimit, z)
 		ld.limit(t, "total_deflection_limit", &z.TotalDeflectionLimit, z)
 		if has(t, "uplift_dead_psf") {
@@ -281,7 +281,7 @@ func (ld *loader) zones(root *table) {
 			ld.get(t, "dead_on_slope", "")
 		}
 		if has(t, "long_term_deflection_limit") {
-			ld.num(t, "long_term_deflection_limit", "the n of L/n", &z.LongTermDeflectionLimit, deflectionLimit)
+			ld.num(t, "long_term_deflection_limit", "the n of L/n", &z.LongTermDeflectionLimit, DeflectionLimit)
 		} else {
 			ld.get(t, "long_term_deflection_limit", "")
 		}
@@ -297,7 +297,7 @@ func (ld *loader) pitch(t *table, dst *float64) {
 	if !ok {
 		return
 	}
-	rise, msg := parsePitch(v)
+	rise, msg := ParsePitch(v)
 	if msg != "" {
 		ld.errorf(path, "%s", msg)
 		return
@@ -305,10 +305,10 @@ func (ld *loader) pitch(t *table, dst *float64) {
 	*dst = rise
 }
 
-// parsePitch reads a roof slope as a rise in 12: a number (6), a string
+// ParsePitch reads a roof slope as a rise in 12: a number (6), a string
 // "6:12" or "6/12", or an angle "26.57deg"; from 0 (flat) to 24 in 12. The
 // message says what was expected when v is none of these.
-func parsePitch(v any) (float64, string) {
+func ParsePitch(v any) (float64, string) {
 	const want = "expected a rise in 12 such as 6, \"6:12\" or an angle such as \"26.57deg\", from 0 (flat) to 24 in 12"
 	var rise float64
 	switch x := v.(type) {
@@ -340,7 +340,7 @@ func parsePitch(v any) (float64, string) {
 		return 0, fmt.Sprintf("%s, got %s", want, describe(v))
 	}
 	if !(rise >= 0 && rise <= 24) {
-		return 0, fmt.Sprintf("%s, got %s", want, fmtNum(rise))
+		return 0, fmt.Sprintf("%s, got %s", want, FmtNum(rise))
 	}
 	return rise, ""
 }
@@ -408,7 +408,7 @@ func (ld *loader) allowZero(t *table, dst *bool) {
 // limit reads a deflection limit whose default comes from use and ceiling.
 func (ld *loader) limit(t *table, key string, dst *float64, z Zone) {
 	if has(t, key) {
-		ld.num(t, key, "the n of L/n", dst, deflectionLimit)
+		ld.num(t, key, "the n of L/n", dst, DeflectionLimit)
 		return
 	}
 	ld.get(t, key, "")
@@ -416,7 +416,7 @@ func (ld *loader) limit(t *table, key string, dst *float64, z Zone) {
 	if z.Use == "roof" {
 		why = "roof, ceiling " + z.Ceiling
 	}
-	ld.defaulted(t, key, "%s (IBC 2018 Table 1604.3, %s)", fmtNum(*dst), why)
+	ld.defaulted(t, key, "%s (IBC 2018 Table 1604.3, %s)", FmtNum(*dst), why)
 }
 
 // loads reads [loads] after the zones, so default_zone can be checked.

@@ -1,10 +1,10 @@
-package main
+package project
 
-// starterProject is the commented project file `framecheck init` writes.
-// Loaded back it gives exactly DefaultProject(); TestInitRoundTrip keeps
-// it so. Keys that are best left to their computed default (units,
+// StarterProject is the commented project file `framecheck init` writes.
+// Loaded back it gives exactly DefaultProject(); TestStarterRoundTrip
+// keeps it so. Keys that are best left to their computed default (units,
 // deflection limits) and the example override are commented out.
-const starterProject = `# framecheck project file: the designer's inputs for one framing plan.
+const StarterProject = `# framecheck project file: the designer's inputs for one framing plan.
 #
 # Lengths are inches unless a key says otherwise; area loads are psf.
 # A key in inches (ending in _in) also takes a length with its unit as a

@@ -1,4 +1,8 @@
-package main
+// Package project reads the project file (framecheck.toml): the
+// designer's inputs for one plan. LoadProject and ParseProject check every
+// key and report each mistake with its file, line and key (ProjectErrors);
+// DefaultProject is the plan without a project file.
+package project
 
 import (
 	"fmt"
@@ -273,19 +277,19 @@ type Sizing struct {
 
 // Allowed values of the project file's enumerated keys.
 var (
-	unitsValues       = []string{"in", "ft", "mm", "cm", "m"}
-	supportKinds      = []string{"bearing-wall", "dropped-beam", "flush-beam", "ledger"}
+	UnitsValues       = []string{"in", "ft", "mm", "cm", "m"}
+	SupportKinds      = []string{"bearing-wall", "dropped-beam", "flush-beam", "ledger"}
 	temperatureValues = []string{"normal", "warm", "hot"}
-	useValues         = []string{"floor", "roof"}
-	ceilingValues     = []string{"plaster", "non-plaster", "none"}
+	UseValues         = []string{"floor", "roof"}
+	CeilingValues     = []string{"plaster", "non-plaster", "none"}
 	sameDepthValues   = []string{"run", "zone", "none"}
 )
 
-// defaultBearingIn is the bearing length a [[support]] table gets when it
+// DefaultBearingIn is the bearing length a [[support]] table gets when it
 // leaves bearing_in out, by kind: the 3.5 in of a 2x4 plate or a two-ply
 // beam for walls and dropped beams, the 1.5 in seat of a face-mount hanger
 // for flush beams and ledgers. Common practice, no source.
-var defaultBearingIn = map[string]float64{
+var DefaultBearingIn = map[string]float64{
 	"bearing-wall": 3.5,
 	"dropped-beam": 3.5,
 	"flush-beam":   1.5,
@@ -313,21 +317,21 @@ func defaultZone() Zone {
 	}
 }
 
-// roofLiveDefaultPsf is roof_live_psf for a roof zone that gives snow_psf
+// RoofLiveDefaultPsf is roof_live_psf for a roof zone that gives snow_psf
 // but leaves roof_live_psf out, and for `framecheck member --use roof`:
 // ordinary flat, pitched and curved roofs, ASCE 7-16 Table 4.3-1 (from
 // memory: verify against ASCE 7-16 Table 4.3-1). A floor zone gets 0.
-const roofLiveDefaultPsf = 20.0
+const RoofLiveDefaultPsf = 20.0
 
-// floorLiveDefaultPsf is the floor live load of `framecheck member` and
+// FloorLiveDefaultPsf is the floor live load of `framecheck member` and
 // of the built-in FLOOR zone, as the project file reference shows. A
 // [[zone]] that leaves live_psf out is an error (unless allow_zero).
-const floorLiveDefaultPsf = 40.0
+const FloorLiveDefaultPsf = 40.0
 
-// deflectionLimits returns the n of L/n for live-type loads and for the
+// DeflectionLimits returns the n of L/n for live-type loads and for the
 // total load by use and ceiling (IBC 2018 Table 1604.3, as
 // check.DeflectionLimits gives them). The loader has checked both names.
-func deflectionLimits(use, ceiling string) (live, total float64) {
+func DeflectionLimits(use, ceiling string) (live, total float64) {
 	live, total, err := check.DeflectionLimits(use, ceiling)
 	if err != nil {
 		panic("framecheck: deflection limits of a checked zone: " + err.Error())
@@ -351,6 +355,18 @@ func DefaultProject() *Project {
 func (p *Project) DefaultsUsed() []string {
 	return append([]string(nil), p.defaults...)
 }
+
+// SetDefaultsUsed replaces the defaults list, for command-line flags that
+// override what a default gave.
+func (p *Project) SetDefaultsUsed(l []string) { p.defaults = l }
+
+// FileSHA256 is the SHA-256, in hexadecimal, of the project file read by
+// LoadProject or ParseProject ("" for DefaultProject).
+func (p *Project) FileSHA256() string { return p.sha256 }
+
+// FileSize is the length in bytes of the project file read by LoadProject
+// or ParseProject (0 for DefaultProject).
+func (p *Project) FileSize() int64 { return p.size }
 
 // Given reports whether the project file set the key explicitly. Key is a
 // dotted path; elements of array tables carry a 0-based index, as in
@@ -389,7 +405,7 @@ const (
 	// RolePointLoads is the role of point-load marks and their text.
 	RolePointLoads = "point_loads"
 	// Support layers report "support:" followed by the kind.
-	rolePrefixSupport = "support:"
+	RolePrefixSupport = "support:"
 )
 
 // LayerRole returns the role the project gives a layer: "joists",
@@ -416,7 +432,7 @@ func (p *Project) LayerRole(layer string) string {
 	}
 	for _, s := range p.Supports {
 		if dxfimport.MatchLayer(s.Layers, layer) {
-			return rolePrefixSupport + s.Kind
+			return RolePrefixSupport + s.Kind
 		}
 	}
 	return ""
@@ -482,5 +498,5 @@ func (c Combinations) String() string {
 	if c.Standard != "" {
 		return fmt.Sprintf("%q", c.Standard)
 	}
-	return fmtList(c.List)
+	return FmtList(c.List)
 }

@@ -1,9 +1,10 @@
-package main
+package project
 
 import (
 	"errors"
 	"math"
 	"os"
+	"path/filepath"
 	"reflect"
 	"strings"
 	"testing"
@@ -383,7 +384,7 @@ func TestKeyLines(t *testing.T) {
 // FuzzLoadProject: ParseProject never panics; it returns either a usable
 // project or ProjectErrors with lines inside the file.
 func FuzzLoadProject(f *testing.F) {
-	f.Add(starterProject)
+	f.Add(StarterProject)
 	if data, err := os.ReadFile("testdata/full.toml"); err == nil {
 		f.Add(string(data))
 	}
@@ -413,7 +414,7 @@ func FuzzLoadProject(f *testing.F) {
 // TestDemoProject loads the demo's project file: the key names are an
 // interface, and the demo uses most of them.
 func TestDemoProject(t *testing.T) {
-	p, err := LoadProject("../../samples/demo/framecheck.toml")
+	p, err := LoadProject("../samples/demo/framecheck.toml")
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -512,5 +513,24 @@ func TestProjectInfoTable(t *testing.T) {
 	}
 	if p := DefaultProject(); p.Info != (ProjectInfo{}) {
 		t.Errorf("default project info %+v, want empty", p.Info)
+	}
+}
+
+// TestStarterRoundTrip writes the starter file `framecheck init` writes and
+// loads it back: it must give exactly the built-in defaults.
+func TestStarterRoundTrip(t *testing.T) {
+	path := filepath.Join(t.TempDir(), "framecheck.toml")
+	if err := os.WriteFile(path, []byte(StarterProject), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	p, err := LoadProject(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	def := DefaultProject()
+	p.File, p.given, p.defaults, p.sha256, p.size = "", nil, nil, "", 0
+	def.given, def.defaults = nil, nil
+	if !reflect.DeepEqual(p, def) {
+		t.Errorf("starter file loads as\n%+v\nwant the defaults\n%+v", p, def)
 	}
 }

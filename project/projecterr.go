@@ -1,4 +1,4 @@
-package main
+package project
 
 import (
 	"errors"
@@ -130,11 +130,11 @@ func describe(v any) string {
 	}
 }
 
-// fmtNum formats a number for messages and the defaults list.
-func fmtNum(x float64) string { return strconv.FormatFloat(x, 'g', -1, 64) }
+// FmtNum formats a number for messages and the defaults list.
+func FmtNum(x float64) string { return strconv.FormatFloat(x, 'g', -1, 64) }
 
-// fmtList formats a string list as TOML.
-func fmtList(l []string) string {
+// FmtList formats a string list as TOML.
+func FmtList(l []string) string {
 	s := make([]string, len(l))
 	for i, x := range l {
 		s[i] = strconv.Quote(x)
@@ -157,9 +157,9 @@ func between(lo, hi float64, loIncluded bool) func(float64) string {
 			return ""
 		}
 		if loIncluded {
-			return fmt.Sprintf("must be from %s to %s", fmtNum(lo), fmtNum(hi))
+			return fmt.Sprintf("must be from %s to %s", FmtNum(lo), FmtNum(hi))
 		}
-		return fmt.Sprintf("must be greater than %s and at most %s", fmtNum(lo), fmtNum(hi))
+		return fmt.Sprintf("must be greater than %s and at most %s", FmtNum(lo), FmtNum(hi))
 	}
 }
 
@@ -174,7 +174,9 @@ var (
 	upliftRule    = between(0, 1e5, true)  // lb: net uplift reported without a flag
 )
 
-func deflectionLimit(x float64) string {
+// DeflectionLimit is the rule for a deflection limit n of L/n: the message
+// when x is neither 0 (not checked) nor from 1 to 10000, else "".
+func DeflectionLimit(x float64) string {
 	if x == 0 || x >= 1 && x <= 10000 {
 		return ""
 	}
@@ -194,7 +196,8 @@ func sizeCheck(s string) (string, string) {
 	return sec.Name, ""
 }
 
-func contains(list []string, s string) bool {
+// Contains reports whether s is one of list.
+func Contains(list []string, s string) bool {
 	for _, x := range list {
 		if x == s {
 			return true
