@@ -5,6 +5,7 @@ import (
 	"html/template"
 	"math"
 	"strconv"
+	"strings"
 	"unicode/utf8"
 )
 
@@ -51,6 +52,16 @@ func planSVG(r *Results, g *PlanGeometry) (template.HTML, template.JS) {
 	for _, z := range g.Zones {
 		for _, q := range z.Points {
 			bb.add(q)
+		}
+	}
+	var beams []seg
+	if r.LoadPath != nil {
+		beams = make([]seg, len(r.LoadPath.Beams))
+		for i := range r.LoadPath.Beams {
+			b := &r.LoadPath.Beams[i]
+			beams[i].a, beams[i].b = inches(b.Start, b.End, b.StartIn, b.EndIn, toInch)
+			bb.add(beams[i].a)
+			bb.add(beams[i].b)
 		}
 	}
 	rows := make([]seg, len(r.BlockingRows))
@@ -144,6 +155,14 @@ func planSVG(r *Results, g *PlanGeometry) (template.HTML, template.JS) {
 		buf = appendHTML(buf, l)
 		buf = append(buf, "</title></path>\n"...)
 	}
+
+	// Beams of the load path over their support lines, coloured by their
+	// largest ratio as the members are, with what they bear on and carry
+	// in their title.
+	buf = append(buf, "</g>\n"+`<g id="beams" font-size="`...)
+	buf = appendCoord(buf, 1.2*textH)
+	buf = append(buf, `">`...)
+	buf = appendBeams(buf, r, beams, textH)
 
 	// The members by runs (report_runs.go).
 	buf = append(buf, "</g>\n"+`<g id="members">`+"\n"...)
@@ -419,4 +438,75 @@ func appendJSString(b []byte, s string) []byte {
 		i += size
 	}
 	return append(b, '"')
+}
+
+// appendBeams writes each beam of the load path as a line coloured by its
+// largest ratio (grey in error), titled with its id, mark, size, ratio,
+// status, what it bears on and the members it carries, and labelled with
+// its id and ratio at mid-length.
+func appendBeams(buf []byte, r *Results, segs []memberSeg, textH float64) []byte {
+	if r.LoadPath == nil {
+		return buf
+	}
+	for i := range r.LoadPath.Beams {
+		b := &r.LoadPath.Beams[i]
+		s := segs[i]
+		if !finite(s.a[0]) || !finite(s.a[1]) || !finite(s.b[0]) || !finite(s.b[1]) {
+			continue
+		}
+		class := "beam " + bandClass(b.MaxRatio, b.Status)
+		buf = append(buf, `<line class="`...)
+		buf = append(buf, class...)
+		buf = append(buf, `" stroke="`...)
+		if b.Status == StatusError {
+			buf = append(buf, errorColour...)
+		} else {
+			buf = appendColour(buf, b.MaxRatio)
+		}
+		buf = append(buf, `" x1="`...)
+		buf = appendCoord(buf, s.a[0])
+		buf = append(buf, `" y1="`...)
+		buf = appendCoord(buf, -s.a[1])
+		buf = append(buf, `" x2="`...)
+		buf = appendCoord(buf, s.b[0])
+		buf = append(buf, `" y2="`...)
+		buf = appendCoord(buf, -s.b[1])
+		buf = append(buf, `"><title>beam `...)
+		buf = appendHTML(buf, b.ID)
+		if b.Mark != "" && b.Mark != b.ID {
+			buf = append(buf, " ("...)
+			buf = appendHTML(buf, b.Mark)
+			buf = append(buf, ')')
+		}
+		buf = append(buf, ' ')
+		buf = appendHTML(buf, b.Size)
+		text := b.ID
+		if b.Status == StatusError {
+			buf = append(buf, ": error"...)
+			text += " ERROR"
+		} else {
+			buf = append(buf, ": "...)
+			buf = appendHTML(buf, b.Governing)
+			buf = append(buf, ' ')
+			buf = append(buf, fmtx.Ratio(b.MaxRatio)...)
+			buf = append(buf, ", "...)
+			buf = appendHTML(buf, b.Status)
+			text += " " + fmtx.Ratio(b.MaxRatio)
+		}
+		if len(b.Supports) > 0 {
+			buf = append(buf, "; bears on "...)
+			buf = appendHTML(buf, strings.Join(b.Supports, ", "))
+		}
+		if len(b.Carries) > 0 {
+			buf = append(buf, "; carries "...)
+			buf = appendHTML(buf, strings.Join(b.Carries, ", "))
+		}
+		buf = append(buf, "</title></line>\n"...)
+		class = "lbl-beam"
+		if b.Status == StatusFail {
+			class += " lbl-fail"
+		}
+		buf = appendLabel(buf, &Member{Mark: text}, class, s.a, s.b, 1.2*textH)
+	}
+	return buf
 }

@@ -50,6 +50,9 @@ h3.tight{margin-top:0}
 #plan-svg .zone{fill:#e8eef5;fill-opacity:.55;stroke:#7d93ab;stroke-dasharray:6 4;vector-effect:non-scaling-stroke;stroke-width:1px}
 #plan-svg .zone-name{fill:#7d93ab;font-weight:700;opacity:.8}
 #plan-svg .support{fill:none;stroke:#3a3f45;stroke-width:4px;vector-effect:non-scaling-stroke;stroke-linecap:square}
+#plan-svg .beam{stroke-width:8px;stroke-opacity:.8;vector-effect:non-scaling-stroke;stroke-linecap:butt}
+#plan-svg #beams text{fill:#222;font-weight:700;text-anchor:middle;pointer-events:none}
+#plan-svg #beams .lbl-fail{fill:#b3261e}
 #plan-svg .j path{fill:none;stroke-width:2px;vector-effect:non-scaling-stroke;stroke-linecap:round}
 #plan-svg .j.fail path{stroke-width:5px}
 #plan-svg .j.err path{stroke-width:4px;stroke-dasharray:8 5}
@@ -362,7 +365,8 @@ At each flagged bearing a connector is needed whose allowable load for the combi
 <div class="legend"><span><span class="scale"></span><span class="scale-ticks"><span>0</span><span>0.5</span><span>0.8</span><span>1.0</span><span>1.5</span></span></span>
 {{range .Legend}}<span class="{{.Class}}"><span class="sw" style="background:{{.Colour}}"></span>{{.Label}}</span>{{end}}
 <span><span class="sw" style="background:#0a8fa8;height:3px"></span>blocking row to add</span>
-<span><span class="sw" style="background:#3a3f45;height:4px"></span>support</span></div>
+<span><span class="sw" style="background:#3a3f45;height:4px"></span>support</span>{{if .Path}}
+<span><span class="sw" style="background:linear-gradient(90deg,#2b6cb0,#d9a41a,#6a1b9a);height:8px;opacity:.8"></span>beam of the load path, coloured by its largest ratio (its title lists what it bears on and carries)</span>{{end}}</div>
 <div class="plan-wrap">{{.PlanSVG}}<div id="details"></div></div>
 <p class="hint">North is up. Scroll to zoom, drag to pan, double-click to reset; hover or click a member for its details.</p>
 </section>{{end}}
