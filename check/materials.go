@@ -390,7 +390,7 @@ func (m *Materials) resolveGrade(species, name string) (string, error) {
 func unknownName(what, got string, valid []string) error {
 	best, bestD := "", math.MaxInt
 	for _, v := range valid {
-		if d := editDistance(nameKey(got), nameKey(v)); d < bestD {
+		if d := EditDistance(nameKey(got), nameKey(v)); d < bestD {
 			best, bestD = v, d
 		}
 	}
@@ -403,8 +403,9 @@ func unknownName(what, got string, valid []string) error {
 	return errors.New(msg)
 }
 
-// editDistance is the Levenshtein distance between a and b.
-func editDistance(a, b string) int {
+// EditDistance is the Levenshtein distance between a and b, in bytes
+// (used for "did you mean" suggestions here and in the project file).
+func EditDistance(a, b string) int {
 	prev := make([]int, len(b)+1)
 	cur := make([]int, len(b)+1)
 	for j := range prev {

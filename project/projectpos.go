@@ -4,6 +4,8 @@ import (
 	"fmt"
 	"strconv"
 	"strings"
+
+	"framecheck/check"
 )
 
 // keyLines scans TOML text and maps each key and table header to the
@@ -215,7 +217,7 @@ func suggest(key string, valid []knownKey, tableShow string) string {
 	best, bestD := "", 1<<30
 	lk := strings.ToLower(key)
 	for _, v := range valid {
-		d := EditDistance(lk, v.name)
+		d := check.EditDistance(lk, v.name)
 		if strings.HasPrefix(v.name, lk+"_") || strings.HasPrefix(lk, v.name+"_") || allWordsIn(lk, v.name) {
 			d = min(d, 1)
 		}
@@ -246,25 +248,4 @@ func allWordsIn(key, name string) bool {
 		}
 	}
 	return true
-}
-
-// EditDistance is the Levenshtein distance between a and b, in bytes.
-func EditDistance(a, b string) int {
-	prev := make([]int, len(b)+1)
-	cur := make([]int, len(b)+1)
-	for j := range prev {
-		prev[j] = j
-	}
-	for i := 1; i <= len(a); i++ {
-		cur[0] = i
-		for j := 1; j <= len(b); j++ {
-			cost := 1
-			if a[i-1] == b[j-1] {
-				cost = 0
-			}
-			cur[j] = min(prev[j]+1, cur[j-1]+1, prev[j-1]+cost)
-		}
-		prev, cur = cur, prev
-	}
-	return prev[len(b)]
 }

@@ -152,7 +152,7 @@ import (
 	"os"
 	"strings"
 
-	"framecheck/project"
+	"framecheck/check"
 )
 
 func main() {
@@ -230,7 +230,7 @@ func unknownCommand(name string, stderr io.Writer) int {
 	msg := fmt.Sprintf("framecheck: unknown command %q", name)
 	best, bestD := "", 3
 	for _, c := range commands {
-		if d := project.EditDistance(strings.ToLower(name), c.name); d < bestD {
+		if d := check.EditDistance(strings.ToLower(name), c.name); d < bestD {
 			best, bestD = c.name, d
 		}
 	}
