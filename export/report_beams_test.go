@@ -31,6 +31,9 @@ func TestReportPlanBeams(t *testing.T) {
 	if beams == nil {
 		t.Fatal("no #beams group")
 	}
+	if repByID(doc, "carried") == nil {
+		t.Error("no #carried group for the load-path view")
+	}
 	var lines, texts []*html.Node
 	repWalk(beams, func(n *html.Node) {
 		if n.Type == html.ElementNode && n.Data == "line" {
@@ -56,6 +59,11 @@ func TestReportPlanBeams(t *testing.T) {
 		}
 		if !repHasClass(l, "beam") || !repHasClass(l, bandClass(b.MaxRatio, b.Status)) {
 			t.Errorf("%s class %q", b.ID, repAttr(l, "class"))
+		}
+		// The load-path view's data: the beam and the members it carries
+		// (report-chromium.sh clicks a beam and counts what is drawn).
+		if repAttr(l, "data-beam") != b.ID || repAttr(l, "data-carries") != strings.Join(b.Carries, " ") {
+			t.Errorf("%s data-beam %q data-carries %q", b.ID, repAttr(l, "data-beam"), repAttr(l, "data-carries"))
 		}
 		title := repText(repFirstTag(l, "title"))
 		for _, want := range append([]string{b.ID, b.Size, b.Governing, strconv.FormatFloat(b.MaxRatio, 'f', 2, 64), b.Status}, append(b.Supports, b.Carries...)...) {

@@ -246,7 +246,7 @@ func planSVG(r *Results, g *PlanGeometry) (template.HTML, template.JS) {
 		}
 		buf = appendLabel(buf, m, class, s.a, s.b, textH)
 	}
-	buf = append(buf, "</g>\n"+`<line id="pick" x1="0" y1="0" x2="0" y2="0" style="visibility:hidden"/>`+"\n</svg>"...)
+	buf = append(buf, "</g>\n"+`<g id="carried"></g>`+"\n"+`<line id="pick" x1="0" y1="0" x2="0" y2="0" style="visibility:hidden"/>`+"\n</svg>"...)
 
 	return template.HTML(buf), memberData(r)
 }
@@ -463,6 +463,10 @@ func appendBeams(buf []byte, r *Results, segs []memberSeg, textH float64) []byte
 		} else {
 			buf = appendColour(buf, b.MaxRatio)
 		}
+		buf = append(buf, `" data-beam="`...)
+		buf = appendHTML(buf, b.ID)
+		buf = append(buf, `" data-carries="`...)
+		buf = appendHTML(buf, strings.Join(b.Carries, " "))
 		buf = append(buf, `" x1="`...)
 		buf = appendCoord(buf, s.a[0])
 		buf = append(buf, `" y1="`...)

@@ -51,6 +51,7 @@ h3.tight{margin-top:0}
 #plan-svg .zone-name{fill:#7d93ab;font-weight:700;opacity:.8}
 #plan-svg .support{fill:none;stroke:#3a3f45;stroke-width:4px;vector-effect:non-scaling-stroke;stroke-linecap:square}
 #plan-svg .beam{stroke-width:8px;stroke-opacity:.8;vector-effect:non-scaling-stroke;stroke-linecap:butt}
+#plan-svg #carried line{stroke:#000;stroke-width:6px;stroke-opacity:.5;vector-effect:non-scaling-stroke;stroke-linecap:round;pointer-events:none}
 #plan-svg #beams text{fill:#222;font-weight:700;text-anchor:middle;pointer-events:none}
 #plan-svg #beams .lbl-fail{fill:#b3261e}
 #plan-svg .j path{fill:none;stroke-width:2px;vector-effect:non-scaling-stroke;stroke-linecap:round}
@@ -187,9 +188,31 @@ const reportJS = `
       out.appendChild(document.createElement('br'));out.appendChild(a);}
   }
   function isJ(el){return el.tagName==='path'&&el.parentNode.classList.contains('j');}
+  function isB(el){return el.tagName==='line'&&el.classList.contains('beam');}
+  // The load-path view: a clicked beam's details, and the members it
+  // carries drawn over the plan (their segments found by id once).
+  var carried=document.getElementById('carried'),segOf=null;
+  function memberSegs(){if(segOf)return segOf;segOf={};
+    svg.querySelectorAll('#members g.j path').forEach(function(p){var d=segs(p);d.idx.forEach(function(i,k){segOf[ids[i]]=d.s[k];});});
+    return segOf;}
+  function unbeam(){if(carried)carried.textContent='';out.removeAttribute('data-beam');}
+  function showBeam(el){unbeam();mark(null);sel={beam:el};var so=memberSegs(),n=0,
+    ms=(el.getAttribute('data-carries')||'').split(' ').filter(function(s){return s!=='';});
+    ms.forEach(function(id){var q=so[id];if(!q||!carried)return;
+      var l=document.createElementNS('http://www.w3.org/2000/svg','line');
+      l.setAttribute('x1',q[0]);l.setAttribute('y1',q[1]);l.setAttribute('x2',q[2]);l.setAttribute('y2',q[3]);
+      carried.appendChild(l);n++;});
+    out.textContent='';out.removeAttribute('data-member');out.setAttribute('data-beam',el.getAttribute('data-beam'));
+    var t=el.querySelector('title'),parts=t?t.textContent.split('; '):[];
+    out.appendChild(text('b',parts.length?parts[0]:el.getAttribute('data-beam')));
+    parts.slice(1).forEach(function(s){out.appendChild(document.createElement('br'));out.appendChild(text('span',s));});
+    out.appendChild(document.createElement('br'));out.appendChild(text('span',n+' member(s) it carries shown on the plan'));
+    var a=document.createElement('a');a.href='#loadpath';a.textContent='load path';
+    out.appendChild(document.createElement('br'));out.appendChild(a);}
   svg.addEventListener('mousemove',function(e){if(!drag&&!sel&&isJ(e.target))show(e.target,e,false);});
-  svg.addEventListener('click',function(e){if(isJ(e.target))show(e.target,e,true);
-    else if(sel){sel=null;pick.classList.remove('sel');mark(null);out.textContent='';}});
+  svg.addEventListener('click',function(e){if(isJ(e.target)){unbeam();show(e.target,e,true);}
+    else if(isB(e.target))showBeam(e.target);
+    else if(sel){sel=null;pick.classList.remove('sel');mark(null);unbeam();out.textContent='';}});
 })();
 `
 

@@ -60,6 +60,18 @@ if [ -z "$id" ] || ! printf '%s' "$dom" | grep -q "|$id.*ratios: "; then
   exit 1
 fi
 echo "report-chromium: details panel shows member $id"
+# The load-path view: click the first beam of the plan; the panel must name it and the
+# members it carries (its data-carries) must be drawn over the plan, one line each.
+probe2="$(dirname "$report")/probe2.html"
+sed 's@</body>@<script>var b=document.querySelector("#beams line.beam");if(b){b.dispatchEvent(new MouseEvent("click",{bubbles:true}));var d=document.getElementById("details"),n=b.getAttribute("data-carries").split(" ").filter(function(s){return s!=="";}).length;document.body.setAttribute("data-probe2",d.getAttribute("data-beam")+"|"+n+"|"+document.querySelectorAll("#carried line").length+"|"+d.textContent);}</script></body>@' "$report" >"$probe2"
+dom2=$(timeout 120 "$CHROMIUM" "${flags[@]}" --dump-dom "file://$probe2" 2>/dev/null | grep -o 'data-probe2="[^"]*"' || true)
+beam=$(printf '%s' "$dom2" | sed -n 's/^data-probe2="\([^|]*\)|\([0-9]*\)|\([0-9]*\)|.*/\1 \2 \3/p')
+set -- $beam
+if [ "$#" != 3 ] || [ "$2" = 0 ] || [ "$2" != "$3" ] || ! printf '%s' "$dom2" | grep -q "carries"; then
+  echo "report-chromium: clicking a beam did not show it and the members it carries: $dom2" >&2
+  exit 1
+fi
+echo "report-chromium: clicking beam $1 draws the $3 members it carries"
 if [ -n "${REPORT_KEEP:-}" ]; then
   mkdir -p "$REPORT_KEEP" && cp "$out/report.png" "$out/report.pdf" "$report" "$REPORT_KEEP/"
 fi
