@@ -373,5 +373,5 @@ type DesignValue struct {
 var Cautions = []string{
 	"framecheck assists a qualified designer; it does not replace engineering judgement or a licensed professional's review.",
 	"Design values and code editions must be checked against those the local jurisdiction has adopted.",
-	"Results for members outside the stated scope (notched, tapered, point-loaded, wet service without the wet_service switch) are not valid.",
+	"Results for members outside the stated scope (notched or tapered members, I-joists, structural composite lumber, wet service without the wet_service switch) are not valid.",
 }
