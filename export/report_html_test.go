@@ -243,7 +243,7 @@ func repBigResults(tb testing.TB, n int) (*Results, *PlanGeometry) {
 
 func TestWriteReportLarge(t *testing.T) {
 	if testing.Short() {
-		t.Skip("short")
+		t.Skip("-short: builds the report of a 5,000-member plan")
 	}
 	r, g := repBigResults(t, 5000)
 	doc, data := repWriteParse(t, r, g)

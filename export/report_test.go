@@ -65,19 +65,6 @@ func noTempReportFiles(t *testing.T, dir string) {
 	}
 }
 
-// TestReportOut writes the fixture's report to $FRAMECHECK_REPORT_OUT for
-// .ci/checks/report-chromium.sh; without the variable it is skipped.
-func TestReportOut(t *testing.T) {
-	out := os.Getenv("FRAMECHECK_REPORT_OUT")
-	if out == "" {
-		t.Skip("FRAMECHECK_REPORT_OUT not set")
-	}
-	r, g := loadReportFixture(t)
-	if err := WriteReport(out, r, g, reportWhen); err != nil {
-		t.Fatal(err)
-	}
-}
-
 func TestWriteReportSections(t *testing.T) {
 	r, g := loadReportFixture(t)
 	doc, data := repWriteParse(t, r, g)

@@ -324,7 +324,7 @@ func TestInterruptChild(t *testing.T) {
 	}
 	exe, err := os.Executable()
 	if err != nil {
-		t.Skip(err)
+		t.Skipf("cannot find the test binary to run as the child: %v", err)
 	}
 	for _, tc := range []struct {
 		sig  syscall.Signal
@@ -394,7 +394,7 @@ func TestInterruptLargePlan(t *testing.T) {
 	}
 	exe, err := os.Executable()
 	if err != nil {
-		t.Skip(err)
+		t.Skipf("cannot find the test binary to run as the child: %v", err)
 	}
 	dir := t.TempDir()
 	p := writeBigPlan(t, dir, 5000, false)
@@ -467,10 +467,11 @@ func TestChildProcess(t *testing.T) {
 
 // TestPermissionDenied: an output folder that cannot be made is a
 // failure of the machine, exit 3, with the reason. (Skipped as root,
-// whom permissions do not stop.)
+// whom permissions do not stop; TestOutputUnderFile makes the same failure
+// in a way that stops root too, so CI, which runs as root, covers it.)
 func TestPermissionDenied(t *testing.T) {
 	if os.Geteuid() == 0 {
-		t.Skip("root is not refused")
+		t.Skip("running as root, whom permissions do not refuse (TestOutputUnderFile covers the failure)")
 	}
 	c := newOutsetCase(t)
 	ro := filepath.Join(c.dir, "ro")
@@ -481,5 +482,24 @@ func TestPermissionDenied(t *testing.T) {
 	code, stderr := c.check(t)
 	if code != exitMachine || !strings.Contains(stderr, "permission denied") {
 		t.Errorf("exit %d, want 3 saying permission denied\n%s", code, stderr)
+	}
+}
+
+// TestOutputUnderFile: an output folder whose parent is a file cannot be
+// made by anyone, root included: a failure of the machine, exit 3, naming
+// the reason, and the file is left as it was.
+func TestOutputUnderFile(t *testing.T) {
+	c := newOutsetCase(t)
+	parent := filepath.Join(c.dir, "not-a-folder")
+	if err := os.WriteFile(parent, []byte("keep"), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	c.out = filepath.Join(parent, "out")
+	code, stderr := c.check(t)
+	if code != exitMachine || !strings.Contains(stderr, "not a directory") {
+		t.Errorf("exit %d, want 3 saying not a directory\n%s", code, stderr)
+	}
+	if b, err := os.ReadFile(parent); err != nil || string(b) != "keep" {
+		t.Errorf("the file in the way was changed: %q, %v", b, err)
 	}
 }
