@@ -21,8 +21,8 @@ func TestBaysEzdxfFixtures(t *testing.T) {
 			label := tr + "_" + form
 			got := convRunFile(t, filepath.Join(dir, label+".dxf"), proj)
 			noErrors(t, label, got)
-			if len(got.plan.Members) != 9 {
-				t.Fatalf("%s: %d members, want 9 (issues %v)", label, len(got.plan.Members), got.plan.Issues)
+			if len(got.Plan.Members) != 9 {
+				t.Fatalf("%s: %d members, want 9 (issues %v)", label, len(got.Plan.Members), got.Plan.Issues)
 			}
 			sameBayMembers(t, label, ref, got, 0, true)
 		}

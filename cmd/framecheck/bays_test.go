@@ -132,10 +132,10 @@ func baysDXF(form, bad string, rotDeg float64, mm bool) []byte {
 // trib 16 inside and 8 at the two edge joists, all 2x10.
 func checkBayRef(t *testing.T, label string, ref *outcome) {
 	t.Helper()
-	if len(ref.plan.Members) != 9 {
-		t.Fatalf("%s: reference has %d members (issues %v)", label, len(ref.plan.Members), ref.plan.Issues)
+	if len(ref.Plan.Members) != 9 {
+		t.Fatalf("%s: reference has %d members (issues %v)", label, len(ref.Plan.Members), ref.Plan.Issues)
 	}
-	for _, m := range ref.plan.Members {
+	for _, m := range ref.Plan.Members {
 		sp := m.Spans()
 		if len(sp) != 1 || math.Abs(sp[0]-180) > 1e-5 || m.Size != "2x10" || m.Generated {
 			t.Errorf("%s %s: spans %v size %s generated %v, want [180] 2x10 drawn", label, m.ID, sp, m.Size, m.Generated)
@@ -157,13 +157,13 @@ func checkBayRef(t *testing.T, label string, ref *outcome) {
 // is generated when gen says so. Issues are the caller's to check.
 func sameBayMembers(t *testing.T, label string, ref, got *outcome, first int, gen bool) {
 	t.Helper()
-	rm := ref.plan.Members
-	if len(got.plan.Members) < first+len(rm) {
-		t.Fatalf("%s: %d members, want at least %d (issues %v)", label, len(got.plan.Members), first+len(rm), got.plan.Issues)
+	rm := ref.Plan.Members
+	if len(got.Plan.Members) < first+len(rm) {
+		t.Fatalf("%s: %d members, want at least %d (issues %v)", label, len(got.Plan.Members), first+len(rm), got.Plan.Issues)
 	}
 	const lenTol, ratioTol = 0.25, 0.005
 	for k := range rm {
-		r, g := &rm[k], &got.plan.Members[first+k]
+		r, g := &rm[k], &got.Plan.Members[first+k]
 		if d := dist2(r.Start, g.Start) + dist2(r.End, g.End); d > lenTol {
 			t.Errorf("%s %s: centre line %v-%v, reference %v-%v", label, g.ID, g.Start, g.End, r.Start, r.End)
 		}
@@ -183,12 +183,12 @@ func sameBayMembers(t *testing.T, label string, ref, got *outcome, first int, ge
 		if r.Mark != g.Mark || g.Error != r.Error || g.Generated != gen {
 			t.Errorf("%s %s: mark %q error %v generated %v, reference %q %v, want generated %v", label, g.ID, g.Mark, g.Error, g.Generated, r.Mark, r.Error, gen)
 		}
-		rr, gr := ref.results[k], got.results[first+k]
+		rr, gr := ref.Results[k], got.Results[first+k]
 		if rr.Status != gr.Status || rr.Governing != gr.Governing || math.Abs(rr.MaxRatio-gr.MaxRatio) > ratioTol*rr.MaxRatio {
 			t.Errorf("%s %s: %s %s %.4f, reference %s %s %.4f", label, g.ID, gr.Status, gr.Governing, gr.MaxRatio, rr.Status, rr.Governing, rr.MaxRatio)
 		}
 	}
-	if got.takeoff.Joists == nil && ref.takeoff.Joists != nil {
+	if got.Takeoff.Joists == nil && ref.Takeoff.Joists != nil {
 		t.Errorf("%s: no joists in the takeoff", label)
 	}
 }
@@ -196,7 +196,7 @@ func sameBayMembers(t *testing.T, label string, ref, got *outcome, first int, ge
 // noErrors fails on any error issue, or a bay finding.
 func noErrors(t *testing.T, label string, o *outcome) {
 	t.Helper()
-	for _, is := range o.plan.Issues {
+	for _, is := range o.Plan.Issues {
 		if is.Severity == dxfimport.SevError || strings.HasPrefix(is.Code, "FRM2") && (is.Code == "FRM219" || is.Code == "FRM211" || is.Code == "FRM204") {
 			t.Errorf("%s: issue %v", label, is)
 		}
@@ -215,8 +215,8 @@ func TestBaysMatchCentreLines(t *testing.T) {
 			label := tr.name + "/" + form
 			got := convRun(t, form, baysDXF(form, "", tr.rot, tr.mm))
 			noErrors(t, label, got)
-			if len(got.plan.Members) != 9 {
-				t.Fatalf("%s: %d members, want 9 (issues %v)", label, len(got.plan.Members), got.plan.Issues)
+			if len(got.Plan.Members) != 9 {
+				t.Fatalf("%s: %d members, want 9 (issues %v)", label, len(got.Plan.Members), got.Plan.Issues)
 			}
 			sameBayMembers(t, label, ref, got, 0, true)
 		}
@@ -260,7 +260,7 @@ func checkBadBays(t *testing.T, label string, ref *outcome, got map[string]*outc
 			handle = handleOf(t, d, "FRAMING-NOTE", dxfimport.KindLine, 250)
 		}
 		var found []string
-		for _, is := range o.plan.Issues {
+		for _, is := range o.Plan.Issues {
 			if is.Code == code {
 				found = append(found, is.Error())
 			}
@@ -269,16 +269,16 @@ func checkBadBays(t *testing.T, label string, ref *outcome, got map[string]*outc
 			t.Errorf("%s: %s findings %q, want one naming handle %s and saying %q", l, code, found, handle, want)
 		}
 		if bad == "drawn" {
-			if len(o.plan.Members) != 18 {
-				t.Fatalf("%s: %d members, want 9 + 9 drawn", l, len(o.plan.Members))
+			if len(o.Plan.Members) != 18 {
+				t.Fatalf("%s: %d members, want 9 + 9 drawn", l, len(o.Plan.Members))
 			}
-			for _, m := range o.plan.Members[9:] {
+			for _, m := range o.Plan.Members[9:] {
 				if m.Generated || m.Size != "2x12" || m.Error {
 					t.Errorf("%s %s: generated %v size %s error %v, want drawn 2x12 from the bay's callout", l, m.ID, m.Generated, m.Size, m.Error)
 				}
 			}
-		} else if len(o.plan.Members) != 9 {
-			t.Fatalf("%s: %d members, want the first bay's 9 (issues %v)", l, len(o.plan.Members), o.plan.Issues)
+		} else if len(o.Plan.Members) != 9 {
+			t.Fatalf("%s: %d members, want the first bay's 9 (issues %v)", l, len(o.Plan.Members), o.Plan.Issues)
 		}
 		sameBayMembers(t, l, ref, o, 0, false)
 	}

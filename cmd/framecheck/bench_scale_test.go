@@ -16,6 +16,7 @@ import (
 
 	"framecheck/dxfimport"
 	"framecheck/framing"
+	"framecheck/pipeline"
 	"framecheck/project"
 )
 
@@ -38,7 +39,7 @@ func BenchmarkGroupPerJoist(b *testing.B) {
 			if err != nil {
 				b.Fatal(err)
 			}
-			opt := framingOptions(proj)
+			opt := pipeline.FramingOptions(proj)
 			runtime.GC()
 			b.ResetTimer()
 			for b.Loop() {

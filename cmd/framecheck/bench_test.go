@@ -28,6 +28,7 @@ import (
 	"framecheck/dxfimport"
 	"framecheck/export"
 	"framecheck/framing"
+	"framecheck/pipeline"
 	"framecheck/project"
 	"framecheck/samples/bigplan/synth"
 )
@@ -86,7 +87,6 @@ type prepared struct {
 	outcome *outcome
 	results *export.Results
 	inputs  []check.Member
-	shifts  []float64
 	usable  []bool
 }
 
@@ -104,22 +104,14 @@ func prepare(tb testing.TB, dir string, n int) *prepared {
 	}
 	pp.outcome = o
 	pp.results = exportResults(o, pp.dxf)
-	pp.inputs, pp.shifts, pp.usable = checkInputs(proj, o.plan)
-	return pp
-}
-
-// checkInputs builds the check input of every plan member as runPipeline
-// does, with which members are usable.
-func checkInputs(p *project.Project, plan *framing.Plan) ([]check.Member, []float64, []bool) {
-	inputs := make([]check.Member, len(plan.Members))
-	shifts := make([]float64, len(plan.Members))
-	usable := make([]bool, len(plan.Members))
-	for k := range plan.Members {
-		cm, shift, msgs := checkInput(p, plan, k)
-		inputs[k], shifts[k] = cm, shift
-		usable[k] = !plan.Members[k].Error && len(msgs) == 0
+	// the check inputs as the pipeline built them; a member in error
+	// before its check is left out
+	pp.inputs = o.Inputs
+	pp.usable = make([]bool, len(o.Inputs))
+	for k := range o.Results {
+		pp.usable[k] = o.Results[k].Status != check.StatusError
 	}
-	return inputs, shifts, usable
+	return pp
 }
 
 // cpuSeconds is the process's user+system CPU time, all threads.
@@ -217,7 +209,7 @@ func BenchmarkStageFraming(b *testing.B) {
 		if err != nil {
 			b.Fatal(err)
 		}
-		opt := framingOptions(proj)
+		opt := pipeline.FramingOptions(proj)
 		b.ReportAllocs()
 		b.ResetTimer()
 		for b.Loop() {
@@ -242,7 +234,7 @@ func BenchmarkStageFramingOutlines(b *testing.B) {
 		if err != nil {
 			b.Fatal(err)
 		}
-		opt := framingOptions(proj)
+		opt := pipeline.FramingOptions(proj)
 		b.ReportAllocs()
 		b.ResetTimer()
 		for b.Loop() {
@@ -274,32 +266,13 @@ func BenchmarkStagePipeline(b *testing.B) {
 	})
 }
 
-// BenchmarkStageChecks is the check stage as the pipeline runs it
-// (checkAll: identical members checked once, on every core).
-func BenchmarkStageChecks(b *testing.B) {
-	forSizes(b, func(b *testing.B, n int) {
-		pp := prepare(b, b.TempDir(), n)
-		settings, err := checkSettings(pp.project)
-		if err != nil {
-			b.Fatal(err)
-		}
-		o := &outcome{results: make([]check.Result, n)}
-		b.ReportAllocs()
-		b.ResetTimer()
-		for b.Loop() {
-			checkAll(pp.inputs, pp.shifts, pp.usable, settings, pp.project, o)
-		}
-		perJoist(b, n)
-	})
-}
-
 // BenchmarkMemberChecks checks every usable member with check.CheckMember,
 // no de-duplication, spread over every core; members/cpu-s is the rate per
 // core.
 func BenchmarkMemberChecks(b *testing.B) {
 	forSizes(b, func(b *testing.B, n int) {
 		pp := prepare(b, b.TempDir(), n)
-		settings, err := checkSettings(pp.project)
+		settings, err := pipeline.Settings(pp.project)
 		if err != nil {
 			b.Fatal(err)
 		}
@@ -442,17 +415,17 @@ func TestBigPlanOutcome(t *testing.T) {
 		if err != nil {
 			t.Fatal(err)
 		}
-		if len(o.plan.Members) != p.stats.Joists || p.stats.Joists != 2000 {
-			t.Fatalf("r12 %v: %d members, %d joists drawn, want 2000", r12, len(o.plan.Members), p.stats.Joists)
+		if len(o.Plan.Members) != p.stats.Joists || p.stats.Joists != 2000 {
+			t.Fatalf("r12 %v: %d members, %d joists drawn, want 2000", r12, len(o.Plan.Members), p.stats.Joists)
 		}
 		errs, storageFail := 0, 0
-		for k := range o.plan.Members {
-			res := &o.results[k]
+		for k := range o.Plan.Members {
+			res := &o.Results[k]
 			if res.Status == check.StatusError {
 				errs++
 			}
-			if res.Status == check.StatusFail && len(o.plan.Members[k].Zones) == 1 && o.plan.Members[k].Zones[0] == "STORAGE" &&
-				o.plan.Members[k].TribIn > 15.9 {
+			if res.Status == check.StatusFail && len(o.Plan.Members[k].Zones) == 1 && o.Plan.Members[k].Zones[0] == "STORAGE" &&
+				o.Plan.Members[k].TribIn > 15.9 {
 				storageFail++
 			}
 		}
@@ -462,8 +435,8 @@ func TestBigPlanOutcome(t *testing.T) {
 		if storageFail != p.stats.StorageInterior || p.stats.StorageInterior == 0 {
 			t.Errorf("r12 %v: %d interior storage joists fail, want %d", r12, storageFail, p.stats.StorageInterior)
 		}
-		if len(o.rows) == 0 || p.stats.RoofEdgeRuns == 0 {
-			t.Errorf("r12 %v: %d blocking rows to add (%d roof-edge runs), want some", r12, len(o.rows), p.stats.RoofEdgeRuns)
+		if len(o.Rows) == 0 || p.stats.RoofEdgeRuns == 0 {
+			t.Errorf("r12 %v: %d blocking rows to add (%d roof-edge runs), want some", r12, len(o.Rows), p.stats.RoofEdgeRuns)
 		}
 	}
 }

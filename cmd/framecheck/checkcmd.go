@@ -40,11 +40,11 @@ const (
 // planGeometry gives the report the supports and zone outlines to draw.
 func planGeometry(o *outcome) *export.PlanGeometry {
 	g := &export.PlanGeometry{}
-	for _, s := range o.plan.Supports {
+	for _, s := range o.Plan.Supports {
 		g.Supports = append(g.Supports, export.Polyline{Layer: s.Pos.Layer,
 			Points: [][2]float64{{s.A.X, s.A.Y}, {s.B.X, s.B.Y}}})
 	}
-	for _, z := range o.plan.Zones {
+	for _, z := range o.Plan.Zones {
 		zo := export.ZoneOutline{Name: z.Name}
 		for _, p := range z.Points {
 			zo.Points = append(zo.Points, [2]float64{p.X, p.Y})
@@ -232,11 +232,11 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitUsage
 	}
-	if o.marksFresh {
+	if o.MarksFresh {
 		fmt.Fprintf(stderr, "framecheck: none of the %d marks kept in %s is on this plan: the marks are named afresh from J1\n",
 			len(known), termText(filepath.Join(c.outDir, marksName)))
 	}
-	if len(o.plan.Members) == 0 {
+	if len(o.Plan.Members) == 0 {
 		layersCmd := "framecheck layers " + c.planPath
 		if c.projectPath != "" {
 			layersCmd += " -p " + c.projectPath
@@ -250,12 +250,12 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		if f := c.unusedProjectFile(); f != "" {
 			fmt.Fprintf(stderr, "framecheck: no -p given, so the built-in layer patterns applied; to use %s, add -p %s\n", termText(f), termText(f))
 		}
-		printIssues(stderr, o.issues, c.verbose)
+		printIssues(stderr, o.Issues, c.verbose)
 		return exitUsage
 	}
 	if msg := unmatchedSupports(o); msg != "" {
-		o.issues = append(dxfimport.IssueList{{Pos: dxfimport.Pos{File: outputName(c.planPath)}, Code: CodeUnmatchedSupport,
-			Severity: dxfimport.SevWarning, Msg: msg}}, o.issues...)
+		o.Issues = append(dxfimport.IssueList{{Pos: dxfimport.Pos{File: outputName(c.planPath)}, Code: CodeUnmatchedSupport,
+			Severity: dxfimport.SevWarning, Msg: msg}}, o.Issues...)
 	}
 	res := exportResults(o, c.planPath)
 	res.InputSHA256 = sha256Hex(c.planData)
@@ -284,8 +284,8 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 			written = append(written, p)
 		}
 	}
-	printIssues(stderr, o.issues, c.verbose)
-	c.warnings, c.doubts = countWarnings(o.issues), runDoubts(o.issues)
+	printIssues(stderr, o.Issues, c.verbose)
+	c.warnings, c.doubts = countWarnings(o.Issues), runDoubts(o.Issues)
 	c.bad = badGroups(o, res, proj)
 	printSummary(stdout, c, proj, res, written)
 	if res.LoadPath != nil {
@@ -308,7 +308,7 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	}
 	// Every member found passes, but part of the drawing was left out
 	// (entities past the limit, coordinates that overflow): not a clean run.
-	if n := errorFindings(o.issues); n > 0 {
+	if n := errorFindings(o.Issues); n > 0 {
 		fmt.Fprintf(stderr, "framecheck: %s: %d error finding(s) above: part of the drawing was not read, so not every joist may have been checked\n",
 			termText(c.planPath), n)
 		return exitFail
@@ -325,15 +325,15 @@ const CodeUnmatchedSupport = "RUN402"
 // reaches no support; "" otherwise.
 func unmatchedSupports(o *outcome) string {
 	lost := false
-	for _, is := range o.issues {
+	for _, is := range o.Issues {
 		lost = lost || is.Code == framing.CodeNoSupport
 	}
 	if !lost {
 		return ""
 	}
 	var pats []string
-	rows := layerRows(o.drawing, o.project)
-	for _, u := range unusedPatterns(rows, o.project) {
+	rows := layerRows(o.drawing, o.Project)
+	for _, u := range unusedPatterns(rows, o.Project) {
 		if strings.HasPrefix(u, "[[support]]") {
 			pats = append(pats, u)
 		}
@@ -502,7 +502,7 @@ func (c *checkRun) write(o *outcome, res *export.Results, proj *project.Project,
 		}
 	}
 	// the marks' names, for the next run into this folder
-	mdata, err := marksJSON(o.marks)
+	mdata, err := marksJSON(o.Marks)
 	if err == nil {
 		err = writeSynced(set.path(marksName), mdata)
 	}

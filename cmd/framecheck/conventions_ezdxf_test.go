@@ -20,14 +20,14 @@ func TestConventionsEzdxfFixtures(t *testing.T) {
 	for _, tr := range []string{"plan", "turned"} {
 		proj := filepath.Join(t.TempDir(), "conv.toml")
 		ref := convRunFile(t, filepath.Join(dir, tr+"_ref.dxf"), proj)
-		if len(ref.plan.Members) != 9 || ref.plan.Issues.Err() != nil {
-			t.Fatalf("%s_ref: %d members, issues %v", tr, len(ref.plan.Members), ref.plan.Issues)
+		if len(ref.Plan.Members) != 9 || ref.Plan.Issues.Err() != nil {
+			t.Fatalf("%s_ref: %d members, issues %v", tr, len(ref.Plan.Members), ref.Plan.Issues)
 		}
 		for _, v := range []string{"lines4", "lwpoly", "poly2d", "pair", "many", "joistblk", "all"} {
 			got := convRunFile(t, filepath.Join(dir, tr+"_"+v+".dxf"), proj)
 			sameOutcome(t, tr+"_"+v, ref, got)
-			if strings.Contains("joistblk all", v) && got.takeoff.ExistingBlockingPieces != 16 {
-				t.Errorf("%s_%s: existing blocking %d pieces, want 16", tr, v, got.takeoff.ExistingBlockingPieces)
+			if strings.Contains("joistblk all", v) && got.Takeoff.ExistingBlockingPieces != 16 {
+				t.Errorf("%s_%s: existing blocking %d pieces, want 16", tr, v, got.Takeoff.ExistingBlockingPieces)
 			}
 		}
 	}
@@ -61,7 +61,7 @@ func TestConventionsEzdxfNotRectangle(t *testing.T) {
 			}
 		}
 		var msgs []string
-		for _, is := range got.plan.Issues {
+		for _, is := range got.Plan.Issues {
 			if is.Code == "FRM216" {
 				msgs = append(msgs, is.Error())
 			}
@@ -79,27 +79,27 @@ func TestConventionsEzdxfNotRectangle(t *testing.T) {
 		// both are error members on their centre lines (so that they stay
 		// their neighbours' neighbours); the others match the reference
 		byMid := func(o *outcome, k int) dxfimport.Point {
-			m := o.plan.Members[k]
+			m := o.Plan.Members[k]
 			return dxfimport.Point{X: (m.Start.X + m.End.X) / 2, Y: (m.Start.Y + m.End.Y) / 2}
 		}
-		if len(got.plan.Members) != 9 {
-			t.Fatalf("%s: %d members, want 9", tr, len(got.plan.Members))
+		if len(got.Plan.Members) != 9 {
+			t.Fatalf("%s: %d members, want 9", tr, len(got.Plan.Members))
 		}
 		var good int
-		for k := range ref.plan.Members {
-			for j := range got.plan.Members {
+		for k := range ref.Plan.Members {
+			for j := range got.Plan.Members {
 				if dist2(byMid(ref, k), byMid(got, j)) > 0.5 {
 					continue
 				}
-				if got.plan.Members[j].Error {
+				if got.Plan.Members[j].Error {
 					continue
 				}
 				good++
-				r, g := ref.results[k], got.results[j]
+				r, g := ref.Results[k], got.Results[j]
 				// the tapered member's centre line is the middle of its
 				// mean width, about 1 in off the joist's: its neighbours'
 				// tribs move by half that, and their ratios with them
-				sameTrib := math.Abs(ref.plan.Members[k].TribIn-got.plan.Members[j].TribIn) <= 0.25
+				sameTrib := math.Abs(ref.Plan.Members[k].TribIn-got.Plan.Members[j].TribIn) <= 0.25
 				if r.Status != g.Status || r.Governing != g.Governing || (sameTrib && math.Abs(r.MaxRatio-g.MaxRatio) > 0.005*r.MaxRatio) {
 					t.Errorf("%s %s: %s %s %.4f, reference %s %s %.4f", tr, g.ID, g.Status, g.Governing, g.MaxRatio, r.Status, r.Governing, r.MaxRatio)
 				}

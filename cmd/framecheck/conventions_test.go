@@ -205,11 +205,11 @@ func convRunFile(t *testing.T, plan, proj string) *outcome {
 // tolerances are the issue's (0.25 in on lengths, 0.5 % on ratios).
 func sameOutcome(t *testing.T, label string, ref, got *outcome) {
 	t.Helper()
-	rm, gm := ref.plan.Members, got.plan.Members
+	rm, gm := ref.Plan.Members, got.Plan.Members
 	if len(rm) != len(gm) {
-		t.Fatalf("%s: %d members, reference %d (issues %v)", label, len(gm), len(rm), got.plan.Issues)
+		t.Fatalf("%s: %d members, reference %d (issues %v)", label, len(gm), len(rm), got.Plan.Issues)
 	}
-	for _, is := range got.plan.Issues {
+	for _, is := range got.Plan.Issues {
 		if is.Severity == dxfimport.SevError || is.Code == "FRM217" || is.Code == "FRM204" {
 			t.Errorf("%s: issue %v", label, is)
 		}
@@ -250,7 +250,7 @@ func sameOutcome(t *testing.T, label string, ref, got *outcome) {
 				}
 			}
 		}
-		rr, gr := ref.results[k], got.results[k]
+		rr, gr := ref.Results[k], got.Results[k]
 		if rr.Status != gr.Status || rr.Governing != gr.Governing || math.Abs(rr.MaxRatio-gr.MaxRatio) > ratioTol*rr.MaxRatio {
 			t.Errorf("%s %s: %s %s %.4f, reference %s %s %.4f", label, g.ID, gr.Status, gr.Governing, gr.MaxRatio, rr.Status, rr.Governing, rr.MaxRatio)
 		}
@@ -271,10 +271,10 @@ func TestConventionsMatchCentreLines(t *testing.T) {
 		// 152.25 -> wall mid-line 302.75: 149.5 and 150.5; trib 16 inside, 8
 		// at the edges; bearings 5.0 (the end stops 0.5 in inside the
 		// outer face), 4.5 (the beam), 5.0
-		if len(ref.plan.Members) != 9 {
-			t.Fatalf("%s: reference has %d members", tr.name, len(ref.plan.Members))
+		if len(ref.Plan.Members) != 9 {
+			t.Fatalf("%s: reference has %d members", tr.name, len(ref.Plan.Members))
 		}
-		for _, m := range ref.plan.Members {
+		for _, m := range ref.Plan.Members {
 			sp := m.Spans()
 			if len(sp) == 2 && sp[0] > sp[1] { // turned 30 degrees, the member runs the other way
 				sp[0], sp[1] = sp[1], sp[0]
@@ -314,17 +314,17 @@ func TestConventionsMatchCentreLines(t *testing.T) {
 			got := convRun(t, "conv", convDXF(v))
 			sameOutcome(t, label, ref, got)
 			if v.joists != "centre" {
-				for _, m := range got.plan.Members {
+				for _, m := range got.Plan.Members {
 					if v.joists != "mixed" && math.Abs(m.DrawnThicknessIn-1.5) > 1e-6 {
 						t.Errorf("%s %s: drawn thickness %g, want 1.5", label, m.ID, m.DrawnThicknessIn)
 					}
 				}
 			}
-			to := got.takeoff
+			to := got.Takeoff
 			if want := 0; v.blocking == "joist" {
 				want = 16 // 8 pieces in line, 8 staggered
-				if to.ExistingBlockingPieces != want || len(got.plan.DrawnBlocking) != want {
-					t.Errorf("%s: existing blocking %d pieces (%d drawn), want %d", label, to.ExistingBlockingPieces, len(got.plan.DrawnBlocking), want)
+				if to.ExistingBlockingPieces != want || len(got.Plan.DrawnBlocking) != want {
+					t.Errorf("%s: existing blocking %d pieces (%d drawn), want %d", label, to.ExistingBlockingPieces, len(got.Plan.DrawnBlocking), want)
 				}
 				// each piece 16 - 1.5 = 14.5 in clear (2x dressed 1.5 in,
 				// NDS 2018 Supplement Table 1B)
@@ -336,7 +336,7 @@ func TestConventionsMatchCentreLines(t *testing.T) {
 			}
 			if v.supports == "many" {
 				var arcs int
-				for _, is := range got.plan.Issues {
+				for _, is := range got.Plan.Issues {
 					if is.Code == "FRM213" {
 						arcs++
 						if !strings.Contains(is.Msg, "2 curved entities") {

@@ -7,6 +7,7 @@ import (
 	"strings"
 	"testing"
 
+	"framecheck/pipeline"
 	"framecheck/project"
 )
 
@@ -17,7 +18,7 @@ func TestFramingOptionsLoadPath(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	o := framingOptions(p)
+	o := pipeline.FramingOptions(p)
 	if !reflect.DeepEqual(o.PostLayers, []string{"COL*", "COL-6*"}) || !reflect.DeepEqual(o.PointLoadLayers, []string{"PT-LOAD"}) {
 		t.Errorf("framing options: posts %q, point loads %q", o.PostLayers, o.PointLoadLayers)
 	}

@@ -9,6 +9,7 @@ import (
 	"strings"
 
 	"framecheck/check"
+	"framecheck/pipeline"
 	"framecheck/project"
 )
 
@@ -127,7 +128,7 @@ func buildMember(a *memberArgs, set map[string]bool) (check.Member, check.Settin
 	if a.project != "" {
 		p, err := project.LoadProject(a.project)
 		if err == nil {
-			settings, err = checkSettings(p)
+			settings, err = pipeline.Settings(p)
 		}
 		if err != nil {
 			return m, check.Settings{}, err.Error()

@@ -13,32 +13,32 @@ import (
 // exportLoadPath maps what the load path found onto results.json's
 // load_path section and the sheets built from it; nil without one.
 func exportLoadPath(o *outcome, toInch float64) *export.LoadPath {
-	po := o.path
-	if po == nil || po.solved == nil {
+	po := o.Path
+	if po == nil || po.Solved == nil {
 		return nil
 	}
-	plan := o.plan
-	lp := &export.LoadPath{Applied: typeLoads(po.solved.Applied), Delivered: typeLoads(po.solved.Delivered)}
+	plan := o.Plan
+	lp := &export.LoadPath{Applied: typeLoads(po.Solved.Applied), Delivered: typeLoads(po.Solved.Delivered)}
 	wallID := map[int]string{}
-	for i, w := range po.walls {
-		wallID[w.support] = fmt.Sprintf("W%d", i+1)
+	for i, w := range po.Walls {
+		wallID[w.Support] = fmt.Sprintf("W%d", i+1)
 	}
 	marks := map[string]string{}
-	for i := range po.beams {
-		bo := &po.beams[i]
-		b := bo.beam
+	for i := range po.Beams {
+		bo := &po.Beams[i]
+		b := bo.Beam
 		eb := export.PathBeam{ID: b.ID, Kind: b.Kind, Layer: b.Layer, LengthIn: b.LengthIn,
 			Start: [2]float64{b.Start.X / toInch, b.Start.Y / toInch}, End: [2]float64{b.End.X / toInch, b.End.Y / toInch},
 			StartIn: [2]float64{b.Start.X, b.Start.Y}, EndIn: [2]float64{b.End.X, b.End.Y},
-			Size: bo.res.Size, Species: bo.res.Species, Grade: bo.res.Grade, Status: bo.res.Status,
-			Governing: bo.res.Governing, MaxRatio: bo.res.MaxRatio, Messages: append(append([]string(nil), b.Messages...), bo.res.Messages...)}
+			Size: bo.Res.Size, Species: bo.Res.Species, Grade: bo.Res.Grade, Status: bo.Res.Status,
+			Governing: bo.Res.Governing, MaxRatio: bo.Res.MaxRatio, Messages: append(append([]string(nil), b.Messages...), bo.Res.Messages...)}
 		if len(b.Lines) > 0 {
 			eb.Source = b.Lines[0].String()
 		}
 		if eb.Size == "" {
-			eb.Size = bo.input.Size
+			eb.Size = bo.Input.Size
 		}
-		eb.SpansIn = bo.res.SpansIn
+		eb.SpansIn = bo.Res.SpansIn
 		for _, br := range b.Bearings {
 			switch br.Kind {
 			case "post":
@@ -55,7 +55,7 @@ func exportLoadPath(o *outcome, toInch float64) *export.LoadPath {
 		if eb.Carries == nil {
 			eb.Carries = []string{}
 		}
-		for _, c := range bo.res.Checks {
+		for _, c := range bo.Res.Checks {
 			eb.Checks = append(eb.Checks, export.Check{Kind: c.Kind, Combo: c.Combo, Actual: c.Actual, Allowable: c.Allowable,
 				Unit: c.Unit, Ratio: c.Ratio, Trace: exportTrace(c.Trace())})
 		}
@@ -66,11 +66,11 @@ func exportLoadPath(o *outcome, toInch float64) *export.LoadPath {
 		eb.Mark = marks[key]
 		lp.Beams = append(lp.Beams, eb)
 	}
-	for _, p := range po.posts {
-		pt := p.post
+	for _, p := range po.Posts {
+		pt := p.Post
 		ep := export.PathPost{ID: pt.ID, Source: pt.Pos.String(), At: [2]float64{pt.At.X / toInch, pt.At.Y / toInch},
-			AtIn: [2]float64{pt.At.X, pt.At.Y}, Size: p.size, Checked: p.checked, Loads: typeLoads(p.out.Loads)}
-		for _, pc := range p.out.Cases {
+			AtIn: [2]float64{pt.At.X, pt.At.Y}, Size: p.Size, Checked: p.Checked, Loads: typeLoads(p.Out.Loads)}
+		for _, pc := range p.Out.Cases {
 			if pc.PLb > ep.DownLb {
 				ep.DownLb, ep.DownCombo = pc.PLb, pc.Name
 			}
@@ -78,12 +78,12 @@ func exportLoadPath(o *outcome, toInch float64) *export.LoadPath {
 				ep.UpLb, ep.UpCombo = -pc.PLb, pc.Name
 			}
 		}
-		if len(p.unknown) > 0 {
+		if len(p.Unknown) > 0 {
 			ep.Status = check.StatusError
 			ep.Messages = []string{fmt.Sprintf("carries %s, which could not be checked: the load it brings is not known, so this post "+
-				"is not checked; check the beam, then the post", strings.Join(p.unknown, ", "))}
-		} else if p.checked {
-			r := p.out.Result
+				"is not checked; check the beam, then the post", strings.Join(p.Unknown, ", "))}
+		} else if p.Checked {
+			r := p.Out.Result
 			ep.Species, ep.Grade, ep.Status, ep.Messages = r.DesignVals.Species, r.DesignVals.Grade, r.Status, r.Messages
 			for _, c := range r.Checks {
 				ep.Checks = append(ep.Checks, export.Check{Kind: c.Kind, Combo: c.Combo, Actual: c.Actual, Allowable: c.Allowable,
@@ -97,12 +97,12 @@ func exportLoadPath(o *outcome, toInch float64) *export.LoadPath {
 			Loads: ep.Loads, DownLb: ep.DownLb, DownCombo: ep.DownCombo, UpLb: ep.UpLb, UpCombo: ep.UpCombo})
 		lp.Foundation = append(lp.Foundation, export.FoundationLine{Kind: "post", ID: pt.ID, Source: ep.Source, Loads: ep.Loads})
 	}
-	for _, jt := range po.joints {
-		c := export.Connection{Kind: jt.Kind, Member: po.ids[jt.Member], Bearing: jt.Bearing + 1, Loads: typeLoads(jt.Loads),
+	for _, jt := range po.Joints {
+		c := export.Connection{Kind: jt.Kind, Member: po.IDs[jt.Member], Bearing: jt.Bearing + 1, Loads: typeLoads(jt.Loads),
 			DownLb: jt.DownLb, DownCombo: jt.DownCombo, UpLb: jt.UpLb, UpCombo: jt.UpCombo}
 		switch jt.Carrier.Kind {
 		case loadpath.Member:
-			c.Carrier = po.ids[jt.Carrier.Index]
+			c.Carrier = po.IDs[jt.Carrier.Index]
 		case loadpath.Post:
 			c.Carrier = plan.Posts[jt.Carrier.Index].ID
 		case loadpath.Wall:
@@ -112,13 +112,13 @@ func exportLoadPath(o *outcome, toInch float64) *export.LoadPath {
 		}
 		lp.Connections = append(lp.Connections, c)
 	}
-	for i, w := range po.walls {
-		if w.loads == (loadpath.Loads{HasUpliftDead: w.loads.HasUpliftDead, UpliftDeadLb: w.loads.UpliftDeadLb}) {
+	for i, w := range po.Walls {
+		if w.Loads == (loadpath.Loads{HasUpliftDead: w.Loads.HasUpliftDead, UpliftDeadLb: w.Loads.UpliftDeadLb}) {
 			continue // nothing reaches it
 		}
-		fl := export.FoundationLine{Kind: "wall", ID: fmt.Sprintf("W%d", i+1), LengthIn: w.lengthIn, Loads: typeLoads(w.loads),
-			Source: plan.Supports[w.support].Pos.String()}
-		if ft := w.lengthIn / 12; ft > 0 {
+		fl := export.FoundationLine{Kind: "wall", ID: fmt.Sprintf("W%d", i+1), LengthIn: w.LengthIn, Loads: typeLoads(w.Loads),
+			Source: plan.Supports[w.Support].Pos.String()}
+		if ft := w.LengthIn / 12; ft > 0 {
 			l := fl.Loads
 			fl.PerFoot = export.TypeLoads{DeadLb: l.DeadLb / ft, LiveLb: l.LiveLb / ft, RoofLiveLb: l.RoofLiveLb / ft, SnowLb: l.SnowLb / ft,
 				WindDownLb: l.WindDownLb / ft, WindUpLb: l.WindUpLb / ft, UpliftDeadLb: l.UpliftDeadLb / ft}

@@ -30,31 +30,31 @@ func TestLoadPathOnFixture(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if o.path == nil || len(o.path.beams) == 0 {
-		t.Fatalf("no beams followed: %+v", o.path)
+	if o.Path == nil || len(o.Path.Beams) == 0 {
+		t.Fatalf("no beams followed: %+v", o.Path)
 	}
 	checked := 0
-	for _, b := range o.path.beams {
-		if b.res.Status == check.StatusError {
+	for _, b := range o.Path.Beams {
+		if b.Res.Status == check.StatusError {
 			continue
 		}
 		checked++
-		if len(b.input.PointLoads) == 0 && len(b.beam.Carried) > 0 {
-			t.Errorf("%s carries %d joists but was checked without their reactions", b.beam.ID, len(b.beam.Carried))
+		if len(b.Input.PointLoads) == 0 && len(b.Beam.Carried) > 0 {
+			t.Errorf("%s carries %d joists but was checked without their reactions", b.Beam.ID, len(b.Beam.Carried))
 		}
 	}
 	if checked == 0 {
-		t.Errorf("no beam checked: %+v", o.path.beams)
+		t.Errorf("no beam checked: %+v", o.Path.Beams)
 	}
-	a, d := o.path.solved.Applied, o.path.solved.Delivered
+	a, d := o.Path.Solved.Applied, o.Path.Solved.Delivered
 	for _, c := range [][2]float64{{a.DeadLb, d.DeadLb}, {a.LiveLb, d.LiveLb}, {a.RoofLiveLb, d.RoofLiveLb}, {a.WindUpLb, d.WindUpLb}} {
 		if math.Abs(c[0]-c[1]) > 0.1 {
 			t.Errorf("applied %.2f lb, delivered %.2f lb: loads lost on the way (statics)", c[0], c[1])
 		}
 	}
 	posts := 0.0
-	for _, po := range o.path.posts {
-		posts += po.out.Loads.DeadLb + po.out.Loads.LiveLb
+	for _, po := range o.Path.Posts {
+		posts += po.Out.Loads.DeadLb + po.Out.Loads.LiveLb
 	}
 	if posts <= 0 {
 		t.Errorf("no load reached the posts")
@@ -134,16 +134,16 @@ func TestBeamSizingOnFixture(t *testing.T) {
 	require.NoError(t, err)
 	o, err := runPipeline(pipelineInput{planPath: "../../framing/testdata/loadpath.dxf", project: p, size: true})
 	require.NoError(t, err)
-	require.NotNil(t, o.path)
-	for _, b := range o.path.beams {
-		if b.input.Species == check.GlulamSpecies {
-			assert.Equal(t, "5.125x12", b.res.Size, "%s keeps its glulam size", b.beam.ID)
+	require.NotNil(t, o.Path)
+	for _, b := range o.Path.Beams {
+		if b.Input.Species == check.GlulamSpecies {
+			assert.Equal(t, "5.125x12", b.Res.Size, "%s keeps its glulam size", b.Beam.ID)
 			continue
 		}
-		assert.Contains(t, p.Sizing.BeamCandidates, b.res.Size, "%s sized from the candidates", b.beam.ID)
-		if b.res.Status == check.StatusPass {
+		assert.Contains(t, p.Sizing.BeamCandidates, b.Res.Size, "%s sized from the candidates", b.Beam.ID)
+		if b.Res.Status == check.StatusPass {
 			continue
 		}
-		assert.Equal(t, p.Sizing.BeamCandidates[len(p.Sizing.BeamCandidates)-1], b.res.Size, "%s: none passes, the last is kept", b.beam.ID)
+		assert.Equal(t, p.Sizing.BeamCandidates[len(p.Sizing.BeamCandidates)-1], b.Res.Size, "%s: none passes, the last is kept", b.Beam.ID)
 	}
 }

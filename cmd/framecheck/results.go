@@ -11,12 +11,13 @@ import (
 	"framecheck/dxfimport"
 	"framecheck/export"
 	"framecheck/framing"
+	"framecheck/pipeline"
 	"framecheck/project"
 )
 
 // exportResults maps an outcome onto export's results.json contract.
 func exportResults(o *outcome, planName string) *export.Results {
-	d, plan := o.drawing, o.plan
+	d, plan := o.drawing, o.Plan
 	toInch := d.ToInch
 	if toInch <= 0 {
 		toInch = 1
@@ -26,7 +27,7 @@ func exportResults(o *outcome, planName string) *export.Results {
 		units = "in" // read as inches, with a DXF issue saying so
 	}
 	r := &export.Results{Schema: export.Schema, Plan: filepath.Base(planName), DrawingUnits: units, Datum: export.DatumText,
-		ToolVersion: toolVersion(), Project: exportInfo(o.project.Info)}
+		ToolVersion: toolVersion(), Project: exportInfo(o.Project.Info)}
 	ids := make([]string, len(plan.Members))
 	for k := range plan.Members {
 		ids[k] = plan.Members[k].ID
@@ -34,7 +35,7 @@ func exportResults(o *outcome, planName string) *export.Results {
 	conv := newResultConverter()
 	r.Members = make([]export.Member, 0, len(plan.Members))
 	for k := range plan.Members {
-		em := conv.member(&plan.Members[k], &o.results[k], toInch)
+		em := conv.member(&plan.Members[k], &o.Results[k], toInch)
 		placeMember(&em, &plan.Members[k])
 		if len(em.Messages) > 0 {
 			msgs := make([]string, len(em.Messages))
@@ -47,7 +48,7 @@ func exportResults(o *outcome, planName string) *export.Results {
 			em.Run = plan.Runs[ri].ID
 		}
 		r.Members = append(r.Members, em)
-		switch o.results[k].Status {
+		switch o.Results[k].Status {
 		case check.StatusPass:
 			r.Summary.Pass++
 		case check.StatusFail:
@@ -58,11 +59,11 @@ func exportResults(o *outcome, planName string) *export.Results {
 	}
 	r.Summary.Members = len(plan.Members)
 	r.Marks = exportMarks(r.Members)
-	for _, row := range o.rows {
+	for _, row := range o.Rows {
 		r.BlockingRows = append(r.BlockingRows, exportRow(plan, row, ids, toInch))
 	}
-	r.Takeoff = exportTakeoff(o.takeoff)
-	r.Uplift = exportUplift(plan, o.results, o.project.Design.UpliftReportLb, toInch)
+	r.Takeoff = exportTakeoff(o.Takeoff)
+	r.Uplift = exportUplift(plan, o.Results, o.Project.Design.UpliftReportLb, toInch)
 	if len(r.Uplift.Bearings) > 0 {
 		datum := make(map[string]float64, len(r.Members))
 		for i := range r.Members {
@@ -295,7 +296,7 @@ func exportRow(plan *framing.Plan, row framing.BlockingRow, ids []string, toInch
 		StartIn: [2]float64{row.From.X, row.From.Y}, EndIn: [2]float64{row.To.X, row.To.Y},
 		PositionIn: row.AtIn,
 	}
-	ri := runIndex(plan, row.Run)
+	ri := pipeline.RunIndex(plan, row.Run)
 	run := plan.Runs[ri]
 	for _, k := range run.Members {
 		er.Members = append(er.Members, ids[k])
@@ -340,7 +341,7 @@ func exportTakeoff(t framing.Takeoff) export.Takeoff {
 // assumptions lists the code editions, combinations, switches, zones and
 // design values of the run, for the Inputs and Notes sheets.
 func assumptions(o *outcome) export.Assumptions {
-	p := o.project
+	p := o.Project
 	a := export.Assumptions{
 		CodeEditions: []string{
 			"ANSI/AWC NDS 2018, allowable stress design (ASD), with the NDS 2018 Supplement design values",
@@ -348,7 +349,7 @@ func assumptions(o *outcome) export.Assumptions {
 			"IBC 2018 Table 1604.3 deflection limits",
 		},
 	}
-	for _, c := range o.settings.Combos {
+	for _, c := range o.Settings.Combos {
 		a.Combinations = append(a.Combinations, c.Name)
 	}
 	if len(a.Combinations) == 0 {
@@ -395,8 +396,8 @@ func assumptions(o *outcome) export.Assumptions {
 		}
 	}
 	seen := map[string]bool{}
-	for k := range o.results {
-		res := &o.results[k]
+	for k := range o.Results {
+		res := &o.Results[k]
 		v := res.Values
 		if v.Species == "" {
 			continue
@@ -431,7 +432,7 @@ func assumptions(o *outcome) export.Assumptions {
 		"a connector's allowable load for that load duration (CD = 1.6 for wind, NDS 2018 Table 2.3.2) must meet. "+
 		"No connector is named: the designer picks the part.", project.FmtNum(p.Design.UpliftReportLb), export.LayerUplift))
 	a.Notes = append(a.Notes, bracingNotes(p)...)
-	if n := generatedCount(o.plan); n > 0 {
+	if n := generatedCount(o.Plan); n > 0 {
 		a.Notes = append(a.Notes, fmt.Sprintf("%d joists are not drawn but laid out in bays shown by a span symbol "+
 			"and a size callout (marked generated; layer %s): parallel to the span line, from support to support, "+
 			"the first at the bay's left edge (its bottom edge for joists running left to right), one every callout "+
@@ -500,12 +501,12 @@ const mostFindings = 50
 // checked. A member's own findings are already in its messages.
 func drawingFindings(o *outcome) []string {
 	own := map[dxfimport.Pos]bool{}
-	for k := range o.plan.Members {
-		own[o.plan.Members[k].Pos] = true
+	for k := range o.Plan.Members {
+		own[o.Plan.Members[k].Pos] = true
 	}
 	var notes []string
 	n := 0
-	for _, is := range o.issues {
+	for _, is := range o.Issues {
 		if is.Severity < dxfimport.SevWarning || own[is.Pos] {
 			continue
 		}

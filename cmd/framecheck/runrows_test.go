@@ -81,13 +81,13 @@ func TestDrawnThirdPointRow_FourPiecesToAdd(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if len(o.rows) != 1 || math.Abs(o.rows[0].AtIn-144) > 1e-6 {
-		t.Fatalf("rows to add %+v, want one at 144 in", o.rows)
+	if len(o.Rows) != 1 || math.Abs(o.Rows[0].AtIn-144) > 1e-6 {
+		t.Fatalf("rows to add %+v, want one at 144 in", o.Rows)
 	}
-	if o.takeoff.BlockingPieces != 4 {
-		t.Errorf("takeoff: %d blocking pieces, want 4 (one row, four bays)", o.takeoff.BlockingPieces)
+	if o.Takeoff.BlockingPieces != 4 {
+		t.Errorf("takeoff: %d blocking pieces, want 4 (one row, four bays)", o.Takeoff.BlockingPieces)
 	}
-	for k, r := range o.results {
+	for k, r := range o.Results {
 		if r.Status != check.StatusPass {
 			t.Errorf("%s: %s %v", r.ID, r.Status, r.Messages)
 		}
@@ -99,7 +99,7 @@ func TestDrawnThirdPointRow_FourPiecesToAdd(t *testing.T) {
 		}
 		// never on top of a drawn row: at least d = 9.25 in away
 		for _, x := range r.BlockingAtIn {
-			for _, y := range o.plan.Members[k].ExistingBlockingAtIn {
+			for _, y := range o.Plan.Members[k].ExistingBlockingAtIn {
 				if math.Abs(x-y) <= 9.25 {
 					t.Errorf("%s: row to add at %v on the drawn row at %v", r.ID, x, y)
 				}
@@ -112,10 +112,10 @@ func TestDrawnThirdPointRow_FourPiecesToAdd(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if len(o.rows) != 2 || o.takeoff.BlockingPieces != 8 {
-		t.Errorf("no drawn row: %d rows, %d pieces; want 2 rows, 8 pieces", len(o.rows), o.takeoff.BlockingPieces)
+	if len(o.Rows) != 2 || o.Takeoff.BlockingPieces != 8 {
+		t.Errorf("no drawn row: %d rows, %d pieces; want 2 rows, 8 pieces", len(o.Rows), o.Takeoff.BlockingPieces)
 	}
-	for _, r := range o.results {
+	for _, r := range o.Results {
 		if r.RowsPerSpan() != 2 || len(r.DrawnBlockingAtIn) != 0 {
 			t.Errorf("%s: %d rows per span, drawn %v; want 2, none", r.ID, r.RowsPerSpan(), r.DrawnBlockingAtIn)
 		}

@@ -123,11 +123,11 @@ func TestLightestPassingAlternative(t *testing.T) {
 		t.Errorf("2x14 ratio %.3f, want about %.3f (written out above)", j12.AlternativeRatio, want)
 	}
 	// and the engine agrees that the 2x12 fails for that member
-	for k := range o.plan.Members {
-		if o.plan.Members[k].ID == j12.Worst {
-			cm := o.inputs[k]
+	for k := range o.Plan.Members {
+		if o.Plan.Members[k].ID == j12.Worst {
+			cm := o.Inputs[k]
 			cm.Size = "2x12"
-			if r := check.CheckMember(cm, o.settings); r.Status != check.StatusFail {
+			if r := check.CheckMember(cm, o.Settings); r.Status != check.StatusFail {
 				t.Errorf("2x12: %s %.2f, want fail (about 1.20, written out above)", r.Status, r.MaxRatio)
 			}
 		}

@@ -78,8 +78,8 @@ func badGroups(o *outcome, r *export.Results, proj *project.Project) []badGroup 
 	// Keyed on the check inputs (which carry the member ids): the plan's
 	// members are released before the writers run.
 	member := map[string]int{}
-	for k := range o.inputs {
-		member[o.inputs[k].ID] = k
+	for k := range o.Inputs {
+		member[o.Inputs[k].ID] = k
 	}
 	for i := range groups {
 		g := &groups[i]
@@ -87,7 +87,7 @@ func badGroups(o *outcome, r *export.Results, proj *project.Project) []badGroup 
 		if g.Status != export.StatusFail || !ok {
 			continue
 		}
-		g.Alternative, g.AlternativeRatio = lightestPassing(o.inputs[k], o.settings, proj.Sizing)
+		g.Alternative, g.AlternativeRatio = lightestPassing(o.Inputs[k], o.Settings, proj.Sizing)
 		g.Tried = true
 	}
 	return groups

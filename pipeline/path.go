@@ -1,4 +1,4 @@
-package main
+package pipeline
 
 import (
 	"fmt"
@@ -21,41 +21,41 @@ const (
 	CodeLoadPath       = "CHK312" // the load path itself: a cycle, reactions not found
 )
 
-// beamOutcome is a beam of the plan as the load path checked it.
-type beamOutcome struct {
-	beam  *framing.Beam
-	input check.Member
-	shift float64 // how far the check's origin lies before the beam's Start
-	res   check.Result
-	mark  string
+// BeamOutcome is a beam of the plan as the load path checked it.
+type BeamOutcome struct {
+	Beam  *framing.Beam
+	Input check.Member
+	Shift float64 // how far the check's origin lies before the beam's Start
+	Res   check.Result
+	Mark  string
 }
 
-// postOutcome is a post of the plan with the loads that reach it.
-type postOutcome struct {
-	post    *framing.Post
-	checked bool
-	out     loadpath.PostOut
-	size    string
+// PostOutcome is a post of the plan with the loads that reach it.
+type PostOutcome struct {
+	Post    *framing.Post
+	Checked bool
+	Out     loadpath.PostOut
+	Size    string
 	// unknown names the beams on the post that could not be checked: the
 	// load they bring is not known, so the post is not passed on it.
-	unknown []string
+	Unknown []string
 }
 
-// wallOutcome is a bearing-wall line with the loads that reach it.
-type wallOutcome struct {
-	support  int // index into Plan.Supports
-	loads    loadpath.Loads
-	lengthIn float64
+// WallOutcome is a bearing-wall line with the loads that reach it.
+type WallOutcome struct {
+	Support  int // index into Plan.Supports
+	Loads    loadpath.Loads
+	LengthIn float64
 }
 
-// pathOutcome is what the load path found.
-type pathOutcome struct {
-	beams  []beamOutcome
-	posts  []postOutcome
-	walls  []wallOutcome
-	joints []loadpath.Joint
-	ids    []string // loadpath member index -> member or beam id
-	solved *loadpath.Outcome
+// PathOutcome is what the load path found.
+type PathOutcome struct {
+	Beams  []BeamOutcome
+	Posts  []PostOutcome
+	Walls  []WallOutcome
+	Joints []loadpath.Joint
+	IDs    []string // loadpath member index -> member or beam id
+	Solved *loadpath.Outcome
 }
 
 // applyPointLoads puts the point loads drawn on joists on their check
@@ -108,7 +108,7 @@ const beamDensityPcf = woodDensityPcf
 //
 // With sizing (--size), each beam takes the lightest of [sizing]
 // beam_candidates with which it passes, its own weight following the size.
-func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, shifts []float64, usable []bool, s check.Settings, o *outcome, sizing bool) {
+func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, shifts []float64, usable []bool, s check.Settings, o *Outcome, sizing bool) {
 	checkable := len(plan.Posts) > 0
 	for i := range plan.Beams {
 		checkable = checkable || !plan.Beams[i].Rigid
@@ -116,7 +116,7 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 	if !checkable {
 		return // no beam with supports of its own, no post: every support is a rigid bearing
 	}
-	po := &pathOutcome{}
+	po := &PathOutcome{}
 	lp := &loadpath.Plan{}
 	// Walls: every bearing-wall support line.
 	wallOf := map[int]int{}
@@ -124,7 +124,7 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 		if sp.Kind == framing.KindBearingWall {
 			wallOf[i] = len(lp.Walls)
 			lp.Walls = append(lp.Walls, loadpath.WallIn{ID: fmt.Sprintf("W%d", len(lp.Walls)+1)})
-			po.walls = append(po.walls, wallOutcome{support: i, lengthIn: math.Hypot(sp.B.X-sp.A.X, sp.B.Y-sp.A.Y)})
+			po.Walls = append(po.Walls, WallOutcome{Support: i, LengthIn: math.Hypot(sp.B.X-sp.A.X, sp.B.Y-sp.A.Y)})
 		}
 	}
 	// Posts.
@@ -132,7 +132,7 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 		pt := &plan.Posts[i]
 		pc, checked, size := postInput(p, pt)
 		lp.Posts = append(lp.Posts, loadpath.PostIn{ID: pt.ID, Check: pc, Checked: checked})
-		po.posts = append(po.posts, postOutcome{post: pt, checked: checked, size: size})
+		po.Posts = append(po.Posts, PostOutcome{Post: pt, Checked: checked, Size: size})
 	}
 	// Beams: members of the path when they have their own supports.
 	beamMember := make([]int, len(plan.Beams))
@@ -143,10 +143,10 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 			continue
 		}
 		cm, shift, msg := beamInput(p, plan, b)
-		bo := beamOutcome{beam: b, input: cm, shift: shift}
+		bo := BeamOutcome{Beam: b, Input: cm, Shift: shift}
 		if msg != "" {
-			bo.res = check.Result{ID: b.ID, Size: cm.Size, Status: check.StatusError, Messages: []string{msg}}
-			o.issues.Add(b.Lines[0], CodeBeamNotChecked, dxfimport.SevError, "%s: %s", b.ID, msg)
+			bo.Res = check.Result{ID: b.ID, Size: cm.Size, Status: check.StatusError, Messages: []string{msg}}
+			o.Issues.Add(b.Lines[0], CodeBeamNotChecked, dxfimport.SevError, "%s: %s", b.ID, msg)
 		} else {
 			beamMember[i] = len(lp.Members)
 			mi := loadpath.MemberIn{ID: b.ID, Beam: true, Check: cm}
@@ -154,15 +154,15 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 				mi.Candidates, mi.DensityPcf = p.Sizing.BeamCandidates, beamDensityPcf
 			}
 			lp.Members = append(lp.Members, mi)
-			po.ids = append(po.ids, b.ID)
+			po.IDs = append(po.IDs, b.ID)
 		}
-		po.beams = append(po.beams, bo)
+		po.Beams = append(po.Beams, bo)
 		if msg != "" {
 			// the posts under a beam that cannot be checked get a load
 			// nobody knows
 			for _, br := range b.Bearings {
 				if br.Kind == framing.BeamOnPost {
-					po.posts[br.Index].unknown = append(po.posts[br.Index].unknown, b.ID)
+					po.Posts[br.Index].Unknown = append(po.Posts[br.Index].Unknown, b.ID)
 				}
 			}
 		}
@@ -188,10 +188,10 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 					}
 				case framing.BeamOnBeam:
 					if cb := beamMember[br.Index]; cb >= 0 {
-						at := along(&plan.Beams[br.Index], pointAlong(b, br.AtIn)) + po.beams[beamOutcomeIndex(plan, br.Index)].shift
+						at := along(&plan.Beams[br.Index], pointAlong(b, br.AtIn)) + po.Beams[beamOutcomeIndex(plan, br.Index)].Shift
 						c = loadpath.Carrier{Kind: loadpath.Member, Index: cb, AtIn: at, Joint: "beam to beam"}
 					} else {
-						o.issues.Add(b.Lines[0], CodeLoadLost, dxfimport.SevWarning,
+						o.Issues.Add(b.Lines[0], CodeLoadLost, dxfimport.SevWarning,
 							"%s bears on %s, which is not checked: its load stops there and does not reach what carries %s",
 							b.ID, plan.Beams[br.Index].ID, plan.Beams[br.Index].ID)
 					}
@@ -202,7 +202,7 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 			for _, mk := range plan.PointLoads {
 				if mk.Beam == i && mk.Member < 0 && mk.Err == "" {
 					l, name := markLoads(p, mk)
-					l.AtIn, l.Name = mk.AtIn+po.beams[bi].shift, name
+					l.AtIn, l.Name = mk.AtIn+po.Beams[bi].Shift, name
 					m.Check.PointLoads = append(m.Check.PointLoads, l)
 				}
 			}
@@ -217,7 +217,7 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 		if beamMember[i] < 0 {
 			continue
 		}
-		shift := po.beams[beamOutcomeIndex(plan, i)].shift
+		shift := po.Beams[beamOutcomeIndex(plan, i)].Shift
 		for _, c := range b.Carried {
 			joint := "joist on beam"
 			if b.Kind == framing.KindFlushBeam || b.Kind == framing.KindLedger {
@@ -228,15 +228,15 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 	}
 	reactions := map[string][]check.LoadReactions{}
 	for k := range plan.Members {
-		if !usable[k] || o.results[k].Status == check.StatusError {
+		if !usable[k] || o.Results[k].Status == check.StatusError {
 			if bearsOnBeam(carriedBy, k, len(plan.Members[k].Bearings)) {
-				o.issues.Add(plan.Members[k].Pos, CodeLoadLost, dxfimport.SevWarning,
+				o.Issues.Add(plan.Members[k].Pos, CodeLoadLost, dxfimport.SevWarning,
 					"%s is in error: the load it would put on the beams under it is not in their checks", plan.Members[k].ID)
 			}
 			continue
 		}
 		cm := inputs[k]
-		cm.Size = o.results[k].Size
+		cm.Size = o.Results[k].Size
 		key := memberKey(cm)
 		rs, ok := reactions[key]
 		if !ok {
@@ -247,7 +247,7 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 			}
 			reactions[key] = rs
 		}
-		mi := loadpath.MemberIn{ID: plan.Members[k].ID, Check: cm, Result: &o.results[k], Reactions: rs}
+		mi := loadpath.MemberIn{ID: plan.Members[k].ID, Check: cm, Result: &o.Results[k], Reactions: rs}
 		for j, b := range plan.Members[k].Bearings {
 			c, ok := carriedBy[[2]int{k, j}]
 			if !ok {
@@ -259,12 +259,12 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 			mi.Carriers = append(mi.Carriers, c)
 		}
 		lp.Members = append(lp.Members, mi)
-		po.ids = append(po.ids, plan.Members[k].ID)
+		po.IDs = append(po.IDs, plan.Members[k].ID)
 	}
 	solved := loadpath.Solve(lp, s)
-	po.solved = solved
+	po.Solved = solved
 	for _, e := range solved.Errors {
-		o.issues.Add(dxfimport.Pos{File: o.drawing.File}, CodeLoadPath, dxfimport.SevError, "%s", e)
+		o.Issues.Add(dxfimport.Pos{File: o.PlanFile}, CodeLoadPath, dxfimport.SevError, "%s", e)
 	}
 	bi = 0
 	for i := range plan.Beams {
@@ -272,39 +272,39 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 			continue
 		}
 		if k := beamMember[i]; k >= 0 {
-			bo := &po.beams[bi]
-			bo.input = solved.Members[k].Input
-			bo.res = unshift(solved.Members[k].Result, bo.shift)
-			bo.res.ID = plan.Beams[i].ID
+			bo := &po.Beams[bi]
+			bo.Input = solved.Members[k].Input
+			bo.Res = unshift(solved.Members[k].Result, bo.Shift)
+			bo.Res.ID = plan.Beams[i].ID
 			// a member it carries that could not be checked brings a load
 			// its check does not hold: never a pass on part of the load
 			var missing []string
 			for _, c := range plan.Beams[i].Carried {
-				if !usable[c.Member] || o.results[c.Member].Status == check.StatusError {
+				if !usable[c.Member] || o.Results[c.Member].Status == check.StatusError {
 					missing = append(missing, plan.Members[c.Member].ID)
 				}
 			}
 			if len(missing) > 0 {
-				bo.res.Messages = append(bo.res.Messages, fmt.Sprintf("carries %s, in error: their loads are not in this check",
+				bo.Res.Messages = append(bo.Res.Messages, fmt.Sprintf("carries %s, in error: their loads are not in this check",
 					strings.Join(missing, ", ")))
-				if bo.res.Status == check.StatusPass {
-					bo.res.Status = check.StatusError
+				if bo.Res.Status == check.StatusPass {
+					bo.Res.Status = check.StatusError
 				}
 			}
 		}
 		bi++
 	}
-	for i := range po.posts {
-		po.posts[i].out = solved.Posts[i]
+	for i := range po.Posts {
+		po.Posts[i].Out = solved.Posts[i]
 	}
-	for i := range po.walls {
-		po.walls[i].loads = solved.Walls[i]
+	for i := range po.Walls {
+		po.Walls[i].Loads = solved.Walls[i]
 	}
-	po.joints = solved.Joints
-	o.path = po
+	po.Joints = solved.Joints
+	o.Path = po
 }
 
-// beamOutcomeIndex returns the index into pathOutcome.beams of plan beam i
+// beamOutcomeIndex returns the index into PathOutcome.beams of plan beam i
 // (rigid beams are left out of it).
 func beamOutcomeIndex(plan *framing.Plan, i int) int {
 	n := 0

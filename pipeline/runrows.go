@@ -1,4 +1,4 @@
-package main
+package pipeline
 
 import (
 	"fmt"
@@ -19,13 +19,13 @@ import (
 // drawn rows gets a set of positions (drawnRunRows): rows are counted from
 // each member's first bearing, so members whose drawn starts differ still
 // line up, as framing.PlaceRows lays them.
-func decideRunRows(plan *framing.Plan, inputs []check.Member, shifts []float64, usable []bool, settings check.Settings, o *outcome) {
+func decideRunRows(plan *framing.Plan, inputs []check.Member, shifts []float64, usable []bool, settings check.Settings, o *Outcome) {
 	// Members identical for design checked with the same rows share one result.
 	withRows := map[string]check.Result{}
 	for ri, run := range plan.Runs {
 		if runHasDrawnRows(run, inputs, usable) {
 			if at := drawnRunRows(plan, run, inputs, shifts, usable, settings, o, withRows); len(at) > 0 {
-				o.rows = append(o.rows, plan.PlaceRows(ri, at)...)
+				o.Rows = append(o.Rows, plan.PlaceRows(ri, at)...)
 			}
 			continue
 		}
@@ -34,7 +34,7 @@ func decideRunRows(plan *framing.Plan, inputs []check.Member, shifts []float64, 
 			if !usable[k] {
 				continue
 			}
-			if r := o.results[k].RowsPerSpan(); ref < 0 || r > n {
+			if r := o.Results[k].RowsPerSpan(); ref < 0 || r > n {
 				n, ref = r, k
 			}
 		}
@@ -42,9 +42,9 @@ func decideRunRows(plan *framing.Plan, inputs []check.Member, shifts []float64, 
 			continue
 		}
 		for _, k := range run.Members {
-			if usable[k] && o.results[k].RowsPerSpan() != n {
+			if usable[k] && o.Results[k].RowsPerSpan() != n {
 				cm := inputs[k]
-				cm.Size = o.results[k].Size
+				cm.Size = o.Results[k].Size
 				key := fmt.Sprintf("%d|%s", n, memberKey(cm))
 				r, ok := withRows[key]
 				if !ok {
@@ -52,7 +52,7 @@ func decideRunRows(plan *framing.Plan, inputs []check.Member, shifts []float64, 
 					withRows[key] = r
 				}
 				r.ID = cm.ID
-				o.results[k] = unshift(r, shifts[k])
+				o.Results[k] = unshift(r, shifts[k])
 			}
 		}
 		// Positions along the run's first member, from its Start:
@@ -60,10 +60,10 @@ func decideRunRows(plan *framing.Plan, inputs []check.Member, shifts []float64, 
 		first := &plan.Members[run.Members[0]]
 		refM := &plan.Members[ref]
 		var at []float64
-		for _, x := range o.results[ref].BlockingAtIn {
+		for _, x := range o.Results[ref].BlockingAtIn {
 			at = append(at, x-firstBearing(refM)+firstBearing(first))
 		}
-		o.rows = append(o.rows, plan.PlaceRows(ri, at)...)
+		o.Rows = append(o.Rows, plan.PlaceRows(ri, at)...)
 	}
 }
 
@@ -94,7 +94,7 @@ const samePosIn = 0.01
 // which leaves out, member by member, a row within d of one of its drawn
 // rows.
 func drawnRunRows(plan *framing.Plan, run framing.Run, inputs []check.Member, shifts []float64, usable []bool,
-	settings check.Settings, o *outcome, cache map[string]check.Result) []float64 {
+	settings check.Settings, o *Outcome, cache map[string]check.Result) []float64 {
 	// rel: positions from each member's first bearing
 	toCheck := func(k int, rel []float64) []float64 {
 		at := make([]float64, len(rel))
@@ -112,7 +112,7 @@ func drawnRunRows(plan *framing.Plan, run framing.Run, inputs []check.Member, sh
 	}
 	input := func(k int) check.Member {
 		cm := inputs[k]
-		cm.Size = o.results[k].Size
+		cm.Size = o.Results[k].Size
 		return cm
 	}
 	run1 := func(kind string, k int, rel []float64, f func(check.Member, check.Settings, []float64) check.Result) check.Result {
@@ -129,17 +129,17 @@ func drawnRunRows(plan *framing.Plan, run framing.Run, inputs []check.Member, sh
 	}
 	var order []int
 	for _, k := range run.Members {
-		if usable[k] && len(o.results[k].BlockingAtIn) > 0 {
+		if usable[k] && len(o.Results[k].BlockingAtIn) > 0 {
 			order = append(order, k)
 		}
 	}
 	sort.SliceStable(order, func(i, j int) bool {
-		return len(o.results[order[i]].BlockingAtIn) > len(o.results[order[j]].BlockingAtIn)
+		return len(o.Results[order[i]].BlockingAtIn) > len(o.Results[order[j]].BlockingAtIn)
 	})
 	var rel []float64
 	for _, k := range order {
 		if rel == nil {
-			rel = toRel(k, o.results[k].BlockingAtIn)
+			rel = toRel(k, o.Results[k].BlockingAtIn)
 			continue
 		}
 		r := run1("from", k, rel, check.CheckMemberFrom)
@@ -150,7 +150,7 @@ func drawnRunRows(plan *framing.Plan, run framing.Run, inputs []check.Member, sh
 	}
 	for _, k := range run.Members {
 		if usable[k] {
-			o.results[k] = run1("at", k, rel, check.CheckWithRowsAt)
+			o.Results[k] = run1("at", k, rel, check.CheckWithRowsAt)
 		}
 	}
 	first := run.Members[0]

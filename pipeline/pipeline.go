@@ -1,7 +1,6 @@
-package main
+package pipeline
 
 import (
-	"bytes"
 	"encoding/binary"
 	"errors"
 	"fmt"
@@ -17,41 +16,44 @@ import (
 	"framecheck/project"
 )
 
-// outcome is everything one check run found, before it is written out.
-type outcome struct {
-	project  *project.Project
-	drawing  *dxfimport.Drawing
-	plan     *framing.Plan
-	settings check.Settings
-	results  []check.Result        // one per plan member, same order
-	sizing   []*check.SizingResult // per member with --size, else nil
-	rows     []framing.BlockingRow // rows to add, by run
-	takeoff  framing.Takeoff
-	issues   dxfimport.IssueList // drawing, framing and design findings
-	path     *pathOutcome        // beams, posts, walls and joints of the load path; nil without beams or posts
+// Outcome is everything one check run found, before it is written out.
+type Outcome struct {
+	Project  *project.Project
+	Plan     *framing.Plan
+	Settings check.Settings
+	Results  []check.Result        // one per plan member, same order
+	Sizing   []*check.SizingResult // per member with --size, else nil
+	Rows     []framing.BlockingRow // rows to add, by run
+	Takeoff  framing.Takeoff
+	Issues   dxfimport.IssueList // drawing, framing and design findings
+	PlanFile string              // the plan file's name, for findings about the whole plan
+	Path     *PathOutcome        // beams, posts, walls and joints of the load path; nil without beams or posts
 
-	inputs []check.Member    // each plan member's check input, same order
-	marks  map[string]string // every mark's name by its defining key, for marks.json
-	// marksFresh: marks.json named none of this plan's marks, so they
+	Inputs []check.Member    // each plan member's check input, same order
+	Marks  map[string]string // every mark's name by its defining key, for marks.json
+	// MarksFresh: marks.json named none of this plan's marks, so they
 	// were named afresh
-	marksFresh bool
+	MarksFresh bool
 }
 
-// pipelineInput is what runs the pipeline: the plan file, its project,
-// the units override and whether to pick sizes.
-type pipelineInput struct {
-	planPath string
-	planData []byte // the drawing's bytes; nil: read planPath
-	project  *project.Project
-	units    string // --units, overrides the project file and $INSUNITS
-	size     bool   // --size
-	// marks are the names of an earlier run's marks by their defining
+// Input is what runs the pipeline: the grouped plan, its project, the
+// findings so far and whether to pick sizes.
+type Input struct {
+	Plan     *framing.Plan
+	PlanFile string // the plan file's name as findings give it
+	Project  *project.Project
+	// Issues are the findings before the checks (reading, grouping,
+	// doubts about the drawing), in the order they are reported; the
+	// pipeline's own follow them.
+	Issues dxfimport.IssueList
+	Size   bool // pick sizes from [sizing] candidates (--size)
+	// Marks are the names of an earlier run's marks by their defining
 	// keys (OUTDIR's marks.json); nil: named afresh
-	marks map[string]string
+	Marks map[string]string
 }
 
-// framingOptions maps the project file onto framing's options.
-func framingOptions(p *project.Project) framing.Options {
+// FramingOptions maps the project file onto framing's options.
+func FramingOptions(p *project.Project) framing.Options {
 	o := framing.DefaultOptions()
 	o.SnapToleranceIn = p.Drawing.SnapToleranceIn
 	o.MaxWallThicknessIn = p.Drawing.MaxWallThicknessIn
@@ -83,8 +85,8 @@ func framingOptions(p *project.Project) framing.Options {
 	return o
 }
 
-// checkSettings maps the project file's [design] onto check's settings.
-func checkSettings(p *project.Project) (check.Settings, error) {
+// Settings maps the project file's [design] onto check's settings.
+func Settings(p *project.Project) (check.Settings, error) {
 	s := check.DefaultSettings()
 	s.TopEdgeBraced = p.Design.TopEdgeBraced
 	s.ShearAtD = p.Design.ShearAtD
@@ -106,66 +108,42 @@ func checkSettings(p *project.Project) (check.Settings, error) {
 	return s, nil
 }
 
-// runPipeline reads the plan, groups it into members, checks every member,
-// decides blocking rows per run, names marks and counts the takeoff.
-// A returned error means the input is unusable (exit 2).
-func runPipeline(in pipelineInput) (*outcome, error) {
-	p := in.project
-	settings, err := checkSettings(p)
+// Run checks every member of a grouped plan, decides blocking rows per
+// run, names marks, counts the takeoff and follows the load path. A
+// returned error means the project's design settings are unusable.
+func Run(in Input) (*Outcome, error) {
+	p := in.Project
+	settings, err := Settings(p)
 	if err != nil {
 		return nil, err
 	}
-	units := p.Drawing.Units
-	if in.units != "" {
-		units = in.units
-	}
-	resume := pauseGC()
-	opt := dxfimport.Options{Units: units, Keep: keepLayer(p)}
-	var d *dxfimport.Drawing
-	if in.planData != nil {
-		d, err = dxfimport.Read(bytes.NewReader(in.planData), in.planPath, opt)
-	} else {
-		d, err = dxfimport.ReadFile(in.planPath, opt)
-	}
-	if err != nil {
-		resume()
-		return nil, err
-	}
-	plan := framing.Group(d, framingOptions(p))
-	resume()
-	o := &outcome{project: p, drawing: d, plan: plan, settings: settings}
-	// a doubt about the units comes first: it explains the findings after it
-	if msg := unitsDoubt(plan, d, in.units, p.Drawing.Units); msg != "" {
-		o.issues.Add(dxfimport.Pos{File: in.planPath}, CodeUnitsDoubt, dxfimport.SevWarning, "%s", msg)
-	}
-	o.issues = append(o.issues, d.Issues...)
-	o.issues = append(o.issues, plan.Issues...)
-	spanWarnings(plan, &o.issues)
+	plan := in.Plan
+	o := &Outcome{Project: p, Plan: plan, Settings: settings, Issues: in.Issues, PlanFile: in.PlanFile}
 
 	inputs := make([]check.Member, len(plan.Members))
 	shifts := make([]float64, len(plan.Members))
 	usable := make([]bool, len(plan.Members))
-	o.results = make([]check.Result, len(plan.Members))
+	o.Results = make([]check.Result, len(plan.Members))
 	inputMsgs := make([][]string, len(plan.Members))
 	for k := range plan.Members {
 		inputs[k], shifts[k], inputMsgs[k] = checkInput(p, plan, k)
 	}
 	badLoads := applyPointLoads(p, plan, inputs, shifts)
-	o.inputs = inputs
+	o.Inputs = inputs
 	for k := range plan.Members {
 		m := &plan.Members[k]
 		msgs := append(inputMsgs[k], badLoads[k]...)
 		if m.Error || len(msgs) > 0 {
-			o.results[k] = errorResult(m, append(append([]string(nil), m.Messages...), msgs...))
+			o.Results[k] = errorResult(m, append(append([]string(nil), m.Messages...), msgs...))
 			continue
 		}
 		usable[k] = true
 	}
-	if in.size {
-		o.sizing = make([]*check.SizingResult, len(plan.Members))
+	if in.Size {
+		o.Sizing = make([]*check.SizingResult, len(plan.Members))
 	}
 	checkAll(inputs, shifts, usable, settings, p, o)
-	if in.size {
+	if in.Size {
 		sizeRuns(sameDepthGroups(plan, p.Sizing.SameDepth), inputs, shifts, usable, settings, o)
 	}
 
@@ -175,8 +153,8 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 	// renames none; names kept from marks.json) and the takeoff.
 	drawn := framing.MarkKeys(plan)
 	for k := range plan.Members {
-		if usable[k] && o.results[k].Size != "" {
-			plan.Members[k].Size = o.results[k].Size
+		if usable[k] && o.Results[k].Size != "" {
+			plan.Members[k].Size = o.Results[k].Size
 		}
 	}
 	// Rafters drawn in plan are ordered at their sloped length.
@@ -185,16 +163,17 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 			plan.Members[k].SlopeFactor = math.Hypot(12, inputs[k].PitchRise12) / 12
 		}
 	}
-	o.marks, o.marksFresh = assignMarks(plan, drawn, in.marks)
-	for i := range o.rows {
-		o.rows[i].Size = plan.Members[plan.Runs[runIndex(plan, o.rows[i].Run)].Members[0]].Size
+	o.Marks, o.MarksFresh = assignMarks(plan, drawn, in.Marks)
+	for i := range o.Rows {
+		o.Rows[i].Size = plan.Members[plan.Runs[RunIndex(plan, o.Rows[i].Run)].Members[0]].Size
 	}
-	o.takeoff = framing.BuildTakeoff(plan, o.rows)
-	runLoadPath(p, plan, inputs, shifts, usable, settings, o, in.size)
+	o.Takeoff = framing.BuildTakeoff(plan, o.Rows)
+	runLoadPath(p, plan, inputs, shifts, usable, settings, o, in.Size)
 	return o, nil
 }
 
-func runIndex(plan *framing.Plan, id string) int {
+// RunIndex is the index in plan.Runs of the run named id (0 when none is).
+func RunIndex(plan *framing.Plan, id string) int {
 	for i, r := range plan.Runs {
 		if r.ID == id {
 			return i
@@ -245,28 +224,28 @@ func sameDepthGroups(plan *framing.Plan, sameDepth string) [][]int {
 // framed in one size (common practice, no source), so an edge joist that
 // could be lighter takes its neighbours' size. Members that change size
 // are checked again, blocking solver included.
-func sizeRuns(groups [][]int, inputs []check.Member, shifts []float64, usable []bool, s check.Settings, o *outcome) {
+func sizeRuns(groups [][]int, inputs []check.Member, shifts []float64, usable []bool, s check.Settings, o *Outcome) {
 	cache := map[string]check.Result{}
 	for _, members := range groups {
 		best, bestSec := "", check.Section{}
 		for _, k := range members {
-			if !usable[k] || o.results[k].Status == check.StatusError {
+			if !usable[k] || o.Results[k].Status == check.StatusError {
 				continue
 			}
-			sec, err := check.ParseSize(o.results[k].Size)
+			sec, err := check.ParseSize(o.Results[k].Size)
 			if err != nil || sec.Plies > 1 {
 				continue // built-up members keep their plies and set no size for the run
 			}
 			if best == "" || sec.NominalDIn > bestSec.NominalDIn ||
 				(sec.NominalDIn == bestSec.NominalDIn && sec.NominalBIn > bestSec.NominalBIn) {
-				best, bestSec = o.results[k].Size, sec
+				best, bestSec = o.Results[k].Size, sec
 			}
 		}
 		if best == "" {
 			continue
 		}
 		for _, k := range members {
-			if !usable[k] || o.results[k].Size == best {
+			if !usable[k] || o.Results[k].Size == best {
 				continue
 			}
 			if sec, err := check.ParseSize(inputs[k].Size); err == nil && sec.Plies > 1 {
@@ -281,14 +260,14 @@ func sizeRuns(groups [][]int, inputs []check.Member, shifts []float64, usable []
 				cache[key] = r
 			}
 			r.ID = cm.ID
-			o.results[k] = unshift(r, shifts[k])
+			o.Results[k] = unshift(r, shifts[k])
 		}
 	}
 }
 
 // checkAll checks the usable members on every core. Members identical for
 // design (same check input but for the ID) are checked once.
-func checkAll(inputs []check.Member, shifts []float64, usable []bool, s check.Settings, p *project.Project, o *outcome) {
+func checkAll(inputs []check.Member, shifts []float64, usable []bool, s check.Settings, p *project.Project, o *Outcome) {
 	keys := make([]string, len(inputs))
 	first := map[string]int{}
 	var order []int
@@ -310,16 +289,16 @@ func checkAll(inputs []check.Member, shifts []float64, usable []bool, s check.Se
 		go func() {
 			defer wg.Done()
 			for k := range next {
-				if sec, err := check.ParseSize(inputs[k].Size); o.sizing != nil && err == nil && sec.Plies > 1 {
+				if sec, err := check.ParseSize(inputs[k].Size); o.Sizing != nil && err == nil && sec.Plies > 1 {
 					// a built-up member keeps its plies: the candidates are
 					// single sizes, so it is checked as drawn
-					o.results[k] = check.CheckMember(inputs[k], s)
-				} else if o.sizing != nil {
+					o.Results[k] = check.CheckMember(inputs[k], s)
+				} else if o.Sizing != nil {
 					sr := check.Size(inputs[k], s, p.Sizing.Candidates, p.Sizing.BlockingPieceWeightBf)
-					o.sizing[k] = &sr
-					o.results[k] = sr.Chosen
+					o.Sizing[k] = &sr
+					o.Results[k] = sr.Chosen
 				} else {
-					o.results[k] = check.CheckMember(inputs[k], s)
+					o.Results[k] = check.CheckMember(inputs[k], s)
 				}
 			}
 		}()
@@ -335,16 +314,16 @@ func checkAll(inputs []check.Member, shifts []float64, usable []bool, s check.Se
 			continue
 		}
 		src := first[keys[k]]
-		r := o.results[src]
+		r := o.Results[src]
 		r.ID = inputs[k].ID
 		results[k] = unshift(r, shifts[k])
-		if o.sizing != nil {
-			o.sizing[k] = o.sizing[src]
+		if o.Sizing != nil {
+			o.Sizing[k] = o.Sizing[src]
 		}
 	}
 	for k := range inputs {
 		if usable[k] {
-			o.results[k] = results[k]
+			o.Results[k] = results[k]
 		}
 	}
 }
@@ -608,21 +587,4 @@ func errorResult(m *framing.Member, msgs []string) check.Result {
 	return check.Result{ID: m.ID, Size: m.Size, Species: m.Species, Grade: m.Grade,
 		SpansIn: m.Spans(), OverhangsIn: [2]float64{m.OverhangStartIn, m.OverhangEndIn},
 		Status: check.StatusError, Messages: msgs}
-}
-
-// releaseForWriters drops what the writers do not read once the results
-// are mapped for export (exportResults) and the findings are in o.issues:
-// the drawing's entities (the annotated copy reads the drawing's bytes,
-// the report the plan's supports and zones), the members as grouped and
-// their check results and sizing. The live heap then follows the outputs
-// rather than holding the plan twice (issue 18). o.path (the load path)
-// stays.
-func (o *outcome) releaseForWriters() {
-	if o.drawing != nil {
-		o.drawing.Entities = nil
-	}
-	if o.plan != nil {
-		o.plan.Members = nil
-	}
-	o.results, o.sizing = nil, nil
 }

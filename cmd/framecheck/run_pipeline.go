@@ -1,0 +1,90 @@
+package main
+
+import (
+	"bytes"
+
+	"framecheck/dxfimport"
+	"framecheck/framing"
+	"framecheck/pipeline"
+	"framecheck/project"
+)
+
+// outcome is one check run's findings (pipeline.Outcome) with the
+// drawing they came from.
+type outcome struct {
+	*pipeline.Outcome
+	drawing *dxfimport.Drawing
+}
+
+// pipelineInput is what runs the pipeline: the plan file, its project,
+// the units override and whether to pick sizes.
+type pipelineInput struct {
+	planPath string
+	planData []byte // the drawing's bytes; nil: read planPath
+	project  *project.Project
+	units    string // --units, overrides the project file and $INSUNITS
+	size     bool   // --size
+	// marks are the names of an earlier run's marks by their defining
+	// keys (OUTDIR's marks.json); nil: named afresh
+	marks map[string]string
+}
+
+// runPipeline reads the plan, groups it into members and hands them to
+// the pipeline (pipeline.Run), which checks every member, decides
+// blocking rows per run, names marks, counts the takeoff and follows the
+// load path. A returned error means the input is unusable (exit 2).
+func runPipeline(in pipelineInput) (*outcome, error) {
+	p := in.project
+	if _, err := pipeline.Settings(p); err != nil {
+		return nil, err // before the drawing is read, as a bad project file should be
+	}
+	units := p.Drawing.Units
+	if in.units != "" {
+		units = in.units
+	}
+	resume := pauseGC()
+	opt := dxfimport.Options{Units: units, Keep: keepLayer(p)}
+	var d *dxfimport.Drawing
+	var err error
+	if in.planData != nil {
+		d, err = dxfimport.Read(bytes.NewReader(in.planData), in.planPath, opt)
+	} else {
+		d, err = dxfimport.ReadFile(in.planPath, opt)
+	}
+	if err != nil {
+		resume()
+		return nil, err
+	}
+	plan := framing.Group(d, pipeline.FramingOptions(p))
+	resume()
+	var issues dxfimport.IssueList
+	// a doubt about the units comes first: it explains the findings after it
+	if msg := unitsDoubt(plan, d, in.units, p.Drawing.Units); msg != "" {
+		issues.Add(dxfimport.Pos{File: in.planPath}, CodeUnitsDoubt, dxfimport.SevWarning, "%s", msg)
+	}
+	issues = append(issues, d.Issues...)
+	issues = append(issues, plan.Issues...)
+	spanWarnings(plan, &issues)
+	po, err := pipeline.Run(pipeline.Input{Plan: plan, PlanFile: d.File, Project: p, Issues: issues, Size: in.size, Marks: in.marks})
+	if err != nil {
+		return nil, err
+	}
+	return &outcome{Outcome: po, drawing: d}, nil
+}
+
+// releaseForWriters drops what the writers do not read once the results
+// are mapped for export (exportResults) and the findings are in o.Issues:
+// the drawing's entities (the annotated copy reads the drawing's bytes,
+// the report the plan's supports and zones), the members as grouped and
+// their check results and sizing. The live heap then follows the outputs
+// rather than holding the plan twice (issue 18). o.Path (the load path)
+// stays.
+func (o *outcome) releaseForWriters() {
+	if o.drawing != nil {
+		o.drawing.Entities = nil
+	}
+	if o.Plan != nil {
+		o.Plan.Members = nil
+	}
+	o.Results, o.Sizing = nil, nil
+}

@@ -1,0 +1,53 @@
+package pipeline
+
+import (
+	"bytes"
+	"fmt"
+	"testing"
+
+	"framecheck/check"
+	"framecheck/dxfimport"
+	"framecheck/framing"
+	"framecheck/project"
+	"framecheck/samples/bigplan/synth"
+)
+
+// BenchmarkStageChecks is the check stage as Run runs it (checkAll:
+// identical members checked once, on every core), on the synthetic plans
+// of samples/bigplan/synth. The whole command's benchmarks are in
+// cmd/framecheck (README "Performance").
+func BenchmarkStageChecks(b *testing.B) {
+	for _, n := range []int{1_000, 10_000, 100_000} {
+		b.Run(fmt.Sprintf("joists=%d", n), func(b *testing.B) {
+			data, _ := synth.Build(synth.Options{Joists: n})
+			proj, err := project.ParseProject("big.toml", []byte(synth.Project))
+			if err != nil {
+				b.Fatal(err)
+			}
+			d, err := dxfimport.Read(bytes.NewReader(data), "big.dxf", dxfimport.Options{Units: proj.Drawing.Units})
+			if err != nil {
+				b.Fatal(err)
+			}
+			plan := framing.Group(d, FramingOptions(proj))
+			settings, err := Settings(proj)
+			if err != nil {
+				b.Fatal(err)
+			}
+			inputs := make([]check.Member, len(plan.Members))
+			shifts := make([]float64, len(plan.Members))
+			usable := make([]bool, len(plan.Members))
+			for k := range plan.Members {
+				var msgs []string
+				inputs[k], shifts[k], msgs = checkInput(proj, plan, k)
+				usable[k] = !plan.Members[k].Error && len(msgs) == 0
+			}
+			o := &Outcome{Results: make([]check.Result, len(plan.Members))}
+			b.ReportAllocs()
+			b.ResetTimer()
+			for b.Loop() {
+				checkAll(inputs, shifts, usable, settings, proj, o)
+			}
+			b.ReportMetric(float64(n)*float64(b.N)/b.Elapsed().Seconds(), "joists/s")
+		})
+	}
+}
