@@ -16,7 +16,7 @@ import (
 func markKey(m *Member) string {
 	b := make([]byte, 0, 128)
 	num := func(v float64, sep byte) {
-		b = strconv.AppendFloat(b, v, 'g', -1, 64) // as %g
+		b = appendG(b, v)
 		b = append(b, sep)
 	}
 	b = append(b, m.Size...)
@@ -77,6 +77,21 @@ func AssignMarks(p *Plan) { AssignMarksKept(p, nil, nil) }
 // (species, grade, spans, spacing, tributary width, zones, bearings,
 // drawn blocking), so that a size changed on the drawing in a revision,
 // or by --size, keeps the mark's name.
+// appendG appends v as strconv's 'g' format with the shortest precision
+// (%g) writes it, the keys' format since marks.json first kept them. The
+// keys' numbers are mostly whole inches: those below 1e6 (where 'g' turns
+// to an exponent) are written as integers, the same text without the
+// float conversion; minus zero keeps its sign as 'g' writes it.
+func appendG(b []byte, v float64) []byte {
+	if v == math.Trunc(v) && math.Abs(v) < 1e6 {
+		if v == 0 && math.Signbit(v) {
+			return append(b, "-0"...)
+		}
+		return strconv.AppendInt(b, int64(v), 10)
+	}
+	return strconv.AppendFloat(b, v, 'g', -1, 64)
+}
+
 func nameKey(m *Member) string { return markKey(m)[len(m.Size)+1:] }
 
 // MarkKeys returns the key each member's mark name is kept by (nameKey),
@@ -142,9 +157,11 @@ func AssignMarksKept(p *Plan, drawn []string, known map[string]string) map[strin
 		if m.Error {
 			continue
 		}
-		key := nameKey(m) + loads[k]
+		var key string
 		if drawn != nil && drawn[k] != "" {
 			key = drawn[k]
+		} else {
+			key = nameKey(m) + loads[k]
 		}
 		if fs, ok := firstSize[key]; !ok {
 			firstSize[key] = m.Size

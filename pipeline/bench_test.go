@@ -12,6 +12,40 @@ import (
 	"framecheck/samples/bigplan/synth"
 )
 
+// benchPlan groups an n-joist synthetic plan with its project.
+func benchPlan(b *testing.B, n int) (*framing.Plan, *project.Project) {
+	b.Helper()
+	data, _ := synth.Build(synth.Options{Joists: n})
+	proj, err := project.ParseProject("big.toml", []byte(synth.Project))
+	if err != nil {
+		b.Fatal(err)
+	}
+	d, err := dxfimport.Read(bytes.NewReader(data), "big.dxf", dxfimport.Options{Units: proj.Drawing.Units})
+	if err != nil {
+		b.Fatal(err)
+	}
+	return framing.Group(d, FramingOptions(proj)), proj
+}
+
+// BenchmarkRun is Run on a grouped synthetic plan: check inputs, checks,
+// blocking rows, marks, takeoff and load path, without reading or
+// grouping the drawing.
+func BenchmarkRun(b *testing.B) {
+	for _, n := range []int{1_000, 10_000, 100_000} {
+		b.Run(fmt.Sprintf("joists=%d", n), func(b *testing.B) {
+			plan, proj := benchPlan(b, n)
+			b.ReportAllocs()
+			b.ResetTimer()
+			for b.Loop() {
+				if _, err := Run(Input{Plan: plan, PlanFile: "big.dxf", Project: proj}); err != nil {
+					b.Fatal(err)
+				}
+			}
+			b.ReportMetric(float64(n)*float64(b.N)/b.Elapsed().Seconds(), "joists/s")
+		})
+	}
+}
+
 // BenchmarkStageChecks is the check stage as Run runs it (checkAll:
 // identical members checked once, on every core), on the synthetic plans
 // of samples/bigplan/synth. The whole command's benchmarks are in
@@ -19,16 +53,7 @@ import (
 func BenchmarkStageChecks(b *testing.B) {
 	for _, n := range []int{1_000, 10_000, 100_000} {
 		b.Run(fmt.Sprintf("joists=%d", n), func(b *testing.B) {
-			data, _ := synth.Build(synth.Options{Joists: n})
-			proj, err := project.ParseProject("big.toml", []byte(synth.Project))
-			if err != nil {
-				b.Fatal(err)
-			}
-			d, err := dxfimport.Read(bytes.NewReader(data), "big.dxf", dxfimport.Options{Units: proj.Drawing.Units})
-			if err != nil {
-				b.Fatal(err)
-			}
-			plan := framing.Group(d, FramingOptions(proj))
+			plan, proj := benchPlan(b, n)
 			settings, err := Settings(proj)
 			if err != nil {
 				b.Fatal(err)
@@ -38,7 +63,7 @@ func BenchmarkStageChecks(b *testing.B) {
 			usable := make([]bool, len(plan.Members))
 			for k := range plan.Members {
 				var msgs []string
-				inputs[k], shifts[k], msgs = checkInput(proj, plan, k)
+				inputs[k], shifts[k], msgs = checkInput(proj, plan, k, supportMemo(proj))
 				usable[k] = !plan.Members[k].Error && len(msgs) == 0
 			}
 			o := &Outcome{Results: make([]check.Result, len(plan.Members))}

@@ -125,9 +125,13 @@ func Run(in Input) (*Outcome, error) {
 	usable := make([]bool, len(plan.Members))
 	o.Results = make([]check.Result, len(plan.Members))
 	inputMsgs := make([][]string, len(plan.Members))
-	for k := range plan.Members {
-		inputs[k], shifts[k], inputMsgs[k] = checkInput(p, plan, k)
-	}
+	// checkInput reads the plan and the project and writes only index k
+	forRanges(len(plan.Members), func(lo, hi int) {
+		sups := supportMemo(p)
+		for k := lo; k < hi; k++ {
+			inputs[k], shifts[k], inputMsgs[k] = checkInput(p, plan, k, sups)
+		}
+	})
 	badLoads := applyPointLoads(p, plan, inputs, shifts)
 	o.Inputs = inputs
 	for k := range plan.Members {
@@ -269,17 +273,33 @@ func sizeRuns(groups [][]int, inputs []check.Member, shifts []float64, usable []
 // design (same check input but for the ID) are checked once.
 func checkAll(inputs []check.Member, shifts []float64, usable []bool, s check.Settings, p *project.Project, o *Outcome) {
 	keys := make([]string, len(inputs))
+	forRanges(len(inputs), func(lo, hi int) {
+		for k := lo; k < hi; k++ {
+			if usable[k] {
+				keys[k] = memberKey(inputs[k])
+			}
+		}
+	})
+	// twin[k] is the index into order of the first member identical to k
 	first := map[string]int{}
+	twin := make([]int, len(inputs))
 	var order []int
 	for k := range inputs {
 		if !usable[k] {
 			continue
 		}
-		keys[k] = memberKey(inputs[k])
-		if _, ok := first[keys[k]]; !ok {
-			first[keys[k]] = k
+		i, ok := first[keys[k]]
+		if !ok {
+			i = len(order)
+			first[keys[k]] = i
 			order = append(order, k)
 		}
+		twin[k] = i
+	}
+	checked := make([]check.Result, len(order))
+	var sized []*check.SizingResult
+	if o.Sizing != nil {
+		sized = make([]*check.SizingResult, len(order))
 	}
 	workers := runtime.GOMAXPROCS(0)
 	var wg sync.WaitGroup
@@ -288,44 +308,42 @@ func checkAll(inputs []check.Member, shifts []float64, usable []bool, s check.Se
 		wg.Add(1)
 		go func() {
 			defer wg.Done()
-			for k := range next {
+			for i := range next {
+				k := order[i]
 				if sec, err := check.ParseSize(inputs[k].Size); o.Sizing != nil && err == nil && sec.Plies > 1 {
 					// a built-up member keeps its plies: the candidates are
 					// single sizes, so it is checked as drawn
-					o.Results[k] = check.CheckMember(inputs[k], s)
+					checked[i] = check.CheckMember(inputs[k], s)
 				} else if o.Sizing != nil {
 					sr := check.Size(inputs[k], s, p.Sizing.Candidates, p.Sizing.BlockingPieceWeightBf)
-					o.Sizing[k] = &sr
-					o.Results[k] = sr.Chosen
+					sized[i] = &sr
+					checked[i] = sr.Chosen
 				} else {
-					o.Results[k] = check.CheckMember(inputs[k], s)
+					checked[i] = check.CheckMember(inputs[k], s)
 				}
 			}
 		}()
 	}
-	for _, k := range order {
-		next <- k
+	for i := range order {
+		next <- i
 	}
 	close(next)
 	wg.Wait()
-	results := make([]check.Result, len(inputs))
-	for k := range inputs {
-		if !usable[k] {
-			continue
+	// Each member takes its first twin's result, with its own ID and
+	// positions: each range writes only its own members.
+	forRanges(len(inputs), func(lo, hi int) {
+		for k := lo; k < hi; k++ {
+			if !usable[k] {
+				continue
+			}
+			r := checked[twin[k]]
+			r.ID = inputs[k].ID
+			o.Results[k] = unshift(r, shifts[k])
+			if sized != nil {
+				o.Sizing[k] = sized[twin[k]]
+			}
 		}
-		src := first[keys[k]]
-		r := o.Results[src]
-		r.ID = inputs[k].ID
-		results[k] = unshift(r, shifts[k])
-		if o.Sizing != nil {
-			o.Sizing[k] = o.Sizing[src]
-		}
-	}
-	for k := range inputs {
-		if usable[k] {
-			o.Results[k] = results[k]
-		}
-	}
+	})
 }
 
 // memberKey is the check input less the ID, exactly: every field, floats
@@ -374,12 +392,27 @@ func appendKey(b []byte, v reflect.Value) []byte {
 	return append(b, s...)
 }
 
+// supportMemo is p.SupportOf remembering each layer's answer: a plan has
+// a few support layers and hundreds of thousands of bearings on them. One
+// memo per goroutine.
+func supportMemo(p *project.Project) func(layer string) *project.Support {
+	memo := map[string]*project.Support{}
+	return func(layer string) *project.Support {
+		sup, ok := memo[layer]
+		if !ok {
+			sup = p.SupportOf(layer)
+			memo[layer] = sup
+		}
+		return sup
+	}
+}
+
 // checkInput builds check's input for plan member k. Bearings that lie a
 // little outside the drawn joist (an end stopping short of a single-line
 // support) are kept where they are and the member is lengthened to reach
 // them: shift is how far the start moved back, to be taken off the
 // positions check returns. msgs are reasons the member cannot be checked.
-func checkInput(p *project.Project, plan *framing.Plan, k int) (cm check.Member, shift float64, msgs []string) {
+func checkInput(p *project.Project, plan *framing.Plan, k int, supportOf func(layer string) *project.Support) (cm check.Member, shift float64, msgs []string) {
 	m := &plan.Members[k]
 	cm = check.Member{
 		ID: m.ID, Size: m.Size, Species: m.Species, Grade: m.Grade,
@@ -398,7 +431,7 @@ func checkInput(p *project.Project, plan *framing.Plan, k int) (cm check.Member,
 			// a joist in a hanger, or on a ledger, hangs from the support's
 			// face: NDS 2018 3.4.3.1(a) does not hold there
 			Hanger: b.Kind == framing.KindFlushBeam || b.Kind == framing.KindLedger}
-		if sup := p.SupportOf(b.Pos.Layer); sup != nil {
+		if sup := supportOf(b.Pos.Layer); sup != nil {
 			cb.SupportSpecies, cb.SupportGrade = sup.Species, sup.Grade
 		}
 		cm.Bearings = append(cm.Bearings, cb)

@@ -1,0 +1,32 @@
+package pipeline
+
+import (
+	"runtime"
+	"sync"
+)
+
+// minPerWorker is the fewest items a worker of forRanges takes: below it
+// a goroutine costs more than it saves.
+const minPerWorker = 2048
+
+// forRanges calls fn over [0, n) cut into one contiguous range per core
+// (runtime.GOMAXPROCS), at once, and returns when all are done. fn must
+// write only to the indexes of its own range; whatever it reads must not
+// change meanwhile. Small n runs in the caller's goroutine.
+func forRanges(n int, fn func(lo, hi int)) {
+	workers := min(runtime.GOMAXPROCS(0), n/minPerWorker)
+	if workers <= 1 {
+		fn(0, n)
+		return
+	}
+	var wg sync.WaitGroup
+	for w := 0; w < workers; w++ {
+		lo, hi := n*w/workers, n*(w+1)/workers
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			fn(lo, hi)
+		}()
+	}
+	wg.Wait()
+}
