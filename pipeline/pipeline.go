@@ -13,6 +13,7 @@ import (
 	"framecheck/check"
 	"framecheck/dxfimport"
 	"framecheck/framing"
+	"framecheck/internal/par"
 	"framecheck/project"
 )
 
@@ -126,7 +127,7 @@ func Run(in Input) (*Outcome, error) {
 	o.Results = make([]check.Result, len(plan.Members))
 	inputMsgs := make([][]string, len(plan.Members))
 	// checkInput reads the plan and the project and writes only index k
-	forRanges(len(plan.Members), func(lo, hi int) {
+	par.Ranges(len(plan.Members), func(lo, hi int) {
 		sups := supportMemo(p)
 		for k := lo; k < hi; k++ {
 			inputs[k], shifts[k], inputMsgs[k] = checkInput(p, plan, k, sups)
@@ -273,7 +274,7 @@ func sizeRuns(groups [][]int, inputs []check.Member, shifts []float64, usable []
 // design (same check input but for the ID) are checked once.
 func checkAll(inputs []check.Member, shifts []float64, usable []bool, s check.Settings, p *project.Project, o *Outcome) {
 	keys := make([]string, len(inputs))
-	forRanges(len(inputs), func(lo, hi int) {
+	par.Ranges(len(inputs), func(lo, hi int) {
 		for k := lo; k < hi; k++ {
 			if usable[k] {
 				keys[k] = memberKey(inputs[k])
@@ -331,7 +332,7 @@ func checkAll(inputs []check.Member, shifts []float64, usable []bool, s check.Se
 	wg.Wait()
 	// Each member takes its first twin's result, with its own ID and
 	// positions: each range writes only its own members.
-	forRanges(len(inputs), func(lo, hi int) {
+	par.Ranges(len(inputs), func(lo, hi int) {
 		for k := lo; k < hi; k++ {
 			if !usable[k] {
 				continue

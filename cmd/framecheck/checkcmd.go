@@ -449,10 +449,11 @@ func (c *checkRun) write(o *outcome, res *export.Results, proj *project.Project,
 	if toInch <= 0 {
 		toInch = 1
 	}
-	mk := export.MarkupFromResults(res, toInch)
 	// The four outputs only read res and the plan: write them at once,
 	// then take their errors in this order, as when they were written one
-	// after another.
+	// after another. The markup is made in the annotated copy's goroutine
+	// (the overlay, when written, takes it after all are done).
+	var mk export.Markup
 	jobs := []func() error{
 		func() error { return export.WriteJSON(set.path(names[0]), res) },
 		func() error { return export.WriteXLSX(set.path(names[1]), res) },
@@ -460,7 +461,10 @@ func (c *checkRun) write(o *outcome, res *export.Results, proj *project.Project,
 			return export.WriteReportWith(set.path(names[4]), res, planGeometry(o), when,
 				export.ReportOptions{Package: c.pkg})
 		},
-		func() error { return export.AnnotateBytes(c.planData, c.planPath, set.path(names[2]), mk) },
+		func() error {
+			mk = export.MarkupFromResults(res, toInch)
+			return export.AnnotateBytes(c.planData, c.planPath, set.path(names[2]), mk)
+		},
 	}
 	// One goroutine each: on a large plan they take about the same time
 	// (100,000 joists: spreadsheet 0.7 s, results 0.4 s, annotated

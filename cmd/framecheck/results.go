@@ -6,11 +6,13 @@ import (
 	"sort"
 	"strconv"
 	"strings"
+	"sync"
 
 	"framecheck/check"
 	"framecheck/dxfimport"
 	"framecheck/export"
 	"framecheck/framing"
+	"framecheck/internal/par"
 	"framecheck/pipeline"
 	"framecheck/project"
 )
@@ -32,22 +34,28 @@ func exportResults(o *outcome, planName string) *export.Results {
 	for k := range plan.Members {
 		ids[k] = plan.Members[k].ID
 	}
+	// Members convert on every core, through one converter (identical
+	// members share its slices); each range writes only its own members.
+	r.Members = make([]export.Member, len(plan.Members))
 	conv := newResultConverter()
-	r.Members = make([]export.Member, 0, len(plan.Members))
-	for k := range plan.Members {
-		em := conv.member(&plan.Members[k], &o.Results[k], toInch)
-		placeMember(&em, &plan.Members[k])
-		if len(em.Messages) > 0 {
-			msgs := make([]string, len(em.Messages))
-			for i, msg := range em.Messages {
-				msgs[i] = planPointsFtIn(msg, toInch)
+	par.Ranges(len(plan.Members), func(lo, hi int) {
+		for k := lo; k < hi; k++ {
+			em := conv.member(&plan.Members[k], &o.Results[k], toInch)
+			placeMember(&em, &plan.Members[k])
+			if len(em.Messages) > 0 {
+				msgs := make([]string, len(em.Messages))
+				for i, msg := range em.Messages {
+					msgs[i] = planPointsFtIn(msg, toInch)
+				}
+				em.Messages = msgs
 			}
-			em.Messages = msgs
+			if ri := plan.Members[k].Run; ri >= 0 && ri < len(plan.Runs) {
+				em.Run = plan.Runs[ri].ID
+			}
+			r.Members[k] = em
 		}
-		if ri := plan.Members[k].Run; ri >= 0 && ri < len(plan.Runs) {
-			em.Run = plan.Runs[ri].ID
-		}
-		r.Members = append(r.Members, em)
+	})
+	for k := range plan.Members {
 		switch o.Results[k].Status {
 		case check.StatusPass:
 			r.Summary.Pass++
@@ -145,16 +153,50 @@ func supportName(p dxfimport.Pos) string {
 
 // resultConverter maps check results onto export's types. Members identical
 // for design share one check.Result (its slices included), so their checks,
-// factors and solver steps are converted once and shared too.
+// factors and solver steps are converted once and shared too: results.json
+// numbers its calculations by the slices members share. One converter
+// serves every goroutine of exportResults.
 type resultConverter struct {
-	checks  map[*check.CheckResult][]export.Check
-	factors map[*check.TraceItem][]export.TraceItem
-	steps   map[*check.BlockingStep][]export.BlockingStep
+	checks  sharedMemo[*check.CheckResult, []export.Check]
+	factors sharedMemo[*check.TraceItem, []export.TraceItem]
+	steps   sharedMemo[*check.BlockingStep, []export.BlockingStep]
 }
 
 func newResultConverter() *resultConverter {
-	return &resultConverter{checks: map[*check.CheckResult][]export.Check{},
-		factors: map[*check.TraceItem][]export.TraceItem{}, steps: map[*check.BlockingStep][]export.BlockingStep{}}
+	return &resultConverter{checks: newSharedMemo[*check.CheckResult, []export.Check](),
+		factors: newSharedMemo[*check.TraceItem, []export.TraceItem](), steps: newSharedMemo[*check.BlockingStep, []export.BlockingStep]()}
+}
+
+// sharedMemo remembers one value per key for several goroutines: the
+// first value stored for a key is the one every caller gets, so values
+// are shared whichever goroutine made them.
+type sharedMemo[K comparable, V any] struct {
+	mu *sync.Mutex
+	m  map[K]V
+}
+
+func newSharedMemo[K comparable, V any]() sharedMemo[K, V] {
+	return sharedMemo[K, V]{mu: &sync.Mutex{}, m: map[K]V{}}
+}
+
+// get returns the value kept for k, making it with mk (outside the lock)
+// when there is none yet.
+func (s sharedMemo[K, V]) get(k K, mk func() V) V {
+	s.mu.Lock()
+	v, ok := s.m[k]
+	s.mu.Unlock()
+	if ok {
+		return v
+	}
+	v = mk()
+	s.mu.Lock()
+	if old, ok := s.m[k]; ok {
+		v = old
+	} else {
+		s.m[k] = v
+	}
+	s.mu.Unlock()
+	return v
 }
 
 func (cv *resultConverter) member(m *framing.Member, res *check.Result, toInch float64) export.Member {
@@ -186,34 +228,26 @@ func (cv *resultConverter) member(m *framing.Member, res *check.Result, toInch f
 		em.ZonePieces = append(em.ZonePieces, export.ZonePiece{Zone: z.Zone, FromIn: z.FromIn, ToIn: z.ToIn})
 	}
 	if len(res.Checks) > 0 {
-		key := &res.Checks[0]
-		if _, ok := cv.checks[key]; !ok {
+		em.Checks = cv.checks.get(&res.Checks[0], func() []export.Check {
 			var cs []export.Check
 			for _, c := range res.Checks {
 				cs = append(cs, export.Check{Kind: c.Kind, Combo: c.Combo, Actual: c.Actual,
 					Allowable: c.Allowable, Unit: c.Unit, Ratio: c.Ratio, Trace: exportTrace(c.Trace())})
 			}
-			cv.checks[key] = cs
-		}
-		em.Checks = cv.checks[key]
+			return cs
+		})
 	}
 	if len(res.BlockingSteps) > 0 {
-		key := &res.BlockingSteps[0]
-		if _, ok := cv.steps[key]; !ok {
+		em.BlockingSteps = cv.steps.get(&res.BlockingSteps[0], func() []export.BlockingStep {
 			var ss []export.BlockingStep
 			for _, s := range res.BlockingSteps {
 				ss = append(ss, export.BlockingStep{RowsPerSpan: s.RowsPerSpan, AtIn: s.AtIn, LuIn: s.LuIn, CL: s.CL, Ratio: s.Ratio})
 			}
-			cv.steps[key] = ss
-		}
-		em.BlockingSteps = cv.steps[key]
+			return ss
+		})
 	}
 	if len(res.Factors) > 0 {
-		key := &res.Factors[0]
-		if _, ok := cv.factors[key]; !ok {
-			cv.factors[key] = exportTrace(res.Factors)
-		}
-		em.Factors = cv.factors[key]
+		em.Factors = cv.factors.get(&res.Factors[0], func() []export.TraceItem { return exportTrace(res.Factors) })
 	}
 	seen := map[string]bool{}
 	em.Info = res.Info
