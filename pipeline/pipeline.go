@@ -169,22 +169,25 @@ func Run(in Input) (*Outcome, error) {
 		}
 	}
 	o.Marks, o.MarksFresh = assignMarks(plan, drawn, in.Marks)
+	runs := RunIndexes(plan)
 	for i := range o.Rows {
-		o.Rows[i].Size = plan.Members[plan.Runs[RunIndex(plan, o.Rows[i].Run)].Members[0]].Size
+		o.Rows[i].Size = plan.Members[plan.Runs[runs[o.Rows[i].Run]].Members[0]].Size
 	}
 	o.Takeoff = framing.BuildTakeoff(plan, o.Rows)
 	runLoadPath(p, plan, inputs, shifts, usable, settings, o, in.Size)
 	return o, nil
 }
 
-// RunIndex is the index in plan.Runs of the run named id (0 when none is).
-func RunIndex(plan *framing.Plan, id string) int {
+// RunIndexes maps each run's ID to its index in plan.Runs (a run not
+// found reads as 0, the first).
+func RunIndexes(plan *framing.Plan) map[string]int {
+	m := make(map[string]int, len(plan.Runs))
 	for i, r := range plan.Runs {
-		if r.ID == id {
-			return i
+		if _, ok := m[r.ID]; !ok {
+			m[r.ID] = i
 		}
 	}
-	return 0
+	return m
 }
 
 func firstBearing(m *framing.Member) float64 {

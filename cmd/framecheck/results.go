@@ -67,8 +67,9 @@ func exportResults(o *outcome, planName string) *export.Results {
 	}
 	r.Summary.Members = len(plan.Members)
 	r.Marks = exportMarks(r.Members)
+	runs := pipeline.RunIndexes(plan)
 	for _, row := range o.Rows {
-		r.BlockingRows = append(r.BlockingRows, exportRow(plan, row, ids, toInch))
+		r.BlockingRows = append(r.BlockingRows, exportRow(plan, runs, row, ids, toInch))
 	}
 	r.Takeoff = exportTakeoff(o.Takeoff)
 	r.Uplift = exportUplift(plan, o.Results, o.Project.Design.UpliftReportLb, toInch)
@@ -323,15 +324,14 @@ func markLess(a, b string) bool {
 	return a < b
 }
 
-func exportRow(plan *framing.Plan, row framing.BlockingRow, ids []string, toInch float64) export.BlockingRow {
+func exportRow(plan *framing.Plan, runs map[string]int, row framing.BlockingRow, ids []string, toInch float64) export.BlockingRow {
 	er := export.BlockingRow{ID: row.ID, Run: row.Run, Pieces: row.Pieces, ClearIn: row.ClearIn, Size: row.Size,
 		Start:   [2]float64{row.From.X / toInch, row.From.Y / toInch},
 		End:     [2]float64{row.To.X / toInch, row.To.Y / toInch},
 		StartIn: [2]float64{row.From.X, row.From.Y}, EndIn: [2]float64{row.To.X, row.To.Y},
 		PositionIn: row.AtIn,
 	}
-	ri := pipeline.RunIndex(plan, row.Run)
-	run := plan.Runs[ri]
+	run := plan.Runs[runs[row.Run]]
 	for _, k := range run.Members {
 		er.Members = append(er.Members, ids[k])
 	}
