@@ -26,6 +26,9 @@ type calcCtx struct {
 	shearAtD                   bool
 	seasonedHalfD              bool
 	cosT, pitch                float64 // slope of a rafter: cosine, rise in 12
+	// sclN and sclCV: structural composite lumber's size factor (12/d)^n
+	// and its value (NDS 2018 8.3.6); sclCV 0 for other materials.
+	sclN, sclCV float64
 }
 
 // bendRec is an edge's governing bending case.
@@ -82,6 +85,7 @@ func (e *engine) newCalcRecord() *calcRecord {
 		fbPsi: e.dv.FbPsi, fvPsi: e.dv.FvPsi, fcPerpPsi: e.dv.FcPerpPsi, ePsi: e.dv.EPsi, eminPsi: e.dv.EminPsi,
 		cm: e.cm, ct: e.ct, cf: e.cf, ci: e.ci, cr: e.cr, eAdj: e.eAdj, eminAdj: e.eminAdj, kcr: e.kcr, x0: e.x0,
 		shearAtD: e.s.ShearAtD, seasonedHalfD: e.s.Seasoned && !e.s.WetService, cosT: e.cosT, pitch: e.m.PitchRise12,
+		sclN: e.dv.SCLExponent, sclCV: e.sclCV,
 	}}
 }
 
@@ -121,6 +125,9 @@ func newTracer(n int) tracer {
 	return a.tracer(n)
 }
 
+// sclCVRef is the source of structural composite lumber's CV.
+const sclCVRef = "NDS 2018 8.3.6 (from memory: verify): the manufacturer's volume factor, exponent from the user's materials file"
+
 // bendingTrace writes an edge's bending calculation (NDS 2018 3.3), top
 // or bottom, with the bracing it relied on.
 func (r *calcRecord) bendingTrace(b *bendRec, top bool) []TraceItem {
@@ -139,8 +146,19 @@ func (r *calcRecord) bendingTrace(b *bendRec, top bool) []TraceItem {
 	t.add("M", b.mLbIn, "lb-in", "largest moment compressing this edge, governing case", Subst{}, refAnalysis)
 	t.add("S", x.sIn3, "in^3", "b d^2 / 6", t.f("%s(%s)^2 / 6", x.bIn, x.dIn), "NDS 2018 Supplement Table 1B")
 	t.add("fb", fb, "psi", "M / S", t.f("%s / %s", b.mLbIn, x.sIn3), "NDS 2018 3.3.2")
-	t.add("Fb*", b.fbStar, "psi", "Fb CD CM Ct CF Ci Cr",
-		t.f("%s(%s)(%s)(%s)(%s)(%s)(%s)", fbRef, b.cd, x.cm.Fb, x.ct.Fb, x.cf.Fb, x.ci.Fb, x.cr), "NDS 2018 3.3.3.8, Table 4.3.1")
+	switch {
+	case x.sclCV > 1:
+		t.add("CV", x.sclCV, "", "(12/d)^n, the manufacturer's size factor; above 1.0 it applies with CL, in Fb*",
+			t.f("(12 / %s)^%s", x.dIn, x.sclN), sclCVRef)
+		t.add("Fb*", b.fbStar, "psi", "Fb CD CM Ct CV", t.f("%s(%s)(%s)(%s)(%s)", fbRef, b.cd, x.cm.Fb, x.ct.Fb, x.sclCV),
+			"NDS 2018 3.3.3.8, Table 8.3.1 (from memory: verify)")
+	case x.sclCV > 0:
+		t.add("Fb*", b.fbStar, "psi", "Fb CD CM Ct", t.f("%s(%s)(%s)(%s)", fbRef, b.cd, x.cm.Fb, x.ct.Fb),
+			"NDS 2018 3.3.3.8, Table 8.3.1 (from memory: verify)")
+	default:
+		t.add("Fb*", b.fbStar, "psi", "Fb CD CM Ct CF Ci Cr",
+			t.f("%s(%s)(%s)(%s)(%s)(%s)(%s)", fbRef, b.cd, x.cm.Fb, x.ct.Fb, x.cf.Fb, x.ci.Fb, x.cr), "NDS 2018 3.3.3.8, Table 4.3.1")
+	}
 	if iv := b.iv; iv.braced {
 		t.add("CL", 1, "", r.brace.heldText(top), Subst{}, "NDS 2018 3.3.3.3")
 	} else {
@@ -165,11 +183,18 @@ func (r *calcRecord) bendingTrace(b *bendRec, top bool) []TraceItem {
 		t.add("CL", b.cl, "", "(1 + FbE/Fb*)/1.9 - sqrt(((1 + FbE/Fb*)/1.9)^2 - (FbE/Fb*)/0.95)",
 			t.f("(1 + %s)/1.9 - sqrt(((1 + %s)/1.9)^2 - %s/0.95)", a, a, a), "NDS 2018 Eq. 3.3-6")
 	}
-	if cv < 1 {
+	switch {
+	case x.sclCV > 0 && x.sclCV <= 1:
+		t.add("CV", cv, "", "(12/d)^n, the manufacturer's size factor; at most 1.0 it is not combined with CL: the smaller applies",
+			t.f("(12 / %s)^%s", x.dIn, x.sclN), sclCVRef)
+		t.add("Fb'", fbAdj, "psi", "Fb* min(CL, CV)", t.f("%s(%s)", b.fbStar, math.Min(b.cl, cv)), "NDS 2018 8.3.6, Table 8.3.1 (from memory: verify)")
+	case x.sclCV > 1:
+		t.add("Fb'", fbAdj, "psi", "Fb* CL", t.f("%s(%s)", b.fbStar, b.cl), "NDS 2018 8.3.6, Table 8.3.1 (from memory: verify)")
+	case cv < 1:
 		t.add("CV", cv, "", "(21/L)^(1/10) (12/d)^(1/10) (5.125/b)^(1/10) <= 1.0, L the longest span in ft; the smaller of CL and CV applies",
 			Subst{}, "NDS 2018 5.3.6, Eq. 5.3-1")
 		t.add("Fb'", fbAdj, "psi", "Fb* min(CL, CV)", t.f("%s(%s)", b.fbStar, math.Min(b.cl, cv)), "NDS 2018 Table 5.3.1")
-	} else {
+	default:
 		t.add("Fb'", fbAdj, "psi", "Fb* CL Cfu", t.f("%s(%s)(1.0)", b.fbStar, b.cl), "NDS 2018 Table 4.3.1")
 	}
 	t.add("fb/Fb'", fb/fbAdj, "", "fb / Fb'", t.f("%s / %s", fb, fbAdj), "NDS 2018 3.3.1")

@@ -36,7 +36,11 @@ type engine struct {
 	fbNegNoCD float64
 	// cv is glulam's volume factor CV (NDS 2018 5.3.6), applied instead of
 	// CL when smaller; 1 for sawn lumber.
-	cv      float64
+	cv float64
+	// sclCV is CV = (12/d)^n of structural composite lumber (NDS 2018
+	// 8.3.6), 0 for other materials; where it exceeds 1 it is in fbNoCD
+	// and cv is 1, else cv is it (see SCLBending).
+	sclCV   float64
 	eAdj    float64 // E'
 	eminAdj float64 // Emin'
 
@@ -125,6 +129,14 @@ func newEngine(m Member, s Settings) (*engine, error) {
 	if dv.SizeFactor == SizeFactor4D && s.WetService {
 		return e, fmt.Errorf("size %s: timbers in wet service: the wet-service factors of NDS 2018 Supplement Table 4D are not applied by framecheck; check this member by hand", m.Size)
 	}
+	if dv.SizeFactor == SizeFactorSCL && s.WetService {
+		return e, fmt.Errorf("%s in wet service: structural composite lumber takes its wet-service factors from the "+
+			"manufacturer (NDS 2018 8.3.3, from memory: verify), which framecheck does not apply; check this member by hand", dv.Species)
+	}
+	if sec.Plies > 1 && sec.Actual && dv.SizeFactor != SizeFactorSCL {
+		return e, fmt.Errorf("size %s: built-up members sized in actual inches are checked for structural composite lumber "+
+			"only, not for %s %s", m.Size, dv.Species, dv.Grade)
+	}
 	if dv.SizeFactor == SizeFactorGlulam && !sec.Actual {
 		return e, fmt.Errorf("size %s: glulam is sized by its actual inches (such as 5.125x12 or 5 1/8 x 12)", m.Size)
 	}
@@ -189,10 +201,21 @@ func (e *engine) factors() {
 		// factor (NDS 2018 Table 5.3.1); CV instead of CF
 		e.cf, e.cr, e.ci = SizeFactors{1, 1, 1}, 1, IncisingFactors{1, 1, 1, 1}
 	}
-	e.fbNoCD = e.dv.FbPsi * e.cm.Fb * e.ct.Fb * e.cf.Fb * e.ci.Fb * e.cr
+	e.sclCV = 0
+	inFbStar := 1.0
+	if e.dv.SizeFactor == SizeFactorSCL {
+		// SCL: no size factor CF, no incising factor, Cr not taken (NDS
+		// 2018 Table 8.3.1 and 8.3.7; see scl.go); CV = (12/d)^n of the
+		// manufacturer, in Fb* when above 1, else the lesser of CL and CV
+		// (NDS 2018 8.3.6)
+		e.cf, e.cr, e.ci = SizeFactors{1, 1, 1}, 1, IncisingFactors{1, 1, 1, 1}
+		e.sclCV = SCLVolumeFactor(e.sec.DIn, e.dv.SCLExponent)
+		inFbStar, e.cv = SCLBending(e.sclCV)
+	}
+	e.fbNoCD = e.dv.FbPsi * e.cm.Fb * e.ct.Fb * e.cf.Fb * e.ci.Fb * e.cr * inFbStar
 	e.fbNegNoCD = e.fbNoCD
 	if e.dv.FbNegPsi > 0 {
-		e.fbNegNoCD = e.dv.FbNegPsi * e.cm.Fb * e.ct.Fb * e.cf.Fb * e.ci.Fb * e.cr
+		e.fbNegNoCD = e.dv.FbNegPsi * e.cm.Fb * e.ct.Fb * e.cf.Fb * e.ci.Fb * e.cr * inFbStar
 	}
 	e.eAdj = e.dv.EPsi * e.cm.E * e.ct.E * e.ci.E
 	e.eminAdj = e.dv.EminPsi * e.cm.E * e.ct.E * e.ci.E

@@ -19,6 +19,7 @@ type factorKey struct {
 	rule  string
 	temp  string
 	pitch float64
+	scln  float64 // exponent of structural composite lumber's size factor
 }
 
 type factorEntry struct {

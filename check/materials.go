@@ -43,14 +43,21 @@ type DesignValues struct {
 	// VolumeFactorX is x of the glulam volume factor CV (NDS 2018 5.3.6);
 	// 0 = no volume factor.
 	VolumeFactorX float64
-	Source        string // "NDS 2018 Supplement Table 4A", or the user's file:line
-	Note          string // a substitution the lookup made (Stud wider than 6 in, ...)
+	// SCLExponent is n of the size factor (12/d)^n of a structural
+	// composite lumber row (SizeFactorSCL), as its manufacturer gives it;
+	// 0 = none.
+	SCLExponent float64
+	Source      string // "NDS 2018 Supplement Table 4A", or the user's file:line
+	Note        string // a substitution the lookup made (Stud wider than 6 in, ...)
 }
 
 // materialRow is one line of a design-value table.
 type materialRow struct {
 	DesignValues
 	minWidth, maxWidth int // nominal width range; maxWidth 0 = no limit
+	// minDIn, maxDIn: the same range as given, in inches: the actual
+	// depths of an SCL row; maxDIn 0 = no limit.
+	minDIn, maxDIn float64
 }
 
 // Materials is a set of design-value tables searched by species, grade and
@@ -128,7 +135,8 @@ var materialColumns = []string{"species", "grade", "min_width_in", "max_width_in
 // LoadMaterialsCSV reads user design values from CSV with the columns of the
 // built-in tables: species, grade, min_width_in, max_width_in (nominal,
 // 0 = no limit), fb_psi, ft_psi, fv_psi, fc_perp_psi, fc_psi, e_psi,
-// emin_psi, size_factor (4A, 4B or none) and source. The header line is
+// emin_psi, size_factor (4A, 4B, none, or "SCL n" for structural
+// composite lumber, see SizeFactorSCL) and source. The header line is
 // required; lines starting with # are comments. name is used in errors,
 // which read "name:line: column: problem". The result holds only the
 // file's rows: use BuiltinMaterials().Merge(user) to search both.
@@ -138,6 +146,7 @@ func LoadMaterialsCSV(r io.Reader, name string) (*Materials, error) {
 	cr.FieldsPerRecord = -1
 	cr.TrimLeadingSpace = true
 	m := &Materials{}
+	var lines []int
 	header := true
 	for {
 		rec, err := cr.Read()
@@ -168,9 +177,13 @@ func LoadMaterialsCSV(r io.Reader, name string) (*Materials, error) {
 			row.Source = fmt.Sprintf("%s:%d", name, line)
 		}
 		m.rows = append(m.rows, row)
+		lines = append(lines, line)
 	}
 	if header {
 		return nil, fmt.Errorf("%s: no header line (want %s)", name, strings.Join(materialColumns, ","))
+	}
+	if err := checkSCLRows(m.rows, lines, name); err != nil {
+		return nil, err
 	}
 	return m, nil
 }
@@ -199,8 +212,20 @@ func parseMaterialRow(rec []string) (materialRow, error) {
 		nums[i] = v
 	}
 	row.minWidth, row.maxWidth = int(nums[0]), int(nums[1])
+	row.minDIn, row.maxDIn = nums[0], nums[1]
+	if row.maxDIn > 0 && row.maxDIn < row.minDIn {
+		return row, fmt.Errorf("column max_width_in: %s is less than min_width_in %s (0 = no limit)", rec[3], rec[2])
+	}
 	row.FbPsi, row.FtPsi, row.FvPsi, row.FcPerpPsi = nums[2], nums[3], nums[4], nums[5]
 	row.FcPsi, row.EPsi, row.EminPsi = nums[6], nums[7], nums[8]
+	if n, ok, err := parseSCLSizeFactor(rec[11]); ok {
+		if err != nil {
+			return row, err
+		}
+		row.SizeFactor, row.SCLExponent = SizeFactorSCL, n
+		row.Source = strings.TrimSpace(rec[12])
+		return row, nil
+	}
 	switch sf := strings.TrimSpace(rec[11]); strings.ToLower(sf) {
 	case "4a":
 		row.SizeFactor = SizeFactor4A
@@ -209,7 +234,8 @@ func parseMaterialRow(rec []string) (materialRow, error) {
 	case "none", "":
 		row.SizeFactor = SizeFactorNone
 	default:
-		return row, fmt.Errorf("column size_factor: want 4A, 4B or none, got %q", sf)
+		return row, fmt.Errorf("column size_factor: want 4A, 4B, none or SCL n (structural composite lumber, n the exponent "+
+			"of the manufacturer's size factor (12/d)^n), got %q", sf)
 	}
 	row.Source = strings.TrimSpace(rec[12])
 	return row, nil
@@ -247,6 +273,9 @@ func (m *Materials) Lookup(species, grade, size string) (DesignValues, error) {
 func (m *Materials) lookup(species, grade string, sec Section) (DesignValues, error) {
 	if k := nameKey(species); k == "glulam" || k == "glb" || k == "gluedlaminatedtimber" {
 		return glulamValues(grade)
+	}
+	if sp, ok := m.IsSCL(species); ok {
+		return m.sclLookup(sp, grade, sec)
 	}
 	if sec.Timber {
 		return timberValues(species, grade, sec)

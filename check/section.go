@@ -100,6 +100,9 @@ func ParseSize(s string) (Section, error) {
 	if strings.ContainsAny(s, "./") && !strings.Contains(s, "(") {
 		return parseActual(s)
 	}
+	if rest, ok := strings.CutPrefix(strings.TrimSpace(s), "("); ok && strings.ContainsAny(s, "./") {
+		return parseActualPlies(s, rest)
+	}
 	t := strings.ToLower(strings.Join(strings.Fields(s), ""))
 	t = strings.ReplaceAll(t, "×", "x")
 	if rest, ok := strings.CutPrefix(t, "("); ok {
@@ -163,6 +166,34 @@ func parseActual(s string) (Section, error) {
 	name := strconv.FormatFloat(b, 'f', -1, 64) + "x" + strconv.FormatFloat(d, 'f', -1, 64)
 	return Section{Name: name, NominalBIn: b, NominalDIn: d, BIn: b, DIn: d, AreaIn2: b * d, SIn3: b * d * d / 6,
 		IIn4: b * d * d * d / 12, Actual: true}, nil
+}
+
+// maxActualPlyIn is the thickest ply of a built-up member sized in actual
+// inches: structural composite lumber is built up of 1 3/4 in plies, or
+// 3 1/2 in (common practice, no source).
+const maxActualPlyIn = 3.5
+
+// parseActualPlies reads a built-up member of plies sized in actual
+// inches, "(2) 1.75x11.875" or "(2) 1 3/4 x 11 7/8" (rest is s after its
+// "("): 2 to 4 plies, each at most 3 1/2 in thick. Which materials may be
+// built up so is the engine's to say (structural composite lumber).
+func parseActualPlies(s, rest string) (Section, error) {
+	n, ply, ok := strings.Cut(rest, ")")
+	plies, err := strconv.Atoi(strings.TrimSpace(n))
+	if !ok || err != nil || plies < 1 {
+		return Section{}, fmt.Errorf("size %q: want (n) b x d for n plies, such as (2) 1.75x11.875", s)
+	}
+	sec, err := parseActual(strings.TrimPrefix(strings.TrimSpace(ply), "-"))
+	switch {
+	case err != nil:
+		return Section{}, err
+	case plies > 1 && (plies > maxPlies || sec.BIn > maxActualPlyIn):
+		return Section{}, fmt.Errorf("size %q: %w: built-up members of 2 to %d plies, each at most %g in thick, are checked; "+
+			"%d plies of %s are not; check it by hand", s, ErrBuiltUp, maxPlies, maxActualPlyIn, plies, sec.Name)
+	case plies > 1:
+		return builtUp(sec, plies), nil
+	}
+	return sec, nil
 }
 
 // parseInches reads "5.125", "5 1/8", "5-1/8", "7/8" or "12".

@@ -206,7 +206,7 @@ func (e *engine) baseResult() Result {
 // again (see factorCache); callers must not modify it.
 func (e *engine) factorTrace() []TraceItem {
 	key := factorKey{cm: e.cm, ct: e.ct, cf: e.cf, ci: e.ci, cr: e.cr,
-		sec: e.sec.Name, rule: e.dv.SizeFactor, temp: tempName(e.s.Temperature), pitch: e.m.PitchRise12}
+		sec: e.sec.Name, rule: e.dv.SizeFactor, temp: tempName(e.s.Temperature), pitch: e.m.PitchRise12, scln: e.dv.SCLExponent}
 	if items, ok := factorCache.lookup(key, e.comboCDs); ok {
 		return items
 	}
@@ -221,6 +221,10 @@ func (e *engine) buildFactorTrace() []TraceItem {
 	t := tracer{items: make([]TraceItem, 0, 12+len(e.comboCDs))}
 	for _, c := range e.comboCDs {
 		t.add("CD", c.cd, "", c.name, Subst{}, "NDS 2018 2.3.2, Table 2.3.2: shortest-duration load of the combination")
+	}
+	if e.dv.SizeFactor == SizeFactorSCL {
+		e.sclFactorTrace(&t)
+		return t.items
 	}
 	t.add("CM(Fb)", e.cm.Fb, "", "wet service", Subst{}, "NDS 2018 Supplement Table 4A/4B")
 	t.add("CM(Fv)", e.cm.Fv, "", "wet service", Subst{}, "NDS 2018 Supplement Table 4A/4B")
