@@ -37,6 +37,44 @@ func (ld *loader) beamKeys(t *table, s *Support) {
 	}
 }
 
+// supportMaterials checks each [[support]] material once the materials
+// file is read: it must name a structural composite lumber row of
+// [lumber] materials_file (any case) or a glulam stress class, and with a
+// size given, that size must be one the material has values for (actual
+// inches, within its depth range). Never a default: an unknown name is an
+// error at the key, naming the materials known.
+func (ld *loader) supportMaterials() {
+	mats := check.BuiltinMaterials()
+	if ld.p.Materials != nil {
+		mats = ld.p.Materials
+	}
+	for i, s := range ld.p.Supports {
+		if s.Material == "" {
+			continue
+		}
+		path := "support[" + strconv.Itoa(i) + "]"
+		sp, gr, err := mats.BeamMaterial(s.Material, s.Grade)
+		if err != nil {
+			ld.errorf(joinPath(path, "material"), "%v", err)
+			continue
+		}
+		if s.Size == "" {
+			continue
+		}
+		size := s.Size
+		if s.Plies > 1 {
+			size = "(" + strconv.Itoa(s.Plies) + ") " + s.Size
+		}
+		if _, err := mats.Lookup(sp, gr, size); err != nil {
+			key := "size"
+			if strings.Contains(err.Error(), "grade") {
+				key = "grade"
+			}
+			ld.errorf(joinPath(path, key), "material %s: %v", s.Material, err)
+		}
+	}
+}
+
 // posts reads the [[post]] tables.
 func (ld *loader) posts(root *table) {
 	elems, _ := ld.arrayTables(root, "post")

@@ -20,6 +20,7 @@ func (ld *loader) project(root *table) {
 	ld.layers(ld.sub(root, "layers"))
 	ld.supports(root)
 	ld.lumber(ld.sub(root, "lumber"))
+	ld.supportMaterials()
 	ld.design(ld.sub(root, "design"))
 	loads := ld.sub(root, "loads")
 	ld.zones(root)
