@@ -146,8 +146,8 @@ func (g *grouper) findPointLoads() {
 	for i := range marks {
 		ownText[i] = marks[i].Text != ""
 	}
-	for _, e := range model {
-		marks = append(marks, PointLoadMark{At: e.Points[0], Pos: e.Pos})
+	for _, m := range g.loadOutlineMarks(model) {
+		marks = append(marks, m)
 		ownText = append(ownText, false)
 	}
 	// each text goes to its nearest mark within reach; a mark takes the
@@ -164,7 +164,7 @@ func (g *grouper) findPointLoads() {
 			}
 		}
 		if mk < 0 {
-			g.loadTextErr(t.pos, "point-load text %q has no point, circle or block within %.0f in",
+			g.loadTextErr(t.pos, "point-load text %q has no point, circle, block or post outline within %.0f in",
 				flatText(t.text), pointLoadReachIn(t))
 			continue
 		}
@@ -202,7 +202,7 @@ func (g *grouper) findPointLoads() {
 // an error, as the load it gives is not applied anywhere.
 func (g *grouper) loadTextErr(pos dxfimport.Pos, format string, args ...any) {
 	g.plan.Issues.Add(pos, CodePointLoadAlone, dxfimport.SevError,
-		"%s; its load is not applied: put one text beside each point, circle or block", fmt.Sprintf(format, args...))
+		"%s; its load is not applied: put one text beside each point, circle, block or post outline", fmt.Sprintf(format, args...))
 }
 
 // placePointLoad finds the joist or beam a mark sits on: the nearest

@@ -71,9 +71,9 @@ func (s *loadPathState) add(e dxfimport.Entity, r role) bool {
 		s.postEnts = append(s.postEnts, e)
 		return true
 	}
-	if e.From == nil && e.Kind != dxfimport.KindPoint && e.Kind != dxfimport.KindCircle {
-		return false // leaders and arrows are not read
-	}
+	// Lines and polylines of a point-load layer: a post drawn above as a
+	// small closed outline is a point load; the others (leaders, arrows)
+	// are counted as ignored by loadOutlineMarks (pointloadoutlines.go).
 	s.loadEnts = append(s.loadEnts, e)
 	return true
 }
