@@ -150,7 +150,10 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 		} else {
 			beamMember[i] = len(lp.Members)
 			mi := loadpath.MemberIn{ID: b.ID, Beam: true, Check: cm}
-			if sizing && len(p.Sizing.BeamCandidates) > 0 && !strings.EqualFold(cm.Species, check.GlulamSpecies) {
+			// glulam and structural composite lumber keep their sizes: the
+			// candidates are sawn sizes
+			_, scl := p.Materials.IsSCL(cm.Species)
+			if sizing && len(p.Sizing.BeamCandidates) > 0 && !strings.EqualFold(cm.Species, check.GlulamSpecies) && !scl {
 				mi.Candidates, mi.DensityPcf = p.Sizing.BeamCandidates, beamDensityPcf
 			}
 			lp.Members = append(lp.Members, mi)
@@ -369,6 +372,44 @@ func glulamCallout(text string) (size, class string, ok bool) {
 	return sec.Name, strings.ToUpper(m[1]), true
 }
 
+// materialCallout reads a beam callout that ReadCallout did not size:
+// glulam ("5 1/8 x 12 GLB 24F-1.8E"), a size in actual inches followed by
+// a user material's word ("3 1/2 x 11 7/8 LVL", "1 3/4 x 11 7/8 LVL (2)",
+// the word matched to the materials file's species case-insensitively,
+// any words after it its grade), or a size in actual inches alone when
+// the [[support]] names the material. species is "" when the callout
+// gives only the size. msg says why the callout cannot be used: a word
+// naming no user material is such an error, naming the word and the
+// materials known, never a default.
+func materialCallout(mats *check.Materials, callout, spMaterial, spGrade string) (size, species, grade, msg string) {
+	if sz, class, ok := glulamCallout(callout); ok {
+		return sz, check.GlulamSpecies, class, ""
+	}
+	mc, ok, err := check.ParseMaterialCallout(callout)
+	switch {
+	case ok && err != nil:
+		return "", "", "", fmt.Sprintf("its callout: %v: check this beam by hand or correct the callout", err)
+	case ok:
+		gr := mc.Grade
+		if sp, isSCL := mats.IsSCL(mc.Material); gr == "" && isSCL && spMaterial != "" {
+			if same, _ := mats.IsSCL(spMaterial); same == sp {
+				gr = spGrade
+			}
+		}
+		sp, gr, err := mats.BeamMaterial(mc.Material, gr)
+		if err != nil {
+			return "", "", "", fmt.Sprintf("its callout %q: the word %q: %v", callout, mc.Material, err)
+		}
+		return mc.Size, sp, gr, ""
+	}
+	if sec, err := check.ParseSize(callout); err == nil && sec.Actual && spMaterial != "" {
+		return sec.Name, "", "", ""
+	}
+	return "", "", "", fmt.Sprintf("its callout %q is not a size framecheck checks (sawn lumber such as (3) 2x12 or 4x12, "+
+		"glulam such as 5 1/8 x 12 GLB 24F-1.8E, or structural composite lumber of the materials file by its name, such as "+
+		"3 1/2 x 11 7/8 LVL): check this beam by hand", callout)
+}
+
 // beamInput builds check's input for beam b: its size from its callout or
 // its [[support]] table, its lumber, its bearings, its own weight, its top
 // edge braced where joists bear on it or hang from it, and the deflection
@@ -379,15 +420,24 @@ func beamInput(p *project.Project, plan *framing.Plan, b *framing.Beam) (check.M
 	sp := p.SupportOf(b.Layer)
 	size := b.Size
 	species, grade := p.Lumber.Species, p.Lumber.Grade
-	glulam := false
+	mats := p.Materials
+	if mats == nil {
+		mats = check.BuiltinMaterials()
+	}
+	spMaterial, spGrade := "", ""
+	if sp != nil {
+		spMaterial, spGrade = sp.Material, sp.Grade
+	}
+	named := false // the material is named (glulam class or a user material), not [[support]] species and grade
 	if size == "" && b.Callout != "" {
-		sz, class, ok := glulamCallout(b.Callout)
-		if !ok {
-			return check.Member{ID: b.ID}, 0, fmt.Sprintf("its callout %q is not a size framecheck checks (sawn lumber such as "+
-				"(3) 2x12 or 4x12, or glulam such as 5 1/8 x 12 GLB 24F-1.8E; structural composite lumber is not checked "+
-				"yet): check this beam by hand", b.Callout)
+		sz, sp2, gr2, msg := materialCallout(mats, b.Callout, spMaterial, spGrade)
+		if msg != "" {
+			return check.Member{ID: b.ID}, 0, msg
 		}
-		size, species, grade, glulam = sz, check.GlulamSpecies, class, true
+		size, named = sz, sp2 != ""
+		if named {
+			species, grade = sp2, gr2
+		}
 	}
 	if size == "" && sp != nil && sp.Size != "" {
 		size = sp.Size
@@ -398,10 +448,14 @@ func beamInput(p *project.Project, plan *framing.Plan, b *framing.Beam) (check.M
 	if size == "" {
 		return check.Member{ID: b.ID}, 0, "no size: write its size beside it on a label layer (such as (3) 2x12) or give [[support]] size"
 	}
-	if sp != nil && sp.Material != "" {
-		return check.Member{ID: b.ID, Size: size}, 0, fmt.Sprintf("material %q: beams of user materials are not checked yet; check this beam by hand", sp.Material)
+	if !named && spMaterial != "" {
+		sp2, gr2, err := mats.BeamMaterial(spMaterial, spGrade)
+		if err != nil {
+			return check.Member{ID: b.ID, Size: size}, 0, "[[support]] " + err.Error()
+		}
+		species, grade, named = sp2, gr2, true
 	}
-	if sp != nil && !glulam {
+	if sp != nil && !named {
 		if sp.Species != "" {
 			species = sp.Species
 		}
