@@ -373,5 +373,6 @@ type DesignValue struct {
 var Cautions = []string{
 	"framecheck assists a qualified designer; it does not replace engineering judgement or a licensed professional's review.",
 	"Design values and code editions must be checked against those the local jurisdiction has adopted.",
-	"Results for members outside the stated scope (notched or tapered members, I-joists, structural composite lumber, wet service without the wet_service switch) are not valid.",
+	"Results for members outside the stated scope (notched or tapered members, I-joists, wet service without the wet_service switch) are not valid.",
+	"Structural composite lumber (LVL, PSL, LSL) is checked only from the values the user enters for it (materials_file: the manufacturer's Fb, Fv, Fc_perp, E, Emin and size-factor exponent); framecheck builds in no product, and those values must be checked against the manufacturer's current literature.",
 }

@@ -61,7 +61,7 @@ bearing_in = 1.5
 # reactions. Its size comes from a callout near it, else from here:
 # size = "2x12"               # or glulam / SCL b x d in inches: "5.125x12", "3.5x11.875"
 # plies = 3                   # plies of a built-up sawn beam of that size
-# material = ""               # a user material's name (glulam stress class, SCL)
+# material = ""               # glulam stress class, or an SCL row's name in materials_file
 # check = true                # false: keep it a rigid bearing
 
 [lumber]
@@ -73,6 +73,9 @@ size = "2x10"
 # values) in a CSV or TOML file with the columns of the built-in tables:
 # species,grade,min_width_in,max_width_in,fb_psi,ft_psi,fv_psi,fc_perp_psi,
 # fc_psi,e_psi,emin_psi,size_factor,source. Relative to this file.
+# Structural composite lumber (LVL, PSL, LSL): size_factor "SCL n" with n the
+# exponent of the manufacturer's size factor (12/d)^n, widths the actual
+# depths in inches; a beam callout ending in the row's species selects it.
 # materials_file = "my-materials.csv"
 
 # Overrides by joist layer: the first table whose patterns match wins and
