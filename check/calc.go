@@ -125,6 +125,16 @@ func newTracer(n int) tracer {
 	return a.tracer(n)
 }
 
+// adjRef is the table of adjustment factors the member's values follow:
+// NDS 2018 Table 8.3.1 for structural composite lumber (its Ci is 1),
+// Table 4.3.1 otherwise.
+func (x *calcCtx) adjRef() string {
+	if x.sclCV > 0 {
+		return "NDS 2018 Table 8.3.1 (from memory: verify)"
+	}
+	return "NDS 2018 Table 4.3.1"
+}
+
 // sclCVRef is the source of structural composite lumber's CV.
 const sclCVRef = "NDS 2018 8.3.6 (from memory: verify): the manufacturer's volume factor, exponent from the user's materials file"
 
@@ -177,7 +187,7 @@ func (r *calcRecord) bendingTrace(b *bendRec, top bool) []TraceItem {
 		f := leFormulas[iv.leFormula]
 		t.add("le", iv.leIn, "in", f, leSubst(&t, f, iv.luIn, x.dIn), leRefs[iv.kind])
 		t.add("RB", iv.rb, "", "sqrt(le d / b^2)", t.f("sqrt(%s(%s) / %s^2)", iv.leIn, x.dIn, x.bIn), "NDS 2018 Eq. 3.3-5")
-		t.add("Emin'", x.eminAdj, "psi", "Emin CM Ct Ci", t.f("%s(%s)(%s)(%s)", x.eminPsi, x.cm.E, x.ct.E, x.ci.E), "NDS 2018 Table 4.3.1")
+		t.add("Emin'", x.eminAdj, "psi", "Emin CM Ct Ci", t.f("%s(%s)(%s)(%s)", x.eminPsi, x.cm.E, x.ct.E, x.ci.E), x.adjRef())
 		t.add("FbE", iv.fbEPsi, "psi", "1.20 Emin' / RB^2", t.f("1.20(%s) / %s^2", x.eminAdj, iv.rb), "NDS 2018 3.3.3.8")
 		a := iv.fbEPsi / b.fbStar
 		t.add("CL", b.cl, "", "(1 + FbE/Fb*)/1.9 - sqrt(((1 + FbE/Fb*)/1.9)^2 - (FbE/Fb*)/0.95)",
@@ -226,7 +236,7 @@ func (r *calcRecord) shearTrace() []TraceItem {
 	t.add("V", s.vLb, "lb", "largest shear "+where, Subst{}, ref)
 	t.add("A", x.aIn2, "in^2", "b d", t.f("%s(%s)", x.bIn, x.dIn), "NDS 2018 Supplement Table 1B")
 	t.add("fv", fv, "psi", "1.5 V / A", t.f("1.5(%s) / %s", s.vLb, x.aIn2), "NDS 2018 Eq. 3.4-2")
-	t.add("Fv'", s.fvAdjPsi, "psi", "Fv CD CM Ct Ci", t.f("%s(%s)(%s)(%s)(%s)", x.fvPsi, s.cd, x.cm.Fv, x.ct.Fv, x.ci.Fv), "NDS 2018 Table 4.3.1")
+	t.add("Fv'", s.fvAdjPsi, "psi", "Fv CD CM Ct Ci", t.f("%s(%s)(%s)(%s)(%s)", x.fvPsi, s.cd, x.cm.Fv, x.ct.Fv, x.ci.Fv), x.adjRef())
 	t.add("fv/Fv'", fv/s.fvAdjPsi, "", "fv / Fv'", t.f("%s / %s", fv, s.fvAdjPsi), "NDS 2018 3.4.1")
 	return t.items
 }
@@ -251,7 +261,7 @@ func (r *calcRecord) bearingTrace() []TraceItem {
 			t.add("Cb", 1, "", "bearing at a member end, or lb >= 6 in", Subst{}, "NDS 2018 3.10.4")
 		}
 		t.add("Fc_perp'", b.fcAdjPsi, "psi", "Fc_perp CM Ct Ci Cb",
-			t.f("%s(%s)(%s)(%s)(%s)", x.fcPerpPsi, x.cm.FcPerp, x.ct.FcPerp, x.ci.FcPerp, b.cb), "NDS 2018 Table 4.3.1")
+			t.f("%s(%s)(%s)(%s)(%s)", x.fcPerpPsi, x.cm.FcPerp, x.ct.FcPerp, x.ci.FcPerp, b.cb), x.adjRef())
 	}
 	t.add("fc_perp/Fc_perp'", fc/b.fcAdjPsi, "", "fc_perp / Fc_perp'", t.f("%s / %s", fc, b.fcAdjPsi), "NDS 2018 3.10.2")
 	return t.items
@@ -277,7 +287,7 @@ func (r *calcRecord) deflTrace(d *deflRec) []TraceItem {
 	default:
 		t.add("delta", d.deflIn, "in", "largest deflection of "+d.where, Subst{}, refAnalysis)
 	}
-	t.add("E'", x.eAdj, "psi", "E CM Ct Ci", t.f("%s(%s)(%s)(%s)", x.ePsi, x.cm.E, x.ct.E, x.ci.E), "NDS 2018 Table 4.3.1")
+	t.add("E'", x.eAdj, "psi", "E CM Ct Ci", t.f("%s(%s)(%s)(%s)", x.ePsi, x.cm.E, x.ct.E, x.ci.E), x.adjRef())
 	if x.cosT < 1 {
 		t.add("cos", x.cosT, "", "rafter at "+fmtG(x.pitch)+" in 12: cos = 12 / sqrt(12^2 + rise^2); delta is perpendicular to the rafter "+
 			"(projection's / cos^2) and the span is the sloped length (plan span / cos)", t.f("12 / sqrt(144 + %s^2)", x.pitch), "statics")

@@ -104,6 +104,17 @@ func CheckPost(p Post, s Settings) PostResult {
 	cm := WetServiceFactor(s.WetService, dv, cf.Fb, cfFc)
 	ct, _ := TemperatureFactor(s.Temperature, s.WetService)
 	ci := IncisingFactor(s.Incised) // Ci of Fc is that of Fb, 0.80 (NDS 2018 Table 4.3.8)
+	if dv.SizeFactor == SizeFactorSCL {
+		// structural composite lumber: no CF or Ci, dry service only (see
+		// scl.go); c stays 0.8 below, under the 0.9 that NDS 2018 3.7.1.5
+		// gives SCL (from memory: verify), so CP errs low
+		if s.WetService {
+			r.Messages = append(r.Messages, fmt.Sprintf("%s in wet service: structural composite lumber takes its wet-service "+
+				"factors from the manufacturer (NDS 2018 8.3.3, from memory: verify), which framecheck does not apply; check this post by hand", dv.Species))
+			return r
+		}
+		ci = IncisingFactors{1, 1, 1, 1}
+	}
 	d := math.Min(sec.BIn, sec.DIn)
 	area := sec.BIn * sec.DIn
 	le := ke * p.HeightIn

@@ -250,3 +250,45 @@ func TestBeamMaterial(t *testing.T) {
 		t.Errorf("no user SCL: %v", err)
 	}
 }
+
+// TestSCLPost: a 3 1/2 x 5 1/2 LVL post (the test's material), 96 in
+// high, Ke = 1, under 2,000 lb D + 3,000 lb L, incised set for the sawn
+// lumber of the project (no Ci on SCL). Hand calculation (NDS 2018 3.7.1;
+// c = 0.8 kept, under SCL's 0.9, on the safe side):
+//
+//	le/d = 96 / 3.5 = 27.43; FcE = 0.822 (1,016,000) / 27.43^2 = 1110.0 psi
+//	Fc* = 2500 (1.0) = 2500 psi (no CF); a = 0.4440
+//	CP = 1.4440/1.6 - sqrt((1.4440/1.6)^2 - 0.4440/0.8) = 0.9025 - 0.5094 = 0.3931
+//	Fc' = 982.8 psi; fc = 5,000 / 19.25 = 259.7 psi
+//
+// In wet service the post is refused.
+func TestSCLPost(t *testing.T) {
+	s := DefaultSettings()
+	s.Materials, s.Incised = sclMaterials(t), true
+	p := Post{ID: "P1", Size: "3.5x5.5", Species: "LVL", HeightIn: 96, Loads: PostLoads{DeadLb: 2000, LiveLb: 3000}}
+	r := CheckPost(p, s)
+	if r.Status != StatusPass {
+		t.Fatalf("status %s: %v", r.Status, r.Messages)
+	}
+	var comp *CheckResult
+	for i := range r.Checks {
+		if r.Checks[i].Kind == KindCompression {
+			comp = &r.Checks[i]
+		}
+	}
+	if comp == nil {
+		t.Fatal("no compression check")
+	}
+	fcE := 0.822 * 1016000 / math.Pow(96/3.5, 2)
+	a := fcE / 2500
+	cp := (1+a)/1.6 - math.Sqrt(math.Pow((1+a)/1.6, 2)-a/0.8)
+	expectNear(t, "FcE", fcE, 1110.0, 0.1, 0, "hand calculation above")
+	expectNear(t, "CP", cp, 0.3931, 5e-4, 0, "NDS 2018 Eq. 3.7-1, hand calculation")
+	expectNear(t, "Fc'", comp.Allowable, 2500*cp, 1e-9, 1e-9, "Fc* CP, no CF or Ci for SCL")
+	expectNear(t, "Fc' (number)", comp.Allowable, 982.8, 0.1, 0, "hand calculation above")
+	expectNear(t, "fc", comp.Actual, 5000/19.25, 1e-9, 1e-9, "P / A")
+	s.WetService = true
+	if r := CheckPost(p, s); r.Status != StatusError || !strings.Contains(strings.Join(r.Messages, " "), "wet service") {
+		t.Errorf("wet SCL post: %s %v", r.Status, r.Messages)
+	}
+}
