@@ -8,6 +8,9 @@ import "sort"
 type MaterialRow struct {
 	DesignValues
 	MinWidthIn, MaxWidthIn int
+	// MinDepthIn, MaxDepthIn are the same range as given, in inches: the
+	// actual depths of a structural composite lumber row (SizeFactorSCL).
+	MinDepthIn, MaxDepthIn float64
 }
 
 // Rows returns the rows of m in table order. With species not empty (any
@@ -27,7 +30,8 @@ func (m *Materials) Rows(species string) ([]MaterialRow, error) {
 		if want != "" && r.Species != want {
 			continue
 		}
-		out = append(out, MaterialRow{DesignValues: r.DesignValues, MinWidthIn: r.minWidth, MaxWidthIn: r.maxWidth})
+		out = append(out, MaterialRow{DesignValues: r.DesignValues, MinWidthIn: r.minWidth, MaxWidthIn: r.maxWidth,
+			MinDepthIn: r.minDIn, MaxDepthIn: r.maxDIn})
 	}
 	return out, nil
 }

@@ -87,3 +87,12 @@ func TestCheckSCLUnknownWord(t *testing.T) {
 	require.Len(t, r.LoadPath.Beams, 1)
 	assert.Equal(t, "error", r.LoadPath.Beams[0].Status)
 }
+
+// TestMaterialsListsSCL: `framecheck materials` prints an SCL row with its
+// actual depths and its size factor as the file gives them.
+func TestMaterialsListsSCL(t *testing.T) {
+	code, out, errs := runCmd("materials", "lvl", "-p", "testdata/scl/scl.toml")
+	require.Equal(t, exitOK, code, errs)
+	assert.Contains(t, out, "d 5.5-18 in")
+	assert.Contains(t, out, "SCL (12/d)^0.136")
+}
