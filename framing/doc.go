@@ -191,16 +191,20 @@
 //	FRM233 error    point-load text with no mark near it (or beside a mark with a nearer text): not applied
 //	FRM234 warning  beam with fewer than two supports of its own found: stays a rigid bearing
 //	FRM235 error    beams that bear on each other in a cycle
+//	FRM236 warning  closed outline on a point-load layer larger than a post (12 in across): not read as a point load
 //
-// # The load path as drawn (posts.go, pointloads.go, beams.go)
+// # The load path as drawn (posts.go, pointloads.go, pointloadoutlines.go, beams.go)
 //
 // Posts (Plan.Posts, P1..) are circles up to 24 in across, closed
 // outlines up to 12 in across (a closed polyline, or lines meeting end to
 // end, diagonals allowed) and block inserts on posts layers; a size text
 // beside a post (on a posts layer, else a label text naming a size,
 // within max(12 in, 3 text heights)) is Post.Text. Point-load marks
-// (Plan.PointLoads) are POINTs, CIRCLEs and block inserts on point-load
-// layers; each takes the nearest text within max(12 in, 4 text heights),
+// (Plan.PointLoads) are POINTs, CIRCLEs, block inserts and small closed
+// outlines (a post drawn above, from the floor above: a closed polyline or
+// lines meeting end to end, up to 12 in across, marking its centre;
+// pointloadoutlines.go) on point-load layers; other lines there (leaders)
+// are not read. Each takes the nearest text within max(12 in, 4 text heights),
 // read by ReadPointLoad, and sits on the nearest joist or beam whose centre
 // line passes within half its drawn width plus the snap tolerance.
 //

@@ -45,7 +45,7 @@ func (g *grouper) loadOutlineMarks(model []dxfimport.Entity) []PointLoadMark {
 	for _, fig := range closedFigures(lines, tol) {
 		if !fig.closed {
 			for _, i := range fig.lines {
-				g.plan.Ignored[fmt.Sprintf("%s (%s)", lines[i].pos.Layer, dxfimport.KindLine)]++
+				g.ignoreKey(lines[i].pos.Layer, dxfimport.KindLine)
 			}
 			continue
 		}
@@ -65,11 +65,14 @@ func (g *grouper) loadOutlineMarks(model []dxfimport.Entity) []PointLoadMark {
 }
 
 // ignore counts an entity the point-load role has no use for.
-func (g *grouper) ignore(e dxfimport.Entity) {
+func (g *grouper) ignore(e dxfimport.Entity) { g.ignoreKey(e.Pos.Layer, e.Kind) }
+
+// ignoreKey counts one entity of kind on layer as ignored (Plan.Ignored).
+func (g *grouper) ignoreKey(layer string, kind any) {
 	if g.plan.Ignored == nil {
 		g.plan.Ignored = map[string]int{}
 	}
-	g.plan.Ignored[fmt.Sprintf("%s (%s)", e.Pos.Layer, e.Kind)]++
+	g.plan.Ignored[fmt.Sprintf("%s (%s)", layer, kind)]++
 }
 
 // loadOutline returns the centre of a closed outline of points pts drawn
