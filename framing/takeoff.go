@@ -3,6 +3,8 @@ package framing
 import (
 	"math"
 	"sort"
+	"strconv"
+	"strings"
 )
 
 // Takeoff rules (DOMAIN.md "Takeoff"): joists are ordered in even-foot
@@ -63,13 +65,35 @@ func OrderLengthFt(lengthIn float64) int {
 	return max(ft, minOrderFt)
 }
 
-// boardFeet returns nominal b x d x length(ft) / 12, 0 for a bad size.
+// boardFeet returns nominal b x d x length(ft) / 12. A size given in
+// actual inches ("1.75x11.875", "(2) 1.75x14": structural composite
+// lumber, glulam) has no nominal size: its actual b x d is used, as such
+// products are made to the size they are called. 0 for a size that is
+// neither.
 func boardFeet(size string, lengthFt float64) float64 {
-	b, d, err := NominalSize(size)
-	if err != nil {
-		return 0
+	if b, d, err := NominalSize(size); err == nil {
+		return float64(b*d) * lengthFt / 12
 	}
-	return float64(b*d) * lengthFt / 12
+	if b, d, ok := actualSize(size); ok {
+		return b * d * lengthFt / 12
+	}
+	return 0
+}
+
+// actualSize reads a size written in actual inches, "1.75x11.875" or
+// "(2) 1.75x14", as the total thickness and the depth.
+func actualSize(size string) (bIn, dIn float64, ok bool) {
+	plies, ply := splitPlies(size)
+	parts := strings.Split(strings.ToLower(strings.TrimSpace(ply)), "x")
+	if plies < 1 || len(parts) != 2 {
+		return 0, 0, false
+	}
+	b, e1 := strconv.ParseFloat(strings.TrimSpace(parts[0]), 64)
+	d, e2 := strconv.ParseFloat(strings.TrimSpace(parts[1]), 64)
+	if e1 != nil || e2 != nil || !(b > 0 && d > 0) || math.IsInf(b, 0) || math.IsInf(d, 0) {
+		return 0, 0, false
+	}
+	return float64(plies) * b, d, true
 }
 
 // BuildTakeoff counts every member (error members included: the lumber is

@@ -33,3 +33,28 @@ func TestTakeoffTotalsDeterministic(t *testing.T) {
 		}
 	}
 }
+
+// TestBoardFeetActualSizes: a size in actual inches (structural composite
+// lumber, glulam) counts its actual b x d; a nominal size its nominal
+// b x d (DOMAIN.md "Takeoff"; board foot = 144 in^3, common practice, no
+// source).
+func TestBoardFeetActualSizes(t *testing.T) {
+	cases := []struct {
+		size string
+		ft   float64
+		want float64
+	}{
+		{"2x10", 12, 20},                 // 2 x 10 x 12 / 12
+		{"(3) 2x12", 16, 96},             // 6 x 12 x 16 / 12
+		{"1.75x14", 12, 24.5},            // 1.75 x 14 x 12 / 12
+		{"(2) 1.75x11.875", 12, 41.5625}, // 3.5 x 11.875 x 12 / 12
+		{"5.125x12", 20, 102.5},          // 5.125 x 12 x 20 / 12
+		{"LVL", 12, 0},
+		{"2xNaN", 12, 0},
+	}
+	for _, c := range cases {
+		if got := boardFeet(c.size, c.ft); math.Abs(got-c.want) > 1e-9 {
+			t.Errorf("boardFeet(%q, %g) = %g, want %g", c.size, c.ft, got, c.want)
+		}
+	}
+}
