@@ -96,3 +96,26 @@ func TestMaterialsListsSCL(t *testing.T) {
 	assert.Contains(t, out, "d 5.5-18 in")
 	assert.Contains(t, out, "SCL (12/d)^0.136")
 }
+
+// TestCheckSCLBeamSofterThanJoists: with the LVL row's Fc_perp lowered to
+// 400 psi, under the 625 psi of the Douglas Fir-Larch No.2 joists bearing
+// on the beam (NDS 2018 Supplement Table 4A), the joists' bearing was
+// checked against their own Fc_perp: a CHK313 warning names the beam, the
+// two values and says to check the bearing on the beam, never a silent
+// pass. With the row's 750 psi (the fixture as written) there is none.
+func TestCheckSCLBeamSofterThanJoists(t *testing.T) {
+	dir := t.TempDir()
+	csv, err := os.ReadFile("testdata/scl/scl-materials.csv")
+	require.NoError(t, err)
+	soft := strings.Replace(string(csv), ",285,750,", ",285,400,", 1)
+	require.NotEqual(t, string(csv), soft, "the fixture's LVL row has Fv 285 and Fc_perp 750")
+	require.NoError(t, os.WriteFile(filepath.Join(dir, "scl-materials.csv"), []byte(soft), 0o644))
+	toml, err := os.ReadFile("testdata/scl/scl.toml")
+	require.NoError(t, err)
+	require.NoError(t, os.WriteFile(filepath.Join(dir, "scl.toml"), toml, 0o644))
+	_, _, stderr := runCmd("check", "testdata/scl/scl.dxf", "-p", filepath.Join(dir, "scl.toml"), "-o", filepath.Join(dir, "out"))
+	assert.Regexp(t, `warning CHK313: B1 is LVL with Fc_perp 400 psi, less than the 625 psi of joists bearing on it`, stderr)
+
+	_, _, stderr = runCmd("check", "testdata/scl/scl.dxf", "-p", "testdata/scl/scl.toml", "-o", filepath.Join(dir, "out2"))
+	assert.NotContains(t, stderr, "CHK313")
+}
