@@ -3,7 +3,7 @@
 //
 // Usage:
 //
-//	go run ./samples/bigplan -joists 100000 -o big.dxf [-r12] [-outlines] [-project big.toml]
+//	go run ./samples/bigplan -joists 100000 -o big.dxf [-r12] [-outlines] [-beams] [-project big.toml]
 //
 // The flags:
 //
@@ -11,6 +11,8 @@
 //	-o FILE          DXF file to write (default big.dxf)
 //	-r12             write AC1009 (R12, POLYLINE zone outlines) instead of AC1015 (R2000)
 //	-outlines        draw each joist as a rectangle of four lines 1.5 in wide, not its centre line
+//	-beams           draw posts under every beam line, so each beam is checked as a member
+//	                 (the project file then gives the beams' and posts' sizes)
 //	-project FILE    also write the project file that goes with the plan
 //
 // The plan is a grid of units of four joist runs each, one load zone per
@@ -18,8 +20,12 @@
 // continuous over an interior wall with blocking drawn, cantilevers, roof
 // bays with wind uplift that need blocking rows, undersized storage bays
 // that fail, and a few joists drawn short of their beam (error members).
-// The layout is described in package samples/bigplan/synth. The output is
-// deterministic. Then:
+// With -beams, square 6x6 posts on layer POST-1 stand under both ends of
+// every beam line and between, at most 16 ft apart, and the project file
+// sizes the beams ((3) 2x12) and the posts (6x6, 8 ft): the same joists on
+// beams that are members, where without -beams the beams stay rigid
+// bearings. The layout is described in package samples/bigplan/synth. The
+// output is deterministic. Then:
 //
 //	framecheck check big.dxf -p big.toml -o big-out
 package main
@@ -48,6 +54,7 @@ func run(args []string, stdout, stderr io.Writer) int {
 	r12 := fs.Bool("r12", false, "write R12 (AC1009) instead of R2000 (AC1015)")
 	project := fs.String("project", "", "also write the project file (TOML) here")
 	outlines := fs.Bool("outlines", false, "draw each joist as a rectangle of four lines 1.5 in wide")
+	beams := fs.Bool("beams", false, "draw posts under every beam, so the beams are checked as members")
 	if err := fs.Parse(args); err != nil {
 		return 2
 	}
@@ -59,15 +66,19 @@ func run(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "bigplan: -joists %d: want 1 to 10000000\n", *n)
 		return 2
 	}
-	st, err := writeFile(*out, synth.Options{Joists: *n, R12: *r12, Outlines: *outlines})
+	o := synth.Options{Joists: *n, R12: *r12, Outlines: *outlines, Beams: *beams}
+	st, err := writeFile(*out, o)
 	if err != nil {
 		fmt.Fprintf(stderr, "bigplan: %v\n", err)
 		return 2
 	}
 	fmt.Fprintf(stdout, "wrote %s: %d joists in %d runs, %d units (%d short of a beam, %d failing by design in storage bays)\n",
 		*out, st.Joists, st.Runs, st.Units, st.ShortJoists, st.StorageInterior)
+	if *beams {
+		fmt.Fprintf(stdout, "%d beams on %d posts\n", st.Beams, st.Posts)
+	}
 	if *project != "" {
-		if err := os.WriteFile(*project, []byte(synth.Project), 0o644); err != nil {
+		if err := os.WriteFile(*project, []byte(synth.ProjectFor(o)), 0o644); err != nil {
 			fmt.Fprintf(stderr, "bigplan: %v\n", err)
 			return 2
 		}

@@ -30,6 +30,18 @@ func TestRun(t *testing.T) {
 	if p, err := os.ReadFile(toml); err != nil || string(p) != synth.Project {
 		t.Errorf("project file: %v", err)
 	}
+	// -beams: the posts drawn, and the project file that sizes them
+	out.Reset()
+	if code := run([]string{"-joists", "500", "-beams", "-o", dxf, "-project", toml}, &out, &errOut); code != 0 {
+		t.Fatalf("run -beams = %d, stderr %q", code, errOut.String())
+	}
+	want, st := synth.Build(synth.Options{Joists: 500, Beams: true})
+	if got, err := os.ReadFile(dxf); err != nil || !bytes.Equal(got, want) || st.Posts == 0 {
+		t.Errorf("-beams: written file differs from synth.Build (%v), or no posts (%d)", err, st.Posts)
+	}
+	if p, err := os.ReadFile(toml); err != nil || string(p) != synth.ProjectBeams {
+		t.Errorf("-beams: project file is not synth.ProjectBeams (%v)", err)
+	}
 	for _, args := range [][]string{{"-x"}, {"extra"}, {"-joists", "0"}} {
 		errOut.Reset()
 		if code := run(args, &out, &errOut); code != 2 {

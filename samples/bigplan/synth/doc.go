@@ -29,6 +29,15 @@
 // framing's 120 in neighbour reach, so each run's edge joists are edges.
 // Every fifth flush-beam run has one joist drawn 6 in short of the beam.
 //
+// With Options.Beams, every beam line (one per flush-beam and storage run,
+// two per roof run: 33 beams to each 40 runs) stands on square 6x6 posts
+// on layer POST-1, one under each end with its outer face at the beam's
+// end and as few between, equally spaced, as keep the spans within 16 ft;
+// ProjectBeams sizes the beams and posts, so each beam is checked as a
+// member with the reactions of the joists it carries. Without it, the
+// same beam lines have no supports of their own and stay rigid bearings.
+//
 // Everything is computed from the run index: the same Options give the
-// same bytes. Project is the project file that goes with every plan.
+// same bytes. ProjectFor(o) is the project file that goes with a plan:
+// Project, or ProjectBeams with Beams.
 package synth

@@ -1,6 +1,9 @@
 package synth
 
-import "fmt"
+import (
+	"fmt"
+	"math"
+)
 
 // wall draws a double-line wall of thickness tIn centred on y = yc from
 // x1 to x2.
@@ -20,9 +23,10 @@ type drawer interface {
 // callout. Joist ends stop 0.5 in inside a wall's outer face, 0.5 in from
 // a flush beam's line and 0.75 in short of a dropped beam's line.
 //
-// With outlines, each joist is drawn as a rectangle of four LINEs 1.5 in
-// wide (a 2x) around that centre line.
-func drawRun(w drawer, r *run, outlines bool) {
+// With o.Outlines, each joist is drawn as a rectangle of four LINEs 1.5 in
+// wide (a 2x) around that centre line. With o.Beams, each beam line gets
+// its posts (beamPosts). It returns the beam lines and posts drawn.
+func drawRun(w drawer, r *run, o Options) (beams, posts int) {
 	const ext = extWallIn / 2
 	x1, x2 := r.x0-8, r.x0+r.widthIn()+8
 	y0, s := r.y0, r.spanIn
@@ -35,6 +39,7 @@ func drawRun(w drawer, r *run, outlines bool) {
 		from, to = -ext+0.5, s+ext-0.5
 	case kindFlush, kindStorage:
 		w.Line(lyBeamFlush, x1, y0, x2, y0)
+		beams, posts = 1, drawPosts(w, o.Beams, x1, x2, y0)
 		wall(w, lyWallExt, x1, x2, y0+s, extWallIn)
 		from, to = 0.5, s+ext-0.5
 	case kindContinuous:
@@ -51,6 +56,7 @@ func drawRun(w drawer, r *run, outlines bool) {
 	case kindRoof:
 		w.Line(lyBeamDropped, x1, y0, x2, y0)
 		w.Line(lyBeamDropped, x1, y0+s, x2, y0+s)
+		beams, posts = 2, drawPosts(w, o.Beams, x1, x2, y0)+drawPosts(w, o.Beams, x1, x2, y0+s)
 		from, to = 0.75, s-0.75
 		layer = lyJoistRoof
 	}
@@ -60,7 +66,7 @@ func drawRun(w drawer, r *run, outlines bool) {
 		if i == r.short {
 			a += shortByIn
 		}
-		if !outlines {
+		if !o.Outlines {
 			w.Line(layer, x, y0+a, x, y0+to)
 			continue
 		}
@@ -75,6 +81,49 @@ func drawRun(w drawer, r *run, outlines bool) {
 		w.Line(lyNote, x1+4, ly, x2-4, ly)
 		w.Text(lyNote, r.x0+8, ly+3, 6, 0, r.callout)
 	}
+	if !o.Beams {
+		beams, posts = 0, 0
+	}
+	return beams, posts
+}
+
+// Posts under the beams (Options.Beams).
+const (
+	// postIn is a 6x6 post's dressed size, 5.5 in (NDS 2018 Supplement
+	// Table 1B), drawn as a square outline.
+	postIn = 5.5
+	// maxBeamSpanIn is the longest beam span between posts: 16 ft, the
+	// upper end of what sawn and timber beams carrying a floor span
+	// between posts (common practice, no source).
+	maxBeamSpanIn = 192.0
+)
+
+// beamPosts returns the x of the post centres under a beam drawn from x1
+// to x2: one under each end, its outer face flush with the beam's end,
+// and as few between, equally spaced, as keep every span (centre to
+// centre) within maxBeamSpanIn.
+func beamPosts(x1, x2 float64) []float64 {
+	a, b := x1+postIn/2, x2-postIn/2
+	n := max(1, int(math.Ceil((b-a)/maxBeamSpanIn-1e-9)))
+	xs := make([]float64, n+1)
+	for i := range xs {
+		xs[i] = a + (b-a)*float64(i)/float64(n)
+	}
+	return xs
+}
+
+// drawPosts draws, when on, the posts of the beam from x1 to x2 on y =
+// yc as closed square outlines on the posts layer; it returns how many.
+func drawPosts(w drawer, on bool, x1, x2, yc float64) int {
+	if !on {
+		return 0
+	}
+	xs := beamPosts(x1, x2)
+	const h = postIn / 2
+	for _, x := range xs {
+		w.ClosedPolyline(lyPost, [][2]float64{{x - h, yc - h}, {x + h, yc - h}, {x + h, yc + h}, {x - h, yc + h}})
+	}
+	return len(xs)
 }
 
 // drawZone outlines a unit's runs as one zone, writes the zone name inside

@@ -3,6 +3,7 @@ package synth
 import (
 	"fmt"
 	"io"
+	"slices"
 
 	"framecheck/samples/internal/dxfw"
 )
@@ -21,6 +22,7 @@ const (
 	lyNote        = "FRAMING-NOTE"
 	lyGrid        = "GRID"
 	lyNotes       = "GENERAL-NOTES"
+	lyPost        = "POST-1" // only with Options.Beams
 )
 
 var layers = []dxfw.Layer{
@@ -48,6 +50,13 @@ type Options struct {
 	// Outlines draws each joist as a rectangle of four LINEs 1.5 in wide
 	// instead of its centre line: the same plan, four times the joist lines.
 	Outlines bool
+	// Beams draws posts under every beam line (the flush beam of each
+	// flush-beam and storage run, the two dropped beams of each roof run)
+	// on layer POST-1, so that each beam bears on posts and is checked as
+	// a member; use ProjectFor(o) as its project file, which gives the
+	// beams' and posts' sizes. The joists, walls and beam lines are those
+	// of the plan without Beams, so the two compare like for like.
+	Beams bool
 }
 
 // Stats is what the plan holds, by construction.
@@ -69,6 +78,9 @@ type Stats struct {
 	RoofEdgeRuns int
 	// Kinds counts joists by run kind.
 	Kinds map[string]int
+	// Beams is the number of beam lines drawn and Posts the number of
+	// posts under them (Options.Beams; both 0 without it).
+	Beams, Posts int
 }
 
 // runKind is what a run is drawn as.
@@ -212,15 +224,21 @@ func draw(o Options) (*dxfw.Writer, Stats) {
 	if o.Joists < 1 {
 		o.Joists = 1
 	}
-	w := dxfw.New(layers)
+	ls := layers
+	if o.Beams {
+		ls = append(slices.Clip(layers), dxfw.Layer{Name: lyPost, Color: 1})
+	}
+	w := dxfw.New(ls)
 	if o.R12 {
-		w = dxfw.NewR12(layers)
+		w = dxfw.NewR12(ls)
 	}
 	runs, units, _ := planRuns(o.Joists)
 	st := Stats{Runs: len(runs), Units: units, Kinds: map[string]int{}}
 	for ri := range runs {
 		r := &runs[ri]
-		drawRun(w, r, o.Outlines)
+		nb, np := drawRun(w, r, o)
+		st.Beams += nb
+		st.Posts += np
 		st.Joists += r.count
 		st.Kinds[kindNames[r.kind]] += r.count
 		if r.short >= 0 {

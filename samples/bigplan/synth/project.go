@@ -1,5 +1,10 @@
 package synth
 
+import (
+	"fmt"
+	"strings"
+)
+
 // Project is the project file (framecheck.toml) for every synthetic plan:
 // the layer roles, supports, lumber and the five zones the units use.
 const Project = `# Project file for a synthetic framing plan written by samples/bigplan.
@@ -106,3 +111,51 @@ ceiling_braces_bottom = false
 candidates = ["2x6", "2x8", "2x10", "2x12", "2x14"]
 blocking_piece_weight_bf = 2.0
 `
+
+// ProjectBeams is Project with what makes the beams of a plan drawn with
+// Options.Beams members: the posts layer, each beam layer's size and
+// lumber, and the posts' size, lumber and height. Everything else is
+// Project's, so a plan checked with each compares like for like.
+var ProjectBeams = insertAfter(Project,
+	"labels = [\"FRAMING-NOTE*\"]\n", `posts = ["POST*"]            # POST-1: the posts under the beams (Options.Beams)
+`,
+	"kind = \"flush-beam\"\nbearing_in = 1.5\n", `size = "6x14"                 # a timber (Table 4D beams and stringers) on posts at up to 16 ft;
+species = "Douglas Fir-Larch" # some STORAGE beams fail, as their joists do
+grade = "No.1"
+`,
+	"kind = \"dropped-beam\"\nbearing_in = 1.75\n", `size = "2x12"                 # (3) 2x12 built up: roof beams on posts at up to 16 ft
+plies = 3
+species = "Douglas Fir-Larch"
+grade = "No.2"
+
+[[post]]
+layers = ["POST*"]
+size = "6x6"
+species = "Douglas Fir-Larch"
+grade = "No.1"
+height_in = 96.0              # 8 ft from the footing to the beam
+ke = 1.0
+`)
+
+// ProjectFor returns the project file for the plan o describes:
+// ProjectBeams with Options.Beams, else Project.
+func ProjectFor(o Options) string {
+	if o.Beams {
+		return ProjectBeams
+	}
+	return Project
+}
+
+// insertAfter inserts into s, after each anchor (which must occur once),
+// the text that follows it in pairs.
+func insertAfter(s string, pairs ...string) string {
+	for i := 0; i+1 < len(pairs); i += 2 {
+		anchor, text := pairs[i], pairs[i+1]
+		if strings.Count(s, anchor) != 1 {
+			panic(fmt.Sprintf("synth: project anchor %q found %d times, want once", anchor, strings.Count(s, anchor)))
+		}
+		k := strings.Index(s, anchor) + len(anchor)
+		s = s[:k] + text + s[k:]
+	}
+	return s
+}

@@ -2,11 +2,15 @@ package synth
 
 import (
 	"bytes"
+	"fmt"
+	"math"
 	"reflect"
+	"strings"
 	"testing"
 
 	"framecheck/dxfimport"
 	"framecheck/framing"
+	"framecheck/project"
 )
 
 func TestBuildIsDeterministic(t *testing.T) {
@@ -112,4 +116,100 @@ func projectOptions() framing.Options {
 		{Layers: []string{"BEAM-DROPPED*"}, Kind: framing.KindDroppedBeam, BearingIn: 1.75},
 	}
 	return o
+}
+
+// TestBeamsPlan: with Options.Beams the plan groups into the same joists
+// as without, and every beam line bears on the posts drawn under it: one
+// post under each end, its outer face at the beam's end (a 6x6 is 5.5 in,
+// NDS 2018 Supplement Table 1B, so its centre 2.75 in in), spans between
+// posts no longer than 16 ft, each post under one beam. Without Beams no
+// post is drawn and every beam stays a rigid bearing.
+func TestBeamsPlan(t *testing.T) {
+	read := func(o Options) (*framing.Plan, Stats) {
+		data, st := Build(o)
+		d, err := dxfimport.Read(bytes.NewReader(data), "big.dxf", dxfimport.Options{Units: "in"})
+		if err != nil {
+			t.Fatal(err)
+		}
+		if err := d.Issues.Err(); err != nil {
+			t.Fatal(err)
+		}
+		return framing.Group(d, projectOptions()), st
+	}
+	for _, r12 := range []bool{false, true} {
+		rigid, rst := read(Options{Joists: 3000, R12: r12})
+		beams, bst := read(Options{Joists: 3000, R12: r12, Beams: true})
+		if len(rigid.Members) != len(beams.Members) || len(rigid.Members) != 3000 {
+			t.Fatalf("r12 %v: members %d and %d, want 3000", r12, len(rigid.Members), len(beams.Members))
+		}
+		for k := range rigid.Members {
+			a, b := &rigid.Members[k], &beams.Members[k]
+			if a.Start != b.Start || a.End != b.End || fmt.Sprint(a.Spans()) != fmt.Sprint(b.Spans()) || a.TribIn != b.TribIn || a.Error != b.Error {
+				t.Fatalf("r12 %v: %s differs with Beams", r12, a.ID)
+			}
+		}
+		if rst.Beams != 0 || rst.Posts != 0 || len(rigid.Posts) != 0 {
+			t.Errorf("r12 %v: without Beams, stats %d beams %d posts, %d posts read", r12, rst.Beams, rst.Posts, len(rigid.Posts))
+		}
+		if len(rigid.Beams) != bst.Beams || len(beams.Beams) != bst.Beams || len(beams.Posts) != bst.Posts || bst.Posts < 2*bst.Beams {
+			t.Fatalf("r12 %v: beams %d/%d, posts %d, stats %d beams %d posts", r12, len(rigid.Beams), len(beams.Beams),
+				len(beams.Posts), bst.Beams, bst.Posts)
+		}
+		under := make([]int, len(beams.Posts))
+		for i := range beams.Beams {
+			b, r := &beams.Beams[i], &rigid.Beams[i]
+			if !r.Rigid || len(r.Bearings) != 0 {
+				t.Errorf("r12 %v: without Beams %s is not a rigid bearing", r12, r.ID)
+			}
+			if b.Rigid || len(b.Bearings) < 2 || len(b.Carried) == 0 || len(b.Carried) != len(r.Carried) {
+				t.Fatalf("r12 %v: %s rigid %v, %d bearings, carries %d (%d without posts)", r12, b.ID, b.Rigid,
+					len(b.Bearings), len(b.Carried), len(r.Carried))
+			}
+			const tol = 1e-6
+			brs := b.Bearings
+			if math.Abs(brs[0].AtIn-2.75) > tol || math.Abs(brs[len(brs)-1].AtIn-(b.LengthIn-2.75)) > tol {
+				t.Errorf("r12 %v: %s end posts at %g and %g in of %g", r12, b.ID, brs[0].AtIn, brs[len(brs)-1].AtIn, b.LengthIn)
+			}
+			for j, br := range brs {
+				if br.Kind != framing.BeamOnPost || br.LengthIn != 5.5 {
+					t.Errorf("r12 %v: %s bears on %s %d, %g in long; want posts 5.5 in", r12, b.ID, br.Kind, br.Index, br.LengthIn)
+					continue
+				}
+				under[br.Index]++
+				if j > 0 && br.AtIn-brs[j-1].AtIn > 192+tol {
+					t.Errorf("r12 %v: %s spans %g in between posts, over 16 ft", r12, b.ID, br.AtIn-brs[j-1].AtIn)
+				}
+			}
+		}
+		for i, n := range under {
+			if n != 1 {
+				t.Errorf("r12 %v: %s under %d beams, want 1", r12, beams.Posts[i].ID, n)
+			}
+		}
+	}
+}
+
+// TestProjectBeams: ProjectBeams is a project file framecheck reads
+// without error, with Project's settings and the beams' and posts' sizes
+// added; ProjectFor picks it only with Beams.
+func TestProjectBeams(t *testing.T) {
+	if ProjectFor(Options{}) != Project || ProjectFor(Options{Beams: true}) != ProjectBeams {
+		t.Error("ProjectFor picks the wrong file")
+	}
+	for name, text := range map[string]string{"Project": Project, "ProjectBeams": ProjectBeams} {
+		if _, err := project.ParseProject(name+".toml", []byte(text)); err != nil {
+			t.Fatalf("%s: %v", name, err)
+		}
+	}
+	p, _ := project.ParseProject("beams.toml", []byte(ProjectBeams))
+	flush, dropped := p.SupportOf("BEAM-FLUSH"), p.SupportOf("BEAM-DROPPED")
+	if flush == nil || flush.Size != "6x14" || dropped == nil || dropped.Size != "2x12" || dropped.Plies != 3 {
+		t.Errorf("beam sizes: flush %+v, dropped %+v", flush, dropped)
+	}
+	if len(p.Posts) != 1 || p.Posts[0].Size != "6x6" || p.Posts[0].HeightIn != 96 || p.PostFor(lyPost) == nil {
+		t.Errorf("posts: %+v", p.Posts)
+	}
+	if !strings.HasPrefix(ProjectBeams, Project[:strings.Index(Project, "[layers]")]) {
+		t.Error("ProjectBeams does not start as Project does")
+	}
 }
