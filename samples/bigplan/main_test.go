@@ -64,38 +64,45 @@ type ezdxfCounts struct {
 
 // TestAgainstEzdxf compares what ezdxf read from the 500-joist plans
 // (audit clean, entities per layer) with the plans written now, read by
-// package dxfimport.
+// package dxfimport: testdata/ezdxf_500.json for the plain plans,
+// testdata/ezdxf_500_beams.json for those drawn with -beams (75 posts on
+// POST-1 under 21 beam lines, by ezdxf's count).
 func TestAgainstEzdxf(t *testing.T) {
-	raw, err := os.ReadFile(filepath.Join("testdata", "ezdxf_500.json"))
-	if err != nil {
-		t.Fatal(err)
-	}
-	var ez map[string]ezdxfCounts
-	if err := json.Unmarshal(raw, &ez); err != nil {
-		t.Fatal(err)
-	}
-	for flavour, r12 := range map[string]bool{"R2000": false, "R12": true} {
-		e, ok := ez[flavour]
-		if !ok {
-			t.Fatalf("testdata/ezdxf_500.json has no %s", flavour)
-		}
-		if e.AuditErrors != 0 || e.AuditFixes != 0 {
-			t.Errorf("%s: ezdxf audit %d errors, %d fixes", flavour, e.AuditErrors, e.AuditFixes)
-		}
-		data, _ := synth.Build(synth.Options{Joists: 500, R12: r12})
-		d, err := dxfimport.Read(bytes.NewReader(data), "big.dxf", dxfimport.Options{Units: "in"})
+	for file, beams := range map[string]bool{"ezdxf_500.json": false, "ezdxf_500_beams.json": true} {
+		raw, err := os.ReadFile(filepath.Join("testdata", file))
 		if err != nil {
 			t.Fatal(err)
 		}
-		if d.Version != e.AcadVer {
-			t.Errorf("%s: $ACADVER %q, ezdxf %q", flavour, d.Version, e.AcadVer)
+		var ez map[string]ezdxfCounts
+		if err := json.Unmarshal(raw, &ez); err != nil {
+			t.Fatal(err)
 		}
-		got := map[string]int{}
-		for _, en := range d.Entities {
-			got[en.Pos.Layer]++
-		}
-		if !reflect.DeepEqual(got, e.Layers) {
-			t.Errorf("%s: entities per layer\n ours  %v\n ezdxf %v", flavour, got, e.Layers)
+		for flavour, r12 := range map[string]bool{"R2000": false, "R12": true} {
+			e, ok := ez[flavour]
+			if !ok {
+				t.Fatalf("testdata/%s has no %s", file, flavour)
+			}
+			if e.AuditErrors != 0 || e.AuditFixes != 0 {
+				t.Errorf("%s %s: ezdxf audit %d errors, %d fixes", file, flavour, e.AuditErrors, e.AuditFixes)
+			}
+			data, st := synth.Build(synth.Options{Joists: 500, R12: r12, Beams: beams})
+			d, err := dxfimport.Read(bytes.NewReader(data), "big.dxf", dxfimport.Options{Units: "in"})
+			if err != nil {
+				t.Fatal(err)
+			}
+			if d.Version != e.AcadVer {
+				t.Errorf("%s %s: $ACADVER %q, ezdxf %q", file, flavour, d.Version, e.AcadVer)
+			}
+			got := map[string]int{}
+			for _, en := range d.Entities {
+				got[en.Pos.Layer]++
+			}
+			if !reflect.DeepEqual(got, e.Layers) {
+				t.Errorf("%s %s: entities per layer\n ours  %v\n ezdxf %v", file, flavour, got, e.Layers)
+			}
+			if e.Layers["POST-1"] != st.Posts || beams != (st.Posts > 0) {
+				t.Errorf("%s %s: ezdxf read %d posts, stats say %d", file, flavour, e.Layers["POST-1"], st.Posts)
+			}
 		}
 	}
 }

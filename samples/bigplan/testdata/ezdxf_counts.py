@@ -5,6 +5,8 @@ them and count model-space entities per layer; print JSON.
     go run ./samples/bigplan -joists 500 -r12 -o /tmp/b12.dxf
     /usr/bin/python3 samples/bigplan/testdata/ezdxf_counts.py /tmp/b.dxf /tmp/b12.dxf \
         > samples/bigplan/testdata/ezdxf_500.json
+
+and the same with -beams on both commands into ezdxf_500_beams.json.
 """
 import collections
 import json
