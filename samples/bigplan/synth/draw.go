@@ -82,7 +82,7 @@ func drawRun(w drawer, r *run, o Options) (beams, posts int) {
 		w.Text(lyNote, r.x0+8, ly+3, 6, 0, r.callout)
 	}
 	if !o.Beams {
-		beams, posts = 0, 0
+		return 0, 0 // the beam lines are rigid bearings: not counted
 	}
 	return beams, posts
 }
@@ -92,9 +92,9 @@ const (
 	// postIn is a 6x6 post's dressed size, 5.5 in (NDS 2018 Supplement
 	// Table 1B), drawn as a square outline.
 	postIn = 5.5
-	// maxBeamSpanIn is the longest beam span between posts: 16 ft, the
-	// upper end of what sawn and timber beams carrying a floor span
-	// between posts (common practice, no source).
+	// maxBeamSpanIn is the longest beam span between posts: 16 ft, about
+	// the longest span between posts of a sawn or timber beam carrying a
+	// floor (common practice, no source).
 	maxBeamSpanIn = 192.0
 )
 
