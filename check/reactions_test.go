@@ -1,6 +1,7 @@
 package check
 
 import (
+	"reflect"
 	"strings"
 	"testing"
 )
@@ -64,6 +65,41 @@ func TestReactions_EndPartOfBearing(t *testing.T) {
 	for _, re := range f.Reactions {
 		if re.UpLb != 0 || re.UpCombo != "" || re.DownLb <= 0 {
 			t.Errorf("floor joist: reaction %+v, want downward only", re)
+		}
+	}
+}
+
+// TestCheckMemberReactionsSame: CheckMemberReactions gives what
+// CheckMember and ServiceReactions give one after the other (one analysis
+// for both; common practice, no source), for a beam carrying joists, a
+// two-span joist with drawn blocking, a roof joist under net uplift and a
+// member that cannot be checked.
+func TestCheckMemberReactionsSame(t *testing.T) {
+	s := DefaultSettings()
+	beam := Member{ID: "B1", Size: "4x12", Species: "Douglas Fir-Larch", Grade: "No.1", LengthIn: 144,
+		Bearings: []Bearing{{AtIn: 0, LengthIn: 3.5}, {AtIn: 144, LengthIn: 3.5}}, Use: "floor",
+		LiveLimit: 360, TotalLimit: 240, TopBracedAtPoints: true}
+	for x := 12.0; x < 144; x += 12 {
+		beam.PointLoads = append(beam.PointLoads, PointLoad{AtIn: x, DeadLb: 144, LiveLb: 480})
+	}
+	twoSpan := Member{ID: "M1", Size: "2x10", Species: "Douglas Fir-Larch", Grade: "No.2", LengthIn: 290,
+		Bearings:  []Bearing{{AtIn: 0, LengthIn: 3.5}, {AtIn: 145, LengthIn: 3.5}, {AtIn: 290, LengthIn: 3.5}},
+		SpacingIn: 16, TribIn: 16, Use: "floor", Loads: AreaLoads{DeadPsf: 15, LivePsf: 40},
+		LiveLimit: 360, TotalLimit: 240, BlockingAtIn: []float64{72}, Repetitive: true}
+	uplift := Member{ID: "M2", Size: "2x8", Species: "Douglas Fir-Larch", Grade: "No.2", LengthIn: 168,
+		Bearings: []Bearing{{AtIn: 0, LengthIn: 3.5}, {AtIn: 168, LengthIn: 3.5}}, SpacingIn: 24, TribIn: 24,
+		Use: "roof", Loads: AreaLoads{DeadPsf: 10, RoofLivePsf: 20, WindUpPsf: 40}, LiveLimit: 240, TotalLimit: 180}
+	bad := uplift
+	bad.Size = "2x7"
+	for _, m := range []Member{beam, twoSpan, uplift, bad} {
+		r, rs, err := CheckMemberReactions(m, s)
+		wantR := CheckMember(m, s)
+		wantRs, wantErr := ServiceReactions(m, s)
+		if !reflect.DeepEqual(r, wantR) {
+			t.Errorf("%s: result differs from CheckMember's", m.ID)
+		}
+		if !reflect.DeepEqual(rs, wantRs) || (err == nil) != (wantErr == nil) {
+			t.Errorf("%s: reactions %v (%v), ServiceReactions %v (%v)", m.ID, rs, err, wantRs, wantErr)
 		}
 	}
 }

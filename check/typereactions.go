@@ -39,6 +39,26 @@ func ServiceReactions(m Member, s Settings) ([]LoadReactions, error) {
 	return e.serviceReactions()
 }
 
+// CheckMemberReactions is CheckMember and ServiceReactions of m from one
+// analysis: the load path needs both of every beam.
+func CheckMemberReactions(m Member, s Settings) (Result, []LoadReactions, error) {
+	e, err := newEngine(m, s)
+	defer e.release()
+	if err != nil {
+		return errorResult(m, e, err), nil, err
+	}
+	rs, rerr := e.serviceReactions()
+	var r Result
+	if e.drawnInSpans() {
+		r = e.solveFrom(nil)
+	} else {
+		n, steps, bot := e.solveBlocking()
+		r = e.result(n, bot)
+		r.BlockingSteps = steps
+	}
+	return r, rs, rerr
+}
+
 func (e *engine) serviceReactions() ([]LoadReactions, error) {
 	out := make([]LoadReactions, len(e.m.Bearings))
 	for j, b := range e.m.Bearings {

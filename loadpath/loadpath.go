@@ -22,6 +22,7 @@ package loadpath
 import (
 	"fmt"
 	"sort"
+	"strconv"
 	"strings"
 
 	"framecheck/check"
@@ -154,6 +155,7 @@ func Solve(p *Plan, s check.Settings) *Outcome {
 		o.Errors = append(o.Errors, "load path cycle: "+names(p, cyc))
 	}
 	incoming := make([][]check.PointLoad, len(p.Members))
+	solved := map[string]solvedMember{}
 	for i, k := range order {
 		mi := &p.Members[k]
 		cm := mi.Check
@@ -170,12 +172,23 @@ func Solve(p *Plan, s check.Settings) *Outcome {
 		if mi.Result != nil && mi.Reactions != nil && len(incoming[k]) == 0 {
 			out.Result, rs = *mi.Result, mi.Reactions
 		} else {
-			if len(mi.Candidates) > 0 {
-				cm = pickSize(cm, mi, s)
-				out.Input = cm
+			// Members alike for design (the same input but for the ID and
+			// the names of the loads they carry, the same candidates) are
+			// analysed once: a plan repeats its beams run after run.
+			key := solveKey(cm, mi)
+			sv, ok := solved[key]
+			if !ok {
+				if len(mi.Candidates) > 0 {
+					cm = pickSize(cm, mi, s)
+				}
+				sv.input = cm
+				sv.result, sv.reactions, sv.err = check.CheckMemberReactions(cm, s)
+				solved[key] = sv
 			}
-			out.Result = check.CheckMember(cm, s)
-			rs, err = check.ServiceReactions(cm, s)
+			cm.Size, cm.SelfWeightPlf = sv.input.Size, sv.input.SelfWeightPlf
+			out.Input = cm
+			out.Result, rs, err = sv.result, sv.reactions, sv.err
+			out.Result.ID = cm.ID
 		}
 		own := cm // its own loads, as checked (the size picked sets its weight)
 		own.PointLoads = mi.Check.PointLoads
@@ -219,6 +232,30 @@ func Solve(p *Plan, s check.Settings) *Outcome {
 		}
 	}
 	return o
+}
+
+// solvedMember is one analysis of a member, shared by the members alike
+// for design (solveKey).
+type solvedMember struct {
+	input     check.Member // as analysed: the size picked, its weight
+	result    check.Result
+	reactions []check.LoadReactions
+	err       error
+}
+
+// solveKey is what makes two members alike for Solve: the check input but
+// for the ID and the names of the point loads (which member put them
+// there: the analysis does not read them), with the candidate sizes.
+func solveKey(cm check.Member, mi *MemberIn) string {
+	if len(cm.PointLoads) > 0 {
+		pls := make([]check.PointLoad, len(cm.PointLoads))
+		copy(pls, cm.PointLoads)
+		for i := range pls {
+			pls[i].Name = ""
+		}
+		cm.PointLoads = pls
+	}
+	return check.MemberKey(cm) + "|" + strings.Join(mi.Candidates, "|") + "|" + strconv.FormatFloat(mi.DensityPcf, 'g', -1, 64)
 }
 
 // pickSize returns cm with the first of mi's candidate sizes with which it

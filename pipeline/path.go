@@ -37,7 +37,9 @@ type PostOutcome struct {
 	Checked bool
 	Out     loadpath.PostOut
 	Size    string
-	// unknown names the beams on the post that could not be checked: the
+	// HeightIn is the post's height (its unbraced length), 0 when not known.
+	HeightIn float64
+	// Unknown names the beams on the post that could not be checked: the
 	// load they bring is not known, so the post is not passed on it.
 	Unknown []string
 }
@@ -109,7 +111,7 @@ const beamDensityPcf = woodDensityPcf
 //
 // With sizing (--size), each beam takes the lightest of [sizing]
 // beam_candidates with which it passes, its own weight following the size.
-func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, shifts []float64, usable []bool, s check.Settings, o *Outcome, sizing bool) {
+func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, keys []string, usable []bool, s check.Settings, o *Outcome, sizing bool) {
 	checkable := len(plan.Posts) > 0
 	for i := range plan.Beams {
 		checkable = checkable || !plan.Beams[i].Rigid
@@ -118,7 +120,7 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 		return // no beam with supports of its own, no post: every support is a rigid bearing
 	}
 	po := &PathOutcome{}
-	lp := &loadpath.Plan{}
+	lp := &loadpath.Plan{Members: make([]loadpath.MemberIn, 0, len(plan.Beams)+len(plan.Members))}
 	// Walls: every bearing-wall support line.
 	wallOf := map[int]int{}
 	for i, sp := range plan.Supports {
@@ -133,7 +135,7 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 		pt := &plan.Posts[i]
 		pc, checked, size := postInput(p, pt)
 		lp.Posts = append(lp.Posts, loadpath.PostIn{ID: pt.ID, Check: pc, Checked: checked})
-		po.Posts = append(po.Posts, PostOutcome{Post: pt, Checked: checked, Size: size})
+		po.Posts = append(po.Posts, PostOutcome{Post: pt, Checked: checked, Size: size, HeightIn: pc.HeightIn})
 	}
 	// Beams: members of the path when they have their own supports.
 	beamMember := make([]int, len(plan.Beams))
@@ -241,8 +243,11 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 			continue
 		}
 		cm := inputs[k]
-		cm.Size = o.Results[k].Size
-		key := memberKey(cm)
+		key := keys[k] // checkAll's, unless --size changed the size
+		if cm.Size != o.Results[k].Size || key == "" {
+			cm.Size = o.Results[k].Size
+			key = check.MemberKey(cm)
+		}
 		rs, ok := reactions[key]
 		if !ok {
 			var err error

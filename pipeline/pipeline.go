@@ -1,11 +1,9 @@
 package pipeline
 
 import (
-	"encoding/binary"
 	"errors"
 	"fmt"
 	"math"
-	"reflect"
 	"runtime"
 	"strings"
 	"sync"
@@ -147,7 +145,7 @@ func Run(in Input) (*Outcome, error) {
 	if in.Size {
 		o.Sizing = make([]*check.SizingResult, len(plan.Members))
 	}
-	checkAll(inputs, shifts, usable, settings, p, o)
+	keys := checkAll(inputs, shifts, usable, settings, p, o)
 	if in.Size {
 		sizeRuns(sameDepthGroups(plan, p.Sizing.SameDepth), inputs, shifts, usable, settings, o)
 	}
@@ -174,7 +172,7 @@ func Run(in Input) (*Outcome, error) {
 		o.Rows[i].Size = plan.Members[plan.Runs[runs[o.Rows[i].Run]].Members[0]].Size
 	}
 	o.Takeoff = framing.BuildTakeoff(plan, o.Rows)
-	runLoadPath(p, plan, inputs, shifts, usable, settings, o, in.Size)
+	runLoadPath(p, plan, inputs, keys, usable, settings, o, in.Size)
 	return o, nil
 }
 
@@ -261,7 +259,7 @@ func sizeRuns(groups [][]int, inputs []check.Member, shifts []float64, usable []
 			}
 			cm := inputs[k]
 			cm.Size = best
-			key := memberKey(cm)
+			key := check.MemberKey(cm)
 			r, ok := cache[key]
 			if !ok {
 				r = check.CheckMember(cm, s)
@@ -274,13 +272,14 @@ func sizeRuns(groups [][]int, inputs []check.Member, shifts []float64, usable []
 }
 
 // checkAll checks the usable members on every core. Members identical for
-// design (same check input but for the ID) are checked once.
-func checkAll(inputs []check.Member, shifts []float64, usable []bool, s check.Settings, p *project.Project, o *Outcome) {
-	keys := make([]string, len(inputs))
+// design (same check input but for the ID) are checked once. It returns
+// each usable member's key (check.MemberKey), "" for the others.
+func checkAll(inputs []check.Member, shifts []float64, usable []bool, s check.Settings, p *project.Project, o *Outcome) (keys []string) {
+	keys = make([]string, len(inputs))
 	par.Ranges(len(inputs), func(lo, hi int) {
 		for k := lo; k < hi; k++ {
 			if usable[k] {
-				keys[k] = memberKey(inputs[k])
+				keys[k] = check.MemberKey(inputs[k])
 			}
 		}
 	})
@@ -348,52 +347,7 @@ func checkAll(inputs []check.Member, shifts []float64, usable []bool, s check.Se
 			}
 		}
 	})
-}
-
-// memberKey is the check input less the ID, exactly: every field, floats
-// by their bits, strings and slices with their lengths. It walks the
-// struct by reflection, so a field added to check.Member is part of the
-// key without a change here.
-func memberKey(m check.Member) string {
-	m.ID = ""
-	var buf [256]byte
-	return string(appendKey(buf[:0], reflect.ValueOf(m)))
-}
-
-// appendKey appends an unambiguous encoding of v to b.
-func appendKey(b []byte, v reflect.Value) []byte {
-	switch v.Kind() {
-	case reflect.String:
-		b = binary.AppendUvarint(b, uint64(v.Len()))
-		return append(b, v.String()...)
-	case reflect.Float32, reflect.Float64:
-		return binary.LittleEndian.AppendUint64(b, math.Float64bits(v.Float()))
-	case reflect.Int, reflect.Int8, reflect.Int16, reflect.Int32, reflect.Int64:
-		return binary.AppendVarint(b, v.Int())
-	case reflect.Uint, reflect.Uint8, reflect.Uint16, reflect.Uint32, reflect.Uint64, reflect.Uintptr:
-		return binary.AppendUvarint(b, v.Uint())
-	case reflect.Bool:
-		if v.Bool() {
-			return append(b, 1)
-		}
-		return append(b, 0)
-	case reflect.Struct:
-		for i := 0; i < v.NumField(); i++ {
-			b = appendKey(b, v.Field(i))
-		}
-		return b
-	case reflect.Slice, reflect.Array:
-		b = binary.AppendUvarint(b, uint64(v.Len()))
-		for i := 0; i < v.Len(); i++ {
-			b = appendKey(b, v.Index(i))
-		}
-		return b
-	}
-	// Anything else (pointers, maps, interfaces): its printed form, as
-	// the key was before, length-prefixed.
-	s := fmt.Sprintf("%v", v)
-	b = binary.AppendUvarint(b, uint64(len(s)))
-	return append(b, s...)
+	return keys
 }
 
 // supportMemo is p.SupportOf remembering each layer's answer: a plan has

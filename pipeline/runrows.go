@@ -45,7 +45,7 @@ func decideRunRows(plan *framing.Plan, inputs []check.Member, shifts []float64, 
 			if usable[k] && o.Results[k].RowsPerSpan() != n {
 				cm := inputs[k]
 				cm.Size = o.Results[k].Size
-				key := fmt.Sprintf("%d|%s", n, memberKey(cm))
+				key := fmt.Sprintf("%d|%s", n, check.MemberKey(cm))
 				r, ok := withRows[key]
 				if !ok {
 					r = check.CheckWithRows(cm, settings, n)
@@ -118,7 +118,7 @@ func drawnRunRows(plan *framing.Plan, run framing.Run, inputs []check.Member, sh
 	run1 := func(kind string, k int, rel []float64, f func(check.Member, check.Settings, []float64) check.Result) check.Result {
 		cm := input(k)
 		at := toCheck(k, rel)
-		key := fmt.Sprintf("%s|%v|%s", kind, at, memberKey(cm))
+		key := fmt.Sprintf("%s|%v|%s", kind, at, check.MemberKey(cm))
 		r, ok := cache[key]
 		if !ok {
 			r = f(cm, settings, at)

@@ -118,8 +118,9 @@ func (b Beam) cuts(l Loads) []float64 {
 		}
 	}
 	// Snap to the supports and ends exactly.
+	fixed := append([]float64{0, L}, b.SupportsAtIn...)
 	for i, x := range out {
-		for _, s := range append([]float64{0, L}, b.SupportsAtIn...) {
+		for _, s := range fixed {
 			if math.Abs(x-s) <= tol {
 				out[i] = s
 			}

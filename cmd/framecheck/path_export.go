@@ -69,7 +69,7 @@ func exportLoadPath(o *outcome, toInch float64) *export.LoadPath {
 	for _, p := range po.Posts {
 		pt := p.Post
 		ep := export.PathPost{ID: pt.ID, Source: pt.Pos.String(), At: [2]float64{pt.At.X / toInch, pt.At.Y / toInch},
-			AtIn: [2]float64{pt.At.X, pt.At.Y}, Size: p.Size, Checked: p.Checked, Loads: typeLoads(p.Out.Loads)}
+			AtIn: [2]float64{pt.At.X, pt.At.Y}, Size: p.Size, HeightIn: p.HeightIn, Checked: p.Checked, Loads: typeLoads(p.Out.Loads)}
 		for _, pc := range p.Out.Cases {
 			if pc.PLb > ep.DownLb {
 				ep.DownLb, ep.DownCombo = pc.PLb, pc.Name

@@ -57,6 +57,9 @@ func TestCheckSCLBeamAndPostAbove(t *testing.T) {
 	live := 0.0
 	var p1 float64
 	for _, po := range r.LoadPath.Posts {
+		if po.Checked {
+			assert.Equal(t, 96.0, po.HeightIn, "%s: the [[post]] height_in of scl.toml", po.ID)
+		}
 		live += po.Loads.LiveLb
 		if po.At[1] == 0 {
 			p1 = po.Loads.LiveLb

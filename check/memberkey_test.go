@@ -1,27 +1,25 @@
-package pipeline
+package check
 
 import (
 	"fmt"
 	"reflect"
 	"testing"
-
-	"framecheck/check"
 )
 
 // TestMemberKey: identical check inputs but for the ID share a key, and a
 // change to any one field gives another key (checkAll checks one member
 // per key and copies its result to the others).
 func TestMemberKey(t *testing.T) {
-	base := check.Member{ID: "M1", Size: "2x10", Species: "Douglas Fir-Larch", Grade: "No.2", LengthIn: 146.25,
-		Bearings: []check.Bearing{{AtIn: 0, LengthIn: 1.5}, {AtIn: 144, LengthIn: 5.5}}, SpacingIn: 16, TribIn: 16,
-		Use: "floor", Loads: check.AreaLoads{DeadPsf: 12, LivePsf: 40}, LiveLimit: 360, TotalLimit: 240,
+	base := Member{ID: "M1", Size: "2x10", Species: "Douglas Fir-Larch", Grade: "No.2", LengthIn: 146.25,
+		Bearings: []Bearing{{AtIn: 0, LengthIn: 1.5}, {AtIn: 144, LengthIn: 5.5}}, SpacingIn: 16, TribIn: 16,
+		Use: "floor", Loads: AreaLoads{DeadPsf: 12, LivePsf: 40}, LiveLimit: 360, TotalLimit: 240,
 		BlockingAtIn: []float64{72}, Repetitive: true}
 	other := base
 	other.ID = "M2"
-	if memberKey(base) != memberKey(other) {
+	if MemberKey(base) != MemberKey(other) {
 		t.Fatal("members differing only in ID have different keys")
 	}
-	seen := map[string]string{memberKey(base): "base"}
+	seen := map[string]string{MemberKey(base): "base"}
 	v := reflect.ValueOf(base)
 	for i := 0; i < v.NumField(); i++ {
 		name := v.Type().Field(i).Name
@@ -29,11 +27,11 @@ func TestMemberKey(t *testing.T) {
 			continue
 		}
 		m := base
-		m.Bearings = append([]check.Bearing(nil), base.Bearings...)
+		m.Bearings = append([]Bearing(nil), base.Bearings...)
 		if !perturb(reflect.ValueOf(&m).Elem().Field(i)) {
 			t.Fatalf("field %s: test does not know how to change a %s", name, v.Field(i).Type())
 		}
-		k := memberKey(m)
+		k := MemberKey(m)
 		if prev, dup := seen[k]; dup {
 			t.Errorf("changing %s gives the key of %s", name, prev)
 		}
@@ -42,7 +40,7 @@ func TestMemberKey(t *testing.T) {
 	// -0 and 0 differ, as they did when the key was the %v text.
 	z := base
 	z.OverhangEndIn = negZero()
-	if (memberKey(z) == memberKey(base)) != (fmt.Sprint(z.OverhangEndIn) == fmt.Sprint(base.OverhangEndIn)) {
+	if (MemberKey(z) == MemberKey(base)) != (fmt.Sprint(z.OverhangEndIn) == fmt.Sprint(base.OverhangEndIn)) {
 		t.Error("-0 and 0 keyed unlike their printed form")
 	}
 }
