@@ -217,7 +217,7 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		return exitUsage
 	}
 	c.planData = data
-	scaleMemoryLimit(int64(len(data)))
+	scaleMemoryLimit(int64(len(data)), 0)
 	if afterRead != nil {
 		afterRead()
 	}
@@ -231,6 +231,10 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	if err != nil {
 		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitUsage
+	}
+	if o.Path != nil {
+		// the load path's outputs follow its beams, posts and joints
+		scaleMemoryLimit(int64(len(data)), len(o.Path.Beams)+len(o.Path.Posts)+len(o.Path.Joints))
 	}
 	if o.MarksFresh {
 		fmt.Fprintf(stderr, "framecheck: none of the %d marks kept in %s is on this plan: the marks are named afresh from J1\n",

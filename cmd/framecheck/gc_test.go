@@ -15,11 +15,11 @@ func TestScaleMemoryLimit(t *testing.T) {
 	defer debug.SetMemoryLimit(old)
 	defer func(v bool) { limitTuned = v }(limitTuned)
 	limitTuned = true
-	scaleMemoryLimit(1 << 20)
+	scaleMemoryLimit(1<<20, 0)
 	if got := debug.SetMemoryLimit(-1); got != memoryLimit {
 		t.Errorf("1 MiB drawing: limit %d, want %d", got, memoryLimit)
 	}
-	scaleMemoryLimit(100 << 20)
+	scaleMemoryLimit(100<<20, 0)
 	want := int64(30 * 100 << 20)
 	if total := machineMemory(); total > 0 && float64(want) > 0.6*float64(total) {
 		want = max(int64(memoryLimit), int64(0.6*float64(total)))
@@ -27,9 +27,18 @@ func TestScaleMemoryLimit(t *testing.T) {
 	if got := debug.SetMemoryLimit(-1); got != want {
 		t.Errorf("100 MiB drawing: limit %d, want %d", got, want)
 	}
+	// a load path of 20,000 items adds 8 KiB each
+	scaleMemoryLimit(40<<20, 20_000)
+	want = int64(30*40<<20) + 20_000*8<<10
+	if total := machineMemory(); total > 0 && float64(want) > 0.6*float64(total) {
+		want = max(int64(memoryLimit), int64(0.6*float64(total)))
+	}
+	if got := debug.SetMemoryLimit(-1); got != want {
+		t.Errorf("40 MiB drawing, 20,000 load-path items: limit %d, want %d", got, want)
+	}
 	limitTuned = false
 	debug.SetMemoryLimit(123 << 20)
-	scaleMemoryLimit(100 << 20)
+	scaleMemoryLimit(100<<20, 0)
 	if got := debug.SetMemoryLimit(-1); got != 123<<20 {
 		t.Errorf("GOMEMLIMIT set: limit changed to %d", got)
 	}
