@@ -389,6 +389,25 @@ func encodeResults(w *bufio.Writer, r *Results, lay jsonLayout) error {
 	}
 	me := newMemberEncoder(lay)
 	calcs := newCalcTable()
+	// Schema 3: the fields members of a mark share, found before the
+	// members are written (json_share.go).
+	var shares []*markShare
+	markAt := map[string]int{}
+	if lay.refs {
+		me.srcFile = sourceFileOf(r.Members)
+		me.toInch, _ = UnitToInch(r.DrawingUnits)
+		var err error
+		if shares, err = shareByMark(r, me, calcs, markAt); err != nil {
+			return err
+		}
+	}
+	// rounded returns v as schema 3 writes it (json_round.go).
+	rounded := func(v any) any {
+		if !lay.refs {
+			return v
+		}
+		return roundedCopy(v)
+	}
 	w.WriteString("{\n")
 	steps := []func() error{
 		func() error { return value("schema", schema) },
@@ -414,6 +433,15 @@ func encodeResults(w *bufio.Writer, r *Results, lay jsonLayout) error {
 			return value("datum", r.Datum)
 		},
 		func() error {
+			if me.srcFile == "" {
+				return nil
+			}
+			return value("source_file", me.srcFile)
+		},
+		func() error {
+			if lay.refs {
+				return writeMembersV3(w, key, r, me, calcs, shares, markAt)
+			}
 			return listBytes("members", len(r.Members), func(i int) ([]byte, error) {
 				m := memberForJSON(r.Members[i], calcs.id(&r.Members[i]))
 				return me.encode(&m, &r.Members[i])
@@ -427,11 +455,20 @@ func encodeResults(w *bufio.Writer, r *Results, lay jsonLayout) error {
 			return me.infos.write(w, key)
 		},
 		func() error {
-			return list("marks", len(r.Marks), func(i int) any {
+			return listBytes("marks", len(r.Marks), func(i int) ([]byte, error) {
 				m := r.Marks[i]
 				m.SpansIn = orEmpty(m.SpansIn)
 				m.BlockingRowsPerSpan = orEmpty(m.BlockingRowsPerSpan)
-				return m
+				b, err := json.Marshal(rounded(m))
+				if k, ok := markAt[m.Mark]; err != nil || !lay.refs || !ok || k != i {
+					return b, err
+				}
+				if sh := shares[i].shared(); len(sh) > 0 {
+					b = append(b[:len(b)-1], `,"shared":`...)
+					b = append(b, sharedJSON(sh)...)
+					b = append(b, '}')
+				}
+				return b, nil
 			})
 		},
 		func() error {
@@ -439,12 +476,19 @@ func encodeResults(w *bufio.Writer, r *Results, lay jsonLayout) error {
 				b := r.BlockingRows[i]
 				b.ClearIn = orEmpty(b.ClearIn)
 				b.Members = orEmpty(b.Members)
-				return b
+				return rounded(b)
 			})
 		},
 		func() error {
 			key("uplift")
-			if err := writeUpliftJSON(w, &r.Uplift); err != nil {
+			var marks map[string]string // member id to mark (schema 3)
+			if lay.refs {
+				marks = make(map[string]string, len(r.Members))
+				for i := range r.Members {
+					marks[r.Members[i].ID] = r.Members[i].Mark
+				}
+			}
+			if err := writeUpliftJSON(w, &r.Uplift, marks); err != nil {
 				return fmt.Errorf("uplift: %w", err)
 			}
 			return nil
@@ -453,12 +497,12 @@ func encodeResults(w *bufio.Writer, r *Results, lay jsonLayout) error {
 			if r.LoadPath == nil {
 				return nil
 			}
-			return value("load_path", r.LoadPath)
+			return value("load_path", rounded(r.LoadPath))
 		},
 		func() error {
 			t := r.Takeoff
 			t.Joists, t.Blocking, t.Hangers = orEmpty(t.Joists), orEmpty(t.Blocking), orEmpty(t.Hangers)
-			return value("takeoff", t)
+			return value("takeoff", rounded(t))
 		},
 		func() error { return value("summary", r.Summary) },
 		func() error {
@@ -466,7 +510,7 @@ func encodeResults(w *bufio.Writer, r *Results, lay jsonLayout) error {
 			a.CodeEditions, a.Combinations = orEmpty(a.CodeEditions), orEmpty(a.Combinations)
 			a.Switches, a.Zones = orEmpty(a.Switches), orEmpty(a.Zones)
 			a.DesignValues, a.Notes = orEmpty(a.DesignValues), orEmpty(a.Notes)
-			return value("assumptions", a)
+			return value("assumptions", rounded(a))
 		},
 	}
 	for _, step := range steps {

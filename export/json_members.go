@@ -27,6 +27,14 @@ type memberEncoder struct {
 	seen  map[cleanSlice]bool
 	cache map[cleanSlice][]byte
 	buf   []byte // the last member written, reused
+	// spans are the top-level fields of the last member written (layout
+	// 3), for leaving out those its mark shares (json_share.go).
+	spans []fieldSpan
+	// srcFile and toInch let layout 3 write a member's "line" for its
+	// source and leave out a location that can be derived (json_share.go);
+	// srcFile "" derives nothing.
+	srcFile string
+	toInch  float64
 }
 
 func newMemberEncoder(lay jsonLayout) *memberEncoder {
@@ -39,6 +47,8 @@ func newMemberEncoder(lay jsonLayout) *memberEncoder {
 func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 	var w jsonOut
 	w.round = e.lay.refs
+	w.rec = e.lay.refs
+	w.spans = e.spans[:0]
 	w.b = append(e.buf[:0], '{')
 	w.str("id", m.ID)
 	w.str("mark", m.Mark)
@@ -47,11 +57,15 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 	}
 	w.str("layer", m.Layer)
 	w.str("handle", m.Handle)
-	if m.Source != "" {
-		w.str("source", m.Source)
-	}
-	if m.Location != "" {
-		w.str("location", m.Location)
+	if e.lay.refs {
+		e.placeV3(&w, m)
+	} else {
+		if m.Source != "" {
+			w.str("source", m.Source)
+		}
+		if m.Location != "" {
+			w.str("location", m.Location)
+		}
 	}
 	w.num("datum_in", m.DatumIn)
 	if m.Generated {
@@ -72,6 +86,7 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 	w.str("zone", m.Zone)
 	if len(m.ZonePieces) > 0 {
 		w.key("zone_pieces")
+		w.depth++
 		w.b = append(w.b, '[')
 		for i, z := range m.ZonePieces {
 			if i > 0 {
@@ -86,6 +101,7 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 		}
 		w.b = append(w.b, ']')
 		w.first = false
+		w.depth--
 	}
 	if m.Calculation != "" {
 		w.str("calculation", m.Calculation)
@@ -114,6 +130,7 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 	}
 	if len(m.BlockingSteps) > 0 {
 		w.key("blocking_steps")
+		w.depth++
 		w.b = append(w.b, '[')
 		for i, s := range m.BlockingSteps {
 			if i > 0 {
@@ -133,6 +150,7 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 		}
 		w.b = append(w.b, ']')
 		w.first = false
+		w.depth--
 	}
 	if len(m.Info) > 0 {
 		if e.lay.refs {
@@ -154,8 +172,36 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 	if w.err != nil {
 		return nil, w.err
 	}
+	if n := len(w.spans); n > 0 {
+		w.spans[n-1].end = len(w.b)
+	}
+	e.spans = w.spans
 	e.buf = append(w.b, '}')
 	return e.buf, nil
+}
+
+// placeV3 writes where member m was drawn as schema 3 does: "line" rather
+// than a source that sourceText gives back from it, and no location when
+// locationOf gives it back from what the file holds ("location":"" when
+// m has none but one could be derived).
+func (e *memberEncoder) placeV3(w *jsonOut, m *Member) {
+	line, ok := 0, false
+	if m.Source != "" {
+		line, ok = sourceLine(m.Source, e.srcFile, m.Handle, m.Layer)
+		if ok {
+			w.key("line")
+			w.b = strconv.AppendInt(w.b, int64(line), 10)
+		} else {
+			w.str("source", m.Source)
+		}
+	}
+	loc, derivable := locationOf(e.srcFile, m.Handle, line, m.Layer, m.Start, m.End, e.toInch)
+	if derivable && loc == m.Location {
+		return
+	}
+	if m.Location != "" || derivable {
+		w.str("location", m.Location)
+	}
 }
 
 // jsonOut appends the fields of one JSON object.
@@ -163,6 +209,11 @@ type jsonOut struct {
 	b     []byte
 	first bool // no field written yet in the current object (after '{')
 	err   error
+	// rec records the top-level fields in spans; depth is the nesting
+	// below the top-level object.
+	rec   bool
+	depth int
+	spans []fieldSpan
 	// round writes numbers with the digits they carry (schema 3):
 	// SigDigits significant digits, coordinates to CoordDecimals places.
 	round bool
@@ -174,6 +225,12 @@ func (w *jsonOut) key(name string) {
 		w.b = append(w.b, ',')
 	}
 	w.first = false
+	if w.rec && w.depth == 0 {
+		if n := len(w.spans); n > 0 {
+			w.spans[n-1].end = len(w.b) - 1 // before the comma
+		}
+		w.spans = append(w.spans, fieldSpan{name: name, start: len(w.b)})
+	}
 	w.b = append(w.b, '"')
 	w.b = append(w.b, name...)
 	w.b = append(w.b, '"', ':')
@@ -199,7 +256,7 @@ func (w *jsonOut) float(v float64) {
 		return
 	}
 	if w.round {
-		w.b = appendSig6(w.b, v)
+		w.b = appendNum(w.b, v)
 		return
 	}
 	w.b = appendJSONFloat(w.b, v)

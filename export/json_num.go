@@ -98,18 +98,7 @@ func appendPlanCoord(b []byte, v float64) []byte {
 	if math.Abs(v) >= 1e15 {
 		return appendSig6(b, v) // 'f' would carry noise digits; never a real plan
 	}
-	start := len(b)
-	b = strconv.AppendFloat(b, v, 'f', CoordDecimals, 64)
-	for b[len(b)-1] == '0' {
-		b = b[:len(b)-1]
-	}
-	if b[len(b)-1] == '.' {
-		b = b[:len(b)-1]
-	}
-	if s := b[start:]; len(s) == 2 && s[0] == '-' && s[1] == '0' {
-		b = append(b[:start], '0') // -0.0000001 rounds to 0
-	}
-	return b
+	return appendFixed(b, v, CoordDecimals)
 }
 
 // roundPlanCoord returns v as appendPlanCoord writes it, read back.
@@ -124,3 +113,62 @@ func roundPlanCoord(v float64) float64 {
 	}
 	return r
 }
+
+// LenDecimals is the finest decimal place written for lengths, loads,
+// ratios and quantities outside the calculations (results.json schema 3):
+// 1e-6 (inch, lb, ratio), so arithmetic noise beside real values
+// (-1.1102230246251565e-16 where 0 was meant, 1e-15 for a position at the
+// datum) is written 0. Common practice, no source.
+const LenDecimals = 6
+
+// appendNum appends v as results.json writes lengths, loads, ratios and
+// quantities outside the calculations: rounded to SigDigits significant
+// digits and to no finer than LenDecimals decimal places, whichever is
+// coarser, as the shortest decimal, without allocating. 2.2500000000000004
+// is written 2.25, 0.0123456789 0.012346, 1e-16 0. v must be finite.
+func appendNum(b []byte, v float64) []byte {
+	if math.Abs(v) >= 0.1 { // 6 significant digits reach 1e-6 at most
+		return appendSig6(b, v)
+	}
+	return appendFixed(b, v, LenDecimals)
+}
+
+// roundNum returns v as appendNum writes it, read back.
+func roundNum(v float64) float64 {
+	if math.IsNaN(v) || math.IsInf(v, 0) {
+		return v
+	}
+	var tmp [40]byte
+	r, err := strconv.ParseFloat(string(appendNum(tmp[:0], v)), 64)
+	if err != nil {
+		return v
+	}
+	return r
+}
+
+// appendFixed appends v rounded to dec decimal places, trailing zeros
+// dropped ("-2.25", "0"; never "-0"), without allocating. v must be finite
+// and below 1e15 in magnitude.
+func appendFixed(b []byte, v float64, dec int) []byte {
+	start := len(b)
+	b = strconv.AppendFloat(b, v, 'f', dec, 64)
+	if dec > 0 {
+		for b[len(b)-1] == '0' {
+			b = b[:len(b)-1]
+		}
+		if b[len(b)-1] == '.' {
+			b = b[:len(b)-1]
+		}
+	}
+	if s := b[start:]; len(s) == 2 && s[0] == '-' && s[1] == '0' {
+		b = append(b[:start], '0') // -0.0000001 rounds to 0
+	}
+	return b
+}
+
+// DemandLb is a connector or support demand as every output prints it:
+// the load rounded as results.json writes it (appendNum), then up to the
+// next pound, so a demand is never rounded down and arithmetic noise (a
+// reaction of 96.00000000000001 lb where statics give 96) does not add a
+// pound. Common practice, no source.
+func DemandLb(v float64) float64 { return math.Ceil(roundNum(v)) }

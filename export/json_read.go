@@ -85,18 +85,45 @@ func ParseJSON(name string, data []byte) (*Results, error) {
 }
 
 // fileMemberV3 is a member as schema 3 writes it: no checks, its info
-// lines named in InfoList.
+// lines named in InfoList, its source as a DXF line when it can be
+// derived, its location absent when it can be derived (json_share.go).
 type fileMemberV3 struct {
 	Member
-	InfoList string `json:"info_list"`
+	InfoList string  `json:"info_list"`
+	Line     int     `json:"line"`
+	Location *string `json:"location"`
 }
 
-// parseV3 reads a schema 3 file: each member's checks and factors from its
-// calculation, its info lines from "info_lists".
+// fileMarkV3 is a mark with the member fields its members share.
+type fileMarkV3 struct {
+	Mark
+	Shared json.RawMessage `json:"shared"`
+}
+
+// fileUpliftV3 is the uplift section of schema 3: a bearing's mark and
+// support are absent when they can be derived.
+type fileUpliftV3 struct {
+	ReportLb float64 `json:"report_lb"`
+	Bearings []struct {
+		UpliftBearing
+		Mark    *string `json:"mark"`
+		Support *string `json:"support"`
+	} `json:"bearings"`
+}
+
+// parseV3 reads a schema 3 file: each member's fields its mark shares from
+// the mark's "shared", its source and location from "source_file" and
+// what the member holds, its checks and factors from its calculation, its
+// info lines from "info_lists"; an uplift bearing's mark from its member
+// and its support from its support's layer and handle. Members of one mark
+// share the slices of its shared fields.
 func parseV3(name string, data []byte) (*Results, error) {
 	var f struct {
 		Results
-		Members      []fileMemberV3         `json:"members"`
+		SourceFile   string                 `json:"source_file"`
+		Members      []json.RawMessage      `json:"members"`
+		Marks        []fileMarkV3           `json:"marks"`
+		Uplift       fileUpliftV3           `json:"uplift"`
 		Calculations map[string]Calculation `json:"calculations"`
 		InfoLists    map[string][]string    `json:"info_lists"`
 	}
@@ -104,12 +131,48 @@ func parseV3(name string, data []byte) (*Results, error) {
 		return nil, fmt.Errorf("%s: %w", name, err)
 	}
 	r := &f.Results
+	templates := map[string]*fileMemberV3{}
+	r.Marks = make([]Mark, len(f.Marks))
+	for i := range f.Marks {
+		r.Marks[i] = f.Marks[i].Mark
+		if len(f.Marks[i].Shared) == 0 {
+			continue
+		}
+		if _, ok := templates[f.Marks[i].Mark.Mark]; ok {
+			continue
+		}
+		t := &fileMemberV3{}
+		if err := json.Unmarshal(f.Marks[i].Shared, t); err != nil {
+			return nil, fmt.Errorf("%s: mark %s: shared: %w", name, f.Marks[i].Mark.Mark, err)
+		}
+		templates[f.Marks[i].Mark.Mark] = t
+	}
+	toInch, _ := UnitToInch(r.DrawingUnits)
 	r.Members = make([]Member, len(f.Members))
 	shared := make(map[string][]Check, len(f.Calculations))
-	for i := range f.Members {
-		fm := &f.Members[i]
+	marks := make(map[string]string, len(f.Members))
+	for i, raw := range f.Members {
+		var fm fileMemberV3
+		if err := json.Unmarshal(raw, &fm); err != nil {
+			return nil, fmt.Errorf("%s: members[%d]: %w", name, i, err)
+		}
+		if t, ok := templates[fm.Mark]; ok { // again, over what the mark shares
+			fm = *t
+			if err := json.Unmarshal(raw, &fm); err != nil {
+				return nil, fmt.Errorf("%s: members[%d]: %w", name, i, err)
+			}
+		}
 		m := &r.Members[i]
 		*m = fm.Member
+		marks[m.ID] = m.Mark
+		if m.Source == "" && fm.Line > 0 && f.SourceFile != "" {
+			m.Source = sourceText(f.SourceFile, fm.Line, m.Handle, m.Layer)
+		}
+		if fm.Location != nil {
+			m.Location = *fm.Location
+		} else if loc, ok := locationOf(f.SourceFile, m.Handle, fm.Line, m.Layer, m.Start, m.End, toInch); ok {
+			m.Location = loc
+		}
 		if fm.InfoList != "" {
 			info, ok := f.InfoLists[fm.InfoList]
 			if !ok {
@@ -135,6 +198,25 @@ func parseV3(name string, data []byte) (*Results, error) {
 		}
 		m.Checks = cs
 		m.Factors = c.Factors
+	}
+	r.Uplift = UpliftReport{ReportLb: f.Uplift.ReportLb}
+	if f.Uplift.Bearings != nil {
+		r.Uplift.Bearings = make([]UpliftBearing, len(f.Uplift.Bearings))
+	}
+	for i := range f.Uplift.Bearings {
+		fb := &f.Uplift.Bearings[i]
+		b := fb.UpliftBearing
+		if fb.Mark != nil {
+			b.Mark = *fb.Mark
+		} else {
+			b.Mark = marks[b.Member]
+		}
+		if fb.Support != nil {
+			b.Support = *fb.Support
+		} else {
+			b.Support = upliftSupportText(b.SupportLayer, b.SupportHandle)
+		}
+		r.Uplift.Bearings[i] = b
 	}
 	f.Members = nil
 	return r, nil

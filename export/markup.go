@@ -240,7 +240,7 @@ func upliftLabels(r *Results, toInch, h float64, side []float64) []Label {
 		if at == ([2]float64{}) {
 			at = [2]float64{u.Point[0] * toInch, u.Point[1] * toInch}
 		}
-		text := "uplift " + strconv.FormatFloat(math.Ceil(u.UpliftLb), 'f', 0, 64) + " lb"
+		text := "uplift " + strconv.FormatFloat(DemandLb(u.UpliftLb), 'f', 0, 64) + " lb"
 		ang := 0.0
 		if k := member(u.Member); k >= 0 {
 			mb := &r.Members[k]

@@ -68,7 +68,7 @@ func buildPath(r *Results) *pathSection {
 			ratio = fmtx.Ratio(m)
 		}
 		s.Posts = append(s.Posts, pathPostRow{ID: p.ID, Size: p.Size, D: lb(p.Loads.DeadLb), L: lb(p.Loads.LiveLb),
-			Lr: lb(p.Loads.RoofLiveLb), S: lb(p.Loads.SnowLb), Down: fmtx.Lb(math.Ceil(p.DownLb)), Up: fmtx.Lb(math.Ceil(p.UpLb)),
+			Lr: lb(p.Loads.RoofLiveLb), S: lb(p.Loads.SnowLb), Down: fmtx.Lb(DemandLb(p.DownLb)), Up: fmtx.Lb(DemandLb(p.UpLb)),
 			Ratio: ratio, Status: p.Status, Bad: p.Status == StatusFail || p.Status == StatusError})
 	}
 	byKind := map[string]*pathJointRow{}
@@ -81,10 +81,10 @@ func buildPath(r *Results) *pathSection {
 		}
 		j.Count++
 		if c.DownLb > down[c.Kind] {
-			down[c.Kind], j.Down, j.DownAt = c.DownLb, fmtx.Lb(math.Ceil(c.DownLb)), c.Member+" on "+c.Carrier+" ("+c.DownCombo+")"
+			down[c.Kind], j.Down, j.DownAt = c.DownLb, fmtx.Lb(DemandLb(c.DownLb)), c.Member+" on "+c.Carrier+" ("+c.DownCombo+")"
 		}
 		if c.UpLb > up[c.Kind] {
-			up[c.Kind], j.Up, j.UpAt = c.UpLb, fmtx.Lb(math.Ceil(c.UpLb)), c.Member+" on "+c.Carrier+" ("+c.UpCombo+")"
+			up[c.Kind], j.Up, j.UpAt = c.UpLb, fmtx.Lb(DemandLb(c.UpLb)), c.Member+" on "+c.Carrier+" ("+c.UpCombo+")"
 		}
 	}
 	for _, j := range byKind {

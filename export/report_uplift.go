@@ -3,7 +3,6 @@ package export
 import (
 	"cmp"
 	"framecheck/export/internal/fmtx"
-	"math"
 	"slices"
 	"strconv"
 )
@@ -38,7 +37,7 @@ func lbText(v float64) string {
 	if !finite(v) {
 		return "n/a"
 	}
-	return fmtx.Lb(math.Ceil(v)) // a connector demand: up to the next pound
+	return fmtx.Lb(DemandLb(v)) // a connector demand: up to the next pound
 }
 
 // buildUplift fills the report's uplift section from r.Uplift: flagged

@@ -139,10 +139,15 @@ func upliftFinite(u *UpliftReport) bool {
 }
 
 // writeUpliftJSON writes the "uplift" value: report_lb, then the bearings one
-// per line, each field by field exactly as encoding/json writes an
-// UpliftBearing (TestUpliftEncoderMatchesMarshal holds it to that).
-func writeUpliftJSON(w *bufio.Writer, u *UpliftReport) error {
+// per line. With marks nil (schema 2), each field by field exactly as
+// encoding/json writes an UpliftBearing (TestUpliftEncoderMatchesMarshal
+// holds it to that). With marks (member id to mark, schema 3), numbers
+// with the digits they carry, and a bearing's "mark" left out when it is
+// its member's, its "support" when upliftSupportText gives it back from
+// support_layer and support_handle.
+func writeUpliftJSON(w *bufio.Writer, u *UpliftReport, marks map[string]string) error {
 	var o jsonOut
+	o.round = marks != nil
 	o.b = append(o.b, '{')
 	o.first = true
 	o.num("report_lb", u.ReportLb)
@@ -158,7 +163,7 @@ func writeUpliftJSON(w *bufio.Writer, u *UpliftReport) error {
 	w.WriteString("[\n")
 	var buf []byte
 	for i := range u.Bearings {
-		b, err := encodeUpliftBearing(buf[:0], &u.Bearings[i])
+		b, err := encodeUpliftBearing(buf[:0], &u.Bearings[i], marks)
 		if err != nil {
 			return err
 		}
@@ -174,22 +179,27 @@ func writeUpliftJSON(w *bufio.Writer, u *UpliftReport) error {
 	return nil
 }
 
-// encodeUpliftBearing appends b's JSON to dst.
-func encodeUpliftBearing(dst []byte, b *UpliftBearing) ([]byte, error) {
+// encodeUpliftBearing appends b's JSON to dst; marks as writeUpliftJSON.
+func encodeUpliftBearing(dst []byte, b *UpliftBearing, marks map[string]string) ([]byte, error) {
 	var o jsonOut
+	o.round = marks != nil
 	o.b = append(dst, '{')
 	o.first = true
 	o.str("member", b.Member)
-	o.str("mark", b.Mark)
+	if mk, ok := marks[b.Member]; marks == nil || !ok || mk != b.Mark {
+		o.str("mark", b.Mark)
+	}
 	o.key("bearing")
 	o.b = strconv.AppendInt(o.b, int64(b.Bearing), 10)
-	o.str("support", b.Support)
+	if marks == nil || b.SupportHandle == "" || upliftSupportText(b.SupportLayer, b.SupportHandle) != b.Support {
+		o.str("support", b.Support)
+	}
 	o.str("support_layer", b.SupportLayer)
 	o.str("support_handle", b.SupportHandle)
 	o.str("support_kind", b.SupportKind)
 	o.num("at_in", b.AtIn)
 	o.num("from_face_in", b.FromFaceIn)
-	o.floats("point", b.Point[:])
+	o.coords("point", b.Point[:])
 	o.num("uplift_lb", b.UpliftLb)
 	o.str("combo", b.Combo)
 	o.num("cd", b.CD)

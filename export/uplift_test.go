@@ -31,7 +31,7 @@ func TestUpliftEncoderMatchesMarshal(t *testing.T) {
 		if err != nil {
 			t.Fatal(err)
 		}
-		got, err := encodeUpliftBearing(nil, &bs[i])
+		got, err := encodeUpliftBearing(nil, &bs[i], nil)
 		if err != nil {
 			t.Fatal(err)
 		}
@@ -43,7 +43,7 @@ func TestUpliftEncoderMatchesMarshal(t *testing.T) {
 	for _, u := range []UpliftReport{{ReportLb: 50}, {ReportLb: 0.5, Bearings: bs}} {
 		var buf bytes.Buffer
 		w := bufio.NewWriter(&buf)
-		if err := writeUpliftJSON(w, &u); err != nil {
+		if err := writeUpliftJSON(w, &u, nil); err != nil {
 			t.Fatal(err)
 		}
 		w.Flush()
@@ -60,7 +60,7 @@ func TestUpliftEncoderMatchesMarshal(t *testing.T) {
 			t.Errorf("section read back %+v, want %+v", back, want)
 		}
 	}
-	if _, err := encodeUpliftBearing(nil, &UpliftBearing{UpliftLb: math.NaN()}); err == nil {
+	if _, err := encodeUpliftBearing(nil, &UpliftBearing{UpliftLb: math.NaN()}, nil); err == nil {
 		t.Error("NaN uplift encoded without an error")
 	}
 }
@@ -103,6 +103,24 @@ func TestUpliftJSONRoundTrip(t *testing.T) {
 	}
 	if err := json.Unmarshal(top["uplift"], &sec); err != nil {
 		t.Fatalf("uplift section: %v", err)
+	}
+	// A bearing's mark is its member's and its support its layer and
+	// handle: both derived, not written (docs/RESULTS-SCHEMA.md).
+	for i, b := range sec.Bearings {
+		if _, ok := b["mark"]; ok {
+			t.Errorf("uplift bearing %d writes its member's mark", i)
+		}
+		if _, ok := b["support"]; ok && b["support_handle"] != "" {
+			t.Errorf("uplift bearing %d writes a support its layer and handle give", i)
+		}
+	}
+	var all map[string]any
+	if err := json.Unmarshal(data, &all); err != nil {
+		t.Fatal(err)
+	}
+	filledMembers(t, all)
+	for i, b := range all["uplift"].(map[string]any)["bearings"].([]any) {
+		sec.Bearings[i] = b.(map[string]any)
 	}
 	if sec.ReportLb == nil || *sec.ReportLb != 50 || len(sec.Bearings) != 5 {
 		t.Fatalf("uplift section: report_lb %v, %d bearings; want 50 and 5", sec.ReportLb, len(sec.Bearings))

@@ -98,9 +98,9 @@ func writeLoadPathSheets(f *excelize.File, st *styles, r *Results) error {
 			s.text("")
 		}
 		typeCells(s, p.Loads)
-		s.num(math.Ceil(p.DownLb), cLb)
+		s.num(DemandLb(p.DownLb), cLb)
 		s.text(fmtx.Combo(p.DownCombo))
-		s.num(math.Ceil(p.UpLb), cLb)
+		s.num(DemandLb(p.UpLb), cLb)
 		s.text(fmtx.Combo(p.UpCombo))
 		ratio := 0.0
 		for _, c := range p.Checks {
@@ -131,9 +131,9 @@ func writeLoadPathSheets(f *excelize.File, st *styles, r *Results) error {
 		s.integer(c.Bearing)
 		s.text(c.Carrier)
 		typeCells(s, c.Loads)
-		s.num(math.Ceil(c.DownLb), cLb) // demands: up to the next pound
+		s.num(DemandLb(c.DownLb), cLb) // demands: up to the next pound
 		s.text(fmtx.Combo(c.DownCombo))
-		s.num(math.Ceil(c.UpLb), cLb)
+		s.num(DemandLb(c.UpLb), cLb)
 		s.text(fmtx.Combo(c.UpCombo))
 		if err := s.end(); err != nil {
 			return err

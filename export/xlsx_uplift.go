@@ -2,7 +2,6 @@ package export
 
 import (
 	"framecheck/export/internal/fmtx"
-	"math"
 	"strconv"
 	"strings"
 
@@ -57,7 +56,7 @@ func writeUpliftSheet(f *excelize.File, st *styles, r *Results) error {
 		s.num(l.MaxLb, cLb)
 		s.num(l.TotalLb, cLb)
 		if l.Flagged > 0 {
-			s.num(math.Ceil(l.MaxLb), cLb) // a demand: up to the next pound
+			s.num(DemandLb(l.MaxLb), cLb) // a demand: up to the next pound
 		} else {
 			s.text("")
 		}

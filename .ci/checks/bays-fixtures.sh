@@ -48,7 +48,11 @@ def fail(msg):
     print("bays-fixtures: " + msg, file=sys.stderr)
     sys.exit(1)
 
-members = json.load(open(res + "/results.json"))["members"]
+r = json.load(open(res + "/results.json"))
+shared = {}
+for mk in r["marks"]:  # schema 3: fields the members of a mark share are in its "shared"
+    shared.setdefault(mk["mark"], mk.get("shared", {}))
+members = [{**shared.get(m["mark"], {}), **m} for m in r["members"]]
 gen = [m for m in members if m.get("generated") is True]
 if len(members) != 9 or len(gen) != 9:
     fail("results.json: %d members, %d generated; want 9 and 9" % (len(members), len(gen)))

@@ -20,3 +20,14 @@ if [ "$code" -ne 1 ]; then
 fi
 "$out/framecheck" check "$out/demo/plan.dxf" -p "$out/demo/framecheck.toml" -o "$out/overlay" --overlay >/dev/null 2>&1 || true
 "$PY" .ci/checks/demo_check.py "$out/demo" "$out/overlay"
+# The README's Python reader, run as written on the demo's results.json: it
+# follows the references (mark's shared fields, source line, calculation,
+# info list) and must print the first three members.
+awk '/^```python$/{p=1; next} /^```$/{p=0} p' README.md | grep -q 'res\["calculations"\]'
+(cd "$out" && ln -s demo demo-out && awk '/^```python$/{p=1; next} /^```$/{p=0} p' "$OLDPWD/README.md" | "$PY" - >readme-reader.txt)
+if [ "$(grep -c '^M[0-9]* .*plan.dxf:[0-9]* (handle ' "$out/readme-reader.txt")" -ne 3 ]; then
+  echo "the README's Python reader printed:" >&2
+  cat "$out/readme-reader.txt" >&2
+  exit 1
+fi
+echo "README's Python reader: $(head -1 "$out/readme-reader.txt")"

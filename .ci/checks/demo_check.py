@@ -18,6 +18,15 @@ def fail(msg):
     sys.exit(1)
 
 
+def members_of(res):
+    """results.json's members, each with the fields its mark shares filled
+    in (schema 3: a member's keys are its mark's "shared" plus its own)."""
+    shared = {}
+    for mk in res["marks"]:
+        shared.setdefault(mk["mark"], mk.get("shared", {}))
+    return [{**shared.get(m["mark"], {}), **m} for m in res["members"]]
+
+
 def layer_counts(msp):
     c = collections.Counter()
     for e in msp:
@@ -29,7 +38,7 @@ def main(demo, overlay_dir):
     res = json.load(open(os.path.join(demo, "results.json")))
     if res.get("schema") != "framecheck-results/3":
         fail("results.json schema %r" % res.get("schema"))
-    members = res["members"]
+    members = members_of(res)
     # Schema 3: a member's checks, with their traces, are in the calculation
     # it names, its info lines in the info list it names; each trace ends on
     # its check's ratio, and the member's max_ratio and governing check are
@@ -207,7 +216,8 @@ def main(demo, overlay_dir):
         if "framecheck " not in v or res.get("tool_version", "") not in v:
             fail("%s: row 2 %r does not stamp the tool version %r" % (ws.title, v, res.get("tool_version")))
     up_rows = [r for r in list(wb["Uplift"].iter_rows(values_only=True))[skip:] if r and r[0]]
-    lines = {b["support"] for b in up["bearings"]}
+    # schema 3 leaves a bearing's support out when it is its layer and handle
+    lines = {b.get("support", b["support_layer"] + " handle " + b["support_handle"]) for b in up["bearings"]}
     if len(up_rows) != len(lines) or sum(r[2] for r in up_rows) != len(up["bearings"]):
         fail("Uplift sheet: %d lines, %d bearings; results.json %d lines, %d bearings" % (
             len(up_rows), sum(r[2] for r in up_rows), len(lines), len(up["bearings"])))

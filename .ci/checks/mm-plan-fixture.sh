@@ -71,6 +71,10 @@ if len(ends) - len(merged) != 2:
 ends = merged
 
 r = json.load(open(res + "/results.json"))
+shared = {}
+for mk in r["marks"]:  # schema 3: fields the members of a mark share are in its "shared"
+    shared.setdefault(mk["mark"], mk.get("shared", {}))
+r["members"] = [{**shared.get(m["mark"], {}), **m} for m in r["members"]]
 if r["drawing_units"] != "mm":
     fail("results drawing_units %r" % r["drawing_units"])
 if len(r["members"]) != len(ends):
