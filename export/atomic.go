@@ -2,11 +2,15 @@ package export
 
 import (
 	"bufio"
+	"crypto/sha256"
+	"encoding/hex"
 	"errors"
 	"fmt"
+	"hash"
 	"os"
 	"path/filepath"
 	"strings"
+	"sync"
 )
 
 // ErrSameFile is returned when an output path names the input drawing.
@@ -14,7 +18,9 @@ var ErrSameFile = errors.New("output would overwrite the input drawing")
 
 // writeAtomic writes path through a temporary file in the same folder:
 // write, flush, fsync, close, rename. On any error the temporary file is
-// removed and an existing file at path is left as it was.
+// removed and an existing file at path is left as it was. The SHA-256 of
+// the bytes is computed as they go to the file and kept for
+// WrittenSHA256, so a caller listing the outputs need not read them again.
 func writeAtomic(path string, write func(w *bufio.Writer) error) (err error) {
 	if path == "" {
 		return errors.New("export: empty output path")
@@ -31,7 +37,7 @@ func writeAtomic(path string, write func(w *bufio.Writer) error) (err error) {
 			os.Remove(tmpName)
 		}
 	}()
-	sw := &syncingWriter{f: tmp, busy: make(chan struct{}, 1)}
+	sw := &syncingWriter{f: tmp, busy: make(chan struct{}, 1), h: sha256.New()}
 	bw := bufio.NewWriterSize(sw, 1<<16)
 	err = write(bw)
 	if err == nil {
@@ -59,6 +65,7 @@ func writeAtomic(path string, write func(w *bufio.Writer) error) (err error) {
 	if err = os.Rename(tmpName, path); err != nil {
 		return fmt.Errorf("export: %s: %w", path, err)
 	}
+	recordWritten(path, sw.h, sw.total)
 	// Make the rename itself durable; not every platform allows syncing a
 	// folder, so a failure here is not an error.
 	if d, derr := os.Open(dir); derr == nil {
@@ -82,10 +89,15 @@ type syncingWriter struct {
 	f    *os.File
 	n    int64
 	busy chan struct{}
+	// h hashes every byte written to f; total counts them.
+	h     hash.Hash
+	total int64
 }
 
 func (w *syncingWriter) Write(p []byte) (int, error) {
 	n, err := w.f.Write(p)
+	w.h.Write(p[:n])
+	w.total += int64(n)
 	if w.n += int64(n); w.n >= syncEveryBytes {
 		w.n = 0
 		select {
@@ -120,4 +132,56 @@ func refuseDrawing(path string) error {
 		return fmt.Errorf("export: %s: %w (a .dxf path was given for a results file)", path, ErrSameFile)
 	}
 	return nil
+}
+
+// writtenFile is what writeAtomic wrote at a path: the SHA-256 of the
+// bytes, their count, and the file as it was just after the rename (to
+// tell whether it has changed since).
+type writtenFile struct {
+	sum  [sha256.Size]byte
+	size int64
+	info os.FileInfo
+}
+
+// written maps an absolute path to its writtenFile, until WrittenSHA256
+// takes it.
+var written sync.Map
+
+func absPath(path string) string {
+	if a, err := filepath.Abs(path); err == nil {
+		return a
+	}
+	return filepath.Clean(path)
+}
+
+// recordWritten keeps the hash of the file just renamed to path.
+func recordWritten(path string, h hash.Hash, size int64) {
+	fi, err := os.Stat(path)
+	if err != nil {
+		written.Delete(absPath(path))
+		return
+	}
+	wf := writtenFile{size: size, info: fi}
+	h.Sum(wf.sum[:0])
+	written.Store(absPath(path), wf)
+}
+
+// WrittenSHA256 returns the SHA-256 (hex) and size of the file at path as
+// export's writers (WriteJSON, WriteXLSX, WriteReport, Annotate,
+// WriteOverlay, ...) wrote it, computed while writing. ok is false when
+// export did not write the file, or it is no longer the same file with the
+// same size and modification time (the caller then hashes it itself).
+// Each record is given out once: a second call for the same file gives
+// ok false.
+func WrittenSHA256(path string) (sum string, size int64, ok bool) {
+	v, found := written.LoadAndDelete(absPath(path))
+	if !found {
+		return "", 0, false
+	}
+	wf := v.(writtenFile)
+	fi, err := os.Stat(path)
+	if err != nil || !os.SameFile(fi, wf.info) || fi.Size() != wf.size || !fi.ModTime().Equal(wf.info.ModTime()) {
+		return "", 0, false
+	}
+	return hex.EncodeToString(wf.sum[:]), wf.size, true
 }

@@ -2,6 +2,8 @@ package export
 
 import (
 	"bufio"
+	"crypto/sha256"
+	"encoding/hex"
 	"errors"
 	"os"
 	"path/filepath"
@@ -70,5 +72,41 @@ func TestWriteAtomicMissingFolder(t *testing.T) {
 	path := filepath.Join(t.TempDir(), "no", "such", "out.json")
 	if err := WriteJSON(path, &Results{}); err == nil {
 		t.Fatal("no error for a missing folder")
+	}
+}
+
+// TestWrittenSHA256: the hash writeAtomic computes while writing is the
+// SHA-256 of the file (crypto/sha256 on the bytes read back), given out
+// once; a file changed after it was written, or never written by export,
+// gives none (the caller hashes it itself).
+func TestWrittenSHA256(t *testing.T) {
+	dir := t.TempDir()
+	path := filepath.Join(dir, "results.json")
+	if err := WriteJSON(path, loadFixture(t)); err != nil {
+		t.Fatal(err)
+	}
+	data, err := os.ReadFile(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	want := sha256.Sum256(data)
+	sum, size, ok := WrittenSHA256(filepath.Join(dir, ".", "results.json"))
+	if !ok || sum != hex.EncodeToString(want[:]) || size != int64(len(data)) {
+		t.Errorf("WrittenSHA256 = %s, %d, %v; want %x, %d", sum, size, ok, want, len(data))
+	}
+	if _, _, ok := WrittenSHA256(path); ok {
+		t.Error("a second WrittenSHA256 of the same file gave a hash")
+	}
+	if err := WriteJSON(path, loadFixture(t)); err != nil {
+		t.Fatal(err)
+	}
+	if err := os.WriteFile(path, append(data, ' '), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	if _, _, ok := WrittenSHA256(path); ok {
+		t.Error("WrittenSHA256 gave a hash for a file changed after export wrote it")
+	}
+	if _, _, ok := WrittenSHA256(filepath.Join(dir, "other.json")); ok {
+		t.Error("WrittenSHA256 gave a hash for a file export never wrote")
 	}
 }
