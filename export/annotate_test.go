@@ -126,7 +126,7 @@ func TestAnnotatePlans(t *testing.T) {
 		newLayers int
 	}{
 		{"plan_r12.dxf", 1, true, "", "56", 7},
-		{"plan_r2000.dxf", 12, true, "17", strconv.FormatFloat(56.0/12, 'f', -1, 64), 7},
+		{"plan_r2000.dxf", 12, true, "17", "4.666667", 7}, // 56 in in feet, to 1e-6 ft (dxfDecimals)
 		{"plan_min_r12.dxf", 1, false, "", "56", 7},
 	}
 	for _, tc := range tests {

@@ -3,6 +3,7 @@ package export
 import (
 	"bufio"
 	"fmt"
+	"math"
 	"strconv"
 	"strings"
 )
@@ -36,12 +37,28 @@ func (e *dxfEmitter) code(code int) {
 	e.w.WriteString(e.eol)
 }
 
-// num writes a number pair, the shortest decimal that reads back as v.
+// dxfDecimals is the finest decimal place of the numbers we write into a
+// drawing: 1e-6 of a drawing unit, far below any drafting precision, so a
+// text height of 1.7999999999999998 is written 1.8. Common practice, no
+// source.
+const dxfDecimals = 6
+
+// num writes a number pair: v rounded to dxfDecimals decimal places of the
+// drawing unit, trailing zeros dropped ("1.8", "120", "0"; never "-0"),
+// without allocating.
 func (e *dxfEmitter) num(code int, v float64) {
 	e.code(code)
-	e.scratch = strconv.AppendFloat(e.scratch[:0], v, 'f', -1, 64)
+	e.scratch = appendDXFNum(e.scratch[:0], v)
 	e.w.Write(e.scratch)
 	e.w.WriteString(e.eol)
+}
+
+// appendDXFNum appends v as num writes it.
+func appendDXFNum(b []byte, v float64) []byte {
+	if math.IsNaN(v) || math.IsInf(v, 0) || math.Abs(v) >= 1e15 {
+		return strconv.AppendFloat(b, v, 'f', -1, 64) // never a real plan; validate refuses non-finite
+	}
+	return appendFixed(b, v, dxfDecimals)
 }
 
 // handle writes group 5 with the next free handle, when handles are used.

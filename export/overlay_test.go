@@ -42,7 +42,8 @@ func TestWriteOverlay(t *testing.T) {
 				}
 				x, _ := strconv.ParseFloat(e.Values[10][0], 64)
 				y, _ := strconv.ParseFloat(e.Values[21][0], 64)
-				if math.Abs(x-72/tc.div) > 1e-9*72/tc.div || math.Abs(y-56/tc.div) > 1e-9*56/tc.div {
+				// to 1e-6 of the drawing unit (dxfDecimals)
+				if math.Abs(x-72/tc.div) > 5e-7 || math.Abs(y-56/tc.div) > 5e-7 {
 					t.Errorf("blocking line at x=%v y2=%v, want %v %v", x, y, 72/tc.div, 56/tc.div)
 				}
 			}
