@@ -10,12 +10,19 @@ import (
 // in, the way framing plans write it: 150.5 -> 12'-6 1/2", 8 -> 0'-8",
 // 144 -> 12'-0". A non-finite length gives "n/a".
 func FtIn(in float64) string {
+	var buf [40]byte
+	return string(appendFtIn(buf[:0], in))
+}
+
+// appendFtIn appends FtIn(in) to b without allocating. Appended by hand
+// rather than with fmt: a plan's schedule, locations and labels format
+// hundreds of thousands of lengths.
+func appendFtIn(b []byte, in float64) []byte {
 	if math.IsNaN(in) || math.IsInf(in, 0) {
-		return "n/a"
+		return append(b, "n/a"...)
 	}
-	sign := ""
 	if in < 0 {
-		sign = "-"
+		b = append(b, '-')
 		in = -in
 	}
 	sixteenths := int64(math.Round(in * 16))
@@ -23,10 +30,6 @@ func FtIn(in float64) string {
 	rem := sixteenths % (12 * 16)
 	whole := rem / 16
 	frac := rem % 16
-	// Appended by hand rather than with fmt: a plan's schedule, locations
-	// and labels format hundreds of thousands of lengths.
-	var buf [40]byte
-	b := append(buf[:0], sign...)
 	b = strconv.AppendInt(b, ft, 10)
 	b = append(b, "'-"...)
 	b = strconv.AppendInt(b, whole, 10)
@@ -41,8 +44,7 @@ func FtIn(in float64) string {
 		b = append(b, '/')
 		b = strconv.AppendInt(b, den, 10)
 	}
-	b = append(b, '"')
-	return string(b)
+	return append(b, '"')
 }
 
 // ftInList formats lengths as "12'-0\" + 10'-6\"".

@@ -35,6 +35,10 @@ type memberEncoder struct {
 	// srcFile "" derives nothing.
 	srcFile string
 	toInch  float64
+	scratch []byte
+	// shareOnly leaves out the fields never shared (unsharedKeys): the
+	// first pass, which finds what the members of each mark share.
+	shareOnly bool
 }
 
 func newMemberEncoder(lay jsonLayout) *memberEncoder {
@@ -50,16 +54,23 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 	w.rec = e.lay.refs
 	w.spans = e.spans[:0]
 	w.b = append(e.buf[:0], '{')
-	w.str("id", m.ID)
-	w.str("mark", m.Mark)
+	who := !e.shareOnly // who and where the member is (never shared)
+	if who {
+		w.str("id", m.ID)
+		w.str("mark", m.Mark)
+	}
 	if m.Run != "" {
 		w.str("run", m.Run)
 	}
 	w.str("layer", m.Layer)
-	w.str("handle", m.Handle)
-	if e.lay.refs {
+	if who {
+		w.str("handle", m.Handle)
+	}
+	switch {
+	case e.shareOnly:
+	case e.lay.refs:
 		e.placeV3(&w, m)
-	} else {
+	default:
 		if m.Source != "" {
 			w.str("source", m.Source)
 		}
@@ -72,8 +83,10 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 		w.key("generated")
 		w.b = append(w.b, "true"...)
 	}
-	w.coords("start", m.Start[:])
-	w.coords("end", m.End[:])
+	if who {
+		w.coords("start", m.Start[:])
+		w.coords("end", m.End[:])
+	}
 	w.num("length_in", m.LengthIn)
 	w.floats("bearings_at_in", m.BearingsAtIn)
 	w.floats("spans_in", m.SpansIn)
@@ -187,7 +200,7 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 func (e *memberEncoder) placeV3(w *jsonOut, m *Member) {
 	line, ok := 0, false
 	if m.Source != "" {
-		line, ok = sourceLine(m.Source, e.srcFile, m.Handle, m.Layer)
+		line, ok, e.scratch = sourceLine(m.Source, e.srcFile, m.Handle, m.Layer, e.scratch)
 		if ok {
 			w.key("line")
 			w.b = strconv.AppendInt(w.b, int64(line), 10)
@@ -195,8 +208,9 @@ func (e *memberEncoder) placeV3(w *jsonOut, m *Member) {
 			w.str("source", m.Source)
 		}
 	}
-	loc, derivable := locationOf(e.srcFile, m.Handle, line, m.Layer, m.Start, m.End, e.toInch)
-	if derivable && loc == m.Location {
+	var derivable bool
+	e.scratch, derivable = appendLocationOf(e.scratch[:0], e.srcFile, m.Handle, line, m.Layer, m.Start, m.End, e.toInch)
+	if derivable && m.Location == string(e.scratch) {
 		return
 	}
 	if m.Location != "" || derivable {

@@ -28,6 +28,9 @@ func appendSig6(b []byte, v float64) []byte {
 	if v == 0 {
 		return append(b, '0')
 	}
+	if out, ok := appendSixteenths(b, v, SigDigits); ok {
+		return out // most lengths of a plan: no float formatting needed
+	}
 	var tmp [32]byte
 	e := strconv.AppendFloat(tmp[:0], v, 'e', SigDigits-1, 64) // [-]d.ddddde±XX
 	neg := e[0] == '-'
@@ -106,6 +109,9 @@ func roundPlanCoord(v float64) float64 {
 	if math.IsNaN(v) || math.IsInf(v, 0) {
 		return v
 	}
+	if s := v * 16; s == math.Trunc(s) && math.Abs(v) < 1e9 {
+		return v + 0 // whole sixteenths are written exactly (appendSixteenths); -0 as 0
+	}
 	var tmp [40]byte
 	r, err := strconv.ParseFloat(string(appendPlanCoord(tmp[:0], v)), 64)
 	if err != nil {
@@ -150,6 +156,11 @@ func roundNum(v float64) float64 {
 // dropped ("-2.25", "0"; never "-0"), without allocating. v must be finite
 // and below 1e15 in magnitude.
 func appendFixed(b []byte, v float64, dec int) []byte {
+	if dec >= 4 {
+		if out, ok := appendSixteenths(b, v, 0); ok {
+			return out // exact in 4 decimals
+		}
+	}
 	start := len(b)
 	b = strconv.AppendFloat(b, v, 'f', dec, 64)
 	if dec > 0 {
@@ -172,3 +183,48 @@ func appendFixed(b []byte, v float64, dec int) []byte {
 // reaction of 96.00000000000001 lb where statics give 96) does not add a
 // pound. Common practice, no source.
 func DemandLb(v float64) float64 { return math.Ceil(roundNum(v)) }
+
+// sixteenthDigits are the decimals of k/16 in full.
+var sixteenthDigits = [16]string{"", "0625", "125", "1875", "25", "3125", "375", "4375",
+	"5", "5625", "625", "6875", "75", "8125", "875", "9375"}
+
+// appendSixteenths appends v as its exact decimal when v is a whole number
+// of sixteenths below 1e9 in magnitude (what most lengths and coordinates
+// of a plan in inches are) with at most maxSig significant digits (0: any);
+// ok is false otherwise, and b is returned as it was. -0 is written 0. The
+// exact decimal (at most 4 decimals) is what rounding to 6 significant
+// digits or to 6 decimal places writes for such a value, without the cost
+// of float formatting (TestAppendSixteenthsMatchesFormatting).
+func appendSixteenths(b []byte, v float64, maxSig int) ([]byte, bool) {
+	s := v * 16 // exact: a power of two
+	if !(math.Abs(v) < 1e9) || s != math.Trunc(s) {
+		return b, false
+	}
+	n := int64(s)
+	neg := n < 0
+	if neg {
+		n = -n
+	}
+	ip, frac := n/16, sixteenthDigits[n%16]
+	if maxSig > 0 && ip > 0 {
+		d := 1
+		for q := ip; q >= 10; q /= 10 {
+			d++
+		}
+		if d+len(frac) > maxSig {
+			return b, false
+		}
+	}
+	if n == 0 {
+		return append(b, '0'), true
+	}
+	if neg {
+		b = append(b, '-')
+	}
+	b = strconv.AppendInt(b, ip, 10)
+	if frac != "" {
+		b = append(b, '.')
+		b = append(b, frac...)
+	}
+	return b, true
+}

@@ -28,42 +28,52 @@ import (
 // sourceText is a member's Source as dxfimport.Pos.String writes it:
 // "plan.dxf:4410 (handle 2F1, layer JOISTS)".
 func sourceText(file string, line int, handle, layer string) string {
-	s := file
+	return string(appendSource(nil, file, line, handle, layer))
+}
+
+// appendSource appends sourceText(file, line, handle, layer) to b.
+func appendSource(b []byte, file string, line int, handle, layer string) []byte {
+	b = append(b, file...)
 	if line > 0 {
-		s += ":" + strconv.Itoa(line)
+		b = append(b, ':')
+		b = strconv.AppendInt(b, int64(line), 10)
 	}
-	var extra string
+	if handle == "" && layer == "" {
+		return b
+	}
+	b = append(b, " ("...)
 	if handle != "" {
-		extra = "handle " + handle
+		b = append(b, "handle "...)
+		b = append(b, handle...)
+		if layer != "" {
+			b = append(b, ", "...)
+		}
 	}
 	if layer != "" {
-		if extra != "" {
-			extra += ", "
-		}
-		extra += "layer " + layer
+		b = append(b, "layer "...)
+		b = append(b, layer...)
 	}
-	if extra != "" {
-		s += " (" + extra + ")"
-	}
-	return s
+	return append(b, ')')
 }
 
 // sourceLine returns the DXF line of src when src is exactly
-// sourceText(file, line, handle, layer) for a line above 0.
-func sourceLine(src, file, handle, layer string) (int, bool) {
-	rest, ok := strings.CutPrefix(src, file+":")
-	if !ok || file == "" {
-		return 0, false
+// sourceText(file, line, handle, layer) for a line above 0; scratch is
+// room to compare in (returned, perhaps grown).
+func sourceLine(src, file, handle, layer string, scratch []byte) (int, bool, []byte) {
+	if file == "" || len(src) <= len(file)+1 || src[:len(file)] != file || src[len(file)] != ':' {
+		return 0, false, scratch
 	}
-	n := 0
-	for n < len(rest) && rest[n] >= '0' && rest[n] <= '9' {
+	rest := src[len(file)+1:]
+	n, line := 0, 0
+	for n < len(rest) && n < 10 && rest[n] >= '0' && rest[n] <= '9' {
+		line = line*10 + int(rest[n]-'0')
 		n++
 	}
-	line, err := strconv.Atoi(rest[:n])
-	if err != nil || line <= 0 || sourceText(file, line, handle, layer) != src {
-		return 0, false
+	if line <= 0 || rest[0] == '0' {
+		return 0, false, scratch
 	}
-	return line, true
+	scratch = appendSource(scratch[:0], file, line, handle, layer)
+	return line, src == string(scratch), scratch
 }
 
 // sourceFileOf returns the file name the members' sources start with: that
@@ -84,7 +94,7 @@ func sourceFileOf(ms []Member) string {
 		if k <= 0 {
 			continue
 		}
-		if _, ok := sourceLine(m.Source, head[:k], m.Handle, m.Layer); ok {
+		if _, ok, _ := sourceLine(m.Source, head[:k], m.Handle, m.Layer, nil); ok {
 			return head[:k]
 		}
 	}
@@ -96,35 +106,62 @@ func sourceFileOf(ms []Member) string {
 // the file, the handle (or the DXF line when there is none), the layer and
 // the ends (inches) in feet-inches plan coordinates.
 func locationText(file, handle string, line int, layer string, a, b [2]float64) string {
-	s := file
-	switch {
-	case handle != "":
-		s += " handle " + handle
-	case line > 0:
-		s += " line " + strconv.Itoa(line)
-	}
-	if layer != "" {
-		s += " (layer " + layer + ")"
-	}
-	s = strings.TrimSpace(s)
-	if s != "" {
-		s += ", "
-	}
-	return s + FtIn(a[0]) + ", " + FtIn(a[1]) + " to " + FtIn(b[0]) + ", " + FtIn(b[1])
+	return string(appendLocation(nil, file, handle, line, layer, a, b))
 }
 
-// locationOf derives a member's location from the values results.json
-// holds: its ends in drawing units as written (rounded), toInch inches per
-// drawing unit. ok is false when nothing can be derived (no file, unknown
-// units).
-func locationOf(file, handle string, line int, layer string, start, end [2]float64, toInch float64) (string, bool) {
+// appendLocation appends locationText(file, handle, line, layer, a, b) to
+// dst.
+func appendLocation(dst []byte, file, handle string, line int, layer string, a, b [2]float64) []byte {
+	start := len(dst)
+	dst = append(dst, file...)
+	switch {
+	case handle != "":
+		dst = append(dst, " handle "...)
+		dst = append(dst, handle...)
+	case line > 0:
+		dst = append(dst, " line "...)
+		dst = strconv.AppendInt(dst, int64(line), 10)
+	}
+	if layer != "" {
+		dst = append(dst, " (layer "...)
+		dst = append(dst, layer...)
+		dst = append(dst, ')')
+	}
+	// The head trimmed as strings.TrimSpace trims it.
+	head := bytes.TrimSpace(dst[start:])
+	n := copy(dst[start:], head)
+	dst = dst[:start+n]
+	if n > 0 {
+		dst = append(dst, ", "...)
+	}
+	dst = appendFtIn(dst, a[0])
+	dst = append(dst, ", "...)
+	dst = appendFtIn(dst, a[1])
+	dst = append(dst, " to "...)
+	dst = appendFtIn(dst, b[0])
+	dst = append(dst, ", "...)
+	dst = appendFtIn(dst, b[1])
+	return dst
+}
+
+// appendLocationOf appends a member's location as derived from the values
+// results.json holds: its ends in drawing units as written (rounded),
+// toInch inches per drawing unit. ok is false when nothing can be derived
+// (no file, unknown units).
+func appendLocationOf(dst []byte, file, handle string, line int, layer string, start, end [2]float64, toInch float64) ([]byte, bool) {
 	if file == "" || toInch <= 0 {
-		return "", false
+		return dst, false
 	}
 	in := func(p [2]float64) [2]float64 {
 		return [2]float64{roundPlanCoord(p[0]) * toInch, roundPlanCoord(p[1]) * toInch}
 	}
-	return locationText(file, handle, line, layer, in(start), in(end)), true
+	return appendLocation(dst, file, handle, line, layer, in(start), in(end)), true
+}
+
+// locationOf is appendLocationOf as a string.
+func locationOf(file, handle string, line int, layer string, start, end [2]float64, toInch float64) (string, bool) {
+	b, ok := appendLocationOf(nil, file, handle, line, layer, start, end, toInch)
+	return string(b), ok
 }
 
 // upliftSupportText is an uplift bearing's support as the command names a
@@ -252,6 +289,7 @@ func shareByMark(r *Results, me *memberEncoder, calcs *calcTable, markAt map[str
 	if len(markAt) == 0 {
 		return shares, nil
 	}
+	me.shareOnly = true // what is never shared need not be written
 	for i := range r.Members {
 		k, ok := markAt[r.Members[i].Mark]
 		if !ok {
@@ -264,6 +302,7 @@ func shareByMark(r *Results, me *memberEncoder, calcs *calcTable, markAt map[str
 		}
 		shares[k].add(b, me.spans)
 	}
+	me.shareOnly = false
 	return shares, nil
 }
 
