@@ -19,6 +19,9 @@ type dxfEmitter struct {
 	next     uint64 // next free handle
 	owner    string // model space block record handle for entities (R13+)
 	scratch  []byte // formats codes and numbers without allocating
+	// codes holds each group code line written so far (code, end of
+	// line), made once: a large plan's markup writes millions.
+	codes [][]byte
 }
 
 func (e *dxfEmitter) pair(code int, value string) {
@@ -29,12 +32,31 @@ func (e *dxfEmitter) pair(code int, value string) {
 
 // code writes a group code line, right-aligned in three columns.
 func (e *dxfEmitter) code(code int) {
-	e.scratch = strconv.AppendInt(e.scratch[:0], int64(code), 10)
-	for i := len(e.scratch); i < 3; i++ {
-		e.w.WriteByte(' ')
+	if code >= 0 && code < 1072 { // the codes of the DXF Reference
+		if code >= len(e.codes) {
+			e.codes = append(e.codes, make([][]byte, code+1-len(e.codes))...)
+		}
+		if e.codes[code] == nil {
+			e.codes[code] = appendCodeLine(nil, code, e.eol)
+		}
+		e.w.Write(e.codes[code])
+		return
 	}
+	e.scratch = appendCodeLine(e.scratch[:0], code, e.eol)
 	e.w.Write(e.scratch)
-	e.w.WriteString(e.eol)
+}
+
+// appendCodeLine appends a group code right-aligned in three columns and
+// the end of line.
+func appendCodeLine(b []byte, code int, eol string) []byte {
+	start := len(b)
+	b = strconv.AppendInt(b, int64(code), 10)
+	if n := len(b) - start; n < 3 {
+		b = append(b, "   "[:3-n]...)
+		copy(b[start+3-n:], b[start:start+n])
+		copy(b[start:], "   "[:3-n])
+	}
+	return append(b, eol...)
 }
 
 // dxfDecimals is the finest decimal place of the numbers we write into a

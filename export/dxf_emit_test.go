@@ -50,3 +50,13 @@ func TestMarkupNumbersCarryTheirDigits(t *testing.T) {
 		}
 	}
 }
+
+// TestAppendCodeLine: group codes right-aligned in three columns, as the
+// DXF Reference's examples (and AutoCAD's files) write them.
+func TestAppendCodeLine(t *testing.T) {
+	for code, want := range map[int]string{0: "  0\r\n", 5: "  5\r\n", 10: " 10\r\n", 100: "100\r\n", 1071: "1071\r\n", -1: " -1\r\n"} {
+		if got := string(appendCodeLine([]byte("x"), code, "\r\n")); got != "x"+want {
+			t.Errorf("code %d: %q, want %q", code, got, "x"+want)
+		}
+	}
+}

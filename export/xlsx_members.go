@@ -233,6 +233,9 @@ const maxCellChars = 32767
 // reading), bytes that are not valid UTF-8 and characters XML 1.0 does
 // not allow as U+FFFD, and at most maxCellChars UTF-16 units.
 func appendXMLText(b []byte, s string) []byte {
+	if len(s) <= maxCellChars && plainXMLText(s) {
+		return append(b, s...) // most cells: nothing to escape or cut
+	}
 	units := 0
 	for i := 0; i < len(s); {
 		r, n := rune(s[i]), 1
@@ -263,6 +266,17 @@ func appendXMLText(b []byte, s string) []byte {
 		i += n
 	}
 	return b
+}
+
+// plainXMLText reports whether s is ASCII that appendXMLText copies as it
+// is: no control character but newline, no &, < or >.
+func plainXMLText(s string) bool {
+	for i := 0; i < len(s); i++ {
+		if c := s[i]; (c < 0x20 && c != '\n') || c >= utf8.RuneSelf || c == '&' || c == '<' || c == '>' {
+			return false
+		}
+	}
+	return true
 }
 
 // rowBlock is one block of member rows, as XML and deflated.
