@@ -52,7 +52,8 @@ func TestCheckSCLBeamAndPostAbove(t *testing.T) {
 		}
 	}
 	require.NotNil(t, top)
-	assert.InDelta(t, 2600*math.Pow(12.0/14, 0.136), top.Allowable, 1e-6, "Fb CD CV, hand calculation")
+	// results.json writes the load path's checks to 6 significant digits
+	assert.InEpsilon(t, 2600*math.Pow(12.0/14, 0.136), top.Allowable, 5e-6, "Fb CD CV, hand calculation")
 	assert.Equal(t, "D+L", top.Combo)
 	live := 0.0
 	var p1 float64
