@@ -4,6 +4,7 @@ import (
 	"bufio"
 	"bytes"
 	"fmt"
+	"slices"
 	"strconv"
 	"strings"
 )
@@ -188,6 +189,7 @@ type fieldSpan struct {
 // markShare gathers the fields that every member of one mark has alike.
 type markShare struct {
 	n      int // members met
+	first  shareItem
 	fields []sharedField
 }
 
@@ -195,25 +197,96 @@ type sharedField struct {
 	name string
 	json []byte // "key":value
 	ok   bool   // still alike in every member met
+	eq   func(a, b *shareItem) bool
 }
 
-// add compares the fields of one more member (b, spans) with those met so
-// far.
-func (s *markShare) add(b []byte, spans []fieldSpan) {
+// shareItem is a member as the sharing pass compares it: with the ids of
+// its calculation and info list.
+type shareItem struct {
+	m          *Member
+	calc, info string
+}
+
+// shareEq holds, for each shareable field, a comparison of the Go values
+// that is true only when the field is written alike (equal values give
+// equal bytes; nil and empty lists are written alike). The sharing pass
+// compares bytes only where it is false. TestShareEqImpliesSameBytes holds
+// it to the encoder, field by field and leaf by leaf.
+var shareEq = map[string]func(a, b *shareItem) bool{
+	"run":      func(a, b *shareItem) bool { return a.m.Run == b.m.Run },
+	"layer":    func(a, b *shareItem) bool { return a.m.Layer == b.m.Layer },
+	"datum_in": func(a, b *shareItem) bool { return a.m.DatumIn == b.m.DatumIn },
+	"generated": func(a, b *shareItem) bool {
+		return a.m.Generated == b.m.Generated
+	},
+	"length_in":      func(a, b *shareItem) bool { return a.m.LengthIn == b.m.LengthIn },
+	"bearings_at_in": func(a, b *shareItem) bool { return slices.Equal(a.m.BearingsAtIn, b.m.BearingsAtIn) },
+	"spans_in":       func(a, b *shareItem) bool { return slices.Equal(a.m.SpansIn, b.m.SpansIn) },
+	"overhangs_in":   func(a, b *shareItem) bool { return a.m.OverhangsIn == b.m.OverhangsIn },
+	"trib_in":        func(a, b *shareItem) bool { return a.m.TribIn == b.m.TribIn },
+	"spacing_in":     func(a, b *shareItem) bool { return a.m.SpacingIn == b.m.SpacingIn },
+	"size":           func(a, b *shareItem) bool { return a.m.Size == b.m.Size },
+	"species":        func(a, b *shareItem) bool { return a.m.Species == b.m.Species },
+	"grade":          func(a, b *shareItem) bool { return a.m.Grade == b.m.Grade },
+	"zone":           func(a, b *shareItem) bool { return a.m.Zone == b.m.Zone },
+	"zone_pieces":    func(a, b *shareItem) bool { return slices.Equal(a.m.ZonePieces, b.m.ZonePieces) },
+	"calculation":    func(a, b *shareItem) bool { return a.calc == b.calc },
+	"governing":      func(a, b *shareItem) bool { return a.m.Governing == b.m.Governing },
+	"max_ratio":      func(a, b *shareItem) bool { return a.m.MaxRatio == b.m.MaxRatio },
+	"blocking_rows_per_span": func(a, b *shareItem) bool {
+		return slices.Equal(a.m.BlockingRowsPerSpan, b.m.BlockingRowsPerSpan)
+	},
+	"blocking_at_in": func(a, b *shareItem) bool { return slices.Equal(a.m.BlockingAtIn, b.m.BlockingAtIn) },
+	"blocking_from_face_in": func(a, b *shareItem) bool {
+		return slices.Equal(a.m.BlockingFromFaceIn, b.m.BlockingFromFaceIn)
+	},
+	"drawn_blocking_at_in": func(a, b *shareItem) bool {
+		return slices.Equal(a.m.DrawnBlockingAtIn, b.m.DrawnBlockingAtIn)
+	},
+	"blocking_steps": func(a, b *shareItem) bool {
+		return slices.EqualFunc(a.m.BlockingSteps, b.m.BlockingSteps, func(x, y BlockingStep) bool {
+			return x.RowsPerSpan == y.RowsPerSpan && slices.Equal(x.AtIn, y.AtIn) && x.LuIn == y.LuIn && x.CL == y.CL && x.Ratio == y.Ratio
+		})
+	},
+	"info_list": func(a, b *shareItem) bool { return a.info == b.info },
+	"status":    func(a, b *shareItem) bool { return a.m.Status == b.m.Status },
+	"messages":  func(a, b *shareItem) bool { return slices.Equal(a.m.Messages, b.m.Messages) },
+}
+
+// meet compares one more member of the mark with those met so far:
+// field by field with shareEq, and by the bytes encode writes (encoding
+// the member at most once, only when a comparison of values cannot tell).
+// encode returns the member's bytes and their top-level fields.
+func (s *markShare) meet(it shareItem, encode func() ([]byte, []fieldSpan, error)) error {
 	s.n++
 	if s.n == 1 {
+		b, spans, err := encode()
+		if err != nil {
+			return err
+		}
+		s.first = it
 		for _, f := range spans {
 			if !unsharedKeys[f.name] {
-				s.fields = append(s.fields, sharedField{name: f.name, json: bytes.Clone(b[f.start:f.end]), ok: true})
+				s.fields = append(s.fields, sharedField{name: f.name, json: bytes.Clone(b[f.start:f.end]), ok: true, eq: shareEq[f.name]})
 			}
 		}
-		return
+		return nil
 	}
+	var b []byte
+	var spans []fieldSpan
+	encoded := false
 	j := 0
 	for i := range s.fields {
 		f := &s.fields[i]
-		if !f.ok {
+		if !f.ok || (f.eq != nil && f.eq(&s.first, &it)) {
 			continue
+		}
+		if !encoded {
+			var err error
+			if b, spans, err = encode(); err != nil {
+				return err
+			}
+			encoded = true
 		}
 		k := j
 		for k < len(spans) && spans[k].name != f.name {
@@ -226,6 +299,7 @@ func (s *markShare) add(b []byte, spans []fieldSpan) {
 		f.ok = bytes.Equal(f.json, b[spans[k].start:spans[k].end])
 		j = k + 1
 	}
+	return nil
 }
 
 // shared returns the fields to leave out of the members: none for a mark
@@ -275,9 +349,10 @@ func sharedJSON(fs []sharedField) []byte {
 	return append(b, '}')
 }
 
-// shareByMark encodes every member once to find, for each entry of
-// r.Marks (the first of each name; its index in markAt), the fields all
-// its members have alike.
+// shareByMark finds, for each entry of r.Marks (the first of each name;
+// its index in markAt), the fields all its members have alike. It numbers
+// the calculations and info lists in member order, as the members are
+// written.
 func shareByMark(r *Results, me *memberEncoder, calcs *calcTable, markAt map[string]int) ([]*markShare, error) {
 	shares := make([]*markShare, len(r.Marks))
 	for i := range r.Marks {
@@ -286,23 +361,27 @@ func shareByMark(r *Results, me *memberEncoder, calcs *calcTable, markAt map[str
 			shares[i] = &markShare{}
 		}
 	}
-	if len(markAt) == 0 {
-		return shares, nil
-	}
 	me.shareOnly = true // what is never shared need not be written
+	defer func() { me.shareOnly = false }()
 	for i := range r.Members {
-		k, ok := markAt[r.Members[i].Mark]
+		orig := &r.Members[i]
+		it := shareItem{m: orig, calc: calcs.id(orig)}
+		if len(orig.Info) > 0 {
+			it.info = me.infos.id(orig.Info)
+		}
+		k, ok := markAt[orig.Mark]
 		if !ok {
 			continue
 		}
-		m := memberForJSON(r.Members[i], calcs.id(&r.Members[i]))
-		b, err := me.encode(&m, &r.Members[i])
+		err := shares[k].meet(it, func() ([]byte, []fieldSpan, error) {
+			m := memberForJSON(*orig, it.calc)
+			b, err := me.encode(&m, orig)
+			return b, me.spans, err
+		})
 		if err != nil {
 			return nil, fmt.Errorf("members[%d]: %w", i, err)
 		}
-		shares[k].add(b, me.spans)
 	}
-	me.shareOnly = false
 	return shares, nil
 }
 

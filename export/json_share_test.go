@@ -161,3 +161,92 @@ func TestWriteJSONShares(t *testing.T) {
 		t.Errorf("board feet read back %v", back.Takeoff.Totals.BoardFeet)
 	}
 }
+
+// TestShareEqImpliesSameBytes: wherever shareEq calls a field of two
+// members alike, the encoder writes that field alike, for a member with
+// every field set and each of its values changed in turn (a field whose
+// comparison missed a value would be left out of a member whose value
+// differs). Every shareable field the encoder writes has a comparison.
+// Common practice, no source.
+func TestShareEqImpliesSameBytes(t *testing.T) {
+	type enc struct {
+		b     []byte
+		spans map[string]string
+	}
+	encodeShared := func(m *Member) (shareItem, enc) {
+		e := newMemberEncoder(layoutV3)
+		e.shareOnly = true
+		calcs := newCalcTable()
+		it := shareItem{m: m, calc: calcs.id(m)}
+		if len(m.Info) > 0 {
+			it.info = e.infos.id(m.Info)
+		}
+		jm := memberForJSON(*m, it.calc)
+		b, err := e.encode(&jm, m)
+		if err != nil {
+			t.Fatal(err)
+		}
+		out := enc{b: append([]byte(nil), b...), spans: map[string]string{}}
+		for _, f := range e.spans {
+			out.spans[f.name] = string(b[f.start:f.end])
+		}
+		return it, out
+	}
+	full := fullMember(t)
+	_, e0 := encodeShared(&full)
+	for name := range e0.spans {
+		if !unsharedKeys[name] && shareEq[name] == nil {
+			t.Errorf("field %q is written and shareable but has no comparison in shareEq", name)
+		}
+	}
+	var paths [][]int
+	var walk func(v reflect.Value, path []int)
+	walk = func(v reflect.Value, path []int) {
+		switch v.Kind() {
+		case reflect.String, reflect.Float64, reflect.Int, reflect.Bool:
+			paths = append(paths, append([]int(nil), path...))
+		case reflect.Struct:
+			for i := 0; i < v.NumField(); i++ {
+				if f := v.Type().Field(i); f.IsExported() {
+					walk(v.Field(i), append(path, i))
+				}
+			}
+		case reflect.Slice, reflect.Array:
+			for i := 0; i < v.Len(); i++ {
+				walk(v.Index(i), append(path, i))
+			}
+		}
+	}
+	walk(reflect.ValueOf(full), nil)
+	if len(paths) < 40 {
+		t.Fatalf("only %d values found in a full member", len(paths))
+	}
+	for _, path := range append(paths, nil) {
+		a, b := fullMember(t), fullMember(t)
+		v := reflect.ValueOf(&b).Elem()
+		for _, i := range path {
+			if v.Kind() == reflect.Struct {
+				v = v.Field(i)
+			} else {
+				v = v.Index(i)
+			}
+		}
+		switch v.Kind() {
+		case reflect.String:
+			v.SetString(v.String() + "x")
+		case reflect.Float64:
+			v.SetFloat(v.Float() + 1)
+		case reflect.Int:
+			v.SetInt(v.Int() + 1)
+		case reflect.Bool:
+			v.SetBool(!v.Bool())
+		}
+		ia, ea := encodeShared(&a)
+		ib, eb := encodeShared(&b)
+		for name, eq := range shareEq {
+			if eq(&ia, &ib) && ea.spans[name] != eb.spans[name] {
+				t.Errorf("value path %v: shareEq calls %q alike, written %s and %s", path, name, ea.spans[name], eb.spans[name])
+			}
+		}
+	}
+}
