@@ -6,8 +6,11 @@ import "strings"
 // a key is renamed or removed; adding keys keeps it. Version 3 (issue 18)
 // leaves the checks out of the members (they are their calculation's),
 // writes the members' info lines once in "info_lists" (a member names its
-// list in "info_list"), and writes the numbers of members and calculations
-// with the digits they carry (json_num.go). Version 2 moved the traces and
+// list in "info_list"), writes what every member of a mark has alike once
+// in the mark's "shared", a member's source as its DXF "line" and no
+// location where they can be derived, an uplift bearing's mark and support
+// only where they cannot (json_share.go), and every number with the
+// digits it carries (json_num.go, json_round.go). Version 2 moved the traces and
 // factors of the members' checks into "calculations", written once for all
 // the members checked alike (a member names its entry in "calculation");
 // version 1 repeated them in every member. docs/RESULTS-SCHEMA.md lists
