@@ -3,7 +3,6 @@ package export
 import (
 	"bufio"
 	"encoding/json"
-	"reflect"
 	"strconv"
 	"strings"
 )
@@ -34,11 +33,17 @@ type CalcCheck struct {
 // them: C1, C2, ... A calculation is a member's checks slice and factors
 // slice; members checked alike share both.
 type calcTable struct {
-	ids   map[[2]cleanSlice]string
+	ids   map[calcKey]string
 	order []*Member // first member of each calculation
 }
 
-func newCalcTable() *calcTable { return &calcTable{ids: map[[2]cleanSlice]string{}} }
+func newCalcTable() *calcTable { return &calcTable{ids: map[calcKey]string{}} }
+
+// calcKey names a calculation by its checks and factors slices.
+type calcKey struct {
+	checks  sliceKey[Check]
+	factors sliceKey[TraceItem]
+}
 
 // id returns the id of m's calculation, numbering it when new; "" for a
 // member without checks or factors (an error member).
@@ -46,7 +51,7 @@ func (t *calcTable) id(m *Member) string {
 	if len(m.Checks) == 0 && len(m.Factors) == 0 {
 		return ""
 	}
-	k := [2]cleanSlice{sliceID(m.Checks), sliceID(m.Factors)}
+	k := calcKey{keyOf(m.Checks), keyOf(m.Factors)}
 	if id, ok := t.ids[k]; ok {
 		return id
 	}
@@ -56,13 +61,18 @@ func (t *calcTable) id(m *Member) string {
 	return id
 }
 
-// sliceID names a slice by its first element, length and type.
-func sliceID[T any](s []T) cleanSlice {
+// sliceKey names a slice by its first element and length, without
+// reflection (which would allocate for every member).
+type sliceKey[T any] struct {
+	p *T
+	n int
+}
+
+func keyOf[T any](s []T) sliceKey[T] {
 	if len(s) == 0 {
-		return cleanSlice{}
+		return sliceKey[T]{}
 	}
-	v := reflect.ValueOf(s)
-	return cleanSlice{v.Pointer(), v.Len(), v.Type()}
+	return sliceKey[T]{&s[0], len(s)}
 }
 
 // calculation returns m's checks and factors as a Calculation; with
@@ -112,18 +122,18 @@ var (
 // them: I1, I2, ... Members checked alike share one slice, found by its
 // address; equal lists in different slices share an id too.
 type infoTable struct {
-	bySlice map[cleanSlice]string
+	bySlice map[sliceKey[string]]string
 	byText  map[string]string
 	order   [][]string
 }
 
 func newInfoTable() *infoTable {
-	return &infoTable{bySlice: map[cleanSlice]string{}, byText: map[string]string{}}
+	return &infoTable{bySlice: map[sliceKey[string]]string{}, byText: map[string]string{}}
 }
 
 // id returns the id of the list info (not empty), numbering it when new.
 func (t *infoTable) id(info []string) string {
-	k := sliceID(info)
+	k := keyOf(info)
 	if id, ok := t.bySlice[k]; ok {
 		return id
 	}

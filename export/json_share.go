@@ -254,10 +254,14 @@ var shareEq = map[string]func(a, b *shareItem) bool{
 }
 
 // meet compares one more member of the mark with those met so far:
-// field by field with shareEq, and by the bytes encode writes (encoding
+// field by field with shareEq, and by the bytes me writes (encoding
 // the member at most once, only when a comparison of values cannot tell).
-// encode returns the member's bytes and their top-level fields.
-func (s *markShare) meet(it shareItem, encode func() ([]byte, []fieldSpan, error)) error {
+func (s *markShare) meet(it shareItem, me *memberEncoder) error {
+	encode := func() ([]byte, []fieldSpan, error) {
+		m := memberForJSON(*it.m, it.calc)
+		b, err := me.encode(&m, it.m)
+		return b, me.spans, err
+	}
 	s.n++
 	if s.n == 1 {
 		b, spans, err := encode()
@@ -373,12 +377,7 @@ func shareByMark(r *Results, me *memberEncoder, calcs *calcTable, markAt map[str
 		if !ok {
 			continue
 		}
-		err := shares[k].meet(it, func() ([]byte, []fieldSpan, error) {
-			m := memberForJSON(*orig, it.calc)
-			b, err := me.encode(&m, orig)
-			return b, me.spans, err
-		})
-		if err != nil {
+		if err := shares[k].meet(it, me); err != nil {
 			return nil, fmt.Errorf("members[%d]: %w", i, err)
 		}
 	}
