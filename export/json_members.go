@@ -39,6 +39,9 @@ type memberEncoder struct {
 	// shareOnly leaves out the fields never shared (unsharedKeys): the
 	// first pass, which finds what the members of each mark share.
 	shareOnly bool
+	// skip are the fields the next member's mark shares, in the order they
+	// are written: left out of it (layout 3).
+	skip []sharedField
 }
 
 func newMemberEncoder(lay jsonLayout) *memberEncoder {
@@ -53,6 +56,7 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 	w.round = e.lay.refs
 	w.rec = e.lay.refs
 	w.spans = e.spans[:0]
+	w.skip = e.skip
 	w.b = append(e.buf[:0], '{')
 	who := !e.shareOnly // who and where the member is (never shared)
 	if who {
@@ -79,7 +83,7 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 		}
 	}
 	w.num("datum_in", m.DatumIn)
-	if m.Generated {
+	if m.Generated && !w.skipped("generated") {
 		w.key("generated")
 		w.b = append(w.b, "true"...)
 	}
@@ -97,7 +101,7 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 	w.str("species", m.Species)
 	w.str("grade", m.Grade)
 	w.str("zone", m.Zone)
-	if len(m.ZonePieces) > 0 {
+	if len(m.ZonePieces) > 0 && !w.skipped("zone_pieces") {
 		w.key("zone_pieces")
 		w.depth++
 		w.b = append(w.b, '[')
@@ -141,7 +145,7 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 	if len(m.DrawnBlockingAtIn) > 0 {
 		w.floats("drawn_blocking_at_in", m.DrawnBlockingAtIn)
 	}
-	if len(m.BlockingSteps) > 0 {
+	if len(m.BlockingSteps) > 0 && !w.skipped("blocking_steps") {
 		w.key("blocking_steps")
 		w.depth++
 		w.b = append(w.b, '[')
@@ -184,6 +188,9 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 	w.strs("messages", m.Messages)
 	if w.err != nil {
 		return nil, w.err
+	}
+	if len(w.skip) > 0 { // its mark shares a field it does not have: never so
+		return nil, fmt.Errorf("member %s: field %q of its mark's \"shared\" not met", m.ID, w.skip[0].name)
 	}
 	if n := len(w.spans); n > 0 {
 		w.spans[n-1].end = len(w.b)
@@ -228,6 +235,8 @@ type jsonOut struct {
 	rec   bool
 	depth int
 	spans []fieldSpan
+	// skip are top-level fields to leave out, in the order they come.
+	skip []sharedField
 	// round writes numbers with the digits they carry (schema 3):
 	// SigDigits significant digits, coordinates to CoordDecimals places.
 	round bool
@@ -250,12 +259,28 @@ func (w *jsonOut) key(name string) {
 	w.b = append(w.b, '"', ':')
 }
 
+// skipped reports whether the top-level field name is to be left out
+// (the next in skip), and takes it off skip.
+func (w *jsonOut) skipped(name string) bool {
+	if w.depth == 0 && len(w.skip) > 0 && w.skip[0].name == name {
+		w.skip = w.skip[1:]
+		return true
+	}
+	return false
+}
+
 func (w *jsonOut) str(name, v string) {
+	if w.skipped(name) {
+		return
+	}
 	w.key(name)
 	w.b = appendJSONString(w.b, v)
 }
 
 func (w *jsonOut) num(name string, v float64) {
+	if w.skipped(name) {
+		return
+	}
 	w.key(name)
 	w.float(v)
 }
@@ -305,6 +330,9 @@ func (w *jsonOut) strs(name string, vs []string) {
 // writeList writes "name":[...] with each element written by one; a nil
 // list as null, as encoding/json does.
 func writeList[T any](w *jsonOut, name string, vs []T, one func(T)) {
+	if w.skipped(name) {
+		return
+	}
 	w.key(name)
 	if vs == nil {
 		w.b = append(w.b, "null"...)

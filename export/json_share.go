@@ -321,26 +321,6 @@ func (s *markShare) shared() []sharedField {
 	return out
 }
 
-// writeObject writes the spans of b not in skip (in order, a subsequence
-// of spans) as one JSON object.
-func writeObject(w *bufio.Writer, b []byte, spans []fieldSpan, skip []sharedField) {
-	w.WriteByte('{')
-	first := true
-	p := 0
-	for _, f := range spans {
-		if p < len(skip) && skip[p].name == f.name {
-			p++
-			continue
-		}
-		if !first {
-			w.WriteByte(',')
-		}
-		first = false
-		w.Write(b[f.start:f.end])
-	}
-	w.WriteByte('}')
-}
-
 // sharedJSON returns the mark's "shared" object.
 func sharedJSON(fs []sharedField) []byte {
 	b := []byte{'{'}
@@ -399,21 +379,22 @@ func writeMembersV3(w *bufio.Writer, key func(string), r *Results, me *memberEnc
 	w.WriteString("[\n")
 	for i := range r.Members {
 		m := memberForJSON(r.Members[i], calcs.id(&r.Members[i]))
+		me.skip = nil
+		if k, ok := markAt[m.Mark]; ok {
+			me.skip = skip[k]
+		}
 		b, err := me.encode(&m, &r.Members[i])
 		if err != nil {
 			return fmt.Errorf("members[%d]: %w", i, err)
 		}
-		var sk []sharedField
-		if k, ok := markAt[m.Mark]; ok {
-			sk = skip[k]
-		}
 		w.WriteString("  ")
-		writeObject(w, b, me.spans, sk)
+		w.Write(b)
 		if i < len(r.Members)-1 {
 			w.WriteByte(',')
 		}
 		w.WriteByte('\n')
 	}
+	me.skip = nil
 	w.WriteString(" ]")
 	return nil
 }
