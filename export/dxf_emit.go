@@ -22,6 +22,7 @@ type dxfEmitter struct {
 	// codes holds each group code line written so far (code, end of
 	// line), made once: a large plan's markup writes millions.
 	codes [][]byte
+	xy    []byte // a text's point, formatted once
 }
 
 func (e *dxfEmitter) pair(code int, value string) {
@@ -72,6 +73,13 @@ func (e *dxfEmitter) num(code int, v float64) {
 	e.code(code)
 	e.scratch = appendDXFNum(e.scratch[:0], v)
 	e.w.Write(e.scratch)
+	e.w.WriteString(e.eol)
+}
+
+// raw writes a pair whose value is already formatted.
+func (e *dxfEmitter) raw(code int, value []byte) {
+	e.code(code)
+	e.w.Write(value)
 	e.w.WriteString(e.eol)
 }
 
@@ -135,8 +143,13 @@ func (e *dxfEmitter) text(layer string, at [2]float64, h, deg float64, s string)
 // 1 centre) and vertical middle are at at (drawing units).
 func (e *dxfEmitter) alignedText(layer string, at [2]float64, h, deg float64, s string, halign int) {
 	e.entityHead("TEXT", layer, "AcDbText", 0)
-	e.num(10, at[0])
-	e.num(20, at[1])
+	// The point is written twice (first and second alignment point):
+	// formatted once.
+	e.xy = appendDXFNum(e.xy[:0], at[0])
+	nx := len(e.xy)
+	e.xy = appendDXFNum(e.xy, at[1])
+	e.raw(10, e.xy[:nx])
+	e.raw(20, e.xy[nx:])
 	e.num(30, 0)
 	e.num(40, h)
 	e.pair(1, cleanText(s))
@@ -144,8 +157,8 @@ func (e *dxfEmitter) alignedText(layer string, at [2]float64, h, deg float64, s 
 		e.num(50, deg)
 	}
 	e.pair(72, strconv.Itoa(halign))
-	e.num(11, at[0])
-	e.num(21, at[1])
+	e.raw(11, e.xy[:nx])
+	e.raw(21, e.xy[nx:])
 	e.num(31, 0)
 	if e.subclass {
 		e.pair(100, "AcDbText")

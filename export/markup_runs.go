@@ -197,6 +197,7 @@ func runLabels(r *Results, ends [][2][2]float64, h float64) (labels, ids []Label
 		labels = append(labels, lb)
 	}
 	hid := IDHeightFactor * h
+	ids = make([]Label, 0, len(r.Members)) // one id a member: made once, not grown
 	for i := range r.Members {
 		a, b := ends[i][0], ends[i][1]
 		nv := normal(a, b)
