@@ -497,7 +497,8 @@ func encodeResults(w *bufio.Writer, r *Results, lay jsonLayout) error {
 			if r.LoadPath == nil {
 				return nil
 			}
-			return value("load_path", rounded(r.LoadPath))
+			key("load_path")
+			return writeLoadPathJSON(w, r.LoadPath, rounded)
 		},
 		func() error {
 			t := r.Takeoff
@@ -545,4 +546,67 @@ func orEmpty[T any](s []T) []T {
 		return []T{}
 	}
 	return s
+}
+
+// writeLoadPathJSON writes lp as json.Marshal would (the same keys, in
+// order, null for a nil list), each beam, post, connection and foundation
+// line encoded alone on its own line: the section stays streamed however
+// many joints the plan has, as the members are. round gives a value as
+// the layout writes it.
+func writeLoadPathJSON(w *bufio.Writer, lp *LoadPath, round func(any) any) error {
+	w.WriteString("{\n")
+	list := func(name string, n int, isNil bool, item func(i int) any) error {
+		w.WriteString("  \"" + name + "\": ")
+		switch {
+		case isNil:
+			w.WriteString("null")
+		case n == 0:
+			w.WriteString("[]")
+		default:
+			w.WriteString("[\n")
+			for i := 0; i < n; i++ {
+				b, err := json.Marshal(round(item(i)))
+				if err != nil {
+					return fmt.Errorf("%s[%d]: %w", name, i, err)
+				}
+				w.WriteString("   ")
+				w.Write(b)
+				if i < n-1 {
+					w.WriteByte(',')
+				}
+				w.WriteByte('\n')
+			}
+			w.WriteString("  ]")
+		}
+		w.WriteString(",\n")
+		return nil
+	}
+	if err := list("beams", len(lp.Beams), lp.Beams == nil, func(i int) any { return lp.Beams[i] }); err != nil {
+		return err
+	}
+	if err := list("posts", len(lp.Posts), lp.Posts == nil, func(i int) any { return lp.Posts[i] }); err != nil {
+		return err
+	}
+	if err := list("connections", len(lp.Connections), lp.Connections == nil, func(i int) any { return lp.Connections[i] }); err != nil {
+		return err
+	}
+	if err := list("foundation", len(lp.Foundation), lp.Foundation == nil, func(i int) any { return lp.Foundation[i] }); err != nil {
+		return err
+	}
+	for _, t := range []struct {
+		name string
+		v    TypeLoads
+	}{{"applied", lp.Applied}, {"delivered", lp.Delivered}} {
+		b, err := json.Marshal(round(t.v))
+		if err != nil {
+			return fmt.Errorf("%s: %w", t.name, err)
+		}
+		w.WriteString("  \"" + t.name + "\": ")
+		w.Write(b)
+		if t.name == "applied" {
+			w.WriteString(",\n")
+		}
+	}
+	w.WriteString("\n }")
+	return nil
 }
