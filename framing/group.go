@@ -59,6 +59,9 @@ type grouper struct {
 	opt  Options
 	plan *Plan
 
+	workers  int // goroutines for the parallel parts (parallel.go)
+	minChunk int // fewest items a goroutine is given
+
 	joists     []segItem
 	sups       []segItem
 	blocking   []segItem
@@ -116,28 +119,50 @@ type dirGroup struct {
 // Group turns an imported drawing into members. It never fails: problems
 // are in Plan.Issues and on the members (Error, Messages).
 func Group(d *dxfimport.Drawing, opt Options) *Plan {
-	g := &grouper{opt: opt, plan: &Plan{Ignored: map[string]int{}}, genFrom: -1}
+	return groupWith(d, opt, defaultWorkers(), defaultMinChunk)
+}
+
+// groupWith is Group with its parallel parts on at most workers
+// goroutines, each given at least minChunk items (parallel.go).
+func groupWith(d *dxfimport.Drawing, opt Options, workers, minChunk int) *Plan {
+	g := newGrouper(opt, workers, minChunk)
 	if d == nil {
 		return g.plan
 	}
 	g.units, g.toInch = d.Units, d.ToInch
 	g.classify(d)
-	g.outlines()
-	g.brokenOutlines()
-	g.joistBlocking()
-	g.bays()
-	g.makeMembers()
-	g.findBearings()
-	g.neighbours()
-	g.makeRuns()
-	g.assignZones()
-	g.claimBeamCallouts()
-	g.assignLumber()
-	g.finishOutlines()
-	g.drawnBlocking()
-	g.existingBlocking()
-	g.loadPath()
+	for _, s := range groupSteps {
+		s.run(g)
+	}
 	return g.plan
+}
+
+// groupSteps are the steps of Group after classify, in order; each reads
+// what the ones before it left in the grouper. They are named so that
+// the benchmarks can time them one by one.
+var groupSteps = []struct {
+	name string
+	run  func(*grouper)
+}{
+	{"outlines", (*grouper).outlines},
+	{"brokenOutlines", (*grouper).brokenOutlines},
+	{"joistBlocking", (*grouper).joistBlocking},
+	{"bays", (*grouper).bays},
+	{"makeMembers", (*grouper).makeMembers},
+	{"findBearings", (*grouper).findBearings},
+	{"neighbours", (*grouper).neighbours},
+	{"makeRuns", (*grouper).makeRuns},
+	{"assignZones", (*grouper).assignZones},
+	{"claimBeamCallouts", (*grouper).claimBeamCallouts},
+	{"assignLumber", (*grouper).assignLumber},
+	{"finishOutlines", (*grouper).finishOutlines},
+	{"drawnBlocking", (*grouper).drawnBlocking},
+	{"existingBlocking", (*grouper).existingBlocking},
+	{"loadPath", (*grouper).loadPath},
+}
+
+func newGrouper(opt Options, workers, minChunk int) *grouper {
+	return &grouper{opt: opt, plan: &Plan{Ignored: map[string]int{}}, genFrom: -1, workers: workers, minChunk: minChunk}
 }
 
 // drawingPoint formats a point (inches inside framing) in the drawing's
