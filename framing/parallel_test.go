@@ -148,7 +148,7 @@ func messyPlan(seed uint64, bays int) *dxfimport.Drawing {
 	for b := 0; b < bays; b++ {
 		x0, y0 := float64(b%cols)*260, float64(b/cols)*220
 		span := 120 + 12*float64(r.IntN(6))
-		across := r.IntN(4) == 0 // joists along x
+		across := r.IntN(4) == 0                      // joists along x
 		pt := func(a, c float64) (float64, float64) { // along, across -> x, y
 			if across {
 				return x0 + a, y0 + c
