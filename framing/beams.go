@@ -65,11 +65,7 @@ func (g *grouper) beamCandidates() {
 	for k, i := range cand {
 		segs[k] = g.sups[i]
 	}
-	lo, hi, typ := bounds(segs)
-	idx := newSegIndex(lo, hi, len(segs), typ)
-	for k, s := range segs {
-		idx.insert(k, s.a, s.b, 0)
-	}
+	idx := indexSegs(segs)
 	taken := make([]bool, len(cand))
 	var groups []beamGroup
 	for k, i := range cand {
@@ -185,11 +181,7 @@ func (g *grouper) claimBeamCallouts() {
 	for k := range bs {
 		segs[k] = segItem{a: bs[k].start(), b: bs[k].end()}
 	}
-	lo, hi, typ := bounds(segs)
-	idx := newSegIndex(lo, hi, len(segs), typ)
-	for k, sg := range segs {
-		idx.insert(k, sg.a, sg.b, 0)
-	}
+	idx := indexSegs(segs)
 	claimedBy := make([]int, len(g.labelTexts))
 	for ti, t := range g.labelTexts {
 		claimedBy[ti] = -1

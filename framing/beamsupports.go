@@ -46,11 +46,7 @@ func (g *grouper) beamIndex() *segIndex {
 		for k, b := range p.Beams {
 			segs[k] = segItem{a: b.Start, b: b.End}
 		}
-		lo, hi, typ := bounds(segs)
-		g.lp.beamIdx = newSegIndex(lo, hi, len(segs), typ)
-		for k, s := range segs {
-			g.lp.beamIdx.insert(k, s.a, s.b, 0)
-		}
+		g.lp.beamIdx = indexSegs(segs)
 	}
 	return g.lp.beamIdx
 }
@@ -66,6 +62,7 @@ func (g *grouper) beamOnWalls() {
 	tol, wall := g.opt.SnapToleranceIn, g.opt.MaxWallThicknessIn
 	minSin := math.Sin(minBearingAngleDeg * math.Pi / 180)
 	scratch := map[[2]int]bool{}
+	var sc bearingScratch
 	var hits []hit
 	for k := range p.Beams {
 		b := &p.Beams[k]
@@ -94,7 +91,7 @@ func (g *grouper) beamOnWalls() {
 			}
 			return a.sup - b.sup
 		})
-		ws, _ := g.bearingsFrom(hits, scratch, L)
+		ws := g.bearingsNow(&sc, hits, scratch, L)
 		for _, w := range ws {
 			// a beam drawn to the face of a wall bears on the wall, not
 			// on nothing: its bearing is the wall's

@@ -188,11 +188,7 @@ func (g *grouper) crossAt(k int, a, b Point) (float64, bool) {
 // labelIndex is a grid over the label lines, built on first use.
 func (g *grouper) labelIndex() *segIndex {
 	if g.lblIdx == nil && len(g.labelLines) > 0 {
-		lo, hi, typ := bounds(g.labelLines)
-		g.lblIdx = newSegIndex(lo, hi, len(g.labelLines), typ)
-		for i, l := range g.labelLines {
-			g.lblIdx.insert(i, l.a, l.b, 0)
-		}
+		g.lblIdx = indexSegs(g.labelLines)
 	}
 	return g.lblIdx
 }
@@ -201,14 +197,10 @@ func (g *grouper) memberIndex() *segIndex {
 	p := g.plan
 	if g.memIdx == nil && len(p.Members) > 0 {
 		segs := make([]segItem, len(p.Members))
-		for k, m := range p.Members {
-			segs[k] = segItem{a: m.Start, b: m.End}
+		for k := range p.Members {
+			segs[k] = segItem{a: p.Members[k].Start, b: p.Members[k].End}
 		}
-		lo, hi, typ := bounds(segs)
-		g.memIdx = newSegIndex(lo, hi, len(segs), typ)
-		for k, s := range segs {
-			g.memIdx.insert(k, s.a, s.b, 0)
-		}
+		g.memIdx = indexSegs(segs)
 	}
 	return g.memIdx
 }

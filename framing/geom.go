@@ -49,8 +49,16 @@ type segIndex struct {
 	x0, y0, cell float64
 	nx, ny       int
 	cells        [][]int32
-	stamp        []uint32
-	cur          uint32
+	n            int       // ids are 0..n-1
+	own          segCursor // query's
+}
+
+// segCursor is the state of a walk through a segIndex: which ids the
+// current query has met. query uses the index's own; goroutines querying
+// one index at once each use their own (newCursor).
+type segCursor struct {
+	stamp []uint32
+	cur   uint32
 }
 
 // maxGridCells bounds the grid's memory; the cell grows to keep under it.
@@ -69,9 +77,54 @@ func newSegIndex(lo, hi Point, n int, typLenIn float64) *segIndex {
 	g.nx = int(w/cell) + 1
 	g.ny = int(h/cell) + 1
 	g.cells = make([][]int32, g.nx*g.ny)
-	g.stamp = make([]uint32, n)
+	g.n = n
 	return g
 }
+
+// indexSegs makes a grid over segs, listing segment i under id i.
+func indexSegs(segs []segItem) *segIndex {
+	lo, hi, typ := bounds(segs)
+	g := newSegIndex(lo, hi, len(segs), typ)
+	g.fill(len(segs), func(i int) (Point, Point) { return segs[i].a, segs[i].b })
+	return g
+}
+
+// fill inserts segments 0..n-1 (seg gives each one's ends) with no pad,
+// as insert would one after another, but with the cells' lists carved
+// from one array: the segments are walked twice, once to count each
+// cell's, once to list them.
+func (g *segIndex) fill(n int, seg func(i int) (Point, Point)) {
+	count := make([]int32, len(g.cells))
+	last := make([]int32, len(g.cells)) // per cell: 1 + the last id counted
+	for id := 0; id < n; id++ {
+		a, b := seg(id)
+		g.visit(a, b, 0, func(c int) {
+			if last[c] != int32(id)+1 {
+				last[c] = int32(id) + 1
+				count[c]++
+			}
+		})
+	}
+	total := 0
+	for _, k := range count {
+		total += int(k)
+	}
+	flat := make([]int32, total)
+	off := 0
+	for c, k := range count {
+		if k > 0 {
+			g.cells[c] = flat[off : off : off+int(k)]
+			off += int(k)
+		}
+	}
+	for id := 0; id < n; id++ {
+		a, b := seg(id)
+		g.insert(id, a, b, 0)
+	}
+}
+
+// newCursor returns a cursor for queries through g on another goroutine.
+func (g *segIndex) newCursor() *segCursor { return &segCursor{stamp: make([]uint32, g.n)} }
 
 func (g *segIndex) cellRange(a, b Point, pad float64) (i0, j0, i1, j1 int) {
 	clampI := func(v float64, n int) int {
@@ -120,17 +173,27 @@ func (g *segIndex) insert(id int, a, b Point, pad float64) {
 	})
 }
 
-// query calls fn once for every segment listed near ab (padded by pad).
+// query calls fn once for every segment listed near ab (padded by pad),
+// in the order the cells list them.
 func (g *segIndex) query(a, b Point, pad float64, fn func(id int)) {
-	g.cur++
-	if g.cur == 0 { // wrapped: clear the stamps
-		clear(g.stamp)
-		g.cur = 1
+	if g.own.stamp == nil {
+		g.own.stamp = make([]uint32, g.n)
 	}
-	g.visit(a, b, pad, func(c int) {
-		for _, id := range g.cells[c] {
-			if g.stamp[id] != g.cur {
-				g.stamp[id] = g.cur
+	g.queryWith(&g.own, a, b, pad, fn)
+}
+
+// queryWith is query with cursor c: with one cursor each, goroutines may
+// query one index at once (the index is only read).
+func (g *segIndex) queryWith(c *segCursor, a, b Point, pad float64, fn func(id int)) {
+	c.cur++
+	if c.cur == 0 { // wrapped: clear the stamps
+		clear(c.stamp)
+		c.cur = 1
+	}
+	g.visit(a, b, pad, func(cell int) {
+		for _, id := range g.cells[cell] {
+			if c.stamp[id] != c.cur {
+				c.stamp[id] = c.cur
 				fn(int(id))
 			}
 		}

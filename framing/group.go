@@ -5,7 +5,7 @@ import (
 	"fmt"
 	"math"
 	"slices"
-	"sort"
+	"strconv"
 
 	"framecheck/dxfimport"
 )
@@ -89,9 +89,7 @@ type grouper struct {
 	memIdx *segIndex
 	lblIdx *segIndex
 
-	direct, outer []hit  // scratch for bearingsFrom
-	inGroup       []bool // per support line: inside a group of three or more, listed on the group's middle
-	carried       []hit  // flush beams framing into the current member
+	inGroup []bool // per support line: inside a group of three or more, listed on the group's middle
 
 	units  string  // the drawing's units ("mm"), for points in messages
 	toInch float64 // drawing units to inches
@@ -408,20 +406,32 @@ func (g *grouper) makeMembers() {
 	}
 	keep := g.dropDuplicates(js, grpOf)
 
-	order := make([]int, 0, len(js))
+	// by midpoint rounded to 0.001 in, y then x, then drawing order
+	type place struct {
+		y, x float64
+		i    int
+	}
+	places := make([]place, 0, len(js))
+	rnd := func(v float64) float64 { return math.Round(v*1000) / 1000 }
 	for i := range js {
 		if keep[i] {
-			order = append(order, i)
+			m := mid(js[i].a, js[i].b)
+			places = append(places, place{rnd(m.Y), rnd(m.X), i})
 		}
 	}
-	rnd := func(v float64) float64 { return math.Round(v*1000) / 1000 }
-	sort.SliceStable(order, func(x, y int) bool {
-		ma, mb := mid(js[order[x]].a, js[order[x]].b), mid(js[order[y]].a, js[order[y]].b)
-		if ya, yb := rnd(ma.Y), rnd(mb.Y); ya != yb {
-			return ya < yb
+	slices.SortFunc(places, func(a, b place) int {
+		if c := cmp.Compare(a.y, b.y); c != 0 {
+			return c
 		}
-		return rnd(ma.X) < rnd(mb.X)
+		if c := cmp.Compare(a.x, b.x); c != 0 {
+			return c
+		}
+		return cmp.Compare(a.i, b.i)
 	})
+	order := make([]int, len(places))
+	for k := range places {
+		order[k] = places[k].i
+	}
 	n := len(order)
 	p := g.plan
 	p.Members = make([]Member, n)
@@ -440,25 +450,31 @@ func (g *grouper) makeMembers() {
 			g.segMem[i] = -1
 		}
 	}
-	for k, i := range order {
-		j := js[i]
-		gr := groups[grpOf[i]]
-		if g.memOl != nil {
-			g.memOl[k] = g.jol[i]
+	// Each goroutine reads the joists and their groups and writes the
+	// members of its range of k (and segMem of their joists: order is a
+	// permutation, so no two members write one joist's).
+	parallel(g.split(n), func(_ int, sp span) {
+		for k := sp.lo; k < sp.hi; k++ {
+			i := order[k]
+			j := js[i]
+			gr := groups[grpOf[i]]
+			if g.memOl != nil {
+				g.memOl[k] = g.jol[i]
+			}
+			if g.segMem != nil {
+				g.segMem[i] = int32(k)
+			}
+			p.Members[k] = Member{
+				ID: "M" + strconv.Itoa(k+1), Pos: j.pos, Layer: j.pos.Layer,
+				Start: j.a, End: j.b, LengthIn: dist(j.a, j.b),
+				Generated: g.genFrom >= 0 && i >= g.genFrom,
+			}
+			p.dirs[k] = unit(sub(j.b, j.a))
+			p.across[k] = dot(mid(j.a, j.b), gr.n)
+			g.grp[k] = grpOf[i]
+			g.a0[k], g.a1[k] = dot(j.a, gr.u), dot(j.b, gr.u)
 		}
-		if g.segMem != nil {
-			g.segMem[i] = int32(k)
-		}
-		p.Members[k] = Member{
-			ID: fmt.Sprintf("M%d", k+1), Pos: j.pos, Layer: j.pos.Layer,
-			Start: j.a, End: j.b, LengthIn: dist(j.a, j.b),
-			Generated: g.genFrom >= 0 && i >= g.genFrom,
-		}
-		p.dirs[k] = unit(sub(j.b, j.a))
-		p.across[k] = dot(mid(j.a, j.b), gr.n)
-		g.grp[k] = grpOf[i]
-		g.a0[k], g.a1[k] = dot(j.a, gr.u), dot(j.b, gr.u)
-	}
+	})
 }
 
 // directionGroups clusters joists whose directions (mod 180 degrees) chain
@@ -570,13 +586,23 @@ func (g *grouper) dropDuplicates(js []segItem, grpOf []int) []bool {
 	cellOf := func(k key) cell {
 		return cell{grpOf[k.i], int64(math.Floor(k.c / minNeighbourGapIn)), int64(math.Floor(k.a / alongCell))}
 	}
-	var grid map[cell][]int // sorted positions, ascending; built when a window is long
+	// The grid is built when a window is long: per cell, the first
+	// position in it (head) and each position's next in its cell (next),
+	// ascending, -1 at the end.
+	var head map[cell]int32
+	var next []int32
 	buildGrid := func() {
-		grid = map[cell][]int{}
-		for x, k := range ks {
+		head = make(map[cell]int32, len(ks))
+		next = make([]int32, len(ks))
+		for x := len(ks) - 1; x >= 0; x-- {
+			k := ks[x]
+			next[x] = -1
 			if finiteKey(k.c, k.a) {
 				cl := cellOf(k)
-				grid[cl] = append(grid[cl], x)
+				if h, ok := head[cl]; ok {
+					next[x] = h
+				}
+				head[cl] = int32(x)
 			}
 		}
 	}
@@ -603,14 +629,15 @@ func (g *grouper) dropDuplicates(js []segItem, grpOf []int) []bool {
 				cand = append(cand, y)
 			}
 		case finiteKey(kx.c, kx.a):
-			if grid == nil {
+			if head == nil {
 				buildGrid()
 			}
 			cl := cellOf(kx)
 			for dc := int64(0); dc <= 1; dc++ {
 				for da := int64(-1); da <= 1; da++ {
-					for _, y := range grid[cell{cl.grp, cl.c + dc, cl.a + da}] {
-						if y > x && y < end {
+					h, ok := head[cell{cl.grp, cl.c + dc, cl.a + da}]
+					for y := int(h); ok && y >= 0 && y < end; y = int(next[y]) {
+						if y > x {
 							cand = append(cand, y)
 						}
 					}
