@@ -106,7 +106,7 @@ func (g *grouper) drawnInBay(r *bayRegion) int {
 
 // bayCallouts adds the callout of each bay to the members in it (its
 // generated joists, or the drawn ones of a bay whose joists are drawn).
-func (g *grouper) bayCallouts(got map[int][]callout) {
+func (g *grouper) bayCallouts(got [][]callout) {
 	if len(g.bayRegions) == 0 {
 		return
 	}

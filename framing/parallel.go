@@ -27,8 +27,14 @@ type span struct{ lo, hi int }
 // split cuts [0, n) into at most g.workers contiguous spans of about
 // equal size, each of at least g.minChunk items (one span when n is
 // small), in order.
-func (g *grouper) split(n int) []span {
-	w := max(1, min(g.workers, n/max(g.minChunk, 1)))
+func (g *grouper) split(n int) []span { return g.splitMin(n, g.minChunk) }
+
+// splitHeavy is split for items that each take a grid query or more
+// (label texts): goroutines are given fewer of them.
+func (g *grouper) splitHeavy(n int) []span { return g.splitMin(n, g.minChunk/16) }
+
+func (g *grouper) splitMin(n, minChunk int) []span {
+	w := max(1, min(g.workers, n/max(minChunk, 1)))
 	out := make([]span, w)
 	for i := range out {
 		out[i] = span{i * n / w, (i + 1) * n / w}
