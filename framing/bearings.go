@@ -46,18 +46,21 @@ type hit struct {
 // (parallel.go). Each goroutine reads the support lines, their grid
 // (through a cursor of its own) and its members' geometry, and writes
 // only its own members (bearings, overhangs, hangers, errors and
-// messages), g.bdirs of those members, and its own scratch, slabs and
-// issue list. What is shared is done after, in member order: the merged
-// double lines (merged, inGroup, the group middles and pair ids that
-// bearing supports refer to, which the first member to meet a group
-// decides) and the issues, range after range.
+// messages), g.bdirs of those members, and its own scratch, slabs, issue
+// list and merged groups. A bearing on a merged group names it, until
+// Plan.Supports is built, by its place in its goroutine's list of
+// groups (-2 - place). What is shared is done after: the merged pairs
+// (a set), the lines inside groups of three or more (in member order:
+// the first member to meet such a line decides the group it is listed
+// on) and the issues, range after range, which is member order.
 func (g *grouper) findBearings() {
 	p := g.plan
 	g.supportIndex()
 	g.inGroup = make([]bool, len(g.sups))
 	minSin := math.Sin(minBearingAngleDeg * math.Pi / 180)
 	spans := g.split(len(p.Members))
-	merges := make([][]memberMerge, len(spans))
+	pairs := make([][][2]int, len(spans))       // per goroutine: its merged groups' outer lines, first met first
+	middles := make([][]groupMerge, len(spans)) // per goroutine: its groups with lines inside, in member order
 	issues := make(issueLists, len(spans))
 	parallel(spans, func(w int, sp span) {
 		var cur *segCursor
@@ -68,6 +71,7 @@ func (g *grouper) findBearings() {
 		var bslab slab[Bearing]
 		var dslab slab[Point]
 		var hits []hit
+		pairAt := map[[2]int]int{} // place in pairs[w]
 		for k := sp.lo; k < sp.hi; k++ {
 			m := &p.Members[k]
 			sc.carried = sc.carried[:0]
@@ -78,8 +82,17 @@ func (g *grouper) findBearings() {
 			g.bearingsFrom(&sc, hits, m.LengthIn)
 			m.Bearings, g.bdirs[k] = bslab.take(sc.out.bs), dslab.take(sc.out.dirs)
 			for _, mg := range sc.out.merges {
-				mg.middle = slices.Clone(mg.middle) // out of the scratch
-				merges[w] = append(merges[w], memberMerge{member: k, merge: mg})
+				at, ok := pairAt[mg.key]
+				if !ok {
+					at = len(pairs[w])
+					pairAt[mg.key] = at
+					pairs[w] = append(pairs[w], mg.key)
+				}
+				m.Bearings[mg.bearing].Support = -2 - at
+				if len(mg.middle) > 0 {
+					mg.middle = slices.Clone(mg.middle) // out of the scratch
+					middles[w] = append(middles[w], mg)
+				}
 			}
 			if len(m.Bearings) < 2 {
 				// the lines it does bear on are not "the nearest support"
@@ -96,15 +109,30 @@ func (g *grouper) findBearings() {
 		}
 	})
 	merged := map[[2]int]bool{}
-	for _, ms := range merges {
-		for _, mm := range ms {
-			bs := p.Members[mm.member].Bearings
-			bs[mm.merge.bearing].Support = g.applyMerge(mm.merge, merged)
+	for w := range spans {
+		for _, key := range pairs[w] {
+			merged[key] = true
+		}
+		for _, mg := range middles[w] {
+			g.groupMiddle(mg)
 		}
 	}
 	issues.appendTo(&p.Issues)
 	g.buildSupports(merged)
-	g.resolveBearingSupports()
+	// Each goroutine sets the bearing supports of its own range of
+	// members, reading Plan.Supports' bookkeeping, now complete.
+	parallel(spans, func(w int, sp span) {
+		for k := sp.lo; k < sp.hi; k++ {
+			bs := p.Members[k].Bearings
+			for i := range bs {
+				if ref := bs[i].Support; ref <= -2 {
+					bs[i].Support = g.pairSupport(pairs[w][-2-ref])
+				} else {
+					bs[i].Support = g.supportOf(ref)
+				}
+			}
+		}
+	})
 }
 
 // bearingScratch is one goroutine's buffers for supportHits and
@@ -135,24 +163,22 @@ type groupMerge struct {
 	middle  []int  // the lines between, along the member
 }
 
-// memberMerge is a groupMerge on member member's bearings.
-type memberMerge struct {
-	member int
-	merge  groupMerge
-}
-
-// applyMerge records a merged group as seen: its pair in merged (for
-// buildSupports), its middle lines, and returns the provisional
-// Bearing.Support of its bearing (pairRef). Called in member order: the
-// first member to meet a line inside a group decides the group it is
-// listed on.
+// applyMerge records a merged group met by a beam: its pair in merged,
+// its middle lines, and returns the provisional Bearing.Support of its
+// bearing (pairRef).
 func (g *grouper) applyMerge(mg groupMerge, merged map[[2]int]bool) int {
 	merged[mg.key] = true
+	g.groupMiddle(mg)
+	return g.pairRef(mg.key)
+}
+
+// groupMiddle records the lines inside a merged group of three or more:
+// each is listed on the first group recorded for it.
+func (g *grouper) groupMiddle(mg groupMerge) {
 	for _, s := range mg.middle {
 		g.inGroup[s] = true
 		g.lp.middle(s, mg.key)
 	}
-	return g.pairRef(mg.key)
 }
 
 // supportIndex builds the grid over the support lines, once (bays may
@@ -272,8 +298,8 @@ func (g *grouper) parallelSupports(a, b int) bool {
 // middle of the group, as long as the group is wide; where the member's
 // end stops inside the group, the lines just past that end belong to it
 // too, and the bearing length stops at the end. L is the member's length.
-// Such a bearing's Support is left for applyMerge, which its groupMerge
-// in sc.out.merges is for. It reads only the support lines and options.
+// Such a bearing's Support is left to the caller, with its groupMerge in
+// sc.out.merges. It reads only the support lines and options.
 func (g *grouper) bearingsFrom(sc *bearingScratch, hits []hit, L float64) {
 	direct, outer := sc.direct[:0], sc.outer[:0]
 	defer func() { sc.direct, sc.outer = direct, outer }() // keep the buffers
