@@ -91,25 +91,25 @@ func indexSegs(segs []segItem) *segIndex {
 
 // fill inserts segments 0..n-1 (seg gives each one's ends) with no pad,
 // as insert would one after another, but with the cells' lists carved
-// from one array: the segments are walked twice, once to count each
-// cell's, once to list them.
+// from one array: each segment's cells are listed as they are walked
+// (and counted), then the segments are listed in their cells in order.
 func (g *segIndex) fill(n int, seg func(i int) (Point, Point)) {
 	count := make([]int32, len(g.cells))
-	last := make([]int32, len(g.cells)) // per cell: 1 + the last id counted
+	last := make([]int32, len(g.cells)) // per cell: 1 + the last id listed in it
+	var walked []int32                  // the cells of segment 0, then of 1, ...
+	ends := make([]int, n)              // segment id's cells end at walked[ends[id]]
 	for id := 0; id < n; id++ {
 		a, b := seg(id)
 		g.visit(a, b, 0, func(c int) {
-			if last[c] != int32(id)+1 {
+			if last[c] != int32(id)+1 { // as insert: each cell lists a segment once
 				last[c] = int32(id) + 1
 				count[c]++
+				walked = append(walked, int32(c))
 			}
 		})
+		ends[id] = len(walked)
 	}
-	total := 0
-	for _, k := range count {
-		total += int(k)
-	}
-	flat := make([]int32, total)
+	flat := make([]int32, len(walked))
 	off := 0
 	for c, k := range count {
 		if k > 0 {
@@ -117,9 +117,12 @@ func (g *segIndex) fill(n int, seg func(i int) (Point, Point)) {
 			off += int(k)
 		}
 	}
+	from := 0
 	for id := 0; id < n; id++ {
-		a, b := seg(id)
-		g.insert(id, a, b, 0)
+		for _, c := range walked[from:ends[id]] {
+			g.cells[c] = append(g.cells[c], int32(id))
+		}
+		from = ends[id]
 	}
 }
 

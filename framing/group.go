@@ -578,38 +578,31 @@ func (g *grouper) dropDuplicates(js []segItem, grpOf []int) []bool {
 		}
 		return cmp.Compare(x.i, y.i)
 	})
-	type cell struct {
-		grp  int
-		c, a int64
-	}
-	alongCell := math.Max(tol, 1)
-	cellOf := func(k key) cell {
-		return cell{grpOf[k.i], int64(math.Floor(k.c / minNeighbourGapIn)), int64(math.Floor(k.a / alongCell))}
-	}
-	// The grid is built when a window is long: per cell, the first
-	// position in it (head) and each position's next in its cell (next),
-	// ascending, -1 at the end.
-	var head map[cell]int32
-	var next []int32
-	buildGrid := func() {
-		head = make(map[cell]int32, len(ks))
-		next = make([]int32, len(ks))
-		for x := len(ks) - 1; x >= 0; x-- {
-			k := ks[x]
-			next[x] = -1
+	// Long windows are searched through a bandIndex over the positions
+	// (built on first need): across bands of minNeighbourGapIn, so that
+	// a window lies in a position's band and the next; along, a
+	// duplicate's start lies within the snap tolerance (searched with a
+	// margin for rounding: a candidate more is only compared).
+	reach := 2 * math.Max(tol, 1)
+	var bx *bandIndex
+	var keyAt []int32 // per position: its key in bx
+	buildIndex := func() {
+		bk := make([]bandKey, 0, len(ks))
+		for x, k := range ks {
 			if finiteKey(k.c, k.a) {
-				cl := cellOf(k)
-				if h, ok := head[cl]; ok {
-					next[x] = h
-				}
-				head[cl] = int32(x)
+				bk = append(bk, bandKey{grp: int32(grpOf[k.i]), a: k.a, c: k.c, id: int32(x)})
 			}
+		}
+		bx = newBandIndex(minNeighbourGapIn, bk)
+		keyAt = make([]int32, len(ks))
+		for z := range bx.keys {
+			keyAt[bx.keys[z].id] = int32(z)
 		}
 	}
 	// end is the first position past x's window (same group, less than
 	// minNeighbourGapIn across); windows of up to shortWindow joists are
 	// scanned as they are, longer ones (joists lined up bay after bay)
-	// through the grid.
+	// through the index.
 	const shortWindow = 32
 	end := 0
 	var cand []int
@@ -629,17 +622,16 @@ func (g *grouper) dropDuplicates(js []segItem, grpOf []int) []bool {
 				cand = append(cand, y)
 			}
 		case finiteKey(kx.c, kx.a):
-			if head == nil {
-				buildGrid()
+			if bx == nil {
+				buildIndex()
 			}
-			cl := cellOf(kx)
-			for dc := int64(0); dc <= 1; dc++ {
-				for da := int64(-1); da <= 1; da++ {
-					h, ok := head[cell{cl.grp, cl.c + dc, cl.a + da}]
-					for y := int(h); ok && y >= 0 && y < end; y = int(next[y]) {
-						if y > x {
-							cand = append(cand, y)
-						}
+			for _, r := range bx.nearRuns(int(keyAt[x])) {
+				if r < 0 {
+					continue
+				}
+				for z, e := bx.from(r, kx.a-reach), int(bx.runs[r+1]); z < e && bx.keys[z].a <= kx.a+reach; z++ {
+					if y := int(bx.keys[z].id); y > x && y < end {
+						cand = append(cand, y)
 					}
 				}
 			}
