@@ -79,11 +79,12 @@ type grouper struct {
 	jIdx       *segIndex       // grid over the drawn joist items, built on first use
 
 	// per member, parallel to plan.Members
-	grp    []int
-	a0, a1 []float64 // extent along the group direction
-	bdirs  [][]Point // per bearing: unit direction of its support line (runs compare them)
-	lo, hi []int     // neighbour at smaller / larger across offset, -1 when none
-	groups []dirGroup
+	grp      []int
+	a0, a1   []float64 // extent along the group direction
+	bdirs    [][]Point // per bearing: unit direction of its support line (runs compare them)
+	lo, hi   []int     // neighbour at smaller / larger across offset, -1 when none
+	byAcross []int     // members by group, offset across, index (makeMembers)
+	groups   []dirGroup
 
 	supIdx *segIndex
 	memIdx *segIndex
@@ -404,7 +405,7 @@ func (g *grouper) makeMembers() {
 			js[i].a, js[i].b = js[i].b, js[i].a
 		}
 	}
-	keep := g.dropDuplicates(js, grpOf)
+	keep, byAcross := g.dropDuplicates(js, grpOf)
 
 	// by midpoint rounded to 0.001 in, y then x, then drawing order
 	type place struct {
@@ -429,8 +430,10 @@ func (g *grouper) makeMembers() {
 		return cmp.Compare(a.i, b.i)
 	})
 	order := make([]int, len(places))
+	memberOf := make([]int32, len(js))
 	for k := range places {
 		order[k] = places[k].i
+		memberOf[places[k].i] = int32(k)
 	}
 	n := len(order)
 	p := g.plan
@@ -475,6 +478,33 @@ func (g *grouper) makeMembers() {
 			g.a0[k], g.a1[k] = dot(j.a, gr.u), dot(j.b, gr.u)
 		}
 	})
+	g.byAcross = g.membersAcross(byAcross, keep, memberOf)
+}
+
+// membersAcross returns the members in the order neighbours wants them:
+// by direction group, offset across, then index. byAcross is the joists
+// in that order by their own index (dropDuplicates): a member's offset
+// is its joist's, computed alike, so only members at one offset need
+// sorting again, by member index.
+func (g *grouper) membersAcross(byAcross []int, keep []bool, memberOf []int32) []int {
+	p := g.plan
+	out := make([]int, 0, len(p.Members))
+	for _, i := range byAcross {
+		if keep[i] {
+			out = append(out, int(memberOf[i]))
+		}
+	}
+	for x := 0; x < len(out); {
+		y := x + 1
+		for y < len(out) && g.grp[out[y]] == g.grp[out[x]] && p.across[out[y]] == p.across[out[x]] {
+			y++
+		}
+		if y-x > 1 {
+			slices.Sort(out[x:y])
+		}
+		x = y
+	}
+	return out
 }
 
 // directionGroups clusters joists whose directions (mod 180 degrees) chain
@@ -556,7 +586,10 @@ func directionGroups(js []segItem, tolDeg float64) ([]int, []dirGroup) {
 // minNeighbourGapIn across by the snap tolerance along (a duplicate's
 // start is within the tolerance, so within one cell along), not joist by
 // joist.
-func (g *grouper) dropDuplicates(js []segItem, grpOf []int) []bool {
+//
+// It returns which joists to keep, and all the joists by group, offset
+// across and index (membersAcross).
+func (g *grouper) dropDuplicates(js []segItem, grpOf []int) ([]bool, []int) {
 	tol := g.opt.SnapToleranceIn
 	keep := make([]bool, len(js))
 	type key struct {
@@ -646,7 +679,11 @@ func (g *grouper) dropDuplicates(js []segItem, grpOf []int) []bool {
 			}
 		}
 	}
-	return keep
+	byAcross := make([]int, len(ks))
+	for x := range ks {
+		byAcross[x] = ks[x].i
+	}
+	return keep, byAcross
 }
 
 // finiteKey reports whether both numbers are finite, so that they have a

@@ -44,28 +44,7 @@ const minOverlapFrac = 0.5
 func (g *grouper) neighbours() {
 	p := g.plan
 	n := len(p.Members)
-	type key struct {
-		grp    int
-		across float64
-		k      int
-	}
-	keys := make([]key, n)
-	for k := range keys {
-		keys[k] = key{g.grp[k], p.across[k], k}
-	}
-	slices.SortFunc(keys, func(a, b key) int {
-		if c := cmp.Compare(a.grp, b.grp); c != 0 {
-			return c
-		}
-		if c := cmp.Compare(a.across, b.across); c != 0 {
-			return c
-		}
-		return cmp.Compare(a.k, b.k)
-	})
-	order := make([]int, n)
-	for x := range keys {
-		order[x] = keys[x].k
-	}
+	order := g.byAcross // by group, offset across and index
 	g.lo, g.hi = make([]int, n), make([]int, n)
 	lines, lineOf := g.lines(order)
 	// Each goroutine takes a range of the sorted order, reads the lines

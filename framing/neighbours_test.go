@@ -216,7 +216,7 @@ func TestDropDuplicatesMatchReference(t *testing.T) {
 		grpOf, groups := directionGroups(g.joists, g.opt.AngleTolDeg)
 		g.groups = groups
 		wantKeep, wantDropped := dropDuplicatesReference(g, g.joists, grpOf)
-		gotKeep := g.dropDuplicates(g.joists, grpOf)
+		gotKeep, _ := g.dropDuplicates(g.joists, grpOf)
 		var gotDropped []string
 		for _, is := range g.plan.Issues {
 			if is.Code == CodeDuplicateJoist {
