@@ -43,7 +43,7 @@ func (g *grouper) assignLumber() {
 	if len(g.labelTexts) == 0 && len(g.bayRegions) == 0 {
 		return
 	}
-	got := make([][]callout, len(p.Members)) // per member, in text order
+	got := newMemberCallouts(len(p.Members))
 	unread := make(map[int]unreadCallout)    // members under a callout that cannot be read
 	var other []textItem                     // texts that do not try to be callouts: room names, notes
 	read, kind := g.readLabelTexts()
@@ -86,9 +86,7 @@ func (g *grouper) assignLumber() {
 		if len(ms) == 0 {
 			g.warn(t.pos, CodeCalloutUnused, "callout %q reaches no joist: no span line under it and no joist near it", c.text)
 		}
-		for _, k := range ms {
-			got[k] = append(got[k], c)
-		}
+		got.give(ms, c)
 	}
 	if len(other) > 0 {
 		g.plan.Issues.Add(other[0].pos, CodeBadCallout, dxfimport.SevInfo,
@@ -102,9 +100,10 @@ func (g *grouper) assignLumber() {
 	spans := g.split(len(p.Members))
 	issues := make(issueLists, len(spans))
 	parallel(spans, func(w int, sp span) {
+		var cs []callout
 		for k := sp.lo; k < sp.hi; k++ {
-			if len(got[k]) > 0 {
-				g.applyCallouts(&issues[w], k, got[k])
+			if cs = got.over(k, cs[:0]); len(cs) > 0 {
+				g.applyCallouts(&issues[w], k, cs)
 			}
 		}
 	})
@@ -115,6 +114,40 @@ func (g *grouper) assignLumber() {
 		m.Messages = append(m.Messages, fmt.Sprintf("%s: the size callout %q (%s) cannot be read: %s; "+
 			"the member is not checked", m.ID, u.text, u.pos, u.reason))
 	}
+}
+
+// memberCallouts lists the callouts over each member, in the order they
+// were given (drawing order, then bays).
+type memberCallouts struct {
+	cos []callout // each callout once
+	of  [][]int32 // per member: indices into cos
+	ids slab[int32]
+}
+
+func newMemberCallouts(n int) *memberCallouts { return &memberCallouts{of: make([][]int32, n)} }
+
+// give lists callout c over each member of ms.
+func (mc *memberCallouts) give(ms []int, c callout) {
+	if len(ms) == 0 {
+		return
+	}
+	ci := int32(len(mc.cos))
+	mc.cos = append(mc.cos, c)
+	for _, k := range ms {
+		if len(mc.of[k]) == 0 {
+			mc.of[k] = mc.ids.take([]int32{ci})
+		} else {
+			mc.of[k] = append(mc.of[k], ci)
+		}
+	}
+}
+
+// over appends the callouts over member k to dst.
+func (mc *memberCallouts) over(k int, dst []callout) []callout {
+	for _, ci := range mc.of[k] {
+		dst = append(dst, mc.cos[ci])
+	}
+	return dst
 }
 
 // layerLumber gives each member its by-layer or default lumber. Each
@@ -281,11 +314,8 @@ func (g *grouper) labelIndex() *segIndex {
 func (g *grouper) memberIndex() *segIndex {
 	p := g.plan
 	if g.memIdx == nil && len(p.Members) > 0 {
-		segs := make([]segItem, len(p.Members))
-		for k := range p.Members {
-			segs[k] = segItem{a: p.Members[k].Start, b: p.Members[k].End}
-		}
-		g.memIdx = indexSegs(segs)
+		n := len(p.Members)
+		g.memIdx = indexEnds(n, func(k int) (Point, Point) { return p.Members[k].Start, p.Members[k].End }, g.split(n))
 	}
 	return g.memIdx
 }
@@ -295,12 +325,11 @@ func (g *grouper) memberIndex() *segIndex {
 // The issues go to iss.
 func (g *grouper) applyCallouts(iss *dxfimport.IssueList, k int, cs []callout) {
 	m := &g.plan.Members[k]
-	// a callout without a spacing (species, grade) agrees with one that
-	// gives it
 	c0 := cs[0]
-	for _, c := range cs[1:] {
-		err := c0.merge(c.Callout)
-		if c.Designation() != c0.Designation() || err != nil {
+	if len(cs) > 1 {
+		var bad int
+		if c0, bad = mergeCallouts(cs); bad >= 0 {
+			c := cs[bad]
 			m.Error = true
 			msg := fmt.Sprintf("%s has conflicting size callouts %q (%s) and %q (%s); resolve the drawing",
 				m.ID, cs[0].text, cs[0].pos, c.text, c.pos)
@@ -324,6 +353,21 @@ func (g *grouper) applyCallouts(iss *dxfimport.IssueList, k int, cs []callout) {
 		m.Messages = append(m.Messages, msg)
 		iss.Add(m.Pos, CodeCalloutSpacing, dxfimport.SevWarning, "%s", msg)
 	}
+}
+
+// mergeCallouts merges the callouts over one member into the first: a
+// callout without a spacing (species, grade) agrees with one that gives
+// it. bad is the first that disagrees (another size, or another value
+// given), -1 when none does.
+func mergeCallouts(cs []callout) (c0 callout, bad int) {
+	c0 = cs[0]
+	for i, c := range cs[1:] {
+		err := c0.merge(c.Callout)
+		if c.Designation() != c0.Designation() || err != nil {
+			return c0, i + 1
+		}
+	}
+	return c0, -1
 }
 
 // plyGapIn: parallel joists this close are plies of one built-up member

@@ -2,6 +2,7 @@ package framing
 
 import (
 	"math"
+	"slices"
 
 	"framecheck/dxfimport"
 )
@@ -83,33 +84,87 @@ func newSegIndex(lo, hi Point, n int, typLenIn float64) *segIndex {
 
 // indexSegs makes a grid over segs, listing segment i under id i.
 func indexSegs(segs []segItem) *segIndex {
-	lo, hi, typ := bounds(segs)
-	g := newSegIndex(lo, hi, len(segs), typ)
-	g.fill(len(segs), func(i int) (Point, Point) { return segs[i].a, segs[i].b })
+	return indexEnds(len(segs), func(i int) (Point, Point) { return segs[i].a, segs[i].b }, nil)
+}
+
+// indexEnds makes a grid over n segments, seg giving the ends of each,
+// sized as bounds would size it for them. With spans (a grouper's
+// split), the segments' cells are found in parallel.
+func indexEnds(n int, seg func(i int) (Point, Point), spans []span) *segIndex {
+	lo := Point{X: math.Inf(1), Y: math.Inf(1)}
+	hi := Point{X: math.Inf(-1), Y: math.Inf(-1)}
+	meanLen := 0.0
+	for i := 0; i < n; i++ {
+		a, b := seg(i)
+		for _, q := range [2]Point{a, b} {
+			lo.X, lo.Y = math.Min(lo.X, q.X), math.Min(lo.Y, q.Y)
+			hi.X, hi.Y = math.Max(hi.X, q.X), math.Max(hi.Y, q.Y)
+		}
+		meanLen += dist(a, b)
+	}
+	g := newSegIndex(lo, hi, n, meanLen/float64(max(n, 1)))
+	if spans == nil {
+		spans = []span{{0, n}}
+	}
+	g.fill(seg, spans)
 	return g
 }
 
-// fill inserts segments 0..n-1 (seg gives each one's ends) with no pad,
-// as insert would one after another, but with the cells' lists carved
-// from one array: each segment's cells are listed as they are walked
-// (and counted), then the segments are listed in their cells in order.
-func (g *segIndex) fill(n int, seg func(i int) (Point, Point)) {
-	count := make([]int32, len(g.cells))
-	last := make([]int32, len(g.cells)) // per cell: 1 + the last id listed in it
-	var walked []int32                  // the cells of segment 0, then of 1, ...
-	ends := make([]int, n)              // segment id's cells end at walked[ends[id]]
-	for id := 0; id < n; id++ {
-		a, b := seg(id)
-		g.visit(a, b, 0, func(c int) {
-			if last[c] != int32(id)+1 { // as insert: each cell lists a segment once
-				last[c] = int32(id) + 1
-				count[c]++
-				walked = append(walked, int32(c))
-			}
-		})
-		ends[id] = len(walked)
+// fill inserts the segments of spans (seg gives each one's ends; the
+// spans cover 0..n-1 in order) with no pad, as insert would one after
+// another, but with the cells' lists carved from one array. Each span's
+// segments are walked on a goroutine of its own, which lists the cells of
+// each (as insert: each cell once a segment) and writes only its own
+// list; then the lists are counted and the segments listed in their
+// cells, in order.
+func (g *segIndex) fill(seg func(i int) (Point, Point), spans []span) {
+	type walk struct {
+		cells []int32 // the cells of the span's first segment, then of its next, ...
+		ends  []int   // segment lo+i's cells end at cells[ends[i]]
 	}
-	flat := make([]int32, len(walked))
+	walks := make([]walk, len(spans))
+	parallel(spans, func(w int, sp span) {
+		wk := &walks[w]
+		wk.ends = make([]int, 0, sp.hi-sp.lo)
+		var last []int32 // per cell: 1 + the last segment listed in it; made for the first long segment
+		for id := sp.lo; id < sp.hi; id++ {
+			a, b := seg(id)
+			from := len(wk.cells)
+			g.visit(a, b, 0, func(c int) {
+				mine := wk.cells[from:]
+				switch {
+				case len(mine) < 32: // most segments cross a few cells
+					if slices.Contains(mine, int32(c)) {
+						return
+					}
+				default:
+					if last == nil {
+						last = make([]int32, len(g.cells))
+					}
+					if last[mine[0]] != int32(id)+1 { // first look at this segment's cells this way
+						for _, m := range mine {
+							last[m] = int32(id) + 1
+						}
+					}
+					if last[c] == int32(id)+1 {
+						return
+					}
+					last[c] = int32(id) + 1
+				}
+				wk.cells = append(wk.cells, int32(c))
+			})
+			wk.ends = append(wk.ends, len(wk.cells))
+		}
+	})
+	count := make([]int32, len(g.cells))
+	total := 0
+	for _, wk := range walks {
+		for _, c := range wk.cells {
+			count[c]++
+		}
+		total += len(wk.cells)
+	}
+	flat := make([]int32, total)
 	off := 0
 	for c, k := range count {
 		if k > 0 {
@@ -117,12 +172,14 @@ func (g *segIndex) fill(n int, seg func(i int) (Point, Point)) {
 			off += int(k)
 		}
 	}
-	from := 0
-	for id := 0; id < n; id++ {
-		for _, c := range walked[from:ends[id]] {
-			g.cells[c] = append(g.cells[c], int32(id))
+	for w, sp := range spans {
+		from := 0
+		for i, end := range walks[w].ends {
+			for _, c := range walks[w].cells[from:end] {
+				g.cells[c] = append(g.cells[c], int32(sp.lo+i))
+			}
+			from = end
 		}
-		from = ends[id]
 	}
 }
 
