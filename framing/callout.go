@@ -44,8 +44,8 @@ func (g *grouper) assignLumber() {
 		return
 	}
 	got := newMemberCallouts(len(p.Members))
-	unread := make(map[int]unreadCallout)    // members under a callout that cannot be read
-	var other []textItem                     // texts that do not try to be callouts: room names, notes
+	unread := make(map[int]unreadCallout) // members under a callout that cannot be read
+	var other []textItem                  // texts that do not try to be callouts: room names, notes
 	read, kind := g.readLabelTexts()
 	ms := g.calloutsMembers(kind)
 	for ti, t := range g.labelTexts {
