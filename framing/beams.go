@@ -259,7 +259,10 @@ func (g *grouper) findBeams() {
 		return cmp.Compare(rnd(ma.X), rnd(mb.X))
 	})
 	p.Beams = make([]Beam, len(bs))
-	bySupport := map[int]int{} // Plan.Supports index -> beam
+	bySupport := make([]int, len(p.Supports)) // Plan.Supports index -> beam, -1 for none
+	for i := range bySupport {
+		bySupport[i] = -1
+	}
 	for k := range bs {
 		b := &bs[k]
 		s0 := &g.sups[b.lines[0]]
@@ -274,7 +277,7 @@ func (g *grouper) findBeams() {
 			}
 			if si := g.supportOf(i); si >= 0 && !slices.Contains(bm.Supports, si) {
 				bm.Supports = append(bm.Supports, si)
-				if _, ok := bySupport[si]; !ok {
+				if bySupport[si] < 0 {
 					bySupport[si] = k
 				}
 			}

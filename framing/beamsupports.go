@@ -193,15 +193,15 @@ func (g *grouper) beamOnBeams() {
 func maxWallPad(g *grouper) float64 { return g.opt.MaxWallThicknessIn / 2 }
 
 // carriedJoists lists on each beam the joist bearings on its lines.
-func (g *grouper) carriedJoists(bySupport map[int]int) {
+func (g *grouper) carriedJoists(bySupport []int) {
 	p := g.plan
 	for m := range p.Members {
 		mb := &p.Members[m]
 		for j, br := range mb.Bearings {
-			k, ok := bySupport[br.Support]
-			if br.Support < 0 || !ok {
+			if br.Support < 0 || br.Support >= len(bySupport) || bySupport[br.Support] < 0 {
 				continue
 			}
+			k := bySupport[br.Support]
 			q := lerp(mb.Start, p.dirs[m], br.AtIn)
 			p.Beams[k].Carried = append(p.Beams[k].Carried, Carried{Member: m, Bearing: j, AtIn: g.along(k, q)})
 		}

@@ -593,17 +593,17 @@ func (g *grouper) dropDuplicates(js []segItem, grpOf []int) ([]bool, []int) {
 	tol := g.opt.SnapToleranceIn
 	keep := make([]bool, len(js))
 	type key struct {
-		i    int
-		c, a float64
+		grp, i int
+		c, a   float64
 	}
 	ks := make([]key, len(js))
 	for i, j := range js {
 		gr := g.groups[grpOf[i]]
-		ks[i] = key{i, dot(mid(j.a, j.b), gr.n), dot(j.a, gr.u)}
+		ks[i] = key{grpOf[i], i, dot(mid(j.a, j.b), gr.n), dot(j.a, gr.u)}
 		keep[i] = true
 	}
 	slices.SortFunc(ks, func(x, y key) int {
-		if c := cmp.Compare(grpOf[x.i], grpOf[y.i]); c != 0 {
+		if c := cmp.Compare(x.grp, y.grp); c != 0 {
 			return c
 		}
 		if c := cmp.Compare(x.c, y.c); c != 0 {
@@ -623,7 +623,7 @@ func (g *grouper) dropDuplicates(js []segItem, grpOf []int) ([]bool, []int) {
 		bk := make([]bandKey, 0, len(ks))
 		for x, k := range ks {
 			if finiteKey(k.c, k.a) {
-				bk = append(bk, bandKey{grp: int32(grpOf[k.i]), a: k.a, c: k.c, id: int32(x)})
+				bk = append(bk, bandKey{grp: int32(k.grp), a: k.a, c: k.c, id: int32(x)})
 			}
 		}
 		bx = newBandIndex(minNeighbourGapIn, bk)
@@ -642,7 +642,7 @@ func (g *grouper) dropDuplicates(js []segItem, grpOf []int) ([]bool, []int) {
 	for x, kx := range ks {
 		i := kx.i
 		end = max(end, x+1)
-		for end < len(ks) && grpOf[ks[end].i] == grpOf[i] && ks[end].c-kx.c < minNeighbourGapIn {
+		for end < len(ks) && ks[end].grp == kx.grp && ks[end].c-kx.c < minNeighbourGapIn {
 			end++
 		}
 		if !keep[i] {
