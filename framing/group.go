@@ -398,7 +398,7 @@ func (g *grouper) addZone(e dxfimport.Entity) bool {
 // duplicates and numbers the rest by midpoint (y, then x).
 func (g *grouper) makeMembers() {
 	js := g.joists
-	grpOf, groups := directionGroups(js, g.opt.AngleTolDeg)
+	grpOf, groups := directionGroups(js, g.opt.AngleTolDeg, g.split(len(js)))
 	g.groups = groups
 	for i := range js {
 		if dot(sub(js[i].b, js[i].a), groups[grpOf[i]].u) < 0 {
@@ -509,34 +509,58 @@ func (g *grouper) membersAcross(byAcross []int, keep []bool, memberOf []int32) [
 
 // directionGroups clusters joists whose directions (mod 180 degrees) chain
 // within tolDeg, and returns each joist's group and the groups.
-func directionGroups(js []segItem, tolDeg float64) ([]int, []dirGroup) {
+//
+// The angles and their cosines and sines are worked out on the spans
+// (nil: one) in parallel, each goroutine writing its own joists' entries;
+// the sums that give each group's direction are added up in joist order
+// after, so that they come out the same to the last bit.
+func directionGroups(js []segItem, tolDeg float64, spans []span) ([]int, []dirGroup) {
 	n := len(js)
-	ang := make([]float64, n)
-	idx := make([]int, n)
-	for i, j := range js {
-		d := sub(j.b, j.a)
-		a := math.Atan2(d.Y, d.X) * 180 / math.Pi
-		a = math.Mod(a+360, 180)
-		if a >= 180-1e-9 {
-			a = 0
-		}
-		ang[i], idx[i] = a, i
+	if spans == nil {
+		spans = []span{{0, n}}
 	}
-	slices.SortFunc(idx, func(x, y int) int { return cmp.Compare(ang[x], ang[y]) })
+	type angle struct {
+		deg float64
+		i   int
+	}
+	byAng := make([]angle, n)
+	cs := make([][2]float64, n) // cosine and sine of the doubled angle
+	parallel(spans, func(_ int, sp span) {
+		for i := sp.lo; i < sp.hi; i++ {
+			j := &js[i]
+			d := sub(j.b, j.a)
+			a := math.Atan2(d.Y, d.X) * 180 / math.Pi
+			a = math.Mod(a+360, 180)
+			if a >= 180-1e-9 {
+				a = 0
+			}
+			r := 2 * a * math.Pi / 180
+			byAng[i] = angle{a, i}
+			cs[i] = [2]float64{math.Cos(r), math.Sin(r)}
+		}
+	})
+	// equal angles fall in one group whatever their order: the index
+	// only makes the order definite
+	slices.SortFunc(byAng, func(x, y angle) int {
+		if c := cmp.Compare(x.deg, y.deg); c != 0 {
+			return c
+		}
+		return cmp.Compare(x.i, y.i)
+	})
 	grp := make([]int, n)
 	ng := 0
-	for k, i := range idx {
-		if k > 0 && ang[i]-ang[idx[k-1]] > tolDeg {
+	for k, x := range byAng {
+		if k > 0 && x.deg-byAng[k-1].deg > tolDeg {
 			ng++
 		}
-		grp[i] = ng
+		grp[x.i] = ng
 	}
 	if n > 0 {
 		ng++
 		// wrap: directions near 180 join those near 0
-		if ng > 1 && ang[idx[0]]+180-ang[idx[n-1]] <= tolDeg {
-			last := grp[idx[n-1]]
-			for _, i := range idx {
+		if ng > 1 && byAng[0].deg+180-byAng[n-1].deg <= tolDeg {
+			last := grp[byAng[n-1].i]
+			for i := range grp {
 				if grp[i] == last {
 					grp[i] = 0
 				}
@@ -547,9 +571,8 @@ func directionGroups(js []segItem, tolDeg float64) ([]int, []dirGroup) {
 	// mean direction per group on doubled angles (mod-180 safe)
 	sc := make([][2]float64, ng)
 	for i := range js {
-		r := 2 * ang[i] * math.Pi / 180
-		sc[grp[i]][0] += math.Cos(r)
-		sc[grp[i]][1] += math.Sin(r)
+		sc[grp[i]][0] += cs[i][0]
+		sc[grp[i]][1] += cs[i][1]
 	}
 	groups := make([]dirGroup, ng)
 	for k := range groups {
