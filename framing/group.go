@@ -408,32 +408,21 @@ func (g *grouper) makeMembers() {
 	keep, byAcross := g.dropDuplicates(js, grpOf)
 
 	// by midpoint rounded to 0.001 in, y then x, then drawing order
-	type place struct {
-		y, x float64
-		i    int
-	}
-	places := make([]place, 0, len(js))
+	kept := make([]int, 0, len(js))
+	yk, xk := make([]uint64, 0, len(js)), make([]uint64, 0, len(js))
 	rnd := func(v float64) float64 { return math.Round(v*1000) / 1000 }
 	for i := range js {
 		if keep[i] {
 			m := mid(js[i].a, js[i].b)
-			places = append(places, place{rnd(m.Y), rnd(m.X), i})
+			kept = append(kept, i)
+			yk, xk = append(yk, floatKey(rnd(m.Y))), append(xk, floatKey(rnd(m.X)))
 		}
 	}
-	slices.SortFunc(places, func(a, b place) int {
-		if c := cmp.Compare(a.y, b.y); c != 0 {
-			return c
-		}
-		if c := cmp.Compare(a.x, b.x); c != 0 {
-			return c
-		}
-		return cmp.Compare(a.i, b.i)
-	})
-	order := make([]int, len(places))
+	order := orderByKeys(len(kept), yk, xk)
 	memberOf := make([]int32, len(js))
-	for k := range places {
-		order[k] = places[k].i
-		memberOf[places[k].i] = int32(k)
+	for k, x := range order {
+		order[k] = kept[x]
+		memberOf[kept[x]] = int32(k)
 	}
 	n := len(order)
 	p := g.plan
@@ -619,21 +608,19 @@ func (g *grouper) dropDuplicates(js []segItem, grpOf []int) ([]bool, []int) {
 		grp, i int
 		c, a   float64
 	}
-	ks := make([]key, len(js))
+	unsorted := make([]key, len(js))
+	gk, ck := make([]uint64, len(js)), make([]uint64, len(js))
 	for i, j := range js {
 		gr := g.groups[grpOf[i]]
-		ks[i] = key{grpOf[i], i, dot(mid(j.a, j.b), gr.n), dot(j.a, gr.u)}
+		unsorted[i] = key{grpOf[i], i, dot(mid(j.a, j.b), gr.n), dot(j.a, gr.u)}
+		gk[i], ck[i] = uint64(grpOf[i]), floatKey(unsorted[i].c)
 		keep[i] = true
 	}
-	slices.SortFunc(ks, func(x, y key) int {
-		if c := cmp.Compare(x.grp, y.grp); c != 0 {
-			return c
-		}
-		if c := cmp.Compare(x.c, y.c); c != 0 {
-			return c
-		}
-		return cmp.Compare(x.i, y.i)
-	})
+	// by group, offset across, index
+	ks := make([]key, len(js))
+	for x, i := range orderByKeys(len(js), gk, ck) {
+		ks[x] = unsorted[i]
+	}
 	// Long windows are searched through a bandIndex over the positions
 	// (built on first need): across bands of minNeighbourGapIn, so that
 	// a window lies in a position's band and the next; along, a
