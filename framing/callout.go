@@ -315,7 +315,7 @@ func (g *grouper) memberIndex() *segIndex {
 	p := g.plan
 	if g.memIdx == nil && len(p.Members) > 0 {
 		n := len(p.Members)
-		g.memIdx = indexEnds(n, func(k int) (Point, Point) { return p.Members[k].Start, p.Members[k].End }, g.split(n))
+		g.memIdx = indexEnds(n, func(k int) (Point, Point) { return g.ends[k][0], g.ends[k][1] }, g.split(n))
 	}
 	return g.memIdx
 }

@@ -80,10 +80,11 @@ type grouper struct {
 
 	// per member, parallel to plan.Members
 	grp      []int
-	a0, a1   []float64 // extent along the group direction
-	bdirs    [][]Point // per bearing: unit direction of its support line (runs compare them)
-	lo, hi   []int     // neighbour at smaller / larger across offset, -1 when none
-	byAcross []int     // members by group, offset across, index (makeMembers)
+	a0, a1   []float64  // extent along the group direction
+	bdirs    [][]Point  // per bearing: unit direction of its support line (runs compare them)
+	lo, hi   []int      // neighbour at smaller / larger across offset, -1 when none
+	byAcross []int      // members by group, offset across, index (makeMembers)
+	ends     [][2]Point // Start and End, packed close for passes over every member
 	groups   []dirGroup
 
 	supIdx *segIndex
@@ -433,6 +434,7 @@ func (g *grouper) makeMembers() {
 	g.a0 = make([]float64, n)
 	g.a1 = make([]float64, n)
 	g.bdirs = make([][]Point, n)
+	g.ends = make([][2]Point, n)
 	if g.jol != nil {
 		g.memOl = make([]int32, n)
 	}
@@ -461,6 +463,7 @@ func (g *grouper) makeMembers() {
 				Start: j.a, End: j.b, LengthIn: dist(j.a, j.b),
 				Generated: g.genFrom >= 0 && i >= g.genFrom,
 			}
+			g.ends[k] = [2]Point{j.a, j.b}
 			p.dirs[k] = unit(sub(j.b, j.a))
 			p.across[k] = dot(mid(j.a, j.b), gr.n)
 			g.grp[k] = grpOf[i]
