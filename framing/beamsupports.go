@@ -193,17 +193,34 @@ func (g *grouper) beamOnBeams() {
 func maxWallPad(g *grouper) float64 { return g.opt.MaxWallThicknessIn / 2 }
 
 // carriedJoists lists on each beam the joist bearings on its lines.
+//
+// The members' bearings are read on member ranges in parallel, each
+// goroutine listing what it finds (reading the members and beams); the
+// lists are added to the beams after, range after range: member order.
 func (g *grouper) carriedJoists(bySupport []int) {
 	p := g.plan
-	for m := range p.Members {
-		mb := &p.Members[m]
-		for j, br := range mb.Bearings {
-			if br.Support < 0 || br.Support >= len(bySupport) || bySupport[br.Support] < 0 {
-				continue
+	type onBeam struct {
+		beam int
+		c    Carried
+	}
+	spans := g.split(len(p.Members))
+	found := make([][]onBeam, len(spans))
+	parallel(spans, func(w int, sp span) {
+		for m := sp.lo; m < sp.hi; m++ {
+			mb := &p.Members[m]
+			for j, br := range mb.Bearings {
+				if br.Support < 0 || br.Support >= len(bySupport) || bySupport[br.Support] < 0 {
+					continue
+				}
+				k := bySupport[br.Support]
+				q := lerp(mb.Start, p.dirs[m], br.AtIn)
+				found[w] = append(found[w], onBeam{k, Carried{Member: m, Bearing: j, AtIn: g.along(k, q)}})
 			}
-			k := bySupport[br.Support]
-			q := lerp(mb.Start, p.dirs[m], br.AtIn)
-			p.Beams[k].Carried = append(p.Beams[k].Carried, Carried{Member: m, Bearing: j, AtIn: g.along(k, q)})
+		}
+	})
+	for _, f := range found {
+		for _, o := range f {
+			p.Beams[o.beam].Carried = append(p.Beams[o.beam].Carried, o.c)
 		}
 	}
 	for k := range p.Beams {
