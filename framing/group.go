@@ -458,11 +458,10 @@ func (g *grouper) makeMembers() {
 			if g.segMem != nil {
 				g.segMem[i] = int32(k)
 			}
-			p.Members[k] = Member{
-				ID: "M" + strconv.Itoa(k+1), Pos: j.pos, Layer: j.pos.Layer,
-				Start: j.a, End: j.b, LengthIn: dist(j.a, j.b),
-				Generated: g.genFrom >= 0 && i >= g.genFrom,
-			}
+			m := &p.Members[k] // zero: set field by field rather than copy a whole Member in
+			m.ID, m.Pos, m.Layer = "M"+strconv.Itoa(k+1), j.pos, j.pos.Layer
+			m.Start, m.End, m.LengthIn = j.a, j.b, dist(j.a, j.b)
+			m.Generated = g.genFrom >= 0 && i >= g.genFrom
 			g.ends[k] = [2]Point{j.a, j.b}
 			p.dirs[k] = unit(sub(j.b, j.a))
 			p.across[k] = dot(mid(j.a, j.b), gr.n)
