@@ -182,16 +182,37 @@ func (g *grouper) warn(pos dxfimport.Pos, code string, format string, args ...an
 // classify sorts the entities by the role of their layer.
 func (g *grouper) classify(d *dxfimport.Drawing) {
 	roles := map[string][2]int{}
-	g.joists = make([]segItem, 0, len(d.Entities))
+	var lastLayer string
+	var last [2]int
+	have := false
+	roleOf := func(layer string) (role, int) {
+		if !have || layer != lastLayer {
+			rs, ok := roles[layer]
+			if !ok {
+				r, spec := g.opt.layerRole(layer)
+				rs = [2]int{int(r), spec}
+				roles[layer] = rs
+			}
+			lastLayer, last, have = layer, rs, true
+		}
+		return role(last[0]), last[1]
+	}
+	// room for the joists and support lines, counted first: growing
+	// lists of a hundred thousand would copy them over and over
+	nj, ns := 0, 0
+	for i := range d.Entities {
+		switch r, _ := roleOf(d.Entities[i].Pos.Layer); r {
+		case roleJoist:
+			nj++
+		case roleSupport:
+			ns += max(1, len(d.Entities[i].Points))
+		}
+	}
+	g.joists = make([]segItem, 0, nj)
+	g.sups = make([]segItem, 0, ns)
 	for _, e := range d.Entities {
 		layer := e.Pos.Layer
-		rs, ok := roles[layer]
-		if !ok {
-			r, spec := g.opt.layerRole(layer)
-			rs = [2]int{int(r), spec}
-			roles[layer] = rs
-		}
-		r, spec := role(rs[0]), rs[1]
+		r, spec := roleOf(layer)
 		if r != roleNone && !finitePoints(e.Points) {
 			// A joist left out is a joist not checked: an error, so that
 			// the run does not report a clean plan.
