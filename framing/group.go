@@ -705,6 +705,9 @@ func (g *grouper) dropDuplicates(js []segItem, grpOf []int) ([]bool, []int) {
 		}
 		for _, y := range cand {
 			j := ks[y].i
+			if math.Abs(ks[y].a-kx.a) > reach {
+				continue // starts too far apart along (a cheap look before the distances)
+			}
 			if keep[j] && dist(js[i].a, js[j].a) <= tol && dist(js[i].b, js[j].b) <= tol {
 				keep[j] = false
 				g.warn(js[j].pos, CodeDuplicateJoist, "joist drawn twice: %s duplicates %s; kept once",

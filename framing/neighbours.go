@@ -108,6 +108,7 @@ func (g *grouper) nearestBoth(k int, lines []line, lk int) {
 // largest end (a1) of each prefix of that order.
 type line struct {
 	members []int
+	a0      []float64 // per member: its a0, for the binary search
 	maxA1   []float64
 }
 
@@ -132,10 +133,12 @@ func (g *grouper) lines(order []int) ([]line, []int) {
 				return cmp.Compare(a, b)
 			})
 			l.maxA1 = make([]float64, len(l.members))
+			l.a0 = make([]float64, len(l.members))
 			m := math.Inf(-1)
 			for i, k := range l.members {
 				m = math.Max(m, g.a1[k])
 				l.maxA1[i] = m
+				l.a0[i] = g.a0[k]
 			}
 		}
 		for z := x; z < y; z++ {
@@ -168,7 +171,7 @@ func (g *grouper) overlapping(l *line, k int, highest bool) int {
 		}
 		return -1
 	}
-	end := sort.Search(len(l.members), func(i int) bool { return g.a0[l.members[i]] >= g.a1[k] })
+	end, _ := slices.BinarySearch(l.a0, g.a1[k]) // the first starting at or after k's end
 	best := -1
 	for y := end - 1; y >= 0 && l.maxA1[y] > g.a0[k]; y-- {
 		j := l.members[y]
