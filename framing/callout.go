@@ -414,18 +414,24 @@ func (g *grouper) existingBlocking() {
 		})
 	}
 	// blocking drawn piece by piece touches each joist from both sides:
-	// one bracing point per position (within the snap tolerance)
-	for k := range p.Members {
-		at := p.Members[k].ExistingBlockingAtIn
-		sort.Float64s(at)
-		n := 0
-		for _, x := range at {
-			if n > 0 && x-at[n-1] <= g.opt.SnapToleranceIn {
+	// one bracing point per position (within the snap tolerance). Each
+	// goroutine tidies its own range of members.
+	parallel(g.split(len(p.Members)), func(_ int, sp span) {
+		for k := sp.lo; k < sp.hi; k++ {
+			at := p.Members[k].ExistingBlockingAtIn
+			if at == nil {
 				continue
 			}
-			at[n] = x
-			n++
+			sort.Float64s(at)
+			n := 0
+			for _, x := range at {
+				if n > 0 && x-at[n-1] <= g.opt.SnapToleranceIn {
+					continue
+				}
+				at[n] = x
+				n++
+			}
+			p.Members[k].ExistingBlockingAtIn = at[:n]
 		}
-		p.Members[k].ExistingBlockingAtIn = at[:n]
-	}
+	})
 }
