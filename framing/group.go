@@ -429,15 +429,19 @@ func (g *grouper) makeMembers() {
 	}
 	keep, byAcross := g.dropDuplicates(js, grpOf)
 
-	// by midpoint rounded to 0.001 in, y then x, then drawing order
+	// by midpoint rounded to 0.001 in, y then x, then drawing order;
+	// rounded values order as the whole thousandths they are rounded to
+	// (coordinates are within maxCoordIn: at most 10^12 thousandths,
+	// exact in a float64, and a thousandth apart is far more than one
+	// rounding step), which are sorted as integers
 	kept := make([]int, 0, len(js))
 	yk, xk := make([]uint64, 0, len(js)), make([]uint64, 0, len(js))
-	rnd := func(v float64) float64 { return math.Round(v*1000) / 1000 }
+	milli := func(v float64) uint64 { return intKey(int64(math.Round(v * 1000))) }
 	for i := range js {
 		if keep[i] {
 			m := mid(js[i].a, js[i].b)
 			kept = append(kept, i)
-			yk, xk = append(yk, floatKey(rnd(m.Y))), append(xk, floatKey(rnd(m.X)))
+			yk, xk = append(yk, milli(m.Y)), append(xk, milli(m.X))
 		}
 	}
 	order := orderByKeys(len(kept), yk, xk)

@@ -20,43 +20,63 @@ func floatKey(f float64) uint64 {
 	return b | 1<<63
 }
 
+// intKey maps v to a uint64 that orders as v does.
+func intKey(v int64) uint64 { return uint64(v) ^ 1<<63 }
+
+// radixBits is the digit of orderByKeys' passes: 2,048 counters stay in
+// the fastest cache, where 65,536 would not once a plan has a million
+// joists.
+const radixBits = 11
+
 // orderByKeys returns the indices 0..n-1 sorted by keys[0], then keys[1],
 // ..., then index (each keys[j] has n entries): a least-significant-digit
-// radix sort, 16 bits a pass, skipping the passes whose digit is the same
-// for every index.
+// radix sort, radixBits a pass, key by key from the last. Each key is
+// read once in the current order and then moved with its index, and only
+// the digits of its range (largest less smallest) are sorted on.
 func orderByKeys(n int, keys ...[]uint64) []int {
-	order := make([]int, n)
-	for i := range order {
-		order[i] = i
+	type item struct {
+		k uint64
+		i int
 	}
-	tmp := make([]int, n)
-	var count [1 << 16]int
+	cur, tmp := make([]item, n), make([]item, n)
+	for x := range cur {
+		cur[x].i = x
+	}
+	var count [1 << radixBits]int
 	for j := len(keys) - 1; j >= 0; j-- {
 		key := keys[j]
-		var or, and uint64 = 0, ^uint64(0)
-		for _, k := range key {
-			or |= k
-			and &= k
+		lo, hi := ^uint64(0), uint64(0)
+		for x := range cur {
+			k := key[cur[x].i]
+			cur[x].k = k
+			lo, hi = min(lo, k), max(hi, k)
 		}
-		for shift := uint(0); shift < 64; shift += 16 {
-			if (or^and)>>shift&0xffff == 0 {
-				continue // every key has the same digit here
-			}
+		if n == 0 || lo == hi {
+			continue // all equal: the order stands
+		}
+		for x := range cur {
+			cur[x].k -= lo
+		}
+		for shift := uint(0); shift < 64 && (hi-lo)>>shift > 0; shift += radixBits {
 			clear(count[:])
-			for _, i := range order {
-				count[key[i]>>shift&0xffff]++
+			for x := range cur {
+				count[cur[x].k>>shift&(1<<radixBits-1)]++
 			}
 			sum := 0
 			for d := range count {
 				count[d], sum = sum, sum+count[d]
 			}
-			for _, i := range order {
-				d := key[i] >> shift & 0xffff
-				tmp[count[d]] = i
+			for x := range cur {
+				d := cur[x].k >> shift & (1<<radixBits - 1)
+				tmp[count[d]] = cur[x]
 				count[d]++
 			}
-			order, tmp = tmp, order
+			cur, tmp = tmp, cur
 		}
+	}
+	order := make([]int, n)
+	for x := range cur {
+		order[x] = cur[x].i
 	}
 	return order
 }
