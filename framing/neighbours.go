@@ -281,10 +281,13 @@ func (g *grouper) makeRuns() {
 		r := &p.Runs[p.Members[k].Run]
 		r.Members = append(r.Members, k)
 	}
-	for i := range p.Runs {
-		ms := p.Runs[i].Members
-		sort.SliceStable(ms, func(x, y int) bool { return p.across[ms[x]] < p.across[ms[y]] })
-	}
+	// each goroutine orders its own range of runs, reading the offsets
+	parallel(g.split(len(p.Runs)), func(_ int, sp span) {
+		for i := sp.lo; i < sp.hi; i++ {
+			ms := p.Runs[i].Members
+			sort.SliceStable(ms, func(x, y int) bool { return p.across[ms[x]] < p.across[ms[y]] })
+		}
+	})
 }
 
 func (g *grouper) sameBearings(k, j int) bool {
@@ -294,7 +297,7 @@ func (g *grouper) sameBearings(k, j int) bool {
 	}
 	tol := g.opt.SnapToleranceIn
 	for i := range mk.Bearings {
-		bk, bj := mk.Bearings[i], mj.Bearings[i]
+		bk, bj := &mk.Bearings[i], &mj.Bearings[i]
 		if bk.Kind != bj.Kind {
 			return false
 		}
