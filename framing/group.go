@@ -473,9 +473,10 @@ func (g *grouper) makeMembers() {
 	// members of its range of k (and segMem of their joists: order is a
 	// permutation, so no two members write one joist's).
 	parallel(g.split(n), func(_ int, sp span) {
+		ids, at := memberIDs(sp)
 		for k := sp.lo; k < sp.hi; k++ {
 			i := order[k]
-			j := js[i]
+			j := &js[i]
 			gr := groups[grpOf[i]]
 			if g.memOl != nil {
 				g.memOl[k] = g.jol[i]
@@ -484,7 +485,7 @@ func (g *grouper) makeMembers() {
 				g.segMem[i] = int32(k)
 			}
 			m := &p.Members[k] // zero: set field by field rather than copy a whole Member in
-			m.ID, m.Pos, m.Layer = "M"+strconv.Itoa(k+1), j.pos, j.pos.Layer
+			m.ID, m.Pos, m.Layer = ids[at[k-sp.lo]:at[k-sp.lo+1]], j.pos, j.pos.Layer
 			m.Start, m.End, m.LengthIn = j.a, j.b, dist(j.a, j.b)
 			m.Generated = g.genFrom >= 0 && i >= g.genFrom
 			g.ends[k] = [2]Point{j.a, j.b}
@@ -495,6 +496,20 @@ func (g *grouper) makeMembers() {
 		}
 	})
 	g.byAcross = g.membersAcross(byAcross, keep, memberOf)
+}
+
+// memberIDs returns the IDs of members sp.lo..sp.hi-1 ("M1", "M2", ...)
+// written one after another in one string, and where each starts (the
+// last entry is the end): one allocation for the range, not one an ID.
+func memberIDs(sp span) (string, []int) {
+	buf := make([]byte, 0, 8*(sp.hi-sp.lo))
+	at := make([]int, 0, sp.hi-sp.lo+1)
+	for k := sp.lo; k < sp.hi; k++ {
+		at = append(at, len(buf))
+		buf = append(buf, 'M')
+		buf = strconv.AppendInt(buf, int64(k+1), 10)
+	}
+	return string(buf), append(at, len(buf))
 }
 
 // membersAcross returns the members in the order neighbours wants them:
