@@ -1,7 +1,6 @@
 package framing
 
 import (
-	"cmp"
 	"fmt"
 	"math"
 	"slices"
@@ -554,7 +553,7 @@ func directionGroups(js []segItem, tolDeg float64, spans []span) ([]int, []dirGr
 		deg float64
 		i   int
 	}
-	byAng := make([]angle, n)
+	ang := make([]angle, n)
 	cs := make([][2]float64, n) // cosine and sine of the doubled angle
 	parallel(spans, func(_ int, sp span) {
 		for i := sp.lo; i < sp.hi; i++ {
@@ -566,18 +565,20 @@ func directionGroups(js []segItem, tolDeg float64, spans []span) ([]int, []dirGr
 				a = 0
 			}
 			r := 2 * a * math.Pi / 180
-			byAng[i] = angle{a, i}
+			ang[i] = angle{a, i}
 			cs[i] = [2]float64{math.Cos(r), math.Sin(r)}
 		}
 	})
-	// equal angles fall in one group whatever their order: the index
-	// only makes the order definite
-	slices.SortFunc(byAng, func(x, y angle) int {
-		if c := cmp.Compare(x.deg, y.deg); c != 0 {
-			return c
-		}
-		return cmp.Compare(x.i, y.i)
-	})
+	// by angle (equal angles fall in one group whatever their order: the
+	// index only makes the order definite)
+	keys := make([]uint64, n)
+	for i := range ang {
+		keys[i] = floatKey(ang[i].deg)
+	}
+	byAng := make([]angle, n)
+	for x, i := range orderByKeys(n, keys) {
+		byAng[x] = ang[i]
+	}
 	grp := make([]int, n)
 	ng := 0
 	for k, x := range byAng {

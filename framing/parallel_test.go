@@ -72,6 +72,10 @@ func TestGroupWorkersSame(t *testing.T) {
 					c.name, w, firstDiff(reflect.ValueOf(one), reflect.ValueOf(got), "Plan"))
 			}
 		}
+		if got := Group(c.d, c.opt); !reflect.DeepEqual(one, got) { // as the command calls it
+			t.Errorf("%s, Group: plan differs from one goroutine's at %s",
+				c.name, firstDiff(reflect.ValueOf(one), reflect.ValueOf(got), "Plan"))
+		}
 	}
 }
 
