@@ -496,6 +496,15 @@ func (g *grouper) buildSupports(merged map[[2]int]bool) {
 		return pairs[i][1] < pairs[j][1]
 	})
 	p := g.plan
+	free := 0
+	for _, u := range used {
+		if !u {
+			free++
+		}
+	}
+	if n := free + len(pairs); n > 0 && p.Supports == nil {
+		p.Supports = make([]Support, 0, n)
+	}
 	for i, s := range g.sups {
 		if used[i] {
 			continue
