@@ -637,10 +637,9 @@ func directionGroups(js []segItem, tolDeg float64, spans []span) ([]int, []dirGr
 // Joists are taken in order of group, offset across and index; each one
 // kept drops the later ones that duplicate it, among the joists of its
 // window (the next ones less than minNeighbourGapIn across). A long window
-// (joists lined up bay after bay) is searched through a grid of cells
-// minNeighbourGapIn across by the snap tolerance along (a duplicate's
-// start is within the tolerance, so within one cell along), not joist by
-// joist.
+// (joists lined up bay after bay) is searched through a band index, bands
+// minNeighbourGapIn across, sorted along (a duplicate's start is within
+// the tolerance along), not joist by joist.
 //
 // It returns which joists to keep, and all the joists by group, offset
 // across and index (membersAcross).
