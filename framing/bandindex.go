@@ -36,7 +36,13 @@ func newBandIndex(bandIn float64, keys []bandKey) *bandIndex {
 		keys[i].band = int64(math.Floor(keys[i].c / bandIn))
 		minBand = min(minBand, keys[i].band)
 	}
-	keys = sortByBand(keys, minBand)
+	sorted := true // as the duplicate search hands them over
+	for i := 1; i < len(keys) && sorted; i++ {
+		sorted = keys[i-1].grp < keys[i].grp || keys[i-1].grp == keys[i].grp && keys[i-1].band <= keys[i].band
+	}
+	if !sorted {
+		keys = sortByBand(keys, minBand)
+	}
 	// then each run (one group and band) by a: runs are short
 	byA := func(x, y bandKey) int {
 		if c := cmp.Compare(x.a, y.a); c != 0 {

@@ -124,11 +124,7 @@ func (g *grouper) crossesDrawnJoist(a, b Point) bool {
 		return false
 	}
 	if g.jIdx == nil {
-		lo, hi, typ := bounds(g.joists)
-		g.jIdx = newSegIndex(lo, hi, len(g.joists), typ)
-		for i, j := range g.joists {
-			g.jIdx.insert(i, j.a, j.b, 0)
-		}
+		g.jIdx = indexSegs(g.joists)
 	}
 	u := unit(sub(b, a))
 	L := dist(a, b)

@@ -106,7 +106,7 @@ func (g *grouper) drawnInBay(r *bayRegion) int {
 
 // bayCallouts adds the callout of each bay to the members in it (its
 // generated joists, or the drawn ones of a bay whose joists are drawn).
-func (g *grouper) bayCallouts(got map[int][]callout) {
+func (g *grouper) bayCallouts(got *memberCallouts) {
 	if len(g.bayRegions) == 0 {
 		return
 	}
@@ -122,12 +122,14 @@ func (g *grouper) bayCallouts(got map[int][]callout) {
 		}
 		am := (r.a0 + r.a1) / 2
 		q0, q1 := add(scale(r.n, r.c0), scale(r.u, am)), add(scale(r.n, r.c1), scale(r.u, am))
+		var ms []int
 		idx.query(q0, q1, (r.a1-r.a0)/2+g.opt.SnapToleranceIn, func(k int) {
 			m := &p.Members[k]
 			if (m.Generated && m.Pos == r.pos) || (!m.Generated && g.inBay(r, m.Start, m.End)) {
-				got[k] = append(got[k], r.co)
+				ms = append(ms, k)
 			}
 		})
+		got.give(ms, r.co)
 	}
 }
 

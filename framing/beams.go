@@ -65,11 +65,7 @@ func (g *grouper) beamCandidates() {
 	for k, i := range cand {
 		segs[k] = g.sups[i]
 	}
-	lo, hi, typ := bounds(segs)
-	idx := newSegIndex(lo, hi, len(segs), typ)
-	for k, s := range segs {
-		idx.insert(k, s.a, s.b, 0)
-	}
+	idx := indexSegs(segs)
 	taken := make([]bool, len(cand))
 	var groups []beamGroup
 	for k, i := range cand {
@@ -185,11 +181,7 @@ func (g *grouper) claimBeamCallouts() {
 	for k := range bs {
 		segs[k] = segItem{a: bs[k].start(), b: bs[k].end()}
 	}
-	lo, hi, typ := bounds(segs)
-	idx := newSegIndex(lo, hi, len(segs), typ)
-	for k, sg := range segs {
-		idx.insert(k, sg.a, sg.b, 0)
-	}
+	idx := indexSegs(segs)
 	claimedBy := make([]int, len(g.labelTexts))
 	for ti, t := range g.labelTexts {
 		claimedBy[ti] = -1
@@ -267,7 +259,10 @@ func (g *grouper) findBeams() {
 		return cmp.Compare(rnd(ma.X), rnd(mb.X))
 	})
 	p.Beams = make([]Beam, len(bs))
-	bySupport := map[int]int{} // Plan.Supports index -> beam
+	bySupport := make([]int, len(p.Supports)) // Plan.Supports index -> beam, -1 for none
+	for i := range bySupport {
+		bySupport[i] = -1
+	}
 	for k := range bs {
 		b := &bs[k]
 		s0 := &g.sups[b.lines[0]]
@@ -282,7 +277,7 @@ func (g *grouper) findBeams() {
 			}
 			if si := g.supportOf(i); si >= 0 && !slices.Contains(bm.Supports, si) {
 				bm.Supports = append(bm.Supports, si)
-				if _, ok := bySupport[si]; !ok {
+				if bySupport[si] < 0 {
 					bySupport[si] = k
 				}
 			}

@@ -46,11 +46,7 @@ func (g *grouper) beamIndex() *segIndex {
 		for k, b := range p.Beams {
 			segs[k] = segItem{a: b.Start, b: b.End}
 		}
-		lo, hi, typ := bounds(segs)
-		g.lp.beamIdx = newSegIndex(lo, hi, len(segs), typ)
-		for k, s := range segs {
-			g.lp.beamIdx.insert(k, s.a, s.b, 0)
-		}
+		g.lp.beamIdx = indexSegs(segs)
 	}
 	return g.lp.beamIdx
 }
@@ -66,6 +62,7 @@ func (g *grouper) beamOnWalls() {
 	tol, wall := g.opt.SnapToleranceIn, g.opt.MaxWallThicknessIn
 	minSin := math.Sin(minBearingAngleDeg * math.Pi / 180)
 	scratch := map[[2]int]bool{}
+	var sc bearingScratch
 	var hits []hit
 	for k := range p.Beams {
 		b := &p.Beams[k]
@@ -94,7 +91,7 @@ func (g *grouper) beamOnWalls() {
 			}
 			return a.sup - b.sup
 		})
-		ws, _ := g.bearingsFrom(hits, scratch, L)
+		ws := g.bearingsNow(&sc, hits, scratch, L)
 		for _, w := range ws {
 			// a beam drawn to the face of a wall bears on the wall, not
 			// on nothing: its bearing is the wall's
@@ -196,17 +193,34 @@ func (g *grouper) beamOnBeams() {
 func maxWallPad(g *grouper) float64 { return g.opt.MaxWallThicknessIn / 2 }
 
 // carriedJoists lists on each beam the joist bearings on its lines.
-func (g *grouper) carriedJoists(bySupport map[int]int) {
+//
+// The members' bearings are read on member ranges in parallel, each
+// goroutine listing what it finds (reading the members and beams); the
+// lists are added to the beams after, range after range: member order.
+func (g *grouper) carriedJoists(bySupport []int) {
 	p := g.plan
-	for m := range p.Members {
-		mb := &p.Members[m]
-		for j, br := range mb.Bearings {
-			k, ok := bySupport[br.Support]
-			if br.Support < 0 || !ok {
-				continue
+	type onBeam struct {
+		beam int
+		c    Carried
+	}
+	spans := g.split(len(p.Members))
+	found := make([][]onBeam, len(spans))
+	parallel(spans, func(w int, sp span) {
+		for m := sp.lo; m < sp.hi; m++ {
+			mb := &p.Members[m]
+			for j, br := range mb.Bearings {
+				if br.Support < 0 || br.Support >= len(bySupport) || bySupport[br.Support] < 0 {
+					continue
+				}
+				k := bySupport[br.Support]
+				q := lerp(mb.Start, p.dirs[m], br.AtIn)
+				found[w] = append(found[w], onBeam{k, Carried{Member: m, Bearing: j, AtIn: g.along(k, q)}})
 			}
-			q := lerp(mb.Start, p.dirs[m], br.AtIn)
-			p.Beams[k].Carried = append(p.Beams[k].Carried, Carried{Member: m, Bearing: j, AtIn: g.along(k, q)})
+		}
+	})
+	for _, f := range found {
+		for _, o := range f {
+			p.Beams[o.beam].Carried = append(p.Beams[o.beam].Carried, o.c)
 		}
 	}
 	for k := range p.Beams {

@@ -41,46 +41,151 @@ type hit struct {
 // findBearings finds each member's supports through a grid over the
 // support lines, merges double-line walls and sets spans, overhangs,
 // hangers and errors.
+//
+// The members are shared out among goroutines in contiguous ranges
+// (parallel.go). Each goroutine reads the support lines, their grid
+// (through a cursor of its own) and its members' geometry, and writes
+// only its own members (bearings, overhangs, hangers, errors and
+// messages), g.bdirs of those members, and its own scratch, slabs, issue
+// list and merged groups. A bearing on a merged group names it, until
+// Plan.Supports is built, by its place in its goroutine's list of
+// groups (-2 - place). What is shared is done after: the merged pairs
+// (a set), the lines inside groups of three or more (in member order:
+// the first member to meet such a line decides the group it is listed
+// on) and the issues, range after range, which is member order.
 func (g *grouper) findBearings() {
 	p := g.plan
 	g.supportIndex()
-	merged := map[[2]int]bool{}
 	g.inGroup = make([]bool, len(g.sups))
 	minSin := math.Sin(minBearingAngleDeg * math.Pi / 180)
-	var hits []hit
-	for k := range p.Members {
-		m := &p.Members[k]
-		g.carried = g.carried[:0]
-		hits = g.supportHits(k, minSin, hits[:0])
-		slices.SortFunc(g.carried, func(a, b hit) int { return cmp.Compare(a.t, b.t) })
-		g.carriedBeams(k)
-		m.Bearings, g.bdirs[k] = g.bearingsFrom(hits, merged, m.LengthIn)
-		if len(m.Bearings) < 2 {
-			// the lines it does bear on are not "the nearest support"
-			own := map[int]bool{}
-			for _, h := range hits {
-				if h.direct {
-					own[h.sup] = true
+	spans := g.split(len(p.Members))
+	pairs := make([][][2]int, len(spans))       // per goroutine: its merged groups' outer lines, first met first
+	middles := make([][]groupMerge, len(spans)) // per goroutine: its groups with lines inside, in member order
+	issues := make(issueLists, len(spans))
+	parallel(spans, func(w int, sp span) {
+		var cur *segCursor
+		if g.supIdx != nil {
+			cur = g.supIdx.newCursor()
+		}
+		var sc bearingScratch
+		var bslab slab[Bearing]
+		var dslab slab[Point]
+		var hits []hit
+		pairAt := map[[2]int]int{} // place in pairs[w]
+		for k := sp.lo; k < sp.hi; k++ {
+			m := &p.Members[k]
+			sc.carried = sc.carried[:0]
+			hits = g.supportHits(cur, &sc, k, minSin, hits[:0])
+			slices.SortFunc(sc.carried, func(a, b hit) int { return cmp.Compare(a.t, b.t) })
+			g.carriedBeams(&issues[w], k, sc.carried)
+			sc.out.reset()
+			g.bearingsFrom(&sc, hits, m.LengthIn)
+			m.Bearings, g.bdirs[k] = bslab.take(sc.out.bs), dslab.take(sc.out.dirs)
+			for _, mg := range sc.out.merges {
+				at, ok := pairAt[mg.key]
+				if !ok {
+					at = len(pairs[w])
+					pairAt[mg.key] = at
+					pairs[w] = append(pairs[w], mg.key)
+				}
+				m.Bearings[mg.bearing].Support = -2 - at
+				if len(mg.middle) > 0 {
+					mg.middle = slices.Clone(mg.middle) // out of the scratch
+					middles[w] = append(middles[w], mg)
 				}
 			}
-			g.noSupport(k, own)
-			continue
+			if len(m.Bearings) < 2 {
+				// the lines it does bear on are not "the nearest support"
+				own := map[int]bool{}
+				for _, h := range hits {
+					if h.direct {
+						own[h.sup] = true
+					}
+				}
+				g.noSupport(cur, &issues[w], k, own)
+				continue
+			}
+			g.finishBearings(k)
 		}
-		g.finishBearings(k)
+	})
+	merged := map[[2]int]bool{}
+	for w := range spans {
+		for _, key := range pairs[w] {
+			merged[key] = true
+		}
+		for _, mg := range middles[w] {
+			g.groupMiddle(mg)
+		}
 	}
+	issues.appendTo(&p.Issues)
 	g.buildSupports(merged)
-	g.resolveBearingSupports()
+	// Each goroutine sets the bearing supports of its own range of
+	// members, reading Plan.Supports' bookkeeping, now complete.
+	parallel(spans, func(w int, sp span) {
+		for k := sp.lo; k < sp.hi; k++ {
+			bs := p.Members[k].Bearings
+			for i := range bs {
+				if ref := bs[i].Support; ref <= -2 {
+					bs[i].Support = g.pairSupport(pairs[w][-2-ref])
+				} else {
+					bs[i].Support = g.supportOf(ref)
+				}
+			}
+		}
+	})
+}
+
+// bearingScratch is one goroutine's buffers for supportHits and
+// bearingsFrom.
+type bearingScratch struct {
+	direct, outer, grp []hit
+	carried            []hit // flush beams framing into the current member
+	out                bearingsOut
+}
+
+// bearingsOut is what bearingsFrom finds on one member or beam.
+type bearingsOut struct {
+	bs     []Bearing
+	dirs   []Point // per bearing: unit direction of its support line
+	merges []groupMerge
+	middle []int // the lines inside the groups of merges
+}
+
+func (o *bearingsOut) reset() {
+	o.bs, o.dirs, o.merges, o.middle = o.bs[:0], o.dirs[:0], o.merges[:0], o.middle[:0]
+}
+
+// groupMerge is a bearing on a group of parallel lines merged into one
+// (a double-line wall): its outer lines and the lines between.
+type groupMerge struct {
+	bearing int    // index into bearingsOut.bs
+	key     [2]int // the outer lines, smaller first
+	middle  []int  // the lines between, along the member
+}
+
+// applyMerge records a merged group met by a beam: its pair in merged,
+// its middle lines, and returns the provisional Bearing.Support of its
+// bearing (pairRef).
+func (g *grouper) applyMerge(mg groupMerge, merged map[[2]int]bool) int {
+	merged[mg.key] = true
+	g.groupMiddle(mg)
+	return g.pairRef(mg.key)
+}
+
+// groupMiddle records the lines inside a merged group of three or more:
+// each is listed on the first group recorded for it.
+func (g *grouper) groupMiddle(mg groupMerge) {
+	for _, s := range mg.middle {
+		g.inGroup[s] = true
+		g.lp.middle(s, mg.key)
+	}
 }
 
 // supportIndex builds the grid over the support lines, once (bays may
 // need it before findBearings).
 func (g *grouper) supportIndex() *segIndex {
 	if g.supIdx == nil && len(g.sups) > 0 {
-		lo, hi, typ := bounds(g.sups)
-		g.supIdx = newSegIndex(lo, hi, len(g.sups), typ)
-		for i, s := range g.sups {
-			g.supIdx.insert(i, s.a, s.b, 0)
-		}
+		g.supIdx = indexSegs(g.sups)
 	}
 	return g.supIdx
 }
@@ -102,7 +207,7 @@ func bounds(segs []segItem) (lo, hi Point, meanLen float64) {
 // supportHits lists the support lines member k crosses or reaches, plus
 // the "outer" lines just past an end that may be the far face of a
 // double-line wall the end stops inside.
-func (g *grouper) supportHits(k int, minSin float64, hits []hit) []hit {
+func (g *grouper) supportHits(cur *segCursor, sc *bearingScratch, k int, minSin float64, hits []hit) []hit {
 	if g.supIdx == nil {
 		return hits
 	}
@@ -111,7 +216,7 @@ func (g *grouper) supportHits(k int, minSin float64, hits []hit) []hit {
 	tol, wall := g.opt.SnapToleranceIn, g.opt.MaxWallThicknessIn
 	L := m.LengthIn
 	minLen := math.Min(minSupportFrac*L, wall+tol)
-	g.supIdx.query(m.Start, m.End, tol+wall, func(s int) {
+	g.supIdx.queryWith(cur, m.Start, m.End, tol+wall, func(s int) {
 		sg := &g.sups[s]
 		t, _, sin, ok := segParams(m.Start, u, sg.a, sg.b)
 		if !ok || sin < minSin || dist(sg.a, sg.b) < minLen {
@@ -125,7 +230,7 @@ func (g *grouper) supportHits(k int, minSin float64, hits []hit) []hit {
 			return
 		}
 		if g.framesInto(sg, t, L, lerp(m.Start, u, t)) {
-			g.carried = append(g.carried, hit{t: t, sup: s, sin: sin})
+			sc.carried = append(sc.carried, hit{t: t, sup: s, sin: sin})
 			return
 		}
 		hits = append(hits, hit{t: t, sup: s, sin: sin, direct: de <= tol})
@@ -157,13 +262,14 @@ func (g *grouper) framesInto(sg *segItem, t, L float64, q Point) bool {
 	return dist(q, sg.a) <= tol || dist(q, sg.b) <= tol
 }
 
-// carriedBeams makes member k an error when a flush beam frames into it:
-// the beam's reaction is a point load, outside the checks' scope
-// (DOMAIN.md "Cautions"). A double-line beam is named once.
-func (g *grouper) carriedBeams(k int) {
+// carriedBeams makes member k an error when a flush beam frames into it
+// (carried, sorted along it): the beam's reaction is a point load,
+// outside the checks' scope (DOMAIN.md "Cautions"). A double-line beam is
+// named once. The issues go to iss.
+func (g *grouper) carriedBeams(iss *dxfimport.IssueList, k int, carried []hit) {
 	m := &g.plan.Members[k]
 	last := math.Inf(-1)
-	for _, h := range g.carried {
+	for _, h := range carried {
 		if h.t-last <= g.opt.MaxWallThicknessIn {
 			continue
 		}
@@ -172,7 +278,7 @@ func (g *grouper) carriedBeams(k int) {
 		msg := fmt.Sprintf("%s carries the end of a flush beam or header (%s) %.1f in from its start: "+
 			"a point load, which the checks do not cover; design this member by hand", m.ID, g.sups[h.sup].pos, h.t)
 		m.Messages = append(m.Messages, msg)
-		g.plan.Issues.Add(m.Pos, CodeCarriesBeam, dxfimport.SevError, "%s", msg)
+		iss.Add(m.Pos, CodeCarriesBeam, dxfimport.SevError, "%s", msg)
 	}
 }
 
@@ -185,16 +291,18 @@ func (g *grouper) parallelSupports(a, b int) bool {
 	return c <= math.Sin(g.opt.AngleTolDeg*math.Pi/180)+1e-12
 }
 
-// bearingsFrom turns sorted hits into bearings and returns each
-// bearing's support direction for run matching. Parallel support lines of
-// one kind that the member meets within MaxWallThicknessIn of the first
-// of them (plates, plies, sheathing: any number) are one bearing at the
+// bearingsFrom turns sorted hits into bearings, each with its support
+// direction for run matching, in sc.out. Parallel support lines of one
+// kind that the member meets within MaxWallThicknessIn of the first of
+// them (plates, plies, sheathing: any number) are one bearing at the
 // middle of the group, as long as the group is wide; where the member's
 // end stops inside the group, the lines just past that end belong to it
 // too, and the bearing length stops at the end. L is the member's length.
-func (g *grouper) bearingsFrom(hits []hit, merged map[[2]int]bool, L float64) ([]Bearing, []Point) {
-	direct, outer := g.direct[:0], g.outer[:0]
-	defer func() { g.direct, g.outer = direct, outer }() // keep the buffers
+// Such a bearing's Support is left to the caller, with its groupMerge in
+// sc.out.merges. It reads only the support lines and options.
+func (g *grouper) bearingsFrom(sc *bearingScratch, hits []hit, L float64) {
+	direct, outer := sc.direct[:0], sc.outer[:0]
+	defer func() { sc.direct, sc.outer = direct, outer }() // keep the buffers
 	for _, h := range hits {
 		if h.direct {
 			if n := len(direct); n > 0 && (h.t-direct[n-1].t)*h.sin < drawnTwiceIn {
@@ -206,28 +314,25 @@ func (g *grouper) bearingsFrom(hits []hit, merged map[[2]int]bool, L float64) ([
 		}
 	}
 	if len(direct) == 0 {
-		return nil, nil
+		return
 	}
 	wall := g.opt.MaxWallThicknessIn
 	fits := func(a, b hit) bool { // b is in the group whose far line is a
 		return math.Abs(b.t-a.t)*a.sin <= wall+1e-9 && g.parallelSupports(a.sup, b.sup)
 	}
-	bs := make([]Bearing, 0, len(direct))
-	dirs := make([]Point, 0, len(direct))
-	var grp []hit
 	for i := 0; i < len(direct); {
 		j := i + 1
 		for j < len(direct) && fits(direct[i], direct[j]) {
 			j++
 		}
-		grp = append(grp[:0], direct[i:j]...)
+		grp := append(sc.grp[:0], direct[i:j]...)
 		if i == 0 { // lines before the start, nearest first
 			for x := len(outer) - 1; x >= 0; x-- {
 				if h := outer[x]; h.t < 0 && h.t < grp[0].t {
 					if !fits(grp[len(grp)-1], h) || !g.parallelSupports(grp[0].sup, h.sup) {
 						break
 					}
-					grp = append([]hit{h}, grp...)
+					grp = slices.Insert(grp, 0, h)
 				}
 			}
 		}
@@ -241,23 +346,35 @@ func (g *grouper) bearingsFrom(hits []hit, merged map[[2]int]bool, L float64) ([
 				}
 			}
 		}
-		b, d := g.groupBearing(grp, merged, L)
-		bs, dirs = append(bs, b), append(dirs, d)
+		sc.grp = grp
+		g.groupBearing(&sc.out, grp, L)
 		i = j
 	}
-	return bs, dirs
 }
 
-// groupBearing makes one bearing of a group of parallel support lines
-// met by a member of length L, sorted along it.
-func (g *grouper) groupBearing(grp []hit, merged map[[2]int]bool, L float64) (Bearing, Point) {
+// bearingsNow is bearingsFrom for one caller alone (a beam's walls):
+// merged groups are applied at once, in order.
+func (g *grouper) bearingsNow(sc *bearingScratch, hits []hit, merged map[[2]int]bool, L float64) []Bearing {
+	sc.out.reset()
+	g.bearingsFrom(sc, hits, L)
+	for _, mg := range sc.out.merges {
+		sc.out.bs[mg.bearing].Support = g.applyMerge(mg, merged)
+	}
+	return sc.out.bs
+}
+
+// groupBearing adds to out the bearing of a group of parallel support
+// lines met by a member of length L, sorted along it.
+func (g *grouper) groupBearing(out *bearingsOut, grp []hit, L float64) {
 	first, last := grp[0], grp[len(grp)-1]
 	s0 := &g.sups[first.sup]
 	sp := g.opt.Supports[s0.spec]
 	dir := unit(sub(s0.b, s0.a))
 	width := (last.t - first.t) * first.sin
 	if len(grp) == 1 || width < sameLineIn {
-		return Bearing{AtIn: first.t, LengthIn: sp.BearingIn, Kind: sp.Kind, Pos: s0.pos, Support: first.sup}, dir
+		out.bs = append(out.bs, Bearing{AtIn: first.t, LengthIn: sp.BearingIn, Kind: sp.Kind, Pos: s0.pos, Support: first.sup})
+		out.dirs = append(out.dirs, dir)
+		return
 	}
 	lb := width
 	if first.t < 0 { // the start stops inside the group
@@ -267,13 +384,14 @@ func (g *grouper) groupBearing(grp []hit, merged map[[2]int]bool, L float64) (Be
 		lb = math.Min(lb, (L-first.t)*first.sin)
 	}
 	key := [2]int{min(first.sup, last.sup), max(first.sup, last.sup)}
-	merged[key] = true
+	m0 := len(out.middle)
 	for _, h := range grp[1 : len(grp)-1] {
-		g.inGroup[h.sup] = true
-		g.lp.middle(h.sup, key)
+		out.middle = append(out.middle, h.sup)
 	}
-	return Bearing{AtIn: (first.t + last.t) / 2, LengthIn: lb, Kind: sp.Kind, Pos: s0.pos, Support: g.pairRef(key),
-		WidthIn: last.t - first.t}, dir
+	out.merges = append(out.merges, groupMerge{bearing: len(out.bs), key: key, middle: out.middle[m0:len(out.middle):len(out.middle)]})
+	out.bs = append(out.bs, Bearing{AtIn: (first.t + last.t) / 2, LengthIn: lb, Kind: sp.Kind, Pos: s0.pos, Support: -1,
+		WidthIn: last.t - first.t})
+	out.dirs = append(out.dirs, dir)
 }
 
 // finishBearings sets the overhangs and hangers of a member with at least
@@ -304,7 +422,8 @@ func (g *grouper) finishBearings(k int) {
 
 // noSupport marks member k as an error, naming the end with no support
 // and how far the nearest other support line (not one in own) is from it.
-func (g *grouper) noSupport(k int, own map[int]bool) {
+// It queries the support grid through cur; the issues go to iss.
+func (g *grouper) noSupport(cur *segCursor, iss *dxfimport.IssueList, k int, own map[int]bool) {
 	m := &g.plan.Members[k]
 	m.Error = true
 	var ends []string
@@ -322,26 +441,26 @@ func (g *grouper) noSupport(k int, own map[int]bool) {
 			p = m.End
 		}
 		msg := fmt.Sprintf("%s %s %s reaches no support", m.ID, e, g.drawingPoint(p))
-		if d, s, ok := g.nearestSupport(p, own); ok {
+		if d, s, ok := g.nearestSupport(cur, p, own); ok {
 			msg += fmt.Sprintf("; nearest support is %.1f in away (%s)", d, s.pos)
 		} else {
 			msg += fmt.Sprintf("; no support within %.0f ft", nearestSearchIn/12)
 		}
 		m.Messages = append(m.Messages, msg)
-		g.plan.Issues.Add(m.Pos, CodeNoSupport, dxfimport.SevError, "%s", msg)
+		iss.Add(m.Pos, CodeNoSupport, dxfimport.SevError, "%s", msg)
 	}
 }
 
 // nearestSearchIn bounds the search for the nearest support in messages.
 const nearestSearchIn = 1536.0
 
-func (g *grouper) nearestSupport(p Point, skip map[int]bool) (float64, *segItem, bool) {
+func (g *grouper) nearestSupport(cur *segCursor, p Point, skip map[int]bool) (float64, *segItem, bool) {
 	if g.supIdx == nil {
 		return 0, nil, false
 	}
 	for r := 24.0; r <= nearestSearchIn; r *= 4 {
 		best, bi := math.Inf(1), -1
-		g.supIdx.query(p, p, r, func(s int) {
+		g.supIdx.queryWith(cur, p, p, r, func(s int) {
 			sg := &g.sups[s]
 			if skip[s] {
 				return
@@ -377,6 +496,15 @@ func (g *grouper) buildSupports(merged map[[2]int]bool) {
 		return pairs[i][1] < pairs[j][1]
 	})
 	p := g.plan
+	free := 0
+	for _, u := range used {
+		if !u {
+			free++
+		}
+	}
+	if n := free + len(pairs); n > 0 && p.Supports == nil {
+		p.Supports = make([]Support, 0, n)
+	}
 	for i, s := range g.sups {
 		if used[i] {
 			continue

@@ -32,43 +32,36 @@ type callout struct {
 
 // assignLumber gives each member its by-layer or default lumber, then
 // applies the size callouts.
+//
+// Finding the joists under each callout and applying the callouts to
+// each member run in parallel (parallel.go); reading the texts, the
+// warnings about them and the lists of callouts per member stay in text
+// order, as they were drawn.
 func (g *grouper) assignLumber() {
 	p := g.plan
-	for k := range p.Members {
-		m := &p.Members[k]
-		m.Species, m.Grade, m.Size = g.opt.lumberFor(m.Layer)
-	}
+	g.layerLumber()
 	if len(g.labelTexts) == 0 && len(g.bayRegions) == 0 {
 		return
 	}
-	got := make(map[int][]callout)
+	got := newMemberCallouts(len(p.Members))
 	unread := make(map[int]unreadCallout) // members under a callout that cannot be read
 	var other []textItem                  // texts that do not try to be callouts: room names, notes
-	type reading struct {
-		co  Callout
-		err error
-	}
-	read := map[string]reading{} // a plan repeats its callouts run after run
+	read, kind := g.readLabelTexts()
+	ms := g.calloutsMembers(kind)
 	for ti, t := range g.labelTexts {
-		if g.bayText != nil && g.bayText[ti] {
-			continue // read with its bay (bays.go)
-		}
-		r, ok := read[t.text]
-		if !ok {
-			r.co, r.err = ReadCallout(t.text)
-			read[t.text] = r
-		}
-		co, err := r.co, r.err
-		if err != nil && !calloutLikeRE.MatchString(t.text) {
+		co, err := read[ti].co, read[ti].err
+		switch kind[ti] {
+		case textSkipped:
+			continue
+		case textOther:
 			other = append(other, t)
 			continue
-		}
-		text := flatText(t.text)
-		if err != nil && !anySizeRE.MatchString(normalizeCallout(t.text)) {
+		case textNoSize:
 			g.warn(t.pos, CodeBadCallout, "label-layer text left out: %v", err)
 			continue
 		}
-		ms := g.calloutMembers(t)
+		text := flatText(t.text)
+		ms := ms[ti]
 		if err != nil {
 			// It names a size but cannot be read: an error on the
 			// members under it, never the default size.
@@ -93,9 +86,7 @@ func (g *grouper) assignLumber() {
 		if len(ms) == 0 {
 			g.warn(t.pos, CodeCalloutUnused, "callout %q reaches no joist: no span line under it and no joist near it", c.text)
 		}
-		for _, k := range ms {
-			got[k] = append(got[k], c)
-		}
+		got.give(ms, c)
 	}
 	if len(other) > 0 {
 		g.plan.Issues.Add(other[0].pos, CodeBadCallout, dxfimport.SevInfo,
@@ -103,14 +94,20 @@ func (g *grouper) assignLumber() {
 			len(other), strings.Join(strings.Fields(other[0].text), " "))
 	}
 	g.bayCallouts(got)
-	ks := make([]int, 0, len(got))
-	for k := range got {
-		ks = append(ks, k)
-	}
-	sort.Ints(ks)
-	for _, k := range ks {
-		g.applyCallouts(k, got[k])
-	}
+	// Each goroutine applies the callouts of its own range of members,
+	// writing those members only (reading their neighbours' offsets);
+	// its issues are appended after, in member order.
+	spans := g.split(len(p.Members))
+	issues := make(issueLists, len(spans))
+	parallel(spans, func(w int, sp span) {
+		var cs []callout
+		for k := sp.lo; k < sp.hi; k++ {
+			if cs = got.over(k, cs[:0]); len(cs) > 0 {
+				g.applyCallouts(&issues[w], k, cs)
+			}
+		}
+	})
+	issues.appendTo(&p.Issues)
 	for k, u := range unread {
 		m := &p.Members[k]
 		m.Error, m.Size = true, "" // no size: the project's is not assumed
@@ -119,6 +116,127 @@ func (g *grouper) assignLumber() {
 	}
 }
 
+// memberCallouts lists the callouts over each member, in the order they
+// were given (drawing order, then bays).
+type memberCallouts struct {
+	cos []callout // each callout once
+	of  [][]int32 // per member: indices into cos
+	ids slab[int32]
+}
+
+func newMemberCallouts(n int) *memberCallouts { return &memberCallouts{of: make([][]int32, n)} }
+
+// give lists callout c over each member of ms.
+func (mc *memberCallouts) give(ms []int, c callout) {
+	if len(ms) == 0 {
+		return
+	}
+	ci := int32(len(mc.cos))
+	mc.cos = append(mc.cos, c)
+	for _, k := range ms {
+		if len(mc.of[k]) == 0 {
+			mc.of[k] = mc.ids.take([]int32{ci})
+		} else {
+			mc.of[k] = append(mc.of[k], ci)
+		}
+	}
+}
+
+// over appends the callouts over member k to dst.
+func (mc *memberCallouts) over(k int, dst []callout) []callout {
+	for _, ci := range mc.of[k] {
+		dst = append(dst, mc.cos[ci])
+	}
+	return dst
+}
+
+// layerLumber gives each member its by-layer or default lumber. Each
+// goroutine writes its own range of members, reading the options.
+func (g *grouper) layerLumber() {
+	p := g.plan
+	parallel(g.split(len(p.Members)), func(_ int, sp span) {
+		byLayer := map[string][3]string{} // a plan has few joist layers
+		for k := sp.lo; k < sp.hi; k++ {
+			m := &p.Members[k]
+			l, ok := byLayer[m.Layer]
+			if !ok {
+				l[0], l[1], l[2] = g.opt.lumberFor(m.Layer)
+				byLayer[m.Layer] = l
+			}
+			m.Species, m.Grade, m.Size = l[0], l[1], l[2]
+		}
+	})
+}
+
+// What a label text is to assignLumber.
+const (
+	textCallout = iota // a callout, read or not: applied to the joists under it
+	textSkipped        // a bay's callout, read with its bay (bays.go)
+	textOther          // no size in it (a room name, a note): counted in one finding
+	textNoSize         // tries to be a callout, names no size: warned about
+)
+
+type reading struct {
+	co  Callout
+	err error
+}
+
+// readLabelTexts reads each label text as a callout (each distinct text
+// once: a plan repeats its callouts run after run) and sorts the texts
+// by what they are.
+func (g *grouper) readLabelTexts() ([]reading, []int) {
+	cache := map[string]reading{}
+	read := make([]reading, len(g.labelTexts))
+	kind := make([]int, len(g.labelTexts))
+	for ti, t := range g.labelTexts {
+		if g.bayText != nil && g.bayText[ti] {
+			kind[ti] = textSkipped
+			continue
+		}
+		r, ok := cache[t.text]
+		if !ok {
+			r.co, r.err = ReadCallout(t.text)
+			cache[t.text] = r
+		}
+		read[ti] = r
+		switch {
+		case r.err != nil && !calloutLikeRE.MatchString(t.text):
+			kind[ti] = textOther
+		case r.err != nil && !anySizeRE.MatchString(normalizeCallout(t.text)):
+			kind[ti] = textNoSize
+		}
+	}
+	return read, kind
+}
+
+// calloutsMembers returns, per label text that is a callout, the joists
+// it applies to (calloutMembers). Each goroutine takes a range of the
+// texts, reads the label lines, the members and their grids (through
+// cursors of its own) and writes the lists of its own texts only.
+func (g *grouper) calloutsMembers(kind []int) [][]int {
+	out := make([][]int, len(g.labelTexts))
+	li, mi := g.labelIndex(), g.memberIndex() // built before the goroutines share them
+	parallel(g.splitHeavy(len(g.labelTexts)), func(_ int, sp span) {
+		var q calloutQuery
+		if li != nil {
+			q.label = li.newCursor()
+		}
+		if mi != nil {
+			q.member = mi.newCursor()
+		}
+		for ti := sp.lo; ti < sp.hi; ti++ {
+			if kind[ti] == textCallout {
+				out[ti] = g.calloutMembers(&q, g.labelTexts[ti])
+			}
+		}
+	})
+	return out
+}
+
+// calloutQuery holds one goroutine's cursors through the label-line and
+// member grids.
+type calloutQuery struct{ label, member *segCursor }
+
 // calloutReachIn is how far a callout text may sit from its span line:
 // three text heights, at least 12 in (common practice, no source).
 func calloutReachIn(t textItem) float64 { return math.Max(12, 3*t.heightIn) }
@@ -126,11 +244,11 @@ func calloutReachIn(t textItem) float64 { return math.Max(12, 3*t.heightIn) }
 // calloutMembers returns the joists a callout applies to: those crossed by
 // the nearest label line within reach, else the run of the joist the text
 // lies over (within 24 in).
-func (g *grouper) calloutMembers(t textItem) []int {
+func (g *grouper) calloutMembers(q *calloutQuery, t textItem) []int {
 	best, bi := calloutReachIn(t), -1
-	if li := g.labelIndex(); li != nil {
+	if li := g.lblIdx; li != nil {
 		var near []int
-		li.query(t.p, t.p, best, func(i int) { near = append(near, i) })
+		li.queryWith(q.label, t.p, t.p, best, func(i int) { near = append(near, i) })
 		sort.Ints(near) // ties go to the last line, as in drawing order
 		for _, i := range near {
 			l := g.labelLines[i]
@@ -139,7 +257,7 @@ func (g *grouper) calloutMembers(t textItem) []int {
 			}
 		}
 	}
-	idx := g.memberIndex()
+	idx := g.memIdx
 	if idx == nil {
 		return nil
 	}
@@ -147,7 +265,7 @@ func (g *grouper) calloutMembers(t textItem) []int {
 	var out []int
 	if bi >= 0 {
 		l := g.labelLines[bi]
-		idx.query(l.a, l.b, g.opt.SnapToleranceIn, func(k int) {
+		idx.queryWith(q.member, l.a, l.b, g.opt.SnapToleranceIn, func(k int) {
 			if _, ok := g.crossAt(k, l.a, l.b); ok {
 				out = append(out, k)
 			}
@@ -156,7 +274,7 @@ func (g *grouper) calloutMembers(t textItem) []int {
 		return out
 	}
 	nearest, nk := 24.0, -1
-	idx.query(t.p, t.p, nearest, func(k int) {
+	idx.queryWith(q.member, t.p, t.p, nearest, func(k int) {
 		m := &p.Members[k]
 		if d := distPointSeg(t.p, m.Start, m.End); d <= nearest {
 			nearest, nk = d, k
@@ -188,11 +306,7 @@ func (g *grouper) crossAt(k int, a, b Point) (float64, bool) {
 // labelIndex is a grid over the label lines, built on first use.
 func (g *grouper) labelIndex() *segIndex {
 	if g.lblIdx == nil && len(g.labelLines) > 0 {
-		lo, hi, typ := bounds(g.labelLines)
-		g.lblIdx = newSegIndex(lo, hi, len(g.labelLines), typ)
-		for i, l := range g.labelLines {
-			g.lblIdx.insert(i, l.a, l.b, 0)
-		}
+		g.lblIdx = indexSegs(g.labelLines)
 	}
 	return g.lblIdx
 }
@@ -200,34 +314,27 @@ func (g *grouper) labelIndex() *segIndex {
 func (g *grouper) memberIndex() *segIndex {
 	p := g.plan
 	if g.memIdx == nil && len(p.Members) > 0 {
-		segs := make([]segItem, len(p.Members))
-		for k, m := range p.Members {
-			segs[k] = segItem{a: m.Start, b: m.End}
-		}
-		lo, hi, typ := bounds(segs)
-		g.memIdx = newSegIndex(lo, hi, len(segs), typ)
-		for k, s := range segs {
-			g.memIdx.insert(k, s.a, s.b, 0)
-		}
+		n := len(p.Members)
+		g.memIdx = indexEnds(n, func(k int) (Point, Point) { return g.ends[k][0], g.ends[k][1] }, g.split(n))
 	}
 	return g.memIdx
 }
 
 // applyCallouts gives member k the size, plies, spacing, species and
 // grade of the callouts over it; callouts that disagree make it an error.
-func (g *grouper) applyCallouts(k int, cs []callout) {
+// The issues go to iss.
+func (g *grouper) applyCallouts(iss *dxfimport.IssueList, k int, cs []callout) {
 	m := &g.plan.Members[k]
-	// a callout without a spacing (species, grade) agrees with one that
-	// gives it
 	c0 := cs[0]
-	for _, c := range cs[1:] {
-		err := c0.merge(c.Callout)
-		if c.Designation() != c0.Designation() || err != nil {
+	if len(cs) > 1 {
+		var bad int
+		if c0, bad = mergeCallouts(cs); bad >= 0 {
+			c := cs[bad]
 			m.Error = true
 			msg := fmt.Sprintf("%s has conflicting size callouts %q (%s) and %q (%s); resolve the drawing",
 				m.ID, cs[0].text, cs[0].pos, c.text, c.pos)
 			m.Messages = append(m.Messages, msg)
-			g.plan.Issues.Add(m.Pos, CodeCalloutConflict, dxfimport.SevError, "%s", msg)
+			iss.Add(m.Pos, CodeCalloutConflict, dxfimport.SevError, "%s", msg)
 			return
 		}
 	}
@@ -244,8 +351,23 @@ func (g *grouper) applyCallouts(k int, cs []callout) {
 		msg := fmt.Sprintf("%s: callout %q says %g in o.c. but the drawing measures %.2f in",
 			m.ID, c0.text, c0.SpacingIn, sp)
 		m.Messages = append(m.Messages, msg)
-		g.warn(m.Pos, CodeCalloutSpacing, "%s", msg)
+		iss.Add(m.Pos, CodeCalloutSpacing, dxfimport.SevWarning, "%s", msg)
 	}
+}
+
+// mergeCallouts merges the callouts over one member into the first: a
+// callout without a spacing (species, grade) agrees with one that gives
+// it. bad is the first that disagrees (another size, or another value
+// given), -1 when none does.
+func mergeCallouts(cs []callout) (c0 callout, bad int) {
+	c0 = cs[0]
+	for i, c := range cs[1:] {
+		err := c0.merge(c.Callout)
+		if c.Designation() != c0.Designation() || err != nil {
+			return c0, i + 1
+		}
+	}
+	return c0, -1
 }
 
 // plyGapIn: parallel joists this close are plies of one built-up member
@@ -292,18 +414,24 @@ func (g *grouper) existingBlocking() {
 		})
 	}
 	// blocking drawn piece by piece touches each joist from both sides:
-	// one bracing point per position (within the snap tolerance)
-	for k := range p.Members {
-		at := p.Members[k].ExistingBlockingAtIn
-		sort.Float64s(at)
-		n := 0
-		for _, x := range at {
-			if n > 0 && x-at[n-1] <= g.opt.SnapToleranceIn {
+	// one bracing point per position (within the snap tolerance). Each
+	// goroutine tidies its own range of members.
+	parallel(g.split(len(p.Members)), func(_ int, sp span) {
+		for k := sp.lo; k < sp.hi; k++ {
+			at := p.Members[k].ExistingBlockingAtIn
+			if at == nil {
 				continue
 			}
-			at[n] = x
-			n++
+			sort.Float64s(at)
+			n := 0
+			for _, x := range at {
+				if n > 0 && x-at[n-1] <= g.opt.SnapToleranceIn {
+					continue
+				}
+				at[n] = x
+				n++
+			}
+			p.Members[k].ExistingBlockingAtIn = at[:n]
 		}
-		p.Members[k].ExistingBlockingAtIn = at[:n]
-	}
+	})
 }

@@ -226,19 +226,36 @@
 // # Speed
 //
 // Support and joist searches go through uniform grids over the segments,
-// neighbours through one sort per direction group, so Group grows about as
-// n log n. BenchmarkGroup (generated plans: 2,000 support lines, every joist
-// a 144 in span at 16 in o.c.), go test -bench Group ./framing, on the
-// 2-core build machine shared with other jobs (load average 10-15, so wall
-// times varied 3-10x between runs; CPU time per op from /usr/bin/time over
-// 1 and 11 iterations is the steadier figure):
+// neighbours through one order of the joists by direction group and
+// offset across, duplicates through a band index; the joists are ordered
+// by radix sorts on their keys (sortkeys.go), not by comparison, so
+// Group grows about linearly with the plan.
 //
-//	joists    best wall ns/op   CPU per op   allocs/op   B/op
-//	10,000         33 ms          ~15 ms       42,000     11 MB
-//	100,000       187 ms         ~210 ms      403,500     92 MB
+// The work done for each member on its own (its supports and bearings,
+// neighbours and tributary widths, zones, the joists under each callout,
+// the member grid's cells, outline sides) runs on GOMAXPROCS goroutines,
+// each over one contiguous range of members (parallel.go). Each writes
+// only its own members and lists; what several members share (merged
+// double lines, union-find sets, runs, issues) is done after, in member
+// order. The plan is the same to the last bit on any number of cores:
+// TestGroupWorkersSame groups the demo plan, the fixtures, bigplans and
+// random messy plans on one goroutine and on several, with ranges as
+// small as one member, and compares whole plans.
 //
-// 10x the joists costs 6-14x the time (the 2,000-line support grid is a
-// fixed part of the 10,000 case).
+// BenchmarkGroupSynth groups samples/bigplan drawings of 10,000, 100,000
+// and 1,000,000 joists (ns/joist should be flat); BenchmarkGroupSteps
+// times each step at 100,000. Group's wall time on the 2-core build
+// machine, GOGC=300 as the command sets it, a collection before each
+// call, best of 3 to 25 calls, load average under 2 (4 December 2026;
+// "before" is the single-goroutine code this replaced):
+//
+//	joists      before          after, 2 cores   after, 1 core
+//	10,000      2.57 µs/joist   1.75 µs/joist
+//	100,000     3.71 µs/joist   1.99 µs/joist    2.85 µs/joist
+//	1,000,000   5.57 µs/joist   2.20 µs/joist
+//
+// While other jobs hold a core the two-core figures come near the
+// one-core ones.
 //
 // Outlines are found through one sort of the joist lines by direction
 // group and band across (a radix sort) and short walks along each band;

@@ -2,6 +2,7 @@ package framing
 
 import (
 	"math"
+	"slices"
 
 	"framecheck/dxfimport"
 )
@@ -49,8 +50,16 @@ type segIndex struct {
 	x0, y0, cell float64
 	nx, ny       int
 	cells        [][]int32
-	stamp        []uint32
-	cur          uint32
+	n            int       // ids are 0..n-1
+	own          segCursor // query's
+}
+
+// segCursor is the state of a walk through a segIndex: which ids the
+// current query has met. query uses the index's own; goroutines querying
+// one index at once each use their own (newCursor).
+type segCursor struct {
+	stamp []uint32
+	cur   uint32
 }
 
 // maxGridCells bounds the grid's memory; the cell grows to keep under it.
@@ -69,9 +78,113 @@ func newSegIndex(lo, hi Point, n int, typLenIn float64) *segIndex {
 	g.nx = int(w/cell) + 1
 	g.ny = int(h/cell) + 1
 	g.cells = make([][]int32, g.nx*g.ny)
-	g.stamp = make([]uint32, n)
+	g.n = n
 	return g
 }
+
+// indexSegs makes a grid over segs, listing segment i under id i.
+func indexSegs(segs []segItem) *segIndex {
+	return indexEnds(len(segs), func(i int) (Point, Point) { return segs[i].a, segs[i].b }, nil)
+}
+
+// indexEnds makes a grid over n segments, seg giving the ends of each,
+// sized as bounds would size it for them. With spans (a grouper's
+// split), the segments' cells are found in parallel.
+func indexEnds(n int, seg func(i int) (Point, Point), spans []span) *segIndex {
+	lo := Point{X: math.Inf(1), Y: math.Inf(1)}
+	hi := Point{X: math.Inf(-1), Y: math.Inf(-1)}
+	meanLen := 0.0
+	for i := 0; i < n; i++ {
+		a, b := seg(i)
+		for _, q := range [2]Point{a, b} {
+			lo.X, lo.Y = math.Min(lo.X, q.X), math.Min(lo.Y, q.Y)
+			hi.X, hi.Y = math.Max(hi.X, q.X), math.Max(hi.Y, q.Y)
+		}
+		meanLen += dist(a, b)
+	}
+	g := newSegIndex(lo, hi, n, meanLen/float64(max(n, 1)))
+	if spans == nil {
+		spans = []span{{0, n}}
+	}
+	g.fill(seg, spans)
+	return g
+}
+
+// fill inserts the segments of spans (seg gives each one's ends; the
+// spans cover 0..n-1 in order) with no pad, as insert would one after
+// another, but with the cells' lists carved from one array. Each span's
+// segments are walked on a goroutine of its own, which lists the cells of
+// each (as insert: each cell once a segment) and writes only its own
+// list; then the lists are counted and the segments listed in their
+// cells, in order.
+func (g *segIndex) fill(seg func(i int) (Point, Point), spans []span) {
+	type walk struct {
+		cells []int32 // the cells of the span's first segment, then of its next, ...
+		ends  []int   // segment lo+i's cells end at cells[ends[i]]
+	}
+	walks := make([]walk, len(spans))
+	parallel(spans, func(w int, sp span) {
+		wk := &walks[w]
+		wk.ends = make([]int, 0, sp.hi-sp.lo)
+		var last []int32 // per cell: 1 + the last segment listed in it; made for the first long segment
+		for id := sp.lo; id < sp.hi; id++ {
+			a, b := seg(id)
+			from := len(wk.cells)
+			g.visit(a, b, 0, func(c int) {
+				mine := wk.cells[from:]
+				switch {
+				case len(mine) < 32: // most segments cross a few cells
+					if slices.Contains(mine, int32(c)) {
+						return
+					}
+				default:
+					if last == nil {
+						last = make([]int32, len(g.cells))
+					}
+					if last[mine[0]] != int32(id)+1 { // first look at this segment's cells this way
+						for _, m := range mine {
+							last[m] = int32(id) + 1
+						}
+					}
+					if last[c] == int32(id)+1 {
+						return
+					}
+					last[c] = int32(id) + 1
+				}
+				wk.cells = append(wk.cells, int32(c))
+			})
+			wk.ends = append(wk.ends, len(wk.cells))
+		}
+	})
+	count := make([]int32, len(g.cells))
+	total := 0
+	for _, wk := range walks {
+		for _, c := range wk.cells {
+			count[c]++
+		}
+		total += len(wk.cells)
+	}
+	flat := make([]int32, total)
+	off := 0
+	for c, k := range count {
+		if k > 0 {
+			g.cells[c] = flat[off : off : off+int(k)]
+			off += int(k)
+		}
+	}
+	for w, sp := range spans {
+		from := 0
+		for i, end := range walks[w].ends {
+			for _, c := range walks[w].cells[from:end] {
+				g.cells[c] = append(g.cells[c], int32(sp.lo+i))
+			}
+			from = end
+		}
+	}
+}
+
+// newCursor returns a cursor for queries through g on another goroutine.
+func (g *segIndex) newCursor() *segCursor { return &segCursor{stamp: make([]uint32, g.n)} }
 
 func (g *segIndex) cellRange(a, b Point, pad float64) (i0, j0, i1, j1 int) {
 	clampI := func(v float64, n int) int {
@@ -120,17 +233,27 @@ func (g *segIndex) insert(id int, a, b Point, pad float64) {
 	})
 }
 
-// query calls fn once for every segment listed near ab (padded by pad).
+// query calls fn once for every segment listed near ab (padded by pad),
+// in the order the cells list them.
 func (g *segIndex) query(a, b Point, pad float64, fn func(id int)) {
-	g.cur++
-	if g.cur == 0 { // wrapped: clear the stamps
-		clear(g.stamp)
-		g.cur = 1
+	if g.own.stamp == nil {
+		g.own.stamp = make([]uint32, g.n)
 	}
-	g.visit(a, b, pad, func(c int) {
-		for _, id := range g.cells[c] {
-			if g.stamp[id] != g.cur {
-				g.stamp[id] = g.cur
+	g.queryWith(&g.own, a, b, pad, fn)
+}
+
+// queryWith is query with cursor c: with one cursor each, goroutines may
+// query one index at once (the index is only read).
+func (g *segIndex) queryWith(c *segCursor, a, b Point, pad float64, fn func(id int)) {
+	c.cur++
+	if c.cur == 0 { // wrapped: clear the stamps
+		clear(c.stamp)
+		c.cur = 1
+	}
+	g.visit(a, b, pad, func(cell int) {
+		for _, id := range g.cells[cell] {
+			if c.stamp[id] != c.cur {
+				c.stamp[id] = c.cur
 				fn(int(id))
 			}
 		}

@@ -1,11 +1,10 @@
 package framing
 
 import (
-	"cmp"
 	"fmt"
 	"math"
 	"slices"
-	"sort"
+	"strconv"
 
 	"framecheck/dxfimport"
 )
@@ -59,6 +58,9 @@ type grouper struct {
 	opt  Options
 	plan *Plan
 
+	workers  int // goroutines for the parallel parts (parallel.go)
+	minChunk int // fewest items a goroutine is given
+
 	joists     []segItem
 	sups       []segItem
 	blocking   []segItem
@@ -76,19 +78,19 @@ type grouper struct {
 	jIdx       *segIndex       // grid over the drawn joist items, built on first use
 
 	// per member, parallel to plan.Members
-	grp    []int
-	a0, a1 []float64 // extent along the group direction
-	bdirs  [][]Point // per bearing: unit direction of its support line (runs compare them)
-	lo, hi []int     // neighbour at smaller / larger across offset, -1 when none
-	groups []dirGroup
+	grp      []int
+	a0, a1   []float64  // extent along the group direction
+	bdirs    [][]Point  // per bearing: unit direction of its support line (runs compare them)
+	lo, hi   []int      // neighbour at smaller / larger across offset, -1 when none
+	byAcross []int      // members by group, offset across, index (makeMembers)
+	ends     [][2]Point // Start and End, packed close for passes over every member
+	groups   []dirGroup
 
 	supIdx *segIndex
 	memIdx *segIndex
 	lblIdx *segIndex
 
-	direct, outer []hit  // scratch for bearingsFrom
-	inGroup       []bool // per support line: inside a group of three or more, listed on the group's middle
-	carried       []hit  // flush beams framing into the current member
+	inGroup []bool // per support line: inside a group of three or more, listed on the group's middle
 
 	units  string  // the drawing's units ("mm"), for points in messages
 	toInch float64 // drawing units to inches
@@ -116,28 +118,50 @@ type dirGroup struct {
 // Group turns an imported drawing into members. It never fails: problems
 // are in Plan.Issues and on the members (Error, Messages).
 func Group(d *dxfimport.Drawing, opt Options) *Plan {
-	g := &grouper{opt: opt, plan: &Plan{Ignored: map[string]int{}}, genFrom: -1}
+	return groupWith(d, opt, defaultWorkers(), defaultMinChunk)
+}
+
+// groupWith is Group with its parallel parts on at most workers
+// goroutines, each given at least minChunk items (parallel.go).
+func groupWith(d *dxfimport.Drawing, opt Options, workers, minChunk int) *Plan {
+	g := newGrouper(opt, workers, minChunk)
 	if d == nil {
 		return g.plan
 	}
 	g.units, g.toInch = d.Units, d.ToInch
 	g.classify(d)
-	g.outlines()
-	g.brokenOutlines()
-	g.joistBlocking()
-	g.bays()
-	g.makeMembers()
-	g.findBearings()
-	g.neighbours()
-	g.makeRuns()
-	g.assignZones()
-	g.claimBeamCallouts()
-	g.assignLumber()
-	g.finishOutlines()
-	g.drawnBlocking()
-	g.existingBlocking()
-	g.loadPath()
+	for _, s := range groupSteps {
+		s.run(g)
+	}
 	return g.plan
+}
+
+// groupSteps are the steps of Group after classify, in order; each reads
+// what the ones before it left in the grouper. They are named so that
+// the benchmarks can time them one by one.
+var groupSteps = []struct {
+	name string
+	run  func(*grouper)
+}{
+	{"outlines", (*grouper).outlines},
+	{"brokenOutlines", (*grouper).brokenOutlines},
+	{"joistBlocking", (*grouper).joistBlocking},
+	{"bays", (*grouper).bays},
+	{"makeMembers", (*grouper).makeMembers},
+	{"findBearings", (*grouper).findBearings},
+	{"neighbours", (*grouper).neighbours},
+	{"makeRuns", (*grouper).makeRuns},
+	{"assignZones", (*grouper).assignZones},
+	{"claimBeamCallouts", (*grouper).claimBeamCallouts},
+	{"assignLumber", (*grouper).assignLumber},
+	{"finishOutlines", (*grouper).finishOutlines},
+	{"drawnBlocking", (*grouper).drawnBlocking},
+	{"existingBlocking", (*grouper).existingBlocking},
+	{"loadPath", (*grouper).loadPath},
+}
+
+func newGrouper(opt Options, workers, minChunk int) *grouper {
+	return &grouper{opt: opt, plan: &Plan{Ignored: map[string]int{}}, genFrom: -1, workers: workers, minChunk: minChunk}
 }
 
 // drawingPoint formats a point (inches inside framing) in the drawing's
@@ -157,16 +181,37 @@ func (g *grouper) warn(pos dxfimport.Pos, code string, format string, args ...an
 // classify sorts the entities by the role of their layer.
 func (g *grouper) classify(d *dxfimport.Drawing) {
 	roles := map[string][2]int{}
-	g.joists = make([]segItem, 0, len(d.Entities))
+	var lastLayer string
+	var last [2]int
+	have := false
+	roleOf := func(layer string) (role, int) {
+		if !have || layer != lastLayer {
+			rs, ok := roles[layer]
+			if !ok {
+				r, spec := g.opt.layerRole(layer)
+				rs = [2]int{int(r), spec}
+				roles[layer] = rs
+			}
+			lastLayer, last, have = layer, rs, true
+		}
+		return role(last[0]), last[1]
+	}
+	// room for the joists and support lines, counted first: growing
+	// lists of a hundred thousand would copy them over and over
+	nj, ns := 0, 0
+	for i := range d.Entities {
+		switch r, _ := roleOf(d.Entities[i].Pos.Layer); r {
+		case roleJoist:
+			nj++
+		case roleSupport:
+			ns += max(1, len(d.Entities[i].Points))
+		}
+	}
+	g.joists = make([]segItem, 0, nj)
+	g.sups = make([]segItem, 0, ns)
 	for _, e := range d.Entities {
 		layer := e.Pos.Layer
-		rs, ok := roles[layer]
-		if !ok {
-			r, spec := g.opt.layerRole(layer)
-			rs = [2]int{int(r), spec}
-			roles[layer] = rs
-		}
-		r, spec := role(rs[0]), rs[1]
+		r, spec := roleOf(layer)
 		if r != roleNone && !finitePoints(e.Points) {
 			// A joist left out is a joist not checked: an error, so that
 			// the run does not report a clean plan.
@@ -374,29 +419,36 @@ func (g *grouper) addZone(e dxfimport.Entity) bool {
 // duplicates and numbers the rest by midpoint (y, then x).
 func (g *grouper) makeMembers() {
 	js := g.joists
-	grpOf, groups := directionGroups(js, g.opt.AngleTolDeg)
+	grpOf, groups := directionGroups(js, g.opt.AngleTolDeg, g.split(len(js)))
 	g.groups = groups
 	for i := range js {
 		if dot(sub(js[i].b, js[i].a), groups[grpOf[i]].u) < 0 {
 			js[i].a, js[i].b = js[i].b, js[i].a
 		}
 	}
-	keep := g.dropDuplicates(js, grpOf)
+	keep, byAcross := g.dropDuplicates(js, grpOf)
 
-	order := make([]int, 0, len(js))
+	// by midpoint rounded to 0.001 in, y then x, then drawing order;
+	// rounded values order as the whole thousandths they are rounded to
+	// (coordinates are within maxCoordIn: at most 10^12 thousandths,
+	// exact in a float64, and a thousandth apart is far more than one
+	// rounding step), which are sorted as integers
+	kept := make([]int, 0, len(js))
+	yk, xk := make([]uint64, 0, len(js)), make([]uint64, 0, len(js))
+	milli := func(v float64) uint64 { return intKey(int64(math.Round(v * 1000))) }
 	for i := range js {
 		if keep[i] {
-			order = append(order, i)
+			m := mid(js[i].a, js[i].b)
+			kept = append(kept, i)
+			yk, xk = append(yk, milli(m.Y)), append(xk, milli(m.X))
 		}
 	}
-	rnd := func(v float64) float64 { return math.Round(v*1000) / 1000 }
-	sort.SliceStable(order, func(x, y int) bool {
-		ma, mb := mid(js[order[x]].a, js[order[x]].b), mid(js[order[y]].a, js[order[y]].b)
-		if ya, yb := rnd(ma.Y), rnd(mb.Y); ya != yb {
-			return ya < yb
-		}
-		return rnd(ma.X) < rnd(mb.X)
-	})
+	order := orderByKeys(len(kept), yk, xk)
+	memberOf := make([]int32, len(js))
+	for k, x := range order {
+		order[k] = kept[x]
+		memberOf[kept[x]] = int32(k)
+	}
 	n := len(order)
 	p := g.plan
 	p.Members = make([]Member, n)
@@ -406,6 +458,7 @@ func (g *grouper) makeMembers() {
 	g.a0 = make([]float64, n)
 	g.a1 = make([]float64, n)
 	g.bdirs = make([][]Point, n)
+	g.ends = make([][2]Point, n)
 	if g.jol != nil {
 		g.memOl = make([]int32, n)
 	}
@@ -415,57 +468,131 @@ func (g *grouper) makeMembers() {
 			g.segMem[i] = -1
 		}
 	}
-	for k, i := range order {
-		j := js[i]
-		gr := groups[grpOf[i]]
-		if g.memOl != nil {
-			g.memOl[k] = g.jol[i]
+	// Each goroutine reads the joists and their groups and writes the
+	// members of its range of k (and segMem of their joists: order is a
+	// permutation, so no two members write one joist's).
+	parallel(g.split(n), func(_ int, sp span) {
+		ids, at := memberIDs(sp)
+		for k := sp.lo; k < sp.hi; k++ {
+			i := order[k]
+			j := &js[i]
+			gr := groups[grpOf[i]]
+			if g.memOl != nil {
+				g.memOl[k] = g.jol[i]
+			}
+			if g.segMem != nil {
+				g.segMem[i] = int32(k)
+			}
+			m := &p.Members[k] // zero: set field by field rather than copy a whole Member in
+			m.ID, m.Pos, m.Layer = ids[at[k-sp.lo]:at[k-sp.lo+1]], j.pos, j.pos.Layer
+			m.Start, m.End, m.LengthIn = j.a, j.b, dist(j.a, j.b)
+			m.Generated = g.genFrom >= 0 && i >= g.genFrom
+			g.ends[k] = [2]Point{j.a, j.b}
+			p.dirs[k] = unit(sub(j.b, j.a))
+			p.across[k] = dot(mid(j.a, j.b), gr.n)
+			g.grp[k] = grpOf[i]
+			g.a0[k], g.a1[k] = dot(j.a, gr.u), dot(j.b, gr.u)
 		}
-		if g.segMem != nil {
-			g.segMem[i] = int32(k)
-		}
-		p.Members[k] = Member{
-			ID: fmt.Sprintf("M%d", k+1), Pos: j.pos, Layer: j.pos.Layer,
-			Start: j.a, End: j.b, LengthIn: dist(j.a, j.b),
-			Generated: g.genFrom >= 0 && i >= g.genFrom,
-		}
-		p.dirs[k] = unit(sub(j.b, j.a))
-		p.across[k] = dot(mid(j.a, j.b), gr.n)
-		g.grp[k] = grpOf[i]
-		g.a0[k], g.a1[k] = dot(j.a, gr.u), dot(j.b, gr.u)
+	})
+	g.byAcross = g.membersAcross(byAcross, keep, memberOf)
+}
+
+// memberIDs returns the IDs of members sp.lo..sp.hi-1 ("M1", "M2", ...)
+// written one after another in one string, and where each starts (the
+// last entry is the end): one allocation for the range, not one an ID.
+func memberIDs(sp span) (string, []int) {
+	buf := make([]byte, 0, 8*(sp.hi-sp.lo))
+	at := make([]int, 0, sp.hi-sp.lo+1)
+	for k := sp.lo; k < sp.hi; k++ {
+		at = append(at, len(buf))
+		buf = append(buf, 'M')
+		buf = strconv.AppendInt(buf, int64(k+1), 10)
 	}
+	return string(buf), append(at, len(buf))
+}
+
+// membersAcross returns the members in the order neighbours wants them:
+// by direction group, offset across, then index. byAcross is the joists
+// in that order by their own index (dropDuplicates): a member's offset
+// is its joist's, computed alike, so only members at one offset need
+// sorting again, by member index.
+func (g *grouper) membersAcross(byAcross []int, keep []bool, memberOf []int32) []int {
+	p := g.plan
+	out := make([]int, 0, len(p.Members))
+	for _, i := range byAcross {
+		if keep[i] {
+			out = append(out, int(memberOf[i]))
+		}
+	}
+	for x := 0; x < len(out); {
+		y := x + 1
+		for y < len(out) && g.grp[out[y]] == g.grp[out[x]] && p.across[out[y]] == p.across[out[x]] {
+			y++
+		}
+		if y-x > 1 {
+			slices.Sort(out[x:y])
+		}
+		x = y
+	}
+	return out
 }
 
 // directionGroups clusters joists whose directions (mod 180 degrees) chain
 // within tolDeg, and returns each joist's group and the groups.
-func directionGroups(js []segItem, tolDeg float64) ([]int, []dirGroup) {
+//
+// The angles and their cosines and sines are worked out on the spans
+// (nil: one) in parallel, each goroutine writing its own joists' entries;
+// the sums that give each group's direction are added up in joist order
+// after, so that they come out the same to the last bit.
+func directionGroups(js []segItem, tolDeg float64, spans []span) ([]int, []dirGroup) {
 	n := len(js)
-	ang := make([]float64, n)
-	idx := make([]int, n)
-	for i, j := range js {
-		d := sub(j.b, j.a)
-		a := math.Atan2(d.Y, d.X) * 180 / math.Pi
-		a = math.Mod(a+360, 180)
-		if a >= 180-1e-9 {
-			a = 0
-		}
-		ang[i], idx[i] = a, i
+	if spans == nil {
+		spans = []span{{0, n}}
 	}
-	slices.SortFunc(idx, func(x, y int) int { return cmp.Compare(ang[x], ang[y]) })
+	type angle struct {
+		deg float64
+		i   int
+	}
+	ang := make([]angle, n)
+	cs := make([][2]float64, n) // cosine and sine of the doubled angle
+	parallel(spans, func(_ int, sp span) {
+		for i := sp.lo; i < sp.hi; i++ {
+			j := &js[i]
+			d := sub(j.b, j.a)
+			a := math.Atan2(d.Y, d.X) * 180 / math.Pi
+			a = math.Mod(a+360, 180)
+			if a >= 180-1e-9 {
+				a = 0
+			}
+			r := 2 * a * math.Pi / 180
+			ang[i] = angle{a, i}
+			cs[i] = [2]float64{math.Cos(r), math.Sin(r)}
+		}
+	})
+	// by angle (equal angles fall in one group whatever their order: the
+	// index only makes the order definite)
+	keys := make([]uint64, n)
+	for i := range ang {
+		keys[i] = floatKey(ang[i].deg)
+	}
+	byAng := make([]angle, n)
+	for x, i := range orderByKeys(n, keys) {
+		byAng[x] = ang[i]
+	}
 	grp := make([]int, n)
 	ng := 0
-	for k, i := range idx {
-		if k > 0 && ang[i]-ang[idx[k-1]] > tolDeg {
+	for k, x := range byAng {
+		if k > 0 && x.deg-byAng[k-1].deg > tolDeg {
 			ng++
 		}
-		grp[i] = ng
+		grp[x.i] = ng
 	}
 	if n > 0 {
 		ng++
 		// wrap: directions near 180 join those near 0
-		if ng > 1 && ang[idx[0]]+180-ang[idx[n-1]] <= tolDeg {
-			last := grp[idx[n-1]]
-			for _, i := range idx {
+		if ng > 1 && byAng[0].deg+180-byAng[n-1].deg <= tolDeg {
+			last := grp[byAng[n-1].i]
+			for i := range grp {
 				if grp[i] == last {
 					grp[i] = 0
 				}
@@ -476,9 +603,8 @@ func directionGroups(js []segItem, tolDeg float64) ([]int, []dirGroup) {
 	// mean direction per group on doubled angles (mod-180 safe)
 	sc := make([][2]float64, ng)
 	for i := range js {
-		r := 2 * ang[i] * math.Pi / 180
-		sc[grp[i]][0] += math.Cos(r)
-		sc[grp[i]][1] += math.Sin(r)
+		sc[grp[i]][0] += cs[i][0]
+		sc[grp[i]][1] += cs[i][1]
 	}
 	groups := make([]dirGroup, ng)
 	for k := range groups {
@@ -511,61 +637,64 @@ func directionGroups(js []segItem, tolDeg float64) ([]int, []dirGroup) {
 // Joists are taken in order of group, offset across and index; each one
 // kept drops the later ones that duplicate it, among the joists of its
 // window (the next ones less than minNeighbourGapIn across). A long window
-// (joists lined up bay after bay) is searched through a grid of cells
-// minNeighbourGapIn across by the snap tolerance along (a duplicate's
-// start is within the tolerance, so within one cell along), not joist by
-// joist.
-func (g *grouper) dropDuplicates(js []segItem, grpOf []int) []bool {
+// (joists lined up bay after bay) is searched through a band index, bands
+// minNeighbourGapIn across, sorted along (a duplicate's start is within
+// the tolerance along), not joist by joist.
+//
+// It returns which joists to keep, and all the joists by group, offset
+// across and index (membersAcross).
+func (g *grouper) dropDuplicates(js []segItem, grpOf []int) ([]bool, []int) {
 	tol := g.opt.SnapToleranceIn
 	keep := make([]bool, len(js))
 	type key struct {
-		i    int
-		c, a float64
+		grp, i int
+		c, a   float64
 	}
-	ks := make([]key, len(js))
+	unsorted := make([]key, len(js))
+	gk, ck := make([]uint64, len(js)), make([]uint64, len(js))
 	for i, j := range js {
 		gr := g.groups[grpOf[i]]
-		ks[i] = key{i, dot(mid(j.a, j.b), gr.n), dot(j.a, gr.u)}
+		unsorted[i] = key{grpOf[i], i, dot(mid(j.a, j.b), gr.n), dot(j.a, gr.u)}
+		gk[i], ck[i] = uint64(grpOf[i]), floatKey(unsorted[i].c)
 		keep[i] = true
 	}
-	slices.SortFunc(ks, func(x, y key) int {
-		if c := cmp.Compare(grpOf[x.i], grpOf[y.i]); c != 0 {
-			return c
-		}
-		if c := cmp.Compare(x.c, y.c); c != 0 {
-			return c
-		}
-		return cmp.Compare(x.i, y.i)
-	})
-	type cell struct {
-		grp  int
-		c, a int64
+	// by group, offset across, index
+	ks := make([]key, len(js))
+	for x, i := range orderByKeys(len(js), gk, ck) {
+		ks[x] = unsorted[i]
 	}
-	alongCell := math.Max(tol, 1)
-	cellOf := func(k key) cell {
-		return cell{grpOf[k.i], int64(math.Floor(k.c / minNeighbourGapIn)), int64(math.Floor(k.a / alongCell))}
-	}
-	var grid map[cell][]int // sorted positions, ascending; built when a window is long
-	buildGrid := func() {
-		grid = map[cell][]int{}
+	// Long windows are searched through a bandIndex over the positions
+	// (built on first need): across bands of minNeighbourGapIn, so that
+	// a window lies in a position's band and the next; along, a
+	// duplicate's start lies within the snap tolerance (searched with a
+	// margin for rounding: a candidate more is only compared).
+	reach := 2 * math.Max(tol, 1)
+	var bx *bandIndex
+	var keyAt []int32 // per position: its key in bx
+	buildIndex := func() {
+		bk := make([]bandKey, 0, len(ks))
 		for x, k := range ks {
 			if finiteKey(k.c, k.a) {
-				cl := cellOf(k)
-				grid[cl] = append(grid[cl], x)
+				bk = append(bk, bandKey{grp: int32(k.grp), a: k.a, c: k.c, id: int32(x)})
 			}
+		}
+		bx = newBandIndex(minNeighbourGapIn, bk)
+		keyAt = make([]int32, len(ks))
+		for z := range bx.keys {
+			keyAt[bx.keys[z].id] = int32(z)
 		}
 	}
 	// end is the first position past x's window (same group, less than
 	// minNeighbourGapIn across); windows of up to shortWindow joists are
 	// scanned as they are, longer ones (joists lined up bay after bay)
-	// through the grid.
+	// through the index.
 	const shortWindow = 32
 	end := 0
 	var cand []int
 	for x, kx := range ks {
 		i := kx.i
 		end = max(end, x+1)
-		for end < len(ks) && grpOf[ks[end].i] == grpOf[i] && ks[end].c-kx.c < minNeighbourGapIn {
+		for end < len(ks) && ks[end].grp == kx.grp && ks[end].c-kx.c < minNeighbourGapIn {
 			end++
 		}
 		if !keep[i] {
@@ -578,16 +707,16 @@ func (g *grouper) dropDuplicates(js []segItem, grpOf []int) []bool {
 				cand = append(cand, y)
 			}
 		case finiteKey(kx.c, kx.a):
-			if grid == nil {
-				buildGrid()
+			if bx == nil {
+				buildIndex()
 			}
-			cl := cellOf(kx)
-			for dc := int64(0); dc <= 1; dc++ {
-				for da := int64(-1); da <= 1; da++ {
-					for _, y := range grid[cell{cl.grp, cl.c + dc, cl.a + da}] {
-						if y > x && y < end {
-							cand = append(cand, y)
-						}
+			for _, r := range bx.nearRuns(int(keyAt[x])) {
+				if r < 0 {
+					continue
+				}
+				for z, e := bx.from(r, kx.a-reach), int(bx.runs[r+1]); z < e && bx.keys[z].a <= kx.a+reach; z++ {
+					if y := int(bx.keys[z].id); y > x && y < end {
+						cand = append(cand, y)
 					}
 				}
 			}
@@ -595,6 +724,9 @@ func (g *grouper) dropDuplicates(js []segItem, grpOf []int) []bool {
 		}
 		for _, y := range cand {
 			j := ks[y].i
+			if math.Abs(ks[y].a-kx.a) > reach {
+				continue // starts too far apart along (a cheap look before the distances)
+			}
 			if keep[j] && dist(js[i].a, js[j].a) <= tol && dist(js[i].b, js[j].b) <= tol {
 				keep[j] = false
 				g.warn(js[j].pos, CodeDuplicateJoist, "joist drawn twice: %s duplicates %s; kept once",
@@ -602,7 +734,11 @@ func (g *grouper) dropDuplicates(js []segItem, grpOf []int) []bool {
 			}
 		}
 	}
-	return keep
+	byAcross := make([]int, len(ks))
+	for x := range ks {
+		byAcross[x] = ks[x].i
+	}
+	return keep, byAcross
 }
 
 // finiteKey reports whether both numbers are finite, so that they have a

@@ -43,11 +43,7 @@ func (g *grouper) joistBlocking() {
 	if len(cand) == 0 || len(js) < 3 {
 		return
 	}
-	lo, hi, typ := bounds(js)
-	idx := newSegIndex(lo, hi, len(js), typ)
-	for i, s := range js {
-		idx.insert(i, s.a, s.b, 0)
-	}
+	idx := indexSegs(js)
 	tol := g.opt.SnapToleranceIn
 	sin45 := math.Sqrt2 / 2
 	parSin := math.Sin(g.opt.AngleTolDeg*math.Pi/180) + 1e-12

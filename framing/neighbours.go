@@ -6,6 +6,9 @@ import (
 	"math"
 	"slices"
 	"sort"
+	"strconv"
+
+	"framecheck/dxfimport"
 )
 
 // maxNeighbourGapIn: a parallel joist farther away than this is not a
@@ -41,54 +44,62 @@ const minOverlapFrac = 0.5
 func (g *grouper) neighbours() {
 	p := g.plan
 	n := len(p.Members)
-	order := make([]int, n)
-	for i := range order {
-		order[i] = i
-	}
-	slices.SortFunc(order, func(a, b int) int {
-		if c := cmp.Compare(g.grp[a], g.grp[b]); c != 0 {
-			return c
-		}
-		if c := cmp.Compare(p.across[a], p.across[b]); c != 0 {
-			return c
-		}
-		return cmp.Compare(a, b)
-	})
+	order := g.byAcross // by group, offset across and index
 	g.lo, g.hi = make([]int, n), make([]int, n)
 	lines, lineOf := g.lines(order)
-	for x, k := range order {
-		g.lo[k], g.hi[k] = -1, -1
-		for li := lineOf[x] - 1; li >= 0; li-- {
-			j0 := lines[li].members[0]
-			gap := p.across[k] - p.across[j0]
-			if g.grp[j0] != g.grp[k] || gap > maxNeighbourGapIn {
-				break
-			}
-			if gap < minNeighbourGapIn {
-				continue
-			}
-			if j := g.overlapping(&lines[li], k, true); j >= 0 {
-				g.lo[k] = j
-				break
-			}
+	// Each goroutine takes a range of the sorted order, reads the lines
+	// and the members' offsets and extents, and writes lo and hi of its
+	// own members only (order is a permutation).
+	parallel(g.split(n), func(_ int, sp span) {
+		for x := sp.lo; x < sp.hi; x++ {
+			g.nearestBoth(order[x], lines, lineOf[x])
 		}
-		for li := lineOf[x] + 1; li < len(lines); li++ {
-			j0 := lines[li].members[0]
-			gap := p.across[j0] - p.across[k]
-			if g.grp[j0] != g.grp[k] || gap > maxNeighbourGapIn {
-				break
-			}
-			if gap < minNeighbourGapIn {
-				continue
-			}
-			if j := g.overlapping(&lines[li], k, false); j >= 0 {
-				g.hi[k] = j
-				break
-			}
+	})
+	// Each goroutine writes the tributary widths of its own range of
+	// members (reading lo, hi and offsets, all set above) and keeps its
+	// warnings apart, appended after in member order.
+	spans := g.split(n)
+	issues := make(issueLists, len(spans))
+	parallel(spans, func(w int, sp span) {
+		for k := sp.lo; k < sp.hi; k++ {
+			g.setTrib(&issues[w], k)
+		}
+	})
+	issues.appendTo(&p.Issues)
+}
+
+// nearestBoth sets lo[k] and hi[k], the neighbours of member k (in line
+// lk of lines) below and above it.
+func (g *grouper) nearestBoth(k int, lines []line, lk int) {
+	p := g.plan
+	g.lo[k], g.hi[k] = -1, -1
+	for li := lk - 1; li >= 0; li-- {
+		j0 := lines[li].members[0]
+		gap := p.across[k] - p.across[j0]
+		if g.grp[j0] != g.grp[k] || gap > maxNeighbourGapIn {
+			break
+		}
+		if gap < minNeighbourGapIn {
+			continue
+		}
+		if j := g.overlapping(&lines[li], k, true); j >= 0 {
+			g.lo[k] = j
+			break
 		}
 	}
-	for k := range p.Members {
-		g.setTrib(k)
+	for li := lk + 1; li < len(lines); li++ {
+		j0 := lines[li].members[0]
+		gap := p.across[j0] - p.across[k]
+		if g.grp[j0] != g.grp[k] || gap > maxNeighbourGapIn {
+			break
+		}
+		if gap < minNeighbourGapIn {
+			continue
+		}
+		if j := g.overlapping(&lines[li], k, false); j >= 0 {
+			g.hi[k] = j
+			break
+		}
 	}
 }
 
@@ -97,6 +108,7 @@ func (g *grouper) neighbours() {
 // largest end (a1) of each prefix of that order.
 type line struct {
 	members []int
+	a0      []float64 // per member: its a0, for the binary search
 	maxA1   []float64
 }
 
@@ -121,10 +133,12 @@ func (g *grouper) lines(order []int) ([]line, []int) {
 				return cmp.Compare(a, b)
 			})
 			l.maxA1 = make([]float64, len(l.members))
+			l.a0 = make([]float64, len(l.members))
 			m := math.Inf(-1)
 			for i, k := range l.members {
 				m = math.Max(m, g.a1[k])
 				l.maxA1[i] = m
+				l.a0[i] = g.a0[k]
 			}
 		}
 		for z := x; z < y; z++ {
@@ -157,7 +171,7 @@ func (g *grouper) overlapping(l *line, k int, highest bool) int {
 		}
 		return -1
 	}
-	end := sort.Search(len(l.members), func(i int) bool { return g.a0[l.members[i]] >= g.a1[k] })
+	end, _ := slices.BinarySearch(l.a0, g.a1[k]) // the first starting at or after k's end
 	best := -1
 	for y := end - 1; y >= 0 && l.maxA1[y] > g.a0[k]; y-- {
 		j := l.members[y]
@@ -168,12 +182,15 @@ func (g *grouper) overlapping(l *line, k int, highest bool) int {
 	return best
 }
 
-func (g *grouper) setTrib(k int) {
+// setTrib sets member k's tributary widths, spacing and neighbours from
+// lo and hi; a member with no neighbour is warned about in iss.
+func (g *grouper) setTrib(iss *dxfimport.IssueList, k int) {
 	p := g.plan
 	m := &p.Members[k]
 	edge := g.opt.EdgeDistanceIn
 	loT, hiT := edge, edge
-	var gaps []float64
+	var gaps [2]float64
+	ng := 0
 	m.Neighbours = [2]int{g.lo[k], g.hi[k]}
 	m.NeighbourGapsIn = [2]float64{}
 	if j := g.lo[k]; j >= 0 {
@@ -185,12 +202,12 @@ func (g *grouper) setTrib(k int) {
 	if j := g.lo[k]; j >= 0 {
 		gap := p.across[k] - p.across[j]
 		loT = gap / 2
-		gaps = append(gaps, gap)
+		gaps[ng], ng = gap, ng+1
 	}
 	if j := g.hi[k]; j >= 0 {
 		gap := p.across[j] - p.across[k]
 		hiT = gap / 2
-		gaps = append(gaps, gap)
+		gaps[ng], ng = gap, ng+1
 	}
 	// the larger-across side is the member's left when the group normal
 	// is its left normal
@@ -200,7 +217,7 @@ func (g *grouper) setTrib(k int) {
 		m.TribLeftIn, m.TribRightIn = loT, hiT
 	}
 	m.TribIn = m.TribLeftIn + m.TribRightIn
-	switch len(gaps) {
+	switch ng {
 	case 2:
 		m.SpacingIn = (gaps[0] + gaps[1]) / 2
 	case 1:
@@ -209,7 +226,7 @@ func (g *grouper) setTrib(k int) {
 		msg := fmt.Sprintf("%s has no parallel neighbour within %.0f in: tributary width is the edge distance on both sides (%.2f in)",
 			m.ID, float64(maxNeighbourGapIn), m.TribIn)
 		m.Messages = append(m.Messages, msg)
-		g.warn(m.Pos, CodeNoNeighbour, "%s", msg)
+		iss.Add(m.Pos, CodeNoNeighbour, dxfimport.SevWarning, "%s", msg)
 	}
 }
 
@@ -220,30 +237,57 @@ func (g *grouper) setTrib(k int) {
 func (g *grouper) makeRuns() {
 	p := g.plan
 	n := len(p.Members)
+	// Which neighbours bear alike, in parallel: each goroutine reads the
+	// members' bearings and writes same[k] of its own range of k only.
+	same := make([]uint8, n) // bit 0: lo[k], bit 1: hi[k]
+	parallel(g.split(n), func(_ int, sp span) {
+		for k := sp.lo; k < sp.hi; k++ {
+			for b, j := range [2]int{g.lo[k], g.hi[k]} {
+				if j >= 0 && g.sameBearings(k, j) {
+					same[k] |= 1 << b
+				}
+			}
+		}
+	})
 	sets := newDisjointSets(n)
 	for k := 0; k < n; k++ {
-		for _, j := range []int{g.lo[k], g.hi[k]} {
-			if j >= 0 && g.sameBearings(k, j) {
+		for b, j := range [2]int{g.lo[k], g.hi[k]} {
+			if same[k]&(1<<b) != 0 {
 				sets.union(k, j)
 			}
 		}
 	}
-	byRoot := map[int]int{}
+	runOf := make([]int, n) // per root: its run
+	var size []int
 	for k := 0; k < n; k++ { // k ascending: runs numbered by first member
 		r := sets.find(k)
-		ri, ok := byRoot[r]
-		if !ok {
-			ri = len(p.Runs)
-			byRoot[r] = ri
-			p.Runs = append(p.Runs, Run{ID: fmt.Sprintf("R%d", ri+1)})
+		if r == k {
+			runOf[r] = len(size)
+			size = append(size, 0)
 		}
-		p.Runs[ri].Members = append(p.Runs[ri].Members, k)
+		ri := runOf[r]
+		size[ri]++
 		p.Members[k].Run = ri
 	}
-	for i := range p.Runs {
-		ms := p.Runs[i].Members
-		sort.SliceStable(ms, func(x, y int) bool { return p.across[ms[x]] < p.across[ms[y]] })
+	if len(size) > 0 {
+		p.Runs = make([]Run, len(size))
 	}
+	flat := make([]int, n)
+	for ri := range p.Runs {
+		p.Runs[ri] = Run{ID: "R" + strconv.Itoa(ri+1), Members: flat[:0:size[ri]]}
+		flat = flat[size[ri]:]
+	}
+	for k := 0; k < n; k++ {
+		r := &p.Runs[p.Members[k].Run]
+		r.Members = append(r.Members, k)
+	}
+	// each goroutine orders its own range of runs, reading the offsets
+	parallel(g.split(len(p.Runs)), func(_ int, sp span) {
+		for i := sp.lo; i < sp.hi; i++ {
+			ms := p.Runs[i].Members
+			sort.SliceStable(ms, func(x, y int) bool { return p.across[ms[x]] < p.across[ms[y]] })
+		}
+	})
 }
 
 func (g *grouper) sameBearings(k, j int) bool {
@@ -253,7 +297,7 @@ func (g *grouper) sameBearings(k, j int) bool {
 	}
 	tol := g.opt.SnapToleranceIn
 	for i := range mk.Bearings {
-		bk, bj := mk.Bearings[i], mj.Bearings[i]
+		bk, bj := &mk.Bearings[i], &mj.Bearings[i]
 		if bk.Kind != bj.Kind {
 			return false
 		}

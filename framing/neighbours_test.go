@@ -213,10 +213,10 @@ func TestDropDuplicatesMatchReference(t *testing.T) {
 		g := &grouper{opt: DefaultOptions(), plan: &Plan{Ignored: map[string]int{}}}
 		g.units, g.toInch = "in", 1
 		g.classify(&p.d)
-		grpOf, groups := directionGroups(g.joists, g.opt.AngleTolDeg)
+		grpOf, groups := directionGroups(g.joists, g.opt.AngleTolDeg, nil)
 		g.groups = groups
 		wantKeep, wantDropped := dropDuplicatesReference(g, g.joists, grpOf)
-		gotKeep := g.dropDuplicates(g.joists, grpOf)
+		gotKeep, _ := g.dropDuplicates(g.joists, grpOf)
 		var gotDropped []string
 		for _, is := range g.plan.Issues {
 			if is.Code == CodeDuplicateJoist {

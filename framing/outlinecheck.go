@@ -42,11 +42,7 @@ func (g *grouper) brokenOutlines() {
 		return
 	}
 	tol := g.opt.SnapToleranceIn
-	lo, hi, typ := bounds(raw)
-	idx := newSegIndex(lo, hi, len(raw), typ)
-	for i, s := range raw {
-		idx.insert(i, s.a, s.b, 0)
-	}
+	idx := indexSegs(raw)
 	done := map[int]bool{}
 	dropRaw := map[int]bool{}
 	type figure struct {

@@ -51,7 +51,7 @@ func (g *grouper) outlines() {
 	if n < 2 {
 		return
 	}
-	grpOf, groups := directionGroups(js, g.opt.AngleTolDeg)
+	grpOf, groups := directionGroups(js, g.opt.AngleTolDeg, g.split(len(js)))
 	type frame struct{ c, a0, a1 float64 }
 	fr := make([]frame, n)
 	keys := make([]bandKey, n)
@@ -67,33 +67,46 @@ func (g *grouper) outlines() {
 	}
 	maxGap := maxThickIn + thickTolIn
 	idx := newBandIndex(maxGap, keys)
+	// The pairs of sides are found on ranges of the index in parallel,
+	// each goroutine reading the index and frames and writing its own
+	// list; they are joined after. The sets do not depend on the order
+	// of the joins (a set's root is its smallest index).
+	spans := g.split(len(idx.keys))
+	pairs := make([][][2]int32, len(spans))
+	parallel(spans, func(w int, sp span) {
+		for x := sp.lo; x < sp.hi; x++ {
+			i := int(idx.keys[x].id)
+			fi := fr[i]
+			li := fi.a1 - fi.a0
+			// the shorter's midpoint lies inside the longer's extent when
+			// they overlap by half the shorter: the longer finds it
+			for _, r := range idx.nearRuns(x) {
+				if r < 0 {
+					continue
+				}
+				for y, end := idx.from(r, fi.a0), int(idx.runs[r+1]); y < end && idx.keys[y].a <= fi.a1; y++ {
+					j := int(idx.keys[y].id)
+					if j == i {
+						continue
+					}
+					fj := fr[j]
+					gap := math.Abs(fj.c - fi.c)
+					shorter := math.Min(li, fj.a1-fj.a0)
+					ov := math.Min(fi.a1, fj.a1) - math.Max(fi.a0, fj.a0)
+					if gap > maxGap || ov <= 0 || ov < 0.5*shorter || shorter < math.Max(minEdgeIn, 4*gap) {
+						continue
+					}
+					pairs[w] = append(pairs[w], [2]int32{int32(i), int32(j)})
+				}
+			}
+		}
+	})
 	sets := newDisjointSets(n)
 	paired := false
-	for x := range idx.keys {
-		i := int(idx.keys[x].id)
-		fi := fr[i]
-		li := fi.a1 - fi.a0
-		// the shorter's midpoint lies inside the longer's extent when they
-		// overlap by half the shorter: the longer finds it
-		for _, r := range idx.nearRuns(x) {
-			if r < 0 {
-				continue
-			}
-			for y, end := idx.from(r, fi.a0), int(idx.runs[r+1]); y < end && idx.keys[y].a <= fi.a1; y++ {
-				j := int(idx.keys[y].id)
-				if j == i {
-					continue
-				}
-				fj := fr[j]
-				gap := math.Abs(fj.c - fi.c)
-				shorter := math.Min(li, fj.a1-fj.a0)
-				ov := math.Min(fi.a1, fj.a1) - math.Max(fi.a0, fj.a0)
-				if gap > maxGap || ov <= 0 || ov < 0.5*shorter || shorter < math.Max(minEdgeIn, 4*gap) {
-					continue
-				}
-				if sets.union(i, j) {
-					paired = true
-				}
+	for _, ps := range pairs {
+		for _, pr := range ps {
+			if sets.union(int(pr[0]), int(pr[1])) {
+				paired = true
 			}
 		}
 	}

@@ -14,7 +14,9 @@ type supportRefs struct {
 }
 
 // pairRef returns a provisional Bearing.Support for a bearing on the
-// merged pair key: -2 - its id (resolveBearingSupports replaces it).
+// merged pair key that a beam bears on: -2 - its id (resolveRef turns
+// it into an index in Plan.Supports). Members' bearings name their pairs
+// otherwise (findBearings).
 func (g *grouper) pairRef(key [2]int) int {
 	r := &g.lp.refs
 	if r.pairID == nil {
@@ -91,20 +93,13 @@ func (g *grouper) resolveRef(ref int) int {
 	if id < 0 || id >= len(r.pairs) {
 		return -1
 	}
-	key := r.pairs[id]
-	if i, ok := r.pairOut[key]; ok {
+	return g.pairSupport(r.pairs[id])
+}
+
+// pairSupport returns the index in Plan.Supports of the merged pair key.
+func (g *grouper) pairSupport(key [2]int) int {
+	if i, ok := g.lp.refs.pairOut[key]; ok {
 		return i
 	}
 	return g.supportOf(key[0])
-}
-
-// resolveBearingSupports sets every member bearing's Support, once
-// Plan.Supports is built.
-func (g *grouper) resolveBearingSupports() {
-	for k := range g.plan.Members {
-		bs := g.plan.Members[k].Bearings
-		for i := range bs {
-			bs[i].Support = g.resolveRef(bs[i].Support)
-		}
-	}
 }

@@ -3,6 +3,7 @@ package framing
 import (
 	"fmt"
 	"math"
+	"slices"
 	"sort"
 	"strings"
 
@@ -69,9 +70,28 @@ func (g *grouper) assignZones() {
 		return
 	}
 	idx := newZoneIndex(zs)
-	for k := range p.Members {
-		g.memberZones(k, zs, idx)
-	}
+	// Each goroutine reads the zones and their grid (through a cursor of
+	// its own) and writes the zones, pieces, errors and messages of its
+	// own range of members; its issues are appended after, in member
+	// order.
+	spans := g.split(len(p.Members))
+	issues := make(issueLists, len(spans))
+	parallel(spans, func(w int, sp span) {
+		q := idx.newQuery()
+		var sc zoneScratch
+		for k := sp.lo; k < sp.hi; k++ {
+			g.memberZones(q, &sc, &issues[w], k, zs)
+		}
+	})
+	issues.appendTo(&p.Issues)
+}
+
+// zoneScratch is one goroutine's buffers for memberZones.
+type zoneScratch struct {
+	ts     []float64
+	pieces []ZonePiece
+	names  []string
+	slab   slab[string] // the members' Zones
 }
 
 // polyBox returns the bounding box of pts.
@@ -90,7 +110,24 @@ func polyBox(pts []Point) (lo, hi Point) {
 // from growing with members x zones.
 type zoneIndex struct {
 	grid *segIndex
+	own  *zoneQuery // candidates'
+}
+
+// zoneQuery is the state of one goroutine's lookups in a zoneIndex.
+type zoneQuery struct {
+	x    *zoneIndex
+	cur  *segCursor
 	cand []int
+}
+
+// newQuery returns a lookup for one goroutine: several may look up one
+// index at once, each with its own.
+func (x *zoneIndex) newQuery() *zoneQuery {
+	q := &zoneQuery{x: x}
+	if x.grid != nil {
+		q.cur = x.grid.newCursor()
+	}
+	return q
 }
 
 func newZoneIndex(zs []zoneGeom) *zoneIndex {
@@ -119,19 +156,28 @@ func newZoneIndex(zs []zoneGeom) *zoneIndex {
 // candidates returns, in increasing order, the zones whose bounding box
 // overlaps that of segment ab. The slice is reused by the next call.
 func (x *zoneIndex) candidates(zs []zoneGeom, a, b Point) []int {
-	x.cand = x.cand[:0]
-	if x.grid == nil {
-		return x.cand
+	if x.own == nil {
+		x.own = x.newQuery()
 	}
-	x.grid.query(a, b, 1, func(i int) {
+	return x.own.candidates(zs, a, b)
+}
+
+// candidates is zoneIndex.candidates through q. The slice is reused by
+// q's next call.
+func (q *zoneQuery) candidates(zs []zoneGeom, a, b Point) []int {
+	q.cand = q.cand[:0]
+	if q.x.grid == nil {
+		return q.cand
+	}
+	q.x.grid.queryWith(q.cur, a, b, 1, func(i int) {
 		z := &zs[i]
 		if math.Max(a.X, b.X) >= z.lo.X && math.Min(a.X, b.X) <= z.hi.X &&
 			math.Max(a.Y, b.Y) >= z.lo.Y && math.Min(a.Y, b.Y) <= z.hi.Y {
-			x.cand = append(x.cand, i)
+			q.cand = append(q.cand, i)
 		}
 	})
-	sort.Ints(x.cand)
-	return x.cand
+	sort.Ints(q.cand)
+	return q.cand
 }
 
 // memberZones cuts member k where it crosses zone edges and takes the
@@ -139,12 +185,14 @@ func (x *zoneIndex) candidates(zs []zoneGeom, a, b Point) []int {
 // MaxWallThicknessIn (an end running into the wall on a zone edge) joins
 // the piece beside it. Pieces outside every outline belong to
 // DefaultZone. A member in several zones keeps its pieces (ZonePieces):
-// each zone loads it where it acts.
-func (g *grouper) memberZones(k int, zs []zoneGeom, idx *zoneIndex) {
+// each zone loads it where it acts. It looks zones up through q, works in
+// sc and adds its issues to iss.
+func (g *grouper) memberZones(q *zoneQuery, sc *zoneScratch, iss *dxfimport.IssueList, k int, zs []zoneGeom) {
 	m := &g.plan.Members[k]
 	a, b := m.Start, m.End
-	cand := idx.candidates(zs, a, b)
-	ts := []float64{0, 1}
+	cand := q.candidates(zs, a, b)
+	ts := append(sc.ts[:0], 0, 1)
+	defer func() { sc.ts = ts }() // keep the buffer
 	d := sub(b, a)
 	for _, i := range cand {
 		pts := zs[i].Points
@@ -171,7 +219,8 @@ func (g *grouper) memberZones(k int, zs []zoneGeom, idx *zoneIndex) {
 	}
 	// Stretches between crossings, each in its innermost zone ("" outside
 	// every outline), neighbours in the same zone merged.
-	var pieces []ZonePiece
+	pieces := sc.pieces[:0]
+	defer func() { sc.pieces = pieces[:0] }()
 	for i := 1; i < len(ts); i++ {
 		if ts[i]-ts[i-1] <= 0 {
 			continue
@@ -195,7 +244,7 @@ func (g *grouper) memberZones(k int, zs []zoneGeom, idx *zoneIndex) {
 		pieces = pieces[:n-1]
 	}
 	if len(pieces) == 0 {
-		pieces = []ZonePiece{{FromIn: 0, ToIn: m.LengthIn, Zone: innermost(mid(a, b))}}
+		pieces = append(pieces, ZonePiece{FromIn: 0, ToIn: m.LengthIn, Zone: innermost(mid(a, b))})
 	}
 	outside := false
 	for i := range pieces {
@@ -215,31 +264,30 @@ func (g *grouper) memberZones(k int, zs []zoneGeom, idx *zoneIndex) {
 		}
 	}
 	pieces = merged
-	seen := map[string]bool{}
-	var out []string
+	out := sc.names[:0]
 	for _, p := range pieces {
-		if p.Zone != "" && !seen[p.Zone] {
-			seen[p.Zone] = true
+		if p.Zone != "" && !slices.Contains(out, p.Zone) {
 			out = append(out, p.Zone)
 		}
 	}
 	sort.Strings(out)
-	m.Zones = out
+	m.Zones = sc.slab.take(out)
+	sc.names = out
 	if outside && g.opt.DefaultZone == "" {
 		m.Error = true
 		msg := fmt.Sprintf("%s lies (partly) outside every load-zone outline and there is no default zone", m.ID)
 		m.Messages = append(m.Messages, msg)
-		g.plan.Issues.Add(m.Pos, CodeNoZone, dxfimport.SevError, "%s", msg)
+		iss.Add(m.Pos, CodeNoZone, dxfimport.SevError, "%s", msg)
 	}
 	if len(pieces) > 1 {
-		m.ZonePieces = pieces
+		m.ZonePieces = slices.Clone(pieces)
 		parts := make([]string, len(pieces))
 		for i, p := range pieces {
 			parts[i] = fmt.Sprintf("%s from %.1f to %.1f in (%.1f in)", p.Zone, p.FromIn, p.ToIn, p.ToIn-p.FromIn)
 		}
 		msg := fmt.Sprintf("%s crosses zone edges: each zone loads it where it acts: %s", m.ID, strings.Join(parts, ", "))
 		m.Messages = append(m.Messages, msg)
-		g.plan.Issues.Add(m.Pos, CodeZonePieces, dxfimport.SevInfo, "%s", msg)
+		iss.Add(m.Pos, CodeZonePieces, dxfimport.SevInfo, "%s", msg)
 	}
 }
 
