@@ -266,6 +266,7 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	// From here the writers read res, the plan's supports and zones and
 	// the drawing's bytes: drop the members as grouped and checked.
 	o.releaseForWriters()
+	defer writersGC()()
 	// No NaN or Inf reaches any output, the summary or the exit status: a
 	// member holding one is in error, saying which value (a safety net;
 	// the checks should never produce one).

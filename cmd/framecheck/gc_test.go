@@ -43,3 +43,27 @@ func TestScaleMemoryLimit(t *testing.T) {
 		t.Errorf("GOMEMLIMIT set: limit changed to %d", got)
 	}
 }
+
+// TestWritersGC: the writers' percentage is set only when framecheck chose
+// the collector's settings, and put back afterwards (common practice, no
+// source: the numbers are ours).
+func TestWritersGC(t *testing.T) {
+	defer func(v bool) { gcTuned = v }(gcTuned)
+	old := debug.SetGCPercent(gcPercent)
+	defer debug.SetGCPercent(old)
+	gcTuned = true
+	restore := writersGC()
+	if got := debug.SetGCPercent(writersGCPercent); got != writersGCPercent {
+		t.Errorf("during the writers: GOGC %d, want %d", got, writersGCPercent)
+	}
+	restore()
+	if got := debug.SetGCPercent(gcPercent); got != gcPercent {
+		t.Errorf("after the writers: GOGC %d, want %d", got, gcPercent)
+	}
+	gcTuned = false
+	debug.SetGCPercent(123)
+	writersGC()()
+	if got := debug.SetGCPercent(gcPercent); got != 123 {
+		t.Errorf("GOGC set by the user: changed to %d", got)
+	}
+}
