@@ -74,6 +74,67 @@ func TestZonesWhereTheyAct_NetUplift(t *testing.T) {
 	expectNear(t, "M top edge, D+Lr", traceValue(t, top, "M"), rg*rg/(2*g1), 0, 1e-9, "statics, written out (uniform loads, shear zero at x = R/w)")
 }
 
+// TestZonesWhereTheyAct_ReviewedPlan: the plan of the review that found
+// the envelope unsafe, reproduced: a DF-L No.2 2x12 roof joist at 24 in,
+// 192 in span, one blocking row drawn at mid-span, an edge zone (D 8, W
+// up 60 psf) over its first 170 in and a heavier zone (D 25, W up 50)
+// over the last 22 in. The review reported 0.722 with the envelope
+// (D 25 with W up 60 everywhere), 1.059 with each zone where it acts, and
+// a hold-down of 336 lb under the envelope against 496 lb. By hand, 0.6D
+// + 0.6W (ASCE 7-16 2.4.1, combination 7):
+//
+//	zones:    w_A = (36 - 4.8) 24/144 = 5.2 lb/in, w_B = (30 - 15) 24/144 = 2.5 lb/in
+//	          R_left = [5.2(170)(107) + 2.5(22)(11)] / 192 = 495.8 lb
+//	          M = R_left^2 / (2 w_A) = 23,636 lb-in
+//	envelope: w = (36 - 15) 24/144 = 3.5 lb/in, R = w L / 2 = 336 lb, M = w L^2 / 8 = 16,128 lb-in
+//	S = 1.5 (11.25)^2 / 6 = 31.64 in^3 (NDS 2018 Supplement Table 1B)
+//	Fb* = 900 (1.6)(1.0)(1.15) = 1656 psi (Table 4A; CD 1.6, CF 1.0 for a 2x12, Cr 1.15)
+//	lu = 96 in, lu/d = 8.53: le = 1.63 lu + 3d = 190.2 in (Table 3.3.3)
+//	RB^2 = le d / b^2 = 951.2; FbE = 1.20 Emin / RB^2 = 1.20 (580,000) / 951.2 = 731.7 psi (3.3.3.8)
+//	CL = (1 + a)/1.9 - sqrt(((1 + a)/1.9)^2 - a/0.95), a = FbE / Fb* = 0.4418: CL = 0.4260 (Eq. 3.3-6)
+//	ratio = (M / S) / (Fb* CL): zones 747.0 / 705.5 = 1.059; envelope 509.7 / 705.5 = 0.722
+func TestZonesWhereTheyAct_ReviewedPlan(t *testing.T) {
+	const src = "hand calculation in the comment (ASCE 7-16 2.4.1; NDS 2018 3.3.3, Table 3.3.3, Supplement Tables 1B and 4A)"
+	L := 192.0
+	m := Member{ID: "R1", Size: "2x12", Species: "Douglas Fir-Larch", Grade: "No.2", LengthIn: L,
+		Bearings: []Bearing{{AtIn: 0, LengthIn: 3.5}, {AtIn: L, LengthIn: 3.5}}, SpacingIn: 24, TribIn: 24, Use: "roof",
+		LiveLimit: 240, TotalLimit: 180, Repetitive: true, BlockingAtIn: []float64{96}}
+	zones := m
+	zones.LoadPieces = []LoadPiece{
+		{FromIn: 0, ToIn: 170, Zone: "EDGE", Loads: AreaLoads{DeadPsf: 8, RoofLivePsf: 20, WindUpPsf: 60}},
+		{FromIn: 170, ToIn: 192, Zone: "FIELD", Loads: AreaLoads{DeadPsf: 25, RoofLivePsf: 20, WindUpPsf: 50}},
+	}
+	envelope := m
+	envelope.Loads = AreaLoads{DeadPsf: 25, RoofLivePsf: 20, WindUpPsf: 60}
+	s := DefaultSettings()
+	rz := CheckWithRowsAt(zones, s, nil) // the drawn row only
+	re := CheckWithRowsAt(envelope, s, nil)
+
+	wA, wB := (0.6*60-0.6*8)*24/144, (0.6*50-0.6*25)*24/144
+	rl := (wA*170*(L-85) + wB*22*(L-181)) / L
+	expectNear(t, "hold-down, zones", rl, 495.8, 0.05, 0, src)
+	expectNear(t, "hold-down, zones (engine)", rz.Reactions[0].UpLb, rl, 1e-6, 1e-9, src)
+	expectNear(t, "hold-down, envelope (engine)", re.Reactions[0].UpLb, 336, 1e-6, 1e-9, src)
+
+	S := 1.5 * 11.25 * 11.25 / 6
+	fbStar := 900 * 1.6 * 1.0 * 1.15
+	le := 1.63*96 + 3*11.25
+	fbE := 1.20 * 580000 / (le * 11.25 / (1.5 * 1.5))
+	a := fbE / fbStar
+	cl := (1+a)/1.9 - math.Sqrt(math.Pow((1+a)/1.9, 2)-a/0.95)
+	expectNear(t, "CL", cl, 0.4260, 0.0005, 0, src)
+	bz, be := find(t, rz, KindBendingBottom), find(t, re, KindBendingBottom)
+	mz := rl * rl / (2 * wA)
+	expectNear(t, "M, zones", traceValue(t, bz, "M"), mz, 0, 1e-9, src)
+	expectNear(t, "M, envelope", traceValue(t, be, "M"), 3.5*L*L/8, 0, 1e-9, src)
+	expectNear(t, "ratio, zones", bz.Ratio, (mz/S)/(fbStar*cl), 0, 1e-4, src)
+	expectNear(t, "ratio, envelope", be.Ratio, (3.5*L*L/8/S)/(fbStar*cl), 0, 1e-4, src)
+	// The review's figures, to the digits it gave them.
+	expectNear(t, "ratio, zones (review)", bz.Ratio, 1.059, 0.0005, 0, "the review's figure")
+	expectNear(t, "ratio, envelope (review)", be.Ratio, 0.722, 0.0005, 0, "the review's figure")
+	expectNear(t, "hold-down (review)", rz.Reactions[0].UpLb, 496, 0.5, 0, "the review's figure")
+}
+
 // TestShearAtD_NotUnderUplift: NDS 2018 3.4.3.1(a) lets loads within d of
 // the bearing face be left out of V only where the member bears on the
 // support on one face and the load acts on the opposite face; under net
