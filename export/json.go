@@ -364,25 +364,7 @@ func encodeResults(w *bufio.Writer, r *Results, lay jsonLayout) error {
 	}
 	listBytes := func(name string, n int, enc func(i int) ([]byte, error)) error {
 		key(name)
-		if n == 0 {
-			w.WriteString("[]")
-			return nil
-		}
-		w.WriteString("[\n")
-		for i := 0; i < n; i++ {
-			b, err := enc(i)
-			if err != nil {
-				return fmt.Errorf("%s[%d]: %w", name, i, err)
-			}
-			w.WriteString("  ")
-			w.Write(b)
-			if i < n-1 {
-				w.WriteByte(',')
-			}
-			w.WriteByte('\n')
-		}
-		w.WriteString(" ]")
-		return nil
+		return writeJSONItems(w, name, n, "  ", " ", enc)
 	}
 	list := func(name string, n int, item func(i int) any) error {
 		return listBytes(name, n, func(i int) ([]byte, error) { return json.Marshal(item(i)) })
@@ -560,23 +542,10 @@ func writeLoadPathJSON(w *bufio.Writer, lp *LoadPath, round func(any) any) error
 		switch {
 		case isNil:
 			w.WriteString("null")
-		case n == 0:
-			w.WriteString("[]")
 		default:
-			w.WriteString("[\n")
-			for i := 0; i < n; i++ {
-				b, err := json.Marshal(round(item(i)))
-				if err != nil {
-					return fmt.Errorf("%s[%d]: %w", name, i, err)
-				}
-				w.WriteString("   ")
-				w.Write(b)
-				if i < n-1 {
-					w.WriteByte(',')
-				}
-				w.WriteByte('\n')
+			if err := writeJSONItems(w, name, n, "   ", "  ", func(i int) ([]byte, error) { return json.Marshal(round(item(i))) }); err != nil {
+				return err
 			}
-			w.WriteString("  ]")
 		}
 		w.WriteString(",\n")
 		return nil
@@ -608,5 +577,30 @@ func writeLoadPathJSON(w *bufio.Writer, lp *LoadPath, round func(any) any) error
 		}
 	}
 	w.WriteString("\n }")
+	return nil
+}
+
+// writeJSONItems writes n items encoded by enc as a JSON list of one item
+// a line, each after indent, the closing bracket after closeIndent; [] when
+// there are none.
+func writeJSONItems(w *bufio.Writer, name string, n int, indent, closeIndent string, enc func(i int) ([]byte, error)) error {
+	if n == 0 {
+		w.WriteString("[]")
+		return nil
+	}
+	w.WriteString("[\n")
+	for i := 0; i < n; i++ {
+		b, err := enc(i)
+		if err != nil {
+			return fmt.Errorf("%s[%d]: %w", name, i, err)
+		}
+		w.WriteString(indent)
+		w.Write(b)
+		if i < n-1 {
+			w.WriteByte(',')
+		}
+		w.WriteByte('\n')
+	}
+	w.WriteString(closeIndent + "]")
 	return nil
 }

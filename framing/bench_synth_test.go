@@ -42,7 +42,8 @@ func readSynth(tb testing.TB, o synth.Options) (*dxfimport.Drawing, Options) {
 }
 
 // projectOptions maps a project file onto Options the way the command
-// does (cmd/framecheck framingOptions), for tests that read one.
+// does (pipeline.FramingOptions, which framing's tests cannot import: it
+// imports framing), for tests that read one.
 func projectOptions(p *project.Project) Options {
 	o := DefaultOptions()
 	o.SnapToleranceIn = p.Drawing.SnapToleranceIn
