@@ -103,7 +103,8 @@ type figure struct {
 	closed bool
 }
 
-// closedFigures groups lines whose ends meet within tol into figures, in
+// closedFigures groups lines whose ends meet within tol into figures (posts
+// drawn as lines, point-load outlines), in
 // the order of their first line; a figure of three or more lines whose
 // every end meets another is closed (a square of 4 lines, with or
 // without its diagonals).
@@ -119,7 +120,7 @@ func closedFigures(lines []segItem, tol float64) []figure {
 		}
 		return lines[e/2].b
 	}
-	// ends on a grid of cells one tolerance wide, as linePosts does
+	// ends on a grid of cells one tolerance wide
 	type cell struct{ x, y int64 }
 	cellOf := func(p Point) cell { return cell{int64(math.Floor(p.X / tol)), int64(math.Floor(p.Y / tol))} }
 	grid := map[cell][]int{}

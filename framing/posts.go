@@ -232,60 +232,19 @@ func (g *grouper) outlinePost(pts []Point, pos dxfimport.Pos) (Post, bool) {
 // (a square of 4 lines, with or without its diagonals); other lines are
 // reported and skipped.
 func (g *grouper) linePosts(lines []segItem) []Post {
-	n := len(lines)
-	if n == 0 {
-		return nil
-	}
 	tol := g.opt.SnapToleranceIn
-	sets := newDisjointSets(n)
-	// endpoints on a grid of cells one tolerance wide
-	type cell struct{ x, y int64 }
-	cellOf := func(p Point) cell { return cell{int64(math.Floor(p.X / tol)), int64(math.Floor(p.Y / tol))} }
-	grid := map[cell][]int{} // end index: 2*line + 0/1
-	end := func(e int) Point {
-		if e%2 == 0 {
-			return lines[e/2].a
-		}
-		return lines[e/2].b
-	}
-	met := make([]bool, 2*n)
-	for e := 0; e < 2*n; e++ {
-		c := cellOf(end(e))
-		for dx := int64(-1); dx <= 1; dx++ {
-			for dy := int64(-1); dy <= 1; dy++ {
-				for _, f := range grid[cell{c.x + dx, c.y + dy}] {
-					if f/2 != e/2 && dist(end(e), end(f)) <= tol {
-						met[e], met[f] = true, true
-						sets.union(e/2, f/2)
-					}
-				}
-			}
-		}
-		grid[c] = append(grid[c], e)
-	}
-	clusters := map[int][]int{}
-	var roots []int
-	for i := range lines {
-		r := sets.find(i)
-		if _, ok := clusters[r]; !ok {
-			roots = append(roots, r)
-		}
-		clusters[r] = append(clusters[r], i)
-	}
 	var out []Post
-	for _, r := range roots {
-		ls := clusters[r]
-		closed := len(ls) >= 3
+	for _, fig := range closedFigures(lines, tol) {
+		ls := fig.lines
 		var pts []Point
 		var pos []dxfimport.Pos
 		for _, i := range ls {
-			closed = closed && met[2*i] && met[2*i+1]
 			pts = append(pts, lines[i].a, lines[i].b)
 			if len(pos) == 0 || pos[len(pos)-1] != lines[i].pos {
 				pos = append(pos, lines[i].pos)
 			}
 		}
-		if !closed {
+		if !fig.closed {
 			g.warn(pos[0], CodePostSkipped, "%d line(s) on a posts layer (%s) do not close an outline; not a post, skipped",
 				len(ls), handles(pos, 3))
 			continue
