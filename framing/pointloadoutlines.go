@@ -104,10 +104,9 @@ type figure struct {
 }
 
 // closedFigures groups lines whose ends meet within tol into figures (posts
-// drawn as lines, point-load outlines), in
-// the order of their first line; a figure of three or more lines whose
-// every end meets another is closed (a square of 4 lines, with or
-// without its diagonals).
+// drawn as lines, point-load outlines), in the order of their first line;
+// a figure of three or more lines whose every end meets another is closed
+// (a square of 4 lines, with or without its diagonals).
 func closedFigures(lines []segItem, tol float64) []figure {
 	n := len(lines)
 	if n == 0 {
