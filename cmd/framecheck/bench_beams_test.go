@@ -12,11 +12,9 @@ import (
 	"bytes"
 	"encoding/json"
 	"fmt"
-	"io"
 	"os"
 	"path/filepath"
 	"regexp"
-	"runtime/debug"
 	"strconv"
 	"testing"
 
@@ -48,31 +46,12 @@ func BenchmarkCheckRunRigid(b *testing.B) { benchCheckRunBeams(b, false) }
 func BenchmarkCheckRunBeams(b *testing.B) { benchCheckRunBeams(b, true) }
 
 func benchCheckRunBeams(b *testing.B, beams bool) {
-	// The collector as the command sets it (gc.go: tuneGC, and the soft
-	// limit scaled to the drawing), put back afterwards.
-	oldPercent := debug.SetGCPercent(gcPercent)
-	oldLimit := debug.SetMemoryLimit(memoryLimit)
-	oldGC, oldLimitTuned := gcTuned, limitTuned
-	gcTuned, limitTuned = true, true
-	defer func() {
-		debug.SetGCPercent(oldPercent)
-		debug.SetMemoryLimit(oldLimit)
-		gcTuned, limitTuned = oldGC, oldLimitTuned
-	}()
+	defer commandGC()()
 	for _, n := range beamBenchSizes {
 		b.Run(fmt.Sprintf("joists=%d", n), func(b *testing.B) {
 			dir := b.TempDir()
 			p := writeBeamPlan(b, dir, synth.Options{Joists: n, Beams: beams})
-			b.ResetTimer()
-			i := 0
-			for b.Loop() {
-				// a new folder each time, as a first run writes into
-				i++
-				out := filepath.Join(dir, fmt.Sprintf("out%d", i))
-				if code := run([]string{"check", p.dxf, "-p", p.toml, "-o", out}, io.Discard, io.Discard); code == exitUsage {
-					b.Fatalf("check exit %d", code)
-				}
-			}
+			checkLoop(b, p, dir)
 			perJoist(b, n)
 			if beams {
 				b.ReportMetric(float64(p.stats.Beams), "beams")

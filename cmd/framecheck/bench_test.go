@@ -153,32 +153,42 @@ func BenchmarkCheckRunOutlines(b *testing.B) { benchCheckRunOpts(b, synth.Option
 func benchCheckRun(b *testing.B, r12 bool) { benchCheckRunOpts(b, synth.Options{R12: r12}) }
 
 func benchCheckRunOpts(b *testing.B, o synth.Options) {
-	// The collector as the command sets it (gc.go), not the test binary's
-	// defaults; put back afterwards.
-	oldPercent := debug.SetGCPercent(gcPercent)
-	oldLimit := debug.SetMemoryLimit(memoryLimit)
-	gcTuned = true
-	defer func() {
-		debug.SetGCPercent(oldPercent)
-		debug.SetMemoryLimit(oldLimit)
-		gcTuned = false
-	}()
+	defer commandGC()()
 	forSizes(b, func(b *testing.B, n int) {
 		dir := b.TempDir()
 		o.Joists = n
-		p := writeBigPlanOpts(b, dir, o)
-		b.ResetTimer()
-		i := 0
-		for b.Loop() {
-			// A new folder each time, as a first run writes into.
-			i++
-			out := filepath.Join(dir, fmt.Sprintf("out%d", i))
-			if code := run([]string{"check", p.dxf, "-p", p.toml, "-o", out}, io.Discard, io.Discard); code == exitUsage {
-				b.Fatalf("check exit %d", code)
-			}
-		}
+		checkLoop(b, writeBigPlanOpts(b, dir, o), dir)
 		perJoist(b, n)
 	})
+}
+
+// commandGC sets the collector as the command sets it (gc.go: tuneGC, and
+// the soft limit scaled to the drawing), not the test binary's defaults;
+// the returned function puts it back.
+func commandGC() (restore func()) {
+	oldPercent := debug.SetGCPercent(gcPercent)
+	oldLimit := debug.SetMemoryLimit(memoryLimit)
+	oldGC, oldLimitTuned := gcTuned, limitTuned
+	gcTuned, limitTuned = true, true
+	return func() {
+		debug.SetGCPercent(oldPercent)
+		debug.SetMemoryLimit(oldLimit)
+		gcTuned, limitTuned = oldGC, oldLimitTuned
+	}
+}
+
+// checkLoop runs `framecheck check` on p for every b.Loop, each run into
+// a new folder under dir, as a first run writes into.
+func checkLoop(b *testing.B, p bigPlan, dir string) {
+	b.ResetTimer()
+	i := 0
+	for b.Loop() {
+		i++
+		out := filepath.Join(dir, fmt.Sprintf("out%d", i))
+		if code := run([]string{"check", p.dxf, "-p", p.toml, "-o", out}, io.Discard, io.Discard); code == exitUsage {
+			b.Fatalf("check exit %d", code)
+		}
+	}
 }
 
 // BenchmarkStageParse reads the plan file (dxfimport.ReadFile).
