@@ -282,6 +282,9 @@ func readCalloutLine(l string) (c Callout, hasSize bool, err error) {
 				c.Plies, l = n, rest
 			}
 		}
+		if actualSizeRE.MatchString(l) {
+			return bad("%s", actualSizeJoists)
+		}
 		m := sizeRE.FindStringSubmatch(l)
 		if m == nil {
 			return bad("the size must come first (want a form like 2x10 @ 16\" o.c.)")
@@ -404,6 +407,17 @@ func firstWord(l string) string {
 	}
 	return l
 }
+
+// actualSizeRE matches a size written in actual inches with a fraction or
+// a decimal, "1 3/4 x 9 1/2", "1-3/4x11-7/8", "1.75x9.5": structural
+// composite lumber or glulam, never a nominal sawn size.
+var actualSizeRE = regexp.MustCompile(`^\d+(?:[ -]\d+/\d+|\.\d+)\s*[xX×]`)
+
+// actualSizeJoists is why a joist callout with a size in actual inches is
+// not read: such sizes are read on beam callouts, with their material.
+const actualSizeJoists = "a size in actual inches is structural composite lumber or glulam: such sizes are read on beam callouts " +
+	"(\"3 1/2 x 11 7/8 LVL\"); for joists of it, give the material in [lumber] species, grade and size, " +
+	"or [[lumber.by_layer]] for their layer"
 
 // calloutSize checks a nominal size: dimension lumber 2-4 in thick and
 // 2-16 in deep (NDS 2018 Supplement Table 1B's range; the check package
