@@ -48,11 +48,24 @@ func buildPath(r *Results) *pathSection {
 	a, d := lp.Applied, lp.Delivered
 	s.Balance = "D " + lb(a.DeadLb) + " lb put on, " + lb(d.DeadLb) + " lb delivered; L " + lb(a.LiveLb) + " / " + lb(d.LiveLb) +
 		" lb; Lr " + lb(a.RoofLiveLb) + " / " + lb(d.RoofLiveLb) + " lb; S " + lb(a.SnowLb) + " / " + lb(d.SnowLb) + " lb"
-	for _, b := range lp.Beams {
+	// Each mark's checks are listed for its beam with the largest ratio,
+	// as the joists' calculations are by mark; a beam that does not pass
+	// has its own listed too.
+	governing := map[string]int{}
+	for i, b := range lp.Beams {
+		if g, ok := governing[b.Mark]; !ok || b.MaxRatio > lp.Beams[g].MaxRatio {
+			governing[b.Mark] = i
+		}
+	}
+	for i, b := range lp.Beams {
 		row := pathBeamRow{ID: b.ID, Mark: b.Mark, Kind: b.Kind, Size: b.Size, Spans: ftInList(b.SpansIn),
 			Supports: strings.Join(b.Supports, ", "), Carries: memberList(b.Carries), Governing: b.Governing,
 			Ratio: fmtx.Ratio(b.MaxRatio), Status: b.Status, Bad: b.Status != StatusPass, Messages: strings.Join(b.Messages, "; ")}
+		listed := governing[b.Mark] == i || b.Mark == "" || row.Bad
 		for _, c := range b.Checks {
+			if !listed {
+				break
+			}
 			row.Checks = append(row.Checks, pathCheckRow{Kind: c.Kind, Combo: c.Combo, Actual: fmtNum(c.Actual),
 				Allowable: fmtNum(c.Allowable), Unit: c.Unit, Ratio: fmtx.Ratio(c.Ratio)})
 		}

@@ -301,7 +301,7 @@ At each flagged bearing a connector is needed whose allowable load for the combi
 {{else}}<p>No bearing has a net uplift reaction under any load combination.</p>{{end}}
 </section>
 {{with .Path}}<section id="loadpath"><h2>Load path: beams, posts, connections, foundation</h2>
-<p>{{.Summary}}. Each beam is checked with the reactions of the members it carries, by load type, as point loads where they bear, and its own weight; it forms its own load combinations. The loads put on the members of the path reach walls, posts and rigid supports in full: {{.Balance}}.</p>
+<p>{{.Summary}}. Each beam is checked with the reactions of the members it carries, by load type, as point loads where they bear, and its own weight; it forms its own load combinations. The loads put on the members of the path reach walls, posts and rigid supports in full: {{.Balance}}. The checks are listed for the beam of each mark with the largest ratio (the beams of a mark have the same size, lumber and spans and ratios within 0.01) and for every beam that does not pass; every beam's governing check is in the Beams sheet and all its checks in results.json.</p>
 <h3>Beams</h3>
 <table id="path-beams"><tr><th>beam</th><th>mark</th><th>kind</th><th>size</th><th>spans</th><th>bears on</th><th>carries</th><th>governing</th><th>ratio</th><th>status</th></tr>
 {{range .Beams}}<tr{{if .Bad}} class="bad"{{end}}><td>{{.ID}}</td><td>{{.Mark}}</td><td>{{.Kind}}</td><td>{{.Size}}</td><td>{{.Spans}}</td><td>{{.Supports}}</td><td>{{.Carries}}</td><td>{{.Governing}}</td><td class="n">{{.Ratio}}</td><td>{{.Status}}</td></tr>
