@@ -54,7 +54,7 @@ func writeMembers(f *excelize.File, st *styles, r *Results) error {
 	if err != nil {
 		return err
 	}
-	s.row = len(r.Members) + 1
+	s.row = HeaderRow + len(r.Members) // the last member row, below the title and header rows
 	return s.close()
 }
 
