@@ -75,7 +75,7 @@ func writeXLSX(path string, r *Results, stream bool) error {
 	var spliced []splicedSheet
 	if !stream {
 		spliced = append(spliced, splicedSheet{name: SheetMembers, cols: membersColumns, rows: len(r.Members),
-			row: func(s *rowCells, i int) { memberRow(s, &r.Members[i]) }, dimension: true})
+			row: func(s *rowCells, i int) { memberRow(s, &r.Members[i]) }})
 		if r.LoadPath != nil {
 			spliced = append(spliced, loadPathSheets(r.LoadPath)...)
 		}

@@ -17,7 +17,7 @@ import (
 
 // dimensionRE matches a worksheet's <dimension ref="..."/> element
 // (ECMA-376 Part 1, 18.3.1.35), which spliceSheets sets to the table's
-// full range on a sheet that asks for it.
+// full range.
 var dimensionRE = regexp.MustCompile(`<dimension ref="[^"]*"\s*(/>|></dimension>)`)
 
 // splicedSheet is a sheet whose rows are written here, in blocks on every
@@ -31,9 +31,6 @@ type splicedSheet struct {
 	// row fills s with data row i's cells (0-based), len(cols) of them;
 	// it is called from several goroutines at once.
 	row func(s *rowCells, i int)
-	// dimension: set the part's <dimension> to the whole table (the
-	// Members sheet); otherwise it is left as excelize wrote it.
-	dimension bool
 }
 
 // spliceSheets copies the workbook book (a zip that excelize wrote, in
@@ -225,10 +222,11 @@ func writeSplicedPart(zw *zip.Writer, f *zip.File, st *styles, ss *splicedSheet)
 		return errors.New("not the sheet as expected (its header row, and no other row after it, before </sheetData>)")
 	}
 	head, tail := data[:cut], data[cut:]
-	if ss.dimension {
-		last := colNames[len(ss.cols)-1] + strconv.Itoa(ss.rows+HeaderRow)
-		head = dimensionRE.ReplaceAll(head, []byte(`<dimension ref="A1:`+last+`"/>`))
-	}
+	// The dimension covers the whole table (excelize's stream writer
+	// leaves it "A1", and a reader that trusts it, such as openpyxl's
+	// read-only mode, then sees one cell).
+	last := colNames[len(ss.cols)-1] + strconv.Itoa(ss.rows+HeaderRow)
+	head = dimensionRE.ReplaceAll(head, []byte(`<dimension ref="A1:`+last+`"/>`))
 
 	var part deflatedPart
 	part.add(head, deflatePiece(head))
