@@ -28,14 +28,24 @@ var SheetNames = []string{SheetMembers, SheetMarks, SheetBlocking, SheetTakeoff,
 
 // WriteXLSX writes the member schedule with takeoff to path, atomically:
 // excelize builds the workbook (styles, every sheet, streamed), and the
-// Members sheet's rows, one per member, are written by spliceMembers in
-// blocks on every core, so that 100,000 members take well under a second. Each sheet has a frozen header row, an autofilter over its table and
+// rows of the large sheets (Members, one row per member, and the load
+// path's Beams, Posts, Connections and Foundation) are written by
+// spliceSheets in blocks on every core, so that 100,000 members take well
+// under a second. Each sheet has a frozen header row, an autofilter over its table and
 // set column widths; ratios show as 0.00, lengths as ft-in text (with the
 // inches as a number beside them where sorting needs it); failing and
 // erroring members' rows are shaded and ratios over 1.00 are bold red. A
 // non-finite number is written as the text "n/a". A path ending in .dxf is
 // refused.
 func WriteXLSX(path string, r *Results) error {
+	return writeXLSX(path, r, false)
+}
+
+// writeXLSX is WriteXLSX; with stream set every row of every sheet is
+// written by excelize's stream writer, cell by cell, and nothing is
+// spliced: the workbook the spliced rows must read back as (the tests'
+// reference, and how the schedule was written before).
+func writeXLSX(path string, r *Results, stream bool) error {
 	if err := refuseDrawing(path); err != nil {
 		return err
 	}
@@ -52,21 +62,32 @@ func WriteXLSX(path string, r *Results) error {
 	// (at 10,000 members the schedule took 2.3 s instead of 0.3 s).
 	f.SetActiveSheet(0)
 	writers := []func(*excelize.File, *styles, *Results) error{
-		writeMembers, writeMarks, writeBlocking, writeTakeoff, writeUpliftSheet, writeLoadPathSheets, writeInputs, writeNotes,
+		func(f *excelize.File, st *styles, r *Results) error { return writeMembers(f, st, r, stream) },
+		writeMarks, writeBlocking, writeTakeoff, writeUpliftSheet,
+		func(f *excelize.File, st *styles, r *Results) error { return writeLoadPathSheets(f, st, r, stream) },
+		writeInputs, writeNotes,
 	}
 	for _, w := range writers {
 		if err := w(f, st, r); err != nil {
 			return fmt.Errorf("export: %s: %w", path, err)
 		}
 	}
-	// The workbook without the member rows is small; the rows are added
-	// to it as it is copied to the file (xlsx_members.go).
+	var spliced []splicedSheet
+	if !stream {
+		spliced = append(spliced, splicedSheet{name: SheetMembers, cols: membersColumns, rows: len(r.Members),
+			row: func(s *rowCells, i int) { memberRow(s, &r.Members[i]) }})
+		if r.LoadPath != nil {
+			spliced = append(spliced, loadPathSheets(r.LoadPath)...)
+		}
+	}
+	// The workbook without those rows is small; the rows are added to it
+	// as it is copied to the file (xlsx_splice.go).
 	var book bytes.Buffer
 	if err := f.Write(&book); err != nil {
 		return fmt.Errorf("export: %s: %w", path, err)
 	}
 	return writeAtomic(path, func(w *bufio.Writer) error {
-		return spliceMembers(w, book.Bytes(), st, r.Members)
+		return spliceSheets(w, book.Bytes(), st, spliced)
 	})
 }
 

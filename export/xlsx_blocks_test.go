@@ -12,7 +12,7 @@ import (
 )
 
 // TestMemberBlocksStopsOnError: when the writer of the blocks fails,
-// memberBlocks returns its error, the blocks before it went out in order,
+// rowBlocks returns its error, the blocks before it went out in order,
 // and no worker or feeder goroutine is left behind (blocks already built
 // are drained), on one core or several. Common practice, no source.
 func TestMemberBlocksStopsOnError(t *testing.T) {
@@ -22,20 +22,20 @@ func TestMemberBlocksStopsOnError(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	members := bigResults(9*memberRowsPerBlock + 5).Members // ten blocks
+	members := bigResults(9*rowsPerBlock + 5).Members // ten blocks
 	boom := errors.New("disk full")
 	base := runtime.NumGoroutine()
 	for _, procs := range []int{1, 2, 8} {
 		for _, stopAt := range []int{0, 1, 5} {
 			old := runtime.GOMAXPROCS(procs)
 			var firstRows []int
-			err := memberBlocks(st, members, func(b rowBlock) error {
+			err := rowBlocks(st, len(members), len(membersColumns), func(s *rowCells, i int) { memberRow(s, &members[i]) }, func(b rowBlock) error {
 				if len(firstRows) == stopAt {
 					// Let the workers run ahead and fill every slot first.
 					time.Sleep(100 * time.Millisecond)
 					return boom
 				}
-				want := `<row r="` + strconv.Itoa(len(firstRows)*memberRowsPerBlock+HeaderRow+1) + `">`
+				want := `<row r="` + strconv.Itoa(len(firstRows)*rowsPerBlock+HeaderRow+1) + `">`
 				if !bytes.HasPrefix(b.raw, []byte(want)) {
 					t.Errorf("block %d does not start with %s", len(firstRows), want)
 				}

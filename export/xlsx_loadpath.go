@@ -48,130 +48,140 @@ var foundationColumns = []column{
 	{"Source", 40},
 }
 
+// loadPathSheets returns the Beams, Posts, Connections and Foundation
+// sheets of lp, in workbook order, each with its columns, its number of
+// rows and the function that fills a row's cells.
+func loadPathSheets(lp *LoadPath) []splicedSheet {
+	return []splicedSheet{
+		{name: SheetBeams, cols: beamColumns, rows: len(lp.Beams), row: func(s *rowCells, i int) { beamRow(s, &lp.Beams[i]) }},
+		{name: SheetPosts, cols: postColumns, rows: len(lp.Posts), row: func(s *rowCells, i int) { postRow(s, &lp.Posts[i]) }},
+		{name: SheetConnections, cols: connectionColumns, rows: len(lp.Connections), row: func(s *rowCells, i int) { connectionRow(s, &lp.Connections[i]) }},
+		{name: SheetFoundation, cols: foundationColumns, rows: len(lp.Foundation), row: func(s *rowCells, i int) { foundationRow(s, &lp.Foundation[i]) }},
+	}
+}
+
 // writeLoadPathSheets writes the Beams, Posts, Connections and Foundation
-// sheets when r has a load path.
-func writeLoadPathSheets(f *excelize.File, st *styles, r *Results) error {
-	lp := r.LoadPath
-	if lp == nil {
+// sheets when r has a load path: each sheet's columns, title and header
+// rows, frozen pane and an autofilter over all its rows. With stream set
+// excelize's stream writer writes the rows too, cell by cell (the
+// reference the tests hold the spliced rows to); otherwise spliceSheets
+// adds them to the sheets' parts.
+func writeLoadPathSheets(f *excelize.File, st *styles, r *Results, stream bool) error {
+	if r.LoadPath == nil {
 		return nil
 	}
-	s, err := newSheet(f, st, SheetBeams, beamColumns)
-	if err != nil {
-		return err
-	}
-	for _, b := range lp.Beams {
-		s.begin(b.Status != StatusPass)
-		s.text(b.ID)
-		s.text(b.Mark)
-		s.text(b.Kind)
-		s.text(b.Size)
-		s.text(speciesGrade(b.Species, b.Grade))
-		s.text(ftInList(b.SpansIn))
-		s.text(strings.Join(b.Supports, ", "))
-		s.text(memberList(b.Carries))
-		c, _ := governingOf(b.Checks, b.Governing)
-		s.text(b.Governing)
-		s.text(fmtx.Combo(c.Combo))
-		s.num(b.MaxRatio, cRatio)
-		s.text(b.Status)
-		s.text(b.Layer)
-		s.text(b.Source)
-		s.text(strings.Join(b.Messages, "; "))
-		if err := s.end(); err != nil {
+	for _, ss := range loadPathSheets(r.LoadPath) {
+		s, err := newSheet(f, st, ss.name, ss.cols)
+		if err != nil {
 			return err
 		}
-	}
-	if err := s.close(); err != nil {
-		return err
-	}
-	if s, err = newSheet(f, st, SheetPosts, postColumns); err != nil {
-		return err
-	}
-	for _, p := range lp.Posts {
-		s.begin(p.Status == StatusFail || p.Status == StatusError)
-		s.text(p.ID)
-		s.text(p.Size)
-		s.text(speciesGrade(p.Species, p.Grade))
-		if p.HeightIn > 0 {
-			s.text(FtIn(p.HeightIn))
-		} else {
-			s.text("")
-		}
-		typeCells(s, p.Loads)
-		s.num(DemandLb(p.DownLb), cLb)
-		s.text(fmtx.Combo(p.DownCombo))
-		s.num(DemandLb(p.UpLb), cLb)
-		s.text(fmtx.Combo(p.UpCombo))
-		ratio := 0.0
-		for _, c := range p.Checks {
-			ratio = math.Max(ratio, c.Ratio)
-		}
-		if p.Checked {
-			s.num(ratio, cRatio)
-		} else {
-			s.text("not checked")
-		}
-		s.text(p.Status)
-		s.text(p.Source)
-		s.text(strings.Join(p.Messages, "; "))
-		if err := s.end(); err != nil {
-			return err
-		}
-	}
-	if err := s.close(); err != nil {
-		return err
-	}
-	if s, err = newSheet(f, st, SheetConnections, connectionColumns); err != nil {
-		return err
-	}
-	for _, c := range lp.Connections {
-		s.begin(false)
-		s.text(c.Kind)
-		s.text(c.Member)
-		s.integer(c.Bearing)
-		s.text(c.Carrier)
-		typeCells(s, c.Loads)
-		s.num(DemandLb(c.DownLb), cLb) // demands: up to the next pound
-		s.text(fmtx.Combo(c.DownCombo))
-		s.num(DemandLb(c.UpLb), cLb)
-		s.text(fmtx.Combo(c.UpCombo))
-		if err := s.end(); err != nil {
-			return err
-		}
-	}
-	if err := s.close(); err != nil {
-		return err
-	}
-	if s, err = newSheet(f, st, SheetFoundation, foundationColumns); err != nil {
-		return err
-	}
-	for _, fl := range lp.Foundation {
-		s.begin(false)
-		s.text(fl.Kind)
-		s.text(fl.ID)
-		if fl.LengthIn > 0 {
-			s.text(FtIn(fl.LengthIn))
-		} else {
-			s.text("")
-		}
-		typeCells(s, fl.Loads)
-		if fl.Kind == "wall" {
-			typeCells(s, fl.PerFoot)
-		} else {
-			for i := 0; i < 6; i++ {
-				s.text("")
+		if stream {
+			for i := 0; i < ss.rows; i++ {
+				ss.row(&s.rowCells, i)
+				if err := s.end(); err != nil {
+					return err
+				}
 			}
+		} else {
+			s.row = HeaderRow + ss.rows
 		}
-		s.text(fl.Source)
-		if err := s.end(); err != nil {
+		if err := s.close(); err != nil {
 			return err
 		}
 	}
-	return s.close()
+	return nil
+}
+
+// beamRow fills s with beam b's cells, in beamColumns order.
+func beamRow(s *rowCells, b *PathBeam) {
+	s.begin(b.Status != StatusPass)
+	s.text(b.ID)
+	s.text(b.Mark)
+	s.text(b.Kind)
+	s.text(b.Size)
+	s.text(speciesGrade(b.Species, b.Grade))
+	s.text(ftInList(b.SpansIn))
+	s.text(strings.Join(b.Supports, ", "))
+	s.text(memberList(b.Carries))
+	c, _ := governingOf(b.Checks, b.Governing)
+	s.text(b.Governing)
+	s.text(fmtx.Combo(c.Combo))
+	s.num(b.MaxRatio, cRatio)
+	s.text(b.Status)
+	s.text(b.Layer)
+	s.text(b.Source)
+	s.text(strings.Join(b.Messages, "; "))
+}
+
+// postRow fills s with post p's cells, in postColumns order.
+func postRow(s *rowCells, p *PathPost) {
+	s.begin(p.Status == StatusFail || p.Status == StatusError)
+	s.text(p.ID)
+	s.text(p.Size)
+	s.text(speciesGrade(p.Species, p.Grade))
+	if p.HeightIn > 0 {
+		s.text(FtIn(p.HeightIn))
+	} else {
+		s.text("")
+	}
+	typeCells(s, p.Loads)
+	s.num(DemandLb(p.DownLb), cLb)
+	s.text(fmtx.Combo(p.DownCombo))
+	s.num(DemandLb(p.UpLb), cLb)
+	s.text(fmtx.Combo(p.UpCombo))
+	ratio := 0.0
+	for _, c := range p.Checks {
+		ratio = math.Max(ratio, c.Ratio)
+	}
+	if p.Checked {
+		s.num(ratio, cRatio)
+	} else {
+		s.text("not checked")
+	}
+	s.text(p.Status)
+	s.text(p.Source)
+	s.text(strings.Join(p.Messages, "; "))
+}
+
+// connectionRow fills s with connection c's cells, in connectionColumns
+// order.
+func connectionRow(s *rowCells, c *Connection) {
+	s.begin(false)
+	s.text(c.Kind)
+	s.text(c.Member)
+	s.integer(c.Bearing)
+	s.text(c.Carrier)
+	typeCells(s, c.Loads)
+	s.num(DemandLb(c.DownLb), cLb) // demands: up to the next pound
+	s.text(fmtx.Combo(c.DownCombo))
+	s.num(DemandLb(c.UpLb), cLb)
+	s.text(fmtx.Combo(c.UpCombo))
+}
+
+// foundationRow fills s with foundation line fl's cells, in
+// foundationColumns order.
+func foundationRow(s *rowCells, fl *FoundationLine) {
+	s.begin(false)
+	s.text(fl.Kind)
+	s.text(fl.ID)
+	if fl.LengthIn > 0 {
+		s.text(FtIn(fl.LengthIn))
+	} else {
+		s.text("")
+	}
+	typeCells(s, fl.Loads)
+	if fl.Kind == "wall" {
+		typeCells(s, fl.PerFoot)
+	} else {
+		for i := 0; i < 6; i++ {
+			s.text("")
+		}
+	}
+	s.text(fl.Source)
 }
 
 // typeCells writes D, L, Lr, S, W down, W up.
-func typeCells(s *sheet, l TypeLoads) {
+func typeCells(s *rowCells, l TypeLoads) {
 	for _, v := range [...]float64{l.DeadLb, l.LiveLb, l.RoofLiveLb, l.SnowLb, l.WindDownLb, l.WindUpLb} {
 		s.num(math.Round(v), cLb)
 	}

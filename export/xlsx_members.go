@@ -16,7 +16,7 @@ import (
 	"github.com/xuri/excelize/v2"
 )
 
-// The Members sheet holds one row of 25 cells per member: 2.5 million
+// The Members sheet holds one row of 26 cells per member: 2.6 million
 // cells at 100,000 members, where excelize's stream writer spends about
 // half a microsecond a cell (2 s in all). So excelize writes the workbook
 // (styles, every other sheet, the Members sheet's columns, header row,
@@ -24,12 +24,13 @@ import (
 // SpreadsheetML (ECMA-376 Part 1, 18.3.1.73 row, 18.3.1.4 c, 18.3.1.53
 // is: inline strings), in blocks of rows that are built and deflated on
 // every core at once, then spliced into excelize's sheet part
-// (spliceMembers). The cells are the same excelize.Cell values, with the
-// same styles, that the sheet helpers build for excelize.
+// (spliceSheets). The load path's sheets (xlsx_loadpath.go) take the same
+// way. The cells are the same excelize.Cell values, with the same styles,
+// that the sheet helpers build for excelize.
 
-// memberRowsPerBlock is how many member rows one block holds (about 3 MB
-// of XML).
-const memberRowsPerBlock = 2048
+// rowsPerBlock is how many rows one block holds (about 3 MB of XML for
+// member rows, 1 MB for connections).
+const rowsPerBlock = 2048
 
 // rowCells builds one row's cells with the schedule's styles.
 type rowCells struct {
@@ -161,9 +162,10 @@ func rowsPerSpan(s *rowCells, rows []int) {
 	s.integer(rows[0])
 }
 
-// colNames are the column letters A, B, ... of the Members sheet.
+// colNames are the column letters A, B, ... of the spliced sheets: as many
+// as the widest of them has (spliceSheets checks).
 var colNames = func() []string {
-	out := make([]string, len(membersColumns))
+	out := make([]string, max(len(membersColumns), len(beamColumns), len(postColumns), len(connectionColumns), len(foundationColumns)))
 	for i := range out {
 		out[i], _ = excelize.ColumnNumberToName(i + 1)
 	}
@@ -284,15 +286,17 @@ type rowBlock struct {
 	raw, deflated []byte
 }
 
-// memberBlocks builds the rows of members (row numbers from HeaderRow+1,
-// after the title rows and the header) in blocks on every core, and hands each block to emit in order.
+// rowBlocks builds rows rows of ncols cells, row i's cells by build (row
+// numbers from HeaderRow+1, after the title rows and the header), in
+// blocks on every core, and hands each block to emit in order.
 // Each block is deflated on its own and ended with a sync flush, so the
 // blocks joined make one deflate stream (RFC 1951, 3.2.3: a stream is a
 // series of blocks; only the last has BFINAL set) once a final empty
-// block follows.
-func memberBlocks(st *styles, members []Member, emit func(rowBlock) error) error {
-	n := (len(members) + memberRowsPerBlock - 1) / memberRowsPerBlock
-	workers := min(runtime.GOMAXPROCS(0), max(n, 1))
+// block follows. build must be safe to call from several goroutines at
+// once (each has its own rowCells).
+func rowBlocks(st *styles, rows, ncols int, build func(s *rowCells, i int), emit func(rowBlock) error) error {
+	blocks := (rows + rowsPerBlock - 1) / rowsPerBlock
+	workers := min(runtime.GOMAXPROCS(0), max(blocks, 1))
 	type done struct {
 		i int
 		b rowBlock
@@ -311,10 +315,10 @@ func memberBlocks(st *styles, members []Member, emit func(rowBlock) error) error
 			var zbuf bytes.Buffer
 			zw, _ := flate.NewWriter(&zbuf, flate.BestSpeed)
 			for i := range jobs {
-				lo, hi := i*memberRowsPerBlock, min((i+1)*memberRowsPerBlock, len(members))
-				raw := make([]byte, 0, (hi-lo)*1600)
+				lo, hi := i*rowsPerBlock, min((i+1)*rowsPerBlock, rows)
+				raw := make([]byte, 0, (hi-lo)*ncols*64)
 				for k := lo; k < hi; k++ {
-					memberRow(&rc, &members[k])
+					build(&rc, k)
 					raw = appendRow(raw, k+HeaderRow+1, rc.store)
 				}
 				zbuf.Reset()
@@ -328,7 +332,7 @@ func memberBlocks(st *styles, members []Member, emit func(rowBlock) error) error
 	stop := make(chan struct{})
 	go func() {
 		defer close(jobs)
-		for i := 0; i < n; i++ {
+		for i := 0; i < blocks; i++ {
 			select {
 			case slots <- struct{}{}:
 			case <-stop:

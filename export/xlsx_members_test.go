@@ -147,6 +147,11 @@ func TestMembersPartWellFormed(t *testing.T) {
 		t.Fatal(err)
 	}
 	defer zr.Close()
+	parts, err := sheetParts(&zr.Reader)
+	if err != nil {
+		t.Fatal(err)
+	}
+	membersPart := parts[SheetMembers]
 	for _, f := range zr.File {
 		if f.Name != membersPart {
 			continue

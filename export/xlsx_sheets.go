@@ -47,14 +47,25 @@ func speciesGrade(species, grade string) string {
 }
 
 // writeMembers writes the Members sheet's columns, header row, frozen
-// pane and an autofilter over all the members' rows, which spliceMembers
-// then adds (see xlsx_members.go).
-func writeMembers(f *excelize.File, st *styles, r *Results) error {
+// pane and an autofilter over all the members' rows, which spliceSheets
+// then adds (see xlsx_members.go); with stream set excelize's stream
+// writer writes the rows too (the tests' reference).
+func writeMembers(f *excelize.File, st *styles, r *Results, stream bool) error {
 	s, err := newSheet(f, st, SheetMembers, membersColumns)
 	if err != nil {
 		return err
 	}
-	s.row = len(r.Members) + 1
+	if !stream {
+		// The rows end on HeaderRow + the number of members.
+		s.row = HeaderRow + len(r.Members)
+		return s.close()
+	}
+	for i := range r.Members {
+		memberRow(&s.rowCells, &r.Members[i])
+		if err := s.end(); err != nil {
+			return err
+		}
+	}
 	return s.close()
 }
 
