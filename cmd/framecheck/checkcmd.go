@@ -266,7 +266,6 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	// From here the writers read res, the plan's supports and zones and
 	// the drawing's bytes: drop the members as grouped and checked.
 	o.releaseForWriters()
-	defer writersGC()()
 	// No NaN or Inf reaches any output, the summary or the exit status: a
 	// member holding one is in error, saying which value (a safety net;
 	// the checks should never produce one).
@@ -275,6 +274,12 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "framecheck: %d non-finite values written as 0 and their members put in error: %s\n",
 			len(bad), termText(strings.Join(bad[:min(len(bad), 5)], "; ")))
 	}
+	// The summary's failing groups (with the lightest size that would
+	// pass) need the check inputs, which the writers do not: found now,
+	// and the inputs dropped before the writers run.
+	c.bad = badGroups(o, res, proj)
+	o.Inputs = nil
+	defer writersGC()()
 	written, err := c.write(o, res, proj, stderr)
 	if err != nil {
 		// Every failure to write is one of the machine (a full disk, a
@@ -291,7 +296,6 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	}
 	printIssues(stderr, o.Issues, c.verbose)
 	c.warnings, c.doubts = countWarnings(o.Issues), runDoubts(o.Issues)
-	c.bad = badGroups(o, res, proj)
 	printSummary(stdout, c, proj, res, written)
 	if res.LoadPath != nil {
 		fmt.Fprintf(stdout, "load path: %s (Beams, Posts, Connections and Foundation sheets)\n", export.LoadPathSummary(res.LoadPath))
