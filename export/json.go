@@ -246,24 +246,9 @@ func sanitizeValue(v reflect.Value, path []pathSeg, fields *[]string, clean map[
 				return v, false
 			}
 		}
-		var cp reflect.Value
-		for i := 0; i < v.Len(); i++ {
-			nv, changed := sanitizeValue(v.Index(i), append(path, pathSeg{Index: i}), fields, clean)
-			if !changed {
-				continue
-			}
-			if !cp.IsValid() {
-				if v.Kind() == reflect.Slice {
-					cp = reflect.MakeSlice(v.Type(), v.Len(), v.Len())
-					reflect.Copy(cp, v)
-				} else {
-					cp = reflect.New(v.Type()).Elem()
-					cp.Set(v)
-				}
-			}
-			cp.Index(i).Set(nv)
-		}
-		if cp.IsValid() {
+		if cp, ok := mapElems(v, func(i int) (reflect.Value, bool) {
+			return sanitizeValue(v.Index(i), append(path, pathSeg{Index: i}), fields, clean)
+		}); ok {
 			return cp, true
 		}
 		if id.n > 0 {

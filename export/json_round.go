@@ -118,30 +118,40 @@ func roundValue(v reflect.Value, r numRule) (reflect.Value, bool) {
 			return cp, true
 		}
 	case reflect.Slice, reflect.Array:
-		var cp reflect.Value
 		er := r
 		if sigTypes[v.Type().Elem()] {
 			er = ruleSig
 		}
-		for i := 0; i < v.Len(); i++ {
-			nv, changed := roundValue(v.Index(i), er)
-			if !changed {
-				continue
-			}
-			if !cp.IsValid() {
-				if v.Kind() == reflect.Slice {
-					cp = reflect.MakeSlice(v.Type(), v.Len(), v.Len())
-					reflect.Copy(cp, v)
-				} else {
-					cp = reflect.New(v.Type()).Elem()
-					cp.Set(v)
-				}
-			}
-			cp.Index(i).Set(nv)
-		}
-		if cp.IsValid() {
+		if cp, ok := mapElems(v, func(i int) (reflect.Value, bool) { return roundValue(v.Index(i), er) }); ok {
 			return cp, true
 		}
+	}
+	return v, false
+}
+
+// mapElems returns the slice or array v with each element i for which f
+// says it changed replaced by f's value, copying v only when one did; v
+// itself and false when none did.
+func mapElems(v reflect.Value, f func(i int) (reflect.Value, bool)) (reflect.Value, bool) {
+	var cp reflect.Value
+	for i := 0; i < v.Len(); i++ {
+		nv, changed := f(i)
+		if !changed {
+			continue
+		}
+		if !cp.IsValid() {
+			if v.Kind() == reflect.Slice {
+				cp = reflect.MakeSlice(v.Type(), v.Len(), v.Len())
+				reflect.Copy(cp, v)
+			} else {
+				cp = reflect.New(v.Type()).Elem()
+				cp.Set(v)
+			}
+		}
+		cp.Index(i).Set(nv)
+	}
+	if cp.IsValid() {
+		return cp, true
 	}
 	return v, false
 }
