@@ -11,6 +11,8 @@ import (
 	"strconv"
 	"strings"
 	"sync"
+
+	"framecheck/internal/par"
 )
 
 // ErrNonFinite marks a results file written with NaN or Inf values
@@ -528,7 +530,8 @@ func writeLoadPathJSON(w *bufio.Writer, lp *LoadPath, round func(any) any) error
 		case isNil:
 			w.WriteString("null")
 		default:
-			if err := writeJSONItems(w, name, n, "   ", "  ", func(i int) ([]byte, error) { return json.Marshal(round(item(i))) }); err != nil {
+			enc := blockEncoder(n, func(i int) ([]byte, error) { return json.Marshal(round(item(i))) })
+			if err := writeJSONItems(w, name, n, "   ", "  ", enc); err != nil {
 				return err
 			}
 		}
@@ -588,4 +591,31 @@ func writeJSONItems(w *bufio.Writer, name string, n int, indent, closeIndent str
 	}
 	w.WriteString(closeIndent + "]")
 	return nil
+}
+
+// encodeBlock is how many items blockEncoder encodes at a time.
+const encodeBlock = 8192
+
+// blockEncoder returns enc for a caller asking for items 0 to n-1 in
+// order (writeJSONItems), encoding encodeBlock items at a time on every
+// core (par.Ranges): the load path of a large plan has a hundred thousand
+// connections, each encoded through reflection. enc must be safe to call
+// from several goroutines; the bytes written are the same.
+func blockEncoder(n int, enc func(i int) ([]byte, error)) func(i int) ([]byte, error) {
+	var bufs [][]byte
+	var errs []error
+	lo := 0
+	return func(i int) ([]byte, error) {
+		if bufs == nil || i < lo || i >= lo+len(bufs) {
+			lo = i
+			m := min(encodeBlock, n-i)
+			bufs, errs = make([][]byte, m), make([]error, m)
+			par.Ranges(m, func(a, b int) {
+				for k := a; k < b; k++ {
+					bufs[k], errs[k] = enc(lo + k)
+				}
+			})
+		}
+		return bufs[i-lo], errs[i-lo]
+	}
 }

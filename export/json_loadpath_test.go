@@ -4,6 +4,8 @@ import (
 	"bufio"
 	"bytes"
 	"encoding/json"
+	"fmt"
+	"strconv"
 	"testing"
 
 	"github.com/stretchr/testify/require"
@@ -38,5 +40,26 @@ func TestLoadPathJSONStreamed(t *testing.T) {
 		require.NoError(t, err)
 		require.NoError(t, json.Unmarshal(whole, &want))
 		require.Equal(t, want, got)
+	}
+}
+
+// TestBlockEncoderSameBytes: items asked for in order through blockEncoder
+// come back as enc makes them, across several blocks and on any number of
+// goroutines, errors included (common practice, no source).
+func TestBlockEncoderSameBytes(t *testing.T) {
+	n := 2*encodeBlock + 123
+	enc := func(i int) ([]byte, error) {
+		if i == encodeBlock+7 {
+			return nil, fmt.Errorf("item %d", i)
+		}
+		return []byte(strconv.Itoa(i * 3)), nil
+	}
+	get := blockEncoder(n, enc)
+	for i := 0; i < n; i++ {
+		b, err := get(i)
+		wb, werr := enc(i)
+		if string(b) != string(wb) || (err == nil) != (werr == nil) {
+			t.Fatalf("item %d: %q, %v; want %q, %v", i, b, err, wb, werr)
+		}
 	}
 }
