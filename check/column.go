@@ -221,7 +221,7 @@ func LoadCases(l PostLoads, s Settings) []PostCase {
 					}
 				}
 				P := f[LoadD]*dead + f[LoadL]*l.LiveLb + f[LoadLr]*l.RoofLiveLb + f[LoadS]*l.SnowLb + f[LoadW]*w
-				name := formatCaseName(f, dir, pr)
+				name := caseName(f, dir, pr)
 				dup := false
 				for _, pc := range out {
 					if pc.Name == name && pc.PLb == P {

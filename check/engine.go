@@ -501,10 +501,22 @@ type caseNameEntry struct {
 }
 
 // caseName writes a factor set as "D+0.75L+0.75S" or "0.6D+0.6W(up)",
-// leaving out loads that are zero.
+// leaving out loads that are zero. The names are kept (caseNames): a plan
+// with a load path names the same few cases at every one of its posts
+// and joints. At most a few thousand keys exist (combinations x wind
+// directions x the loads present).
 func caseName(f factorSet, dir float64, present [numLoadTypes]bool) string {
-	return formatCaseName(f, dir, present)
+	k := caseNameKey{f, dir, present}
+	if s, ok := caseNames.Load(k); ok {
+		return s.(string)
+	}
+	s := formatCaseName(f, dir, present)
+	caseNames.Store(k, s)
+	return s
 }
+
+// caseNames holds caseName's names by key, for every goroutine.
+var caseNames sync.Map
 
 // caseName is caseName with a small cache kept by the pooled engine: a run
 // meets the same few cases again and again.
