@@ -18,7 +18,11 @@ func exportLoadPath(o *outcome, toInch float64) *export.LoadPath {
 		return nil
 	}
 	plan := o.Plan
-	lp := &export.LoadPath{Applied: typeLoads(po.Solved.Applied), Delivered: typeLoads(po.Solved.Delivered)}
+	lp := &export.LoadPath{Applied: typeLoads(po.Solved.Applied), Delivered: typeLoads(po.Solved.Delivered),
+		// sized once: a large plan's load path has a hundred thousand joints
+		Beams: make([]export.PathBeam, 0, len(po.Beams)), Posts: make([]export.PathPost, 0, len(po.Posts)),
+		Connections: make([]export.Connection, 0, len(po.Posts)+len(po.Joints)),
+		Foundation:  make([]export.FoundationLine, 0, len(po.Posts)+len(po.Walls))}
 	wallID := map[int]string{}
 	for i, w := range po.Walls {
 		wallID[w.Support] = fmt.Sprintf("W%d", i+1)
