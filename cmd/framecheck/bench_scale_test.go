@@ -13,11 +13,6 @@ import (
 	"path/filepath"
 	"runtime"
 	"testing"
-
-	"framecheck/dxfimport"
-	"framecheck/framing"
-	"framecheck/pipeline"
-	"framecheck/project"
 )
 
 // groupSizes are the plans BenchmarkGroupPerJoist groups; the largest
@@ -30,23 +25,9 @@ var groupSizes = []int{10_000, 100_000, 300_000, 1_000_000}
 func BenchmarkGroupPerJoist(b *testing.B) {
 	for _, n := range groupSizes {
 		b.Run(fmt.Sprintf("joists=%d", n), func(b *testing.B) {
-			p := writeBigPlan(b, b.TempDir(), n, false)
-			proj, err := project.LoadProject(p.toml)
-			if err != nil {
-				b.Fatal(err)
-			}
-			d, err := dxfimport.ReadFile(p.dxf, dxfimport.Options{Units: "in"})
-			if err != nil {
-				b.Fatal(err)
-			}
-			opt := pipeline.FramingOptions(proj)
+			d, opt := readForGrouping(b, writeBigPlan(b, b.TempDir(), n, false))
 			runtime.GC()
-			b.ResetTimer()
-			for b.Loop() {
-				if pl := framing.Group(d, opt); len(pl.Members) != n {
-					b.Fatalf("members = %d, want %d", len(pl.Members), n)
-				}
-			}
+			groupLoop(b, d, opt, n)
 			b.ReportMetric(float64(b.Elapsed().Nanoseconds())/float64(b.N)/float64(n), "ns/joist")
 		})
 	}

@@ -206,27 +206,40 @@ func BenchmarkStageParse(b *testing.B) {
 	})
 }
 
+// readForGrouping reads p's drawing and maps its project file onto
+// framing's options, as the command does before it groups.
+func readForGrouping(tb testing.TB, p bigPlan) (*dxfimport.Drawing, framing.Options) {
+	tb.Helper()
+	proj, err := project.LoadProject(p.toml)
+	if err != nil {
+		tb.Fatal(err)
+	}
+	d, err := dxfimport.ReadFile(p.dxf, dxfimport.Options{Units: "in"})
+	if err != nil {
+		tb.Fatal(err)
+	}
+	return d, pipeline.FramingOptions(proj)
+}
+
+// groupLoop groups d with opt for every b.Loop, checking it finds n
+// members.
+func groupLoop(b *testing.B, d *dxfimport.Drawing, opt framing.Options, n int) {
+	b.ResetTimer()
+	for b.Loop() {
+		if pl := framing.Group(d, opt); len(pl.Members) != n {
+			b.Fatalf("members = %d, want %d", len(pl.Members), n)
+		}
+	}
+}
+
 // BenchmarkStageFraming groups the read drawing into members
 // (framing.Group).
 func BenchmarkStageFraming(b *testing.B) {
 	forSizes(b, func(b *testing.B, n int) {
 		p := writeBigPlan(b, b.TempDir(), n, false)
-		proj, err := project.LoadProject(p.toml)
-		if err != nil {
-			b.Fatal(err)
-		}
-		d, err := dxfimport.ReadFile(p.dxf, dxfimport.Options{Units: "in"})
-		if err != nil {
-			b.Fatal(err)
-		}
-		opt := pipeline.FramingOptions(proj)
+		d, opt := readForGrouping(b, p)
 		b.ReportAllocs()
-		b.ResetTimer()
-		for b.Loop() {
-			if pl := framing.Group(d, opt); len(pl.Members) != n {
-				b.Fatalf("members = %d, want %d", len(pl.Members), n)
-			}
-		}
+		groupLoop(b, d, opt, n)
 		perJoist(b, n)
 	})
 }
@@ -236,22 +249,9 @@ func BenchmarkStageFraming(b *testing.B) {
 func BenchmarkStageFramingOutlines(b *testing.B) {
 	forSizes(b, func(b *testing.B, n int) {
 		p := writeBigPlanOpts(b, b.TempDir(), synth.Options{Joists: n, Outlines: true})
-		proj, err := project.LoadProject(p.toml)
-		if err != nil {
-			b.Fatal(err)
-		}
-		d, err := dxfimport.ReadFile(p.dxf, dxfimport.Options{Units: "in"})
-		if err != nil {
-			b.Fatal(err)
-		}
-		opt := pipeline.FramingOptions(proj)
+		d, opt := readForGrouping(b, p)
 		b.ReportAllocs()
-		b.ResetTimer()
-		for b.Loop() {
-			if pl := framing.Group(d, opt); len(pl.Members) != n {
-				b.Fatalf("members = %d, want %d", len(pl.Members), n)
-			}
-		}
+		groupLoop(b, d, opt, n)
 		perJoist(b, n)
 	})
 }
