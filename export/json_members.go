@@ -102,23 +102,12 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 	w.str("grade", m.Grade)
 	w.str("zone", m.Zone)
 	if len(m.ZonePieces) > 0 && !w.skipped("zone_pieces") {
-		w.key("zone_pieces")
-		w.depth++
-		w.b = append(w.b, '[')
-		for i, z := range m.ZonePieces {
-			if i > 0 {
-				w.b = append(w.b, ',')
-			}
-			w.b = append(w.b, '{')
-			w.first = true
+		w.objects("zone_pieces", len(m.ZonePieces), func(i int) {
+			z := m.ZonePieces[i]
 			w.str("zone", z.Zone)
 			w.num("from_in", z.FromIn)
 			w.num("to_in", z.ToIn)
-			w.b = append(w.b, '}')
-		}
-		w.b = append(w.b, ']')
-		w.first = false
-		w.depth--
+		})
 	}
 	if m.Calculation != "" {
 		w.str("calculation", m.Calculation)
@@ -146,15 +135,8 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 		w.floats("drawn_blocking_at_in", m.DrawnBlockingAtIn)
 	}
 	if len(m.BlockingSteps) > 0 && !w.skipped("blocking_steps") {
-		w.key("blocking_steps")
-		w.depth++
-		w.b = append(w.b, '[')
-		for i, s := range m.BlockingSteps {
-			if i > 0 {
-				w.b = append(w.b, ',')
-			}
-			w.b = append(w.b, '{')
-			w.first = true
+		w.objects("blocking_steps", len(m.BlockingSteps), func(i int) {
+			s := m.BlockingSteps[i]
 			w.key("rows_per_span")
 			w.b = strconv.AppendInt(w.b, int64(s.RowsPerSpan), 10)
 			if len(s.AtIn) > 0 {
@@ -163,11 +145,7 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 			w.num("lu_in", s.LuIn)
 			w.num("cl", s.CL)
 			w.num("ratio", s.Ratio)
-			w.b = append(w.b, '}')
-		}
-		w.b = append(w.b, ']')
-		w.first = false
-		w.depth--
+		})
 	}
 	if len(m.Info) > 0 {
 		if e.lay.refs {
@@ -408,4 +386,24 @@ func (e *memberEncoder) checksJSON(cs []Check) ([]byte, error) {
 	}
 	e.seen[id] = true
 	return b, nil
+}
+
+// objects writes key name with a list of n objects, each written by item
+// (its fields through w), in the nesting the other values are written in.
+func (w *jsonOut) objects(name string, n int, item func(i int)) {
+	w.key(name)
+	w.depth++
+	w.b = append(w.b, '[')
+	for i := 0; i < n; i++ {
+		if i > 0 {
+			w.b = append(w.b, ',')
+		}
+		w.b = append(w.b, '{')
+		w.first = true
+		item(i)
+		w.b = append(w.b, '}')
+	}
+	w.b = append(w.b, ']')
+	w.first = false
+	w.depth--
 }
