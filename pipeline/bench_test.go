@@ -76,3 +76,41 @@ func BenchmarkStageChecks(b *testing.B) {
 		})
 	}
 }
+
+// BenchmarkStageLoadPath is the load-path stage as Run runs it
+// (runLoadPath: beams checked with the joists' reactions, posts, joints,
+// walls) on the synthetic plan with its beams on posts
+// (synth.Options.Beams), after the members' checks, which it does not
+// time.
+func BenchmarkStageLoadPath(b *testing.B) {
+	for _, n := range []int{10_000, 100_000} {
+		b.Run(fmt.Sprintf("joists=%d", n), func(b *testing.B) {
+			o := synth.Options{Joists: n, Beams: true}
+			data, _ := synth.Build(o)
+			proj, err := project.ParseProject("beams.toml", []byte(synth.ProjectFor(o)))
+			if err != nil {
+				b.Fatal(err)
+			}
+			d, err := dxfimport.Read(bytes.NewReader(data), "beams.dxf", dxfimport.Options{Units: proj.Drawing.Units})
+			if err != nil {
+				b.Fatal(err)
+			}
+			plan := framing.Group(d, FramingOptions(proj))
+			out, inputs, keys, usable, err := runMembers(Input{Plan: plan, PlanFile: "beams.dxf", Project: proj})
+			if err != nil {
+				b.Fatal(err)
+			}
+			issues := out.Issues
+			b.ReportAllocs()
+			b.ResetTimer()
+			for b.Loop() {
+				out.Issues, out.Path = issues, nil
+				runLoadPath(proj, plan, inputs, keys, usable, out.Settings, out, false)
+			}
+			if out.Path == nil || len(out.Path.Beams) == 0 {
+				b.Fatal("no load path")
+			}
+			b.ReportMetric(float64(n)*float64(b.N)/b.Elapsed().Seconds(), "joists/s")
+		})
+	}
+}

@@ -111,17 +111,30 @@ func Settings(p *project.Project) (check.Settings, error) {
 // run, names marks, counts the takeoff and follows the load path. A
 // returned error means the project's design settings are unusable.
 func Run(in Input) (*Outcome, error) {
-	p := in.Project
-	settings, err := Settings(p)
+	o, inputs, keys, usable, err := runMembers(in)
 	if err != nil {
 		return nil, err
 	}
-	plan := in.Plan
-	o := &Outcome{Project: p, Plan: plan, Settings: settings, Issues: in.Issues, PlanFile: in.PlanFile}
+	runLoadPath(in.Project, in.Plan, inputs, keys, usable, o.Settings, o, in.Size)
+	return o, nil
+}
 
-	inputs := make([]check.Member, len(plan.Members))
+// runMembers is Run but for the load path: the members' inputs and
+// checks, sizing, blocking rows, marks and takeoff. It returns what the
+// load path reads besides the outcome: each member's check input, its key
+// (checkAll's) and whether it could be checked.
+func runMembers(in Input) (o *Outcome, inputs []check.Member, keys []string, usable []bool, err error) {
+	p := in.Project
+	settings, err := Settings(p)
+	if err != nil {
+		return nil, nil, nil, nil, err
+	}
+	plan := in.Plan
+	o = &Outcome{Project: p, Plan: plan, Settings: settings, Issues: in.Issues, PlanFile: in.PlanFile}
+
+	inputs = make([]check.Member, len(plan.Members))
 	shifts := make([]float64, len(plan.Members))
-	usable := make([]bool, len(plan.Members))
+	usable = make([]bool, len(plan.Members))
 	o.Results = make([]check.Result, len(plan.Members))
 	inputMsgs := make([][]string, len(plan.Members))
 	// checkInput reads the plan and the project and writes only index k
@@ -145,7 +158,7 @@ func Run(in Input) (*Outcome, error) {
 	if in.Size {
 		o.Sizing = make([]*check.SizingResult, len(plan.Members))
 	}
-	keys := checkAll(inputs, shifts, usable, settings, p, o)
+	keys = checkAll(inputs, shifts, usable, settings, p, o)
 	if in.Size {
 		sizeRuns(sameDepthGroups(plan, p.Sizing.SameDepth), inputs, shifts, usable, settings, o)
 	}
@@ -172,8 +185,7 @@ func Run(in Input) (*Outcome, error) {
 		o.Rows[i].Size = plan.Members[plan.Runs[runs[o.Rows[i].Run]].Members[0]].Size
 	}
 	o.Takeoff = framing.BuildTakeoff(plan, o.Rows)
-	runLoadPath(p, plan, inputs, keys, usable, settings, o, in.Size)
-	return o, nil
+	return o, inputs, keys, usable, nil
 }
 
 // RunIndexes maps each run's ID to its index in plan.Runs (a run not
