@@ -129,6 +129,7 @@ func CheckPost(p Post, s Settings) PostResult {
 	area2 := area
 	best := -1.0
 	var bestComp, bestBear CheckResult
+	var bestRec colRec // the governing case's numbers, kept once at the end
 	for _, pc := range r.Cases {
 		P, cd, name := pc.PLb, pc.CD, pc.Name
 		if P > r.DownLb {
@@ -148,15 +149,16 @@ func CheckPost(p Post, s Settings) PostResult {
 		ratio := fc / (fcStar * cp)
 		if ratio > best {
 			best = ratio
-			bestComp = CheckResult{Kind: KindCompression, Combo: name, Actual: fc, Allowable: fcStar * cp, Unit: "psi", Ratio: ratio,
-				calc: &calcRecord{col: colRec{pLb: P, aIn2: area, leIn: le, dIn: d, ke: ke, hIn: p.HeightIn, cd: cd,
-					fcPsi: dv.FcPsi, cm: cm.Fc, ct: ct.Fb, cf: cfFc, ci: ci.Fb, fcStar: fcStar, eminPsi: dv.EminPsi,
-					eminAdj: eminAdj, fcE: fcE, cp: cp, c: c}}}
-			bestBear = CheckResult{Kind: KindBearingParallel, Combo: name, Actual: fc, Allowable: fcStar, Unit: "psi", Ratio: fc / fcStar,
-				calc: bestComp.calc}
+			bestComp = CheckResult{Kind: KindCompression, Combo: name, Actual: fc, Allowable: fcStar * cp, Unit: "psi", Ratio: ratio}
+			bestRec = colRec{pLb: P, aIn2: area, leIn: le, dIn: d, ke: ke, hIn: p.HeightIn, cd: cd,
+				fcPsi: dv.FcPsi, cm: cm.Fc, ct: ct.Fb, cf: cfFc, ci: ci.Fb, fcStar: fcStar, eminPsi: dv.EminPsi,
+				eminAdj: eminAdj, fcE: fcE, cp: cp, c: c}
+			bestBear = CheckResult{Kind: KindBearingParallel, Combo: name, Actual: fc, Allowable: fcStar, Unit: "psi", Ratio: fc / fcStar}
 		}
 	}
 	if best >= 0 {
+		rec := &calcRecord{col: bestRec}
+		bestComp.calc, bestBear.calc = rec, rec
 		r.Checks = []CheckResult{bestComp, bestBear}
 	}
 	r.MaxRatio, r.Governing, r.Status, r.Messages = verdict(r.Checks, r.Messages)
@@ -179,16 +181,65 @@ func LoadCases(l PostLoads, s Settings) []PostCase {
 	if combos == nil {
 		combos = defaultCombos
 	}
+	n := 0 // at most one case per alternative and wind direction
+	for _, cb := range combos {
+		for _, f := range cb.Cases {
+			if f[LoadW] > 0 {
+				n += 2
+			} else {
+				n++
+			}
+		}
+	}
+	out := make([]PostCase, 0, n)
+	eachLoadCase(l, combos, func(f factorSet, dir float64, pr [numLoadTypes]bool, P float64) {
+		name := caseName(f, dir, pr)
+		for _, pc := range out {
+			if pc.Name == name && pc.PLb == P {
+				return // the same case again
+			}
+		}
+		out = append(out, PostCase{Name: name, CD: ComboDurationFactor(f, pr), PLb: P})
+	})
+	return out
+}
+
+// LoadExtremes returns the largest downward load of LoadCases(l, s) and
+// the first case giving it, and the largest net uplift (a magnitude) and
+// the first case giving it; 0 and "" when no case presses down, or none
+// pulls up. It is what a scan of LoadCases finds, without the list.
+func LoadExtremes(l PostLoads, s Settings) (downLb float64, downCombo string, upLb float64, upCombo string) {
+	combos := s.Combos
+	if combos == nil {
+		combos = defaultCombos
+	}
+	eachLoadCase(l, combos, func(f factorSet, dir float64, pr [numLoadTypes]bool, P float64) {
+		// a case LoadCases leaves out as a repeat equals an earlier one:
+		// it is never strictly larger, so it changes neither extreme
+		if P > downLb {
+			downLb, downCombo = P, caseName(f, dir, pr)
+		}
+		if -P > upLb {
+			upLb, upCombo = -P, caseName(f, dir, pr)
+		}
+	})
+	return downLb, downCombo, upLb, upCombo
+}
+
+// eachLoadCase calls fn with each case of combos on loads l, in the order
+// LoadCases lists them (repeats included): its factors, the wind's
+// direction (1 toward, -1 away, 0 none), the loads present and the load P.
+func eachLoadCase(l PostLoads, combos []Combo, fn func(f factorSet, dir float64, pr [numLoadTypes]bool, P float64)) {
 	loads := [numLoadTypes]float64{l.DeadLb, l.LiveLb, l.RoofLiveLb, l.SnowLb, l.WindDownLb}
 	var present [numLoadTypes]bool
 	for t := range loads {
 		present[t] = loads[t] > 0
 	}
 	present[LoadD] = true
-	var out []PostCase
+	var dirBuf [2]float64
 	for _, cb := range combos {
 		for _, f := range cb.Cases {
-			dirs := []float64{0}
+			dirs := append(dirBuf[:0], 0)
 			if f[LoadW] > 0 {
 				dirs = dirs[:0]
 				if l.WindDownLb > 0 {
@@ -221,20 +272,10 @@ func LoadCases(l PostLoads, s Settings) []PostCase {
 					}
 				}
 				P := f[LoadD]*dead + f[LoadL]*l.LiveLb + f[LoadLr]*l.RoofLiveLb + f[LoadS]*l.SnowLb + f[LoadW]*w
-				name := caseName(f, dir, pr)
-				dup := false
-				for _, pc := range out {
-					if pc.Name == name && pc.PLb == P {
-						dup = true
-					}
-				}
-				if !dup {
-					out = append(out, PostCase{Name: name, CD: ComboDurationFactor(f, pr), PLb: P})
-				}
+				fn(f, dir, pr, P)
 			}
 		}
 	}
-	return out
 }
 
 // colRec holds the numbers of a post's governing compression case.

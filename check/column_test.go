@@ -63,3 +63,47 @@ func TestPost_NDS2018_3_7_1(t *testing.T) {
 		t.Errorf("bad size: status %s, want error", r.Status)
 	}
 }
+
+// TestLoadExtremes: the largest downward load and net uplift of the
+// ASCE 7-16 2.4.1 ASD combinations on a support under D 1,000, L 800,
+// Lr 300, S 500 lb, wind 400 lb toward and 900 lb away, 600 lb of dead
+// load relied on against uplift. Hand calculation:
+//
+//	D+0.75L+0.75(0.6W)+0.75S, W toward: 1000 + 600 + 180 + 375 = 2,155 lb (largest down)
+//	0.6D+0.6W, W away: 0.6(600) - 0.6(900) = -180 lb (the only net uplift)
+//
+// and, for these and other loads, what a scan of LoadCases finds (first
+// case on a tie).
+func TestLoadExtremes(t *testing.T) {
+	l := PostLoads{DeadLb: 1000, LiveLb: 800, RoofLiveLb: 300, SnowLb: 500, WindDownLb: 400, WindUpLb: 900,
+		UpliftDeadLb: 600, HasUpliftDead: true}
+	down, downCombo, up, upCombo := LoadExtremes(l, Settings{})
+	if math.Abs(down-2155) > 1e-9 || downCombo != "D+0.75L+0.75S+0.45W(down)" || math.Abs(up-180) > 1e-9 || upCombo != "0.6D+0.6W(up)" {
+		t.Errorf("extremes %v %q, %v %q; want 2155 D+0.75L+0.75S+0.45W(down), 180 0.6D+0.6W(up) (hand calculation, ASCE 7-16 2.4.1)",
+			down, downCombo, up, upCombo)
+	}
+	custom, err := ParseCombos([]string{"D+L", "D+(Lr or S)", "D+L", "0.6D+W"})
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, s := range []Settings{{}, {Combos: custom}} {
+		for _, l := range []PostLoads{l, {}, {DeadLb: 500}, {DeadLb: 300, WindUpLb: 900}, {DeadLb: 300, WindUpLb: 900, HasUpliftDead: true},
+			{DeadLb: 200, LiveLb: 200, SnowLb: 200, RoofLiveLb: 200}, {DeadLb: -100, WindDownLb: 50}} {
+			var want PostCase
+			var wantUp PostCase
+			for _, pc := range LoadCases(l, s) {
+				if pc.PLb > want.PLb {
+					want = pc
+				}
+				if -pc.PLb > -wantUp.PLb {
+					wantUp = pc
+				}
+			}
+			down, downCombo, up, upCombo := LoadExtremes(l, s)
+			if down != want.PLb || downCombo != want.Name || up != -wantUp.PLb || upCombo != wantUp.Name {
+				t.Errorf("%+v: extremes %v %q, %v %q; LoadCases gives %v %q, %v %q", l, down, downCombo, up, upCombo,
+					want.PLb, want.Name, -wantUp.PLb, wantUp.Name)
+			}
+		}
+	}
+}
