@@ -26,6 +26,7 @@ import (
 	"strings"
 
 	"framecheck/check"
+	"framecheck/internal/par"
 )
 
 // CarrierKind says what carries a bearing.
@@ -156,6 +157,7 @@ func Solve(p *Plan, s check.Settings) *Outcome {
 	}
 	incoming := make([][]check.PointLoad, len(p.Members))
 	solved := map[string]solvedMember{}
+	o.Joints = make([]Joint, 0, countJoints(p))
 	for i, k := range order {
 		mi := &p.Members[k]
 		cm := mi.Check
@@ -205,7 +207,7 @@ func Solve(p *Plan, s check.Settings) *Outcome {
 			l := loadsOf(r)
 			// the joints to state: a beam's, and a joist's on a beam or a post
 			if mi.Beam || c.Kind == Member || c.Kind == Post {
-				o.Joints = append(o.Joints, joint(k, j, c, l, s))
+				o.Joints = append(o.Joints, joint(k, j, c, l))
 			}
 			switch c.Kind {
 			case Member:
@@ -221,17 +223,43 @@ func Solve(p *Plan, s check.Settings) *Outcome {
 			}
 		}
 	}
-	for i := range p.Posts {
-		po := &o.Posts[i]
-		po.Loads.HasUpliftDead = true
-		po.Cases = check.LoadCases(po.Loads, s)
-		if p.Posts[i].Checked {
-			pc := p.Posts[i].Check
-			pc.Loads = po.Loads
-			po.Result = check.CheckPost(pc, s)
+	// Each joint's demand and each post's check depend on its own loads
+	// only: both cores, each range writing its own items.
+	par.Ranges(len(o.Joints), func(lo, hi int) {
+		demands(o.Joints[lo:hi], s)
+	})
+	par.Ranges(len(p.Posts), func(lo, hi int) {
+		for i := lo; i < hi; i++ {
+			po := &o.Posts[i]
+			po.Loads.HasUpliftDead = true
+			po.Cases = check.LoadCases(po.Loads, s)
+			if p.Posts[i].Checked {
+				pc := p.Posts[i].Check
+				pc.Loads = po.Loads
+				po.Result = check.CheckPost(pc, s)
+			}
+		}
+	})
+	return o
+}
+
+// countJoints returns how many joints Solve states at most: a beam's
+// bearings, and a joist's bearings on a member or a post.
+func countJoints(p *Plan) int {
+	n := 0
+	for i := range p.Members {
+		m := &p.Members[i]
+		if m.Beam {
+			n += len(m.Carriers)
+			continue
+		}
+		for _, c := range m.Carriers {
+			if c.Kind == Member || c.Kind == Post {
+				n++
+			}
 		}
 	}
-	return o
+	return n
 }
 
 // solvedMember is one analysis of a member, shared by the members alike
@@ -397,19 +425,37 @@ func cos2(m check.Member) float64 {
 	return 144 / (144 + m.PitchRise12*m.PitchRise12)
 }
 
-// joint states the demand at bearing j of member k on carrier c.
-func joint(k, j int, c Carrier, l Loads, s check.Settings) Joint {
+// joint is the joint at bearing j of member k on carrier c passing loads
+// l; its demand is found by demands.
+func joint(k, j int, c Carrier, l Loads) Joint {
 	jt := Joint{Member: k, Bearing: j, Carrier: c, Kind: c.Joint, Loads: l}
 	if jt.Kind == "" {
-		jt.Kind = map[CarrierKind]string{Member: "bearing on a member", Post: "post cap", Wall: "wall", Rigid: "bearing"}[c.Kind]
-	}
-	for _, pc := range check.LoadCases(l, s) {
-		if pc.PLb > jt.DownLb {
-			jt.DownLb, jt.DownCombo = pc.PLb, pc.Name
-		}
-		if -pc.PLb > jt.UpLb {
-			jt.UpLb, jt.UpCombo = -pc.PLb, pc.Name
-		}
+		jt.Kind = defaultJointKind[c.Kind]
 	}
 	return jt
+}
+
+// defaultJointKind names a joint whose carrier names none, by the kind of
+// carrier.
+var defaultJointKind = map[CarrierKind]string{Member: "bearing on a member", Post: "post cap", Wall: "wall", Rigid: "bearing"}
+
+// demands states the demand of each joint of js under settings s: the
+// largest downward load and net uplift of its combinations
+// (check.LoadExtremes). Joints passing the same loads (the joists alike)
+// have the same demand, found once.
+func demands(js []Joint, s check.Settings) {
+	type demand struct {
+		down, up           float64
+		downCombo, upCombo string
+	}
+	seen := map[Loads]demand{}
+	for i := range js {
+		jt := &js[i]
+		d, ok := seen[jt.Loads]
+		if !ok {
+			d.down, d.downCombo, d.up, d.upCombo = check.LoadExtremes(jt.Loads, s)
+			seen[jt.Loads] = d
+		}
+		jt.DownLb, jt.DownCombo, jt.UpLb, jt.UpCombo = d.down, d.downCombo, d.up, d.upCombo
+	}
 }

@@ -3,6 +3,8 @@ package loadpath
 import (
 	"fmt"
 	"math"
+	"reflect"
+	"runtime"
 	"strings"
 	"testing"
 
@@ -198,4 +200,74 @@ func TestBeamSizing(t *testing.T) {
 	sec, _ := check.ParseSize(b.Input.Size)
 	near(t, "self-weight of the size picked", b.Input.SelfWeightPlf, sec.AreaIn2/144*35, 1e-9, "area x 35 pcf")
 	near(t, "D delivered", o.Delivered.DeadLb, o.Applied.DeadLb, 0.1, "statics: nothing lost")
+}
+
+// manyPaths is n copies of pathPlan side by side (beams of five lengths,
+// so that some are alike and some not), for the parts of Solve that run
+// on every core.
+func manyPaths(n int) *Plan {
+	all := &Plan{}
+	for c := 0; c < n; c++ {
+		p := pathPlan(5, 84+12*float64(c%5))
+		mOff, pOff, wOff := len(all.Members), len(all.Posts), len(all.Walls)
+		for _, m := range p.Members {
+			m.ID = fmt.Sprintf("%s-%d", m.ID, c)
+			cs := append([]Carrier(nil), m.Carriers...)
+			for j := range cs {
+				switch cs[j].Kind {
+				case Member:
+					cs[j].Index += mOff
+				case Post:
+					cs[j].Index += pOff
+				case Wall:
+					cs[j].Index += wOff
+				}
+			}
+			m.Carriers = cs
+			all.Members = append(all.Members, m)
+		}
+		for _, pt := range p.Posts {
+			pt.ID = fmt.Sprintf("%s-%d", pt.ID, c)
+			all.Posts = append(all.Posts, pt)
+		}
+		for _, w := range p.Walls {
+			w.ID = fmt.Sprintf("%s-%d", w.ID, c)
+			all.Walls = append(all.Walls, w)
+		}
+	}
+	return all
+}
+
+// TestSolveSameOnAnyCoreCount: Solve on 2,100 copies of the two-level
+// plan (14,700 members, 4,200 posts, 18,900 joints: enough for the
+// parallel parts to split) gives the same outcome, in the same order, on
+// one core and on two; and each copy's girder the same as the plan alone
+// (common practice, no source: copies side by side do not interact).
+func TestSolveSameOnAnyCoreCount(t *testing.T) {
+	if testing.Short() {
+		t.Skip("-short: solves 14,700 members twice")
+	}
+	p := manyPaths(2100)
+	var outs [2]*Outcome
+	for i, procs := range []int{1, 2} {
+		old := runtime.GOMAXPROCS(procs)
+		outs[i] = Solve(p, check.Settings{})
+		runtime.GOMAXPROCS(old)
+	}
+	if !reflect.DeepEqual(outs[0], outs[1]) {
+		t.Fatal("the outcome differs between one core and two")
+	}
+	o := outs[1]
+	if len(o.Joints) != 2100*9 || len(o.Errors) != 0 {
+		t.Fatalf("%d joints, want %d; errors %v", len(o.Joints), 2100*9, o.Errors)
+	}
+	for c := 0; c < 5; c++ {
+		alone := Solve(pathPlan(5, 84+12*float64(c)), check.Settings{})
+		g := o.Members[c*7+6]
+		if g.Result.MaxRatio != alone.Members[6].Result.MaxRatio || g.Result.MaxRatio == 0 ||
+			!reflect.DeepEqual(o.Posts[c*2].Cases, alone.Posts[0].Cases) {
+			t.Errorf("copy %d: girder ratio %v, alone %v; post cases %v, alone %v", c, g.Result.MaxRatio,
+				alone.Members[6].Result.MaxRatio, o.Posts[c*2].Cases, alone.Posts[0].Cases)
+		}
+	}
 }

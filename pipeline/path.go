@@ -131,6 +131,8 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 		}
 	}
 	// Posts.
+	lp.Posts = make([]loadpath.PostIn, 0, len(plan.Posts))
+	po.Posts = make([]PostOutcome, 0, len(plan.Posts))
 	for i := range plan.Posts {
 		pt := &plan.Posts[i]
 		pc, checked, size := postInput(p, pt)
@@ -139,6 +141,9 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 	}
 	// Beams: members of the path when they have their own supports.
 	beamMember := make([]int, len(plan.Beams))
+	outIndex := beamOutcomeIndexes(plan) // plan beam -> index into po.Beams
+	po.Beams = make([]BeamOutcome, 0, len(plan.Beams))
+	po.IDs = make([]string, 0, cap(lp.Members))
 	for i := range plan.Beams {
 		b := &plan.Beams[i]
 		beamMember[i] = -1
@@ -174,6 +179,7 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 		}
 	}
 	// Each beam's carriers, now that every beam has its place.
+	marksOn := beamMarks(plan)
 	bi := 0
 	for i := range plan.Beams {
 		b := &plan.Beams[i]
@@ -194,7 +200,7 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 					}
 				case framing.BeamOnBeam:
 					if cb := beamMember[br.Index]; cb >= 0 {
-						at := along(&plan.Beams[br.Index], pointAlong(b, br.AtIn)) + po.Beams[beamOutcomeIndex(plan, br.Index)].Shift
+						at := along(&plan.Beams[br.Index], pointAlong(b, br.AtIn)) + po.Beams[outIndex[br.Index]].Shift
 						c = loadpath.Carrier{Kind: loadpath.Member, Index: cb, AtIn: at, Joint: "beam to beam"}
 					} else {
 						o.Issues.Add(b.Lines[0], CodeLoadLost, dxfimport.SevWarning,
@@ -205,8 +211,8 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 				m.Carriers = append(m.Carriers, c)
 			}
 			// point-load marks on the beam
-			for _, mk := range plan.PointLoads {
-				if mk.Beam == i && mk.Member < 0 && mk.Err == "" {
+			for _, mi := range marksOn[i] {
+				if mk := plan.PointLoads[mi]; mk.Member < 0 && mk.Err == "" {
 					l, name := markLoads(p, mk)
 					l.AtIn, l.Name = mk.AtIn+po.Beams[bi].Shift, name
 					m.Check.PointLoads = append(m.Check.PointLoads, l)
@@ -217,26 +223,26 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 	}
 	// Joists: their results and reactions as found, each bearing to its
 	// beam, wall or rigid support. Identical joists share their reactions.
-	carriedBy := map[[2]int]loadpath.Carrier{}
+	carriedBy := newBearingCarriers(plan)
 	for i := range plan.Beams {
 		b := &plan.Beams[i]
 		if beamMember[i] < 0 {
 			continue
 		}
-		shift := po.Beams[beamOutcomeIndex(plan, i)].Shift
+		shift := po.Beams[outIndex[i]].Shift
 		for _, c := range b.Carried {
 			joint := "joist on beam"
 			if b.Kind == framing.KindFlushBeam || b.Kind == framing.KindLedger {
 				joint = "hanger"
 			}
-			carriedBy[[2]int{c.Member, c.Bearing}] = loadpath.Carrier{Kind: loadpath.Member, Index: beamMember[i], AtIn: c.AtIn + shift, Joint: joint}
+			carriedBy.set(c.Member, c.Bearing, loadpath.Carrier{Kind: loadpath.Member, Index: beamMember[i], AtIn: c.AtIn + shift, Joint: joint})
 		}
 	}
-	softBeamBearings(p, plan, inputs, usable, po, beamMember, o)
+	softBeamBearings(p, plan, inputs, usable, po, beamMember, outIndex, o)
 	reactions := map[string][]check.LoadReactions{}
 	for k := range plan.Members {
 		if !usable[k] || o.Results[k].Status == check.StatusError {
-			if bearsOnBeam(carriedBy, k, len(plan.Members[k].Bearings)) {
+			if carriedBy.any(k) {
 				o.Issues.Add(plan.Members[k].Pos, CodeLoadLost, dxfimport.SevWarning,
 					"%s is in error: the load it would put on the beams under it is not in their checks", plan.Members[k].ID)
 			}
@@ -257,9 +263,10 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 			}
 			reactions[key] = rs
 		}
-		mi := loadpath.MemberIn{ID: plan.Members[k].ID, Check: cm, Result: &o.Results[k], Reactions: rs}
+		mi := loadpath.MemberIn{ID: plan.Members[k].ID, Check: cm, Result: &o.Results[k], Reactions: rs,
+			Carriers: make([]loadpath.Carrier, 0, len(plan.Members[k].Bearings))}
 		for j, b := range plan.Members[k].Bearings {
-			c, ok := carriedBy[[2]int{k, j}]
+			c, ok := carriedBy.get(k, j)
 			if !ok {
 				c = loadpath.Carrier{Kind: loadpath.Rigid}
 				if w, isWall := wallOf[b.Support]; isWall {
@@ -314,21 +321,71 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 	o.Path = po
 }
 
-// beamOutcomeIndex returns the index into PathOutcome.beams of plan beam i
-// (rigid beams are left out of it).
-func beamOutcomeIndex(plan *framing.Plan, i int) int {
+// beamOutcomeIndexes returns, for each plan beam, its index into
+// PathOutcome.Beams (rigid beams are left out of it; theirs is the next
+// beam's).
+func beamOutcomeIndexes(plan *framing.Plan) []int {
+	idx := make([]int, len(plan.Beams))
 	n := 0
-	for j := 0; j < i; j++ {
-		if !plan.Beams[j].Rigid {
+	for i := range plan.Beams {
+		idx[i] = n
+		if !plan.Beams[i].Rigid {
 			n++
 		}
 	}
-	return n
+	return idx
 }
 
-func bearsOnBeam(carriedBy map[[2]int]loadpath.Carrier, k, n int) bool {
-	for j := 0; j < n; j++ {
-		if _, ok := carriedBy[[2]int{k, j}]; ok {
+// beamMarks returns the indexes into plan.PointLoads of the marks on each
+// plan beam, in the plan's order.
+func beamMarks(plan *framing.Plan) [][]int {
+	on := make([][]int, len(plan.Beams))
+	for i, mk := range plan.PointLoads {
+		if mk.Beam >= 0 && mk.Beam < len(on) {
+			on[mk.Beam] = append(on[mk.Beam], i)
+		}
+	}
+	return on
+}
+
+// bearingCarriers holds what carries each bearing of each plan member,
+// when a beam does: member k's bearing j is item off[k]+j.
+type bearingCarriers struct {
+	off []int
+	c   []loadpath.Carrier
+	ok  []bool
+}
+
+func newBearingCarriers(plan *framing.Plan) *bearingCarriers {
+	bc := &bearingCarriers{off: make([]int, len(plan.Members)+1)}
+	for k := range plan.Members {
+		bc.off[k+1] = bc.off[k] + len(plan.Members[k].Bearings)
+	}
+	n := bc.off[len(plan.Members)]
+	bc.c, bc.ok = make([]loadpath.Carrier, n), make([]bool, n)
+	return bc
+}
+
+// set records c as the carrier of member k's bearing j (the last one set
+// stands); a member or bearing the plan does not have is never asked for.
+func (bc *bearingCarriers) set(k, j int, c loadpath.Carrier) {
+	if k < 0 || k >= len(bc.off)-1 || j < 0 || j >= bc.off[k+1]-bc.off[k] {
+		return
+	}
+	bc.c[bc.off[k]+j], bc.ok[bc.off[k]+j] = c, true
+}
+
+func (bc *bearingCarriers) get(k, j int) (loadpath.Carrier, bool) {
+	if k < 0 || k >= len(bc.off)-1 || j < 0 || j >= bc.off[k+1]-bc.off[k] {
+		return loadpath.Carrier{}, false
+	}
+	return bc.c[bc.off[k]+j], bc.ok[bc.off[k]+j]
+}
+
+// any says whether a beam carries any bearing of member k.
+func (bc *bearingCarriers) any(k int) bool {
+	for j := bc.off[k]; j < bc.off[k+1]; j++ {
+		if bc.ok[j] {
 			return true
 		}
 	}
@@ -548,7 +605,7 @@ func postInput(p *project.Project, pt *framing.Post) (check.Post, bool, string) 
 // checked against its own Fc_perp and the support's species/grade, not
 // against the beam's user or glulam material, so the lower value of the
 // beam would go unchecked; the warning says so rather than pass it.
-func softBeamBearings(p *project.Project, plan *framing.Plan, inputs []check.Member, usable []bool, po *PathOutcome, beamMember []int, o *Outcome) {
+func softBeamBearings(p *project.Project, plan *framing.Plan, inputs []check.Member, usable []bool, po *PathOutcome, beamMember, outIndex []int, o *Outcome) {
 	mats := p.Materials
 	if mats == nil {
 		mats = check.BuiltinMaterials()
@@ -558,7 +615,7 @@ func softBeamBearings(p *project.Project, plan *framing.Plan, inputs []check.Mem
 		if beamMember[i] < 0 || len(b.Carried) == 0 {
 			continue
 		}
-		cm := po.Beams[beamOutcomeIndex(plan, i)].Input
+		cm := po.Beams[outIndex[i]].Input
 		_, scl := mats.IsSCL(cm.Species)
 		if !scl && !strings.EqualFold(cm.Species, check.GlulamSpecies) {
 			continue
