@@ -21,9 +21,13 @@ package loadpath
 
 import (
 	"fmt"
+	"runtime"
+	"slices"
 	"sort"
 	"strconv"
 	"strings"
+	"sync"
+	"sync/atomic"
 
 	"framecheck/check"
 	"framecheck/internal/par"
@@ -155,73 +159,23 @@ func Solve(p *Plan, s check.Settings) *Outcome {
 	if len(cyc) > 0 {
 		o.Errors = append(o.Errors, "load path cycle: "+names(p, cyc))
 	}
-	incoming := make([][]check.PointLoad, len(p.Members))
-	solved := map[string]solvedMember{}
+	st := &solveState{p: p, s: s, o: o, order: order, incoming: make([][]check.PointLoad, len(p.Members)),
+		solved: map[string]*solvedMember{}, fedIn: make([]int, len(p.Members))}
 	o.Joints = make([]Joint, 0, countJoints(p))
-	for i, k := range order {
-		mi := &p.Members[k]
-		cm := mi.Check
-		cm.PointLoads = append(append([]check.PointLoad(nil), cm.PointLoads...), incoming[k]...)
-		out := &o.Members[k]
-		out.Order, out.Input = i, cm
-		if len(mi.Carriers) != len(cm.Bearings) {
-			out.Result = errorResult(*mi, fmt.Sprintf("%d carriers for %d bearings", len(mi.Carriers), len(cm.Bearings)))
-			o.Errors = append(o.Errors, mi.ID+": "+out.Result.Messages[0])
-			continue
+	// The members in order, a batch at a time: a batch is a stretch of the
+	// order where none passes a load to another, so that their inputs are
+	// complete when it starts. Its inputs and its analyses run on every
+	// core, each writing its own members; what adds up or appends (joints,
+	// loads passed on, totals, errors) follows the order, one member after
+	// the other, as if solved one by one.
+	for lo, batch := 0, 1; lo < len(order); batch++ {
+		hi := st.batchEnd(lo, batch)
+		st.prepare(lo, hi)
+		st.analyse(lo, hi)
+		for i := lo; i < hi; i++ {
+			st.pass(i, i-lo)
 		}
-		var rs []check.LoadReactions
-		var err error
-		if mi.Result != nil && mi.Reactions != nil && len(incoming[k]) == 0 {
-			out.Result, rs = *mi.Result, mi.Reactions
-		} else {
-			// Members alike for design (the same input but for the ID and
-			// the names of the loads they carry, the same candidates) are
-			// analysed once: a plan repeats its beams run after run.
-			key := solveKey(cm, mi)
-			sv, ok := solved[key]
-			if !ok {
-				if len(mi.Candidates) > 0 {
-					cm = pickSize(cm, mi, s)
-				}
-				sv.input = cm
-				sv.result, sv.reactions, sv.err = check.CheckMemberReactions(cm, s)
-				solved[key] = sv
-			}
-			cm.Size, cm.SelfWeightPlf = sv.input.Size, sv.input.SelfWeightPlf
-			out.Input = cm
-			out.Result, rs, err = sv.result, sv.reactions, sv.err
-			out.Result.ID = cm.ID
-		}
-		own := cm // its own loads, as checked (the size picked sets its weight)
-		own.PointLoads = mi.Check.PointLoads
-		addApplied(&o.Applied, own)
-		if err != nil {
-			// nothing passes on from a member that cannot be analysed: its
-			// carriers are short of its load, which the outcome says
-			o.Errors = append(o.Errors, mi.ID+": its reactions could not be found ("+err.Error()+"); the members under it miss its load")
-			continue
-		}
-		out.Passed = rs
-		for j, r := range rs {
-			c := mi.Carriers[j]
-			l := loadsOf(r)
-			// the joints to state: a beam's, and a joist's on a beam or a post
-			if mi.Beam || c.Kind == Member || c.Kind == Post {
-				o.Joints = append(o.Joints, joint(k, j, c, l))
-			}
-			switch c.Kind {
-			case Member:
-				incoming[c.Index] = append(incoming[c.Index], r.PointLoad(c.AtIn, mi.ID))
-			case Post:
-				addLoads(&o.Posts[c.Index].Loads, l)
-				addLoads(&o.Delivered, l)
-			case Wall:
-				addLoads(&o.Walls[c.Index], l)
-				addLoads(&o.Delivered, l)
-			default:
-				addLoads(&o.Delivered, l)
-			}
-		}
+		lo = hi
 	}
 	// Each joint's demand and each post's check depend on its own loads
 	// only: both cores, each range writing its own items.
@@ -265,10 +219,201 @@ func countJoints(p *Plan) int {
 // solvedMember is one analysis of a member, shared by the members alike
 // for design (solveKey).
 type solvedMember struct {
+	rep       int          // the member analysed: the first of them in the order
 	input     check.Member // as analysed: the size picked, its weight
 	result    check.Result
 	reactions []check.LoadReactions
 	err       error
+}
+
+// solveState is Solve's work in progress.
+type solveState struct {
+	p        *Plan
+	s        check.Settings
+	o        *Outcome
+	order    []int
+	incoming [][]check.PointLoad      // the reactions passed to each member so far
+	solved   map[string]*solvedMember // by solveKey
+	fedIn    []int                    // the batch that passes a load to each member (0: none yet)
+	// for the members of the batch, by position in the order from its
+	// start: how each is solved and, when analysed, its analysis
+	how  []solveHow
+	keys []string
+	sv   []*solvedMember
+	todo []*solvedMember // the analyses the batch has to make
+}
+
+// solveHow says how a member of a batch is solved.
+type solveHow uint8
+
+const (
+	howMismatch solveHow = iota // its carriers and bearings differ in number: an error
+	howGiven                    // its check and reactions came with it
+	howAnalyse                  // analysed (or alike to a member analysed)
+)
+
+// batchEnd returns where the batch starting at order[lo] ends: before the
+// first member that a member of the batch passes a load to.
+func (st *solveState) batchEnd(lo, batch int) int {
+	hi := lo
+	for ; hi < len(st.order); hi++ {
+		k := st.order[hi]
+		if hi > lo && st.fedIn[k] == batch {
+			break
+		}
+		for _, c := range st.p.Members[k].Carriers {
+			if c.Kind == Member && c.Index >= 0 && c.Index < len(st.fedIn) {
+				st.fedIn[c.Index] = batch
+			}
+		}
+	}
+	return hi
+}
+
+// prepare writes the input of each member of the batch order[lo:hi] (its
+// own point loads, then those passed to it) and how it is solved, on
+// every core.
+func (st *solveState) prepare(lo, hi int) {
+	n := hi - lo
+	st.how = slices.Grow(st.how[:0], n)[:n]
+	st.keys = slices.Grow(st.keys[:0], n)[:n]
+	st.sv = slices.Grow(st.sv[:0], n)[:n]
+	par.Ranges(n, func(a, b int) {
+		for x := a; x < b; x++ {
+			i := lo + x
+			k := st.order[i]
+			mi := &st.p.Members[k]
+			out := &st.o.Members[k]
+			out.Order, out.Input = i, mi.Check
+			in := st.incoming[k]
+			out.Input.PointLoads = nil // none: nil, as the copy of none
+			if n := len(mi.Check.PointLoads) + len(in); n > 0 {
+				out.Input.PointLoads = append(append(make([]check.PointLoad, 0, n), mi.Check.PointLoads...), in...)
+			}
+			st.keys[x], st.sv[x] = "", nil
+			switch {
+			case len(mi.Carriers) != len(mi.Check.Bearings):
+				st.how[x] = howMismatch
+			case mi.Result != nil && mi.Reactions != nil && len(in) == 0:
+				st.how[x] = howGiven
+			default:
+				st.how[x] = howAnalyse
+				st.keys[x] = solveKey(out.Input, mi)
+			}
+		}
+	})
+}
+
+// analyse makes the analyses of the batch order[lo:hi]: members alike
+// for design (the same input but for the ID and the names of the loads
+// they carry, the same candidates) are analysed once, as the first of them
+// in the order (a plan repeats its beams run after run); the analyses run
+// on every core.
+func (st *solveState) analyse(lo, hi int) {
+	st.todo = st.todo[:0]
+	for x := range hi - lo {
+		if st.how[x] != howAnalyse {
+			continue
+		}
+		sv, ok := st.solved[st.keys[x]]
+		if !ok {
+			sv = &solvedMember{rep: st.order[lo+x]}
+			st.solved[st.keys[x]] = sv
+			st.todo = append(st.todo, sv)
+		}
+		st.sv[x] = sv
+	}
+	spread(len(st.todo), func(t int) {
+		sv := st.todo[t]
+		mi := &st.p.Members[sv.rep]
+		cm := st.o.Members[sv.rep].Input
+		if len(mi.Candidates) > 0 {
+			cm = pickSize(cm, mi, st.s)
+		}
+		sv.input = cm
+		sv.result, sv.reactions, sv.err = check.CheckMemberReactions(cm, st.s)
+	})
+}
+
+// pass states the outcome of the member at order[i], the x-th of its
+// batch, and passes its reactions on: to the members that carry it as
+// point loads, to posts, walls and rigid supports as loads, and to the
+// joints.
+func (st *solveState) pass(i, x int) {
+	p, o := st.p, st.o
+	k := st.order[i]
+	mi := &p.Members[k]
+	out := &o.Members[k]
+	var rs []check.LoadReactions
+	var err error
+	switch st.how[x] {
+	case howMismatch:
+		out.Result = errorResult(*mi, fmt.Sprintf("%d carriers for %d bearings", len(mi.Carriers), len(out.Input.Bearings)))
+		o.Errors = append(o.Errors, mi.ID+": "+out.Result.Messages[0])
+		return
+	case howGiven:
+		out.Result, rs = *mi.Result, mi.Reactions
+	default:
+		sv := st.sv[x]
+		out.Input.Size, out.Input.SelfWeightPlf = sv.input.Size, sv.input.SelfWeightPlf
+		out.Result, rs, err = sv.result, sv.reactions, sv.err
+		out.Result.ID = out.Input.ID
+	}
+	// its own loads, as checked (the size picked sets its weight)
+	addApplied(&o.Applied, &out.Input, mi.Check.PointLoads)
+	if err != nil {
+		// nothing passes on from a member that cannot be analysed: its
+		// carriers are short of its load, which the outcome says
+		o.Errors = append(o.Errors, mi.ID+": its reactions could not be found ("+err.Error()+"); the members under it miss its load")
+		return
+	}
+	out.Passed = rs
+	for j, r := range rs {
+		c := mi.Carriers[j]
+		l := loadsOf(r)
+		// the joints to state: a beam's, and a joist's on a beam or a post
+		if mi.Beam || c.Kind == Member || c.Kind == Post {
+			o.Joints = append(o.Joints, joint(k, j, c, l))
+		}
+		switch c.Kind {
+		case Member:
+			st.incoming[c.Index] = append(st.incoming[c.Index], r.PointLoad(c.AtIn, mi.ID))
+		case Post:
+			addLoads(&o.Posts[c.Index].Loads, l)
+			addLoads(&o.Delivered, l)
+		case Wall:
+			addLoads(&o.Walls[c.Index], l)
+			addLoads(&o.Delivered, l)
+		default:
+			addLoads(&o.Delivered, l)
+		}
+	}
+}
+
+// spread calls fn(i) for every i in [0, n) on every core, handing the
+// indexes out one at a time (analyses differ in cost: a beam sized from
+// candidates is checked once per size tried). fn must write only what
+// belongs to index i.
+func spread(n int, fn func(i int)) {
+	workers := min(runtime.GOMAXPROCS(0), n)
+	if workers <= 1 {
+		for i := 0; i < n; i++ {
+			fn(i)
+		}
+		return
+	}
+	var next atomic.Int64
+	var wg sync.WaitGroup
+	for w := 0; w < workers; w++ {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			for i := int(next.Add(1)) - 1; i < n; i = int(next.Add(1)) - 1 {
+				fn(i)
+			}
+		}()
+	}
+	wg.Wait()
 }
 
 // solveKey is what makes two members alike for Solve: the check input but
@@ -384,8 +529,8 @@ func addLoads(dst *Loads, l Loads) {
 
 // addApplied adds the loads member m itself puts on the plan: its area
 // loads on its tributary width over each stretch, its own weight and its
-// point loads (reactions passed by other members are added by them).
-func addApplied(dst *Loads, m check.Member) {
+// point loads pls (reactions passed by other members are added by them).
+func addApplied(dst *Loads, m *check.Member, pls []check.PointLoad) {
 	t := m.TribIn / 144 // psf x in / 144 = lb/in
 	add := func(l check.AreaLoads, lenIn float64) {
 		ud := l.DeadPsf
@@ -405,7 +550,7 @@ func addApplied(dst *Loads, m check.Member) {
 	}
 	sw := m.SelfWeightPlf / 12 * m.LengthIn
 	addLoads(dst, Loads{DeadLb: sw, UpliftDeadLb: sw})
-	for _, p := range m.PointLoads {
+	for _, p := range pls {
 		ud := p.DeadLb
 		if p.HasUpliftDead {
 			ud = p.UpliftDeadLb
@@ -418,7 +563,7 @@ func addApplied(dst *Loads, m check.Member) {
 // cos2 is the factor check applies to wind on a sloped rafter (wind
 // normal to the roof, per sloped area, on the horizontal projection:
 // 1 / cos^2 of the slope; statics).
-func cos2(m check.Member) float64 {
+func cos2(m *check.Member) float64 {
 	if m.PitchRise12 <= 0 {
 		return 1
 	}
