@@ -271,8 +271,8 @@ func (st *solveState) batchEnd(lo, batch int) int {
 }
 
 // prepare writes the input of each member of the batch order[lo:hi] (its
-// own point loads, then those passed to it) and how it is solved, on
-// every core.
+// own point loads, then those passed to it), how it is solved and, when
+// its check came with it, its result and reactions, on every core.
 func (st *solveState) prepare(lo, hi int) {
 	n := hi - lo
 	st.how = slices.Grow(st.how[:0], n)[:n]
@@ -296,6 +296,7 @@ func (st *solveState) prepare(lo, hi int) {
 				st.how[x] = howMismatch
 			case mi.Result != nil && mi.Reactions != nil && len(in) == 0:
 				st.how[x] = howGiven
+				out.Result, out.Passed = *mi.Result, mi.Reactions
 			default:
 				st.how[x] = howAnalyse
 				st.keys[x] = solveKey(out.Input, mi)
@@ -352,7 +353,7 @@ func (st *solveState) pass(i, x int) {
 		o.Errors = append(o.Errors, mi.ID+": "+out.Result.Messages[0])
 		return
 	case howGiven:
-		out.Result, rs = *mi.Result, mi.Reactions
+		rs = out.Passed // and its Result, set by prepare
 	default:
 		sv := st.sv[x]
 		out.Input.Size, out.Input.SelfWeightPlf = sv.input.Size, sv.input.SelfWeightPlf

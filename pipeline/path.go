@@ -10,6 +10,7 @@ import (
 	"framecheck/check"
 	"framecheck/dxfimport"
 	"framecheck/framing"
+	"framecheck/internal/par"
 	"framecheck/loadpath"
 	"framecheck/project"
 )
@@ -239,7 +240,12 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 		}
 	}
 	softBeamBearings(p, plan, inputs, usable, po, beamMember, outIndex, o)
+	// Which joists go on the path, in the plan's order, and their
+	// reactions (one analysis per key); then their items, on every core.
 	reactions := map[string][]check.LoadReactions{}
+	onPath := make([]int, 0, len(plan.Members))
+	rsOf := make([][]check.LoadReactions, len(plan.Members))
+	nCarriers := 0
 	for k := range plan.Members {
 		if !usable[k] || o.Results[k].Status == check.StatusError {
 			if carriedBy.any(k) {
@@ -248,14 +254,16 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 			}
 			continue
 		}
-		cm := inputs[k]
 		key := keys[k] // checkAll's, unless --size changed the size
-		if cm.Size != o.Results[k].Size || key == "" {
+		if inputs[k].Size != o.Results[k].Size || key == "" {
+			cm := inputs[k]
 			cm.Size = o.Results[k].Size
 			key = check.MemberKey(cm)
 		}
 		rs, ok := reactions[key]
 		if !ok {
+			cm := inputs[k]
+			cm.Size = o.Results[k].Size
 			var err error
 			rs, err = check.ServiceReactions(cm, s)
 			if err != nil {
@@ -263,21 +271,39 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 			}
 			reactions[key] = rs
 		}
-		mi := loadpath.MemberIn{ID: plan.Members[k].ID, Check: cm, Result: &o.Results[k], Reactions: rs,
-			Carriers: make([]loadpath.Carrier, 0, len(plan.Members[k].Bearings))}
-		for j, b := range plan.Members[k].Bearings {
-			c, ok := carriedBy.get(k, j)
-			if !ok {
-				c = loadpath.Carrier{Kind: loadpath.Rigid}
-				if w, isWall := wallOf[b.Support]; isWall {
-					c = loadpath.Carrier{Kind: loadpath.Wall, Index: w}
-				}
-			}
-			mi.Carriers = append(mi.Carriers, c)
-		}
-		lp.Members = append(lp.Members, mi)
-		po.IDs = append(po.IDs, plan.Members[k].ID)
+		rsOf[k] = rs
+		onPath = append(onPath, k)
+		nCarriers += len(plan.Members[k].Bearings)
 	}
+	first := len(lp.Members)
+	lp.Members = lp.Members[:first+len(onPath)]
+	po.IDs = po.IDs[:first+len(onPath)]
+	carriers := make([]loadpath.Carrier, nCarriers)
+	offs := make([]int, len(onPath)+1)
+	for x, k := range onPath {
+		offs[x+1] = offs[x] + len(plan.Members[k].Bearings)
+	}
+	// each range writes only its own members' items and carriers
+	par.Ranges(len(onPath), func(lo, hi int) {
+		for x := lo; x < hi; x++ {
+			k := onPath[x]
+			cs := carriers[offs[x]:offs[x+1]:offs[x+1]]
+			for j, b := range plan.Members[k].Bearings {
+				c, ok := carriedBy.get(k, j)
+				if !ok {
+					c = loadpath.Carrier{Kind: loadpath.Rigid}
+					if w, isWall := wallOf[b.Support]; isWall {
+						c = loadpath.Carrier{Kind: loadpath.Wall, Index: w}
+					}
+				}
+				cs[j] = c
+			}
+			mi := &lp.Members[first+x]
+			*mi = loadpath.MemberIn{ID: plan.Members[k].ID, Check: inputs[k], Result: &o.Results[k], Reactions: rsOf[k], Carriers: cs}
+			mi.Check.Size = o.Results[k].Size
+			po.IDs[first+x] = plan.Members[k].ID
+		}
+	})
 	solved := loadpath.Solve(lp, s)
 	po.Solved = solved
 	for _, e := range solved.Errors {
