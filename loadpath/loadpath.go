@@ -183,18 +183,44 @@ func Solve(p *Plan, s check.Settings) *Outcome {
 		demands(o.Joints[lo:hi], s)
 	})
 	par.Ranges(len(p.Posts), func(lo, hi int) {
-		for i := lo; i < hi; i++ {
-			po := &o.Posts[i]
-			po.Loads.HasUpliftDead = true
-			po.Cases = check.LoadCases(po.Loads, s)
-			if p.Posts[i].Checked {
-				pc := p.Posts[i].Check
-				pc.Loads = po.Loads
-				po.Result = check.CheckPost(pc, s)
-			}
-		}
+		checkPosts(p.Posts[lo:hi], o.Posts[lo:hi], s)
 	})
 	return o
+}
+
+// checkPosts states the cases of each post of ps under the loads found
+// (outs[i].Loads) and checks those to be checked. A post's cases depend
+// on its loads only, its check on the post but for its ID: posts alike
+// (under beams alike) are worked out once, each keeping its own copy of
+// the lists.
+func checkPosts(ps []PostIn, outs []PostOut, s check.Settings) {
+	cases := map[Loads][]check.PostCase{}
+	checked := map[check.Post]check.PostResult{}
+	for i := range ps {
+		po := &outs[i]
+		po.Loads.HasUpliftDead = true
+		cs, ok := cases[po.Loads]
+		if !ok {
+			cs = check.LoadCases(po.Loads, s)
+			cases[po.Loads] = cs
+		}
+		po.Cases = slices.Clone(cs)
+		if !ps[i].Checked {
+			continue
+		}
+		pc := ps[i].Check
+		pc.Loads = po.Loads
+		key := pc
+		key.ID = ""
+		r, ok := checked[key]
+		if !ok {
+			r = check.CheckPost(key, s)
+			checked[key] = r
+		}
+		r.ID = pc.ID
+		r.Checks, r.Cases, r.Messages = slices.Clone(r.Checks), slices.Clone(r.Cases), slices.Clone(r.Messages)
+		po.Result = r
+	}
 }
 
 // countJoints returns how many joints Solve states at most: a beam's

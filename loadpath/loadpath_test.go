@@ -228,6 +228,7 @@ func manyPaths(n int) *Plan {
 		}
 		for _, pt := range p.Posts {
 			pt.ID = fmt.Sprintf("%s-%d", pt.ID, c)
+			pt.Check.ID = pt.ID
 			all.Posts = append(all.Posts, pt)
 		}
 		for _, w := range p.Walls {
@@ -241,8 +242,10 @@ func manyPaths(n int) *Plan {
 // TestSolveSameOnAnyCoreCount: Solve on 2,100 copies of the two-level
 // plan (14,700 members, 4,200 posts, 18,900 joints: enough for the
 // parallel parts to split) gives the same outcome, in the same order, on
-// one core and on two; and each copy's girder the same as the plan alone
-// (common practice, no source: copies side by side do not interact).
+// one core and on two; each post the result of checking it alone, with
+// its own ID and lists (posts alike are checked once); and each copy's
+// girder the same as the plan alone (common practice, no source: copies
+// side by side do not interact).
 func TestSolveSameOnAnyCoreCount(t *testing.T) {
 	if testing.Short() {
 		t.Skip("-short: solves 14,700 members twice")
@@ -260,6 +263,19 @@ func TestSolveSameOnAnyCoreCount(t *testing.T) {
 	o := outs[1]
 	if len(o.Joints) != 2100*9 || len(o.Errors) != 0 {
 		t.Fatalf("%d joints, want %d; errors %v", len(o.Joints), 2100*9, o.Errors)
+	}
+	// posts alike are checked once: each has the result of its own check,
+	// its own ID and its own lists
+	for _, i := range []int{0, 1, 10, 11, 4199} {
+		pc := p.Posts[i].Check
+		pc.Loads = o.Posts[i].Loads
+		if want := check.CheckPost(pc, check.Settings{}); !reflect.DeepEqual(o.Posts[i].Result, want) || want.ID != pc.ID {
+			t.Errorf("post %d: %+v, checked alone %+v", i, o.Posts[i].Result, want)
+		}
+	}
+	if a, b := o.Posts[0].Result, o.Posts[10].Result; len(a.Checks) == 0 || &a.Checks[0] == &b.Checks[0] || &a.Cases[0] == &b.Cases[0] ||
+		&o.Posts[0].Cases[0] == &o.Posts[10].Cases[0] {
+		t.Error("two posts alike share a list")
 	}
 	for c := 0; c < 5; c++ {
 		alone := Solve(pathPlan(5, 84+12*float64(c)), check.Settings{})
