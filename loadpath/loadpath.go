@@ -491,28 +491,45 @@ func pickSize(cm check.Member, mi *MemberIn, s check.Settings) check.Member {
 func orderMembers(p *Plan) (order, cyc []int) {
 	n := len(p.Members)
 	waiting := make([]int, n) // members still to pass loads to k
-	carriedBy := make([][]int, n)
-	for k, m := range p.Members {
-		for _, c := range m.Carriers {
-			if c.Kind == Member && c.Index >= 0 && c.Index < n && c.Index != k {
+	// the members carrying k are carrying[start[k]:start[k+1]], in the
+	// order of k's carriers
+	start := make([]int, n+1)
+	carries := func(k int, c Carrier) bool {
+		return c.Kind == Member && c.Index >= 0 && c.Index < n && c.Index != k
+	}
+	for k := range p.Members {
+		for _, c := range p.Members[k].Carriers {
+			if carries(k, c) {
 				waiting[c.Index]++
-				carriedBy[k] = append(carriedBy[k], c.Index)
+				start[k+1]++
 			}
 		}
 	}
-	var ready []int
+	for k := 0; k < n; k++ {
+		start[k+1] += start[k]
+	}
+	carrying := make([]int, start[n])
 	for k := range p.Members {
-		if waiting[k] == 0 {
-			ready = append(ready, k)
+		at := start[k]
+		for _, c := range p.Members[k].Carriers {
+			if carries(k, c) {
+				carrying[at] = c.Index
+				at++
+			}
 		}
 	}
-	for len(ready) > 0 {
-		k := ready[0]
-		ready = ready[1:]
-		order = append(order, k)
-		for _, c := range carriedBy[k] {
+	order = make([]int, 0, n)
+	for k := range p.Members {
+		if waiting[k] == 0 {
+			order = append(order, k)
+		}
+	}
+	// order is also the queue: the members ready, in the order they became so
+	for next := 0; next < len(order); next++ {
+		k := order[next]
+		for _, c := range carrying[start[k]:start[k+1]] {
 			if waiting[c]--; waiting[c] == 0 {
-				ready = append(ready, c)
+				order = append(order, c)
 			}
 		}
 	}
