@@ -145,13 +145,28 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 	outIndex := beamOutcomeIndexes(plan) // plan beam -> index into po.Beams
 	po.Beams = make([]BeamOutcome, 0, len(plan.Beams))
 	po.IDs = make([]string, 0, cap(lp.Members))
+	// beamInput reads the plan and the project only: each range writes
+	// its own beams' inputs
+	type beamIn struct {
+		cm    check.Member
+		shift float64
+		msg   string
+	}
+	ins := make([]beamIn, len(plan.Beams))
+	par.Ranges(len(plan.Beams), func(lo, hi int) {
+		for i := lo; i < hi; i++ {
+			if !plan.Beams[i].Rigid {
+				ins[i].cm, ins[i].shift, ins[i].msg = beamInput(p, plan, &plan.Beams[i])
+			}
+		}
+	})
 	for i := range plan.Beams {
 		b := &plan.Beams[i]
 		beamMember[i] = -1
 		if b.Rigid {
 			continue
 		}
-		cm, shift, msg := beamInput(p, plan, b)
+		cm, shift, msg := ins[i].cm, ins[i].shift, ins[i].msg
 		bo := BeamOutcome{Beam: b, Input: cm, Shift: shift}
 		if msg != "" {
 			bo.Res = check.Result{ID: b.ID, Size: cm.Size, Status: check.StatusError, Messages: []string{msg}}
