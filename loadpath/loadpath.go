@@ -221,14 +221,35 @@ func Solve(p *Plan, s check.Settings) *Outcome {
 			}
 		}
 	}
+	// Posts alike (the same check but for the ID, the same loads) are
+	// checked once and share the result's lists: a plan repeats its posts
+	// beam line after beam line.
+	cases := map[Loads][]check.PostCase{}
+	posts := map[check.Post]check.PostResult{}
 	for i := range p.Posts {
 		po := &o.Posts[i]
 		po.Loads.HasUpliftDead = true
-		po.Cases = check.LoadCases(po.Loads, s)
+		cs, ok := cases[po.Loads]
+		if !ok {
+			cs = check.LoadCases(po.Loads, s)
+			cases[po.Loads] = cs
+		}
+		po.Cases = cs
 		if p.Posts[i].Checked {
 			pc := p.Posts[i].Check
 			pc.Loads = po.Loads
-			po.Result = check.CheckPost(pc, s)
+			id := pc.ID
+			if id == "" {
+				id = p.Posts[i].ID
+			}
+			pc.ID = ""
+			r, ok := posts[pc]
+			if !ok {
+				r = check.CheckPost(pc, s)
+				posts[pc] = r
+			}
+			r.ID = id
+			po.Result = r
 		}
 	}
 	return o

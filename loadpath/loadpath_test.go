@@ -3,6 +3,7 @@ package loadpath
 import (
 	"fmt"
 	"math"
+	"reflect"
 	"strings"
 	"testing"
 
@@ -198,4 +199,48 @@ func TestBeamSizing(t *testing.T) {
 	sec, _ := check.ParseSize(b.Input.Size)
 	near(t, "self-weight of the size picked", b.Input.SelfWeightPlf, sec.AreaIn2/144*35, 1e-9, "area x 35 pcf")
 	near(t, "D delivered", o.Delivered.DeadLb, o.Applied.DeadLb, 0.1, "statics: nothing lost")
+}
+
+// TestPostsAlikeCheckedOnce: two posts of the same size, lumber and height
+// under the same loads (the girder's load at its mid-length, statics)
+// share one check, each keeping its own ID, and that check is what
+// check.CheckPost gives each post alone (common practice, no source).
+func TestPostsAlikeCheckedOnce(t *testing.T) {
+	p := twoLevelPlan()
+	p.Members[5].Carriers[1].AtIn = 60 // B1 on G1 at mid-length
+	s := check.DefaultSettings()
+	o := Solve(p, s)
+	if len(o.Errors) > 0 {
+		t.Fatalf("errors: %v", o.Errors)
+	}
+	a, b := o.Posts[0], o.Posts[1]
+	if a.Loads != b.Loads {
+		t.Fatalf("posts' loads %+v and %+v, want equal (statics: the load at mid-length)", a.Loads, b.Loads)
+	}
+	if a.Result.ID != "P1" || b.Result.ID != "P2" {
+		t.Errorf("post ids %q, %q", a.Result.ID, b.Result.ID)
+	}
+	if len(a.Result.Checks) == 0 || &a.Result.Checks[0] != &b.Result.Checks[0] {
+		t.Errorf("the two posts alike were checked apart")
+	}
+	for i, po := range o.Posts {
+		pc := p.Posts[i].Check
+		pc.ID, pc.Loads = p.Posts[i].ID, po.Loads
+		want := check.CheckPost(pc, s)
+		got := po.Result
+		if len(got.Checks) != len(want.Checks) {
+			t.Fatalf("post %s: %d checks, want %d", pc.ID, len(got.Checks), len(want.Checks))
+		}
+		for k := range want.Checks {
+			g, w := got.Checks[k], want.Checks[k]
+			if g.Kind != w.Kind || g.Combo != w.Combo || g.Actual != w.Actual || g.Allowable != w.Allowable || g.Ratio != w.Ratio ||
+				!reflect.DeepEqual(g.Trace(), w.Trace()) {
+				t.Errorf("post %s check %d: %+v, want %+v", pc.ID, k, g, w)
+			}
+		}
+		got.Checks, want.Checks = nil, nil
+		if !reflect.DeepEqual(got, want) {
+			t.Errorf("post %s: %+v, want %+v", pc.ID, got, want)
+		}
+	}
 }
