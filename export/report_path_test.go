@@ -1,6 +1,8 @@
 package export
 
 import (
+	"os"
+	"path/filepath"
 	"strconv"
 	"strings"
 	"testing"
@@ -260,5 +262,42 @@ func TestReportPathTables(t *testing.T) {
 	}
 	if txt := repText(beams); !strings.Contains(txt, "deflection over L/360") || !strings.Contains(txt, "carries J9, whose bearing is short") {
 		t.Errorf("beams' messages not listed: %q", txt)
+	}
+}
+
+// BenchmarkWriteReportLoadPath writes the report of a 100,000-member plan
+// with a load path of the size samples/bigplan -joists 100000 -beams gives
+// (4,338 beams of 30 marks, 16,475 posts, 116,564 connections, 23,323
+// foundation lines): "distinct" with every post and foundation line's
+// loads its own (the most rows), "alike" with 400 distinct loads.
+func BenchmarkWriteReportLoadPath(b *testing.B) {
+	for _, alike := range []int{0, 400} {
+		name := "distinct"
+		if alike > 0 {
+			name = "alike"
+		}
+		b.Run(name, func(b *testing.B) {
+			r, g := repBigResults(b, 100_000)
+			r.LoadPath = bigLoadPath(4338, 16475, 116564, 23323)
+			if alike > 0 {
+				lp := r.LoadPath
+				for i := range lp.Posts {
+					lp.Posts[i].Loads, lp.Posts[i].DownLb = lp.Posts[i%alike].Loads, lp.Posts[i%alike].DownLb
+				}
+				for i := range lp.Foundation {
+					lp.Foundation[i].Loads, lp.Foundation[i].PerFoot = lp.Foundation[i%alike].Loads, lp.Foundation[i%alike].PerFoot
+				}
+			}
+			path := filepath.Join(b.TempDir(), "report.html")
+			b.ReportAllocs()
+			for b.Loop() {
+				if err := WriteReport(path, r, g, reportWhen); err != nil {
+					b.Fatal(err)
+				}
+			}
+			if fi, err := os.Stat(path); err == nil {
+				b.ReportMetric(float64(fi.Size())/1e6, "MB")
+			}
+		})
 	}
 }
