@@ -277,10 +277,21 @@ func sizeRuns(groups [][]int, inputs []check.Member, shifts []float64, usable []
 func checkAll(inputs []check.Member, shifts []float64, usable []bool, s check.Settings, p *project.Project, o *Outcome) (keys []string) {
 	keys = make([]string, len(inputs))
 	par.Ranges(len(inputs), func(lo, hi int) {
+		// members alike share one key string: a plan repeats a few
+		// hundred inputs a hundred thousand times
+		var buf []byte
+		seen := map[string]string{}
 		for k := lo; k < hi; k++ {
-			if usable[k] {
-				keys[k] = check.MemberKey(inputs[k])
+			if !usable[k] {
+				continue
 			}
+			buf = check.AppendMemberKey(buf[:0], &inputs[k])
+			key, ok := seen[string(buf)]
+			if !ok {
+				key = string(buf)
+				seen[key] = key
+			}
+			keys[k] = key
 		}
 	})
 	// twin[k] is the index into order of the first member identical to k
