@@ -77,6 +77,11 @@ func FramingOptions(p *project.Project) framing.Options {
 	for _, r := range p.Lumber.ByLayer {
 		o.ByLayer = append(o.ByLayer, framing.LumberRule{Layers: r.Layers, Species: r.Species, Grade: r.Grade, Size: r.Size})
 	}
+	mats := p.Materials
+	if mats == nil {
+		mats = check.BuiltinMaterials()
+	}
+	o.MaterialCallout = mats.ReadSCLCallout // joist callouts in actual inches: structural composite lumber
 	o.DefaultZone = p.Loads.DefaultZone
 	if o.DefaultZone == "" && len(p.Zones) == 1 {
 		o.DefaultZone = p.Zones[0].Name
@@ -158,6 +163,12 @@ func Run(in Input) (*Outcome, error) {
 	for k := range plan.Members {
 		if usable[k] && o.Results[k].Size != "" {
 			plan.Members[k].Size = o.Results[k].Size
+		}
+		// a callout naming a material of one grade without it
+		// ("1 3/4 x 11 7/8 LVL"): the grade the check took, for the
+		// marks and the takeoff
+		if usable[k] && plan.Members[k].Grade == "" && o.Results[k].Status != check.StatusError {
+			plan.Members[k].Grade = o.Results[k].Grade
 		}
 	}
 	// Rafters drawn in plan are ordered at their sloped length.
