@@ -159,7 +159,7 @@ func TestCheckSCLBeamSofterThanJoists(t *testing.T) {
 // feet, b d L / 12 with L the 16 ft order length). The second bay's
 // callout "1 3/4 x 9 1/2 @ 16" gives no material: its three joists are
 // errors naming the text's handle and the materials known, never a
-// default size or material.
+// default size or material. Under --size the LVL joists keep their size.
 func TestCheckSCLJoistCallout(t *testing.T) {
 	out := filepath.Join(t.TempDir(), "out")
 	code, _, stderr := runCmd("check", "testdata/scl/scl.dxf", "-p", "testdata/scl/scl.toml", "-o", out)
@@ -238,4 +238,16 @@ func TestCheckSCLJoistCallout(t *testing.T) {
 		assert.Empty(t, m.Size, "y = %g: no size assumed", y)
 		assert.Regexp(t, `the size callout "1 3/4 x 9 1/2 @ 16" \(.*handle [0-9A-F]+.*\) cannot be read`, strings.Join(m.Messages, " "))
 	}
+
+	// --size picks among the [sizing] candidates, sawn sizes: the LVL
+	// joists keep the size called out, checked as above, never a sawn
+	// size of LVL
+	out2 := filepath.Join(t.TempDir(), "out")
+	runCmd("check", "testdata/scl/scl.dxf", "-p", "testdata/scl/scl.toml", "-o", out2, "--size")
+	r, err = export.ReadJSON(filepath.Join(out2, resultsName))
+	require.NoError(t, err)
+	m = at(400, 48)
+	assert.Equal(t, "1.75x11.875", m.Size)
+	assert.Equal(t, "pass", m.Status, "%v", m.Messages)
+	assert.InDelta(t, 2603.7, checkOf(t, m, "bending-top").Allowable, 0.05, "Fb', hand calculation above")
 }
