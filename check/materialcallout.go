@@ -148,6 +148,12 @@ func (m *Materials) ReadSCLCallout(head string) (size, species, grade string, er
 			"cannot say its material: write the name of a structural composite lumber of the materials file after the size, "+
 			"such as %s %s; the structural composite lumber known is %s", head, head, example, m.SCLKnown())
 	}
+	if sec, err := ParseSize(mc.Size); err != nil || !sec.Actual {
+		// "7.0 x 14.0": whole inches both ways are named "7x14", which
+		// reads back as a nominal size
+		return "", "", "", fmt.Errorf("%q: the size in actual inches is whole inches both ways (%s), which framecheck "+
+			"cannot tell from a nominal size; check these joists by hand", head, mc.Size)
+	}
 	sp, err := m.SCLMaterial(mc.Material)
 	if err != nil {
 		if glulamWordRE.MatchString(head) {

@@ -17,7 +17,7 @@ const sclTestCSV = "species,grade,min_width_in,max_width_in,fb_psi,ft_psi,fv_psi
 	"PSL,1.8E,9.25,18,2400,1755,230,600,2500,1800000,915000,SCL 0.111,test input\n"
 
 // sclTestMaterials returns the built-in materials with sclTestCSV's rows.
-func sclTestMaterials(t *testing.T) *check.Materials {
+func sclTestMaterials(t testing.TB) *check.Materials {
 	t.Helper()
 	u, err := check.LoadMaterialsCSV(strings.NewReader(sclTestCSV), "scl.csv")
 	if err != nil {
@@ -97,6 +97,7 @@ func TestReadCalloutWithSCL(t *testing.T) {
 		{`1 3/4 x 9 1/2 LVL @ 16 banana`, `"banana" not understood`},
 		{"1 3/4 x 9 1/2 LVL @ 16\n1 3/4 x 11 7/8 LVL @ 16", "different sizes"},
 		{`1 3/4 x 1/2 LVL`, "want actual inches"},
+		{`7.0 x 14.0 PSL @ 16`, "whole inches both ways (7x14), which framecheck cannot tell from a nominal size"},
 	}
 	for _, c := range bad {
 		got, err := ReadCalloutWith(c.in, read)
