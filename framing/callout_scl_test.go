@@ -6,6 +6,7 @@ import (
 	"testing"
 
 	"framecheck/check"
+	"framecheck/dxfimport"
 )
 
 // sclTestCSV is a materials file with two structural composite lumber
@@ -180,5 +181,41 @@ func TestSCLCalloutOnJoists(t *testing.T) {
 		if m.Start.X <= 32 && (!m.Error || m.Size != "") {
 			t.Errorf("%s without materials: error %v size %q", m.ID, m.Error, m.Size)
 		}
+	}
+}
+
+// A bay outline called out in structural composite lumber lays out its
+// joists at the callout's spacing (0, 16, 32, 40 across a 40 in bay, as
+// for sawn callouts), each of the material and size in actual inches; a
+// bay whose callout names no material is an error naming its handle, with
+// no joists laid out.
+func TestSCLBayOutline(t *testing.T) {
+	opt := DefaultOptions()
+	opt.MaterialCallout = sclTestMaterials(t).ReadSCLCallout
+	p := newPlan().walls(-10, 50, 0, 144)
+	p.poly("FRAMING-BAY", true, Point{X: 0, Y: 0}, Point{X: 40, Y: 0}, Point{X: 40, Y: 144}, Point{X: 0, Y: 144})
+	p.text("FRAMING-BAY", `1 3/4 x 9 1/2 PSL 2.2E @ 16" o.c.`, 10, 70, 3)
+	pl := p.group(opt)
+	if len(pl.Members) != 4 || generated(pl) != 4 {
+		t.Fatalf("%d members, %d generated, want 4 (issues %v)", len(pl.Members), generated(pl), pl.Issues)
+	}
+	for _, x := range []float64{0, 16, 32, 40} {
+		if m := member(t, pl, x, 72); m.Size != "1.75x9.5" || m.Species != "PSL" || m.Grade != "2.2E" || m.CalloutSpacingIn != 16 || m.Error {
+			t.Errorf("joist at %g: %s %s %s @ %g error %v", x, m.Size, m.Species, m.Grade, m.CalloutSpacingIn, m.Error)
+		}
+	}
+
+	p = newPlan().walls(-10, 50, 0, 144)
+	p.poly("FRAMING-BAY", true, Point{X: 0, Y: 0}, Point{X: 40, Y: 0}, Point{X: 40, Y: 144}, Point{X: 0, Y: 144})
+	p.text("FRAMING-BAY", `1 3/4 x 9 1/2 @ 16" o.c.`, 10, 70, 3)
+	handle := p.d.Entities[len(p.d.Entities)-1].Pos.Handle
+	pl = p.group(opt)
+	var said bool
+	for _, is := range pl.Issues {
+		said = said || is.Code == CodeBay && is.Severity == dxfimport.SevError && strings.Contains(is.Error(), "(handle "+handle+") cannot be read") &&
+			strings.Contains(is.Error(), "no material after it")
+	}
+	if len(pl.Members) != 0 || !said {
+		t.Errorf("%d members, issues %v; want none and a bay error naming handle %s", len(pl.Members), pl.Issues, handle)
 	}
 }
