@@ -77,6 +77,11 @@ func FramingOptions(p *project.Project) framing.Options {
 	for _, r := range p.Lumber.ByLayer {
 		o.ByLayer = append(o.ByLayer, framing.LumberRule{Layers: r.Layers, Species: r.Species, Grade: r.Grade, Size: r.Size})
 	}
+	mats := p.Materials
+	if mats == nil {
+		mats = check.BuiltinMaterials()
+	}
+	o.MaterialCallout = mats.ReadSCLCallout // joist callouts in actual inches: structural composite lumber
 	o.DefaultZone = p.Loads.DefaultZone
 	if o.DefaultZone == "" && len(p.Zones) == 1 {
 		o.DefaultZone = p.Zones[0].Name
@@ -159,6 +164,12 @@ func Run(in Input) (*Outcome, error) {
 		if usable[k] && o.Results[k].Size != "" {
 			plan.Members[k].Size = o.Results[k].Size
 		}
+		// a callout naming a material of one grade without it
+		// ("1 3/4 x 11 7/8 LVL"): the grade the check took, for the
+		// marks and the takeoff
+		if usable[k] && plan.Members[k].Grade == "" && o.Results[k].Status != check.StatusError {
+			plan.Members[k].Grade = o.Results[k].Grade
+		}
 	}
 	// Rafters drawn in plan are ordered at their sloped length.
 	for k := range plan.Members {
@@ -239,8 +250,8 @@ func sizeRuns(groups [][]int, inputs []check.Member, shifts []float64, usable []
 				continue
 			}
 			sec, err := check.ParseSize(o.Results[k].Size)
-			if err != nil || sec.Plies > 1 {
-				continue // built-up members keep their plies and set no size for the run
+			if err != nil || sec.Plies > 1 || sec.Actual {
+				continue // built-up members keep their plies, SCL its size in actual inches, and set no size for the run
 			}
 			if best == "" || sec.NominalDIn > bestSec.NominalDIn ||
 				(sec.NominalDIn == bestSec.NominalDIn && sec.NominalBIn > bestSec.NominalBIn) {
@@ -254,7 +265,7 @@ func sizeRuns(groups [][]int, inputs []check.Member, shifts []float64, usable []
 			if !usable[k] || o.Results[k].Size == best {
 				continue
 			}
-			if sec, err := check.ParseSize(inputs[k].Size); err == nil && sec.Plies > 1 {
+			if sec, err := check.ParseSize(inputs[k].Size); err == nil && (sec.Plies > 1 || sec.Actual) {
 				continue
 			}
 			cm := inputs[k]
@@ -324,9 +335,11 @@ func checkAll(inputs []check.Member, shifts []float64, usable []bool, s check.Se
 			defer wg.Done()
 			for i := range next {
 				k := order[i]
-				if sec, err := check.ParseSize(inputs[k].Size); o.Sizing != nil && err == nil && sec.Plies > 1 {
-					// a built-up member keeps its plies: the candidates are
-					// single sizes, so it is checked as drawn
+				if sec, err := check.ParseSize(inputs[k].Size); o.Sizing != nil && err == nil && (sec.Plies > 1 || sec.Actual) {
+					// a built-up member keeps its plies, and one sized in
+					// actual inches (structural composite lumber) its size:
+					// the candidates are single sawn sizes, so it is checked
+					// as drawn
 					checked[i] = check.CheckMember(inputs[k], s)
 				} else if o.Sizing != nil {
 					sr := check.Size(inputs[k], s, p.Sizing.Candidates, p.Sizing.BlockingPieceWeightBf)
