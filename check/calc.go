@@ -54,12 +54,10 @@ type bearRec struct {
 	support                 bool
 	supportName             string  // its species and grade
 	fcPerpPsi, fcPerpSupPsi float64 // reference Fc_perp of the member and of the support
-	// beamID names the beam of known material under the bearing
-	// (Bearing.Beam), "" when none; hanger: the member rests on a
-	// hanger's seat on it. beam holds the beam's values when its
+	// hanger: the member rests on a hanger's seat on a beam of known
+	// material (Bearing.Beam). beam holds the beam's values when its
 	// Fc_perp' was checked; memCb and memAdjPsi are then the member's own
 	// Cb and Fc_perp'.
-	beamID           string
 	hanger           bool
 	beam             *beamBear
 	memCb, memAdjPsi float64
@@ -264,9 +262,9 @@ func (r *calcRecord) bearingTrace() []TraceItem {
 	t := newTracer(9)
 	t.add("R", b.rLb, "lb", "largest reaction, at bearing "+strconv.Itoa(b.bearing+1), Subst{}, refAnalysis)
 	if b.hanger {
-		t.add("lb", b.lbIn, "in", "bearing length on the seat of the hanger on "+b.beamID+": the member rests on the hanger, "+
-			"so its bearing is checked with its own Fc_perp; the hanger's bearing on "+b.beamID+" is the connector's "+
-			"(its demand is with the load path's connections)", Subst{}, "common practice, no source")
+		t.add("lb", b.lbIn, "in", "bearing length on the seat of the hanger at bearing "+strconv.Itoa(b.bearing+1)+
+			": the member rests on the hanger, so its bearing is checked with its own Fc_perp; the hanger's bearing on the beam "+
+			"is the connector's (its demand is with the load path's connections)", Subst{}, "common practice, no source")
 	} else {
 		t.add("lb", b.lbIn, "in", "bearing length", Subst{}, "")
 	}
@@ -304,23 +302,24 @@ func (r *calcRecord) beamBearingTrace(t tracer, fc float64) []TraceItem {
 	}
 	t.add("Fc_perp'", b.memAdjPsi, "psi", "Fc_perp CM Ct Ci Cb: the member's own",
 		t.f("%s(%s)(%s)(%s)(%s)", x.fcPerpPsi, x.cm.FcPerp, x.ct.FcPerp, x.ci.FcPerp, b.memCb), x.adjRef())
+	beam := "the beam under bearing " + strconv.Itoa(b.bearing+1)
 	switch {
 	case bb.endIn <= 0:
-		t.add("Cb_beam", 1, "", "the member crosses "+b.beamID+" askew: its length along the beam's grain is not b", Subst{}, "NDS 2018 3.10.4")
+		t.add("Cb_beam", 1, "", "the member crosses "+beam+" askew: its length along the beam's grain is not b", Subst{}, "NDS 2018 3.10.4")
 	case bb.cb != 1:
-		t.add("Cb_beam", bb.cb, "", "(b + 0.375) / b: on "+b.beamID+" the bearing length along its grain is the member's width b, "+
+		t.add("Cb_beam", bb.cb, "", "(b + 0.375) / b: on "+beam+" the bearing length along its grain is the member's width b, "+
 			"3 in or more from its end", t.f("(%s + 0.375) / %s", x.bIn, x.bIn), "NDS 2018 3.10.4")
 	default:
-		t.add("Cb_beam", 1, "", "the bearing is within 3 in of "+b.beamID+"'s end", Subst{}, "NDS 2018 3.10.4")
+		t.add("Cb_beam", 1, "", "the bearing is within 3 in of the end of "+beam, Subst{}, "NDS 2018 3.10.4")
 	}
 	who := "the member's governs"
 	if bb.governs {
 		who = "it governs"
 	}
-	desc := "Fc_perp CM Ct Ci Cb_beam of " + b.beamID + " (" + bb.v.Name + "), on which the member bears: " + who
+	desc := "Fc_perp CM Ct Ci Cb_beam of " + beam + " (" + bb.v.Name + "): " + who
 	sub := t.f("%s(%s)(%s)(%s)(%s)", bb.v.FcPerpPsi, bb.v.CM, bb.v.Ct, bb.v.Ci, bb.cb)
 	if bb.v.Ref != "NDS 2018 Table 4.3.1" {
-		desc = "Fc_perp CM Ct Cb_beam of " + b.beamID + " (" + bb.v.Name + "), on which the member bears: " + who
+		desc = "Fc_perp CM Ct Cb_beam of " + beam + " (" + bb.v.Name + "): " + who
 		sub = t.f("%s(%s)(%s)(%s)", bb.v.FcPerpPsi, bb.v.CM, bb.v.Ct, bb.cb)
 	}
 	t.add("Fc_perp_beam'", bb.adjPsi, "psi", desc, sub, "NDS 2018 3.10.2; "+bb.v.Ref)

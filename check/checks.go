@@ -150,11 +150,10 @@ func (e *engine) bearingCheck() (CheckResult, []Reaction) {
 // governs; or the hanger the member rests on.
 func (e *engine) beamBearRec(j int) {
 	b := e.m.Bearings[j]
-	if b.Beam.ID == "" {
+	if b.Beam.Species == "" {
 		return
 	}
 	br := &e.rc.bear
-	br.beamID = b.Beam.ID
 	if b.Hanger {
 		br.hanger = true
 		return

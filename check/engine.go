@@ -170,12 +170,12 @@ func newEngine(m Member, s Settings) (*engine, error) {
 	}
 	e.supBeam = nil
 	for j, b := range m.Bearings {
-		if b.Beam.ID == "" || b.Hanger {
+		if b.Beam.Species == "" || b.Hanger {
 			continue // none, or the member rests on a hanger's seat, not on the beam
 		}
 		v, err := SupportBeamValues(b.Beam.Species, b.Beam.Grade, b.Beam.Size, s)
 		if err != nil {
-			return e, fmt.Errorf("bearing %d: the beam %s under it: %v", j+1, b.Beam.ID, err)
+			return e, fmt.Errorf("bearing %d: the beam under it: %v", j+1, err)
 		}
 		if e.supBeam == nil {
 			e.supBeam = make([]BeamFcPerp, len(m.Bearings))

@@ -70,7 +70,7 @@ type Bearing struct {
 	// Beam is the beam the member bears on when its material and size are
 	// known (a beam of the load path): its own Fc_perp' is checked too,
 	// with its own factors, and the smaller governs (see SupportBeam).
-	// Its zero value (ID "") is none.
+	// Its zero value (Species "") is none.
 	Beam SupportBeam
 }
 
@@ -97,9 +97,12 @@ type Bearing struct {
 // the beam: its bearing is checked with its own Fc_perp' only, and the
 // hanger's bearing on the beam is the connector's (its demand is reported
 // with the load path's joints); the trace says so.
+//
+// It holds no name of the beam: members alike on beams alike are checked
+// once (MemberKey), and the trace names the beam by its bearing's number
+// and its material.
 type SupportBeam struct {
-	ID                   string // the beam's ID ("B1"); "" when none
-	Species, Grade, Size string // the beam's material and size, as its own check takes them
+	Species, Grade, Size string // the beam's material and size, as its own check takes them; Species "" for none
 	// EndIn is the distance along the beam from the member's centre-line
 	// to the beam's nearer end, for Cb. Values above 6 in are given as 6
 	// (for any lb under 6 in the edge is then 3 in or more from the end,

@@ -53,7 +53,7 @@ func TestBearingOnBeam_HandCalculation(t *testing.T) {
 	R := 50 * 16 / 144.0 * 144 / 2 // statics, lb
 	fc := R / (1.5 * 3)            // NDS 2018 3.10.2
 
-	glb := joistOnBeam(SupportBeam{ID: "B1", Species: GlulamSpecies, Grade: "24F-1.8E", Size: "5 1/8 x 12", EndIn: 6})
+	glb := joistOnBeam(SupportBeam{Species: GlulamSpecies, Grade: "24F-1.8E", Size: "5 1/8 x 12", EndIn: 6})
 	r := CheckMember(glb, s)
 	b := find(t, r, KindBearing)
 	expectNear(t, "fc_perp on the glulam", b.Actual, fc, 1e-9, 1e-9, "R / (b lb), statics and NDS 2018 3.10.2")
@@ -63,16 +63,16 @@ func TestBearingOnBeam_HandCalculation(t *testing.T) {
 	expectNear(t, "glulam Fc_perp'", traceValue(t, b, "Fc_perp_beam'"), 650*1.25, 1e-9, 0,
 		"NDS 2018 Supplement Table 5A 24F-1.8E 650 psi (from memory: verify), Table 5.3.1, 3.10.4")
 	expectNear(t, "the joist's own Fc_perp'", traceValue(t, b, "Fc_perp'"), 625, 1e-9, 0, "NDS 2018 Supplement Table 4A")
-	expectTrace(t, b, "Fc_perp_beam'", "of B1 (Glulam 24F-1.8E), on which the member bears: the member's governs")
+	expectTrace(t, b, "Fc_perp_beam'", "of the beam under bearing 2 (Glulam 24F-1.8E): the member's governs")
 
-	scl := joistOnBeam(SupportBeam{ID: "B2", Species: "SOFTLVL", Grade: "1.5E", Size: "3.5x11.875", EndIn: 6})
+	scl := joistOnBeam(SupportBeam{Species: "SOFTLVL", Grade: "1.5E", Size: "3.5x11.875", EndIn: 6})
 	r = CheckMember(scl, s)
 	b = find(t, r, KindBearing)
 	expectNear(t, "Fc_perp' (the SCL beam's governs)", b.Allowable, 400*1.25, 1e-9, 0, "materials file Fc_perp 400 psi; NDS 2018 Table 8.3.1 (from memory: verify), 3.10.4")
 	expectNear(t, "ratio", b.Ratio, fc/500, 1e-9, 1e-9, "88.889 / 500 = 0.17778, hand calculation")
 	expectNear(t, "the joist's own Fc_perp'", traceValue(t, b, "Fc_perp'"), 625, 1e-9, 0, "NDS 2018 Supplement Table 4A")
 	expectNear(t, "fc_perp / Fc_perp_beam'", traceValue(t, b, "fc_perp/Fc_perp_beam'"), fc/500, 1e-9, 1e-9, "hand calculation")
-	expectTrace(t, b, "Fc_perp_beam'", "of B2 (SOFTLVL 1.5E), on which the member bears: it governs")
+	expectTrace(t, b, "Fc_perp_beam'", "of the beam under bearing 2 (SOFTLVL 1.5E): it governs")
 
 	// The joist 2 in from the beam's end: its edge is 2 - 0.75 = 1.25 in
 	// from it, under 3 in: Cb = 1 (NDS 2018 3.10.4), Fc_perp' = 400 psi.
@@ -88,7 +88,7 @@ func TestBearingOnBeam_HandCalculation(t *testing.T) {
 	// Table 4A) in wet service: CM = 0.67 on both (Supplement Table 4A
 	// notes): the joist's 625 (0.67) = 418.75, the beam's 405 (0.67)(1.25)
 	// = 339.19 psi governs.
-	hf := joistOnBeam(SupportBeam{ID: "B3", Species: "Hem-Fir", Grade: "No.2", Size: "(3) 2x12", EndIn: 6})
+	hf := joistOnBeam(SupportBeam{Species: "Hem-Fir", Grade: "No.2", Size: "(3) 2x12", EndIn: 6})
 	ws := s
 	ws.WetService = true
 	r = CheckMember(hf, ws)
@@ -102,7 +102,7 @@ func TestBearingOnBeam_HandCalculation(t *testing.T) {
 	r = CheckMember(scl, s)
 	b = find(t, r, KindBearing)
 	expectNear(t, "Fc_perp' in a hanger", b.Allowable, 625, 1e-9, 0, "NDS 2018 Supplement Table 4A: the joist's own")
-	expectTrace(t, b, "lb", "the hanger's bearing on B2 is the connector's")
+	expectTrace(t, b, "lb", "the hanger's bearing on the beam is the connector's")
 
 	// Askew (EndIn 0): Cb = 1 on the beam.
 	scl.Bearings[1].Hanger = false
@@ -112,7 +112,7 @@ func TestBearingOnBeam_HandCalculation(t *testing.T) {
 
 	// Wet-service glulam is refused, as the beam's own check refuses it:
 	// never a value guessed.
-	if r := CheckMember(glb, ws); r.Status != StatusError || !strings.Contains(strings.Join(r.Messages, " "), "the beam B1 under it: glulam in wet service") {
+	if r := CheckMember(glb, ws); r.Status != StatusError || !strings.Contains(strings.Join(r.Messages, " "), "bearing 2: the beam under it: glulam in wet service") {
 		t.Errorf("wet-service glulam beam: status %s, messages %v; want an error naming the beam", r.Status, r.Messages)
 	}
 }
@@ -133,7 +133,7 @@ func TestSupportBeamEndIn(t *testing.T) {
 			t.Errorf("SupportBeamEndIn(%g, %g, %v) = %g, want %g (NDS 2018 3.10.4; common practice, no source, for the cap)", tc.at, tc.l, tc.square, got, tc.want)
 		}
 	}
-	a := joistOnBeam(SupportBeam{ID: "B1", Species: GlulamSpecies, Grade: "24F-1.8E", Size: "5.125x12", EndIn: SupportBeamEndIn(50, 144, true)})
+	a := joistOnBeam(SupportBeam{Species: GlulamSpecies, Grade: "24F-1.8E", Size: "5.125x12", EndIn: SupportBeamEndIn(50, 144, true)})
 	b := a
 	b.Bearings = append([]Bearing(nil), a.Bearings...)
 	b.Bearings[1].Beam.EndIn = SupportBeamEndIn(90, 144, true)

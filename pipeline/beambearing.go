@@ -63,7 +63,7 @@ func beamBearings(p *project.Project, plan *framing.Plan, inputs []check.Member,
 				}
 				continue
 			}
-			br.Beam = check.SupportBeam{ID: b.ID, Species: cm.Species, Grade: cm.Grade, Size: cm.Size}
+			br.Beam = check.SupportBeam{Species: cm.Species, Grade: cm.Grade, Size: cm.Size}
 			if !br.Hanger {
 				br.Beam.EndIn = check.SupportBeamEndIn(c.AtIn, b.LengthIn, crossesSquare(&plan.Members[c.Member], b))
 				br.SupportSpecies, br.SupportGrade = "", ""

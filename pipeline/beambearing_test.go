@@ -76,7 +76,7 @@ func TestBeamBearings(t *testing.T) {
 			}
 			onBeam++
 			got := o.Inputs[k].Bearings[j].Beam
-			want := check.SupportBeam{ID: "B1", Species: check.GlulamSpecies, Grade: "20F-1.5E", Size: "5.125x12", EndIn: 6}
+			want := check.SupportBeam{Species: check.GlulamSpecies, Grade: "20F-1.5E", Size: "5.125x12", EndIn: 6}
 			if got != want {
 				t.Errorf("%s bearing %d: beam %+v, want %+v", m.ID, j+1, got, want)
 			}
@@ -113,7 +113,7 @@ func TestBeamBearings(t *testing.T) {
 	hung := 0
 	for k := range o.Inputs {
 		for _, b := range o.Inputs[k].Bearings {
-			if b.Hanger && b.Beam.ID == "B1" {
+			if b.Hanger && b.Beam.Species == check.GlulamSpecies {
 				hung++
 			}
 		}

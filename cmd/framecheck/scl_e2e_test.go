@@ -173,7 +173,7 @@ func TestCheckSCLBeamSofterThanJoists(t *testing.T) {
 	assert.InEpsilon(t, fc/500, c.Ratio, 5e-6, "fc_perp / the beam's Fc_perp'")
 	assert.InEpsilon(t, 625, tr["Fc_perp'"].Value, 5e-6, "the joist's own, NDS 2018 Supplement Table 4A")
 	assert.InEpsilon(t, 1.25, tr["Cb_beam"].Value, 5e-6, "NDS 2018 3.10.4")
-	assert.Contains(t, tr["Fc_perp_beam'"].Formula, "of B1 (LVL 2.0E), on which the member bears: it governs")
+	assert.Contains(t, tr["Fc_perp_beam'"].Formula, "of the beam under bearing 1 (LVL 2.0E): it governs")
 	assert.Contains(t, tr, "fc_perp/Fc_perp_beam'")
 
 	out2 := filepath.Join(dir, "out2")
