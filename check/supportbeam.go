@@ -29,6 +29,11 @@ func (v BeamFcPerp) AdjNoCbPsi() float64 { return v.FcPerpPsi * v.CM * v.Ct * v.
 // for Tables 5.3.1 and 8.3.1). It refuses what the beam's own check
 // refuses: an unknown material or size, and wet service of timbers, glulam
 // and SCL, whose wet-service factors framecheck does not apply.
+//
+// Glulam takes its stress class's one Fc_perp x (glulam.go) for the face
+// the joists bear on, the top (compression) face under gravity; NDS 2018
+// Supplement Table 5A gives a tension-face and a compression-face value,
+// the same for the E-rated classes framecheck holds (from memory: verify).
 func SupportBeamValues(species, grade, size string, s Settings) (BeamFcPerp, error) {
 	sec, err := ParseSize(size)
 	if err != nil {
