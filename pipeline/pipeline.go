@@ -33,6 +33,10 @@ type Outcome struct {
 	// MarksFresh: marks.json named none of this plan's marks, so they
 	// were named afresh
 	MarksFresh bool
+
+	// softBearings are the CHK313 warnings of beamBearings, reported
+	// with the load path's findings
+	softBearings dxfimport.IssueList
 }
 
 // Input is what runs the pipeline: the grouped plan, its project, the
@@ -150,6 +154,7 @@ func Run(in Input) (*Outcome, error) {
 	if in.Size {
 		o.Sizing = make([]*check.SizingResult, len(plan.Members))
 	}
+	beamBearings(p, plan, inputs, usable, settings, in.Size, o)
 	keys := checkAll(inputs, shifts, usable, settings, p, o)
 	if in.Size {
 		sizeRuns(sameDepthGroups(plan, p.Sizing.SameDepth), inputs, shifts, usable, settings, o)
