@@ -54,6 +54,20 @@ type bearRec struct {
 	support                 bool
 	supportName             string  // its species and grade
 	fcPerpPsi, fcPerpSupPsi float64 // reference Fc_perp of the member and of the support
+	// hanger: the member rests on a hanger's seat on a beam of known
+	// material (Bearing.Beam). beam holds the beam's values when its
+	// Fc_perp' was checked; memCb and memAdjPsi are then the member's own
+	// Cb and Fc_perp'.
+	hanger           bool
+	beam             *beamBear
+	memCb, memAdjPsi float64
+}
+
+// beamBear is the Fc_perp' of the beam under the governing bearing.
+type beamBear struct {
+	v                 BeamFcPerp
+	cb, adjPsi, endIn float64
+	governs           bool // the beam's Fc_perp' is the smaller
 }
 
 // deflRec is a governing deflection case.
@@ -245,10 +259,19 @@ func (r *calcRecord) shearTrace() []TraceItem {
 func (r *calcRecord) bearingTrace() []TraceItem {
 	x, b := &r.ctx, &r.bear
 	fc := b.rLb / (x.bIn * b.lbIn)
-	t := newTracer(7)
+	t := newTracer(9)
 	t.add("R", b.rLb, "lb", "largest reaction, at bearing "+strconv.Itoa(b.bearing+1), Subst{}, refAnalysis)
-	t.add("lb", b.lbIn, "in", "bearing length", Subst{}, "")
+	if b.hanger {
+		t.add("lb", b.lbIn, "in", "bearing length on the seat of the hanger at bearing "+strconv.Itoa(b.bearing+1)+
+			": the member rests on the hanger, so its bearing is checked with its own Fc_perp; the hanger's bearing on the beam "+
+			"is the connector's (its demand is with the load path's connections)", Subst{}, "common practice, no source")
+	} else {
+		t.add("lb", b.lbIn, "in", "bearing length", Subst{}, "")
+	}
 	t.add("fc_perp", fc, "psi", "R / (b lb)", t.f("%s / (%s(%s))", b.rLb, x.bIn, b.lbIn), "NDS 2018 3.10.2")
+	if b.beam != nil && !b.support {
+		return r.beamBearingTrace(t, fc)
+	}
 	if b.support {
 		t.add("Fc_perp", b.fcPerpSupPsi, "psi", "the support ("+b.supportName+") governs: its Fc_perp is below the member's "+
 			fmtG(b.fcPerpPsi)+" psi; Cb = 1 (its bearing length is the member's width)", Subst{}, "NDS 2018 3.10.2")
@@ -264,6 +287,47 @@ func (r *calcRecord) bearingTrace() []TraceItem {
 			t.f("%s(%s)(%s)(%s)(%s)", x.fcPerpPsi, x.cm.FcPerp, x.ct.FcPerp, x.ci.FcPerp, b.cb), x.adjRef())
 	}
 	t.add("fc_perp/Fc_perp'", fc/b.fcAdjPsi, "", "fc_perp / Fc_perp'", t.f("%s / %s", fc, b.fcAdjPsi), "NDS 2018 3.10.2")
+	return t.items
+}
+
+// beamBearingTrace ends the bearing calculation of a member resting on
+// a beam of known material (SupportBeam): the member's own Fc_perp', the
+// beam's, and the ratio to the smaller (NDS 2018 3.10.2, 3.10.4).
+func (r *calcRecord) beamBearingTrace(t tracer, fc float64) []TraceItem {
+	x, b, bb := &r.ctx, &r.bear, r.bear.beam
+	if b.memCb != 1 {
+		t.add("Cb", b.memCb, "", "(lb + 0.375) / lb", t.f("(%s + 0.375) / %s", b.lbIn, b.lbIn), "NDS 2018 3.10.4")
+	} else {
+		t.add("Cb", 1, "", "bearing at a member end, or lb >= 6 in", Subst{}, "NDS 2018 3.10.4")
+	}
+	t.add("Fc_perp'", b.memAdjPsi, "psi", "Fc_perp CM Ct Ci Cb: the member's own",
+		t.f("%s(%s)(%s)(%s)(%s)", x.fcPerpPsi, x.cm.FcPerp, x.ct.FcPerp, x.ci.FcPerp, b.memCb), x.adjRef())
+	beam := "the beam under bearing " + strconv.Itoa(b.bearing+1)
+	switch {
+	case bb.endIn <= 0:
+		t.add("Cb_beam", 1, "", "the member crosses "+beam+" askew: its length along the beam's grain is not b", Subst{}, "NDS 2018 3.10.4")
+	case bb.cb != 1:
+		t.add("Cb_beam", bb.cb, "", "(b + 0.375) / b: on "+beam+" the bearing length along its grain is the member's width b, "+
+			"3 in or more from its end", t.f("(%s + 0.375) / %s", x.bIn, x.bIn), "NDS 2018 3.10.4")
+	default:
+		t.add("Cb_beam", 1, "", "the bearing is within 3 in of the end of "+beam, Subst{}, "NDS 2018 3.10.4")
+	}
+	who := "the member's governs"
+	if bb.governs {
+		who = "it governs"
+	}
+	desc := "Fc_perp CM Ct Ci Cb_beam of " + beam + " (" + bb.v.Name + "): " + who
+	sub := t.f("%s(%s)(%s)(%s)(%s)", bb.v.FcPerpPsi, bb.v.CM, bb.v.Ct, bb.v.Ci, bb.cb)
+	if bb.v.Ref != "NDS 2018 Table 4.3.1" {
+		desc = "Fc_perp CM Ct Cb_beam of " + beam + " (" + bb.v.Name + "): " + who
+		sub = t.f("%s(%s)(%s)(%s)", bb.v.FcPerpPsi, bb.v.CM, bb.v.Ct, bb.cb)
+	}
+	t.add("Fc_perp_beam'", bb.adjPsi, "psi", desc, sub, "NDS 2018 3.10.2; "+bb.v.Ref)
+	if bb.governs {
+		t.add("fc_perp/Fc_perp_beam'", fc/b.fcAdjPsi, "", "fc_perp / Fc_perp_beam', the smaller", t.f("%s / %s", fc, b.fcAdjPsi), "NDS 2018 3.10.2")
+	} else {
+		t.add("fc_perp/Fc_perp'", fc/b.fcAdjPsi, "", "fc_perp / Fc_perp', the smaller", t.f("%s / %s", fc, b.fcAdjPsi), "NDS 2018 3.10.2")
+	}
 	return t.items
 }
 

@@ -121,6 +121,14 @@ func (e *engine) bearingCheck() (CheckResult, []Reaction) {
 				fcAdj, cb, onSupport = sup, 1, true
 			}
 		}
+		// The beam under the member, of known material: its own Fc_perp'
+		// with its own factors and its Cb (SupportBeam); the smaller
+		// governs.
+		if j < len(e.supBeam) && e.supBeam[j].FcPerpPsi > 0 {
+			if bv := e.supBeam[j].AdjNoCbPsi() * beamCb(e.sec.BIn, b.Beam.EndIn); bv < fcAdj {
+				fcAdj, cb, onSupport = bv, 1, false
+			}
+		}
 		if ratio := rMax / (e.sec.BIn * b.LengthIn) / fcAdj; ratio > best {
 			best, bestJ, bestCI, bestR, bestCb, bestFc, bestSup = ratio, j, ciMax, rMax, cb, fcAdj, onSupport
 		}
@@ -132,8 +140,31 @@ func (e *engine) bearingCheck() (CheckResult, []Reaction) {
 		sv := e.supFc[bestJ]
 		e.rc.bear.support, e.rc.bear.fcPerpSupPsi, e.rc.bear.supportName = true, sv.FcPerpPsi, sv.Species+" "+sv.Grade
 	}
+	e.beamBearRec(bestJ)
 	return CheckResult{Kind: KindBearing, Combo: e.caseLabel(&e.cases[bestCI]), Actual: fc, Allowable: bestFc,
 		Unit: "psi", Ratio: fc / bestFc, calc: e.rc}, reactions
+}
+
+// beamBearRec records, for the trace, the beam under governing bearing
+// j: the member's own Cb and Fc_perp', the beam's values and which
+// governs; or the hanger the member rests on.
+func (e *engine) beamBearRec(j int) {
+	b := e.m.Bearings[j]
+	if b.Beam.Species == "" {
+		return
+	}
+	br := &e.rc.bear
+	if b.Hanger {
+		br.hanger = true
+		return
+	}
+	v := e.supBeam[j]
+	edge := math.Min(b.AtIn-b.LengthIn/2, e.m.LengthIn-(b.AtIn+b.LengthIn/2))
+	br.memCb = BearingAreaFactor(b.LengthIn, edge)
+	br.memAdjPsi = e.dv.FcPerpPsi * e.cm.FcPerp * e.ct.FcPerp * e.ci.FcPerp * br.memCb
+	br.beam = &beamBear{v: v, cb: beamCb(e.sec.BIn, b.Beam.EndIn), endIn: b.Beam.EndIn}
+	br.beam.adjPsi = v.AdjNoCbPsi() * br.beam.cb
+	br.beam.governs = !br.support && br.beam.adjPsi == br.fcAdjPsi && br.beam.adjPsi < br.memAdjPsi
 }
 
 // reaction is bearing j's Reaction from its largest downward reaction

@@ -29,6 +29,10 @@ type engine struct {
 	kcr float64
 
 	supFc []DesignValues // per bearing: the support's design values (FcPerpPsi 0: none given)
+	// supBeam, per bearing: the Fc_perp values of the beam it rests on
+	// (Bearing.Beam; FcPerpPsi 0: none, or a hanger); nil when no bearing
+	// has one.
+	supBeam []BeamFcPerp
 
 	fbNoCD float64 // Fb CM Ct CF Ci Cr: Fb* / CD
 	// fbNegNoCD is fbNoCD for the bottom edge in compression (negative
@@ -163,6 +167,20 @@ func newEngine(m Member, s Settings) (*engine, error) {
 			e.supFc = make([]DesignValues, len(m.Bearings))
 		}
 		e.supFc[j] = sdv
+	}
+	e.supBeam = nil
+	for j, b := range m.Bearings {
+		if b.Beam.Species == "" || b.Hanger {
+			continue // none, or the member rests on a hanger's seat, not on the beam
+		}
+		v, err := SupportBeamValues(b.Beam.Species, b.Beam.Grade, b.Beam.Size, s)
+		if err != nil {
+			return e, fmt.Errorf("bearing %d: the beam under it: %v", j+1, err)
+		}
+		if e.supBeam == nil {
+			e.supBeam = make([]BeamFcPerp, len(m.Bearings))
+		}
+		e.supBeam[j] = v
 	}
 	e.factors()
 	e.model()

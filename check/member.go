@@ -67,6 +67,63 @@ type Bearing struct {
 	// bears on; its Fc_perp is checked too and the smaller governs (NDS
 	// 2018 3.10.2). Empty: the member's own species and grade.
 	SupportSpecies, SupportGrade string
+	// Beam is the beam the member bears on when its material and size are
+	// known (a beam of the load path): its own Fc_perp' is checked too,
+	// with its own factors, and the smaller governs (see SupportBeam).
+	// Its zero value (Species "") is none.
+	Beam SupportBeam
+}
+
+// SupportBeam is a beam a member bears on, of known material (issue 17,
+// bearing at each support). The member's bearing stress fc_perp = R / (b
+// lb) acts on the beam's face as on the member's (NDS 2018 3.10.2 applies
+// to both members in contact), so the beam's Fc_perp' is checked as well
+// as the member's and the smaller governs:
+//
+//	Fc_perp' = Fc_perp CM Ct Ci Cb   sawn lumber and timbers, NDS 2018 Table 4.3.1
+//	Fc_perp' = Fc_perp CM Ct Cb      glulam, NDS 2018 Table 5.3.1 (from memory: verify)
+//	Fc_perp' = Fc_perp CM Ct Cb      structural composite lumber, NDS 2018 Table 8.3.1 (from memory: verify)
+//
+// with the beam's own reference Fc_perp (Supplement Table 4A, 4B or 4D,
+// the glulam stress class of Table 5A, or the materials file's row) and
+// its own CM (Supplement table notes; wet-service glulam, timbers and SCL
+// are refused), Ct (NDS 2018 Table 2.3.3) and Ci (Table 4.3.8, sawn only).
+// Cb is that of NDS 2018 3.10.4 with lb, the bearing length measured
+// parallel to the beam's grain, the member's width b (the member crossing
+// the beam square): (b + 0.375) / b when the bearing's edge is 3 in or
+// more from the beam's end, else 1.0.
+//
+// A member in a hanger (Bearing.Hanger) rests on the hanger's seat, not on
+// the beam: its bearing is checked with its own Fc_perp' only, and the
+// hanger's bearing on the beam is the connector's (its demand is reported
+// with the load path's joints); the trace says so.
+//
+// It holds no name of the beam: members alike on beams alike are checked
+// once (MemberKey), and the trace names the beam by its bearing's number
+// and its material.
+type SupportBeam struct {
+	Species, Grade, Size string // the beam's material and size, as its own check takes them; Species "" for none
+	// EndIn is the distance along the beam from the member's centre-line
+	// to the beam's nearer end, for Cb. Values above 6 in are given as 6
+	// (for any lb under 6 in the edge is then 3 in or more from the end,
+	// which is all Cb asks), so that members alike but for their place on
+	// the beam are checked once; 0 takes Cb = 1 (a member crossing the
+	// beam askew, whose length along the beam's grain is not b).
+	EndIn float64
+}
+
+// supportBeamEndCapIn is the largest SupportBeam.EndIn that matters for
+// Cb (NDS 2018 3.10.4): an edge at EndIn - b/2 >= 3 in for every b < 6 in.
+const supportBeamEndCapIn = 6.0
+
+// SupportBeamEndIn returns SupportBeam.EndIn for a member whose
+// centre-line lies atIn along a beam lengthIn long: the distance to the
+// nearer end, capped at 6 in, 0 when the member is askew (square false).
+func SupportBeamEndIn(atIn, lengthIn float64, square bool) float64 {
+	if !square {
+		return 0
+	}
+	return math.Max(0, math.Min(supportBeamEndCapIn, math.Min(atIn, lengthIn-atIn)))
 }
 
 // Member is one joist to check. Positions run along the member from its

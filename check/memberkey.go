@@ -12,10 +12,33 @@ import (
 // struct by reflection, so a field added to Member is part of the
 // key without a change here.
 func MemberKey(m Member) string {
-	m.ID = ""
 	var buf [256]byte
-	return string(appendKey(buf[:0], reflect.ValueOf(m)))
+	return string(AppendMemberKey(buf[:0], &m))
 }
+
+// AppendMemberKey appends MemberKey(*m) to b without copying m: a caller
+// keying many members reuses one buffer and makes a string only of the
+// keys it has not met (a map looked up with string(b) does not allocate).
+func AppendMemberKey(b []byte, m *Member) []byte {
+	v := reflect.ValueOf(m).Elem()
+	for i := 0; i < v.NumField(); i++ {
+		if i == memberIDField {
+			b = binary.AppendUvarint(b, 0) // the ID, as "" is written
+			continue
+		}
+		b = appendKey(b, v.Field(i))
+	}
+	return b
+}
+
+// memberIDField is the index of Member.ID, left out of the key.
+var memberIDField = func() int {
+	f, ok := reflect.TypeOf(Member{}).FieldByName("ID")
+	if !ok || len(f.Index) != 1 || f.Type.Kind() != reflect.String {
+		panic("check.Member has no string field ID")
+	}
+	return f.Index[0]
+}()
 
 // appendKey appends an unambiguous encoding of v to b.
 func appendKey(b []byte, v reflect.Value) []byte {

@@ -74,3 +74,20 @@ func perturb(v reflect.Value) bool {
 	}
 	return true
 }
+
+// TestAppendMemberKey: the key appended from a pointer is MemberKey's,
+// byte for byte, whatever the ID, and leaves the member as it was
+// (common practice, no source).
+func TestAppendMemberKey(t *testing.T) {
+	m := Member{ID: "M7", Size: "2x10", Species: "Douglas Fir-Larch", Grade: "No.2", LengthIn: 144,
+		Bearings: []Bearing{{AtIn: 0, LengthIn: 3.5}, {AtIn: 144, LengthIn: 1.5, Hanger: true}}, SpacingIn: 16, TribIn: 16}
+	n := m
+	n.ID = ""
+	want := "prefix" + string(appendKey(nil, reflect.ValueOf(n))) // the whole struct walked, ID empty
+	if got := string(AppendMemberKey([]byte("prefix"), &m)); got != want {
+		t.Fatalf("AppendMemberKey %q, want %q", got, want)
+	}
+	if "prefix"+MemberKey(m) != want || m.ID != "M7" {
+		t.Errorf("MemberKey differs, or the ID was cleared")
+	}
+}

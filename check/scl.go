@@ -133,8 +133,8 @@ func (m *Materials) sclLookup(sp, grade string, sec Section) (DesignValues, erro
 	case strings.TrimSpace(grade) == "" && len(grades) == 1:
 		gr = grades[0]
 	case strings.TrimSpace(grade) == "":
-		return DesignValues{}, fmt.Errorf("%s: which grade? the materials file gives %s; name one (the [[support]] grade, "+
-			"or the word after the material in the callout)", sp, strings.Join(grades, ", "))
+		return DesignValues{}, fmt.Errorf("%s: which grade? the materials file gives %s; name one (the word after the material in the callout, "+
+			"the [[support]] grade of a beam, or the [lumber] grade of the joists' layer)", sp, strings.Join(grades, ", "))
 	default:
 		for _, g := range grades {
 			if nameKey(g) == nameKey(grade) {
@@ -181,6 +181,9 @@ func (m *Materials) IsSCL(name string) (string, bool) {
 
 // SCLNames lists the SCL user materials of m, sorted, for messages.
 func (m *Materials) SCLNames() []string {
+	if m == nil {
+		return nil
+	}
 	var out []string
 	seen := map[string]bool{}
 	for _, r := range m.rows {

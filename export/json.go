@@ -358,6 +358,7 @@ func encodeResults(w *bufio.Writer, r *Results, lay jsonLayout) error {
 	}
 	me := newMemberEncoder(lay)
 	calcs := newCalcTable()
+	var paths *pathRefs // schema 3's load path references
 	// Schema 3: the fields members of a mark share, found before the
 	// members are written (json_share.go).
 	var shares []*markShare
@@ -416,7 +417,14 @@ func encodeResults(w *bufio.Writer, r *Results, lay jsonLayout) error {
 				return me.encode(&m, &r.Members[i])
 			})
 		},
-		func() error { return calcs.write(w, key, lay.refs) },
+		func() error {
+			// the load path's beams and posts refer to calculations too,
+			// numbered after the members'
+			if lay.refs && r.LoadPath != nil {
+				paths = loadPathRefs(r.LoadPath, calcs)
+			}
+			return calcs.write(w, key, lay.refs)
+		},
 		func() error {
 			if !lay.refs {
 				return nil
@@ -467,6 +475,9 @@ func encodeResults(w *bufio.Writer, r *Results, lay jsonLayout) error {
 				return nil
 			}
 			key("load_path")
+			if paths != nil {
+				return writeLoadPathV3(w, r.LoadPath, paths)
+			}
 			return writeLoadPathJSON(w, r.LoadPath, rounded)
 		},
 		func() error {

@@ -5,6 +5,7 @@ import (
 	"bytes"
 	"encoding/json"
 	"fmt"
+	"slices"
 	"strconv"
 	"testing"
 
@@ -62,4 +63,155 @@ func TestBlockEncoderSameBytes(t *testing.T) {
 			t.Fatalf("item %d: %q, %v; want %q, %v", i, b, err, wb, werr)
 		}
 	}
+}
+
+// refsLoadPath is a load path whose beams and posts share check lists and
+// whose posts and connections repeat demands, as a plan's do; with an
+// error beam and a post not checked (no checks), and texts JSON escapes.
+// Every check has its trace, as the engine's do (a calculation writes an
+// absent trace as []).
+func refsLoadPath() *LoadPath {
+	tr := []TraceItem{{Name: "M", Value: 65800.61234, Unit: "lb-in", Source: "statics"}, {Name: "fb/Fb'", Value: 0.29602512345}}
+	beamChecks := []Check{{Kind: KindBendingTop, Combo: "D+L (live-type loads on span 1)", Actual: 393.8681234, Allowable: 1330.52, Unit: "psi", Ratio: 0.29602512345, Trace: tr},
+		{Kind: KindShear, Combo: "D+L", Actual: 40.000000000000004, Allowable: 180, Unit: "psi", Ratio: 0.2222222222222, Trace: tr[1:]}}
+	other := []Check{{Kind: KindBendingTop, Combo: "D+S", Actual: 1, Allowable: 2, Unit: "psi", Ratio: 0.5, Trace: tr[:1]}}
+	postChecks := []Check{{Kind: "column", Combo: "D+L", Actual: 200.5, Allowable: 900.25, Unit: "psi", Ratio: 0.22271591224659817,
+		Trace: []TraceItem{{Name: "CP", Value: 0.81234567891, Source: "NDS 2018 Eq. 3.7-1"}}}}
+	dl := TypeLoads{DeadLb: 1234.5000000001, LiveLb: 4000, UpliftDeadLb: 740.7}
+	lp := &LoadPath{Applied: TypeLoads{DeadLb: 1.0000000000000002}, Delivered: TypeLoads{DeadLb: 1}}
+	for i := 0; i < 5; i++ {
+		b := PathBeam{ID: fmt.Sprintf("B%d", i+1), Mark: "B1", Kind: "flush-beam", Layer: "BEAM <&> \"A\"", Source: "p.dxf:12 (handle 3A)",
+			LengthIn: 464.00000000000006, SpansIn: []float64{152.83333333333334}, Size: "6x14", Species: "Douglas Fir-Larch", Grade: "No.1",
+			Supports: []string{"P1", "wall W2"}, Carries: []string{"M1", "M2"}, Checks: beamChecks, Governing: KindBendingTop,
+			MaxRatio: 0.29602512345, Status: StatusPass}
+		switch i {
+		case 3:
+			b.Mark, b.Checks, b.MaxRatio = "B2", other, 0.5
+		case 4:
+			b.Mark, b.Checks, b.Status, b.Governing, b.MaxRatio, b.Messages, b.Carries = "", nil, StatusError, "", 0, []string{"no supports\tfound ☃"}, []string{}
+		}
+		lp.Beams = append(lp.Beams, b)
+	}
+	for i := 0; i < 4; i++ {
+		p := PathPost{ID: fmt.Sprintf("P%d", i+1), Source: "p.dxf:40", At: [2]float64{5328.1234567, -1.1102230246251565e-16}, Size: "6x6",
+			Species: "Douglas Fir-Larch", Grade: "No.1", HeightIn: 96, Checked: true, Loads: dl, DownLb: 5234.5, DownCombo: "D+L",
+			Checks: postChecks, Status: StatusPass}
+		if i == 3 {
+			p.Checked, p.Checks, p.Status, p.Species, p.Grade, p.HeightIn = false, nil, "", "", "", 0
+			p.Loads.SnowLb, p.UpLb, p.UpCombo = 12, 96.00000000000001, "0.6D+0.6W"
+			p.Messages = []string{"no size or height"}
+		}
+		lp.Posts = append(lp.Posts, p)
+	}
+	for i := 0; i < 9; i++ {
+		c := Connection{Kind: "hanger", Member: fmt.Sprintf("M%d", i+1), Bearing: i%2 + 1, Carrier: "B1",
+			Loads: TypeLoads{DeadLb: 96.5, LiveLb: 320}, DownLb: 416.50000000000006, DownCombo: "D+L"}
+		if i%3 == 2 {
+			c.Loads.WindUpLb, c.UpLb, c.UpCombo = 300, 122.1, "0.6D+0.6W"
+		}
+		lp.Connections = append(lp.Connections, c)
+	}
+	lp.Connections = append(lp.Connections, Connection{Kind: "post base", Member: "P1", Bearing: 1, Carrier: "foundation", Loads: dl, DownLb: 5234.5, DownCombo: "D+L"})
+	lp.Foundation = []FoundationLine{{Kind: "wall", ID: "W1", Source: "p.dxf:9", LengthIn: 240, Loads: TypeLoads{DeadLb: 10}, PerFoot: TypeLoads{DeadLb: 0.5}},
+		{Kind: "post", ID: "P1", Source: "p.dxf:40", Loads: dl}}
+	return lp
+}
+
+// TestLoadPathV3References: results.json writes each list of checks of the
+// load path once, as a calculation its beams and posts name, and each
+// demand once, as an entry of "demands" its posts and connections name;
+// ReadJSON follows the references back to the load path as written
+// (rounded as schema 3 rounds it), and still reads a file of the same
+// schema holding every item in full, as written before the references
+// (common practice, no source).
+func TestLoadPathV3References(t *testing.T) {
+	lp := refsLoadPath()
+	r := &Results{Plan: "p.dxf", DrawingUnits: "in", Members: rtMembers(3), LoadPath: lp}
+	var buf bytes.Buffer
+	w := bufio.NewWriter(&buf)
+	require.NoError(t, encodeResults(w, r, layoutV3))
+	require.NoError(t, w.Flush())
+	want := roundedCopy(*lp).(LoadPath)
+
+	got, err := ParseJSON("results.json", buf.Bytes())
+	require.NoError(t, err, buf.String())
+	require.NotNil(t, got.LoadPath)
+	require.Equal(t, want, *got.LoadPath)
+	// one slice per calculation, as the members' checks
+	require.Same(t, &got.LoadPath.Beams[0].Checks[0], &got.LoadPath.Beams[2].Checks[0])
+
+	var file struct {
+		Calculations map[string]Calculation `json:"calculations"`
+		LoadPath     struct {
+			Beams       []map[string]any  `json:"beams"`
+			Posts       []map[string]any  `json:"posts"`
+			Connections []map[string]any  `json:"connections"`
+			Demands     map[string]demand `json:"demands"`
+		} `json:"load_path"`
+	}
+	require.NoError(t, json.Unmarshal(buf.Bytes(), &file))
+	f := file.LoadPath
+	calcs := map[string]bool{}
+	for _, b := range f.Beams {
+		require.NotContains(t, b, "checks")
+		if c, ok := b["calculation"].(string); ok {
+			calcs[c] = true
+		}
+	}
+	for _, p := range f.Posts {
+		require.NotContains(t, p, "checks")
+		require.NotContains(t, p, "loads")
+		require.Contains(t, p, "demand")
+		if c, ok := p["calculation"].(string); ok {
+			calcs[c] = true
+		}
+	}
+	for _, c := range f.Connections {
+		require.Equal(t, []string{"bearing", "carrier", "demand", "kind", "member"}, sortedKeys(c))
+	}
+	// three distinct lists of checks (two of beams, one of posts) and
+	// three distinct demands (a post's, equal to its base's; a hanger's
+	// down only and one with uplift), whatever the counts
+	require.Len(t, calcs, 3)
+	require.Len(t, f.Demands, 4) // and the post not checked, with its snow
+	require.Equal(t, f.Posts[0]["demand"], f.Connections[len(f.Connections)-1]["demand"])
+	for c := range calcs {
+		require.Contains(t, file.Calculations, c)
+	}
+	// the members' own and the load path's three
+	var alone bytes.Buffer
+	aw := bufio.NewWriter(&alone)
+	require.NoError(t, encodeResults(aw, &Results{Plan: r.Plan, DrawingUnits: r.DrawingUnits, Members: r.Members}, layoutV3))
+	require.NoError(t, aw.Flush())
+	var own struct {
+		Calculations map[string]Calculation `json:"calculations"`
+	}
+	require.NoError(t, json.Unmarshal(alone.Bytes(), &own))
+	require.Len(t, file.Calculations, len(own.Calculations)+3)
+
+	// the same schema with the load path in full (the earlier writer)
+	var whole map[string]json.RawMessage
+	require.NoError(t, json.Unmarshal(buf.Bytes(), &whole))
+	full, err := json.Marshal(want)
+	require.NoError(t, err)
+	whole["load_path"] = full
+	old, err := json.Marshal(whole)
+	require.NoError(t, err)
+	back, err := ParseJSON("old.json", old)
+	require.NoError(t, err)
+	require.Equal(t, want, *back.LoadPath)
+
+	// a reference to nothing is an error naming it
+	bad := bytes.Replace(buf.Bytes(), []byte(`"demand":"D1"`), []byte(`"demand":"D99"`), 1)
+	_, err = ParseJSON("bad.json", bad)
+	require.ErrorContains(t, err, `post P1: demand "D99" not in "demands"`)
+}
+
+func sortedKeys(m map[string]any) []string {
+	out := make([]string, 0, len(m))
+	for k := range m {
+		out = append(out, k)
+	}
+	slices.Sort(out)
+	return out
 }

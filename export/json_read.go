@@ -126,6 +126,7 @@ func parseV3(name string, data []byte) (*Results, error) {
 		Uplift       fileUpliftV3           `json:"uplift"`
 		Calculations map[string]Calculation `json:"calculations"`
 		InfoLists    map[string][]string    `json:"info_lists"`
+		LoadPath     *fileLoadPathV3        `json:"load_path"`
 	}
 	if err := json.Unmarshal(data, &f); err != nil {
 		return nil, fmt.Errorf("%s: %w", name, err)
@@ -149,7 +150,19 @@ func parseV3(name string, data []byte) (*Results, error) {
 	}
 	toInch, _ := UnitToInch(r.DrawingUnits)
 	r.Members = make([]Member, len(f.Members))
+	// the checks of each calculation, one slice shared by all that name it
 	shared := make(map[string][]Check, len(f.Calculations))
+	calcChecks := func(id string, c Calculation) []Check {
+		cs, ok := shared[id]
+		if !ok {
+			cs = make([]Check, len(c.Checks))
+			for j, cc := range c.Checks {
+				cs[j] = Check(cc)
+			}
+			shared[id] = cs
+		}
+		return cs
+	}
 	marks := make(map[string]string, len(f.Members))
 	for i, raw := range f.Members {
 		var fm fileMemberV3
@@ -188,16 +201,21 @@ func parseV3(name string, data []byte) (*Results, error) {
 		if !ok {
 			return nil, fmt.Errorf("%s: member %s: calculation %q not in \"calculations\"", name, m.ID, m.Calculation)
 		}
-		cs, ok := shared[m.Calculation]
-		if !ok {
-			cs = make([]Check, len(c.Checks))
-			for j, cc := range c.Checks {
-				cs[j] = Check(cc)
-			}
-			shared[m.Calculation] = cs
-		}
-		m.Checks = cs
+		m.Checks = calcChecks(m.Calculation, c)
 		m.Factors = c.Factors
+	}
+	if f.LoadPath != nil {
+		lp, err := f.LoadPath.loadPath(name, func(id string) ([]Check, bool) {
+			c, ok := f.Calculations[id]
+			if !ok {
+				return nil, false
+			}
+			return calcChecks(id, c), true
+		})
+		if err != nil {
+			return nil, err
+		}
+		r.LoadPath = lp
 	}
 	r.Uplift = UpliftReport{ReportLb: f.Uplift.ReportLb}
 	if f.Uplift.Bearings != nil {

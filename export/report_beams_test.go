@@ -79,32 +79,3 @@ func TestReportPlanBeams(t *testing.T) {
 		}
 	}
 }
-
-// TestReportBeamChecksByMark: in the load path section the checks are
-// listed for the beam of each mark with the largest ratio and for every
-// beam that does not pass, as the joists' calculations are by mark
-// (common practice, no source); the other beams keep their row.
-func TestReportBeamChecksByMark(t *testing.T) {
-	chk := []Check{{Kind: "bending-top", Combo: "D+L", Actual: 900, Allowable: 1400, Unit: "psi", Ratio: 0.64}}
-	r := &Results{LoadPath: &LoadPath{Beams: []PathBeam{
-		{ID: "B1", Mark: "B1", MaxRatio: 0.62, Status: StatusPass, Checks: chk},
-		{ID: "B2", Mark: "B1", MaxRatio: 0.625, Status: StatusPass, Checks: chk},
-		{ID: "B3", Mark: "B1", MaxRatio: 0.621, Status: StatusPass, Checks: chk},
-		{ID: "B4", Mark: "B2", MaxRatio: 1.2, Status: StatusFail, Checks: chk},
-		{ID: "B5", Mark: "B2", MaxRatio: 1.1, Status: StatusFail, Checks: chk},
-	}}}
-	s := buildPath(r)
-	listed := map[string]bool{}
-	for _, b := range s.Beams {
-		listed[b.ID] = len(b.Checks) > 0
-	}
-	want := map[string]bool{"B1": false, "B2": true, "B3": false, "B4": true, "B5": true}
-	for id, w := range want {
-		if listed[id] != w {
-			t.Errorf("%s: checks listed %v, want %v", id, listed[id], w)
-		}
-	}
-	if len(s.Beams) != 5 {
-		t.Errorf("%d beam rows, want 5", len(s.Beams))
-	}
-}

@@ -21,6 +21,8 @@ var symbolHTML = map[string][2]string{
 	"Ci": {"C", "i"}, "Cr": {"C", "r"}, "CL": {"C", "L"}, "Cfu": {"C", "fu"}, "Cb": {"C", "b"},
 	"Kcr": {"K", "cr"}, "RB": {"R", "B"}, "lu": {"ℓ", "u"}, "le": {"ℓ", "e"}, "lb": {"ℓ", "b"},
 	"Lc": {"L", "c"},
+	// the beam a member bears on (check.SupportBeam)
+	"Cb_beam": {"C", "b,beam"}, "Fc_perp_beam": {"F", "c⊥,beam"},
 }
 
 // reIdent is a symbol: letters, digits and underscores starting with a

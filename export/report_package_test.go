@@ -105,6 +105,8 @@ func TestMathHTML(t *testing.T) {
 		{"Fb'", "F′<sub>b</sub>"},
 		{"Fb*", "F<sub>b</sub>*"},
 		{"fc_perp / Fc_perp'", "f<sub>c⊥</sub> / F′<sub>c⊥</sub>"},
+		{"Fc_perp CM Ct Cb_beam", "F<sub>c⊥</sub> C<sub>M</sub> C<sub>t</sub> C<sub>b,beam</sub>"},
+		{"fc_perp/Fc_perp_beam'", "f<sub>c⊥</sub>/F′<sub>c⊥,beam</sub>"},
 		{"delta / delta_allow", "Δ / Δ<sub>allow</sub>"},
 		{"sqrt(le d / b^2)", "√(ℓ<sub>e</sub> d / b²)"},
 		{"1.20 Emin' / RB^2", "1.20 E′<sub>min</sub> / R<sub>B</sub>²"},

@@ -8,7 +8,10 @@ import (
 	"framecheck/export/internal/fmtx"
 )
 
-// pathSection is the report's load path section.
+// pathSection is the report's load path section. Its rows follow the
+// beams' marks and the distinct rows of posts and foundation lines, not
+// the number of items (issue 18): items alike share a row with their count
+// and ids (memberList); an item that does not pass has its own row.
 type pathSection struct {
 	Summary, Balance string
 	Beams            []pathBeamRow
@@ -19,15 +22,22 @@ type pathSection struct {
 
 type pathCheckRow struct{ Kind, Combo, Actual, Allowable, Unit, Ratio string }
 
+// pathBeamRow is one beam mark's passing beams (IDs, Count; Of names the
+// beam whose checks are listed) or one beam listed by itself: one that does
+// not pass, has messages or has no mark.
 type pathBeamRow struct {
-	ID, Mark, Kind, Size, Spans, Supports, Carries, Governing, Ratio, Status, Messages string
-	Bad                                                                                bool
-	Checks                                                                             []pathCheckRow
+	IDs, Of, Mark, Kind, Size, Spans, Supports, Carries, Governing, Ratio, Status, Messages string
+	Count                                                                                   int
+	Bad                                                                                     bool
+	Checks                                                                                  []pathCheckRow
 }
 
+// pathPostRow is the posts alike in every cell but their id, or one post
+// that fails or is in error.
 type pathPostRow struct {
-	ID, Size, D, L, Lr, S, Down, Up, Ratio, Status string
-	Bad                                            bool
+	IDs, Size, D, L, Lr, S, Down, Up, Ratio, Status string
+	Count                                           int
+	Bad                                             bool
 }
 
 type pathJointRow struct {
@@ -35,7 +45,11 @@ type pathJointRow struct {
 	Count                        int
 }
 
-type pathFoundRow struct{ Kind, ID, D, L, Lr, S, Wd, Wu, Unit string }
+// pathFoundRow is the foundation lines alike in kind, every load and unit.
+type pathFoundRow struct {
+	Kind, IDs, D, L, Lr, S, Wd, Wu, Unit string
+	Count                                int
+}
 
 // buildPath fills the load path section from r.LoadPath; nil without one.
 func buildPath(r *Results) *pathSection {
@@ -48,30 +62,95 @@ func buildPath(r *Results) *pathSection {
 	a, d := lp.Applied, lp.Delivered
 	s.Balance = "D " + lb(a.DeadLb) + " lb put on, " + lb(d.DeadLb) + " lb delivered; L " + lb(a.LiveLb) + " / " + lb(d.LiveLb) +
 		" lb; Lr " + lb(a.RoofLiveLb) + " / " + lb(d.RoofLiveLb) + " lb; S " + lb(a.SnowLb) + " / " + lb(d.SnowLb) + " lb"
-	// Each mark's checks are listed for its beam with the largest ratio,
-	// as the joists' calculations are by mark; a beam that does not pass
-	// has its own listed too.
-	governing := map[string]int{}
-	for i, b := range lp.Beams {
-		if g, ok := governing[b.Mark]; !ok || b.MaxRatio > lp.Beams[g].MaxRatio {
-			governing[b.Mark] = i
+	s.Beams = pathBeams(lp.Beams)
+	s.Posts = pathPosts(lp.Posts, lb)
+	s.Joints = pathJoints(lp.Connections)
+	s.Foundation = pathFoundation(lp.Foundation, lb)
+	return s
+}
+
+// pathBeams gives one row per beam mark, in the order of the mark's first
+// beam, for the beams that pass without a message; its checks are those of
+// its beam with the largest ratio, as the joists' calculations are by mark
+// (a mark's beams have the same size, lumber and spans and ratios within
+// 0.01). A beam that does not pass, has messages or has no mark has its
+// own row with what it bears on and carries, its messages and its checks.
+func pathBeams(beams []PathBeam) []pathBeamRow {
+	var rows []pathBeamRow
+	type group struct {
+		row  int // index in rows
+		ids  []string
+		gov  int // index in beams of the largest ratio
+		kind []string
+	}
+	groups := map[string]*group{}
+	var order []*group
+	for i := range beams {
+		b := &beams[i]
+		if b.Status != StatusPass || len(b.Messages) > 0 || b.Mark == "" {
+			row := pathBeamRow{IDs: b.ID, Mark: b.Mark, Count: 1, Kind: b.Kind, Size: b.Size, Spans: ftInList(b.SpansIn),
+				Supports: strings.Join(b.Supports, ", "), Carries: memberList(b.Carries), Governing: b.Governing,
+				Ratio: fmtx.Ratio(b.MaxRatio), Status: b.Status, Bad: b.Status != StatusPass, Messages: strings.Join(b.Messages, "; "),
+				Checks: pathChecks(b.Checks)}
+			rows = append(rows, row)
+			continue
+		}
+		g := groups[b.Mark]
+		if g == nil {
+			g = &group{row: len(rows), gov: i}
+			groups[b.Mark] = g
+			order = append(order, g)
+			rows = append(rows, pathBeamRow{Mark: b.Mark, Status: StatusPass})
+		}
+		g.ids = append(g.ids, b.ID)
+		if b.MaxRatio > beams[g.gov].MaxRatio {
+			g.gov = i
+		}
+		if !containsString(g.kind, b.Kind) {
+			g.kind = append(g.kind, b.Kind)
 		}
 	}
-	for i, b := range lp.Beams {
-		row := pathBeamRow{ID: b.ID, Mark: b.Mark, Kind: b.Kind, Size: b.Size, Spans: ftInList(b.SpansIn),
-			Supports: strings.Join(b.Supports, ", "), Carries: memberList(b.Carries), Governing: b.Governing,
-			Ratio: fmtx.Ratio(b.MaxRatio), Status: b.Status, Bad: b.Status != StatusPass, Messages: strings.Join(b.Messages, "; ")}
-		listed := governing[b.Mark] == i || b.Mark == "" || row.Bad
-		for _, c := range b.Checks {
-			if !listed {
-				break
-			}
-			row.Checks = append(row.Checks, pathCheckRow{Kind: c.Kind, Combo: c.Combo, Actual: fmtNum(c.Actual),
-				Allowable: fmtNum(c.Allowable), Unit: c.Unit, Ratio: fmtx.Ratio(c.Ratio)})
+	for _, g := range order {
+		b := &beams[g.gov]
+		row := &rows[g.row]
+		row.IDs, row.Count, row.Kind = memberList(g.ids), len(g.ids), strings.Join(g.kind, ", ")
+		row.Size, row.Spans, row.Governing, row.Ratio = b.Size, ftInList(b.SpansIn), b.Governing, fmtx.Ratio(b.MaxRatio)
+		row.Checks = pathChecks(b.Checks)
+		if len(g.ids) == 1 {
+			row.Supports, row.Carries = strings.Join(b.Supports, ", "), memberList(b.Carries)
+		} else if len(row.Checks) > 0 {
+			row.Of = b.ID
 		}
-		s.Beams = append(s.Beams, row)
 	}
-	for _, p := range lp.Posts {
+	return rows
+}
+
+func containsString(list []string, s string) bool {
+	for _, v := range list {
+		if v == s {
+			return true
+		}
+	}
+	return false
+}
+
+func pathChecks(cs []Check) []pathCheckRow {
+	var out []pathCheckRow
+	for _, c := range cs {
+		out = append(out, pathCheckRow{Kind: c.Kind, Combo: c.Combo, Actual: fmtNum(c.Actual),
+			Allowable: fmtNum(c.Allowable), Unit: c.Unit, Ratio: fmtx.Ratio(c.Ratio)})
+	}
+	return out
+}
+
+// pathPosts gives one row per distinct post row apart from its id, in
+// the order of its first post; a post that fails or is in error has its own.
+func pathPosts(posts []PathPost, lb func(float64) string) []pathPostRow {
+	var rows []pathPostRow
+	var ids [][]string
+	at := map[pathPostRow]int{}
+	for i := range posts {
+		p := &posts[i]
 		ratio := "not checked"
 		if p.Checked {
 			m := 0.0
@@ -80,13 +159,38 @@ func buildPath(r *Results) *pathSection {
 			}
 			ratio = fmtx.Ratio(m)
 		}
-		s.Posts = append(s.Posts, pathPostRow{ID: p.ID, Size: p.Size, D: lb(p.Loads.DeadLb), L: lb(p.Loads.LiveLb),
-			Lr: lb(p.Loads.RoofLiveLb), S: lb(p.Loads.SnowLb), Down: fmtx.Lb(DemandLb(p.DownLb)), Up: fmtx.Lb(DemandLb(p.UpLb)),
-			Ratio: ratio, Status: p.Status, Bad: p.Status == StatusFail || p.Status == StatusError})
+		row := pathPostRow{Size: p.Size, D: lb(p.Loads.DeadLb), L: lb(p.Loads.LiveLb), Lr: lb(p.Loads.RoofLiveLb), S: lb(p.Loads.SnowLb),
+			Down: fmtx.Lb(DemandLb(p.DownLb)), Up: fmtx.Lb(DemandLb(p.UpLb)), Ratio: ratio, Status: p.Status,
+			Bad: p.Status == StatusFail || p.Status == StatusError}
+		if row.Bad {
+			row.IDs, row.Count = p.ID, 1
+			rows = append(rows, row)
+			ids = append(ids, nil)
+			continue
+		}
+		k, ok := at[row]
+		if !ok {
+			k = len(rows)
+			at[row] = k
+			rows = append(rows, row)
+			ids = append(ids, nil)
+		}
+		ids[k] = append(ids[k], p.ID)
 	}
+	for k := range rows {
+		if ids[k] != nil {
+			rows[k].IDs, rows[k].Count = memberList(ids[k]), len(ids[k])
+		}
+	}
+	return rows
+}
+
+// pathJoints gives one row per kind of joint with its largest demands.
+func pathJoints(conns []Connection) []pathJointRow {
+	var out []pathJointRow
 	byKind := map[string]*pathJointRow{}
 	var down, up = map[string]float64{}, map[string]float64{}
-	for _, c := range lp.Connections {
+	for _, c := range conns {
 		j := byKind[c.Kind]
 		if j == nil {
 			j = &pathJointRow{Kind: c.Kind}
@@ -101,16 +205,37 @@ func buildPath(r *Results) *pathSection {
 		}
 	}
 	for _, j := range byKind {
-		s.Joints = append(s.Joints, *j)
+		out = append(out, *j)
 	}
-	sort.Slice(s.Joints, func(i, k int) bool { return s.Joints[i].Kind < s.Joints[k].Kind })
-	for _, f := range lp.Foundation {
+	sort.Slice(out, func(i, k int) bool { return out[i].Kind < out[k].Kind })
+	return out
+}
+
+// pathFoundation gives one row per distinct foundation row apart from its
+// id (kind, loads as shown and unit), in the order of its first line.
+func pathFoundation(lines []FoundationLine, lb func(float64) string) []pathFoundRow {
+	var rows []pathFoundRow
+	var ids [][]string
+	at := map[pathFoundRow]int{}
+	for i := range lines {
+		f := &lines[i]
 		l, unit := f.Loads, "lb"
 		if f.Kind == "wall" {
 			l, unit = f.PerFoot, "plf"
 		}
-		s.Foundation = append(s.Foundation, pathFoundRow{Kind: f.Kind, ID: f.ID, D: lb(l.DeadLb), L: lb(l.LiveLb), Lr: lb(l.RoofLiveLb),
-			S: lb(l.SnowLb), Wd: lb(l.WindDownLb), Wu: lb(l.WindUpLb), Unit: unit})
+		row := pathFoundRow{Kind: f.Kind, D: lb(l.DeadLb), L: lb(l.LiveLb), Lr: lb(l.RoofLiveLb),
+			S: lb(l.SnowLb), Wd: lb(l.WindDownLb), Wu: lb(l.WindUpLb), Unit: unit}
+		k, ok := at[row]
+		if !ok {
+			k = len(rows)
+			at[row] = k
+			rows = append(rows, row)
+			ids = append(ids, nil)
+		}
+		ids[k] = append(ids[k], f.ID)
 	}
-	return s
+	for k := range rows {
+		rows[k].IDs, rows[k].Count = memberList(ids[k]), len(ids[k])
+	}
+	return rows
 }

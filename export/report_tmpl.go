@@ -301,24 +301,24 @@ At each flagged bearing a connector is needed whose allowable load for the combi
 {{else}}<p>No bearing has a net uplift reaction under any load combination.</p>{{end}}
 </section>
 {{with .Path}}<section id="loadpath"><h2>Load path: beams, posts, connections, foundation</h2>
-<p>{{.Summary}}. Each beam is checked with the reactions of the members it carries, by load type, as point loads where they bear, and its own weight; it forms its own load combinations. The loads put on the members of the path reach walls, posts and rigid supports in full: {{.Balance}}. The checks are listed for the beam of each mark with the largest ratio (the beams of a mark have the same size, lumber and spans and ratios within 0.01) and for every beam that does not pass; every beam's governing check is in the Beams sheet and all its checks in results.json.</p>
+<p>{{.Summary}}. Each beam is checked with the reactions of the members it carries, by load type, as point loads where they bear, and its own weight; it forms its own load combinations. The loads put on the members of the path reach walls, posts and rigid supports in full: {{.Balance}}. Beams that pass share a row by mark (alike in size, lumber, spans and ratio within 0.01) with the checks of its beam of largest ratio, and posts and foundation loads alike but for their id share a row; a beam or post that does not pass (or a beam with a message) has its own. Every beam, post and foundation line is in the Beams, Posts and Foundation sheets and results.json.</p>
 <h3>Beams</h3>
-<table id="path-beams"><tr><th>beam</th><th>mark</th><th>kind</th><th>size</th><th>spans</th><th>bears on</th><th>carries</th><th>governing</th><th>ratio</th><th>status</th></tr>
-{{range .Beams}}<tr{{if .Bad}} class="bad"{{end}}><td>{{.ID}}</td><td>{{.Mark}}</td><td>{{.Kind}}</td><td>{{.Size}}</td><td>{{.Spans}}</td><td>{{.Supports}}</td><td>{{.Carries}}</td><td>{{.Governing}}</td><td class="n">{{.Ratio}}</td><td>{{.Status}}</td></tr>
-{{if .Checks}}<tr><td></td><td colspan="9"><table class="sub">{{range .Checks}}<tr><td>{{.Kind}}</td><td>{{combo .Combo}}</td><td class="n">{{.Actual}}</td><td class="n">{{.Allowable}}</td><td>{{.Unit}}</td><td class="n">{{.Ratio}}</td></tr>{{end}}</table></td></tr>{{end}}
-{{if .Messages}}<tr><td></td><td colspan="9">{{.Messages}}</td></tr>{{end}}
+<table id="path-beams"><tr><th>beams</th><th>mark</th><th>count</th><th>kind</th><th>size</th><th>spans</th><th>bears on</th><th>carries</th><th>governing</th><th>ratio</th><th>status</th></tr>
+{{range .Beams}}<tr{{if .Bad}} class="bad"{{end}}><td>{{.IDs}}</td><td>{{.Mark}}</td><td class="n">{{.Count}}</td><td>{{.Kind}}</td><td>{{.Size}}</td><td>{{.Spans}}</td><td>{{.Supports}}</td><td>{{.Carries}}</td><td>{{.Governing}}</td><td class="n">{{.Ratio}}</td><td>{{.Status}}</td></tr>
+{{if .Checks}}<tr><td></td><td colspan="10"><table class="sub">{{if .Of}}<caption>checks of {{.Of}}, the largest ratio of the mark</caption>{{end}}{{range .Checks}}<tr><td>{{.Kind}}</td><td>{{combo .Combo}}</td><td class="n">{{.Actual}}</td><td class="n">{{.Allowable}}</td><td>{{.Unit}}</td><td class="n">{{.Ratio}}</td></tr>{{end}}</table></td></tr>{{end}}
+{{if .Messages}}<tr><td></td><td colspan="10">{{.Messages}}</td></tr>{{end}}
 {{end}}</table>
 {{if .Posts}}<h3>Posts</h3>
-<table id="path-posts"><tr><th>post</th><th>size</th><th>D, lb</th><th>L, lb</th><th>Lr, lb</th><th>S, lb</th><th>largest down, ASD lb</th><th>net uplift, ASD lb</th><th>column ratio</th><th>status</th></tr>
-{{range .Posts}}<tr{{if .Bad}} class="bad"{{end}}><td>{{.ID}}</td><td>{{.Size}}</td><td class="n">{{.D}}</td><td class="n">{{.L}}</td><td class="n">{{.Lr}}</td><td class="n">{{.S}}</td><td class="n">{{.Down}}</td><td class="n">{{.Up}}</td><td class="n">{{.Ratio}}</td><td>{{.Status}}</td></tr>
+<table id="path-posts"><tr><th>posts</th><th>count</th><th>size</th><th>D, lb</th><th>L, lb</th><th>Lr, lb</th><th>S, lb</th><th>largest down, ASD lb</th><th>net uplift, ASD lb</th><th>column ratio</th><th>status</th></tr>
+{{range .Posts}}<tr{{if .Bad}} class="bad"{{end}}><td>{{.IDs}}</td><td class="n">{{.Count}}</td><td>{{.Size}}</td><td class="n">{{.D}}</td><td class="n">{{.L}}</td><td class="n">{{.Lr}}</td><td class="n">{{.S}}</td><td class="n">{{.Down}}</td><td class="n">{{.Up}}</td><td class="n">{{.Ratio}}</td><td>{{.Status}}</td></tr>
 {{end}}</table>{{end}}
 <h3>Connections (ASD demand; no product named)</h3>
 <table id="path-joints"><tr><th>joint</th><th>count</th><th>largest down, lb</th><th>at</th><th>largest up, lb</th><th>at</th></tr>
 {{range .Joints}}<tr><td>{{.Kind}}</td><td class="n">{{.Count}}</td><td class="n">{{.Down}}</td><td>{{.DownAt}}</td><td class="n">{{.Up}}</td><td>{{.UpAt}}</td></tr>
 {{end}}</table>
 <h3>Loads to the foundation</h3>
-<table id="path-foundation"><tr><th>kind</th><th>id</th><th>D</th><th>L</th><th>Lr</th><th>S</th><th>W down</th><th>W up</th><th>unit</th></tr>
-{{range .Foundation}}<tr><td>{{.Kind}}</td><td>{{.ID}}</td><td class="n">{{.D}}</td><td class="n">{{.L}}</td><td class="n">{{.Lr}}</td><td class="n">{{.S}}</td><td class="n">{{.Wd}}</td><td class="n">{{.Wu}}</td><td>{{.Unit}}</td></tr>
+<table id="path-foundation"><tr><th>kind</th><th>ids</th><th>count</th><th>D</th><th>L</th><th>Lr</th><th>S</th><th>W down</th><th>W up</th><th>unit</th></tr>
+{{range .Foundation}}<tr><td>{{.Kind}}</td><td>{{.IDs}}</td><td class="n">{{.Count}}</td><td class="n">{{.D}}</td><td class="n">{{.L}}</td><td class="n">{{.Lr}}</td><td class="n">{{.S}}</td><td class="n">{{.Wd}}</td><td class="n">{{.Wu}}</td><td>{{.Unit}}</td></tr>
 {{end}}</table>
 <p>Every connection's demand by load type and combination is in the Connections sheet and results.json ("load_path").</p>
 </section>{{end}}

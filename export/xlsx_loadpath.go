@@ -36,7 +36,7 @@ var postColumns = []column{
 }
 
 var connectionColumns = []column{
-	{"Joint", 16}, {"Member", 8}, {"Bearing", 7}, {"Carried by", 12},
+	{"Joint", 16}, {"Members", 40}, {"Count", 7}, {"Bearing", 7}, {"Carried by", 12},
 	{"D (lb)", 9}, {"L (lb)", 9}, {"Lr (lb)", 9}, {"S (lb)", 9}, {"W down (lb)", 9}, {"W up (lb)", 9},
 	{"Down, ASD (lb)", 10}, {"Combination", 22}, {"Up, ASD (lb)", 10}, {"Combination", 22},
 }
@@ -52,10 +52,11 @@ var foundationColumns = []column{
 // sheets of lp, in workbook order, each with its columns, its number of
 // rows and the function that fills a row's cells.
 func loadPathSheets(lp *LoadPath) []splicedSheet {
+	groups := connectionGroups(lp.Connections)
 	return []splicedSheet{
 		{name: SheetBeams, cols: beamColumns, rows: len(lp.Beams), row: func(s *rowCells, i int) { beamRow(s, &lp.Beams[i]) }},
 		{name: SheetPosts, cols: postColumns, rows: len(lp.Posts), row: func(s *rowCells, i int) { postRow(s, &lp.Posts[i]) }},
-		{name: SheetConnections, cols: connectionColumns, rows: len(lp.Connections), row: func(s *rowCells, i int) { connectionRow(s, &lp.Connections[i]) }},
+		{name: SheetConnections, cols: connectionColumns, rows: len(groups), row: func(s *rowCells, i int) { connectionRow(s, lp.Connections, &groups[i]) }},
 		{name: SheetFoundation, cols: foundationColumns, rows: len(lp.Foundation), row: func(s *rowCells, i int) { foundationRow(s, &lp.Foundation[i]) }},
 	}
 }
@@ -143,12 +144,68 @@ func postRow(s *rowCells, p *PathPost) {
 	s.text(strings.Join(p.Messages, "; "))
 }
 
-// connectionRow fills s with connection c's cells, in connectionColumns
-// order.
-func connectionRow(s *rowCells, c *Connection) {
+// connMembersPerRow is the most joints one row of the Connections sheet
+// names (a cell holds at most 32,767 characters).
+const connMembersPerRow = 100
+
+// connGroup is a row of the Connections sheet: joints alike, in the order
+// of the first, at the indexes in joints.
+type connGroup struct{ joints []int }
+
+// connRowKey is what a row of the Connections sheet shows but the
+// members: joints with the same key share a row.
+type connRowKey struct {
+	kind, carrier      string
+	bearing            int
+	loads              [6]float64
+	down, up           float64
+	downCombo, upCombo string
+}
+
+func connKey(c *Connection) connRowKey {
+	l := c.Loads
+	return connRowKey{kind: c.Kind, carrier: c.Carrier, bearing: c.Bearing,
+		loads: [6]float64{math.Round(l.DeadLb), math.Round(l.LiveLb), math.Round(l.RoofLiveLb), math.Round(l.SnowLb),
+			math.Round(l.WindDownLb), math.Round(l.WindUpLb)},
+		down: DemandLb(c.DownLb), downCombo: c.DownCombo, up: DemandLb(c.UpLb), upCombo: c.UpCombo}
+}
+
+// connectionGroups groups the joints whose rows would read the same but
+// for the member (same kind, bearing, carrier, loads and demands as the
+// sheet rounds them): the joists of a run hung from one beam share a row
+// naming them all, up to connMembersPerRow a row. Rows are in the order of
+// their first joint; a joint with a value that is not finite has a row of
+// its own.
+func connectionGroups(cs []Connection) []connGroup {
+	var groups []connGroup
+	open := make(map[connRowKey]int)
+	for i := range cs {
+		k := connKey(&cs[i])
+		if g, ok := open[k]; ok && len(groups[g].joints) < connMembersPerRow {
+			groups[g].joints = append(groups[g].joints, i)
+			continue
+		}
+		open[k] = len(groups)
+		groups = append(groups, connGroup{joints: []int{i}})
+	}
+	return groups
+}
+
+// connectionRow fills s with the cells of the joints of g, in
+// connectionColumns order.
+func connectionRow(s *rowCells, cs []Connection, g *connGroup) {
+	c := &cs[g.joints[0]]
 	s.begin(false)
 	s.text(c.Kind)
-	s.text(c.Member)
+	var b strings.Builder
+	for k, j := range g.joints {
+		if k > 0 {
+			b.WriteString(", ")
+		}
+		b.WriteString(cs[j].Member)
+	}
+	s.text(b.String())
+	s.integer(len(g.joints))
 	s.integer(c.Bearing)
 	s.text(c.Carrier)
 	typeCells(s, c.Loads)

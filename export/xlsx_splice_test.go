@@ -8,6 +8,7 @@ import (
 	"math"
 	"path/filepath"
 	"regexp"
+	"slices"
 	"strings"
 	"testing"
 
@@ -144,7 +145,7 @@ func TestSplicedSheetsMatchExcelize(t *testing.T) {
 	defer want.Close()
 	lp := r.LoadPath
 	counts := map[string]int{SheetMembers: len(r.Members), SheetBeams: len(lp.Beams), SheetPosts: len(lp.Posts),
-		SheetConnections: len(lp.Connections), SheetFoundation: len(lp.Foundation)}
+		SheetConnections: len(connectionGroups(lp.Connections)), SheetFoundation: len(lp.Foundation)}
 	widths := map[string]int{SheetMembers: len(membersColumns), SheetBeams: len(beamColumns), SheetPosts: len(postColumns),
 		SheetConnections: len(connectionColumns), SheetFoundation: len(foundationColumns)}
 	for _, sheet := range sheets {
@@ -193,8 +194,14 @@ func TestSplicedSheetsMatchExcelize(t *testing.T) {
 	}
 	// The rows do hold what they were built from (the comparison is not of
 	// two empty sheets): a shaded failing post and an "n/a".
-	if v, _ := got.GetCellValue(SheetConnections, "E10"); v != "n/a" {
-		t.Errorf("Connections!E10 %q, want n/a (NaN dead load)", v)
+	nanRow := 0
+	for i, g := range connectionGroups(lp.Connections) {
+		if g.joints[0] == 6 {
+			nanRow = HeaderRow + 1 + i
+		}
+	}
+	if v, _ := got.GetCellValue(SheetConnections, fmt.Sprintf("F%d", nanRow)); v != "n/a" {
+		t.Errorf("Connections!F%d %q, want n/a (NaN dead load)", nanRow, v)
 	}
 	if v, _ := got.GetCellValue(SheetBeams, "A4"); v != "B1" {
 		t.Errorf("Beams!A4 %q, want B1", v)
@@ -261,5 +268,55 @@ func TestSheetParts(t *testing.T) {
 	if _, err := sheetParts(build(`<Relationship Id="rId7" Type="` + ws + `" Target="worksheets/sheet1.xml"/>`)); err == nil ||
 		!strings.Contains(err.Error(), "Posts & caps") {
 		t.Errorf("missing relationship: error %v, want one naming the sheet", err)
+	}
+}
+
+// TestConnectionGroups: the Connections sheet gives joints alike (kind,
+// bearing, carrier, loads and demands as the sheet rounds them) one row
+// naming them all, whether or not they come one after another, at most
+// connMembersPerRow a row; every joint is in exactly one row, and a
+// joint with a value that is not finite has its own (common practice,
+// no source).
+func TestConnectionGroups(t *testing.T) {
+	hang := func(m, carrier string, dead float64) Connection {
+		return Connection{Kind: "hanger", Member: m, Bearing: 2, Carrier: carrier, Loads: TypeLoads{DeadLb: dead, LiveLb: 320},
+			DownLb: dead + 320, DownCombo: "D+L"}
+	}
+	var cs []Connection
+	for i := 0; i < 2*connMembersPerRow+5; i++ {
+		cs = append(cs, hang(fmt.Sprintf("M%d", i+1), "B1", 96.4)) // 96 lb as the sheet rounds it
+		cs = append(cs, hang(fmt.Sprintf("N%d", i+1), "B2", 96))
+	}
+	cs = append(cs, hang("X1", "B1", 96.6), hang("X2", "B1", math.NaN()), hang("X3", "B1", math.NaN()))
+	n205 := &cs[len(cs)-4]
+	n205.UpLb, n205.UpCombo = 0.2, "0.6D+0.6W" // up 1 lb as the sheet rounds it up: a row of its own
+	gs := connectionGroups(cs)
+	// B1: 205 joints alike in rows of 100, 100, 5; B2: 204 in 100, 100, 4
+	// and N205 alone; X1 with more dead load, X2, X3 each alone
+	want := []int{100, 100, 100, 100, 5, 4, 1, 1, 1, 1}
+	var got []int
+	seen := make([]int, len(cs))
+	for _, g := range gs {
+		got = append(got, len(g.joints))
+		first := connKey(&cs[g.joints[0]])
+		for _, j := range g.joints {
+			seen[j]++
+			if k := connKey(&cs[j]); k != first && !math.IsNaN(cs[j].Loads.DeadLb) {
+				t.Errorf("joint %s in the row of %s: %+v vs %+v", cs[j].Member, cs[g.joints[0]].Member, k, first)
+			}
+		}
+	}
+	slices.Sort(got)
+	slices.Reverse(got)
+	if !slices.Equal(got, want) {
+		t.Errorf("rows of %v joints, want %v", got, want)
+	}
+	for j, n := range seen {
+		if n != 1 {
+			t.Errorf("joint %s in %d rows", cs[j].Member, n)
+		}
+	}
+	if gs[0].joints[1] != 2 || cs[gs[0].joints[1]].Member != "M2" {
+		t.Errorf("first row's joints %v, want M1, M2, ... (every other joint)", gs[0].joints[:3])
 	}
 }

@@ -165,7 +165,7 @@ func (g *grouper) readBayCallout(r *bayRegion, texts []int) bool {
 	var got []callout
 	for _, ti := range texts {
 		t := g.labelTexts[ti]
-		co, err := ReadCallout(t.text)
+		co, err := g.readCallout(t.text)
 		if err != nil {
 			if !anySizeRE.MatchString(normalizeCallout(t.text)) {
 				continue // a room name or a note

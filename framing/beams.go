@@ -161,13 +161,15 @@ func distinctOffsets(g *grouper, b *beamGroup) int {
 }
 
 // beamMaterialRE matches the words of glulam and structural composite
-// lumber callouts, which ReadCallout does not read.
+// lumber callouts, which ReadCallout does not read (a joist callout in
+// actual inches has a spacing).
 var beamMaterialRE = regexp.MustCompile(`(?i)\b(GLB|GLULAM|GL|LVL|PSL|LSL|SCL)\b|\d+F-\d`)
 
 // claimBeamCallouts finds the beam candidates and takes from the label
 // texts the size callouts of beams, before the joists' callouts are read:
 // a text naming a size with no spacing ("(3) 2x12", "4x12") or a glulam
-// or SCL callout ("5 1/8 x 12 GLB 24F-1.8E", "3 1/2 x 11 7/8 LVL") whose
+// or SCL callout with no spacing ("5 1/8 x 12 GLB 24F-1.8E", "3 1/2 x
+// 11 7/8 LVL"; "1 3/4 x 9 1/2 LVL @ 16" is the joists') whose
 // nearest beam is within its reach (max(12 in, 3 text heights), from the
 // beam's edge) and nearer than every joist and label line. Each beam keeps
 // its nearest such text; the others stay label texts.
@@ -197,7 +199,7 @@ func (g *grouper) claimBeamCallouts() {
 		if bk < 0 {
 			continue
 		}
-		co, err := ReadCallout(t.text)
+		co, err := readCallout(t.text) // a size in actual inches read as written: its spacing counts
 		switch {
 		case err == nil && co.SpacingIn > 0: // a joist callout
 			continue

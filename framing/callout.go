@@ -195,7 +195,7 @@ func (g *grouper) readLabelTexts() ([]reading, []int) {
 		}
 		r, ok := cache[t.text]
 		if !ok {
-			r.co, r.err = ReadCallout(t.text)
+			r.co, r.err = g.readCallout(t.text)
 			cache[t.text] = r
 		}
 		read[ti] = r
@@ -339,11 +339,24 @@ func (g *grouper) applyCallouts(iss *dxfimport.IssueList, k int, cs []callout) {
 		}
 	}
 	m.Size, m.CalloutSpacingIn = c0.Designation(), c0.SpacingIn
-	if c0.Species != "" {
+	switch {
+	case c0.Material:
+		// a material named by the callout (structural composite lumber):
+		// its grade is the callout's, else the layer's [lumber] grade
+		// when the layer names the same material, else none (the
+		// material's only grade; the check names the grades when it has
+		// several); never a sawn grade of the layer
+		if c0.Grade != "" || !strings.EqualFold(m.Species, c0.Species) {
+			m.Grade = c0.Grade
+		}
 		m.Species = c0.Species
-	}
-	if c0.Grade != "" {
-		m.Grade = c0.Grade
+	default:
+		if c0.Species != "" {
+			m.Species = c0.Species
+		}
+		if c0.Grade != "" {
+			m.Grade = c0.Grade
+		}
 	}
 	// a generated joist is at the callout's spacing but for the last gap
 	// of its bay, which is the layout's, not the drawing's
@@ -353,6 +366,12 @@ func (g *grouper) applyCallouts(iss *dxfimport.IssueList, k int, cs []callout) {
 		m.Messages = append(m.Messages, msg)
 		iss.Add(m.Pos, CodeCalloutSpacing, dxfimport.SevWarning, "%s", msg)
 	}
+}
+
+// readCallout reads a label text as ReadCallout does, and a size in
+// actual inches with the project's materials (Options.MaterialCallout).
+func (g *grouper) readCallout(s string) (Callout, error) {
+	return ReadCalloutWith(s, g.opt.MaterialCallout)
 }
 
 // mergeCallouts merges the callouts over one member into the first: a

@@ -10,13 +10,25 @@ import (
 )
 
 // A Callout is what a size callout on a framing plan says about the
-// joists under it: `(2) 2x10 DF-L #2 @ 16" o.c. TYP.`.
+// joists under it: `(2) 2x10 DF-L #2 @ 16" o.c. TYP.`, or, for structural
+// composite lumber of the materials file, `1 3/4 x 11 7/8 LVL @ 16" o.c.`.
 type Callout struct {
-	Size      string  // nominal size of one ply, "2x10"
+	Size      string  // nominal size of one ply, "2x10"; actual inches for a Material callout, "1.75x11.875"
 	Plies     int     // 1, or n of a built-up member written "(n) 2x10"
 	SpacingIn float64 // on-centre spacing, 0 when the callout gives none
 	Species   string  // canonical species name, "" when not given
 	Grade     string  // canonical grade name, "" when not given
+	// Material: the size is in actual inches and the callout names its
+	// material by a word after it (structural composite lumber of the
+	// materials file, read through Options.MaterialCallout): Species is
+	// that material as the materials file spells it, Grade the words
+	// after the word ("" when none).
+	Material bool
+
+	// head is the size and material words of a size in actual inches as
+	// written ("(2) 1 3/4 x 11 7/8 LVL 2.0E"), before they are read with
+	// the materials (resolveMaterial); "" otherwise.
+	head string
 }
 
 // Designation is the member size as the project writes it: "2x10", or
@@ -109,7 +121,47 @@ func ParseCallout(s string) (size string, spacingIn float64, err error) {
 // line: one line gives the size; the others may add the spacing, species
 // or grade, or be headings and notes. Lines giving different values are
 // an error.
+//
+// A size in actual inches ("1 3/4 x 11 7/8 LVL @ 16", structural composite
+// lumber) is named by a material of the project's materials file, which
+// ReadCallout does not know: it refuses such a callout. The grouper reads
+// it with Options.MaterialCallout (see MaterialCalloutFunc).
 func ReadCallout(s string) (Callout, error) {
+	c, err := readCallout(s)
+	if err == nil && c.head != "" {
+		return Callout{}, &CalloutError{flatText(s), actualSizeRefused}
+	}
+	return c, err
+}
+
+// ReadCalloutWith reads a callout as ReadCallout does, and also one whose
+// size is in actual inches, its material named by a word after the size
+// (structural composite lumber of the project's materials file):
+//
+//	1 3/4 x 11 7/8 LVL @ 16" o.c.    1-3/4x9-1/2 LVL @ 19.2 O.C.
+//	(2) 1.75x9.5 LVL 2.0E 16 OC      1 3/4 x 14 LVL (2) @ 24" TYP.
+//
+// The size and the words after it, up to the spacing or the notes, are
+// read by read (Options.MaterialCallout: plies "(n)" before or after the
+// size, as on beam callouts; the material word; its grade after it), the
+// spacing and notes as on any callout. The Callout is then a Material
+// one: Size in actual inches ("1.75x11.875"), Species the material,
+// Grade its grade ("" when not given). A size in actual inches with no
+// word after it, a word naming no material, plies written "2-" or "DBL",
+// or a sawn species or grade with it is an error; with read nil every
+// size in actual inches is.
+func ReadCalloutWith(s string, read MaterialCalloutFunc) (Callout, error) {
+	c, err := readCallout(s)
+	if err != nil {
+		return c, err
+	}
+	return resolveMaterial(c, s, read)
+}
+
+// readCallout reads a callout as ReadCallout does, leaving a size in
+// actual inches unread: its size and material words are in head, Size is
+// "".
+func readCallout(s string) (Callout, error) {
 	t := normalizeCallout(s)
 	lines := strings.Split(t, "\n")
 	var c Callout
@@ -134,11 +186,11 @@ func ReadCallout(s string) (Callout, error) {
 			continue
 		}
 		if hasSize {
-			if sizeLine != "" && (lc.Size != c.Size || lc.Plies != c.Plies) {
+			if sizeLine != "" && (lc.Size != c.Size || lc.Plies != c.Plies || lc.head != c.head) {
 				return Callout{}, &CalloutError{flatText(s), fmt.Sprintf("lines %q and %q give different sizes", sizeLine, l)}
 			}
 			sizeLine = l
-			c.Size, c.Plies = lc.Size, lc.Plies
+			c.Size, c.Plies, c.head = lc.Size, lc.Plies, lc.head
 		}
 		if err := c.merge(lc); err != nil {
 			return Callout{}, &CalloutError{flatText(s), err.Error()}
@@ -258,6 +310,7 @@ func readCalloutLine(l string) (c Callout, hasSize bool, err error) {
 	l = skipNotes(l)
 	c.Plies = 1
 	if hasSize {
+		l0, pliesForm := l, ""
 		if m := pliesRE.FindStringSubmatch(l); m != nil {
 			rest, n := l[len(m[0]):], 0
 			switch {
@@ -279,24 +332,34 @@ func readCalloutLine(l string) (c Callout, hasSize bool, err error) {
 				return bad("%s plies: want 1 to %d", m[2], maxPlies)
 			}
 			if n > 0 {
-				c.Plies, l = n, rest
+				c.Plies, l, pliesForm = n, rest, strings.TrimSpace(m[0])
 			}
 		}
-		if actualSizeRE.MatchString(l) {
-			return bad("%s", actualSizeJoists)
-		}
-		m := sizeRE.FindStringSubmatch(l)
-		if m == nil {
-			return bad("the size must come first (want a form like 2x10 @ 16\" o.c.)")
-		}
-		size, err := calloutSize(m[1], m[2])
-		if err != nil {
-			return bad("%v", err)
-		}
-		c.Size = size
-		l = l[len(m[0]):]
-		if l != "" && isWordByte(l[0]) {
-			return bad("%q runs into the size", firstWord(l))
+		if a := actualSizeRE.FindString(l); a != "" {
+			// structural composite lumber: the size and the material
+			// words up to the spacing or notes are read with the
+			// materials (resolveMaterial), as a beam callout's are
+			if pliesForm != "" && !strings.HasPrefix(pliesForm, "(") {
+				return bad("plies %q: write the plies of a size in actual inches as (2) before or after the size, "+
+					"such as (2) 1 3/4 x 11 7/8 LVL", pliesForm)
+			}
+			from := len(l0) - len(l) + len(a)
+			end := actualHeadEnd(l0, from)
+			c.Plies, c.head, l = 1, flatText(l0[:end]), l0[end:]
+		} else {
+			m := sizeRE.FindStringSubmatch(l)
+			if m == nil {
+				return bad("the size must come first (want a form like 2x10 @ 16\" o.c.)")
+			}
+			size, err := calloutSize(m[1], m[2])
+			if err != nil {
+				return bad("%v", err)
+			}
+			c.Size = size
+			l = l[len(m[0]):]
+			if l != "" && isWordByte(l[0]) {
+				return bad("%q runs into the size", firstWord(l))
+			}
 		}
 	}
 	for {
@@ -413,11 +476,79 @@ func firstWord(l string) string {
 // composite lumber or glulam, never a nominal sawn size.
 var actualSizeRE = regexp.MustCompile(`^\d+(?:[ -]\d+/\d+|\.\d+)\s*[xX×]`)
 
-// actualSizeJoists is why a joist callout with a size in actual inches is
-// not read: such sizes are read on beam callouts, with their material.
-const actualSizeJoists = "a size in actual inches is structural composite lumber or glulam: such sizes are read on beam callouts " +
-	"(\"3 1/2 x 11 7/8 LVL\"); for joists of it, give the material in [lumber] species, grade and size, " +
-	"or [[lumber.by_layer]] for their layer"
+// actualSizeRefused is why a callout with a size in actual inches is not
+// read without the project's materials (ReadCallout, or a grouper whose
+// Options have no MaterialCallout).
+const actualSizeRefused = "a size in actual inches is structural composite lumber or glulam, named by a material of the " +
+	"project's materials file (\"1 3/4 x 11 7/8 LVL @ 16 o.c.\"), and is read only with the project's materials"
+
+// actualHeadEnd returns where the size and material words of a callout
+// in actual inches end in line l, looking from byte from on (after the
+// size's x): at "@" or "AT", at a spacing followed by o.c. ("16 OC"), or
+// at a note word (TYP., U.N.O., JOISTS, SEE ...). What follows is read as
+// the spacing and notes of any callout. The words before it are the
+// material's name and grade: a grade such as 2.0E is not a spacing.
+func actualHeadEnd(l string, from int) int {
+	for i := from; i < len(l); i++ {
+		if l[i] == '@' {
+			return i
+		}
+		if l[i] == ' ' || (l[i-1] != ' ' && l[i-1] != ',' && l[i-1] != ';') {
+			continue // only at the start of a word
+		}
+		r := l[i:]
+		if atRE.MatchString(r) {
+			return i
+		}
+		if _, n, _ := calloutSpacing(r); n > 0 {
+			if m := ocRE.FindString(r[n:]); m != "" && wordEnds(r[n+len(m):]) {
+				return i
+			}
+		}
+		if m := noteWordsRE.FindString(r); m != "" && wordEnds(r[len(m):]) {
+			return i
+		}
+	}
+	return len(l)
+}
+
+// A MaterialCalloutFunc reads the size and material words of a joist
+// callout in actual inches ("1 3/4 x 11 7/8 LVL", "(2) 1.75x9.5 LVL 2.0E",
+// "1 3/4 x 14 LVL (2)": the callout without its spacing and notes) with
+// the project's materials, as a beam callout's are read: size as the
+// check names it ("1.75x11.875", "(2) 1.75x9.5"), the material as the
+// materials file spells it, and its grade ("" when the callout gives
+// none). err says why it cannot: no material word (a bare size in actual
+// inches cannot say its material), a word naming no material of the
+// file (naming the materials known), a bad size.
+type MaterialCalloutFunc func(head string) (size, species, grade string, err error)
+
+// resolveMaterial reads the size in actual inches of callout c (read by
+// readCallout from text s) with read: c becomes a Material callout. Any
+// failure is a CalloutError naming the text, never a default.
+func resolveMaterial(c Callout, s string, read MaterialCalloutFunc) (Callout, error) {
+	if c.head == "" {
+		return c, nil
+	}
+	bad := func(reason string) (Callout, error) { return Callout{}, &CalloutError{flatText(s), reason} }
+	if read == nil {
+		return bad(actualSizeRefused)
+	}
+	if c.Species != "" || c.Grade != "" {
+		return bad(fmt.Sprintf("%q is a size in actual inches, of the material named after it, and takes no sawn species "+
+			"or grade (%s)", c.head, strings.TrimSpace(c.Species+" "+c.Grade)))
+	}
+	size, species, grade, err := read(c.head)
+	if err != nil {
+		return bad(err.Error())
+	}
+	n, ply := splitPlies(size)
+	if n < 1 || ply == "" {
+		return bad(fmt.Sprintf("size %q not read", size))
+	}
+	c.Size, c.Plies, c.Species, c.Grade, c.Material, c.head = ply, n, species, grade, true, ""
+	return c, nil
+}
 
 // calloutSize checks a nominal size: dimension lumber 2-4 in thick and
 // 2-16 in deep (NDS 2018 Supplement Table 1B's range; the check package

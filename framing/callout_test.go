@@ -105,9 +105,10 @@ func TestReadCallout(t *testing.T) {
 		{`PROVIDE 2x10 @ 16`, "size must come first"},
 		{`2x10 DF-L #2 HF @ 16`, "two species"},
 		{`(9) 2x10`, "plies"},
+		// a size in actual inches needs the project's materials (ReadCalloutWith)
 		{`1.75x11.875 LVL`, "a size in actual inches is structural composite lumber or glulam"},
-		{`1 3/4 x 9 1/2 LVL @ 16`, "for joists of it, give the material in [lumber]"},
-		{`(2) 1-3/4x11-7/8 LVL`, "read on beam callouts"},
+		{`1 3/4 x 9 1/2 LVL @ 16`, "read only with the project's materials"},
+		{`(2) 1-3/4x11-7/8 LVL`, "read only with the project's materials"},
 		{`2x10X12`, "runs into the size"},
 		{`90x45 @ 450`, "metric sawn section"},
 		{`140x45`, "metric sawn section"},

@@ -146,7 +146,13 @@
 // heights); without one, to the run of the joist within 24 in of the text.
 // Lumber is callout > first matching by_layer rule > project default, for
 // size, species and grade each; a built-up callout "(2) 2x10" gives the
-// size "(2) 2x10". A text that names a size but cannot be read (nonsense
+// size "(2) 2x10". A callout whose size is in actual inches names its
+// material by a word after it, structural composite lumber of the
+// project's materials file ("1 3/4 x 11 7/8 LVL @ 16", ReadCalloutWith,
+// Options.MaterialCallout): its joists take that material, the size in
+// actual inches and the callout's grade (else the layer's grade when the
+// layer names the same material, else none: the material's only grade).
+// A text that names a size but cannot be read (nonsense
 // spacing, no such lumber, a metric section) makes the members under it
 // errors with no size: the project default is never assumed for them.
 // Conflicting callouts (different sizes, species, grades, or two different

@@ -52,6 +52,11 @@ type Options struct {
 
 	Species, Grade, Size string // project default lumber
 	ByLayer              []LumberRule
+	// MaterialCallout reads the size and material of a joist callout in
+	// actual inches, "1 3/4 x 11 7/8 LVL @ 16" (structural composite
+	// lumber of the project's materials file). nil: such a callout is an
+	// error on the joists under it.
+	MaterialCallout MaterialCalloutFunc
 
 	// DefaultZone is the zone of members outside every outline; "" makes
 	// a member outside every outline an error.

@@ -303,7 +303,7 @@ func (g *grouper) postTexts() {
 		if !anySizeRE.MatchString(normalizeCallout(t.text)) {
 			return false
 		}
-		co, err := ReadCallout(t.text)
-		return err != nil || co.SpacingIn == 0 // "2x10 @ 16" o.c." is the joists'
+		co, err := readCallout(t.text)
+		return err != nil || co.SpacingIn == 0 // "2x10 @ 16" o.c.", "1 3/4 x 9 1/2 LVL @ 16" are the joists'
 	})
 }

@@ -177,48 +177,73 @@ func Solve(p *Plan, s check.Settings) *Outcome {
 		}
 		lo = hi
 	}
-	// Each joint's demand and each post's check depend on its own loads
-	// only: both cores, each range writing its own items.
+	// Each joint's demand depends on its own loads only: both cores, each
+	// range writing its own joints; the posts' checks likewise
+	// (checkPosts).
 	par.Ranges(len(o.Joints), func(lo, hi int) {
 		demands(o.Joints[lo:hi], s)
 	})
-	par.Ranges(len(p.Posts), func(lo, hi int) {
-		checkPosts(p.Posts[lo:hi], o.Posts[lo:hi], s)
-	})
+	checkPosts(p.Posts, o.Posts, s)
 	return o
 }
 
 // checkPosts states the cases of each post of ps under the loads found
 // (outs[i].Loads) and checks those to be checked. A post's cases depend
 // on its loads only, its check on the post but for its ID: posts alike
-// (under beams alike) are worked out once, each keeping its own copy of
-// the lists.
+// (the same check but for the ID, the same loads; a plan repeats its
+// posts beam line after beam line) are worked out once and share the
+// result's lists, each keeping its own ID (the post's when its check names
+// none). Which posts are alike is found in order, so that the first of
+// each is worked out and the same posts share on any number of cores; the
+// distinct ones are worked out on every core.
 func checkPosts(ps []PostIn, outs []PostOut, s check.Settings) {
-	cases := map[Loads][]check.PostCase{}
-	checked := map[check.Post]check.PostResult{}
+	caseOf, postOf := make([]int, len(ps)), make([]int, len(ps))
+	caseIdx, postIdx := map[Loads]int{}, map[check.Post]int{}
+	var caseKeys []Loads
+	var postKeys []check.Post
 	for i := range ps {
 		po := &outs[i]
 		po.Loads.HasUpliftDead = true
-		cs, ok := cases[po.Loads]
+		c, ok := caseIdx[po.Loads]
 		if !ok {
-			cs = check.LoadCases(po.Loads, s)
-			cases[po.Loads] = cs
+			c = len(caseKeys)
+			caseIdx[po.Loads] = c
+			caseKeys = append(caseKeys, po.Loads)
 		}
-		po.Cases = slices.Clone(cs)
+		caseOf[i], postOf[i] = c, -1
 		if !ps[i].Checked {
 			continue
 		}
 		pc := ps[i].Check
-		pc.Loads = po.Loads
-		key := pc
-		key.ID = ""
-		r, ok := checked[key]
+		pc.Loads, pc.ID = po.Loads, ""
+		k, ok := postIdx[pc]
 		if !ok {
-			r = check.CheckPost(key, s)
-			checked[key] = r
+			k = len(postKeys)
+			postIdx[pc] = k
+			postKeys = append(postKeys, pc)
 		}
-		r.ID = pc.ID
-		r.Checks, r.Cases, r.Messages = slices.Clone(r.Checks), slices.Clone(r.Cases), slices.Clone(r.Messages)
+		postOf[i] = k
+	}
+	cases := make([][]check.PostCase, len(caseKeys))
+	results := make([]check.PostResult, len(postKeys))
+	spread(len(caseKeys)+len(postKeys), func(t int) {
+		if t < len(caseKeys) {
+			cases[t] = check.LoadCases(caseKeys[t], s)
+		} else {
+			results[t-len(caseKeys)] = check.CheckPost(postKeys[t-len(caseKeys)], s)
+		}
+	})
+	for i := range ps {
+		po := &outs[i]
+		po.Cases = cases[caseOf[i]]
+		if postOf[i] < 0 {
+			continue
+		}
+		r := results[postOf[i]]
+		r.ID = ps[i].Check.ID
+		if r.ID == "" {
+			r.ID = ps[i].ID
+		}
 		po.Result = r
 	}
 }

@@ -20,7 +20,7 @@ const (
 	CodeBeamNotChecked  = "CHK310" // a beam with its own supports that cannot be checked
 	CodeLoadLost        = "CHK311" // a member in error bears on a beam: its load is not in the beam's check
 	CodeLoadPath        = "CHK312" // the load path itself: a cycle, reactions not found
-	CodeSoftBeamBearing = "CHK313" // joists bear on a glulam or SCL beam of lower Fc_perp than theirs
+	CodeSoftBeamBearing = "CHK313" // joists rest on a beam whose Fc_perp' is not known when they are checked
 )
 
 // BeamOutcome is a beam of the plan as the load path checked it.
@@ -176,8 +176,7 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 			mi := loadpath.MemberIn{ID: b.ID, Beam: true, Check: cm}
 			// glulam and structural composite lumber keep their sizes: the
 			// candidates are sawn sizes
-			_, scl := p.Materials.IsSCL(cm.Species)
-			if sizing && len(p.Sizing.BeamCandidates) > 0 && !strings.EqualFold(cm.Species, check.GlulamSpecies) && !scl {
+			if beamSized(p, cm, sizing) {
 				mi.Candidates, mi.DensityPcf = p.Sizing.BeamCandidates, beamDensityPcf
 			}
 			lp.Members = append(lp.Members, mi)
@@ -254,7 +253,7 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 			carriedBy.set(c.Member, c.Bearing, loadpath.Carrier{Kind: loadpath.Member, Index: beamMember[i], AtIn: c.AtIn + shift, Joint: joint})
 		}
 	}
-	softBeamBearings(p, plan, inputs, usable, po, beamMember, outIndex, o)
+	softBeamBearings(o)
 	// Which joists go on the path, in the plan's order, and their
 	// reactions (one analysis per key); then their items, on every core.
 	reactions := map[string][]check.LoadReactions{}
@@ -638,56 +637,4 @@ func postInput(p *project.Project, pt *framing.Post) (check.Post, bool, string) 
 		}
 	}
 	return pc, pc.Size != "" && pc.HeightIn > 0, pc.Size
-}
-
-// softBeamBearings warns of each glulam or structural composite lumber
-// beam whose Fc_perp is lower than that of joists bearing on it with no
-// [[support]] species/grade given: a joist's bearing (NDS 2018 3.10.2) is
-// checked against its own Fc_perp and the support's species/grade, not
-// against the beam's user or glulam material, so the lower value of the
-// beam would go unchecked; the warning says so rather than pass it.
-func softBeamBearings(p *project.Project, plan *framing.Plan, inputs []check.Member, usable []bool, po *PathOutcome, beamMember, outIndex []int, o *Outcome) {
-	mats := p.Materials
-	if mats == nil {
-		mats = check.BuiltinMaterials()
-	}
-	for i := range plan.Beams {
-		b := &plan.Beams[i]
-		if beamMember[i] < 0 || len(b.Carried) == 0 {
-			continue
-		}
-		cm := po.Beams[outIndex[i]].Input
-		_, scl := mats.IsSCL(cm.Species)
-		if !scl && !strings.EqualFold(cm.Species, check.GlulamSpecies) {
-			continue
-		}
-		if sp := p.SupportOf(b.Layer); sp != nil && (sp.Species != "" || sp.Grade != "") {
-			continue // the joists' bearing is checked against [[support]] species/grade as given
-		}
-		bdv, err := mats.Lookup(cm.Species, cm.Grade, cm.Size)
-		if err != nil {
-			continue
-		}
-		worst, ids := 0.0, []string{}
-		for _, c := range b.Carried {
-			if c.Member < 0 || c.Member >= len(inputs) || !usable[c.Member] {
-				continue
-			}
-			jm := inputs[c.Member]
-			jdv, err := mats.Lookup(jm.Species, jm.Grade, jm.Size)
-			if err != nil || jdv.FcPerpPsi <= bdv.FcPerpPsi {
-				continue
-			}
-			worst = math.Max(worst, jdv.FcPerpPsi)
-			if len(ids) < 3 {
-				ids = append(ids, jm.ID)
-			}
-		}
-		if worst > 0 {
-			o.Issues.Add(b.Lines[0], CodeSoftBeamBearing, dxfimport.SevWarning,
-				"%s is %s with Fc_perp %s psi, less than the %s psi of joists bearing on it (%s): their bearing was checked against their own Fc_perp; "+
-					"give [[support]] species/grade for this layer or check the bearing on the beam by hand (NDS 2018 3.10.2)",
-				b.ID, strings.TrimSpace(cm.Species+" "+cm.Grade), project.FmtNum(bdv.FcPerpPsi), project.FmtNum(worst), strings.Join(ids, ", "))
-		}
-	}
 }

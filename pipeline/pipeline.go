@@ -33,6 +33,10 @@ type Outcome struct {
 	// MarksFresh: marks.json named none of this plan's marks, so they
 	// were named afresh
 	MarksFresh bool
+
+	// softBearings are the CHK313 warnings of beamBearings, reported
+	// with the load path's findings
+	softBearings dxfimport.IssueList
 }
 
 // Input is what runs the pipeline: the grouped plan, its project, the
@@ -77,6 +81,11 @@ func FramingOptions(p *project.Project) framing.Options {
 	for _, r := range p.Lumber.ByLayer {
 		o.ByLayer = append(o.ByLayer, framing.LumberRule{Layers: r.Layers, Species: r.Species, Grade: r.Grade, Size: r.Size})
 	}
+	mats := p.Materials
+	if mats == nil {
+		mats = check.BuiltinMaterials()
+	}
+	o.MaterialCallout = mats.ReadSCLCallout // joist callouts in actual inches: structural composite lumber
 	o.DefaultZone = p.Loads.DefaultZone
 	if o.DefaultZone == "" && len(p.Zones) == 1 {
 		o.DefaultZone = p.Zones[0].Name
@@ -158,6 +167,7 @@ func runMembers(in Input) (o *Outcome, inputs []check.Member, keys []string, usa
 	if in.Size {
 		o.Sizing = make([]*check.SizingResult, len(plan.Members))
 	}
+	beamBearings(p, plan, inputs, usable, settings, in.Size, o)
 	keys = checkAll(inputs, shifts, usable, settings, p, o)
 	if in.Size {
 		sizeRuns(sameDepthGroups(plan, p.Sizing.SameDepth), inputs, shifts, usable, settings, o)
@@ -171,6 +181,12 @@ func runMembers(in Input) (o *Outcome, inputs []check.Member, keys []string, usa
 	for k := range plan.Members {
 		if usable[k] && o.Results[k].Size != "" {
 			plan.Members[k].Size = o.Results[k].Size
+		}
+		// a callout naming a material of one grade without it
+		// ("1 3/4 x 11 7/8 LVL"): the grade the check took, for the
+		// marks and the takeoff
+		if usable[k] && plan.Members[k].Grade == "" && o.Results[k].Status != check.StatusError {
+			plan.Members[k].Grade = o.Results[k].Grade
 		}
 	}
 	// Rafters drawn in plan are ordered at their sloped length.
@@ -251,8 +267,8 @@ func sizeRuns(groups [][]int, inputs []check.Member, shifts []float64, usable []
 				continue
 			}
 			sec, err := check.ParseSize(o.Results[k].Size)
-			if err != nil || sec.Plies > 1 {
-				continue // built-up members keep their plies and set no size for the run
+			if err != nil || sec.Plies > 1 || sec.Actual {
+				continue // built-up members keep their plies, SCL its size in actual inches, and set no size for the run
 			}
 			if best == "" || sec.NominalDIn > bestSec.NominalDIn ||
 				(sec.NominalDIn == bestSec.NominalDIn && sec.NominalBIn > bestSec.NominalBIn) {
@@ -266,7 +282,7 @@ func sizeRuns(groups [][]int, inputs []check.Member, shifts []float64, usable []
 			if !usable[k] || o.Results[k].Size == best {
 				continue
 			}
-			if sec, err := check.ParseSize(inputs[k].Size); err == nil && sec.Plies > 1 {
+			if sec, err := check.ParseSize(inputs[k].Size); err == nil && (sec.Plies > 1 || sec.Actual) {
 				continue
 			}
 			cm := inputs[k]
@@ -289,10 +305,21 @@ func sizeRuns(groups [][]int, inputs []check.Member, shifts []float64, usable []
 func checkAll(inputs []check.Member, shifts []float64, usable []bool, s check.Settings, p *project.Project, o *Outcome) (keys []string) {
 	keys = make([]string, len(inputs))
 	par.Ranges(len(inputs), func(lo, hi int) {
+		// members alike share one key string: a plan repeats a few
+		// hundred inputs a hundred thousand times
+		var buf []byte
+		seen := map[string]string{}
 		for k := lo; k < hi; k++ {
-			if usable[k] {
-				keys[k] = check.MemberKey(inputs[k])
+			if !usable[k] {
+				continue
 			}
+			buf = check.AppendMemberKey(buf[:0], &inputs[k])
+			key, ok := seen[string(buf)]
+			if !ok {
+				key = string(buf)
+				seen[key] = key
+			}
+			keys[k] = key
 		}
 	})
 	// twin[k] is the index into order of the first member identical to k
@@ -325,9 +352,11 @@ func checkAll(inputs []check.Member, shifts []float64, usable []bool, s check.Se
 			defer wg.Done()
 			for i := range next {
 				k := order[i]
-				if sec, err := check.ParseSize(inputs[k].Size); o.Sizing != nil && err == nil && sec.Plies > 1 {
-					// a built-up member keeps its plies: the candidates are
-					// single sizes, so it is checked as drawn
+				if sec, err := check.ParseSize(inputs[k].Size); o.Sizing != nil && err == nil && (sec.Plies > 1 || sec.Actual) {
+					// a built-up member keeps its plies, and one sized in
+					// actual inches (structural composite lumber) its size:
+					// the candidates are single sawn sizes, so it is checked
+					// as drawn
 					checked[i] = check.CheckMember(inputs[k], s)
 				} else if o.Sizing != nil {
 					sr := check.Size(inputs[k], s, p.Sizing.Candidates, p.Sizing.BlockingPieceWeightBf)

@@ -78,3 +78,26 @@ func TestBeamInputSCL(t *testing.T) {
 		}
 	}
 }
+
+// TestFramingOptionsReadSCLJoistCallouts: the framing options read a joist
+// callout in actual inches with the project's materials file: the word
+// names its structural composite lumber (case aside), the words after it
+// the grade; a word naming none of it is an error naming the materials
+// known (test input: sclProject's rows).
+func TestFramingOptionsReadSCLJoistCallouts(t *testing.T) {
+	o := FramingOptions(sclProject(t, ""))
+	c, err := framing.ReadCalloutWith(`(2) 1 3/4 x 11 7/8 lvl 1.9E @ 16" o.c.`, o.MaterialCallout)
+	want := framing.Callout{Size: "1.75x11.875", Plies: 2, SpacingIn: 16, Species: "LVL", Grade: "1.9E", Material: true}
+	if err != nil || c != want {
+		t.Errorf("got %+v, %v; want %+v", c, err, want)
+	}
+	if _, err := framing.ReadCalloutWith(`1 3/4 x 11 7/8 LSL @ 16`, o.MaterialCallout); err == nil ||
+		!strings.Contains(err.Error(), `the word "LSL": material "LSL" names no user material; the structural composite lumber known is LVL`) {
+		t.Errorf("LSL: %v", err)
+	}
+	o = FramingOptions(project.DefaultProject())
+	if _, err := framing.ReadCalloutWith(`1 3/4 x 11 7/8 LVL @ 16`, o.MaterialCallout); err == nil ||
+		!strings.Contains(err.Error(), `the structural composite lumber known is none: give structural composite lumber as rows of a [lumber] materials_file`) {
+		t.Errorf("no materials file: %v", err)
+	}
+}

@@ -30,4 +30,12 @@ if [ "$(grep -c '^M[0-9]* .*plan.dxf:[0-9]* (handle ' "$out/readme-reader.txt")"
   cat "$out/readme-reader.txt" >&2
   exit 1
 fi
+# ... and, following the load path's calculations and demands, its beams
+# and first connections
+if [ "$(grep -c '^B[0-9]* B[0-9]* .* pass \[(.bending-top' "$out/readme-reader.txt")" -ne 2 ] ||
+   ! grep -q '^post base P1 on foundation [0-9.]* D' "$out/readme-reader.txt"; then
+  echo "the README's Python reader printed (want the demo's two beams with their checks and the posts' bases):" >&2
+  cat "$out/readme-reader.txt" >&2
+  exit 1
+fi
 echo "README's Python reader: $(head -1 "$out/readme-reader.txt")"

@@ -199,10 +199,24 @@ def main(demo, overlay_dir):
         fail("sheets %r, want %r" % (wb.sheetnames, want))
     if res.get("load_path"):
         lp = res["load_path"]
-        for name, key in (("Beams", "beams"), ("Posts", "posts"), ("Connections", "connections"), ("Foundation", "foundation")):
+        for name, key in (("Beams", "beams"), ("Posts", "posts"), ("Foundation", "foundation")):
             n = wb[name].max_row - 3
             if n != len(lp[key]):
                 fail("%s sheet: %d rows, results.json load_path.%s has %d" % (name, n, key, len(lp[key])))
+        # Connections: joints alike share a row naming them all; every joint
+        # of results.json is named once, with its kind, bearing and carrier.
+        ws = wb["Connections"]
+        head = [c.value for c in ws[3]]
+        named = []
+        for row in ws.iter_rows(min_row=4, values_only=True):
+            r = dict(zip(head, row))
+            ms = r["Members"].split(", ")
+            if len(ms) != r["Count"]:
+                fail("Connections row %r: %d members, count %r" % (r, len(ms), r["Count"]))
+            named += [(r["Joint"], m, r["Bearing"], r["Carried by"]) for m in ms]
+        joints = [(c["kind"], c["member"], c["bearing"], c["carrier"]) for c in lp["connections"]]
+        if sorted(named) != sorted(joints):
+            fail("Connections sheet names %d joints, results.json has %d (or they differ)" % (len(named), len(joints)))
         a, d = lp["applied"], lp["delivered"]
         for k in ("dead_lb", "live_lb", "roof_live_lb", "snow_lb", "wind_up_lb"):
             if abs(a[k] - d[k]) > 0.1:

@@ -28,6 +28,7 @@ func exportLoadPath(o *outcome, toInch float64) *export.LoadPath {
 		wallID[w.Support] = fmt.Sprintf("W%d", i+1)
 	}
 	marks := map[string]string{}
+	checks := pathChecks{}
 	for i := range po.Beams {
 		bo := &po.Beams[i]
 		b := bo.Beam
@@ -59,10 +60,7 @@ func exportLoadPath(o *outcome, toInch float64) *export.LoadPath {
 		if eb.Carries == nil {
 			eb.Carries = []string{}
 		}
-		for _, c := range bo.Res.Checks {
-			eb.Checks = append(eb.Checks, export.Check{Kind: c.Kind, Combo: c.Combo, Actual: c.Actual, Allowable: c.Allowable,
-				Unit: c.Unit, Ratio: c.Ratio, Trace: exportTrace(c.Trace())})
-		}
+		eb.Checks = checks.of(bo.Res.Checks)
 		key := fmt.Sprintf("%s|%s|%s|%v|%.2f|%s", eb.Size, eb.Species, eb.Grade, roundUp(eb.SpansIn), eb.MaxRatio, eb.Status)
 		if marks[key] == "" {
 			marks[key] = fmt.Sprintf("B%d", len(marks)+1)
@@ -89,10 +87,7 @@ func exportLoadPath(o *outcome, toInch float64) *export.LoadPath {
 		} else if p.Checked {
 			r := p.Out.Result
 			ep.Species, ep.Grade, ep.Status, ep.Messages = r.DesignVals.Species, r.DesignVals.Grade, r.Status, r.Messages
-			for _, c := range r.Checks {
-				ep.Checks = append(ep.Checks, export.Check{Kind: c.Kind, Combo: c.Combo, Actual: c.Actual, Allowable: c.Allowable,
-					Unit: c.Unit, Ratio: c.Ratio, Trace: exportTrace(c.Trace())})
-			}
+			ep.Checks = checks.of(r.Checks)
 		} else {
 			ep.Messages = []string{"no size or height: its load is reported, not checked (give a size beside it and [[post]] height_in)"}
 		}
@@ -130,6 +125,30 @@ func exportLoadPath(o *outcome, toInch float64) *export.LoadPath {
 		lp.Foundation = append(lp.Foundation, fl)
 	}
 	return lp
+}
+
+// pathChecks converts each list of checks once: beams and posts checked
+// alike share their check.Result's list (the load path analyses them
+// once), and so share one converted list, which results.json writes once
+// (its load path's "calculations").
+type pathChecks map[*check.CheckResult][]export.Check
+
+// of returns cs as the outputs hold them, with their traces; nil when cs
+// is empty.
+func (pc pathChecks) of(cs []check.CheckResult) []export.Check {
+	if len(cs) == 0 {
+		return nil
+	}
+	if out, ok := pc[&cs[0]]; ok && len(out) == len(cs) {
+		return out
+	}
+	out := make([]export.Check, len(cs))
+	for i, c := range cs {
+		out[i] = export.Check{Kind: c.Kind, Combo: c.Combo, Actual: c.Actual, Allowable: c.Allowable,
+			Unit: c.Unit, Ratio: c.Ratio, Trace: exportTrace(c.Trace())}
+	}
+	pc[&cs[0]] = out
+	return out
 }
 
 func typeLoads(l loadpath.Loads) export.TypeLoads {

@@ -19,6 +19,22 @@ Laid out in inches ($INSUNITS = 1):
                 centred on the beam at (144, 88) with no text (an error
                 naming its handle, never a load of zero)
 
+A bay of LVL joists called out on the plan (issue 17 item 4):
+
+  WALL          single-line bearing walls on x = 400 and x = 592 (y 0..96)
+  JOIST         5 joists at y = 16..80 (16 in o.c.) from x = 400 to 592
+  FRAMING-NOTE  a label line on x = 420 from y = 8 to 88 crossing them, and
+                '1 3/4 x 11 7/8 LVL @ 16" O.C.' TEXT at (423, 40): the
+                joists are LVL of scl-materials.csv, 1.75 x 11.875 in
+
+and a bay whose callout gives a size in actual inches with no material:
+
+  WALL          single-line bearing walls on x = 700 and x = 892 (y 0..64)
+  JOIST         3 joists at y = 16..48 (16 in o.c.) from x = 700 to 892
+  FRAMING-NOTE  a label line on x = 720 from y = 8 to 56, and
+                "1 3/4 x 9 1/2 @ 16" TEXT at (723, 30): an error on the
+                three joists naming the text's handle, never a default
+
 Deterministic: fixed metadata, sequential handles, PYTHONHASHSEED=0.
 """
 import os
@@ -65,6 +81,18 @@ def main():
     for a, b in (((x0, y0), (x0 + 3.5, y0)), ((x0 + 3.5, y0), (x0 + 3.5, y0 + 3.5)),
                  ((x0 + 3.5, y0 + 3.5), (x0, y0 + 3.5)), ((x0, y0 + 3.5), (x0, y0))):
         line("POINT-LOAD", a, b)
+    line("WALL", (400, 0), (400, 96))
+    line("WALL", (592, 0), (592, 96))
+    for y in (16, 32, 48, 64, 80):
+        line("JOIST", (400, y), (592, y))
+    line("FRAMING-NOTE", (420, 8), (420, 88))
+    text("FRAMING-NOTE", '1 3/4 x 11 7/8 LVL @ 16" O.C.', (423, 40), 3)
+    line("WALL", (700, 0), (700, 64))
+    line("WALL", (892, 0), (892, 64))
+    for y in (16, 32, 48):
+        line("JOIST", (700, y), (892, y))
+    line("FRAMING-NOTE", (720, 8), (720, 56))
+    text("FRAMING-NOTE", "1 3/4 x 9 1/2 @ 16", (723, 30), 3)
     doc.saveas(os.path.join(out, "scl.dxf"))
 
 
