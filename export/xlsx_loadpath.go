@@ -179,8 +179,22 @@ func connKey(c *Connection) connRowKey {
 func connectionGroups(cs []Connection) []connGroup {
 	var groups []connGroup
 	open := make(map[connRowKey]int)
+	// the rounding of each distinct demand, worked out once (joints
+	// passing the same loads are most of a plan's)
+	type raw struct {
+		loads    TypeLoads
+		down, up float64
+	}
+	rounded := make(map[raw]connRowKey)
 	for i := range cs {
-		k := connKey(&cs[i])
+		c := &cs[i]
+		r := raw{c.Loads, c.DownLb, c.UpLb}
+		k, ok := rounded[r]
+		if !ok {
+			k = connKey(c)
+			rounded[r] = k
+		}
+		k.kind, k.carrier, k.bearing, k.downCombo, k.upCombo = c.Kind, c.Carrier, c.Bearing, c.DownCombo, c.UpCombo
 		if g, ok := open[k]; ok && len(groups[g].joints) < connMembersPerRow {
 			groups[g].joints = append(groups[g].joints, i)
 			continue

@@ -119,6 +119,10 @@ type Joint struct {
 }
 
 // MemberOut is a member's outcome.
+// A member given with its check and reactions (MemberIn.Result and
+// Reactions) that receives no load from another keeps them: its outcome
+// holds only Order and Passed (its reactions), Input and Result are left
+// empty (the caller has them; a plan's joists are most of its members).
 type MemberOut struct {
 	Input  check.Member // as checked: with the point loads it received
 	Result check.Result // Status error with the reason when it could not be checked
@@ -335,19 +339,25 @@ func (st *solveState) prepare(lo, hi int) {
 			k := st.order[i]
 			mi := &st.p.Members[k]
 			out := &st.o.Members[k]
-			out.Order, out.Input = i, mi.Check
+			out.Order = i
 			in := st.incoming[k]
+			st.keys[x], st.sv[x] = "", nil
+			if mi.Result != nil && mi.Reactions != nil && len(in) == 0 && len(mi.Carriers) == len(mi.Check.Bearings) {
+				// checked already and nothing added: its input and
+				// result are the caller's (MemberOut says so), only its
+				// reactions are passed on
+				st.how[x] = howGiven
+				out.Passed = mi.Reactions
+				continue
+			}
+			out.Input = mi.Check
 			out.Input.PointLoads = nil // none: nil, as the copy of none
 			if n := len(mi.Check.PointLoads) + len(in); n > 0 {
 				out.Input.PointLoads = append(append(make([]check.PointLoad, 0, n), mi.Check.PointLoads...), in...)
 			}
-			st.keys[x], st.sv[x] = "", nil
 			switch {
 			case len(mi.Carriers) != len(mi.Check.Bearings):
 				st.how[x] = howMismatch
-			case mi.Result != nil && mi.Reactions != nil && len(in) == 0:
-				st.how[x] = howGiven
-				out.Result, out.Passed = *mi.Result, mi.Reactions
 			default:
 				st.how[x] = howAnalyse
 				st.keys[x] = solveKey(out.Input, mi)
@@ -412,7 +422,11 @@ func (st *solveState) pass(i, x int) {
 		out.Result.ID = out.Input.ID
 	}
 	// its own loads, as checked (the size picked sets its weight)
-	addApplied(&o.Applied, &out.Input, mi.Check.PointLoads)
+	if st.how[x] == howGiven {
+		addApplied(&o.Applied, &mi.Check, mi.Check.PointLoads)
+	} else {
+		addApplied(&o.Applied, &out.Input, mi.Check.PointLoads)
+	}
 	if err != nil {
 		// nothing passes on from a member that cannot be analysed: its
 		// carriers are short of its load, which the outcome says
