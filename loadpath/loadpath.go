@@ -61,8 +61,8 @@ type Carrier struct {
 // bearings (Carriers[j] carries Check.Bearings[j]).
 type MemberIn struct {
 	ID       string
-	Beam     bool // a beam or girder, not a joist: for the outputs
-	Check    check.Member
+	Beam     bool          // a beam or girder, not a joist: for the outputs
+	Check    *check.Member // not nil; read, never changed by Solve
 	Carriers []Carrier
 	// Result and Reactions, when given, are the member's check and its
 	// reactions by load type already found (a joist checked with its run's
@@ -119,15 +119,21 @@ type Joint struct {
 }
 
 // MemberOut is a member's outcome.
-// A member given with its check and reactions (MemberIn.Result and
-// Reactions) that receives no load from another keeps them: its outcome
-// holds only Order and Passed (its reactions), Input and Result are left
-// empty (the caller has them; a plan's joists are most of its members).
+// MemberOut is a member's outcome. A member given with its check and
+// reactions (MemberIn.Result and Reactions) that receives no load from
+// another keeps them with the caller: its outcome holds only Order and
+// Passed, and its MemberCheck is nil (a plan's joists are most of its
+// members, and a full outcome each was most of the solve's memory).
 type MemberOut struct {
+	*MemberCheck
+	Order  int // position in the solving order
+	Passed []check.LoadReactions
+}
+
+// MemberCheck is a member as the load path checked it.
+type MemberCheck struct {
 	Input  check.Member // as checked: with the point loads it received
 	Result check.Result // Status error with the reason when it could not be checked
-	Order  int          // position in the solving order
-	Passed []check.LoadReactions
 }
 
 // PostOut is a post's outcome.
@@ -157,6 +163,7 @@ func Solve(p *Plan, s check.Settings) *Outcome {
 		Walls: make([]Loads, len(p.Walls))}
 	order, cyc := orderMembers(p)
 	for _, k := range cyc {
+		o.Members[k].MemberCheck = &MemberCheck{}
 		o.Members[k].Result = errorResult(p.Members[k], "the load path runs in a circle through "+names(p, cyc)+
 			": each of these members bears on another of them; draw which one carries which")
 	}
@@ -350,7 +357,7 @@ func (st *solveState) prepare(lo, hi int) {
 				out.Passed = mi.Reactions
 				continue
 			}
-			out.Input = mi.Check
+			out.MemberCheck = &MemberCheck{Input: *mi.Check}
 			out.Input.PointLoads = nil // none: nil, as the copy of none
 			if n := len(mi.Check.PointLoads) + len(in); n > 0 {
 				out.Input.PointLoads = append(append(make([]check.PointLoad, 0, n), mi.Check.PointLoads...), in...)
@@ -423,7 +430,7 @@ func (st *solveState) pass(i, x int) {
 	}
 	// its own loads, as checked (the size picked sets its weight)
 	if st.how[x] == howGiven {
-		addApplied(&o.Applied, &mi.Check, mi.Check.PointLoads)
+		addApplied(&o.Applied, mi.Check, mi.Check.PointLoads)
 	} else {
 		addApplied(&o.Applied, &out.Input, mi.Check.PointLoads)
 	}

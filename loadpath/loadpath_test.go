@@ -32,7 +32,7 @@ func pathPlan(n int, beamIn float64) *Plan {
 		{ID: "P2", Check: check.Post{Size: "4x4", Species: "Douglas Fir-Larch", Grade: "No.2", HeightIn: 96}, Checked: true},
 	}}
 	for i := 1; i <= n; i++ {
-		p.Members = append(p.Members, MemberIn{ID: fmt.Sprintf("J%d", i), Check: check.Member{
+		p.Members = append(p.Members, MemberIn{ID: fmt.Sprintf("J%d", i), Check: &check.Member{
 			Size: "2x10", Species: "Douglas Fir-Larch", Grade: "No.2", LengthIn: 144,
 			Bearings:  []check.Bearing{{AtIn: 0, LengthIn: 3.5}, {AtIn: 144, LengthIn: 1.5, Hanger: true}},
 			SpacingIn: 16, TribIn: 16, Use: "roof", Repetitive: true, LiveLimit: 240, TotalLimit: 180,
@@ -43,13 +43,13 @@ func pathPlan(n int, beamIn float64) *Plan {
 	for i := 1; i <= n; i++ {
 		braces = append(braces, 16*float64(i))
 	}
-	p.Members = append(p.Members, MemberIn{ID: "B1", Beam: true, Check: check.Member{
+	p.Members = append(p.Members, MemberIn{ID: "B1", Beam: true, Check: &check.Member{
 		Size: "(2) 2x10", Species: "Douglas Fir-Larch", Grade: "No.2", LengthIn: beamIn,
 		Bearings: []check.Bearing{{AtIn: 0, LengthIn: 3.5}, {AtIn: beamIn, LengthIn: 3}}, Use: "roof",
 		LiveLimit: 240, TotalLimit: 180, TopBracedAtPoints: true, TopBracingAtIn: braces,
 		SelfWeightPlf: 9.0,
 	}, Carriers: []Carrier{{Kind: Wall, Index: 0}, {Kind: Member, Index: n + 1, AtIn: 48}}})
-	p.Members = append(p.Members, MemberIn{ID: "G1", Beam: true, Check: check.Member{
+	p.Members = append(p.Members, MemberIn{ID: "G1", Beam: true, Check: &check.Member{
 		Size: "(3) 2x12", Species: "Douglas Fir-Larch", Grade: "No.2", LengthIn: 120,
 		Bearings: []check.Bearing{{AtIn: 0, LengthIn: 3.5}, {AtIn: 120, LengthIn: 3.5}}, Use: "roof",
 		LiveLimit: 240, TotalLimit: 180, TopBracedAtPoints: true, TopBracingAtIn: []float64{48},
@@ -132,7 +132,7 @@ func TestEquivalentLineLoad(t *testing.T) {
 	p := pathPlan(11, 192)
 	o := Solve(p, check.DefaultSettings())
 	beam := o.Members[11]
-	line := p.Members[11].Check
+	line := *p.Members[11].Check
 	line.TribIn = 12
 	line.LoadPieces = []check.LoadPiece{{FromIn: 0, ToIn: 8},
 		{FromIn: 8, ToIn: 184, Loads: check.AreaLoads{DeadPsf: 96 / 16.0 * 12, RoofLivePsf: 160 / 16.0 * 12, WindUpPsf: 240 / 16.0 * 12}},
@@ -187,7 +187,7 @@ func TestBeamSizing(t *testing.T) {
 	// the size before it fails: the pick is the lightest that passes
 	for i, c := range p.Members[11].Candidates {
 		if c == b.Input.Size && i > 0 {
-			prev := p.Members[11].Check
+			prev := *p.Members[11].Check
 			prev.Size = p.Members[11].Candidates[i-1]
 			sec, _ := check.ParseSize(prev.Size)
 			prev.SelfWeightPlf = sec.AreaIn2 / 144 * 35

@@ -173,7 +173,7 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 			o.Issues.Add(b.Lines[0], CodeBeamNotChecked, dxfimport.SevError, "%s: %s", b.ID, msg)
 		} else {
 			beamMember[i] = len(lp.Members)
-			mi := loadpath.MemberIn{ID: b.ID, Beam: true, Check: cm}
+			mi := loadpath.MemberIn{ID: b.ID, Beam: true, Check: &cm}
 			// glulam and structural composite lumber keep their sizes: the
 			// candidates are sawn sizes
 			if beamSized(p, cm, sizing) {
@@ -313,8 +313,15 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 				cs[j] = c
 			}
 			mi := &lp.Members[first+x]
-			*mi = loadpath.MemberIn{ID: plan.Members[k].ID, Check: inputs[k], Result: &o.Results[k], Reactions: rsOf[k], Carriers: cs}
-			mi.Check.Size = o.Results[k].Size
+			// the input as checked: shared with inputs (Solve reads it
+			// only), a copy when the check took another size
+			in := &inputs[k]
+			if in.Size != o.Results[k].Size {
+				c := *in
+				c.Size = o.Results[k].Size
+				in = &c
+			}
+			*mi = loadpath.MemberIn{ID: plan.Members[k].ID, Check: in, Result: &o.Results[k], Reactions: rsOf[k], Carriers: cs}
 			po.IDs[first+x] = plan.Members[k].ID
 		}
 	})
