@@ -29,7 +29,7 @@ var beamColumns = []column{
 }
 
 var postColumns = []column{
-	{"ID", 8}, {"Size", 8}, {"Species / grade", 24}, {"Height (ft-in)", 12},
+	{"Posts", 24}, {"Count", 7}, {"Size", 8}, {"Species / grade", 24}, {"Height (ft-in)", 12},
 	{"D (lb)", 9}, {"L (lb)", 9}, {"Lr (lb)", 9}, {"S (lb)", 9}, {"W down (lb)", 9}, {"W up (lb)", 9},
 	{"Largest down, ASD (lb)", 11}, {"Combination", 22}, {"Net uplift, ASD (lb)", 11}, {"Combination", 22},
 	{"Column ratio", 9}, {"Status", 8}, {"Source", 40}, {"Messages", 60},
@@ -53,9 +53,10 @@ var foundationColumns = []column{
 // rows and the function that fills a row's cells.
 func loadPathSheets(lp *LoadPath) []splicedSheet {
 	groups := connectionGroups(lp.Connections)
+	posts := postGroups(lp.Posts)
 	return []splicedSheet{
 		{name: SheetBeams, cols: beamColumns, rows: len(lp.Beams), row: func(s *rowCells, i int) { beamRow(s, &lp.Beams[i]) }},
-		{name: SheetPosts, cols: postColumns, rows: len(lp.Posts), row: func(s *rowCells, i int) { postRow(s, &lp.Posts[i]) }},
+		{name: SheetPosts, cols: postColumns, rows: len(posts), row: func(s *rowCells, i int) { postRow(s, lp.Posts, &posts[i]) }},
 		{name: SheetConnections, cols: connectionColumns, rows: len(groups), row: func(s *rowCells, i int) { connectionRow(s, lp.Connections, &groups[i]) }},
 		{name: SheetFoundation, cols: foundationColumns, rows: len(lp.Foundation), row: func(s *rowCells, i int) { foundationRow(s, &lp.Foundation[i]) }},
 	}
@@ -114,10 +115,80 @@ func beamRow(s *rowCells, b *PathBeam) {
 	s.text(strings.Join(b.Messages, "; "))
 }
 
-// postRow fills s with post p's cells, in postColumns order.
-func postRow(s *rowCells, p *PathPost) {
+// postMaxPerRow is the most posts one row of the Posts sheet names.
+const postMaxPerRow = 100
+
+// postRowKey is what a row of the Posts sheet shows but the posts' IDs
+// and sources: posts with the same key share a row.
+type postRowKey struct {
+	size, lumber, height string
+	loads                [6]float64
+	down, up             float64
+	downCombo, upCombo   string
+	checked              bool
+	ratio                float64
+	status, messages     string
+}
+
+// postRatio is the largest ratio of p's checks.
+func postRatio(p *PathPost) float64 {
+	ratio := 0.0
+	for _, c := range p.Checks {
+		ratio = math.Max(ratio, c.Ratio)
+	}
+	return ratio
+}
+
+// postGroups groups the posts whose rows would read the same but for the
+// post (size, lumber, height, loads and demands as the sheet rounds them,
+// ratio to the sheet's 0.00, status and messages): posts alike along beam
+// lines share a row naming them all, up to postMaxPerRow a row, in the
+// order of their first post. A post that fails or is in error, or holds a
+// value that is not finite, has a row of its own. Every post keeps its own
+// line, with its loads, in the Foundation sheet and results.json.
+func postGroups(ps []PathPost) []rowGroup {
+	var groups []rowGroup
+	open := make(map[postRowKey]int)
+	for i := range ps {
+		p := &ps[i]
+		if p.Status == StatusFail || p.Status == StatusError {
+			groups = append(groups, rowGroup{items: []int{i}})
+			continue
+		}
+		l := p.Loads
+		k := postRowKey{size: p.Size, lumber: speciesGrade(p.Species, p.Grade), checked: p.Checked,
+			loads: [6]float64{math.Round(l.DeadLb), math.Round(l.LiveLb), math.Round(l.RoofLiveLb), math.Round(l.SnowLb),
+				math.Round(l.WindDownLb), math.Round(l.WindUpLb)},
+			down: DemandLb(p.DownLb), downCombo: p.DownCombo, up: DemandLb(p.UpLb), upCombo: p.UpCombo,
+			ratio: math.Round(postRatio(p) * 100), status: p.Status, messages: strings.Join(p.Messages, "; ")}
+		if p.HeightIn > 0 {
+			k.height = FtIn(p.HeightIn)
+		}
+		if g, ok := open[k]; ok && len(groups[g].items) < postMaxPerRow {
+			groups[g].items = append(groups[g].items, i)
+			continue
+		}
+		open[k] = len(groups)
+		groups = append(groups, rowGroup{items: []int{i}})
+	}
+	return groups
+}
+
+// postRow fills s with the cells of the posts of g, in postColumns order:
+// the first post's values (the others' read the same), the source of a
+// post alone.
+func postRow(s *rowCells, ps []PathPost, g *rowGroup) {
+	p := &ps[g.items[0]]
 	s.begin(p.Status == StatusFail || p.Status == StatusError)
-	s.text(p.ID)
+	var b strings.Builder
+	for k, j := range g.items {
+		if k > 0 {
+			b.WriteString(", ")
+		}
+		b.WriteString(ps[j].ID)
+	}
+	s.text(b.String())
+	s.integer(len(g.items))
 	s.text(p.Size)
 	s.text(speciesGrade(p.Species, p.Grade))
 	if p.HeightIn > 0 {
@@ -130,17 +201,17 @@ func postRow(s *rowCells, p *PathPost) {
 	s.text(fmtx.Combo(p.DownCombo))
 	s.num(DemandLb(p.UpLb), cLb)
 	s.text(fmtx.Combo(p.UpCombo))
-	ratio := 0.0
-	for _, c := range p.Checks {
-		ratio = math.Max(ratio, c.Ratio)
-	}
 	if p.Checked {
-		s.num(ratio, cRatio)
+		s.num(postRatio(p), cRatio)
 	} else {
 		s.text("not checked")
 	}
 	s.text(p.Status)
-	s.text(p.Source)
+	if len(g.items) == 1 {
+		s.text(p.Source)
+	} else {
+		s.text("")
+	}
 	s.text(strings.Join(p.Messages, "; "))
 }
 
@@ -148,9 +219,9 @@ func postRow(s *rowCells, p *PathPost) {
 // names (a cell holds at most 32,767 characters).
 const connMembersPerRow = 100
 
-// connGroup is a row of the Connections sheet: joints alike, in the order
-// of the first, at the indexes in joints.
-type connGroup struct{ joints []int }
+// rowGroup is a row of the Connections or Posts sheet: the items alike
+// it names (indexes into the joints or posts), in the order of the first.
+type rowGroup struct{ items []int }
 
 // connRowKey is what a row of the Connections sheet shows but the
 // members: joints with the same key share a row.
@@ -176,8 +247,8 @@ func connKey(c *Connection) connRowKey {
 // naming them all, up to connMembersPerRow a row. Rows are in the order of
 // their first joint; a joint with a value that is not finite has a row of
 // its own.
-func connectionGroups(cs []Connection) []connGroup {
-	var groups []connGroup
+func connectionGroups(cs []Connection) []rowGroup {
+	var groups []rowGroup
 	open := make(map[connRowKey]int)
 	// the rounding of each distinct demand, worked out once (joints
 	// passing the same loads are most of a plan's)
@@ -195,31 +266,31 @@ func connectionGroups(cs []Connection) []connGroup {
 			rounded[r] = k
 		}
 		k.kind, k.carrier, k.bearing, k.downCombo, k.upCombo = c.Kind, c.Carrier, c.Bearing, c.DownCombo, c.UpCombo
-		if g, ok := open[k]; ok && len(groups[g].joints) < connMembersPerRow {
-			groups[g].joints = append(groups[g].joints, i)
+		if g, ok := open[k]; ok && len(groups[g].items) < connMembersPerRow {
+			groups[g].items = append(groups[g].items, i)
 			continue
 		}
 		open[k] = len(groups)
-		groups = append(groups, connGroup{joints: []int{i}})
+		groups = append(groups, rowGroup{items: []int{i}})
 	}
 	return groups
 }
 
 // connectionRow fills s with the cells of the joints of g, in
 // connectionColumns order.
-func connectionRow(s *rowCells, cs []Connection, g *connGroup) {
-	c := &cs[g.joints[0]]
+func connectionRow(s *rowCells, cs []Connection, g *rowGroup) {
+	c := &cs[g.items[0]]
 	s.begin(false)
 	s.text(c.Kind)
 	var b strings.Builder
-	for k, j := range g.joints {
+	for k, j := range g.items {
 		if k > 0 {
 			b.WriteString(", ")
 		}
 		b.WriteString(cs[j].Member)
 	}
 	s.text(b.String())
-	s.integer(len(g.joints))
+	s.integer(len(g.items))
 	s.integer(c.Bearing)
 	s.text(c.Carrier)
 	typeCells(s, c.Loads)

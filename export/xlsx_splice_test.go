@@ -144,7 +144,7 @@ func TestSplicedSheetsMatchExcelize(t *testing.T) {
 	}
 	defer want.Close()
 	lp := r.LoadPath
-	counts := map[string]int{SheetMembers: len(r.Members), SheetBeams: len(lp.Beams), SheetPosts: len(lp.Posts),
+	counts := map[string]int{SheetMembers: len(r.Members), SheetBeams: len(lp.Beams), SheetPosts: len(postGroups(lp.Posts)),
 		SheetConnections: len(connectionGroups(lp.Connections)), SheetFoundation: len(lp.Foundation)}
 	widths := map[string]int{SheetMembers: len(membersColumns), SheetBeams: len(beamColumns), SheetPosts: len(postColumns),
 		SheetConnections: len(connectionColumns), SheetFoundation: len(foundationColumns)}
@@ -196,7 +196,7 @@ func TestSplicedSheetsMatchExcelize(t *testing.T) {
 	// two empty sheets): a shaded failing post and an "n/a".
 	nanRow := 0
 	for i, g := range connectionGroups(lp.Connections) {
-		if g.joints[0] == 6 {
+		if g.items[0] == 6 {
 			nanRow = HeaderRow + 1 + i
 		}
 	}
@@ -297,12 +297,12 @@ func TestConnectionGroups(t *testing.T) {
 	var got []int
 	seen := make([]int, len(cs))
 	for _, g := range gs {
-		got = append(got, len(g.joints))
-		first := connKey(&cs[g.joints[0]])
-		for _, j := range g.joints {
+		got = append(got, len(g.items))
+		first := connKey(&cs[g.items[0]])
+		for _, j := range g.items {
 			seen[j]++
 			if k := connKey(&cs[j]); k != first && !math.IsNaN(cs[j].Loads.DeadLb) {
-				t.Errorf("joint %s in the row of %s: %+v vs %+v", cs[j].Member, cs[g.joints[0]].Member, k, first)
+				t.Errorf("joint %s in the row of %s: %+v vs %+v", cs[j].Member, cs[g.items[0]].Member, k, first)
 			}
 		}
 	}
@@ -316,7 +316,52 @@ func TestConnectionGroups(t *testing.T) {
 			t.Errorf("joint %s in %d rows", cs[j].Member, n)
 		}
 	}
-	if gs[0].joints[1] != 2 || cs[gs[0].joints[1]].Member != "M2" {
-		t.Errorf("first row's joints %v, want M1, M2, ... (every other joint)", gs[0].joints[:3])
+	if gs[0].items[1] != 2 || cs[gs[0].items[1]].Member != "M2" {
+		t.Errorf("first row's joints %v, want M1, M2, ... (every other joint)", gs[0].items[:3])
+	}
+}
+
+// TestPostGroups: the Posts sheet gives posts alike (size, lumber, height,
+// loads and demands as the sheet rounds them, ratio to 0.00, status,
+// messages) one row naming them all, at most postMaxPerRow a row; a post
+// that fails or is in error has its own row; every post is in exactly one
+// row (common practice, no source).
+func TestPostGroups(t *testing.T) {
+	post := func(id string, dead float64) PathPost {
+		return PathPost{ID: id, Size: "6x6", Species: "Douglas Fir-Larch", Grade: "No.1", HeightIn: 96, Checked: true,
+			Loads: TypeLoads{DeadLb: dead, LiveLb: 4000}, DownLb: dead + 4000, DownCombo: "D+L",
+			Checks: []Check{{Kind: "column", Ratio: 0.4012}}, Status: StatusPass}
+	}
+	var ps []PathPost
+	for i := 0; i < postMaxPerRow+3; i++ {
+		ps = append(ps, post(fmt.Sprintf("P%d", 2*i+1), 1200.2), post(fmt.Sprintf("P%d", 2*i+2), 1500))
+	}
+	ps[5].Checks = []Check{{Kind: "column", Ratio: 0.4049}} // 0.40 as shown: alike
+	ps[7].Checks = []Check{{Kind: "column", Ratio: 0.4051}} // 0.41: its own row
+	ps[9].Status, ps[11].Status = StatusFail, StatusFail // alike, but failing: one row each
+	ps[13].HeightIn = 120
+	gs := postGroups(ps)
+	seen := make([]int, len(ps))
+	var sizes []int
+	for _, g := range gs {
+		sizes = append(sizes, len(g.items))
+		for _, j := range g.items {
+			seen[j]++
+		}
+	}
+	for j, n := range seen {
+		if n != 1 {
+			t.Errorf("post %s in %d rows", ps[j].ID, n)
+		}
+	}
+	// 1200.2 lb (P1, P3, ...): 103 posts alike -> rows of 100 and 3;
+	// 1500 lb (P2, P4, ...): 103 less P8 (0.4051 reads 0.41), P10 and
+	// P12 (failing) and P14 (10 ft high), each alone -> 99 (P6's 0.4049
+	// reads 0.40 and stays)
+	slices.Sort(sizes)
+	slices.Reverse(sizes)
+	want := []int{100, 99, 3, 1, 1, 1, 1}
+	if !slices.Equal(sizes, want) {
+		t.Errorf("rows of %v posts, want %v", sizes, want)
 	}
 }

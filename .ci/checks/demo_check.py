@@ -199,7 +199,7 @@ def main(demo, overlay_dir):
         fail("sheets %r, want %r" % (wb.sheetnames, want))
     if res.get("load_path"):
         lp = res["load_path"]
-        for name, key in (("Beams", "beams"), ("Posts", "posts"), ("Foundation", "foundation")):
+        for name, key in (("Beams", "beams"), ("Foundation", "foundation")):
             n = wb[name].max_row - 3
             if n != len(lp[key]):
                 fail("%s sheet: %d rows, results.json load_path.%s has %d" % (name, n, key, len(lp[key])))
@@ -217,6 +217,18 @@ def main(demo, overlay_dir):
         joints = [(c["kind"], c["member"], c["bearing"], c["carrier"]) for c in lp["connections"]]
         if sorted(named) != sorted(joints):
             fail("Connections sheet names %d joints, results.json has %d (or they differ)" % (len(named), len(joints)))
+        # Posts: posts alike share a row naming them all; every post once.
+        ws = wb["Posts"]
+        head = [c.value for c in ws[3]]
+        named = []
+        for row in ws.iter_rows(min_row=4, values_only=True):
+            r = dict(zip(head, row))
+            ids = r["Posts"].split(", ")
+            if len(ids) != r["Count"]:
+                fail("Posts row %r: %d posts, count %r" % (r, len(ids), r["Count"]))
+            named += ids
+        if sorted(named) != sorted(p["id"] for p in lp["posts"]):
+            fail("Posts sheet names %d posts, results.json has %d (or they differ)" % (len(named), len(lp["posts"])))
         a, d = lp["applied"], lp["delivered"]
         for k in ("dead_lb", "live_lb", "roof_live_lb", "snow_lb", "wind_up_lb"):
             if abs(a[k] - d[k]) > 0.1:
