@@ -235,6 +235,7 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	if o.Path != nil {
 		// the load path's outputs follow its beams, posts and joints
 		scaleMemoryLimit(int64(len(data)), len(o.Path.Beams)+len(o.Path.Posts)+len(o.Path.Joints))
+		loadPathGC(o.Path.Solved != nil && len(o.Path.Beams)+len(o.Path.Posts) > 0)
 	}
 	if o.MarksFresh {
 		fmt.Fprintf(stderr, "framecheck: none of the %d marks kept in %s is on this plan: the marks are named afresh from J1\n",

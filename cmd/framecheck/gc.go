@@ -136,3 +136,20 @@ func pauseGC() (resume func()) {
 	old := debug.SetGCPercent(-1)
 	return func() { debug.SetGCPercent(old) }
 }
+
+// loadPathGC collects once the load path is solved, when the plan has
+// one, before the results are mapped for the outputs: solving it leaves
+// its working data behind (every member's place in the order, the loads
+// passed down, the beams' analyses), and without a collection the mapping
+// of the members took fresh memory from the system page by page.
+// Measured on the 100,000-joist bigplan with -beams on this project's
+// 2-vCPU machine (three alternated runs each, load about 1): 2.89-2.92 s
+// wall, 0.83-0.88 s system CPU, 697-698 MB peak without; 2.67-2.72 s,
+// 0.46-0.53 s and 678-686 MB with. On the same plan with rigid supports
+// (no load path) a collection there cost 0.07 s, so it is not made. Does
+// nothing when the user set GOGC.
+func loadPathGC(solved bool) {
+	if gcTuned && solved {
+		runtime.GC()
+	}
+}
