@@ -338,7 +338,7 @@ func TestPostGroups(t *testing.T) {
 	}
 	ps[5].Checks = []Check{{Kind: "column", Ratio: 0.4049}} // 0.40 as shown: alike
 	ps[7].Checks = []Check{{Kind: "column", Ratio: 0.4051}} // 0.41: its own row
-	ps[9].Status, ps[11].Status = StatusFail, StatusFail // alike, but failing: one row each
+	ps[9].Status, ps[11].Status = StatusFail, StatusFail    // alike, but failing: one row each
 	ps[13].HeightIn = 120
 	gs := postGroups(ps)
 	seen := make([]int, len(ps))
