@@ -42,7 +42,7 @@ var connectionColumns = []column{
 }
 
 var foundationColumns = []column{
-	{"Kind", 8}, {"ID", 8}, {"Length (ft-in)", 12},
+	{"Kind", 8}, {"IDs", 24}, {"Count", 7}, {"Length (ft-in)", 12},
 	{"D (lb)", 9}, {"L (lb)", 9}, {"Lr (lb)", 9}, {"S (lb)", 9}, {"W down (lb)", 9}, {"W up (lb)", 9},
 	{"D (plf)", 9}, {"L (plf)", 9}, {"Lr (plf)", 9}, {"S (plf)", 9}, {"W down (plf)", 9}, {"W up (plf)", 9},
 	{"Source", 40},
@@ -54,11 +54,12 @@ var foundationColumns = []column{
 func loadPathSheets(lp *LoadPath) []splicedSheet {
 	groups := connectionGroups(lp.Connections)
 	posts := postGroups(lp.Posts)
+	found := foundationGroups(lp.Foundation)
 	return []splicedSheet{
 		{name: SheetBeams, cols: beamColumns, rows: len(lp.Beams), row: func(s *rowCells, i int) { beamRow(s, &lp.Beams[i]) }},
 		{name: SheetPosts, cols: postColumns, rows: len(posts), row: func(s *rowCells, i int) { postRow(s, lp.Posts, &posts[i]) }},
 		{name: SheetConnections, cols: connectionColumns, rows: len(groups), row: func(s *rowCells, i int) { connectionRow(s, lp.Connections, &groups[i]) }},
-		{name: SheetFoundation, cols: foundationColumns, rows: len(lp.Foundation), row: func(s *rowCells, i int) { foundationRow(s, &lp.Foundation[i]) }},
+		{name: SheetFoundation, cols: foundationColumns, rows: len(found), row: func(s *rowCells, i int) { foundationRow(s, lp.Foundation, &found[i]) }},
 	}
 }
 
@@ -217,8 +218,9 @@ func postRow(s *rowCells, ps []PathPost, g *rowGroup) {
 // names (a cell holds at most 32,767 characters).
 const connMembersPerRow = 100
 
-// rowGroup is a row of the Connections or Posts sheet: the items alike
-// it names (indexes into the joints or posts), in the order of the first.
+// rowGroup is a row of the Connections, Posts or Foundation sheet: the
+// items alike it names (indexes into the joints, posts or foundation
+// lines), in the order of the first.
 type rowGroup struct{ items []int }
 
 // connRowKey is what a row of the Connections sheet shows but the
@@ -298,12 +300,22 @@ func connectionRow(s *rowCells, cs []Connection, g *rowGroup) {
 	s.text(fmtx.Combo(c.UpCombo))
 }
 
-// foundationRow fills s with foundation line fl's cells, in
-// foundationColumns order.
-func foundationRow(s *rowCells, fl *FoundationLine) {
+// foundationRow fills s with the cells of the foundation lines of g (a
+// wall line, or posts alike), in foundationColumns order; the source of
+// a line alone.
+func foundationRow(s *rowCells, fs []FoundationLine, g *rowGroup) {
+	fl := &fs[g.items[0]]
 	s.begin(false)
 	s.text(fl.Kind)
-	s.text(fl.ID)
+	var b strings.Builder
+	for k, j := range g.items {
+		if k > 0 {
+			b.WriteString(", ")
+		}
+		b.WriteString(fs[j].ID)
+	}
+	s.text(b.String())
+	s.integer(len(g.items))
 	if fl.LengthIn > 0 {
 		s.text(FtIn(fl.LengthIn))
 	} else {
@@ -317,7 +329,37 @@ func foundationRow(s *rowCells, fl *FoundationLine) {
 			s.text("")
 		}
 	}
-	s.text(fl.Source)
+	if len(g.items) == 1 {
+		s.text(fl.Source)
+	} else {
+		s.text("")
+	}
+}
+
+// foundationGroups groups the posts whose loads read the same as the
+// sheet rounds them: posts alike along beam lines share a row naming
+// them all, up to postMaxPerRow a row, in the order of their first. A
+// wall line (with its length and loads per foot) has a row of its own.
+func foundationGroups(fs []FoundationLine) []rowGroup {
+	var groups []rowGroup
+	open := make(map[[6]float64]int)
+	for i := range fs {
+		f := &fs[i]
+		if f.Kind != "post" {
+			groups = append(groups, rowGroup{items: []int{i}})
+			continue
+		}
+		l := f.Loads
+		k := [6]float64{math.Round(l.DeadLb), math.Round(l.LiveLb), math.Round(l.RoofLiveLb), math.Round(l.SnowLb),
+			math.Round(l.WindDownLb), math.Round(l.WindUpLb)}
+		if g, ok := open[k]; ok && len(groups[g].items) < postMaxPerRow {
+			groups[g].items = append(groups[g].items, i)
+			continue
+		}
+		open[k] = len(groups)
+		groups = append(groups, rowGroup{items: []int{i}})
+	}
+	return groups
 }
 
 // typeCells writes D, L, Lr, S, W down, W up.

@@ -7,6 +7,7 @@ import (
 	"io"
 	"math"
 	"path/filepath"
+	"reflect"
 	"regexp"
 	"slices"
 	"strings"
@@ -145,7 +146,7 @@ func TestSplicedSheetsMatchExcelize(t *testing.T) {
 	defer want.Close()
 	lp := r.LoadPath
 	counts := map[string]int{SheetMembers: len(r.Members), SheetBeams: len(lp.Beams), SheetPosts: len(postGroups(lp.Posts)),
-		SheetConnections: len(connectionGroups(lp.Connections)), SheetFoundation: len(lp.Foundation)}
+		SheetConnections: len(connectionGroups(lp.Connections)), SheetFoundation: len(foundationGroups(lp.Foundation))}
 	widths := map[string]int{SheetMembers: len(membersColumns), SheetBeams: len(beamColumns), SheetPosts: len(postColumns),
 		SheetConnections: len(connectionColumns), SheetFoundation: len(foundationColumns)}
 	for _, sheet := range sheets {
@@ -363,5 +364,33 @@ func TestPostGroups(t *testing.T) {
 	want := []int{100, 99, 3, 1, 1, 1, 1}
 	if !slices.Equal(sizes, want) {
 		t.Errorf("rows of %v posts, want %v", sizes, want)
+	}
+}
+
+// TestFoundationGroups: the Foundation sheet gives posts whose loads read
+// the same (to the pound) one row naming them all; each wall line has
+// its own row; every line is in exactly one row (common practice, no
+// source).
+func TestFoundationGroups(t *testing.T) {
+	var fs []FoundationLine
+	for i := 0; i < 5; i++ {
+		fs = append(fs, FoundationLine{Kind: "post", ID: fmt.Sprintf("P%d", i+1), Loads: TypeLoads{DeadLb: 1200.2 + float64(i%2)*0.1, LiveLb: 4000}})
+	}
+	fs = append(fs, FoundationLine{Kind: "wall", ID: "W1", LengthIn: 240, Loads: TypeLoads{DeadLb: 1200.2, LiveLb: 4000}},
+		FoundationLine{Kind: "wall", ID: "W2", LengthIn: 240, Loads: TypeLoads{DeadLb: 1200.2, LiveLb: 4000}},
+		FoundationLine{Kind: "post", ID: "P6", Loads: TypeLoads{DeadLb: 1201, LiveLb: 4000}},
+		FoundationLine{Kind: "post", ID: "P7", Loads: TypeLoads{DeadLb: math.NaN()}}, FoundationLine{Kind: "post", ID: "P8", Loads: TypeLoads{DeadLb: math.NaN()}})
+	gs := foundationGroups(fs)
+	var got [][]string
+	for _, g := range gs {
+		var ids []string
+		for _, j := range g.items {
+			ids = append(ids, fs[j].ID)
+		}
+		got = append(got, ids)
+	}
+	want := [][]string{{"P1", "P2", "P3", "P4", "P5"}, {"W1"}, {"W2"}, {"P6"}, {"P7"}, {"P8"}}
+	if !reflect.DeepEqual(got, want) {
+		t.Errorf("rows %v, want %v", got, want)
 	}
 }

@@ -199,10 +199,22 @@ def main(demo, overlay_dir):
         fail("sheets %r, want %r" % (wb.sheetnames, want))
     if res.get("load_path"):
         lp = res["load_path"]
-        for name, key in (("Beams", "beams"), ("Foundation", "foundation")):
-            n = wb[name].max_row - 3
-            if n != len(lp[key]):
-                fail("%s sheet: %d rows, results.json load_path.%s has %d" % (name, n, key, len(lp[key])))
+        n = wb["Beams"].max_row - 3
+        if n != len(lp["beams"]):
+            fail("Beams sheet: %d rows, results.json load_path.beams has %d" % (n, len(lp["beams"])))
+        # Foundation: each wall line a row, posts alike share one; every
+        # line of results.json once.
+        ws = wb["Foundation"]
+        head = [c.value for c in ws[3]]
+        named = []
+        for row in ws.iter_rows(min_row=4, values_only=True):
+            r = dict(zip(head, row))
+            ids = r["IDs"].split(", ")
+            if len(ids) != r["Count"] or (r["Kind"] == "wall" and len(ids) != 1):
+                fail("Foundation row %r: %d lines, count %r" % (r, len(ids), r["Count"]))
+            named += [(r["Kind"], i) for i in ids]
+        if sorted(named) != sorted((f["kind"], f["id"]) for f in lp["foundation"]):
+            fail("Foundation sheet names %d lines, results.json has %d (or they differ)" % (len(named), len(lp["foundation"])))
         # Connections: joints alike share a row naming them all; every joint
         # of results.json is named once, with its kind, bearing and carrier.
         ws = wb["Connections"]
