@@ -25,13 +25,17 @@ var (
 	trailPliesRE = regexp.MustCompile(`\s*\(\s*(\d+)\s*\)\s*$`)
 )
 
+// materialMarks are the typographic marks ParseMaterialCallout reads as
+// plain ones (built once).
+var materialMarks = strings.NewReplacer("×", "x", "”", `"`, "″", `"`, "\u00a0", " ")
+
 // ParseMaterialCallout reads a callout of a size in actual inches followed
 // by a material word. ok is false when text is not of that form (no
 // material word, or a size that is not in actual inches, such as the
 // sawn "(3) 2x12"); err reports a form that is meant so but cannot be
 // read (a bad size, plies given twice).
 func ParseMaterialCallout(text string) (c MaterialCallout, ok bool, err error) {
-	s := strings.TrimSpace(strings.NewReplacer("×", "x", "”", `"`, "″", `"`, "\u00a0", " ").Replace(text))
+	s := strings.TrimSpace(materialMarks.Replace(text))
 	plies := 0
 	if m := leadPliesRE.FindStringSubmatch(s); m != nil {
 		plies, _ = strconv.Atoi(m[1])
