@@ -278,11 +278,7 @@ func (r *calcRecord) bearingTrace() []TraceItem {
 		t.add("Fc_perp'", b.fcAdjPsi, "psi", "Fc_perp CM Ct Ci",
 			t.f("%s(%s)(%s)(%s)", b.fcPerpSupPsi, x.cm.FcPerp, x.ct.FcPerp, x.ci.FcPerp), "NDS 2018 Table 4.3.1")
 	} else {
-		if b.cb != 1 {
-			t.add("Cb", b.cb, "", "(lb + 0.375) / lb", t.f("(%s + 0.375) / %s", b.lbIn, b.lbIn), "NDS 2018 3.10.4")
-		} else {
-			t.add("Cb", 1, "", "bearing at a member end, or lb >= 6 in", Subst{}, "NDS 2018 3.10.4")
-		}
+		cbTrace(&t, b.cb, b.lbIn)
 		t.add("Fc_perp'", b.fcAdjPsi, "psi", "Fc_perp CM Ct Ci Cb",
 			t.f("%s(%s)(%s)(%s)(%s)", x.fcPerpPsi, x.cm.FcPerp, x.ct.FcPerp, x.ci.FcPerp, b.cb), x.adjRef())
 	}
@@ -290,16 +286,22 @@ func (r *calcRecord) bearingTrace() []TraceItem {
 	return t.items
 }
 
+// cbTrace adds the bearing area factor Cb of a bearing lbIn long (NDS
+// 2018 3.10.4).
+func cbTrace(t *tracer, cb, lbIn float64) {
+	if cb != 1 {
+		t.add("Cb", cb, "", "(lb + 0.375) / lb", t.f("(%s + 0.375) / %s", lbIn, lbIn), "NDS 2018 3.10.4")
+	} else {
+		t.add("Cb", 1, "", "bearing at a member end, or lb >= 6 in", Subst{}, "NDS 2018 3.10.4")
+	}
+}
+
 // beamBearingTrace ends the bearing calculation of a member resting on
 // a beam of known material (SupportBeam): the member's own Fc_perp', the
 // beam's, and the ratio to the smaller (NDS 2018 3.10.2, 3.10.4).
 func (r *calcRecord) beamBearingTrace(t tracer, fc float64) []TraceItem {
 	x, b, bb := &r.ctx, &r.bear, r.bear.beam
-	if b.memCb != 1 {
-		t.add("Cb", b.memCb, "", "(lb + 0.375) / lb", t.f("(%s + 0.375) / %s", b.lbIn, b.lbIn), "NDS 2018 3.10.4")
-	} else {
-		t.add("Cb", 1, "", "bearing at a member end, or lb >= 6 in", Subst{}, "NDS 2018 3.10.4")
-	}
+	cbTrace(&t, b.memCb, b.lbIn)
 	t.add("Fc_perp'", b.memAdjPsi, "psi", "Fc_perp CM Ct Ci Cb: the member's own",
 		t.f("%s(%s)(%s)(%s)(%s)", x.fcPerpPsi, x.cm.FcPerp, x.ct.FcPerp, x.ci.FcPerp, b.memCb), x.adjRef())
 	beam := "the beam under bearing " + strconv.Itoa(b.bearing+1)

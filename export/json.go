@@ -536,18 +536,8 @@ func orEmpty[T any](s []T) []T {
 func writeLoadPathJSON(w *bufio.Writer, lp *LoadPath, round func(any) any) error {
 	w.WriteString("{\n")
 	list := func(name string, n int, isNil bool, item func(i int) any) error {
-		w.WriteString("  \"" + name + "\": ")
-		switch {
-		case isNil:
-			w.WriteString("null")
-		default:
-			enc := blockEncoder(n, func(i int) ([]byte, error) { return json.Marshal(round(item(i))) })
-			if err := writeJSONItems(w, name, n, "   ", "  ", enc); err != nil {
-				return err
-			}
-		}
-		w.WriteString(",\n")
-		return nil
+		return writeLoadPathList(w, name, n, isNil,
+			blockEncoder(n, func(i int) ([]byte, error) { return json.Marshal(round(item(i))) }))
 	}
 	if err := list("beams", len(lp.Beams), lp.Beams == nil, func(i int) any { return lp.Beams[i] }); err != nil {
 		return err

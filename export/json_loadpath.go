@@ -217,14 +217,7 @@ func writeLoadPathV3(w *bufio.Writer, lp *LoadPath, pr *pathRefs) error {
 	out := &jsonOut{round: true}
 	w.WriteString("{\n")
 	list := func(name string, n int, isNil bool, enc func(i int) ([]byte, error)) error {
-		w.WriteString("  \"" + name + "\": ")
-		if isNil {
-			w.WriteString("null")
-		} else if err := writeJSONItems(w, name, n, "   ", "  ", enc); err != nil {
-			return err
-		}
-		w.WriteString(",\n")
-		return nil
+		return writeLoadPathList(w, name, n, isNil, enc)
 	}
 	if err := list("beams", len(lp.Beams), lp.Beams == nil, func(i int) ([]byte, error) {
 		return beamJSON(out, &lp.Beams[i], pr.beamCalc[i])
@@ -282,6 +275,19 @@ func writeLoadPathV3(w *bufio.Writer, lp *LoadPath, pr *pathRefs) error {
 		}
 	}
 	w.WriteString("\n }")
+	return nil
+}
+
+// writeLoadPathList writes the load path's list name of n items, each
+// encoded by enc on its own line (null when isNil), and the comma after.
+func writeLoadPathList(w *bufio.Writer, name string, n int, isNil bool, enc func(i int) ([]byte, error)) error {
+	w.WriteString("  \"" + name + "\": ")
+	if isNil {
+		w.WriteString("null")
+	} else if err := writeJSONItems(w, name, n, "   ", "  ", enc); err != nil {
+		return err
+	}
+	w.WriteString(",\n")
 	return nil
 }
 

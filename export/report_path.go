@@ -146,43 +146,35 @@ func pathChecks(cs []Check) []pathCheckRow {
 // pathPosts gives one row per distinct post row apart from its id, in
 // the order of its first post; a post that fails or is in error has its own.
 func pathPosts(posts []PathPost, lb func(float64) string) []pathPostRow {
-	var rows []pathPostRow
-	var ids [][]string
-	at := map[pathPostRow]int{}
-	for i := range posts {
+	return groupedRows(len(posts), func(i int) (pathPostRow, bool) {
 		p := &posts[i]
 		ratio := "not checked"
 		if p.Checked {
-			m := 0.0
-			for _, c := range p.Checks {
-				m = math.Max(m, c.Ratio)
-			}
-			ratio = fmtx.Ratio(m)
+			ratio = fmtx.Ratio(postRatio(p))
 		}
 		row := pathPostRow{Size: p.Size, D: lb(p.Loads.DeadLb), L: lb(p.Loads.LiveLb), Lr: lb(p.Loads.RoofLiveLb), S: lb(p.Loads.SnowLb),
 			Down: fmtx.Lb(DemandLb(p.DownLb)), Up: fmtx.Lb(DemandLb(p.UpLb)), Ratio: ratio, Status: p.Status,
 			Bad: p.Status == StatusFail || p.Status == StatusError}
-		if row.Bad {
-			row.IDs, row.Count = p.ID, 1
-			rows = append(rows, row)
-			ids = append(ids, nil)
-			continue
+		return row, !row.Bad
+	}, func(i int) string { return posts[i].ID }, func(r *pathPostRow, ids string, n int) { r.IDs, r.Count = ids, n })
+}
+
+// groupedRows gives one row per distinct row (row(i) of each of the n
+// items, ok false for an item that has a row of its own), in the order of
+// its first item, each with its items' ids listed (memberList) and
+// counted (set).
+func groupedRows[R comparable](n int, row func(i int) (R, bool), id func(i int) string, set func(r *R, ids string, n int)) []R {
+	groups := groupRows(n, math.MaxInt, row)
+	out := make([]R, len(groups))
+	for k, g := range groups {
+		out[k], _ = row(g.items[0])
+		ids := make([]string, len(g.items))
+		for x, j := range g.items {
+			ids[x] = id(j)
 		}
-		k, ok := at[row]
-		if !ok {
-			k = len(rows)
-			at[row] = k
-			rows = append(rows, row)
-			ids = append(ids, nil)
-		}
-		ids[k] = append(ids[k], p.ID)
+		set(&out[k], memberList(ids), len(ids))
 	}
-	for k := range rows {
-		if ids[k] != nil {
-			rows[k].IDs, rows[k].Count = memberList(ids[k]), len(ids[k])
-		}
-	}
-	return rows
+	return out
 }
 
 // pathJoints gives one row per kind of joint with its largest demands.
@@ -214,28 +206,13 @@ func pathJoints(conns []Connection) []pathJointRow {
 // pathFoundation gives one row per distinct foundation row apart from its
 // id (kind, loads as shown and unit), in the order of its first line.
 func pathFoundation(lines []FoundationLine, lb func(float64) string) []pathFoundRow {
-	var rows []pathFoundRow
-	var ids [][]string
-	at := map[pathFoundRow]int{}
-	for i := range lines {
+	return groupedRows(len(lines), func(i int) (pathFoundRow, bool) {
 		f := &lines[i]
 		l, unit := f.Loads, "lb"
 		if f.Kind == "wall" {
 			l, unit = f.PerFoot, "plf"
 		}
-		row := pathFoundRow{Kind: f.Kind, D: lb(l.DeadLb), L: lb(l.LiveLb), Lr: lb(l.RoofLiveLb),
-			S: lb(l.SnowLb), Wd: lb(l.WindDownLb), Wu: lb(l.WindUpLb), Unit: unit}
-		k, ok := at[row]
-		if !ok {
-			k = len(rows)
-			at[row] = k
-			rows = append(rows, row)
-			ids = append(ids, nil)
-		}
-		ids[k] = append(ids[k], f.ID)
-	}
-	for k := range rows {
-		rows[k].IDs, rows[k].Count = memberList(ids[k]), len(ids[k])
-	}
-	return rows
+		return pathFoundRow{Kind: f.Kind, D: lb(l.DeadLb), L: lb(l.LiveLb), Lr: lb(l.RoofLiveLb),
+			S: lb(l.SnowLb), Wd: lb(l.WindDownLb), Wu: lb(l.WindUpLb), Unit: unit}, true
+	}, func(i int) string { return lines[i].ID }, func(r *pathFoundRow, ids string, n int) { r.IDs, r.Count = ids, n })
 }

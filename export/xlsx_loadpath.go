@@ -146,31 +146,21 @@ func postRatio(p *PathPost) float64 {
 // value that is not finite, has a row of its own. Every post keeps its own
 // line, with its loads, in the Foundation sheet and results.json.
 func postGroups(ps []PathPost) []rowGroup {
-	var groups []rowGroup
-	open := make(map[postRowKey]int)
-	for i := range ps {
+	return groupRows(len(ps), postMaxPerRow, func(i int) (postRowKey, bool) {
 		p := &ps[i]
 		if p.Status == StatusFail || p.Status == StatusError {
-			groups = append(groups, rowGroup{items: []int{i}})
-			continue
+			return postRowKey{}, false
 		}
 		l := p.Loads
 		k := postRowKey{size: p.Size, lumber: speciesGrade(p.Species, p.Grade), checked: p.Checked,
-			loads: [6]float64{math.Round(l.DeadLb), math.Round(l.LiveLb), math.Round(l.RoofLiveLb), math.Round(l.SnowLb),
-				math.Round(l.WindDownLb), math.Round(l.WindUpLb)},
-			down: DemandLb(p.DownLb), downCombo: p.DownCombo, up: DemandLb(p.UpLb), upCombo: p.UpCombo,
+			loads: roundedLoads(l),
+			down:  DemandLb(p.DownLb), downCombo: p.DownCombo, up: DemandLb(p.UpLb), upCombo: p.UpCombo,
 			ratio: math.Round(postRatio(p) * 100), status: p.Status, messages: strings.Join(p.Messages, "; ")}
 		if p.HeightIn > 0 {
 			k.height = FtIn(p.HeightIn)
 		}
-		if g, ok := open[k]; ok && len(groups[g].items) < postMaxPerRow {
-			groups[g].items = append(groups[g].items, i)
-			continue
-		}
-		open[k] = len(groups)
-		groups = append(groups, rowGroup{items: []int{i}})
-	}
-	return groups
+		return k, true
+	})
 }
 
 // postRow fills s with the cells of the posts of g, in postColumns order:
@@ -179,14 +169,7 @@ func postGroups(ps []PathPost) []rowGroup {
 func postRow(s *rowCells, ps []PathPost, g *rowGroup) {
 	p := &ps[g.items[0]]
 	s.begin(p.Status == StatusFail || p.Status == StatusError)
-	var b strings.Builder
-	for k, j := range g.items {
-		if k > 0 {
-			b.WriteString(", ")
-		}
-		b.WriteString(ps[j].ID)
-	}
-	s.text(b.String())
+	s.text(g.names(func(j int) string { return ps[j].ID }))
 	s.integer(len(g.items))
 	s.text(p.Size)
 	s.text(speciesGrade(p.Species, p.Grade))
@@ -223,6 +206,41 @@ const connMembersPerRow = 100
 // lines), in the order of the first.
 type rowGroup struct{ items []int }
 
+// groupRows groups the items 0 to n-1 whose keys are equal, at most most
+// a row, in the order of their first item; an item whose key is not ok
+// has a row of its own.
+func groupRows[K comparable](n, most int, key func(i int) (K, bool)) []rowGroup {
+	var groups []rowGroup
+	open := make(map[K]int)
+	for i := 0; i < n; i++ {
+		k, ok := key(i)
+		if !ok {
+			groups = append(groups, rowGroup{items: []int{i}})
+			continue
+		}
+		if g, ok := open[k]; ok && len(groups[g].items) < most {
+			groups[g].items = append(groups[g].items, i)
+			continue
+		}
+		open[k] = len(groups)
+		groups = append(groups, rowGroup{items: []int{i}})
+	}
+	return groups
+}
+
+// names returns the names of g's items (name gives the i-th), separated
+// by commas, as the rows name them.
+func (g *rowGroup) names(name func(i int) string) string {
+	var b strings.Builder
+	for k, j := range g.items {
+		if k > 0 {
+			b.WriteString(", ")
+		}
+		b.WriteString(name(j))
+	}
+	return b.String()
+}
+
 // connRowKey is what a row of the Connections sheet shows but the
 // members: joints with the same key share a row.
 type connRowKey struct {
@@ -236,9 +254,8 @@ type connRowKey struct {
 func connKey(c *Connection) connRowKey {
 	l := c.Loads
 	return connRowKey{kind: c.Kind, carrier: c.Carrier, bearing: c.Bearing,
-		loads: [6]float64{math.Round(l.DeadLb), math.Round(l.LiveLb), math.Round(l.RoofLiveLb), math.Round(l.SnowLb),
-			math.Round(l.WindDownLb), math.Round(l.WindUpLb)},
-		down: DemandLb(c.DownLb), downCombo: c.DownCombo, up: DemandLb(c.UpLb), upCombo: c.UpCombo}
+		loads: roundedLoads(l),
+		down:  DemandLb(c.DownLb), downCombo: c.DownCombo, up: DemandLb(c.UpLb), upCombo: c.UpCombo}
 }
 
 // connectionGroups groups the joints whose rows would read the same but
@@ -248,8 +265,6 @@ func connKey(c *Connection) connRowKey {
 // their first joint; a joint with a value that is not finite has a row of
 // its own.
 func connectionGroups(cs []Connection) []rowGroup {
-	var groups []rowGroup
-	open := make(map[connRowKey]int)
 	// the rounding of each distinct demand, worked out once (joints
 	// passing the same loads are most of a plan's)
 	type raw struct {
@@ -257,7 +272,7 @@ func connectionGroups(cs []Connection) []rowGroup {
 		down, up float64
 	}
 	rounded := make(map[raw]connRowKey)
-	for i := range cs {
+	return groupRows(len(cs), connMembersPerRow, func(i int) (connRowKey, bool) {
 		c := &cs[i]
 		r := raw{c.Loads, c.DownLb, c.UpLb}
 		k, ok := rounded[r]
@@ -266,14 +281,8 @@ func connectionGroups(cs []Connection) []rowGroup {
 			rounded[r] = k
 		}
 		k.kind, k.carrier, k.bearing, k.downCombo, k.upCombo = c.Kind, c.Carrier, c.Bearing, c.DownCombo, c.UpCombo
-		if g, ok := open[k]; ok && len(groups[g].items) < connMembersPerRow {
-			groups[g].items = append(groups[g].items, i)
-			continue
-		}
-		open[k] = len(groups)
-		groups = append(groups, rowGroup{items: []int{i}})
-	}
-	return groups
+		return k, true // a NaN in the key never matches: a row of its own
+	})
 }
 
 // connectionRow fills s with the cells of the joints of g, in
@@ -282,14 +291,7 @@ func connectionRow(s *rowCells, cs []Connection, g *rowGroup) {
 	c := &cs[g.items[0]]
 	s.begin(false)
 	s.text(c.Kind)
-	var b strings.Builder
-	for k, j := range g.items {
-		if k > 0 {
-			b.WriteString(", ")
-		}
-		b.WriteString(cs[j].Member)
-	}
-	s.text(b.String())
+	s.text(g.names(func(j int) string { return cs[j].Member }))
 	s.integer(len(g.items))
 	s.integer(c.Bearing)
 	s.text(c.Carrier)
@@ -307,14 +309,7 @@ func foundationRow(s *rowCells, fs []FoundationLine, g *rowGroup) {
 	fl := &fs[g.items[0]]
 	s.begin(false)
 	s.text(fl.Kind)
-	var b strings.Builder
-	for k, j := range g.items {
-		if k > 0 {
-			b.WriteString(", ")
-		}
-		b.WriteString(fs[j].ID)
-	}
-	s.text(b.String())
+	s.text(g.names(func(j int) string { return fs[j].ID }))
 	s.integer(len(g.items))
 	if fl.LengthIn > 0 {
 		s.text(FtIn(fl.LengthIn))
@@ -341,25 +336,16 @@ func foundationRow(s *rowCells, fs []FoundationLine, g *rowGroup) {
 // them all, up to postMaxPerRow a row, in the order of their first. A
 // wall line (with its length and loads per foot) has a row of its own.
 func foundationGroups(fs []FoundationLine) []rowGroup {
-	var groups []rowGroup
-	open := make(map[[6]float64]int)
-	for i := range fs {
-		f := &fs[i]
-		if f.Kind != "post" {
-			groups = append(groups, rowGroup{items: []int{i}})
-			continue
-		}
-		l := f.Loads
-		k := [6]float64{math.Round(l.DeadLb), math.Round(l.LiveLb), math.Round(l.RoofLiveLb), math.Round(l.SnowLb),
-			math.Round(l.WindDownLb), math.Round(l.WindUpLb)}
-		if g, ok := open[k]; ok && len(groups[g].items) < postMaxPerRow {
-			groups[g].items = append(groups[g].items, i)
-			continue
-		}
-		open[k] = len(groups)
-		groups = append(groups, rowGroup{items: []int{i}})
-	}
-	return groups
+	return groupRows(len(fs), postMaxPerRow, func(i int) ([6]float64, bool) {
+		return roundedLoads(fs[i].Loads), fs[i].Kind == "post"
+	})
+}
+
+// roundedLoads are l's D, L, Lr, S, W down and W up as the sheets show
+// them, to the pound.
+func roundedLoads(l TypeLoads) [6]float64 {
+	return [6]float64{math.Round(l.DeadLb), math.Round(l.LiveLb), math.Round(l.RoofLiveLb), math.Round(l.SnowLb),
+		math.Round(l.WindDownLb), math.Round(l.WindUpLb)}
 }
 
 // typeCells writes D, L, Lr, S, W down, W up.

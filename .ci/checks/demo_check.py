@@ -202,45 +202,27 @@ def main(demo, overlay_dir):
         n = wb["Beams"].max_row - 3
         if n != len(lp["beams"]):
             fail("Beams sheet: %d rows, results.json load_path.beams has %d" % (n, len(lp["beams"])))
-        # Foundation: each wall line a row, posts alike share one; every
-        # line of results.json once.
-        ws = wb["Foundation"]
-        head = [c.value for c in ws[3]]
-        named = []
-        for row in ws.iter_rows(min_row=4, values_only=True):
-            r = dict(zip(head, row))
-            ids = r["IDs"].split(", ")
-            if len(ids) != r["Count"] or (r["Kind"] == "wall" and len(ids) != 1):
-                fail("Foundation row %r: %d lines, count %r" % (r, len(ids), r["Count"]))
-            named += [(r["Kind"], i) for i in ids]
-        if sorted(named) != sorted((f["kind"], f["id"]) for f in lp["foundation"]):
-            fail("Foundation sheet names %d lines, results.json has %d (or they differ)" % (len(named), len(lp["foundation"])))
-        # Connections: joints alike share a row naming them all; every joint
-        # of results.json is named once, with its kind, bearing and carrier.
-        ws = wb["Connections"]
-        head = [c.value for c in ws[3]]
-        named = []
-        for row in ws.iter_rows(min_row=4, values_only=True):
-            r = dict(zip(head, row))
-            ms = r["Members"].split(", ")
-            if len(ms) != r["Count"]:
-                fail("Connections row %r: %d members, count %r" % (r, len(ms), r["Count"]))
-            named += [(r["Joint"], m, r["Bearing"], r["Carried by"]) for m in ms]
-        joints = [(c["kind"], c["member"], c["bearing"], c["carrier"]) for c in lp["connections"]]
-        if sorted(named) != sorted(joints):
-            fail("Connections sheet names %d joints, results.json has %d (or they differ)" % (len(named), len(joints)))
-        # Posts: posts alike share a row naming them all; every post once.
-        ws = wb["Posts"]
-        head = [c.value for c in ws[3]]
-        named = []
-        for row in ws.iter_rows(min_row=4, values_only=True):
-            r = dict(zip(head, row))
-            ids = r["Posts"].split(", ")
-            if len(ids) != r["Count"]:
-                fail("Posts row %r: %d posts, count %r" % (r, len(ids), r["Count"]))
-            named += ids
-        if sorted(named) != sorted(p["id"] for p in lp["posts"]):
-            fail("Posts sheet names %d posts, results.json has %d (or they differ)" % (len(named), len(lp["posts"])))
+        # Posts, Connections and Foundation: items alike share a row naming
+        # them all (a wall line has its own); every item of results.json is
+        # named exactly once, with what its row says of it.
+        def grouped(name, names_col, item):
+            ws = wb[name]
+            head = [c.value for c in ws[3]]
+            named = []
+            for row in ws.iter_rows(min_row=4, values_only=True):
+                r = dict(zip(head, row))
+                ids = r[names_col].split(", ")
+                if len(ids) != r["Count"] or (r.get("Kind") == "wall" and len(ids) != 1):
+                    fail("%s row %r: %d named, count %r" % (name, r, len(ids), r["Count"]))
+                named += [item(r, i) for i in ids]
+            return sorted(named)
+        for name, col, item, want_items in (
+                ("Posts", "Posts", lambda r, i: i, [p["id"] for p in lp["posts"]]),
+                ("Connections", "Members", lambda r, m: (r["Joint"], m, r["Bearing"], r["Carried by"]),
+                 [(c["kind"], c["member"], c["bearing"], c["carrier"]) for c in lp["connections"]]),
+                ("Foundation", "IDs", lambda r, i: (r["Kind"], i), [(f["kind"], f["id"]) for f in lp["foundation"]])):
+            if grouped(name, col, item) != sorted(want_items):
+                fail("%s sheet does not name the %d items of results.json once each" % (name, len(want_items)))
         a, d = lp["applied"], lp["delivered"]
         for k in ("dead_lb", "live_lb", "roof_live_lb", "snow_lb", "wind_up_lb"):
             if abs(a[k] - d[k]) > 0.1:
