@@ -551,22 +551,7 @@ func writeLoadPathJSON(w *bufio.Writer, lp *LoadPath, round func(any) any) error
 	if err := list("foundation", len(lp.Foundation), lp.Foundation == nil, func(i int) any { return lp.Foundation[i] }); err != nil {
 		return err
 	}
-	for _, t := range []struct {
-		name string
-		v    TypeLoads
-	}{{"applied", lp.Applied}, {"delivered", lp.Delivered}} {
-		b, err := json.Marshal(round(t.v))
-		if err != nil {
-			return fmt.Errorf("%s: %w", t.name, err)
-		}
-		w.WriteString("  \"" + t.name + "\": ")
-		w.Write(b)
-		if t.name == "applied" {
-			w.WriteString(",\n")
-		}
-	}
-	w.WriteString("\n }")
-	return nil
+	return writeLoadPathTotals(w, lp, func(l *TypeLoads) ([]byte, error) { return json.Marshal(round(*l)) })
 }
 
 // writeJSONItems writes n items encoded by enc as a JSON list of one item

@@ -260,11 +260,17 @@ func writeLoadPathV3(w *bufio.Writer, lp *LoadPath, pr *pathRefs) error {
 		w.WriteString("  }")
 	}
 	w.WriteString(",\n")
+	return writeLoadPathTotals(w, lp, func(l *TypeLoads) ([]byte, error) { return typeLoadsJSON(out, l) })
+}
+
+// writeLoadPathTotals writes the load path's "applied" and "delivered"
+// loads, each encoded by enc, and closes the section.
+func writeLoadPathTotals(w *bufio.Writer, lp *LoadPath, enc func(*TypeLoads) ([]byte, error)) error {
 	for _, t := range []struct {
 		name string
 		v    *TypeLoads
 	}{{"applied", &lp.Applied}, {"delivered", &lp.Delivered}} {
-		b, err := typeLoadsJSON(out, t.v)
+		b, err := enc(t.v)
 		if err != nil {
 			return fmt.Errorf("%s: %w", t.name, err)
 		}
