@@ -62,6 +62,11 @@ func (t *demandTable) id(d demand) string {
 type pathRefs struct {
 	beamCalc, postCalc, postDemand, connDemand []string
 	demands                                    demandTable
+	// connRuns are the connections' groups: runs of joints one after
+	// another with the same kind, carrier, bearing and demand, each
+	// written once with its members (OrderConnections puts joints alike
+	// together)
+	connRuns [][2]int
 }
 
 // loadPathRefs numbers lp's calculations into calcs (after the members')
@@ -84,6 +89,16 @@ func loadPathRefs(lp *LoadPath, calcs *calcTable) *pathRefs {
 	}
 	for i := range lp.Connections {
 		pr.connDemand[i] = pr.demands.id(connectionDemand(&lp.Connections[i]))
+	}
+	cs := lp.Connections
+	for i := 0; i < len(cs); {
+		j := i + 1
+		for j < len(cs) && cs[j].Kind == cs[i].Kind && cs[j].Carrier == cs[i].Carrier && cs[j].Bearing == cs[i].Bearing &&
+			pr.connDemand[j] == pr.connDemand[i] {
+			j++
+		}
+		pr.connRuns = append(pr.connRuns, [2]int{i, j})
+		i = j
 	}
 	return pr
 }
@@ -176,10 +191,21 @@ func postJSON(w *jsonOut, p *PathPost, calc, dem string) ([]byte, error) {
 	return w.done()
 }
 
-func connectionJSON(w *jsonOut, c *Connection, dem string) ([]byte, error) {
+// connectionsJSON writes the joints cs (alike: one kind, carrier,
+// bearing and demand) as one item naming their members.
+func connectionsJSON(w *jsonOut, cs []Connection, dem string) ([]byte, error) {
+	c := &cs[0]
 	w.item()
 	w.str("kind", c.Kind)
-	w.str("member", c.Member)
+	w.key("members")
+	w.b = append(w.b, '[')
+	for i := range cs {
+		if i > 0 {
+			w.b = append(w.b, ',')
+		}
+		w.b = appendJSONString(w.b, cs[i].Member)
+	}
+	w.b = append(w.b, ']')
 	w.key("bearing")
 	w.b = strconv.AppendInt(w.b, int64(c.Bearing), 10)
 	w.str("carrier", c.Carrier)
@@ -229,8 +255,9 @@ func writeLoadPathV3(w *bufio.Writer, lp *LoadPath, pr *pathRefs) error {
 	}); err != nil {
 		return err
 	}
-	if err := list("connections", len(lp.Connections), lp.Connections == nil, func(i int) ([]byte, error) {
-		return connectionJSON(out, &lp.Connections[i], pr.connDemand[i])
+	if err := list("connections", len(pr.connRuns), lp.Connections == nil, func(i int) ([]byte, error) {
+		r := pr.connRuns[i]
+		return connectionsJSON(out, lp.Connections[r[0]:r[1]], pr.connDemand[r[0]])
 	}); err != nil {
 		return err
 	}
@@ -314,6 +341,10 @@ type fileLoadPathV3 struct {
 	Connections []struct {
 		Connection
 		Demand string `json:"demand"`
+		// Members: the joints alike the item stands for (kind, bearing,
+		// carrier and demand theirs); absent in an item of one joint
+		// ("member"), as written before
+		Members []string `json:"members"`
 	} `json:"connections"`
 	Foundation []FoundationLine  `json:"foundation"`
 	Demands    map[string]demand `json:"demands"`
@@ -376,18 +407,72 @@ func (f *fileLoadPathV3) loadPath(name string, calc func(id string) ([]Check, bo
 		lp.Posts[i] = p
 	}
 	if f.Connections != nil {
-		lp.Connections = make([]Connection, len(f.Connections))
+		n := 0
+		for i := range f.Connections {
+			n += max(1, len(f.Connections[i].Members))
+		}
+		lp.Connections = make([]Connection, 0, n)
 	}
 	for i := range f.Connections {
-		c := f.Connections[i].Connection
-		if ref := f.Connections[i].Demand; ref != "" {
-			d, err := dem("connection of", c.Member, ref)
+		fc := &f.Connections[i]
+		c := fc.Connection
+		if ref := fc.Demand; ref != "" {
+			who := c.Member
+			if len(fc.Members) > 0 {
+				who = fc.Members[0]
+			}
+			d, err := dem("connection of", who, ref)
 			if err != nil {
 				return nil, err
 			}
 			c.Loads, c.DownLb, c.DownCombo, c.UpLb, c.UpCombo = d.Loads, d.DownLb, d.DownCombo, d.UpLb, d.UpCombo
 		}
-		lp.Connections[i] = c
+		if len(fc.Members) == 0 {
+			lp.Connections = append(lp.Connections, c)
+			continue
+		}
+		for _, m := range fc.Members {
+			c.Member = m
+			lp.Connections = append(lp.Connections, c)
+		}
 	}
 	return lp, nil
+}
+
+// OrderConnections puts the joints alike (one kind, carrier, bearing and
+// demand, exactly) one after another, in the order of the first of each,
+// keeping their order among themselves: the hangers of a run of joists on
+// one beam side by side, as results.json writes them (one item naming
+// their members) and reads them back.
+func OrderConnections(cs []Connection) {
+	type key struct {
+		kind, carrier string
+		bearing       int
+		d             demand
+	}
+	group := make([]int, len(cs))
+	first := make(map[key]int)
+	var sizes []int
+	for i := range cs {
+		k := key{cs[i].Kind, cs[i].Carrier, cs[i].Bearing, connectionDemand(&cs[i])}
+		g, ok := first[k]
+		if !ok {
+			g = len(sizes)
+			first[k] = g
+			sizes = append(sizes, 0)
+		}
+		group[i] = g
+		sizes[g]++
+	}
+	// each group's place, then the joints into it in order
+	at := make([]int, len(sizes))
+	for g := 1; g < len(sizes); g++ {
+		at[g] = at[g-1] + sizes[g-1]
+	}
+	out := make([]Connection, len(cs))
+	for i := range cs {
+		out[at[group[i]]] = cs[i]
+		at[group[i]]++
+	}
+	copy(cs, out)
 }

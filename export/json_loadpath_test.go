@@ -126,6 +126,16 @@ func refsLoadPath() *LoadPath {
 // (common practice, no source).
 func TestLoadPathV3References(t *testing.T) {
 	lp := refsLoadPath()
+	// joints alike side by side, in the order of the first of each
+	OrderConnections(lp.Connections)
+	var order []string
+	for _, c := range lp.Connections {
+		order = append(order, c.Member)
+	}
+	// bearing 1 down only (M1, M5, M7), bearing 2 down only (M2, M4,
+	// M8), bearing 1 with uplift (M3, M9), bearing 2 with uplift (M6),
+	// the post's base
+	require.Equal(t, []string{"M1", "M5", "M7", "M2", "M4", "M8", "M3", "M9", "M6", "P1"}, order)
 	r := &Results{Plan: "p.dxf", DrawingUnits: "in", Members: rtMembers(3), LoadPath: lp}
 	var buf bytes.Buffer
 	w := bufio.NewWriter(&buf)
@@ -167,8 +177,9 @@ func TestLoadPathV3References(t *testing.T) {
 		}
 	}
 	for _, c := range f.Connections {
-		require.Equal(t, []string{"bearing", "carrier", "demand", "kind", "member"}, sortedKeys(c))
+		require.Equal(t, []string{"bearing", "carrier", "demand", "kind", "members"}, sortedKeys(c))
 	}
+	require.Len(t, f.Connections, 5) // one item for each group of joints alike
 	// three distinct lists of checks (two of beams, one of posts) and
 	// three distinct demands (a post's, equal to its base's; a hanger's
 	// down only and one with uplift), whatever the counts
@@ -189,7 +200,8 @@ func TestLoadPathV3References(t *testing.T) {
 	require.NoError(t, json.Unmarshal(alone.Bytes(), &own))
 	require.Len(t, file.Calculations, len(own.Calculations)+3)
 
-	// the same schema with the load path in full (the earlier writer)
+	// the same schema with the load path in full, a joint an item (the
+	// earlier writer)
 	var whole map[string]json.RawMessage
 	require.NoError(t, json.Unmarshal(buf.Bytes(), &whole))
 	full, err := json.Marshal(want)

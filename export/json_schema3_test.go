@@ -267,7 +267,7 @@ func TestSchemaDocListsEveryField(t *testing.T) {
 	}
 	walk(reflect.TypeOf(Results{}))
 	walk(reflect.TypeOf(Calculation{}))
-	for _, k := range []string{"calculations", "info_lists", "info_list", "calculation", "source_file", "line", "shared", "demands", "demand", Schema} {
+	for _, k := range []string{"calculations", "info_lists", "info_list", "calculation", "source_file", "line", "shared", "demands", "demand", "members", Schema} {
 		if !strings.Contains(text, "`"+k+"`") && !strings.Contains(text, "`\""+k+"\"`") {
 			t.Errorf("docs/RESULTS-SCHEMA.md does not name %q", k)
 		}

@@ -219,7 +219,7 @@ def main(demo, overlay_dir):
         for name, col, item, want_items in (
                 ("Posts", "Posts", lambda r, i: i, [p["id"] for p in lp["posts"]]),
                 ("Connections", "Members", lambda r, m: (r["Joint"], m, r["Bearing"], r["Carried by"]),
-                 [(c["kind"], c["member"], c["bearing"], c["carrier"]) for c in lp["connections"]]),
+                 [(c["kind"], m, c["bearing"], c["carrier"]) for c in lp["connections"] for m in c["members"]]),
                 ("Foundation", "IDs", lambda r, i: (r["Kind"], i), [(f["kind"], f["id"]) for f in lp["foundation"]])):
             if grouped(name, col, item) != sorted(want_items):
                 fail("%s sheet does not name the %d items of results.json once each" % (name, len(want_items)))

@@ -124,6 +124,7 @@ func exportLoadPath(o *outcome, toInch float64) *export.LoadPath {
 		}
 		lp.Foundation = append(lp.Foundation, fl)
 	}
+	export.OrderConnections(lp.Connections) // joints alike side by side
 	return lp
 }
 
