@@ -248,7 +248,7 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		}
 		fmt.Fprintf(stderr, "framecheck: %s: no joists found on the joist layers %s (run '%s' to see the drawing's layers and the role each gets)\n",
 			termText(c.planPath), termText(strings.Join(proj.Layers.Joists, ", ")), termText(layersCmd))
-		if like := joistLikeLayers(layerRows(o.drawing, proj)); len(like) > 0 {
+		if like := joistLikeLayers(o.layers); len(like) > 0 {
 			fmt.Fprintf(stderr, "framecheck: the joists may be on %s: name that layer in [layers] joists of the project file, or pass --joists %s\n",
 				termText(strings.Join(like, ", ")), termText(like[0]))
 		}
@@ -342,8 +342,7 @@ func unmatchedSupports(o *outcome) string {
 		return ""
 	}
 	var pats []string
-	rows := layerRows(o.drawing, o.Project)
-	for _, u := range unusedPatterns(rows, o.Project) {
+	for _, u := range unusedPatterns(o.layers, o.Project) {
 		if strings.HasPrefix(u, "[[support]]") {
 			pats = append(pats, u)
 		}
