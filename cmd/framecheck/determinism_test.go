@@ -7,7 +7,10 @@ import (
 	"os"
 	"path/filepath"
 	"runtime"
+	"strings"
 	"testing"
+
+	"framecheck/samples/bigplan/synth"
 )
 
 // TestOutputsSameOnAnyCoreCount runs check on a 5,000-joist synthetic plan
@@ -21,7 +24,29 @@ func TestOutputsSameOnAnyCoreCount(t *testing.T) {
 		t.Skip("-short: writes a 5,000-joist plan twice")
 	}
 	dir := t.TempDir()
-	p := writeBigPlan(t, dir, 5000, false)
+	outputsSameOnAnyCoreCount(t, dir, writeBigPlan(t, dir, 5000, false))
+}
+
+// TestLoadPathOutputsSameOnAnyCoreCount is TestOutputsSameOnAnyCoreCount
+// on the same joists with posts under every beam (synth.Options.Beams):
+// the load path is solved a batch at a time on both cores, its posts and
+// joints worked out in parallel, its connections ordered and grouped, and
+// results.json, the grouped sheets and the report must still come out
+// the same whatever the number of cores.
+func TestLoadPathOutputsSameOnAnyCoreCount(t *testing.T) {
+	if testing.Short() {
+		t.Skip("-short: writes a 5,000-joist plan with its beams twice")
+	}
+	dir := t.TempDir()
+	outputsSameOnAnyCoreCount(t, dir, writeBeamPlan(t, dir, synth.Options{Joists: 5000, Beams: true}))
+}
+
+// outputsSameOnAnyCoreCount runs check on p with one core and with two
+// and compares every output: results.json and the annotated drawing byte
+// for byte, the report without its date lines, the spreadsheet part by
+// part, uncompressed.
+func outputsSameOnAnyCoreCount(t *testing.T, dir string, p bigPlan) {
+	t.Helper()
 	outs := map[int]string{}
 	for _, procs := range []int{1, 2} {
 		old := runtime.GOMAXPROCS(procs)
@@ -34,7 +59,8 @@ func TestOutputsSameOnAnyCoreCount(t *testing.T) {
 		}
 		outs[procs] = out
 	}
-	for _, name := range []string{resultsName, "big5000-checked.dxf"} {
+	checked := strings.TrimSuffix(filepath.Base(p.dxf), filepath.Ext(p.dxf)) + "-checked.dxf"
+	for _, name := range []string{resultsName, checked} {
 		a, b := readFile(t, filepath.Join(outs[1], name)), readFile(t, filepath.Join(outs[2], name))
 		if !bytes.Equal(a, b) {
 			t.Errorf("%s differs between one core and two", name)
