@@ -61,15 +61,6 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 		return nil, err
 	}
 	plan := framing.Group(d, pipeline.FramingOptions(p))
-	// The entities are grouped: only a message about the layers reads
-	// them again, so their counts are kept for it and the entities go
-	// before the collector resumes (it then sizes the heap to what the
-	// checks hold; at 1,000,000 joists the entities are 226 MB).
-	var layers []layerRow
-	if len(plan.Members) == 0 || slices.ContainsFunc(plan.Issues, func(is dxfimport.Issue) bool { return is.Code == framing.CodeNoSupport }) {
-		layers = layerRows(d, p)
-	}
-	d.Entities = nil
 	resume()
 	var issues dxfimport.IssueList
 	// a doubt about the units comes first: it explains the findings after it
@@ -78,6 +69,15 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 	}
 	issues = append(issues, d.Issues...)
 	issues = append(issues, plan.Issues...)
+	// The entities are grouped: only a message about the layers reads
+	// them again, so their counts are kept for it and the entities go
+	// before the checks (at 1,000,000 joists they held 226 MB through
+	// the run's busiest part).
+	var layers []layerRow
+	if len(plan.Members) == 0 || slices.ContainsFunc(plan.Issues, func(is dxfimport.Issue) bool { return is.Code == framing.CodeNoSupport }) {
+		layers = layerRows(d, p)
+	}
+	d.Entities = nil
 	spanWarnings(plan, &issues)
 	po, err := pipeline.Run(pipeline.Input{Plan: plan, PlanFile: d.File, Project: p, Issues: issues, Size: in.size, Marks: in.marks})
 	if err != nil {
