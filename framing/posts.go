@@ -269,41 +269,70 @@ func postTextReachIn(t textItem) float64 { return math.Max(12, 3*t.heightIn) }
 // within reach on a posts layer, else the nearest label text naming a
 // size; a text goes to its nearest post only.
 func (g *grouper) postTexts() {
-	posts := g.plan.Posts
-	assign := func(texts []textItem, accept func(textItem) bool) {
-		best := map[int]int{} // post -> text
-		bestD := map[int]float64{}
-		for ti, t := range texts {
-			if !accept(t) {
-				continue
-			}
-			pk, pd := -1, postTextReachIn(t)
-			for k := range posts {
-				if posts[k].Text != "" {
-					continue
-				}
-				if d := dist(posts[k].At, t.p); d <= pd {
-					pk, pd = k, d
-				}
-			}
-			if pk < 0 {
-				continue
-			}
-			if d, ok := bestD[pk]; !ok || pd < d {
-				best[pk], bestD[pk] = ti, pd
-			}
-		}
-		for k, ti := range best {
-			posts[k].Text = strings.Join(strings.Fields(texts[ti].text), " ")
-			posts[k].TextPos = texts[ti].pos
-		}
-	}
-	assign(g.lp.postTexts, func(textItem) bool { return true })
-	assign(g.labelTexts, func(t textItem) bool {
+	assignPostTexts(g.plan.Posts, g.lp.postTexts, func(textItem) bool { return true })
+	assignPostTexts(g.plan.Posts, g.labelTexts, func(t textItem) bool {
 		if !anySizeRE.MatchString(normalizeCallout(t.text)) {
 			return false
 		}
 		co, err := readCallout(t.text)
 		return err != nil || co.SpacingIn == 0 // "2x10 @ 16" o.c.", "1 3/4 x 9 1/2 LVL @ 16" are the joists'
 	})
+}
+
+// assignPostTexts gives each post without a text the nearest of the texts
+// accept takes within its reach (postTextReachIn), a text going to its
+// nearest post only (of posts as near, the last; of texts as near a post,
+// the first).
+func assignPostTexts(posts []Post, texts []textItem, accept func(textItem) bool) {
+	// the texts taken, and the posts still without a text in a grid
+	// of cells as wide as the longest reach: a text looks at the
+	// cells its reach touches, not at every post (a plan with its
+	// posts labelled has as many texts as posts)
+	reach := make([]float64, len(texts))
+	cell := 0.0
+	for ti, t := range texts {
+		if accept(t) {
+			reach[ti] = postTextReachIn(t)
+			cell = math.Max(cell, reach[ti])
+		}
+	}
+	if cell == 0 {
+		return
+	}
+	at := func(v float64) int { return int(math.Floor(v / cell)) }
+	grid := map[[2]int][]int{}
+	for k := range posts {
+		if posts[k].Text == "" {
+			c := [2]int{at(posts[k].At.X), at(posts[k].At.Y)}
+			grid[c] = append(grid[c], k)
+		}
+	}
+	best := map[int]int{} // post -> text
+	bestD := map[int]float64{}
+	for ti, t := range texts {
+		if reach[ti] == 0 {
+			continue
+		}
+		// the nearest post within reach; of posts as near, the last
+		pk, pd := -1, reach[ti]
+		for cx := at(t.p.X - pd); cx <= at(t.p.X+pd); cx++ {
+			for cy := at(t.p.Y - pd); cy <= at(t.p.Y+pd); cy++ {
+				for _, k := range grid[[2]int{cx, cy}] {
+					if d := dist(posts[k].At, t.p); d < pd || (d == pd && k > pk) {
+						pk, pd = k, d
+					}
+				}
+			}
+		}
+		if pk < 0 {
+			continue
+		}
+		if d, ok := bestD[pk]; !ok || pd < d {
+			best[pk], bestD[pk] = ti, pd
+		}
+	}
+	for k, ti := range best {
+		posts[k].Text = strings.Join(strings.Fields(texts[ti].text), " ")
+		posts[k].TextPos = texts[ti].pos
+	}
 }
