@@ -156,13 +156,18 @@ func (g *grouper) findPointLoads() {
 	for i := range bestD {
 		bestD[i] = math.Inf(1)
 	}
+	// the marks without a text of their own in a grid: a text looks at
+	// the cells its reach touches, not at every mark
+	cell := 0.0
 	for _, t := range s.loadTexts {
-		mk, md := -1, pointLoadReachIn(t)
-		for i := range marks {
-			if d := dist(marks[i].At, t.p); d <= md && !ownText[i] {
-				mk, md = i, d
-			}
-		}
+		cell = math.Max(cell, pointLoadReachIn(t))
+	}
+	var grid *pointGrid
+	if cell > 0 {
+		grid = newPointGrid(cell, len(marks), func(i int) (Point, bool) { return marks[i].At, !ownText[i] })
+	}
+	for _, t := range s.loadTexts {
+		mk, md := grid.nearest(t.p, pointLoadReachIn(t))
 		if mk < 0 {
 			g.loadTextErr(t.pos, "point-load text %q has no point, circle, block or post outline within %.0f in",
 				flatText(t.text), pointLoadReachIn(t))

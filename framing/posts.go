@@ -279,6 +279,53 @@ func (g *grouper) postTexts() {
 	})
 }
 
+// pointGrid finds the nearest of a set of points within a reach through
+// cells as wide as the longest reach, instead of looking at every point.
+type pointGrid struct {
+	cell  float64
+	at    func(i int) Point
+	cells map[[2]int][]int
+}
+
+// newPointGrid indexes the points 0 to n-1 that point takes (ok), in
+// cells cell wide (the longest reach asked later; above 0).
+func newPointGrid(cell float64, n int, point func(i int) (Point, bool)) *pointGrid {
+	g := &pointGrid{cell: cell, cells: map[[2]int][]int{}}
+	pts := make([]Point, n)
+	for i := 0; i < n; i++ {
+		p, ok := point(i)
+		pts[i] = p
+		if ok {
+			c := g.key(p)
+			g.cells[c] = append(g.cells[c], i)
+		}
+	}
+	g.at = func(i int) Point { return pts[i] }
+	return g
+}
+
+func (g *pointGrid) key(p Point) [2]int {
+	return [2]int{int(math.Floor(p.X / g.cell)), int(math.Floor(p.Y / g.cell))}
+}
+
+// nearest returns the point nearest p within reach and its distance, -1
+// when there is none; of points as near, the last (as a scan of every
+// point keeping each one at least as near would).
+func (g *pointGrid) nearest(p Point, reach float64) (int, float64) {
+	best, bd := -1, reach
+	lo, hi := g.key(Point{X: p.X - reach, Y: p.Y - reach}), g.key(Point{X: p.X + reach, Y: p.Y + reach})
+	for cx := lo[0]; cx <= hi[0]; cx++ {
+		for cy := lo[1]; cy <= hi[1]; cy++ {
+			for _, i := range g.cells[[2]int{cx, cy}] {
+				if d := dist(g.at(i), p); d < bd || (d == bd && i > best) {
+					best, bd = i, d
+				}
+			}
+		}
+	}
+	return best, bd
+}
+
 // assignPostTexts gives each post without a text the nearest of the texts
 // accept takes within its reach (postTextReachIn), a text going to its
 // nearest post only (of posts as near, the last; of texts as near a post,
@@ -299,31 +346,14 @@ func assignPostTexts(posts []Post, texts []textItem, accept func(textItem) bool)
 	if cell == 0 {
 		return
 	}
-	at := func(v float64) int { return int(math.Floor(v / cell)) }
-	grid := map[[2]int][]int{}
-	for k := range posts {
-		if posts[k].Text == "" {
-			c := [2]int{at(posts[k].At.X), at(posts[k].At.Y)}
-			grid[c] = append(grid[c], k)
-		}
-	}
+	grid := newPointGrid(cell, len(posts), func(k int) (Point, bool) { return posts[k].At, posts[k].Text == "" })
 	best := map[int]int{} // post -> text
 	bestD := map[int]float64{}
 	for ti, t := range texts {
 		if reach[ti] == 0 {
 			continue
 		}
-		// the nearest post within reach; of posts as near, the last
-		pk, pd := -1, reach[ti]
-		for cx := at(t.p.X - pd); cx <= at(t.p.X+pd); cx++ {
-			for cy := at(t.p.Y - pd); cy <= at(t.p.Y+pd); cy++ {
-				for _, k := range grid[[2]int{cx, cy}] {
-					if d := dist(posts[k].At, t.p); d < pd || (d == pd && k > pk) {
-						pk, pd = k, d
-					}
-				}
-			}
-		}
+		pk, pd := grid.nearest(t.p, reach[ti])
 		if pk < 0 {
 			continue
 		}

@@ -91,3 +91,35 @@ func BenchmarkAssignPostTexts(b *testing.B) {
 		assignPostTexts(ps, texts, all)
 	}
 }
+
+// TestPointGridNearestAsScan: the grid's nearest point within a reach is
+// the scan's (every point looked at, the last of points as near kept), for
+// random points on a lattice, some left out, and reaches up to the cell
+// (common practice, no source).
+func TestPointGridNearestAsScan(t *testing.T) {
+	r := rand.New(rand.NewSource(5))
+	for round := 0; round < 300; round++ {
+		n := r.Intn(50)
+		pts := make([]Point, n)
+		take := make([]bool, n)
+		for i := range pts {
+			pts[i] = Point{X: float64(r.Intn(30)*4 - 40), Y: float64(r.Intn(30)*4 - 40)}
+			take[i] = r.Intn(4) != 0
+		}
+		cell := 12 + float64(r.Intn(3))*6
+		g := newPointGrid(cell, n, func(i int) (Point, bool) { return pts[i], take[i] })
+		for q := 0; q < 20; q++ {
+			p := Point{X: float64(r.Intn(140) - 50), Y: float64(r.Intn(140) - 50)}
+			reach := 12 + float64(r.Intn(int(cell)-11))
+			want, wd := -1, reach
+			for i := range pts {
+				if d := dist(pts[i], p); take[i] && d <= wd {
+					want, wd = i, d
+				}
+			}
+			if got, gd := g.nearest(p, reach); got != want || gd != wd {
+				t.Fatalf("round %d, %v within %g: point %d at %g, by scan %d at %g", round, p, reach, got, gd, want, wd)
+			}
+		}
+	}
+}
