@@ -21,6 +21,9 @@ import (
 //   - A post's or connection's loads by type and its largest down and up
 //     ASD loads with their combinations are an entry of the load path's
 //     "demands" (its "demand" names it), shared by equal demands.
+//   - Joints alike (one kind, carrier, bearing and demand) one after
+//     another are one connection item naming their "members"
+//     (OrderConnections puts them together).
 
 // demand is what a post or connection shares through "demands".
 type demand struct {
