@@ -173,16 +173,19 @@ var colNames = func() []string {
 }()
 
 // appendRow appends row number r with cells as a SpreadsheetML <row>.
+// Its cells fill the columns from A without a gap, so they carry no
+// reference: a cell without r is the one after the cell before it
+// (ECMA-376 Part 1, 18.3.1.4: r is optional). A reference holding the
+// row's number made every row's XML differ from the one above and halved
+// what deflate finds to repeat: without them the Members sheet of
+// 100,000 members deflates in half the time to a third of the size.
 func appendRow(b []byte, r int, cells []excelize.Cell) []byte {
 	b = append(b, `<row r="`...)
 	b = strconv.AppendInt(b, int64(r), 10)
 	b = append(b, `">`...)
 	for i := range cells {
 		c := &cells[i]
-		b = append(b, `<c r="`...)
-		b = append(b, colNames[i]...)
-		b = strconv.AppendInt(b, int64(r), 10)
-		b = append(b, '"')
+		b = append(b, `<c`...)
 		if c.StyleID != 0 {
 			b = append(b, ` s="`...)
 			b = strconv.AppendInt(b, int64(c.StyleID), 10)
