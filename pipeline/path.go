@@ -104,6 +104,20 @@ func markLoads(p *project.Project, mk framing.PointLoadMark) (check.PointLoad, s
 // Table 1B, heading note).
 const beamDensityPcf = woodDensityPcf
 
+// HasLoadPath reports whether the plan has a load path to solve: a post,
+// or a beam with supports of its own.
+func HasLoadPath(plan *framing.Plan) bool {
+	if len(plan.Posts) > 0 {
+		return true
+	}
+	for i := range plan.Beams {
+		if !plan.Beams[i].Rigid {
+			return true
+		}
+	}
+	return false
+}
+
 // runLoadPath follows the loads of the checked joists down to the beams,
 // posts and walls that carry them (issue 17). Beams framing found with two
 // or more supports of their own are checked with the joists' reactions by
@@ -113,11 +127,7 @@ const beamDensityPcf = woodDensityPcf
 // With sizing (--size), each beam takes the lightest of [sizing]
 // beam_candidates with which it passes, its own weight following the size.
 func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, keys []string, usable []bool, s check.Settings, o *Outcome, sizing bool) {
-	checkable := len(plan.Posts) > 0
-	for i := range plan.Beams {
-		checkable = checkable || !plan.Beams[i].Rigid
-	}
-	if !checkable {
+	if !HasLoadPath(plan) {
 		return // no beam with supports of its own, no post: every support is a rigid bearing
 	}
 	po := &PathOutcome{}

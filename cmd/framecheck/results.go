@@ -19,6 +19,25 @@ import (
 
 // exportResults maps an outcome onto export's results.json contract.
 func exportResults(o *outcome, planName string) *export.Results {
+	r := exportMembers(o, planName)
+	finishExport(r, o)
+	return r
+}
+
+// finishExport adds to r what depends on the load path, once it is
+// solved: the load path itself and the notes (which list its findings).
+func finishExport(r *export.Results, o *outcome) {
+	toInch := o.drawing.ToInch
+	if toInch <= 0 {
+		toInch = 1
+	}
+	r.LoadPath = exportLoadPath(o, toInch)
+	r.Assumptions = assumptions(o)
+}
+
+// exportMembers is exportResults but for the load path and the notes
+// (finishExport): the members and what follows from them alone.
+func exportMembers(o *outcome, planName string) *export.Results {
 	d, plan := o.drawing, o.Plan
 	toInch := d.ToInch
 	if toInch <= 0 {
@@ -83,8 +102,6 @@ func exportResults(o *outcome, planName string) *export.Results {
 			u.FromFaceIn = u.AtIn - datum[u.Member]
 		}
 	}
-	r.LoadPath = exportLoadPath(o, toInch)
-	r.Assumptions = assumptions(o)
 	return r
 }
 

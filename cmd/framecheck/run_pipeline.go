@@ -39,9 +39,20 @@ type pipelineInput struct {
 // blocking rows per run, names marks, counts the takeoff and follows the
 // load path. A returned error means the input is unusable (exit 2).
 func runPipeline(in pipelineInput) (*outcome, error) {
+	o, solve, err := startPipeline(in)
+	if err != nil {
+		return nil, err
+	}
+	solve()
+	return o, nil
+}
+
+// startPipeline is runPipeline in two steps (pipeline.Start): it returns
+// once the members are checked, with solve, which follows the load path.
+func startPipeline(in pipelineInput) (o *outcome, solve func(), err error) {
 	p := in.project
 	if _, err := pipeline.Settings(p); err != nil {
-		return nil, err // before the drawing is read, as a bad project file should be
+		return nil, nil, err // before the drawing is read, as a bad project file should be
 	}
 	units := p.Drawing.Units
 	if in.units != "" {
@@ -50,7 +61,6 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 	resume := pauseGC()
 	opt := dxfimport.Options{Units: units, Keep: keepLayer(p)}
 	var d *dxfimport.Drawing
-	var err error
 	if in.planData != nil {
 		d, err = dxfimport.Read(bytes.NewReader(in.planData), in.planPath, opt)
 	} else {
@@ -58,7 +68,7 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 	}
 	if err != nil {
 		resume()
-		return nil, err
+		return nil, nil, err
 	}
 	plan := framing.Group(d, pipeline.FramingOptions(p))
 	resume()
@@ -79,11 +89,11 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 	}
 	d.Entities = nil
 	spanWarnings(plan, &issues)
-	po, err := pipeline.Run(pipeline.Input{Plan: plan, PlanFile: d.File, Project: p, Issues: issues, Size: in.size, Marks: in.marks})
+	po, solve, err := pipeline.Start(pipeline.Input{Plan: plan, PlanFile: d.File, Project: p, Issues: issues, Size: in.size, Marks: in.marks})
 	if err != nil {
-		return nil, err
+		return nil, nil, err
 	}
-	return &outcome{Outcome: po, drawing: d, layers: layers}, nil
+	return &outcome{Outcome: po, drawing: d, layers: layers}, solve, nil
 }
 
 // releaseForWriters drops what the writers do not read once the results
@@ -91,11 +101,12 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 // the members as grouped and their check results and sizing (the
 // drawing's entities went once grouped; the annotated copy reads the
 // drawing's bytes, the report the plan's supports and zones). The live heap then follows the outputs
-// rather than holding the plan twice (issue 18). o.Path (the load path)
-// stays.
+// rather than holding the plan twice (issue 18). The load path as solved
+// goes too, once mapped (finishExport): the writers read its export.
 func (o *outcome) releaseForWriters() {
 	if o.Plan != nil {
 		o.Plan.Members = nil
+		o.Plan.Beams, o.Plan.Posts, o.Plan.PointLoads = nil, nil, nil
 	}
-	o.Results, o.Sizing = nil, nil
+	o.Results, o.Sizing, o.Path = nil, nil, nil
 }
