@@ -296,7 +296,8 @@ type rowBlock struct {
 // blocks joined make one deflate stream (RFC 1951, 3.2.3: a stream is a
 // series of blocks; only the last has BFINAL set) once a final empty
 // block follows. build must be safe to call from several goroutines at
-// once (each has its own rowCells).
+// once (each has its own rowCells). emit must not keep b.raw: its buffer
+// is used again for a later block.
 func rowBlocks(st *styles, rows, ncols int, build func(s *rowCells, i int), emit func(rowBlock) error) error {
 	blocks := (rows + rowsPerBlock - 1) / rowsPerBlock
 	workers := min(runtime.GOMAXPROCS(0), max(blocks, 1))
@@ -306,6 +307,11 @@ func rowBlocks(st *styles, rows, ncols int, build func(s *rowCells, i int), emit
 	}
 	jobs := make(chan int)
 	results := make(chan done, workers)
+	// The blocks' XML buffers go round: once emitted, a block's buffer
+	// is free for a block to come (100,000 members took 160 MB of fresh
+	// memory, a new buffer per block, and the system's time to hand it
+	// out page by page).
+	free := make(chan []byte, 3*workers+1)
 	// Workers may run at most 2*workers blocks ahead of the writer, so
 	// memory stays a few blocks however large the plan.
 	slots := make(chan struct{}, 2*workers)
@@ -319,7 +325,12 @@ func rowBlocks(st *styles, rows, ncols int, build func(s *rowCells, i int), emit
 			zw, _ := flate.NewWriter(&zbuf, flate.BestSpeed)
 			for i := range jobs {
 				lo, hi := i*rowsPerBlock, min((i+1)*rowsPerBlock, rows)
-				raw := make([]byte, 0, (hi-lo)*ncols*64)
+				var raw []byte
+				select {
+				case raw = <-free:
+				default:
+					raw = make([]byte, 0, (hi-lo)*ncols*64)
+				}
 				for k := lo; k < hi; k++ {
 					build(&rc, k)
 					raw = appendRow(raw, k+HeaderRow+1, rc.store)
@@ -367,6 +378,10 @@ func rowBlocks(st *styles, rows, ncols int, build func(s *rowCells, i int), emit
 			<-slots
 			if err = emit(b); err != nil {
 				close(stop)
+			}
+			select {
+			case free <- b.raw[:0]:
+			default:
 			}
 		}
 		if err != nil {

@@ -3,10 +3,12 @@ package main
 import (
 	"fmt"
 	"math"
+	"strconv"
 	"strings"
 
 	"framecheck/check"
 	"framecheck/export"
+	"framecheck/internal/par"
 	"framecheck/loadpath"
 )
 
@@ -96,21 +98,28 @@ func exportLoadPath(o *outcome, toInch float64) *export.LoadPath {
 			Loads: ep.Loads, DownLb: ep.DownLb, DownCombo: ep.DownCombo, UpLb: ep.UpLb, UpCombo: ep.UpCombo})
 		lp.Foundation = append(lp.Foundation, export.FoundationLine{Kind: "post", ID: pt.ID, Source: ep.Source, Loads: ep.Loads})
 	}
-	for _, jt := range po.Joints {
-		c := export.Connection{Kind: jt.Kind, Member: po.IDs[jt.Member], Bearing: jt.Bearing + 1, Loads: typeLoads(jt.Loads),
-			DownLb: jt.DownLb, DownCombo: jt.DownCombo, UpLb: jt.UpLb, UpCombo: jt.UpCombo}
-		switch jt.Carrier.Kind {
-		case loadpath.Member:
-			c.Carrier = po.IDs[jt.Carrier.Index]
-		case loadpath.Post:
-			c.Carrier = plan.Posts[jt.Carrier.Index].ID
-		case loadpath.Wall:
-			c.Carrier = fmt.Sprintf("wall W%d", jt.Carrier.Index+1)
-		default:
-			c.Carrier = "rigid support"
+	// the joints, on every core (a large plan has a hundred thousand),
+	// each range writing its own
+	bases := len(lp.Connections)
+	lp.Connections = lp.Connections[:bases+len(po.Joints)]
+	par.Ranges(len(po.Joints), func(lo, hi int) {
+		for x := lo; x < hi; x++ {
+			jt := &po.Joints[x]
+			c := export.Connection{Kind: jt.Kind, Member: po.IDs[jt.Member], Bearing: jt.Bearing + 1, Loads: typeLoads(jt.Loads),
+				DownLb: jt.DownLb, DownCombo: jt.DownCombo, UpLb: jt.UpLb, UpCombo: jt.UpCombo}
+			switch jt.Carrier.Kind {
+			case loadpath.Member:
+				c.Carrier = po.IDs[jt.Carrier.Index]
+			case loadpath.Post:
+				c.Carrier = plan.Posts[jt.Carrier.Index].ID
+			case loadpath.Wall:
+				c.Carrier = wallCarrier(jt.Carrier.Index)
+			default:
+				c.Carrier = "rigid support"
+			}
+			lp.Connections[bases+x] = c
 		}
-		lp.Connections = append(lp.Connections, c)
-	}
+	})
 	for i, w := range po.Walls {
 		if w.Loads == (loadpath.Loads{HasUpliftDead: w.Loads.HasUpliftDead, UpliftDeadLb: w.Loads.UpliftDeadLb}) {
 			continue // nothing reaches it
@@ -127,6 +136,9 @@ func exportLoadPath(o *outcome, toInch float64) *export.LoadPath {
 	export.OrderConnections(lp.Connections) // joints alike side by side
 	return lp
 }
+
+// wallCarrier names wall i (0-based) as a connection's carrier.
+func wallCarrier(i int) string { return "wall W" + strconv.Itoa(i+1) }
 
 // pathChecks converts each list of checks once: beams and posts checked
 // alike share their check.Result's list (the load path analyses them

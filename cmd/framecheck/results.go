@@ -31,8 +31,14 @@ func finishExport(r *export.Results, o *outcome) {
 	if toInch <= 0 {
 		toInch = 1
 	}
+	// both read the outcome only: side by side
+	done := make(chan struct{})
+	go func() {
+		defer close(done)
+		r.Assumptions = assumptions(o)
+	}()
 	r.LoadPath = exportLoadPath(o, toInch)
-	r.Assumptions = assumptions(o)
+	<-done
 }
 
 // exportMembers is exportResults but for the load path and the notes
