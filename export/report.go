@@ -204,23 +204,40 @@ func buildReport(r *Results, g *PlanGeometry, when time.Time) *reportPage {
 		return cmp.Or(cmp.Compare(failRank(mb.Status), failRank(ma.Status)),
 			cmp.Compare(ratioKey(mb.MaxRatio), ratioKey(ma.MaxRatio)), cmp.Compare(a, b))
 	}
-	slices.SortFunc(idx, worse)
 	// One line per mark, its worst member, so that the list shows the
 	// worst kinds of joist rather than ten copies of one: a failing mark
-	// fails for every member it has.
-	count := map[string]int{}
-	for _, i := range idx {
-		count[markOrID(&r.Members[i])]++
+	// fails for every member it has. Each mark's worst member is found in
+	// one pass, and only those are put in order (sorting every member took
+	// a seventh of the report's time on a plan of 100,000).
+	type markKey struct {
+		marked bool   // a mark, else a member without one
+		name   string // the mark, or the member's id
 	}
-	shown := map[string]bool{}
-	for _, i := range idx {
-		m := &r.Members[i]
-		if key := markOrID(m); !shown[key] && len(p.Worst) < worstShown {
-			shown[key] = true
-			w := newWorstRow(m)
-			w.Count = count[key]
-			p.Worst = append(p.Worst, w)
+	keyOf := func(m *Member) markKey {
+		if m.Mark != "" {
+			return markKey{true, m.Mark}
 		}
+		return markKey{false, m.ID}
+	}
+	worst := map[markKey]int{}
+	count := map[markKey]int{}
+	for _, i := range idx {
+		k := keyOf(&r.Members[i])
+		count[k]++
+		if w, ok := worst[k]; !ok || worse(i, w) < 0 {
+			worst[k] = i
+		}
+	}
+	reps := make([]int, 0, len(worst))
+	for _, i := range worst {
+		reps = append(reps, i)
+	}
+	slices.SortFunc(reps, worse)
+	for _, i := range reps[:min(len(reps), worstShown)] {
+		m := &r.Members[i]
+		w := newWorstRow(m)
+		w.Count = count[keyOf(m)]
+		p.Worst = append(p.Worst, w)
 	}
 	for _, mk := range r.Marks {
 		p.Marks = append(p.Marks, markRow{
@@ -234,14 +251,6 @@ func buildReport(r *Results, g *PlanGeometry, when time.Time) *reportPage {
 	p.PlanSVG, p.MemberJSON = planSVG(r, g)
 	p.Calcs = buildCalcs(r)
 	return p
-}
-
-// markOrID is a member's mark, or its id when it has none.
-func markOrID(m *Member) string {
-	if m.Mark != "" {
-		return "mark " + m.Mark
-	}
-	return "member " + m.ID
 }
 
 func failRank(status string) int {

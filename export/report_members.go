@@ -2,6 +2,7 @@ package export
 
 import (
 	"html/template"
+	"math"
 	"strconv"
 )
 
@@ -48,8 +49,16 @@ func memberData(r *Results) template.JS {
 	body := make([]byte, 0, len(r.Members)*8)
 	ratios := make([]float64, len(CheckKinds))
 	prevID, prevHandle := "", ""
+	gi := -1
 	for i := range r.Members {
 		m := &r.Members[i]
+		if i > 0 && sameGroup(&r.Members[i-1], m) {
+			// the entry is the previous member's (a run's members
+			// mostly are): not built again
+			writeMemberRef(&body, i, gi, m, prevID, prevHandle)
+			prevID, prevHandle = m.ID, m.Handle
+			continue
+		}
 		entry = append(entry[:0], '[')
 		entry = strconv.AppendInt(entry, int64(intern(m.Mark)), 10)
 		entry = append(entry, ',')
@@ -87,8 +96,9 @@ func memberData(r *Results) template.JS {
 			entry = appendJSRatio(entry, v, v >= 0)
 		}
 		entry = append(entry, "]]"...)
-		gi, ok := groupIdx[string(entry)]
-		if !ok {
+		var found bool
+		gi, found = groupIdx[string(entry)]
+		if !found {
 			gi = len(groupIdx)
 			groupIdx[string(entry)] = gi
 			if gi > 0 {
@@ -96,29 +106,7 @@ func memberData(r *Results) template.JS {
 			}
 			groups = append(groups, entry...)
 		}
-
-		if i > 0 {
-			body = append(body, ",\n"...)
-		}
-		body = append(body, '[')
-		body = strconv.AppendInt(body, int64(gi), 10)
-		idNext := i > 0 && followsID(prevID, m.ID)
-		handleNext := i > 0 && followsHandle(prevHandle, m.Handle)
-		switch {
-		case !handleNext:
-			body = append(body, ',')
-			if idNext {
-				body = append(body, '0')
-			} else {
-				body = appendJSString(body, m.ID)
-			}
-			body = append(body, ',')
-			body = appendJSString(body, m.Handle)
-		case !idNext:
-			body = append(body, ',')
-			body = appendJSString(body, m.ID)
-		}
-		body = append(body, ']')
+		writeMemberRef(&body, i, gi, m, prevID, prevHandle)
 		prevID, prevHandle = m.ID, m.Handle
 	}
 	js = append(js, `],"text":[`...)
@@ -134,6 +122,58 @@ func memberData(r *Results) template.JS {
 	js = append(js, body...)
 	js = append(js, "]}"...)
 	return template.JS(js)
+}
+
+// writeMemberRef appends member i's item to body: its group gi, then
+// its id and handle unless each follows the previous member's.
+func writeMemberRef(body *[]byte, i, gi int, m *Member, prevID, prevHandle string) {
+	b := *body
+	if i > 0 {
+		b = append(b, ",\n"...)
+	}
+	b = append(b, '[')
+	b = strconv.AppendInt(b, int64(gi), 10)
+	idNext := i > 0 && followsID(prevID, m.ID)
+	handleNext := i > 0 && followsHandle(prevHandle, m.Handle)
+	switch {
+	case !handleNext:
+		b = append(b, ',')
+		if idNext {
+			b = append(b, '0')
+		} else {
+			b = appendJSString(b, m.ID)
+		}
+		b = append(b, ',')
+		b = appendJSString(b, m.Handle)
+	case !idNext:
+		b = append(b, ',')
+		b = appendJSString(b, m.ID)
+	}
+	*body = append(b, ']')
+}
+
+// sameGroup reports whether members a and b have every field a group
+// entry of memberData is made of alike (mark, size, species, grade, spans
+// and overhangs, ratio, governing check, status, each check's kind and
+// ratio), so that b's entry is a's. Numbers are compared bit for bit.
+func sameGroup(a, b *Member) bool {
+	if a.Mark != b.Mark || a.Size != b.Size || a.Species != b.Species || a.Grade != b.Grade ||
+		a.Status != b.Status || a.Governing != b.Governing || a.OverhangsIn != b.OverhangsIn ||
+		math.Float64bits(a.MaxRatio) != math.Float64bits(b.MaxRatio) ||
+		len(a.SpansIn) != len(b.SpansIn) || len(a.Checks) != len(b.Checks) {
+		return false
+	}
+	for i := range a.SpansIn {
+		if math.Float64bits(a.SpansIn[i]) != math.Float64bits(b.SpansIn[i]) {
+			return false
+		}
+	}
+	for i := range a.Checks {
+		if a.Checks[i].Kind != b.Checks[i].Kind || math.Float64bits(a.Checks[i].Ratio) != math.Float64bits(b.Checks[i].Ratio) {
+			return false
+		}
+	}
+	return true
 }
 
 // followsID reports whether id is prev with its trailing decimal number
