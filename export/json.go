@@ -2,7 +2,6 @@ package export
 
 import (
 	"bufio"
-	"bytes"
 	"encoding/json"
 	"errors"
 	"fmt"
@@ -12,7 +11,6 @@ import (
 	"strconv"
 	"strings"
 	"sync"
-	"sync/atomic"
 
 	"framecheck/internal/par"
 )
@@ -330,146 +328,12 @@ func WriteJSON(path string, r *Results) error {
 	return nil
 }
 
-// JSONPrep is results.json's head, everything up to and with the members,
-// written into memory ahead of the rest (PrepareJSON): the head depends on
-// the members and the run's facts alone, so a run can write it while it
-// still works out the rest (the load path), and WriteJSONWith then writes
-// it out as it is.
-type JSONPrep struct {
-	done    chan struct{}
-	members []Member // the members the head was written from
-	enc     *resultsEncoding
-	head    []byte
-	err     error
-	used    atomic.Bool // the encoding goes on once: a second write starts afresh
-}
-
-// errNotPrepared: the head is not written ahead (a member holds a value
-// that is not finite, which Sanitize changes).
-var errNotPrepared = errors.New("export: results.json's head not prepared")
-
-// PrepareJSON starts writing r's head into memory and returns at once;
-// WriteJSONWith waits for it. The head reads r's facts and members, which
-// must not change meanwhile; only the fields after the members (the
-// calculations, the marks, the load path, the notes) may still be set.
-func PrepareJSON(r *Results) *JSONPrep {
-	p := &JSONPrep{done: make(chan struct{}), members: r.Members}
-	go func() {
-		defer close(p.done)
-		if !membersFinite(r.Members) {
-			p.err = errNotPrepared
-			return
-		}
-		enc, err := newResultsEncoding(r, layoutV3)
-		if err != nil {
-			p.err = err
-			return
-		}
-		var buf bytes.Buffer
-		w := bufio.NewWriterSize(&buf, 64<<10)
-		if p.err = enc.head(w); p.err == nil {
-			p.err = w.Flush()
-		}
-		p.enc, p.head = enc, buf.Bytes()
-	}()
-	return p
-}
-
-// headFor returns the prepared encoding when it was written from members
-// (the same slice, the same length), else nil.
-func (p *JSONPrep) headFor(members []Member) *JSONPrep {
-	if p == nil {
-		return nil
-	}
-	<-p.done
-	if p.err != nil || len(p.members) != len(members) || (len(members) > 0 && &p.members[0] != &members[0]) || p.used.Swap(true) {
-		return nil
-	}
-	return p
-}
-
-// WriteJSONWith is WriteJSON with the head PrepareJSON wrote for r's
-// members (written here when prep is nil, failed or was made for other
-// members); the file is the same byte for byte.
-func WriteJSONWith(path string, r *Results, prep *JSONPrep) error {
-	if err := refuseDrawing(path); err != nil {
-		return err
-	}
-	clean, fields := Sanitize(r)
-	p := prep.headFor(clean.Members)
-	err := writeAtomic(path, func(w *bufio.Writer) error {
-		if p == nil {
-			return encodeResults(w, clean, layoutV3)
-		}
-		if _, err := w.Write(p.head); err != nil {
-			return err
-		}
-		return p.enc.tail(w, clean)
-	})
-	if err != nil {
-		return err
-	}
-	if len(fields) > 0 {
-		return &NonFiniteError{Path: path, Fields: fields}
-	}
-	return nil
-}
-
 // encodeResults writes r as JSON in layout lay: the top-level keys one per
 // line, list items one per line.
 func encodeResults(w *bufio.Writer, r *Results, lay jsonLayout) error {
-	e, err := newResultsEncoding(r, lay)
-	if err != nil {
-		return err
-	}
-	if err := e.head(w); err != nil {
-		return err
-	}
-	return e.tail(w, r)
-}
-
-// resultsEncoding is results.json being written in two stretches: head,
-// everything up to and with the members (which the members alone decide),
-// and tail, the rest (calculations, the load path, the notes). A run may
-// write the head into memory while it still works out the rest
-// (PrepareJSON).
-type resultsEncoding struct {
-	w     *bufio.Writer
-	r     *Results
-	steps []func() error
-	split int // steps[:split] are the head's
-}
-
-func (e *resultsEncoding) head(w *bufio.Writer) error {
-	e.w = w
-	w.WriteString("{\n")
-	for _, step := range e.steps[:e.split] {
-		if err := step(); err != nil {
-			return err
-		}
-	}
-	return nil
-}
-
-// tail writes the rest of r, whose members must be those the head wrote.
-func (e *resultsEncoding) tail(w *bufio.Writer, r *Results) error {
-	e.w, e.r = w, r
-	for _, step := range e.steps[e.split:] {
-		if err := step(); err != nil {
-			return err
-		}
-	}
-	w.WriteString("\n}\n")
-	return nil
-}
-
-// newResultsEncoding prepares the encoding of r in layout lay.
-func newResultsEncoding(r0 *Results, lay jsonLayout) (*resultsEncoding, error) {
-	e := &resultsEncoding{r: r0}
 	schema := lay.schema // the layout written here, whatever r.Schema says
 	first := true
 	key := func(name string) {
-		w := e.w
 		if !first {
 			w.WriteString(",\n")
 		}
@@ -477,7 +341,6 @@ func newResultsEncoding(r0 *Results, lay jsonLayout) (*resultsEncoding, error) {
 		w.WriteString(" \"" + name + "\": ")
 	}
 	value := func(name string, v any) error {
-		w := e.w
 		key(name)
 		b, err := json.Marshal(v)
 		if err != nil {
@@ -488,7 +351,7 @@ func newResultsEncoding(r0 *Results, lay jsonLayout) (*resultsEncoding, error) {
 	}
 	listBytes := func(name string, n int, enc func(i int) ([]byte, error)) error {
 		key(name)
-		return writeJSONItems(e.w, name, n, "  ", " ", enc)
+		return writeJSONItems(w, name, n, "  ", " ", enc)
 	}
 	list := func(name string, n int, item func(i int) any) error {
 		return listBytes(name, n, func(i int) ([]byte, error) { return json.Marshal(item(i)) })
@@ -501,11 +364,11 @@ func newResultsEncoding(r0 *Results, lay jsonLayout) (*resultsEncoding, error) {
 	var shares []*markShare
 	markAt := map[string]int{}
 	if lay.refs {
-		me.srcFile = sourceFileOf(r0.Members)
-		me.toInch, _ = UnitToInch(r0.DrawingUnits)
+		me.srcFile = sourceFileOf(r.Members)
+		me.toInch, _ = UnitToInch(r.DrawingUnits)
 		var err error
-		if shares, err = shareByMark(r0, me, calcs, markAt); err != nil {
-			return nil, err
+		if shares, err = shareByMark(r, me, calcs, markAt); err != nil {
+			return err
 		}
 	}
 	// rounded returns v as schema 3 writes it (json_round.go).
@@ -515,28 +378,29 @@ func newResultsEncoding(r0 *Results, lay jsonLayout) (*resultsEncoding, error) {
 		}
 		return roundedCopy(v)
 	}
-	e.steps = []func() error{
+	w.WriteString("{\n")
+	steps := []func() error{
 		func() error { return value("schema", schema) },
 		func() error {
-			if e.r.ToolVersion == "" {
+			if r.ToolVersion == "" {
 				return nil
 			}
-			return value("tool_version", e.r.ToolVersion)
+			return value("tool_version", r.ToolVersion)
 		},
-		func() error { return value("project", e.r.Project) },
-		func() error { return value("plan", e.r.Plan) },
+		func() error { return value("project", r.Project) },
+		func() error { return value("plan", r.Plan) },
 		func() error {
-			if e.r.InputSHA256 == "" {
+			if r.InputSHA256 == "" {
 				return nil
 			}
-			return value("input_sha256", e.r.InputSHA256)
+			return value("input_sha256", r.InputSHA256)
 		},
-		func() error { return value("drawing_units", e.r.DrawingUnits) },
+		func() error { return value("drawing_units", r.DrawingUnits) },
 		func() error {
-			if e.r.Datum == "" {
+			if r.Datum == "" {
 				return nil
 			}
-			return value("datum", e.r.Datum)
+			return value("datum", r.Datum)
 		},
 		func() error {
 			if me.srcFile == "" {
@@ -546,30 +410,30 @@ func newResultsEncoding(r0 *Results, lay jsonLayout) (*resultsEncoding, error) {
 		},
 		func() error {
 			if lay.refs {
-				return writeMembersV3(e.w, key, e.r, me, calcs, shares, markAt)
+				return writeMembersV3(w, key, r, me, calcs, shares, markAt)
 			}
-			return listBytes("members", len(e.r.Members), func(i int) ([]byte, error) {
-				m := memberForJSON(e.r.Members[i], calcs.id(&e.r.Members[i]))
-				return me.encode(&m, &e.r.Members[i])
+			return listBytes("members", len(r.Members), func(i int) ([]byte, error) {
+				m := memberForJSON(r.Members[i], calcs.id(&r.Members[i]))
+				return me.encode(&m, &r.Members[i])
 			})
 		},
 		func() error {
 			// the load path's beams and posts refer to calculations too,
 			// numbered after the members'
-			if lay.refs && e.r.LoadPath != nil {
-				paths = loadPathRefs(e.r.LoadPath, calcs)
+			if lay.refs && r.LoadPath != nil {
+				paths = loadPathRefs(r.LoadPath, calcs)
 			}
-			return calcs.write(e.w, key, lay.refs)
+			return calcs.write(w, key, lay.refs)
 		},
 		func() error {
 			if !lay.refs {
 				return nil
 			}
-			return me.infos.write(e.w, key)
+			return me.infos.write(w, key)
 		},
 		func() error {
-			return listBytes("marks", len(e.r.Marks), func(i int) ([]byte, error) {
-				m := e.r.Marks[i]
+			return listBytes("marks", len(r.Marks), func(i int) ([]byte, error) {
+				m := r.Marks[i]
 				m.SpansIn = orEmpty(m.SpansIn)
 				m.BlockingRowsPerSpan = orEmpty(m.BlockingRowsPerSpan)
 				b, err := json.Marshal(rounded(m))
@@ -585,8 +449,8 @@ func newResultsEncoding(r0 *Results, lay jsonLayout) (*resultsEncoding, error) {
 			})
 		},
 		func() error {
-			return list("blocking_rows", len(e.r.BlockingRows), func(i int) any {
-				b := e.r.BlockingRows[i]
+			return list("blocking_rows", len(r.BlockingRows), func(i int) any {
+				b := r.BlockingRows[i]
 				b.ClearIn = orEmpty(b.ClearIn)
 				b.Members = orEmpty(b.Members)
 				return rounded(b)
@@ -596,47 +460,48 @@ func newResultsEncoding(r0 *Results, lay jsonLayout) (*resultsEncoding, error) {
 			key("uplift")
 			var marks map[string]string // member id to mark (schema 3)
 			if lay.refs {
-				marks = make(map[string]string, len(e.r.Members))
-				for i := range e.r.Members {
-					marks[e.r.Members[i].ID] = e.r.Members[i].Mark
+				marks = make(map[string]string, len(r.Members))
+				for i := range r.Members {
+					marks[r.Members[i].ID] = r.Members[i].Mark
 				}
 			}
-			if err := writeUpliftJSON(e.w, &e.r.Uplift, marks); err != nil {
+			if err := writeUpliftJSON(w, &r.Uplift, marks); err != nil {
 				return fmt.Errorf("uplift: %w", err)
 			}
 			return nil
 		},
 		func() error {
-			if e.r.LoadPath == nil {
+			if r.LoadPath == nil {
 				return nil
 			}
 			key("load_path")
 			if paths != nil {
-				return writeLoadPathV3(e.w, e.r.LoadPath, paths)
+				return writeLoadPathV3(w, r.LoadPath, paths)
 			}
-			return writeLoadPathJSON(e.w, e.r.LoadPath, rounded)
+			return writeLoadPathJSON(w, r.LoadPath, rounded)
 		},
 		func() error {
-			t := e.r.Takeoff
+			t := r.Takeoff
 			t.Joists, t.Blocking, t.Hangers = orEmpty(t.Joists), orEmpty(t.Blocking), orEmpty(t.Hangers)
 			return value("takeoff", rounded(t))
 		},
-		func() error { return value("summary", e.r.Summary) },
+		func() error { return value("summary", r.Summary) },
 		func() error {
-			a := e.r.Assumptions
+			a := r.Assumptions
 			a.CodeEditions, a.Combinations = orEmpty(a.CodeEditions), orEmpty(a.Combinations)
 			a.Switches, a.Zones = orEmpty(a.Switches), orEmpty(a.Zones)
 			a.DesignValues, a.Notes = orEmpty(a.DesignValues), orEmpty(a.Notes)
 			return value("assumptions", rounded(a))
 		},
 	}
-	e.split = membersStep + 1
-	return e, nil
+	for _, step := range steps {
+		if err := step(); err != nil {
+			return err
+		}
+	}
+	w.WriteString("\n}\n")
+	return nil
 }
-
-// membersStep is the index of the members' step in newResultsEncoding's
-// steps: the last of the head.
-const membersStep = 8
 
 // memberForJSON returns m as a member of results.json names it: empty
 // lists as [], its calculation's id in Calculation and no factors (they

@@ -139,8 +139,8 @@ func pauseGC() (resume func()) {
 
 // loadPathGC collects once the members are checked and mapped for the
 // outputs, when the plan has a load path to solve, before it is solved
-// (while the head of results.json and the schedule's Members rows are
-// written into memory beside it): the checks leave their working data
+// (while the schedule's Members rows are built beside it): the checks
+// leave their working data
 // behind, and without a collection the solve and the writers took fresh
 // memory from the system page by page. Measured on the 100,000-joist
 // bigplan with -beams on this project's 2-vCPU machine (five alternated
