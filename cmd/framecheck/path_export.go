@@ -70,34 +70,49 @@ func exportLoadPath(o *outcome, toInch float64) *export.LoadPath {
 		eb.Mark = marks[key]
 		lp.Beams = append(lp.Beams, eb)
 	}
-	for _, p := range po.Posts {
-		pt := p.Post
-		ep := export.PathPost{ID: pt.ID, Source: pt.Pos.String(), At: [2]float64{pt.At.X / toInch, pt.At.Y / toInch},
-			AtIn: [2]float64{pt.At.X, pt.At.Y}, Size: p.Size, HeightIn: p.HeightIn, Checked: p.Checked, Loads: typeLoads(p.Out.Loads)}
-		for _, pc := range p.Out.Cases {
-			if pc.PLb > ep.DownLb {
-				ep.DownLb, ep.DownCombo = pc.PLb, pc.Name
-			}
-			if -pc.PLb > ep.UpLb {
-				ep.UpLb, ep.UpCombo = -pc.PLb, pc.Name
-			}
+	// The posts, on every core (a large plan has tens of thousands), each
+	// range writing its own items; their lists of checks converted first,
+	// once per list, in order (posts alike share one).
+	for i := range po.Posts {
+		if p := &po.Posts[i]; len(p.Unknown) == 0 && p.Checked {
+			checks.of(p.Out.Result.Checks)
 		}
-		if len(p.Unknown) > 0 {
-			ep.Status = check.StatusError
-			ep.Messages = []string{fmt.Sprintf("carries %s, which could not be checked: the load it brings is not known, so this post "+
-				"is not checked; check the beam, then the post", strings.Join(p.Unknown, ", "))}
-		} else if p.Checked {
-			r := p.Out.Result
-			ep.Species, ep.Grade, ep.Status, ep.Messages = r.DesignVals.Species, r.DesignVals.Grade, r.Status, r.Messages
-			ep.Checks = checks.of(r.Checks)
-		} else {
-			ep.Messages = []string{"no size or height: its load is reported, not checked (give a size beside it and [[post]] height_in)"}
-		}
-		lp.Posts = append(lp.Posts, ep)
-		lp.Connections = append(lp.Connections, export.Connection{Kind: "post base", Member: pt.ID, Bearing: 1, Carrier: "foundation",
-			Loads: ep.Loads, DownLb: ep.DownLb, DownCombo: ep.DownCombo, UpLb: ep.UpLb, UpCombo: ep.UpCombo})
-		lp.Foundation = append(lp.Foundation, export.FoundationLine{Kind: "post", ID: pt.ID, Source: ep.Source, Loads: ep.Loads})
 	}
+	nPosts := len(po.Posts)
+	lp.Posts = lp.Posts[:nPosts]
+	lp.Connections = lp.Connections[:nPosts]
+	lp.Foundation = lp.Foundation[:nPosts]
+	par.Ranges(nPosts, func(lo, hi int) {
+		for i := lo; i < hi; i++ {
+			p := &po.Posts[i]
+			pt := p.Post
+			ep := export.PathPost{ID: pt.ID, Source: pt.Pos.String(), At: [2]float64{pt.At.X / toInch, pt.At.Y / toInch},
+				AtIn: [2]float64{pt.At.X, pt.At.Y}, Size: p.Size, HeightIn: p.HeightIn, Checked: p.Checked, Loads: typeLoads(p.Out.Loads)}
+			for _, pc := range p.Out.Cases {
+				if pc.PLb > ep.DownLb {
+					ep.DownLb, ep.DownCombo = pc.PLb, pc.Name
+				}
+				if -pc.PLb > ep.UpLb {
+					ep.UpLb, ep.UpCombo = -pc.PLb, pc.Name
+				}
+			}
+			if len(p.Unknown) > 0 {
+				ep.Status = check.StatusError
+				ep.Messages = []string{fmt.Sprintf("carries %s, which could not be checked: the load it brings is not known, so this post "+
+					"is not checked; check the beam, then the post", strings.Join(p.Unknown, ", "))}
+			} else if p.Checked {
+				r := p.Out.Result
+				ep.Species, ep.Grade, ep.Status, ep.Messages = r.DesignVals.Species, r.DesignVals.Grade, r.Status, r.Messages
+				ep.Checks = checks.converted(r.Checks)
+			} else {
+				ep.Messages = []string{"no size or height: its load is reported, not checked (give a size beside it and [[post]] height_in)"}
+			}
+			lp.Posts[i] = ep
+			lp.Connections[i] = export.Connection{Kind: "post base", Member: pt.ID, Bearing: 1, Carrier: "foundation",
+				Loads: ep.Loads, DownLb: ep.DownLb, DownCombo: ep.DownCombo, UpLb: ep.UpLb, UpCombo: ep.UpCombo}
+			lp.Foundation[i] = export.FoundationLine{Kind: "post", ID: pt.ID, Source: ep.Source, Loads: ep.Loads}
+		}
+	})
 	// the joints, on every core (a large plan has a hundred thousand),
 	// each range writing its own
 	bases := len(lp.Connections)
@@ -145,6 +160,16 @@ func wallCarrier(i int) string { return "wall W" + strconv.Itoa(i+1) }
 // once), and so share one converted list, which results.json writes once
 // (its load path's "calculations").
 type pathChecks map[*check.CheckResult][]export.Check
+
+// converted returns what of returned for cs, without converting: safe
+// from several goroutines once every list they ask for went through of;
+// nil when cs is empty.
+func (pc pathChecks) converted(cs []check.CheckResult) []export.Check {
+	if len(cs) == 0 {
+		return nil
+	}
+	return pc[&cs[0]]
+}
 
 // of returns cs as the outputs hold them, with their traces; nil when cs
 // is empty.
