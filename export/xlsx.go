@@ -38,21 +38,14 @@ var SheetNames = []string{SheetMembers, SheetMarks, SheetBlocking, SheetTakeoff,
 // non-finite number is written as the text "n/a". A path ending in .dxf is
 // refused.
 func WriteXLSX(path string, r *Results) error {
-	return writeXLSX(path, r, false, nil)
-}
-
-// WriteXLSXWith is WriteXLSX with the Members rows PrepareXLSX built for
-// r's members (built here when prep is nil or was made for other
-// members); the file is the same byte for byte.
-func WriteXLSXWith(path string, r *Results, prep *SchedulePrep) error {
-	return writeXLSX(path, r, false, prep)
+	return writeXLSX(path, r, false)
 }
 
 // writeXLSX is WriteXLSX; with stream set every row of every sheet is
 // written by excelize's stream writer, cell by cell, and nothing is
 // spliced: the workbook the spliced rows must read back as (the tests'
 // reference, and how the schedule was written before).
-func writeXLSX(path string, r *Results, stream bool, prep *SchedulePrep) error {
+func writeXLSX(path string, r *Results, stream bool) error {
 	if err := refuseDrawing(path); err != nil {
 		return err
 	}
@@ -90,8 +83,7 @@ func writeXLSX(path string, r *Results, stream bool, prep *SchedulePrep) error {
 	var spliced []splicedSheet
 	if !stream {
 		spliced = append(spliced, splicedSheet{name: SheetMembers, cols: membersColumns, rows: len(r.Members),
-			row:      func(s *rowCells, i int) { memberRow(s, &r.Members[i]) },
-			prepared: prep.rowsFor(r.Members)})
+			row: func(s *rowCells, i int) { memberRow(s, &r.Members[i]) }})
 		spliced = append(spliced, pathSheets...)
 	}
 	// The workbook without those rows is small; the rows are added to it

@@ -31,8 +31,6 @@ type splicedSheet struct {
 	// row fills s with data row i's cells (0-based), len(cols) of them;
 	// it is called from several goroutines at once.
 	row func(s *rowCells, i int)
-	// prepared, when set, are the rows built already (PrepareXLSX)
-	prepared *preparedRows
 }
 
 // spliceSheets copies the workbook book (a zip that excelize wrote, in
@@ -232,19 +230,12 @@ func writeSplicedPart(zw *zip.Writer, f *zip.File, st *styles, ss *splicedSheet)
 
 	var part deflatedPart
 	part.add(head, deflatePiece(head))
-	if pr := ss.prepared; pr != nil {
-		part.crc = crc32Combine(part.crc, pr.crc, pr.raw)
-		part.raw += pr.raw
-		part.cmp += pr.cmp
-		part.pieces = append(part.pieces, pr.pieces...)
-	} else {
-		err = rowBlocks(st, ss.rows, len(ss.cols), ss.row, func(b rowBlock) error {
-			part.add(b.raw, b.deflated)
-			return nil
-		})
-		if err != nil {
-			return err
-		}
+	err = rowBlocks(st, ss.rows, len(ss.cols), ss.row, func(b rowBlock) error {
+		part.add(b.raw, b.deflated)
+		return nil
+	})
+	if err != nil {
+		return err
 	}
 	part.add(tail, deflatePiece(tail))
 	end := finalBlock()

@@ -94,10 +94,10 @@ func TestSplicedSheetsMatchExcelize(t *testing.T) {
 	r.LoadPath = bigLoadPath(300, 700, 2*rowsPerBlock+7, 50)
 	dir := t.TempDir()
 	spliced, stream := filepath.Join(dir, "spliced.xlsx"), filepath.Join(dir, "stream.xlsx")
-	if err := writeXLSX(spliced, r, false, nil); err != nil {
+	if err := writeXLSX(spliced, r, false); err != nil {
 		t.Fatal(err)
 	}
-	if err := writeXLSX(stream, r, true, nil); err != nil {
+	if err := writeXLSX(stream, r, true); err != nil {
 		t.Fatal(err)
 	}
 	gotParts, wantParts := zipParts(t, spliced), zipParts(t, stream)

@@ -120,29 +120,12 @@ func Settings(p *project.Project) (check.Settings, error) {
 // run, names marks, counts the takeoff and follows the load path. A
 // returned error means the project's design settings are unusable.
 func Run(in Input) (*Outcome, error) {
-	o, solve, err := Start(in)
+	o, inputs, keys, usable, err := runMembers(in)
 	if err != nil {
 		return nil, err
 	}
-	solve()
+	runLoadPath(in.Project, in.Plan, inputs, keys, usable, o.Settings, o, in.Size)
 	return o, nil
-}
-
-// Start is Run in two steps: it checks every member, decides the blocking
-// rows, names the marks and counts the takeoff, and returns with solve,
-// which follows the load path (Outcome.Path, and its findings appended to
-// Outcome.Issues). Until solve returns, the caller may read the members'
-// outcome but must change none of it, nor the plan. solve does its work
-// once.
-func Start(in Input) (o *Outcome, solve func(), err error) {
-	o, inputs, keys, usable, err := runMembers(in)
-	if err != nil {
-		return nil, nil, err
-	}
-	var once sync.Once
-	return o, func() {
-		once.Do(func() { runLoadPath(in.Project, in.Plan, inputs, keys, usable, o.Settings, o, in.Size) })
-	}, nil
 }
 
 // runMembers is Run but for the load path: the members' inputs and

@@ -18,7 +18,6 @@ import (
 	"framecheck/dxfimport"
 	"framecheck/export"
 	"framecheck/framing"
-	"framecheck/pipeline"
 	"framecheck/project"
 	"framecheck/samples"
 )
@@ -73,9 +72,6 @@ type checkRun struct {
 	verbose  bool                      // -v: every failing member and the info findings
 	bad      []badGroup                // failing and error members by mark, for the summary
 	layers   layerFlags                // --joists, --supports
-	// the schedule's Members rows, built while the load path is solved
-	// (nil: built with the rest)
-	xlsxPrep *export.SchedulePrep
 }
 
 // reportFlags adds --package and --pdf to f for c.
@@ -231,10 +227,15 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	if merr != nil {
 		fmt.Fprintf(stderr, "framecheck: warning: %s: the marks are named afresh\n", termText(merr.Error()))
 	}
-	o, solvePath, err := startPipeline(pipelineInput{planPath: outputName(c.planPath), planData: data, project: proj, units: c.units, size: c.size, marks: known})
+	o, err := runPipeline(pipelineInput{planPath: outputName(c.planPath), planData: data, project: proj, units: c.units, size: c.size, marks: known})
 	if err != nil {
 		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitUsage
+	}
+	if o.Path != nil {
+		// the load path's outputs follow its beams, posts and joints
+		scaleMemoryLimit(int64(len(data)), len(o.Path.Beams)+len(o.Path.Posts)+len(o.Path.Joints))
+		loadPathGC(o.Path.Solved != nil && len(o.Path.Beams)+len(o.Path.Posts) > 0)
 	}
 	if o.MarksFresh {
 		fmt.Fprintf(stderr, "framecheck: none of the %d marks kept in %s is on this plan: the marks are named afresh from J1\n",
@@ -261,27 +262,8 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		o.Issues = append(dxfimport.IssueList{{Pos: dxfimport.Pos{File: outputName(c.planPath)}, Code: CodeUnmatchedSupport,
 			Severity: dxfimport.SevWarning, Msg: msg}}, o.Issues...)
 	}
-	res := exportMembers(o, c.planPath)
+	res := exportResults(o, c.planPath)
 	res.InputSHA256 = sha256Hex(c.planData)
-	// The members are final. With a load path to solve, the schedule's
-	// Members rows, which depend on the members alone, are built and
-	// deflated on the cores the solve leaves idle (its passes from member
-	// to member run one after the other), and the schedule's writer puts
-	// them in as they are. Without one there is nothing to build them
-	// beside (on the 100,000-joist plan with rigid supports, building them
-	// ahead cost 0.14 s and 60 MiB). Writing the head of results.json
-	// ahead as well gained nothing measurable (2.375 s median of eight
-	// runs without, 2.395 s with) for 40 MiB more.
-	if pipeline.HasLoadPath(o.Plan) {
-		loadPathGC()
-		c.xlsxPrep = export.PrepareXLSX(res)
-	}
-	solvePath()
-	if o.Path != nil {
-		// the load path's outputs follow its beams, posts and joints
-		scaleMemoryLimit(int64(len(data)), len(o.Path.Beams)+len(o.Path.Posts)+len(o.Path.Joints))
-	}
-	finishExport(res, o)
 	// From here the writers read res, the plan's supports and zones and
 	// the drawing's bytes: drop the members as grouped and checked.
 	o.releaseForWriters()
@@ -483,7 +465,7 @@ func (c *checkRun) write(o *outcome, res *export.Results, proj *project.Project,
 	var mk export.Markup
 	jobs := []func() error{
 		func() error { return export.WriteJSON(set.path(names[0]), res) },
-		func() error { return export.WriteXLSXWith(set.path(names[1]), res, c.xlsxPrep) },
+		func() error { return export.WriteXLSX(set.path(names[1]), res) },
 		func() error {
 			return export.WriteReportWith(set.path(names[4]), res, planGeometry(o), when,
 				export.ReportOptions{Package: c.pkg})

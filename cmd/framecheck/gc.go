@@ -137,21 +137,19 @@ func pauseGC() (resume func()) {
 	return func() { debug.SetGCPercent(old) }
 }
 
-// loadPathGC collects once the members are checked and mapped for the
-// outputs, when the plan has a load path to solve, before it is solved
-// (while the schedule's Members rows are built beside it): the checks
-// leave their working data
-// behind, and without a collection the solve and the writers took fresh
-// memory from the system page by page. Measured on the 100,000-joist
-// bigplan with -beams on this project's 2-vCPU machine (five alternated
-// runs each, load about 1): collecting after the solve instead, 2.66 s
-// median wall and 4.29 s of CPU; not collecting, 2.59 s and 4.17 s;
-// collecting before it, 2.43 s and 3.97 s (846 MiB peak; 751 MiB
-// after). On the same plan with rigid supports (no load path) a
-// collection there cost 0.07 s, so it is not made (the caller knows).
-// Does nothing when the user set GOGC.
-func loadPathGC() {
-	if gcTuned {
+// loadPathGC collects once the load path is solved, when the plan has
+// one, before the results are mapped for the outputs: solving it leaves
+// its working data behind (every member's place in the order, the loads
+// passed down, the beams' analyses), and without a collection the mapping
+// of the members took fresh memory from the system page by page.
+// Measured on the 100,000-joist bigplan with -beams on this project's
+// 2-vCPU machine (three alternated runs each, load about 1): 2.89-2.92 s
+// wall, 0.83-0.88 s system CPU, 697-698 MB peak without; 2.67-2.72 s,
+// 0.46-0.53 s and 678-686 MB with. On the same plan with rigid supports
+// (no load path) a collection there cost 0.07 s, so it is not made. Does
+// nothing when the user set GOGC.
+func loadPathGC(solved bool) {
+	if gcTuned && solved {
 		runtime.GC()
 	}
 }

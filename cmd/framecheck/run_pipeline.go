@@ -39,20 +39,9 @@ type pipelineInput struct {
 // blocking rows per run, names marks, counts the takeoff and follows the
 // load path. A returned error means the input is unusable (exit 2).
 func runPipeline(in pipelineInput) (*outcome, error) {
-	o, solve, err := startPipeline(in)
-	if err != nil {
-		return nil, err
-	}
-	solve()
-	return o, nil
-}
-
-// startPipeline is runPipeline in two steps (pipeline.Start): it returns
-// once the members are checked, with solve, which follows the load path.
-func startPipeline(in pipelineInput) (o *outcome, solve func(), err error) {
 	p := in.project
 	if _, err := pipeline.Settings(p); err != nil {
-		return nil, nil, err // before the drawing is read, as a bad project file should be
+		return nil, err // before the drawing is read, as a bad project file should be
 	}
 	units := p.Drawing.Units
 	if in.units != "" {
@@ -61,6 +50,7 @@ func startPipeline(in pipelineInput) (o *outcome, solve func(), err error) {
 	resume := pauseGC()
 	opt := dxfimport.Options{Units: units, Keep: keepLayer(p)}
 	var d *dxfimport.Drawing
+	var err error
 	if in.planData != nil {
 		d, err = dxfimport.Read(bytes.NewReader(in.planData), in.planPath, opt)
 	} else {
@@ -68,7 +58,7 @@ func startPipeline(in pipelineInput) (o *outcome, solve func(), err error) {
 	}
 	if err != nil {
 		resume()
-		return nil, nil, err
+		return nil, err
 	}
 	plan := framing.Group(d, pipeline.FramingOptions(p))
 	resume()
@@ -89,11 +79,11 @@ func startPipeline(in pipelineInput) (o *outcome, solve func(), err error) {
 	}
 	d.Entities = nil
 	spanWarnings(plan, &issues)
-	po, solve, err := pipeline.Start(pipeline.Input{Plan: plan, PlanFile: d.File, Project: p, Issues: issues, Size: in.size, Marks: in.marks})
+	po, err := pipeline.Run(pipeline.Input{Plan: plan, PlanFile: d.File, Project: p, Issues: issues, Size: in.size, Marks: in.marks})
 	if err != nil {
-		return nil, nil, err
+		return nil, err
 	}
-	return &outcome{Outcome: po, drawing: d, layers: layers}, solve, nil
+	return &outcome{Outcome: po, drawing: d, layers: layers}, nil
 }
 
 // releaseForWriters drops what the writers do not read once the results
