@@ -557,9 +557,20 @@ const mostFindings = 50
 // the limit), so that results.json and the Notes sheet show what was not
 // checked. A member's own findings are already in its messages.
 func drawingFindings(o *outcome) []string {
+	// the findings' places that are a member's: a plan has far fewer
+	// findings than members, so the set is of the findings' places
 	own := map[dxfimport.Pos]bool{}
-	for k := range o.Plan.Members {
-		own[o.Plan.Members[k].Pos] = true
+	for _, is := range o.Issues {
+		if is.Severity >= dxfimport.SevWarning {
+			own[is.Pos] = false
+		}
+	}
+	if len(own) > 0 {
+		for k := range o.Plan.Members {
+			if _, ok := own[o.Plan.Members[k].Pos]; ok {
+				own[o.Plan.Members[k].Pos] = true
+			}
+		}
 	}
 	var notes []string
 	n := 0
