@@ -71,6 +71,7 @@ type checkRun struct {
 	pdf      bool                      // also print report.pdf with a Chromium
 	verbose  bool                      // -v: every failing member and the info findings
 	bad      []badGroup                // failing and error members by mark, for the summary
+	scan     *export.DrawingScan       // planData scanned for the annotated copy
 	layers   layerFlags                // --joists, --supports
 }
 
@@ -217,6 +218,9 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		return exitUsage
 	}
 	c.planData = data
+	// what the annotated copy must know of the drawing, found on the core
+	// that reading it into members leaves idle
+	c.scan = export.ScanDrawing(data, c.planPath)
 	scaleMemoryLimit(int64(len(data)), 0)
 	if afterRead != nil {
 		afterRead()
@@ -472,7 +476,7 @@ func (c *checkRun) write(o *outcome, res *export.Results, proj *project.Project,
 		},
 		func() error {
 			mk = export.MarkupFromResults(res, toInch)
-			return export.AnnotateBytes(c.planData, c.planPath, set.path(names[2]), mk)
+			return export.AnnotateScanned(c.planData, c.planPath, set.path(names[2]), mk, c.scan)
 		},
 	}
 	// One goroutine each: on a large plan they take about the same time
