@@ -19,31 +19,6 @@ import (
 
 // exportResults maps an outcome onto export's results.json contract.
 func exportResults(o *outcome, planName string) *export.Results {
-	r := exportMembers(o, planName)
-	finishExport(r, o)
-	return r
-}
-
-// finishExport adds to r what depends on the load path, once it is
-// solved: the load path itself and the notes (which list its findings).
-func finishExport(r *export.Results, o *outcome) {
-	toInch := o.drawing.ToInch
-	if toInch <= 0 {
-		toInch = 1
-	}
-	// both read the outcome only: side by side
-	done := make(chan struct{})
-	go func() {
-		defer close(done)
-		r.Assumptions = assumptions(o)
-	}()
-	r.LoadPath = exportLoadPath(o, toInch)
-	<-done
-}
-
-// exportMembers is exportResults but for the load path and the notes
-// (finishExport): the members and what follows from them alone.
-func exportMembers(o *outcome, planName string) *export.Results {
 	d, plan := o.drawing, o.Plan
 	toInch := d.ToInch
 	if toInch <= 0 {
@@ -55,6 +30,13 @@ func exportMembers(o *outcome, planName string) *export.Results {
 	}
 	r := &export.Results{Schema: export.Schema, Plan: filepath.Base(planName), DrawingUnits: units, Datum: export.DatumText,
 		ToolVersion: toolVersion(), Project: exportInfo(o.Project.Info)}
+	// The uplift list, the load path and the notes read the outcome only,
+	// never what is built here: each is made beside the members' mapping
+	// (a serial stretch each, while the cores had room).
+	var side sync.WaitGroup
+	side.Go(func() { r.Uplift = exportUplift(plan, o.Results, o.Project.Design.UpliftReportLb, toInch) })
+	side.Go(func() { r.LoadPath = exportLoadPath(o, toInch) })
+	side.Go(func() { r.Assumptions = assumptions(o) })
 	ids := make([]string, len(plan.Members))
 	for k := range plan.Members {
 		ids[k] = plan.Members[k].ID
@@ -97,17 +79,7 @@ func exportMembers(o *outcome, planName string) *export.Results {
 		r.BlockingRows = append(r.BlockingRows, exportRow(plan, runs, row, ids, toInch))
 	}
 	r.Takeoff = exportTakeoff(o.Takeoff)
-	r.Uplift = exportUplift(plan, o.Results, o.Project.Design.UpliftReportLb, toInch)
-	if len(r.Uplift.Bearings) > 0 {
-		datum := make(map[string]float64, len(r.Members))
-		for i := range r.Members {
-			datum[r.Members[i].ID] = r.Members[i].DatumIn
-		}
-		for i := range r.Uplift.Bearings {
-			u := &r.Uplift.Bearings[i]
-			u.FromFaceIn = u.AtIn - datum[u.Member]
-		}
-	}
+	side.Wait()
 	return r
 }
 
@@ -154,7 +126,7 @@ func exportUplift(plan *framing.Plan, results []check.Result, reportLb, toInch f
 			u.Bearings = append(u.Bearings, export.UpliftBearing{
 				Member: m.ID, Mark: m.Mark, Bearing: re.Bearing + 1,
 				Support: name, SupportLayer: b.Pos.Layer, SupportHandle: b.Pos.Handle, SupportKind: b.Kind,
-				AtIn: re.AtIn, Point: [2]float64{p.X / toInch, p.Y / toInch}, PointIn: [2]float64{p.X, p.Y},
+				AtIn: re.AtIn, FromFaceIn: re.AtIn - datumIn(m), Point: [2]float64{p.X / toInch, p.Y / toInch}, PointIn: [2]float64{p.X, p.Y},
 				UpliftLb: re.UpLb, Combo: re.UpCombo, CD: re.UpCD, Flagged: re.UpLb >= reportLb,
 			})
 		}

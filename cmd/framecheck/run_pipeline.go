@@ -92,7 +92,7 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 // drawing's entities went once grouped; the annotated copy reads the
 // drawing's bytes, the report the plan's supports and zones). The live heap then follows the outputs
 // rather than holding the plan twice (issue 18). The load path as solved
-// goes too, once mapped (finishExport): the writers read its export.
+// goes too, once mapped (exportResults): the writers read its export.
 func (o *outcome) releaseForWriters() {
 	if o.Plan != nil {
 		o.Plan.Members = nil
