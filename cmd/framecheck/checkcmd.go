@@ -218,9 +218,12 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		return exitUsage
 	}
 	c.planData = data
-	// what the annotated copy must know of the drawing, found on the core
-	// that reading it into members leaves idle
+	// what the annotated copy must know of the drawing, and its hash for
+	// results.json, found on the core that reading it into members leaves
+	// idle
 	c.scan = export.ScanDrawing(data, c.planPath)
+	inputHash := make(chan string, 1)
+	go func() { inputHash <- sha256Hex(data) }()
 	scaleMemoryLimit(int64(len(data)), 0)
 	if afterRead != nil {
 		afterRead()
@@ -267,7 +270,7 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 			Severity: dxfimport.SevWarning, Msg: msg}}, o.Issues...)
 	}
 	res := exportResults(o, c.planPath)
-	res.InputSHA256 = sha256Hex(c.planData)
+	res.InputSHA256 = <-inputHash
 	// From here the writers read res, the plan's supports and zones and
 	// the drawing's bytes: drop the members as grouped and checked.
 	o.releaseForWriters()
