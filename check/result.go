@@ -70,11 +70,14 @@ type Result struct {
 	BlockingAtIn         []float64 // positions of the added rows along the member (only the rows to add)
 	DrawnBlockingAtIn    []float64 // drawn rows the member relied on (existing, not in the takeoff)
 	BlockingSteps        []BlockingStep
-	Values               DesignValues // reference values used, with their source
-	Factors              []TraceItem  // CD per combination, CM, Ct, CF, Cfu, Ci, Cr, ...
-	Status               string       // StatusPass, StatusFail or StatusError
-	Messages             []string     // why it failed or errored
-	Info                 []string     // NDS 4.4.1.2 rule, ...
+	// Values are the reference values used, with their source; nil when
+	// none were found. Members checked alike share them (a pointer: the
+	// plan holds a result per member, and the values are 160 bytes).
+	Values   *DesignValues
+	Factors  []TraceItem // CD per combination, CM, Ct, CF, Cfu, Ci, Cr, ...
+	Status   string      // StatusPass, StatusFail or StatusError
+	Messages []string    // why it failed or errored
+	Info     []string    // NDS 4.4.1.2 rule, ...
 	// Reactions are the ASD support reactions at each bearing, in bearing
 	// order: the connector demand (down and up) at every joint.
 	Reactions []Reaction

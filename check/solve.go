@@ -189,7 +189,8 @@ func (e *engine) resultAt(rows []float64, bot *edgeEval, how rowsHow) Result {
 
 // baseResult fills what is known before the checks.
 func (e *engine) baseResult() Result {
-	r := Result{ID: e.m.ID, Size: e.sec.Name, Species: e.dv.Species, Grade: e.dv.Grade, Values: e.dv}
+	dv := e.dv
+	r := Result{ID: e.m.ID, Size: e.sec.Name, Species: dv.Species, Grade: dv.Grade, Values: &dv}
 	for _, k := range e.spanSegs {
 		r.SpansIn = append(r.SpansIn, e.segs[k].ToIn-e.segs[k].FromIn)
 	}
@@ -330,7 +331,8 @@ func errorResult(m Member, e *engine, err error) Result {
 		r.Size = e.sec.Name
 	}
 	if e != nil && e.dv.Species != "" {
-		r.Species, r.Grade, r.Values = e.dv.Species, e.dv.Grade, e.dv
+		dv := e.dv
+		r.Species, r.Grade, r.Values = dv.Species, dv.Grade, &dv
 	}
 	// Only finite numbers: results go to JSON.
 	for i := 1; i < len(m.Bearings); i++ {

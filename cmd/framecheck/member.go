@@ -224,8 +224,7 @@ func printMember(w io.Writer, m check.Member, r check.Result, colour bool) {
 	if m.BottomBracedContinuous {
 		fmt.Fprintln(w, "  bottom edge braced by the ceiling")
 	}
-	v := r.Values
-	if v.Source != "" {
+	if v := r.Values; v != nil && v.Source != "" {
 		fmt.Fprintf(w, "\nreference design values (%s):\n", termText(v.Source))
 		fmt.Fprintf(w, "  Fb %s  Ft %s  Fv %s  Fc_perp %s  Fc %s  E %s  Emin %s psi\n", fmtVal(v.FbPsi), fmtVal(v.FtPsi),
 			fmtVal(v.FvPsi), fmtVal(v.FcPerpPsi), fmtVal(v.FcPsi), fmtVal(v.EPsi), fmtVal(v.EminPsi))

@@ -428,7 +428,7 @@ func assumptions(o *outcome) export.Assumptions {
 	for k := range o.Results {
 		res := &o.Results[k]
 		v := res.Values
-		if v.Species == "" {
+		if v == nil || v.Species == "" {
 			continue
 		}
 		key := v.Species + "|" + v.Grade + "|" + res.Size
