@@ -51,8 +51,18 @@ func (f *dxfFacts) handles() bool { return f.modern() || f.HandSeed != "" }
 
 // scanDXF reads the drawing once and gathers dxfFacts; path names it in errors.
 func scanDXF(in io.Reader, path string) (*dxfFacts, error) {
+	return scanPairs(newPairReader(in, path))
+}
+
+// scanDXFBytes is scanDXF of a drawing in memory, read without a copy.
+func scanDXFBytes(data []byte, path string) (*dxfFacts, error) {
+	return scanPairs(newBytesPairReader(data, path))
+}
+
+// scanPairs finds the facts of the drawing pr reads.
+func scanPairs(pr *pairReader) (*dxfFacts, error) {
+	path := pr.file
 	facts := &dxfFacts{Layers: map[string]bool{}, EOL: "\n"}
-	pr := newPairReader(in, path)
 	var ctx dxfContext
 	var plan editPlan
 	var headerVar, recHandle, recName string
@@ -247,7 +257,7 @@ func ScanDrawing(input []byte, name string) *DrawingScan {
 	s := &DrawingScan{done: make(chan struct{}), input: input}
 	go func() {
 		defer close(s.done)
-		s.facts, s.err = scanDXF(bytes.NewReader(input), name)
+		s.facts, s.err = scanDXFBytes(input, name)
 	}()
 	return s
 }

@@ -72,3 +72,33 @@ func mustReadFile(t *testing.T, path string) []byte {
 	}
 	return b
 }
+
+// The pairs read from a drawing in memory, without a copy, are those read
+// through a reader (common practice, no source): every fixture, a file
+// ending without a newline, CR LF endings and a line longer than the
+// reader's buffer.
+func TestBytesPairReaderAsReader(t *testing.T) {
+	inputs := map[string][]byte{
+		"no final newline": []byte("  0\nSECTION\n  2\nENTITIES\n  0\nENDSEC\n  0\nEOF"),
+		"crlf":             []byte("  0\r\nSECTION\r\n  2\r\nHEADER\r\n  0\r\nENDSEC\r\n  0\r\nEOF\r\n"),
+		"long line":        []byte("  0\nSECTION\n  1\n" + string(bytes.Repeat([]byte("x"), 200_000)) + "\n  0\nEOF\n"),
+		"empty":            nil,
+		"odd":              []byte("  0\nSECTION\n  2\n"),
+	}
+	for _, f := range []string{"plan_r12.dxf", "plan_r2000.dxf", "plan_min_r12.dxf"} {
+		inputs[f] = mustReadFile(t, filepath.Join("testdata", f))
+	}
+	for name, in := range inputs {
+		a, b := newPairReader(bytes.NewReader(in), name), newBytesPairReader(in, name)
+		for i := 0; ; i++ {
+			pa, ea := a.next()
+			pb, eb := b.next()
+			if pa != pb || (ea == nil) != (eb == nil) || (ea != nil && ea.Error() != eb.Error()) {
+				t.Fatalf("%s: pair %d: %+v, %v from the reader; %+v, %v from memory", name, i, pa, ea, pb, eb)
+			}
+			if ea != nil {
+				break
+			}
+		}
+	}
+}

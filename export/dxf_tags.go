@@ -2,6 +2,7 @@ package export
 
 import (
 	"bufio"
+	"bytes"
 	"errors"
 	"fmt"
 	"io"
@@ -53,10 +54,20 @@ type pairReader struct {
 	line int
 	off  int64  // bytes read so far (the lines handed out)
 	text []byte // chunk the lines are copied into (see readLine)
+	// data, when mem is set, is the whole input in memory, never
+	// written to: lines are handed out as strings over it, without a copy
+	data []byte
+	mem  bool
 }
 
 func newPairReader(r io.Reader, file string) *pairReader {
 	return &pairReader{r: bufio.NewReaderSize(r, 1<<16), file: file}
+}
+
+// newBytesPairReader reads pairs from data, which must not change while
+// the pairs (or strings taken from them) are in use.
+func newBytesPairReader(data []byte, file string) *pairReader {
+	return &pairReader{data: data, mem: true, file: file}
 }
 
 // readLine returns the next line with its ending, or io.EOF when nothing
@@ -65,6 +76,19 @@ func newPairReader(r io.Reader, file string) *pairReader {
 // bytes once handed out are never written again (a full chunk is
 // replaced, not reused), so the strings stay immutable.
 func (p *pairReader) readLine() (string, error) {
+	if p.mem {
+		rest := p.data[p.off:]
+		if len(rest) == 0 {
+			return "", io.EOF
+		}
+		n := len(rest)
+		if i := bytes.IndexByte(rest, '\n'); i >= 0 {
+			n = i + 1
+		}
+		p.line++
+		p.off += int64(n)
+		return unsafe.String(&rest[0], n), nil
+	}
 	b, err := p.r.ReadSlice('\n')
 	if err == bufio.ErrBufferFull { // a line longer than the buffer
 		long := append([]byte(nil), b...)

@@ -75,16 +75,26 @@ func badGroups(o *outcome, r *export.Results, proj *project.Project) []badGroup 
 	if o == nil {
 		return groups
 	}
-	// Keyed on the check inputs (which carry the member ids): the plan's
-	// members are released before the writers run.
+	// Found among the check inputs (which carry the member ids): the
+	// plan's members are released before the writers run. Only the
+	// failing groups' worst members are looked for.
 	member := map[string]int{}
-	for k := range o.Inputs {
-		member[o.Inputs[k].ID] = k
+	for i := range groups {
+		if groups[i].Status == export.StatusFail {
+			member[groups[i].Worst] = -1
+		}
+	}
+	if len(member) > 0 {
+		for k := range o.Inputs {
+			if _, ok := member[o.Inputs[k].ID]; ok {
+				member[o.Inputs[k].ID] = k
+			}
+		}
 	}
 	for i := range groups {
 		g := &groups[i]
 		k, ok := member[g.Worst]
-		if g.Status != export.StatusFail || !ok {
+		if g.Status != export.StatusFail || !ok || k < 0 {
 			continue
 		}
 		g.Alternative, g.AlternativeRatio = lightestPassing(o.Inputs[k], o.Settings, proj.Sizing)
