@@ -212,18 +212,30 @@ type rowGroup struct{ items []int }
 func groupRows[K comparable](n, most int, key func(i int) (K, bool)) []rowGroup {
 	var groups []rowGroup
 	open := make(map[K]int)
+	// items alike mostly follow one another (the joints of a run on one
+	// beam): an item whose key is the one before's goes where that one
+	// went without looking its key up
+	var last K
+	lastG := -1
 	for i := 0; i < n; i++ {
 		k, ok := key(i)
 		if !ok {
 			groups = append(groups, rowGroup{items: []int{i}})
+			lastG = -1
 			continue
 		}
-		if g, ok := open[k]; ok && len(groups[g].items) < most {
+		g, found := lastG, lastG >= 0 && k == last
+		if !found {
+			g, found = open[k]
+		}
+		if found && len(groups[g].items) < most {
 			groups[g].items = append(groups[g].items, i)
-			continue
+		} else {
+			g = len(groups)
+			open[k] = g
+			groups = append(groups, rowGroup{items: []int{i}})
 		}
-		open[k] = len(groups)
-		groups = append(groups, rowGroup{items: []int{i}})
+		last, lastG = k, g
 	}
 	return groups
 }
@@ -272,13 +284,19 @@ func connectionGroups(cs []Connection) []rowGroup {
 		down, up float64
 	}
 	rounded := make(map[raw]connRowKey)
+	var lastRaw raw
+	var lastKey connRowKey
 	return groupRows(len(cs), connMembersPerRow, func(i int) (connRowKey, bool) {
 		c := &cs[i]
 		r := raw{c.Loads, c.DownLb, c.UpLb}
-		k, ok := rounded[r]
-		if !ok {
-			k = connKey(c)
-			rounded[r] = k
+		k := lastKey
+		if i == 0 || r != lastRaw {
+			var ok bool
+			if k, ok = rounded[r]; !ok {
+				k = connKey(c)
+				rounded[r] = k
+			}
+			lastRaw, lastKey = r, k
 		}
 		k.kind, k.carrier, k.bearing, k.downCombo, k.upCombo = c.Kind, c.Carrier, c.Bearing, c.DownCombo, c.UpCombo
 		return k, true // a NaN in the key never matches: a row of its own
