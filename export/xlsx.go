@@ -155,8 +155,13 @@ func SheetTitle(r *Results) [TitleRows]string {
 
 // styles holds the style ids: plain, in a failing row, and a ratio over 1.
 type styles struct {
-	title  [TitleRows]string // SheetTitle of the results
-	bold   int               // the first title row
+	title [TitleRows]string // SheetTitle of the results
+	// dims is each streamed sheet's used range ("A1:K20"), by sheet
+	// name, for its dimension element (spliceSheets): excelize's stream
+	// writer leaves "A1", and a reader that trusts the dimension (such as
+	// openpyxl's read-only mode) then sees one cell
+	dims   map[string]string
+	bold   int // the first title row
 	header int
 	plain  [nKinds]int
 	fail   [nKinds]int
@@ -165,7 +170,7 @@ type styles struct {
 }
 
 func newStyles(f *excelize.File) (*styles, error) {
-	var st styles
+	st := styles{dims: map[string]string{}}
 	var err error
 	if st.bold, err = f.NewStyle(&excelize.Style{Font: &excelize.Font{Bold: true, Size: 12}}); err != nil {
 		return nil, err
@@ -276,7 +281,8 @@ func (s *sheet) end() error {
 	return s.sw.SetRow(cell, s.cells)
 }
 
-// close sets the autofilter over the table and flushes the sheet.
+// close sets the autofilter over the table, records the sheet's used
+// range and flushes the sheet.
 func (s *sheet) close() error {
 	last, err := excelize.CoordinatesToCellName(s.ncols, max(s.row, HeaderRow+1))
 	if err != nil {
@@ -285,5 +291,10 @@ func (s *sheet) close() error {
 	if err := s.f.AutoFilter(s.name, "A"+strconv.Itoa(HeaderRow)+":"+last, nil); err != nil {
 		return err
 	}
+	used, err := excelize.CoordinatesToCellName(s.ncols, s.row)
+	if err != nil {
+		return err
+	}
+	s.st.dims[s.name] = "A1:" + used
 	return s.sw.Flush()
 }

@@ -61,11 +61,24 @@ func spliceSheets(w io.Writer, book []byte, st *styles, sheets []splicedSheet) e
 		}
 		byPart[part] = ss
 	}
+	// the other streamed sheets' dimensions, set to their used range
+	dimOf := map[string]string{}
+	for name, dim := range st.dims {
+		if part, ok := parts[name]; ok && byPart[part] == nil {
+			dimOf[part] = dim
+		}
+	}
 	zw := zip.NewWriter(w)
 	for _, f := range partOrder(zr.File) {
 		ss := byPart[f.Name]
 		if ss == nil {
-			if err := copyPart(zw, f); err != nil {
+			var err error
+			if dim, ok := dimOf[f.Name]; ok {
+				err = writeDimensionedPart(zw, f, dim)
+			} else {
+				err = copyPart(zw, f)
+			}
+			if err != nil {
 				return err
 			}
 			continue
@@ -198,6 +211,35 @@ func copyPart(zw *zip.Writer, f *zip.File) error {
 func fixTime(fh *zip.FileHeader) {
 	fh.Modified = time.Time{}
 	fh.ModifiedTime, fh.ModifiedDate = 0, 0
+}
+
+// writeDimensionedPart writes the sheet part f with its dimension set to
+// the range dim (ECMA-376 Part 1, 18.3.1.35), deflated afresh.
+func writeDimensionedPart(zw *zip.Writer, f *zip.File, dim string) error {
+	rc, err := f.Open()
+	if err != nil {
+		return err
+	}
+	data, err := io.ReadAll(rc)
+	rc.Close()
+	if err != nil {
+		return err
+	}
+	if !dimensionRE.Match(data) {
+		return fmt.Errorf("%s: no dimension element to set", f.Name)
+	}
+	data = dimensionRE.ReplaceAll(data, []byte(`<dimension ref="`+dim+`"/>`))
+	fh := f.FileHeader
+	fixTime(&fh)
+	fh.Method = zip.Deflate
+	fh.CompressedSize64, fh.UncompressedSize64, fh.CRC32 = 0, 0, 0
+	fh.CompressedSize, fh.UncompressedSize = 0, 0
+	out, err := zw.CreateHeader(&fh)
+	if err != nil {
+		return err
+	}
+	_, err = out.Write(data)
+	return err
 }
 
 // writeSplicedPart writes the sheet part f with ss's rows put in before
