@@ -269,6 +269,7 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		o.Issues = append(dxfimport.IssueList{{Pos: dxfimport.Pos{File: outputName(c.planPath)}, Code: CodeUnmatchedSupport,
 			Severity: dxfimport.SevWarning, Msg: msg}}, o.Issues...)
 	}
+	mappingGC(len(o.Plan.Members))
 	res := exportResults(o, c.planPath)
 	res.InputSHA256 = <-inputHash
 	// From here the writers read res, the plan's supports and zones and

@@ -5,6 +5,7 @@ import (
 	"os"
 	"runtime"
 	"runtime/debug"
+	"runtime/metrics"
 	"strconv"
 	"strings"
 )
@@ -150,6 +151,41 @@ func pauseGC() (resume func()) {
 // nothing when the user set GOGC.
 func loadPathGC(solved bool) {
 	if gcTuned && solved {
+		runtime.GC()
+	}
+}
+
+// mappingBytesPerMember is about what mapping one checked member for the
+// outputs allocates (its export record, location and source texts, uplift
+// lines): measured at 100,000 joists, 0.85 KB a member, rounded up.
+const mappingBytesPerMember = 1200
+
+// mappingGCMin is the least garbage, and the least the mapping must be
+// about to allocate, for mappingGC to collect.
+const mappingGCMin = 1 << 30
+
+// mappingGC collects before the checked members are mapped for the
+// outputs when the checks left at least mappingGCMin of garbage and the
+// mapping is about to allocate at least half as much: it then reuses the
+// freed memory instead of taking fresh pages from the system, which on
+// this project's machine kind costs more than the collection. Measured
+// on the bigplan drawings (2-vCPU VM): at 1,000,000 joists (1.5 GB of
+// garbage, 1.2 GB to map) peak 4.08 GiB and 19.6-22.7 s (system time
+// 8.4-13.2 s) without, 3.37-3.39 GiB and 17.3-22.0 s (5.3-10.5 s) with;
+// at 300,000 joists (0.45 GB of garbage) a collection there cost 0.2 s
+// for 210 MB, and at 100,000 none is made. Does nothing when the user set
+// GOGC.
+func mappingGC(members int) {
+	if !gcTuned {
+		return
+	}
+	sample := []metrics.Sample{{Name: "/memory/classes/heap/objects:bytes"}, {Name: "/gc/heap/live:bytes"}}
+	metrics.Read(sample)
+	if sample[0].Value.Kind() != metrics.KindUint64 || sample[1].Value.Kind() != metrics.KindUint64 {
+		return
+	}
+	objects, live := sample[0].Value.Uint64(), sample[1].Value.Uint64()
+	if objects > live && objects-live >= mappingGCMin && uint64(members)*mappingBytesPerMember >= mappingGCMin/2 {
 		runtime.GC()
 	}
 }
