@@ -213,15 +213,20 @@ func fixTime(fh *zip.FileHeader) {
 	fh.ModifiedTime, fh.ModifiedDate = 0, 0
 }
 
+// readPart returns the uncompressed bytes of the part f.
+func readPart(f *zip.File) ([]byte, error) {
+	rc, err := f.Open()
+	if err != nil {
+		return nil, err
+	}
+	defer rc.Close()
+	return io.ReadAll(rc)
+}
+
 // writeDimensionedPart writes the sheet part f with its dimension set to
 // the range dim (ECMA-376 Part 1, 18.3.1.35), deflated afresh.
 func writeDimensionedPart(zw *zip.Writer, f *zip.File, dim string) error {
-	rc, err := f.Open()
-	if err != nil {
-		return err
-	}
-	data, err := io.ReadAll(rc)
-	rc.Close()
+	data, err := readPart(f)
 	if err != nil {
 		return err
 	}
@@ -245,12 +250,7 @@ func writeDimensionedPart(zw *zip.Writer, f *zip.File, dim string) error {
 // writeSplicedPart writes the sheet part f with ss's rows put in before
 // </sheetData>.
 func writeSplicedPart(zw *zip.Writer, f *zip.File, st *styles, ss *splicedSheet) error {
-	rc, err := f.Open()
-	if err != nil {
-		return err
-	}
-	data, err := io.ReadAll(rc)
-	rc.Close()
+	data, err := readPart(f)
 	if err != nil {
 		return err
 	}
