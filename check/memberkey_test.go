@@ -2,6 +2,7 @@ package check
 
 import (
 	"fmt"
+	"math"
 	"reflect"
 	"testing"
 )
@@ -89,5 +90,58 @@ func TestAppendMemberKey(t *testing.T) {
 	}
 	if "prefix"+MemberKey(m) != want || m.ID != "M7" {
 		t.Errorf("MemberKey differs, or the ID was cleared")
+	}
+}
+
+// TestCompiledKeyAsReflection: the encoders compiled from Member's type
+// write, byte for byte, what the reflection walk (appendKey) writes of the
+// member with its ID cleared, and AppendMemberKeyUnnamed what it writes
+// of the member with its point loads' names cleared too, on members with
+// every slice filled, empty and nil; neither changes the member (common
+// practice, no source).
+func TestCompiledKeyAsReflection(t *testing.T) {
+	full := Member{ID: "B3", Size: "(3) 2x12", Species: "Douglas Fir-Larch", Grade: "No.2", LengthIn: 304,
+		Bearings: []Bearing{{AtIn: 0, LengthIn: 5.5, SupportSpecies: "Hem-Fir", SupportGrade: "No.1"},
+			{AtIn: 152, LengthIn: 5.5, Hanger: true, Beam: SupportBeam{Species: "Douglas Fir-Larch", Grade: "No.1", Size: "6x14", EndIn: 3}},
+			{AtIn: 304, LengthIn: 5.5}},
+		OverhangStartIn: negZero(), OverhangEndIn: 0.25, SpacingIn: 16, TribIn: 96, Use: "floor",
+		Loads:         AreaLoads{DeadPsf: 12, LivePsf: 40, WindUpPsf: -3, UpliftDeadPsf: 7.2, HasUpliftDead: true},
+		LoadPieces:    []LoadPiece{{FromIn: 0, ToIn: 100, Zone: "Z1", Loads: AreaLoads{SnowPsf: 30}}, {FromIn: 100, ToIn: 304, Zone: "Z2"}},
+		PointLoads:    []PointLoad{{AtIn: 16, DeadLb: 120.5, LiveLb: 400, Name: "M1"}, {AtIn: 32, WindUpLb: 80, UpliftDeadLb: 30, HasUpliftDead: true, Name: "M2"}},
+		SelfWeightPlf: 16.9, TopBracedAtPoints: true, TopBracingAtIn: []float64{16, 32}, LiveLimit: 360, TotalLimit: 240,
+		BottomBracedContinuous: true, BlockingAtIn: []float64{math.Inf(1), math.NaN()}, Repetitive: true, PitchRise12: 4, LongTermLimit: 240}
+	empty := full
+	empty.Bearings, empty.LoadPieces, empty.PointLoads, empty.TopBracingAtIn, empty.BlockingAtIn =
+		[]Bearing{}, []LoadPiece{}, []PointLoad{}, []float64{}, []float64{}
+	for _, m := range []Member{full, empty, {}, {ID: "only"}} {
+		before := fmt.Sprintf("%#v", m)
+		n := m
+		n.ID = ""
+		want := string(appendKey([]byte("p"), reflect.ValueOf(n)))
+		if got := string(AppendMemberKey([]byte("p"), &m)); got != want {
+			t.Errorf("%s: compiled key %q, reflection %q", m.ID, got, want)
+		}
+		n.PointLoads = append([]PointLoad(nil), m.PointLoads...)
+		for i := range n.PointLoads {
+			n.PointLoads[i].Name = ""
+		}
+		want = string(appendKey([]byte("p"), reflect.ValueOf(n)))
+		if got := string(AppendMemberKeyUnnamed([]byte("p"), &m)); got != want {
+			t.Errorf("%s: unnamed key %q, want %q", m.ID, got, want)
+		}
+		if after := fmt.Sprintf("%#v", m); after != before {
+			t.Errorf("keying changed the member: %s", after)
+		}
+	}
+	// the names are all the unnamed key leaves out
+	a, b := full, full
+	b.PointLoads = append([]PointLoad(nil), full.PointLoads...)
+	b.PointLoads[0].Name, b.PointLoads[1].Name = "J9", ""
+	if string(AppendMemberKeyUnnamed(nil, &a)) != string(AppendMemberKeyUnnamed(nil, &b)) {
+		t.Error("point loads differing in name only key apart")
+	}
+	b.PointLoads[1].DeadLb++
+	if string(AppendMemberKeyUnnamed(nil, &a)) == string(AppendMemberKeyUnnamed(nil, &b)) {
+		t.Error("point loads of different loads share a key")
 	}
 }

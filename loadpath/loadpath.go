@@ -20,14 +20,12 @@
 package loadpath
 
 import (
+	"encoding/binary"
 	"fmt"
-	"runtime"
+	"math"
 	"slices"
 	"sort"
-	"strconv"
 	"strings"
-	"sync"
-	"sync/atomic"
 
 	"framecheck/check"
 	"framecheck/internal/par"
@@ -173,6 +171,7 @@ func Solve(p *Plan, s check.Settings) *Outcome {
 	st := &solveState{p: p, s: s, o: o, order: order, incoming: make([][]check.PointLoad, len(p.Members)),
 		solved: map[string]*solvedMember{}, fedIn: make([]int, len(p.Members))}
 	o.Joints = make([]Joint, 0, countJoints(p))
+	st.sizeIncoming()
 	// The members in order, a batch at a time: a batch is a stretch of the
 	// order where none passes a load to another, so that their inputs are
 	// complete when it starts. Its inputs and its analyses run on every
@@ -237,7 +236,7 @@ func checkPosts(ps []PostIn, outs []PostOut, s check.Settings) {
 	}
 	cases := make([][]check.PostCase, len(caseKeys))
 	results := make([]check.PostResult, len(postKeys))
-	spread(len(caseKeys)+len(postKeys), func(t int) {
+	par.Each(len(caseKeys)+len(postKeys), func(t int) {
 		if t < len(caseKeys) {
 			cases[t] = check.LoadCases(caseKeys[t], s)
 		} else {
@@ -279,7 +278,7 @@ func countJoints(p *Plan) int {
 }
 
 // solvedMember is one analysis of a member, shared by the members alike
-// for design (solveKey).
+// for design (appendSolveKey).
 type solvedMember struct {
 	rep       int          // the member analysed: the first of them in the order
 	input     check.Member // as analysed: the size picked, its weight
@@ -295,7 +294,7 @@ type solveState struct {
 	o        *Outcome
 	order    []int
 	incoming [][]check.PointLoad      // the reactions passed to each member so far
-	solved   map[string]*solvedMember // by solveKey
+	solved   map[string]*solvedMember // by appendSolveKey
 	fedIn    []int                    // the batch that passes a load to each member (0: none yet)
 	// for the members of the batch, by position in the order from its
 	// start: how each is solved and, when analysed, its analysis
@@ -313,6 +312,30 @@ const (
 	howGiven                    // its check and reactions came with it
 	howAnalyse                  // analysed (or alike to a member analysed)
 )
+
+// sizeIncoming gives each member room for the reactions passed to it, one
+// per bearing of another member on it, in one array: passing them on
+// appends without growing.
+func (st *solveState) sizeIncoming() {
+	n := make([]int, len(st.p.Members))
+	total := 0
+	for i := range st.p.Members {
+		for _, c := range st.p.Members[i].Carriers {
+			if c.Kind == Member && c.Index >= 0 && c.Index < len(n) {
+				n[c.Index]++
+				total++
+			}
+		}
+	}
+	all := make([]check.PointLoad, total)
+	off := 0
+	for k, c := range n {
+		if c > 0 {
+			st.incoming[k] = all[off : off : off+c]
+			off += c
+		}
+	}
+}
 
 // batchEnd returns where the batch starting at order[lo] ends: before the
 // first member that a member of the batch passes a load to.
@@ -341,6 +364,7 @@ func (st *solveState) prepare(lo, hi int) {
 	st.keys = slices.Grow(st.keys[:0], n)[:n]
 	st.sv = slices.Grow(st.sv[:0], n)[:n]
 	par.Ranges(n, func(a, b int) {
+		var key []byte
 		for x := a; x < b; x++ {
 			i := lo + x
 			k := st.order[i]
@@ -367,7 +391,8 @@ func (st *solveState) prepare(lo, hi int) {
 				st.how[x] = howMismatch
 			default:
 				st.how[x] = howAnalyse
-				st.keys[x] = solveKey(out.Input, mi)
+				key = appendSolveKey(key[:0], &out.Input, mi)
+				st.keys[x] = string(key)
 			}
 		}
 	})
@@ -392,7 +417,7 @@ func (st *solveState) analyse(lo, hi int) {
 		}
 		st.sv[x] = sv
 	}
-	spread(len(st.todo), func(t int) {
+	par.Each(len(st.todo), func(t int) {
 		sv := st.todo[t]
 		mi := &st.p.Members[sv.rep]
 		cm := st.o.Members[sv.rep].Input
@@ -463,45 +488,18 @@ func (st *solveState) pass(i, x int) {
 	}
 }
 
-// spread calls fn(i) for every i in [0, n) on every core, handing the
-// indexes out one at a time (analyses differ in cost: a beam sized from
-// candidates is checked once per size tried). fn must write only what
-// belongs to index i.
-func spread(n int, fn func(i int)) {
-	workers := min(runtime.GOMAXPROCS(0), n)
-	if workers <= 1 {
-		for i := 0; i < n; i++ {
-			fn(i)
-		}
-		return
+// appendSolveKey appends to b what makes two members alike for Solve: the
+// check input but for the ID and the names of the point loads (which
+// member put them there: the analysis does not read them), with the
+// candidate sizes and the density that weighs them.
+func appendSolveKey(b []byte, cm *check.Member, mi *MemberIn) []byte {
+	b = check.AppendMemberKeyUnnamed(b, cm)
+	b = binary.AppendUvarint(b, uint64(len(mi.Candidates)))
+	for _, c := range mi.Candidates {
+		b = binary.AppendUvarint(b, uint64(len(c)))
+		b = append(b, c...)
 	}
-	var next atomic.Int64
-	var wg sync.WaitGroup
-	for w := 0; w < workers; w++ {
-		wg.Add(1)
-		go func() {
-			defer wg.Done()
-			for i := int(next.Add(1)) - 1; i < n; i = int(next.Add(1)) - 1 {
-				fn(i)
-			}
-		}()
-	}
-	wg.Wait()
-}
-
-// solveKey is what makes two members alike for Solve: the check input but
-// for the ID and the names of the point loads (which member put them
-// there: the analysis does not read them), with the candidate sizes.
-func solveKey(cm check.Member, mi *MemberIn) string {
-	if len(cm.PointLoads) > 0 {
-		pls := make([]check.PointLoad, len(cm.PointLoads))
-		copy(pls, cm.PointLoads)
-		for i := range pls {
-			pls[i].Name = ""
-		}
-		cm.PointLoads = pls
-	}
-	return check.MemberKey(cm) + "|" + strings.Join(mi.Candidates, "|") + "|" + strconv.FormatFloat(mi.DensityPcf, 'g', -1, 64)
+	return binary.LittleEndian.AppendUint64(b, math.Float64bits(mi.DensityPcf))
 }
 
 // pickSize returns cm with the first of mi's candidate sizes with which it

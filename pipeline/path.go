@@ -265,12 +265,13 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 	}
 	softBeamBearings(o)
 	// Which joists go on the path, in the plan's order, and their
-	// reactions (one analysis per key); then their items, on every core.
-	reactions := map[string][]check.LoadReactions{}
-	onPath := make([]int, 0, len(plan.Members))
-	rsOf := make([][]check.LoadReactions, len(plan.Members))
-	nCarriers := 0
+	// reactions: one analysis per key, on every core; then their items,
+	// on every core.
+	keyIdx := map[string]int{}
+	var reps []int                          // the first member of each key
+	keyOf := make([]int, len(plan.Members)) // index into reps, -1 off the path
 	for k := range plan.Members {
+		keyOf[k] = -1
 		if !usable[k] || o.Results[k].Status == check.StatusError {
 			if carriedBy.any(k) {
 				o.Issues.Add(plan.Members[k].Pos, CodeLoadLost, dxfimport.SevWarning,
@@ -284,18 +285,30 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 			cm.Size = o.Results[k].Size
 			key = check.MemberKey(cm)
 		}
-		rs, ok := reactions[key]
+		i, ok := keyIdx[key]
 		if !ok {
-			cm := inputs[k]
-			cm.Size = o.Results[k].Size
-			var err error
-			rs, err = check.ServiceReactions(cm, s)
-			if err != nil {
-				continue
-			}
-			reactions[key] = rs
+			i = len(reps)
+			keyIdx[key] = i
+			reps = append(reps, k)
 		}
-		rsOf[k] = rs
+		keyOf[k] = i
+	}
+	keyRs := make([][]check.LoadReactions, len(reps))
+	keyOK := make([]bool, len(reps))
+	par.Each(len(reps), func(i int) {
+		cm := inputs[reps[i]]
+		cm.Size = o.Results[reps[i]].Size
+		rs, err := check.ServiceReactions(cm, s)
+		keyRs[i], keyOK[i] = rs, err == nil
+	})
+	onPath := make([]int, 0, len(plan.Members))
+	rsOf := make([][]check.LoadReactions, len(plan.Members))
+	nCarriers := 0
+	for k, i := range keyOf {
+		if i < 0 || !keyOK[i] {
+			continue // a member whose reactions cannot be found stays off the path
+		}
+		rsOf[k] = keyRs[i]
 		onPath = append(onPath, k)
 		nCarriers += len(plan.Members[k].Bearings)
 	}
