@@ -23,7 +23,7 @@ var squareSin = math.Cos(math.Pi / 180)
 // against the beam's own Fc_perp' as well as its own, the smaller
 // governing (NDS 2018 3.10.2; check.SupportBeam says how each is
 // adjusted). The beam's material is known here: it comes from its callout
-// or its [[support]] table (beamInput), not from the load path's solution.
+// or its [[support]] table (beamInput, ins), not from the load path's solution.
 // On such a bearing the beam's material replaces [[support]] species and
 // grade, which for a sawn beam are its material already and which a
 // glulam or SCL beam's own check does not use.
@@ -39,13 +39,13 @@ var squareSin = math.Cos(math.Pi / 180)
 // another Fc_perp), warning CHK313 names the beam and the joists, whose
 // bearing was checked against their own Fc_perp only. The warnings are
 // kept in o and reported with the load path's findings (softBeamBearings).
-func beamBearings(p *project.Project, plan *framing.Plan, inputs []check.Member, usable []bool, s check.Settings, sizing bool, o *Outcome) {
+func beamBearings(p *project.Project, plan *framing.Plan, ins []beamIn, inputs []check.Member, usable []bool, s check.Settings, sizing bool, o *Outcome) {
 	for i := range plan.Beams {
 		b := &plan.Beams[i]
 		if b.Rigid || len(b.Carried) == 0 {
 			continue // a rigid bearing is no beam of the load path
 		}
-		cm, _, reason := beamInput(p, plan, b)
+		cm, reason := ins[i].cm, ins[i].msg
 		if reason != "" {
 			reason = "it cannot be checked, " + CodeBeamNotChecked + " says why"
 		} else {

@@ -126,7 +126,7 @@ func HasLoadPath(plan *framing.Plan) bool {
 //
 // With sizing (--size), each beam takes the lightest of [sizing]
 // beam_candidates with which it passes, its own weight following the size.
-func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, keys []string, usable []bool, s check.Settings, o *Outcome, sizing bool) {
+func runLoadPath(p *project.Project, plan *framing.Plan, ins []beamIn, inputs []check.Member, keys []string, usable []bool, s check.Settings, o *Outcome, sizing bool) {
 	if !HasLoadPath(plan) {
 		return // no beam with supports of its own, no post: every support is a rigid bearing
 	}
@@ -155,21 +155,6 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 	outIndex := beamOutcomeIndexes(plan) // plan beam -> index into po.Beams
 	po.Beams = make([]BeamOutcome, 0, len(plan.Beams))
 	po.IDs = make([]string, 0, cap(lp.Members))
-	// beamInput reads the plan and the project only: each range writes
-	// its own beams' inputs
-	type beamIn struct {
-		cm    check.Member
-		shift float64
-		msg   string
-	}
-	ins := make([]beamIn, len(plan.Beams))
-	par.Ranges(len(plan.Beams), func(lo, hi int) {
-		for i := lo; i < hi; i++ {
-			if !plan.Beams[i].Rigid {
-				ins[i].cm, ins[i].shift, ins[i].msg = beamInput(p, plan, &plan.Beams[i])
-			}
-		}
-	})
 	for i := range plan.Beams {
 		b := &plan.Beams[i]
 		beamMember[i] = -1
@@ -389,6 +374,31 @@ func runLoadPath(p *project.Project, plan *framing.Plan, inputs []check.Member, 
 	}
 	po.Joints = solved.Joints
 	o.Path = po
+}
+
+// beamIn is a plan beam's check input as beamInput builds it: the input,
+// the shift of its positions, and why it cannot be checked ("" when it
+// can).
+type beamIn struct {
+	cm    check.Member
+	shift float64
+	msg   string
+}
+
+// beamInputs returns the check input of each plan beam that is not a
+// rigid bearing, on every core (beamInput reads the plan and the project
+// only: each range writes its own beams' inputs). The joists' bearings on
+// the beams (beamBearings) and the load path read them.
+func beamInputs(p *project.Project, plan *framing.Plan) []beamIn {
+	ins := make([]beamIn, len(plan.Beams))
+	par.Ranges(len(plan.Beams), func(lo, hi int) {
+		for i := lo; i < hi; i++ {
+			if !plan.Beams[i].Rigid {
+				ins[i].cm, ins[i].shift, ins[i].msg = beamInput(p, plan, &plan.Beams[i])
+			}
+		}
+	})
+	return ins
 }
 
 // beamOutcomeIndexes returns, for each plan beam, its index into

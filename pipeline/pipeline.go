@@ -120,23 +120,24 @@ func Settings(p *project.Project) (check.Settings, error) {
 // run, names marks, counts the takeoff and follows the load path. A
 // returned error means the project's design settings are unusable.
 func Run(in Input) (*Outcome, error) {
-	o, inputs, keys, usable, err := runMembers(in)
+	o, beams, inputs, keys, usable, err := runMembers(in)
 	if err != nil {
 		return nil, err
 	}
-	runLoadPath(in.Project, in.Plan, inputs, keys, usable, o.Settings, o, in.Size)
+	runLoadPath(in.Project, in.Plan, beams, inputs, keys, usable, o.Settings, o, in.Size)
 	return o, nil
 }
 
 // runMembers is Run but for the load path: the members' inputs and
 // checks, sizing, blocking rows, marks and takeoff. It returns what the
-// load path reads besides the outcome: each member's check input, its key
-// (checkAll's) and whether it could be checked.
-func runMembers(in Input) (o *Outcome, inputs []check.Member, keys []string, usable []bool, err error) {
+// load path reads besides the outcome: each beam's check input
+// (beamInputs), each member's check input, its key (checkAll's) and
+// whether it could be checked.
+func runMembers(in Input) (o *Outcome, beams []beamIn, inputs []check.Member, keys []string, usable []bool, err error) {
 	p := in.Project
 	settings, err := Settings(p)
 	if err != nil {
-		return nil, nil, nil, nil, err
+		return nil, nil, nil, nil, nil, err
 	}
 	plan := in.Plan
 	o = &Outcome{Project: p, Plan: plan, Settings: settings, Issues: in.Issues, PlanFile: in.PlanFile}
@@ -167,7 +168,8 @@ func runMembers(in Input) (o *Outcome, inputs []check.Member, keys []string, usa
 	if in.Size {
 		o.Sizing = make([]*check.SizingResult, len(plan.Members))
 	}
-	beamBearings(p, plan, inputs, usable, settings, in.Size, o)
+	beams = beamInputs(p, plan)
+	beamBearings(p, plan, beams, inputs, usable, settings, in.Size, o)
 	keys = checkAll(inputs, shifts, usable, settings, p, o)
 	if in.Size {
 		sizeRuns(sameDepthGroups(plan, p.Sizing.SameDepth), inputs, shifts, usable, settings, o)
@@ -201,7 +203,7 @@ func runMembers(in Input) (o *Outcome, inputs []check.Member, keys []string, usa
 		o.Rows[i].Size = plan.Members[plan.Runs[runs[o.Rows[i].Run]].Members[0]].Size
 	}
 	o.Takeoff = framing.BuildTakeoff(plan, o.Rows)
-	return o, inputs, keys, usable, nil
+	return o, beams, inputs, keys, usable, nil
 }
 
 // RunIndexes maps each run's ID to its index in plan.Runs (a run not
