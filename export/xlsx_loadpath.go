@@ -63,14 +63,14 @@ func loadPathSheets(lp *LoadPath) []splicedSheet {
 	}
 }
 
-// writeLoadPathSheets writes the Beams, Posts, Connections and Foundation
-// sheets (loadPathSheets; none without a load path): each sheet's
-// columns, title and header rows, frozen pane and an autofilter over all
-// its rows. With stream set
-// excelize's stream writer writes the rows too, cell by cell (the
-// reference the tests hold the spliced rows to); otherwise spliceSheets
-// adds them to the sheets' parts.
-func writeLoadPathSheets(f *excelize.File, st *styles, sheets []splicedSheet, stream bool) error {
+// writeSplicedSheets writes sheets (the Uplift sheet, the Beams, Posts,
+// Connections and Foundation sheets of loadPathSheets; none without a
+// load path): each sheet's columns, title and header rows, frozen pane and
+// an autofilter over all its rows. With stream set excelize's stream
+// writer writes the rows too, cell by cell (the reference the tests hold
+// the spliced rows to); otherwise spliceSheets adds them to the sheets'
+// parts.
+func writeSplicedSheets(f *excelize.File, st *styles, sheets []splicedSheet, stream bool) error {
 	for _, ss := range sheets {
 		s, err := newSheet(f, st, ss.name, ss.cols)
 		if err != nil {

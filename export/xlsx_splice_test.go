@@ -92,6 +92,11 @@ func TestSplicedSheetsMatchExcelize(t *testing.T) {
 	r := bigResults(3000)
 	r.Members[1].Layer = "  JOIST & <LOFT>  "
 	r.LoadPath = bigLoadPath(300, 700, 2*rowsPerBlock+7, 50)
+	r.Uplift = bigUplift(2*rowsPerBlock + 40)
+	uplifts := len(UpliftLines(r.Uplift.Bearings))
+	if uplifts <= rowsPerBlock {
+		t.Fatalf("%d uplift lines: too few to fill two blocks", uplifts)
+	}
 	dir := t.TempDir()
 	spliced, stream := filepath.Join(dir, "spliced.xlsx"), filepath.Join(dir, "stream.xlsx")
 	if err := writeXLSX(spliced, r, false); err != nil {
@@ -101,7 +106,7 @@ func TestSplicedSheetsMatchExcelize(t *testing.T) {
 		t.Fatal(err)
 	}
 	gotParts, wantParts := zipParts(t, spliced), zipParts(t, stream)
-	sheets := append([]string{SheetMembers}, LoadPathSheetNames...)
+	sheets := append([]string{SheetMembers, SheetUplift}, LoadPathSheetNames...)
 	zr, err := zip.OpenReader(spliced)
 	if err != nil {
 		t.Fatal(err)
@@ -146,9 +151,10 @@ func TestSplicedSheetsMatchExcelize(t *testing.T) {
 	defer want.Close()
 	lp := r.LoadPath
 	counts := map[string]int{SheetMembers: len(r.Members), SheetBeams: len(lp.Beams), SheetPosts: len(postGroups(lp.Posts)),
-		SheetConnections: len(connectionGroups(lp.Connections)), SheetFoundation: len(foundationGroups(lp.Foundation))}
+		SheetConnections: len(connectionGroups(lp.Connections)), SheetFoundation: len(foundationGroups(lp.Foundation)),
+		SheetUplift: uplifts}
 	widths := map[string]int{SheetMembers: len(membersColumns), SheetBeams: len(beamColumns), SheetPosts: len(postColumns),
-		SheetConnections: len(connectionColumns), SheetFoundation: len(foundationColumns)}
+		SheetConnections: len(connectionColumns), SheetFoundation: len(foundationColumns), SheetUplift: len(upliftColumns)}
 	for _, sheet := range sheets {
 		lastCol, _ := excelize.ColumnNumberToName(widths[sheet])
 		dim := fmt.Sprintf(`<dimension ref="A1:%s%d"/>`, lastCol, HeaderRow+counts[sheet])
@@ -206,6 +212,54 @@ func TestSplicedSheetsMatchExcelize(t *testing.T) {
 	}
 	if v, _ := got.GetCellValue(SheetBeams, "A4"); v != "B1" {
 		t.Errorf("Beams!A4 %q, want B1", v)
+	}
+}
+
+// bigUplift returns uplift at two bearings of each of n members, on n
+// support lines (every second bearing below the report threshold), with
+// text to escape in the names (common practice, no source).
+func bigUplift(n int) UpliftReport {
+	u := UpliftReport{ReportLb: 100}
+	for i := range n {
+		for j := 1; j <= 2; j++ {
+			u.Bearings = append(u.Bearings, UpliftBearing{Member: fmt.Sprintf("M%d", i+1), Bearing: j,
+				Support: fmt.Sprintf("WALL <&> handle %X", 0x200+(i+j)%n), SupportKind: "bearing-wall",
+				UpliftLb: float64(50 + 97*j + i%300), Combo: "0.6D+0.6W(up)", CD: 1.6})
+		}
+	}
+	return u
+}
+
+// TestUpliftSheetNone: with no uplift the Uplift sheet's one row says so,
+// spliced as excelize writes it (common practice, no source).
+func TestUpliftSheetNone(t *testing.T) {
+	r := bigResults(20)
+	dir := t.TempDir()
+	spliced, stream := filepath.Join(dir, "spliced.xlsx"), filepath.Join(dir, "stream.xlsx")
+	if err := writeXLSX(spliced, r, false); err != nil {
+		t.Fatal(err)
+	}
+	if err := writeXLSX(stream, r, true); err != nil {
+		t.Fatal(err)
+	}
+	var rows [2][][]string
+	for i, path := range []string{spliced, stream} {
+		f, err := excelize.OpenFile(path)
+		if err != nil {
+			t.Fatal(err)
+		}
+		rows[i], err = f.GetRows(SheetUplift)
+		f.Close()
+		if err != nil {
+			t.Fatal(err)
+		}
+	}
+	if fmt.Sprint(rows[0]) != fmt.Sprint(rows[1]) {
+		t.Errorf("spliced %q, reference %q", rows[0], rows[1])
+	}
+	if len(rows[0]) != HeaderRow+1 || rows[0][HeaderRow][0] != "none" ||
+		!strings.HasPrefix(rows[0][HeaderRow][len(upliftColumns)-1], "No bearing has a net uplift") {
+		t.Errorf("rows %q, want the header and one row saying none", rows[0])
 	}
 }
 

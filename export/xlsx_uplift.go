@@ -1,11 +1,10 @@
 package export
 
 import (
-	"framecheck/export/internal/fmtx"
 	"strconv"
 	"strings"
 
-	"github.com/xuri/excelize/v2"
+	"framecheck/export/internal/fmtx"
 )
 
 // upliftColumns are the Uplift sheet's columns: one row per support line.
@@ -20,55 +19,52 @@ var upliftColumns = []column{
 // lists before "and N more".
 const upliftMembersShown = 30
 
-// writeUpliftSheet writes the Uplift sheet: the bearings under net uplift
-// grouped by the support line they bear on, each line with the count of
-// such bearings, how many are flagged, the largest and the total uplift,
-// and the connector capacity each bearing needs: the largest uplift at ASD
+// upliftSheet is the Uplift sheet: the bearings under net uplift grouped
+// by the support line they bear on, each line with the count of such
+// bearings, how many are flagged, the largest and the total uplift, and
+// the connector capacity each bearing needs: the largest uplift at ASD
 // level, to be met by a connector's allowable load for the combination's
 // load duration (CD = 1.6 for wind, NDS 2018 Table 2.3.2). No product is
 // named: the tool states the demand, the designer picks the part. A line
 // whose uplift is all below the report threshold is listed without a
-// required capacity.
-func writeUpliftSheet(f *excelize.File, st *styles, r *Results) error {
-	s, err := newSheet(f, st, SheetUplift, upliftColumns)
-	if err != nil {
-		return err
-	}
+// required capacity; with no uplift at all, one row says so. Its rows are
+// spliced in (spliceSheets), as the Members sheet's are.
+func upliftSheet(r *Results) splicedSheet {
 	lines := UpliftLines(r.Uplift.Bearings)
+	ss := splicedSheet{name: SheetUplift, cols: upliftColumns, rows: len(lines),
+		row: func(s *rowCells, i int) { upliftSheetRow(s, &lines[i], r.Uplift.ReportLb) }}
 	if len(lines) == 0 {
-		s.begin(false)
-		s.text("none")
-		for i := 1; i < len(upliftColumns)-1; i++ {
-			s.text("")
-		}
-		s.text("No bearing has a net uplift reaction under any load combination.")
-		if err := s.end(); err != nil {
-			return err
-		}
-		return s.close()
-	}
-	for _, l := range lines {
-		s.begin(false)
-		s.text(l.Support)
-		s.text(l.Kind)
-		s.integer(l.Count)
-		s.integer(l.Flagged)
-		s.num(l.MaxLb, cLb)
-		s.num(l.TotalLb, cLb)
-		if l.Flagged > 0 {
-			s.num(DemandLb(l.MaxLb), cLb) // a demand: up to the next pound
-		} else {
-			s.text("")
-		}
-		s.num(l.CD, cRatio)
-		s.text(fmtx.Combo(l.Combo))
-		s.text(memberList(l.Members))
-		s.text(upliftNote(l, r.Uplift.ReportLb))
-		if err := s.end(); err != nil {
-			return err
+		ss.rows = 1
+		ss.row = func(s *rowCells, _ int) {
+			s.begin(false)
+			s.text("none")
+			for i := 1; i < len(upliftColumns)-1; i++ {
+				s.text("")
+			}
+			s.text("No bearing has a net uplift reaction under any load combination.")
 		}
 	}
-	return s.close()
+	return ss
+}
+
+// upliftSheetRow fills s with support line l's cells, in upliftColumns order.
+func upliftSheetRow(s *rowCells, l *UpliftLine, reportLb float64) {
+	s.begin(false)
+	s.text(l.Support)
+	s.text(l.Kind)
+	s.integer(l.Count)
+	s.integer(l.Flagged)
+	s.num(l.MaxLb, cLb)
+	s.num(l.TotalLb, cLb)
+	if l.Flagged > 0 {
+		s.num(DemandLb(l.MaxLb), cLb) // a demand: up to the next pound
+	} else {
+		s.text("")
+	}
+	s.num(l.CD, cRatio)
+	s.text(fmtx.Combo(l.Combo))
+	s.text(memberList(l.Members))
+	s.text(upliftNote(*l, reportLb))
 }
 
 // upliftNote says what a support line's row asks of the designer.
