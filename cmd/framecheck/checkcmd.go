@@ -239,10 +239,11 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitUsage
 	}
+	collected := false // by loadPathGC, before the mapping
 	if o.Path != nil {
 		// the load path's outputs follow its beams, posts and joints
 		scaleMemoryLimit(int64(len(data)), len(o.Path.Beams)+len(o.Path.Posts)+len(o.Path.Joints))
-		loadPathGC(o.Path.Solved != nil && len(o.Path.Beams)+len(o.Path.Posts) > 0)
+		collected = loadPathGC(o.Path.Solved != nil && len(o.Path.Beams)+len(o.Path.Posts) > 0)
 	}
 	if o.MarksFresh {
 		fmt.Fprintf(stderr, "framecheck: none of the %d marks kept in %s is on this plan: the marks are named afresh from J1\n",
@@ -288,7 +289,7 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	// and the inputs dropped before the writers run.
 	c.bad = badGroups(o, res, proj)
 	o.Inputs = nil
-	defer writersGC()()
+	defer writersGC(!collected)()
 	written, err := c.write(o, res, proj, stderr)
 	if err != nil {
 		// Every failure to write is one of the machine (a full disk, a

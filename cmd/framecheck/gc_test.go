@@ -52,7 +52,7 @@ func TestWritersGC(t *testing.T) {
 	old := debug.SetGCPercent(gcPercent)
 	defer debug.SetGCPercent(old)
 	gcTuned = true
-	restore := writersGC()
+	restore := writersGC(true)
 	if got := debug.SetGCPercent(writersGCPercent); got != writersGCPercent {
 		t.Errorf("during the writers: GOGC %d, want %d", got, writersGCPercent)
 	}
@@ -62,7 +62,7 @@ func TestWritersGC(t *testing.T) {
 	}
 	gcTuned = false
 	debug.SetGCPercent(123)
-	writersGC()()
+	writersGC(false)()
 	if got := debug.SetGCPercent(gcPercent); got != 123 {
 		t.Errorf("GOGC set by the user: changed to %d", got)
 	}
