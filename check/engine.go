@@ -73,6 +73,13 @@ type engine struct {
 	ptsBuf  []float64  // reused by braces
 	rowsBuf []float64  // reused by spanRows
 	patBuf  []uint32   // reused by patterns
+
+	// the cuts of the beam model for its load pieces and point loads at
+	// the places cutPts (solve; haveCuts false: none yet)
+	cuts     []float64
+	cutPts   []float64
+	haveCuts bool
+	partBuf  []beam.PartialLoad // reused by solve
 }
 
 // strengthCase is one combination case (one alternative, one wind
@@ -109,7 +116,8 @@ func (e *engine) release() {
 // analysis. On error the returned engine holds what was found so far.
 func newEngine(m Member, s Settings) (*engine, error) {
 	e := enginePool.Get().(*engine)
-	*e = engine{m: m, s: s, cases: e.cases[:0], spanSegs: e.spanSegs[:0], mps: e.mps[:0], lps: e.lps[:0], pls: e.pls[:0], wAll: e.wAll[:0], sup: e.sup[:0], ivBuf: e.ivBuf[:0], ptsBuf: e.ptsBuf[:0], rowsBuf: e.rowsBuf[:0], patBuf: e.patBuf[:0], comboCDs: e.comboCDs[:0], names: e.names, svc: strengthCase{w: e.svc.w[:0], pts: e.svc.pts[:0], r: e.svc.r}}
+	*e = engine{m: m, s: s, cases: e.cases[:0], spanSegs: e.spanSegs[:0], mps: e.mps[:0], lps: e.lps[:0], pls: e.pls[:0], wAll: e.wAll[:0], sup: e.sup[:0], ivBuf: e.ivBuf[:0], ptsBuf: e.ptsBuf[:0], rowsBuf: e.rowsBuf[:0], patBuf: e.patBuf[:0], comboCDs: e.comboCDs[:0], names: e.names, svc: strengthCase{w: e.svc.w[:0], pts: e.svc.pts[:0], r: e.svc.r},
+		cuts: e.cuts[:0], cutPts: e.cutPts[:0], partBuf: e.partBuf[:0]}
 	if err := s.validate(); err != nil {
 		return e, err
 	}

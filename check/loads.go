@@ -221,11 +221,40 @@ func (e *engine) solve(r *beam.Response, w []float64, pts []beam.PointLoad) erro
 	if !e.general {
 		return e.bm.SolveInto(r, w)
 	}
-	l := beam.Loads{Partial: make([]beam.PartialLoad, len(e.lps)), Points: pts}
+	e.partBuf = e.partBuf[:0]
 	for k, lp := range e.lps {
-		l.Partial[k] = beam.PartialLoad{FromIn: lp.a, ToIn: lp.b, WPli: w[k]}
+		e.partBuf = append(e.partBuf, beam.PartialLoad{FromIn: lp.a, ToIn: lp.b, WPli: w[k]})
 	}
-	return e.bm.SolveLoadsInto(r, l)
+	l := beam.Loads{Partial: e.partBuf, Points: pts}
+	// Every case of the member loads the same stretches and points (the
+	// model's load pieces and point loads): the beam is cut at them once.
+	if !e.cutsFor(pts) {
+		cuts, err := e.bm.Cuts(l)
+		if err != nil {
+			return e.bm.SolveLoadsInto(r, l) // which says why
+		}
+		e.cuts = append(e.cuts[:0], cuts...)
+		e.cutPts = e.cutPts[:0]
+		for _, p := range pts {
+			e.cutPts = append(e.cutPts, p.AtIn)
+		}
+		e.haveCuts = true
+	}
+	return e.bm.SolveLoadsCutInto(r, l, e.cuts)
+}
+
+// cutsFor reports whether e.cuts are the cuts of a load set of the
+// model's load pieces and point loads at the places of pts.
+func (e *engine) cutsFor(pts []beam.PointLoad) bool {
+	if !e.haveCuts || len(pts) != len(e.cutPts) {
+		return false
+	}
+	for i, p := range pts {
+		if p.AtIn != e.cutPts[i] {
+			return false
+		}
+	}
+	return true
 }
 
 // loadOn returns the total downward load of case c on the model between

@@ -67,6 +67,42 @@ func (b Beam) SolveLoadsInto(r *Response, l Loads) error {
 	return nil
 }
 
+// Cuts returns the points SolveLoads cuts the beam at for a load set at
+// the positions of l (the cuts do not depend on the loads' magnitudes),
+// or an error when the beam or l is invalid. A caller solving many load
+// sets at the same positions (the load cases of one member) finds them
+// once and hands them to SolveLoadsCutInto.
+func (b Beam) Cuts(l Loads) ([]float64, error) {
+	if err := b.Validate(); err != nil {
+		return nil, err
+	}
+	if err := b.checkGeneral(l); err != nil {
+		return nil, err
+	}
+	return b.cuts(l), nil
+}
+
+// SolveLoadsCutInto is SolveLoadsInto with the cuts given: cuts must be
+// what Cuts returns for a load set whose partial loads span the same
+// stretches and whose point loads sit at the same places as l's (which
+// is not checked), and is not changed.
+func (b Beam) SolveLoadsCutInto(r *Response, l Loads, cuts []float64) error {
+	if err := b.Validate(); err != nil {
+		r.reset(0, 0)
+		return err
+	}
+	if err := b.checkGeneral(l); err != nil {
+		r.reset(0, 0)
+		return err
+	}
+	r.reset(len(cuts)-1, len(b.SupportsAtIn))
+	if err := b.fillGeneral(r, cuts, l); err != nil {
+		r.reset(0, 0)
+		return err
+	}
+	return nil
+}
+
 // tolPos is how far, as a fraction of the beam length, a load position may
 // lie outside the beam (rounding of a caller's coordinates), and how close
 // two cut points must be to count as one.

@@ -308,3 +308,62 @@ func TestTwoSpansPartialLoadOneSpan(t *testing.T) {
 	near(t, "Mmax", mp, 49*w*l*l/512, tolExact, w*l*l, src)
 	near(t, "x of Mmax", xp, 7*l/16, tolExact, l, src)
 }
+
+// TestSolveLoadsCutAsSolveLoads: solving with the cuts found once (Cuts,
+// SolveLoadsCutInto) gives, value for value, what SolveLoads gives for
+// every load set at the same positions, on random beams and loads (common
+// practice, no source: the two paths run the same arithmetic).
+func TestSolveLoadsCutAsSolveLoads(t *testing.T) {
+	rng := newRand(91, 5)
+	for trial := range 300 {
+		b, _ := randomBeam(rng, 5)
+		var l Loads
+		for range rng.IntN(4) {
+			a, c := rng.Float64()*b.LengthIn, rng.Float64()*b.LengthIn
+			l.Partial = append(l.Partial, PartialLoad{FromIn: min(a, c), ToIn: max(a, c)})
+		}
+		for range rng.IntN(30) {
+			at := rng.Float64() * b.LengthIn
+			if rng.IntN(5) == 0 {
+				at = b.SupportsAtIn[rng.IntN(len(b.SupportsAtIn))] // on a support
+			}
+			l.Points = append(l.Points, PointLoad{AtIn: at})
+		}
+		cuts, err := b.Cuts(l)
+		if err != nil {
+			t.Fatalf("trial %d: %v", trial, err)
+		}
+		var got Response
+		for range 3 {
+			for i := range l.Partial {
+				l.Partial[i].WPli = -20 + 40*rng.Float64()
+			}
+			for i := range l.Points {
+				l.Points[i].PLb = -2000 + 4000*rng.Float64()
+			}
+			want, err := b.SolveLoads(l)
+			if err != nil {
+				t.Fatalf("trial %d: %v", trial, err)
+			}
+			if err := b.SolveLoadsCutInto(&got, l, cuts); err != nil {
+				t.Fatalf("trial %d: %v", trial, err)
+			}
+			for k := 0; k <= 50; k++ {
+				x := b.LengthIn * float64(k) / 50
+				if got.Moment(x) != want.Moment(x) || got.Deflection(x) != want.Deflection(x) || got.Slope(x) != want.Slope(x) {
+					t.Fatalf("trial %d at %g in: M %g y %g, SolveLoads M %g y %g", trial, x, got.Moment(x), got.Deflection(x), want.Moment(x), want.Deflection(x))
+				}
+			}
+			for j := range want.Reactions() {
+				if got.Reactions()[j] != want.Reactions()[j] {
+					t.Fatalf("trial %d: reaction %d %g, SolveLoads %g", trial, j, got.Reactions()[j], want.Reactions()[j])
+				}
+			}
+		}
+	}
+	// a load off the beam is refused as SolveLoads refuses it
+	b := Beam{LengthIn: 120, SupportsAtIn: []float64{0, 120}, EILbIn2: 1e8}
+	if _, err := b.Cuts(Loads{Points: []PointLoad{{AtIn: 130, PLb: 1}}}); err == nil {
+		t.Error("a point load off the beam: no error")
+	}
+}
