@@ -2,9 +2,9 @@ package framing
 
 import (
 	"cmp"
-	"fmt"
 	"math"
 	"slices"
+	"strconv"
 	"strings"
 
 	"framecheck/dxfimport"
@@ -89,6 +89,9 @@ func (g *grouper) loadPath() {
 // blockGroups splits entities into those drawn in model space and those
 // of each block insert (by Entity.From), inserts in drawing order.
 func blockGroups(ents []dxfimport.Entity) (model []dxfimport.Entity, blocks [][]dxfimport.Entity) {
+	if !slices.ContainsFunc(ents, func(e dxfimport.Entity) bool { return e.From != nil }) {
+		return ents, nil // all in model space, as posts drawn as outlines or circles are
+	}
 	at := map[dxfimport.Pos]int{}
 	for _, e := range ents {
 		if e.From == nil {
@@ -152,7 +155,7 @@ func (g *grouper) findPosts() {
 		return
 	}
 	model, blocks := blockGroups(s.postEnts)
-	var posts []Post
+	posts := make([]Post, 0, len(model)+len(blocks))
 	for _, es := range blocks {
 		if at, text, tp, ok := blockShape(es); ok {
 			posts = append(posts, Post{At: at, DrawnAs: "block", Pos: *es[0].From, Text: text, TextPos: tp})
@@ -177,15 +180,18 @@ func (g *grouper) findPosts() {
 		}
 	}
 	posts = append(posts, g.linePosts(lines)...)
-	slices.SortStableFunc(posts, func(a, b Post) int {
+	byPlace := func(a, b Post) int {
 		rnd := func(v float64) float64 { return math.Round(v*1000) / 1000 }
 		if c := cmp.Compare(rnd(a.At.Y), rnd(b.At.Y)); c != 0 {
 			return c
 		}
 		return cmp.Compare(rnd(a.At.X), rnd(b.At.X))
-	})
+	}
+	if !slices.IsSortedFunc(posts, byPlace) { // a drawing's posts are often drawn in order
+		slices.SortStableFunc(posts, byPlace)
+	}
 	for i := range posts {
-		posts[i].ID = fmt.Sprintf("P%d", i+1)
+		posts[i].ID = "P" + strconv.Itoa(i+1)
 	}
 	g.plan.Posts = posts
 	g.postTexts()
