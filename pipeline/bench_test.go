@@ -96,7 +96,7 @@ func BenchmarkStageLoadPath(b *testing.B) {
 				b.Fatal(err)
 			}
 			plan := framing.Group(d, FramingOptions(proj))
-			out, beams, inputs, keys, usable, err := runMembers(Input{Plan: plan, PlanFile: "beams.dxf", Project: proj})
+			out, beams, inputs, twins, usable, err := runMembers(Input{Plan: plan, PlanFile: "beams.dxf", Project: proj})
 			if err != nil {
 				b.Fatal(err)
 			}
@@ -105,7 +105,7 @@ func BenchmarkStageLoadPath(b *testing.B) {
 			b.ResetTimer()
 			for b.Loop() {
 				out.Issues, out.Path = issues, nil
-				runLoadPath(proj, plan, beams, inputs, keys, usable, out.Settings, out, false)
+				runLoadPath(proj, plan, beams, inputs, twins, usable, out.Settings, out, false)
 			}
 			if out.Path == nil || len(out.Path.Beams) == 0 {
 				b.Fatal("no load path")

@@ -126,7 +126,7 @@ func HasLoadPath(plan *framing.Plan) bool {
 //
 // With sizing (--size), each beam takes the lightest of [sizing]
 // beam_candidates with which it passes, its own weight following the size.
-func runLoadPath(p *project.Project, plan *framing.Plan, ins []beamIn, inputs []check.Member, keys []string, usable []bool, s check.Settings, o *Outcome, sizing bool) {
+func runLoadPath(p *project.Project, plan *framing.Plan, ins []beamIn, inputs []check.Member, twins []int, usable []bool, s check.Settings, o *Outcome, sizing bool) {
 	if !HasLoadPath(plan) {
 		return // no beam with supports of its own, no post: every support is a rigid bearing
 	}
@@ -252,8 +252,19 @@ func runLoadPath(p *project.Project, plan *framing.Plan, ins []beamIn, inputs []
 	// Which joists go on the path, in the plan's order, and their
 	// reactions: one analysis per key, on every core; then their items,
 	// on every core.
-	keyIdx := map[string]int{}
-	var reps []int                          // the first member of each key
+	// A member checked at its drawn size shares its reactions with the
+	// members of its group (checkAll's twins); one that --size gave
+	// another size, with those of its key at that size.
+	groups := 0
+	for _, t := range twins {
+		groups = max(groups, t+1)
+	}
+	groupRep := make([]int, groups) // twin group -> index into reps, -1 none yet
+	for g := range groupRep {
+		groupRep[g] = -1
+	}
+	keyRep := map[string]int{}
+	var reps []int                          // the first member of each
 	keyOf := make([]int, len(plan.Members)) // index into reps, -1 off the path
 	for k := range plan.Members {
 		keyOf[k] = -1
@@ -264,17 +275,24 @@ func runLoadPath(p *project.Project, plan *framing.Plan, ins []beamIn, inputs []
 			}
 			continue
 		}
-		key := keys[k] // checkAll's, unless --size changed the size
-		if inputs[k].Size != o.Results[k].Size || key == "" {
+		var i int
+		var ok bool
+		if inputs[k].Size == o.Results[k].Size && twins[k] >= 0 {
+			if i = groupRep[twins[k]]; i < 0 {
+				i = len(reps)
+				groupRep[twins[k]] = i
+				reps = append(reps, k)
+			}
+		} else {
 			cm := inputs[k]
 			cm.Size = o.Results[k].Size
-			key = check.MemberKey(cm)
-		}
-		i, ok := keyIdx[key]
-		if !ok {
-			i = len(reps)
-			keyIdx[key] = i
-			reps = append(reps, k)
+			key := check.MemberKey(cm)
+			i, ok = keyRep[key]
+			if !ok {
+				i = len(reps)
+				keyRep[key] = i
+				reps = append(reps, k)
+			}
 		}
 		keyOf[k] = i
 	}

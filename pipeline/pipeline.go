@@ -1,10 +1,12 @@
 package pipeline
 
 import (
+	"cmp"
 	"errors"
 	"fmt"
 	"math"
 	"runtime"
+	"slices"
 	"strings"
 	"sync"
 
@@ -120,20 +122,20 @@ func Settings(p *project.Project) (check.Settings, error) {
 // run, names marks, counts the takeoff and follows the load path. A
 // returned error means the project's design settings are unusable.
 func Run(in Input) (*Outcome, error) {
-	o, beams, inputs, keys, usable, err := runMembers(in)
+	o, beams, inputs, twins, usable, err := runMembers(in)
 	if err != nil {
 		return nil, err
 	}
-	runLoadPath(in.Project, in.Plan, beams, inputs, keys, usable, o.Settings, o, in.Size)
+	runLoadPath(in.Project, in.Plan, beams, inputs, twins, usable, o.Settings, o, in.Size)
 	return o, nil
 }
 
 // runMembers is Run but for the load path: the members' inputs and
 // checks, sizing, blocking rows, marks and takeoff. It returns what the
 // load path reads besides the outcome: each beam's check input
-// (beamInputs), each member's check input, its key (checkAll's) and
-// whether it could be checked.
-func runMembers(in Input) (o *Outcome, beams []beamIn, inputs []check.Member, keys []string, usable []bool, err error) {
+// (beamInputs), each member's check input, its group of identical
+// members (checkAll's) and whether it could be checked.
+func runMembers(in Input) (o *Outcome, beams []beamIn, inputs []check.Member, twins []int, usable []bool, err error) {
 	p := in.Project
 	settings, err := Settings(p)
 	if err != nil {
@@ -170,7 +172,7 @@ func runMembers(in Input) (o *Outcome, beams []beamIn, inputs []check.Member, ke
 	}
 	beams = beamInputs(p, plan)
 	beamBearings(p, plan, beams, inputs, usable, settings, in.Size, o)
-	keys = checkAll(inputs, shifts, usable, settings, p, o)
+	twins = checkAll(inputs, shifts, usable, settings, p, o)
 	if in.Size {
 		sizeRuns(sameDepthGroups(plan, p.Sizing.SameDepth), inputs, shifts, usable, settings, o)
 	}
@@ -203,7 +205,7 @@ func runMembers(in Input) (o *Outcome, beams []beamIn, inputs []check.Member, ke
 		o.Rows[i].Size = plan.Members[plan.Runs[runs[o.Rows[i].Run]].Members[0]].Size
 	}
 	o.Takeoff = framing.BuildTakeoff(plan, o.Rows)
-	return o, beams, inputs, keys, usable, nil
+	return o, beams, inputs, twins, usable, nil
 }
 
 // RunIndexes maps each run's ID to its index in plan.Runs (a run not
@@ -302,44 +304,12 @@ func sizeRuns(groups [][]int, inputs []check.Member, shifts []float64, usable []
 }
 
 // checkAll checks the usable members on every core. Members identical for
-// design (same check input but for the ID) are checked once. It returns
-// each usable member's key (check.MemberKey), "" for the others.
-func checkAll(inputs []check.Member, shifts []float64, usable []bool, s check.Settings, p *project.Project, o *Outcome) (keys []string) {
-	keys = make([]string, len(inputs))
-	par.Ranges(len(inputs), func(lo, hi int) {
-		// members alike share one key string: a plan repeats a few
-		// hundred inputs a hundred thousand times
-		var buf []byte
-		seen := map[string]string{}
-		for k := lo; k < hi; k++ {
-			if !usable[k] {
-				continue
-			}
-			buf = check.AppendMemberKey(buf[:0], &inputs[k])
-			key, ok := seen[string(buf)]
-			if !ok {
-				key = string(buf)
-				seen[key] = key
-			}
-			keys[k] = key
-		}
-	})
-	// twin[k] is the index into order of the first member identical to k
-	first := map[string]int{}
-	twin := make([]int, len(inputs))
-	var order []int
-	for k := range inputs {
-		if !usable[k] {
-			continue
-		}
-		i, ok := first[keys[k]]
-		if !ok {
-			i = len(order)
-			first[keys[k]] = i
-			order = append(order, k)
-		}
-		twin[k] = i
-	}
+// design (same check input but for the ID: check.MemberKey) are checked
+// once. It returns, for each usable member, the index of its group of
+// identical members (0, 1, ... in the order of each group's first
+// member), -1 for the others.
+func checkAll(inputs []check.Member, shifts []float64, usable []bool, s check.Settings, p *project.Project, o *Outcome) (twin []int) {
+	twin, order := groupAlike(inputs, usable)
 	checked := make([]check.Result, len(order))
 	var sized []*check.SizingResult
 	if o.Sizing != nil {
@@ -390,7 +360,74 @@ func checkAll(inputs []check.Member, shifts []float64, usable []bool, s check.Se
 			}
 		}
 	})
-	return keys
+	return twin
+}
+
+// groupAlike returns the group of each usable member of inputs among the
+// members identical to it for design (check.MemberKey), -1 for the others,
+// groups numbered in the order of their first member, and each group's
+// first member. The keys are found on every core, each range naming its
+// own keys once (a plan repeats a few hundred inputs a hundred thousand
+// times); only the ranges' distinct keys are then joined, in order.
+func groupAlike(inputs []check.Member, usable []bool) (twin, first []int) {
+	twin = make([]int, len(inputs)) // the range's own key numbers, then the groups
+	type rangeKeys struct {
+		lo    int
+		keys  []string // the range's distinct keys, in the order met
+		first []int    // the first member of each
+	}
+	var mu sync.Mutex
+	var ranges []rangeKeys
+	par.Ranges(len(inputs), func(lo, hi int) {
+		var buf []byte
+		seen := map[string]int{}
+		rk := rangeKeys{lo: lo}
+		for k := lo; k < hi; k++ {
+			if !usable[k] {
+				twin[k] = -1
+				continue
+			}
+			buf = check.AppendMemberKey(buf[:0], &inputs[k])
+			i, ok := seen[string(buf)]
+			if !ok {
+				i = len(rk.keys)
+				key := string(buf)
+				seen[key] = i
+				rk.keys = append(rk.keys, key)
+				rk.first = append(rk.first, k)
+			}
+			twin[k] = i
+		}
+		mu.Lock()
+		ranges = append(ranges, rk)
+		mu.Unlock()
+	})
+	slices.SortFunc(ranges, func(a, b rangeKeys) int { return cmp.Compare(a.lo, b.lo) })
+	group := map[string]int{}
+	for r := range ranges {
+		rk := &ranges[r]
+		hi := len(inputs)
+		if r+1 < len(ranges) {
+			hi = ranges[r+1].lo
+		}
+		// the range's key numbers become the groups', in the range
+		ids := make([]int, len(rk.keys))
+		for i, key := range rk.keys {
+			g, ok := group[key]
+			if !ok {
+				g = len(first)
+				group[key] = g
+				first = append(first, rk.first[i])
+			}
+			ids[i] = g
+		}
+		for k := rk.lo; k < hi; k++ {
+			if twin[k] >= 0 {
+				twin[k] = ids[twin[k]]
+			}
+		}
+	}
+	return twin, first
 }
 
 // supportMemo is p.SupportOf remembering each layer's answer: a plan has
