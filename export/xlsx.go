@@ -219,7 +219,8 @@ type sheet struct {
 	name  string
 	ncols int
 	row   int
-	cells []any // pointers into store, for SetRow
+	cells []any           // pointers into excel, for SetRow
+	excel []excelize.Cell // the row's cells as excelize takes them
 }
 
 // column is a header cell and its width in characters.
@@ -279,9 +280,13 @@ func (s *sheet) end() error {
 	}
 	// Pointers, not values: a Cell boxed in an interface would be one
 	// allocation per cell.
-	s.cells = s.cells[:0]
+	s.excel = s.excel[:0]
 	for i := range s.store {
-		s.cells = append(s.cells, &s.store[i])
+		s.excel = append(s.excel, s.store[i].excelizeCell())
+	}
+	s.cells = s.cells[:0]
+	for i := range s.excel {
+		s.cells = append(s.cells, &s.excel[i])
 	}
 	return s.sw.SetRow(cell, s.cells)
 }
