@@ -467,15 +467,25 @@ func OrderConnections(cs []Connection) {
 		group[i] = g
 		sizes[g]++
 	}
-	// each group's place, then the joints into it in order
+	// each group's place, then each joint's place in it, in order
 	at := make([]int, len(sizes))
 	for g := 1; g < len(sizes); g++ {
 		at[g] = at[g-1] + sizes[g-1]
 	}
-	out := make([]Connection, len(cs))
+	dest := group // reused: group[i] is not read once dest[i] is set
 	for i := range cs {
-		out[at[group[i]]] = cs[i]
-		at[group[i]]++
+		g := group[i]
+		dest[i] = at[g]
+		at[g]++
 	}
-	copy(cs, out)
+	// Moved in place, cycle by cycle (a copy of every joint was a hundred
+	// thousand more at once): the joint at i goes to dest[i], the one
+	// there to its own place, until the cycle comes back to i.
+	for i := range cs {
+		for dest[i] != i {
+			j := dest[i]
+			cs[i], cs[j] = cs[j], cs[i]
+			dest[i], dest[j] = dest[j], j
+		}
+	}
 }

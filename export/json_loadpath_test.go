@@ -5,6 +5,8 @@ import (
 	"bytes"
 	"encoding/json"
 	"fmt"
+	"math"
+	"math/rand/v2"
 	"slices"
 	"strconv"
 	"testing"
@@ -226,4 +228,59 @@ func sortedKeys(m map[string]any) []string {
 	}
 	slices.Sort(out)
 	return out
+}
+
+// TestOrderConnectionsAsStableGroups: OrderConnections, moving the joints
+// in place, leaves them as a stable grouping by kind, carrier, bearing and
+// demand would (the groups in the order of their first joint, the joints
+// of a group in their order), on random joints with many groups, one
+// group, none, and a NaN load that matches no other joint (common
+// practice, no source).
+func TestOrderConnectionsAsStableGroups(t *testing.T) {
+	rng := rand.New(rand.NewPCG(12, 9))
+	for trial := range 60 {
+		n := rng.IntN(400)
+		kinds := 1 + rng.IntN(4)
+		cs := make([]Connection, n)
+		for i := range cs {
+			cs[i] = Connection{Kind: []string{"hanger", "post cap", "wall", "bearing"}[rng.IntN(kinds)],
+				Member: fmt.Sprintf("M%d", i), Bearing: 1 + rng.IntN(2), Carrier: fmt.Sprintf("B%d", rng.IntN(3)),
+				Loads: TypeLoads{DeadLb: float64(rng.IntN(3))}, DownLb: 1, DownCombo: "D"}
+			if rng.IntN(50) == 0 {
+				cs[i].Loads.LiveLb = math.NaN()
+			}
+		}
+		// the reference: groups by first appearance, members in order
+		type key struct {
+			kind, carrier string
+			bearing       int
+			d             demand
+		}
+		var groups [][]Connection
+		idx := map[key]int{}
+		for _, c := range cs {
+			k := key{c.Kind, c.Carrier, c.Bearing, connectionDemand(&c)}
+			g, ok := idx[k]
+			if !ok {
+				g = len(groups)
+				idx[k] = g
+				groups = append(groups, nil)
+			}
+			groups[g] = append(groups[g], c)
+		}
+		var want []string
+		for _, g := range groups {
+			for _, c := range g {
+				want = append(want, c.Member)
+			}
+		}
+		OrderConnections(cs)
+		var got []string
+		for _, c := range cs {
+			got = append(got, c.Member)
+		}
+		if !slices.Equal(got, want) {
+			t.Fatalf("trial %d (%d joints): %v, want %v", trial, n, got, want)
+		}
+	}
 }
