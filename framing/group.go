@@ -198,17 +198,25 @@ func (g *grouper) classify(d *dxfimport.Drawing) {
 	}
 	// room for the joists and support lines, counted first: growing
 	// lists of a hundred thousand would copy them over and over
-	nj, ns := 0, 0
+	nj, ns, np, nl := 0, 0, 0, 0
 	for i := range d.Entities {
 		switch r, _ := roleOf(d.Entities[i].Pos.Layer); r {
 		case roleJoist:
 			nj++
 		case roleSupport:
 			ns += max(1, len(d.Entities[i].Points))
+		case rolePost:
+			np++
+		case rolePointLoad:
+			nl++
 		}
 	}
 	g.joists = make([]segItem, 0, nj)
 	g.sups = make([]segItem, 0, ns)
+	// the posts' and point loads' entities (at most: texts outside a
+	// block are kept apart)
+	g.lp.postEnts = make([]dxfimport.Entity, 0, np)
+	g.lp.loadEnts = make([]dxfimport.Entity, 0, nl)
 	for _, e := range d.Entities {
 		layer := e.Pos.Layer
 		r, spec := roleOf(layer)
