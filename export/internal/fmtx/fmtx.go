@@ -23,6 +23,8 @@ import (
 	"math"
 	"strconv"
 	"strings"
+	"sync"
+	"sync/atomic"
 )
 
 // fixed formats v with prec decimals, "-0" as "0", and thousands
@@ -117,6 +119,29 @@ func Value(v float64, unit string) string {
 // S)". What follows a comma or a space (", span 1", " (live-type loads on
 // span 2)") is kept as it is.
 func Combo(name string) string {
+	if c, ok := comboSpelt.Load(name); ok {
+		return c.(string)
+	}
+	c := spellCombo(name)
+	if comboCount.Add(1) <= maxCombosKept {
+		comboSpelt.Store(name, c)
+	}
+	return c
+}
+
+// comboSpelt keeps Combo's answers: a plan names a few dozen combinations
+// and its schedule, report and results spell them hundreds of thousands of
+// times. At most maxCombosKept are kept (comboCount counts the names
+// offered).
+var (
+	comboSpelt sync.Map // name -> spelt
+	comboCount atomic.Int64
+)
+
+const maxCombosKept = 4096
+
+// spellCombo is Combo, worked out.
+func spellCombo(name string) string {
 	head, tail := name, ""
 	if i := strings.IndexAny(name, ", "); i >= 0 {
 		head, tail = name[:i], name[i:]

@@ -1,6 +1,7 @@
 package fmtx
 
 import (
+	"fmt"
 	"math"
 	"testing"
 )
@@ -53,9 +54,28 @@ func TestCombo(t *testing.T) {
 		{"0.5D+L, span 1", "0.5D + L, span 1"},
 		{"D+L (live-type loads on span 2)", "D + L (live-type loads on span 2)"},
 	} {
-		if got := Combo(tc.in); got != tc.want {
-			t.Errorf("Combo(%q) = %q, want %q", tc.in, got, tc.want)
+		// twice: worked out, then as kept
+		for range 2 {
+			if got := Combo(tc.in); got != tc.want {
+				t.Errorf("Combo(%q) = %q, want %q", tc.in, got, tc.want)
+			}
 		}
+	}
+}
+
+// TestComboKeepsFew: past maxCombosKept names Combo still spells every
+// name right and keeps no more (common practice, no source).
+func TestComboKeepsFew(t *testing.T) {
+	for i := range 2*maxCombosKept + 10 {
+		name := fmt.Sprintf("%dD+L(up)", i)
+		if got, want := Combo(name), fmt.Sprintf("%dD + L (up)", i); got != want {
+			t.Fatalf("Combo(%q) = %q, want %q", name, got, want)
+		}
+	}
+	n := 0
+	comboSpelt.Range(func(_, _ any) bool { n++; return true })
+	if n > maxCombosKept {
+		t.Errorf("%d names kept, at most %d", n, maxCombosKept)
 	}
 }
 
