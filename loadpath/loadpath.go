@@ -116,7 +116,6 @@ type Joint struct {
 	UpCombo   string
 }
 
-// MemberOut is a member's outcome.
 // MemberOut is a member's outcome. A member given with its check and
 // reactions (MemberIn.Result and Reactions) that receives no load from
 // another keeps them with the caller: its outcome holds only Order and
