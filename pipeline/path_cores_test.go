@@ -67,3 +67,41 @@ func TestLoadPathSameOnAnyCoreCount(t *testing.T) {
 		t.Error("findings or results differ between one core and two")
 	}
 }
+
+// TestStartAsRun: the members checked by Start, the load path followed
+// when its path is called, give the outcome Run gives, load path, findings
+// and results alike, on the 2,000-joist synthetic plan with its beams on
+// posts (common practice, no source: the comparison is with itself).
+func TestStartAsRun(t *testing.T) {
+	so := synth.Options{Joists: 2_000, Beams: true}
+	data, _ := synth.Build(so)
+	proj, err := project.ParseProject("beams.toml", []byte(synth.ProjectFor(so)))
+	if err != nil {
+		t.Fatal(err)
+	}
+	in := func() Input {
+		d, err := dxfimport.Read(bytes.NewReader(data), "beams.dxf", dxfimport.Options{Units: proj.Drawing.Units})
+		if err != nil {
+			t.Fatal(err)
+		}
+		return Input{Plan: framing.Group(d, FramingOptions(proj)), PlanFile: "beams.dxf", Project: proj}
+	}
+	a, err := Run(in())
+	if err != nil {
+		t.Fatal(err)
+	}
+	b, path, err := Start(in())
+	if err != nil {
+		t.Fatal(err)
+	}
+	if b.Path != nil {
+		t.Fatal("Start followed the load path before its path was called")
+	}
+	path()
+	if a.Path == nil || len(a.Path.Beams) == 0 || len(a.Path.Posts) == 0 {
+		t.Fatal("no load path to compare")
+	}
+	if !reflect.DeepEqual(a.Path, b.Path) || !reflect.DeepEqual(a.Issues, b.Issues) || !reflect.DeepEqual(a.Results, b.Results) {
+		t.Error("Start then path differs from Run")
+	}
+}

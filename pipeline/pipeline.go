@@ -122,12 +122,26 @@ func Settings(p *project.Project) (check.Settings, error) {
 // run, names marks, counts the takeoff and follows the load path. A
 // returned error means the project's design settings are unusable.
 func Run(in Input) (*Outcome, error) {
-	o, beams, inputs, twins, usable, err := runMembers(in)
+	o, path, err := Start(in)
 	if err != nil {
 		return nil, err
 	}
-	runLoadPath(in.Project, in.Plan, beams, inputs, twins, usable, o.Settings, o, in.Size)
+	path()
 	return o, nil
+}
+
+// Start is Run but for the load path, which the returned path follows
+// when called (o.Path and the load path's findings in o.Issues), so that
+// a caller can map the members for its outputs meanwhile. Until path has
+// returned, o.Path and o.Issues must not be read, and nothing in o or the
+// plan may be changed: the load path reads the plan, the members' results
+// and their check inputs.
+func Start(in Input) (o *Outcome, path func(), err error) {
+	o, beams, inputs, twins, usable, err := runMembers(in)
+	if err != nil {
+		return nil, nil, err
+	}
+	return o, func() { runLoadPath(in.Project, in.Plan, beams, inputs, twins, usable, o.Settings, o, in.Size) }, nil
 }
 
 // runMembers is Run but for the load path: the members' inputs and

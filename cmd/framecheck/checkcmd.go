@@ -18,6 +18,7 @@ import (
 	"framecheck/dxfimport"
 	"framecheck/export"
 	"framecheck/framing"
+	"framecheck/pipeline"
 	"framecheck/project"
 	"framecheck/samples"
 )
@@ -234,17 +235,29 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	if merr != nil {
 		fmt.Fprintf(stderr, "framecheck: warning: %s: the marks are named afresh\n", termText(merr.Error()))
 	}
-	o, err := runPipeline(pipelineInput{planPath: outputName(c.planPath), planData: data, project: proj, units: c.units, size: c.size, marks: known})
+	o, err := runPipeline(pipelineInput{planPath: outputName(c.planPath), planData: data, project: proj, units: c.units, size: c.size,
+		marks: known, pathLater: true})
 	if err != nil {
 		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitUsage
 	}
-	collected := false // by loadPathGC, before the mapping
-	if o.Path != nil {
-		// the load path's outputs follow its beams, posts and joints
-		scaleMemoryLimit(int64(len(data)), len(o.Path.Beams)+len(o.Path.Posts)+len(o.Path.Joints))
-		collected = loadPathGC(o.Path.Solved != nil && len(o.Path.Beams)+len(o.Path.Posts) > 0)
+	if len(o.Plan.Members) > 0 {
+		// first of the findings, before the load path adds its own
+		if msg := unmatchedSupports(o); msg != "" {
+			o.Issues = append(dxfimport.IssueList{{Pos: dxfimport.Pos{File: outputName(c.planPath)}, Code: CodeUnmatchedSupport,
+				Severity: dxfimport.SevWarning, Msg: msg}}, o.Issues...)
+		}
 	}
+	// The load path is followed while the members are mapped for the
+	// outputs (exportResults), after a collection of what checking the
+	// members left behind.
+	collected := false // by loadPathGC, before the mapping
+	if pipeline.HasLoadPath(o.Plan) {
+		// the load path's outputs follow its beams, posts and joints
+		scaleMemoryLimit(int64(len(data)), pathItems(o.Plan))
+		collected = loadPathGC(true)
+	}
+	o.startPath()
 	if o.MarksFresh {
 		fmt.Fprintf(stderr, "framecheck: none of the %d marks kept in %s is on this plan: the marks are named afresh from J1\n",
 			len(known), termText(filepath.Join(c.outDir, marksName)))
@@ -263,15 +276,15 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		if f := c.unusedProjectFile(); f != "" {
 			fmt.Fprintf(stderr, "framecheck: no -p given, so the built-in layer patterns applied; to use %s, add -p %s\n", termText(f), termText(f))
 		}
+		o.waitPath()
 		printIssues(stderr, o.Issues, c.verbose)
 		return exitUsage
 	}
-	if msg := unmatchedSupports(o); msg != "" {
-		o.Issues = append(dxfimport.IssueList{{Pos: dxfimport.Pos{File: outputName(c.planPath)}, Code: CodeUnmatchedSupport,
-			Severity: dxfimport.SevWarning, Msg: msg}}, o.Issues...)
+	if !collected {
+		mappingGC(len(o.Plan.Members))
 	}
-	mappingGC(len(o.Plan.Members))
 	res := exportResults(o, c.planPath)
+	o.waitPath()
 	res.InputSHA256 = <-inputHash
 	// From here the writers read res, the plan's supports and zones and
 	// the drawing's bytes: drop the members as grouped and checked.

@@ -8,6 +8,8 @@ import (
 	"runtime/metrics"
 	"strconv"
 	"strings"
+
+	"framecheck/framing"
 )
 
 // gcPercent and memoryLimit tune the garbage collector for a run that
@@ -57,6 +59,20 @@ func scaleMemoryLimit(planBytes int64, pathItems int) {
 		want = min(want, max(int64(memoryLimit), int64(memoryShare*float64(total))))
 	}
 	debug.SetMemoryLimit(want)
+}
+
+// pathItems is about how many beams, posts and joints the plan's load
+// path has (its beams that are not rigid bearings, their bearings and the
+// joists they carry, its posts), counted on the plan before the path is
+// followed.
+func pathItems(plan *framing.Plan) int {
+	n := len(plan.Posts)
+	for i := range plan.Beams {
+		if b := &plan.Beams[i]; !b.Rigid {
+			n += 1 + len(b.Bearings) + len(b.Carried)
+		}
+	}
+	return n
 }
 
 // machineMemory returns MemTotal from /proc/meminfo in bytes, or 0.
@@ -115,13 +131,15 @@ const writersGCPercent = 100
 // the user set GOGC); the returned function puts the percentage back (a
 // process that checks several plans, the benchmarks).
 //
-// collect is false when loadPathGC collected just before the mapping:
-// what the checks and the load path left is freed already, and a second
+// collect is false when loadPathGC collected just before the load path
+// and the mapping: what the checks left is freed already, and a second
 // collection would mostly find the mapping's output, which the writers
 // read. Measured on the 100,000-joist bigplan with -beams on this
-// project's 2-vCPU machine (six alternated runs, load about 1): 2.09-2.16
-// s wall, 3.51 s CPU, 561 MiB with both collections; 2.01-2.11 s, 3.41 s,
-// 563 MiB without the second.
+// project's 2-vCPU machine (six to seven alternated runs, load about 1),
+// the load path followed before the mapping: 2.09-2.16 s wall, 3.51 s CPU,
+// 561 MiB with both collections; 2.01-2.11 s, 3.41 s, 563 MiB without the
+// second; followed beside the mapping, 1.93-2.02 s with both and 1.96-2.02
+// s without (the same within the runs' spread: not made).
 func writersGC(collect bool) (restore func()) {
 	if !gcTuned {
 		return func() {}
@@ -148,19 +166,20 @@ func pauseGC() (resume func()) {
 	return func() { debug.SetGCPercent(old) }
 }
 
-// loadPathGC collects once the load path is solved, when the plan has
-// one, before the results are mapped for the outputs: solving it leaves
-// its working data behind (every member's place in the order, the loads
-// passed down, the beams' analyses), and without a collection the mapping
-// of the members took fresh memory from the system page by page.
-// Measured on the 100,000-joist bigplan with -beams on this project's
-// 2-vCPU machine (three alternated runs each, load about 1): 2.89-2.92 s
-// wall, 0.83-0.88 s system CPU, 697-698 MB peak without; 2.67-2.72 s,
-// 0.46-0.53 s and 678-686 MB with. On the same plan with rigid supports
-// (no load path) a collection there cost 0.07 s, so it is not made. Does
-// nothing when the user set GOGC. It reports whether it collected.
-func loadPathGC(solved bool) (collected bool) {
-	if gcTuned && solved {
+// loadPathGC collects once the members are checked, when the plan has a
+// load path, before the path is followed and the members are mapped for
+// the outputs (the two at once): checking the members leaves their
+// working data behind, and without a collection the load path and the
+// mapping took fresh memory from the system page by page. Measured on the
+// 100,000-joist bigplan with -beams on this project's 2-vCPU machine (six
+// alternated runs each, load about 1): 2.05-2.14 s wall and 579 MiB peak
+// without, 1.90-1.98 s and 561 MiB with (when the load path was followed
+// before the mapping, with the collection between the two: 2.67-2.72 s
+// against 2.89-2.92 s). On the same plan with rigid supports (no load
+// path) a collection there cost 0.07 s, so it is not made. Does nothing
+// when the user set GOGC. It reports whether it collected.
+func loadPathGC(hasPath bool) (collected bool) {
+	if gcTuned && hasPath {
 		runtime.GC()
 		return true
 	}

@@ -7,6 +7,7 @@ import (
 	"os"
 	"path/filepath"
 	"regexp"
+	"slices"
 	"strconv"
 	"strings"
 	"testing"
@@ -316,10 +317,16 @@ func TestUnmatchedSupportPatternIsNamed(t *testing.T) {
 	require.NoError(t, err)
 	toml := strings.Replace(string(b), `layers = ["S-WALL-BRG"]`, `layers = ["S-WALL"]`, 1)
 	require.NotEqual(t, string(b), toml)
-	code, stdout, stderr := runMMPlan(t, toml)
+	out := t.TempDir()
+	code, stdout, stderr := runMMPlan(t, toml, "-o", out)
 	assert.Equal(t, exitFail, code)
 	first, _, _ := strings.Cut(stderr, "\n")
 	assert.Contains(t, first, CodeUnmatchedSupport)
+	// and the notes of the outputs carry it too
+	res, err := export.ReadJSON(filepath.Join(out, "results.json"))
+	require.NoError(t, err)
+	assert.True(t, slices.ContainsFunc(res.Assumptions.Notes, func(n string) bool { return strings.Contains(n, CodeUnmatchedSupport) }),
+		"notes: %q", res.Assumptions.Notes)
 	assert.Contains(t, first, `[[support]] 1 (bearing-wall): "S-WALL"`)
 	assert.NotContains(t, first, "S-BEAM", "the flush-beam pattern matches its layer")
 	assert.Contains(t, stderr, "start (4489.45, 0.00 mm) reaches no support")

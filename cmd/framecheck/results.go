@@ -32,11 +32,19 @@ func exportResults(o *outcome, planName string) *export.Results {
 		ToolVersion: toolVersion(), Project: exportInfo(o.Project.Info)}
 	// The uplift list, the load path and the notes read the outcome only,
 	// never what is built here: each is made beside the members' mapping
-	// (a serial stretch each, while the cores had room).
+	// (a serial stretch each, while the cores had room). The members'
+	// mapping reads the plan and the members' results only, which the load
+	// path, when still being followed (outcome.startPath), reads too.
 	var side sync.WaitGroup
 	side.Go(func() { r.Uplift = exportUplift(plan, o.Results, o.Project.Design.UpliftReportLb, toInch) })
-	side.Go(func() { r.LoadPath = exportLoadPath(o, toInch) })
-	side.Go(func() { r.Assumptions = assumptions(o) })
+	side.Go(func() {
+		o.waitPath() // when being followed meanwhile (startPath)
+		r.LoadPath = exportLoadPath(o, toInch)
+	})
+	side.Go(func() {
+		o.waitPath() // the notes read the findings, the load path's among them
+		r.Assumptions = assumptions(o)
+	})
 	ids := make([]string, len(plan.Members))
 	for k := range plan.Members {
 		ids[k] = plan.Members[k].ID

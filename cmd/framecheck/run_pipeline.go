@@ -3,6 +3,7 @@ package main
 import (
 	"bytes"
 	"slices"
+	"sync"
 
 	"framecheck/dxfimport"
 	"framecheck/framing"
@@ -19,6 +20,40 @@ type outcome struct {
 	// before its entities are dropped, when a message may need them (no
 	// joists found, joist ends reaching no support); nil otherwise
 	layers []layerRow
+	// path is the load path still to follow (pipelineInput.pathLater);
+	// nil when followed before runPipeline returned
+	path *pendingPath
+}
+
+// pendingPath is a load path to follow (pipeline.Start), once: in the
+// background from startPath, or by the first to wait for it.
+type pendingPath struct {
+	once sync.Once
+	run  func()
+}
+
+func (p *pendingPath) follow() {
+	p.once.Do(func() {
+		p.run()
+		p.run = nil // and with it what the path read: the members' check inputs may go
+	})
+}
+
+// startPath follows the load path in the background, when one is left to
+// follow. Until waitPath returns, o.Path and o.Issues must not be read and
+// nothing in o or its plan changed.
+func (o *outcome) startPath() {
+	if o.path != nil {
+		go o.path.follow()
+	}
+}
+
+// waitPath returns once the load path is followed (at once when it was,
+// or there is none to follow): o.Path and o.Issues then hold it.
+func (o *outcome) waitPath() {
+	if o.path != nil {
+		o.path.follow()
+	}
 }
 
 // pipelineInput is what runs the pipeline: the plan file, its project,
@@ -32,6 +67,11 @@ type pipelineInput struct {
 	// marks are the names of an earlier run's marks by their defining
 	// keys (OUTDIR's marks.json); nil: named afresh
 	marks map[string]string
+	// pathLater leaves the load path to be followed when the caller asks
+	// (outcome.startPath, waitPath), so that the members can be mapped
+	// for the outputs meanwhile; otherwise it is followed before
+	// runPipeline returns
+	pathLater bool
 }
 
 // runPipeline reads the plan, groups it into members and hands them to
@@ -79,7 +119,15 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 	}
 	d.Entities = nil
 	spanWarnings(plan, &issues)
-	po, err := pipeline.Run(pipeline.Input{Plan: plan, PlanFile: d.File, Project: p, Issues: issues, Size: in.size, Marks: in.marks})
+	pin := pipeline.Input{Plan: plan, PlanFile: d.File, Project: p, Issues: issues, Size: in.size, Marks: in.marks}
+	if in.pathLater {
+		po, path, err := pipeline.Start(pin)
+		if err != nil {
+			return nil, err
+		}
+		return &outcome{Outcome: po, drawing: d, layers: layers, path: &pendingPath{run: path}}, nil
+	}
+	po, err := pipeline.Run(pin)
 	if err != nil {
 		return nil, err
 	}
