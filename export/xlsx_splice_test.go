@@ -97,14 +97,7 @@ func TestSplicedSheetsMatchExcelize(t *testing.T) {
 	if uplifts <= rowsPerBlock {
 		t.Fatalf("%d uplift lines: too few to fill two blocks", uplifts)
 	}
-	dir := t.TempDir()
-	spliced, stream := filepath.Join(dir, "spliced.xlsx"), filepath.Join(dir, "stream.xlsx")
-	if err := writeXLSX(spliced, r, false); err != nil {
-		t.Fatal(err)
-	}
-	if err := writeXLSX(stream, r, true); err != nil {
-		t.Fatal(err)
-	}
+	spliced, stream := writeBothXLSX(t, r)
 	gotParts, wantParts := zipParts(t, spliced), zipParts(t, stream)
 	sheets := append([]string{SheetMembers, SheetUplift}, LoadPathSheetNames...)
 	zr, err := zip.OpenReader(spliced)
@@ -234,14 +227,7 @@ func bigUplift(n int) UpliftReport {
 // spliced as excelize writes it (common practice, no source).
 func TestUpliftSheetNone(t *testing.T) {
 	r := bigResults(20)
-	dir := t.TempDir()
-	spliced, stream := filepath.Join(dir, "spliced.xlsx"), filepath.Join(dir, "stream.xlsx")
-	if err := writeXLSX(spliced, r, false); err != nil {
-		t.Fatal(err)
-	}
-	if err := writeXLSX(stream, r, true); err != nil {
-		t.Fatal(err)
-	}
+	spliced, stream := writeBothXLSX(t, r)
 	var rows [2][][]string
 	for i, path := range []string{spliced, stream} {
 		f, err := excelize.OpenFile(path)
@@ -261,6 +247,21 @@ func TestUpliftSheetNone(t *testing.T) {
 		!strings.HasPrefix(rows[0][HeaderRow][len(upliftColumns)-1], "No bearing has a net uplift") {
 		t.Errorf("rows %q, want the header and one row saying none", rows[0])
 	}
+}
+
+// writeBothXLSX writes r's schedule spliced (as WriteXLSX does) and
+// streamed cell by cell by excelize (the reference), into a fresh folder.
+func writeBothXLSX(t *testing.T, r *Results) (spliced, stream string) {
+	t.Helper()
+	dir := t.TempDir()
+	spliced, stream = filepath.Join(dir, "spliced.xlsx"), filepath.Join(dir, "stream.xlsx")
+	if err := writeXLSX(spliced, r, false); err != nil {
+		t.Fatal(err)
+	}
+	if err := writeXLSX(stream, r, true); err != nil {
+		t.Fatal(err)
+	}
+	return spliced, stream
 }
 
 // zipParts reads every part of the zip at path, uncompressed.

@@ -49,6 +49,12 @@ func (b Beam) SolveLoads(l Loads) (*Response, error) {
 // SolveLoadsInto is SolveLoads writing into r, reusing its storage. On
 // error r is left empty.
 func (b Beam) SolveLoadsInto(r *Response, l Loads) error {
+	return b.solveLoadsInto(r, l, nil)
+}
+
+// solveLoadsInto is SolveLoadsInto with the cuts given (SolveLoadsCutInto),
+// or found here when nil.
+func (b Beam) solveLoadsInto(r *Response, l Loads, cuts []float64) error {
 	if err := b.Validate(); err != nil {
 		r.reset(0, 0)
 		return err
@@ -57,9 +63,10 @@ func (b Beam) SolveLoadsInto(r *Response, l Loads) error {
 		r.reset(0, 0)
 		return err
 	}
-	cuts := b.cuts(l)
-	m := len(cuts) - 1
-	r.reset(m, len(b.SupportsAtIn))
+	if cuts == nil {
+		cuts = b.cuts(l)
+	}
+	r.reset(len(cuts)-1, len(b.SupportsAtIn))
 	if err := b.fillGeneral(r, cuts, l); err != nil {
 		r.reset(0, 0)
 		return err
@@ -85,22 +92,10 @@ func (b Beam) Cuts(l Loads) ([]float64, error) {
 // SolveLoadsCutInto is SolveLoadsInto with the cuts given: cuts must be
 // what Cuts returns for a load set whose partial loads span the same
 // stretches and whose point loads sit at the same places as l's (which
-// is not checked), and is not changed.
+// is not checked), and is not changed; nil cuts are found here, as
+// SolveLoadsInto finds them.
 func (b Beam) SolveLoadsCutInto(r *Response, l Loads, cuts []float64) error {
-	if err := b.Validate(); err != nil {
-		r.reset(0, 0)
-		return err
-	}
-	if err := b.checkGeneral(l); err != nil {
-		r.reset(0, 0)
-		return err
-	}
-	r.reset(len(cuts)-1, len(b.SupportsAtIn))
-	if err := b.fillGeneral(r, cuts, l); err != nil {
-		r.reset(0, 0)
-		return err
-	}
-	return nil
+	return b.solveLoadsInto(r, l, cuts)
 }
 
 // tolPos is how far, as a fraction of the beam length, a load position may
