@@ -24,8 +24,8 @@ import (
 // SpreadsheetML (ECMA-376 Part 1, 18.3.1.73 row, 18.3.1.4 c, 18.3.1.53
 // is: inline strings), in blocks of rows that are built and deflated on
 // every core at once, then spliced into excelize's sheet part
-// (spliceSheets). The load path's sheets (xlsx_loadpath.go) take the same
-// way. The cells are the same values, with the same styles, that the
+// (spliceSheets). The Uplift sheet (xlsx_uplift.go) and the load path's
+// sheets (xlsx_loadpath.go) take the same way. The cells are the same values, with the same styles, that the
 // sheet helpers hand to excelize's stream writer (xcell.excelizeCell).
 
 // rowsPerBlock is how many rows one block holds (about 3 MB of XML for
