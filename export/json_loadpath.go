@@ -47,15 +47,24 @@ func connectionDemand(c *Connection) demand {
 type demandTable struct {
 	ids   map[demand]string
 	order []demand
+	// the demand asked last and its id: joints alike come one after
+	// another (OrderConnections), and comparing is cheaper than hashing
+	// ten numbers and four texts
+	last   demand
+	lastID string
 }
 
 func (t *demandTable) id(d demand) string {
-	if id, ok := t.ids[d]; ok {
-		return id
+	if t.lastID != "" && d == t.last { // a NaN is never equal: looked up, as the map does
+		return t.lastID
 	}
-	t.order = append(t.order, d)
-	id := "D" + strconv.Itoa(len(t.order))
-	t.ids[d] = id
+	id, ok := t.ids[d]
+	if !ok {
+		t.order = append(t.order, d)
+		id = "D" + strconv.Itoa(len(t.order))
+		t.ids[d] = id
+	}
+	t.last, t.lastID = d, id
 	return id
 }
 
@@ -456,8 +465,17 @@ func OrderConnections(cs []Connection) {
 	group := make([]int, len(cs))
 	first := make(map[key]int)
 	var sizes []int
+	// joints alike mostly follow one another (the joists of a run on one
+	// beam): one alike to the one before goes where that one went without
+	// its key being hashed (a NaN is never alike: looked up, as the map does)
+	var last key
 	for i := range cs {
 		k := key{cs[i].Kind, cs[i].Carrier, cs[i].Bearing, connectionDemand(&cs[i])}
+		if i > 0 && k == last {
+			group[i] = group[i-1]
+			sizes[group[i]]++
+			continue
+		}
 		g, ok := first[k]
 		if !ok {
 			g = len(sizes)
@@ -466,6 +484,7 @@ func OrderConnections(cs []Connection) {
 		}
 		group[i] = g
 		sizes[g]++
+		last = k
 	}
 	// each group's place, then each joint's place in it, in order
 	at := make([]int, len(sizes))

@@ -681,12 +681,18 @@ func demands(js []Joint, s check.Settings) {
 		downCombo, upCombo string
 	}
 	seen := map[Loads]demand{}
+	var d demand
 	for i := range js {
 		jt := &js[i]
-		d, ok := seen[jt.Loads]
-		if !ok {
-			d.down, d.downCombo, d.up, d.upCombo = check.LoadExtremes(jt.Loads, s)
-			seen[jt.Loads] = d
+		// joints alike mostly follow one another: one passing the loads
+		// of the joint before takes its demand without a look-up (a NaN
+		// is never equal: looked up, and worked out again, as before)
+		if i == 0 || jt.Loads != js[i-1].Loads {
+			var ok bool
+			if d, ok = seen[jt.Loads]; !ok {
+				d.down, d.downCombo, d.up, d.upCombo = check.LoadExtremes(jt.Loads, s)
+				seen[jt.Loads] = d
+			}
 		}
 		jt.DownLb, jt.DownCombo, jt.UpLb, jt.UpCombo = d.down, d.downCombo, d.up, d.upCombo
 	}
