@@ -1,9 +1,7 @@
 package export
 
 import (
-	"archive/zip"
 	"io"
-	"path/filepath"
 	"regexp"
 	"strconv"
 	"testing"
@@ -23,18 +21,7 @@ func TestScheduleDimensions(t *testing.T) {
 	big := bigResults(rowsPerBlock + 5)
 	big.LoadPath = bigLoadPath(30, 40, 50, 20)
 	for name, r := range map[string]*Results{"fixture": loadFixture(t), "big": big} {
-		path := filepath.Join(t.TempDir(), "schedule.xlsx")
-		if err := WriteXLSX(path, r); err != nil {
-			t.Fatal(err)
-		}
-		zr, err := zip.OpenReader(path)
-		if err != nil {
-			t.Fatal(err)
-		}
-		parts, err := sheetParts(&zr.Reader)
-		if err != nil {
-			t.Fatal(err)
-		}
+		zr, parts := openSchedule(t, r)
 		for sheet, part := range parts {
 			f, err := zr.Open(part)
 			if err != nil {

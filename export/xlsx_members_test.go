@@ -138,19 +138,8 @@ func sameNumber(a, b string) bool {
 // zip's CRC and sizes agree with it (archive/zip checks the CRC on read).
 func TestMembersPartWellFormed(t *testing.T) {
 	r := &Results{Members: awkwardMembers()}
-	path := filepath.Join(t.TempDir(), "schedule.xlsx")
-	if err := WriteXLSX(path, r); err != nil {
-		t.Fatal(err)
-	}
-	zr, err := zip.OpenReader(path)
-	if err != nil {
-		t.Fatal(err)
-	}
+	zr, parts := openSchedule(t, r)
 	defer zr.Close()
-	parts, err := sheetParts(&zr.Reader)
-	if err != nil {
-		t.Fatal(err)
-	}
 	membersPart := parts[SheetMembers]
 	for _, f := range zr.File {
 		if f.Name != membersPart {
@@ -224,4 +213,25 @@ func TestMembersSheetEmpty(t *testing.T) {
 	if len(rows) != 1 || rows[0][0] != membersColumns[0].Head {
 		t.Errorf("rows %q, want the header only", rows)
 	}
+}
+
+// openSchedule writes r's schedule (WriteXLSX) into a fresh folder and
+// opens it: the zip, to be closed by the caller, and its sheets' parts by
+// sheet name (sheetParts).
+func openSchedule(t *testing.T, r *Results) (*zip.ReadCloser, map[string]string) {
+	t.Helper()
+	path := filepath.Join(t.TempDir(), "schedule.xlsx")
+	if err := WriteXLSX(path, r); err != nil {
+		t.Fatal(err)
+	}
+	zr, err := zip.OpenReader(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	parts, err := sheetParts(&zr.Reader)
+	if err != nil {
+		zr.Close()
+		t.Fatal(err)
+	}
+	return zr, parts
 }
