@@ -8,8 +8,10 @@ import (
 
 	"framecheck/check"
 	"framecheck/export"
+	"framecheck/framing"
 	"framecheck/internal/par"
 	"framecheck/loadpath"
+	"framecheck/pipeline"
 )
 
 // exportLoadPath maps what the load path found onto results.json's
@@ -29,55 +31,21 @@ func exportLoadPath(o *outcome, toInch float64) *export.LoadPath {
 	for i, w := range po.Walls {
 		wallID[w.Support] = fmt.Sprintf("W%d", i+1)
 	}
-	marks := map[string]string{}
+	// Every list of checks converted first, once per list, in order
+	// (beams and posts alike share one); the items then read them on
+	// every core.
 	checks := pathChecks{}
+	beamChecks := make([][]export.Check, len(po.Beams))
 	for i := range po.Beams {
-		bo := &po.Beams[i]
-		b := bo.Beam
-		eb := export.PathBeam{ID: b.ID, Kind: b.Kind, Layer: b.Layer, LengthIn: b.LengthIn,
-			Start: [2]float64{b.Start.X / toInch, b.Start.Y / toInch}, End: [2]float64{b.End.X / toInch, b.End.Y / toInch},
-			StartIn: [2]float64{b.Start.X, b.Start.Y}, EndIn: [2]float64{b.End.X, b.End.Y},
-			Size: bo.Res.Size, Species: bo.Res.Species, Grade: bo.Res.Grade, Status: bo.Res.Status,
-			Governing: bo.Res.Governing, MaxRatio: bo.Res.MaxRatio, Messages: append(append([]string(nil), b.Messages...), bo.Res.Messages...)}
-		if len(b.Lines) > 0 {
-			eb.Source = b.Lines[0].String()
-		}
-		if eb.Size == "" {
-			eb.Size = bo.Input.Size
-		}
-		eb.SpansIn = bo.Res.SpansIn
-		for _, br := range b.Bearings {
-			switch br.Kind {
-			case "post":
-				eb.Supports = append(eb.Supports, plan.Posts[br.Index].ID)
-			case "wall":
-				eb.Supports = append(eb.Supports, "wall "+wallID[br.Index])
-			default:
-				eb.Supports = append(eb.Supports, plan.Beams[br.Index].ID)
-			}
-		}
-		for _, c := range b.Carried {
-			eb.Carries = append(eb.Carries, plan.Members[c.Member].ID)
-		}
-		if eb.Carries == nil {
-			eb.Carries = []string{}
-		}
-		eb.Checks = checks.of(bo.Res.Checks)
-		key := fmt.Sprintf("%s|%s|%s|%v|%.2f|%s", eb.Size, eb.Species, eb.Grade, roundUp(eb.SpansIn), eb.MaxRatio, eb.Status)
-		if marks[key] == "" {
-			marks[key] = fmt.Sprintf("B%d", len(marks)+1)
-		}
-		eb.Mark = marks[key]
-		lp.Beams = append(lp.Beams, eb)
+		beamChecks[i] = checks.of(po.Beams[i].Res.Checks)
 	}
-	// The posts, on every core (a large plan has tens of thousands), each
-	// range writing its own items; their lists of checks converted first,
-	// once per list, in order (posts alike share one).
 	for i := range po.Posts {
 		if p := &po.Posts[i]; len(p.Unknown) == 0 && p.Checked {
 			checks.of(p.Out.Result.Checks)
 		}
 	}
+	// The posts, on every core (a large plan has tens of thousands), each
+	// range writing its own items.
 	nPosts := len(po.Posts)
 	lp.Posts = lp.Posts[:nPosts]
 	lp.Connections = lp.Connections[:nPosts]
@@ -135,6 +103,28 @@ func exportLoadPath(o *outcome, toInch float64) *export.LoadPath {
 			lp.Connections[bases+x] = c
 		}
 	})
+	// The joints alike put side by side while the beams and walls are
+	// mapped (the two read and write nothing of each other's).
+	ordered := make(chan struct{})
+	go func() {
+		export.OrderConnections(lp.Connections) // joints alike side by side
+		close(ordered)
+	}()
+	lp.Beams = lp.Beams[:len(po.Beams)]
+	keys := make([]string, len(po.Beams))
+	par.Ranges(len(po.Beams), func(lo, hi int) {
+		for i := lo; i < hi; i++ {
+			lp.Beams[i], keys[i] = pathBeam(plan, &po.Beams[i], wallID, beamChecks[i], toInch)
+		}
+	})
+	// marks in the beams' order: B1 the first beam's, then each new one
+	marks := map[string]string{}
+	for i := range lp.Beams {
+		if marks[keys[i]] == "" {
+			marks[keys[i]] = "B" + strconv.Itoa(len(marks)+1)
+		}
+		lp.Beams[i].Mark = marks[keys[i]]
+	}
 	for i, w := range po.Walls {
 		if w.Loads == (loadpath.Loads{HasUpliftDead: w.Loads.HasUpliftDead, UpliftDeadLb: w.Loads.UpliftDeadLb}) {
 			continue // nothing reaches it
@@ -148,8 +138,45 @@ func exportLoadPath(o *outcome, toInch float64) *export.LoadPath {
 		}
 		lp.Foundation = append(lp.Foundation, fl)
 	}
-	export.OrderConnections(lp.Connections) // joints alike side by side
+	<-ordered
 	return lp
+}
+
+// pathBeam maps beam outcome bo as results.json's load_path lists it,
+// but for its mark, and returns the key of its mark: beams of one size,
+// lumber, spans (to the inch up), largest ratio (to 0.01) and status share
+// one. checks are its checks as converted (pathChecks.of).
+func pathBeam(plan *framing.Plan, bo *pipeline.BeamOutcome, wallID map[int]string, checks []export.Check, toInch float64) (export.PathBeam, string) {
+	b := bo.Beam
+	eb := export.PathBeam{ID: b.ID, Kind: b.Kind, Layer: b.Layer, LengthIn: b.LengthIn,
+		Start: [2]float64{b.Start.X / toInch, b.Start.Y / toInch}, End: [2]float64{b.End.X / toInch, b.End.Y / toInch},
+		StartIn: [2]float64{b.Start.X, b.Start.Y}, EndIn: [2]float64{b.End.X, b.End.Y},
+		Size: bo.Res.Size, Species: bo.Res.Species, Grade: bo.Res.Grade, Status: bo.Res.Status,
+		Governing: bo.Res.Governing, MaxRatio: bo.Res.MaxRatio, Messages: append(append([]string(nil), b.Messages...), bo.Res.Messages...)}
+	if len(b.Lines) > 0 {
+		eb.Source = b.Lines[0].String()
+	}
+	if eb.Size == "" {
+		eb.Size = bo.Input.Size
+	}
+	eb.SpansIn = bo.Res.SpansIn
+	for _, br := range b.Bearings {
+		switch br.Kind {
+		case "post":
+			eb.Supports = append(eb.Supports, plan.Posts[br.Index].ID)
+		case "wall":
+			eb.Supports = append(eb.Supports, "wall "+wallID[br.Index])
+		default:
+			eb.Supports = append(eb.Supports, plan.Beams[br.Index].ID)
+		}
+	}
+	eb.Carries = make([]string, len(b.Carried))
+	for i, c := range b.Carried {
+		eb.Carries[i] = plan.Members[c.Member].ID
+	}
+	eb.Checks = checks
+	key := fmt.Sprintf("%s|%s|%s|%v|%.2f|%s", eb.Size, eb.Species, eb.Grade, roundUp(eb.SpansIn), eb.MaxRatio, eb.Status)
+	return eb, key
 }
 
 // wallCarrier names wall i (0-based) as a connection's carrier.
