@@ -48,14 +48,59 @@ func (e *NonFiniteError) Unwrap() error { return ErrNonFinite }
 // naming the field, and the summary is recounted for it. r itself is never
 // modified; when nothing needs replacing, Sanitize returns r itself.
 func Sanitize(r *Results) (*Results, []string) {
+	return SanitizeNoted(r, FiniteNote{})
+}
+
+// FiniteNote is what NoteFinite found of a Results' members and uplift
+// report: Sanitize's look at them, taken earlier (while other work still
+// runs). It holds for those slices as they were: SanitizeNoted looks again
+// at a slice replaced since; a caller must not change their numbers in
+// place after noting them.
+type FiniteNote struct {
+	members   *Member
+	nMembers  int
+	membersOK bool
+	uplift    *UpliftReport
+	bearings  *UpliftBearing
+	nBearings int
+	upliftOK  bool
+}
+
+// NoteFinite looks at r's members and uplift report as Sanitize would
+// (whether every number of theirs that reaches the outputs is finite),
+// for SanitizeNoted.
+func NoteFinite(r *Results) FiniteNote {
+	n := FiniteNote{nMembers: len(r.Members), membersOK: membersFinite(r.Members),
+		uplift: &r.Uplift, nBearings: len(r.Uplift.Bearings), upliftOK: upliftFinite(&r.Uplift)}
+	if len(r.Members) > 0 {
+		n.members = &r.Members[0]
+	}
+	if len(r.Uplift.Bearings) > 0 {
+		n.bearings = &r.Uplift.Bearings[0]
+	}
+	return n
+}
+
+// SanitizeNoted is Sanitize, taking from note (NoteFinite of r) whether
+// r's members and uplift report are finite rather than looking again;
+// what note does not hold for (a zero note, a slice replaced since) is
+// looked at as Sanitize does.
+func SanitizeNoted(r *Results, note FiniteNote) (*Results, []string) {
 	var fields []string
 	var v reflect.Value
 	var changed bool
-	if membersFinite(r.Members) {
+	membersOK := note.membersOK
+	if !note.holdsMembers(r) {
+		membersOK = membersFinite(r.Members)
+	}
+	if membersOK {
 		// The common case, typed and fast: walk the rest reflectively,
 		// with the members (nearly all of a large plan) and the uplift
 		// bearings, when finite, left out.
-		upOK := upliftFinite(&r.Uplift)
+		upOK := note.upliftOK
+		if !note.holdsUplift(r) {
+			upOK = upliftFinite(&r.Uplift)
+		}
 		rest := *r
 		rest.Members = nil
 		if upOK {
@@ -102,6 +147,17 @@ func Sanitize(r *Results) (*Results, []string) {
 		flagged[i] = true
 	}
 	return &out, fields
+}
+
+// holdsMembers reports whether n was noted of r's members as they are.
+func (n FiniteNote) holdsMembers(r *Results) bool {
+	return n.nMembers == len(r.Members) && (len(r.Members) == 0 || n.members == &r.Members[0]) && (n.members != nil || n.uplift != nil)
+}
+
+// holdsUplift reports whether n was noted of r's uplift report as it is.
+func (n FiniteNote) holdsUplift(r *Results) bool {
+	return n.uplift == &r.Uplift && n.nBearings == len(r.Uplift.Bearings) &&
+		(len(r.Uplift.Bearings) == 0 || n.bearings == &r.Uplift.Bearings[0])
 }
 
 // membersFinite reports whether every number of the members that reaches

@@ -271,6 +271,51 @@ func TestSanitizeCleanReturnsSame(t *testing.T) {
 	}
 }
 
+// TestSanitizeNotedAsSanitize: SanitizeNoted with a note taken earlier
+// (NoteFinite) gives what Sanitize gives: the same results when clean,
+// the same fields and members put in error when a member or an uplift
+// bearing holds a NaN; a note of other results, or of members replaced
+// since, is not taken for these. Common practice, no source.
+func TestSanitizeNotedAsSanitize(t *testing.T) {
+	clean := loadFixture(t)
+	if got, fields := SanitizeNoted(clean, NoteFinite(clean)); got != clean || fields != nil {
+		t.Errorf("noted clean results = %p %v, want the same pointer and no fields", got, fields)
+	}
+	poisoned := func() *Results {
+		r := loadFixture(t)
+		r.Members[1].MaxRatio = math.NaN()
+		r.Uplift.Bearings = []UpliftBearing{{Member: r.Members[0].ID, UpliftLb: math.Inf(1)}}
+		return r
+	}
+	want, wantFields := Sanitize(poisoned())
+	r := poisoned()
+	got, fields := SanitizeNoted(r, NoteFinite(r))
+	if !slices.Equal(fields, wantFields) || len(fields) != 2 {
+		t.Errorf("noted fields = %q, want %q", fields, wantFields)
+	}
+	if got.Members[1].Status != StatusError || got.Summary != want.Summary {
+		t.Errorf("noted: member status %q, summary %+v; want error and %+v", got.Members[1].Status, got.Summary, want.Summary)
+	}
+	// a note of clean results says nothing of others
+	r = poisoned()
+	if _, fields := SanitizeNoted(r, NoteFinite(clean)); !slices.Equal(fields, wantFields) {
+		t.Errorf("another's note: fields = %q, want %q", fields, wantFields)
+	}
+	// nor of these once their members are replaced
+	r = loadFixture(t)
+	note := NoteFinite(r)
+	r.Members = slices.Clone(r.Members)
+	r.Members[2].TribIn = math.Inf(-1)
+	if _, fields := SanitizeNoted(r, note); len(fields) != 1 {
+		t.Errorf("members replaced after the note: fields = %q, want the one -Inf", fields)
+	}
+	// a zero note is Sanitize
+	r = poisoned()
+	if _, fields := SanitizeNoted(r, FiniteNote{}); !slices.Equal(fields, wantFields) {
+		t.Errorf("zero note: fields = %q, want %q", fields, wantFields)
+	}
+}
+
 func TestWriteJSONRefusesDrawingPath(t *testing.T) {
 	dir := t.TempDir()
 	path := filepath.Join(dir, "plan.DXF")

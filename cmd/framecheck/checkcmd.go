@@ -292,7 +292,7 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	// No NaN or Inf reaches any output, the summary or the exit status: a
 	// member holding one is in error, saying which value (a safety net;
 	// the checks should never produce one).
-	res, bad := export.Sanitize(res)
+	res, bad := export.SanitizeNoted(res, o.finite)
 	if len(bad) > 0 {
 		fmt.Fprintf(stderr, "framecheck: %d non-finite values written as 0 and their members put in error: %s\n",
 			len(bad), termText(strings.Join(bad[:min(len(bad), 5)], "; ")))

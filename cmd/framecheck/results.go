@@ -35,8 +35,8 @@ func exportResults(o *outcome, planName string) *export.Results {
 	// (a serial stretch each, while the cores had room). The members'
 	// mapping reads the plan and the members' results only, which the load
 	// path, when still being followed (outcome.startPath), reads too.
-	var side sync.WaitGroup
-	side.Go(func() { r.Uplift = exportUplift(plan, o.Results, o.Project.Design.UpliftReportLb, toInch) })
+	var side, uplift sync.WaitGroup
+	uplift.Go(func() { r.Uplift = exportUplift(plan, o.Results, o.Project.Design.UpliftReportLb, toInch) })
 	side.Go(func() {
 		o.waitPath() // when being followed meanwhile (startPath)
 		r.LoadPath = exportLoadPath(o, toInch)
@@ -87,6 +87,10 @@ func exportResults(o *outcome, planName string) *export.Results {
 		r.BlockingRows = append(r.BlockingRows, exportRow(plan, runs, row, ids, toInch))
 	}
 	r.Takeoff = exportTakeoff(o.Takeoff)
+	// the members' and uplift's numbers looked at for the outputs'
+	// sanitizing now, while the load path may still be followed
+	uplift.Wait()
+	o.finite = export.NoteFinite(r)
 	side.Wait()
 	return r
 }

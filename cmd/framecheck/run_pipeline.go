@@ -6,6 +6,7 @@ import (
 	"sync"
 
 	"framecheck/dxfimport"
+	"framecheck/export"
 	"framecheck/framing"
 	"framecheck/pipeline"
 	"framecheck/project"
@@ -23,6 +24,9 @@ type outcome struct {
 	// path is the load path still to follow (pipelineInput.pathLater);
 	// nil when followed before runPipeline returned
 	path *pendingPath
+	// finite is what exportResults found of its members' and uplift
+	// report's numbers, for export.SanitizeNoted
+	finite export.FiniteNote
 }
 
 // pendingPath is a load path to follow (pipeline.Start), once: in the
