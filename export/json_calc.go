@@ -61,6 +61,18 @@ func (t *calcTable) id(m *Member) string {
 	return id
 }
 
+// idOfChecks is id of a member holding only checks cs (a beam's or a
+// post's), without making one when cs's calculation is numbered already.
+func (t *calcTable) idOfChecks(cs []Check) string {
+	if len(cs) == 0 {
+		return ""
+	}
+	if id, ok := t.ids[calcKey{keyOf(cs), sliceKey[TraceItem]{}}]; ok {
+		return id
+	}
+	return t.id(&Member{Checks: cs})
+}
+
 // sliceKey names a slice by its first element and length, without
 // reflection (which would allocate for every member).
 type sliceKey[T any] struct {

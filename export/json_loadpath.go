@@ -88,15 +88,11 @@ func loadPathRefs(lp *LoadPath, calcs *calcTable) *pathRefs {
 		postDemand: make([]string, len(lp.Posts)), connDemand: make([]string, len(lp.Connections)),
 		demands: demandTable{ids: map[demand]string{}}}
 	for i := range lp.Beams {
-		if cs := lp.Beams[i].Checks; len(cs) > 0 {
-			pr.beamCalc[i] = calcs.id(&Member{Checks: cs})
-		}
+		pr.beamCalc[i] = calcs.idOfChecks(lp.Beams[i].Checks)
 	}
 	for i := range lp.Posts {
 		p := &lp.Posts[i]
-		if len(p.Checks) > 0 {
-			pr.postCalc[i] = calcs.id(&Member{Checks: p.Checks})
-		}
+		pr.postCalc[i] = calcs.idOfChecks(p.Checks)
 		pr.postDemand[i] = pr.demands.id(postDemand(p))
 	}
 	for i := range lp.Connections {
