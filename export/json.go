@@ -95,16 +95,20 @@ func SanitizeNoted(r *Results, note FiniteNote) (*Results, []string) {
 	}
 	if membersOK {
 		// The common case, typed and fast: walk the rest reflectively,
-		// with the members (nearly all of a large plan) and the uplift
-		// bearings, when finite, left out.
+		// with the members (nearly all of a large plan), the uplift
+		// bearings and the load path, when finite, left out.
 		upOK := note.upliftOK
 		if !note.holdsUplift(r) {
 			upOK = upliftFinite(&r.Uplift)
 		}
+		pathOK := r.LoadPath != nil && loadPathFinite(r.LoadPath)
 		rest := *r
 		rest.Members = nil
 		if upOK {
 			rest.Uplift.Bearings = nil
+		}
+		if pathOK {
+			rest.LoadPath = nil
 		}
 		v, changed = sanitizeValue(reflect.ValueOf(rest), make([]pathSeg, 0, 8), &fields, map[cleanSlice]bool{})
 		if changed {
@@ -112,6 +116,9 @@ func SanitizeNoted(r *Results, note FiniteNote) (*Results, []string) {
 			out.Members = r.Members
 			if upOK {
 				out.Uplift.Bearings = r.Uplift.Bearings
+			}
+			if pathOK {
+				out.LoadPath = r.LoadPath
 			}
 			v = reflect.ValueOf(out)
 		}
@@ -223,6 +230,78 @@ func membersFinite(ms []Member) bool {
 				return false
 			}
 			seenFactors[factorsID{&m.Factors[0], len(m.Factors)}] = true
+		}
+	}
+	return true
+}
+
+// loadPathFinite reports whether every number of lp is finite (those
+// results.json leaves out too), without reflection: Sanitize's fast path
+// for a plan's load path (a hundred thousand joints at 100,000 joists).
+// Beams and posts checked alike share their lists of checks, each looked
+// at once. TestLoadPathFiniteSeesEveryField holds it to every float64 of
+// LoadPath.
+func loadPathFinite(lp *LoadPath) bool {
+	fin := func(vs ...float64) bool {
+		for _, v := range vs {
+			if math.IsNaN(v) || math.IsInf(v, 0) {
+				return false
+			}
+		}
+		return true
+	}
+	loads := func(l *TypeLoads) bool {
+		return fin(l.DeadLb, l.LiveLb, l.RoofLiveLb, l.SnowLb, l.WindDownLb, l.WindUpLb, l.UpliftDeadLb)
+	}
+	type checksID struct {
+		p *Check
+		n int
+	}
+	seen := map[checksID]bool{}
+	checks := func(cs []Check) bool {
+		if len(cs) == 0 || seen[checksID{&cs[0], len(cs)}] {
+			return true
+		}
+		for i := range cs {
+			c := &cs[i]
+			if !fin(c.Actual, c.Allowable, c.Ratio) {
+				return false
+			}
+			for j := range c.Trace {
+				if !fin(c.Trace[j].Value) {
+					return false
+				}
+			}
+		}
+		seen[checksID{&cs[0], len(cs)}] = true
+		return true
+	}
+	if !loads(&lp.Applied) || !loads(&lp.Delivered) {
+		return false
+	}
+	for i := range lp.Beams {
+		b := &lp.Beams[i]
+		if !fin(b.Start[0], b.Start[1], b.End[0], b.End[1], b.StartIn[0], b.StartIn[1], b.EndIn[0], b.EndIn[1],
+			b.LengthIn, b.MaxRatio) || !fin(b.SpansIn...) || !checks(b.Checks) {
+			return false
+		}
+	}
+	for i := range lp.Posts {
+		p := &lp.Posts[i]
+		if !fin(p.At[0], p.At[1], p.AtIn[0], p.AtIn[1], p.HeightIn, p.DownLb, p.UpLb) || !loads(&p.Loads) || !checks(p.Checks) {
+			return false
+		}
+	}
+	for i := range lp.Connections {
+		c := &lp.Connections[i]
+		if !fin(c.DownLb, c.UpLb) || !loads(&c.Loads) {
+			return false
+		}
+	}
+	for i := range lp.Foundation {
+		f := &lp.Foundation[i]
+		if !fin(f.LengthIn) || !loads(&f.Loads) || !loads(&f.PerFoot) {
+			return false
 		}
 	}
 	return true

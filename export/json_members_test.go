@@ -51,7 +51,14 @@ func TestMemberEncoderMatchesMarshal(t *testing.T) {
 // not to the encoder makes TestMemberEncoderMatchesMarshal fail.
 func fullMember(t *testing.T) Member {
 	var m Member
-	v := reflect.ValueOf(&m).Elem()
+	fillFull(t, reflect.ValueOf(&m).Elem())
+	return m
+}
+
+// fillFull sets every exported field reachable from v: a distinct string,
+// number or true each, two items in every slice.
+func fillFull(t *testing.T, v reflect.Value) {
+	t.Helper()
 	n := 0
 	var fill func(f reflect.Value)
 	fill = func(f reflect.Value) {
@@ -82,11 +89,10 @@ func fullMember(t *testing.T) Member {
 				}
 			}
 		default:
-			t.Fatalf("fullMember: no filler for %s", f.Type())
+			t.Fatalf("fillFull: no filler for %s", f.Type())
 		}
 	}
 	fill(v)
-	return m
 }
 
 // awkwardJSONMember has text encoding/json escapes and numbers it writes

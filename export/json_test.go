@@ -316,6 +316,70 @@ func TestSanitizeNotedAsSanitize(t *testing.T) {
 	}
 }
 
+// TestLoadPathFiniteSeesEveryField: Sanitize's typed look at the load
+// path finds a NaN in every float64 of a LoadPath, one at a time (those
+// results.json leaves out too), on a load path with every field set (a
+// field added to the load path's types and not to loadPathFinite fails
+// here); Sanitize then names what walking all of it names. Common
+// practice, no source.
+func TestLoadPathFiniteSeesEveryField(t *testing.T) {
+	full := func() *LoadPath {
+		var lp LoadPath
+		fillFull(t, reflect.ValueOf(&lp).Elem())
+		return &lp
+	}
+	if !loadPathFinite(full()) {
+		t.Fatal("a load path of finite numbers is reported non-finite")
+	}
+	var paths [][]int
+	var walk func(v reflect.Value, path []int)
+	walk = func(v reflect.Value, path []int) {
+		switch v.Kind() {
+		case reflect.Float64:
+			paths = append(paths, slices.Clone(path))
+		case reflect.Struct:
+			for i := 0; i < v.NumField(); i++ {
+				if v.Type().Field(i).IsExported() {
+					walk(v.Field(i), append(path, i))
+				}
+			}
+		case reflect.Slice, reflect.Array:
+			for i := 0; i < v.Len(); i++ {
+				walk(v.Index(i), append(path, i))
+			}
+		}
+	}
+	walk(reflect.ValueOf(full()).Elem(), nil)
+	if len(paths) < 50 {
+		t.Fatalf("only %d numbers found in a full load path", len(paths))
+	}
+	for _, path := range paths {
+		lp := full()
+		v := reflect.ValueOf(lp).Elem()
+		for _, i := range path {
+			if v.Kind() == reflect.Struct {
+				v = v.Field(i)
+			} else {
+				v = v.Index(i)
+			}
+		}
+		v.SetFloat(math.Inf(1))
+		if loadPathFinite(lp) {
+			t.Errorf("+Inf at field path %v not seen", path)
+		}
+		// Sanitize names what the whole reflective walk names (nothing
+		// for a field results.json leaves out)
+		r := loadFixture(t)
+		r.LoadPath = lp
+		_, fields := Sanitize(r)
+		var slow []string
+		sanitizeValue(reflect.ValueOf(*r), nil, &slow, map[cleanSlice]bool{})
+		if !slices.Equal(fields, slow) {
+			t.Errorf("+Inf at field path %v: Sanitize names %q, the whole walk %q", path, fields, slow)
+		}
+	}
+}
+
 func TestWriteJSONRefusesDrawingPath(t *testing.T) {
 	dir := t.TempDir()
 	path := filepath.Join(dir, "plan.DXF")
