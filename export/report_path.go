@@ -57,13 +57,24 @@ func buildPath(r *Results) *pathSection {
 	if lp == nil {
 		return nil
 	}
-	lb := func(v float64) string { return fmtx.Lb(math.Round(v)) }
+	// a plan's posts and walls repeat their loads: each distinct value
+	// spelt once (by its bits: -0 is spelt as itself)
+	spelt := map[uint64]string{}
+	spell := func(v float64) string { // fmtx.Lb
+		if t, ok := spelt[math.Float64bits(v)]; ok {
+			return t
+		}
+		t := fmtx.Lb(v)
+		spelt[math.Float64bits(v)] = t
+		return t
+	}
+	lb := func(v float64) string { return spell(math.Round(v)) }
 	s := &pathSection{Summary: LoadPathSummary(lp)}
 	a, d := lp.Applied, lp.Delivered
 	s.Balance = "D " + lb(a.DeadLb) + " lb put on, " + lb(d.DeadLb) + " lb delivered; L " + lb(a.LiveLb) + " / " + lb(d.LiveLb) +
 		" lb; Lr " + lb(a.RoofLiveLb) + " / " + lb(d.RoofLiveLb) + " lb; S " + lb(a.SnowLb) + " / " + lb(d.SnowLb) + " lb"
 	s.Beams = pathBeams(lp.Beams)
-	s.Posts = pathPosts(lp.Posts, lb)
+	s.Posts = pathPosts(lp.Posts, lb, spell)
 	s.Joints = pathJoints(lp.Connections)
 	s.Foundation = pathFoundation(lp.Foundation, lb)
 	return s
@@ -144,8 +155,10 @@ func pathChecks(cs []Check) []pathCheckRow {
 }
 
 // pathPosts gives one row per distinct post row apart from its id, in
-// the order of its first post; a post that fails or is in error has its own.
-func pathPosts(posts []PathPost, lb func(float64) string) []pathPostRow {
+// the order of its first post; a post that fails or is in error has its
+// own. lb spells a load rounded to the pound, spell one as it is (both as
+// fmtx.Lb).
+func pathPosts(posts []PathPost, lb, spell func(float64) string) []pathPostRow {
 	return groupedRows(len(posts), func(i int) (pathPostRow, bool) {
 		p := &posts[i]
 		ratio := "not checked"
@@ -153,7 +166,7 @@ func pathPosts(posts []PathPost, lb func(float64) string) []pathPostRow {
 			ratio = fmtx.Ratio(postRatio(p))
 		}
 		row := pathPostRow{Size: p.Size, D: lb(p.Loads.DeadLb), L: lb(p.Loads.LiveLb), Lr: lb(p.Loads.RoofLiveLb), S: lb(p.Loads.SnowLb),
-			Down: fmtx.Lb(DemandLb(p.DownLb)), Up: fmtx.Lb(DemandLb(p.UpLb)), Ratio: ratio, Status: p.Status,
+			Down: spell(DemandLb(p.DownLb)), Up: spell(DemandLb(p.UpLb)), Ratio: ratio, Status: p.Status,
 			Bad: p.Status == StatusFail || p.Status == StatusError}
 		return row, !row.Bad
 	}, func(i int) string { return posts[i].ID }, func(r *pathPostRow, ids string, n int) { r.IDs, r.Count = ids, n })
