@@ -40,16 +40,24 @@ var squareSin = math.Cos(math.Pi / 180)
 // bearing was checked against their own Fc_perp only. The warnings are
 // kept in o and reported with the load path's findings (softBeamBearings).
 func beamBearings(p *project.Project, plan *framing.Plan, ins []beamIn, inputs []check.Member, usable []bool, s check.Settings, sizing bool, o *Outcome) {
+	// why Fc_perp' is not known, by lumber and size: a plan's beams are
+	// of few (beamFcPerpUnknown reads no more of the beam)
+	unknown := map[[3]string]string{}
 	for i := range plan.Beams {
 		b := &plan.Beams[i]
 		if b.Rigid || len(b.Carried) == 0 {
 			continue // a rigid bearing is no beam of the load path
 		}
-		cm, reason := ins[i].cm, ins[i].msg
+		cm, reason := &ins[i].cm, ins[i].msg
 		if reason != "" {
 			reason = "it cannot be checked, " + CodeBeamNotChecked + " says why"
 		} else {
-			reason = beamFcPerpUnknown(p, cm, s, sizing)
+			k := [3]string{cm.Species, cm.Grade, cm.Size}
+			var ok bool
+			if reason, ok = unknown[k]; !ok {
+				reason = beamFcPerpUnknown(p, *cm, s, sizing)
+				unknown[k] = reason
+			}
 		}
 		var ids []string // joists resting on it whose bearing is not checked against it
 		for _, c := range b.Carried {

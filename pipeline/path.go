@@ -306,23 +306,20 @@ func runLoadPath(p *project.Project, plan *framing.Plan, ins []beamIn, inputs []
 	})
 	onPath := make([]int, 0, len(plan.Members))
 	rsOf := make([][]check.LoadReactions, len(plan.Members))
-	nCarriers := 0
+	// the x-th member on the path has carriers[offs[x]:offs[x+1]]
+	offs := make([]int, 1, len(plan.Members)+1)
 	for k, i := range keyOf {
 		if i < 0 || !keyOK[i] {
 			continue // a member whose reactions cannot be found stays off the path
 		}
 		rsOf[k] = keyRs[i]
 		onPath = append(onPath, k)
-		nCarriers += len(plan.Members[k].Bearings)
+		offs = append(offs, offs[len(offs)-1]+len(plan.Members[k].Bearings))
 	}
 	first := len(lp.Members)
 	lp.Members = lp.Members[:first+len(onPath)]
 	po.IDs = po.IDs[:first+len(onPath)]
-	carriers := make([]loadpath.Carrier, nCarriers)
-	offs := make([]int, len(onPath)+1)
-	for x, k := range onPath {
-		offs[x+1] = offs[x] + len(plan.Members[k].Bearings)
-	}
+	carriers := make([]loadpath.Carrier, offs[len(offs)-1])
 	// each range writes only its own members' items and carriers
 	par.Ranges(len(onPath), func(lo, hi int) {
 		for x := lo; x < hi; x++ {
