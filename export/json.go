@@ -242,16 +242,18 @@ func membersFinite(ms []Member) bool {
 // at once. TestLoadPathFiniteSeesEveryField holds it to every float64 of
 // LoadPath.
 func loadPathFinite(lp *LoadPath) bool {
+	// 0*v is 0 for a finite v, NaN for NaN and ±Inf: a sum of such
+	// products is 0 only when every v is finite (and never overflows)
+	zero := func(l *TypeLoads) float64 {
+		return 0*l.DeadLb + 0*l.LiveLb + 0*l.RoofLiveLb + 0*l.SnowLb + 0*l.WindDownLb + 0*l.WindUpLb + 0*l.UpliftDeadLb
+	}
 	fin := func(vs ...float64) bool {
 		for _, v := range vs {
-			if math.IsNaN(v) || math.IsInf(v, 0) {
+			if 0*v != 0 {
 				return false
 			}
 		}
 		return true
-	}
-	loads := func(l *TypeLoads) bool {
-		return fin(l.DeadLb, l.LiveLb, l.RoofLiveLb, l.SnowLb, l.WindDownLb, l.WindUpLb, l.UpliftDeadLb)
 	}
 	type checksID struct {
 		p *Check
@@ -268,7 +270,7 @@ func loadPathFinite(lp *LoadPath) bool {
 				return false
 			}
 			for j := range c.Trace {
-				if !fin(c.Trace[j].Value) {
+				if 0*c.Trace[j].Value != 0 {
 					return false
 				}
 			}
@@ -276,7 +278,7 @@ func loadPathFinite(lp *LoadPath) bool {
 		seen[checksID{&cs[0], len(cs)}] = true
 		return true
 	}
-	if !loads(&lp.Applied) || !loads(&lp.Delivered) {
+	if zero(&lp.Applied)+zero(&lp.Delivered) != 0 {
 		return false
 	}
 	for i := range lp.Beams {
@@ -288,19 +290,19 @@ func loadPathFinite(lp *LoadPath) bool {
 	}
 	for i := range lp.Posts {
 		p := &lp.Posts[i]
-		if !fin(p.At[0], p.At[1], p.AtIn[0], p.AtIn[1], p.HeightIn, p.DownLb, p.UpLb) || !loads(&p.Loads) || !checks(p.Checks) {
+		if 0*p.At[0]+0*p.At[1]+0*p.AtIn[0]+0*p.AtIn[1]+0*p.HeightIn+0*p.DownLb+0*p.UpLb+zero(&p.Loads) != 0 || !checks(p.Checks) {
 			return false
 		}
 	}
 	for i := range lp.Connections {
 		c := &lp.Connections[i]
-		if !fin(c.DownLb, c.UpLb) || !loads(&c.Loads) {
+		if 0*c.DownLb+0*c.UpLb+zero(&c.Loads) != 0 {
 			return false
 		}
 	}
 	for i := range lp.Foundation {
 		f := &lp.Foundation[i]
-		if !fin(f.LengthIn) || !loads(&f.Loads) || !loads(&f.PerFoot) {
+		if 0*f.LengthIn+zero(&f.Loads)+zero(&f.PerFoot) != 0 {
 			return false
 		}
 	}
@@ -447,10 +449,16 @@ func jsonName(sf reflect.StructField) string {
 // write, as a *NonFiniteError (see Sanitize). A path ending in .dxf is
 // refused so that a results file can never replace a drawing.
 func WriteJSON(path string, r *Results) error {
+	return WriteJSONNoted(path, r, FiniteNote{})
+}
+
+// WriteJSONNoted is WriteJSON, taking from note (NoteFinite of r) what it
+// holds, as SanitizeNoted does.
+func WriteJSONNoted(path string, r *Results, note FiniteNote) error {
 	if err := refuseDrawing(path); err != nil {
 		return err
 	}
-	clean, fields := Sanitize(r)
+	clean, fields := SanitizeNoted(r, note)
 	err := writeAtomic(path, func(w *bufio.Writer) error {
 		return encodeResults(w, clean, layoutV3)
 	})

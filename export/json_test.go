@@ -1,6 +1,7 @@
 package export
 
 import (
+	"bytes"
 	"encoding/json"
 	"errors"
 	"math"
@@ -313,6 +314,29 @@ func TestSanitizeNotedAsSanitize(t *testing.T) {
 	r = poisoned()
 	if _, fields := SanitizeNoted(r, FiniteNote{}); !slices.Equal(fields, wantFields) {
 		t.Errorf("zero note: fields = %q, want %q", fields, wantFields)
+	}
+}
+
+// TestWriteJSONNotedAsWriteJSON: results.json written with a note of its
+// results is the file WriteJSON writes, and a NaN noted is still written as
+// 0 and reported. Common practice, no source.
+func TestWriteJSONNotedAsWriteJSON(t *testing.T) {
+	dir := t.TempDir()
+	for _, poison := range []bool{false, true} {
+		r := loadFixture(t)
+		if poison {
+			r.Members[1].MaxRatio = math.NaN()
+		}
+		a, b := filepath.Join(dir, "a.json"), filepath.Join(dir, "b.json")
+		errA, errB := WriteJSON(a, r), WriteJSONNoted(b, r, NoteFinite(r))
+		if (errA == nil) != (errB == nil) || (errA != nil && errA.(*NonFiniteError).Fields[0] != errB.(*NonFiniteError).Fields[0]) {
+			t.Errorf("poison %v: errors %v and %v", poison, errA, errB)
+		}
+		da, _ := os.ReadFile(a)
+		db, _ := os.ReadFile(b)
+		if len(da) == 0 || !bytes.Equal(da, db) {
+			t.Errorf("poison %v: the files differ (%d and %d bytes)", poison, len(da), len(db))
+		}
 	}
 }
 

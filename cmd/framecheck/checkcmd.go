@@ -486,7 +486,9 @@ func (c *checkRun) write(o *outcome, res *export.Results, proj *project.Project,
 	// (the overlay, when written, takes it after all are done).
 	var mk export.Markup
 	jobs := []func() error{
-		func() error { return export.WriteJSON(set.path(names[0]), res) },
+		// res as sanitized: what exportResults noted still holds for it
+		// when sanitizing changed nothing (the same results)
+		func() error { return export.WriteJSONNoted(set.path(names[0]), res, o.finite) },
 		func() error { return export.WriteXLSX(set.path(names[1]), res) },
 		func() error {
 			return export.WriteReportWith(set.path(names[4]), res, planGeometry(o), when,
