@@ -436,18 +436,20 @@ func assumptions(o *outcome) export.Assumptions {
 			a.Zones[len(a.Zones)-1].UpliftDeadPsf = &v
 		}
 	}
-	seen := map[string]bool{}
+	type dvKey struct{ species, grade, size string }
+	seen := map[dvKey]bool{}
+	var last dvKey
 	for k := range o.Results {
 		res := &o.Results[k]
 		v := res.Values
 		if v == nil || v.Species == "" {
 			continue
 		}
-		key := v.Species + "|" + v.Grade + "|" + res.Size
-		if seen[key] {
-			continue
+		key := dvKey{v.Species, v.Grade, res.Size}
+		if key == last || seen[key] {
+			continue // members alike follow one another
 		}
-		seen[key] = true
+		seen[key], last = true, key
 		for _, dv := range []struct {
 			name string
 			val  float64
@@ -544,15 +546,19 @@ func drawingFindings(o *outcome) []string {
 	// the findings' places that are a member's: a plan has far fewer
 	// findings than members, so the set is of the findings' places
 	own := map[dxfimport.Pos]bool{}
+	lines := map[int]bool{} // the places' lines: most members' are none of them
 	for _, is := range o.Issues {
 		if is.Severity >= dxfimport.SevWarning {
 			own[is.Pos] = false
+			lines[is.Pos.Line] = true
 		}
 	}
 	if len(own) > 0 {
 		for k := range o.Plan.Members {
-			if _, ok := own[o.Plan.Members[k].Pos]; ok {
-				own[o.Plan.Members[k].Pos] = true
+			if p := o.Plan.Members[k].Pos; lines[p.Line] {
+				if _, ok := own[p]; ok {
+					own[p] = true
+				}
 			}
 		}
 	}
