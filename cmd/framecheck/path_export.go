@@ -5,6 +5,7 @@ import (
 	"math"
 	"strconv"
 	"strings"
+	"sync/atomic"
 
 	"framecheck/check"
 	"framecheck/export"
@@ -31,24 +32,68 @@ func exportLoadPath(o *outcome, toInch float64) *export.LoadPath {
 	for i, w := range po.Walls {
 		wallID[w.Support] = fmt.Sprintf("W%d", i+1)
 	}
+	// The joints first, on every core (a large plan has a hundred
+	// thousand), each range writing its own, after the posts' bases; then
+	// put side by side, joints alike, while the rest is mapped. A joint
+	// is never of a post base's kind, so no group spans the two: the
+	// bases put side by side, then the joints, are all of them put so
+	// (export.OrderConnections). Were one of that kind, all are ordered
+	// at once at the end.
+	nPosts := len(po.Posts)
+	lp.Connections = lp.Connections[:nPosts+len(po.Joints)]
+	var baseKinds atomic.Bool
+	par.Ranges(len(po.Joints), func(lo, hi int) {
+		for x := lo; x < hi; x++ {
+			jt := &po.Joints[x]
+			c := export.Connection{Kind: jt.Kind, Member: po.IDs[jt.Member], Bearing: jt.Bearing + 1, Loads: typeLoads(jt.Loads),
+				DownLb: jt.DownLb, DownCombo: jt.DownCombo, UpLb: jt.UpLb, UpCombo: jt.UpCombo}
+			switch jt.Carrier.Kind {
+			case loadpath.Member:
+				c.Carrier = po.IDs[jt.Carrier.Index]
+			case loadpath.Post:
+				c.Carrier = plan.Posts[jt.Carrier.Index].ID
+			case loadpath.Wall:
+				c.Carrier = wallCarrier(jt.Carrier.Index)
+			default:
+				c.Carrier = "rigid support"
+			}
+			if c.Kind == postBase {
+				baseKinds.Store(true)
+			}
+			lp.Connections[nPosts+x] = c
+		}
+	})
+	apart := !baseKinds.Load()
+	ordered := make(chan struct{})
+	go func() {
+		if apart {
+			export.OrderConnections(lp.Connections[nPosts:])
+		}
+		close(ordered)
+	}()
 	// Every list of checks converted first, once per list, in order
 	// (beams and posts alike share one); the items then read them on
 	// every core.
-	checks := pathChecks{}
-	beamChecks := make([][]export.Check, len(po.Beams))
+	var lists pathLists
+	beamList := make([]int, len(po.Beams))
 	for i := range po.Beams {
-		beamChecks[i] = checks.of(po.Beams[i].Res.Checks)
+		beamList[i] = lists.add(po.Beams[i].Res.Checks)
 	}
 	for i := range po.Posts {
 		if p := &po.Posts[i]; len(p.Unknown) == 0 && p.Checked {
-			checks.of(p.Out.Result.Checks)
+			lists.add(p.Out.Result.Checks)
+		}
+	}
+	checks := lists.convert()
+	beamChecks := make([][]export.Check, len(po.Beams))
+	for i, l := range beamList {
+		if l >= 0 {
+			beamChecks[i] = lists.out[l]
 		}
 	}
 	// The posts, on every core (a large plan has tens of thousands), each
 	// range writing its own items.
-	nPosts := len(po.Posts)
 	lp.Posts = lp.Posts[:nPosts]
-	lp.Connections = lp.Connections[:nPosts]
 	lp.Foundation = lp.Foundation[:nPosts]
 	par.Ranges(nPosts, func(lo, hi int) {
 		for i := lo; i < hi; i++ {
@@ -76,40 +121,11 @@ func exportLoadPath(o *outcome, toInch float64) *export.LoadPath {
 				ep.Messages = []string{"no size or height: its load is reported, not checked (give a size beside it and [[post]] height_in)"}
 			}
 			lp.Posts[i] = ep
-			lp.Connections[i] = export.Connection{Kind: "post base", Member: pt.ID, Bearing: 1, Carrier: "foundation",
+			lp.Connections[i] = export.Connection{Kind: postBase, Member: pt.ID, Bearing: 1, Carrier: "foundation",
 				Loads: ep.Loads, DownLb: ep.DownLb, DownCombo: ep.DownCombo, UpLb: ep.UpLb, UpCombo: ep.UpCombo}
 			lp.Foundation[i] = export.FoundationLine{Kind: "post", ID: pt.ID, Source: ep.Source, Loads: ep.Loads}
 		}
 	})
-	// the joints, on every core (a large plan has a hundred thousand),
-	// each range writing its own
-	bases := len(lp.Connections)
-	lp.Connections = lp.Connections[:bases+len(po.Joints)]
-	par.Ranges(len(po.Joints), func(lo, hi int) {
-		for x := lo; x < hi; x++ {
-			jt := &po.Joints[x]
-			c := export.Connection{Kind: jt.Kind, Member: po.IDs[jt.Member], Bearing: jt.Bearing + 1, Loads: typeLoads(jt.Loads),
-				DownLb: jt.DownLb, DownCombo: jt.DownCombo, UpLb: jt.UpLb, UpCombo: jt.UpCombo}
-			switch jt.Carrier.Kind {
-			case loadpath.Member:
-				c.Carrier = po.IDs[jt.Carrier.Index]
-			case loadpath.Post:
-				c.Carrier = plan.Posts[jt.Carrier.Index].ID
-			case loadpath.Wall:
-				c.Carrier = wallCarrier(jt.Carrier.Index)
-			default:
-				c.Carrier = "rigid support"
-			}
-			lp.Connections[bases+x] = c
-		}
-	})
-	// The joints alike put side by side while the beams and walls are
-	// mapped (the two read and write nothing of each other's).
-	ordered := make(chan struct{})
-	go func() {
-		export.OrderConnections(lp.Connections) // joints alike side by side
-		close(ordered)
-	}()
 	lp.Beams = lp.Beams[:len(po.Beams)]
 	keys := make([]string, len(po.Beams))
 	par.Ranges(len(po.Beams), func(lo, hi int) {
@@ -139,13 +155,21 @@ func exportLoadPath(o *outcome, toInch float64) *export.LoadPath {
 		lp.Foundation = append(lp.Foundation, fl)
 	}
 	<-ordered
+	if apart {
+		export.OrderConnections(lp.Connections[:nPosts])
+	} else {
+		export.OrderConnections(lp.Connections)
+	}
 	return lp
 }
+
+// postBase is the kind of joint of a post on the foundation.
+const postBase = "post base"
 
 // pathBeam maps beam outcome bo as results.json's load_path lists it,
 // but for its mark, and returns the key of its mark: beams of one size,
 // lumber, spans (to the inch up), largest ratio (to 0.01) and status share
-// one. checks are its checks as converted (pathChecks.of).
+// one. checks are its checks as converted (pathLists).
 func pathBeam(plan *framing.Plan, bo *pipeline.BeamOutcome, wallID map[int]string, checks []export.Check, toInch float64) (export.PathBeam, string) {
 	b := bo.Beam
 	eb := export.PathBeam{ID: b.ID, Kind: b.Kind, Layer: b.Layer, LengthIn: b.LengthIn,
@@ -179,41 +203,68 @@ func pathBeam(plan *framing.Plan, bo *pipeline.BeamOutcome, wallID map[int]strin
 	return eb, key
 }
 
+// pathLists are the distinct lists of checks of a load path's beams and
+// posts, converted once each (beams and posts checked alike share their
+// check.Result's list: the load path analyses them once).
+type pathLists struct {
+	lists [][]check.CheckResult
+	out   [][]export.Check
+	index map[*check.CheckResult]int // by first check: the last list added
+}
+
+// add adds cs, when not already added, and returns its index (-1 for an
+// empty list).
+func (pl *pathLists) add(cs []check.CheckResult) int {
+	if len(cs) == 0 {
+		return -1
+	}
+	if pl.index == nil {
+		pl.index = map[*check.CheckResult]int{}
+	}
+	if i, ok := pl.index[&cs[0]]; ok && len(pl.lists[i]) == len(cs) {
+		return i
+	}
+	pl.index[&cs[0]] = len(pl.lists)
+	pl.lists = append(pl.lists, cs)
+	return len(pl.lists) - 1
+}
+
+// convert converts every list added, on every core, and returns them by
+// their first check (pathChecks: what converted gives).
+func (pl *pathLists) convert() pathChecks {
+	pl.out = make([][]export.Check, len(pl.lists))
+	par.Each(len(pl.lists), func(i int) {
+		cs := pl.lists[i]
+		out := make([]export.Check, len(cs))
+		for j, c := range cs {
+			out[j] = export.Check{Kind: c.Kind, Combo: c.Combo, Actual: c.Actual, Allowable: c.Allowable,
+				Unit: c.Unit, Ratio: c.Ratio, Trace: exportTrace(c.Trace())}
+		}
+		pl.out[i] = out
+	})
+	pc := pathChecks{}
+	for first, i := range pl.index {
+		pc[first] = pl.out[i]
+	}
+	return pc
+}
+
 // wallCarrier names wall i (0-based) as a connection's carrier.
 func wallCarrier(i int) string { return "wall W" + strconv.Itoa(i+1) }
 
-// pathChecks converts each list of checks once: beams and posts checked
-// alike share their check.Result's list (the load path analyses them
-// once), and so share one converted list, which results.json writes once
-// (its load path's "calculations").
+// pathChecks are the lists of checks as converted (pathLists.convert), by
+// their first check: beams and posts checked alike share their
+// check.Result's list, and so share one converted list, which results.json
+// writes once (its load path's "calculations").
 type pathChecks map[*check.CheckResult][]export.Check
 
-// converted returns what of returned for cs, without converting: safe
-// from several goroutines once every list they ask for went through of;
-// nil when cs is empty.
+// converted returns cs as converted, nil when cs is empty: safe from
+// several goroutines.
 func (pc pathChecks) converted(cs []check.CheckResult) []export.Check {
 	if len(cs) == 0 {
 		return nil
 	}
 	return pc[&cs[0]]
-}
-
-// of returns cs as the outputs hold them, with their traces; nil when cs
-// is empty.
-func (pc pathChecks) of(cs []check.CheckResult) []export.Check {
-	if len(cs) == 0 {
-		return nil
-	}
-	if out, ok := pc[&cs[0]]; ok && len(out) == len(cs) {
-		return out
-	}
-	out := make([]export.Check, len(cs))
-	for i, c := range cs {
-		out[i] = export.Check{Kind: c.Kind, Combo: c.Combo, Actual: c.Actual, Allowable: c.Allowable,
-			Unit: c.Unit, Ratio: c.Ratio, Trace: exportTrace(c.Trace())}
-	}
-	pc[&cs[0]] = out
-	return out
 }
 
 func typeLoads(l loadpath.Loads) export.TypeLoads {
