@@ -3,6 +3,7 @@ package export
 import (
 	"bufio"
 	"encoding/json"
+	"math"
 	"strconv"
 	"strings"
 )
@@ -168,7 +169,110 @@ func (t *infoTable) write(w *bufio.Writer, key func(string)) error {
 // write writes "calculations" as a JSON object, one entry per line, in
 // the order of their ids.
 func (t *calcTable) write(w *bufio.Writer, key func(string), round bool) error {
-	return writeIDObject(w, key, "calculations", "C", len(t.order), func(i int) any { return calculation(t.order[i], round) })
+	key("calculations")
+	if len(t.order) == 0 {
+		w.WriteString("{}")
+		return nil
+	}
+	w.WriteString("{\n")
+	var b []byte
+	for i := range t.order {
+		c := calculation(t.order[i], round)
+		var ok bool
+		if b, ok = appendCalculation(b[:0], &c); !ok {
+			var err error
+			if b, err = json.Marshal(c); err != nil { // saying which number
+				return err
+			}
+		}
+		w.WriteString("  \"C" + strconv.Itoa(i+1) + "\": ")
+		w.Write(b)
+		if i < len(t.order)-1 {
+			w.WriteByte(',')
+		}
+		w.WriteByte('\n')
+	}
+	w.WriteString(" }")
+	return nil
+}
+
+// appendCalculation appends c as encoding/json writes it (keys in the
+// struct's order, a nil list as null, strings and numbers as
+// appendJSONString and appendJSONFloat write them:
+// TestCalculationEncoderMatchesMarshal); ok is false, and b of no use,
+// when a number is not finite, which encoding/json refuses.
+func appendCalculation(b []byte, c *Calculation) (_ []byte, ok bool) {
+	ok = true
+	num := func(b []byte, v float64) []byte {
+		if math.IsNaN(v) || math.IsInf(v, 0) {
+			ok = false
+			return b
+		}
+		return appendJSONFloat(b, v)
+	}
+	items := func(b []byte, ts []TraceItem) []byte {
+		if ts == nil {
+			return append(b, "null"...)
+		}
+		b = append(b, '[')
+		for i := range ts {
+			t := &ts[i]
+			if i > 0 {
+				b = append(b, ',')
+			}
+			b = append(b, `{"name":`...)
+			b = appendJSONString(b, t.Name)
+			b = append(b, `,"value":`...)
+			b = num(b, t.Value)
+			b = append(b, `,"unit":`...)
+			b = appendJSONString(b, t.Unit)
+			if t.Source != "" {
+				b = append(b, `,"source":`...)
+				b = appendJSONString(b, t.Source)
+			}
+			if t.Formula != "" {
+				b = append(b, `,"formula":`...)
+				b = appendJSONString(b, t.Formula)
+			}
+			if t.Subst != "" {
+				b = append(b, `,"subst":`...)
+				b = appendJSONString(b, t.Subst)
+			}
+			b = append(b, '}')
+		}
+		return append(b, ']')
+	}
+	b = append(b, `{"checks":`...)
+	if c.Checks == nil {
+		b = append(b, "null"...)
+	} else {
+		b = append(b, '[')
+		for i := range c.Checks {
+			ch := &c.Checks[i]
+			if i > 0 {
+				b = append(b, ',')
+			}
+			b = append(b, `{"kind":`...)
+			b = appendJSONString(b, ch.Kind)
+			b = append(b, `,"combo":`...)
+			b = appendJSONString(b, ch.Combo)
+			b = append(b, `,"actual":`...)
+			b = num(b, ch.Actual)
+			b = append(b, `,"allowable":`...)
+			b = num(b, ch.Allowable)
+			b = append(b, `,"unit":`...)
+			b = appendJSONString(b, ch.Unit)
+			b = append(b, `,"ratio":`...)
+			b = num(b, ch.Ratio)
+			b = append(b, `,"trace":`...)
+			b = items(b, ch.Trace)
+			b = append(b, '}')
+		}
+		b = append(b, ']')
+	}
+	b = append(b, `,"factors":`...)
+	b = items(b, c.Factors)
+	return append(b, '}'), ok
 }
 
 // writeIDObject writes the top-level key name as a JSON object of n
