@@ -159,6 +159,16 @@ func pathChecks(cs []Check) []pathCheckRow {
 // own. lb spells a load rounded to the pound, spell one as it is (both as
 // fmtx.Lb).
 func pathPosts(posts []PathPost, lb, spell func(float64) string) []pathPostRow {
+	// a demand spelt once per distinct load (posts alike carry the same)
+	demands := map[uint64]string{}
+	demand := func(v float64) string {
+		t, ok := demands[math.Float64bits(v)]
+		if !ok {
+			t = spell(DemandLb(v))
+			demands[math.Float64bits(v)] = t
+		}
+		return t
+	}
 	return groupedRows(len(posts), func(i int) (pathPostRow, bool) {
 		p := &posts[i]
 		ratio := "not checked"
@@ -166,7 +176,7 @@ func pathPosts(posts []PathPost, lb, spell func(float64) string) []pathPostRow {
 			ratio = fmtx.Ratio(postRatio(p))
 		}
 		row := pathPostRow{Size: p.Size, D: lb(p.Loads.DeadLb), L: lb(p.Loads.LiveLb), Lr: lb(p.Loads.RoofLiveLb), S: lb(p.Loads.SnowLb),
-			Down: spell(DemandLb(p.DownLb)), Up: spell(DemandLb(p.UpLb)), Ratio: ratio, Status: p.Status,
+			Down: demand(p.DownLb), Up: demand(p.UpLb), Ratio: ratio, Status: p.Status,
 			Bad: p.Status == StatusFail || p.Status == StatusError}
 		return row, !row.Bad
 	}, func(i int) string { return posts[i].ID }, func(r *pathPostRow, ids string, n int) { r.IDs, r.Count = ids, n })
