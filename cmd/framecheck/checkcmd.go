@@ -249,14 +249,13 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		}
 	}
 	// The load path is followed while the members are mapped for the
-	// outputs (exportResults), after a collection of what checking the
-	// members left behind.
-	collected := false // by loadPathGC, before the mapping
-	if pipeline.HasLoadPath(o.Plan) {
+	// outputs (exportResults), the collector paused until the writers.
+	hasPath := pipeline.HasLoadPath(o.Plan)
+	if hasPath {
 		// the load path's outputs follow its beams, posts and joints
 		scaleMemoryLimit(int64(len(data)), pathItems(o.Plan))
-		collected = loadPathGC(true)
 	}
+	defer pathGC(hasPath)()
 	o.startPath()
 	if o.MarksFresh {
 		fmt.Fprintf(stderr, "framecheck: none of the %d marks kept in %s is on this plan: the marks are named afresh from J1\n",
@@ -280,7 +279,7 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		printIssues(stderr, o.Issues, c.verbose)
 		return exitUsage
 	}
-	if !collected {
+	if !hasPath {
 		mappingGC(len(o.Plan.Members))
 	}
 	res := exportResults(o, c.planPath)
@@ -302,7 +301,7 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	// and the inputs dropped before the writers run.
 	c.bad = badGroups(o, res, proj)
 	o.Inputs = nil
-	defer writersGC(!collected)()
+	defer writersGC()()
 	written, err := c.write(o, res, proj, stderr)
 	if err != nil {
 		// Every failure to write is one of the machine (a full disk, a

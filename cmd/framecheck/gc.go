@@ -126,27 +126,17 @@ func tuneGC() {
 const writersGCPercent = 100
 
 // writersGC collects what the checks left behind once the results are
-// mapped for export, unless collect is false, and sets writersGCPercent
-// for the writers, when tuneGC chose the collector's percentage (not when
-// the user set GOGC); the returned function puts the percentage back (a
-// process that checks several plans, the benchmarks).
-//
-// collect is false when loadPathGC collected just before the load path
-// and the mapping: what the checks left is freed already, and a second
-// collection would mostly find the mapping's output, which the writers
-// read. Measured on the 100,000-joist bigplan with -beams on this
-// project's 2-vCPU machine (six to seven alternated runs, load about 1),
-// the load path followed before the mapping: 2.09-2.16 s wall, 3.51 s CPU,
-// 561 MiB with both collections; 2.01-2.11 s, 3.41 s, 563 MiB without the
-// second; followed beside the mapping, 1.93-2.02 s with both and 1.96-2.02
-// s without (the same within the runs' spread: not made).
-func writersGC(collect bool) (restore func()) {
+// mapped for export and sets writersGCPercent for the writers, when tuneGC
+// chose the collector's percentage (not when the user set GOGC); the
+// returned function puts the percentage back (a process that checks
+// several plans, the benchmarks). With the collector paused for the load
+// path (pathGC) the collection is made all the same, and the percentage
+// put back is the pause's, which pathGC's own function then lifts.
+func writersGC() (restore func()) {
 	if !gcTuned {
 		return func() {}
 	}
-	if collect {
-		runtime.GC()
-	}
+	runtime.GC()
 	old := debug.SetGCPercent(writersGCPercent)
 	return func() { debug.SetGCPercent(old) }
 }
@@ -166,24 +156,27 @@ func pauseGC() (resume func()) {
 	return func() { debug.SetGCPercent(old) }
 }
 
-// loadPathGC collects once the members are checked, when the plan has a
-// load path, before the path is followed and the members are mapped for
-// the outputs (the two at once): checking the members leaves their
-// working data behind, and without a collection the load path and the
-// mapping took fresh memory from the system page by page. Measured on the
-// 100,000-joist bigplan with -beams on this project's 2-vCPU machine (six
-// alternated runs each, load about 1): 2.05-2.14 s wall and 579 MiB peak
-// without, 1.90-1.98 s and 561 MiB with (when the load path was followed
-// before the mapping, with the collection between the two: 2.67-2.72 s
-// against 2.89-2.92 s). On the same plan with rigid supports (no load
-// path) a collection there cost 0.07 s, so it is not made. Does nothing
-// when the user set GOGC. It reports whether it collected.
-func loadPathGC(hasPath bool) (collected bool) {
-	if gcTuned && hasPath {
-		runtime.GC()
-		return true
+// pathGC turns the collector off (pauseGC) when the plan has a load path,
+// from the members checked until the returned function is called (after
+// the writers; writersGC collects before them): following the load path
+// and mapping the members for the outputs (the two at once) build what
+// the writers read, and a collection during them, or one before them of
+// what checking the members left, cost more than it saved. The drawing's
+// entities go before the collection that ends the grouping
+// (runPipeline), so that the pause starts from the plan as grouped and
+// checked. The soft memory limit, raised for the load path
+// (scaleMemoryLimit), still holds. Measured on the 100,000-joist bigplan
+// with -beams on this project's 2-vCPU machine (eight alternated runs,
+// load about 1): with a collection before the load path, 1.93-2.03 s
+// wall, 3.32 s CPU, 556 MiB peak; paused, 1.91-2.02 s, 3.25 s, 598 MiB;
+// five collections in the run against four. Earlier, without the
+// collection before the path, the collector ran during it and the run
+// took 2.05-2.14 s. Does nothing when the user set GOGC.
+func pathGC(hasPath bool) (resume func()) {
+	if !hasPath {
+		return func() {}
 	}
-	return false
+	return pauseGC()
 }
 
 // mappingBytesPerMember is about what mapping one checked member for the

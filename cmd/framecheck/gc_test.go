@@ -52,7 +52,7 @@ func TestWritersGC(t *testing.T) {
 	old := debug.SetGCPercent(gcPercent)
 	defer debug.SetGCPercent(old)
 	gcTuned = true
-	restore := writersGC(true)
+	restore := writersGC()
 	if got := debug.SetGCPercent(writersGCPercent); got != writersGCPercent {
 		t.Errorf("during the writers: GOGC %d, want %d", got, writersGCPercent)
 	}
@@ -62,7 +62,37 @@ func TestWritersGC(t *testing.T) {
 	}
 	gcTuned = false
 	debug.SetGCPercent(123)
-	writersGC(false)()
+	writersGC()()
+	if got := debug.SetGCPercent(gcPercent); got != 123 {
+		t.Errorf("GOGC set by the user: changed to %d", got)
+	}
+}
+
+// TestPathGC: with a load path the collector is off until the returned
+// function puts the percentage back, even after the writers' own
+// percentage came and went; without one, or with GOGC set by the user,
+// nothing changes (common practice, no source: the numbers are ours).
+func TestPathGC(t *testing.T) {
+	defer func(v bool) { gcTuned = v }(gcTuned)
+	old := debug.SetGCPercent(gcPercent)
+	defer debug.SetGCPercent(old)
+	gcTuned = true
+	resume := pathGC(true)
+	if got := debug.SetGCPercent(-1); got != -1 {
+		t.Errorf("load path: GOGC %d, want off", got)
+	}
+	writersGC()()
+	resume()
+	if got := debug.SetGCPercent(gcPercent); got != gcPercent {
+		t.Errorf("after: GOGC %d, want %d", got, gcPercent)
+	}
+	pathGC(false)()
+	if got := debug.SetGCPercent(gcPercent); got != gcPercent {
+		t.Errorf("no load path: GOGC %d, want %d", got, gcPercent)
+	}
+	gcTuned = false
+	debug.SetGCPercent(123)
+	pathGC(true)()
 	if got := debug.SetGCPercent(gcPercent); got != 123 {
 		t.Errorf("GOGC set by the user: changed to %d", got)
 	}

@@ -105,7 +105,13 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 		return nil, err
 	}
 	plan := framing.Group(d, pipeline.FramingOptions(p))
-	resume()
+	// With a load path, the collector's pause ends once the entities are
+	// dropped (below): the collection it brings frees them, and the
+	// collector is paused again for the load path (pathGC).
+	hasPath := pipeline.HasLoadPath(plan)
+	if !hasPath {
+		resume()
+	}
 	var issues dxfimport.IssueList
 	// a doubt about the units comes first: it explains the findings after it
 	if msg := unitsDoubt(plan, d, in.units, p.Drawing.Units); msg != "" {
@@ -122,6 +128,9 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 		layers = layerRows(d, p)
 	}
 	d.Entities = nil
+	if hasPath {
+		resume()
+	}
 	spanWarnings(plan, &issues)
 	pin := pipeline.Input{Plan: plan, PlanFile: d.File, Project: p, Issues: issues, Size: in.size, Marks: in.marks}
 	if in.pathLater {
