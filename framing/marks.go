@@ -4,6 +4,8 @@ import (
 	"fmt"
 	"math"
 	"strconv"
+
+	"framecheck/internal/par"
 )
 
 // markKey is what makes two members identical for design (DOMAIN.md
@@ -99,11 +101,15 @@ func nameKey(m *Member) string { return markKey(m)[len(m.Size)+1:] }
 func MarkKeys(p *Plan) []string {
 	keys := make([]string, len(p.Members))
 	loads := pointLoadKeys(p)
-	for k := range p.Members {
-		if !p.Members[k].Error {
-			keys[k] = nameKey(&p.Members[k]) + loads[k]
+	// each member's key reads it alone: on every core, each range
+	// writing its own
+	par.Ranges(len(p.Members), func(lo, hi int) {
+		for k := lo; k < hi; k++ {
+			if !p.Members[k].Error {
+				keys[k] = nameKey(&p.Members[k]) + loads[k]
+			}
 		}
-	}
+	})
 	return keys
 }
 

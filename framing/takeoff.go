@@ -104,7 +104,12 @@ func BuildTakeoff(p *Plan, rows []BlockingRow) Takeoff {
 		size, species, grade string
 		ft                   int
 	}
-	joists := map[jk]*JoistLine{}
+	// each line with the board feet of one of its pieces, found once
+	type line struct {
+		*JoistLine
+		pieceBF float64
+	}
+	joists := map[jk]line{}
 	hangers := map[string]int{}
 	for k := range p.Members {
 		m := &p.Members[k]
@@ -112,14 +117,14 @@ func BuildTakeoff(p *Plan, rows []BlockingRow) Takeoff {
 		n, ply := splitPlies(m.Size)
 		pieces := max(1, n, m.Plies)
 		key := jk{ply, m.Species, m.Grade, OrderLengthFt(m.SlopedLengthIn())}
-		l := joists[key]
-		if l == nil {
-			l = &JoistLine{Size: ply, Species: m.Species, Grade: m.Grade, OrderLengthFt: key.ft,
-				SpecialOrder: key.ft > specialOrderFt}
+		l, ok := joists[key]
+		if !ok {
+			l = line{&JoistLine{Size: ply, Species: m.Species, Grade: m.Grade, OrderLengthFt: key.ft,
+				SpecialOrder: key.ft > specialOrderFt}, boardFeet(ply, float64(key.ft))}
 			joists[key] = l
 		}
 		l.Count += pieces
-		l.BoardFeet += float64(pieces) * boardFeet(ply, float64(key.ft))
+		l.BoardFeet += float64(pieces) * l.pieceBF
 		for _, h := range []bool{m.HangersStart, m.HangersEnd} {
 			if h {
 				hangers[m.Size]++
@@ -127,7 +132,7 @@ func BuildTakeoff(p *Plan, rows []BlockingRow) Takeoff {
 		}
 	}
 	for _, l := range joists {
-		t.Joists = append(t.Joists, *l)
+		t.Joists = append(t.Joists, *l.JoistLine)
 	}
 	sort.Slice(t.Joists, func(i, j int) bool {
 		a, b := t.Joists[i], t.Joists[j]
