@@ -249,12 +249,15 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		}
 	}
 	// The load path is followed while the members are mapped for the
-	// outputs (exportResults), the collector paused until the writers.
+	// outputs (exportResults), after a collection of what checking the
+	// members left when that is a great deal (mappingGC), the collector
+	// then paused until the writers.
 	hasPath := pipeline.HasLoadPath(o.Plan)
 	if hasPath {
 		// the load path's outputs follow its beams, posts and joints
 		scaleMemoryLimit(int64(len(data)), pathItems(o.Plan))
 	}
+	mappingGC(len(o.Plan.Members))
 	defer pathGC(hasPath)()
 	o.startPath()
 	if o.MarksFresh {
@@ -278,9 +281,6 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		o.waitPath()
 		printIssues(stderr, o.Issues, c.verbose)
 		return exitUsage
-	}
-	if !hasPath {
-		mappingGC(len(o.Plan.Members))
 	}
 	res := exportResults(o, c.planPath)
 	o.waitPath()
