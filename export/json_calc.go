@@ -163,37 +163,21 @@ func (t *infoTable) id(info []string) string {
 
 // write writes "info_lists" as a JSON object, one list per line.
 func (t *infoTable) write(w *bufio.Writer, key func(string)) error {
-	return writeIDObject(w, key, "info_lists", "I", len(t.order), func(i int) any { return t.order[i] })
+	return writeIDObject(w, key, "info_lists", "I", len(t.order), func(i int, _ []byte) ([]byte, error) {
+		return json.Marshal(t.order[i])
+	})
 }
 
 // write writes "calculations" as a JSON object, one entry per line, in
 // the order of their ids.
 func (t *calcTable) write(w *bufio.Writer, key func(string), round bool) error {
-	key("calculations")
-	if len(t.order) == 0 {
-		w.WriteString("{}")
-		return nil
-	}
-	w.WriteString("{\n")
-	var b []byte
-	for i := range t.order {
+	return writeIDObject(w, key, "calculations", "C", len(t.order), func(i int, b []byte) ([]byte, error) {
 		c := calculation(t.order[i], round)
-		var ok bool
-		if b, ok = appendCalculation(b[:0], &c); !ok {
-			var err error
-			if b, err = json.Marshal(c); err != nil { // saying which number
-				return err
-			}
+		if b, ok := appendCalculation(b, &c); ok {
+			return b, nil
 		}
-		w.WriteString("  \"C" + strconv.Itoa(i+1) + "\": ")
-		w.Write(b)
-		if i < len(t.order)-1 {
-			w.WriteByte(',')
-		}
-		w.WriteByte('\n')
-	}
-	w.WriteString(" }")
-	return nil
+		return json.Marshal(c) // which says which number
+	})
 }
 
 // appendCalculation appends c as encoding/json writes it (keys in the
@@ -276,20 +260,23 @@ func appendCalculation(b []byte, c *Calculation) (_ []byte, ok bool) {
 }
 
 // writeIDObject writes the top-level key name as a JSON object of n
-// entries, one per line, with ids prefix+1, prefix+2, ... in order; item
-// gives the i-th (0-based) entry's value.
-func writeIDObject(w *bufio.Writer, key func(string), name, prefix string, n int, item func(int) any) error {
+// entries, one per line, with ids prefix+1, prefix+2, ... in order; enc
+// gives the i-th (0-based) entry's JSON, appended to b (a buffer it may
+// reuse) or of its own.
+func writeIDObject(w *bufio.Writer, key func(string), name, prefix string, n int, enc func(i int, b []byte) ([]byte, error)) error {
 	key(name)
 	if n == 0 {
 		w.WriteString("{}")
 		return nil
 	}
 	w.WriteString("{\n")
+	var buf []byte
 	for i := 0; i < n; i++ {
-		b, err := json.Marshal(item(i))
+		b, err := enc(i, buf[:0])
 		if err != nil {
 			return err
 		}
+		buf = b
 		w.WriteString("  \"" + prefix + strconv.Itoa(i+1) + "\": ")
 		w.Write(b)
 		if i < n-1 {

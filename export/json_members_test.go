@@ -4,6 +4,7 @@ import (
 	"bytes"
 	"encoding/json"
 	"reflect"
+	"slices"
 	"strconv"
 	"testing"
 )
@@ -53,6 +54,44 @@ func fullMember(t *testing.T) Member {
 	var m Member
 	fillFull(t, reflect.ValueOf(&m).Elem())
 	return m
+}
+
+// floatLeaves returns the path (field and element indexes) of every
+// float64 reachable from v's exported fields; with jsonOnly, leaving out
+// the fields tagged json:"-".
+func floatLeaves(v reflect.Value, jsonOnly bool) [][]int {
+	var paths [][]int
+	var walk func(v reflect.Value, path []int)
+	walk = func(v reflect.Value, path []int) {
+		switch v.Kind() {
+		case reflect.Float64:
+			paths = append(paths, slices.Clone(path))
+		case reflect.Struct:
+			for i := 0; i < v.NumField(); i++ {
+				if f := v.Type().Field(i); f.IsExported() && !(jsonOnly && f.Tag.Get("json") == "-") {
+					walk(v.Field(i), append(path, i))
+				}
+			}
+		case reflect.Slice, reflect.Array:
+			for i := 0; i < v.Len(); i++ {
+				walk(v.Index(i), append(path, i))
+			}
+		}
+	}
+	walk(v, nil)
+	return paths
+}
+
+// leafAt returns the value at path (floatLeaves) from v.
+func leafAt(v reflect.Value, path []int) reflect.Value {
+	for _, i := range path {
+		if v.Kind() == reflect.Struct {
+			v = v.Field(i)
+		} else {
+			v = v.Index(i)
+		}
+	}
+	return v
 }
 
 // fillFull sets every exported field reachable from v: a distinct string,

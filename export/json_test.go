@@ -355,39 +355,13 @@ func TestLoadPathFiniteSeesEveryField(t *testing.T) {
 	if !loadPathFinite(full()) {
 		t.Fatal("a load path of finite numbers is reported non-finite")
 	}
-	var paths [][]int
-	var walk func(v reflect.Value, path []int)
-	walk = func(v reflect.Value, path []int) {
-		switch v.Kind() {
-		case reflect.Float64:
-			paths = append(paths, slices.Clone(path))
-		case reflect.Struct:
-			for i := 0; i < v.NumField(); i++ {
-				if v.Type().Field(i).IsExported() {
-					walk(v.Field(i), append(path, i))
-				}
-			}
-		case reflect.Slice, reflect.Array:
-			for i := 0; i < v.Len(); i++ {
-				walk(v.Index(i), append(path, i))
-			}
-		}
-	}
-	walk(reflect.ValueOf(full()).Elem(), nil)
+	paths := floatLeaves(reflect.ValueOf(full()).Elem(), false)
 	if len(paths) < 50 {
 		t.Fatalf("only %d numbers found in a full load path", len(paths))
 	}
 	for _, path := range paths {
 		lp := full()
-		v := reflect.ValueOf(lp).Elem()
-		for _, i := range path {
-			if v.Kind() == reflect.Struct {
-				v = v.Field(i)
-			} else {
-				v = v.Index(i)
-			}
-		}
-		v.SetFloat(math.Inf(1))
+		leafAt(reflect.ValueOf(lp).Elem(), path).SetFloat(math.Inf(1))
 		if loadPathFinite(lp) {
 			t.Errorf("+Inf at field path %v not seen", path)
 		}
@@ -430,40 +404,13 @@ func TestMembersFiniteSeesEveryField(t *testing.T) {
 		t.Fatal("a member of finite numbers is reported non-finite")
 	}
 	// Count the float64 leaves that reach the JSON, then poison each.
-	var paths [][]int
-	var walk func(v reflect.Value, path []int)
-	walk = func(v reflect.Value, path []int) {
-		switch v.Kind() {
-		case reflect.Float64:
-			paths = append(paths, slices.Clone(path))
-		case reflect.Struct:
-			for i := 0; i < v.NumField(); i++ {
-				if f := v.Type().Field(i); f.IsExported() && f.Tag.Get("json") != "-" {
-					walk(v.Field(i), append(path, i))
-				}
-			}
-		case reflect.Slice, reflect.Array:
-			for i := 0; i < v.Len(); i++ {
-				walk(v.Index(i), append(path, i))
-			}
-		}
-	}
-	m := fullMember(t)
-	walk(reflect.ValueOf(m), nil)
+	paths := floatLeaves(reflect.ValueOf(fullMember(t)), true)
 	if len(paths) < 20 {
 		t.Fatalf("only %d numbers found in a full member", len(paths))
 	}
 	for _, path := range paths {
 		m := fullMember(t)
-		v := reflect.ValueOf(&m).Elem()
-		for _, i := range path {
-			if v.Kind() == reflect.Struct {
-				v = v.Field(i)
-			} else {
-				v = v.Index(i)
-			}
-		}
-		v.SetFloat(math.NaN())
+		leafAt(reflect.ValueOf(&m).Elem(), path).SetFloat(math.NaN())
 		if membersFinite([]Member{m}) {
 			t.Errorf("NaN at field path %v not seen", path)
 		}
