@@ -146,3 +146,26 @@ func TestCutFixtures(t *testing.T) {
 		}
 	}
 }
+
+// TestPosString: a place is written file:line (handle H, layer L), each
+// part only when known, as the findings and the outputs name it. Common
+// practice, no source.
+func TestPosString(t *testing.T) {
+	for _, c := range []struct {
+		p    Pos
+		want string
+	}{
+		{Pos{}, ""},
+		{Pos{File: "plan.dxf"}, "plan.dxf"},
+		{Pos{File: "plan.dxf", Line: 1233}, "plan.dxf:1233"},
+		{Pos{File: "plan.dxf", Line: -4}, "plan.dxf"},
+		{Pos{File: "plan.dxf", Line: 7, Handle: "3E"}, "plan.dxf:7 (handle 3E)"},
+		{Pos{File: "plan.dxf", Line: 7, Layer: "JOIST-FLOOR"}, "plan.dxf:7 (layer JOIST-FLOOR)"},
+		{Pos{File: "a b.dxf", Line: 1233, Handle: "3E", Layer: "JOIST-FLOOR"}, "a b.dxf:1233 (handle 3E, layer JOIST-FLOOR)"},
+		{Pos{Handle: "1F", Layer: "L"}, " (handle 1F, layer L)"},
+	} {
+		if got := c.p.String(); got != c.want {
+			t.Errorf("%#v: %q, want %q", c.p, got, c.want)
+		}
+	}
+}
