@@ -14,6 +14,9 @@ func FtIn(in float64) string {
 	return string(appendFtIn(buf[:0], in))
 }
 
+// AppendFtIn appends FtIn(in) to b, without allocating when b has room.
+func AppendFtIn(b []byte, in float64) []byte { return appendFtIn(b, in) }
+
 // appendFtIn appends FtIn(in) to b without allocating. Appended by hand
 // rather than with fmt: a plan's schedule, locations and labels format
 // hundreds of thousands of lengths.

@@ -39,3 +39,21 @@ func TestDrawingFindingsLeaveMembersOwn(t *testing.T) {
 		}
 	}
 }
+
+// TestLocationText: a member's location names its file, handle (or line)
+// and layer, then its ends in feet and inches, as its doc says. Common
+// practice, no source.
+func TestLocationText(t *testing.T) {
+	for _, c := range []struct {
+		p    dxfimport.Pos
+		want string
+	}{
+		{dxfimport.Pos{File: "plan.dxf", Line: 9, Handle: "43", Layer: "JOIST-FLOOR"}, `plan.dxf handle 43 (layer JOIST-FLOOR), 49'-9 3/4", 2'-0" to 61'-11 1/4", 2'-0"`},
+		{dxfimport.Pos{File: "plan.dxf", Line: 9}, `plan.dxf line 9, 49'-9 3/4", 2'-0" to 61'-11 1/4", 2'-0"`},
+		{dxfimport.Pos{}, `49'-9 3/4", 2'-0" to 61'-11 1/4", 2'-0"`},
+	} {
+		if got := locationText(c.p, [2]float64{597.75, 24}, [2]float64{743.25, 24}); got != c.want {
+			t.Errorf("%#v: %q, want %q", c.p, got, c.want)
+		}
+	}
+}

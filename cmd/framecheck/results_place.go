@@ -78,11 +78,20 @@ func locationText(p dxfimport.Pos, a, b [2]float64) string {
 		s += " (layer " + p.Layer + ")"
 	}
 	s = strings.TrimSpace(s)
-	pt := func(q [2]float64) string { return export.FtIn(q[0]) + ", " + export.FtIn(q[1]) }
+	// the points appended in one buffer: a plan has a location a member
+	buf := make([]byte, 0, len(s)+64)
+	buf = append(buf, s...)
 	if s != "" {
-		s += ", "
+		buf = append(buf, ", "...)
 	}
-	return s + pt(a) + " to " + pt(b)
+	buf = export.AppendFtIn(buf, a[0])
+	buf = append(buf, ", "...)
+	buf = export.AppendFtIn(buf, a[1])
+	buf = append(buf, " to "...)
+	buf = export.AppendFtIn(buf, b[0])
+	buf = append(buf, ", "...)
+	buf = export.AppendFtIn(buf, b[1])
+	return string(buf)
 }
 
 // relToCwd names path relative to the current folder when it lies under
