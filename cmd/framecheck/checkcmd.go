@@ -257,6 +257,16 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		// the load path's outputs follow its beams, posts and joints
 		scaleMemoryLimit(int64(len(data)), pathItems(o.Plan))
 	}
+	if !hasPath {
+		// The summary's failing groups need the check inputs of failing
+		// members only (badGroups); the rest go before the mapping, and
+		// with a great deal left by the checks, in the collection before
+		// it (a million joists: 240 MB). A load path reads them all. With
+		// none, there is nothing to follow, and what the pipeline kept
+		// for it goes too.
+		o.waitPath()
+		o.Inputs = failingInputs(o.Inputs, o.Results)
+	}
 	mappingGC(len(o.Plan.Members))
 	defer pathGC(hasPath)()
 	o.startPath()

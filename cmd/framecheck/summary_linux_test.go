@@ -6,6 +6,7 @@ import (
 	"bytes"
 	"os"
 	"path/filepath"
+	"reflect"
 	"regexp"
 	"strings"
 	"testing"
@@ -111,6 +112,17 @@ func TestLightestPassingAlternative(t *testing.T) {
 	res := exportResults(o, "plan.dxf")
 	var j12 *badGroup
 	groups := badGroups(o, res, proj)
+	// the same with only the failing members' inputs kept, as check
+	// keeps them before the mapping (failingInputs)
+	all := o.Inputs
+	o.Inputs = failingInputs(all, o.Results)
+	if len(o.Inputs) == 0 || len(o.Inputs) >= len(all) {
+		t.Fatalf("%d of %d inputs kept as failing", len(o.Inputs), len(all))
+	}
+	if kept := badGroups(o, res, proj); !reflect.DeepEqual(kept, groups) {
+		t.Errorf("with the failing inputs only: %+v, want %+v", kept, groups)
+	}
+	o.Inputs = all
 	for i := range groups {
 		if groups[i].Mark == "J12" {
 			j12 = &groups[i]

@@ -239,3 +239,23 @@ func printIssues(w io.Writer, issues dxfimport.IssueList, verbose bool) {
 // reasonWidth bounds the "lightest passing size" cell, which holds an
 // error member's reason.
 const reasonWidth = 64
+
+// failingInputs returns the check inputs of the members whose results
+// fail, in order, in a slice of their own (badGroups looks the failing
+// groups' worst members up among them by ID).
+func failingInputs(inputs []check.Member, results []check.Result) []check.Member {
+	failing := func(k int) bool { return k < len(results) && results[k].Status == check.StatusFail }
+	n := 0
+	for k := range inputs {
+		if failing(k) {
+			n++
+		}
+	}
+	out := make([]check.Member, 0, n)
+	for k := range inputs {
+		if failing(k) {
+			out = append(out, inputs[k])
+		}
+	}
+	return out
+}
