@@ -294,6 +294,9 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	}
 	res := exportResults(o, c.planPath)
 	o.waitPath()
+	if hasPath {
+		o.Inputs = failingInputs(o.Inputs, o.Results) // the path is followed: the summary's only
+	}
 	res.InputSHA256 = <-inputHash
 	// From here the writers read res, the plan's supports and zones and
 	// the drawing's bytes: drop the members as grouped and checked.
