@@ -50,6 +50,11 @@ func writeAtomic(path string, write func(w *bufio.Writer) error) (err error) {
 	if err = tmp.Sync(); err != nil {
 		return fmt.Errorf("export: %s: %w", path, err)
 	}
+	if sw.dropped > 0 {
+		// a large file, dropped behind its syncs: the rest goes too (a
+		// small one stays cached, as cheap to keep as to let go)
+		sw.drop(sw.total)
+	}
 	// CreateTemp makes the file private; give it the mode of the file it
 	// replaces, or the usual 0644.
 	mode := os.FileMode(0o644)
@@ -79,12 +84,26 @@ func writeAtomic(path string, write func(w *bufio.Writer) error) (err error) {
 // a background sync (a variable for the tests).
 var syncEveryBytes int64 = 32 << 20
 
+// dropFromBytes is how large a file grows before syncingWriter drops it
+// from the page cache behind its syncs (a variable for the tests).
+var dropFromBytes int64 = 64 << 20
+
 // syncingWriter writes to f and, after every syncEveryBytes, starts an
 // fsync in the background (unless one is still running), so the disk
 // takes most of a large file (a 100,000-member results.json is 800 MB)
 // while the rest is still being made, and the final Sync has little left
 // to do. busy holds a token while a background sync runs. Errors of the
 // background syncs are left to the final Sync to report.
+//
+// What a sync has put on disk is then dropped from the page cache
+// (dropCached): the outputs are written once and not read again by the
+// run, and a page cache that grows by the outputs' size costs dearly on
+// a virtual machine of this project's kind, while pages it has just let
+// go are taken again cheaply. Measured on the million-joist bigplan (930
+// MB of outputs) on the 2-vCPU machine: 14.2 s end to end, three runs in
+// a row, where letting the cache grow took 14-21 s (2.6-11.9 s of
+// system time, by how much the cache had to grow); writing 500 MB
+// files: 0.4 s dropped behind, 3-6.5 s growing the cache.
 type syncingWriter struct {
 	f    *os.File
 	n    int64
@@ -92,6 +111,19 @@ type syncingWriter struct {
 	// h hashes every byte written to f; total counts them.
 	h     hash.Hash
 	total int64
+	// dropped is how much of the file's start is already dropped from
+	// the page cache (by the background syncs' goroutine while one runs,
+	// so only under busy's token).
+	dropped int64
+}
+
+// drop lets the page cache go of f's bytes up to off, which a sync has
+// put on disk.
+func (w *syncingWriter) drop(off int64) {
+	if off > w.dropped {
+		dropCached(w.f, w.dropped, off-w.dropped)
+		w.dropped = off
+	}
 }
 
 func (w *syncingWriter) Write(p []byte) (int, error) {
@@ -102,8 +134,11 @@ func (w *syncingWriter) Write(p []byte) (int, error) {
 		w.n = 0
 		select {
 		case w.busy <- struct{}{}:
+			off := w.total // written before the sync starts: on disk after it
 			go func() {
-				_ = w.f.Sync()
+				if w.f.Sync() == nil && off >= dropFromBytes {
+					w.drop(off)
+				}
 				<-w.busy
 			}()
 		default:
