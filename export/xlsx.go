@@ -4,11 +4,11 @@ import (
 	"archive/zip"
 	"bufio"
 	"bytes"
-	"compress/flate"
 	"fmt"
 	"io"
 	"strconv"
 
+	"github.com/klauspost/compress/flate"
 	"github.com/xuri/excelize/v2"
 )
 
@@ -105,7 +105,11 @@ func writeXLSX(path string, r *Results, stream bool) error {
 // fastZip is the workbook's zip writer with deflate at flate.BestSpeed:
 // the default level took 1.1 s of a 100,000-member schedule's 2.8 s;
 // BestSpeed takes a third of that for a file a third larger (14 MB
-// instead of 11 MB).
+// instead of 11 MB). The deflater is github.com/klauspost/compress's,
+// compress/flate's API and format: at level 1 it deflated the
+// 100,000-member Members sheet's XML (115 MB) in 0.085 s where
+// compress/flate took 0.172 s, to 4.7 MB instead of 5.1 MB. The tests
+// read the parts back with compress/flate.
 func fastZip(w io.Writer) excelize.ZipWriter {
 	zw := zip.NewWriter(w)
 	zw.RegisterCompressor(zip.Deflate, func(out io.Writer) (io.WriteCloser, error) {

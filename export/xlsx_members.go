@@ -2,7 +2,6 @@ package export
 
 import (
 	"bytes"
-	"compress/flate"
 	"framecheck/export/internal/fmtx"
 	"hash/crc32"
 	"math"
@@ -13,6 +12,7 @@ import (
 	"unicode/utf16"
 	"unicode/utf8"
 
+	"github.com/klauspost/compress/flate"
 	"github.com/xuri/excelize/v2"
 )
 
