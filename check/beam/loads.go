@@ -212,19 +212,35 @@ func (b Beam) fillGeneral(r *Response, cuts []float64, l Loads) error {
 		segs[i] = seg{a: cuts[i], b: cuts[i+1]}
 		segs[i].l = segs[i].b - segs[i].a
 	}
+	// Point loads at each cut.
+	pAt := make([]float64, len(cuts))
+	for _, p := range l.Points {
+		pAt[nearestCut(cuts, p.AtIn)] += p.PLb
+	}
+	// A partial load lies on the pieces between the cuts nearest its
+	// ends. Merging cut points may move an end (by about tolPos of the
+	// length, more where merges chain): the load is spread over the
+	// pieces it lands on with its own total, so that statics hold
+	// exactly, and one narrower than the cuts' resolution, landing on a
+	// single cut, acts there as a point load of its total. With no merge
+	// the pieces are the load's own ends and the ratio is 1.
 	for _, p := range l.Partial {
 		if p.WPli == 0 || p.ToIn <= p.FromIn {
 			continue
 		}
 		i0, i1 := nearestCut(cuts, p.FromIn), nearestCut(cuts, p.ToIn)
-		for i := i0; i < i1; i++ {
-			segs[i].w += p.WPli
+		total := p.WPli * (p.ToIn - p.FromIn)
+		if i1 == i0 {
+			pAt[i0] += total
+			continue
 		}
-	}
-	// Point loads at each cut.
-	pAt := make([]float64, len(cuts))
-	for _, p := range l.Points {
-		pAt[nearestCut(cuts, p.AtIn)] += p.PLb
+		w := p.WPli
+		if on := cuts[i1] - cuts[i0]; on != p.ToIn-p.FromIn {
+			w = total / on
+		}
+		for i := i0; i < i1; i++ {
+			segs[i].w += w
+		}
 	}
 	// Index of the cut at each support.
 	supCut := make([]int, n)
