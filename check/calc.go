@@ -3,6 +3,7 @@ package check
 import (
 	"math"
 	"strconv"
+	"strings"
 )
 
 // A check records the numbers of its governing case (calcRecord) while it
@@ -29,6 +30,11 @@ type calcCtx struct {
 	// sclN and sclCV: structural composite lumber's size factor (12/d)^n
 	// and its value (NDS 2018 8.3.6); sclCV 0 for other materials.
 	sclN, sclCV float64
+	// glulam: structural glued laminated timber (NDS 2018 Table 5.3.1:
+	// no CF, Ci or Cr; CV instead), its volume factor's exponent 1/x and
+	// the span CV was found for, ft
+	glulam        bool
+	cvX, cvSpanFt float64
 }
 
 // bendRec is an edge's governing bending case.
@@ -100,6 +106,7 @@ func (e *engine) newCalcRecord() *calcRecord {
 		cm: e.cm, ct: e.ct, cf: e.cf, ci: e.ci, cr: e.cr, eAdj: e.eAdj, eminAdj: e.eminAdj, kcr: e.kcr, x0: e.x0,
 		shearAtD: e.s.ShearAtD, seasonedHalfD: e.s.Seasoned && !e.s.WetService, cosT: e.cosT, pitch: e.m.PitchRise12,
 		sclN: e.dv.SCLExponent, sclCV: e.sclCV,
+		glulam: e.dv.SizeFactor == SizeFactorGlulam, cvX: e.dv.VolumeFactorX, cvSpanFt: e.cvSpanFt,
 	}}
 }
 
@@ -141,12 +148,35 @@ func newTracer(n int) tracer {
 
 // adjRef is the table of adjustment factors the member's values follow:
 // NDS 2018 Table 8.3.1 for structural composite lumber (its Ci is 1),
-// Table 4.3.1 otherwise.
+// Table 5.3.1 for glulam, Table 4.3.1 otherwise.
 func (x *calcCtx) adjRef() string {
-	if x.sclCV > 0 {
+	switch {
+	case x.sclCV > 0:
 		return "NDS 2018 Table 8.3.1 (from memory: verify)"
+	case x.glulam:
+		return glulamAdjRef
 	}
 	return "NDS 2018 Table 4.3.1"
+}
+
+// glulamAdjRef is the table of glulam's adjustment factors.
+const glulamAdjRef = "NDS 2018 Table 5.3.1 (from memory: verify)"
+
+// cmCtCi writes a value times its CM, Ct and, but for glulam, Ci (the
+// incising factor is sawn lumber's: NDS 2018 Table 4.3.1 has it, Table
+// 5.3.1 not): the formula "<name> CM Ct[ Ci]<extra>" and its numbers.
+func (x *calcCtx) cmCtCi(t *tracer, name string, ref, cm, ct, ci float64, extra string, more ...float64) (string, Subst) {
+	if x.glulam {
+		args := append([]float64{ref, cm, ct}, more...)
+		return name + " CM Ct" + extra, t.f(substPattern(len(args)), args...)
+	}
+	args := append([]float64{ref, cm, ct, ci}, more...)
+	return name + " CM Ct Ci" + extra, t.f(substPattern(len(args)), args...)
+}
+
+// substPattern is "%s(%s)...(%s)" for n numbers.
+func substPattern(n int) string {
+	return "%s" + strings.Repeat("(%s)", n-1)
 }
 
 // sclCVRef is the source of structural composite lumber's CV.
@@ -179,6 +209,9 @@ func (r *calcRecord) bendingTrace(b *bendRec, top bool) []TraceItem {
 	case x.sclCV > 0:
 		t.add("Fb*", b.fbStar, "psi", "Fb CD CM Ct", t.f("%s(%s)(%s)(%s)", fbRef, b.cd, x.cm.Fb, x.ct.Fb),
 			"NDS 2018 3.3.3.8, Table 8.3.1 (from memory: verify)")
+	case x.glulam:
+		t.add("Fb*", b.fbStar, "psi", "Fb CD CM Ct", t.f("%s(%s)(%s)(%s)", fbRef, b.cd, x.cm.Fb, x.ct.Fb),
+			"NDS 2018 3.3.3.8, Table 5.3.1 (from memory: verify)")
 	default:
 		t.add("Fb*", b.fbStar, "psi", "Fb CD CM Ct CF Ci Cr",
 			t.f("%s(%s)(%s)(%s)(%s)(%s)(%s)", fbRef, b.cd, x.cm.Fb, x.ct.Fb, x.cf.Fb, x.ci.Fb, x.cr), "NDS 2018 3.3.3.8, Table 4.3.1")
@@ -201,7 +234,8 @@ func (r *calcRecord) bendingTrace(b *bendRec, top bool) []TraceItem {
 		f := leFormulas[iv.leFormula]
 		t.add("le", iv.leIn, "in", f, leSubst(&t, f, iv.luIn, x.dIn), leRefs[iv.kind])
 		t.add("RB", iv.rb, "", "sqrt(le d / b^2)", t.f("sqrt(%s(%s) / %s^2)", iv.leIn, x.dIn, x.bIn), "NDS 2018 Eq. 3.3-5")
-		t.add("Emin'", x.eminAdj, "psi", "Emin CM Ct Ci", t.f("%s(%s)(%s)(%s)", x.eminPsi, x.cm.E, x.ct.E, x.ci.E), x.adjRef())
+		f, sub := x.cmCtCi(&t, "Emin", x.eminPsi, x.cm.E, x.ct.E, x.ci.E, "")
+		t.add("Emin'", x.eminAdj, "psi", f, sub, x.adjRef())
 		t.add("FbE", iv.fbEPsi, "psi", "1.20 Emin' / RB^2", t.f("1.20(%s) / %s^2", x.eminAdj, iv.rb), "NDS 2018 3.3.3.8")
 		a := iv.fbEPsi / b.fbStar
 		t.add("CL", b.cl, "", "(1 + FbE/Fb*)/1.9 - sqrt(((1 + FbE/Fb*)/1.9)^2 - (FbE/Fb*)/0.95)",
@@ -214,10 +248,21 @@ func (r *calcRecord) bendingTrace(b *bendRec, top bool) []TraceItem {
 		t.add("Fb'", fbAdj, "psi", "Fb* min(CL, CV)", t.f("%s(%s)", b.fbStar, math.Min(b.cl, cv)), "NDS 2018 8.3.6, Table 8.3.1 (from memory: verify)")
 	case x.sclCV > 1:
 		t.add("Fb'", fbAdj, "psi", "Fb* CL", t.f("%s(%s)", b.fbStar, b.cl), "NDS 2018 8.3.6, Table 8.3.1 (from memory: verify)")
-	case cv < 1:
-		t.add("CV", cv, "", "(21/L)^(1/10) (12/d)^(1/10) (5.125/b)^(1/10) <= 1.0, L the longest span in ft; the smaller of CL and CV applies",
-			Subst{}, "NDS 2018 5.3.6, Eq. 5.3-1")
-		t.add("Fb'", fbAdj, "psi", "Fb* min(CL, CV)", t.f("%s(%s)", b.fbStar, math.Min(b.cl, cv)), "NDS 2018 Table 5.3.1")
+	case x.glulam || cv < 1:
+		// glulam: CV is shown even where it comes out at its cap of 1.0,
+		// so that a reader sees it was weighed against CL
+		how := "the smaller of CL and CV applies"
+		if cv >= 1 {
+			how = "capped at 1.0; " + how
+		}
+		xs := fmtG(x.cvX)
+		sub := Subst{}
+		if x.cvSpanFt > 0 && x.cvX > 0 {
+			sub = t.f("(21/%s)^(1/%s) (12/%s)^(1/%s) (5.125/%s)^(1/%s)", x.cvSpanFt, x.cvX, x.dIn, x.cvX, x.bIn, x.cvX)
+		}
+		t.add("CV", cv, "", "(21/L)^(1/"+xs+") (12/d)^(1/"+xs+") (5.125/b)^(1/"+xs+") <= 1.0, L the longest span in ft; "+how,
+			sub, "NDS 2018 5.3.6, Eq. 5.3-1")
+		t.add("Fb'", fbAdj, "psi", "Fb* min(CL, CV)", t.f("%s(%s)", b.fbStar, math.Min(b.cl, cv)), glulamAdjRef)
 	default:
 		t.add("Fb'", fbAdj, "psi", "Fb* CL Cfu", t.f("%s(%s)(1.0)", b.fbStar, b.cl), "NDS 2018 Table 4.3.1")
 	}
@@ -250,7 +295,14 @@ func (r *calcRecord) shearTrace() []TraceItem {
 	t.add("V", s.vLb, "lb", "largest shear "+where, Subst{}, ref)
 	t.add("A", x.aIn2, "in^2", "b d", t.f("%s(%s)", x.bIn, x.dIn), "NDS 2018 Supplement Table 1B")
 	t.add("fv", fv, "psi", "1.5 V / A", t.f("1.5(%s) / %s", s.vLb, x.aIn2), "NDS 2018 Eq. 3.4-2")
-	t.add("Fv'", s.fvAdjPsi, "psi", "Fv CD CM Ct Ci", t.f("%s(%s)(%s)(%s)(%s)", x.fvPsi, s.cd, x.cm.Fv, x.ct.Fv, x.ci.Fv), x.adjRef())
+	if x.glulam {
+		// Cvr = 1: a prismatic member, neither notched nor under impact or
+		// cyclic load (NDS 2018 5.3.10, from memory: verify)
+		t.add("Fv'", s.fvAdjPsi, "psi", "Fv CD CM Ct Cvr, Cvr = 1 (prismatic member)",
+			t.f("%s(%s)(%s)(%s)(1)", x.fvPsi, s.cd, x.cm.Fv, x.ct.Fv), x.adjRef())
+	} else {
+		t.add("Fv'", s.fvAdjPsi, "psi", "Fv CD CM Ct Ci", t.f("%s(%s)(%s)(%s)(%s)", x.fvPsi, s.cd, x.cm.Fv, x.ct.Fv, x.ci.Fv), x.adjRef())
+	}
 	t.add("fv/Fv'", fv/s.fvAdjPsi, "", "fv / Fv'", t.f("%s / %s", fv, s.fvAdjPsi), "NDS 2018 3.4.1")
 	return t.items
 }
@@ -279,8 +331,8 @@ func (r *calcRecord) bearingTrace() []TraceItem {
 			t.f("%s(%s)(%s)(%s)", b.fcPerpSupPsi, x.cm.FcPerp, x.ct.FcPerp, x.ci.FcPerp), "NDS 2018 Table 4.3.1")
 	} else {
 		cbTrace(&t, b.cb, b.lbIn)
-		t.add("Fc_perp'", b.fcAdjPsi, "psi", "Fc_perp CM Ct Ci Cb",
-			t.f("%s(%s)(%s)(%s)(%s)", x.fcPerpPsi, x.cm.FcPerp, x.ct.FcPerp, x.ci.FcPerp, b.cb), x.adjRef())
+		f, sub := x.cmCtCi(&t, "Fc_perp", x.fcPerpPsi, x.cm.FcPerp, x.ct.FcPerp, x.ci.FcPerp, " Cb", b.cb)
+		t.add("Fc_perp'", b.fcAdjPsi, "psi", f, sub, x.adjRef())
 	}
 	t.add("fc_perp/Fc_perp'", fc/b.fcAdjPsi, "", "fc_perp / Fc_perp'", t.f("%s / %s", fc, b.fcAdjPsi), "NDS 2018 3.10.2")
 	return t.items
@@ -302,8 +354,8 @@ func cbTrace(t *tracer, cb, lbIn float64) {
 func (r *calcRecord) beamBearingTrace(t tracer, fc float64) []TraceItem {
 	x, b, bb := &r.ctx, &r.bear, r.bear.beam
 	cbTrace(&t, b.memCb, b.lbIn)
-	t.add("Fc_perp'", b.memAdjPsi, "psi", "Fc_perp CM Ct Ci Cb: the member's own",
-		t.f("%s(%s)(%s)(%s)(%s)", x.fcPerpPsi, x.cm.FcPerp, x.ct.FcPerp, x.ci.FcPerp, b.memCb), x.adjRef())
+	f, own := x.cmCtCi(&t, "Fc_perp", x.fcPerpPsi, x.cm.FcPerp, x.ct.FcPerp, x.ci.FcPerp, " Cb: the member's own", b.memCb)
+	t.add("Fc_perp'", b.memAdjPsi, "psi", f, own, x.adjRef())
 	beam := "the beam under bearing " + strconv.Itoa(b.bearing+1)
 	switch {
 	case bb.endIn <= 0:
@@ -353,7 +405,8 @@ func (r *calcRecord) deflTrace(d *deflRec) []TraceItem {
 	default:
 		t.add("delta", d.deflIn, "in", "largest deflection of "+d.where, Subst{}, refAnalysis)
 	}
-	t.add("E'", x.eAdj, "psi", "E CM Ct Ci", t.f("%s(%s)(%s)(%s)", x.ePsi, x.cm.E, x.ct.E, x.ci.E), x.adjRef())
+	f, sub := x.cmCtCi(&t, "E", x.ePsi, x.cm.E, x.ct.E, x.ci.E, "")
+	t.add("E'", x.eAdj, "psi", f, sub, x.adjRef())
 	if x.cosT < 1 {
 		t.add("cos", x.cosT, "", "rafter at "+fmtG(x.pitch)+" in 12: cos = 12 / sqrt(12^2 + rise^2); delta is perpendicular to the rafter "+
 			"(projection's / cos^2) and the span is the sloped length (plan span / cos)", t.f("12 / sqrt(144 + %s^2)", x.pitch), "statics")

@@ -39,8 +39,10 @@ type engine struct {
 	// moment): glulam's Fbx-; fbNoCD otherwise.
 	fbNegNoCD float64
 	// cv is glulam's volume factor CV (NDS 2018 5.3.6), applied instead of
-	// CL when smaller; 1 for sawn lumber.
-	cv float64
+	// CL when smaller; 1 for sawn lumber. cvSpanFt is the span it was
+	// found for (the longest, ft), for the report.
+	cv       float64
+	cvSpanFt float64
 	// sclCV is CV = (12/d)^n of structural composite lumber (NDS 2018
 	// 8.3.6), 0 for other materials; where it exceeds 1 it is in fbNoCD
 	// and cv is 1, else cv is it (see SCLBending).
@@ -201,7 +203,8 @@ func newEngine(m Member, s Settings) (*engine, error) {
 		for _, k := range e.spanSegs {
 			longest = math.Max(longest, e.segs[k].ToIn-e.segs[k].FromIn)
 		}
-		e.cv = VolumeFactor(longest/12, e.sec.DIn, e.sec.BIn, e.dv.VolumeFactorX)
+		e.cvSpanFt = longest / 12
+		e.cv = VolumeFactor(e.cvSpanFt, e.sec.DIn, e.sec.BIn, e.dv.VolumeFactorX)
 	}
 	if err := e.solveStrength(); err != nil {
 		return e, err

@@ -20,6 +20,7 @@ type factorKey struct {
 	temp  string
 	pitch float64
 	scln  float64 // exponent of structural composite lumber's size factor
+	cv    float64 // glulam's volume factor (it depends on the span)
 }
 
 type factorEntry struct {

@@ -207,7 +207,7 @@ func (e *engine) baseResult() Result {
 // again (see factorCache); callers must not modify it.
 func (e *engine) factorTrace() []TraceItem {
 	key := factorKey{cm: e.cm, ct: e.ct, cf: e.cf, ci: e.ci, cr: e.cr,
-		sec: e.sec.Name, rule: e.dv.SizeFactor, temp: tempName(e.s.Temperature), pitch: e.m.PitchRise12, scln: e.dv.SCLExponent}
+		sec: e.sec.Name, rule: e.dv.SizeFactor, temp: tempName(e.s.Temperature), pitch: e.m.PitchRise12, scln: e.dv.SCLExponent, cv: e.cv}
 	if items, ok := factorCache.lookup(key, e.comboCDs); ok {
 		return items
 	}
@@ -225,6 +225,10 @@ func (e *engine) buildFactorTrace() []TraceItem {
 	}
 	if e.dv.SizeFactor == SizeFactorSCL {
 		e.sclFactorTrace(&t)
+		return t.items
+	}
+	if e.dv.SizeFactor == SizeFactorGlulam {
+		e.glulamFactorTrace(&t)
 		return t.items
 	}
 	t.add("CM(Fb)", e.cm.Fb, "", "wet service", Subst{}, "NDS 2018 Supplement Table 4A/4B")
@@ -245,6 +249,21 @@ func (e *engine) buildFactorTrace() []TraceItem {
 			t.f("12 / sqrt(144 + %s^2)", e.m.PitchRise12), "statics")
 	}
 	return t.items
+}
+
+// glulamFactorTrace lists the adjustment factors of a glulam member after
+// its CD (NDS 2018 Table 5.3.1, from memory: verify): dry service only
+// (glulam in wet service is refused), Ct, Cfu; no size factor CF, incising
+// factor Ci or repetitive member factor Cr; its volume factor CV depends on
+// the span and is in each bending calculation.
+func (e *engine) glulamFactorTrace(t *tracer) {
+	t.add("CM", 1, "", "dry service: the wet-service factors of NDS 2018 Supplement Table 5A are not applied (glulam in wet service is refused)",
+		Subst{}, glulamAdjRef)
+	t.add("Ct(Fb, Fv, Fc_perp)", e.ct.Fb, "", "temperature", lit(tempName(e.s.Temperature)), "NDS 2018 Table 2.3.3")
+	t.add("Ct(E)", e.ct.E, "", "temperature", lit(tempName(e.s.Temperature)), "NDS 2018 Table 2.3.3")
+	t.add("Cfu", 1, "", "bending about the strong axis (x-x)", Subst{}, glulamAdjRef)
+	t.add("CV", e.cv, "", "volume factor instead of a size factor; the smaller of CL and CV applies (see each bending calculation); "+
+		"CF, Ci and Cr do not apply to glulam", Subst{}, "NDS 2018 5.3.6, "+glulamAdjRef)
 }
 
 // verdict returns the largest ratio of checks and its kind, and pass or
