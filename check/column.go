@@ -84,6 +84,19 @@ func CheckPost(p Post, s Settings) PostResult {
 		return r
 	}
 	r.DesignVals = dv
+	// A value the material lacks would make Fc* 0 and CP NaN, and a case
+	// with a NaN ratio is never the governing one: the post would pass
+	// with no check at all. Glulam's table holds the bending values of
+	// its stress classes (Supplement Table 5A), not the axial ones.
+	if !(dv.FcPsi > 0) || math.IsInf(dv.FcPsi, 0) || !(dv.EminPsi > 0) || math.IsInf(dv.EminPsi, 0) {
+		what := "no compression parallel to grain value Fc or no Emin"
+		if dv.SizeFactor == SizeFactorGlulam {
+			what = "no axial values: framecheck holds glulam's bending stress classes (NDS 2018 Supplement Table 5A), not the axially loaded combinations a glulam column is graded by"
+		}
+		r.Messages = append(r.Messages, fmt.Sprintf("%s %s as a post: %s (Fc %v psi, Emin %v psi); the post is not checked: "+
+			"check it by hand, or give a material with Fc and Emin in the materials file", dv.Species, dv.Grade, what, dv.FcPsi, dv.EminPsi))
+		return r
+	}
 	if !(p.HeightIn > 0) || math.IsInf(p.HeightIn, 0) {
 		r.Messages = append(r.Messages, fmt.Sprintf("height %v in: want a finite height > 0", p.HeightIn))
 		return r
@@ -160,6 +173,12 @@ func CheckPost(p Post, s Settings) PostResult {
 		rec := &calcRecord{col: bestRec}
 		bestComp.calc, bestBear.calc = rec, rec
 		r.Checks = []CheckResult{bestComp, bestBear}
+	} else if r.DownLb > 0 {
+		// a case presses the post down but none gave a ratio (a NaN from
+		// values out of range): never a pass without a check
+		r.Messages = append(r.Messages, fmt.Sprintf("the post carries %.0f lb (%s) but its compression could not be checked "+
+			"(Fc* %v psi, FcE %v psi); check it by hand", r.DownLb, r.DownCombo, dv.FcPsi*cm.Fc*ct.Fb*cfFc*ci.Fb, fcE))
+		return r
 	}
 	r.MaxRatio, r.Governing, r.Status, r.Messages = verdict(r.Checks, r.Messages)
 	if r.LeOverD > 50 {

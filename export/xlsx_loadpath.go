@@ -388,24 +388,39 @@ func governingOf(cs []Check, gov string) (Check, bool) {
 }
 
 // LoadPathSummary is the one-line count of the load path's members for the
-// report and the terminal: "3 beams: 2 pass, 1 fail; 2 posts checked".
+// report and the terminal: "3 beams: 2 pass, 1 fail, 0 error; 2 posts
+// checked: 1 pass, 0 fail, 1 error", and how many posts were not checked
+// (no size or height given) when some were not.
 func LoadPathSummary(lp *LoadPath) string {
-	var pass, fail, errs, posts int
-	for _, b := range lp.Beams {
-		switch b.Status {
+	count := func(status string, c *[3]int) {
+		switch status {
 		case StatusPass:
-			pass++
+			c[0]++
 		case StatusFail:
-			fail++
+			c[1]++
 		default:
-			errs++
+			c[2]++
 		}
 	}
+	var beams, posts [3]int
+	for _, b := range lp.Beams {
+		count(b.Status, &beams)
+	}
+	unchecked := 0
 	for _, p := range lp.Posts {
 		if p.Checked {
-			posts++
+			count(p.Status, &posts)
+		} else {
+			unchecked++
 		}
 	}
-	return strconv.Itoa(len(lp.Beams)) + " beams: " + strconv.Itoa(pass) + " pass, " + strconv.Itoa(fail) + " fail, " +
-		strconv.Itoa(errs) + " error; " + strconv.Itoa(len(lp.Posts)) + " posts, " + strconv.Itoa(posts) + " checked"
+	counts := func(c [3]int) string {
+		return strconv.Itoa(c[0]) + " pass, " + strconv.Itoa(c[1]) + " fail, " + strconv.Itoa(c[2]) + " error"
+	}
+	s := strconv.Itoa(len(lp.Beams)) + " beams: " + counts(beams) + "; " +
+		strconv.Itoa(len(lp.Posts)-unchecked) + " posts checked: " + counts(posts)
+	if unchecked > 0 {
+		s += "; " + strconv.Itoa(unchecked) + " posts not checked (no size or height given)"
+	}
+	return s
 }
