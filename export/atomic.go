@@ -50,9 +50,11 @@ func writeAtomic(path string, write func(w *bufio.Writer) error) (err error) {
 	if err = tmp.Sync(); err != nil {
 		return fmt.Errorf("export: %s: %w", path, err)
 	}
-	if sw.dropped > 0 {
-		// a large file, dropped behind its syncs: the rest goes too (a
-		// small one stays cached, as cheap to keep as to let go)
+	if sw.total >= dropFromBytes {
+		// a large file, dropped behind its syncs: the rest goes too, and
+		// all of it when no background sync got to drop any (one still
+		// running when the last bytes were written); a small one stays
+		// cached, as cheap to keep as to let go
 		sw.drop(sw.total)
 	}
 	// CreateTemp makes the file private; give it the mode of the file it
