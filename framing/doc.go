@@ -121,8 +121,17 @@
 // extent along u overlaps its own by more than the snap tolerance and by at
 // least half the shorter of the two (so lapped joists are not neighbours),
 // no farther than 120 in and no nearer than 0.5 in. Each side takes half that
-// gap, or EdgeDistanceIn when there is none. SpacingIn is the mean of the
-// two gaps (the trib width), the one gap of an edge joist, 0 for a lone one.
+// gap. A side with no neighbouring joist (an edge joist's outer side)
+// takes EdgeDistanceIn, or more where the drawing shows more load there:
+// half the gap to a support line running parallel beside it within 48 in,
+// overlapping half its length (a wall or beam the sheathing also bears on:
+// FRM221, info); failing that, when the innermost load zone holding its
+// midpoint reaches on past it (by more than 1.5 in, measured square to it),
+// the whole strip to the zone's edge, up to 48 in (sheathing cantilevered
+// past the joist: FRM222, a warning; a zone reaching farther is a warning
+// that the strip's load reaches no member drawn, and the side keeps
+// EdgeDistanceIn). SpacingIn is the mean of the two gaps (the trib width),
+// the one gap of an edge joist, 0 for a lone one.
 //
 // Neighbours that are both usable and bear on the same support lines (same
 // number and kinds, each bearing centre on the other's support line) form a
@@ -191,6 +200,12 @@
 //	                spacing, no support on one side): nothing generated in it (bays.go);
 //	                a warning for joist positions at a bay's edges that reach no support
 //	FRM220 info     bay whose joists are drawn: its callout applies to them, none generated
+//	FRM221 info     edge joist beside a parallel support line within 48 in: half the gap to it
+//	                is its tributary width on that side (when more than the edge distance)
+//	FRM222 warning  edge joist with no joist or support line beside it, whose load zone reaches
+//	                on past it: within 48 in it carries the whole strip to the zone's edge;
+//	                farther, that strip's load reaches no member drawn (the joist keeps the
+//	                edge distance)
 //	FRM230 warning  entity on a posts layer that is no post (a large circle or outline, open lines): skipped
 //	FRM231 error    point-load mark with no text beside it, or a text that cannot be read
 //	FRM232 error    point-load mark on no joist or beam

@@ -23,6 +23,8 @@ const (
 	CodeCalloutSpacing  = "FRM210" // callout spacing differs from measured by > 1 in
 	CodeCalloutUnused   = "FRM211" // callout that reaches no joist
 	CodeNoNeighbour     = "FRM212" // joist with no parallel neighbour
+	CodeEdgeSupport     = "FRM221" // edge joist beside a parallel support line: half the strip added to its tributary width
+	CodeEdgeZone        = "FRM222" // load zone reaching past an edge joist with nothing drawn there: the strip is the joist's
 	CodeArcSegment      = "FRM213" // arcs on support layers, arc segments of polylines: skipped, reported once
 	CodeBadCoordinate   = "FRM214" // entity with a non-finite or out-of-range coordinate: skipped
 	CodeCarriesBeam     = "FRM215" // flush beam ending on a joist between its bearings: error member
@@ -78,10 +80,14 @@ type grouper struct {
 	jIdx       *segIndex       // grid over the drawn joist items, built on first use
 
 	// per member, parallel to plan.Members
-	grp      []int
-	a0, a1   []float64  // extent along the group direction
-	bdirs    [][]Point  // per bearing: unit direction of its support line (runs compare them)
-	lo, hi   []int      // neighbour at smaller / larger across offset, -1 when none
+	grp    []int
+	a0, a1 []float64 // extent along the group direction
+	bdirs  [][]Point // per bearing: unit direction of its support line (runs compare them)
+	lo, hi []int     // neighbour at smaller / larger across offset, -1 when none
+	// edgeOpen, per member: bit 0 (side below) and bit 1 (above) set where
+	// it has neither a neighbouring joist nor a parallel support line
+	// (setTrib), for edgeZoneStrips
+	edgeOpen []uint8
 	byAcross []int      // members by group, offset across, index (makeMembers)
 	ends     [][2]Point // Start and End, packed close for passes over every member
 	groups   []dirGroup

@@ -7,6 +7,7 @@ import (
 	"slices"
 	"sort"
 	"strconv"
+	"strings"
 
 	"framecheck/dxfimport"
 )
@@ -60,12 +61,96 @@ func (g *grouper) neighbours() {
 	// warnings apart, appended after in member order.
 	spans := g.split(n)
 	issues := make(issueLists, len(spans))
+	sups := g.supportLineIndex()
+	g.edgeOpen = make([]uint8, n)
 	parallel(spans, func(w int, sp span) {
+		var cur *segCursor
+		if sups != nil {
+			cur = sups.newCursor()
+		}
 		for k := sp.lo; k < sp.hi; k++ {
-			g.setTrib(&issues[w], k)
+			g.setTrib(&issues[w], k, sups, cur)
 		}
 	})
 	issues.appendTo(&p.Issues)
+}
+
+// edgeSupportReachIn: a support line parallel to an edge joist, on its side
+// with no neighbouring joist, at most this far away shares the strip
+// between them with the joist (the sheathing spans from one to the
+// other); farther, the strip is not one span of sheathing (wood structural
+// panels span at most 48 in between supports: common practice, no source).
+const edgeSupportReachIn = 48
+
+// maxParallelSin: a support line is parallel to a joist when the sine of
+// the angle between them is at most this (about 2 degrees; common
+// practice, no source).
+const maxParallelSin = 0.035
+
+// supportLineIndex returns a grid over the plan's support lines (walls as
+// their mid-lines), or nil when there are none.
+func (g *grouper) supportLineIndex() *segIndex {
+	sups := g.plan.Supports
+	if len(sups) == 0 {
+		return nil
+	}
+	return indexEnds(len(sups), func(i int) (Point, Point) { return sups[i].A, sups[i].B }, nil)
+}
+
+// edgeSupport returns the distance from member k to the nearest support
+// line parallel to it on one side (below: toward smaller offsets across
+// its direction group) that overlaps at least minOverlapFrac of its length,
+// at least minNeighbourGapIn and at most edgeSupportReachIn away, and that
+// line's index in Plan.Supports; 0 and -1 when there is none. A second
+// such line less than MaxWallThicknessIn beyond it is the other face of a
+// wall (or beam) drawn with two lines that no joist crosses, so not merged
+// into one: the distance is then to their mid-line.
+func (g *grouper) edgeSupport(k int, below bool, sups *segIndex, cur *segCursor) (gap float64, sup int) {
+	if sups == nil {
+		return 0, -1
+	}
+	p := g.plan
+	gr := &g.groups[g.grp[k]]
+	m := &p.Members[k]
+	sup = -1
+	var gaps [8]float64 // the lines found: a few beside one joist
+	found := gaps[:0]
+	sups.queryWith(cur, m.Start, m.End, edgeSupportReachIn, func(s int) {
+		sl := &p.Supports[s]
+		d := sub(sl.B, sl.A)
+		l := math.Hypot(d.X, d.Y)
+		if l == 0 || math.Abs(cross(d, gr.u))/l > maxParallelSin {
+			return
+		}
+		tA, tB := dot(sl.A, gr.u), dot(sl.B, gr.u)
+		lo, hi := math.Max(g.a0[k], math.Min(tA, tB)), math.Min(g.a1[k], math.Max(tA, tB))
+		if ov := hi - lo; ov <= g.opt.SnapToleranceIn || ov < minOverlapFrac*(g.a1[k]-g.a0[k]) {
+			return
+		}
+		// the line's offset across at the middle of the overlap
+		at := add(sl.A, scale(d, ((lo+hi)/2-tA)/(tB-tA)))
+		off := dot(at, gr.n) - p.across[k]
+		if below {
+			off = -off
+		}
+		if off < minNeighbourGapIn || off > edgeSupportReachIn {
+			return
+		}
+		found = append(found, off)
+		if sup < 0 || off < gap {
+			gap, sup = off, s
+		}
+	})
+	if sup < 0 {
+		return 0, -1
+	}
+	far := gap // the other face, when the nearest line has one
+	for _, off := range found {
+		if off > far && off-gap >= minNeighbourGapIn && off-gap <= g.opt.MaxWallThicknessIn {
+			far = off
+		}
+	}
+	return (gap + far) / 2, sup
 }
 
 // nearestBoth sets lo[k] and hi[k], the neighbours of member k (in line
@@ -183,8 +268,13 @@ func (g *grouper) overlapping(l *line, k int, highest bool) int {
 }
 
 // setTrib sets member k's tributary widths, spacing and neighbours from
-// lo and hi; a member with no neighbour is warned about in iss.
-func (g *grouper) setTrib(iss *dxfimport.IssueList, k int) {
+// lo and hi; a member with no neighbour is warned about in iss. On a side
+// with no neighbouring joist the tributary width is the project's edge
+// distance or, when a support line runs parallel on that side within
+// edgeSupportReachIn (an edge joist beside a wall or beam), half the gap to
+// it if that is more: the sheathing between them bears on both, so the
+// joist carries half the strip (said in iss as an info finding).
+func (g *grouper) setTrib(iss *dxfimport.IssueList, k int, sups *segIndex, cur *segCursor) {
 	p := g.plan
 	m := &p.Members[k]
 	edge := g.opt.EdgeDistanceIn
@@ -209,6 +299,21 @@ func (g *grouper) setTrib(iss *dxfimport.IssueList, k int) {
 		hiT = gap / 2
 		gaps[ng], ng = gap, ng+1
 	}
+	var beside []string
+	for side, t := range [2]*float64{&loT, &hiT} {
+		if [2]int{g.lo[k], g.hi[k]}[side] >= 0 {
+			continue
+		}
+		gap, s := g.edgeSupport(k, side == 0, sups, cur)
+		if s < 0 {
+			g.edgeOpen[k] |= 1 << side
+			continue
+		}
+		if gap/2 > *t {
+			*t = gap / 2
+			beside = append(beside, fmt.Sprintf("%s %.1f in away (%s)", p.Supports[s].Kind, gap, p.Supports[s].Pos))
+		}
+	}
 	// the larger-across side is the member's left when the group normal
 	// is its left normal
 	if dot(g.groups[g.grp[k]].n, rot90(p.dirs[k])) > 0 {
@@ -217,6 +322,10 @@ func (g *grouper) setTrib(iss *dxfimport.IssueList, k int) {
 		m.TribLeftIn, m.TribRightIn = loT, hiT
 	}
 	m.TribIn = m.TribLeftIn + m.TribRightIn
+	if len(beside) > 0 {
+		iss.Add(m.Pos, CodeEdgeSupport, dxfimport.SevInfo, "%s is an edge joist beside a parallel support line, %s: "+
+			"it carries half the strip between them, tributary width %.2f in", m.ID, strings.Join(beside, " and "), m.TribIn)
+	}
 	switch ng {
 	case 2:
 		m.SpacingIn = (gaps[0] + gaps[1]) / 2

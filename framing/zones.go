@@ -81,9 +81,98 @@ func (g *grouper) assignZones() {
 		var sc zoneScratch
 		for k := sp.lo; k < sp.hi; k++ {
 			g.memberZones(q, &sc, &issues[w], k, zs)
+			g.edgeZoneStrip(q, &issues[w], k, zs)
 		}
 	})
 	issues.appendTo(&p.Issues)
+}
+
+// edgeStripTolIn: a load zone reaching this little past an edge joist's
+// own width is drawn to the joist (common practice, no source: the
+// thickness of a 2x, 1.5 in).
+const edgeStripTolIn = 1.5
+
+// edgeZoneStrip widens member k's tributary width on each side where it
+// has neither a neighbouring joist nor a parallel support line
+// (edgeOpen) but its load zone reaches on past it: the strip between the
+// joist and the zone's edge is loaded and nothing else drawn carries it
+// (sheathing cantilevered past the edge joist), so the joist carries all
+// of it, up to edgeSupportReachIn (a warning: the load comes from how the
+// outline is drawn). A zone reaching farther is a strip whose load
+// reaches no member drawn: a warning too, and the joist keeps the edge
+// distance. The zone is the innermost outline holding the member's
+// midpoint; the strip is measured square to the member from there.
+func (g *grouper) edgeZoneStrip(q *zoneQuery, iss *dxfimport.IssueList, k int, zs []zoneGeom) {
+	if g.edgeOpen == nil || g.edgeOpen[k] == 0 {
+		return
+	}
+	p := g.plan
+	m := &p.Members[k]
+	c := mid(m.Start, m.End)
+	z := -1
+	for _, i := range q.candidates(zs, c, c) {
+		if pointInPolygon(c, zs[i].Points) && (z < 0 || zs[i].AreaIn2 < zs[z].AreaIn2) {
+			z = i
+		}
+	}
+	if z < 0 {
+		return
+	}
+	n := g.groups[g.grp[k]].n
+	// the member's left side is the larger-across one when the group
+	// normal is its left normal (setTrib)
+	hiIsLeft := dot(n, rot90(p.dirs[k])) > 0
+	for side := 0; side < 2; side++ {
+		if g.edgeOpen[k]&(1<<side) == 0 {
+			continue
+		}
+		v := n
+		if side == 0 {
+			v = scale(n, -1)
+		}
+		t := rayExit(c, v, zs[z].Points)
+		trib := &m.TribRightIn
+		if (side == 1) == hiIsLeft {
+			trib = &m.TribLeftIn
+		}
+		if math.IsInf(t, 0) || t <= *trib+edgeStripTolIn {
+			continue
+		}
+		if t > edgeSupportReachIn {
+			iss.Add(m.Pos, CodeEdgeZone, dxfimport.SevWarning, "%s is an edge joist, and its load zone %s reaches %.1f in past it "+
+				"with no joist or support line drawn within %.0f in on that side: the load of that strip reaches no member drawn; "+
+				"the joist takes only the edge distance (%.2f in) there: draw the framing beyond it, or check that strip by hand",
+				m.ID, zs[z].Name, t, float64(edgeSupportReachIn), *trib)
+			continue
+		}
+		*trib = t
+		m.TribIn = m.TribLeftIn + m.TribRightIn
+		iss.Add(m.Pos, CodeEdgeZone, dxfimport.SevWarning, "%s is an edge joist, and its load zone %s reaches %.1f in past it "+
+			"with no joist or support line there (sheathing cantilevered past it): it carries that whole strip, tributary width %.2f in "+
+			"(if the zone outline reaches past the framing only as drawn, draw it to the edge of the deck)",
+			m.ID, zs[z].Name, t, m.TribIn)
+	}
+}
+
+// rayExit returns how far from c, along the unit vector v, the ray first
+// meets the edge of polygon pts (c inside it), or +Inf.
+func rayExit(c, v Point, pts []Point) float64 {
+	best := math.Inf(1)
+	for i, j := 0, len(pts)-1; i < len(pts); j, i = i, i+1 {
+		a, b := pts[j], pts[i]
+		e := sub(b, a)
+		den := cross(v, e)
+		if den == 0 {
+			continue
+		}
+		w := sub(a, c)
+		t := cross(w, e) / den // along the ray
+		s := cross(w, v) / den // along the edge, 0..1
+		if t > 0 && s >= 0 && s <= 1 && t < best {
+			best = t
+		}
+	}
+	return best
 }
 
 // zoneScratch is one goroutine's buffers for memberZones.

@@ -29,7 +29,7 @@ date = ""                     # as you write it, e.g. "2026-12-04" or "4 Dec 202
 # units = "in"
 snap_tolerance_in = 1.5       # a joist end within this distance of a support bears on it
 max_wall_thickness_in = 12.0  # two parallel support lines closer than this, both crossed: one double-line wall
-edge_distance_in = 0.0        # extra width added to the tributary width of the first and last joist of a run
+edge_distance_in = 0.0        # tributary width beyond the first and last joist of a run, where no wall or beam runs beside it and the load zone stops at it
 
 [layers]
 # Which drawing layers play which part. Patterns ignore case; * matches

@@ -216,7 +216,9 @@ func floorPlan() plan {
 // hangs them in hangers and sits on two 6x6 posts (x = 0 and x = 240). The
 // wall has a door opening from x = 96 to 144 in, bridged by a header that
 // bears on the wall on both sides and carries the two joists over the
-// opening. A hoist hangs from joist x = 60 at mid-span: a point load.
+// opening. A hoist hangs from joist x = 60, 100 in from the wall (0.7 of
+// the span): a point load. The zone outline reaches 20 in past the edge
+// joists (x = -8 and 248): the canopy roof's overhang, which they carry.
 func addCanopy(p *plan) {
 	p.Runs = append(p.Runs, joistRun{Name: "C1 canopy", Layer: lyJoistCanopy, Zone: "CANOPY",
 		X0In: 12, Y0In: 399.25, Count: 10, SpacingIn: 24, LengthIn: 144})

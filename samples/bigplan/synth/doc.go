@@ -8,8 +8,8 @@
 // # Layout
 //
 // The plan is a grid of units. A unit is four runs of joists side by side,
-// all in one load zone, outlined by one closed polyline on a zone layer
-// with the zone's name inside. Units follow a fixed ten-unit pattern of
+// all in one load zone, each run outlined by a closed polyline on a zone
+// layer (to its edge joists' outer faces) with the zone's name inside. Units follow a fixed ten-unit pattern of
 // zones (see unitZones); the zone decides what the runs are:
 //
 //	FLOOR      simple span between 2x6 walls (two lines 5.5 in apart),

@@ -126,8 +126,11 @@ func drawPosts(w drawer, on bool, x1, x2, yc float64) int {
 	return len(xs)
 }
 
-// drawZone outlines a unit's runs as one zone, writes the zone name inside
-// and a note naming the unit.
+// drawZone outlines each of a unit's runs as its zone, drawn to the outer
+// faces of the run's edge joists across (a zone reaching on past an edge
+// joist with nothing framed there is a strip whose load no joist drawn
+// carries) and zoneMarginIn past the run's ends along, writes the zone
+// name inside each and a note naming the unit.
 func drawZone(w drawer, u int, runs []run) {
 	lo, hi := runs[0].x0-zoneMarginIn, 0.0
 	top := 0.0
@@ -141,8 +144,12 @@ func drawZone(w drawer, u int, runs []run) {
 	if runs[0].kind == kindRoof {
 		layer = lyZoneRoof
 	}
-	w.ClosedPolyline(layer, [][2]float64{{lo, b}, {hi, b}, {hi, t}, {lo, t}})
-	w.Text(layer, lo+10, b+10, 8, 0, runs[0].zone)
+	for i := range runs {
+		r := &runs[i]
+		l, h := r.x0-zoneFaceIn, r.x0+r.widthIn()+zoneFaceIn
+		w.ClosedPolyline(layer, [][2]float64{{l, b}, {h, b}, {h, t}, {l, t}})
+		w.Text(layer, (l+h)/2, b+10, 8, 0, r.zone)
+	}
 	w.Text(lyNotes, lo+10, t-20, 8, 0, fmt.Sprintf("UNIT %d", u+1))
 	w.Line(lyGrid, lo, t+20, hi, t+20)
 }

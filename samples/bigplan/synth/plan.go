@@ -38,7 +38,8 @@ const (
 	intWallIn    = 3.5   // 2x4 stud wall
 	runGapIn     = 160.0 // clear space between neighbouring runs
 	rowPitchIn   = 640.0 // rows of units, origin to origin
-	zoneMarginIn = 60.0  // zone outline beyond its runs
+	zoneMarginIn = 60.0  // zone outline beyond its runs' ends
+	zoneFaceIn   = 0.75  // zone outline beyond the centre-line of a run's edge joist: its outer face
 	runsPerUnit  = 4
 	shortByIn    = 6.0 // a joist drawn this short of its beam
 )

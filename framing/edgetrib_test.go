@@ -1,0 +1,96 @@
+package framing
+
+import (
+	"strings"
+	"testing"
+)
+
+// Edge joists: the strip outside the outermost joist of a run is loaded
+// where the drawing shows it is. Expected values are closed-form
+// tributary-area geometry (each line of support, joist or wall, carries
+// half the sheathing span on each side of it; sheathing cantilevered past
+// the last joist is carried by that joist): common practice, no source.
+
+// edgePlan: four joists at x = 16, 32, 48, 64 spanning 144 in between
+// walls at y = 0 and 144, and a double-line 2x6 wall parallel to them
+// at x = 0 / 5.5 (mid-line 2.75 in, 13.25 in from the first joist).
+func edgePlan() *plan {
+	return newPlan().walls(-20, 100, 0, 144).
+		line("WALL", 0, -10, 0, 154).line("WALL", 5.5, -10, 5.5, 154).
+		joists(0, 144, 16, 32, 48, 64)
+}
+
+func zone(p *plan, name string, x0, y0, x1, y1 float64) *plan {
+	p.poly("LOAD-ZONE", true, Point{X: x0, Y: y0}, Point{X: x1, Y: y0}, Point{X: x1, Y: y1}, Point{X: x0, Y: y1})
+	return p.text("LOAD-ZONE", name, (x0+x1)/2, y0+20, 6)
+}
+
+func TestEdgeJoistBesideParallelWall(t *testing.T) {
+	pl := edgePlan().group(DefaultOptions())
+	first, last := member(t, pl, 16, 72), member(t, pl, 64, 72)
+	// 8 in to the neighbour + half of the 13.25 in to the wall's mid-line
+	checkNear(t, "x=16 trib", first.TribIn, 8+13.25/2, 1e-6)
+	checkNear(t, "x=16 left (toward the wall)", first.TribLeftIn, 13.25/2, 1e-6)
+	checkNear(t, "x=16 spacing", first.SpacingIn, 16, 1e-6) // spacing is the joists'
+	checkNear(t, "x=64 trib (nothing beside it)", last.TribIn, 8, 1e-6)
+	checkNear(t, "x=32 trib", member(t, pl, 32, 72).TribIn, 16, 1e-6)
+	c := issueCodes(pl.Issues)
+	if c[CodeEdgeSupport] != 1 || c[CodeEdgeZone] != 0 {
+		t.Errorf("issues %v, want one FRM221", pl.Issues)
+	}
+
+	// A larger edge distance from the project wins over half the gap.
+	opt := DefaultOptions()
+	opt.EdgeDistanceIn = 10
+	pl = edgePlan().group(opt)
+	checkNear(t, "x=16 trib with edge distance 10", member(t, pl, 16, 72).TribIn, 18, 1e-6)
+	checkNear(t, "x=64 trib with edge distance 10", member(t, pl, 64, 72).TribIn, 18, 1e-6)
+	if c := issueCodes(pl.Issues); c[CodeEdgeSupport] != 0 {
+		t.Errorf("FRM221 where the edge distance governs: %v", pl.Issues)
+	}
+
+	// A parallel wall 60 in away is beyond a strip of sheathing: not taken.
+	pl = newPlan().walls(-80, 100, 0, 144).line("WALL", -44, -10, -44, 154).
+		joists(0, 144, 16, 32, 48, 64).group(DefaultOptions())
+	checkNear(t, "x=16 trib, wall 60 in away", member(t, pl, 16, 72).TribIn, 8, 1e-6)
+}
+
+func TestEdgeJoistZoneStrip(t *testing.T) {
+	// The zone reaches 12 in past the last joist (x = 76): that strip is
+	// cantilevered sheathing, the joist's: 8 + 12 = 20 in, a warning. On
+	// the other side the wall is beside the joist: half the gap, not the
+	// zone.
+	pl := zone(edgePlan(), "FLOOR", -10, -10, 76, 154).group(DefaultOptions())
+	checkNear(t, "x=64 trib", member(t, pl, 64, 72).TribIn, 20, 1e-6)
+	checkNear(t, "x=16 trib", member(t, pl, 16, 72).TribIn, 8+13.25/2, 1e-6)
+	var warned bool
+	for _, is := range pl.Issues {
+		if is.Code == CodeEdgeZone {
+			warned = is.Severity.String() == "warning" && strings.Contains(is.Msg, "12.0 in past it") && strings.Contains(is.Msg, "20.00 in")
+		}
+	}
+	if !warned {
+		t.Errorf("no FRM222 warning naming the 12 in strip: %v", pl.Issues)
+	}
+
+	// Drawn to the joist's outer face (0.75 in past it): nothing added.
+	pl = zone(edgePlan(), "FLOOR", -10, -10, 64.75, 154).group(DefaultOptions())
+	checkNear(t, "x=64 trib, zone to its face", member(t, pl, 64, 72).TribIn, 8, 1e-6)
+	if c := issueCodes(pl.Issues); c[CodeEdgeZone] != 0 {
+		t.Errorf("FRM222 for a zone drawn to the joist's face: %v", pl.Issues)
+	}
+
+	// Reaching 66 in past it: more than a strip of sheathing; the load
+	// there reaches no member drawn. A warning, and the joist keeps 8 in.
+	pl = zone(edgePlan(), "FLOOR", -10, -10, 130, 154).group(DefaultOptions())
+	checkNear(t, "x=64 trib, zone 66 in past it", member(t, pl, 64, 72).TribIn, 8, 1e-6)
+	warned = false
+	for _, is := range pl.Issues {
+		if is.Code == CodeEdgeZone && strings.Contains(is.Msg, "reaches no member drawn") {
+			warned = true
+		}
+	}
+	if !warned {
+		t.Errorf("no FRM222 warning for the 66 in strip: %v", pl.Issues)
+	}
+}
