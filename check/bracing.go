@@ -1,6 +1,10 @@
 package check
 
-import "strings"
+import (
+	"math"
+	"strconv"
+	"strings"
+)
 
 // The bracing a result relies on is stated in its bending traces (issue 13
 // item 6; DOMAIN.md "Bracing relied on"): bearings brace both edges, which
@@ -71,11 +75,11 @@ func (b *braceRec) pointsText(top bool) string {
 	var s strings.Builder
 	s.WriteString("bearings at ")
 	at := b.firstIn
-	s.WriteString(num(at))
+	s.WriteString(posText(at))
 	for _, sp := range b.spansIn {
 		at += sp
 		s.WriteString(", ")
-		s.WriteString(num(at))
+		s.WriteString(posText(at))
 	}
 	s.WriteString(" in, each bracing both edges (assumes blocking, a rim board or hangers there)")
 	if len(b.drawn) > 0 {
@@ -107,14 +111,22 @@ func (b *braceRec) pointsText(top bool) string {
 	return s.String()
 }
 
-// numsText prints positions as "48, 96".
+// numsText prints positions as "48, 96.25".
 func numsText(v []float64) string {
 	var s strings.Builder
 	for i, x := range v {
 		if i > 0 {
 			s.WriteString(", ")
 		}
-		s.WriteString(num(x))
+		s.WriteString(posText(x))
 	}
 	return s.String()
+}
+
+// posText prints a position along a member to 0.01 in, with no trailing
+// zeros ("146.25", "56"): the report re-measures it from the datum and
+// prints it to 1/16 in, which the 3 or 4 significant digits of the
+// trace's other numbers would not give (146.3 for 146.25).
+func posText(x float64) string {
+	return strconv.FormatFloat(math.Round(x*100)/100+0, 'f', -1, 64)
 }

@@ -272,9 +272,23 @@ func bracingLines(m *Member) []string {
 }
 
 // rePositions finds a list of positions along a member in the words of
-// the engine's bracing record ("bearings at 2.25, 146.3 in", "rows to add
-// at 74.25 in", "... = true) at 60 in"), measured from the member's Start.
+// the engine's bracing record ("bearings at 2.25, 146.25 in", "rows to add
+// at 74.25 in", "... = true) at 60 in"), measured along the member as the
+// check took it: from its Start, or from as far before it as its first
+// bearing lies (checkShiftIn).
 var rePositions = regexp.MustCompile(`(bearings at|drawn rows at|rows to add at|\) at) (-?[0-9.]+(?:, -?[0-9.]+)*) in\b`)
+
+// checkShiftIn is how far before m's Start the check's positions are
+// measured from: a member whose drawn end stops short of its first
+// support is checked from that bearing's centre-line (pipeline
+// checkInput), and members checked alike share one calculation whatever
+// their drawn starts.
+func checkShiftIn(m *Member) float64 {
+	if len(m.BearingsAtIn) > 0 && m.BearingsAtIn[0] < 0 {
+		return -m.BearingsAtIn[0]
+	}
+	return 0
+}
 
 // refaceText rewrites such lists from the datum of m (the face of its
 // first bearing), in feet-inches, so the calculation gives positions as
@@ -283,6 +297,7 @@ func refaceText(s string, m *Member) string {
 	if s == "" || !strings.Contains(s, " at ") {
 		return s
 	}
+	shift := checkShiftIn(m)
 	return rePositions.ReplaceAllStringFunc(s, func(match string) string {
 		g := rePositions.FindStringSubmatch(match)
 		var vs []float64
@@ -291,7 +306,7 @@ func refaceText(s string, m *Member) string {
 			if err != nil {
 				return match
 			}
-			vs = append(vs, m.FromFace(v))
+			vs = append(vs, m.FromFace(v-shift))
 		}
 		parts := make([]string, len(vs))
 		for i, v := range vs {
