@@ -216,6 +216,11 @@ func membersFinite(ms []Member) bool {
 				return false
 			}
 		}
+		for _, p := range m.PointLoads {
+			if !fin(p.AtIn, p.FromFaceIn, p.DeadLb, p.LiveLb, p.RoofLiveLb, p.SnowLb, p.WindDownLb, p.WindUpLb) {
+				return false
+			}
+		}
 		if len(m.Checks) > 0 && !seenChecks[checksID{&m.Checks[0], len(m.Checks)}] {
 			for j := range m.Checks {
 				c := &m.Checks[j]

@@ -109,6 +109,22 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 			w.num("to_in", z.ToIn)
 		})
 	}
+	if len(m.PointLoads) > 0 && !w.skipped("point_loads") {
+		w.objects("point_loads", len(m.PointLoads), func(i int) {
+			p := &m.PointLoads[i]
+			if p.Name != "" {
+				w.str("name", p.Name)
+			}
+			w.num("at_in", p.AtIn)
+			w.num("from_face_in", p.FromFaceIn)
+			w.num("dead_lb", p.DeadLb)
+			w.num("live_lb", p.LiveLb)
+			w.num("roof_live_lb", p.RoofLiveLb)
+			w.num("snow_lb", p.SnowLb)
+			w.num("wind_down_lb", p.WindDownLb)
+			w.num("wind_up_lb", p.WindUpLb)
+		})
+	}
 	if m.Calculation != "" {
 		w.str("calculation", m.Calculation)
 	}

@@ -230,6 +230,7 @@ var shareEq = map[string]func(a, b *shareItem) bool{
 	"grade":          func(a, b *shareItem) bool { return a.m.Grade == b.m.Grade },
 	"zone":           func(a, b *shareItem) bool { return a.m.Zone == b.m.Zone },
 	"zone_pieces":    func(a, b *shareItem) bool { return slices.Equal(a.m.ZonePieces, b.m.ZonePieces) },
+	"point_loads":    func(a, b *shareItem) bool { return slices.Equal(a.m.PointLoads, b.m.PointLoads) },
 	"calculation":    func(a, b *shareItem) bool { return a.calc == b.calc },
 	"governing":      func(a, b *shareItem) bool { return a.m.Governing == b.m.Governing },
 	"max_ratio":      func(a, b *shareItem) bool { return a.m.MaxRatio == b.m.MaxRatio },

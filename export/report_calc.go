@@ -17,6 +17,7 @@ type markCalc struct {
 	Inputs                                    []keyValue
 	DesignValues                              []DesignValue
 	AreaLoads                                 []areaLoad
+	PointLoads                                []string // each point load on the member, in words
 	Combos                                    []comboLoad
 	ComboProblems                             []string
 	Factors                                   []traceLine
@@ -101,6 +102,46 @@ func buildCalcs(r *Results) []markCalc {
 		}
 	}
 	return calcs
+}
+
+// pointLoadText describes point load i of a member: "P1 (hoist) at
+// 8'-2 1/4\": D 400 lb, L 300 lb".
+func pointLoadText(i int, p PointLoad) string {
+	s := "P" + strconv.Itoa(i+1)
+	if p.Name != "" {
+		s += " (" + p.Name + ")"
+	}
+	s += " at " + FtIn(p.FromFaceIn) + ":"
+	sep := " "
+	for _, l := range []struct {
+		name string
+		lb   float64
+	}{{"D", p.DeadLb}, {"L", p.LiveLb}, {"Lr", p.RoofLiveLb}, {"S", p.SnowLb}, {"W down", p.WindDownLb}, {"W up", p.WindUpLb}} {
+		if l.lb != 0 {
+			s += sep + l.name + " " + fmtNum(l.lb) + " lb"
+			sep = ", "
+		}
+	}
+	return s
+}
+
+// pointTotals adds up a member's point loads by load type, as
+// comboLoads takes them (W up negative, as a line load away from the
+// member is); nil when it has none.
+func pointTotals(pls []PointLoad) map[string]float64 {
+	if len(pls) == 0 {
+		return nil
+	}
+	t := map[string]float64{}
+	for _, p := range pls {
+		t[loadD] += p.DeadLb
+		t[loadL] += p.LiveLb
+		t[loadLr] += p.RoofLiveLb
+		t[loadS] += p.SnowLb
+		t["W down"] += p.WindDownLb
+		t["W up"] -= p.WindUpLb
+	}
+	return t
 }
 
 // zoneAreaLoads returns w = p x trib for each load of zone z, the load
@@ -192,7 +233,10 @@ func fillCalc(c *markCalc, r *Results, m *Member) {
 		if len(combos) == 0 {
 			combos = defaultCombos
 		}
-		c.Combos, c.ComboProblems = comboLoads(combos, zone, m.TribIn, cd)
+		c.Combos, c.ComboProblems = comboLoads(combos, zone, m.TribIn, pointTotals(m.PointLoads), cd)
+	}
+	for i, p := range m.PointLoads {
+		c.PointLoads = append(c.PointLoads, pointLoadText(i, p))
 	}
 	for _, ch := range m.Checks {
 		t := checkTitles[ch.Kind]

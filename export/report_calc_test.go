@@ -158,7 +158,7 @@ func TestComboLoads(t *testing.T) {
 	// w = p x trib: 10 psf x 16 in / 12 = 13.333 plf; 40 psf -> 53.333 plf;
 	// closed form, no source needed beyond the arithmetic.
 	z := &Zone{Name: "F", DeadPsf: 10, LivePsf: 40, WindUpPsf: 30}
-	got, probs := comboLoads([]string{"D", "D+L", "D+(Lr or S)", "D+0.75L+0.75(Lr or S)", "0.6D+0.6W", "D+X"}, z, 16, map[string]float64{"D+L": 1})
+	got, probs := comboLoads([]string{"D", "D+L", "D+(Lr or S)", "D+0.75L+0.75(Lr or S)", "0.6D+0.6W", "D+X"}, z, 16, nil, map[string]float64{"D+L": 1})
 	if len(probs) != 1 {
 		t.Errorf("problems %v, want one for D+X", probs)
 	}

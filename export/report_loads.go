@@ -143,6 +143,8 @@ func (p *comboReader) atom() ([]comboCase, error) {
 // comboLoad is one line of the "loads per combination" table.
 type comboLoad struct {
 	Combo, Case, Subst, WPlf, CD string
+	// PSubst and PLb: the point loads' sum, for a member that carries any
+	PSubst, PLb string
 }
 
 // zoneLineLoads returns w = p x trib for each load of the zone, plf, with
@@ -159,10 +161,12 @@ func zoneLineLoads(z *Zone, tribIn float64) map[string]float64 {
 // and tributary width tribIn: w = sum of factor x line load, one line per
 // case, leaving out cases whose loads other than D are all zero (ASCE 7-16
 // 2.4.1 combinations with an absent load add nothing) and cases that repeat
-// an earlier one once the absent loads are dropped. cd maps a load
-// case (caseKey of the engine's case name) to its CD from the member's
-// factors.
-func comboLoads(combos []string, z *Zone, tribIn float64, cd map[string]float64) ([]comboLoad, []string) {
+// an earlier one once the absent loads are dropped. p holds the member's
+// point loads added up by load type (nil: none): a load type present only
+// in them makes a case too, and each case adds them up as the line loads
+// (P = sum of factor x P). cd maps a load case (caseKey of the engine's
+// case name) to its CD from the member's factors.
+func comboLoads(combos []string, z *Zone, tribIn float64, p map[string]float64, cd map[string]float64) ([]comboLoad, []string) {
 	w := zoneLineLoads(z, tribIn)
 	var out []comboLoad
 	var problems []string
@@ -174,8 +178,8 @@ func comboLoads(combos []string, z *Zone, tribIn float64, cd map[string]float64)
 			continue
 		}
 		for _, c := range cases {
-			for _, dir := range windCases(c, w) {
-				l, ok := evalCase(c, w, dir)
+			for _, dir := range windCases(c, w, p) {
+				l, ok := evalCase(c, w, p, dir)
 				if !ok || seen[l.Case] {
 					continue
 				}
@@ -191,57 +195,76 @@ func comboLoads(combos []string, z *Zone, tribIn float64, cd map[string]float64)
 	return out, problems
 }
 
-// evalCase writes one case out, leaving out loads the zone does not have:
-// "D + 0.75 L" = "12 + 0.75(40)" = 42. ok is false when the case has no
-// load other than D and is not D alone.
-func evalCase(c comboCase, w map[string]float64, dir string) (comboLoad, bool) {
+// evalCase writes one case out, leaving out loads neither the zone nor
+// the point loads p have: "D + 0.75 L" = "12 + 0.75(40)" = 42. ok is false
+// when the case has no load other than D and is not D alone.
+func evalCase(c comboCase, w, p map[string]float64, dir string) (comboLoad, bool) {
 	var l comboLoad
-	total, live, terms := 0.0, false, 0
+	total, totalP, live, terms, pterms := 0.0, 0.0, false, 0, 0
+	term := func(sum *string, n *int, f, v float64) {
+		if *n > 0 {
+			*sum += " + "
+		}
+		*n++
+		if f == 1 {
+			*sum += fmtNum(v)
+		} else {
+			*sum += fmtNum(f) + "(" + fmtNum(v) + ")"
+		}
+	}
 	for _, k := range []string{loadD, loadL, loadLr, loadS, loadW} {
 		f, ok := c[k]
 		if !ok {
 			continue
 		}
-		wk, name := w[k], k
+		name := k
 		if k == loadW {
-			wk, name = w[dir], dir
+			name = dir
 		}
-		if wk == 0 {
+		wk, pk := w[name], p[name]
+		if wk == 0 && pk == 0 {
 			continue
 		}
 		if k != loadD {
 			live = true
 		}
-		total += f * wk
-		if terms > 0 {
+		if l.Case != "" {
 			l.Case += " + "
-			l.Subst += " + "
 		}
-		terms++
 		if f == 1 {
 			l.Case += name
-			l.Subst += fmtNum(wk)
 		} else {
 			l.Case += fmtNum(f) + " " + name
-			l.Subst += fmtNum(f) + "(" + fmtNum(wk) + ")"
+		}
+		if wk != 0 {
+			total += f * wk
+			term(&l.Subst, &terms, f, wk)
+		}
+		if pk != 0 {
+			totalP += f * pk
+			term(&l.PSubst, &pterms, f, pk)
 		}
 	}
 	if !live && !(len(c) == 1 && c[loadD] != 0) {
 		return l, false
 	}
 	l.WPlf = fmtNum(total)
+	if p != nil {
+		l.PLb = fmtNum(totalP)
+	}
 	return l, true
 }
 
 // windCases returns the wind directions a case is evaluated for: none when
-// it has no W, else W down and W up (those with a load).
-func windCases(c comboCase, w map[string]float64) []string {
+// it has no W, else W down and W up (those with a load, on the tributary
+// width or in the point loads p).
+func windCases(c comboCase, w, p map[string]float64) []string {
 	if _, ok := c[loadW]; !ok {
 		return []string{""}
 	}
 	var dirs []string
 	for _, d := range []string{"W down", "W up"} {
-		if w[d] != 0 {
+		if w[d] != 0 || p[d] != 0 {
 			dirs = append(dirs, d)
 		}
 	}

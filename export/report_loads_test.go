@@ -11,7 +11,7 @@ func TestComboLoadsCarryEngineCD(t *testing.T) {
 		caseKey("D"): 0.9, caseKey("D+Lr"): 1.25,
 		caseKey("D+0.6W(down)"): 1.6, caseKey("D+0.6W(up)"): 1.6,
 	}
-	rows, problems := comboLoads([]string{"D", "D+(Lr or S)", "D+0.6W"}, z, 24, cd)
+	rows, problems := comboLoads([]string{"D", "D+(Lr or S)", "D+0.6W"}, z, 24, nil, cd)
 	if len(problems) > 0 {
 		t.Fatal(problems)
 	}

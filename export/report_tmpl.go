@@ -341,9 +341,14 @@ At each flagged bearing a connector is needed whose allowable load for the combi
 <table><tr><th>value</th><th></th><th>size</th><th>source</th></tr>{{range .DesignValues}}<tr><td>{{.Name}}</td><td class="n">{{val .Value .Unit}} {{.Unit}}</td><td>{{.Size}}</td><td>{{.Source}}</td></tr>{{end}}</table>{{end}}
 {{if .AreaLoads}}<h4>Loads on the tributary width</h4>
 <div class="loads">{{range .AreaLoads}}<div class="eq"><span class="sym">w<sub>{{.Load}}</sub></span> = p trib = {{.Subst}} = <span class="val">{{.WPlf}}</span> plf</div>{{end}}</div>{{end}}
+{{if .PointLoads}}<h4>Point loads</h4>
+<p>Positions from the face of the first bearing; each combination takes them by load type with the same factors as the loads on the tributary width.</p>
+<ul class="loads">{{range .PointLoads}}<li>{{.}}</li>{{end}}</ul>{{end}}
 {{if .Combos}}<h4>Load combinations (ASCE 7-16 2.4.1, ASD)</h4>
-<table class="combos"><tr><th>combination</th><th>case</th><th>w = sum of factor x w</th><th>w, plf</th><th>CD (NDS 2018 Table 2.3.2)</th></tr>
-{{range .Combos}}<tr><td>{{combo .Combo}}</td><td>{{.Case}}</td><td>{{.Subst}}</td><td class="n">{{.WPlf}}</td><td class="n">{{.CD}}</td></tr>{{end}}</table>{{end}}
+{{if .PointLoads}}<table class="combos"><tr><th>combination</th><th>case</th><th>w = sum of factor x w</th><th>w, plf</th><th>P = sum of factor x P</th><th>P, lb</th><th>CD (NDS 2018 Table 2.3.2)</th></tr>
+{{range .Combos}}<tr><td>{{combo .Combo}}</td><td>{{.Case}}</td><td>{{.Subst}}</td><td class="n">{{.WPlf}}</td><td>{{.PSubst}}</td><td class="n">{{.PLb}}</td><td class="n">{{.CD}}</td></tr>{{end}}</table>
+{{else}}<table class="combos"><tr><th>combination</th><th>case</th><th>w = sum of factor x w</th><th>w, plf</th><th>CD (NDS 2018 Table 2.3.2)</th></tr>
+{{range .Combos}}<tr><td>{{combo .Combo}}</td><td>{{.Case}}</td><td>{{.Subst}}</td><td class="n">{{.WPlf}}</td><td class="n">{{.CD}}</td></tr>{{end}}</table>{{end}}{{end}}
 {{range .ComboProblems}}<p class="msgs">{{.}}</p>{{end}}
 {{if .FactorLine}}<p class="fline"><b>Adjustment factors:</b> {{.FactorLine}}</p>{{end}}
 {{if .Factors}}<h4>Adjustment factors</h4>

@@ -113,6 +113,21 @@ type ZonePiece struct {
 	ToIn   float64 `json:"to_in"`
 }
 
+// PointLoad is a point load a member carries (a point-load mark on the
+// plan): where along the member, from Start and from its datum, and its
+// loads by type, lb (service level, before the combinations' factors).
+type PointLoad struct {
+	Name       string  `json:"name,omitempty"` // the mark's text or the [[point_load]] it names
+	AtIn       float64 `json:"at_in"`
+	FromFaceIn float64 `json:"from_face_in"`
+	DeadLb     float64 `json:"dead_lb"`
+	LiveLb     float64 `json:"live_lb"`
+	RoofLiveLb float64 `json:"roof_live_lb"`
+	SnowLb     float64 `json:"snow_lb"`
+	WindDownLb float64 `json:"wind_down_lb"`
+	WindUpLb   float64 `json:"wind_up_lb"`
+}
+
 // Member is one joist with its geometry, checks and outcome.
 type Member struct {
 	ID     string `json:"id"`
@@ -157,6 +172,9 @@ type Member struct {
 	// ZonePieces, for a member crossing load-zone edges, say where each
 	// zone loads it (along the member from Start); absent otherwise.
 	ZonePieces []ZonePiece `json:"zone_pieces,omitempty"`
+	// PointLoads are the point loads on the member (absent when none),
+	// which every combination takes with the zone loads by load type.
+	PointLoads []PointLoad `json:"point_loads,omitempty"`
 
 	// Calculation names the entry of results.json's "calculations" that
 	// holds this member's check traces and factors; WriteJSON sets it.

@@ -30,8 +30,12 @@ type Outcome struct {
 	PlanFile string              // the plan file's name, for findings about the whole plan
 	Path     *PathOutcome        // beams, posts, walls and joints of the load path; nil without beams or posts
 
-	Inputs []check.Member    // each plan member's check input, same order
-	Marks  map[string]string // every mark's name by its defining key, for marks.json
+	Inputs []check.Member // each plan member's check input, same order
+	// PointLoads are the point loads each member carries, by member
+	// index, positions along it from its Start (the check inputs' own,
+	// kept for the outputs when the inputs go)
+	PointLoads map[int][]check.PointLoad
+	Marks      map[string]string // every mark's name by its defining key, for marks.json
 	// MarksFresh: marks.json named none of this plan's marks, so they
 	// were named afresh
 	MarksFresh bool
@@ -172,6 +176,18 @@ func runMembers(in Input) (o *Outcome, beams []beamIn, inputs []check.Member, tw
 	})
 	badLoads := applyPointLoads(p, plan, inputs, shifts)
 	o.Inputs = inputs
+	for _, mk := range plan.PointLoads {
+		if k := mk.Member; k >= 0 && o.PointLoads[k] == nil && len(inputs[k].PointLoads) > 0 {
+			if o.PointLoads == nil {
+				o.PointLoads = map[int][]check.PointLoad{}
+			}
+			pls := slices.Clone(inputs[k].PointLoads)
+			for i := range pls {
+				pls[i].AtIn -= shifts[k]
+			}
+			o.PointLoads[k] = pls
+		}
+	}
 	for k := range plan.Members {
 		m := &plan.Members[k]
 		msgs := append(inputMsgs[k], badLoads[k]...)

@@ -57,6 +57,10 @@ func exportResults(o *outcome, planName string) *export.Results {
 		for k := lo; k < hi; k++ {
 			em := conv.member(&plan.Members[k], &o.Results[k], toInch)
 			placeMember(&em, &plan.Members[k])
+			for _, p := range o.PointLoads[k] { // a map read on every core: never written meanwhile
+				em.PointLoads = append(em.PointLoads, export.PointLoad{Name: p.Name, AtIn: p.AtIn, FromFaceIn: em.FromFace(p.AtIn),
+					DeadLb: p.DeadLb, LiveLb: p.LiveLb, RoofLiveLb: p.RoofLiveLb, SnowLb: p.SnowLb, WindDownLb: p.WindDownLb, WindUpLb: p.WindUpLb})
+			}
 			if len(em.Messages) > 0 {
 				msgs := make([]string, len(em.Messages))
 				for i, msg := range em.Messages {
@@ -466,7 +470,9 @@ func assumptions(o *outcome) export.Assumptions {
 		return x.Size < y.Size
 	})
 	a.Notes = append(a.Notes,
-		"Members are sawn-lumber joists under uniform load on their tributary width; spans are centre-to-centre of bearings; an edge joist's tributary width is half the gap to its one neighbour (plus any drawing.edge_distance_in).",
+		"Members are joists loaded by their load zones on their tributary width and by the point loads marked on them (point_loads); spans are centre-to-centre of bearings. "+
+			"A joist's tributary width is half the gap to its neighbouring joist on each side; on an edge joist's outer side, half the gap to a parallel wall or beam within 48 in (FRM221), "+
+			"else the strip to its load zone's edge, up to 48 in (FRM222, a warning), else drawing.edge_distance_in, whichever the drawing shows is more.",
 		"Members crossing load-zone edges are loaded zone by zone where each zone acts (each load combination with each zone's own loads); they take the stricter deflection limits of their zones.",
 	)
 	a.Notes = append(a.Notes, fmt.Sprintf("Net uplift at a bearing is the joist's ASD reaction under the combination that gives the most "+
