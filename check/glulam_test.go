@@ -73,8 +73,9 @@ func TestGlulamNegativeMoment(t *testing.T) {
 // TestTimberBeam: a 6x14 Douglas Fir-Larch No.1 beam (beams and
 // stringers: d = 14 > b + 2 = 8, NDS 2018 Supplement Table 4D), dressed
 // 5.5 x 13.5 in (Table 1A, timbers: 1/2 in off each way), Fb = 1350 psi
-// (Table 4D, from memory: verify) with CF = (12/13.5)^(1/9) = 0.9870 (NDS
-// 2018 4.3.6.2), top edge braced: under D + L (CD = 1.0) Fb' = 1332 psi;
+// (Table 4D, per StructuralTools SawnLumber.csv; docs/VERIFIED.md) with
+// CF = (12/13.5)^(1/9) = 0.9870 (NDS 2018 4.3.6.2), top edge braced:
+// under D + L (CD = 1.0) Fb' = 1332 psi;
 // S = 5.5 (13.5^2) / 6 = 167.06 in^3 (hand calculation). A 6x6 is a post
 // and timber (No.1 Fb 1200 psi).
 func TestTimberBeam(t *testing.T) {
@@ -92,10 +93,10 @@ func TestTimberBeam(t *testing.T) {
 	}
 	cf := math.Pow(12/13.5, 1.0/9)
 	expectNear(t, "CF", cf, 0.9870, 5e-4, 0, "NDS 2018 4.3.6.2, hand calculation")
-	expectNear(t, "Fb'", find(t, r, KindBendingTop).Allowable, 1350*cf, 1e-9, 1e-9, "NDS 2018 Supplement Table 4D (from memory: verify), 4.3.6.2")
+	expectNear(t, "Fb'", find(t, r, KindBendingTop).Allowable, 1350*cf, 1e-9, 1e-9, "NDS 2018 Supplement Table 4D (per StructuralTools SawnLumber.csv), 4.3.6.2")
 	dv, err := BuiltinMaterials().Lookup("Douglas Fir-Larch", "No.1", "6x6")
 	if err != nil || dv.FbPsi != 1200 {
-		t.Errorf("6x6 No.1: %+v %v, want posts and timbers Fb 1200 (Table 4D, from memory: verify)", dv, err)
+		t.Errorf("6x6 No.1: %+v %v, want posts and timbers Fb 1200 (Table 4D, per StructuralTools SawnLumber.csv)", dv, err)
 	}
 	if _, err := BuiltinMaterials().Lookup("Hem-Fir", "No.1", "6x14"); err == nil {
 		t.Errorf("Hem-Fir timber: want an error (not built in)")
