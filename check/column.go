@@ -120,7 +120,8 @@ func CheckPost(p Post, s Settings) PostResult {
 	if dv.SizeFactor == SizeFactorSCL {
 		// structural composite lumber: no CF or Ci, dry service only (see
 		// scl.go); c stays 0.8 below, under the 0.9 that NDS 2018 3.7.1.5
-		// gives SCL (from memory: verify), so CP errs low
+		// gives SCL (0.9 for glulam, SCL and CLT per xcfem/xc
+		// AWCNDS_materials.py @ 007d96f3, LSL.get37_1c), so CP errs low
 		if s.WetService {
 			r.Messages = append(r.Messages, fmt.Sprintf("%s in wet service: structural composite lumber takes its wet-service "+
 				"factors from the manufacturer (NDS 2018 8.3.3, from memory: verify), which framecheck does not apply; check this post by hand", dv.Species))

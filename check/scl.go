@@ -28,9 +28,10 @@ import (
 // CM = 1: the user's values are for dry service, and wet service is
 // refused (the manufacturer gives any wet-service factors; NDS 2018 8.3.3,
 // from memory: verify). Ct from NDS 2018 Table 2.3.3 (8.3.4). The
-// repetitive member factor of NDS 2018 8.3.7 (1.04 for SCL 3 1/2 in and
-// thinner used as joists, from memory: verify) is NOT applied: Cr = 1.0,
-// on the safe side. There is no incising factor and no flat-use factor.
+// repetitive member factor of NDS 2018 8.3.7 (1.04 for SCL, per
+// wikiengineer.com/Structural/RepetitiveMemberFactor; the limit "3 1/2 in
+// and thinner used as joists" is from memory: verify) is NOT applied:
+// Cr = 1.0, on the safe side. There is no incising factor and no flat-use factor.
 //
 // Widths and depths are the member's actual inches: an SCL member is sized
 // "1.75x11.875" or "1 3/4 x 11 7/8", never nominal, and is not dressed.

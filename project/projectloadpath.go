@@ -18,7 +18,7 @@ var (
 	pliesRule     = between(1, 4, true)     // built-up members of 1 to 4 plies (check: 2 to 4 plies of 2x)
 	postHeightIn  = between(0, 600, false)  // in: a post up to 50 ft
 	pointLoadRule = between(0, 1e6, true)   // lb
-	keRule        = between(0.5, 2.5, true) // NDS 2018 Appendix G Table G1 spans 0.65 to 2.4 (from memory: verify)
+	keRule        = between(0.5, 2.5, true) // NDS 2018 Appendix G Table G1: least recommended Ke 0.65 (xcfem/xc buckling_base.py @ 054858db); largest 2.4 from memory: verify
 )
 
 // beamKeys reads the keys of a [[support]] table that make its supports
