@@ -217,7 +217,7 @@ func membersFinite(ms []Member) bool {
 			}
 		}
 		for _, p := range m.PointLoads {
-			if !fin(p.AtIn, p.FromFaceIn, p.DeadLb, p.LiveLb, p.RoofLiveLb, p.SnowLb, p.WindDownLb, p.WindUpLb) {
+			if !fin(p.AtIn, p.FromFaceIn, p.DeadLb, p.LiveLb, p.RoofLiveLb, p.SnowLb, p.WindDownLb, p.WindUpLb, p.UpliftDeadLb) {
 				return false
 			}
 		}

@@ -123,6 +123,7 @@ func (e *memberEncoder) encode(m, orig *Member) ([]byte, error) {
 			w.num("snow_lb", p.SnowLb)
 			w.num("wind_down_lb", p.WindDownLb)
 			w.num("wind_up_lb", p.WindUpLb)
+			w.num("uplift_dead_lb", p.UpliftDeadLb)
 		})
 	}
 	if m.Calculation != "" {

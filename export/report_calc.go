@@ -122,6 +122,11 @@ func pointLoadText(i int, p PointLoad) string {
 			sep = ", "
 		}
 	}
+	if p.UpliftDeadLb != p.DeadLb {
+		s += "; D relied on against uplift " + fmtNum(p.UpliftDeadLb) + " lb"
+	} else if p.DeadLb != 0 {
+		s += "; its D is relied on against uplift (0.6D + 0.6W)"
+	}
 	return s
 }
 

@@ -115,17 +115,21 @@ type ZonePiece struct {
 
 // PointLoad is a point load a member carries (a point-load mark on the
 // plan): where along the member, from Start and from its datum, and its
-// loads by type, lb (service level, before the combinations' factors).
+// loads by type, lb (service level, before the combinations' factors),
+// with the dead load relied on against uplift.
 type PointLoad struct {
 	Name       string  `json:"name,omitempty"` // the mark's text or the [[point_load]] it names
 	AtIn       float64 `json:"at_in"`
 	FromFaceIn float64 `json:"from_face_in"`
-	DeadLb     float64 `json:"dead_lb"`
-	LiveLb     float64 `json:"live_lb"`
-	RoofLiveLb float64 `json:"roof_live_lb"`
-	SnowLb     float64 `json:"snow_lb"`
-	WindDownLb float64 `json:"wind_down_lb"`
-	WindUpLb   float64 `json:"wind_up_lb"`
+	// the loads as TypeLoads has them (not embedded: the JSON utilities
+	// walk named fields)
+	DeadLb       float64 `json:"dead_lb"`
+	LiveLb       float64 `json:"live_lb"`
+	RoofLiveLb   float64 `json:"roof_live_lb"`
+	SnowLb       float64 `json:"snow_lb"`
+	WindDownLb   float64 `json:"wind_down_lb"`
+	WindUpLb     float64 `json:"wind_up_lb"`
+	UpliftDeadLb float64 `json:"uplift_dead_lb"`
 }
 
 // Member is one joist with its geometry, checks and outcome.

@@ -27,8 +27,8 @@ func TestPointLoadInOutputs(t *testing.T) {
 	}
 	p := m.PointLoads[0]
 	if math.Abs(p.AtIn-100.75) > 1e-9 || math.Abs(p.FromFaceIn-98.25) > 1e-9 || p.DeadLb != 400 || p.LiveLb != 300 ||
-		p.RoofLiveLb != 0 || p.SnowLb != 0 || p.WindDownLb != 0 || p.WindUpLb != 0 {
-		t.Errorf("hoist %+v, want 400 D and 300 L at 100.75 in (98.25 from the face)", p)
+		p.RoofLiveLb != 0 || p.SnowLb != 0 || p.WindDownLb != 0 || p.WindUpLb != 0 || p.UpliftDeadLb != 400 {
+		t.Errorf("hoist %+v, want 400 D (relied on against uplift) and 300 L at 100.75 in (98.25 from the face)", p)
 	}
 	for i := range r.Members {
 		if o := &r.Members[i]; o.ID != "M76" && len(o.PointLoads) > 0 {
@@ -47,7 +47,8 @@ func TestPointLoadInOutputs(t *testing.T) {
 	page := string(raw)
 	for _, s := range []string{
 		`<h4>Point loads</h4>`,
-		`P1 (P: 400 D, 300 L) at 8&#39;-2 1/4&#34;: D 400 lb, L 300 lb`,
+		// its dead load counts against uplift: said, so a designer can judge it
+		`P1 (P: 400 D, 300 L) at 8&#39;-2 1/4&#34;: D 400 lb, L 300 lb; its D is relied on against uplift (0.6D &#43; 0.6W)`,
 		// html/template writes "+" as &#43;
 		`<td>D &#43; 0.75 L &#43; 0.75 S</td><td>20 &#43; 0.75(50)</td><td class="n">57.5</td><td>400 &#43; 0.75(300)</td><td class="n">625</td><td class="n">1.15</td>`,
 	} {

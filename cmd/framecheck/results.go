@@ -58,8 +58,13 @@ func exportResults(o *outcome, planName string) *export.Results {
 			em := conv.member(&plan.Members[k], &o.Results[k], toInch)
 			placeMember(&em, &plan.Members[k])
 			for _, p := range o.PointLoads[k] { // a map read on every core: never written meanwhile
+				ud := p.DeadLb
+				if p.HasUpliftDead {
+					ud = p.UpliftDeadLb
+				}
 				em.PointLoads = append(em.PointLoads, export.PointLoad{Name: p.Name, AtIn: p.AtIn, FromFaceIn: em.FromFace(p.AtIn),
-					DeadLb: p.DeadLb, LiveLb: p.LiveLb, RoofLiveLb: p.RoofLiveLb, SnowLb: p.SnowLb, WindDownLb: p.WindDownLb, WindUpLb: p.WindUpLb})
+					DeadLb: p.DeadLb, LiveLb: p.LiveLb, RoofLiveLb: p.RoofLiveLb, SnowLb: p.SnowLb,
+					WindDownLb: p.WindDownLb, WindUpLb: p.WindUpLb, UpliftDeadLb: ud})
 			}
 			if len(em.Messages) > 0 {
 				msgs := make([]string, len(em.Messages))
