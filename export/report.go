@@ -249,6 +249,9 @@ func buildReport(r *Results, g *PlanGeometry, when time.Time) *reportPage {
 	p.Uplift = buildUplift(r)
 	p.Path = buildPath(r)
 	p.PlanSVG, p.MemberJSON = planSVG(r, g)
+	if g != nil && len(g.Zones) > maxZoneLabels {
+		p.Legend = append(p.Legend, legendRow{Label: "load zones: " + strconv.Itoa(len(g.Zones)) + " outlines, each named on hover (too many to label)"})
+	}
 	p.Calcs = buildCalcs(r)
 	return p
 }

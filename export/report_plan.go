@@ -98,26 +98,47 @@ func planSVG(r *Results, g *PlanGeometry) (template.HTML, template.JS) {
 	buf = appendCoord(buf, h+2*pad)
 	buf = append(buf, `">`+"\n"...)
 
+	// Zones: one path per zone name (its title), a subpath per outline,
+	// then each outline's name at its centroid, the text's attributes
+	// given once: a plan of many units draws thousands of outlines.
 	buf = append(buf, `<g id="zones">`...)
-	for _, z := range g.Zones {
+	var zoneNames []string
+	byZone := map[string][]int{}
+	for i, z := range g.Zones {
 		if len(z.Points) < 3 || !finitePoints(z.Points) {
 			continue
 		}
-		buf = append(buf, `<polygon class="zone" points="`...)
-		buf = appendPoints(buf, z.Points)
+		if _, ok := byZone[z.Name]; !ok {
+			zoneNames = append(zoneNames, z.Name)
+		}
+		byZone[z.Name] = append(byZone[z.Name], i)
+	}
+	for _, name := range zoneNames {
+		buf = append(buf, `<path class="zone" d="`...)
+		for _, i := range byZone[name] {
+			buf = appendOutline(buf, g.Zones[i].Points)
+		}
 		buf = append(buf, `"><title>zone `...)
-		buf = appendHTML(buf, z.Name)
-		buf = append(buf, `</title></polygon>`...)
-		c := centroid(z.Points)
-		buf = append(buf, `<text class="zone-name" text-anchor="middle" x="`...)
-		buf = appendCoord(buf, c[0])
-		buf = append(buf, `" y="`...)
-		buf = appendCoord(buf, -c[1])
-		buf = append(buf, `" font-size="`...)
+		buf = appendHTML(buf, name)
+		buf = append(buf, "</title></path>\n"...)
+	}
+	if n := len(g.Zones); len(zoneNames) > 0 && n <= maxZoneLabels {
+		buf = append(buf, `<g class="zone-name" text-anchor="middle" font-size="`...)
 		buf = appendCoord(buf, 1.6*textH)
 		buf = append(buf, `">`...)
-		buf = appendHTML(buf, z.Name)
-		buf = append(buf, "</text>\n"...)
+		for _, name := range zoneNames {
+			for _, i := range byZone[name] {
+				c := centroid(g.Zones[i].Points)
+				buf = append(buf, `<text x="`...)
+				buf = appendCoord(buf, c[0])
+				buf = append(buf, `" y="`...)
+				buf = appendCoord(buf, -c[1])
+				buf = append(buf, `">`...)
+				buf = appendHTML(buf, name)
+				buf = append(buf, "</text>"...)
+			}
+		}
+		buf = append(buf, "</g>\n"...)
 	}
 	buf = append(buf, "</g>\n"+`<g id="supports">`...)
 	// Supports: one path per layer (its name the path's title), a
@@ -337,6 +358,12 @@ func finitePoints(ps [][2]float64) bool {
 	return true
 }
 
+// maxZoneLabels: a plan with more zone outlines than this names them on
+// hover only (each zone's path has its name as title), not with a text on
+// each: thousands of names cannot be read on the plan, and they made a
+// large plan's report a quarter of a megabyte larger.
+const maxZoneLabels = 1000
+
 // centroid returns the mean of the outline's points: enough to place a
 // zone's name inside a rectangle or a convex outline.
 func centroid(ps [][2]float64) [2]float64 {
@@ -349,17 +376,32 @@ func centroid(ps [][2]float64) [2]float64 {
 	return [2]float64{c[0] / n, c[1] / n}
 }
 
-// appendPoints writes "x,-y x,-y ..." for an SVG points attribute.
-func appendPoints(b []byte, ps [][2]float64) []byte {
-	for i, p := range ps {
-		if i > 0 {
-			b = append(b, ' ')
+// appendOutline writes a closed outline as an SVG subpath: "Mx,-y"
+// then, edge by edge, "Hx" or "Vy" where the edge runs along an axis
+// (most outlines are rectangles drawn square to the plan) and "Lx,-y"
+// otherwise, then "Z".
+func appendOutline(b []byte, ps [][2]float64) []byte {
+	b = append(b, 'M')
+	b = appendCoord(b, ps[0][0])
+	b = append(b, ',')
+	b = appendCoord(b, -ps[0][1])
+	for i := 1; i < len(ps); i++ {
+		p, q := ps[i-1], ps[i]
+		switch {
+		case q[1] == p[1]:
+			b = append(b, 'H')
+			b = appendCoord(b, q[0])
+		case q[0] == p[0]:
+			b = append(b, 'V')
+			b = appendCoord(b, -q[1])
+		default:
+			b = append(b, 'L')
+			b = appendCoord(b, q[0])
+			b = append(b, ',')
+			b = appendCoord(b, -q[1])
 		}
-		b = appendCoord(b, p[0])
-		b = append(b, ',')
-		b = appendCoord(b, -p[1])
 	}
-	return b
+	return append(b, 'Z')
 }
 
 // appendCoord writes v to 0.01 with trailing zeros dropped; -0 as 0.
