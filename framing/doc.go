@@ -206,6 +206,8 @@
 //	                on past it: within 48 in it carries the whole strip to the zone's edge;
 //	                farther, that strip's load reaches no member drawn (the joist keeps the
 //	                edge distance)
+//	FRM223 warning  a beam checked as a member runs beside edge joists: its half of the strip
+//	                between them is not put on it (add it by hand)
 //	FRM230 warning  entity on a posts layer that is no post (a large circle or outline, open lines): skipped
 //	FRM231 error    point-load mark with no text beside it, or a text that cannot be read
 //	FRM232 error    point-load mark on no joist or beam

@@ -94,3 +94,30 @@ func TestEdgeJoistZoneStrip(t *testing.T) {
 		t.Errorf("no FRM222 warning for the 66 in strip: %v", pl.Issues)
 	}
 }
+
+// TestEdgeJoistBesideBeam: a dropped beam parallel to the joists, 16 in
+// past the last one and bearing on both walls, is checked as a member; the
+// edge joist takes half the 16 in (FRM221) and the beam's half is not on
+// it: a warning on the beam says so (FRM223).
+func TestEdgeJoistBesideBeam(t *testing.T) {
+	pl := newPlan().walls(-20, 120, 0, 144).joists(0, 144, 16, 32, 48, 64).
+		line("BEAM-DROP", 80, -2, 80, 146).group(loadPathOptions())
+	checkNear(t, "x=64 trib", member(t, pl, 64, 72).TribIn, 16, 1e-6)
+	if len(pl.Beams) != 1 || pl.Beams[0].Rigid {
+		t.Fatalf("beams %+v, want one beam on the two walls", pl.Beams)
+	}
+	var warned bool
+	for _, is := range pl.Issues {
+		if is.Code == CodeEdgeBeam {
+			warned = is.Severity.String() == "warning" && strings.Contains(is.Msg, pl.Beams[0].ID+" runs beside edge joists") &&
+				strings.Contains(is.Msg, "8.0 in wide")
+		}
+	}
+	if !warned {
+		t.Errorf("no FRM223 warning on the beam: %v", pl.Issues)
+	}
+	// beside a wall (a rigid support), nothing to warn about
+	if c := issueCodes(edgePlan().group(DefaultOptions()).Issues); c[CodeEdgeBeam] != 0 {
+		t.Errorf("FRM223 beside a wall")
+	}
+}

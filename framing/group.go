@@ -25,6 +25,7 @@ const (
 	CodeNoNeighbour     = "FRM212" // joist with no parallel neighbour
 	CodeEdgeSupport     = "FRM221" // edge joist beside a parallel support line: half the strip added to its tributary width
 	CodeEdgeZone        = "FRM222" // load zone reaching past an edge joist with nothing drawn there: the strip is the joist's
+	CodeEdgeBeam        = "FRM223" // a checked beam beside edge joists: its half of the strip between them is not on it
 	CodeArcSegment      = "FRM213" // arcs on support layers, arc segments of polylines: skipped, reported once
 	CodeBadCoordinate   = "FRM214" // entity with a non-finite or out-of-range coordinate: skipped
 	CodeCarriesBeam     = "FRM215" // flush beam ending on a joist between its bearings: error member
@@ -88,9 +89,13 @@ type grouper struct {
 	// it has neither a neighbouring joist nor a parallel support line
 	// (setTrib), for edgeZoneStrips
 	edgeOpen []uint8
-	byAcross []int      // members by group, offset across, index (makeMembers)
-	ends     [][2]Point // Start and End, packed close for passes over every member
-	groups   []dirGroup
+	// edgeBeside lists, for each edge joist whose tributary width took
+	// half the gap to a parallel support line (FRM221), the line and that
+	// half: a beam among them carries the other half (edgeStripBeams)
+	edgeBeside []edgeStrip
+	byAcross   []int      // members by group, offset across, index (makeMembers)
+	ends       [][2]Point // Start and End, packed close for passes over every member
+	groups     []dirGroup
 
 	supIdx *segIndex
 	memIdx *segIndex

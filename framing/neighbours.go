@@ -61,6 +61,7 @@ func (g *grouper) neighbours() {
 	// warnings apart, appended after in member order.
 	spans := g.split(n)
 	issues := make(issueLists, len(spans))
+	strips := make([][]edgeStrip, len(spans))
 	sups := g.supportLineIndex()
 	g.edgeOpen = make([]uint8, n)
 	parallel(spans, func(w int, sp span) {
@@ -69,10 +70,74 @@ func (g *grouper) neighbours() {
 			cur = sups.newCursor()
 		}
 		for k := sp.lo; k < sp.hi; k++ {
-			g.setTrib(&issues[w], k, sups, cur)
+			g.setTrib(&issues[w], &strips[w], k, sups, cur)
 		}
 	})
 	issues.appendTo(&p.Issues)
+	for _, l := range strips {
+		g.edgeBeside = append(g.edgeBeside, l...)
+	}
+}
+
+// edgeStrip is an edge joist beside a parallel support line: the joist,
+// the line (index in Plan.Supports) and the half of the gap between them
+// the joist carries, in.
+type edgeStrip struct {
+	member, support int
+	halfIn          float64
+}
+
+// edgeStripBeams warns, for each beam checked as a member (not rigid)
+// that runs beside edge joists, that the half of the strip between them
+// that is the beam's is not put on it: the load path loads beams with the
+// reactions of the joists they carry and their own weight only.
+func (g *grouper) edgeStripBeams() {
+	if len(g.edgeBeside) == 0 || len(g.plan.Beams) == 0 {
+		return
+	}
+	beamOf := map[int]int{} // support line -> beam
+	for i := range g.plan.Beams {
+		if b := &g.plan.Beams[i]; !b.Rigid {
+			for _, s := range b.Supports {
+				beamOf[s] = i
+			}
+		}
+	}
+	type beside struct {
+		ids   []string
+		width float64
+	}
+	by := map[int]*beside{}
+	var order []int
+	for _, es := range g.edgeBeside {
+		i, ok := beamOf[es.support]
+		if !ok {
+			continue
+		}
+		b := by[i]
+		if b == nil {
+			b = &beside{}
+			by[i] = b
+			order = append(order, i)
+		}
+		b.ids = append(b.ids, g.plan.Members[es.member].ID)
+		b.width = math.Max(b.width, es.halfIn)
+	}
+	slices.Sort(order)
+	for _, i := range order {
+		b, bm := by[i], &g.plan.Beams[i]
+		pos := dxfimport.Pos{}
+		if len(bm.Lines) > 0 {
+			pos = bm.Lines[0]
+		}
+		ids := b.ids
+		if len(ids) > 5 {
+			ids = append(ids[:5:5], fmt.Sprintf("and %d more", len(b.ids)-5))
+		}
+		g.warn(pos, CodeEdgeBeam, "%s runs beside edge joists (%s): of the strip between them each carries half, the joists "+
+			"theirs (FRM221), but the beam's half (up to %.1f in wide) is not put on it: the load path loads a beam with the "+
+			"joists it carries and its own weight only; add that strip's load to the beam by hand", bm.ID, strings.Join(ids, ", "), b.width)
+	}
 }
 
 // edgeSupportReachIn: a support line parallel to an edge joist, on its side
@@ -274,7 +339,7 @@ func (g *grouper) overlapping(l *line, k int, highest bool) int {
 // edgeSupportReachIn (an edge joist beside a wall or beam), half the gap to
 // it if that is more: the sheathing between them bears on both, so the
 // joist carries half the strip (said in iss as an info finding).
-func (g *grouper) setTrib(iss *dxfimport.IssueList, k int, sups *segIndex, cur *segCursor) {
+func (g *grouper) setTrib(iss *dxfimport.IssueList, strips *[]edgeStrip, k int, sups *segIndex, cur *segCursor) {
 	p := g.plan
 	m := &p.Members[k]
 	edge := g.opt.EdgeDistanceIn
@@ -312,6 +377,7 @@ func (g *grouper) setTrib(iss *dxfimport.IssueList, k int, sups *segIndex, cur *
 		if gap/2 > *t {
 			*t = gap / 2
 			beside = append(beside, fmt.Sprintf("%s %.1f in away (%s)", p.Supports[s].Kind, gap, p.Supports[s].Pos))
+			*strips = append(*strips, edgeStrip{member: k, support: s, halfIn: gap / 2})
 		}
 	}
 	// the larger-across side is the member's left when the group normal

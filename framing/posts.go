@@ -84,6 +84,7 @@ func (g *grouper) loadPath() {
 	g.findPosts()
 	g.findBeams()
 	g.findPointLoads()
+	g.edgeStripBeams()
 }
 
 // blockGroups splits entities into those drawn in model space and those
