@@ -206,8 +206,9 @@
 //	                on past it: within 48 in it carries the whole strip to the zone's edge;
 //	                farther, that strip's load reaches no member drawn (the joist keeps the
 //	                edge distance)
-//	FRM223 warning  a beam checked as a member runs beside edge joists: its half of the strip
-//	                between them is not put on it (add it by hand)
+//	FRM223 info     a beam checked as a member runs beside edge joists: it carries its half of
+//	                the strip between them (Beam.Strips) with the joists' zone loads
+//	       warning  the joists have no zone: the strip is not put on the beam
 //	FRM230 warning  entity on a posts layer that is no post (a large circle or outline, open lines): skipped
 //	FRM231 error    point-load mark with no text beside it, or a text that cannot be read
 //	FRM232 error    point-load mark on no joist or beam

@@ -25,7 +25,7 @@ const (
 	CodeNoNeighbour     = "FRM212" // joist with no parallel neighbour
 	CodeEdgeSupport     = "FRM221" // edge joist beside a parallel support line: half the strip added to its tributary width
 	CodeEdgeZone        = "FRM222" // load zone reaching past an edge joist with nothing drawn there: the strip is the joist's
-	CodeEdgeBeam        = "FRM223" // a checked beam beside edge joists: its half of the strip between them is not on it
+	CodeEdgeBeam        = "FRM223" // a checked beam beside edge joists carries its half of the strip between them
 	CodeArcSegment      = "FRM213" // arcs on support layers, arc segments of polylines: skipped, reported once
 	CodeBadCoordinate   = "FRM214" // entity with a non-finite or out-of-range coordinate: skipped
 	CodeCarriesBeam     = "FRM215" // flush beam ending on a joist between its bearings: error member

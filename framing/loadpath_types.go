@@ -96,7 +96,21 @@ type Beam struct {
 	// CarriedBeams are the indices into Plan.Beams of the beams that
 	// bear on this one (the Index of their "beam" bearing).
 	CarriedBeams []int
-	Messages     []string
+	// Strips are the floor or roof strips it carries beside edge joists
+	// that run parallel to it: the half of the gap between them that is
+	// the beam's (the joists carry the other half, FRM221), sorted along
+	// it.
+	Strips   []BeamStrip
+	Messages []string
+}
+
+// BeamStrip is a strip of a load zone a beam carries beside an edge
+// joist: from FromIn to ToIn along the beam from Start, WidthIn wide (half
+// the gap to the joist), loaded as the zone Zone is.
+type BeamStrip struct {
+	FromIn, ToIn, WidthIn float64
+	Zone                  string
+	Member                int // the edge joist, index into Plan.Members
 }
 
 // Beam bearing kinds.

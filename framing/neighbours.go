@@ -87,25 +87,27 @@ type edgeStrip struct {
 	halfIn          float64
 }
 
-// edgeStripBeams warns, for each beam checked as a member (not rigid)
-// that runs beside edge joists, that the half of the strip between them
-// that is the beam's is not put on it: the load path loads beams with the
-// reactions of the joists they carry and their own weight only.
+// edgeStripBeams gives each beam checked as a member (not rigid) that runs
+// beside edge joists the half of the strip between them that is its own
+// (Beam.Strips), zone by zone along the joist, and says so (FRM223, info);
+// an edge joist with no zone (an error member) leaves its strip off the
+// beam with a warning.
 func (g *grouper) edgeStripBeams() {
 	if len(g.edgeBeside) == 0 || len(g.plan.Beams) == 0 {
 		return
 	}
+	p := g.plan
 	beamOf := map[int]int{} // support line -> beam
-	for i := range g.plan.Beams {
-		if b := &g.plan.Beams[i]; !b.Rigid {
+	for i := range p.Beams {
+		if b := &p.Beams[i]; !b.Rigid {
 			for _, s := range b.Supports {
 				beamOf[s] = i
 			}
 		}
 	}
 	type beside struct {
-		ids   []string
-		width float64
+		ids, lost []string
+		width     float64
 	}
 	by := map[int]*beside{}
 	var order []int
@@ -114,30 +116,66 @@ func (g *grouper) edgeStripBeams() {
 		if !ok {
 			continue
 		}
-		b := by[i]
-		if b == nil {
-			b = &beside{}
-			by[i] = b
+		bs := by[i]
+		if bs == nil {
+			bs = &beside{}
+			by[i] = bs
 			order = append(order, i)
 		}
-		b.ids = append(b.ids, g.plan.Members[es.member].ID)
-		b.width = math.Max(b.width, es.halfIn)
+		b, m := &p.Beams[i], &p.Members[es.member]
+		if len(m.Zones) == 0 {
+			bs.lost = append(bs.lost, m.ID)
+			continue
+		}
+		bs.ids = append(bs.ids, m.ID)
+		bs.width = math.Max(bs.width, es.halfIn)
+		u := unit(sub(b.End, b.Start))
+		t0, dir := dot(sub(m.Start, b.Start), u), dot(unit(sub(m.End, m.Start)), u)
+		pieces := m.ZonePieces
+		if len(pieces) == 0 {
+			pieces = []ZonePiece{{FromIn: 0, ToIn: m.LengthIn, Zone: m.Zones[0]}}
+		}
+		for _, zp := range pieces {
+			a, c := t0+dir*zp.FromIn, t0+dir*zp.ToIn
+			a, c = math.Max(math.Min(a, c), 0), math.Min(math.Max(a, c), b.LengthIn)
+			if c-a > g.opt.SnapToleranceIn {
+				b.Strips = append(b.Strips, BeamStrip{FromIn: a, ToIn: c, WidthIn: es.halfIn, Zone: zp.Zone, Member: es.member})
+			}
+		}
 	}
 	slices.Sort(order)
-	for _, i := range order {
-		b, bm := by[i], &g.plan.Beams[i]
-		pos := dxfimport.Pos{}
-		if len(bm.Lines) > 0 {
-			pos = bm.Lines[0]
-		}
-		ids := b.ids
+	list := func(ids []string) string {
 		if len(ids) > 5 {
-			ids = append(ids[:5:5], fmt.Sprintf("and %d more", len(b.ids)-5))
+			ids = append(ids[:5:5], fmt.Sprintf("and %d more", len(ids)-5))
 		}
-		g.warn(pos, CodeEdgeBeam, "%s runs beside edge joists (%s): of the strip between them each carries half, the joists "+
-			"theirs (FRM221), but the beam's half (up to %.1f in wide) is not put on it: the load path loads a beam with the "+
-			"joists it carries and its own weight only; add that strip's load to the beam by hand", bm.ID, strings.Join(ids, ", "), b.width)
+		return strings.Join(ids, ", ")
 	}
+	for _, i := range order {
+		bs, b := by[i], &p.Beams[i]
+		slices.SortFunc(b.Strips, func(x, y BeamStrip) int { return cmpFloat(x.FromIn, y.FromIn) })
+		pos := dxfimport.Pos{}
+		if len(b.Lines) > 0 {
+			pos = b.Lines[0]
+		}
+		if len(bs.ids) > 0 {
+			p.Issues.Add(pos, CodeEdgeBeam, dxfimport.SevInfo, "%s runs beside edge joists (%s): of the strip between "+
+				"them each carries half; the beam carries its half (up to %.1f in wide) with the joists' zone loads", b.ID, list(bs.ids), bs.width)
+		}
+		if len(bs.lost) > 0 {
+			g.warn(pos, CodeEdgeBeam, "%s runs beside edge joists with no load zone (%s): its half of the strip between "+
+				"them is not put on it; add that strip's load to the beam by hand", b.ID, list(bs.lost))
+		}
+	}
+}
+
+func cmpFloat(a, b float64) int {
+	switch {
+	case a < b:
+		return -1
+	case a > b:
+		return 1
+	}
+	return 0
 }
 
 // edgeSupportReachIn: a support line parallel to an edge joist, on its side

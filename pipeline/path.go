@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 	"regexp"
+	"slices"
 	"sort"
 	"strings"
 
@@ -647,6 +648,9 @@ func beamInput(p *project.Project, plan *framing.Plan, b *framing.Beam) (check.M
 	}
 	cm.OverhangStartIn = 0
 	cm.OverhangEndIn = 0
+	if msg := beamStrips(p, b, shift, &cm); msg != "" {
+		return cm, shift, msg
+	}
 	live, total := project.DeflectionLimits("floor", "non-plaster")
 	roof := true
 	for _, c := range b.Carried {
@@ -664,6 +668,67 @@ func beamInput(p *project.Project, plan *framing.Plan, b *framing.Beam) (check.M
 	}
 	cm.LiveLimit, cm.TotalLimit = live, total
 	return cm, shift, ""
+}
+
+// beamStrips loads beam b's check input cm with the strips beside edge
+// joists that are the beam's (framing's Beam.Strips): load pieces from its
+// start to its end, each the sum of the strips over it of their zone's area
+// loads times their widths. cm.TribIn is 12 in, so a piece's loads, psf
+// by name, are its line loads in plf (what the engine and the load path's
+// totals take: w = psf x trib / 12). A strip's zone the project does not
+// define is an error of the beam.
+func beamStrips(p *project.Project, b *framing.Beam, shift float64, cm *check.Member) string {
+	if len(b.Strips) == 0 {
+		return ""
+	}
+	cuts := []float64{0, cm.LengthIn}
+	for _, st := range b.Strips {
+		cuts = append(cuts, st.FromIn+shift, st.ToIn+shift)
+	}
+	slices.Sort(cuts)
+	cm.TribIn = 12
+	for i := 0; i+1 < len(cuts); i++ {
+		a, c := math.Max(cuts[i], 0), math.Min(cuts[i+1], cm.LengthIn)
+		if c-a <= 0.01 {
+			continue
+		}
+		var sum check.AreaLoads
+		var zones []string
+		for _, st := range b.Strips {
+			if st.FromIn+shift > a+1e-9 || st.ToIn+shift < c-1e-9 {
+				continue
+			}
+			z := p.Zone(st.Zone)
+			if z == nil {
+				return fmt.Sprintf("load zone %q of the strip beside it is drawn but the project file has no [[zone]] named so", st.Zone)
+			}
+			l, k := zoneLoads(z, 0), st.WidthIn/12
+			ud := l.DeadPsf
+			if l.HasUpliftDead {
+				ud = l.UpliftDeadPsf
+			}
+			sum.DeadPsf += l.DeadPsf * k
+			sum.LivePsf += l.LivePsf * k
+			sum.RoofLivePsf += l.RoofLivePsf * k
+			sum.SnowPsf += l.SnowPsf * k
+			sum.WindDownPsf += l.WindDownPsf * k
+			sum.WindUpPsf += l.WindUpPsf * k
+			sum.UpliftDeadPsf += ud * k
+			sum.HasUpliftDead = true
+			if !slices.Contains(zones, st.Zone) {
+				zones = append(zones, st.Zone)
+			}
+		}
+		if n := len(cm.LoadPieces); n > 0 && cm.LoadPieces[n-1].Loads == sum {
+			cm.LoadPieces[n-1].ToIn = c // the same loads go on
+			continue
+		}
+		cm.LoadPieces = append(cm.LoadPieces, check.LoadPiece{FromIn: a, ToIn: c, Zone: strings.Join(zones, "+"), Loads: sum})
+	}
+	if n := len(cm.LoadPieces); n > 0 {
+		cm.LoadPieces[0].FromIn, cm.LoadPieces[n-1].ToIn = 0, cm.LengthIn
+	}
+	return ""
 }
 
 // postInput builds check's input for post pt from its [[post]] table and
