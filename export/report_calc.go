@@ -122,9 +122,12 @@ func pointLoadText(i int, p PointLoad) string {
 			sep = ", "
 		}
 	}
-	if p.UpliftDeadLb != p.DeadLb {
+	switch {
+	case p.DeadLb != 0 && p.UpliftDeadLb == 0:
+		s += "; its D is not relied on against uplift (0.6D + 0.6W takes none of it: it may be taken away)"
+	case p.UpliftDeadLb != p.DeadLb:
 		s += "; D relied on against uplift " + fmtNum(p.UpliftDeadLb) + " lb"
-	} else if p.DeadLb != 0 {
+	case p.DeadLb != 0:
 		s += "; its D is relied on against uplift (0.6D + 0.6W)"
 	}
 	return s

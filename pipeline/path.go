@@ -96,8 +96,12 @@ func markLoads(p *project.Project, mk framing.PointLoadMark) (check.PointLoad, s
 			name = pl.Name
 		}
 	}
+	// A point load's dead load is not relied on against uplift (0.6D +
+	// 0.6W takes none of it): equipment or a load from above may be taken
+	// away, and the project file cannot say it stays (common practice, no
+	// source; conservative). It counts in full in every other case.
 	return check.PointLoad{DeadLb: l.DeadLb, LiveLb: l.LiveLb, RoofLiveLb: l.RoofLiveLb, SnowLb: l.SnowLb,
-		WindDownLb: l.WindDownLb, WindUpLb: l.WindUpLb}, name
+		WindDownLb: l.WindDownLb, WindUpLb: l.WindUpLb, HasUpliftDead: true}, name
 }
 
 // beamDensityPcf is the unit weight taken for a beam's own weight, as for

@@ -27,8 +27,8 @@ func TestPointLoadInOutputs(t *testing.T) {
 	}
 	p := m.PointLoads[0]
 	if math.Abs(p.AtIn-100.75) > 1e-9 || math.Abs(p.FromFaceIn-98.25) > 1e-9 || p.DeadLb != 400 || p.LiveLb != 300 ||
-		p.RoofLiveLb != 0 || p.SnowLb != 0 || p.WindDownLb != 0 || p.WindUpLb != 0 || p.UpliftDeadLb != 400 {
-		t.Errorf("hoist %+v, want 400 D (relied on against uplift) and 300 L at 100.75 in (98.25 from the face)", p)
+		p.RoofLiveLb != 0 || p.SnowLb != 0 || p.WindDownLb != 0 || p.WindUpLb != 0 || p.UpliftDeadLb != 0 {
+		t.Errorf("hoist %+v, want 400 D (none relied on against uplift) and 300 L at 100.75 in (98.25 from the face)", p)
 	}
 	for i := range r.Members {
 		if o := &r.Members[i]; o.ID != "M76" && len(o.PointLoads) > 0 {
@@ -40,6 +40,16 @@ func TestPointLoadInOutputs(t *testing.T) {
 	if got := bt.Actual * 1.5 * 7.25 * 7.25 / 6; math.Abs(got-want) > 0.001*want || bt.Combo != "D+0.75L+0.75S" {
 		t.Errorf("bending-top %s: M = %.0f lb-in, want %.0f under D+0.75L+0.75S", bt.Combo, got, want)
 	}
+	// Not relied on against uplift, the hoist leaves M76's net uplift at
+	// each bearing what its neighbour M75's is: the same span, tributary
+	// width and zone, and 0.6D + 0.6W holds no L (ASCE 7-16 2.4.1).
+	up := map[string][]float64{}
+	for _, b := range r.Uplift.Bearings {
+		up[b.Member] = append(up[b.Member], b.UpliftLb)
+	}
+	if len(up["M76"]) != 2 || len(up["M75"]) != 2 || math.Abs(up["M76"][0]-up["M75"][0]) > 1e-6 || math.Abs(up["M76"][1]-up["M75"][1]) > 1e-6 {
+		t.Errorf("uplift M76 %v, M75 %v: want the same", up["M76"], up["M75"])
+	}
 	raw, err := os.ReadFile(filepath.Join(dir, reportName))
 	if err != nil {
 		t.Fatal(err)
@@ -47,8 +57,8 @@ func TestPointLoadInOutputs(t *testing.T) {
 	page := string(raw)
 	for _, s := range []string{
 		`<h4>Point loads</h4>`,
-		// its dead load counts against uplift: said, so a designer can judge it
-		`P1 (P: 400 D, 300 L) at 8&#39;-2 1/4&#34;: D 400 lb, L 300 lb; its D is relied on against uplift (0.6D &#43; 0.6W)`,
+		// its dead load is not relied on against uplift, and the report says so
+		`P1 (P: 400 D, 300 L) at 8&#39;-2 1/4&#34;: D 400 lb, L 300 lb; its D is not relied on against uplift (0.6D &#43; 0.6W takes none of it: it may be taken away)`,
 		// html/template writes "+" as &#43;
 		`<td>D &#43; 0.75 L &#43; 0.75 S</td><td>20 &#43; 0.75(50)</td><td class="n">57.5</td><td>400 &#43; 0.75(300)</td><td class="n">625</td><td class="n">1.15</td>`,
 	} {
