@@ -143,3 +143,29 @@ func TestEdgeJoistBesideBeam(t *testing.T) {
 		t.Errorf("FRM223 beside a wall")
 	}
 }
+
+// TestZonePastBeam: a dropped beam on two posts carries four joists from
+// the south; the FLOOR outline runs 26 in past it to the north, where no
+// joist is: a warning that the strip there is not in the beam's check
+// (FRM224). Drawn to the beam, no warning.
+func TestZonePastBeam(t *testing.T) {
+	draw := func(zoneTop float64) *Plan {
+		p := newPlan().walls(-20, 120, 0).joists(0, 144, 16, 32, 48, 64).line("BEAM-DROP", 0, 144, 80, 144)
+		p.circle("POST", 0, 144, 2.75).circle("POST", 80, 144, 2.75)
+		return zone(p, "FLOOR", 8, -10, 72, zoneTop).group(loadPathOptions())
+	}
+	pl := draw(170)
+	if len(pl.Beams) != 1 || pl.Beams[0].Rigid || len(pl.Beams[0].Carried) != 4 {
+		t.Fatalf("beams %+v, want one carrying the four joists", pl.Beams)
+	}
+	var warned bool
+	for _, is := range pl.Issues {
+		warned = warned || (is.Code == CodeZonePastBeam && strings.Contains(is.Msg, "reaches 26.0 in past it"))
+	}
+	if !warned {
+		t.Errorf("no FRM224 warning: %v", pl.Issues)
+	}
+	if c := issueCodes(draw(144).Issues); c[CodeZonePastBeam] != 0 {
+		t.Errorf("FRM224 with the zone drawn to the beam")
+	}
+}

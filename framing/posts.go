@@ -85,6 +85,7 @@ func (g *grouper) loadPath() {
 	g.findBeams()
 	g.findPointLoads()
 	g.edgeStripBeams()
+	g.zonePastBeams()
 }
 
 // blockGroups splits entities into those drawn in model space and those

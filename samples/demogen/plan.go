@@ -238,7 +238,11 @@ func addCanopy(p *plan) {
 		label{lyPointLoad, 64, 503, 5, 0, "P: 400 D, 300 L"},
 		label{lyNotes, 20, 580, 5, 0, "LOADING CANOPY - HOIST ON JOIST AT GRID 1.5"},
 	)
-	p.Zones = append(p.Zones, zone{lyZoneRoof, "CANOPY", [][2]float64{{-8, 392}, {248, 392}, {248, 560}, {-8, 560}}, 180, 430})
+	// The zone runs from the wall's centre-line to the girder's along the
+	// joists (past either, its load would be on them, not on the joists)
+	// and 8 in past the posts across them: the roof's overhang there,
+	// which the edge joists carry.
+	p.Zones = append(p.Zones, zone{lyZoneRoof, "CANOPY", [][2]float64{{-8, 400}, {248, 400}, {248, 544}, {-8, 544}}, 180, 430})
 }
 
 // roofPlan is the low-slope roof: joists run east-west at 24 in on centre

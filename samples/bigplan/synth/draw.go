@@ -127,10 +127,10 @@ func drawPosts(w drawer, on bool, x1, x2, yc float64) int {
 }
 
 // drawZone outlines each of a unit's runs as its zone, drawn to the outer
-// faces of the run's edge joists across (a zone reaching on past an edge
-// joist with nothing framed there is a strip whose load no joist drawn
-// carries) and zoneMarginIn past the run's ends along, writes the zone
-// name inside each and a note naming the unit.
+// faces of the run's edge joists across and from its first support line
+// to its last (or its cantilever's tip) along: a zone reaching on past the
+// framing is a strip whose load no member drawn carries (FRM222, FRM224);
+// it writes the zone name inside each and a note naming the unit.
 func drawZone(w drawer, u int, runs []run) {
 	lo, hi := runs[0].x0-zoneMarginIn, 0.0
 	top := 0.0
@@ -139,7 +139,7 @@ func drawZone(w drawer, u int, runs []run) {
 		top = max(top, runs[i].extentIn())
 	}
 	y0 := runs[0].y0
-	b, t := y0-zoneMarginIn, y0+top+zoneMarginIn
+	t := y0 + top + zoneMarginIn
 	layer := lyZoneFloor
 	if runs[0].kind == kindRoof {
 		layer = lyZoneRoof
@@ -147,8 +147,9 @@ func drawZone(w drawer, u int, runs []run) {
 	for i := range runs {
 		r := &runs[i]
 		l, h := r.x0-zoneFaceIn, r.x0+r.widthIn()+zoneFaceIn
-		w.ClosedPolyline(layer, [][2]float64{{l, b}, {h, b}, {h, t}, {l, t}})
-		w.Text(layer, (l+h)/2, b+10, 8, 0, r.zone)
+		zb, zt := r.y0, r.y0+r.zoneTopIn()
+		w.ClosedPolyline(layer, [][2]float64{{l, zb}, {h, zb}, {h, zt}, {l, zt}})
+		w.Text(layer, (l+h)/2, zb+10, 8, 0, r.zone)
 	}
 	w.Text(lyNotes, lo+10, t-20, 8, 0, fmt.Sprintf("UNIT %d", u+1))
 	w.Line(lyGrid, lo, t+20, hi, t+20)

@@ -38,7 +38,7 @@ const (
 	intWallIn    = 3.5   // 2x4 stud wall
 	runGapIn     = 160.0 // clear space between neighbouring runs
 	rowPitchIn   = 640.0 // rows of units, origin to origin
-	zoneMarginIn = 60.0  // zone outline beyond its runs' ends
+	zoneMarginIn = 60.0  // the unit's grid line and note beyond its runs
 	zoneFaceIn   = 0.75  // zone outline beyond the centre-line of a run's edge joist: its outer face
 	runsPerUnit  = 4
 	shortByIn    = 6.0 // a joist drawn this short of its beam
@@ -125,6 +125,18 @@ type run struct {
 }
 
 func (r *run) widthIn() float64 { return float64(r.count-1) * r.ocIn }
+
+// zoneTopIn is how far the run's load zone reaches along +y from y0 (its
+// first support line): to its last support line, or its cantilever's tip.
+func (r *run) zoneTopIn() float64 {
+	switch r.kind {
+	case kindContinuous:
+		return 2 * r.spanIn
+	case kindCantilever:
+		return r.spanIn + r.cantIn
+	}
+	return r.spanIn
+}
 
 // extentIn is how far the run reaches along +y from y0.
 func (r *run) extentIn() float64 {
