@@ -151,7 +151,11 @@ type Outcome struct {
 	// Delivered the total reaching walls, posts and rigid supports, by
 	// load type: they are equal when nothing is lost.
 	Applied, Delivered Loads
-	Errors             []string
+	// ToRigid is the part of Delivered reaching rigid supports (beams
+	// left rigid, supports not followed): no wall line or post of the
+	// plan, so no foundation line of its own
+	ToRigid Loads
+	Errors  []string
 }
 
 // Solve follows the loads of p down its load path under settings s.
@@ -483,6 +487,7 @@ func (st *solveState) pass(i, x int) {
 			addLoads(&o.Delivered, l)
 		default:
 			addLoads(&o.Delivered, l)
+			addLoads(&o.ToRigid, l)
 		}
 	}
 }

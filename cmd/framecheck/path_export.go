@@ -154,6 +154,13 @@ func exportLoadPath(o *outcome, toInch float64) *export.LoadPath {
 		}
 		lp.Foundation = append(lp.Foundation, fl)
 	}
+	// What reaches supports the path does not follow (beams left rigid,
+	// supports with check = false) is on no wall line or post: one line
+	// of its own, so that the foundation lines add up to what is delivered.
+	if r := po.Solved.ToRigid; r != (loadpath.Loads{HasUpliftDead: r.HasUpliftDead, UpliftDeadLb: r.UpliftDeadLb}) {
+		lp.Foundation = append(lp.Foundation, export.FoundationLine{Kind: "rigid", ID: "rigid supports", Loads: typeLoads(r),
+			Source: "supports the load path does not follow (beams left rigid, [[support]] check = false): what they stand on is not checked here"})
+	}
 	<-ordered
 	if apart {
 		export.OrderConnections(lp.Connections[:nPosts])
