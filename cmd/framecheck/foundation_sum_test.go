@@ -45,3 +45,28 @@ func TestFoundationAddsUpToDelivered(t *testing.T) {
 		t.Errorf("%d rigid-support lines, want 1 (the demo keeps beams rigid)", rigid)
 	}
 }
+
+// TestDesignValuesOfTheLoadPath: the design values used list the load
+// path's materials too (the demo's glulam girder with its Fbx-, its 4x10
+// header, its 6x6 No.1 posts), never a value the material does not have
+// as 0.
+func TestDesignValuesOfTheLoadPath(t *testing.T) {
+	_, _, _, r := runDemoTo(t, t.TempDir())
+	has := map[string]float64{}
+	for _, d := range r.Assumptions.DesignValues {
+		has[d.Species+" "+d.Grade+" "+d.Size+" "+d.Name] = d.Value
+		if d.Value == 0 {
+			t.Errorf("%s %s %s: %s = 0 listed", d.Species, d.Grade, d.Size, d.Name)
+		}
+	}
+	// NDS 2018 Supplement Table 5A (from memory: verify), Table 4D
+	// (docs/VERIFIED.md) and Table 4A values
+	for k, want := range map[string]float64{
+		"Glulam 24F-1.8E 5.125x12 Fb": 2400, "Glulam 24F-1.8E 5.125x12 Fb-": 1450,
+		"Douglas Fir-Larch No.1 6x6 Fc": 1000, "Douglas Fir-Larch No.2 4x10 Fb": 900,
+	} {
+		if got, ok := has[k]; !ok || got != want {
+			t.Errorf("%s: %v (listed %v), want %v", k, got, ok, want)
+		}
+	}
+}

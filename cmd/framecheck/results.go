@@ -448,23 +448,45 @@ func assumptions(o *outcome) export.Assumptions {
 	type dvKey struct{ species, grade, size string }
 	seen := map[dvKey]bool{}
 	var last dvKey
-	for k := range o.Results {
-		res := &o.Results[k]
-		v := res.Values
+	addValues := func(v *check.DesignValues, size string) {
 		if v == nil || v.Species == "" {
-			continue
+			return
 		}
-		key := dvKey{v.Species, v.Grade, res.Size}
+		key := dvKey{v.Species, v.Grade, size}
 		if key == last || seen[key] {
-			continue // members alike follow one another
+			return // members alike follow one another
 		}
 		seen[key], last = true, key
-		for _, dv := range []struct {
+		vals := []struct {
 			name string
 			val  float64
-		}{{"Fb", v.FbPsi}, {"Ft", v.FtPsi}, {"Fv", v.FvPsi}, {"Fc_perp", v.FcPerpPsi}, {"Fc", v.FcPsi}, {"E", v.EPsi}, {"Emin", v.EminPsi}} {
-			a.DesignValues = append(a.DesignValues, export.DesignValue{Species: v.Species, Grade: v.Grade, Size: res.Size,
+		}{{"Fb", v.FbPsi}, {"Ft", v.FtPsi}, {"Fv", v.FvPsi}, {"Fc_perp", v.FcPerpPsi}, {"Fc", v.FcPsi}, {"E", v.EPsi}, {"Emin", v.EminPsi}}
+		if v.FbNegPsi > 0 && v.FbNegPsi != v.FbPsi {
+			vals = append(vals[:1], append([]struct {
+				name string
+				val  float64
+			}{{"Fb-", v.FbNegPsi}}, vals[1:]...)...) // glulam: Fbx- beside Fbx+
+		}
+		for _, dv := range vals {
+			if dv.val == 0 {
+				continue // not given for this material (glulam's Ft and Fc): never a 0 that reads as a value
+			}
+			a.DesignValues = append(a.DesignValues, export.DesignValue{Species: v.Species, Grade: v.Grade, Size: size,
 				Name: dv.name, Value: dv.val, Unit: "psi", Source: v.Source})
+		}
+	}
+	for k := range o.Results {
+		addValues(o.Results[k].Values, o.Results[k].Size)
+	}
+	// the load path's beams and posts: their values are used too
+	if o.Path != nil {
+		for i := range o.Path.Beams {
+			addValues(o.Path.Beams[i].Res.Values, o.Path.Beams[i].Res.Size)
+		}
+		for i := range o.Path.Posts {
+			if pt := &o.Path.Posts[i]; pt.Checked {
+				addValues(&pt.Out.Result.DesignVals, pt.Size)
+			}
 		}
 	}
 	sort.SliceStable(a.DesignValues, func(i, j int) bool {
