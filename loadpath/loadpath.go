@@ -84,6 +84,9 @@ type PostIn struct {
 	// Checked: the post has a size and height to be checked as a column;
 	// otherwise its load is only reported.
 	Checked bool
+	// SelfWeightLb is the post's own weight, added to the dead load it
+	// takes down (0 when its size or height is not known)
+	SelfWeightLb float64
 }
 
 // WallIn is a bearing wall line.
@@ -196,6 +199,16 @@ func Solve(p *Plan, s check.Settings) *Outcome {
 	par.Ranges(len(o.Joints), func(lo, hi int) {
 		demands(o.Joints[lo:hi], s)
 	})
+	// each post's own weight, on the foundation under it (and in the
+	// totals put on and delivered)
+	for i := range p.Posts {
+		if w := p.Posts[i].SelfWeightLb; w > 0 {
+			l := Loads{DeadLb: w, UpliftDeadLb: w, HasUpliftDead: true}
+			addLoads(&o.Posts[i].Loads, l)
+			addLoads(&o.Applied, l)
+			addLoads(&o.Delivered, l)
+		}
+	}
 	checkPosts(p.Posts, o.Posts, s)
 	return o
 }

@@ -152,7 +152,7 @@ func runLoadPath(p *project.Project, plan *framing.Plan, ins []beamIn, inputs []
 	for i := range plan.Posts {
 		pt := &plan.Posts[i]
 		pc, checked, size := postInput(p, pt)
-		lp.Posts = append(lp.Posts, loadpath.PostIn{ID: pt.ID, Check: pc, Checked: checked})
+		lp.Posts = append(lp.Posts, loadpath.PostIn{ID: pt.ID, Check: pc, Checked: checked, SelfWeightLb: postWeightLb(pc)})
 		po.Posts = append(po.Posts, PostOutcome{Post: pt, Checked: checked, Size: size, HeightIn: pc.HeightIn})
 	}
 	// Beams: members of the path when they have their own supports.
@@ -733,6 +733,16 @@ func beamStrips(p *project.Project, b *framing.Beam, shift float64, cm *check.Me
 		cm.LoadPieces[0].FromIn, cm.LoadPieces[n-1].ToIn = 0, cm.LengthIn
 	}
 	return ""
+}
+
+// postWeightLb is post pc's own weight, lb, at beamDensityPcf; 0 when
+// its size or height is not known.
+func postWeightLb(pc check.Post) float64 {
+	sec, err := check.ParseSize(pc.Size)
+	if err != nil || !(pc.HeightIn > 0) {
+		return 0
+	}
+	return sec.AreaIn2 / 144 * pc.HeightIn / 12 * beamDensityPcf
 }
 
 // postInput builds check's input for post pt from its [[post]] table and

@@ -70,3 +70,27 @@ func TestDesignValuesOfTheLoadPath(t *testing.T) {
 		}
 	}
 }
+
+// TestPostWeightToFoundation: each demo post (6x6, 5.5 x 5.5 in, 108 in
+// high) takes its own weight down: 30.25/144 ft2 x 9 ft x 35 lb/ft3 =
+// 66.17 lb more dead load at its base than at its cap (statics; the
+// density as for beams, from memory: verify against NDS 2018 Supplement
+// Table 1B).
+func TestPostWeightToFoundation(t *testing.T) {
+	_, _, _, r := runDemoTo(t, t.TempDir())
+	want := 5.5 * 5.5 / 144 * 108 / 12 * 35
+	for _, post := range []string{"P1", "P2"} {
+		var cap, base float64
+		for _, c := range r.LoadPath.Connections {
+			switch {
+			case c.Kind == "post cap" && c.Carrier == post:
+				cap += c.Loads.DeadLb
+			case c.Kind == "post base" && c.Member == post:
+				base = c.Loads.DeadLb
+			}
+		}
+		if cap == 0 || math.Abs(base-cap-want) > 0.05 {
+			t.Errorf("%s: dead load %.2f lb at the base, %.2f lb at the cap; want %.2f lb more at the base", post, base, cap, want)
+		}
+	}
+}
