@@ -279,16 +279,7 @@ func checkPosts(ps []PostIn, outs []PostOut, s check.Settings) {
 func countJoints(p *Plan) int {
 	n := 0
 	for i := range p.Members {
-		m := &p.Members[i]
-		if m.Beam {
-			n += len(m.Carriers)
-			continue
-		}
-		for _, c := range m.Carriers {
-			if c.Kind == Member || c.Kind == Post {
-				n++
-			}
-		}
+		n += len(p.Members[i].Carriers) // every bearing is a joint
 	}
 	return n
 }
@@ -485,10 +476,10 @@ func (st *solveState) pass(i, x int) {
 	for j, r := range rs {
 		c := mi.Carriers[j]
 		l := loadsOf(r)
-		// the joints to state: a beam's, and a joist's on a beam or a post
-		if mi.Beam || c.Kind == Member || c.Kind == Post {
-			o.Joints = append(o.Joints, joint(k, j, c, l))
-		}
+		// every joint's demand is stated (DOMAIN.md "The load path"): a
+		// joist's on a wall or a support not followed further too (the
+		// hanger on a flush beam kept rigid, the tie at a wall)
+		o.Joints = append(o.Joints, joint(k, j, c, l))
 		switch c.Kind {
 		case Member:
 			st.incoming[c.Index] = append(st.incoming[c.Index], r.PointLoad(c.AtIn, mi.ID))

@@ -104,12 +104,12 @@ func TestTwoLevelPath_Statics(t *testing.T) {
 	if o.Posts[0].Result.Status != check.StatusPass {
 		t.Errorf("post P1: %s %v", o.Posts[0].Result.Status, o.Posts[0].Result.Messages)
 	}
-	// joints: each joist's hanger on the beam and every bearing of the
-	// beams (a joist on a wall is no connection to state), the hangers
-	// under net uplift 0.6D + 0.6W: 0.6 (96) - 0.6 (240) = -86.4 lb
-	// (ASCE 7-16 2.4.1)
-	if len(o.Joints) != 5+2+2 {
-		t.Errorf("joints %d, want 9", len(o.Joints))
+	// joints: every bearing, each joist's hanger on the beam and its end
+	// on the wall, and every bearing of the beams; the hangers under net
+	// uplift 0.6D + 0.6W: 0.6 (96) - 0.6 (240) = -86.4 lb (ASCE 7-16
+	// 2.4.1)
+	if len(o.Joints) != 5+5+2+2 {
+		t.Errorf("joints %d, want 14", len(o.Joints))
 	}
 	for _, jt := range o.Joints {
 		if jt.Kind == "hanger" {
@@ -262,8 +262,8 @@ func TestSolveSameOnAnyCoreCount(t *testing.T) {
 		t.Fatal("the outcome differs between one core and two")
 	}
 	o := outs[1]
-	if len(o.Joints) != 2100*9 || len(o.Errors) != 0 {
-		t.Fatalf("%d joints, want %d; errors %v", len(o.Joints), 2100*9, o.Errors)
+	if len(o.Joints) != 2100*14 || len(o.Errors) != 0 {
+		t.Fatalf("%d joints, want %d; errors %v", len(o.Joints), 2100*14, o.Errors)
 	}
 	// posts alike are checked once: each has the result of its own check,
 	// its own ID and its own lists

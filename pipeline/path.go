@@ -333,9 +333,19 @@ func runLoadPath(p *project.Project, plan *framing.Plan, ins []beamIn, inputs []
 			for j, b := range plan.Members[k].Bearings {
 				c, ok := carriedBy.get(k, j)
 				if !ok {
-					c = loadpath.Carrier{Kind: loadpath.Rigid}
+					// a support the path does not follow further: the
+					// joint is named by the kind of support, so that its
+					// demand (the hanger's on a flush beam) is stated too
+					joint := "joist on support"
+					switch b.Kind {
+					case framing.KindFlushBeam, framing.KindLedger:
+						joint = "hanger"
+					case framing.KindBearingWall:
+						joint = "joist on wall"
+					}
+					c = loadpath.Carrier{Kind: loadpath.Rigid, Joint: joint}
 					if w, isWall := wallOf[b.Support]; isWall {
-						c = loadpath.Carrier{Kind: loadpath.Wall, Index: w}
+						c = loadpath.Carrier{Kind: loadpath.Wall, Index: w, Joint: joint}
 					}
 				}
 				cs[j] = c
