@@ -55,12 +55,7 @@ func (g *grouper) zonePastBeams() {
 		}
 		half := math.Max(b.WidthIn/2, 0)
 		c := add(mid(b.Start, b.End), scale(away, half+0.5))
-		z := -1
-		for _, k := range q.candidates(zs, c, c) {
-			if pointInPolygon(c, zs[k].Points) && (z < 0 || zs[k].AreaIn2 < zs[z].AreaIn2) {
-				z = k
-			}
-		}
+		z := innermostZone(q, zs, c)
 		if z < 0 {
 			continue
 		}

@@ -109,12 +109,7 @@ func (g *grouper) edgeZoneStrip(q *zoneQuery, iss *dxfimport.IssueList, k int, z
 	p := g.plan
 	m := &p.Members[k]
 	c := mid(m.Start, m.End)
-	z := -1
-	for _, i := range q.candidates(zs, c, c) {
-		if pointInPolygon(c, zs[i].Points) && (z < 0 || zs[i].AreaIn2 < zs[z].AreaIn2) {
-			z = i
-		}
-	}
+	z := innermostZone(q, zs, c)
 	if z < 0 {
 		return
 	}
@@ -152,6 +147,18 @@ func (g *grouper) edgeZoneStrip(q *zoneQuery, iss *dxfimport.IssueList, k int, z
 			"(if the zone outline reaches past the framing only as drawn, draw it to the edge of the deck)",
 			m.ID, zs[z].Name, t, m.TribIn)
 	}
+}
+
+// innermostZone returns the index in zs of the smallest outline holding
+// c, looked up through q, or -1.
+func innermostZone(q *zoneQuery, zs []zoneGeom, c Point) int {
+	z := -1
+	for _, i := range q.candidates(zs, c, c) {
+		if pointInPolygon(c, zs[i].Points) && (z < 0 || zs[i].AreaIn2 < zs[z].AreaIn2) {
+			z = i
+		}
+	}
+	return z
 }
 
 // rayExit returns how far from c, along the unit vector v, the ray first
