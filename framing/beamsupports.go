@@ -111,7 +111,10 @@ func (g *grouper) beamOnWalls() {
 // (within the snap tolerance along) and which runs on away from the beam
 // (it lies under the beam for no more than the thickest wall plus the
 // snap tolerance). The lines of a double-line wall are one bearing, at
-// the beam's end, with the wall's bearing_in as its length.
+// the beam's end. A beam so in line with a wall is a header over an
+// opening: it bears on the jack stud at the opening's side, so the
+// bearing is headerBearingIn long (the wall's bearing_in when shorter),
+// not the wall's: a longer one would understate the stress on it.
 func (g *grouper) beamOnWallEnds(k int) {
 	p := g.plan
 	b := &p.Beams[k]
@@ -144,10 +147,15 @@ func (g *grouper) beamOnWallEnds(k int) {
 			continue
 		}
 		sg := &g.sups[first]
-		b.Bearings = append(b.Bearings, BeamBearing{AtIn: end, LengthIn: g.opt.Supports[sg.spec].BearingIn, Kind: BeamOnWall,
-			Index: g.supportOf(first), Pos: sg.pos})
+		b.Bearings = append(b.Bearings, BeamBearing{AtIn: end, LengthIn: math.Min(g.opt.Supports[sg.spec].BearingIn, headerBearingIn),
+			Kind: BeamOnWall, Index: g.supportOf(first), Pos: sg.pos})
 	}
 }
+
+// headerBearingIn is the bearing of a header on the jack stud at the side
+// of its opening: one 2x, 1.5 in (common practice, no source; two jacks
+// would give 3 in, so this errs on the safe side).
+const headerBearingIn = 1.5
 
 // beamOnBeams adds, at each end of a beam, the beam it frames into: one
 // at an angle of at least minBearingAngleDeg whose centre line passes

@@ -94,3 +94,36 @@ func TestPostWeightToFoundation(t *testing.T) {
 		}
 	}
 }
+
+// TestHeaderBearsOnJackStud: the demo's header B1 over the door, in line
+// with the wall, bears on a jack stud at each end: lb = 1.5 in (one 2x;
+// common practice, no source), so its largest reaction, 444 lb, presses
+// fc_perp = 444 / (3.5 x 1.5) = 84.6 psi (NDS 2018 3.10.2), not the 36
+// psi a 3.5 in bearing would give.
+func TestHeaderBearsOnJackStud(t *testing.T) {
+	_, _, _, r := runDemoTo(t, t.TempDir())
+	for _, b := range r.LoadPath.Beams {
+		if b.ID != "B1" {
+			continue
+		}
+		for _, c := range b.Checks {
+			if c.Kind != "bearing" {
+				continue
+			}
+			lb, R := -1.0, 0.0
+			for _, it := range c.Trace {
+				switch it.Name {
+				case "lb":
+					lb = it.Value
+				case "R":
+					R = it.Value
+				}
+			}
+			if lb != 1.5 || math.Abs(c.Actual-R/(3.5*1.5)) > 1e-3*c.Actual {
+				t.Errorf("B1 bearing: lb %v, fc_perp %v with R %v; want lb 1.5 and R / (3.5 x 1.5)", lb, c.Actual, R)
+			}
+			return
+		}
+	}
+	t.Fatal("no bearing check of B1")
+}

@@ -522,6 +522,7 @@ func assumptions(o *outcome) export.Assumptions {
 			"the strips beside edge joists that run along it (FRM223) and its own weight at 35 lb/ft3 (from memory: verify "+
 			"against NDS 2018 Supplement Table 1B); it is checked with the floor limits L/360 live and L/240 total, or L/240 "+
 			"and L/180 when it carries only roof joists (IBC 2018 Table 1604.3), its top edge braced where joists frame in. "+
+			"A beam ending in line with a wall (a header over an opening) bears on one jack stud, 1.5 in, at each end. "+
 			"A point load's dead load is not relied on against uplift. A post's own weight (35 lb/ft3) is added to the dead load it "+
 			"takes down to the foundation. Loads reaching supports the load path does not follow are one foundation line, \"rigid supports\".")
 	}
