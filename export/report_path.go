@@ -72,7 +72,8 @@ func buildPath(r *Results) *pathSection {
 	s := &pathSection{Summary: LoadPathSummary(lp)}
 	a, d := lp.Applied, lp.Delivered
 	s.Balance = "D " + lb(a.DeadLb) + " lb put on, " + lb(d.DeadLb) + " lb delivered; L " + lb(a.LiveLb) + " / " + lb(d.LiveLb) +
-		" lb; Lr " + lb(a.RoofLiveLb) + " / " + lb(d.RoofLiveLb) + " lb; S " + lb(a.SnowLb) + " / " + lb(d.SnowLb) + " lb"
+		" lb; Lr " + lb(a.RoofLiveLb) + " / " + lb(d.RoofLiveLb) + " lb; S " + lb(a.SnowLb) + " / " + lb(d.SnowLb) +
+		" lb; W toward " + lb(a.WindDownLb) + " / " + lb(d.WindDownLb) + " lb; W away " + lb(a.WindUpLb) + " / " + lb(d.WindUpLb) + " lb"
 	s.Beams = pathBeams(lp.Beams)
 	s.Posts = pathPosts(lp.Posts, lb, spell)
 	s.Joints = pathJoints(lp.Connections)

@@ -198,6 +198,11 @@ func TestReportPathTables(t *testing.T) {
 	if txt := repText(sec); !strings.Contains(txt, "Every beam, post and foundation line is in the Beams, Posts and Foundation sheets and results.json") {
 		t.Errorf("load path section lacks the sentence naming the sheets: %q", txt)
 	}
+	// the balance of loads put on and delivered names every load type,
+	// the wind's both ways too
+	if txt := repText(sec); !strings.Contains(txt, "; W toward ") || !strings.Contains(txt, "; W away ") {
+		t.Errorf("load path balance lacks the wind: %q", txt)
+	}
 	cases := []struct {
 		id       string
 		head     []string
