@@ -230,7 +230,9 @@ func foundationJSON(w *jsonOut, f *FoundationLine) ([]byte, error) {
 		w.num("length_in", f.LengthIn)
 	}
 	w.typeLoads("loads", &f.Loads)
-	w.typeLoads("per_foot_plf", &f.PerFoot)
+	if f.LengthIn != 0 { // a wall line's; a post has no length to spread over
+		w.typeLoads("per_foot_plf", &f.PerFoot)
+	}
 	return w.done()
 }
 

@@ -98,7 +98,7 @@ type Connection struct {
 // FoundationLine is what reaches the foundation at one wall line or post:
 // the loads by type (a wall's also per foot of its length).
 type FoundationLine struct {
-	Kind     string    `json:"kind"` // wall | post
+	Kind     string    `json:"kind"` // wall | post | rigid
 	ID       string    `json:"id"`
 	Source   string    `json:"source"`
 	LengthIn float64   `json:"length_in,omitempty"` // walls
