@@ -1,6 +1,7 @@
 package framing
 
 import (
+	"math"
 	"strings"
 	"testing"
 )
@@ -168,4 +169,35 @@ func TestZonePastBeam(t *testing.T) {
 	if c := issueCodes(draw(144).Issues); c[CodeZonePastBeam] != 0 {
 		t.Errorf("FRM224 with the zone drawn to the beam")
 	}
+}
+
+// TestEdgeTribSkewed: the edge rules do not depend on how the plan is
+// turned: the edge plan beside its parallel double wall, with a zone
+// reaching 12 in past the other edge joist, turned 30 and 135 degrees,
+// gives each joist the tributary width it has drawn square (geometry:
+// the rules measure square to the joists; common practice, no source).
+func TestEdgeTribSkewed(t *testing.T) {
+	draw := func() *plan { return zone(edgePlan(), "FLOOR", -10, -10, 76, 154) }
+	a := draw().group(DefaultOptions())
+	for _, deg := range []float64{30, 135} {
+		th := deg * math.Pi / 180
+		rot := func(q Point) Point {
+			return Point{X: 1000 + q.X*math.Cos(th) - q.Y*math.Sin(th), Y: -500 + q.X*math.Sin(th) + q.Y*math.Cos(th)}
+		}
+		s := draw().transform(rot).group(DefaultOptions())
+		if len(s.Members) != len(a.Members) {
+			t.Fatalf("%v deg: %d members, want %d", deg, len(s.Members), len(a.Members))
+		}
+		for i := range a.Members {
+			ma := &a.Members[i]
+			c := rot(mid(ma.Start, ma.End))
+			ms := member(t, s, c.X, c.Y)
+			checkNear(t, ma.ID+" trib turned", ms.TribIn, ma.TribIn, 1e-6)
+		}
+		if ca, cs := issueCodes(a.Issues), issueCodes(s.Issues); ca[CodeEdgeSupport] != cs[CodeEdgeSupport] || ca[CodeEdgeZone] != cs[CodeEdgeZone] {
+			t.Errorf("%v deg: findings %v, drawn square %v", deg, cs, ca)
+		}
+	}
+	checkNear(t, "x=16 trib", member(t, a, 16, 72).TribIn, 8+13.25/2, 1e-6)
+	checkNear(t, "x=64 trib", member(t, a, 64, 72).TribIn, 20, 1e-6)
 }
