@@ -130,6 +130,10 @@ func schemaMembers(t *testing.T) []Member {
 			m.Info = []string{"CL per NDS 2018 3.3.3"} // a list of its own, equal to the next one
 		}
 		m.ZonePieces = []ZonePiece{{Zone: "FLOOR", FromIn: 0, ToIn: 60.333333333333336}}
+		if i%4 == 0 {
+			m.PointLoads = []PointLoad{{Name: "P: 400 D, 300 L", AtIn: 100.75000000000001, FromFaceIn: 98.25000000000001,
+				DeadLb: 400, LiveLb: 300.00000000000006, WindUpLb: 0.1}}
+		}
 		m.BlockingSteps = []BlockingStep{{RowsPerSpan: 1, LuIn: 59.99999999999999, CL: 0.9871234567, Ratio: 0.8765432198}}
 		ms = append(ms, m)
 	}
