@@ -38,8 +38,18 @@ func (g *grouper) zonePastBeams() {
 		u := unit(sub(b.End, b.Start))
 		n := rot90(u)
 		var sides [2]bool // joists on the -n side, on the +n side
+		tol := g.opt.SnapToleranceIn + b.WidthIn/2
 		for _, c := range b.Carried {
+			// a joist continuous over the beam lies on both sides of it
 			m := &p.Members[c.Member]
+			a0, a1 := dot(sub(m.Start, b.Start), n), dot(sub(m.End, b.Start), n)
+			sides[0] = sides[0] || math.Min(a0, a1) < -tol
+			sides[1] = sides[1] || math.Max(a0, a1) > tol
+		}
+		// the strips beside edge joists running along the beam (FRM223)
+		// are on its check already
+		for _, st := range b.Strips {
+			m := &p.Members[st.Member]
 			if dot(sub(mid(m.Start, m.End), b.Start), n) < 0 {
 				sides[0] = true
 			} else {
@@ -47,7 +57,7 @@ func (g *grouper) zonePastBeams() {
 			}
 		}
 		if sides[0] == sides[1] {
-			continue // joists on both sides, or none
+			continue // joists (or strips) on both sides, or none
 		}
 		away := n // the side with no joists
 		if sides[1] {

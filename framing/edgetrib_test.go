@@ -201,3 +201,68 @@ func TestEdgeTribSkewed(t *testing.T) {
 	checkNear(t, "x=16 trib", member(t, a, 16, 72).TribIn, 8+13.25/2, 1e-6)
 	checkNear(t, "x=64 trib", member(t, a, 64, 72).TribIn, 20, 1e-6)
 }
+
+// Edge strips found by a review (tributary-area statics, common practice,
+// no source).
+func TestEdgeStripReviewCases(t *testing.T) {
+	// Two beams end to end beside a 288 in joist over three walls: each
+	// carries the 8 in strip over its own 144 in.
+	p := newPlan().walls(-20, 120, 0, 144, 288).joists(0, 288, 16, 32, 48, 64)
+	p.line("BEAM-DROP", 80, 0, 80, 144).line("BEAM-DROP", 80, 144, 80, 288)
+	p.circle("POST", 80, 0, 2.75).circle("POST", 80, 144, 2.75).circle("POST", 80, 288, 2.75)
+	pl := p.group(loadPathOptions())
+	area := 0.0
+	for _, b := range pl.Beams {
+		for _, s := range b.Strips {
+			area += (s.ToIn - s.FromIn) * s.WidthIn
+		}
+	}
+	checkNear(t, "strip area on the two beams", area, 8*288, 1)
+
+	// A beam beside 100 of the joist's 144 in: the strip past its end is
+	// on no member, and a warning says so.
+	p = newPlan().walls(-20, 120, 0, 144).joists(0, 144, 16, 32, 48, 64)
+	p.line("BEAM-DROP", 80, 0, 80, 100).circle("POST", 80, 0, 2.75).circle("POST", 80, 100, 2.75)
+	said := false
+	for _, is := range p.group(loadPathOptions()).Issues {
+		said = said || (is.Code == CodeEdgeBeam && is.Severity.String() == "warning" && strings.Contains(is.Msg, "run on past the ends"))
+	}
+	if !said {
+		t.Errorf("no warning for the strip past the beam's end")
+	}
+
+	// An edge distance of 10 in beside a beam 16 in away: the joist takes
+	// 10, the beam the other 6.
+	opt := loadPathOptions()
+	opt.EdgeDistanceIn = 10
+	pl = newPlan().walls(-20, 120, 0, 144).joists(0, 144, 16, 32, 48, 64).line("BEAM-DROP", 80, -2, 80, 146).group(opt)
+	if len(pl.Beams) != 1 || len(pl.Beams[0].Strips) != 1 {
+		t.Fatalf("beams %+v", pl.Beams)
+	}
+	checkNear(t, "joist side + beam strip", member(t, pl, 64, 72).TribIn-8+pl.Beams[0].Strips[0].WidthIn, 16, 1e-6)
+
+	// A zone notched to the joist's face at mid-length, 24 in past it
+	// elsewhere: the widest part is taken (8 + 24 in), with FRM222.
+	p = newPlan().walls(-20, 100, 0, 144).joists(0, 144, 16, 32, 48, 64)
+	p.poly("LOAD-ZONE", true, Point{X: 8, Y: -10}, Point{X: 88, Y: -10}, Point{X: 88, Y: 60}, Point{X: 64.75, Y: 60},
+		Point{X: 64.75, Y: 84}, Point{X: 88, Y: 84}, Point{X: 88, Y: 154}, Point{X: 8, Y: 154})
+	p.text("LOAD-ZONE", "FLOOR", 30, 10, 6)
+	checkNear(t, "notched zone: edge joist trib", member(t, p.group(DefaultOptions()), 64, 72).TribIn, 32, 1e-6)
+
+	// FRM224 is not said of a girder the joists run on over, nor of a beam
+	// whose other side's strip it carries already (FRM223).
+	p = newPlan().walls(-20, 120, 0, 288).joists(0, 288, 16, 32, 48, 64)
+	p.line("BEAM-DROP", 0, 100, 80, 100).circle("POST", 0, 100, 2.75).circle("POST", 80, 100, 2.75)
+	if c := issueCodes(zone(p, "FLOOR", 8, -10, 72, 298).group(loadPathOptions()).Issues); c[CodeZonePastBeam] != 0 {
+		t.Errorf("FRM224 on a girder with joists continuous over it")
+	}
+	p = newPlan().walls(-20, 80, 0, 144).joists(0, 144, 16, 32, 48, 64)
+	p.line("BEAM-DROP", 80, 0, 80, 144).circle("POST", 80, 0, 2.75).circle("POST", 80, 144, 2.75)
+	p.line("WALL", 224, -20, 224, 164)
+	for y := 16.0; y <= 128; y += 16 {
+		p.line("JOIST", 80, y, 224, y)
+	}
+	if c := issueCodes(zone(p, "FLOOR", 8, -10, 230, 154).group(loadPathOptions()).Issues); c[CodeZonePastBeam] != 0 {
+		t.Errorf("FRM224 on a beam whose other side's strip it carries")
+	}
+}

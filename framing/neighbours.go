@@ -80,11 +80,14 @@ func (g *grouper) neighbours() {
 }
 
 // edgeStrip is an edge joist beside a parallel support line: the joist,
-// the line (index in Plan.Supports) and the half of the gap between them
-// the joist carries, in.
+// the line (index in Plan.Supports) and the width of the strip between
+// them the support carries (halfIn: half the gap, or less where the edge
+// distance gives the joist more), in.
 type edgeStrip struct {
 	member, support int
 	halfIn          float64
+	below           bool    // the strip's side of the member (toward smaller offsets across)
+	nearIn          float64 // the offset of the support's nearest line
 }
 
 // edgeStripBeams gives each beam checked as a member (not rigid) that runs
@@ -111,37 +114,80 @@ func (g *grouper) edgeStripBeams() {
 	}
 	by := map[int]*beside{}
 	var order []int
+	sups := g.supportLineIndex()
+	if sups == nil {
+		return
+	}
+	var past []string // edge joists whose strip runs on past the supports beside them
+	var pastPos dxfimport.Pos
 	for _, es := range g.edgeBeside {
-		i, ok := beamOf[es.support]
-		if !ok {
-			continue
+		m := &p.Members[es.member]
+		// every line of the support beside the joist (pieces drawn end to
+		// end, two beams in a line), and the stretches of the joist they
+		// cover: each beam among them carries the strip over its own
+		spans := map[int][][2]float64{} // beam -> stretches of the joist
+		var cover [][2]float64
+		g.besideLines(es.member, es.below, es.nearIn, sups, func(s int, from, to float64) {
+			cover = append(cover, [2]float64{from, to})
+			if i, ok := beamOf[s]; ok {
+				spans[i] = append(spans[i], [2]float64{from, to})
+			}
+		})
+		// between its outermost bearings: its ends run into the walls
+		// across it, past where a support beside it stops
+		if lo, hi := bearingRange(m); hi > lo && uncovered(clipSpans(cover, lo, hi), hi-lo) > g.opt.SnapToleranceIn {
+			if len(past) == 0 {
+				pastPos = m.Pos
+			}
+			past = append(past, m.ID)
 		}
-		bs := by[i]
-		if bs == nil {
-			bs = &beside{}
-			by[i] = bs
-			order = append(order, i)
+		beams := make([]int, 0, len(spans))
+		for i := range spans {
+			beams = append(beams, i)
 		}
-		b, m := &p.Beams[i], &p.Members[es.member]
-		if len(m.Zones) == 0 {
-			bs.lost = append(bs.lost, m.ID)
-			continue
-		}
-		bs.ids = append(bs.ids, m.ID)
-		bs.width = math.Max(bs.width, es.halfIn)
-		u := unit(sub(b.End, b.Start))
-		t0, dir := dot(sub(m.Start, b.Start), u), dot(unit(sub(m.End, m.Start)), u)
-		pieces := m.ZonePieces
-		if len(pieces) == 0 {
-			pieces = []ZonePiece{{FromIn: 0, ToIn: m.LengthIn, Zone: m.Zones[0]}}
-		}
-		for _, zp := range pieces {
-			a, c := t0+dir*zp.FromIn, t0+dir*zp.ToIn
-			a, c = math.Max(math.Min(a, c), 0), math.Min(math.Max(a, c), b.LengthIn)
-			if c-a > g.opt.SnapToleranceIn {
-				b.Strips = append(b.Strips, BeamStrip{FromIn: a, ToIn: c, WidthIn: es.halfIn, Zone: zp.Zone, Member: es.member})
+		slices.Sort(beams)
+		for _, i := range beams {
+			bs := by[i]
+			if bs == nil {
+				bs = &beside{}
+				by[i] = bs
+				order = append(order, i)
+			}
+			b := &p.Beams[i]
+			if len(m.Zones) == 0 {
+				bs.lost = append(bs.lost, m.ID)
+				continue
+			}
+			bs.ids = append(bs.ids, m.ID)
+			bs.width = math.Max(bs.width, es.halfIn)
+			u := unit(sub(b.End, b.Start))
+			t0, dir := dot(sub(m.Start, b.Start), u), dot(unit(sub(m.End, m.Start)), u)
+			pieces := m.ZonePieces
+			if len(pieces) == 0 {
+				pieces = []ZonePiece{{FromIn: 0, ToIn: m.LengthIn, Zone: m.Zones[0]}}
+			}
+			for _, sp := range mergeSpans(spans[i]) {
+				for _, zp := range pieces {
+					f, t := math.Max(zp.FromIn, sp[0]), math.Min(zp.ToIn, sp[1])
+					if t-f <= g.opt.SnapToleranceIn {
+						continue
+					}
+					a, c := t0+dir*f, t0+dir*t
+					a, c = math.Max(math.Min(a, c), 0), math.Min(math.Max(a, c), b.LengthIn)
+					if c-a > g.opt.SnapToleranceIn {
+						b.Strips = append(b.Strips, BeamStrip{FromIn: a, ToIn: c, WidthIn: es.halfIn, Zone: zp.Zone, Member: es.member})
+					}
+				}
 			}
 		}
+	}
+	if len(past) > 0 {
+		if len(past) > 5 {
+			past = append(past[:5:5], fmt.Sprintf("and %d more", len(past)-5))
+		}
+		g.warn(pastPos, CodeEdgeBeam, "edge joists %s run on past the ends of the wall or beam "+
+			"beside them: there they carry half the strip between (FRM221) and the rest reaches no member drawn; draw the "+
+			"support the rest bears on, or check that strip by hand", strings.Join(past, ", "))
 	}
 	slices.Sort(order)
 	list := func(ids []string) string {
@@ -159,13 +205,57 @@ func (g *grouper) edgeStripBeams() {
 		}
 		if len(bs.ids) > 0 {
 			p.Issues.Add(pos, CodeEdgeBeam, dxfimport.SevInfo, "%s runs beside edge joists (%s): of the strip between "+
-				"them each carries half; the beam carries its half (up to %.1f in wide) with the joists' zone loads", b.ID, list(bs.ids), bs.width)
+				"them the joists carry their part (FRM221) and the beam the rest, up to %.1f in wide, with the joists' zone loads", b.ID, list(bs.ids), bs.width)
 		}
 		if len(bs.lost) > 0 {
 			g.warn(pos, CodeEdgeBeam, "%s runs beside edge joists with no load zone (%s): its half of the strip between "+
 				"them is not put on it; add that strip's load to the beam by hand", b.ID, list(bs.lost))
 		}
 	}
+}
+
+// mergeSpans returns the union of stretches, sorted.
+func mergeSpans(sp [][2]float64) [][2]float64 {
+	slices.SortFunc(sp, func(a, b [2]float64) int { return cmpFloat(a[0], b[0]) })
+	var out [][2]float64
+	for _, x := range sp {
+		if n := len(out); n > 0 && x[0] <= out[n-1][1] {
+			out[n-1][1] = math.Max(out[n-1][1], x[1])
+			continue
+		}
+		out = append(out, x)
+	}
+	return out
+}
+
+// bearingRange returns the stretch of m between its outermost bearings'
+// centre-lines, within the member.
+func bearingRange(m *Member) (lo, hi float64) {
+	if len(m.Bearings) < 2 {
+		return 0, m.LengthIn
+	}
+	lo, hi = m.Bearings[0].AtIn, m.Bearings[len(m.Bearings)-1].AtIn
+	return math.Max(lo, 0), math.Min(hi, m.LengthIn)
+}
+
+// clipSpans returns the stretches within lo..hi, measured from lo.
+func clipSpans(sp [][2]float64, lo, hi float64) [][2]float64 {
+	var out [][2]float64
+	for _, x := range sp {
+		if a, b := math.Max(x[0], lo), math.Min(x[1], hi); b > a {
+			out = append(out, [2]float64{a - lo, b - lo})
+		}
+	}
+	return out
+}
+
+// uncovered is how much of 0..length the stretches leave out.
+func uncovered(sp [][2]float64, length float64) float64 {
+	covered := 0.0
+	for _, x := range mergeSpans(sp) {
+		covered += math.Min(x[1], length) - math.Max(x[0], 0)
+	}
+	return math.Max(length-covered, 0)
 }
 
 func cmpFloat(a, b float64) int {
@@ -208,9 +298,9 @@ func (g *grouper) supportLineIndex() *segIndex {
 // such line less than MaxWallThicknessIn beyond it is the other face of a
 // wall (or beam) drawn with two lines that no joist crosses, so not merged
 // into one: the distance is then to their mid-line.
-func (g *grouper) edgeSupport(k int, below bool, sups *segIndex, cur *segCursor) (gap float64, sup int) {
+func (g *grouper) edgeSupport(k int, below bool, sups *segIndex, cur *segCursor) (gap float64, sup int, near float64) {
 	if sups == nil {
-		return 0, -1
+		return 0, -1, 0
 	}
 	p := g.plan
 	gr := &g.groups[g.grp[k]]
@@ -245,7 +335,7 @@ func (g *grouper) edgeSupport(k int, below bool, sups *segIndex, cur *segCursor)
 		}
 	})
 	if sup < 0 {
-		return 0, -1
+		return 0, -1, 0
 	}
 	far := gap // the other face, when the nearest line has one
 	for _, off := range found {
@@ -253,7 +343,41 @@ func (g *grouper) edgeSupport(k int, below bool, sups *segIndex, cur *segCursor)
 			far = off
 		}
 	}
-	return (gap + far) / 2, sup
+	return (gap + far) / 2, sup, gap
+}
+
+// besideLines calls fn with each support line parallel to member k on one
+// side (below: toward smaller offsets across) at offset near (the nearest
+// line's, edgeSupport) up to MaxWallThicknessIn beyond it, and the stretch
+// of the member, from its Start, that the line runs beside: the lines of
+// the support the member's edge strip lies against, pieces drawn end to
+// end included.
+func (g *grouper) besideLines(k int, below bool, near float64, sups *segIndex, fn func(s int, from, to float64)) {
+	p := g.plan
+	gr := &g.groups[g.grp[k]]
+	m := &p.Members[k]
+	tol := g.opt.SnapToleranceIn
+	u := unit(sub(m.End, m.Start))
+	sups.query(m.Start, m.End, near+g.opt.MaxWallThicknessIn+tol, func(s int) {
+		sl := &p.Supports[s]
+		d := sub(sl.B, sl.A)
+		l := math.Hypot(d.X, d.Y)
+		if l == 0 || math.Abs(cross(d, gr.u))/l > maxParallelSin {
+			return
+		}
+		off := dot(mid(sl.A, sl.B), gr.n) - p.across[k]
+		if below {
+			off = -off
+		}
+		if off < near-tol || off > near+g.opt.MaxWallThicknessIn+tol {
+			return
+		}
+		a, b := dot(sub(sl.A, m.Start), u), dot(sub(sl.B, m.Start), u)
+		from, to := math.Max(math.Min(a, b), 0), math.Min(math.Max(a, b), m.LengthIn)
+		if to-from > tol {
+			fn(s, from, to)
+		}
+	})
 }
 
 // nearestBoth sets lo[k] and hi[k], the neighbours of member k (in line
@@ -407,7 +531,7 @@ func (g *grouper) setTrib(iss *dxfimport.IssueList, strips *[]edgeStrip, k int, 
 		if [2]int{g.lo[k], g.hi[k]}[side] >= 0 {
 			continue
 		}
-		gap, s := g.edgeSupport(k, side == 0, sups, cur)
+		gap, s, near := g.edgeSupport(k, side == 0, sups, cur)
 		if s < 0 {
 			g.edgeOpen[k] |= 1 << side
 			continue
@@ -415,7 +539,11 @@ func (g *grouper) setTrib(iss *dxfimport.IssueList, strips *[]edgeStrip, k int, 
 		if gap/2 > *t {
 			*t = gap / 2
 			beside = append(beside, fmt.Sprintf("%s %.1f in away (%s)", p.Supports[s].Kind, gap, p.Supports[s].Pos))
-			*strips = append(*strips, edgeStrip{member: k, support: s, halfIn: gap / 2})
+		}
+		// the rest of the gap is the support's: half, or less where the
+		// project's edge distance gives the joist more
+		if rest := gap - *t; rest > 0 {
+			*strips = append(*strips, edgeStrip{member: k, support: s, halfIn: rest, below: side == 0, nearIn: near})
 		}
 	}
 	// the larger-across side is the member's left when the group normal

@@ -100,17 +100,27 @@ const edgeStripTolIn = 1.5
 // of it, up to edgeSupportReachIn (a warning: the load comes from how the
 // outline is drawn). A zone reaching farther is a strip whose load
 // reaches no member drawn: a warning too, and the joist keeps the edge
-// distance. The zone is the innermost outline holding the member's
-// midpoint; the strip is measured square to the member from there.
+// distance. The strip is measured square to the member from five places
+// along it, in the innermost outline holding each: the widest is taken.
 func (g *grouper) edgeZoneStrip(q *zoneQuery, iss *dxfimport.IssueList, k int, zs []zoneGeom) {
 	if g.edgeOpen == nil || g.edgeOpen[k] == 0 {
 		return
 	}
 	p := g.plan
 	m := &p.Members[k]
-	c := mid(m.Start, m.End)
-	z := innermostZone(q, zs, c)
-	if z < 0 {
+	// the zone is looked at along the joist, at a tenth, three tenths, ...
+	// of its length: the strip it reaches past the joist is the widest of
+	// them (a zone notched or bumped out along the joist: its widest part,
+	// on the safe side)
+	var at [len(zoneSamples)]Point
+	var zat [len(zoneSamples)]int
+	found := false
+	for i, f := range zoneSamples {
+		at[i] = lerp(m.Start, unit(sub(m.End, m.Start)), f*m.LengthIn)
+		zat[i] = innermostZone(q, zs, at[i])
+		found = found || zat[i] >= 0
+	}
+	if !found {
 		return
 	}
 	n := g.groups[g.grp[k]].n
@@ -125,12 +135,23 @@ func (g *grouper) edgeZoneStrip(q *zoneQuery, iss *dxfimport.IssueList, k int, z
 		if side == 0 {
 			v = scale(n, -1)
 		}
-		t := rayExit(c, v, zs[z].Points)
+		t, z := math.Inf(-1), -1
+		for i := range at {
+			if zat[i] < 0 {
+				continue
+			}
+			if ti := rayExit(at[i], v, zs[zat[i]].Points); !math.IsInf(ti, 0) && ti > t {
+				t, z = ti, zat[i]
+			}
+		}
+		if z < 0 {
+			continue
+		}
 		trib := &m.TribRightIn
 		if (side == 1) == hiIsLeft {
 			trib = &m.TribLeftIn
 		}
-		if math.IsInf(t, 0) || t <= *trib+edgeStripTolIn {
+		if t <= *trib+edgeStripTolIn {
 			continue
 		}
 		if t > edgeSupportReachIn {
@@ -148,6 +169,10 @@ func (g *grouper) edgeZoneStrip(q *zoneQuery, iss *dxfimport.IssueList, k int, z
 			m.ID, zs[z].Name, t, m.TribIn)
 	}
 }
+
+// zoneSamples are the places along an edge joist, as fractions of its
+// length, where edgeZoneStrip measures how far its zone reaches past it.
+var zoneSamples = [...]float64{0.1, 0.3, 0.5, 0.7, 0.9}
 
 // innermostZone returns the index in zs of the smallest outline holding
 // c, looked up through q, or -1.
