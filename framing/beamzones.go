@@ -1,15 +1,99 @@
 package framing
 
 import (
+	"fmt"
 	"math"
+	"slices"
+	"strings"
 
 	"framecheck/dxfimport"
 )
 
 // CodeZonePastBeam: a load zone reaches on past a beam checked as a
 // member, on its side with no joists: a strip the beam may carry that is
-// not put on it.
-const CodeZonePastBeam = "FRM224"
+// not put on it. CodeBeamInRun: a beam checked as a member runs between
+// two joists of a run, parallel to them.
+const (
+	CodeZonePastBeam = "FRM224"
+	CodeBeamInRun    = "FRM225"
+)
+
+// beamsInRuns warns (FRM225) for each beam checked as a member that runs
+// parallel between two neighbouring joists: they take each other as
+// neighbours across it, so the floor or roof over the beam is on their
+// tributary widths (on the safe side for them) and not on the beam's
+// check, which takes the reactions of the joists it carries and its own
+// weight only.
+func (g *grouper) beamsInRuns() {
+	p := g.plan
+	if len(p.Beams) == 0 || g.lo == nil {
+		return
+	}
+	// the lines of the beams checked as members, in a grid of their own:
+	// a plan's joists are many, its beams few
+	var lines []int
+	beamOf := map[int]int{} // index in lines -> beam
+	for i := range p.Beams {
+		if b := &p.Beams[i]; !b.Rigid {
+			for _, s := range b.Supports {
+				beamOf[len(lines)] = i
+				lines = append(lines, s)
+			}
+		}
+	}
+	if len(lines) == 0 {
+		return
+	}
+	idx := indexEnds(len(lines), func(i int) (Point, Point) { return p.Supports[lines[i]].A, p.Supports[lines[i]].B }, nil)
+	between := map[int][]string{}
+	var order []int
+	for k := range p.Members {
+		j := g.hi[k]
+		if j < 0 {
+			continue
+		}
+		gr := &g.groups[g.grp[k]]
+		m := &p.Members[k]
+		gap := p.across[j] - p.across[k]
+		i := -1
+		idx.query(m.Start, m.End, math.Min(gap, edgeSupportReachIn), func(x int) {
+			sl := &p.Supports[lines[x]]
+			d := sub(sl.B, sl.A)
+			l := math.Hypot(d.X, d.Y)
+			if i >= 0 || l == 0 || math.Abs(cross(d, gr.u))/l > maxParallelSin {
+				return
+			}
+			off := dot(mid(sl.A, sl.B), gr.n) - p.across[k]
+			a, b := dot(sl.A, gr.u), dot(sl.B, gr.u)
+			ov := math.Min(g.a1[k], math.Max(a, b)) - math.Max(g.a0[k], math.Min(a, b))
+			if off > minNeighbourGapIn && off < gap-minNeighbourGapIn && ov >= minOverlapFrac*(g.a1[k]-g.a0[k]) {
+				i = beamOf[x]
+			}
+		})
+		if i < 0 {
+			continue
+		}
+		if between[i] == nil {
+			order = append(order, i)
+		}
+		between[i] = append(between[i], p.Members[k].ID+"/"+p.Members[j].ID)
+	}
+	slices.Sort(order)
+	for _, i := range order {
+		b := &p.Beams[i]
+		pos := dxfimport.Pos{}
+		if len(b.Lines) > 0 {
+			pos = b.Lines[0]
+		}
+		pairs := between[i]
+		if len(pairs) > 3 {
+			pairs = append(pairs[:3:3], fmt.Sprintf("and %d more", len(pairs)-3))
+		}
+		g.warn(pos, CodeBeamInRun, "%s runs parallel between neighbouring joists (%s): they take each other as neighbours "+
+			"across it, so the floor or roof over the beam is on their tributary widths, not in the beam's check; add it to "+
+			"the beam by hand", b.ID, strings.Join(pairs, ", "))
+	}
+}
 
 // zonePastBeams warns (FRM224) for each beam checked as a member that
 // carries joists on one side only while the load zone reaches on past it

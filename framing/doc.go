@@ -211,6 +211,8 @@
 //	       warning  the joists have no zone: the strip is not put on the beam
 //	FRM224 warning  a beam checked as a member carries joists on one side only and its load
 //	                zone reaches on past it on the other: that strip is not in its check
+//	FRM225 warning  a beam checked as a member runs parallel between two neighbouring joists:
+//	                the floor over it is on their tributary widths, not in its check
 //	FRM230 warning  entity on a posts layer that is no post (a large circle or outline, open lines): skipped
 //	FRM231 error    point-load mark with no text beside it, or a text that cannot be read
 //	FRM232 error    point-load mark on no joist or beam

@@ -266,3 +266,25 @@ func TestEdgeStripReviewCases(t *testing.T) {
 		t.Errorf("FRM224 on a beam whose other side's strip it carries")
 	}
 }
+
+// TestBeamInRun: a beam on two walls drawn where a joist would be, between
+// the joists at x = 48 and 80 of a run: they take each other as neighbours
+// across it (24 in each, on the safe side for them) and the beam's check
+// lacks the floor over it: a warning says so (FRM225).
+func TestBeamInRun(t *testing.T) {
+	p := newPlan().walls(-20, 200, 0, 144).joists(0, 144, 16, 32, 48, 80, 96, 112)
+	pl := p.line("BEAM-DROP", 64, -2, 64, 146).group(loadPathOptions())
+	if len(pl.Beams) != 1 || pl.Beams[0].Rigid {
+		t.Fatalf("beams %+v", pl.Beams)
+	}
+	said := false
+	for _, is := range pl.Issues {
+		said = said || (is.Code == CodeBeamInRun && strings.Contains(is.Msg, "B1 runs parallel between neighbouring joists"))
+	}
+	if !said {
+		t.Errorf("no FRM225: %v", pl.Issues)
+	}
+	if c := issueCodes(newPlan().walls(-20, 200, 0, 144).joists(0, 144, 16, 32, 48, 80, 96, 112).group(loadPathOptions()).Issues); c[CodeBeamInRun] != 0 {
+		t.Errorf("FRM225 with no beam")
+	}
+}

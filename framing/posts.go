@@ -86,6 +86,7 @@ func (g *grouper) loadPath() {
 	g.findPointLoads()
 	g.edgeStripBeams()
 	g.zonePastBeams()
+	g.beamsInRuns()
 }
 
 // blockGroups splits entities into those drawn in model space and those
