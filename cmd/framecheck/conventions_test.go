@@ -125,6 +125,10 @@ func convDXF(v convVariant) []byte {
 		hline("WALL", 300)
 		hline("WALL", 305.5)
 	}
+	// a 2x6 wall parallel to the joists, its mid-line 16 in west of the
+	// first: that joist's edge strip bears on it (FRM221)
+	w.line("WALL", -18.75, -12, -18.75, 317.5)
+	w.line("WALL", -13.25, -12, -13.25, 317.5)
 	// joists
 	for i := 0; i < n; i++ {
 		x := float64(i) * oc
@@ -268,11 +272,21 @@ func TestConventionsMatchCentreLines(t *testing.T) {
 		ref := convRun(t, "ref", convDXF(convVariant{joists: "centre", supports: "clean", blocking: "layer", rotDeg: tr.rot, mm: tr.mm}))
 		// the reference itself, by hand (statics and geometry, common
 		// practice, no source): spans wall mid-line 2.75 -> beam mid-line
-		// 152.25 -> wall mid-line 302.75: 149.5 and 150.5; trib 16 inside, 8
-		// at the edges; bearings 5.0 (the end stops 0.5 in inside the
-		// outer face), 4.5 (the beam), 5.0
+		// 152.25 -> wall mid-line 302.75: 149.5 and 150.5; trib 16 inside
+		// and at x = 0 (8 to its neighbour, 8 of the 16 in to the parallel
+		// wall's mid-line), 8 at x = 128; bearings 5.0 (the end stops 0.5
+		// in inside the outer face), 4.5 (the beam), 5.0
 		if len(ref.Plan.Members) != 9 {
 			t.Fatalf("%s: reference has %d members", tr.name, len(ref.Plan.Members))
+		}
+		edges := 0 // members with trib 8: only x = 128, the wall beside x = 0
+		for _, m := range ref.Plan.Members {
+			if math.Abs(m.TribIn-8) < 1e-5 {
+				edges++
+			}
+		}
+		if edges != 1 {
+			t.Errorf("%s: %d members with trib 8, want 1 (x = 128; x = 0 has the parallel wall beside it)", tr.name, edges)
 		}
 		for _, m := range ref.Plan.Members {
 			sp := m.Spans()

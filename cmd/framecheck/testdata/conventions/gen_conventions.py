@@ -8,7 +8,8 @@ One floor plan, drawn once with single centre lines (ref) and again in
 each convention framecheck reads (DOMAIN.md "Drawings as people draw
 them"). Laid out in inches:
 
-  WALL       2x6 walls y = 0..5.5 and 300..305.5, x -12..140
+  WALL       2x6 walls y = 0..5.5 and 300..305.5, x -12..140, and one
+             parallel to the joists, x = -18.75..-13.25, y -12..317.5
   BEAM-DROP  a 3-ply dropped beam y = 150..154.5
   JOIST      9 joists x = 0, 16, ..., 128 from y = 0.5 to 305, 1.5 in thick
   BLOCKING   a row across the joists at y = 75, pieces staggered at
@@ -77,6 +78,10 @@ def draw(msp, variant):
     else:
         for y in (300, 305.5):
             hline("WALL", y)
+    # a 2x6 wall parallel to the joists, its mid-line 16 in west of the
+    # first: that joist's edge strip bears on it
+    for x in (-18.75, -13.25):
+        line("WALL", (x, -12), (x, 317.5))
 
     for i in range(N):
         x = i * OC
