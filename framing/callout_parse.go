@@ -476,9 +476,10 @@ func firstWord(l string) string {
 }
 
 // actualSizeRE matches a size written in actual inches with a fraction or
-// a decimal, "1 3/4 x 9 1/2", "1-3/4x11-7/8", "1.75x9.5": structural
-// composite lumber or glulam, never a nominal sawn size.
-var actualSizeRE = regexp.MustCompile(`^\d+(?:[ -]\d+/\d+|\.\d+)\s*[xX×]`)
+// a decimal in either dimension, "1 3/4 x 9 1/2", "1-3/4x11-7/8",
+// "1.75x9.5", "10x2.1": structural composite lumber or glulam, never a
+// nominal sawn size (whole inches both ways).
+var actualSizeRE = regexp.MustCompile(`^(?:\d+(?:[ -]\d+/\d+|\.\d+)\s*[xX×]|\d+\s*[xX×]\s*\d+(?:[ -]\d+/\d+|\.\d+))`)
 
 // actualSizeRefused is why a callout with a size in actual inches is not
 // read without the project's materials (ReadCallout, or a grouper whose
