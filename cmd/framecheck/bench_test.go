@@ -103,7 +103,7 @@ func prepare(tb testing.TB, dir string, n int) *prepared {
 		tb.Fatal(err)
 	}
 	pp.outcome = o
-	pp.results = exportResults(o, pp.dxf)
+	pp.results = exportResults(o, pp.dxf, false)
 	// the check inputs as the pipeline built them; a member in error
 	// before its check is left out
 	pp.inputs = o.Inputs
@@ -324,7 +324,7 @@ func BenchmarkStageResults(b *testing.B) {
 		b.ReportAllocs()
 		b.ResetTimer()
 		for b.Loop() {
-			exportResults(pp.outcome, pp.dxf)
+			exportResults(pp.outcome, pp.dxf, false)
 		}
 		perJoist(b, n)
 	})

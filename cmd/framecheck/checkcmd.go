@@ -292,7 +292,7 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		printIssues(stderr, o.Issues, c.verbose)
 		return exitUsage
 	}
-	res := exportResults(o, c.planPath)
+	res := exportResults(o, c.planPath, !hasPath)
 	o.waitPath()
 	if hasPath {
 		o.Inputs = failingInputs(o.Inputs, o.Results) // the path is followed: the summary's only

@@ -154,7 +154,7 @@ func FuzzCheckPlan(f *testing.F) {
 			}
 			return
 		}
-		res := exportResults(o, path)
+		res := exportResults(o, path, false)
 		if _, fields := export.Sanitize(res); len(fields) > 0 {
 			t.Fatalf("non-finite values in results: %s", strings.Join(fields, "; "))
 		}

@@ -289,7 +289,7 @@ func TestSameDepth(t *testing.T) {
 			if err != nil {
 				t.Fatal(err)
 			}
-			r := exportResults(o, "plan.dxf")
+			r := exportResults(o, "plan.dxf", false)
 			byZone := map[string]map[string]bool{}
 			for _, m := range r.Members {
 				if m.Status == export.StatusError {

@@ -17,8 +17,12 @@ import (
 	"framecheck/project"
 )
 
-// exportResults maps an outcome onto export's results.json contract.
-func exportResults(o *outcome, planName string) *export.Results {
+// exportResults maps an outcome onto export's results.json contract. With
+// release, the members' results and the grouped members are dropped from
+// o as soon as they are mapped (o.Results and o.Plan.Members nil on
+// return), for a caller that reads neither afterwards: at a million
+// joists the three at once were most of the run's peak (issue 18).
+func exportResults(o *outcome, planName string, release bool) *export.Results {
 	d, plan := o.drawing, o.Plan
 	toInch := d.ToInch
 	if toInch <= 0 {
@@ -51,12 +55,39 @@ func exportResults(o *outcome, planName string) *export.Results {
 	}
 	// Members convert on every core, through one converter (identical
 	// members share its slices); each range writes only its own members.
+	// The results are mapped first and the grouped members second, so
+	// that with release each goes as soon as it is mapped (below).
 	r.Members = make([]export.Member, len(plan.Members))
 	conv := newResultConverter()
 	par.Ranges(len(plan.Members), func(lo, hi int) {
 		for k := lo; k < hi; k++ {
-			em := conv.member(&plan.Members[k], &o.Results[k], toInch)
-			placeMember(&em, &plan.Members[k])
+			conv.fromResult(&r.Members[k], &o.Results[k])
+		}
+	})
+	for k := range o.Results {
+		switch o.Results[k].Status {
+		case check.StatusPass:
+			r.Summary.Pass++
+		case check.StatusFail:
+			r.Summary.Fail++
+		default:
+			r.Summary.Error++
+		}
+	}
+	if release {
+		// The uplift list and the notes read the results; nothing after
+		// them does, and they go before the grouped members are mapped (a
+		// million joists: 440 MB).
+		uplift.Wait()
+		side.Wait()
+		o.Results = nil
+	}
+	par.Ranges(len(plan.Members), func(lo, hi int) {
+		var rel relMemo
+		for k := lo; k < hi; k++ {
+			em := &r.Members[k]
+			fromFraming(em, &plan.Members[k], toInch)
+			placeMember(em, &plan.Members[k], &rel)
 			for _, p := range o.PointLoads[k] { // a map read on every core: never written meanwhile
 				ud := p.DeadLb
 				if p.HasUpliftDead {
@@ -76,19 +107,8 @@ func exportResults(o *outcome, planName string) *export.Results {
 			if ri := plan.Members[k].Run; ri >= 0 && ri < len(plan.Runs) {
 				em.Run = plan.Runs[ri].ID
 			}
-			r.Members[k] = em
 		}
 	})
-	for k := range plan.Members {
-		switch o.Results[k].Status {
-		case check.StatusPass:
-			r.Summary.Pass++
-		case check.StatusFail:
-			r.Summary.Fail++
-		default:
-			r.Summary.Error++
-		}
-	}
 	r.Summary.Members = len(plan.Members)
 	r.Marks = exportMarks(r.Members)
 	runs := pipeline.RunIndexes(plan)
@@ -96,6 +116,11 @@ func exportResults(o *outcome, planName string) *export.Results {
 		r.BlockingRows = append(r.BlockingRows, exportRow(plan, runs, row, ids, toInch))
 	}
 	r.Takeoff = exportTakeoff(o.Takeoff)
+	if release {
+		uplift.Wait()
+		side.Wait()
+		o.Plan.Members = nil
+	}
 	// the members' and uplift's numbers looked at for the outputs'
 	// sanitizing now, while the load path may still be followed
 	uplift.Wait()
@@ -216,33 +241,18 @@ func (s sharedMemo[K, V]) get(k K, mk func() V) V {
 	return v
 }
 
-func (cv *resultConverter) member(m *framing.Member, res *check.Result, toInch float64) export.Member {
-	em := export.Member{
-		ID: m.ID, Mark: m.Mark, Layer: m.Layer, Handle: m.Pos.Handle, Source: m.Pos.String(), Generated: m.Generated,
-		Start:   [2]float64{m.Start.X / toInch, m.Start.Y / toInch},
-		End:     [2]float64{m.End.X / toInch, m.End.Y / toInch},
-		StartIn: [2]float64{m.Start.X, m.Start.Y}, EndIn: [2]float64{m.End.X, m.End.Y},
-		LengthIn:    m.LengthIn,
-		SpansIn:     m.Spans(),
-		OverhangsIn: [2]float64{m.OverhangStartIn, m.OverhangEndIn},
-		TribIn:      m.TribIn, SpacingIn: m.SpacingIn,
+// fromResult fills em with what a member's result gives: its size as
+// checked, checks, blocking and status, its result's messages.
+func (cv *resultConverter) fromResult(em *export.Member, res *check.Result) {
+	*em = export.Member{
 		Size: res.Size, Species: res.Species, Grade: res.Grade,
-		Zone:                strings.Join(m.Zones, "+"),
 		Governing:           res.Governing,
 		MaxRatio:            res.MaxRatio,
 		BlockingRowsPerSpan: res.BlockingRowsPerSpan,
 		BlockingAtIn:        res.BlockingAtIn,
 		DrawnBlockingAtIn:   res.DrawnBlockingAtIn,
 		Status:              res.Status,
-	}
-	if em.Size == "" {
-		em.Size, em.Species, em.Grade = m.Size, m.Species, m.Grade
-	}
-	for _, b := range m.Bearings {
-		em.BearingsAtIn = append(em.BearingsAtIn, b.AtIn)
-	}
-	for _, z := range m.ZonePieces {
-		em.ZonePieces = append(em.ZonePieces, export.ZonePiece{Zone: z.Zone, FromIn: z.FromIn, ToIn: z.ToIn})
+		Messages:            res.Messages,
 	}
 	if len(res.Checks) > 0 {
 		em.Checks = cv.checks.get(&res.Checks[0], func() []export.Check {
@@ -266,9 +276,36 @@ func (cv *resultConverter) member(m *framing.Member, res *check.Result, toInch f
 	if len(res.Factors) > 0 {
 		em.Factors = cv.factors.get(&res.Factors[0], func() []export.TraceItem { return exportTrace(res.Factors) })
 	}
-	seen := map[string]bool{}
 	em.Info = res.Info
-	for _, group := range [][]string{m.Messages, res.Messages} {
+}
+
+// fromFraming adds to em (filled by fromResult) what the grouped member m
+// gives: its names, place, spans, tributary width and zones, the size it
+// is drawn with when its result names none, and its findings ahead of its
+// result's messages (each once).
+func fromFraming(em *export.Member, m *framing.Member, toInch float64) {
+	em.ID, em.Mark, em.Layer, em.Handle, em.Source, em.Generated = m.ID, m.Mark, m.Layer, m.Pos.Handle, m.Pos.String(), m.Generated
+	em.Start = [2]float64{m.Start.X / toInch, m.Start.Y / toInch}
+	em.End = [2]float64{m.End.X / toInch, m.End.Y / toInch}
+	em.StartIn, em.EndIn = [2]float64{m.Start.X, m.Start.Y}, [2]float64{m.End.X, m.End.Y}
+	em.LengthIn = m.LengthIn
+	em.SpansIn = m.Spans()
+	em.OverhangsIn = [2]float64{m.OverhangStartIn, m.OverhangEndIn}
+	em.TribIn, em.SpacingIn = m.TribIn, m.SpacingIn
+	em.Zone = strings.Join(m.Zones, "+")
+	if em.Size == "" {
+		em.Size, em.Species, em.Grade = m.Size, m.Species, m.Grade
+	}
+	for _, b := range m.Bearings {
+		em.BearingsAtIn = append(em.BearingsAtIn, b.AtIn)
+	}
+	for _, z := range m.ZonePieces {
+		em.ZonePieces = append(em.ZonePieces, export.ZonePiece{Zone: z.Zone, FromIn: z.FromIn, ToIn: z.ToIn})
+	}
+	resMsgs := em.Messages
+	em.Messages = nil
+	seen := map[string]bool{}
+	for _, group := range [][]string{m.Messages, resMsgs} {
 		for _, msg := range group {
 			if !seen[msg] {
 				seen[msg] = true
@@ -276,7 +313,6 @@ func (cv *resultConverter) member(m *framing.Member, res *check.Result, toInch f
 			}
 		}
 	}
-	return em
 }
 
 func exportTrace(t []check.TraceItem) []export.TraceItem {

@@ -109,7 +109,7 @@ func TestLightestPassingAlternative(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	res := exportResults(o, "plan.dxf")
+	res := exportResults(o, "plan.dxf", false)
 	var storage *badGroup
 	groups := badGroups(o, res, proj)
 	// the same with only the failing members' inputs kept, as check
