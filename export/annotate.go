@@ -3,8 +3,11 @@ package export
 import (
 	"bufio"
 	"bytes"
+	"crypto/sha256"
+	"encoding/hex"
 	"errors"
 	"fmt"
+	"hash"
 	"io"
 	"math"
 	"os"
@@ -283,6 +286,99 @@ func AnnotateScanned(input []byte, name, outputPath string, m Markup, scan *Draw
 	return writeAtomic(outputPath, func(w *bufio.Writer) error {
 		return copyEdited(in, name, w, scan.facts, &m)
 	})
+}
+
+// Detach waits for the scan to end and lets go of the drawing's bytes:
+// what the scan keeps of them is copied, so that the caller may drop them
+// and annotate from the file instead (AnnotateScanFrom). AnnotateScanned
+// then scans its bytes afresh.
+func (s *DrawingScan) Detach() {
+	<-s.done
+	s.input = nil
+	if s.facts != nil {
+		s.facts.detach()
+	}
+}
+
+// detach copies every string f holds, which the scan of a drawing in
+// memory took from its bytes without copying (pairReader).
+func (f *dxfFacts) detach() {
+	for _, p := range []*string{&f.Version, &f.HandSeed, &f.LayerTable, &f.Layer0LType, &f.Layer0Plot,
+		&f.ModelSpace, &f.EOL, &f.FirstSection} {
+		*p = strings.Clone(*p)
+	}
+	layers := make(map[string]bool, len(f.Layers))
+	for k, v := range f.Layers {
+		layers[strings.Clone(k)] = v
+	}
+	f.Layers = layers
+	for i := range f.edits {
+		f.edits[i].Value = strings.Clone(f.edits[i].Value)
+	}
+}
+
+// ErrDrawingChanged is the error of AnnotateScanFrom when the drawing it
+// reads is not the one that was checked.
+var ErrDrawingChanged = errors.New("the drawing changed on disk while it was being checked (written over in place); its annotated copy is not written: run the check again")
+
+// AnnotateScanFrom is AnnotateScanned for a drawing no longer held in
+// memory: in reads it again from its start (the file as opened for the
+// check: a drawing replaced on disk meanwhile, as CAD programs save, is
+// still read as it was), and size and sum (SHA-256, hex) are those of the
+// bytes checked and scanned (ScanDrawing, then Detach). Every byte read is
+// hashed on the way; when the bytes differ, the copy is not written and
+// the error wraps ErrDrawingChanged. With no scan, or one used already,
+// the drawing is scanned from in first.
+func AnnotateScanFrom(in io.ReadSeeker, size int64, sum, name, outputPath string, m Markup, scan *DrawingScan) error {
+	if sameFile(name, outputPath) {
+		return fmt.Errorf("export: %s: %w", outputPath, ErrSameFile)
+	}
+	if err := m.validate(); err != nil {
+		return fmt.Errorf("export: %s: %w", outputPath, err)
+	}
+	var facts *dxfFacts
+	if scan == nil || scan.used.Swap(true) {
+		f, err := scanDXF(in, name)
+		if err != nil {
+			return fmt.Errorf("export: %w", err)
+		}
+		if _, err := in.Seek(0, io.SeekStart); err != nil {
+			return fmt.Errorf("export: %w", err)
+		}
+		facts = f
+	} else {
+		<-scan.done
+		if scan.err != nil {
+			return fmt.Errorf("export: %w", scan.err)
+		}
+		facts = scan.facts
+	}
+	h := &countingHash{h: sha256.New()}
+	return writeAtomic(outputPath, func(w *bufio.Writer) error {
+		if err := copyEdited(io.TeeReader(in, h), name, w, facts, &m); err != nil {
+			return err
+		}
+		// what the copy left unread (nothing, for a whole drawing) is
+		// hashed too: the bytes read must be the bytes checked
+		if _, err := io.Copy(h, in); err != nil {
+			return &DXFError{File: name, Err: err}
+		}
+		if h.n != size || hex.EncodeToString(h.h.Sum(nil)) != sum {
+			return fmt.Errorf("%s: %w", name, ErrDrawingChanged)
+		}
+		return nil
+	})
+}
+
+// countingHash hashes and counts what is written to it.
+type countingHash struct {
+	h hash.Hash
+	n int64
+}
+
+func (c *countingHash) Write(b []byte) (int, error) {
+	c.n += int64(len(b))
+	return c.h.Write(b)
 }
 
 // annotate reads the drawing twice from in (facts, then the copy).

@@ -66,7 +66,9 @@ type checkRun struct {
 
 	warnings int                       // warning findings, counted in the summary
 	doubts   []dxfimport.Issue         // findings that make the whole run doubtful (runDoubts)
-	planData []byte                    // the drawing, read once: checked and annotated from these bytes
+	planData []byte                    // the drawing, read once: checked and annotated from these bytes (nil once dropped: planFile)
+	planFile *os.File                  // the drawing as opened for the check, for an annotated copy made from the file
+	planSize int64                     // its length in bytes
 	set      atomic.Pointer[outputSet] // the output folder while the run holds it
 	pkg      string                    // report's calculation package: full | governing
 	pdf      bool                      // also print report.pdf with a Chromium
@@ -213,12 +215,13 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	}
 	// The drawing is read once: the checks and the annotated copy use
 	// the same bytes, whatever happens to the file meanwhile.
-	data, err := os.ReadFile(c.planPath)
+	f, data, err := openDrawing(c.planPath)
 	if err != nil {
 		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitUsage
 	}
-	c.planData = data
+	defer f.Close()
+	c.planData, c.planFile, c.planSize = data, f, int64(len(data))
 	// what the annotated copy must know of the drawing, and its hash for
 	// results.json, found on the core that reading it into members leaves
 	// idle
@@ -235,8 +238,20 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	if merr != nil {
 		fmt.Fprintf(stderr, "framecheck: warning: %s: the marks are named afresh\n", termText(merr.Error()))
 	}
+	inputSum := ""
+	parsed := func() {
+		if c.planSize >= dropDrawingFrom {
+			// A large drawing is read again from the file for its
+			// annotated copy (every byte hashed against inputSum) rather
+			// than held through the checks: at 1,000,000 joists, 194 MB
+			// of the run's peak.
+			inputSum = <-inputHash
+			c.scan.Detach()
+			c.planData, data = nil, nil
+		}
+	}
 	o, err := runPipeline(pipelineInput{planPath: outputName(c.planPath), planData: data, project: proj, units: c.units, size: c.size,
-		marks: known, pathLater: true})
+		marks: known, pathLater: true, parsed: parsed})
 	if err != nil {
 		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitUsage
@@ -297,7 +312,10 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	if hasPath {
 		o.Inputs = failingInputs(o.Inputs, o.Results) // the path is followed: the summary's only
 	}
-	res.InputSHA256 = <-inputHash
+	if inputSum == "" {
+		inputSum = <-inputHash
+	}
+	res.InputSHA256 = inputSum
 	// From here the writers read res, the plan's supports and zones and
 	// the drawing's bytes: drop the members as grouped and checked.
 	o.releaseForWriters()
@@ -358,6 +376,41 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		return exitFail
 	}
 	return exitOK
+}
+
+// dropDrawingFrom is the size of drawing from which a run drops its bytes
+// once checked and makes the annotated copy from the file
+// (export.AnnotateScanFrom): about 170,000 joists of the synthetic plans.
+// Smaller drawings are kept, so that a file written over in place during
+// the run still gets its copy. A variable for the tests.
+var dropDrawingFrom int64 = 32 << 20
+
+// openDrawing opens the drawing at path and reads it whole, returning the
+// file still open (its reading position at the end).
+func openDrawing(path string) (*os.File, []byte, error) {
+	f, err := os.Open(path)
+	if err != nil {
+		return nil, nil, err
+	}
+	var size int
+	if fi, err := f.Stat(); err == nil && fi.Mode().IsRegular() && fi.Size() < math.MaxInt32 {
+		size = int(fi.Size())
+	}
+	data := make([]byte, 0, size+1)
+	for {
+		n, err := f.Read(data[len(data):cap(data)])
+		data = data[:len(data)+n]
+		if err == io.EOF {
+			return f, data, nil
+		}
+		if err != nil {
+			f.Close()
+			return nil, nil, err
+		}
+		if len(data) == cap(data) {
+			data = append(data, 0)[:len(data)]
+		}
+	}
 }
 
 // CodeUnmatchedSupport is the warning that a support layer pattern matches
@@ -508,6 +561,10 @@ func (c *checkRun) write(o *outcome, res *export.Results, proj *project.Project,
 		},
 		func() error {
 			mk = export.MarkupFromResults(res, toInch)
+			if c.planData == nil {
+				return export.AnnotateScanFrom(io.NewSectionReader(c.planFile, 0, math.MaxInt64), c.planSize, res.InputSHA256,
+					c.planPath, set.path(names[2]), mk, c.scan)
+			}
 			return export.AnnotateScanned(c.planData, c.planPath, set.path(names[2]), mk, c.scan)
 		},
 	}
@@ -565,7 +622,7 @@ func (c *checkRun) write(o *outcome, res *export.Results, proj *project.Project,
 			return nil, err
 		}
 	}
-	in := &manifestInput{Path: outputName(c.planPath), SHA256: res.InputSHA256, Bytes: int64(len(c.planData))}
+	in := &manifestInput{Path: outputName(c.planPath), SHA256: res.InputSHA256, Bytes: c.planSize}
 	var pj *manifestInput
 	if c.projectPath != "" {
 		pj = &manifestInput{Path: outputName(c.projectPath), SHA256: proj.FileSHA256(), Bytes: proj.FileSize()}

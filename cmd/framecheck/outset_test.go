@@ -8,6 +8,7 @@ import (
 	"os"
 	"os/exec"
 	"path/filepath"
+	"reflect"
 	"strings"
 	"sync"
 	"syscall"
@@ -501,5 +502,70 @@ func TestOutputUnderFile(t *testing.T) {
 	}
 	if b, err := os.ReadFile(parent); err != nil || string(b) != "keep" {
 		t.Errorf("the file in the way was changed: %q, %v", b, err)
+	}
+}
+
+// TestDroppedDrawing: with the drawing's bytes dropped once read (as for
+// a large drawing, dropDrawingFrom), the annotated copy is made from the
+// file as opened: the same copy as from the bytes kept; a drawing replaced
+// on disk meanwhile (a CAD program's save) still gives the copy of the
+// bytes checked; one written over in place gives no outputs, exit 3 and a
+// message saying why, the previous set untouched (common practice, no
+// source: never an annotated copy of a drawing other than the one
+// checked).
+func TestDroppedDrawing(t *testing.T) {
+	kept := newOutsetCase(t)
+	if code, stderr := kept.check(t); code != exitOK {
+		t.Fatalf("bytes kept: exit %d\n%s", code, stderr)
+	}
+	want := mustRead(t, filepath.Join(kept.out, "plan-checked.dxf"))
+	defer func(v int64) { dropDrawingFrom = v }(dropDrawingFrom)
+	dropDrawingFrom = 0
+	c := newOutsetCase(t)
+	if code, stderr := c.check(t); code != exitOK {
+		t.Fatalf("bytes dropped: exit %d\n%s", code, stderr)
+	}
+	if got := mustRead(t, filepath.Join(c.out, "plan-checked.dxf")); !bytes.Equal(got, want) {
+		t.Error("bytes dropped: the annotated copy differs from the one made from the bytes kept")
+	}
+	prev := wantCompleteSet(t, c.out)
+	orig := mustRead(t, c.plan)
+	other := strings.ReplaceAll(string(orig), "\nJOIST\n", "\nJOISU\n") // the same length
+	if other == string(orig) {
+		t.Fatal("no JOIST layer in the plan")
+	}
+	t.Cleanup(func() { afterRead = nil })
+	// replaced: a new file renamed over the drawing
+	afterRead = func() {
+		tmp := c.plan + ".new"
+		if err := os.WriteFile(tmp, []byte(other), 0o644); err != nil {
+			t.Error(err)
+		}
+		if err := os.Rename(tmp, c.plan); err != nil {
+			t.Error(err)
+		}
+	}
+	if code, stderr := c.check(t); code != exitOK {
+		t.Fatalf("replaced: exit %d\n%s", code, stderr)
+	}
+	if got := mustRead(t, filepath.Join(c.out, "plan-checked.dxf")); !bytes.Equal(got, want) {
+		t.Error("replaced: the annotated copy is not made from the drawing that was checked")
+	}
+	prev = wantCompleteSet(t, c.out)
+	// written over in place, after it was read
+	if err := os.WriteFile(c.plan, orig, 0o644); err != nil {
+		t.Fatal(err)
+	}
+	afterRead = func() {
+		if err := os.WriteFile(c.plan, []byte(other), 0o644); err != nil {
+			t.Error(err)
+		}
+	}
+	code, stderr := c.check(t)
+	if code != exitMachine || !strings.Contains(stderr, "changed on disk while it was being checked") {
+		t.Errorf("written over: exit %d, want %d and the reason\n%s", code, exitMachine, stderr)
+	}
+	if now := wantCompleteSet(t, c.out); !reflect.DeepEqual(now, prev) {
+		t.Error("written over: the previous outputs changed")
 	}
 }

@@ -76,6 +76,9 @@ type pipelineInput struct {
 	// for the outputs meanwhile; otherwise it is followed before
 	// runPipeline returns
 	pathLater bool
+	// parsed, when set, is called once the drawing is read, before it is
+	// grouped into members: planData is not read after it
+	parsed func()
 }
 
 // runPipeline reads the plan, groups it into members and hands them to
@@ -99,6 +102,10 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 		d, err = dxfimport.Read(bytes.NewReader(in.planData), in.planPath, opt)
 	} else {
 		d, err = dxfimport.ReadFile(in.planPath, opt)
+	}
+	in.planData = nil
+	if in.parsed != nil {
+		in.parsed()
 	}
 	if err != nil {
 		resume()
