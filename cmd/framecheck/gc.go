@@ -31,9 +31,23 @@ const (
 // project's 2-vCPU machine, load average about 4: the fixed limit took
 // 17-17.4 s of user CPU and 1.2 GB; 40 bytes per byte 7.8-8.0 s and
 // 2.0 GB; 30 bytes per byte 8.7-9.3 s and 1.57 GB, which is kept.
+//
+// Past about 50 MB of drawing (250,000 joists) the limit grows by
+// memoryLargeBase and memoryPerPlanByteLarge instead, whichever is less:
+// the live heap there is about 11 bytes per byte of drawing at its peak
+// (1,000,000 joists: 2.15 GiB, with the members' results and grouped
+// members dropped as they are mapped and the drawing's bytes once read),
+// and the 5.8 GB that 30 bytes per byte allowed a 194 MB drawing only
+// left garbage for the system to page in. Measured on the 1,000,000-joist
+// bigplan on this project's 2-vCPU machine (load about 1.3): with 30
+// bytes per byte, 18.1-21.3 s and 3.69-4.00 GB peak; with the limit at
+// 2.5 GiB, 16.5-18.1 s and 2.57 GB. At 300,000 joists (57.6 MB) the
+// limit is 1.54 GB against 1.73.
 const (
-	memoryPerPlanByte = 30
-	memoryShare       = 0.6
+	memoryPerPlanByte      = 30
+	memoryLargeBase        = 1 << 30
+	memoryPerPlanByteLarge = 8
+	memoryShare            = 0.6
 )
 
 // memoryPerPathItem is the soft limit added per beam, post and joint of
@@ -47,14 +61,16 @@ const memoryPerPathItem = 8 << 10
 
 // scaleMemoryLimit raises the soft memory limit for a drawing of planBytes
 // whose load path has pathItems beams, posts and joints, when tuneGC set
-// it: to memoryPerPlanByte x planBytes + memoryPerPathItem x pathItems,
+// it: to memoryPerPlanByte x planBytes (or memoryLargeBase +
+// memoryPerPlanByteLarge x planBytes when less) + memoryPerPathItem x pathItems,
 // at least memoryLimit and at most memoryShare of the machine's memory
 // (when /proc/meminfo tells it).
 func scaleMemoryLimit(planBytes int64, pathItems int) {
 	if !limitTuned {
 		return
 	}
-	want := max(int64(memoryLimit), memoryPerPlanByte*planBytes+memoryPerPathItem*int64(pathItems))
+	perPlan := min(memoryPerPlanByte*planBytes, memoryLargeBase+memoryPerPlanByteLarge*planBytes)
+	want := max(int64(memoryLimit), perPlan+memoryPerPathItem*int64(pathItems))
 	if total := machineMemory(); total > 0 {
 		want = min(want, max(int64(memoryLimit), int64(memoryShare*float64(total))))
 	}

@@ -6,7 +6,8 @@ import (
 )
 
 // TestScaleMemoryLimit: the soft limit grows with the drawing (30 bytes of
-// heap per byte of drawing, measured: README, Performance), never below
+// heap per byte of drawing, past about 50 MB 1 GiB + 8 per byte, measured:
+// README, Performance), never below
 // 900 MiB, never above 60 % of the machine's memory, and not at all when
 // the user set GOMEMLIMIT (common practice, no source: the numbers are
 // ours).
@@ -20,12 +21,20 @@ func TestScaleMemoryLimit(t *testing.T) {
 		t.Errorf("1 MiB drawing: limit %d, want %d", got, memoryLimit)
 	}
 	scaleMemoryLimit(100<<20, 0)
-	want := int64(30 * 100 << 20)
+	want := int64(1<<30 + 8*100<<20) // less than 30 x 100 MiB
 	if total := machineMemory(); total > 0 && float64(want) > 0.6*float64(total) {
 		want = max(int64(memoryLimit), int64(0.6*float64(total)))
 	}
 	if got := debug.SetMemoryLimit(-1); got != want {
 		t.Errorf("100 MiB drawing: limit %d, want %d", got, want)
+	}
+	scaleMemoryLimit(45<<20, 0)
+	want = int64(30 * 45 << 20) // less than 1 GiB + 8 x 45 MiB
+	if total := machineMemory(); total > 0 && float64(want) > 0.6*float64(total) {
+		want = max(int64(memoryLimit), int64(0.6*float64(total)))
+	}
+	if got := debug.SetMemoryLimit(-1); got != want {
+		t.Errorf("45 MiB drawing: limit %d, want %d", got, want)
 	}
 	// a load path of 20,000 items adds 8 KiB each
 	scaleMemoryLimit(40<<20, 20_000)
