@@ -353,21 +353,28 @@ func AnnotateScanFrom(in io.ReadSeeker, size int64, sum, name, outputPath string
 		}
 		facts = scan.facts
 	}
-	h := &countingHash{h: sha256.New()}
 	return writeAtomic(outputPath, func(w *bufio.Writer) error {
-		if err := copyEdited(io.TeeReader(in, h), name, w, facts, &m); err != nil {
-			return err
-		}
-		// what the copy left unread (nothing, for a whole drawing) is
-		// hashed too: the bytes read must be the bytes checked
-		if _, err := io.Copy(h, in); err != nil {
-			return &DXFError{File: name, Err: err}
-		}
-		if h.n != size || hex.EncodeToString(h.h.Sum(nil)) != sum {
-			return fmt.Errorf("%s: %w", name, ErrDrawingChanged)
-		}
-		return nil
+		return copyChecked(in, size, sum, name, w, facts, &m)
 	})
+}
+
+// copyChecked is copyEdited hashing every byte of in on the way, to the
+// end: an error wrapping ErrDrawingChanged when they are not size bytes
+// whose SHA-256 (hex) is sum.
+func copyChecked(in io.Reader, size int64, sum, name string, w *bufio.Writer, facts *dxfFacts, m *Markup) error {
+	h := &countingHash{h: sha256.New()}
+	if err := copyEdited(io.TeeReader(in, h), name, w, facts, m); err != nil {
+		return err
+	}
+	// what the copy left unread (nothing, for a whole drawing) is hashed
+	// too: the bytes read must be the bytes checked
+	if _, err := io.Copy(h, in); err != nil {
+		return &DXFError{File: name, Err: err}
+	}
+	if h.n != size || hex.EncodeToString(h.h.Sum(nil)) != sum {
+		return fmt.Errorf("%s: %w", name, ErrDrawingChanged)
+	}
+	return nil
 }
 
 // countingHash hashes and counts what is written to it.

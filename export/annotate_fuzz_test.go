@@ -3,6 +3,8 @@ package export
 import (
 	"bufio"
 	"bytes"
+	"crypto/sha256"
+	"encoding/hex"
 	"errors"
 	"io"
 	"os"
@@ -52,6 +54,32 @@ func FuzzAnnotate(f *testing.F) {
 		}
 		if err == nil && refErr == nil && !bytes.Equal(out, ref) {
 			t.Fatalf("range copy differs from the pair-by-pair copy")
+		}
+		// The copy from a scan that let go of the bytes (Detach), read
+		// through a hash, is the same; one byte more is refused.
+		if err == nil {
+			scan := ScanDrawing(bytes.Clone(in), "fuzz.dxf")
+			scan.Detach()
+			if scan.err != nil {
+				t.Fatalf("the scan ahead failed (%v) where the copy did not", scan.err)
+			}
+			sum := sha256.Sum256(in)
+			var buf bytes.Buffer
+			w := bufio.NewWriter(&buf)
+			if cerr := copyChecked(bytes.NewReader(in), int64(len(in)), hex.EncodeToString(sum[:]), "fuzz.dxf", w, scan.facts, &m); cerr != nil {
+				t.Fatalf("checked copy: %v", cerr)
+			}
+			w.Flush()
+			if !bytes.Equal(buf.Bytes(), out) {
+				t.Fatal("the checked copy from a detached scan differs from the copy")
+			}
+			scan = ScanDrawing(bytes.Clone(in), "fuzz.dxf")
+			scan.Detach()
+			longer := append(bytes.Clone(in), ' ')
+			if cerr := copyChecked(bytes.NewReader(longer), int64(len(in)), hex.EncodeToString(sum[:]), "fuzz.dxf",
+				bufio.NewWriter(io.Discard), scan.facts, &m); !errors.Is(cerr, ErrDrawingChanged) {
+				t.Fatalf("a byte more: %v, want ErrDrawingChanged", cerr)
+			}
 		}
 		if err != nil {
 			var de *DXFError
