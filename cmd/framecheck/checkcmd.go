@@ -67,7 +67,7 @@ type checkRun struct {
 	warnings int                       // warning findings, counted in the summary
 	doubts   []dxfimport.Issue         // findings that make the whole run doubtful (runDoubts)
 	planData []byte                    // the drawing, read once: checked and annotated from these bytes (nil once dropped: planFile)
-	planFile *os.File                  // the drawing as opened for the check, for an annotated copy made from the file
+	planFile *os.File                  // the drawing as opened for the check, kept open for an annotated copy made from the file; nil for one kept in memory
 	planSize int64                     // its length in bytes
 	set      atomic.Pointer[outputSet] // the output folder while the run holds it
 	pkg      string                    // report's calculation package: full | governing
@@ -214,14 +214,23 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 		return exitUsage
 	}
 	// The drawing is read once: the checks and the annotated copy use
-	// the same bytes, whatever happens to the file meanwhile.
+	// the same bytes, whatever happens to the file meanwhile. A large one
+	// (dropDrawingFrom) is read again for the annotated copy, from the
+	// file as opened here and kept open, and checked against the bytes
+	// read now; a smaller one is closed at once (on Windows an open file
+	// cannot be saved over).
 	f, data, err := openDrawing(c.planPath)
 	if err != nil {
 		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitUsage
 	}
-	defer f.Close()
-	c.planData, c.planFile, c.planSize = data, f, int64(len(data))
+	c.planData, c.planSize = data, int64(len(data))
+	if c.planSize >= dropDrawingFrom {
+		c.planFile = f
+		defer f.Close()
+	} else {
+		f.Close()
+	}
 	// what the annotated copy must know of the drawing, and its hash for
 	// results.json, found on the core that reading it into members leaves
 	// idle
@@ -240,7 +249,7 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	}
 	inputSum := ""
 	parsed := func() {
-		if c.planSize >= dropDrawingFrom {
+		if c.planFile != nil {
 			// A large drawing is read again from the file for its
 			// annotated copy (every byte hashed against inputSum) rather
 			// than held through the checks: at 1,000,000 joists, 194 MB
