@@ -11,6 +11,7 @@ import (
 	"io"
 	"math"
 	"os"
+	"slices"
 	"strconv"
 	"strings"
 	"sync/atomic"
@@ -361,20 +362,34 @@ func AnnotateScanFrom(in io.ReadSeeker, size int64, sum, name, outputPath string
 // copyChecked is copyEdited hashing every byte of in on the way, to the
 // end: an error wrapping ErrDrawingChanged when they are not size bytes
 // whose SHA-256 (hex) is sum.
+//
+// A copy that fails (a drawing cut short since, or one the copy cannot
+// annotate) reads on to the end all the same, so that a changed drawing is
+// said to be one; a drawing that cannot be read again at all is an error
+// of the machine, not a *DXFError.
 func copyChecked(in io.Reader, size int64, sum, name string, w *bufio.Writer, facts *dxfFacts, m *Markup) error {
 	h := &countingHash{h: sha256.New()}
-	if err := copyEdited(io.TeeReader(in, h), name, w, facts, m); err != nil {
-		return err
-	}
+	cerr := copyEdited(io.TeeReader(in, h), name, w, facts, m)
 	// what the copy left unread (nothing, for a whole drawing) is hashed
 	// too: the bytes read must be the bytes checked
 	if _, err := io.Copy(h, in); err != nil {
-		return &DXFError{File: name, Err: err}
+		return fmt.Errorf("%s: reading the drawing again for its annotated copy: %w", name, err)
 	}
 	if h.n != size || hex.EncodeToString(h.h.Sum(nil)) != sum {
 		return fmt.Errorf("%s: %w", name, ErrDrawingChanged)
 	}
-	return nil
+	return cerr
+}
+
+// LayerColours waits for the scan and returns what DrawingLayerColours
+// returns for the drawing scanned, nil when it could not be scanned; it
+// needs neither the bytes (after Detach) nor the file again.
+func (s *DrawingScan) LayerColours() []int {
+	<-s.done
+	if s.facts == nil {
+		return nil
+	}
+	return slices.Clone(s.facts.LayerColours)
 }
 
 // countingHash hashes and counts what is written to it.

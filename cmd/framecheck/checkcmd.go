@@ -219,13 +219,13 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 	// file as opened here and kept open, and checked against the bytes
 	// read now; a smaller one is closed at once (on Windows an open file
 	// cannot be saved over).
-	f, data, err := openDrawing(c.planPath)
+	f, data, regular, err := openDrawing(c.planPath)
 	if err != nil {
 		fmt.Fprintf(stderr, "framecheck: %s\n", termText(err.Error()))
 		return exitUsage
 	}
 	c.planData, c.planSize = data, int64(len(data))
-	if c.planSize >= dropDrawingFrom {
+	if regular && c.planSize >= dropDrawingFrom {
 		c.planFile = f
 		defer f.Close()
 	} else {
@@ -395,26 +395,30 @@ func (c *checkRun) run(stdout, stderr io.Writer) int {
 var dropDrawingFrom int64 = 32 << 20
 
 // openDrawing opens the drawing at path and reads it whole, returning the
-// file still open (its reading position at the end).
-func openDrawing(path string) (*os.File, []byte, error) {
-	f, err := os.Open(path)
+// file still open (its reading position at the end) and whether it is a
+// regular file (one that can be read again: not a pipe or a device).
+func openDrawing(path string) (f *os.File, data []byte, regular bool, err error) {
+	f, err = os.Open(path)
 	if err != nil {
-		return nil, nil, err
+		return nil, nil, false, err
 	}
 	var size int
-	if fi, err := f.Stat(); err == nil && fi.Mode().IsRegular() && fi.Size() < math.MaxInt32 {
-		size = int(fi.Size())
+	if fi, err := f.Stat(); err == nil && fi.Mode().IsRegular() {
+		regular = true
+		if fi.Size() < math.MaxInt32 {
+			size = int(fi.Size())
+		}
 	}
-	data := make([]byte, 0, size+1)
+	data = make([]byte, 0, size+1)
 	for {
 		n, err := f.Read(data[len(data):cap(data)])
 		data = data[:len(data)+n]
 		if err == io.EOF {
-			return f, data, nil
+			return f, data, regular, nil
 		}
 		if err != nil {
 			f.Close()
-			return nil, nil, err
+			return nil, nil, false, err
 		}
 		if len(data) == cap(data) {
 			data = append(data, 0)[:len(data)]
@@ -626,7 +630,13 @@ func (c *checkRun) write(o *outcome, res *export.Results, proj *project.Project,
 	}
 	if overlay {
 		// The overlay's layers avoid the plan's colours too (when readable).
-		mk.UsedACI, _ = export.DrawingLayerColours(c.planPath)
+		// From the scan of the bytes checked: the file named may be a
+		// pipe, or have changed since.
+		if c.scan != nil {
+			mk.UsedACI = c.scan.LayerColours()
+		} else {
+			mk.UsedACI, _ = export.DrawingLayerColours(c.planPath)
+		}
 		if err := add(names[3], export.WriteOverlay(set.path(names[3]), mk, res.DrawingUnits)); err != nil {
 			return nil, err
 		}
