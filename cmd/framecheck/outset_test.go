@@ -292,15 +292,7 @@ func TestMarkupFromCheckedBytes(t *testing.T) {
 		t.Fatal("no JOIST layer in the plan")
 	}
 	t.Cleanup(func() { afterRead = nil })
-	afterRead = func() {
-		tmp := c.plan + ".new"
-		if err := os.WriteFile(tmp, []byte(other), 0o644); err != nil {
-			t.Error(err)
-		}
-		if err := os.Rename(tmp, c.plan); err != nil {
-			t.Error(err)
-		}
-	}
+	afterRead = replaceAfterRead(t, c.plan, other)
 	if code, stderr := c.check(t); code != exitOK {
 		t.Fatalf("exit %d\n%s", code, stderr)
 	}
@@ -311,6 +303,20 @@ func TestMarkupFromCheckedBytes(t *testing.T) {
 	m := wantCompleteSet(t, c.out)
 	if m.Input.SHA256 != sha256Hex(orig) {
 		t.Errorf("manifest input hash %s, want that of the bytes checked", m.Input.SHA256)
+	}
+}
+
+// replaceAfterRead returns an afterRead hook that replaces the drawing at
+// path with other as a CAD program saves: a new file renamed over it.
+func replaceAfterRead(t *testing.T, path, other string) func() {
+	return func() {
+		tmp := path + ".new"
+		if err := os.WriteFile(tmp, []byte(other), 0o644); err != nil {
+			t.Error(err)
+		}
+		if err := os.Rename(tmp, path); err != nil {
+			t.Error(err)
+		}
 	}
 }
 
@@ -536,15 +542,7 @@ func TestDroppedDrawing(t *testing.T) {
 	}
 	t.Cleanup(func() { afterRead = nil })
 	// replaced: a new file renamed over the drawing
-	afterRead = func() {
-		tmp := c.plan + ".new"
-		if err := os.WriteFile(tmp, []byte(other), 0o644); err != nil {
-			t.Error(err)
-		}
-		if err := os.Rename(tmp, c.plan); err != nil {
-			t.Error(err)
-		}
-	}
+	afterRead = replaceAfterRead(t, c.plan, other)
 	if code, stderr := c.check(t); code != exitOK {
 		t.Fatalf("replaced: exit %d\n%s", code, stderr)
 	}
