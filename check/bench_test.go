@@ -1,20 +1,8 @@
 package check
 
 import (
-	"syscall"
 	"testing"
 )
-
-// cpuNs returns the process's user+system CPU time in ns. The benchmarks
-// report it per operation beside ns/op because on a shared machine the
-// wall-clock ns/op also counts the time other processes held the core.
-func cpuNs() int64 {
-	var ru syscall.Rusage
-	if err := syscall.Getrusage(syscall.RUSAGE_SELF, &ru); err != nil {
-		return 0
-	}
-	return ru.Utime.Nano() + ru.Stime.Nano()
-}
 
 func benchCheck(b *testing.B, m Member, s Settings, want string) {
 	b.ReportAllocs()

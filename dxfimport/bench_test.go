@@ -7,7 +7,6 @@ import (
 	"runtime"
 	"strconv"
 	"sync"
-	"syscall"
 	"testing"
 	"unsafe"
 )
@@ -141,18 +140,6 @@ func entityBytes(d *Drawing) int {
 		n += cap(e.Points)*int(unsafe.Sizeof(Point{})) + cap(e.Bulges)*8 + len(e.Text) + len(e.Pos.Handle)
 	}
 	return n
-}
-
-// cpuSeconds is the process's user+system CPU time. On a shared machine
-// wall-clock MB/s drops with the load; MB per CPU-second (all threads,
-// the garbage collector's included) does not.
-func cpuSeconds() float64 {
-	var ru syscall.Rusage
-	if err := syscall.Getrusage(syscall.RUSAGE_SELF, &ru); err != nil {
-		return 0
-	}
-	tv := func(t syscall.Timeval) float64 { return float64(t.Sec) + float64(t.Usec)/1e6 }
-	return tv(ru.Utime) + tv(ru.Stime)
 }
 
 // BenchmarkRead reads the generated ~50 MB plan. Besides MB/s and

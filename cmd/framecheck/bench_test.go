@@ -20,7 +20,6 @@ import (
 	"runtime"
 	"runtime/debug"
 	"sync"
-	"syscall"
 	"testing"
 	"time"
 
@@ -112,16 +111,6 @@ func prepare(tb testing.TB, dir string, n int) *prepared {
 		pp.usable[k] = o.Results[k].Status != check.StatusError
 	}
 	return pp
-}
-
-// cpuSeconds is the process's user+system CPU time, all threads.
-func cpuSeconds() float64 {
-	var ru syscall.Rusage
-	if err := syscall.Getrusage(syscall.RUSAGE_SELF, &ru); err != nil {
-		return 0
-	}
-	tv := func(t syscall.Timeval) float64 { return float64(t.Sec) + float64(t.Usec)/1e6 }
-	return tv(ru.Utime) + tv(ru.Stime)
 }
 
 // perJoist reports joists per second of wall time.

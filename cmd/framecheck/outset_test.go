@@ -306,6 +306,15 @@ func TestMarkupFromCheckedBytes(t *testing.T) {
 	}
 }
 
+func mustRead(t *testing.T, p string) []byte {
+	t.Helper()
+	b, err := os.ReadFile(p)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return b
+}
+
 // replaceAfterRead returns an afterRead hook that replaces the drawing at
 // path with other as a CAD program saves: a new file renamed over it.
 func replaceAfterRead(t *testing.T, path, other string) func() {

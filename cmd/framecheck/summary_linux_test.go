@@ -158,12 +158,3 @@ func TestNoCandidatePasses(t *testing.T) {
 		t.Errorf("alternativeText = %q", got)
 	}
 }
-
-func mustRead(t *testing.T, p string) []byte {
-	t.Helper()
-	b, err := os.ReadFile(p)
-	if err != nil {
-		t.Fatal(err)
-	}
-	return b
-}
