@@ -220,11 +220,24 @@ func FlatUseFactor(sec Section, flat bool) float64 {
 	return thin
 }
 
+// RepetitiveMaxSpacingIn is the widest on-centre spacing at which joists
+// are repetitive members (NDS 2018 4.3.9: "not more than 24 in. on
+// centers"), with SpacingToleranceIn of drawing precision on top: spacings
+// measured on a drawing carry rounding (24.000000000000014 in on a plan in
+// millimetres turned 30 degrees, 24.016 in for 610 mm), and 24 in drawn
+// must read as 24 in whatever the units and the plan's angle (1/32 in:
+// common practice, no source).
+const (
+	RepetitiveMaxSpacingIn = 24
+	SpacingToleranceIn     = 1.0 / 32
+)
+
 // RepetitiveMemberFactor returns Cr (NDS 2018 4.3.9): 1.15 for dimension
-// lumber joists at most 24 in on centre, at least 3 in number, joined by a
-// load-distributing element (repetitive true); otherwise 1.0.
+// lumber joists at most 24 in on centre (RepetitiveMaxSpacingIn, within
+// SpacingToleranceIn), at least 3 in number, joined by a load-distributing
+// element (repetitive true); otherwise 1.0.
 func RepetitiveMemberFactor(spacingIn float64, repetitive bool) float64 {
-	if repetitive && spacingIn > 0 && spacingIn <= 24 {
+	if repetitive && spacingIn > 0 && spacingIn <= RepetitiveMaxSpacingIn+SpacingToleranceIn {
 		return 1.15
 	}
 	return 1.0

@@ -79,6 +79,11 @@ func TestBeamStabilityFactor_Limits(t *testing.T) {
 func TestOtherFactors(t *testing.T) {
 	expectNear(t, "Cr @16", RepetitiveMemberFactor(16, true), 1.15, 0, 0, "NDS 2018 4.3.9")
 	expectNear(t, "Cr @32", RepetitiveMemberFactor(32, true), 1.0, 0, 0, "NDS 2018 4.3.9 (more than 24 in o.c.)")
+	// 24 in drawn, as a plan in millimetres turned 30 degrees measures it,
+	// and 610 mm: 24 in on centre; 24.1 in is more
+	expectNear(t, "Cr @24+noise", RepetitiveMemberFactor(24.000000000000014, true), 1.15, 0, 0, "NDS 2018 4.3.9 (not more than 24 in o.c.)")
+	expectNear(t, "Cr @610 mm", RepetitiveMemberFactor(610/25.4, true), 1.15, 0, 0, "NDS 2018 4.3.9 (24 in within drawing precision: common practice, no source)")
+	expectNear(t, "Cr @24.1", RepetitiveMemberFactor(24.1, true), 1.0, 0, 0, "NDS 2018 4.3.9 (more than 24 in o.c.)")
 	expectNear(t, "Cr single", RepetitiveMemberFactor(16, false), 1.0, 0, 0, "NDS 2018 4.3.9")
 	expectNear(t, "Cb 3.5 in interior", BearingAreaFactor(3.5, 10), (3.5+0.375)/3.5, 1e-12, 0, "NDS 2018 3.10.4")
 	expectNear(t, "Cb at member end", BearingAreaFactor(3.5, 0), 1.0, 0, 0, "NDS 2018 3.10.4")

@@ -599,7 +599,7 @@ func zoneLoads(z *project.Zone, selfPsf float64) check.AreaLoads {
 // through the sheathing), which a run, made of joists with the same
 // bearings, would not.
 func repetitive(plan *framing.Plan, k int) bool {
-	const maxOnCentreIn = 24 + 1e-6
+	const maxOnCentreIn = check.RepetitiveMaxSpacingIn + check.SpacingToleranceIn
 	count := 1
 	for side := 0; side < 2; side++ {
 		j := k
