@@ -201,7 +201,7 @@ func TestDefaultProject(t *testing.T) {
 		t.Errorf("lumber %+v", p.Lumber)
 	}
 	if !reflect.DeepEqual(p.Sizing, Sizing{[]string{"2x6", "2x8", "2x10", "2x12", "2x14"}, 2,
-		[]string{"(2) 2x10", "(3) 2x10", "(2) 2x12", "(3) 2x12", "4x12"}, "run"}) {
+		[]string{"(2) 2x10", "(3) 2x10", "(2) 2x12", "(3) 2x12", "4x12"}, "none"}) {
 		t.Errorf("sizing %+v", p.Sizing)
 	}
 	used := strings.Join(p.DefaultsUsed(), "\n")
@@ -532,5 +532,21 @@ func TestStarterRoundTrip(t *testing.T) {
 	def.given, def.defaults = nil, nil
 	if !reflect.DeepEqual(p, def) {
 		t.Errorf("starter file loads as\n%+v\nwant the defaults\n%+v", p, def)
+	}
+}
+
+// TestSameDepthDefault: a project file without [sizing] same_depth takes
+// "none", the value the project file's interface shows
+// (shared/PROJECT-FILE.md: every plain key left out takes the value shown).
+func TestSameDepthDefault(t *testing.T) {
+	p, err := ParseProject("p.toml", []byte("[sizing]\ncandidates = [\"2x8\", \"2x10\"]\n"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if p.Sizing.SameDepth != "none" {
+		t.Errorf("same_depth left out: %q, want none", p.Sizing.SameDepth)
+	}
+	if p = DefaultProject(); p.Sizing.SameDepth != "none" {
+		t.Errorf("built-in defaults: same_depth %q, want none", p.Sizing.SameDepth)
 	}
 }

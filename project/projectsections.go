@@ -459,7 +459,7 @@ func (ld *loader) sizing(t *table) {
 	ld.num(t, "blocking_piece_weight_bf", "board feet", &s.BlockingPieceWeightBf, weightRule)
 	s.BeamCandidates = []string{"(2) 2x10", "(3) 2x10", "(2) 2x12", "(3) 2x12", "4x12"}
 	ld.quietList(t, "beam_candidates", &s.BeamCandidates, memberSizeCheck)
-	s.SameDepth = "run"
+	s.SameDepth = "none" // as the project file's interface shows it (PROJECT-FILE.md)
 	if has(t, "same_depth") {
 		ld.enum(t, "same_depth", &s.SameDepth, sameDepthValues)
 	} else {

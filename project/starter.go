@@ -128,7 +128,7 @@ allow_zero = false            # true: the zone may leave out (or give 0 for) its
 candidates = ["2x6", "2x8", "2x10", "2x12", "2x14"]
 blocking_piece_weight_bf = 2.0  # one blocking piece costs as much as this many board feet of joist
 beam_candidates = ["(2) 2x10", "(3) 2x10", "(2) 2x12", "(3) 2x12", "4x12"]  # beam sizes tried, smallest first
-same_depth = "run"            # run | zone | none: keep one joist depth per run or per zone, or none
+same_depth = "none"           # run | zone | none: keep one joist depth per run or per zone, or none
 
 # Posts on the posts layers: one [[post]] table per kind of post. Without
 # a size and height (here or in a callout beside the post) a post's load

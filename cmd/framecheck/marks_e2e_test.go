@@ -4,6 +4,7 @@ import (
 	"bytes"
 	"os"
 	"path/filepath"
+	"regexp"
 	"strings"
 	"testing"
 
@@ -272,7 +273,7 @@ func TestSameDepth(t *testing.T) {
 	}
 	for _, mode := range []string{"run", "zone", "none"} {
 		t.Run(mode, func(t *testing.T) {
-			text := string(base)
+			text := regexp.MustCompile(`(?m)^same_depth = .*\n`).ReplaceAllString(string(base), "")
 			if strings.Contains(text, "[sizing]") {
 				text = strings.Replace(text, "[sizing]", "[sizing]\nsame_depth = \""+mode+"\"", 1)
 			} else {

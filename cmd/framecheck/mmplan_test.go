@@ -283,11 +283,12 @@ func TestCheckWithoutProjectFlagNamesTheFileBeside(t *testing.T) {
 }
 
 // check --size says what it did: the line names the candidates and
-// accounts for every checked member (which size each run gets is the
-// engine's result and is not pinned here).
+// accounts for every checked member (which size each member gets is the
+// engine's result and is not pinned here). The plan's project file sets no
+// [sizing] same_depth: each member is sized on its own (PROJECT-FILE.md).
 func TestSizeSummaryLine(t *testing.T) {
 	_, stdout, _ := runMMPlan(t, "", "--size")
-	line := regexp.MustCompile(`(?m)^sizes picked by --size from \[sizing\] candidates 2x6, 2x8, 2x10, 2x12, 2x14, one size per run \(the deepest any member needs\): (.*) members$`).
+	line := regexp.MustCompile(`(?m)^sizes picked by --size from \[sizing\] candidates 2x6, 2x8, 2x10, 2x12, 2x14, each member its own: (.*) members$`).
 		FindStringSubmatch(stdout)
 	require.NotNil(t, line, stdout)
 	total := 0
