@@ -264,7 +264,13 @@ func BlockingNote(rowsAt [][]float64, spansIn []float64) string {
 
 // blockingNote is BlockingNote listing, when the rows are not evenly
 // spaced, the positions listAt (same shape as rowsAt; nil: rowsAt).
+//
+// Positions from the datum (listAt given) say so, and name the span each
+// is in after it: "ADD BLOCKING 2 ROWS AT 8'-9 1/4\" (SPAN 1); 14'-9 1/4\"
+// (SPAN 2) FROM 1ST BEARING FACE", so that a position past the first span
+// is not read as one into its own.
 func blockingNote(rowsAt [][]float64, spansIn []float64, listAt [][]float64) string {
+	datum := listAt != nil
 	if listAt == nil {
 		listAt = rowsAt
 	}
@@ -327,12 +333,19 @@ func blockingNote(rowsAt [][]float64, spansIn []float64, listAt [][]float64) str
 			ps[j] = FtIn(p)
 		}
 		p := strings.Join(ps, ", ")
-		if len(listAt) > 1 {
+		switch {
+		case len(listAt) > 1 && datum:
+			p += " (SPAN " + strconv.Itoa(s+1) + ")"
+		case len(listAt) > 1:
 			p = "SPAN " + strconv.Itoa(s+1) + " " + p
 		}
 		parts = append(parts, p)
 	}
-	return "ADD BLOCKING " + rows(total) + " AT " + strings.Join(parts, "; ")
+	note := "ADD BLOCKING " + rows(total) + " AT " + strings.Join(parts, "; ")
+	if datum {
+		note += " FROM 1ST BEARING FACE"
+	}
+	return note
 }
 
 // blockingNotes places one BlockingNote per run with rows to add, centred

@@ -43,6 +43,21 @@ func TestBlockingNote(t *testing.T) {
 		if got := BlockingNote(tc.at, tc.spans); got != tc.want {
 			t.Errorf("BlockingNote(%v, %v) = %q, want %q", tc.at, tc.spans, got, tc.want)
 		}
+	}	// positions listed from the datum (the markup's): said so, each span
+	// named after its positions, so that 16'-0 1/4" is not read as a
+	// distance into span 2 (common practice, no source)
+	for _, tc := range []struct {
+		at, face [][]float64
+		spans    []float64
+		want     string
+	}{
+		{[][]float64{{50, 96}}, [][]float64{{48.25, 94.25}}, []float64{144}, `ADD BLOCKING 2 ROWS AT 4'-0 1/4", 7'-10 1/4" FROM 1ST BEARING FACE`},
+		{[][]float64{{50}, {46}}, [][]float64{{48.25}, {192.25}}, []float64{144, 120},
+			`ADD BLOCKING 2 ROWS AT 4'-0 1/4" (SPAN 1); 16'-0 1/4" (SPAN 2) FROM 1ST BEARING FACE`},
+	} {
+		if got := blockingNote(tc.at, tc.spans, tc.face); got != tc.want {
+			t.Errorf("blockingNote(%v, %v, %v) = %q, want %q", tc.at, tc.spans, tc.face, got, tc.want)
+		}
 	}
 }
 
