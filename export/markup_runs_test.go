@@ -43,7 +43,8 @@ func TestBlockingNote(t *testing.T) {
 		if got := BlockingNote(tc.at, tc.spans); got != tc.want {
 			t.Errorf("BlockingNote(%v, %v) = %q, want %q", tc.at, tc.spans, got, tc.want)
 		}
-	}	// positions listed from the datum (the markup's): said so, each span
+	}
+	// positions listed from the datum (the markup's): said so, each span
 	// named after its positions, so that 16'-0 1/4" is not read as a
 	// distance into span 2 (common practice, no source)
 	for _, tc := range []struct {
