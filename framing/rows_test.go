@@ -162,3 +162,20 @@ func TestPlaceRows_DrawnBaysNotCounted(t *testing.T) {
 		t.Errorf("takeoff: %d pieces, want 6", to.BlockingPieces)
 	}
 }
+
+// TestTakeoffTidy: sums of board feet carry binary rounding (a demo's
+// 2,156 bf summed to 2155.9999999999991), which the spreadsheet showed
+// as 2155.99999999999; they are rounded to 1e-9 (common practice, no
+// source).
+func TestTakeoffTidy(t *testing.T) {
+	to := Takeoff{JoistBoardFeet: 2155.9999999999991, TotalBoardFeet: 519.9999999999991,
+		Joists:   []JoistLine{{BoardFeet: 33.333333333333336}},
+		Blocking: []BlockingLine{{BoardFeet: 2249.7499999999991, TotalLengthIn: 674.9999999999999}}}
+	to.tidy()
+	if to.JoistBoardFeet != 2156 || to.TotalBoardFeet != 520 || to.Blocking[0].BoardFeet != 2249.75 || to.Blocking[0].TotalLengthIn != 675 {
+		t.Errorf("tidied %+v", to)
+	}
+	if !near(to.Joists[0].BoardFeet, 100.0/3, 1e-9) {
+		t.Errorf("a third of 100 bf: %v", to.Joists[0].BoardFeet)
+	}
+}

@@ -185,7 +185,27 @@ func BuildTakeoff(p *Plan, rows []BlockingRow) Takeoff {
 		t.ExistingBlockingBoardFeet += l.BoardFeet
 	}
 	t.TotalBoardFeet = t.JoistBoardFeet + t.BlockingBoardFeet + t.ExistingBlockingBoardFeet
+	t.tidy()
 	return t
+}
+
+// tidy rounds every board-foot and length sum to 1e-9: a sum of pieces
+// carries binary rounding (519.999999999999 for 520 board feet) that the
+// spreadsheet would show, where results.json writes 520.
+func (t *Takeoff) tidy() {
+	r := func(v *float64) { *v = math.Round(*v*1e9) / 1e9 }
+	for i := range t.Joists {
+		r(&t.Joists[i].BoardFeet)
+	}
+	for _, ls := range [][]BlockingLine{t.Blocking, t.ExistingBlocking} {
+		for i := range ls {
+			r(&ls[i].BoardFeet)
+			r(&ls[i].TotalLengthIn)
+		}
+	}
+	for _, v := range []*float64{&t.JoistBoardFeet, &t.BlockingBoardFeet, &t.ExistingBlockingBoardFeet, &t.TotalBoardFeet} {
+		r(v)
+	}
 }
 
 // existingBlocking counts the blocking pieces drawn on joist layers by
