@@ -26,6 +26,14 @@ var unitTable = []unitInfo{
 	{6, "m", 1000 / 25.4},
 }
 
+// UnitsFromHeader reports whether the drawing's units were taken from its
+// $INSUNITS (a code this reader knows), rather than given by the caller or
+// assumed.
+func (d *Drawing) UnitsFromHeader() bool {
+	u, ok := unitByCode(d.InsUnits)
+	return ok && u.Name == d.Units
+}
+
 func unitByName(name string) (unitInfo, bool) {
 	n := strings.ToLower(strings.TrimSpace(name))
 	for _, u := range unitTable {

@@ -356,3 +356,35 @@ func TestUnitlessPlanUnitsDoubtSaysGuess(t *testing.T) {
 	assert.Contains(t, first, CodeUnitsDoubt)
 	assert.Contains(t, first, `units "in" (a guess: the drawing's $INSUNITS gives no units)`)
 }
+
+// TestUnitsSource: results.json says where the drawing's units came from:
+// the millimetre plan's $INSUNITS when nothing overrides it, --units when
+// given (common practice, no source: a reviewer must see why the plan was
+// read in millimetres).
+func TestUnitsSource(t *testing.T) {
+	dir := t.TempDir()
+	for _, f := range []string{"mm_plan.dxf", "mm_plan.toml"} {
+		data, err := os.ReadFile(filepath.Join("testdata", "mm_plan", f))
+		require.NoError(t, err)
+		require.NoError(t, os.WriteFile(filepath.Join(dir, f), data, 0o644))
+	}
+	for _, tc := range []struct {
+		args []string
+		want string
+	}{{nil, "drawing ($INSUNITS)"}, {[]string{"--units", "mm"}, "command line (--units)"}} {
+		out := filepath.Join(dir, "out")
+		var stdout, stderr bytes.Buffer
+		run(append([]string{"check", filepath.Join(dir, "mm_plan.dxf"), "-p", filepath.Join(dir, "mm_plan.toml"), "-o", out}, tc.args...), &stdout, &stderr)
+		r, err := export.ReadJSON(filepath.Join(out, "results.json"))
+		require.NoError(t, err, stderr.String())
+		found := false
+		for _, s := range r.Assumptions.Switches {
+			if s.Name == "drawing.units" {
+				found = true
+				assert.Equal(t, "mm", s.Value, "%v", tc.args)
+				assert.Equal(t, tc.want, s.Source, "%v", tc.args)
+			}
+		}
+		assert.True(t, found, "no drawing.units switch (%v)", tc.args)
+	}
+}

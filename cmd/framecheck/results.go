@@ -452,7 +452,17 @@ func assumptions(o *outcome) export.Assumptions {
 	set := func(key, value, unit string) {
 		a.Switches = append(a.Switches, export.Setting{Name: key, Value: value, Unit: unit, Source: src(key)})
 	}
-	set("drawing.units", o.drawing.Units, "")
+	// the drawing's units come from --units, the project file, the
+	// drawing's own $INSUNITS, or inches assumed, in that order
+	unitsFrom := src("drawing.units")
+	switch {
+	case o.unitsFlag != "":
+		unitsFrom = "command line (--units)"
+	case p.Given("drawing.units"):
+	case o.drawing.UnitsFromHeader():
+		unitsFrom = "drawing ($INSUNITS)"
+	}
+	a.Switches = append(a.Switches, export.Setting{Name: "drawing.units", Value: o.drawing.Units, Source: unitsFrom})
 	set("drawing.snap_tolerance_in", fmt.Sprint(p.Drawing.SnapToleranceIn), "in")
 	set("drawing.max_wall_thickness_in", fmt.Sprint(p.Drawing.MaxWallThicknessIn), "in")
 	set("drawing.edge_distance_in", fmt.Sprint(p.Drawing.EdgeDistanceIn), "in")

@@ -27,6 +27,9 @@ type outcome struct {
 	// finite is what exportResults found of its members' and uplift
 	// report's numbers, for export.SanitizeNoted
 	finite export.FiniteNote
+	// unitsFlag is --units as given ("" when not), which overrides the
+	// project file and the drawing's $INSUNITS
+	unitsFlag string
 }
 
 // pendingPath is a load path to follow (pipeline.Start), once: in the
@@ -145,13 +148,13 @@ func runPipeline(in pipelineInput) (*outcome, error) {
 		if err != nil {
 			return nil, err
 		}
-		return &outcome{Outcome: po, drawing: d, layers: layers, path: &pendingPath{run: path}}, nil
+		return &outcome{Outcome: po, drawing: d, layers: layers, path: &pendingPath{run: path}, unitsFlag: in.units}, nil
 	}
 	po, err := pipeline.Run(pin)
 	if err != nil {
 		return nil, err
 	}
-	return &outcome{Outcome: po, drawing: d, layers: layers}, nil
+	return &outcome{Outcome: po, drawing: d, layers: layers, unitsFlag: in.units}, nil
 }
 
 // releaseForWriters drops what the writers do not read once the results
