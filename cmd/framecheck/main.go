@@ -47,8 +47,9 @@
 //	-o OUTDIR        output folder; default: PLAN-framecheck beside the plan
 //	--units U        unit of the drawing: in, ft, mm, cm or m; overrides
 //	                 the project file and the DXF header ($INSUNITS)
-//	--size           pick the lightest passing size from the project file's
-//	                 [sizing] candidates instead of checking the sizes given
+//	--size           pick the most economical passing size (joist board feet
+//	                 plus blocking) from the project file's [sizing]
+//	                 candidates instead of checking the sizes given
 //	--overlay        also write the markup alone as an R12 overlay DXF
 //
 // # demo

@@ -158,3 +158,25 @@ func TestNoCandidatePasses(t *testing.T) {
 		t.Errorf("alternativeText = %q", got)
 	}
 }
+
+// TestPassesWithIsSizePick: the summary's "passes with (--size)" names
+// the size --size picks, the most economical that passes, not the
+// lightest section: an 18 ft roof rafter at 24 in under 50 psf of uplift
+// passes as a 2x10 with more blocking rows than a 2x12 needs, and with
+// each blocking piece weighted as 10 board feet the 2x12 is the pick
+// (common practice, no source: the cost rule is framecheck's own,
+// check.Size).
+func TestPassesWithIsSizePick(t *testing.T) {
+	m := check.Member{ID: "R1", Size: "2x8", Species: "DF-L", Grade: "No.2", LengthIn: 216,
+		Bearings: []check.Bearing{{AtIn: 0, LengthIn: 1.5}, {AtIn: 216, LengthIn: 1.5}}, SpacingIn: 24, TribIn: 24, Use: "roof",
+		Loads: check.AreaLoads{DeadPsf: 8, RoofLivePsf: 20, WindUpPsf: 50}, LiveLimit: 180, TotalLimit: 120, Repetitive: true}
+	s := check.DefaultSettings()
+	sz := project.Sizing{Candidates: []string{"2x8", "2x10", "2x12"}, BlockingPieceWeightBf: 10}
+	pick := check.Size(m, s, sz.Candidates, sz.BlockingPieceWeightBf)
+	if pick.Chosen.Size != "2x12" || pick.Chosen.Status != check.StatusPass || !pick.Alternatives[1].Pass {
+		t.Fatalf("--size picks %s (%s), alternatives %+v: the case needs a passing 2x10 and a 2x12 pick", pick.Chosen.Size, pick.Chosen.Status, pick.Alternatives)
+	}
+	if size, ratio := lightestPassing(m, s, sz); size != "2x12" || ratio != pick.Chosen.MaxRatio {
+		t.Errorf("passes with %s (ratio %.3f), want 2x12 (ratio %.3f) as --size picks", size, ratio, pick.Chosen.MaxRatio)
+	}
+}

@@ -104,21 +104,19 @@ func badGroups(o *outcome, r *export.Results, proj *project.Project) []badGroup 
 }
 
 // lightestPassing checks m at every [sizing] candidate, each with the
-// blocking rows it needs (check.Size), and returns the candidate of the
-// fewest board feet per foot that passes with its largest ratio, or ""
-// when none passes.
+// blocking rows it needs (check.Size), and returns the size --size would
+// pick, with its largest ratio: the most economical that passes (the
+// joist's board feet and its blocking pieces, [sizing]
+// blocking_piece_weight_bf each; ties to the lighter joist), or "" when
+// none passes. The summary and --size so never name different sizes (an
+// audit found the summary naming the lightest section, 2x10 with 7 rows,
+// where --size picked 2x12 with 3).
 func lightestPassing(m check.Member, s check.Settings, sz project.Sizing) (string, float64) {
 	res := check.Size(m, s, sz.Candidates, sz.BlockingPieceWeightBf)
-	best := -1
-	for i, a := range res.Alternatives {
-		if a.Pass && (best < 0 || a.BoardFeetPerFt < res.Alternatives[best].BoardFeetPerFt) {
-			best = i
-		}
-	}
-	if best < 0 {
+	if res.Chosen.Status != check.StatusPass {
 		return "", 0
 	}
-	return res.Alternatives[best].Size, res.Alternatives[best].MaxRatio
+	return res.Chosen.Size, res.Chosen.MaxRatio
 }
 
 func firstMessage(m *export.Member) string {
@@ -159,7 +157,7 @@ func printBadGroups(w io.Writer, groups []badGroup, members []export.Member, col
 	fmt.Fprintf(w, "\nmembers that fail or are in error: %d, by mark%s:\n", n, more)
 	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
 	// status last: its colour codes would shift the columns after it
-	fmt.Fprintln(tw, "mark\tcount\tsize\tworst\tgoverning\tratio\tlightest passing size\tstatus")
+	fmt.Fprintln(tw, "mark\tcount\tsize\tworst\tgoverning\tratio\tpasses with (--size)\tstatus")
 	for _, g := range groups {
 		mark, gov, ratio := g.Mark, g.Governing, fmt.Sprintf("%.2f", g.Ratio)
 		if mark == "" {
@@ -236,7 +234,7 @@ func printIssues(w io.Writer, issues dxfimport.IssueList, verbose bool) {
 	fmt.Fprintf(w, "framecheck: %s not shown (%s); -v shows them\n", plural(n, "info finding"), termText(strings.Join(parts, ", ")))
 }
 
-// reasonWidth bounds the "lightest passing size" cell, which holds an
+// reasonWidth bounds the "passes with (--size)" cell, which holds an
 // error member's reason.
 const reasonWidth = 64
 
