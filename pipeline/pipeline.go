@@ -512,6 +512,7 @@ func checkInput(p *project.Project, plan *framing.Plan, k int, supportOf func(la
 		cm.BlockingAtIn = append(cm.BlockingAtIn, x+shift)
 	}
 	cm.Repetitive = repetitive(plan, k)
+	canonicalLengths(&cm)
 	// A built-up member ("(2) 2x10" from a callout) is an error until the
 	// engine checks built-up members, with or without --size: never one
 	// ply, nor a single joist picked in its place.
@@ -568,6 +569,26 @@ func checkInput(p *project.Project, plan *framing.Plan, k int, supportOf func(la
 		cm.BottomBracedContinuous = cm.BottomBracedContinuous && z.CeilingBracesBottom
 	}
 	return cm, shift, msgs
+}
+
+// canonicalLengths rounds the lengths of a check input to 1e-9 in: a plan
+// turned or drawn in millimetres measures 144 in as 144.00000000000003,
+// and members alike but for that were checked apart (groupAlike keys the
+// inputs exactly), each with its own calculation, and printed positions
+// whose last digit flipped with the plan's angle. 1e-9 in is far below
+// anything drawn.
+func canonicalLengths(cm *check.Member) {
+	r := func(v *float64) { *v = math.Round(*v*1e9) / 1e9 }
+	for _, v := range []*float64{&cm.LengthIn, &cm.OverhangStartIn, &cm.OverhangEndIn, &cm.SpacingIn, &cm.TribIn} {
+		r(v)
+	}
+	for i := range cm.Bearings {
+		r(&cm.Bearings[i].AtIn)
+		r(&cm.Bearings[i].LengthIn)
+	}
+	for i := range cm.BlockingAtIn {
+		r(&cm.BlockingAtIn[i])
+	}
 }
 
 // zoneLoads returns the area loads of zone z on the horizontal projection,

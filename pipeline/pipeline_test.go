@@ -1,12 +1,16 @@
 package pipeline
 
 import (
+	"cmp"
 	"math"
+	"slices"
+	"strings"
 	"testing"
 
 	"framecheck/check"
 	"framecheck/dxfimport"
 	"framecheck/framing"
+	"framecheck/project"
 )
 
 // plan builds joists (vertical lines x = xs[i], from y0[i] to y1[i]) over
@@ -76,33 +80,8 @@ func TestRepetitive_NDS2018_4_3_9(t *testing.T) {
 // the rounding a real drawing's does (24.000000000000014 in at 30
 // degrees), which once took Cr off some of them, by angle.
 func TestRepetitiveAt24InAnyAngle(t *testing.T) {
-	const mm = 25.4
-	toInch := 1 / mm
 	for deg := 0; deg <= 90; deg += 5 {
-		th := float64(deg) * math.Pi / 180
-		u := dxfimport.Point{X: math.Cos(th), Y: math.Sin(th)} // along the joists
-		n := dxfimport.Point{X: -u.Y, Y: u.X}                  // across them
-		// a point given in inches along and across, drawn in whole
-		// tenths of a millimetre as CAD stores it, read back in inches
-		at := func(along, across float64) dxfimport.Point {
-			x := math.Round((1000+along*u.X+across*n.X)*mm*10) / 10
-			y := math.Round((2000+along*u.Y+across*n.Y)*mm*10) / 10
-			return dxfimport.Point{X: x * toInch, Y: y * toInch}
-		}
-		d := &dxfimport.Drawing{File: "t.dxf", Units: "mm", ToInch: toInch}
-		line := func(layer string, a, b dxfimport.Point) {
-			d.Entities = append(d.Entities, dxfimport.Entity{Kind: dxfimport.KindLine,
-				Pos: dxfimport.Pos{File: "t.dxf", Layer: layer}, Points: []dxfimport.Point{a, b}})
-		}
-		for _, y := range []float64{0, 144} {
-			line("WALL", at(y, -20), at(y, 120))
-		}
-		for i := 0; i < 5; i++ {
-			line("JOIST", at(0, float64(i)*24), at(144, float64(i)*24))
-		}
-		o := framing.DefaultOptions()
-		o.DefaultZone = "FLOOR"
-		p := framing.Group(d, o)
+		p := turnedPlan(float64(deg), []float64{0, 144}, 5)
 		if len(p.Members) != 5 {
 			t.Fatalf("%d degrees: %d members, want 5", deg, len(p.Members))
 		}
@@ -121,6 +100,95 @@ func TestRepetitiveAt24InAnyAngle(t *testing.T) {
 		}
 		if deg == 30 && over == 0 {
 			t.Errorf("30 degrees: no spacing measured over 24 in: the test no longer has the rounding it is about")
+		}
+	}
+}
+
+// turnedPlan draws n joists 24 in on centre over walls at walls (inches
+// along the joists) in a plan in millimetres turned deg degrees, each
+// point read back in inches as dxfimport reads it (times 1/25.4), and
+// groups it.
+func turnedPlan(deg float64, walls []float64, n int) *framing.Plan {
+	const mm = 25.4
+	toInch := 1 / mm
+	th := deg * math.Pi / 180
+	u := dxfimport.Point{X: math.Cos(th), Y: math.Sin(th)} // along the joists
+	v := dxfimport.Point{X: -u.Y, Y: u.X}                  // across them
+	at := func(along, across float64) dxfimport.Point {
+		x := (1000 + along*u.X + across*v.X) * mm
+		y := (2000 + along*u.Y + across*v.Y) * mm
+		return dxfimport.Point{X: x * toInch, Y: y * toInch}
+	}
+	d := &dxfimport.Drawing{File: "t.dxf", Units: "mm", ToInch: toInch}
+	line := func(layer string, a, b dxfimport.Point) {
+		d.Entities = append(d.Entities, dxfimport.Entity{Kind: dxfimport.KindLine,
+			Pos: dxfimport.Pos{File: "t.dxf", Layer: layer}, Points: []dxfimport.Point{a, b}})
+	}
+	for _, y := range walls {
+		line("WALL", at(y, -20), at(y, float64(n)*24))
+	}
+	for i := 0; i < n; i++ {
+		line("JOIST", at(walls[0], float64(i)*24), at(walls[len(walls)-1], float64(i)*24))
+	}
+	o := framing.DefaultOptions()
+	o.DefaultZone = "FLOOR"
+	return framing.Group(d, o)
+}
+
+// TestTurnedPlanSameResults: the same joists drawn in millimetres and
+// turned 0 to 90 degrees give the same results to the last bit, joist by
+// joist (a single and a continuous span; blocking positions, measured from
+// the drawn start, to 1e-9 in), and the interior joists, alike
+// for design, are checked as one: their lengths measured with rounding
+// (144.00000000000003 in) once made each its own calculation, with
+// printed positions whose last digit moved with the angle. Common
+// practice, no source: the drawing's angle and units are not engineering
+// inputs.
+func TestTurnedPlanSameResults(t *testing.T) {
+	for _, walls := range [][]float64{{0, 168}, {0, 120, 264}} {
+		var ref []check.Result
+		for deg := 0; deg <= 90; deg += 15 {
+			p := turnedPlan(float64(deg), walls, 6)
+			o, err := Run(Input{Plan: p, Project: project.DefaultProject()})
+			if err != nil {
+				t.Fatal(err)
+			}
+			// joist by joist, in the order drawn (IDs follow the plan's
+			// sorting, which the angle changes)
+			got := make([]check.Result, len(o.Results))
+			for k := range p.Members {
+				got[k] = o.Results[k]
+			}
+			slices.SortFunc(got, func(a, b check.Result) int {
+				return cmp.Compare(len(a.ID), len(b.ID))*2 + strings.Compare(a.ID, b.ID)
+			})
+			checks := map[*check.CheckResult]bool{}
+			for _, r := range o.Results {
+				if len(r.Checks) > 0 {
+					checks[&r.Checks[0]] = true
+				}
+			}
+			if len(checks) > 3 {
+				t.Errorf("walls %v, %d degrees: %d distinct checks for 6 joists (edge, interior, edge), want at most 3", walls, deg, len(checks))
+			}
+			if ref == nil {
+				ref = got
+				continue
+			}
+			for i := range ref {
+				a, b := ref[i], got[i]
+				// positions along the member are measured from its drawn
+				// start, whose place carries the rounding: to 1e-9 in
+				rowsAlike := len(a.BlockingAtIn) == len(b.BlockingAtIn)
+				for j := 0; rowsAlike && j < len(a.BlockingAtIn); j++ {
+					rowsAlike = math.Abs(a.BlockingAtIn[j]-b.BlockingAtIn[j]) < 1e-9
+				}
+				if a.MaxRatio != b.MaxRatio || a.Governing != b.Governing || !slices.Equal(a.SpansIn, b.SpansIn) ||
+					!rowsAlike || a.Status != b.Status {
+					t.Errorf("walls %v, %d degrees, %s: %s %.17g spans %v rows %v; at 0 degrees %s %s %.17g spans %v rows %v",
+						walls, deg, b.ID, b.Governing, b.MaxRatio, b.SpansIn, b.BlockingAtIn, a.ID, a.Governing, a.MaxRatio, a.SpansIn, a.BlockingAtIn)
+				}
+			}
 		}
 	}
 }
