@@ -117,6 +117,11 @@ type Joint struct {
 	DownCombo string
 	UpLb      float64 // net uplift, magnitude
 	UpCombo   string
+	// own is the member's own check's reaction at this bearing, when it
+	// has one: its largest down and up over every combination with the
+	// live-type loads placed span by span, which Loads (each type over the
+	// whole member) cannot give a continuous member
+	own *check.Reaction
 }
 
 // MemberOut is a member's outcome. A member given with its check and
@@ -473,13 +478,23 @@ func (st *solveState) pass(i, x int) {
 		return
 	}
 	out.Passed = rs
+	// the member's own check, whose reactions pattern the live-type loads
+	var res *check.Result
+	switch {
+	case st.how[x] == howGiven:
+		res = mi.Result
+	case out.MemberCheck != nil:
+		res = &out.Result
+	}
 	for j, r := range rs {
 		c := mi.Carriers[j]
 		l := loadsOf(r)
 		// every joint's demand is stated (DOMAIN.md "The load path"): a
 		// joist's on a wall or a support not followed further too (the
 		// hanger on a flush beam kept rigid, the tie at a wall)
-		o.Joints = append(o.Joints, joint(k, j, c, l))
+		jt := joint(k, j, c, l)
+		jt.own = ownReaction(res, j)
+		o.Joints = append(o.Joints, jt)
 		switch c.Kind {
 		case Member:
 			st.incoming[c.Index] = append(st.incoming[c.Index], r.PointLoad(c.AtIn, mi.ID))
@@ -680,10 +695,27 @@ func joint(k, j int, c Carrier, l Loads) Joint {
 // carrier.
 var defaultJointKind = map[CarrierKind]string{Member: "bearing on a member", Post: "post cap", Wall: "wall", Rigid: "bearing"}
 
+// ownReaction returns the reaction of res at bearing j, or nil.
+func ownReaction(res *check.Result, j int) *check.Reaction {
+	if res == nil {
+		return nil
+	}
+	for i := range res.Reactions {
+		if res.Reactions[i].Bearing == j {
+			return &res.Reactions[i]
+		}
+	}
+	return nil
+}
+
 // demands states the demand of each joint of js under settings s: the
 // largest downward load and net uplift of its combinations
-// (check.LoadExtremes). Joints passing the same loads (the joists alike)
-// have the same demand, found once.
+// (check.LoadExtremes), or of the member's own check where that is more
+// (Joint.own: a continuous joist with snow on one span presses harder on
+// an end wall, and lifts harder off it under wind on one span, than with
+// every load over both; an audit found a wall joint's uplift 31 % low).
+// Joints passing the same loads (the joists alike) have the same demand
+// from their loads, found once.
 func demands(js []Joint, s check.Settings) {
 	type demand struct {
 		down, up           float64
@@ -704,5 +736,13 @@ func demands(js []Joint, s check.Settings) {
 			}
 		}
 		jt.DownLb, jt.DownCombo, jt.UpLb, jt.UpCombo = d.down, d.downCombo, d.up, d.upCombo
+		if r := jt.own; r != nil {
+			if r.DownLb > jt.DownLb {
+				jt.DownLb, jt.DownCombo = r.DownLb, r.DownCombo
+			}
+			if r.UpLb > jt.UpLb {
+				jt.UpLb, jt.UpCombo = r.UpLb, r.UpCombo
+			}
+		}
 	}
 }

@@ -336,3 +336,53 @@ func TestPostsAlikeCheckedOnce(t *testing.T) {
 		}
 	}
 }
+
+// TestJointDemandPatterned: a 2x10 roof joist continuous over three walls
+// (spans 144 and 120 in, 16 in tributary width, D 15, S 30, W up 40 psf)
+// presses hardest on its end wall, and lifts hardest off it, with the
+// live-type load on its own span only. By hand (three-moment equation, a
+// two-span beam with w on span 1 only, EI constant): M_B = -w L1^3 / (8
+// (L1 + L2)); the end reaction R_A = w L1 / 2 + M_B / L1. With every load
+// over both spans, R_A = w L1 / 2 - (w (L1^3 + L2^3) / (8 (L1 + L2))) / L1.
+// The wall joint's demand is the larger of the two (an audit found it the
+// smaller): down D + S and up 0.6D + 0.6W(up) with S and W on span 1
+// (ASCE 7-16 2.4.1, statics; the check's own reactions).
+func TestJointDemandPatterned(t *testing.T) {
+	trib := 16.0
+	w := func(psf float64) float64 { return psf * trib / 144 } // lb/in
+	l1, l2 := 144.0, 120.0
+	p := &Plan{Walls: []WallIn{{ID: "W1"}, {ID: "W2"}, {ID: "W3"}}}
+	p.Members = append(p.Members, MemberIn{ID: "J1", Check: &check.Member{
+		Size: "2x10", Species: "Douglas Fir-Larch", Grade: "No.2", LengthIn: l1 + l2,
+		Bearings:  []check.Bearing{{AtIn: 0, LengthIn: 3.5}, {AtIn: l1, LengthIn: 3.5}, {AtIn: l1 + l2, LengthIn: 3.5}},
+		SpacingIn: 16, TribIn: trib, Use: "roof", Repetitive: true, LiveLimit: 240, TotalLimit: 180,
+		Loads: check.AreaLoads{DeadPsf: 15, SnowPsf: 30, WindUpPsf: 40},
+	}, Carriers: []Carrier{{Kind: Wall, Index: 0}, {Kind: Wall, Index: 1}, {Kind: Wall, Index: 2}}})
+	s := check.DefaultSettings()
+	o := Solve(p, s)
+	if len(o.Errors) > 0 {
+		t.Fatalf("errors: %v", o.Errors)
+	}
+	rFull := func(q float64) float64 { return q*l1/2 - q*(l1*l1*l1+l2*l2*l2)/(8*(l1+l2))/l1 }
+	rOne := func(q float64) float64 { return q*l1/2 - q*l1*l1*l1/(8*(l1+l2))/l1 }
+	wantDown := rFull(w(15)) + rOne(w(30))       // D over both spans, S on span 1
+	wantUp := rOne(0.6*w(40)) - 0.6*rFull(w(15)) // 0.6W(up) on span 1 against 0.6D over both
+	if rOne(w(30)) <= rFull(w(30)) {
+		t.Fatalf("the case needs a larger end reaction with span 1 loaded alone")
+	}
+	var found bool
+	for _, jt := range o.Joints {
+		if jt.Member != 0 || jt.Bearing != 0 {
+			continue
+		}
+		found = true
+		near(t, "end wall down", jt.DownLb, wantDown, 0.5, "three-moment equation, ASCE 7-16 2.4.1 D + S, S on span 1")
+		near(t, "end wall up", jt.UpLb, wantUp, 0.5, "three-moment equation, ASCE 7-16 2.4.1 0.6D + 0.6W, W on span 1")
+		if !strings.Contains(jt.DownCombo, "span 1") || !strings.Contains(jt.UpCombo, "span 1") {
+			t.Errorf("combinations %q, %q: want the live-type loads on span 1 named", jt.DownCombo, jt.UpCombo)
+		}
+	}
+	if !found {
+		t.Fatal("no joint at the end wall")
+	}
+}
