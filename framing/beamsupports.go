@@ -191,10 +191,27 @@ func (g *grouper) beamOnBeams() {
 				continue
 			}
 			o := &p.Beams[bk]
-			a.Bearings = append(a.Bearings, BeamBearing{AtIn: g.along(k, e), LengthIn: o.WidthIn, Kind: BeamOnBeam, Index: bk, Pos: o.Lines[0]})
+			a.Bearings = append(a.Bearings, BeamBearing{AtIn: g.along(k, e), LengthIn: beamSeatIn(p, o), Kind: BeamOnBeam, Index: bk, Pos: o.Lines[0]})
 			o.CarriedBeams = append(o.CarriedBeams, k)
 		}
 	}
+}
+
+// beamSeatIn is the bearing length of a beam whose end lands on beam o: in
+// a hanger on the side of a flush beam or ledger, the hanger's seat, the
+// bearing_in of o's [[support]] table (1.5 in by default); on top of a
+// dropped beam, o's width as drawn, or that bearing_in for a single line
+// (3.5 in by default). An audit found a beam in a hanger on a girder
+// checked on 3.5 in where its seat was 1.5 in.
+func beamSeatIn(p *Plan, o *Beam) float64 {
+	table := 0.0
+	if len(o.Supports) > 0 && o.Supports[0] >= 0 && o.Supports[0] < len(p.Supports) {
+		table = p.Supports[o.Supports[0]].BearingIn
+	}
+	if o.Kind == KindFlushBeam || o.Kind == KindLedger || o.WidthIn <= 0 {
+		return table
+	}
+	return o.WidthIn
 }
 
 // maxWallPad is the widest a beam's half width can be.

@@ -288,3 +288,24 @@ func TestBeamInRun(t *testing.T) {
 		t.Errorf("FRM225 with no beam")
 	}
 }
+
+// TestBeamSeat: a beam whose end lands on another bears on a hanger's seat
+// when that one is a flush beam or a ledger (its [[support]] bearing_in),
+// on the other's width when it sits on a dropped beam drawn with two
+// lines, and on that bearing_in on a single-line dropped beam (common
+// practice, no source: NDS 3.10 bearing on the length that bears).
+func TestBeamSeat(t *testing.T) {
+	p := &Plan{Supports: []Support{{Kind: KindFlushBeam, BearingIn: 1.5}, {Kind: KindDroppedBeam, BearingIn: 3.5}}}
+	for _, tc := range []struct {
+		b    Beam
+		want float64
+	}{
+		{Beam{Kind: KindFlushBeam, Supports: []int{0}, WidthIn: 4.5}, 1.5},
+		{Beam{Kind: KindDroppedBeam, Supports: []int{1}, WidthIn: 5.25}, 5.25},
+		{Beam{Kind: KindDroppedBeam, Supports: []int{1}}, 3.5},
+	} {
+		if got := beamSeatIn(p, &tc.b); got != tc.want {
+			t.Errorf("%s %.2f in wide: seat %.2f in, want %.2f", tc.b.Kind, tc.b.WidthIn, got, tc.want)
+		}
+	}
+}
