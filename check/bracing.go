@@ -26,8 +26,13 @@ type braceRec struct {
 	topHeld      bool      // sheathing (Settings.TopEdgeBraced)
 	bottomHeld   bool      // ceiling (Member.BottomBracedContinuous)
 	continuous   bool      // the member has interior supports
-	ipRule       bool      // inflection points count (Settings.BraceAtInflection)
-	how          rowsHow   // how the rows to add were placed
+	// topAt are the points holding the top edge of a member braced there
+	// only (Member.TopBracedAtPoints: a beam, at the joists bearing on
+	// it), member positions; topAtPoints says it is such a member
+	topAt       []float64
+	topAtPoints bool
+	ipRule      bool    // inflection points count (Settings.BraceAtInflection)
+	how         rowsHow // how the rows to add were placed
 }
 
 // rowsHow says how a result's rows to add were placed, for its trace.
@@ -54,7 +59,8 @@ var rowsHowText = [...]string{
 func (e *engine) braceRecord(r *Result, nPts int, ips []float64, how rowsHow) braceRec {
 	b := braceRec{spansIn: r.SpansIn, firstIn: e.m.Bearings[0].AtIn, drawn: r.DrawnBlockingAtIn, added: r.BlockingAtIn,
 		nPts: int32(nPts), topHeld: e.s.TopEdgeBraced, bottomHeld: e.m.BottomBracedContinuous,
-		continuous: len(e.spanSegs) > 1, ipRule: e.inflectionRule(), how: how}
+		continuous: len(e.spanSegs) > 1, ipRule: e.inflectionRule(), how: how,
+		topAtPoints: e.m.TopBracedAtPoints, topAt: e.m.TopBracingAtIn}
 	for _, x := range ips {
 		b.ips = append(b.ips, x+e.x0)
 	}
@@ -93,7 +99,16 @@ func (b *braceRec) pointsText(top bool) string {
 		s.WriteString(rowsHowText[b.how])
 	}
 	if top {
-		s.WriteString("; top edge not held by the sheathing (design.top_edge_braced = false)")
+		switch {
+		case b.topAtPoints && len(b.topAt) > 0:
+			s.WriteString("; top edge also held where members bear on it, at ")
+			s.WriteString(numsText(b.topAt))
+			s.WriteString(" in (a beam: not by the sheathing)")
+		case b.topAtPoints:
+			s.WriteString("; top edge held at its bearings only (a beam: not by the sheathing)")
+		default:
+			s.WriteString("; top edge not held by the sheathing (design.top_edge_braced = false)")
+		}
 		return s.String()
 	}
 	if b.continuous {
