@@ -46,7 +46,8 @@ type PathBeam struct {
 	Species        string     `json:"species"`
 	Grade          string     `json:"grade"`
 	// Supports names what carries each bearing ("P1", "wall W2", "B3"),
-	// Carries the members whose reactions it takes.
+	// Carries the joists whose reactions it takes, then the beams bearing
+	// on it.
 	Supports  []string `json:"supports"`
 	Carries   []string `json:"carries"`
 	Checks    []Check  `json:"checks"`

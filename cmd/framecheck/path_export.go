@@ -201,9 +201,16 @@ func pathBeam(plan *framing.Plan, bo *pipeline.BeamOutcome, wallID map[int]strin
 			eb.Supports = append(eb.Supports, plan.Beams[br.Index].ID)
 		}
 	}
-	eb.Carries = make([]string, len(b.Carried))
+	// the joists it carries, then the beams framing into it (an audit
+	// found a girder's list empty where a beam bore on it)
+	eb.Carries = make([]string, len(b.Carried), len(b.Carried)+len(b.CarriedBeams))
 	for i, c := range b.Carried {
 		eb.Carries[i] = plan.Members[c.Member].ID
+	}
+	for _, k := range b.CarriedBeams {
+		if k >= 0 && k < len(plan.Beams) {
+			eb.Carries = append(eb.Carries, plan.Beams[k].ID)
+		}
 	}
 	eb.Checks = checks
 	key := fmt.Sprintf("%s|%s|%s|%v|%.2f|%s", eb.Size, eb.Species, eb.Grade, roundUp(eb.SpansIn), eb.MaxRatio, eb.Status)
