@@ -69,3 +69,42 @@ func TestBeamCarriesItsStrip(t *testing.T) {
 		t.Errorf("live load delivered %.3f lb, want %.3f", s.Delivered.LiveLb, want)
 	}
 }
+
+// TestBeamDeflectionLimitsFromZones: a beam is held to deflection limits
+// no less strict than those of the zones it carries: the strip beam of
+// TestBeamCarriesItsStrip in a FLOOR zone asking L/480 live and L/360
+// total (a tile floor, say) is checked at L/480 and L/360, not at the
+// default floor limits L/360 and L/240 (IBC 2018 Table 1604.3 gives the
+// least; the zone's limits are the designer's).
+func TestBeamDeflectionLimitsFromZones(t *testing.T) {
+	d := &dxfimport.Drawing{File: "t.dxf", Units: "in", ToInch: 1}
+	line := func(layer string, x0, y0, x1, y1 float64) {
+		d.Entities = append(d.Entities, dxfimport.Entity{Kind: dxfimport.KindLine, Pos: dxfimport.Pos{File: "t.dxf", Layer: layer, Line: len(d.Entities) + 1},
+			Points: []dxfimport.Point{{X: x0, Y: y0}, {X: x1, Y: y1}}})
+	}
+	line("WALL", -20, 0, 120, 0)
+	line("WALL", -20, 144, 120, 144)
+	for x := 16.0; x <= 64; x += 16 {
+		line("JOIST", x, 0, x, 144)
+	}
+	line("BEAM-DROP", 80, -2, 80, 146)
+	d.Entities = append(d.Entities, dxfimport.Entity{Kind: dxfimport.KindText, Pos: dxfimport.Pos{File: "t.dxf", Layer: "FRAMING-NOTE", Line: 99},
+		Points: []dxfimport.Point{{X: 83, Y: 72}}, Text: "4x10", HeightIn: 3})
+	p, err := project.ParseProject("p.toml", []byte(beamSupports+
+		"[lumber]\nspecies = \"Douglas Fir-Larch\"\ngrade = \"No.2\"\nsize = \"2x10\"\n\n[[zone]]\nname = \"FLOOR\"\ndead_psf = 10\nlive_psf = 40\n"+
+		"live_deflection_limit = 480\ntotal_deflection_limit = 360\n"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	plan := framing.Group(d, FramingOptions(p))
+	o, err := Run(Input{Plan: plan, PlanFile: "t.dxf", Project: p})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if o.Path == nil || len(o.Path.Beams) != 1 {
+		t.Fatalf("load path %+v, want one beam", o.Path)
+	}
+	if in := o.Path.Beams[0].Input; in.LiveLimit != 480 || in.TotalLimit != 360 {
+		t.Errorf("beam limits L/%v live, L/%v total; want L/480 and L/360 as its zone asks", in.LiveLimit, in.TotalLimit)
+	}
+}

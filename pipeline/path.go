@@ -680,7 +680,25 @@ func beamInput(p *project.Project, plan *framing.Plan, b *framing.Beam) (check.M
 		cm.Use = "roof"
 		live, total = project.DeflectionLimits("roof", "non-plaster")
 	}
-	cm.LiveLimit, cm.TotalLimit = live, total
+	// never less strict than the zones of what it carries: a roof over a
+	// plaster ceiling, a floor with a zone's own stricter limits (an audit
+	// found beams held to the non-plaster limits whatever their zones)
+	long := 0.0
+	stricter := func(zn string) {
+		if z := p.Zone(zn); z != nil {
+			live, total = math.Max(live, z.LiveDeflectionLimit), math.Max(total, z.TotalDeflectionLimit)
+			long = math.Max(long, z.LongTermDeflectionLimit)
+		}
+	}
+	for _, c := range b.Carried {
+		for _, zn := range plan.Members[c.Member].Zones {
+			stricter(zn)
+		}
+	}
+	for _, st := range b.Strips {
+		stricter(st.Zone)
+	}
+	cm.LiveLimit, cm.TotalLimit, cm.LongTermLimit = live, total, long
 	return cm, shift, ""
 }
 
