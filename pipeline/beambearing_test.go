@@ -1,6 +1,7 @@
 package pipeline
 
 import (
+	"slices"
 	"strings"
 	"testing"
 
@@ -153,5 +154,30 @@ func TestBeamBearings(t *testing.T) {
 	}
 	if b := o.Inputs[0].Bearings; b[len(b)-1].Beam.Species != "TESTWOOD" && b[0].Beam.Species != "TESTWOOD" {
 		t.Errorf("M1's bearings %+v: none on the TESTWOOD beam", b)
+	}
+}
+
+// TestGirderBracedByBeam: a beam framing into a girder holds the girder's
+// top edge where it lands, as a joist in a hanger does (NDS 2018 3.3.3.4:
+// lu between points of lateral support): the girder 216 in long, a beam
+// landing on it 96 in from its start, braces it at 96 in (an audit found
+// the girder's lu the whole 216 in).
+func TestGirderBracedByBeam(t *testing.T) {
+	p, err := project.ParseProject("p.toml", []byte(beamSupports+"[lumber]\nspecies = \"Douglas Fir-Larch\"\ngrade = \"No.2\"\nsize = \"2x10\"\n"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	plan := &framing.Plan{Beams: []framing.Beam{
+		{ID: "B1", Kind: framing.KindFlushBeam, Layer: "BEAM-FLUSH", Size: "(3) 2x12", Start: framing.Point{X: 96, Y: 0}, End: framing.Point{X: 96, Y: 144},
+			LengthIn: 144, Bearings: []framing.BeamBearing{{AtIn: 144, LengthIn: 1.5, Kind: framing.BeamOnBeam, Index: 1}}},
+		{ID: "B2", Kind: framing.KindDroppedBeam, Layer: "BEAM-DROP", Size: "(3) 2x12", Start: framing.Point{X: 0, Y: 144}, End: framing.Point{X: 216, Y: 144},
+			LengthIn: 216, CarriedBeams: []int{0}, Bearings: []framing.BeamBearing{{AtIn: 0, LengthIn: 3.5, Kind: framing.BeamOnPost}, {AtIn: 216, LengthIn: 3.5, Kind: framing.BeamOnPost}}},
+	}}
+	cm, _, msg := beamInput(p, plan, &plan.Beams[1])
+	if msg != "" {
+		t.Fatal(msg)
+	}
+	if !cm.TopBracedAtPoints || !slices.Contains(cm.TopBracingAtIn, 96) {
+		t.Errorf("girder top edge braced at %v (at points %v), want 96 in", cm.TopBracingAtIn, cm.TopBracedAtPoints)
 	}
 }

@@ -667,6 +667,23 @@ func beamInput(p *project.Project, plan *framing.Plan, b *framing.Beam) (check.M
 	}
 	live, total := project.DeflectionLimits("floor", "non-plaster")
 	roof := true
+	// a beam framing into it holds its top edge where it lands, as a
+	// joist in a hanger does
+	for _, k := range b.CarriedBeams {
+		if k < 0 || k >= len(plan.Beams) {
+			continue
+		}
+		o := &plan.Beams[k]
+		for _, br := range o.Bearings {
+			if br.Kind != framing.BeamOnBeam || br.Index < 0 || br.Index >= len(plan.Beams) || &plan.Beams[br.Index] != b {
+				continue
+			}
+			ou := unitVec(o.Start, o.End)
+			at := framing.Point{X: o.Start.X + ou.X*br.AtIn, Y: o.Start.Y + ou.Y*br.AtIn}
+			bu := unitVec(b.Start, b.End)
+			cm.TopBracingAtIn = append(cm.TopBracingAtIn, (at.X-b.Start.X)*bu.X+(at.Y-b.Start.Y)*bu.Y+shift)
+		}
+	}
 	for _, c := range b.Carried {
 		cm.TopBracingAtIn = append(cm.TopBracingAtIn, c.AtIn+shift)
 		m := &plan.Members[c.Member]
@@ -700,6 +717,16 @@ func beamInput(p *project.Project, plan *framing.Plan, b *framing.Beam) (check.M
 	}
 	cm.LiveLimit, cm.TotalLimit, cm.LongTermLimit = live, total, long
 	return cm, shift, ""
+}
+
+// unitVec is the unit vector from a to b (zero when they coincide).
+func unitVec(a, b framing.Point) framing.Point {
+	dx, dy := b.X-a.X, b.Y-a.Y
+	l := math.Hypot(dx, dy)
+	if l == 0 {
+		return framing.Point{}
+	}
+	return framing.Point{X: dx / l, Y: dy / l}
 }
 
 // beamStrips loads beam b's check input cm with the strips beside edge
