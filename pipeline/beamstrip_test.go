@@ -9,16 +9,11 @@ import (
 	"framecheck/project"
 )
 
-// TestBeamCarriesItsStrip: a dropped beam parallel to four joists, 16 in
-// past the last one, bearing on the two walls the joists span between. The
-// edge joist carries half the 16 in (8 in, FRM221) and the beam the other
-// half over the joist's 144 in, in zone FLOOR (D 10, L 40 psf): 8/12 ft x
-// 10 psf = 6.67 plf of D and 26.67 plf of L over 144 in, so 80 lb of D and
-// 320 lb of L put on the beam, half at each wall by statics (its own
-// weight besides). The load path's totals keep it: applied equals
-// delivered, type by type (tributary-area statics, common practice, no
-// source).
-func TestBeamCarriesItsStrip(t *testing.T) {
+// stripBeamPlan checks four joists at 16 in between two walls with a 4x10
+// dropped beam parallel to them 16 in past the last, in zone FLOOR (D 10,
+// L 40 psf, and zoneExtra's keys).
+func stripBeamPlan(t *testing.T, zoneExtra string) *Outcome {
+	t.Helper()
 	d := &dxfimport.Drawing{File: "t.dxf", Units: "in", ToInch: 1}
 	line := func(layer string, x0, y0, x1, y1 float64) {
 		d.Entities = append(d.Entities, dxfimport.Entity{Kind: dxfimport.KindLine, Pos: dxfimport.Pos{File: "t.dxf", Layer: layer, Line: len(d.Entities) + 1},
@@ -33,7 +28,7 @@ func TestBeamCarriesItsStrip(t *testing.T) {
 	d.Entities = append(d.Entities, dxfimport.Entity{Kind: dxfimport.KindText, Pos: dxfimport.Pos{File: "t.dxf", Layer: "FRAMING-NOTE", Line: 99},
 		Points: []dxfimport.Point{{X: 83, Y: 72}}, Text: "4x10", HeightIn: 3})
 	p, err := project.ParseProject("p.toml", []byte(beamSupports+
-		"[lumber]\nspecies = \"Douglas Fir-Larch\"\ngrade = \"No.2\"\nsize = \"2x10\"\n\n[[zone]]\nname = \"FLOOR\"\ndead_psf = 10\nlive_psf = 40\n"))
+		"[lumber]\nspecies = \"Douglas Fir-Larch\"\ngrade = \"No.2\"\nsize = \"2x10\"\n\n[[zone]]\nname = \"FLOOR\"\ndead_psf = 10\nlive_psf = 40\n"+zoneExtra))
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -42,6 +37,20 @@ func TestBeamCarriesItsStrip(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
+	return o
+}
+
+// TestBeamCarriesItsStrip: a dropped beam parallel to four joists, 16 in
+// past the last one, bearing on the two walls the joists span between. The
+// edge joist carries half the 16 in (8 in, FRM221) and the beam the other
+// half over the joist's 144 in, in zone FLOOR (D 10, L 40 psf): 8/12 ft x
+// 10 psf = 6.67 plf of D and 26.67 plf of L over 144 in, so 80 lb of D and
+// 320 lb of L put on the beam, half at each wall by statics (its own
+// weight besides). The load path's totals keep it: applied equals
+// delivered, type by type (tributary-area statics, common practice, no
+// source).
+func TestBeamCarriesItsStrip(t *testing.T) {
+	o := stripBeamPlan(t, "")
 	if o.Path == nil || len(o.Path.Beams) != 1 {
 		t.Fatalf("load path %+v, want one beam", o.Path)
 	}
@@ -77,30 +86,7 @@ func TestBeamCarriesItsStrip(t *testing.T) {
 // default floor limits L/360 and L/240 (IBC 2018 Table 1604.3 gives the
 // least; the zone's limits are the designer's).
 func TestBeamDeflectionLimitsFromZones(t *testing.T) {
-	d := &dxfimport.Drawing{File: "t.dxf", Units: "in", ToInch: 1}
-	line := func(layer string, x0, y0, x1, y1 float64) {
-		d.Entities = append(d.Entities, dxfimport.Entity{Kind: dxfimport.KindLine, Pos: dxfimport.Pos{File: "t.dxf", Layer: layer, Line: len(d.Entities) + 1},
-			Points: []dxfimport.Point{{X: x0, Y: y0}, {X: x1, Y: y1}}})
-	}
-	line("WALL", -20, 0, 120, 0)
-	line("WALL", -20, 144, 120, 144)
-	for x := 16.0; x <= 64; x += 16 {
-		line("JOIST", x, 0, x, 144)
-	}
-	line("BEAM-DROP", 80, -2, 80, 146)
-	d.Entities = append(d.Entities, dxfimport.Entity{Kind: dxfimport.KindText, Pos: dxfimport.Pos{File: "t.dxf", Layer: "FRAMING-NOTE", Line: 99},
-		Points: []dxfimport.Point{{X: 83, Y: 72}}, Text: "4x10", HeightIn: 3})
-	p, err := project.ParseProject("p.toml", []byte(beamSupports+
-		"[lumber]\nspecies = \"Douglas Fir-Larch\"\ngrade = \"No.2\"\nsize = \"2x10\"\n\n[[zone]]\nname = \"FLOOR\"\ndead_psf = 10\nlive_psf = 40\n"+
-		"live_deflection_limit = 480\ntotal_deflection_limit = 360\n"))
-	if err != nil {
-		t.Fatal(err)
-	}
-	plan := framing.Group(d, FramingOptions(p))
-	o, err := Run(Input{Plan: plan, PlanFile: "t.dxf", Project: p})
-	if err != nil {
-		t.Fatal(err)
-	}
+	o := stripBeamPlan(t, "live_deflection_limit = 480\ntotal_deflection_limit = 360\n")
 	if o.Path == nil || len(o.Path.Beams) != 1 {
 		t.Fatalf("load path %+v, want one beam", o.Path)
 	}

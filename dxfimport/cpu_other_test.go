@@ -1,7 +1,0 @@
-//go:build !unix
-
-package dxfimport
-
-// cpuSeconds is 0 where the process's CPU time is not read (the
-// benchmarks then report no CPU figure).
-func cpuSeconds() float64 { return 0 }
