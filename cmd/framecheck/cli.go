@@ -183,7 +183,14 @@ func writeTable(w io.Writer, rows [][]string, right []bool) {
 			if i >= len(width) {
 				width = append(width, 0)
 			}
-			c = termCell(c, cellWidth)
+			// every column cut to cellWidth but the last, which a reader
+			// needs whole (member's formulas with the numbers put in, a
+			// layer's role): it ends the line, so it widens nothing
+			cw := cellWidth
+			if i == len(r)-1 {
+				cw = lastCellWidth
+			}
+			c = termCell(c, cw)
 			r[i] = c
 			width[i] = max(width[i], utf8.RuneCountInString(c))
 		}

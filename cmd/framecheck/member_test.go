@@ -57,6 +57,9 @@ func TestMemberCommand(t *testing.T) {
 		"bending-top under D+L: 916.3 psi against 1138.5 psi, ratio 0.805 ok",
 		"deflection-live under L, span 1: 0.291 in",
 		"PASS: governing bending-top, ratio 0.805",
+		// the trace's formulas whole, with the numbers put in (an audit
+		// found them cut at 40 characters)
+		"Fb CD CM Ct CF Ci Cr = 900(1)(1)(1)(1.1)(1)(1.15)  [NDS 2018 3.3.3.8, Table 4.3.1]",
 	} {
 		if !strings.Contains(out, want) {
 			t.Errorf("output lacks %q:\n%s", want, out)

@@ -91,7 +91,11 @@ func isBidiControl(r rune) bool {
 // Widths of table cells on the terminal, in runes: names and sizes, the
 // source position of a member, its first message.
 const (
-	cellWidth    = 40
-	sourceWidth  = 72
-	messageWidth = 120
+	cellWidth = 40
+	// lastCellWidth bounds a table's last column (writeTable): long
+	// enough for a formula with its numbers and reference, still a bound
+	// against a hostile text
+	lastCellWidth = 400
+	sourceWidth   = 72
+	messageWidth  = 120
 )
