@@ -281,6 +281,9 @@ func (r *calcRecord) shearTrace() []TraceItem {
 	case atDApplied:
 		where = "at d from the face of bearing " + bn
 		note = "loads within d of the bearing face left out: the member rests on the support and the load acts on the opposite face"
+		if x.cosT < 1 {
+			note += " (d along the rafter: d cos on the plan)"
+		}
 	case atDUplift:
 		note = "shear_at_d not applied at bearing " + bn + ": net uplift there, the member is held down by connectors, so the load does not act on the face opposite the bearing"
 	case atDHanger:

@@ -547,3 +547,23 @@ func TestSpanTable_IBC2018_2308_7_2_2(t *testing.T) {
 		}
 	}
 }
+
+// TestShearAtDOnRafter: with shear_at_d, the loads within d of the bearing
+// face are left out of V (NDS 2018 3.4.3.1(a)), d measured along the
+// member: on a 12:12 rafter, whose loads are laid out on the horizontal
+// projection, that is d cos 45 = 6.54 in of plan beyond the face, not 9.25
+// (an audit found d taken on the plan). A 2x10 at 24 in, 144 in plan span,
+// D 20 psf on the projection: w = 40 plf = 3.333 lb/in, R = w L / 2 = 240
+// lb; V = 240 - 3.333 (1.75 + 9.25 cos 45) = 212.4 lb; fv = 1.5 V / A
+// (NDS 2018 Eq. 3.4-2), A = 13.875 in2 (Supplement Table 1B).
+func TestShearAtDOnRafter(t *testing.T) {
+	m := Member{ID: "R1", Size: "2x10", Species: "DF-L", Grade: "No.2", LengthIn: 144,
+		Bearings: []Bearing{{AtIn: 0, LengthIn: 3.5}, {AtIn: 144, LengthIn: 3.5}}, SpacingIn: 24, TribIn: 24, Use: "roof",
+		Loads: AreaLoads{DeadPsf: 20}, PitchRise12: 12, LiveLimit: 180, TotalLimit: 120, Repetitive: true}
+	s := DefaultSettings()
+	s.ShearAtD = true
+	r := CheckMember(m, s)
+	w := 20.0 * 24 / 144
+	v := w*144/2 - w*(1.75+9.25*math.Cos(math.Pi/4))
+	expectNear(t, "fv at d on a 12:12 rafter", find(t, r, KindShear).Actual, 1.5*v/13.875, 1e-6, 0, "NDS 2018 3.4.3.1(a), Eq. 3.4-2; statics")
+}

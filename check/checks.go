@@ -40,7 +40,10 @@ func (e *engine) shearCheck() CheckResult {
 					why = atDUplift
 				default:
 					why = atDApplied
-					off := e.m.Bearings[j].LengthIn/2 + d
+					// d along a rafter is d cos on the projection the
+					// model is laid out on (an audit found d taken on
+					// the plan: more load left out, on the unsafe side)
+					off := e.m.Bearings[j].LengthIn/2 + d*e.cosT
 					// Only a downward load near the bearing is left out,
 					// and never more than the shear it relieves.
 					if ld := e.loadOn(c, x-off, x); ld > 0 && vl < 0 {
