@@ -210,8 +210,11 @@ func printMember(w io.Writer, m check.Member, r check.Result, colour bool) {
 	}
 	fmt.Fprintf(w, "; bearings %s long; member %s\n", fmtIn(m.Bearings[0].LengthIn), fmtIn(m.LengthIn))
 	l := m.Loads
-	fmt.Fprintf(w, "  loads D %s, L %s, Lr %s, S %s, W down %s, W up %s psf\n", project.FmtNum(l.DeadPsf), project.FmtNum(l.LivePsf),
-		project.FmtNum(l.RoofLivePsf), project.FmtNum(l.SnowPsf), project.FmtNum(l.WindDownPsf), project.FmtNum(l.WindUpPsf))
+	// loads to 0.01 psf: a rafter's dead load converted from the slope is
+	// 15.811388300841898 psf to the bit
+	psf := func(v float64) string { return project.FmtNum(math.Round(v*100) / 100) }
+	fmt.Fprintf(w, "  loads D %s, L %s, Lr %s, S %s, W down %s, W up %s psf\n", psf(l.DeadPsf), psf(l.LivePsf),
+		psf(l.RoofLivePsf), psf(l.SnowPsf), psf(l.WindDownPsf), psf(l.WindUpPsf))
 	for _, p := range m.PointLoads {
 		fmt.Fprintf(w, "  point load at %s from the first bearing: D %s, L %s, Lr %s, S %s, W down %s, W up %s lb\n",
 			fmtIn(p.AtIn-m.Bearings[0].AtIn), project.FmtNum(p.DeadLb), project.FmtNum(p.LiveLb), project.FmtNum(p.RoofLiveLb), project.FmtNum(p.SnowLb),

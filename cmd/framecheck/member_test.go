@@ -118,6 +118,12 @@ func TestMemberRoof(t *testing.T) {
 	if !strings.Contains(out, "bending-bottom") {
 		t.Errorf("uplift 0.6D+0.6W = 0.6(30) - 0.6(12) > 0 should load the bottom edge:\n%s", out)
 	}
+	// a 4:12 rafter's dead load per sloped area on the projection: 15 /
+	// cos = 15 sqrt(160) / 12 = 15.81 psf (statics), printed to 0.01
+	_, out, _ = runCmd("member", "--size", "2x10", "--span", "11ft", "--spacing", "24in", "--dead", "15", "--pitch", "4:12", "--use", "roof")
+	if !strings.Contains(out, "loads D 15.81, L 0, Lr 20,") {
+		t.Errorf("4:12 rafter:\n%s", out)
+	}
 }
 
 func TestFmtVal(t *testing.T) {
