@@ -3,6 +3,7 @@ package check
 import (
 	"errors"
 	"math"
+	"slices"
 	"strings"
 	"testing"
 )
@@ -316,5 +317,25 @@ func TestSCLJoist(t *testing.T) {
 		if f.Symbol == "Cr" && f.Value != 1 {
 			t.Errorf("Cr %v, want 1", f.Value)
 		}
+	}
+}
+
+// TestSCLIncisedSaysSo: design.incised = true leaves an SCL member's
+// values as they are (no Ci: NDS 2018 Table 8.3.1, from memory: verify)
+// and says so, where it was ignored without a word (an audit's finding).
+func TestSCLIncisedSaysSo(t *testing.T) {
+	s := DefaultSettings()
+	s.Materials = sclMaterials(t)
+	m := Member{ID: "B1", Size: "3 1/2 x 14", Species: "lvl", LengthIn: 216,
+		Bearings: []Bearing{{AtIn: 0, LengthIn: 3.5}, {AtIn: 216, LengthIn: 3.5}}, TribIn: 96, Use: "floor",
+		Loads: AreaLoads{DeadPsf: 15, LivePsf: 40}, LiveLimit: 360, TotalLimit: 240}
+	plain := CheckMember(m, s)
+	s.Incised = true
+	inc := CheckMember(m, s)
+	if plain.MaxRatio != inc.MaxRatio {
+		t.Errorf("incised changed an SCL member's ratio: %v -> %v", plain.MaxRatio, inc.MaxRatio)
+	}
+	if !slices.ContainsFunc(inc.Info, func(s string) bool { return strings.Contains(s, "does not apply to structural composite lumber") }) {
+		t.Errorf("no word of incising on an SCL member: %v", inc.Info)
 	}
 }

@@ -199,6 +199,14 @@ func (e *engine) baseResult() Result {
 	if e.dv.Note != "" {
 		r.Info = append(r.Info, e.dv.Note)
 	}
+	if e.s.Incised {
+		switch e.dv.SizeFactor {
+		case SizeFactorGlulam:
+			r.Info = append(r.Info, "design.incised = true does not apply to glulam: no incising factor Ci (NDS 2018 Table 5.3.1)")
+		case SizeFactorSCL:
+			r.Info = append(r.Info, "design.incised = true does not apply to structural composite lumber: no incising factor Ci (NDS 2018 Table 8.3.1)")
+		}
+	}
 	return r
 }
 
