@@ -83,6 +83,7 @@ type deflRec struct {
 	kind                                  string
 	dFactor                               float64 // factor on D in the governing case
 	where                                 string
+	up                                    bool // the deflection is upward (its size is checked)
 }
 
 // calcRecord holds the governing numbers of every check of one result, in
@@ -395,18 +396,22 @@ func fmtG(v float64) string { return strconv.FormatFloat(v, 'f', -1, 64) }
 func (r *calcRecord) deflTrace(d *deflRec) []TraceItem {
 	x := &r.ctx
 	t := newTracer(6)
+	dir := ""
+	if d.up {
+		dir = ", upward (its size checked)"
+	}
 	switch d.kind {
 	case KindDeflectionTotal:
 		if d.dFactor == 0.5 {
-			t.add("delta", d.deflIn, "in", "largest deflection of "+d.where+" under L + 0.5D (seasoned lumber, dry service)", Subst{}, "IBC 2018 Table 1604.3 note d; "+refAnalysis)
+			t.add("delta", d.deflIn, "in", "largest deflection of "+d.where+dir+" under L + 0.5D (seasoned lumber, dry service)", Subst{}, "IBC 2018 Table 1604.3 note d; "+refAnalysis)
 		} else {
-			t.add("delta", d.deflIn, "in", "largest deflection of "+d.where+" under L + D", Subst{}, "IBC 2018 Table 1604.3; "+refAnalysis)
+			t.add("delta", d.deflIn, "in", "largest deflection of "+d.where+dir+" under L + D", Subst{}, "IBC 2018 Table 1604.3; "+refAnalysis)
 		}
 	case KindDeflectionLongTerm:
-		t.add("delta", d.deflIn, "in", "largest deflection of "+d.where+": Kcr x dead-load deflection + live-type deflection", Subst{}, "NDS 2018 3.5.2; "+refAnalysis)
+		t.add("delta", d.deflIn, "in", "largest deflection of "+d.where+dir+": Kcr x dead-load deflection + live-type deflection", Subst{}, "NDS 2018 3.5.2; "+refAnalysis)
 		t.add("Kcr", x.kcr, "", "creep factor on the long-term (dead) load", Subst{}, "NDS 2018 3.5.2")
 	default:
-		t.add("delta", d.deflIn, "in", "largest deflection of "+d.where, Subst{}, refAnalysis)
+		t.add("delta", d.deflIn, "in", "largest deflection of "+d.where+dir, Subst{}, refAnalysis)
 	}
 	f, sub := x.cmCtCi(&t, "E", x.ePsi, x.cm.E, x.ct.E, x.ci.E, "")
 	t.add("E'", x.eAdj, "psi", f, sub, x.adjRef())

@@ -567,3 +567,33 @@ func TestShearAtDOnRafter(t *testing.T) {
 	v := w*144/2 - w*(1.75+9.25*math.Cos(math.Pi/4))
 	expectNear(t, "fv at d on a 12:12 rafter", find(t, r, KindShear).Actual, 1.5*v/13.875, 1e-6, 0, "NDS 2018 3.4.3.1(a), Eq. 3.4-2; statics")
 }
+
+// TestUpwardTipDeflectionSaid: a joist with a 30 in overhang past a 120
+// in back-span, live load on the back-span only (pattern loading): the tip
+// rises, w L^3 a / (24 E I), against 2 a / 360 (IBC 2018 Table 1604.3
+// note h), more than the span's w L^4 5 / (384 E I) against L / 360
+// (statics: 1.25 / 0.167 against 1.5625 / 0.333 in units of w L^3 / E I):
+// the governing live deflection is the tip's, and its trace says it is
+// upward (an audit found it unsaid).
+func TestUpwardTipDeflectionSaid(t *testing.T) {
+	m := Member{ID: "J1", Size: "2x10", Species: "DF-L", Grade: "No.2", LengthIn: 150,
+		Bearings: []Bearing{{AtIn: 0, LengthIn: 3.5}, {AtIn: 120, LengthIn: 3.5}}, OverhangEndIn: 30, SpacingIn: 16, TribIn: 16, Use: "floor",
+		Loads: AreaLoads{DeadPsf: 10, LivePsf: 40}, LiveLimit: 360, TotalLimit: 240, Repetitive: true}
+	r := CheckMember(m, DefaultSettings())
+	li := find(t, r, KindDeflectionLive)
+	if !strings.Contains(li.Combo, "overhang") {
+		t.Fatalf("governing live deflection %s: the case needs the overhang's tip", li.Combo)
+	}
+	found := false
+	for _, it := range li.Trace() {
+		if it.Symbol == "delta" {
+			found = true
+			if !strings.Contains(it.Formula, "upward") {
+				t.Errorf("tip deflection trace %q: want it said upward (combo %s)", it.Formula, li.Combo)
+			}
+		}
+	}
+	if !found {
+		t.Fatal("no delta in the live deflection's trace")
+	}
+}

@@ -192,6 +192,7 @@ type deflWorst struct {
 	dFactor                               float64 // factor on D in the case (0: none)
 	pattern                               uint32
 	cant                                  bool
+	up                                    bool // the deflection is upward
 }
 
 // serviceLoad is one live-type load of a service case: its factor set
@@ -280,7 +281,8 @@ func (e *engine) deflectionChecks() ([]CheckResult, string) {
 			l := (sg.ToIn - sg.FromIn) * ls
 			y, allow := math.Abs(c.w[0]*unitY)*ys, l/limit
 			if ratio := y / allow; ratio > worst.ratio {
-				*worst = deflWorst{ratio: ratio, deflIn: y, allowIn: allow, spanIn: l, limit: limit, live: live, dFactor: dF, pattern: pat}
+				*worst = deflWorst{ratio: ratio, deflIn: y, allowIn: allow, spanIn: l, limit: limit, live: live, dFactor: dF, pattern: pat,
+					up: c.w[0]*unitY < 0}
 			}
 			return
 		}
@@ -303,7 +305,7 @@ func (e *engine) deflectionChecks() ([]CheckResult, string) {
 			}
 			if ratio := math.Abs(y) / allow; ratio > worst.ratio {
 				*worst = deflWorst{ratio: ratio, deflIn: math.Abs(y), allowIn: allow, spanIn: l, limit: limit,
-					seg: k, live: live, dFactor: dF, pattern: pat, cant: sg.Cantilever}
+					seg: k, live: live, dFactor: dF, pattern: pat, cant: sg.Cantilever, up: y < 0}
 			}
 		}
 	}
@@ -399,6 +401,6 @@ func (e *engine) deflResult(kind string, d deflWorst) CheckResult {
 		slot = 2
 	}
 	e.rc.defl[slot] = deflRec{deflIn: d.deflIn, allowIn: d.allowIn, spanIn: d.spanIn, limit: d.limit, ratio: d.ratio,
-		cant: d.cant, kind: kind, dFactor: d.dFactor, where: where}
+		cant: d.cant, kind: kind, dFactor: d.dFactor, where: where, up: d.up}
 	return CheckResult{Kind: kind, Combo: e.deflName(d) + ", " + where, Actual: d.deflIn, Allowable: d.allowIn, Unit: "in", Ratio: d.ratio, calc: e.rc}
 }
