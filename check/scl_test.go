@@ -26,6 +26,14 @@ func sclMaterials(t *testing.T) *Materials {
 	return BuiltinMaterials().Merge(u)
 }
 
+// sclFloorBeam is a 3 1/2 x 14 LVL floor beam, 216 in span, carrying 96 in
+// of floor at D 15 and L 40 psf.
+func sclFloorBeam() Member {
+	return Member{ID: "B1", Size: "3 1/2 x 14", Species: "lvl", LengthIn: 216,
+		Bearings: []Bearing{{AtIn: 0, LengthIn: 3.5}, {AtIn: 216, LengthIn: 3.5}}, TribIn: 96, Use: "floor",
+		Loads: AreaLoads{DeadPsf: 15, LivePsf: 40}, LiveLimit: 360, TotalLimit: 240}
+}
+
 // TestSCLBeam_HandCalculation checks a 3 1/2 x 14 LVL beam on an 18 ft
 // simple span against a hand calculation, every step written out:
 //
@@ -52,9 +60,7 @@ func sclMaterials(t *testing.T) *Materials {
 func TestSCLBeam_HandCalculation(t *testing.T) {
 	s := DefaultSettings()
 	s.Materials = sclMaterials(t)
-	m := Member{ID: "B1", Size: "3 1/2 x 14", Species: "lvl", LengthIn: 216,
-		Bearings: []Bearing{{AtIn: 0, LengthIn: 3.5}, {AtIn: 216, LengthIn: 3.5}}, TribIn: 96, Use: "floor",
-		Loads: AreaLoads{DeadPsf: 15, LivePsf: 40}, LiveLimit: 360, TotalLimit: 240}
+	m := sclFloorBeam()
 	r := CheckMember(m, s)
 	if r.Status == StatusError {
 		t.Fatalf("error: %v", r.Messages)
@@ -326,9 +332,7 @@ func TestSCLJoist(t *testing.T) {
 func TestSCLIncisedSaysSo(t *testing.T) {
 	s := DefaultSettings()
 	s.Materials = sclMaterials(t)
-	m := Member{ID: "B1", Size: "3 1/2 x 14", Species: "lvl", LengthIn: 216,
-		Bearings: []Bearing{{AtIn: 0, LengthIn: 3.5}, {AtIn: 216, LengthIn: 3.5}}, TribIn: 96, Use: "floor",
-		Loads: AreaLoads{DeadPsf: 15, LivePsf: 40}, LiveLimit: 360, TotalLimit: 240}
+	m := sclFloorBeam()
 	plain := CheckMember(m, s)
 	s.Incised = true
 	inc := CheckMember(m, s)
