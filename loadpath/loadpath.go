@@ -743,6 +743,7 @@ func demands(js []Joint, s check.Settings) {
 			if r.UpLb > jt.UpLb {
 				jt.UpLb, jt.UpCombo = r.UpLb, r.UpCombo
 			}
+			jt.own = nil // read: the joint holds no member's result
 		}
 	}
 }
